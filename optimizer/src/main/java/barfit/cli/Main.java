@@ -1,0 +1,75 @@
+package barfit.cli;
+
+import barfit.catalogs.InputError;
+import java.io.FileDescriptor;
+import java.io.FileOutputStream;
+import java.io.PrintStream;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The {@code barfit} command line. Exit codes: 0 all pass, 1 a check fails, 2 bad input or usage. */
+@Command(name = "barfit", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        description = "Cheapest passing reinforced-concrete beam layouts to ACI 318-19, searched and proven.%n"
+                + "Results must be checked by a licensed professional engineer against the governing local code.",
+        subcommands = {CheckCommand.class})
+public final class Main implements Runnable {
+    public static final int OK = 0;
+    public static final int FAILED = 1;
+    public static final int BAD_INPUT = 2;
+    public static final int INTERNAL = 3;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed: check");
+    }
+
+    public static void main(String[] args) {
+        PrintStream out = new PrintStream(new FileOutputStream(FileDescriptor.out), true, StandardCharsets.UTF_8);
+        PrintStream err = new PrintStream(new FileOutputStream(FileDescriptor.err), true, StandardCharsets.UTF_8);
+        int code = run(args, out, err);
+        out.flush();
+        err.flush();
+        System.exit(code);
+    }
+
+    /** Runs barfit in this process (the tests use this); returns the exit code. */
+    public static int run(String[] args, PrintStream out, PrintStream err) {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        cl.setParameterExceptionHandler((ex, a) -> {
+            CommandLine c = ex.getCommandLine();
+            String name = c.getCommandSpec().qualifiedName();
+            c.getErr().println("barfit: " + ex.getMessage().replace('\n', ' ') + " (see: " + name + " --help)");
+            return BAD_INPUT;
+        });
+        cl.setExecutionExceptionHandler((ex, c, parseResult) -> {
+            if (ex instanceof InputError ie) {
+                c.getErr().println("barfit: " + ie.oneLine());
+                return BAD_INPUT;
+            }
+            c.getErr().println("barfit: internal error, please report it with the input file: " + ex);
+            if (System.getenv("BARFIT_DEBUG") != null) {
+                ex.printStackTrace(c.getErr());
+            }
+            return INTERNAL;
+        });
+        int code = cl.execute(args);
+        cl.getOut().flush();
+        cl.getErr().flush();
+        return code;
+    }
+
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = Main.class.getPackage().getImplementationVersion();
+            return new String[] {"barfit " + (v == null ? "(development build)" : v)};
+        }
+    }
+}

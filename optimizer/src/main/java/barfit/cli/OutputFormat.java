@@ -1,0 +1,6 @@
+package barfit.cli;
+
+/** How a command prints its answer. */
+public enum OutputFormat {
+    text, json
+}

@@ -1,0 +1,72 @@
+package barfit.input;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.YFields;
+import barfit.catalogs.yaml.YamlReader;
+import barfit.section.BarLayer;
+import barfit.section.BeamSection;
+import barfit.section.Demand;
+import barfit.section.Face;
+import barfit.section.SectionShape;
+import barfit.section.SkinBars;
+import barfit.section.Span;
+import barfit.section.Stirrups;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Reads a {@code check} file: settings plus beams with their sections, bars and demands. */
+public final class CheckInputReader {
+    static final String[] BEAM_KEYS = {"id", "section", "bottom", "top", "Mu", "Vu", "stirrups", "skin", "span", "ends"};
+
+    private CheckInputReader() {
+    }
+
+    public static CheckInput read(Path file) {
+        YFields doc = SettingsReader.root(YamlReader.read(file));
+        Settings settings = SettingsReader.read(doc, file);
+        SectionReader sr = new SectionReader(settings);
+        UnitSystem u = settings.units();
+        List<YFields> beams = doc.listOfMaps("beams", "beams");
+        if (beams.isEmpty()) {
+            throw doc.error("beams", "expected at least one beam");
+        }
+        List<CheckBeam> out = new ArrayList<>();
+        Map<String, Integer> ids = new HashMap<>();
+        for (YFields b : beams) {
+            b.allowOnly(BEAM_KEYS);
+            String id = b.text("id", "the beam's mark, e.g. B1");
+            Integer first = ids.putIfAbsent(id, b.location().line());
+            if (first != null) {
+                throw b.error("id", "beam id \"" + id + "\" is used twice (first at line " + first + "); expected unique ids");
+            }
+            SectionShape shape = sr.shape(b.map("section", "the section: {width, height}"));
+            if (!b.has("bottom") && !b.has("top")) {
+                throw new InputError(b.location(), b.path() + ": beam " + id
+                        + " has no bars; expected bottom: [{bar, count}] and/or top: [{bar, count}]");
+            }
+            List<BarLayer> bottom = b.has("bottom") ? sr.layers(b, "bottom", Face.BOTTOM, shape) : List.of();
+            List<BarLayer> top = b.has("top") ? sr.layers(b, "top", Face.TOP, shape) : List.of();
+            sr.requireNoOverlap(b, bottom, top, shape.height());
+            List<BarLayer> layers = new ArrayList<>(bottom);
+            layers.addAll(top);
+            Double mu = b.optNumber("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)")
+                    .map(v -> u.toSI(v, Dim.MOMENT)).orElse(null);
+            Double vu = null;
+            if (b.has("Vu")) {
+                double v = b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE));
+                vu = u.toSI(v, Dim.FORCE);
+            }
+            Stirrups stirrups = b.has("stirrups") ? sr.stirrups(b.map("stirrups", "stirrups: {bar, legs, spacing}")) : null;
+            SkinBars skin = b.has("skin") ? sr.skin(b.map("skin", "skin bars: {bar, spacing}")) : null;
+            Span span = sr.span(b);
+            BeamSection section = sr.section(shape, layers, stirrups, skin);
+            out.add(new CheckBeam(id, b.location(), section, new Demand(mu, vu), span));
+        }
+        return new CheckInput(settings, out);
+    }
+}

@@ -1,0 +1,27 @@
+package barfit.input;
+
+import barfit.catalogs.BarCatalog;
+import barfit.catalogs.BarSize;
+import barfit.catalogs.yaml.Location;
+import barfit.section.CodeEquations;
+import barfit.section.Detailing;
+import barfit.section.Materials;
+import barfit.units.UnitSystem;
+
+/** The project-wide part of an input file: units, materials, bar catalog and detailing defaults. */
+public record Settings(
+        String file,
+        UnitSystem units,
+        Materials materials,
+        BarCatalog catalog,
+        Detailing detailing,
+        Location location) {
+
+    public CodeEquations code() {
+        return units.code();
+    }
+
+    public BarSize stirrupBar() {
+        return detailing.stirrupBar();
+    }
+}

@@ -1,0 +1,146 @@
+package barfit.input;
+
+import barfit.catalogs.BarCatalog;
+import barfit.catalogs.BarCatalogs;
+import barfit.catalogs.BarSize;
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.Location;
+import barfit.catalogs.yaml.YFields;
+import barfit.catalogs.yaml.YNode;
+import barfit.section.CodeEquations;
+import barfit.section.Detailing;
+import barfit.section.Exposure;
+import barfit.section.Materials;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Locale;
+
+/** Reads the project-wide keys every command shares. */
+public final class SettingsReader {
+    /** Top-level keys any command accepts; each command reads the ones it needs. */
+    public static final String[] TOP_KEYS = {"units", "code", "concrete", "steel", "bars", "cover", "stirrup",
+            "layer_gap", "exposure", "beams", "search", "costs", "rationalise", "project"};
+
+    private SettingsReader() {
+    }
+
+    public static Settings read(YFields doc, Path file) {
+        doc.allowOnly(TOP_KEYS);
+        String unitsText = doc.text("units", "SI or US");
+        UnitSystem units;
+        switch (unitsText.toUpperCase(Locale.ROOT)) {
+            case "SI" -> units = UnitSystem.SI;
+            case "US" -> units = UnitSystem.US;
+            default -> throw doc.error("units", "expected SI (mm, MPa, kN, kN·m, m) or US (in, psi, kip, kip·ft, ft), got \""
+                    + unitsText + "\"");
+        }
+        if (doc.has("code")) {
+            String code = doc.text("code", "ACI 318-19");
+            if (!code.replace(" ", "").equalsIgnoreCase("ACI318-19")) {
+                throw doc.error("code", "expected ACI 318-19 (the only code barfit checks), got \"" + code + "\"");
+            }
+        }
+        CodeEquations code = units.code();
+        boolean us = units == UnitSystem.US;
+
+        YFields concrete = doc.map("concrete", "the concrete: {fc, aggregate}").allowOnly("fc", "aggregate", "lambda");
+        double fc = toSI(units, concrete.positive("fc", "f'c, " + units.unit(Dim.STRESS)), Dim.STRESS);
+        double fcMin = us ? 2500 : 17;
+        double fcMax = us ? 20000 : 140;
+        double fcUser = units.fromSI(fc, Dim.STRESS);
+        if (fcUser < fcMin * (1 - 1e-9) || fcUser > fcMax) {
+            throw concrete.error("fc", "expected f'c between " + fmt(fcMin) + " and " + fmt(fcMax) + " "
+                    + units.unit(Dim.STRESS) + " (Table 19.2.1.1 sets the minimum), got " + fmt(fcUser));
+        }
+        double agg = concrete.optPositive("aggregate", "maximum aggregate size, " + units.unit(Dim.LENGTH))
+                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(us ? 0.75 * 25.4 : 20.0);
+        double lambda = concrete.optPositive("lambda", "lightweight factor, 0.75 to 1.0").orElse(1.0);
+        if (lambda < 0.75 || lambda > 1.0) {
+            throw concrete.error("lambda", "expected the lightweight factor λ between 0.75 and 1.0 (19.2.4), got "
+                    + fmt(lambda));
+        }
+
+        YFields steel = doc.map("steel", "the reinforcement: {fy}").allowOnly("fy", "fyt");
+        double fy = toSI(units, steel.positive("fy", "fy, " + units.unit(Dim.STRESS)), Dim.STRESS);
+        double fyUser = units.fromSI(fy, Dim.STRESS);
+        double fyMin = us ? 40000 : 280;
+        double fyMax = us ? 80000 : 550;
+        if (fyUser < fyMin * (1 - 1e-9) || fyUser > fyMax * (1 + 1e-9)) {
+            throw steel.error("fy", "expected fy between " + fmt(fyMin) + " and " + fmt(fyMax) + " "
+                    + units.unit(Dim.STRESS) + " (Table 20.2.2.4(a) limits flexural bars to " + fmt(fyMax) + "), got "
+                    + fmt(fyUser));
+        }
+        double fyt = steel.optPositive("fyt", "stirrup fyt, " + units.unit(Dim.STRESS))
+                .map(v -> toSI(units, v, Dim.STRESS)).orElse(fy);
+        if (units.fromSI(fyt, Dim.STRESS) < fyMin * (1 - 1e-9)) {
+            throw steel.error("fyt", "expected fyt of at least " + fmt(fyMin) + " " + units.unit(Dim.STRESS));
+        }
+
+        BarCatalog catalog = catalog(doc, file, units);
+        double cover = doc.optPositive("cover", "clear cover to the stirrups, " + units.unit(Dim.LENGTH))
+                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(us ? 1.5 * 25.4 : 40.0);
+        String stirrupName = doc.optText("stirrup", "the stirrup bar size").orElse(us ? "3" : "10");
+        BarSize stirrup = bar(catalog, stirrupName, doc.locationOf("stirrup"), "stirrup");
+        double gap = doc.optPositive("layer_gap", "clear gap between bar layers, " + units.unit(Dim.LENGTH))
+                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(code.minLayerGap());
+        Exposure exposure = Exposure.INTERIOR;
+        if (doc.has("exposure")) {
+            String e = doc.text("exposure", "interior, weather or ground");
+            exposure = Arrays.stream(Exposure.values()).filter(x -> x.key().equals(e)).findFirst()
+                    .orElseThrow(() -> doc.error("exposure", "expected interior, weather or ground, got \"" + e + "\""));
+        }
+        Materials materials = new Materials(fc, fy, fyt, agg, lambda);
+        Detailing detailing = new Detailing(cover, stirrup, gap, exposure);
+        return new Settings(file.toString(), units, materials, catalog, detailing, doc.location());
+    }
+
+    private static BarCatalog catalog(YFields doc, Path file, UnitSystem units) {
+        String id = doc.optText("bars", "a built-in bar catalog id or a catalog file path")
+                .orElse(units == UnitSystem.US ? "astm-a615" : "astm-a615m");
+        var builtIn = BarCatalogs.builtIn(id);
+        if (builtIn.isPresent()) {
+            return builtIn.get();
+        }
+        Path base = file.toAbsolutePath().getParent();
+        Path p = base == null ? Path.of(id) : base.resolve(id);
+        if (!Files.exists(p)) {
+            throw doc.error("bars", "expected one of " + String.join(", ", BarCatalogs.BUILT_IN)
+                    + " or the path of a catalog file, got \"" + id + "\" (no such file)");
+        }
+        return BarCatalogs.load(Path.of(id).isAbsolute() ? p : relativeToCwd(p));
+    }
+
+    private static Path relativeToCwd(Path p) {
+        try {
+            return Path.of("").toAbsolutePath().relativize(p);
+        } catch (IllegalArgumentException e) {
+            return p;
+        }
+    }
+
+    /** Looks a bar size up, or fails at {@code where} listing the sizes the catalog has. */
+    public static BarSize bar(BarCatalog catalog, String name, Location at, String path) {
+        return catalog.find(name).orElseThrow(() -> new InputError(at, path + ": bar size \"" + name
+                + "\" is not in catalog " + catalog.id() + "; expected one of: "
+                + String.join(", ", catalog.designations())));
+    }
+
+    static double toSI(UnitSystem u, double v, Dim d) {
+        return u.toSI(v, d);
+    }
+
+    static String fmt(double v) {
+        if (v == Math.rint(v) && Math.abs(v) < 1e12) {
+            return String.valueOf((long) v);
+        }
+        return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    /** Reads the file and wraps the root as a map of settings. */
+    public static YFields root(YNode node) {
+        return YFields.of(node, "", "a barfit input (a map with units, concrete, steel, beams...)");
+    }
+}

@@ -1,0 +1,23 @@
+package barfit.report;
+
+import java.util.List;
+
+/** The caution every report carries. */
+public final class Caution {
+    public static final String SHORT = "Results must be checked by a licensed professional engineer against the "
+            + "governing local code before use.";
+
+    public static final List<String> LINES = List.of(
+            "CAUTION: " + SHORT,
+            "barfit covers only what this report lists: ACI 318-19 flexure, shear and detailing checks of",
+            "nonprestressed beam sections under the moments and shears given. It does not check the analysis that",
+            "produced them, torsion, axial load, seismic provisions, bar development and splices, deflection",
+            "(unless reported), fire resistance, durability beyond cover, or constructability beyond bar spacing.");
+
+    private Caution() {
+    }
+
+    public static String text() {
+        return String.join("\n", LINES);
+    }
+}

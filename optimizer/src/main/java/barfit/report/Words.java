@@ -1,0 +1,61 @@
+package barfit.report;
+
+import barfit.section.BarLayer;
+import barfit.section.CheckResult;
+import barfit.section.SectionShape;
+import barfit.section.Stirrups;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.List;
+import java.util.Locale;
+
+/** Short phrases shared by the reports. */
+public final class Words {
+    private Words() {
+    }
+
+    public static String shape(SectionShape s, UnitSystem u) {
+        String bh = u.compact(s.width(), Dim.LENGTH) + " × " + u.compact(s.height(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+        if (s.flange() == null) {
+            return bh + " rectangular";
+        }
+        return bh + (s.flange().oneSided() ? " L" : " T") + ", flange " + u.compact(s.flange().width(), Dim.LENGTH)
+                + " × " + u.compact(s.flange().thickness(), Dim.LENGTH);
+    }
+
+    public static String layers(List<BarLayer> layers) {
+        if (layers.isEmpty()) {
+            return "none";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (BarLayer l : layers) {
+            if (sb.length() > 0) {
+                sb.append(" + ");
+            }
+            sb.append(l.count()).append(' ').append(l.bar().label());
+        }
+        return sb.toString();
+    }
+
+    public static String stirrups(Stirrups s, UnitSystem u) {
+        if (s == null) {
+            return "none";
+        }
+        return s.bar().label() + " × " + s.legs() + " legs @ " + u.compact(s.spacing(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+    }
+
+    public static String value(barfit.section.trail.Q q, UnitSystem u) {
+        return q == null ? "" : u.withUnit(q.value(), q.dim());
+    }
+
+    public static String ratio(double r) {
+        if (!Double.isFinite(r)) {
+            return "—";
+        }
+        return String.format(Locale.ROOT, "%.2f", r);
+    }
+
+    public static String fixed(double v, int decimals) {
+        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+    }
+}

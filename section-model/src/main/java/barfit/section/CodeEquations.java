@@ -1,0 +1,108 @@
+package barfit.section;
+
+/**
+ * The unit-dependent constants of ACI 318-19. The SI edition (ACI 318M-19) and the inch-pound edition
+ * round some coefficients differently (0.17 vs 2 for Vc, 25 mm vs 1 in clear spacing...). The section
+ * model always computes in N, mm and MPa; this record holds each constant converted exactly from the
+ * edition the user works in, so a US design matches a US hand calculation.
+ */
+public record CodeEquations(
+        String edition,
+        boolean inchPound,
+        double es,
+        double minClearSpacing,
+        double minLayerGap,
+        double beta1FcLow,
+        double beta1FcStep,
+        double beta1FcHigh,
+        Coef vcSimple,
+        Coef vcRho,
+        Coef vcMax,
+        Coef vsSplit,
+        Coef vsMax,
+        Coef shearMinTrigger,
+        Coef avMinRoot,
+        double avMinFlat,
+        Coef asMinRoot,
+        double asMinFlat,
+        double rootFcMax,
+        double sizeEffectLength,
+        double stirrupSpacingCap,
+        double stirrupSpacingCapHigh,
+        double crackA,
+        double crackB,
+        double crackFsRef,
+        double skinDepthLimit,
+        double minDepthFyRef,
+        double minDepthFyDivisor,
+        double fytMax,
+        double fyMax,
+        double coverInterior,
+        double coverWeatherLarge,
+        double coverGround,
+        Coef ec,
+        Coef fr) {
+
+    /** psi per MPa (exact: 1 psi = 6.894757293 kPa). */
+    public static final double PSI_PER_MPA = 145.037737730;
+    public static final double MM_PER_IN = 25.4;
+
+    private static final double ROOT_PSI = Math.sqrt(PSI_PER_MPA);
+
+    /** ACI 318M-19, the SI edition. */
+    public static final CodeEquations SI = new CodeEquations(
+            "ACI 318M-19 (SI units)", false,
+            200_000.0,                      // 20.2.2.2
+            25.0, 25.0,                     // 25.2.1, 25.2.2
+            28.0, 7.0, 55.0,                // Table 22.2.2.4.3
+            new Coef(0.17, "0.17"),         // Table 22.5.5.1 (a)
+            new Coef(0.66, "0.66"),         // Table 22.5.5.1 (b), (c)
+            new Coef(0.42, "0.42"),         // 22.5.5.1.1
+            new Coef(0.33, "0.33"),         // 9.7.6.2.2
+            new Coef(0.66, "0.66"),         // 22.5.1.2
+            new Coef(0.083, "0.083"),       // 9.6.3.1
+            new Coef(0.062, "0.062"), 0.35, // Table 9.6.3.4
+            new Coef(0.25, "0.25"), 1.4,    // 9.6.1.2
+            8.3,                            // 22.5.3.1
+            250.0,                          // 22.5.5.1.3: 1 + 0.004 d = 1 + d/250
+            600.0, 300.0,                   // Table 9.7.6.2.2
+            380.0, 300.0, 280.0,            // 24.3.2
+            900.0,                          // 9.7.2.3
+            420.0, 700.0,                   // Table 9.3.1.1 note
+            420.0,                          // Table 20.2.2.4(a), shear
+            550.0,                          // Table 20.2.2.4(a), flexure
+            40.0, 50.0, 75.0,               // Table 20.5.1.3.1
+            new Coef(4700.0, "4700"),       // 19.2.2.1(b)
+            new Coef(0.62, "0.62"));        // 19.2.3.1
+
+    /** ACI 318-19, the inch-pound edition, with every constant converted exactly to N, mm, MPa. */
+    public static final CodeEquations INCH_POUND = new CodeEquations(
+            "ACI 318-19 (inch-pound units)", true,
+            29_000_000.0 / PSI_PER_MPA,
+            MM_PER_IN, MM_PER_IN,
+            4000.0 / PSI_PER_MPA, 1000.0 / PSI_PER_MPA, 8000.0 / PSI_PER_MPA,
+            new Coef(2.0 / ROOT_PSI, "2"),
+            new Coef(8.0 / ROOT_PSI, "8"),
+            new Coef(5.0 / ROOT_PSI, "5"),
+            new Coef(4.0 / ROOT_PSI, "4"),
+            new Coef(8.0 / ROOT_PSI, "8"),
+            new Coef(1.0 / ROOT_PSI, "1"),
+            new Coef(0.75 / ROOT_PSI, "0.75"), 50.0 / PSI_PER_MPA,
+            new Coef(3.0 / ROOT_PSI, "3"), 200.0 / PSI_PER_MPA,
+            100.0 / ROOT_PSI,
+            10.0 * MM_PER_IN,
+            24.0 * MM_PER_IN, 12.0 * MM_PER_IN,
+            15.0 * MM_PER_IN, 12.0 * MM_PER_IN, 40_000.0 / PSI_PER_MPA,
+            36.0 * MM_PER_IN,
+            60_000.0 / PSI_PER_MPA, 100_000.0 / PSI_PER_MPA,
+            60_000.0 / PSI_PER_MPA,
+            80_000.0 / PSI_PER_MPA,
+            1.5 * MM_PER_IN, 2.0 * MM_PER_IN, 3.0 * MM_PER_IN,
+            new Coef(57_000.0 / ROOT_PSI, "57000"),
+            new Coef(7.5 / ROOT_PSI, "7.5"));
+
+    /** √f'c in √MPa, capped per 22.5.3.1 (8.3 MPa, or 100 psi). */
+    public double rootFcForShear(double fc) {
+        return Math.min(Math.sqrt(fc), rootFcMax);
+    }
+}

@@ -1,0 +1,387 @@
+package barfit.section;
+
+import barfit.catalogs.BarSize;
+import barfit.section.trail.Q;
+import barfit.section.trail.Trail;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Every check of one section under one demand: strength, ductility, minimum steel, bar spacing,
+ * crack control, skin reinforcement, cover, flange width, shear and minimum depth. Each result names
+ * its ACI 318-19 clause; with a recording trail, each also writes its working.
+ */
+public final class SectionChecks {
+    private SectionChecks() {
+    }
+
+    /** Runs all checks that apply. {@code span} may be null (then depth and flange-width limits are skipped). */
+    public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail) {
+        List<CheckResult> out = new ArrayList<>();
+        Bending bending = demand.bending();
+        FlexureResult fr = Flexure.analyse(s, bending, trail);
+        flexure(s, demand, fr, out, trail);
+        minimumSteel(s, demand, span, fr, out, trail);
+        spacing(s, bending, out, trail);
+        cover(s, out, trail);
+        skin(s, out, trail);
+        if (s.shape().flanged()) {
+            flangeWidth(s, span, out, trail);
+        }
+        ShearResult shear = null;
+        if (demand.vu() != null) {
+            double d = fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
+            shear = Shear.analyse(s, Math.abs(demand.vu()), d, fr.tensionSteelArea(), trail);
+            shearChecks(s, shear, out);
+        }
+        if (span != null && span.ends() != null) {
+            minimumDepth(s, span, out, trail);
+        }
+        return new CheckReport(s, demand, fr, shear, out, trail);
+    }
+
+    // ---- strength and ductility ----
+
+    private static void flexure(BeamSection s, Demand demand, FlexureResult fr, List<CheckResult> out, Trail t) {
+        if (demand.mu() != null) {
+            double mu = Math.abs(demand.mu());
+            out.add(CheckResult.atMost("flexure", "Flexural strength φMn ≥ Mu", "9.5.1.1, 22.2", Q.moment(mu),
+                    Q.moment(fr.phiMn()), fr.bending().word() + ", φ = " + round3(fr.phi()) + " (" + fr.strainClass()
+                            + ")"));
+        }
+        out.add(CheckResult.atLeast("ductility", "Net tensile strain εt ≥ 0.004", "9.3.3.1", Q.strain(fr.epsT()),
+                Q.strain(CodeTables.EPS_T_MIN_BEAM), null));
+    }
+
+    private static void minimumSteel(BeamSection s, Demand demand, Span span, FlexureResult fr,
+            List<CheckResult> out, Trail t) {
+        Materials m = s.materials();
+        CodeEquations code = s.code();
+        double bw = s.shape().width();
+        Flange f = s.shape().flange();
+        String bwNote = null;
+        boolean flangeInTension = f != null && fr.bending() == Bending.HOGGING;
+        if (flangeInTension && span != null && span.ends() != null && span.ends().determinate()) {
+            bw = Math.min(f.width(), 2 * s.shape().width());
+            bwNote = "statically determinate with the flange in tension: bw taken as min(bf, 2 bw)";
+        }
+        double d = fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
+        double asMin = Math.max(code.asMinRoot().si() * Math.sqrt(m.fc()) / m.fy(), code.asMinFlat() / m.fy()) * bw * d;
+        double as = fr.tensionSteelArea();
+        if (t.isOn()) {
+            t.heading("Minimum flexural steel", "9.6.1.2, 9.6.1.3");
+            if (bwNote != null) {
+                t.note(bwNote + " (9.6.1.2).");
+            }
+            t.step("As,min", "max(" + code.asMinRoot().shown() + " √f'c / fy, " + (code.inchPound() ? "200" : "1.4")
+                    + " / fy) bw d", "max(" + code.asMinRoot().shown() + " × √{} / {}, {} / {}) × {} × {}",
+                    Q.area(asMin), Q.stress(m.fc()), Q.stress(m.fy()), Q.stress(code.asMinFlat()), Q.stress(m.fy()),
+                    Q.length(bw), Q.length(d));
+            t.value("As", Q.area(as), "tension-face bars provided");
+        }
+        if (as >= asMin || demand.mu() == null) {
+            out.add(CheckResult.atLeast("min_steel", "Minimum flexural steel As ≥ As,min", "9.6.1.2", Q.area(as),
+                    Q.area(asMin), bwNote));
+            return;
+        }
+        // 9.6.1.3: As,min need not apply where As provided is at least 4/3 of the As required by analysis
+        double asReq = requiredTensionArea(s, fr.bending(), Math.abs(demand.mu()));
+        double alt = 4.0 / 3.0 * asReq;
+        if (t.isOn()) {
+            t.step("As,req", "tension steel for φMn = Mu (same bars scaled)", null, Q.area(asReq));
+            t.step("4/3 As,req", "9.6.1.3 alternative", "4/3 × {}", Q.area(alt), Q.area(asReq));
+        }
+        if (as >= alt) {
+            out.add(CheckResult.atLeast("min_steel", "Minimum flexural steel As ≥ 4/3 As,req", "9.6.1.3", Q.area(as),
+                    Q.area(alt), "As < As,min = " + Math.round(asMin) + " mm², but 9.6.1.3 is met"));
+        } else {
+            out.add(CheckResult.atLeast("min_steel", "Minimum flexural steel As ≥ As,min", "9.6.1.2, 9.6.1.3",
+                    Q.area(as), Q.area(asMin), "neither As,min nor 4/3 As,req (" + Math.round(alt) + " mm²) is met"));
+        }
+    }
+
+    /**
+     * The tension-face steel area needed for phi Mn = Mu with every other bar kept: all tension-face
+     * layers are scaled by one factor, found by bisection. Infinity if no scale reaches Mu.
+     */
+    public static double requiredTensionArea(BeamSection s, Bending bending, double mu) {
+        Face tf = bending.tensionFace();
+        FlexureSolver solver = new FlexureSolver();
+        double lo = 0;
+        double hi = 1;
+        while (phiMnScaled(s, bending, tf, hi, solver) < mu) {
+            hi *= 2;
+            if (hi > 64) {
+                return Double.POSITIVE_INFINITY;
+            }
+        }
+        for (int i = 0; i < 60; i++) {
+            double mid = 0.5 * (lo + hi);
+            if (phiMnScaled(s, bending, tf, mid, solver) >= mu) {
+                hi = mid;
+            } else {
+                lo = mid;
+            }
+        }
+        double base = 0;
+        for (BarLayer l : s.layersOn(tf)) {
+            base += l.area();
+        }
+        return hi * base;
+    }
+
+    private static double phiMnScaled(BeamSection s, Bending bending, Face tf, double k, FlexureSolver solver) {
+        Materials m = s.materials();
+        double beta1 = CodeTables.beta1(m.fc(), s.code());
+        Flexure.setProfile(solver, s.shape(), bending);
+        solver.materials(m.fc(), m.fy(), s.code().es(), beta1).clearBars();
+        double dt = 0;
+        for (BarLayer l : s.layers()) {
+            double d = s.depthFromCompression(l, bending);
+            double scale = l.face() == tf ? k : 1;
+            if (scale > 0) {
+                solver.bar(d, l.area() * scale, l.bar().diameter());
+            }
+            dt = Math.max(dt, d);
+        }
+        if (solver.barCount() == 0) {
+            return 0;
+        }
+        solver.solve();
+        double epsT = CodeTables.EPS_CU * (dt - solver.c()) / solver.c();
+        return CodeTables.phiFlexure(epsT, m.fy() / s.code().es()) * solver.mn();
+    }
+
+    // ---- spacing ----
+
+    private static void spacing(BeamSection s, Bending bending, List<CheckResult> out, Trail t) {
+        Detailing det = s.detailing();
+        Materials m = s.materials();
+        CodeEquations code = s.code();
+        double bw = s.shape().width();
+        if (t.isOn()) {
+            t.heading("Bar spacing", "25.2.1, 25.2.2, 24.3.2");
+            t.step("b,inner", "bw − 2 (cover + ds)", "{} − 2 × ({} + {})", Q.length(BarSpacing.innerWidth(bw, det)),
+                    Q.length(bw), Q.length(det.cover()), Q.length(det.stirrupBar().diameter()));
+        }
+        for (Face face : Face.values()) {
+            List<BarLayer> layers = s.layersOn(face);
+            for (int i = 0; i < layers.size(); i++) {
+                BarLayer l = layers.get(i);
+                double db = l.bar().diameter();
+                double smin = BarSpacing.minClear(l.bar(), m, code);
+                double clear = BarSpacing.clear(bw, det, db, l.count());
+                String id = "spacing." + face.word() + "." + (i + 1);
+                String where = face.word() + " layer " + (i + 1) + " (" + l.count() + " " + l.bar().label() + ")";
+                if (t.isOn()) {
+                    if (l.count() > 1) {
+                        t.step("s,clear " + where, "(b,inner − n db) / (n − 1)", "({} − {} × {}) / ({} − 1)",
+                                Q.length(clear), Q.length(BarSpacing.innerWidth(bw, det)), Q.count(l.count()),
+                                Q.length(db), Q.count(l.count()));
+                    }
+                    t.step("s,min", "max(" + (code.inchPound() ? "1 in" : "25 mm") + ", db, 4/3 dagg)",
+                            "max({}, {}, 4/3 × {})", Q.length(smin), Q.length(code.minClearSpacing()), Q.length(db),
+                            Q.length(m.aggregate()));
+                }
+                if (l.count() == 1) {
+                    out.add(CheckResult.atLeast(id, "Bar fits between stirrup legs, " + where, "25.2.1",
+                            Q.length(BarSpacing.innerWidth(bw, det)), Q.length(db), null));
+                } else {
+                    out.add(CheckResult.atLeast(id, "Clear spacing in layer, " + where, "25.2.1", Q.length(clear),
+                            Q.length(smin), null));
+                }
+                if (i > 0) {
+                    BarLayer prev = layers.get(i - 1);
+                    double gap = l.fromFace() - prev.fromFace() - (db + prev.bar().diameter()) / 2;
+                    double gmin = code.minLayerGap();
+                    if (t.isOn()) {
+                        t.step("clear between " + face.word() + " layers " + i + "–" + (i + 1),
+                                "Δy − (db1 + db2)/2", "{} − {} − ({} + {}) / 2", Q.length(gap), Q.length(l.fromFace()),
+                                Q.length(prev.fromFace()), Q.length(db), Q.length(prev.bar().diameter()));
+                    }
+                    out.add(CheckResult.atLeast("layer_gap." + face.word() + "." + i + "-" + (i + 1),
+                            "Clear distance between " + face.word() + " layers " + i + " and " + (i + 1), "25.2.2",
+                            Q.length(gap), Q.length(gmin), l.count() > prev.count()
+                                    ? "upper layer has more bars than the one below; they cannot all sit directly above"
+                                    : null));
+                }
+            }
+        }
+        // crack control of the layer nearest the tension face
+        List<BarLayer> tension = s.layersOn(bending.tensionFace());
+        if (!tension.isEmpty()) {
+            BarLayer l = tension.get(0);
+            double cc = det.coverToMainBars();
+            double fs = BarSpacing.serviceStress(m.fy());
+            double limit = BarSpacing.crackSpacingLimit(m.fy(), cc, code);
+            double sc = BarSpacing.centreSpacing(bw, det, l.bar().diameter(), l.count());
+            if (t.isOn()) {
+                t.step("fs", "2/3 fy  (24.3.2.1)", "2/3 × {}", Q.stress(fs), Q.stress(m.fy()));
+                t.step("cc", "cover + ds", "{} + {}", Q.length(cc), Q.length(det.cover()),
+                        Q.length(det.stirrupBar().diameter()));
+                String a = code.inchPound() ? "15" : "380";
+                String b = code.inchPound() ? "12" : "300";
+                String ref = code.inchPound() ? "40000" : "280";
+                t.step("s,max", "min(" + a + " (" + ref + "/fs) − 2.5 cc, " + b + " (" + ref + "/fs))",
+                        "min(" + a + " × (" + ref + " / {}) − 2.5 × {}, " + b + " × (" + ref + " / {}))",
+                        Q.length(limit), Q.stress(fs), Q.length(cc), Q.stress(fs));
+                t.step("s", l.count() > 1 ? "(b,inner − db) / (n − 1)" : "bw (a single bar)", null, Q.length(sc));
+            }
+            out.add(CheckResult.atMost("crack_control", "Crack control spacing, " + bending.tensionFace().word()
+                    + " layer 1", "24.3.2", Q.length(sc), Q.length(limit), null));
+        }
+    }
+
+    private static void cover(BeamSection s, List<CheckResult> out, Trail t) {
+        Detailing det = s.detailing();
+        CodeEquations code = s.code();
+        double required;
+        double provided = det.cover();
+        String note;
+        switch (det.exposure()) {
+            case GROUND -> {
+                required = code.coverGround();
+                note = "cast against and permanently in contact with ground";
+            }
+            case WEATHER -> {
+                double largest = 0;
+                for (BarLayer l : s.layers()) {
+                    largest = Math.max(largest, l.bar().diameter());
+                }
+                // No. 19 (#6) and larger need the larger cover, measured to those bars
+                boolean large = largest >= 19.0;
+                if (large && det.cover() + det.stirrupBar().diameter() - code.coverWeatherLarge()
+                        < det.cover() - code.coverInterior()) {
+                    required = code.coverWeatherLarge();
+                    provided = det.cover() + det.stirrupBar().diameter();
+                    note = "exposed to weather: cover to the No. 19 and larger main bars";
+                } else {
+                    required = code.coverInterior();
+                    note = "exposed to weather: cover to the stirrups";
+                }
+            }
+            default -> {
+                required = code.coverInterior();
+                note = "not exposed to weather or in contact with ground";
+            }
+        }
+        if (t.isOn()) {
+            t.heading("Cover", "20.5.1.3");
+            t.value("cover", Q.length(provided), note);
+            t.value("cover,min", Q.length(required), "Table 20.5.1.3.1");
+        }
+        out.add(CheckResult.atLeast("cover", "Specified concrete cover", "Table 20.5.1.3.1", Q.length(provided),
+                Q.length(required), note));
+    }
+
+    private static void skin(BeamSection s, List<CheckResult> out, Trail t) {
+        CodeEquations code = s.code();
+        double h = s.shape().height();
+        if (h <= code.skinDepthLimit()) {
+            out.add(CheckResult.atMost("skin", "Skin reinforcement not required (h ≤ "
+                    + (code.inchPound() ? "36 in" : "900 mm") + ")", "9.7.2.3", Q.length(h),
+                    Q.length(code.skinDepthLimit()), null));
+            return;
+        }
+        SkinBars skin = s.skin();
+        if (skin == null) {
+            out.add(CheckResult.rule("skin", "Skin reinforcement required (h > " + (code.inchPound() ? "36 in" : "900 mm")
+                    + ")", "9.7.2.3", false, Q.length(h), Q.length(code.skinDepthLimit()), "<=",
+                    "give skin: {bar, spacing} along both side faces over h/2 from the tension face"));
+            return;
+        }
+        double cc = s.detailing().cover() + s.detailing().stirrupBar().diameter();
+        double limit = BarSpacing.crackSpacingLimit(s.materials().fy(), cc, code);
+        if (t.isOn()) {
+            t.heading("Skin reinforcement", "9.7.2.3, 24.3.2");
+            t.value("s,skin", Q.length(skin.spacing()), skin.bar().label() + " each side face");
+            t.value("s,max", Q.length(limit), "24.3.2 with cc to the skin bars");
+        }
+        out.add(CheckResult.atMost("skin", "Skin reinforcement spacing", "9.7.2.3, 24.3.2", Q.length(skin.spacing()),
+                Q.length(limit), skin.bar().label() + " on both side faces over h/2 from the tension face"));
+    }
+
+    private static void flangeWidth(BeamSection s, Span span, List<CheckResult> out, Trail t) {
+        Flange f = s.shape().flange();
+        double bw = s.shape().width();
+        double hf = f.thickness();
+        double overhang = f.oneSided() ? 6 * hf : 8 * hf;
+        String formula = f.oneSided() ? "bw + min(6 hf, ln/12)" : "bw + 2 min(8 hf, ln/8)";
+        if (span != null) {
+            overhang = Math.min(overhang, span.length() / (f.oneSided() ? 12 : 8));
+        } else {
+            formula = f.oneSided() ? "bw + 6 hf (no span given)" : "bw + 2 × 8 hf (no span given)";
+        }
+        double limit = bw + (f.oneSided() ? 1 : 2) * overhang;
+        if (t.isOn()) {
+            t.heading("Effective flange width", "6.3.2.1");
+            t.step("bf,max", formula, null, Q.length(limit));
+            t.note("The clear distance to the next web (sw/2) is not known to barfit; check it by hand.");
+        }
+        out.add(CheckResult.atMost("flange_width", "Effective flange width", "Table 6.3.2.1", Q.length(f.width()),
+                Q.length(limit), "sw/2 limit not checked"));
+    }
+
+    private static void shearChecks(BeamSection s, ShearResult sh, List<CheckResult> out) {
+        Stirrups st = s.stirrups();
+        out.add(CheckResult.atMost("shear_section", "Section size for shear Vu ≤ φ(Vc + Vs,max)", "22.5.1.2",
+                Q.force(sh.vu()), Q.force(sh.vnLimit()), null));
+        out.add(CheckResult.atMost("shear_strength", "Shear strength φVn ≥ Vu", "9.5.1.1, 22.5", Q.force(sh.vu()),
+                Q.force(sh.phiVn()), "Vc from Table 22.5.5.1 row " + sh.vcRow()));
+        boolean needMin = sh.vu() > sh.minShearTrigger();
+        if (st == null) {
+            out.add(CheckResult.rule("shear_min", needMin ? "Stirrups required (Vu > φ 0.083 λ √f'c bw d)"
+                    : "Stirrups not required by 9.6.3.1", "9.6.3.1", !needMin, Q.force(sh.vu()),
+                    Q.force(sh.minShearTrigger()), "<=", needMin ? "give stirrups: {bar, legs, spacing}" : null));
+            return;
+        }
+        out.add(needMin
+                ? CheckResult.atLeast("shear_min", "Minimum shear reinforcement Av ≥ Av,min", "9.6.3.1, 9.6.3.4",
+                        Q.area(sh.av()), Q.area(sh.avMin()), null)
+                : CheckResult.atLeast("shear_min", "Minimum shear reinforcement (not required, Vu ≤ φ 0.083 λ √f'c bw d)",
+                        "9.6.3.1", Q.force(sh.minShearTrigger()), Q.force(sh.vu()), "provided stirrups exceed the need"));
+        out.add(CheckResult.atMost("stirrup_spacing", "Stirrup spacing along the beam", "9.7.6.2.2",
+                Q.length(st.spacing()), Q.length(sh.sMaxAlong()), sh.highShear() ? "Vs > 0.33 √f'c bw d: halved limits"
+                        : null));
+        double across = (s.shape().width() - 2 * s.detailing().cover() - st.bar().diameter()) / (st.legs() - 1);
+        out.add(CheckResult.atMost("stirrup_legs", "Stirrup leg spacing across the width", "9.7.6.2.2",
+                Q.length(across), Q.length(sh.sMaxAcross()), st.legs() + " legs"));
+    }
+
+    private static void minimumDepth(BeamSection s, Span span, List<CheckResult> out, Trail t) {
+        CodeEquations code = s.code();
+        double fy = s.materials().fy();
+        double factor = 0.4 + fy / code.minDepthFyDivisor();
+        double hmin = span.length() / span.ends().minDepthDivisor() * factor;
+        if (t.isOn()) {
+            t.heading("Minimum depth", "Table 9.3.1.1");
+            String div = fmtDivisor(span.ends().minDepthDivisor());
+            t.step("h,min", "ℓ / " + div + " × (0.4 + fy / " + (code.inchPound() ? "100000" : "700") + ")",
+                    "{} / " + div + " × (0.4 + {} / " + (code.inchPound() ? "100000" : "700") + ")", Q.length(hmin),
+                    Q.length(span.length()), Q.stress(fy));
+        }
+        double h = s.shape().height();
+        out.add(CheckResult.atLeast("min_depth", "Minimum depth (" + span.ends().words() + ")", "Table 9.3.1.1",
+                Q.length(h), Q.length(hmin), h < hmin
+                        ? "below Table 9.3.1.1: deflections must be calculated (9.3.2, 24.2)" : null));
+    }
+
+    private static String fmtDivisor(double d) {
+        return d == Math.rint(d) ? String.valueOf((int) d) : String.valueOf(d);
+    }
+
+    private static String round3(double v) {
+        return String.format(java.util.Locale.ROOT, "%.3f", v);
+    }
+
+    /** Convenience for callers that only need the bar size list of a section. */
+    public static List<BarSize> barSizes(BeamSection s) {
+        List<BarSize> out = new ArrayList<>();
+        for (BarLayer l : s.layers()) {
+            if (!out.contains(l.bar())) {
+                out.add(l.bar());
+            }
+        }
+        return out;
+    }
+}
