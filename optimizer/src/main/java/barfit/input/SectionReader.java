@@ -134,7 +134,7 @@ public final class SectionReader {
                 double yb = h - b.fromFace();
                 double yt = t.fromFace();
                 if (yb - yt < (b.bar().diameter() + t.bar().diameter()) / 2 + 1e-9) {
-                    throw new InputError(beam.location(), beam.path() + ": the bottom layer at "
+                    throw new InputError(beam.locationOf("top"), beam.path() + ": the bottom layer at "
                             + fmt(b.fromFace(), Dim.LENGTH) + " from the bottom and the top layer at "
                             + fmt(t.fromFace(), Dim.LENGTH) + " from the top overlap in a section "
                             + fmt(h, Dim.LENGTH) + " high; expected fewer layers or a deeper section");

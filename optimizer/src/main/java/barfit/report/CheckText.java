@@ -97,7 +97,7 @@ public final class CheckText {
         layers.row("layer", "bars", "d (" + u.unit(Dim.LENGTH) + ")", "strain", "stress (" + u.unit(Dim.STRESS) + ")",
                 "force (" + u.unit(Dim.FORCE) + ")");
         for (LayerResult l : f.layers()) {
-            String name = l.layer().face().word() + " @ " + u.compact(l.layer().fromFace(), Dim.LENGTH);
+            String name = l.layer().face().word() + " @ " + u.number(l.layer().fromFace(), Dim.LENGTH);
             layers.row(name, l.layer().count() + " " + l.layer().bar().label(), u.number(l.d(), Dim.LENGTH),
                     Words.fixed(l.strain(), 5), u.number(l.stress(), Dim.STRESS), u.number(l.force(), Dim.FORCE));
         }

@@ -75,10 +75,8 @@ public final class Json {
                 if (s.formula() != null) {
                     o.put("formula", s.formula());
                 }
-                String sub = TrailText.substitute(s.substitution(), s.args(), u);
-                if (sub != null) {
-                    o.put("substituted", sub);
-                }
+                String line = TrailText.step(s, u);
+                o.put("line", line);
                 put(o, "value", s.result(), u);
                 o.put("unit", u.unit(s.result().dim()));
                 if (s.note() != null) {

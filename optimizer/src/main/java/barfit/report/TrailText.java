@@ -38,6 +38,10 @@ public final class TrailText {
             sb.append(" = ").append(s.formula());
         }
         String sub = substitute(s.substitution(), s.args(), u);
+        if (sub != null && u == UnitSystem.US && s.result().dim() == barfit.section.trail.Dim.MOMENT
+                && s.args().stream().noneMatch(q -> q.dim() == barfit.section.trail.Dim.MOMENT)) {
+            sub = "[" + sub + "] / 12";  // kip·in to kip·ft
+        }
         if (sub != null) {
             sb.append(" = ").append(sub);
         }

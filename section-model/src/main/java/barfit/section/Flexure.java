@@ -116,8 +116,7 @@ public final class Flexure {
             }
             t.step("T", "As fs", "{} × {}", Q.force(l.force()), Q.area(bl.area()), Q.stress(l.stress()));
             if (l.displaced() > 0) {
-                t.note("This layer lies inside the block and displaces " + Math.round(l.displaced())
-                        + " mm² of concrete (counted in Cc).");
+                t.value("A,displaced", Q.area(l.displaced()), "block concrete taken by these bars, deducted in Cc");
             }
         }
         t.step("Cc", "0.85 f'c (Ac − displaced)", null, Q.force(r.concreteForce()));

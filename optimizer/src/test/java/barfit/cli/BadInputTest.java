@@ -1,0 +1,56 @@
+package barfit.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * Every file in the bad-input corpus must give exit code 2 and exactly one line on stderr that names
+ * the file and the line, says what was expected, and carries no stack trace. The first line of each
+ * file says what to expect: {@code # expect LINE: text}.
+ */
+class BadInputTest {
+    static final Path CORPUS = Path.of("src/test/resources/bad-input");
+    private static final Pattern EXPECT = Pattern.compile("# expect (\\d+): (.*)");
+
+    static Stream<Path> corpus() throws IOException {
+        List<Path> files;
+        try (Stream<Path> s = Files.list(CORPUS)) {
+            files = s.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
+        }
+        assertTrue(files.size() >= 15, "the corpus needs at least 15 files");
+        return files.stream();
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("corpus")
+    void rejectedWithOneLine(Path file) throws IOException {
+        String first = Files.readAllLines(file).get(0);
+        Matcher m = EXPECT.matcher(first);
+        assertTrue(m.matches(), "first line must be '# expect LINE: text': " + first);
+        String line = m.group(1);
+        String text = m.group(2);
+        String before = Files.readString(file);
+        for (String command : new String[] {"check"}) {
+            Cli r = Cli.run(command, file.toString());
+            assertEquals(2, r.exit(), "exit code; stderr: " + r.err());
+            assertEquals("", r.out(), "nothing on stdout");
+            String err = r.err().strip();
+            assertFalse(err.contains("\n"), "one line only: " + err);
+            assertTrue(err.startsWith("barfit: " + file + ":" + line + ":"), "file and line: " + err);
+            assertTrue(err.contains(text), "says what is expected (" + text + "): " + err);
+            assertFalse(err.contains("Exception") || err.contains("\tat "), "no stack trace: " + err);
+        }
+        assertEquals(before, Files.readString(file), "the input is untouched");
+    }
+}
