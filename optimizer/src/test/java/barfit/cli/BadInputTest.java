@@ -17,7 +17,8 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * Every file in the bad-input corpus must give exit code 2 and exactly one line on stderr that names
  * the file and the line, says what was expected, and carries no stack trace. The first line of each
- * file says what to expect: {@code # expect LINE: text}.
+ * file says what to expect: {@code # expect LINE: text}. Files named design-* go to {@code design},
+ * the others to {@code check}.
  */
 class BadInputTest {
     static final Path CORPUS = Path.of("src/test/resources/bad-input");
@@ -41,7 +42,8 @@ class BadInputTest {
         String line = m.group(1);
         String text = m.group(2);
         String before = Files.readString(file);
-        for (String command : new String[] {"check"}) {
+        String command = file.getFileName().toString().startsWith("design-") ? "design" : "check";
+        {
             Cli r = Cli.run(command, file.toString());
             assertEquals(2, r.exit(), "exit code; stderr: " + r.err());
             assertEquals("", r.out(), "nothing on stdout");

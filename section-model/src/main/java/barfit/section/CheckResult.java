@@ -10,16 +10,26 @@ import barfit.section.trail.Q;
 public record CheckResult(String id, String title, String clause, Q demand, String sense, Q limit, double ratio,
         boolean pass, String note) {
 
+    /** "value <= limit", with a relative tolerance of 1e-9 for rounding. */
+    public static boolean within(double value, double limit) {
+        return value <= limit * (1 + 1e-9);
+    }
+
+    /** "value >= limit", with a relative tolerance of 1e-9 for rounding. */
+    public static boolean reaches(double value, double limit) {
+        return value >= limit * (1 - 1e-9);
+    }
+
     public static CheckResult atMost(String id, String title, String clause, Q demand, Q limit, String note) {
         double ratio = limit.value() == 0 ? (demand.value() <= 0 ? 0 : Double.POSITIVE_INFINITY)
                 : demand.value() / limit.value();
-        return new CheckResult(id, title, clause, demand, "<=", limit, ratio, demand.value() <= limit.value() * (1 + 1e-9), note);
+        return new CheckResult(id, title, clause, demand, "<=", limit, ratio, within(demand.value(), limit.value()), note);
     }
 
     public static CheckResult atLeast(String id, String title, String clause, Q demand, Q limit, String note) {
         double ratio = demand.value() <= 0 ? (limit.value() <= 0 ? 0 : Double.POSITIVE_INFINITY)
                 : limit.value() / demand.value();
-        return new CheckResult(id, title, clause, demand, ">=", limit, ratio, demand.value() >= limit.value() * (1 - 1e-9), note);
+        return new CheckResult(id, title, clause, demand, ">=", limit, ratio, reaches(demand.value(), limit.value()), note);
     }
 
     /** A check decided by a rule rather than a number (ratio 0 when passed, infinity when not). */

@@ -57,16 +57,12 @@ public final class SectionChecks {
             List<CheckResult> out, Trail t) {
         Materials m = s.materials();
         CodeEquations code = s.code();
-        double bw = s.shape().width();
         Flange f = s.shape().flange();
-        String bwNote = null;
-        boolean flangeInTension = f != null && fr.bending() == Bending.HOGGING;
-        if (flangeInTension && span != null && span.ends() != null && span.ends().determinate()) {
-            bw = Math.min(f.width(), 2 * s.shape().width());
-            bwNote = "statically determinate with the flange in tension: bw taken as min(bf, 2 bw)";
-        }
+        double bw = minSteelWidth(s.shape(), fr.bending(), span);
+        String bwNote = bw != s.shape().width()
+                ? "statically determinate with the flange in tension: bw taken as min(bf, 2 bw)" : null;
         double d = fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
-        double asMin = Math.max(code.asMinRoot().si() * Math.sqrt(m.fc()) / m.fy(), code.asMinFlat() / m.fy()) * bw * d;
+        double asMin = asMin(s.shape(), fr.bending(), span, m, code, d);
         double as = fr.tensionSteelArea();
         if (t.isOn()) {
             t.heading("Minimum flexural steel", "9.6.1.2, 9.6.1.3");
@@ -98,6 +94,22 @@ public final class SectionChecks {
             out.add(CheckResult.atLeast("min_steel", "Minimum flexural steel As ≥ As,min", "9.6.1.2, 9.6.1.3",
                     Q.area(as), Q.area(asMin), "neither As,min nor 4/3 As,req (" + Math.round(alt) + " mm²) is met"));
         }
+    }
+
+    /** The web width 9.6.1.2 uses: min(bf, 2 bw) for a statically determinate beam with its flange in tension. */
+    static double minSteelWidth(SectionShape shape, Bending bending, Span span) {
+        Flange f = shape.flange();
+        boolean flangeInTension = f != null && bending == Bending.HOGGING;
+        if (flangeInTension && span != null && span.ends() != null && span.ends().determinate()) {
+            return Math.min(f.width(), 2 * shape.width());
+        }
+        return shape.width();
+    }
+
+    /** As,min of 9.6.1.2: max(0.25 √f'c / fy, 1.4 / fy) bw d. */
+    public static double asMin(SectionShape shape, Bending bending, Span span, Materials m, CodeEquations code, double d) {
+        double bw = minSteelWidth(shape, bending, span);
+        return Math.max(code.asMinRoot().si() * Math.sqrt(m.fc()) / m.fy(), code.asMinFlat() / m.fy()) * bw * d;
     }
 
     /**
@@ -191,19 +203,7 @@ public final class SectionChecks {
                             Q.length(smin), null));
                 }
                 if (i > 0) {
-                    BarLayer prev = layers.get(i - 1);
-                    double gap = l.fromFace() - prev.fromFace() - (db + prev.bar().diameter()) / 2;
-                    double gmin = code.minLayerGap();
-                    if (t.isOn()) {
-                        t.step("clear between " + face.word() + " layers " + i + "–" + (i + 1),
-                                "Δy − (db1 + db2)/2", "{} − {} − ({} + {}) / 2", Q.length(gap), Q.length(l.fromFace()),
-                                Q.length(prev.fromFace()), Q.length(db), Q.length(prev.bar().diameter()));
-                    }
-                    out.add(CheckResult.atLeast("layer_gap." + face.word() + "." + i + "-" + (i + 1),
-                            "Clear distance between " + face.word() + " layers " + i + " and " + (i + 1), "25.2.2",
-                            Q.length(gap), Q.length(gmin), l.count() > prev.count()
-                                    ? "upper layer has more bars than the one below; they cannot all sit directly above"
-                                    : null));
+                    out.add(layerGap(layers.get(i - 1), l, face, i, code, t));
                 }
             }
         }
@@ -230,6 +230,33 @@ public final class SectionChecks {
             out.add(CheckResult.atMost("crack_control", "Crack control spacing, " + bending.tensionFace().word()
                     + " layer 1", "24.3.2", Q.length(sc), Q.length(limit), null));
         }
+    }
+
+    /** 25.2.2: the clear distance between consecutive layers on one face. */
+    private static CheckResult layerGap(BarLayer prev, BarLayer l, Face face, int i, CodeEquations code, Trail t) {
+        double db = l.bar().diameter();
+        double gap = l.fromFace() - prev.fromFace() - (db + prev.bar().diameter()) / 2;
+        if (t.isOn()) {
+            t.step("clear between " + face.word() + " layers " + i + "–" + (i + 1), "Δy − (db1 + db2)/2",
+                    "{} − {} − ({} + {}) / 2", Q.length(gap), Q.length(l.fromFace()), Q.length(prev.fromFace()),
+                    Q.length(db), Q.length(prev.bar().diameter()));
+        }
+        return CheckResult.atLeast("layer_gap." + face.word() + "." + i + "-" + (i + 1),
+                "Clear distance between " + face.word() + " layers " + i + " and " + (i + 1), "25.2.2",
+                Q.length(gap), Q.length(code.minLayerGap()), l.count() > prev.count()
+                        ? "upper layer has more bars than the one below; they cannot all sit directly above" : null);
+    }
+
+    /** The 25.2.2 checks alone, for every face with more than one layer. */
+    public static List<CheckResult> layerGaps(BeamSection s) {
+        List<CheckResult> out = new ArrayList<>();
+        for (Face face : Face.values()) {
+            List<BarLayer> layers = s.layersOn(face);
+            for (int i = 1; i < layers.size(); i++) {
+                out.add(layerGap(layers.get(i - 1), layers.get(i), face, i, s.code(), Trail.off()));
+            }
+        }
+        return out;
     }
 
     private static void cover(BeamSection s, List<CheckResult> out, Trail t) {
@@ -322,6 +349,71 @@ public final class SectionChecks {
                 Q.length(limit), "sw/2 limit not checked"));
     }
 
+    /**
+     * The shear checks alone (22.5.1.2, 22.5, 9.6.3, 9.7.6.2.2) for a section whose stirrups are set,
+     * with d and As of the tension face given: what the search asks when it prices stirrups.
+     */
+    public static boolean shearPasses(BeamSection s, double vu, double d, double tensionArea) {
+        return shearVerdict(s, vu, d, tensionArea).all();
+    }
+
+    /** Each shear check's verdict for a section whose stirrups are set (see {@link #shearPasses}). */
+    public static ShearVerdict shearVerdict(BeamSection s, double vu, double d, double tensionArea) {
+        return verdict(s, Shear.analyse(s, vu, d, tensionArea, Trail.off()));
+    }
+
+    private static ShearVerdict verdict(BeamSection s, ShearResult sh) {
+        Stirrups st = s.stirrups();
+        boolean needMin = sh.vu() > sh.minShearTrigger();
+        boolean section = CheckResult.within(sh.vu(), sh.vnLimit());
+        boolean strength = CheckResult.within(sh.vu(), sh.phiVn());
+        if (st == null) {
+            return new ShearVerdict(section, strength, !needMin, true, true);
+        }
+        boolean minimum = !needMin || CheckResult.reaches(sh.av(), sh.avMin());
+        boolean spacing = CheckResult.within(st.spacing(), sh.sMaxAlong());
+        boolean legs = CheckResult.within(Shear.legSpacing(s), sh.sMaxAcross());
+        return new ShearVerdict(section, strength, minimum, spacing, legs);
+    }
+
+    /** The minimum-stirrup rule for a beam given no Vu (see {@link #minimumStirrupsPass}), part by part. */
+    public static ShearVerdict minimumStirrupsVerdict(BeamSection s, double d, double tensionArea) {
+        Stirrups st = s.stirrups();
+        if (st == null) {
+            return new ShearVerdict(true, true, false, false, false);
+        }
+        ShearResult sh = Shear.analyse(s, 0, d, tensionArea, Trail.off());
+        return new ShearVerdict(true, true, CheckResult.reaches(sh.av(), sh.avMin()),
+                CheckResult.within(st.spacing(), sh.sMaxAlong()),
+                CheckResult.within(Shear.legSpacing(s), sh.sMaxAcross()));
+    }
+
+    /**
+     * Minimum stirrups for a beam without a factored shear: Av >= Av,min (Table 9.6.3.4) and the
+     * spacing limits of 9.7.6.2.2 along and across.
+     */
+    public static boolean minimumStirrupsPass(BeamSection s, double d, double tensionArea) {
+        return minimumStirrupsVerdict(s, d, tensionArea).all();
+    }
+
+    /**
+     * The checks that depend only on the concrete frame, cover and bar sizes, not on bar counts:
+     * cover, skin, flange width and minimum depth. The search runs these once per frame.
+     */
+    public static List<CheckResult> frameChecks(BeamSection s, Span span) {
+        List<CheckResult> out = new ArrayList<>();
+        Trail off = Trail.off();
+        cover(s, out, off);
+        skin(s, out, off);
+        if (s.shape().flanged()) {
+            flangeWidth(s, span, out, off);
+        }
+        if (span != null && span.ends() != null) {
+            minimumDepth(s, span, out, off);
+        }
+        return out;
+    }
+
     private static void shearChecks(BeamSection s, ShearResult sh, List<CheckResult> out) {
         Stirrups st = s.stirrups();
         out.add(CheckResult.atMost("shear_section", "Section size for shear Vu ≤ φ(Vc + Vs,max)", "22.5.1.2",
@@ -343,7 +435,7 @@ public final class SectionChecks {
         out.add(CheckResult.atMost("stirrup_spacing", "Stirrup spacing along the beam", "9.7.6.2.2",
                 Q.length(st.spacing()), Q.length(sh.sMaxAlong()), sh.highShear() ? "Vs > 0.33 √f'c bw d: halved limits"
                         : null));
-        double across = (s.shape().width() - 2 * s.detailing().cover() - st.bar().diameter()) / (st.legs() - 1);
+        double across = Shear.legSpacing(s);
         out.add(CheckResult.atMost("stirrup_legs", "Stirrup leg spacing across the width", "9.7.6.2.2",
                 Q.length(across), Q.length(sh.sMaxAcross()), st.legs() + " legs"));
     }

@@ -8,6 +8,12 @@ public final class Shear {
     private Shear() {
     }
 
+    /** Centre-to-centre spacing of the stirrup legs across the web (for 9.7.6.2.2). */
+    public static double legSpacing(BeamSection s) {
+        Stirrups st = s.stirrups();
+        return (s.shape().width() - 2 * s.detailing().cover() - st.bar().diameter()) / (st.legs() - 1);
+    }
+
     /**
      * @param d effective depth to the tension steel for the bending that goes with this shear
      * @param tensionArea As of the tension face, for rho_w

@@ -1,0 +1,60 @@
+package barfit.examples;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.stream.Stream;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * Every file in examples/design runs through {@code barfit design}: text and JSON agree, the output is
+ * byte-for-byte repeatable, and every printed beam either has a proven-optimal passing layout or a
+ * diagnosis (the clinic file has one beam that cannot pass, on purpose).
+ */
+class DesignExamplesTest {
+    static Stream<Path> examples() throws IOException {
+        try (Stream<Path> s = Files.list(Path.of("design"))) {
+            var files = s.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
+            assertTrue(files.size() >= 2);
+            return files.stream();
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("examples")
+    void runsAsDocumented(Path file) throws IOException {
+        Run text = Run.of("design", file.toString(), "--alternatives", "2");
+        assertEquals("", text.err());
+        assertTrue(text.out().contains("CAUTION"));
+        assertEquals(text.out(), Run.of("design", file.toString(), "--alternatives", "2").out(),
+                "same input, same output");
+        Run json = Run.of("design", file.toString(), "--format", "json", "--alternatives", "2");
+        assertEquals(text.exit(), json.exit());
+        JsonNode root = new ObjectMapper().readTree(json.out());
+        boolean anyInfeasible = false;
+        for (JsonNode b : root.get("beams")) {
+            String status = b.get("status").asText();
+            if (status.equals("infeasible")) {
+                anyInfeasible = true;
+                assertTrue(b.get("diagnosis").get("fixes").size() > 0, "a diagnosis says what would work");
+                continue;
+            }
+            assertEquals("optimal", status);
+            for (String key : new String[] {"width", "height", "tension", "compression", "phi_Mn", "Mu", "eps_t", "phi",
+                "stirrups", "cost", "binding", "alternatives", "proof"}) {
+                assertTrue(b.has(key), "beam JSON has " + key);
+            }
+            for (String key : new String[] {"total", "concrete", "main_bars", "stirrups", "formwork", "depth_premium"}) {
+                assertTrue(b.get("cost").has(key), "cost has " + key);
+            }
+            assertEquals(b.get("proof").get("objective").asDouble(), b.get("proof").get("bound").asDouble(), 1e-9);
+        }
+        assertEquals(anyInfeasible ? 1 : 0, text.exit());
+    }
+}

@@ -1,0 +1,104 @@
+package barfit.cli;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.Location;
+import barfit.design.CostModel;
+import barfit.design.DesignOutcome;
+import barfit.design.SectionDesigner;
+import barfit.design.SectionProblem;
+import barfit.design.SolverOptions;
+import barfit.input.DesignBeam;
+import barfit.input.DesignInput;
+import barfit.input.DesignInputReader;
+import barfit.report.DesignJson;
+import barfit.report.DesignText;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+@Command(name = "design", mixinStandardHelpOptions = true,
+        description = "Find, for every beam in FILE, the cheapest layout in the search space that passes every "
+                + "check of the section model, with CP-SAT's proof, what binds and the cost broken down.%n"
+                + "Exit code 0 when every beam has a passing layout, 1 when one has none, 2 for bad input.")
+final class DesignCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "YAML input (see examples/design/)")
+    Path file;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    OutputFormat format;
+
+    @Option(names = "--beam", paramLabel = "ID", description = "design only this beam")
+    String beam;
+
+    @Option(names = "--alternatives", paramLabel = "N", defaultValue = "0",
+            description = "also show the N next-cheapest distinct designs (default: ${DEFAULT-VALUE})")
+    int alternatives;
+
+    @Option(names = "--time-limit", paramLabel = "SECONDS", defaultValue = "60",
+            description = "CP-SAT time limit per solve (default: ${DEFAULT-VALUE})")
+    double timeLimit;
+
+    @Option(names = "--workers", paramLabel = "N", defaultValue = "1",
+            description = "CP-SAT workers (default: ${DEFAULT-VALUE}; 1 gives repeatable answers)")
+    int workers;
+
+    @Option(names = "--seed", paramLabel = "N", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
+    int seed;
+
+    @Option(names = "--trail", negatable = true, defaultValue = "false",
+            description = "add the checks table and calculation trail of each chosen layout")
+    boolean trail;
+
+    @Override
+    public Integer call() {
+        if (alternatives < 0 || alternatives > 20) {
+            throw new InputError(Location.ofFile("--alternatives"), "expected 0 to 20, got " + alternatives);
+        }
+        if (workers < 1 || workers > 64) {
+            throw new InputError(Location.ofFile("--workers"), "expected 1 to 64, got " + workers);
+        }
+        if (!(timeLimit > 0)) {
+            throw new InputError(Location.ofFile("--time-limit"), "expected a positive number of seconds");
+        }
+        DesignInput input = DesignInputReader.read(file);
+        List<DesignBeam> beams = input.beams();
+        if (beam != null) {
+            beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
+            if (beams.isEmpty()) {
+                throw new InputError(Location.ofFile(file.toString()), "--beam " + beam
+                        + ": no beam with that id; expected one of: "
+                        + String.join(", ", input.beams().stream().map(DesignBeam::id).toList()));
+            }
+        }
+        var settings = input.settings();
+        CostModel cost = new CostModel(input.rates(), settings.detailing().cover());
+        SectionDesigner designer = new SectionDesigner(cost, new SolverOptions(timeLimit, workers, seed),
+                settings.units());
+        List<DesignOutcome> outcomes = new ArrayList<>();
+        for (DesignBeam b : beams) {
+            outcomes.add(designer.design(problem(input, b), alternatives));
+        }
+        String text = format == OutputFormat.json
+                ? DesignJson.render(settings, outcomes, input.currency(), trail)
+                : DesignText.render(settings, outcomes, input.currency(), trail);
+        spec.commandLine().getOut().print(text);
+        spec.commandLine().getOut().flush();
+        return outcomes.stream().allMatch(DesignOutcome::feasible) ? Main.OK : Main.FAILED;
+    }
+
+    static SectionProblem problem(DesignInput in, DesignBeam b) {
+        var s = in.settings();
+        double length = b.span() == null ? 1.0 : b.span().length() / 1000.0;
+        return new SectionProblem(b.id(), s.materials(), s.detailing(), s.code(), in.space(), b.mu(), b.vu(), b.span(),
+                b.maxDepth(), b.width(), b.flange(), length);
+    }
+}

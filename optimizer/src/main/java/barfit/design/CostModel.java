@@ -1,0 +1,62 @@
+package barfit.design;
+
+import barfit.catalogs.BarSize;
+import barfit.section.Flange;
+import barfit.section.Stirrups;
+
+/**
+ * The cost of a beam per metre of its length, from the user's rates. Concrete and formwork count the
+ * web only below a flange (the slab is paid for anyway). A closed stirrup is its centre-line
+ * perimeter plus two 135° hooks; each leg beyond two is a crosstie (one leg plus two hooks). Hooks
+ * extend max(6 db, 75 mm) (25.3.2).
+ */
+public final class CostModel {
+    /** Money is compared in these units (1/10000 of the currency), so CP-SAT works on integers. */
+    public static final double UNITS_PER_CURRENCY = 10_000.0;
+
+    private final CostRates rates;
+    private final double cover;
+
+    public CostModel(CostRates rates, double cover) {
+        this.rates = rates;
+        this.cover = cover;
+    }
+
+    public CostRates rates() {
+        return rates;
+    }
+
+    /** Concrete, formwork and depth premium of a section, per metre. */
+    public CostBreakdown frame(double b, double h, Flange flange) {
+        double webDepth = flange == null ? h : h - flange.thickness();
+        double concrete = rates.concretePerM3() * (b / 1000.0) * (webDepth / 1000.0);
+        double formwork = rates.formworkPerM2() * (b + 2 * webDepth) / 1000.0;
+        double premium = rates.depthPremiumPerM() * h / 1000.0;
+        return new CostBreakdown(concrete, 0, 0, formwork, premium);
+    }
+
+    /** Main (longitudinal) bars, per metre. */
+    public double bars(BarSize bar, int count) {
+        return rates.mainBarsPerKg() * rates.lapFactor() * bar.massPerMetre() * count;
+    }
+
+    /** Centre-line length of one stirrup set, mm. */
+    public double stirrupSetLength(double b, double h, BarSize bar, int legs) {
+        double ds = bar.diameter();
+        double w = b - 2 * cover - ds;
+        double ht = h - 2 * cover - ds;
+        double hook = Math.max(6 * ds, 75.0);
+        return 2 * w + 2 * ht + 2 * hook + (legs - 2) * (ht + 2 * hook);
+    }
+
+    /** Stirrups, per metre of beam. */
+    public double stirrups(double b, double h, Stirrups s) {
+        double setsPerMetre = 1000.0 / s.spacing();
+        double kgPerSet = stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0 * s.bar().massPerMetre();
+        return rates.stirrupsPerKg() * kgPerSet * setsPerMetre;
+    }
+
+    public static long units(double cost) {
+        return Math.round(cost * UNITS_PER_CURRENCY);
+    }
+}

@@ -1,0 +1,17 @@
+package barfit.design;
+
+import java.util.List;
+
+/** The answer for one beam: optimal, feasible (time limit) or infeasible with a diagnosis. */
+public record DesignOutcome(SectionProblem problem, String status, Design best, List<Design> alternatives,
+        Proof proof, List<Binding> binding, Diagnosis diagnosis) {
+
+    public DesignOutcome {
+        alternatives = List.copyOf(alternatives);
+        binding = List.copyOf(binding);
+    }
+
+    public boolean feasible() {
+        return best != null;
+    }
+}

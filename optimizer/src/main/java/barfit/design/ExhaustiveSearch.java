@@ -1,0 +1,136 @@
+package barfit.design;
+
+import barfit.catalogs.BarSize;
+import barfit.section.BarSpacing;
+import barfit.section.BeamSection;
+import barfit.section.CheckReport;
+import barfit.section.Demand;
+import barfit.section.Detailing;
+import barfit.section.SectionChecks;
+import barfit.section.SkinBars;
+import barfit.section.Stirrups;
+import barfit.section.trail.Trail;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The reference answer: every layout of the search space in plain loops, each checked by the full
+ * section model ({@link SectionChecks#run}), no bounds, no bisection, no dominance. Used by the tests
+ * as the oracle and by the benchmark as the baseline.
+ *
+ * <p>Counts run over what the space allows (2 up to the bars that fit a layer by 25.2.1). The only
+ * shortcut: stirrups are chosen per (frame, tension bars) as the cheapest option passing the shear
+ * checks, which depend on nothing else; every combined layout is then checked whole.
+ */
+public final class ExhaustiveSearch {
+    public record Result(Layout best, long units, long layoutsChecked) {
+    }
+
+    private final CostModel cost;
+
+    public ExhaustiveSearch(CostModel cost) {
+        this.cost = cost;
+    }
+
+    public Result solve(SectionProblem p) {
+        Layout best = null;
+        long bestUnits = Long.MAX_VALUE;
+        long checked = 0;
+        Demand demand = new Demand(p.mu(), p.vu());
+        BarSize smallest = p.space().barSizes().stream()
+                .min(java.util.Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
+        for (double b : p.widths()) {
+            for (double h : p.depths()) {
+                if (p.flange() != null && h <= p.flange().thickness()) {
+                    continue;
+                }
+                for (BarSize ds : p.space().stirrupSizes()) {
+                    Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(),
+                            p.detailing().exposure());
+                    if (BarSpacing.innerWidth(b, det) <= 0) {
+                        continue;
+                    }
+                    SkinBars skin = Layout.skinFor(h, smallest, det, p.materials(), p.code());
+                    for (BarSize t : p.space().barSizes()) {
+                        int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
+                        for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
+                            for (List<Integer> counts : countVectors(layers, nmax)) {
+                                Stirrups st = null;
+                                boolean stirrupsDone = false;
+                                for (BarSize c : p.space().compressionSizes()) {
+                                    int mmax = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
+                                    if (!Layout.fitsHeight(h, det, t, layers, c)) {
+                                        continue;
+                                    }
+                                    for (int m = 2; m <= mmax; m++) {
+                                        if (!stirrupsDone) {
+                                            st = cheapestStirrups(p, b, h, det, t, counts, c);
+                                            stirrupsDone = true;
+                                        }
+                                        if (st == null) {
+                                            continue;
+                                        }
+                                        Layout lay = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m, st, skin);
+                                        BeamSection s = lay.section(p.materials(), p.detailing(), p.code());
+                                        checked++;
+                                        CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
+                                        if (r.ok()) {
+                                            long u = CostModel.units(lay.cost(cost).total());
+                                            if (u < bestUnits) {
+                                                bestUnits = u;
+                                                best = lay;
+                                            }
+                                        }
+                                    }
+                                }
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return new Result(best, best == null ? -1 : bestUnits, checked);
+    }
+
+    /** All count vectors n1 >= n2 >= ... >= 2 with n1 <= nmax. */
+    static List<List<Integer>> countVectors(int layers, int nmax) {
+        List<List<Integer>> out = new ArrayList<>();
+        fill(layers, nmax, new ArrayList<>(), out);
+        return out;
+    }
+
+    private static void fill(int layers, int cap, List<Integer> cur, List<List<Integer>> out) {
+        if (cur.size() == layers) {
+            out.add(List.copyOf(cur));
+            return;
+        }
+        for (int v = 2; v <= cap; v++) {
+            cur.add(v);
+            fill(layers, v, cur, out);
+            cur.remove(cur.size() - 1);
+        }
+    }
+
+    /** The cheapest stirrup option whose shear checks pass for these tension bars (any hangers). */
+    private Stirrups cheapestStirrups(SectionProblem p, double b, double h, Detailing det, BarSize t,
+            List<Integer> counts, BarSize c) {
+        Stirrups best = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        for (int legs : p.space().stirrupLegs()) {
+            for (double s : p.space().stirrupSpacings()) {
+                Stirrups st = new Stirrups(det.stirrupBar(), legs, s);
+                Layout lay = new Layout(b, h, p.flange(), p.bending(), t, counts, c, 2, st, null);
+                BeamSection sec = lay.section(p.materials(), p.detailing(), p.code());
+                var fr = barfit.section.Flexure.analyse(sec, p.bending());
+                boolean ok = p.vu() == null ? SectionChecks.minimumStirrupsPass(sec, fr.d(), fr.tensionSteelArea())
+                        : SectionChecks.shearPasses(sec, p.vu(), fr.d(), fr.tensionSteelArea());
+                double sc = cost.stirrups(b, h, st);
+                if (ok && sc < bestCost - 1e-12) {
+                    bestCost = sc;
+                    best = st;
+                }
+            }
+        }
+        return best;
+    }
+}

@@ -1,0 +1,34 @@
+package barfit.design;
+
+import com.google.ortools.Loader;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+/** Loads OR-Tools' native library once per process, failing clearly when it cannot. */
+public final class OrTools {
+    private static volatile boolean loaded;
+
+    private OrTools() {
+    }
+
+    public static synchronized void load() {
+        if (loaded) {
+            return;
+        }
+        // The loader unpacks the native library into the temporary folder; without one it fails later
+        // and silently, at the first variable.
+        String tmp = System.getProperty("java.io.tmpdir");
+        Path dir = tmp == null ? null : Path.of(tmp);
+        if (dir == null || !Files.isDirectory(dir) || !Files.isWritable(dir)) {
+            throw new IllegalStateException("the temporary folder '" + tmp + "' is missing or not writable; "
+                    + "the solver unpacks its native library there (set TMPDIR or -Djava.io.tmpdir)");
+        }
+        try {
+            Loader.loadNativeLibraries();
+        } catch (UnsatisfiedLinkError | RuntimeException e) {
+            throw new IllegalStateException("cannot load the OR-Tools native library for this machine ("
+                    + System.getProperty("os.name") + " " + System.getProperty("os.arch") + "): " + e.getMessage());
+        }
+        loaded = true;
+    }
+}

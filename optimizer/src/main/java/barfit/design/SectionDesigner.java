@@ -1,0 +1,162 @@
+package barfit.design;
+
+import barfit.catalogs.BarSize;
+import barfit.section.BarSpacing;
+import barfit.section.BeamSection;
+import barfit.section.CheckReport;
+import barfit.section.CheckResult;
+import barfit.section.Demand;
+import barfit.section.SectionChecks;
+import barfit.section.Stirrups;
+import barfit.section.trail.Dim;
+import barfit.section.trail.Trail;
+import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Designs one section: generates candidates, lets CP-SAT choose the cheapest (and the next distinct
+ * ones), re-verifies every chosen layout with the full section model, says what binds, and diagnoses
+ * a beam that cannot pass.
+ */
+public final class SectionDesigner {
+    private final CostModel cost;
+    private final SolverOptions options;
+    private final UnitSystem units;
+
+    public SectionDesigner(CostModel cost, SolverOptions options, UnitSystem units) {
+        this.cost = cost;
+        this.options = options;
+        this.units = units;
+    }
+
+    public DesignOutcome design(SectionProblem p, int alternatives) {
+        CandidateGenerator.Output gen = new CandidateGenerator(p, cost).generate(1 + alternatives);
+        List<Candidate> cands = gen.candidates();
+        if (cands.isEmpty()) {
+            Proof proof = new Proof(Selection.Status.INFEASIBLE, 0, 0, 0, gen.stats(), 0, options.workers(), options.seed());
+            return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), Diagnoser.diagnose(p, cost, units));
+        }
+        Selection sel = new Selection();
+        List<Integer> all = new ArrayList<>();
+        for (int i = 0; i < cands.size(); i++) {
+            all.add(sel.add(cands.get(i).units(), "c" + i));
+        }
+        sel.exactlyOne(all);
+        Selection.Result first = sel.solve(options);
+        int chosen = indexOf(first.chosen());
+        Design best = verified(p, cands.get(chosen));
+        List<Design> alts = new ArrayList<>();
+        sel.exclude(chosen);
+        for (int k = 0; k < alternatives && alts.size() < cands.size() - 1; k++) {
+            Selection.Result r = sel.solve(options);
+            if (r.status() != Selection.Status.OPTIMAL && r.status() != Selection.Status.FEASIBLE) {
+                break;
+            }
+            int i = indexOf(r.chosen());
+            alts.add(verified(p, cands.get(i)));
+            sel.exclude(i);
+        }
+        String status = first.status() == Selection.Status.OPTIMAL ? "optimal" : "feasible";
+        Proof proof = new Proof(first.status(), first.objective(), first.bound(), cands.size(), gen.stats(),
+                first.seconds(), options.workers(), options.seed());
+        return new DesignOutcome(p, status, best, alts, proof, binding(p, best.layout()), null);
+    }
+
+    private static int indexOf(boolean[] chosen) {
+        for (int i = 0; i < chosen.length; i++) {
+            if (chosen[i]) {
+                return i;
+            }
+        }
+        throw new IllegalStateException("the solver chose no candidate");
+    }
+
+    /** The full section model on a chosen layout; a failure here is a bug, never printed as a design. */
+    Design verified(SectionProblem p, Candidate c) {
+        CheckReport report = check(p, c.layout(), Trail.recording());
+        if (!report.ok()) {
+            StringBuilder sb = new StringBuilder();
+            for (CheckResult r : report.failures()) {
+                sb.append(sb.length() == 0 ? "" : ", ").append(r.id());
+            }
+            throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
+                    + " fail on the chosen layout); this is a bug in the search");
+        }
+        return new Design(c.layout(), c.cost(), c.cost().times(p.costLength()), report);
+    }
+
+    static CheckReport check(SectionProblem p, Layout l, Trail trail) {
+        BeamSection s = l.section(p.materials(), p.detailing(), p.code());
+        return SectionChecks.run(s, new Demand(p.mu(), p.vu()), p.span(), trail);
+    }
+
+    private static List<String> failingIds(SectionProblem p, Layout l) {
+        List<String> ids = new ArrayList<>();
+        for (CheckResult r : check(p, l, Trail.off()).failures()) {
+            ids.add(r.id());
+        }
+        return ids;
+    }
+
+    /** What fails when the design is made one step leaner in each direction. */
+    List<Binding> binding(SectionProblem p, Layout l) {
+        List<Binding> out = new ArrayList<>();
+        // one tension bar fewer
+        int n = l.tensionBarCount();
+        int layers = l.tensionCounts().size();
+        BarSize t = l.tensionBar();
+        var det = l.detailing(p.detailing());
+        int nmax = BarSpacing.maxBars(l.width(), det, t, p.materials(), p.code());
+        int[] fewer = CandidateGenerator.greedySplit(n - 1, layers, nmax, 2);
+        if (fewer == null && layers > 1) {
+            fewer = CandidateGenerator.greedySplit(n - 1, layers - 1, nmax, 2);
+        }
+        if (fewer != null) {
+            List<Integer> counts = new ArrayList<>();
+            for (int c : fewer) {
+                counts.add(c);
+            }
+            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), t, counts, l.compressionBar(),
+                    l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), "one " + t.label() + " fewer");
+        }
+        // one depth step shallower, same bars
+        List<Double> depths = p.space().depths();
+        int hi = depths.indexOf(l.height());
+        if (hi > 0) {
+            double h2 = depths.get(hi - 1);
+            Layout lean = new Layout(l.width(), h2, l.flange(), l.bending(), t, l.tensionCounts(), l.compressionBar(),
+                    l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), "h = " + units.compact(h2, Dim.LENGTH) + " " + units.unit(Dim.LENGTH));
+        }
+        if (p.maxDepth() != null && l.height() >= p.maxDepth() - 1e-9) {
+            out.add(new Binding("headroom", "h = max_depth"));
+        }
+        // next narrower width, same bars
+        List<Double> widths = p.widths();
+        int wi = widths.indexOf(l.width());
+        if (wi > 0) {
+            Layout lean = new Layout(widths.get(wi - 1), l.height(), l.flange(), l.bending(), t, l.tensionCounts(),
+                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), "b = " + units.compact(widths.get(wi - 1), Dim.LENGTH) + " " + units.unit(Dim.LENGTH));
+        }
+        // stirrups one spacing step wider
+        List<Double> sp = p.space().stirrupSpacings();
+        int si = sp.indexOf(l.stirrups().spacing());
+        if (si >= 0 && si < sp.size() - 1) {
+            Stirrups wider = new Stirrups(l.stirrups().bar(), l.stirrups().legs(), sp.get(si + 1));
+            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), t, l.tensionCounts(),
+                    l.compressionBar(), l.compressionCount(), wider, l.skin());
+            add(out, failingIds(p, lean), "stirrups @ " + units.compact(sp.get(si + 1), Dim.LENGTH) + " "
+                    + units.unit(Dim.LENGTH));
+        }
+        return out;
+    }
+
+    private static void add(List<Binding> out, List<String> ids, String when) {
+        for (String id : ids) {
+            out.add(new Binding(id, when));
+        }
+    }
+}

@@ -1,0 +1,96 @@
+package barfit.design;
+
+import com.google.ortools.sat.CpModel;
+import com.google.ortools.sat.CpSolver;
+import com.google.ortools.sat.CpSolverStatus;
+import com.google.ortools.sat.LinearExpr;
+import com.google.ortools.sat.Literal;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The CP-SAT choice among candidates: one boolean per candidate, exactly one chosen per group, extra
+ * linking constraints added by the caller (shared sections, bar-size limits...), minimum total cost in
+ * integer cost units. Returns which candidates are chosen and the proof (status, objective, bound).
+ */
+public final class Selection {
+    public enum Status { OPTIMAL, FEASIBLE, INFEASIBLE, UNKNOWN }
+
+    public record Result(Status status, boolean[] chosen, long objective, long bound, double seconds, int booleans) {
+        public double gap() {
+            if (objective == 0) {
+                return 0;
+            }
+            return Math.max(0, (double) (objective - bound) / Math.abs(objective));
+        }
+    }
+
+    private final CpModel model = new CpModel();
+    private final List<Literal> vars = new ArrayList<>();
+    private final List<Long> costs = new ArrayList<>();
+    private boolean objectiveSet;
+
+    public Selection() {
+        OrTools.load();
+    }
+
+    public CpModel model() {
+        return model;
+    }
+
+    /** Adds a candidate with its cost (cost units); returns its index. */
+    public int add(long cost, String name) {
+        vars.add(model.newBoolVar(name));
+        costs.add(cost);
+        return vars.size() - 1;
+    }
+
+    public Literal var(int i) {
+        return vars.get(i);
+    }
+
+    public int size() {
+        return vars.size();
+    }
+
+    public void exactlyOne(List<Integer> group) {
+        model.addExactlyOne(group.stream().map(vars::get).toList());
+    }
+
+    /** Forbids candidate i (for the next-best alternatives). */
+    public void exclude(int i) {
+        model.addEquality(vars.get(i), 0);
+    }
+
+    public Result solve(SolverOptions o) {
+        Literal[] v = vars.toArray(new Literal[0]);
+        long[] c = costs.stream().mapToLong(Long::longValue).toArray();
+        if (!objectiveSet) {
+            model.minimize(LinearExpr.weightedSum(v, c));
+            objectiveSet = true;
+        }
+        CpSolver solver = new CpSolver();
+        solver.getParameters().setNumWorkers(Math.max(1, o.workers())).setRandomSeed(o.seed())
+                .setMaxTimeInSeconds(o.timeLimitSeconds()).setLogSearchProgress(false);
+        long t0 = System.nanoTime();
+        CpSolverStatus st = solver.solve(model);
+        double secs = (System.nanoTime() - t0) / 1e9;
+        Status status = switch (st) {
+            case OPTIMAL -> Status.OPTIMAL;
+            case FEASIBLE -> Status.FEASIBLE;
+            case INFEASIBLE -> Status.INFEASIBLE;
+            default -> Status.UNKNOWN;
+        };
+        boolean[] chosen = new boolean[v.length];
+        long obj = 0;
+        long bound = 0;
+        if (status == Status.OPTIMAL || status == Status.FEASIBLE) {
+            for (int i = 0; i < v.length; i++) {
+                chosen[i] = solver.booleanValue(v[i]);
+            }
+            obj = Math.round(solver.objectiveValue());
+            bound = Math.round(solver.bestObjectiveBound());
+        }
+        return new Result(status, chosen, obj, bound, secs, v.length);
+    }
+}

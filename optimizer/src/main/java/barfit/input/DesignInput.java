@@ -1,0 +1,13 @@
+package barfit.input;
+
+import barfit.design.CostRates;
+import barfit.design.SearchSpace;
+import java.util.List;
+
+/** A whole {@code design} file: settings, the search space, the cost rates and the beams. */
+public record DesignInput(Settings settings, SearchSpace space, CostRates rates, String currency,
+        List<DesignBeam> beams) {
+    public DesignInput {
+        beams = List.copyOf(beams);
+    }
+}

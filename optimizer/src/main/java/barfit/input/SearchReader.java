@@ -1,0 +1,217 @@
+package barfit.input;
+
+import barfit.catalogs.BarCatalog;
+import barfit.catalogs.BarSize;
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.YFields;
+import barfit.catalogs.yaml.YList;
+import barfit.catalogs.yaml.YNode;
+import barfit.catalogs.yaml.YScalar;
+import barfit.design.CostRates;
+import barfit.design.SearchSpace;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.TreeSet;
+
+/** Reads {@code search:} and {@code costs:}, with defaults for each unit system and catalog. */
+public final class SearchReader {
+    private SearchReader() {
+    }
+
+    /** Default search space (stated in the README). */
+    static SearchSpace defaults(Settings s) {
+        UnitSystem u = s.units();
+        boolean us = u == UnitSystem.US;
+        List<Double> widths = us ? inches(10, 12, 14, 16) : List.of(250.0, 300.0, 350.0, 400.0);
+        List<Double> depths = us ? range(16 * 25.4, 32 * 25.4, 25.4) : range(400, 800, 25);
+        List<BarSize> bars = defaultBars(s.catalog());
+        List<Integer> legs = List.of(2, 4);
+        List<Double> spacings = us ? range(3 * 25.4, 24 * 25.4, 25.4) : range(75, 600, 25);
+        return new SearchSpace(widths, depths, bars, bars, 2, List.of(s.stirrupBar()), legs, spacings);
+    }
+
+    private static List<Double> inches(double... v) {
+        List<Double> out = new ArrayList<>();
+        for (double x : v) {
+            out.add(x * 25.4);
+        }
+        return out;
+    }
+
+    static List<Double> range(double min, double max, double step) {
+        List<Double> out = new ArrayList<>();
+        int n = (int) Math.floor((max - min) / step + 1e-9);
+        for (int i = 0; i <= n; i++) {
+            out.add(Math.round((min + i * step) * 1e6) / 1e6);
+        }
+        return out;
+    }
+
+    private static List<BarSize> defaultBars(BarCatalog c) {
+        List<String> names = switch (c.id()) {
+            case "astm-a615m" -> List.of("16", "19", "22", "25", "29", "32", "36");
+            case "astm-a615" -> List.of("5", "6", "7", "8", "9", "10", "11");
+            case "metric-mm" -> List.of("12", "16", "20", "25", "28", "32");
+            default -> List.of();
+        };
+        if (!names.isEmpty()) {
+            return names.stream().map(n -> c.find(n).orElseThrow()).toList();
+        }
+        return c.bars().stream().filter(b -> b.diameter() >= 12 && b.diameter() <= 40).toList();
+    }
+
+    public static SearchSpace read(YFields doc, Settings s) {
+        SearchSpace d = defaults(s);
+        if (!doc.has("search")) {
+            return d;
+        }
+        UnitSystem u = s.units();
+        String len = u.unit(Dim.LENGTH);
+        YFields f = doc.map("search", "the search space").allowOnly("widths", "depth", "bar_sizes",
+                "compression_sizes", "max_layers", "stirrups");
+        List<Double> widths = d.widths();
+        if (f.has("widths")) {
+            widths = sortedLengths(f, "widths", "web widths, " + len, u);
+        }
+        List<Double> depths = d.depths();
+        if (f.has("depth")) {
+            YFields r = f.map("depth", "the depth range {min, max, step}").allowOnly("min", "max", "step");
+            depths = lengthRange(r, u, "total heights, " + len, 2000);
+        }
+        List<BarSize> bars = f.has("bar_sizes") ? barList(f, "bar_sizes", s.catalog()) : d.barSizes();
+        List<BarSize> comp = f.has("compression_sizes") ? barList(f, "compression_sizes", s.catalog())
+                : (f.has("bar_sizes") ? bars : d.compressionSizes());
+        int layers = d.maxLayers();
+        if (f.has("max_layers")) {
+            layers = f.positiveInt("max_layers", "layers of tension bars, 1 to 4");
+            if (layers > 4) {
+                throw f.error("max_layers", "expected 1 to 4 layers of tension bars, got " + layers);
+            }
+        }
+        List<BarSize> stirrupSizes = d.stirrupSizes();
+        List<Integer> legs = d.stirrupLegs();
+        List<Double> spacings = d.stirrupSpacings();
+        if (f.has("stirrups")) {
+            YFields st = f.map("stirrups", "stirrup options {sizes, legs, spacing}").allowOnly("sizes", "legs", "spacing");
+            if (st.has("sizes")) {
+                stirrupSizes = barList(st, "sizes", s.catalog());
+            }
+            if (st.has("legs")) {
+                YList l = st.list("legs", "numbers of legs");
+                TreeSet<Integer> set = new TreeSet<>();
+                for (int i = 0; i < l.size(); i++) {
+                    double v = YFields.numberOf(l.get(i), st.child("legs") + "[" + (i + 1) + "]", "a whole number of legs >= 2");
+                    if (v != Math.rint(v) || v < 2 || v > 12) {
+                        throw new InputError(l.get(i).location(), st.child("legs") + "[" + (i + 1)
+                                + "]: expected a whole number of legs from 2 to 12, got " + ((YScalar) l.get(i)).text());
+                    }
+                    set.add((int) v);
+                }
+                if (set.isEmpty()) {
+                    throw st.error("legs", "expected at least one number of legs");
+                }
+                legs = List.copyOf(set);
+            }
+            if (st.has("spacing")) {
+                YFields r = st.map("spacing", "the spacing range {min, max, step}").allowOnly("min", "max", "step");
+                spacings = lengthRange(r, u, "stirrup spacings, " + len, 200);
+            }
+        }
+        return new SearchSpace(widths, depths, bars, comp, layers, stirrupSizes, legs, spacings);
+    }
+
+    private static List<Double> sortedLengths(YFields f, String key, String what, UnitSystem u) {
+        YList l = f.list(key, what);
+        TreeSet<Double> set = new TreeSet<>();
+        for (int i = 0; i < l.size(); i++) {
+            YNode n = l.get(i);
+            String path = f.child(key) + "[" + (i + 1) + "]";
+            double v = YFields.numberOf(n, path, "a positive number (" + what + ")");
+            YFields.requirePositive(n, path, v, what);
+            set.add(u.toSI(v, Dim.LENGTH));
+        }
+        if (set.isEmpty()) {
+            throw f.error(key, "expected at least one value (" + what + ")");
+        }
+        return List.copyOf(set);
+    }
+
+    private static List<Double> lengthRange(YFields r, UnitSystem u, String what, int maxCount) {
+        double min = r.positive("min", "smallest of the " + what);
+        double max = r.positive("max", "largest of the " + what);
+        double step = r.positive("step", "step between " + what);
+        if (max < min) {
+            throw r.error("max", "expected max >= min (" + SettingsReader.fmt(min) + "), got " + SettingsReader.fmt(max));
+        }
+        if ((max - min) / step + 1 > maxCount) {
+            throw r.error("step", "the range gives more than " + maxCount + " values; expected a larger step");
+        }
+        return range(u.toSI(min, Dim.LENGTH), u.toSI(max, Dim.LENGTH), u.toSI(step, Dim.LENGTH));
+    }
+
+    private static List<BarSize> barList(YFields f, String key, BarCatalog catalog) {
+        YList l = f.list(key, "bar sizes from catalog " + catalog.id());
+        List<BarSize> out = new ArrayList<>();
+        for (int i = 0; i < l.size(); i++) {
+            String path = f.child(key) + "[" + (i + 1) + "]";
+            String name = YFields.textOf(l.get(i), path, "a bar size from catalog " + catalog.id());
+            BarSize b = SettingsReader.bar(catalog, name, l.get(i).location(), path);
+            if (!out.contains(b)) {
+                out.add(b);
+            }
+        }
+        if (out.isEmpty()) {
+            throw f.error(key, "expected at least one bar size");
+        }
+        out.sort(java.util.Comparator.comparingDouble(BarSize::diameter));
+        return out;
+    }
+
+    /** Rate conversions from US units to the SI rates the cost model holds. */
+    private static final double YD3_PER_M3 = 1.0 / 0.764554857984;
+    private static final double LB_PER_KG = 1.0 / 0.45359237;
+    private static final double FT2_PER_M2 = 1.0 / (0.3048 * 0.3048);
+
+    public record Costs(CostRates rates, String currency) {
+    }
+
+    public static Costs costs(YFields doc, Settings s) {
+        boolean us = s.units() == UnitSystem.US;
+        CostRates d = CostRates.DEFAULTS;
+        if (!doc.has("costs")) {
+            return new Costs(d, "");
+        }
+        String[] keys = us
+                ? new String[] {"concrete_per_yd3", "main_bars_per_lb", "stirrups_per_lb", "formwork_per_ft2",
+                    "depth_premium_per_ft", "lap_factor", "currency", "concrete_per_yd3_by_fc"}
+                : new String[] {"concrete_per_m3", "main_bars_per_kg", "stirrups_per_kg", "formwork_per_m2",
+                    "depth_premium_per_m", "lap_factor", "currency", "concrete_per_m3_by_fc"};
+        YFields f = doc.map("costs", "the cost rates").allowOnly(keys);
+        double concrete = rate(f, keys[0], "concrete, per " + (us ? "yd³" : "m³")).map(v -> us ? v * YD3_PER_M3 : v)
+                .orElse(d.concretePerM3());
+        double bars = rate(f, keys[1], "main bars, per " + (us ? "lb" : "kg")).map(v -> us ? v * LB_PER_KG : v)
+                .orElse(d.mainBarsPerKg());
+        double stirrups = rate(f, keys[2], "stirrups, per " + (us ? "lb" : "kg")).map(v -> us ? v * LB_PER_KG : v)
+                .orElse(d.stirrupsPerKg());
+        double formwork = rate(f, keys[3], "formwork, per " + (us ? "ft²" : "m²")).map(v -> us ? v * FT2_PER_M2 : v)
+                .orElse(d.formworkPerM2());
+        double premium = rate(f, keys[4], "depth premium, per " + (us ? "ft of depth per ft of beam" : "m of depth per m of beam"))
+                .map(v -> us ? v * FT2_PER_M2 : v).orElse(d.depthPremiumPerM());
+        double lap = f.optNumber("lap_factor", "the lap and waste factor, 1.0 or more").orElse(d.lapFactor());
+        if (lap < 1.0 || lap > 2.0) {
+            throw f.error("lap_factor", "expected a lap and waste factor from 1.0 to 2.0, got " + SettingsReader.fmt(lap));
+        }
+        String currency = f.optText("currency", "a currency label such as EUR").orElse("");
+        return new Costs(new CostRates(concrete, bars, stirrups, formwork, premium, lap), currency);
+    }
+
+    private static Optional<Double> rate(YFields f, String key, String what) {
+        if (!f.has(key)) {
+            return Optional.empty();
+        }
+        return Optional.of(f.nonNegative(key, "a rate >= 0 (" + what + ")"));
+    }
+}

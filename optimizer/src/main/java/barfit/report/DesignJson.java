@@ -1,0 +1,163 @@
+package barfit.report;
+
+import barfit.design.Binding;
+import barfit.design.CostBreakdown;
+import barfit.design.Design;
+import barfit.design.DesignOutcome;
+import barfit.design.Layout;
+import barfit.design.Proof;
+import barfit.input.Settings;
+import barfit.section.CheckResult;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+
+/** The JSON report of {@code barfit design}. */
+public final class DesignJson {
+    private DesignJson() {
+    }
+
+    public static String render(Settings settings, List<DesignOutcome> outcomes, String currency, boolean trail) {
+        UnitSystem u = settings.units();
+        ObjectNode root = Json.object();
+        root.put("units", u.name());
+        root.set("unit_labels", Json.units(u));
+        root.put("code", settings.code().edition());
+        root.put("caution", Caution.SHORT);
+        root.put("currency", currency);
+        root.put("cost_basis", "per beam when a span is given, otherwise " + Money.perLengthLabel(u));
+        ArrayNode arr = root.putArray("beams");
+        for (DesignOutcome o : outcomes) {
+            arr.add(beam(o, u, trail));
+        }
+        return Json.write(root);
+    }
+
+    public static ObjectNode beam(DesignOutcome o, UnitSystem u, boolean trail) {
+        var p = o.problem();
+        ObjectNode b = Json.object();
+        b.put("id", p.id());
+        b.put("status", o.status());
+        Json.put(b, "Mu", p.mu(), Dim.MOMENT, u);
+        if (p.vu() != null) {
+            Json.put(b, "Vu", p.vu(), Dim.FORCE, u);
+        }
+        if (p.maxDepth() != null) {
+            Json.put(b, "max_depth", p.maxDepth(), Dim.LENGTH, u);
+        }
+        if (o.feasible()) {
+            design(b, o.best(), p.span() != null, u, trail);
+            ArrayNode bind = b.putArray("binding");
+            for (Binding x : o.binding()) {
+                ObjectNode bo = bind.addObject();
+                bo.put("check", x.limit());
+                bo.put("when", x.when());
+            }
+            ArrayNode alts = b.putArray("alternatives");
+            for (Design d : o.alternatives()) {
+                ObjectNode a = alts.addObject();
+                design(a, d, p.span() != null, u, false);
+            }
+            b.set("proof", proof(o.proof(), u));
+            b.putNull("diagnosis");
+        } else {
+            var d = o.diagnosis();
+            ObjectNode dn = b.putObject("diagnosis");
+            dn.put("limit", d.limit());
+            dn.put("summary", d.summary());
+            if (d.strongest() != null) {
+                ObjectNode s = dn.putObject("strongest");
+                layout(s, d.strongest(), u);
+                Json.put(s, "phi_Mn", d.strongestPhiMn(), Dim.MOMENT, u);
+            }
+            ArrayNode fixes = dn.putArray("fixes");
+            d.fixes().forEach(fixes::add);
+            b.set("proof", proof(o.proof(), u));
+        }
+        return b;
+    }
+
+    static void layout(ObjectNode o, Layout l, UnitSystem u) {
+        Json.put(o, "width", l.width(), Dim.LENGTH, u);
+        Json.put(o, "height", l.height(), Dim.LENGTH, u);
+        ObjectNode t = o.putObject("tension");
+        t.put("face", l.bending().tensionFace().word());
+        ArrayNode tl = t.putArray("layers");
+        for (int c : l.tensionCounts()) {
+            ObjectNode x = tl.addObject();
+            x.put("bar", l.tensionBar().designation());
+            x.put("count", c);
+        }
+        ObjectNode c = o.putObject("compression");
+        c.put("face", l.bending().compressionFace().word());
+        ObjectNode cl = c.putArray("layers").addObject();
+        cl.put("bar", l.compressionBar().designation());
+        cl.put("count", l.compressionCount());
+        ObjectNode s = o.putObject("stirrups");
+        s.put("bar", l.stirrups().bar().designation());
+        s.put("legs", l.stirrups().legs());
+        Json.put(s, "spacing", l.stirrups().spacing(), Dim.LENGTH, u);
+        if (l.skin() != null) {
+            ObjectNode k = o.putObject("skin");
+            k.put("bar", l.skin().bar().designation());
+            Json.put(k, "spacing", l.skin().spacing(), Dim.LENGTH, u);
+        }
+    }
+
+    static void design(ObjectNode o, Design d, boolean perBeam, UnitSystem u, boolean trail) {
+        layout(o, d.layout(), u);
+        var r = d.report();
+        var f = r.flexure();
+        Json.put(o, "phi_Mn", f.phiMn(), Dim.MOMENT, u);
+        Json.putRatio(o, "phi", f.phi());
+        o.put("eps_t", CheckJson.round(f.epsT()));
+        o.put("strain_class", f.strainClass());
+        if (r.shear() != null) {
+            Json.put(o, "phi_Vn", r.shear().phiVn(), Dim.FORCE, u);
+        }
+        o.set("cost", cost(perBeam ? d.cost() : Money.scaled(d.costPerMetre(), u)));
+        o.set("cost_per_length", cost(Money.scaled(d.costPerMetre(), u)));
+        ArrayNode checks = o.putArray("checks");
+        for (CheckResult c : r.checks()) {
+            checks.add(CheckJson.check(c, u));
+        }
+        if (trail) {
+            o.set("trail", Json.trail(r.trail(), u));
+        }
+    }
+
+    static ObjectNode cost(CostBreakdown c) {
+        ObjectNode o = Json.object();
+        o.put("total", round2(c.total()));
+        o.put("concrete", round2(c.concrete()));
+        o.put("main_bars", round2(c.mainBars()));
+        o.put("stirrups", round2(c.stirrups()));
+        o.put("formwork", round2(c.formwork()));
+        o.put("depth_premium", round2(c.depthPremium()));
+        return o;
+    }
+
+    static double round2(double v) {
+        return Math.round(v * 10_000.0) / 10_000.0;
+    }
+
+    static ObjectNode proof(Proof p, UnitSystem u) {
+        ObjectNode o = Json.object();
+        o.put("solver", "CP-SAT");
+        o.put("status", p.status().name().toLowerCase(java.util.Locale.ROOT));
+        o.put("basis", Money.perLengthLabel(u));
+        o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
+        o.put("bound", round2(Money.perLength(p.bound() / 10_000.0, u)));
+        o.put("gap", p.gap());
+        o.put("candidates", p.candidates());
+        o.put("frames", p.stats().frames());
+        o.put("frames_evaluated", p.stats().framesEvaluated());
+        o.put("frames_skipped_by_bound", p.stats().framesPrunedByBound());
+        o.put("flexure_solves", p.stats().flexureSolves());
+        o.put("workers", p.workers());
+        o.put("seed", p.seed());
+        return o;
+    }
+}

@@ -1,0 +1,187 @@
+package barfit.report;
+
+import barfit.design.Binding;
+import barfit.design.Design;
+import barfit.design.DesignOutcome;
+import barfit.design.Diagnosis;
+import barfit.design.Layout;
+import barfit.design.Proof;
+import barfit.input.Settings;
+import barfit.section.CheckReport;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/** The terminal report of {@code barfit design}. */
+public final class DesignText {
+    private DesignText() {
+    }
+
+    public static String render(Settings settings, List<DesignOutcome> outcomes, String currency, boolean trail) {
+        UnitSystem u = settings.units();
+        StringBuilder out = new StringBuilder();
+        out.append("barfit design — ").append(settings.file()).append(" — ").append(settings.code().edition()).append('\n');
+        out.append(Caution.text()).append('\n');
+        out.append("Costs use the rates in the file (or barfit's invented defaults when none are given); ")
+                .append("compare them with your own before relying on a price.\n\n");
+        out.append(CheckText.materials(settings)).append('\n');
+        int infeasible = 0;
+        for (DesignOutcome o : outcomes) {
+            out.append('\n');
+            beam(o, u, currency, trail, out);
+            if (!o.feasible()) {
+                infeasible++;
+            }
+        }
+        out.append('\n').append(outcomes.size()).append(outcomes.size() == 1 ? " beam designed: " : " beams designed: ")
+                .append(outcomes.size() - infeasible).append(" with a passing layout, ").append(infeasible)
+                .append(" with none in the search space.\n");
+        return out.toString();
+    }
+
+    /** Whether the compression layer is just the two lightest bars the search allows. */
+    static boolean hangersOnly(Layout l, barfit.design.SearchSpace space) {
+        var lightest = space.compressionSizes().stream()
+                .min(java.util.Comparator.comparingDouble(barfit.catalogs.BarSize::massPerMetre)).orElseThrow();
+        return l.compressionCount() == 2 && l.compressionBar().equals(lightest);
+    }
+
+    static String len(double v, UnitSystem u) {
+        return u.compact(v, Dim.LENGTH);
+    }
+
+    public static String describe(Layout l, UnitSystem u) {
+        return len(l.width(), u) + " × " + len(l.height(), u) + "  " + l.bending().tensionFace().word() + " "
+                + bars(l) + "  " + l.bending().compressionFace().word() + " " + l.compressionCount() + " "
+                + l.compressionBar().label() + "  stirrups " + Words.stirrups(l.stirrups(), u);
+    }
+
+    public static String bars(Layout l) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < l.tensionCounts().size(); i++) {
+            sb.append(i == 0 ? "" : " + ").append(l.tensionCounts().get(i)).append(' ').append(l.tensionBar().label());
+        }
+        return sb.toString();
+    }
+
+    static void beam(DesignOutcome o, UnitSystem u, String currency, boolean trail, StringBuilder out) {
+        var p = o.problem();
+        StringBuilder head = new StringBuilder("Beam ").append(p.id()).append("   Mu = ")
+                .append(u.withUnit(Math.abs(p.mu()), Dim.MOMENT)).append(' ').append(p.bending().word());
+        if (p.vu() != null) {
+            head.append("   Vu = ").append(u.withUnit(p.vu(), Dim.FORCE));
+        }
+        if (p.maxDepth() != null) {
+            head.append("   max depth ").append(u.withUnit(p.maxDepth(), Dim.LENGTH));
+        }
+        if (p.fixedWidth() != null) {
+            head.append("   width ").append(u.withUnit(p.fixedWidth(), Dim.LENGTH));
+        }
+        head.append("   ").append(o.status().toUpperCase(Locale.ROOT));
+        out.append(head).append('\n');
+        if (!o.feasible()) {
+            diagnosis(o.diagnosis(), u, out);
+            return;
+        }
+        Design d = o.best();
+        Layout l = d.layout();
+        CheckReport r = d.report();
+        TextTable t = new TextTable(false, false);
+        t.row("section", Words.shape(l.shape(), u));
+        t.row(l.bending().tensionFace().word(), bars(l) + "  (tension, " + l.tensionCounts().size()
+                + (l.tensionCounts().size() == 1 ? " layer)" : " layers)"));
+        t.row(l.bending().compressionFace().word(), l.compressionCount() + " " + l.compressionBar().label()
+                + (hangersOnly(l, p.space()) ? "  (hangers, counted in strength)" : "  (compression steel beyond the minimum hangers)"));
+        t.row("stirrups", Words.stirrups(l.stirrups(), u) + (p.vu() == null ? "  (minimum: no Vu given)" : ""));
+        if (l.skin() != null) {
+            t.row("skin bars", l.skin().bar().label() + " @ " + u.withUnit(l.skin().spacing(), Dim.LENGTH)
+                    + " on both side faces (9.7.2.3)");
+        }
+        var f = r.flexure();
+        t.row("strength", "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + "   Mu/φMn = "
+                + Words.ratio(Math.abs(p.mu()) / f.phiMn()) + "   εt = " + Words.fixed(f.epsT(), 5) + "   φ = "
+                + Words.fixed(f.phi(), 3) + " (" + f.strainClass() + ")");
+        if (r.shear() != null) {
+            t.row("shear", "φVn = " + u.withUnit(r.shear().phiVn(), Dim.FORCE) + "   Vu/φVn = "
+                    + Words.ratio(r.shear().vu() / r.shear().phiVn()));
+        }
+        t.row("binding", binding(o.binding()));
+        String cur = currency.isEmpty() ? "" : " (" + currency + ")";
+        t.row("cost " + Money.perLengthLabel(u) + cur, Money.breakdown(Money.scaled(d.costPerMetre(), u)));
+        if (p.span() != null) {
+            t.row("cost of the beam" + cur, Money.breakdown(d.cost()) + "  over " + u.compact(p.span().length(), Dim.SPAN)
+                    + " " + u.unit(Dim.SPAN));
+        }
+        t.row("proof", proof(o.proof(), u));
+        t.write("  ", out);
+        if (!o.alternatives().isEmpty()) {
+            out.append("  alternatives (next cheapest distinct section or bar size):\n");
+            TextTable a = new TextTable(false, false, true, true);
+            double bestCost = d.cost().total();
+            int k = 1;
+            for (Design alt : o.alternatives()) {
+                double c = alt.cost().total();
+                a.row("#" + k++, describe(alt.layout(), u),
+                        Money.amount(p.span() != null ? c : Money.perLength(alt.costPerMetre().total(), u)),
+                        String.format(Locale.ROOT, "+%.1f %%", 100 * (c - bestCost) / bestCost));
+            }
+            a.write("    ", out);
+        }
+        if (trail) {
+            out.append("\n  Checks of the chosen layout (section model)\n");
+            TextTable ct = new TextTable(false, false, true, false, true, true, false);
+            for (var c : r.checks()) {
+                ct.row(c.title(), c.clause(), Words.value(c.demand(), u), c.sense().equals("<=") ? "≤" : "≥",
+                        Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
+            }
+            ct.write("    ", out);
+            out.append("\n  Calculation trail\n");
+            TrailText.write(r.trail(), u, "    ", out);
+        }
+    }
+
+    /** "one No. 29 fewer → flexure; h = 475 mm → flexure, shear_strength; ..." */
+    static String binding(List<Binding> bs) {
+        if (bs.isEmpty()) {
+            return "nothing found by the one-step tests (fewer bars, shallower, narrower, wider stirrups)";
+        }
+        Map<String, List<String>> byWhen = new LinkedHashMap<>();
+        for (Binding b : bs) {
+            byWhen.computeIfAbsent(b.when(), k -> new java.util.ArrayList<>()).add(b.limit());
+        }
+        StringBuilder sb = new StringBuilder();
+        for (var e : byWhen.entrySet()) {
+            sb.append(sb.length() == 0 ? "" : "; ").append(e.getKey()).append(" → ").append(String.join(", ", e.getValue()));
+        }
+        return sb.toString();
+    }
+
+    static String proof(Proof p, UnitSystem u) {
+        var s = p.stats();
+        String bound = String.format(Locale.ROOT, "%.4f", Money.perLength(p.bound() / 10_000.0, u));
+        String obj = String.format(Locale.ROOT, "%.4f", Money.perLength(p.objective() / 10_000.0, u));
+        return "CP-SAT " + p.status().name().toLowerCase(Locale.ROOT) + " over " + p.candidates()
+                + (p.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + ", bound " + bound + " "
+                + Money.perLengthLabel(u) + ", gap "
+                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %); " + s.framesEvaluated() + " of " + s.frames()
+                + " frames evaluated, " + s.framesPrunedByBound() + " skipped by the cost bound; " + p.workers()
+                + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
+    }
+
+    static void diagnosis(Diagnosis d, UnitSystem u, StringBuilder out) {
+        out.append("  no layout in the search space passes.\n");
+        out.append("  binding limit: ").append(d.limit()).append(" — ").append(d.summary()).append('\n');
+        if (d.strongest() != null) {
+            out.append("  strongest ductile layout: ").append(describe(d.strongest(), u)).append("  φMn = ")
+                    .append(u.withUnit(d.strongestPhiMn(), Dim.MOMENT)).append('\n');
+        }
+        if (d.fixes().isEmpty()) {
+            out.append("  no single relaxed limit (depth, width, one more layer) gives a passing layout\n");
+        } else {
+            out.append("  what would work (one limit at a time): ").append(String.join("; ", d.fixes())).append('\n');
+        }
+    }
+}
