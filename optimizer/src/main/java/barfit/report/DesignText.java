@@ -59,6 +59,13 @@ public final class DesignText {
                 + l.compressionBar().label() + "  stirrups " + Words.stirrups(l.stirrups(), u);
     }
 
+    /** Size and longitudinal bars only. */
+    public static String describeBars(Layout l, UnitSystem u) {
+        return len(l.width(), u) + " × " + len(l.height(), u) + "  " + l.bending().tensionFace().word() + " "
+                + bars(l) + "  " + l.bending().compressionFace().word() + " " + l.compressionCount() + " "
+                + l.compressionBar().label();
+    }
+
     public static String bars(Layout l) {
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < l.tensionCounts().size(); i++) {
@@ -175,7 +182,7 @@ public final class DesignText {
         out.append("  no layout in the search space passes.\n");
         out.append("  binding limit: ").append(d.limit()).append(" — ").append(d.summary()).append('\n');
         if (d.strongest() != null) {
-            out.append("  strongest ductile layout: ").append(describe(d.strongest(), u)).append("  φMn = ")
+            out.append("  strongest ductile layout: ").append(describeBars(d.strongest(), u)).append("  φMn = ")
                     .append(u.withUnit(d.strongestPhiMn(), Dim.MOMENT)).append('\n');
         }
         if (d.fixes().isEmpty()) {
