@@ -23,7 +23,12 @@ import java.util.List;
  * checks, which depend on nothing else; every combined layout is then checked whole.
  */
 public final class ExhaustiveSearch {
-    public record Result(Layout best, long units, long layoutsChecked) {
+    /** The cheapest layout, its cost units, and the cheapest cost of every distinct (size, bar size) key. */
+    public record Result(Layout best, long units, long layoutsChecked, java.util.Map<String, Long> bestPerKey) {
+        /** The n cheapest distinct-key costs, cheapest first. */
+        public List<Long> cheapestKeys(int n) {
+            return bestPerKey.values().stream().sorted().limit(n).toList();
+        }
     }
 
     private final CostModel cost;
@@ -36,6 +41,7 @@ public final class ExhaustiveSearch {
         Layout best = null;
         long bestUnits = Long.MAX_VALUE;
         long checked = 0;
+        java.util.Map<String, Long> perKey = new java.util.HashMap<>();
         Demand demand = new Demand(p.mu(), p.vu());
         BarSize smallest = p.space().barSizes().stream()
                 .min(java.util.Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
@@ -76,6 +82,7 @@ public final class ExhaustiveSearch {
                                         CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
                                         if (r.ok()) {
                                             long u = CostModel.units(lay.cost(cost).total());
+                                            perKey.merge(lay.distinctKey(), u, Math::min);
                                             if (u < bestUnits) {
                                                 bestUnits = u;
                                                 best = lay;
@@ -89,7 +96,7 @@ public final class ExhaustiveSearch {
                 }
             }
         }
-        return new Result(best, best == null ? -1 : bestUnits, checked);
+        return new Result(best, best == null ? -1 : bestUnits, checked, perKey);
     }
 
     /** All count vectors n1 >= n2 >= ... >= 2 with n1 <= nmax. */

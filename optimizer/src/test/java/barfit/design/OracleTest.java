@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -38,6 +40,14 @@ class OracleTest {
             assertEquals(ref.units(), units, "cost; oracle " + ref.best() + " optimizer " + got.best().layout()
                     + " — " + where);
             assertEquals(units, got.proof().objective(), "the proof's objective is the design's cost");
+            if (i % 4 == 0) {
+                // the next-cheapest distinct designs, too
+                DesignOutcome withAlts = designer.design(p, 2);
+                List<Long> mine = new ArrayList<>();
+                mine.add(CostModel.units(withAlts.best().costPerMetre().total()));
+                withAlts.alternatives().forEach(d -> mine.add(CostModel.units(d.costPerMetre().total())));
+                assertEquals(ref.cheapestKeys(3), mine, "alternatives — " + where);
+            }
         }
         assertTrue(feasible >= instances / 2, "enough feasible instances to mean something: " + feasible);
     }
