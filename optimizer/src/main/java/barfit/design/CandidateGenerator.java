@@ -49,11 +49,12 @@ public final class CandidateGenerator {
     private final SectionProblem p;
     private final CostModel cost;
     private final SectionProbe probe;
+    private final TensionSearch search;
+    private final StirrupChooser chooser;
     private final Bending bending;
     private final List<BarSize> tensionSizes;
     private final List<BarSize> compressionSizes;
     private final BarSize smallestTension;
-    private int shearEvaluations;
 
     /** Best candidate per distinct key, in discovery order. */
     private final Map<String, Candidate> best = new LinkedHashMap<>();
@@ -65,6 +66,8 @@ public final class CandidateGenerator {
         this.p = problem;
         this.cost = cost;
         this.probe = new SectionProbe(problem.materials(), problem.code());
+        this.search = new TensionSearch(probe, problem.mu());
+        this.chooser = new StirrupChooser(problem.materials(), problem.code(), problem.space(), cost);
         this.bending = problem.bending();
         this.tensionSizes = problem.space().barSizes();
         List<BarSize> comp = new ArrayList<>(problem.space().compressionSizes());
@@ -117,7 +120,7 @@ public final class CandidateGenerator {
         List<Candidate> out = new ArrayList<>(best.values());
         out.sort(Comparator.comparingLong(Candidate::units).thenComparing(c -> c.layout().distinctKey()));
         return new Output(out, new Stats(frames.size(), evaluated, pruned, frameFails, probe.solves(),
-                shearEvaluations, out.size(), System.nanoTime() - t0));
+                chooser.evaluations(), out.size(), System.nanoTime() - t0));
     }
 
     /** The keep-th cheapest distinct cost found so far (infinite until there are that many). */
@@ -225,48 +228,8 @@ public final class CandidateGenerator {
         return asMax;
     }
 
-    /**
-     * The cheapest stirrup option that passes the shear checks (or, without Vu, the minimum-stirrup
-     * rule) for tension steel As at effective depth d. Per number of legs, strength and minimum area
-     * only get easier as the spacing closes, so the widest spacing meeting them is found by bisection;
-     * the spacing limits of 9.7.6.2.2 (which halve when Vs is high) are then settled by stepping down.
-     */
     private Stirrups cheapestStirrups(double b, double h, Detailing det, double d, double as) {
-        SectionShape shape = new SectionShape(b, h, p.flange());
-        List<Double> spacings = p.space().stirrupSpacings();
-        Stirrups best = null;
-        double bestCost = Double.POSITIVE_INFINITY;
-        for (int legs : p.space().stirrupLegs()) {
-            int lo = -1;
-            int hi = spacings.size() - 1;
-            while (lo < hi) {
-                int mid = (lo + hi + 1) >>> 1;
-                if (verdict(shape, det, new Stirrups(det.stirrupBar(), legs, spacings.get(mid)), d, as).strengthAndMinimum()) {
-                    lo = mid;
-                } else {
-                    hi = mid - 1;
-                }
-            }
-            for (int i = lo; i >= 0; i--) {
-                Stirrups st = new Stirrups(det.stirrupBar(), legs, spacings.get(i));
-                double c = cost.stirrups(b, h, st);
-                if (c >= bestCost) {
-                    break;
-                }
-                if (verdict(shape, det, st, d, as).all()) {
-                    best = st;
-                    bestCost = c;
-                    break;
-                }
-            }
-        }
-        return best;
-    }
-
-    private ShearVerdict verdict(SectionShape shape, Detailing det, Stirrups st, double d, double as) {
-        BeamSection s = new BeamSection(shape, p.materials(), det, List.of(), st, null, p.code());
-        shearEvaluations++;
-        return p.vu() == null ? SectionChecks.minimumStirrupsVerdict(s, d, as) : SectionChecks.shearVerdict(s, p.vu(), d, as);
+        return chooser.cheapest(new SectionShape(b, h, p.flange()), det, d, as, p.vu(), 0);
     }
 
     /** A compression layer option: bar size and count, with its cost per metre. */
@@ -277,6 +240,7 @@ public final class CandidateGenerator {
     private boolean evaluateFrame(Frame f) {
         SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
         probe.frame(shape, bending, p.span());
+        search.frame(f.det());
         boolean anyFramePass = false;
         Map<String, Stirrups> stirrupCache = new HashMap<>();
         Map<String, Boolean> frameCheckCache = new HashMap<>();
@@ -334,7 +298,8 @@ public final class CandidateGenerator {
                         continue;
                     }
                     anyFramePass = true;
-                    int[] counts = minTension(f, t, nmax, ncr, layers, c, m, hiN);
+                    search.compression(List.of(new BeamSection.BarGroup(c, m)));
+                    int[] counts = search.minCounts(t, nmax, ncr, layers, hiN);
                     if (counts == null) {
                         continue;
                     }
@@ -374,10 +339,11 @@ public final class CandidateGenerator {
             if (fixed + cost.bars(t, n) + stirLb >= cut0) {
                 return false;
             }
-            place(f, t, split, c, m);
+            search.place(t, split);
             Stirrups st = stirrups(f, shape, t, split, cache);
             if (st != null) {
-                Layout lay = new Layout(f.b(), f.h(), p.flange(), bending, t, toList(split), c, m, st, f.skin());
+                Layout lay = new Layout(f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m, st,
+                        f.skin());
                 Candidate cand = new Candidate(lay, lay.cost(cost));
                 Candidate kb = best.get(key);
                 if (kb == null || cand.units() < kb.units()) {
@@ -394,7 +360,7 @@ public final class CandidateGenerator {
             if (fixed + cost.bars(t, n) + stirLb >= cut) {
                 return false;
             }
-            Split next = passingSplit(f, t, n, layers, nmax, first, c, m);
+            TensionSearch.Split next = search.passingSplit(t, n, layers, nmax, first);
             while (next.counts() == null) {
                 if (!next.anyDuctile()) {
                     return true; // not ductile any more: more bars only lower eps_t
@@ -403,38 +369,10 @@ public final class CandidateGenerator {
                 if (n > layers * nmax || fixed + cost.bars(t, n) + stirLb >= cut) {
                     return false;
                 }
-                next = passingSplit(f, t, n, layers, nmax, first, c, m);
+                next = search.passingSplit(t, n, layers, nmax, first);
             }
             split = next.counts();
         }
-    }
-
-    /**
-     * A split of n bars that passes flexure, minimum steel and ductility (bottom-heavy first), and
-     * whether any split of n is ductile at all.
-     */
-    private Split passingSplit(Frame f, BarSize t, int n, int layers, int nmax, int first, BarSize c, int m) {
-        boolean anyDuctile = false;
-        int[] greedy = greedySplit(n, layers, nmax, first);
-        if (greedy != null) {
-            place(f, t, greedy, c, m);
-            anyDuctile = probe.ductilityOk();
-            if (anyDuctile && probe.strengthOk(p.mu()) && probe.minSteelOk(p.mu())) {
-                return new Split(greedy, true);
-            }
-        }
-        for (int[] alt : splits(n, layers, nmax, first)) {
-            if (greedy != null && Arrays.equals(alt, greedy)) {
-                continue;
-            }
-            place(f, t, alt, c, m);
-            boolean ductile = probe.ductilityOk();
-            anyDuctile |= ductile;
-            if (ductile && probe.strengthOk(p.mu()) && probe.minSteelOk(p.mu())) {
-                return new Split(alt, true);
-            }
-        }
-        return new Split(null, anyDuctile);
     }
 
     /**
@@ -457,134 +395,6 @@ public final class CandidateGenerator {
             }
         }
         return true;
-    }
-
-    private static List<Integer> toList(int[] counts) {
-        List<Integer> l = new ArrayList<>(counts.length);
-        for (int c : counts) {
-            l.add(c);
-        }
-        return l;
-    }
-
-    /** The bottom-heavy split of n bars over the layers, or null if none is valid. */
-    static int[] greedySplit(int n, int layers, int nmax, int first) {
-        int[] out = new int[layers];
-        int rest = n;
-        for (int i = 0; i < layers; i++) {
-            int reserve = 2 * (layers - 1 - i);
-            int cap = i == 0 ? nmax : out[i - 1];
-            int v = Math.min(cap, rest - reserve);
-            if (v < 2 || (i == 0 && v < first)) {
-                return null;
-            }
-            out[i] = v;
-            rest -= v;
-        }
-        return rest == 0 ? out : null;
-    }
-
-    private void place(Frame f, BarSize t, int[] counts, BarSize c, int m) {
-        probe.clear();
-        Detailing det = f.det();
-        double y = det.firstLayerCentroid(t.diameter());
-        for (int i = 0; i < counts.length; i++) {
-            if (i > 0) {
-                y += t.diameter() + det.layerGap();
-            }
-            probe.add(y, true, counts[i] * t.area(), t.diameter());
-        }
-        probe.add(det.firstLayerCentroid(c.diameter()), false, m * c.area(), c.diameter());
-        probe.solve();
-    }
-
-    /** The conditions that only get easier with more tension bars: 0.90 Mn >= Mu and minimum steel. */
-    private boolean couldPass(Frame f, BarSize t, int[] counts, BarSize c, int m) {
-        place(f, t, counts, c, m);
-        return probe.strengthPossible(p.mu()) && probe.minSteelOk(p.mu());
-    }
-
-    /**
-     * Whether some split of n bars meets those conditions. The bottom-heavy split is the strongest,
-     * but a more even split has a smaller d and so a smaller As,min (9.6.1.2); both are tried.
-     */
-    private boolean couldPassAny(Frame f, BarSize t, int n, int layers, int nmax, int first, BarSize c, int m) {
-        int[] greedy = greedySplit(n, layers, nmax, first);
-        if (greedy != null && couldPass(f, t, greedy, c, m)) {
-            return true;
-        }
-        if (layers == 1) {
-            return false;
-        }
-        for (int[] alt : splits(n, layers, nmax, first)) {
-            if ((greedy == null || !Arrays.equals(alt, greedy)) && couldPass(f, t, alt, c, m)) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    /**
-     * Fewest tension bars (with their split) that pass flexure, ductility and minimum steel; or null.
-     * phi Mn itself can fall as bars are added in the transition zone, so bisection runs on the steady
-     * necessary conditions and a short upward scan settles the rest; eps_t only falls with more bars,
-     * so the scan stops as soon as no split is ductile.
-     */
-    private int[] minTension(Frame f, BarSize t, int nmax, int ncr, int layers, BarSize c, int m, int hiLimit) {
-        int first = Math.max(2, ncr);
-        int lo = first + 2 * (layers - 1);
-        int hi = Math.min(hiLimit, layers * nmax);
-        if (hi < lo || !couldPassAny(f, t, hi, layers, nmax, first, c, m)) {
-            hi = layers * nmax;
-            if (!couldPassAny(f, t, hi, layers, nmax, first, c, m)) {
-                return null;
-            }
-        }
-        while (lo < hi) {
-            int mid = (lo + hi) >>> 1;
-            if (couldPassAny(f, t, mid, layers, nmax, first, c, m)) {
-                hi = mid;
-            } else {
-                lo = mid + 1;
-            }
-        }
-        for (int n = lo; n <= layers * nmax; n++) {
-            Split s = passingSplit(f, t, n, layers, nmax, first, c, m);
-            if (s.counts() != null) {
-                return s.counts();
-            }
-            if (!s.anyDuctile()) {
-                return null;
-            }
-        }
-        return null;
-    }
-
-
-    /** The outcome of trying every split of one count. */
-    private record Split(int[] counts, boolean anyDuctile) {
-    }
-
-    /** All splits of n into non-increasing layer counts, each >= 2, the first in [first, nmax]. */
-    static List<int[]> splits(int n, int layers, int nmax, int first) {
-        List<int[]> out = new ArrayList<>();
-        splitInto(n, layers, nmax, new int[layers], 0, out);
-        out.removeIf(s -> s[0] < first);
-        return out;
-    }
-
-    private static void splitInto(int rest, int layers, int cap, int[] cur, int i, List<int[]> out) {
-        if (i == layers) {
-            if (rest == 0) {
-                out.add(cur.clone());
-            }
-            return;
-        }
-        int reserve = 2 * (layers - 1 - i);
-        for (int v = Math.min(cap, rest - reserve); v >= 2; v--) {
-            cur[i] = v;
-            splitInto(rest - v, layers, v, cur, i + 1, out);
-        }
     }
 
     /** The cheapest stirrups for the tension bars just placed in the probe (cached per frame). */

@@ -76,7 +76,7 @@ final class Diagnoser {
                         continue;
                     }
                     for (int n = 2 * layers; n <= layers * nmax; n++) {
-                        int[] split = CandidateGenerator.greedySplit(n, layers, nmax, Math.max(2, ncr));
+                        int[] split = TensionSearch.greedySplit(n, layers, nmax, Math.max(2, ncr));
                         if (split == null) {
                             continue;
                         }

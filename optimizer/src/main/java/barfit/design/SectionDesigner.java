@@ -108,9 +108,9 @@ public final class SectionDesigner {
         BarSize t = l.tensionBar();
         var det = l.detailing(p.detailing());
         int nmax = BarSpacing.maxBars(l.width(), det, t, p.materials(), p.code());
-        int[] fewer = CandidateGenerator.greedySplit(n - 1, layers, nmax, 2);
+        int[] fewer = TensionSearch.greedySplit(n - 1, layers, nmax, 2);
         if (fewer == null && layers > 1) {
-            fewer = CandidateGenerator.greedySplit(n - 1, layers - 1, nmax, 2);
+            fewer = TensionSearch.greedySplit(n - 1, layers - 1, nmax, 2);
         }
         if (fewer != null) {
             List<Integer> counts = new ArrayList<>();

@@ -41,7 +41,17 @@ public record CodeEquations(
         double coverWeatherLarge,
         double coverGround,
         Coef ec,
-        Coef fr) {
+        Coef fr,
+        Coef ldSimpleSmall,
+        Coef ldSimpleLarge,
+        Coef ldOtherSmall,
+        Coef ldOtherLarge,
+        Coef ldGeneral,
+        double ldMin,
+        double topBarConcreteBelow,
+        double smallBarLimit,
+        double fyGrade420,
+        double fyGrade550) {
 
     /** psi per MPa (exact: 1 psi = 6.894757293 kPa). */
     public static final double PSI_PER_MPA = 145.037737730;
@@ -73,7 +83,16 @@ public record CodeEquations(
             550.0,                          // Table 20.2.2.4(a), flexure
             40.0, 50.0, 75.0,               // Table 20.5.1.3.1
             new Coef(4700.0, "4700"),       // 19.2.2.1(b)
-            new Coef(0.62, "0.62"));        // 19.2.3.1
+            new Coef(0.62, "0.62"),         // 19.2.3.1
+            new Coef(2.1, "2.1"),           // Table 25.4.2.3, No. 19 and smaller, spacing and cover met
+            new Coef(1.7, "1.7"),           // Table 25.4.2.3, No. 22 and larger, spacing and cover met
+            new Coef(1.4, "1.4"),           // Table 25.4.2.3, other cases
+            new Coef(1.1, "1.1"),
+            new Coef(1.1, "1.1"),           // 25.4.2.4(a)
+            300.0,                          // 25.4.2.1(b)
+            300.0,                          // Table 25.4.2.5, top bars
+            20.0,                           // "No. 19 and smaller" (db 19.1 mm)
+            420.0, 550.0);                  // Table 25.4.2.5, psi_g
 
     /** ACI 318-19, the inch-pound edition, with every constant converted exactly to N, mm, MPa. */
     public static final CodeEquations INCH_POUND = new CodeEquations(
@@ -99,7 +118,16 @@ public record CodeEquations(
             80_000.0 / PSI_PER_MPA,
             1.5 * MM_PER_IN, 2.0 * MM_PER_IN, 3.0 * MM_PER_IN,
             new Coef(57_000.0 / ROOT_PSI, "57000"),
-            new Coef(7.5 / ROOT_PSI, "7.5"));
+            new Coef(7.5 / ROOT_PSI, "7.5"),
+            new Coef(25.0 / ROOT_PSI, "25"),       // Table 25.4.2.3 (inch-pound): fy psi_t psi_e psi_g / (25 lambda sqrt(f'c))
+            new Coef(20.0 / ROOT_PSI, "20"),
+            new Coef(50.0 / 3.0 / ROOT_PSI, "50/3"),
+            new Coef(40.0 / 3.0 / ROOT_PSI, "40/3"),
+            new Coef(40.0 / 3.0 / ROOT_PSI, "40/3"), // 25.4.2.4(a): (3/40) fy / (lambda sqrt(f'c)) ...
+            12.0 * MM_PER_IN,
+            12.0 * MM_PER_IN,
+            20.0,                                   // "#6 and smaller" (db 0.75 in)
+            60_000.0 / PSI_PER_MPA, 80_000.0 / PSI_PER_MPA);
 
     /** √f'c in √MPa, capped per 22.5.3.1 (8.3 MPa, or 100 psi). */
     public double rootFcForShear(double fc) {

@@ -1,0 +1,78 @@
+package barfit.design;
+
+import barfit.section.BeamSection;
+import barfit.section.CodeEquations;
+import barfit.section.Detailing;
+import barfit.section.Materials;
+import barfit.section.SectionChecks;
+import barfit.section.SectionShape;
+import barfit.section.ShearVerdict;
+import barfit.section.Stirrups;
+import java.util.List;
+
+/**
+ * The cheapest stirrup option that passes the shear checks (or, without Vu, the minimum-stirrup rule)
+ * for tension steel As at effective depth d. Per number of legs, strength and minimum area only get
+ * easier as the spacing closes, so the widest spacing meeting them is found by bisection; the spacing
+ * limits of 9.7.6.2.2 (which halve when Vs is high) are then settled by stepping down.
+ */
+final class StirrupChooser {
+    private final Materials materials;
+    private final CodeEquations code;
+    private final SearchSpace space;
+    private final CostModel cost;
+    private int evaluations;
+
+    StirrupChooser(Materials materials, CodeEquations code, SearchSpace space, CostModel cost) {
+        this.materials = materials;
+        this.code = code;
+        this.space = space;
+        this.cost = cost;
+    }
+
+    int evaluations() {
+        return evaluations;
+    }
+
+    /** @param vu the zone's factored shear, or null for minimum stirrups; {@code minLegs} from the bars per layer */
+    Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs) {
+        List<Double> spacings = space.stirrupSpacings();
+        Stirrups best = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        for (int legs : space.stirrupLegs()) {
+            if (legs < minLegs) {
+                continue;
+            }
+            int lo = -1;
+            int hi = spacings.size() - 1;
+            while (lo < hi) {
+                int mid = (lo + hi + 1) >>> 1;
+                if (verdict(shape, det, new Stirrups(det.stirrupBar(), legs, spacings.get(mid)), d, as, vu)
+                        .strengthAndMinimum()) {
+                    lo = mid;
+                } else {
+                    hi = mid - 1;
+                }
+            }
+            for (int i = lo; i >= 0; i--) {
+                Stirrups st = new Stirrups(det.stirrupBar(), legs, spacings.get(i));
+                double c = cost.stirrups(shape.width(), shape.height(), st);
+                if (c >= bestCost) {
+                    break;
+                }
+                if (verdict(shape, det, st, d, as, vu).all()) {
+                    best = st;
+                    bestCost = c;
+                    break;
+                }
+            }
+        }
+        return best;
+    }
+
+    private ShearVerdict verdict(SectionShape shape, Detailing det, Stirrups st, double d, double as, Double vu) {
+        BeamSection s = new BeamSection(shape, materials, det, List.of(), st, null, code);
+        evaluations++;
+        return vu == null ? SectionChecks.minimumStirrupsVerdict(s, d, as) : SectionChecks.shearVerdict(s, vu, d, as);
+    }
+}

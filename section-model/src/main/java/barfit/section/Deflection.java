@@ -1,0 +1,123 @@
+package barfit.section;
+
+/**
+ * Immediate and long-term deflection of a beam (24.2): gross and cracked transformed moments of
+ * inertia, the cracking moment, the effective moment of inertia of Table 24.2.3.5 and the long-term
+ * multiplier of 24.2.4.1. Lengths mm, forces N, moments N·mm.
+ */
+public final class Deflection {
+    /** Stiffness data of one section for one direction of bending. */
+    public record Stiffness(double ig, double yt, double mcr, double icr, double kd, double n, double ec) {
+    }
+
+    private Deflection() {
+    }
+
+    /** Ec = 4700 √f'c (19.2.2.1(b), normal-weight concrete; 57 000 √f'c in psi). */
+    public static double ec(Materials m, CodeEquations code) {
+        return code.ec().si() * Math.sqrt(m.fc());
+    }
+
+    /** fr = 0.62 λ √f'c (19.2.3.1). */
+    public static double fr(Materials m, CodeEquations code) {
+        return code.fr().si() * m.lambda() * Math.sqrt(m.fc());
+    }
+
+    /**
+     * @param shape    the section; its flange counts only when it is on the compression side
+     * @param as       tension steel area at depth d
+     * @param asc      compression steel area at depth dPrime (0 for none)
+     */
+    public static Stiffness stiffness(SectionShape shape, Bending bending, Materials m, CodeEquations code, double as,
+            double d, double asc, double dPrime) {
+        double ec = ec(m, code);
+        double n = code.es() / ec;
+        double h = shape.height();
+        double bw = shape.width();
+        Flange f = bending == Bending.SAGGING ? shape.flange() : null;
+        double bf = f == null ? bw : f.width();
+        double hf = f == null ? 0 : f.thickness();
+        // gross section (flange on the compression side only), measured from the compression face
+        double area = bw * h + (bf - bw) * hf;
+        double firstMoment = bw * h * h / 2 + (bf - bw) * hf * hf / 2;
+        double yc = firstMoment / area;
+        double ig = bw * Math.pow(h, 3) / 12 + bw * h * Math.pow(h / 2 - yc, 2)
+                + (bf - bw) * Math.pow(hf, 3) / 12 + (bf - bw) * hf * Math.pow(hf / 2 - yc, 2);
+        double yt = h - yc;
+        double mcr = fr(m, code) * ig / yt;
+        // cracked transformed section: solve the first moment about the neutral axis for kd
+        double kd = crackedNeutralAxis(bf, hf, bw, n, as, d, asc, dPrime);
+        double icr = compressionInertia(bf, hf, bw, kd) + (n - 1) * asc * Math.pow(kd - dPrime, 2)
+                + n * as * Math.pow(d - kd, 2);
+        if (asc > 0 && kd < dPrime) {
+            // compression bars below the neutral axis act in tension: count them with n
+            icr = compressionInertia(bf, hf, bw, kd) + n * asc * Math.pow(dPrime - kd, 2) + n * as * Math.pow(d - kd, 2);
+        }
+        return new Stiffness(ig, yt, mcr, icr, kd, n, ec);
+    }
+
+    private static double compressionFirstMoment(double bf, double hf, double bw, double x) {
+        // first moment of the concrete above the neutral axis at depth x, about that axis
+        if (x <= hf || hf == 0) {
+            double b = hf == 0 ? bw : bf;
+            return b * x * x / 2;
+        }
+        return bf * hf * (x - hf / 2) + bw * (x - hf) * (x - hf) / 2;
+    }
+
+    private static double compressionInertia(double bf, double hf, double bw, double x) {
+        if (x <= hf || hf == 0) {
+            double b = hf == 0 ? bw : bf;
+            return b * x * x * x / 3;
+        }
+        return bf * hf * hf * hf / 12 + bf * hf * Math.pow(x - hf / 2, 2) + bw * Math.pow(x - hf, 3) / 3;
+    }
+
+    private static double crackedNeutralAxis(double bf, double hf, double bw, double n, double as, double d,
+            double asc, double dPrime) {
+        double lo = 0;
+        double hi = d;
+        for (int i = 0; i < 200; i++) {
+            double x = 0.5 * (lo + hi);
+            double steelC = asc > 0 ? (x > dPrime ? (n - 1) * asc * (x - dPrime) : n * asc * (x - dPrime)) : 0;
+            double balance = compressionFirstMoment(bf, hf, bw, x) + steelC - n * as * (d - x);
+            if (balance > 0) {
+                hi = x;
+            } else {
+                lo = x;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    /** Table 24.2.3.5: Ie = Ig if Ma ≤ (2/3) Mcr, else Icr / (1 − ((2/3) Mcr / Ma)² (1 − Icr / Ig)). */
+    public static double ie(double ma, Stiffness s) {
+        double m = Math.abs(ma);
+        double threshold = 2.0 / 3.0 * s.mcr();
+        if (m <= threshold) {
+            return s.ig();
+        }
+        double ie = s.icr() / (1 - Math.pow(threshold / m, 2) * (1 - s.icr() / s.ig()));
+        return Math.min(ie, s.ig());
+    }
+
+    /** 24.2.4.1.1: λΔ = ξ / (1 + 50 ρ'), with ξ = 2.0 for five years or more (Table 24.2.4.1.3). */
+    public static double lambdaDelta(double rhoPrime) {
+        return 2.0 / (1 + 50 * rhoPrime);
+    }
+
+    /**
+     * Mid-span deflection of a span under a uniform load from its moments (positive magnitudes):
+     * simple span 5 M L² / (48 Ec Ie); continuous spans 5 L² / (48 Ec Ie) (Mmid − 0.1 (Mleft + Mright));
+     * cantilever (tip) M L² / (4 Ec Ie). (Common practice for uniformly loaded spans, no clause.)
+     */
+    public static double spanDeflection(EndCondition ends, double length, double ec, double ie, double mLeft,
+            double mMid, double mRight) {
+        double l2 = length * length;
+        return switch (ends) {
+            case SIMPLE -> 5 * mMid * l2 / (48 * ec * ie);
+            case ONE_END_CONTINUOUS, BOTH_ENDS_CONTINUOUS -> 5 * l2 / (48 * ec * ie) * (mMid - 0.1 * (mLeft + mRight));
+            case CANTILEVER -> Math.max(mLeft, mRight) * l2 / (4 * ec * ie);
+        };
+    }
+}
