@@ -16,26 +16,39 @@ import java.util.List;
  * easier as the spacing closes, so the widest spacing meeting them is found by bisection; the spacing
  * limits of 9.7.6.2.2 (which halve when Vs is high) are then settled by stepping down.
  */
-final class StirrupChooser {
+public final class StirrupChooser {
     private final Materials materials;
     private final CodeEquations code;
     private final SearchSpace space;
     private final CostModel cost;
     private int evaluations;
 
-    StirrupChooser(Materials materials, CodeEquations code, SearchSpace space, CostModel cost) {
+    public StirrupChooser(Materials materials, CodeEquations code, SearchSpace space, CostModel cost) {
         this.materials = materials;
         this.code = code;
         this.space = space;
         this.cost = cost;
     }
 
-    int evaluations() {
+    public int evaluations() {
         return evaluations;
     }
 
-    /** @param vu the zone's factored shear, or null for minimum stirrups; {@code minLegs} from the bars per layer */
-    Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs) {
+    /**
+     * Cheapest per metre of beam.
+     *
+     * @param vu the zone's factored shear, or null for minimum stirrups; {@code minLegs} from the bars per layer
+     */
+    public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs) {
+        return cheapest(shape, det, d, as, vu, minLegs, 0);
+    }
+
+    /**
+     * Cheapest over a zone of the given length (whole sets, one per spacing started), or per metre when
+     * {@code zoneLength} is 0.
+     */
+    public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
+            double zoneLength) {
         List<Double> spacings = space.stirrupSpacings();
         Stirrups best = null;
         double bestCost = Double.POSITIVE_INFINITY;
@@ -56,7 +69,11 @@ final class StirrupChooser {
             }
             for (int i = lo; i >= 0; i--) {
                 Stirrups st = new Stirrups(det.stirrupBar(), legs, spacings.get(i));
-                double c = cost.stirrups(shape.width(), shape.height(), st);
+                double c = zoneLength > 0
+                        ? Math.max(1, Math.ceil(zoneLength / st.spacing() - 1e-9))
+                                * cost.stirrupSetLength(shape.width(), shape.height(), st.bar(), st.legs())
+                                * st.bar().massPerMetre()
+                        : cost.stirrups(shape.width(), shape.height(), st);
                 if (c >= bestCost) {
                     break;
                 }

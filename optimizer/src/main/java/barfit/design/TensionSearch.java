@@ -17,9 +17,9 @@ import java.util.List;
  * that only get easier with more bars (0.90 Mn >= Mu, minimum steel), and a short upward scan settles
  * phi; eps_t only falls with more bars, so the scan stops as soon as no split of a count is ductile.
  */
-final class TensionSearch {
+public final class TensionSearch {
     /** The outcome of trying every split of one count. */
-    record Split(int[] counts, boolean anyDuctile) {
+    public record Split(int[] counts, boolean anyDuctile) {
     }
 
     private final SectionProbe probe;
@@ -29,19 +29,19 @@ final class TensionSearch {
     private double[] compArea = new double[0];
     private double[] compDb = new double[0];
 
-    TensionSearch(SectionProbe probe, double mu) {
+    public TensionSearch(SectionProbe probe, double mu) {
         this.probe = probe;
         this.mu = mu;
     }
 
     /** The probe must already be framed for this section; {@code det} gives the bar positions. */
-    TensionSearch frame(Detailing detailing) {
+    public TensionSearch frame(Detailing detailing) {
         this.det = detailing;
         return this;
     }
 
     /** The compression-face bars, layers from the face inward (may be empty). */
-    TensionSearch compression(List<BeamSection.BarGroup> groups) {
+    public TensionSearch compression(List<BeamSection.BarGroup> groups) {
         compFromFace = new double[groups.size()];
         compArea = new double[groups.size()];
         compDb = new double[groups.size()];
@@ -60,7 +60,7 @@ final class TensionSearch {
     }
 
     /** Puts the tension bars and the compression bars in the probe and solves. */
-    void place(BarSize t, int[] counts) {
+    public void place(BarSize t, int[] counts) {
         probe.clear();
         double y = det.firstLayerCentroid(t.diameter());
         for (int i = 0; i < counts.length; i++) {
@@ -76,15 +76,15 @@ final class TensionSearch {
     }
 
     /** Effective depth and tension area of the bars last placed (for the shear checks). */
-    double d() {
+    public double d() {
         return probe.d();
     }
 
-    double tensionArea() {
+    public double tensionArea() {
         return probe.tensionArea();
     }
 
-    boolean passesAll() {
+    public boolean passesAll() {
         return probe.ductilityOk() && probe.strengthOk(mu) && probe.minSteelOk(mu);
     }
 
@@ -114,7 +114,7 @@ final class TensionSearch {
     }
 
     /** Fewest tension bars (with their split) that pass; null if none does. */
-    int[] minCounts(BarSize t, int nmax, int ncr, int layers, int hiLimit) {
+    public int[] minCounts(BarSize t, int nmax, int ncr, int layers, int hiLimit) {
         int first = Math.max(2, ncr);
         int lo = first + 2 * (layers - 1);
         int hi = Math.min(hiLimit, layers * nmax);
@@ -148,7 +148,7 @@ final class TensionSearch {
      * A split of n bars that passes (bottom-heavy first) and whether any split of n is ductile. The
      * probe is left holding the passing split.
      */
-    Split passingSplit(BarSize t, int n, int layers, int nmax, int first) {
+    public Split passingSplit(BarSize t, int n, int layers, int nmax, int first) {
         boolean anyDuctile = false;
         int[] greedy = greedySplit(n, layers, nmax, first);
         if (greedy != null) {
@@ -172,8 +172,29 @@ final class TensionSearch {
         return new Split(null, anyDuctile);
     }
 
+    /**
+     * Every split of n bars that passes, at most one per first-layer count (the deepest such), bottom
+     * heavy first: the first layer decides how many stirrup legs the bars need, and at a support how
+     * many continuous bars it can hold.
+     */
+    public List<int[]> passingSplits(BarSize t, int n, int layers, int nmax, int first) {
+        List<int[]> out = new ArrayList<>();
+        java.util.Set<Integer> firsts = new java.util.HashSet<>();
+        for (int[] s : splits(n, layers, nmax, first)) {
+            if (firsts.contains(s[0])) {
+                continue;
+            }
+            place(t, s);
+            if (passesAll()) {
+                out.add(s);
+                firsts.add(s[0]);
+            }
+        }
+        return out;
+    }
+
     /** The bottom-heavy split of n bars over the layers, or null if none is valid. */
-    static int[] greedySplit(int n, int layers, int nmax, int first) {
+    public static int[] greedySplit(int n, int layers, int nmax, int first) {
         int[] out = new int[layers];
         int rest = n;
         for (int i = 0; i < layers; i++) {
@@ -190,7 +211,7 @@ final class TensionSearch {
     }
 
     /** All splits of n into non-increasing layer counts, each >= 2, the first in [first, nmax]. */
-    static List<int[]> splits(int n, int layers, int nmax, int first) {
+    public static List<int[]> splits(int n, int layers, int nmax, int first) {
         List<int[]> out = new ArrayList<>();
         splitInto(n, layers, nmax, new int[layers], 0, out);
         out.removeIf(s -> s[0] < first);
@@ -211,7 +232,7 @@ final class TensionSearch {
         }
     }
 
-    static List<Integer> toList(int[] counts) {
+    public static List<Integer> toList(int[] counts) {
         List<Integer> l = new ArrayList<>(counts.length);
         for (int c : counts) {
             l.add(c);

@@ -17,6 +17,14 @@ public final class SectionChecks {
 
     /** Runs all checks that apply. {@code span} may be null (then depth and flange-width limits are skipped). */
     public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail) {
+        return run(s, demand, span, trail, true);
+    }
+
+    /**
+     * As {@link #run(BeamSection, Demand, Span, Trail)}; {@code withMinimumDepth} false leaves Table 9.3.1.1
+     * to the span checks (a whole beam is checked for depth and deflection once, not per section).
+     */
+    public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail, boolean withMinimumDepth) {
         List<CheckResult> out = new ArrayList<>();
         Bending bending = demand.bending();
         FlexureResult fr = Flexure.analyse(s, bending, trail);
@@ -34,7 +42,7 @@ public final class SectionChecks {
             shear = Shear.analyse(s, Math.abs(demand.vu()), d, fr.tensionSteelArea(), trail);
             shearChecks(s, shear, out);
         }
-        if (span != null && span.ends() != null) {
+        if (withMinimumDepth && span != null && span.ends() != null) {
             minimumDepth(s, span, out, trail);
         }
         return new CheckReport(s, demand, fr, shear, out, trail);
@@ -347,6 +355,28 @@ public final class SectionChecks {
         }
         out.add(CheckResult.atMost("flange_width", "Effective flange width", "Table 6.3.2.1", Q.length(f.width()),
                 Q.length(limit), "sw/2 limit not checked"));
+    }
+
+    /**
+     * The shear checks of one stirrup zone of a beam: the section (with the zone's stirrups) bent in
+     * {@code bending} gives d and As of the tension face; Vu is the zone's design shear. Ids carry the
+     * zone's name ("shear_strength.left"...).
+     */
+    public static List<CheckResult> shearZone(BeamSection s, Bending bending, double vu, String zone, Trail trail) {
+        FlexureResult fr = Flexure.analyse(s, bending);
+        double d = fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
+        if (trail.isOn()) {
+            trail.note("Stirrup zone '" + zone + "': d and As from the " + bending.word() + " section.");
+        }
+        ShearResult sh = Shear.analyse(s, vu, d, fr.tensionSteelArea(), trail);
+        List<CheckResult> out = new ArrayList<>();
+        shearChecks(s, sh, out);
+        List<CheckResult> named = new ArrayList<>();
+        for (CheckResult c : out) {
+            named.add(new CheckResult(c.id() + "." + zone, c.title() + " (" + zone + " zone)", c.clause(), c.demand(),
+                    c.sense(), c.limit(), c.ratio(), c.pass(), c.note()));
+        }
+        return named;
     }
 
     /**

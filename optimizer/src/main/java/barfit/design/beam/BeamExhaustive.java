@@ -1,0 +1,214 @@
+package barfit.design.beam;
+
+import barfit.catalogs.BarSize;
+import barfit.design.CostModel;
+import barfit.design.Layout;
+import barfit.section.BarSpacing;
+import barfit.section.CheckResult;
+import barfit.section.Detailing;
+import barfit.section.SkinBars;
+import barfit.section.Stirrups;
+import barfit.section.trail.Trail;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The reference answer for a span: every combination of section, bar sizes, bottom layers, top
+ * continuous bars and top bars at each support, in plain loops, each verified by {@link BeamVerifier}
+ * (the full section model). Stirrups per zone are the cheapest option passing that zone's checks for
+ * the bars in it. Results of sections already seen are remembered, which changes no answer.
+ */
+public final class BeamExhaustive {
+    public record Result(BeamLayout best, long units, long combinations) {
+    }
+
+    private final CostModel cost;
+
+    public BeamExhaustive(CostModel cost) {
+        this.cost = cost;
+    }
+
+    public Result solve(BeamProblem p) {
+        BeamLayout best = null;
+        long bestUnits = Long.MAX_VALUE;
+        long combos = 0;
+        BarSize smallest = p.space().barSizes().stream()
+                .min(java.util.Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
+        List<BeamProblem.Zone> zones = p.zones();
+        for (double b : p.widths()) {
+            for (double h : p.depths()) {
+                if (p.flange() != null && h <= p.flange().thickness()) {
+                    continue;
+                }
+                for (BarSize ds : p.space().stirrupSizes()) {
+                    Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(),
+                            p.detailing().exposure());
+                    if (BarSpacing.innerWidth(b, det) <= 0) {
+                        continue;
+                    }
+                    SkinBars skin = Layout.skinFor(h, smallest, det, p.materials(), p.code());
+                    Map<String, Boolean> sectionOk = new HashMap<>();
+                    Map<String, Stirrups> zoneMemo = new HashMap<>();
+                    for (BarSize tt : p.space().barSizes()) {
+                        int nmaxT = BarSpacing.maxBars(b, det, tt, p.materials(), p.code());
+                        for (BarSize tb : p.space().barSizes()) {
+                            if (!tt.equals(tb) && p.maxBarSizes() < 2) {
+                                continue;
+                            }
+                            int nmaxB = BarSpacing.maxBars(b, det, tb, p.materials(), p.code());
+                            for (List<Integer> bottom : vectors(p.space().maxLayers(), nmaxB)) {
+                                int ncMax = p.cantilever() ? 2 : nmaxT;
+                                for (int nc = 2; nc <= ncMax; nc++) {
+                                    for (List<Integer> left : p.leftSupport() ? vectors(p.space().maxLayers(), nmaxT)
+                                            : singletonNull()) {
+                                        if (left != null && left.get(0) < nc) {
+                                            continue;
+                                        }
+                                        for (List<Integer> right : p.rightSupport()
+                                                ? vectors(p.space().maxLayers(), nmaxT) : singletonNull()) {
+                                            if (right != null && right.get(0) < nc) {
+                                                continue;
+                                            }
+                                            double extL = left == null ? 0
+                                                    : Extension.of(p, b, h, det, tt).length();
+                                            double extR = right == null ? 0
+                                                    : Extension.of(p, b, h, det, tt).length();
+                                            // stirrups: the cheapest passing option per zone for these bars
+                                            BeamLayout trial = new BeamLayout(b, h, p.flange(), ds, skin, tt, nc, left,
+                                                    right, tb, bottom, fill(zones.size(), new Stirrups(ds, 2, 100)),
+                                                    extL, extR);
+                                            List<Stirrups> st = new ArrayList<>();
+                                            for (int z = 0; z < zones.size(); z++) {
+                                                Stirrups s = zoneStirrups(p, trial, z, zoneMemo);
+                                                if (s == null) {
+                                                    break;
+                                                }
+                                                st.add(s);
+                                            }
+                                            if (st.size() < zones.size()) {
+                                                continue;
+                                            }
+                                            BeamLayout lay = new BeamLayout(b, h, p.flange(), ds, skin, tt, nc, left,
+                                                    right, tb, bottom, st, extL, extR);
+                                            combos++;
+                                            if (!sectionsOk(p, lay, sectionOk)) {
+                                                continue;
+                                            }
+                                            if (!BeamVerifier.verify(p, lay, false).ok()) {
+                                                continue;
+                                            }
+                                            long u = CostModel.units(lay.cost(p, cost).total());
+                                            if (u < bestUnits) {
+                                                bestUnits = u;
+                                                best = lay;
+                                            }
+                                        }
+                                    }
+                                }
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return new Result(best, best == null ? -1 : bestUnits, combos);
+    }
+
+    /** The flexural sections alone, remembered by their bars (a failing one fails every combination). */
+    private boolean sectionsOk(BeamProblem p, BeamLayout l, Map<String, Boolean> memo) {
+        for (BeamProblem.Place place : BeamProblem.Place.values()) {
+            boolean present = place == BeamProblem.Place.LEFT ? p.leftSupport()
+                    : place == BeamProblem.Place.RIGHT ? p.rightSupport() : p.midSection();
+            if (!present) {
+                continue;
+            }
+            String key = place + "|" + l.top() + l.topAt(p, place) + "|" + l.bottom() + l.bottomCounts() + "|"
+                    + l.topContinuous();
+            Boolean ok = memo.get(key);
+            if (ok == null) {
+                Double mu = place == BeamProblem.Place.LEFT ? p.mLeft() : place == BeamProblem.Place.RIGHT ? p.mRight()
+                        : p.mMid();
+                ok = barfit.section.SectionChecks.run(l.section(p, place, null), new barfit.section.Demand(mu, null),
+                        new barfit.section.Span(p.span(), p.ends()), Trail.off(), false).ok();
+                memo.put(key, ok);
+            }
+            if (!ok) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private Stirrups zoneStirrups(BeamProblem p, BeamLayout l, int z, Map<String, Stirrups> memo) {
+        BeamProblem.Zone zone = p.zones().get(z);
+        String key = z + "|" + l.top() + l.topAt(p, zone.section()) + "|" + l.bottom() + l.bottomCounts() + "|"
+                + l.topContinuous();
+        if (memo.containsKey(key)) {
+            return memo.get(key);
+        }
+        Stirrups best = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        int need = p.legsFor(l.barsPerLayer(p, zone.section()));
+        for (int legs : p.space().stirrupLegs()) {
+            for (double s : p.space().stirrupSpacings()) {
+                Stirrups st = new Stirrups(l.stirrupBar(), legs, s);
+                if (legs < need) {
+                    continue;
+                }
+                var checks = barfit.section.SectionChecks.shearZone(l.section(p, zone.section(), st),
+                        BeamLayout.bending(p, zone.section()), zone.vu() == null ? 0 : zone.vu(), zone.name(), Trail.off());
+                boolean ok = checks.stream().allMatch(CheckResult::pass);
+                if (zone.vu() == null && ok) {
+                    var s2 = l.section(p, zone.section(), st);
+                    var fr = barfit.section.Flexure.analyse(s2, BeamLayout.bending(p, zone.section()));
+                    ok = barfit.section.SectionChecks.minimumStirrupsPass(s2, fr.d(), fr.tensionSteelArea());
+                }
+                double c = BeamLayout.stirrupSets(zone.length(), s) * cost.stirrupSetLength(l.width(), l.height(),
+                        st.bar(), legs) * st.bar().massPerMetre();
+                if (ok && c < bestCost - 1e-12) {
+                    bestCost = c;
+                    best = st;
+                }
+            }
+        }
+        memo.put(key, best);
+        return best;
+    }
+
+    private static List<Stirrups> fill(int n, Stirrups s) {
+        List<Stirrups> l = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            l.add(s);
+        }
+        return l;
+    }
+
+    private static List<List<Integer>> singletonNull() {
+        List<List<Integer>> l = new ArrayList<>();
+        l.add(null);
+        return l;
+    }
+
+    /** Count vectors of 1..maxLayers layers, n1 >= n2 >= ... >= 2, n1 <= nmax. */
+    static List<List<Integer>> vectors(int maxLayers, int nmax) {
+        List<List<Integer>> out = new ArrayList<>();
+        for (int layers = 1; layers <= maxLayers; layers++) {
+            fill(layers, nmax, new ArrayList<>(), out);
+        }
+        return out;
+    }
+
+    private static void fill(int layers, int cap, List<Integer> cur, List<List<Integer>> out) {
+        if (cur.size() == layers) {
+            out.add(List.copyOf(cur));
+            return;
+        }
+        for (int v = 2; v <= cap; v++) {
+            cur.add(v);
+            fill(layers, v, cur, out);
+            cur.remove(cur.size() - 1);
+        }
+    }
+}

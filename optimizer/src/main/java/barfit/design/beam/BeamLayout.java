@@ -1,0 +1,180 @@
+package barfit.design.beam;
+
+import barfit.catalogs.BarSize;
+import barfit.design.CostBreakdown;
+import barfit.design.CostModel;
+import barfit.design.Layout;
+import barfit.section.BarLayer;
+import barfit.section.BeamSection;
+import barfit.section.Bending;
+import barfit.section.Detailing;
+import barfit.section.Face;
+import barfit.section.Flange;
+import barfit.section.SectionShape;
+import barfit.section.SkinBars;
+import barfit.section.Stirrups;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A designed span: one width and height; bottom bars (one size, layers) over the full span; top bars of
+ * one size, {@code topContinuous} of them over the full span and, at each continuous support, the total
+ * given by {@code topLeft} / {@code topRight} (layers from the top face; the extra bars run
+ * {@code extLeft} / {@code extRight} into the span); and stirrups per zone, in the order of
+ * {@link BeamProblem#zones()}.
+ */
+public record BeamLayout(
+        double width,
+        double height,
+        Flange flange,
+        BarSize stirrupBar,
+        SkinBars skin,
+        BarSize top,
+        int topContinuous,
+        List<Integer> topLeft,
+        List<Integer> topRight,
+        BarSize bottom,
+        List<Integer> bottomCounts,
+        List<Stirrups> zoneStirrups,
+        double extLeft,
+        double extRight) {
+
+    public BeamLayout {
+        topLeft = topLeft == null ? null : List.copyOf(topLeft);
+        topRight = topRight == null ? null : List.copyOf(topRight);
+        bottomCounts = List.copyOf(bottomCounts);
+        zoneStirrups = List.copyOf(zoneStirrups);
+    }
+
+    public SectionShape shape() {
+        return new SectionShape(width, height, flange);
+    }
+
+    public Detailing detailing(Detailing base) {
+        return new Detailing(base.cover(), stirrupBar, base.layerGap(), base.exposure());
+    }
+
+    public static int sum(List<Integer> counts) {
+        int n = 0;
+        for (int c : counts) {
+            n += c;
+        }
+        return n;
+    }
+
+    public int bottomCount() {
+        return sum(bottomCounts);
+    }
+
+    /** The bending of the section at a place: hogging at a continuous support, sagging elsewhere. */
+    public static Bending bending(BeamProblem p, BeamProblem.Place place) {
+        boolean support = place == BeamProblem.Place.LEFT && p.leftSupport()
+                || place == BeamProblem.Place.RIGHT && p.rightSupport();
+        return support ? Bending.HOGGING : Bending.SAGGING;
+    }
+
+    private static List<BeamSection.BarGroup> groups(BarSize bar, List<Integer> counts) {
+        List<BeamSection.BarGroup> g = new ArrayList<>();
+        for (int c : counts) {
+            g.add(new BeamSection.BarGroup(bar, c));
+        }
+        return g;
+    }
+
+    /** The top bars at a place: the support's total at a continuous support, else the continuous bars. */
+    public List<Integer> topAt(BeamProblem p, BeamProblem.Place place) {
+        if (place == BeamProblem.Place.LEFT && p.leftSupport()) {
+            return topLeft;
+        }
+        if (place == BeamProblem.Place.RIGHT && p.rightSupport()) {
+            return topRight;
+        }
+        return List.of(topContinuous);
+    }
+
+    /**
+     * The section at a place, as the section model checks it. At a continuous support the top bars are
+     * in tension and the bottom bars count as compression steel only if anchored there; elsewhere the
+     * bottom bars are in tension and the continuous top bars are the compression layer.
+     */
+    public BeamSection section(BeamProblem p, BeamProblem.Place place, Stirrups stirrups) {
+        Detailing det = detailing(p.detailing());
+        List<BarLayer> layers = new ArrayList<>();
+        if (bending(p, place) == Bending.HOGGING) {
+            layers.addAll(BeamSection.stack(Face.TOP, groups(top, topAt(p, place)), det));
+            if (p.bottomAnchored()) {
+                layers.addAll(BeamSection.stack(Face.BOTTOM, groups(bottom, bottomCounts), det));
+            }
+        } else {
+            layers.addAll(BeamSection.stack(Face.BOTTOM, groups(bottom, bottomCounts), det));
+            layers.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(top, topContinuous)), det));
+        }
+        return new BeamSection(shape(), p.materials(), det, layers, stirrups, skin, p.code());
+    }
+
+    /** Most bars in any layer within a zone whose section is at {@code place} (for the stirrup legs). */
+    public int barsPerLayer(BeamProblem p, BeamProblem.Place place) {
+        int most = bottomCounts.get(0);
+        for (int c : topAt(p, place)) {
+            most = Math.max(most, c);
+        }
+        return most;
+    }
+
+    /** A bar mark of the schedule: count bars of one size, each {@code length} long (mm). */
+    public record BarMark(String mark, String role, BarSize bar, int count, double length) {
+    }
+
+    /** The bar list: bottom, top continuous, top extras at each support, stirrups per zone. */
+    public List<BarMark> bars(BeamProblem p, CostModel cost) {
+        List<BarMark> out = new ArrayList<>();
+        double l = p.span();
+        out.add(new BarMark("B1", "bottom, full span", bottom, bottomCount(), l));
+        int k = 1;
+        if (p.cantilever()) {
+            out.add(new BarMark("T1", "top, full length", top, sum(topLeft), l));
+        } else {
+            out.add(new BarMark("T" + k++, "top continuous, full span", top, topContinuous, l));
+            if (p.leftSupport() && sum(topLeft) > topContinuous) {
+                out.add(new BarMark("T" + k++, "top extra at left support", top, sum(topLeft) - topContinuous, extLeft));
+            }
+            if (p.rightSupport() && sum(topRight) > topContinuous) {
+                out.add(new BarMark("T" + k++, "top extra at right support", top, sum(topRight) - topContinuous,
+                        extRight));
+            }
+        }
+        if (skin != null) {
+            out.add(new BarMark("K1", "skin bars, both faces", skin.bar(), 2 * Layout.skinBarsPerFace(height,
+                    skin.spacing()), l));
+        }
+        List<BeamProblem.Zone> zones = p.zones();
+        for (int i = 0; i < zones.size(); i++) {
+            Stirrups s = zoneStirrups.get(i);
+            int sets = stirrupSets(zones.get(i).length(), s.spacing());
+            out.add(new BarMark("S" + (i + 1), "stirrups, " + zones.get(i).name() + " zone, " + s.legs() + " legs",
+                    s.bar(), sets, cost.stirrupSetLength(width, height, s.bar(), s.legs())));
+        }
+        return out;
+    }
+
+    public static int stirrupSets(double zoneLength, double spacing) {
+        return Math.max(1, (int) Math.ceil(zoneLength / spacing - 1e-9));
+    }
+
+    /** The cost of the whole span. */
+    public CostBreakdown cost(BeamProblem p, CostModel cost) {
+        double lm = p.span() / 1000.0;
+        CostBreakdown frame = cost.frame(width, height, flange).times(lm);
+        double bars = 0;
+        double stirrups = 0;
+        for (BarMark b : bars(p, cost)) {
+            double metres = b.count() * b.length() / 1000.0;
+            if (b.mark().startsWith("S")) {
+                stirrups += cost.rates().stirrupsPerKg() * b.bar().massPerMetre() * metres;
+            } else {
+                bars += cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * b.bar().massPerMetre() * metres;
+            }
+        }
+        return frame.plus(new CostBreakdown(0, bars, stirrups, 0, 0));
+    }
+}

@@ -1,0 +1,34 @@
+package barfit.design.beam;
+
+import barfit.section.CheckReport;
+import barfit.section.CheckResult;
+import barfit.section.SpanChecks;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/** The full verification of a span: each flexural section, each stirrup zone, and the span checks. */
+public record BeamReport(Map<BeamProblem.Place, CheckReport> sections, List<CheckResult> zoneChecks,
+        SpanChecks.Result span, barfit.section.trail.Trail zoneTrail) {
+
+    public List<CheckResult> all() {
+        List<CheckResult> out = new ArrayList<>();
+        sections.values().forEach(r -> out.addAll(r.checks()));
+        out.addAll(zoneChecks);
+        out.addAll(span.checks());
+        return out;
+    }
+
+    public boolean ok() {
+        return all().stream().allMatch(CheckResult::pass);
+    }
+
+    public List<CheckResult> failures() {
+        return all().stream().filter(c -> !c.pass()).toList();
+    }
+
+    /** Whether everything except the span's deflection checks passes. */
+    public boolean okApartFromDeflection() {
+        return all().stream().filter(c -> !c.id().startsWith("deflection")).allMatch(CheckResult::pass);
+    }
+}

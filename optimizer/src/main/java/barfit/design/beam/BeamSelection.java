@@ -1,0 +1,261 @@
+package barfit.design.beam;
+
+import barfit.catalogs.BarSize;
+import barfit.design.OrTools;
+import barfit.design.SolverOptions;
+import com.google.ortools.sat.CpModel;
+import com.google.ortools.sat.CpSolver;
+import com.google.ortools.sat.CpSolverStatus;
+import com.google.ortools.sat.LinearExpr;
+import com.google.ortools.sat.LinearExprBuilder;
+import com.google.ortools.sat.Literal;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+
+/**
+ * The CP-SAT model of one span over the generator's options. One frame; in it one top option (top bar
+ * size, continuous count), one mid-span option consistent with it, and one option at each continuous
+ * support of the same top size whose first layer holds the continuous bars and whose stirrups have
+ * legs enough for the bottom bars; at most {@code max_bar_sizes_per_beam} bar sizes. Deflection, which
+ * couples everything, is added lazily: a combination found too flexible is cut off together with every
+ * combination that has no more steel anywhere (same sizes, no more bars, no deeper bars).
+ */
+public final class BeamSelection {
+    /** The chosen combination and the solver's proof. */
+    public record Choice(BeamGenerator.FrameSet set, BeamGenerator.MidOpt mid, BeamGenerator.SupportOpt left,
+            BeamGenerator.SupportOpt right) {
+    }
+
+    public record Result(String status, Choice choice, long objective, long bound, int booleans, int solves,
+            int deflectionCuts, double seconds) {
+        public double gap() {
+            return objective == 0 ? 0 : Math.max(0, (double) (objective - bound) / Math.abs(objective));
+        }
+    }
+
+    private final CpModel model = new CpModel();
+    private final List<BeamGenerator.FrameSet> sets;
+    private final BeamProblem p;
+    private final List<Literal> frameVars = new ArrayList<>();
+    private final List<List<Literal>> midVars = new ArrayList<>();
+    private final List<List<Literal>> leftVars = new ArrayList<>();
+    private final List<List<Literal>> rightVars = new ArrayList<>();
+    private final List<Literal> all = new ArrayList<>();
+    private final List<Long> costs = new ArrayList<>();
+    private int booleans;
+
+    public BeamSelection(BeamProblem problem, List<BeamGenerator.FrameSet> sets) {
+        OrTools.load();
+        this.p = problem;
+        this.sets = sets;
+        build();
+    }
+
+    private Literal bool(String name, double cost) {
+        Literal v = model.newBoolVar(name);
+        all.add(v);
+        costs.add(Math.round(cost * BeamGenerator.UNITS));
+        booleans++;
+        return v;
+    }
+
+    private void build() {
+        Map<String, Literal> sizeUsed = new LinkedHashMap<>();
+        for (BarSize s : p.space().barSizes()) {
+            sizeUsed.put(s.designation(), model.newBoolVar("size_" + s.designation()));
+        }
+        for (int fi = 0; fi < sets.size(); fi++) {
+            BeamGenerator.FrameSet fs = sets.get(fi);
+            Literal y = bool("frame" + fi, fs.frame().cost());
+            frameVars.add(y);
+            List<BeamGenerator.TopOpt> tops = fs.tops();
+            List<Literal> topVars = new ArrayList<>();
+            for (int i = 0; i < tops.size(); i++) {
+                Literal x = bool("f" + fi + "_top" + i, tops.get(i).cost());
+                topVars.add(x);
+                model.addImplication(x, sizeUsed.get(tops.get(i).bar().designation()));
+            }
+            model.addEquality(LinearExpr.sum(topVars.toArray(new Literal[0])), y);
+            List<Literal> mv = new ArrayList<>();
+            for (int i = 0; i < fs.mids().size(); i++) {
+                BeamGenerator.MidOpt m = fs.mids().get(i);
+                Literal x = bool("f" + fi + "_mid" + i, m.cost());
+                mv.add(x);
+                model.addImplication(x, sizeUsed.get(m.bar().designation()));
+            }
+            midVars.add(mv);
+            // each top option is carried by exactly one mid-span option built on it
+            for (int ti = 0; ti < tops.size(); ti++) {
+                List<Literal> on = new ArrayList<>();
+                for (int i = 0; i < fs.mids().size(); i++) {
+                    if (fs.mids().get(i).top().equals(tops.get(ti))) {
+                        on.add(mv.get(i));
+                    }
+                }
+                model.addEquality(LinearExpr.sum(on.toArray(new Literal[0])), topVars.get(ti));
+            }
+            leftVars.add(supports(fi, "left", fs, fs.lefts(), topVars, mv, p.leftSupport()));
+            rightVars.add(supports(fi, "right", fs, fs.rights(), topVars, mv, p.rightSupport()));
+        }
+        model.addExactlyOne(frameVars.toArray(new Literal[0]));
+        model.addLessOrEqual(LinearExpr.sum(sizeUsed.values().toArray(new Literal[0])), p.maxBarSizes());
+        long[] c = costs.stream().mapToLong(Long::longValue).toArray();
+        model.minimize(LinearExpr.weightedSum(all.toArray(new Literal[0]), c));
+    }
+
+    private List<Literal> supports(int fi, String side, BeamGenerator.FrameSet fs, List<BeamGenerator.SupportOpt> opts,
+            List<Literal> topVars, List<Literal> mv, boolean present) {
+        List<Literal> sv = new ArrayList<>();
+        if (!present) {
+            return sv;
+        }
+        for (int i = 0; i < opts.size(); i++) {
+            sv.add(bool("f" + fi + "_" + side + i, opts.get(i).cost()));
+        }
+        List<BeamGenerator.TopOpt> tops = fs.tops();
+        // same top size at the support as over the span
+        for (BarSize s : p.space().barSizes()) {
+            LinearExprBuilder lhs = LinearExpr.newBuilder();
+            LinearExprBuilder rhs = LinearExpr.newBuilder();
+            for (int i = 0; i < opts.size(); i++) {
+                if (opts.get(i).bar().equals(s)) {
+                    lhs.add(sv.get(i));
+                }
+            }
+            for (int ti = 0; ti < tops.size(); ti++) {
+                if (tops.get(ti).bar().equals(s)) {
+                    rhs.add(topVars.get(ti));
+                }
+            }
+            model.addEquality(lhs, rhs);
+        }
+        // the continuous bars sit in the support's first layer (a cantilever's top bars are all its own)
+        if (!p.cantilever()) {
+            LinearExprBuilder first = LinearExpr.newBuilder();
+            for (int i = 0; i < opts.size(); i++) {
+                first.addTerm(sv.get(i), opts.get(i).counts().get(0));
+            }
+            LinearExprBuilder nc = LinearExpr.newBuilder();
+            for (int ti = 0; ti < tops.size(); ti++) {
+                nc.addTerm(topVars.get(ti), tops.get(ti).nc());
+            }
+            model.addGreaterOrEqual(first, nc);
+        }
+        // stirrup legs at the support hold the bottom bars too
+        LinearExprBuilder legs = LinearExpr.newBuilder();
+        for (int i = 0; i < opts.size(); i++) {
+            legs.addTerm(sv.get(i), opts.get(i).legs());
+        }
+        LinearExprBuilder need = LinearExpr.newBuilder();
+        for (int i = 0; i < fs.mids().size(); i++) {
+            need.addTerm(mv.get(i), fs.mids().get(i).legsNeeded());
+        }
+        model.addGreaterOrEqual(legs, need);
+        // bottom bars counted as compression steel: the support option was built for those bottom bars
+        if (p.bottomAnchored()) {
+            Map<String, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
+            for (int i = 0; i < opts.size(); i++) {
+                byKey.computeIfAbsent(opts.get(i).bottomKey(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
+                    LinearExpr.newBuilder()})[0].add(sv.get(i));
+            }
+            for (int i = 0; i < fs.mids().size(); i++) {
+                byKey.computeIfAbsent(fs.mids().get(i).key(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
+                    LinearExpr.newBuilder()})[1].add(mv.get(i));
+            }
+            for (LinearExprBuilder[] pair : byKey.values()) {
+                model.addEquality(pair[0], pair[1]);
+            }
+        }
+        return sv;
+    }
+
+    /** Cuts off a combination found too flexible, with every combination that has no more steel. */
+    public void cutDeflection(Choice c) {
+        int fi = sets.indexOf(c.set());
+        BeamGenerator.FrameSet fs = c.set();
+        LinearExprBuilder weaker = LinearExpr.newBuilder();
+        int parts = 0;
+        BeamGenerator.MidOpt m0 = c.mid();
+        for (int i = 0; i < fs.mids().size(); i++) {
+            BeamGenerator.MidOpt m = fs.mids().get(i);
+            if (m.bar().equals(m0.bar()) && m.top().bar().equals(m0.top().bar()) && m.top().nc() <= m0.top().nc()
+                    && m.total() <= m0.total() && m.d() <= m0.d() + 1e-9) {
+                weaker.add(midVars.get(fi).get(i));
+            }
+        }
+        parts++;
+        parts += weakerSupports(weaker, fs.lefts(), leftVars.get(fi), c.left());
+        parts += weakerSupports(weaker, fs.rights(), rightVars.get(fi), c.right());
+        model.addLessOrEqual(weaker, parts - 1);
+    }
+
+    private int weakerSupports(LinearExprBuilder weaker, List<BeamGenerator.SupportOpt> opts, List<Literal> vars,
+            BeamGenerator.SupportOpt s0) {
+        if (s0 == null) {
+            return 0;
+        }
+        for (int i = 0; i < opts.size(); i++) {
+            BeamGenerator.SupportOpt s = opts.get(i);
+            if (s.bar().equals(s0.bar()) && s.total() <= s0.total() && s.d() <= s0.d() + 1e-9
+                    && Objects.equals(s.bottomKey(), s0.bottomKey())) {
+                weaker.add(vars.get(i));
+            }
+        }
+        return 1;
+    }
+
+    /** Forbids a frame with given bar sizes (for the next distinct alternatives). */
+    public void exclude(Choice c) {
+        int fi = sets.indexOf(c.set());
+        LinearExprBuilder same = LinearExpr.newBuilder();
+        for (int i = 0; i < c.set().mids().size(); i++) {
+            BeamGenerator.MidOpt m = c.set().mids().get(i);
+            if (m.bar().equals(c.mid().bar()) && m.top().bar().equals(c.mid().top().bar())) {
+                same.add(midVars.get(fi).get(i));
+            }
+        }
+        model.addEquality(same, 0);
+    }
+
+    public Result solve(SolverOptions o, int solves, int cuts) {
+        CpSolver solver = new CpSolver();
+        solver.getParameters().setNumWorkers(Math.max(1, o.workers())).setRandomSeed(o.seed())
+                .setMaxTimeInSeconds(o.timeLimitSeconds()).setLogSearchProgress(false);
+        long t0 = System.nanoTime();
+        CpSolverStatus st = solver.solve(model);
+        double secs = (System.nanoTime() - t0) / 1e9;
+        String status = switch (st) {
+            case OPTIMAL -> "optimal";
+            case FEASIBLE -> "feasible";
+            case INFEASIBLE -> "infeasible";
+            default -> "unknown";
+        };
+        if (!status.equals("optimal") && !status.equals("feasible")) {
+            return new Result(status, null, 0, 0, booleans, solves, cuts, secs);
+        }
+        for (int fi = 0; fi < sets.size(); fi++) {
+            if (!solver.booleanValue(frameVars.get(fi))) {
+                continue;
+            }
+            BeamGenerator.FrameSet fs = sets.get(fi);
+            BeamGenerator.MidOpt mid = pick(solver, midVars.get(fi), fs.mids());
+            BeamGenerator.SupportOpt left = pick(solver, leftVars.get(fi), fs.lefts());
+            BeamGenerator.SupportOpt right = pick(solver, rightVars.get(fi), fs.rights());
+            return new Result(status, new Choice(fs, mid, left, right), Math.round(solver.objectiveValue()),
+                    Math.round(solver.bestObjectiveBound()), booleans, solves, cuts, secs);
+        }
+        throw new IllegalStateException("the solver chose no frame");
+    }
+
+    private static <T> T pick(CpSolver solver, List<Literal> vars, List<T> opts) {
+        for (int i = 0; i < vars.size(); i++) {
+            if (solver.booleanValue(vars.get(i))) {
+                return opts.get(i);
+            }
+        }
+        return null;
+    }
+}

@@ -1,0 +1,164 @@
+package barfit.section;
+
+import barfit.section.trail.Q;
+import barfit.section.trail.Trail;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Checks of a whole span rather than one section: the minimum depth of Table 9.3.1.1, and where the
+ * beam is shallower, its computed deflections (9.3.2, 24.2) against the limits of Table 24.2.2.
+ *
+ * <p>Service moments are the factored ones scaled by the load ratio: Ma = Mu x w / (1.2 D + 1.6 L)
+ * (load combination 5.3.1b), for w = D, D + a sustained part of L, and D + L. The effective moment of
+ * inertia is that of Table 24.2.3.5 at each critical section, averaged over the positive and negative
+ * moment sections of a continuous span (24.2.3.6); the long-term multiplier is that of 24.2.4.1 with
+ * the compression steel at mid-span (at the support of a cantilever).
+ */
+public final class SpanChecks {
+    /** Service line loads, N/mm, and the part of the live load that is sustained (0 to 1). */
+    public record ServiceLoads(double dead, double live, double sustainedLive) {
+    }
+
+    /** Deflection limits as span divisors: immediate live and long-term total (Table 24.2.2). */
+    public record Limits(double live, double total) {
+        public static final Limits DEFAULT = new Limits(360, 240);
+    }
+
+    /** The sections of the span: left and right support sections may be null (simple end, cantilever tip). */
+    public record Sections(BeamSection left, BeamSection mid, BeamSection right) {
+    }
+
+    /** What was found: the checks, and the deflections when they were computed (mm, else null). */
+    public record Result(List<CheckResult> checks, double hMin, Double liveDeflection, Double longTermDeflection) {
+        public boolean ok() {
+            return checks.stream().allMatch(CheckResult::pass);
+        }
+    }
+
+    private SpanChecks() {
+    }
+
+    /** h,min of Table 9.3.1.1 with the fy factor (normal-weight concrete). */
+    public static double minimumDepth(double length, EndCondition ends, Materials m, CodeEquations code) {
+        return length / ends.minDepthDivisor() * (0.4 + m.fy() / code.minDepthFyDivisor());
+    }
+
+    /**
+     * @param mLeft  factored moments (N·mm, signed; null where not given)
+     * @param loads  null when the user gave none
+     */
+    public static Result run(double length, EndCondition ends, Sections s, Double mLeft, Double mMid, Double mRight,
+            ServiceLoads loads, Limits limits, Trail t) {
+        BeamSection any = s.mid() != null ? s.mid() : s.left();
+        Materials m = any.materials();
+        CodeEquations code = any.code();
+        double h = any.shape().height();
+        double hMin = minimumDepth(length, ends, m, code);
+        List<CheckResult> out = new ArrayList<>();
+        if (t.isOn()) {
+            t.heading("Span: minimum depth and deflection", "Table 9.3.1.1, 9.3.2, 24.2");
+            t.step("h,min", "ℓ / " + fmt(ends.minDepthDivisor()) + " × (0.4 + fy / " + (code.inchPound() ? "100000" : "700")
+                    + ")", "{} / " + fmt(ends.minDepthDivisor()) + " × (0.4 + {} / " + (code.inchPound() ? "100000" : "700")
+                    + ")", Q.length(hMin), Q.length(length), Q.stress(m.fy()));
+        }
+        if (h >= hMin - 1e-9) {
+            out.add(CheckResult.atLeast("min_depth", "Minimum depth (" + ends.words() + "); deflection need not be computed",
+                    "Table 9.3.1.1", Q.length(h), Q.length(hMin), null));
+            return new Result(out, hMin, null, null);
+        }
+        if (loads == null) {
+            out.add(CheckResult.rule("deflection", "Deflection not checked: give service loads", "9.3.2, 24.2", false,
+                    Q.length(h), Q.length(hMin), ">=", "h is below Table 9.3.1.1; give service: {dead, live}"));
+            return new Result(out, hMin, null, null);
+        }
+        double wu = 1.2 * loads.dead() + 1.6 * loads.live();
+        double ec = Deflection.ec(m, code);
+        double dD = deflectionAt(length, ends, s, mLeft, mMid, mRight, loads.dead() / wu, ec);
+        double dSus = deflectionAt(length, ends, s, mLeft, mMid, mRight,
+                (loads.dead() + loads.sustainedLive() * loads.live()) / wu, ec);
+        double dDL = deflectionAt(length, ends, s, mLeft, mMid, mRight, (loads.dead() + loads.live()) / wu, ec);
+        double live = dDL - dD;
+        BeamSection rhoSection = ends == EndCondition.CANTILEVER ? s.left() : s.mid();
+        Bending rhoBending = ends == EndCondition.CANTILEVER ? Bending.HOGGING : Bending.SAGGING;
+        double[] comp = faceSteel(rhoSection, rhoBending.compressionFace());
+        double[] tens = faceSteel(rhoSection, rhoBending.tensionFace());
+        double rhoPrime = comp[0] / (rhoSection.shape().width() * Math.max(tens[1], 1e-9));
+        double lambda = Deflection.lambdaDelta(rhoPrime);
+        double longTerm = lambda * dSus + live;
+        if (t.isOn()) {
+            t.value("h", Q.length(h), "below h,min: deflections are computed (9.3.2)");
+            t.step("Ec", code.ec().shown() + " √f'c", code.ec().shown() + " × √{}", Q.stress(ec), Q.stress(m.fc()));
+            t.step("wu", "1.2 D + 1.6 L  (5.3.1b)", "1.2 × {} + 1.6 × {}", Q.lineLoad(wu), Q.lineLoad(loads.dead()),
+                    Q.lineLoad(loads.live()));
+            t.note("Service moments: Ma = Mu × w / wu; Ie of Table 24.2.3.5 at each critical section, averaged "
+                    + "for a continuous span (24.2.3.6).");
+            t.value("Δ(D)", Q.length(dD), "immediate, dead load");
+            t.value("Δ(D + L)", Q.length(dDL), "immediate, dead plus live");
+            t.step("Δ(L)", "Δ(D + L) − Δ(D)", "{} − {}", Q.length(live), Q.length(dDL), Q.length(dD));
+            t.step("λΔ", "2.0 / (1 + 50 ρ')  (24.2.4.1)", "2.0 / (1 + 50 × {})", Q.number(lambda), Q.number(rhoPrime));
+            t.step("Δ(long term)", "λΔ Δ(sustained) + Δ(L)", "{} × {} + {}", Q.length(longTerm), Q.number(lambda),
+                    Q.length(dSus), Q.length(live));
+        }
+        out.add(CheckResult.atMost("deflection_live", "Immediate live-load deflection ≤ ℓ/" + fmt(limits.live()),
+                "9.3.2, Table 24.2.2", Q.length(live), Q.length(length / limits.live()),
+                "h below Table 9.3.1.1, so deflection is computed"));
+        out.add(CheckResult.atMost("deflection_total", "Long-term plus live deflection ≤ ℓ/" + fmt(limits.total()),
+                "9.3.2, 24.2.4, Table 24.2.2", Q.length(longTerm), Q.length(length / limits.total()),
+                "λΔ = " + String.format(java.util.Locale.ROOT, "%.2f", lambda)));
+        return new Result(out, hMin, live, longTerm);
+    }
+
+    /** Area and centroid depth (from the extreme compression fibre of the given bending) of one face's bars. */
+    private static double[] faceSteel(BeamSection s, Face face) {
+        double area = 0;
+        double moment = 0;
+        Bending b = face == Face.BOTTOM ? Bending.SAGGING : Bending.HOGGING;
+        for (BarLayer l : s.layersOn(face)) {
+            area += l.area();
+            moment += l.area() * s.depthFromCompression(l, face == Face.BOTTOM ? Bending.SAGGING : Bending.HOGGING);
+        }
+        return new double[] {area, area > 0 ? moment / area : 0};
+    }
+
+    private static double ieOf(BeamSection s, Bending bending, double ma) {
+        double[] t = faceSteel(s, bending.tensionFace());
+        double[] c = faceSteel(s, bending.compressionFace());
+        // depth of the compression bars from the compression face
+        double dPrime = c[0] > 0 ? s.shape().height() - c[1] : 0;
+        Deflection.Stiffness st = Deflection.stiffness(s.shape(), bending, s.materials(), s.code(), t[0], t[1], c[0],
+                dPrime);
+        return Deflection.ie(ma, st);
+    }
+
+    private static double deflectionAt(double length, EndCondition ends, Sections s, Double mLeft, Double mMid,
+            Double mRight, double ratio, double ec) {
+        double ml = mLeft == null ? 0 : Math.abs(mLeft) * ratio;
+        double mm = mMid == null ? 0 : Math.abs(mMid) * ratio;
+        double mr = mRight == null ? 0 : Math.abs(mRight) * ratio;
+        double ie;
+        switch (ends) {
+            case SIMPLE -> ie = ieOf(s.mid(), Bending.SAGGING, mm);
+            case CANTILEVER -> ie = ieOf(s.left(), Bending.HOGGING, ml);
+            default -> {
+                double iMid = ieOf(s.mid(), Bending.SAGGING, mm);
+                double sum = 0;
+                int k = 0;
+                if (s.left() != null && mLeft != null) {
+                    sum += ieOf(s.left(), Bending.HOGGING, ml);
+                    k++;
+                }
+                if (s.right() != null && mRight != null) {
+                    sum += ieOf(s.right(), Bending.HOGGING, mr);
+                    k++;
+                }
+                ie = k == 0 ? iMid : 0.5 * (iMid + sum / k);
+            }
+        }
+        return Deflection.spanDeflection(ends, length, ec, ie, ml, mm, mr);
+    }
+
+    private static String fmt(double d) {
+        return d == Math.rint(d) ? String.valueOf((long) d) : String.valueOf(d);
+    }
+}
