@@ -11,7 +11,10 @@ import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.report.DesignJson;
+import barfit.report.DesignItem;
 import barfit.report.DesignText;
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamProblem;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -83,16 +86,26 @@ final class DesignCommand implements Callable<Integer> {
         CostModel cost = new CostModel(input.rates(), settings.detailing().cover());
         SectionDesigner designer = new SectionDesigner(cost, new SolverOptions(timeLimit, workers, seed),
                 settings.units());
-        List<DesignOutcome> outcomes = new ArrayList<>();
+        BeamDesigner spans = new BeamDesigner(cost, new SolverOptions(timeLimit, workers, seed), settings.units());
+        List<DesignItem> outcomes = new ArrayList<>();
         for (DesignBeam b : beams) {
-            outcomes.add(designer.design(problem(input, b), alternatives));
+            outcomes.add(b.isWhole() ? DesignItem.of(spans.design(span(input, b), alternatives))
+                    : DesignItem.of(designer.design(problem(input, b), alternatives)));
         }
         String text = format == OutputFormat.json
                 ? DesignJson.render(settings, outcomes, input.currency(), trail)
                 : DesignText.render(settings, outcomes, input.currency(), trail);
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();
-        return outcomes.stream().allMatch(DesignOutcome::feasible) ? Main.OK : Main.FAILED;
+        return outcomes.stream().allMatch(DesignItem::feasible) ? Main.OK : Main.FAILED;
+    }
+
+    static BeamProblem span(DesignInput in, DesignBeam b) {
+        var s = in.settings();
+        var w = b.whole();
+        return new BeamProblem(b.id(), s.materials(), s.detailing(), s.code(), in.space(), b.span().length(),
+                b.span().ends(), w.mLeft(), w.mMid(), w.mRight(), w.vLeft(), w.vRight(), w.service(), w.limits(),
+                b.maxDepth(), b.width(), b.flange(), w.bottomAnchored(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs());
     }
 
     static SectionProblem problem(DesignInput in, DesignBeam b) {

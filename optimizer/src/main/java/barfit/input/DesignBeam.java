@@ -3,12 +3,26 @@ package barfit.input;
 import barfit.catalogs.yaml.Location;
 import barfit.section.Flange;
 import barfit.section.Span;
+import barfit.section.SpanChecks;
 
 /**
- * A beam of a {@code design} file (single section): Mu in N·mm (+ sagging), Vu in N or null, the
- * headroom cap and fixed width in mm or null, the flange, and the span (for the cost over the length
- * and, with ends, the depth rule).
+ * A beam of a {@code design} file. A single section gives Mu in N·mm (+ sagging) and Vu in N or null;
+ * a whole span gives {@code whole} instead. Both carry the headroom cap and fixed width in mm or null,
+ * the flange, and the span (for the cost over the length and, with ends, the depth rule).
  */
 public record DesignBeam(String id, Location location, double mu, Double vu, Double maxDepth, Double width,
-        Flange flange, Span span) {
+        Flange flange, Span span, WholeSpan whole) {
+
+    /**
+     * The parts of a whole span: moments at the left support, mid-span and right support (N·mm, null
+     * where absent), shears at d from each face (N, null where absent), service loads (or null),
+     * deflection limits, and whether the bottom bars are anchored at the supports.
+     */
+    public record WholeSpan(Double mLeft, Double mMid, Double mRight, Double vLeft, Double vRight,
+            SpanChecks.ServiceLoads service, SpanChecks.Limits limits, boolean bottomAnchored) {
+    }
+
+    public boolean isWhole() {
+        return whole != null;
+    }
 }

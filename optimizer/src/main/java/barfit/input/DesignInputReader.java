@@ -1,10 +1,13 @@
 package barfit.input;
 
+import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YamlReader;
 import barfit.design.SearchSpace;
+import barfit.section.EndCondition;
 import barfit.section.Flange;
 import barfit.section.Span;
+import barfit.section.SpanChecks;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import java.nio.file.Path;
@@ -13,9 +16,13 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-/** Reads a {@code design} file: settings, search, costs and beams with their demands and limits. */
+/**
+ * Reads a {@code design} file: settings, search, costs and beams. A beam gives either {@code Mu} (one
+ * section) or {@code moments} (a whole span with its supports).
+ */
 public final class DesignInputReader {
-    static final String[] BEAM_KEYS = {"id", "Mu", "Vu", "max_depth", "width", "flange", "span", "ends"};
+    static final String[] BEAM_KEYS = {"id", "Mu", "Vu", "max_depth", "width", "flange", "span", "ends", "moments",
+        "shear", "service", "deflection_limits", "bottom_anchored_at_supports"};
 
     private DesignInputReader() {
     }
@@ -25,6 +32,8 @@ public final class DesignInputReader {
         Settings settings = SettingsReader.read(doc, file);
         SearchSpace space = SearchReader.read(doc, settings);
         SearchReader.Costs costs = SearchReader.costs(doc, settings);
+        int maxSizes = SearchReader.maxBarSizesPerBeam(doc);
+        int barsPerTwoLegs = SearchReader.barsPerTwoLegs(doc);
         SectionReader sr = new SectionReader(settings);
         UnitSystem u = settings.units();
         List<YFields> beams = doc.listOfMaps("beams", "beams");
@@ -40,10 +49,6 @@ public final class DesignInputReader {
             if (first != null) {
                 throw b.error("id", "beam id \"" + id + "\" is used twice (first at line " + first + "); expected unique ids");
             }
-            double mu = u.toSI(b.number("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)"),
-                    Dim.MOMENT);
-            Double vu = b.has("Vu") ? u.toSI(b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE)), Dim.FORCE)
-                    : null;
             Double cap = sr.optLength(b, "max_depth", "the headroom cap on the total height").orElse(null);
             Double width = sr.optLength(b, "width", "the fixed web width").orElse(null);
             Flange flange = null;
@@ -53,8 +58,131 @@ public final class DesignInputReader {
                 flange = sr.flange(ff, minWeb);
             }
             Span span = sr.span(b);
-            out.add(new DesignBeam(id, b.location(), mu, vu, cap, width, flange, span));
+            boolean whole = b.has("moments");
+            if (whole && b.has("Mu")) {
+                throw b.error("Mu", "give either Mu (one section) or moments (a whole span), not both");
+            }
+            if (!whole) {
+                for (String k : new String[] {"shear", "service", "deflection_limits", "bottom_anchored_at_supports"}) {
+                    if (b.has(k)) {
+                        throw b.error(k, "'" + k + "' belongs to a whole span; expected moments: {left, mid, right} with it");
+                    }
+                }
+                if (!b.has("Mu")) {
+                    throw new InputError(b.location(), b.path() + ": missing key 'Mu'; expected the factored moment, "
+                            + u.unit(Dim.MOMENT) + " (one section), or moments: {left, mid, right} (a whole span)");
+                }
+                double mu = u.toSI(b.number("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)"),
+                        Dim.MOMENT);
+                Double vu = b.has("Vu") ? u.toSI(b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE)), Dim.FORCE)
+                        : null;
+                out.add(new DesignBeam(id, b.location(), mu, vu, cap, width, flange, span, null));
+                continue;
+            }
+            if (b.has("Vu")) {
+                throw b.error("Vu", "a whole span gives its shears as shear: {left, right}, not Vu");
+            }
+            if (span == null || span.ends() == null) {
+                throw new InputError(b.location(), b.path() + ": a whole span needs span: <clear span, "
+                        + u.unit(Dim.SPAN) + "> and ends: simple | one-end-continuous | both-ends-continuous | cantilever");
+            }
+            out.add(new DesignBeam(id, b.location(), 0, null, cap, width, flange, span, whole(b, span.ends(), u)));
         }
-        return new DesignInput(settings, space, costs.rates(), costs.currency(), out);
+        return new DesignInput(settings, space, costs.rates(), costs.currency(), out, maxSizes, barsPerTwoLegs);
+    }
+
+    private static DesignBeam.WholeSpan whole(YFields b, EndCondition ends, UnitSystem u) {
+        YFields m = b.map("moments", "the factored moments {left, mid, right}").allowOnly("left", "mid", "right");
+        String unit = u.unit(Dim.MOMENT);
+        Double left = m.optNumber("left", "the factored moment at the left support, " + unit).map(v -> u.toSI(v, Dim.MOMENT))
+                .orElse(null);
+        Double mid = m.optNumber("mid", "the factored moment at mid-span, " + unit).map(v -> u.toSI(v, Dim.MOMENT))
+                .orElse(null);
+        Double right = m.optNumber("right", "the factored moment at the right support, " + unit)
+                .map(v -> u.toSI(v, Dim.MOMENT)).orElse(null);
+        switch (ends) {
+            case SIMPLE -> {
+                need(m, mid, "mid", "a simple span needs moments: {mid}");
+                forbid(m, left, "left", "a simple span has no support moment; give only mid");
+                forbid(m, right, "right", "a simple span has no support moment; give only mid");
+            }
+            case ONE_END_CONTINUOUS -> {
+                need(m, mid, "mid", "a span continuous at one end needs moments: {mid} and left or right");
+                if ((left == null) == (right == null)) {
+                    throw m.error(left == null ? "left" : "right", "one-end-continuous: expected exactly one support "
+                            + "moment, left or right (the continuous end)");
+                }
+            }
+            case BOTH_ENDS_CONTINUOUS -> {
+                need(m, left, "left", "a span continuous at both ends needs moments: {left, mid, right}");
+                need(m, mid, "mid", "a span continuous at both ends needs moments: {left, mid, right}");
+                need(m, right, "right", "a span continuous at both ends needs moments: {left, mid, right}");
+            }
+            case CANTILEVER -> {
+                need(m, left, "left", "a cantilever is fixed at its left end: give moments: {left}");
+                forbid(m, mid, "mid", "a cantilever is designed at its fixed end: give only moments: {left}");
+                forbid(m, right, "right", "a cantilever is fixed at its left end: give only moments: {left}");
+            }
+        }
+        if (left != null && left > 0) {
+            throw m.error("left", "a support moment is hogging: expected a negative value (top in tension)");
+        }
+        if (right != null && right > 0) {
+            throw m.error("right", "a support moment is hogging: expected a negative value (top in tension)");
+        }
+        if (mid != null && mid < 0) {
+            throw m.error("mid", "the mid-span moment is sagging: expected a positive value (bottom in tension)");
+        }
+        if (left != null && left == 0) {
+            left = null; // a zero support moment is a simple support
+        }
+        if (right != null && right == 0) {
+            right = null;
+        }
+        Double vl = null;
+        Double vr = null;
+        if (b.has("shear")) {
+            YFields v = b.map("shear", "the factored shears at d from the faces {left, right}").allowOnly("left", "right");
+            vl = v.has("left") ? u.toSI(v.nonNegative("left", "the factored shear at the left end, " + u.unit(Dim.FORCE)),
+                    Dim.FORCE) : null;
+            vr = v.has("right") ? u.toSI(v.nonNegative("right", "the factored shear at the right end, "
+                    + u.unit(Dim.FORCE)), Dim.FORCE) : null;
+            if (ends == EndCondition.CANTILEVER && vr != null) {
+                throw v.error("right", "a cantilever has its shear at the fixed (left) end only");
+            }
+        }
+        SpanChecks.ServiceLoads service = null;
+        if (b.has("service")) {
+            YFields s = b.map("service", "service loads {dead, live}").allowOnly("dead", "live", "sustained_live");
+            double dead = u.toSI(s.positive("dead", "service dead load, " + u.unit(Dim.LINE_LOAD)), Dim.LINE_LOAD);
+            double live = u.toSI(s.nonNegative("live", "service live load, " + u.unit(Dim.LINE_LOAD)), Dim.LINE_LOAD);
+            double sus = s.optNumber("sustained_live", "the sustained part of the live load, 0 to 1").orElse(0.0);
+            if (sus < 0 || sus > 1) {
+                throw s.error("sustained_live", "expected the sustained part of the live load from 0 to 1, got "
+                        + SettingsReader.fmt(sus));
+            }
+            service = new SpanChecks.ServiceLoads(dead, live, sus);
+        }
+        SpanChecks.Limits limits = SpanChecks.Limits.DEFAULT;
+        if (b.has("deflection_limits")) {
+            YFields d = b.map("deflection_limits", "deflection limits as span divisors {live, total}")
+                    .allowOnly("live", "total");
+            limits = new SpanChecks.Limits(d.optPositive("live", "span divisor for live-load deflection, e.g. 360")
+                    .orElse(360.0), d.optPositive("total", "span divisor for long-term deflection, e.g. 240").orElse(240.0));
+        }
+        boolean anchored = b.optBool("bottom_anchored_at_supports").orElse(false);
+        return new DesignBeam.WholeSpan(left, mid, right, vl, vr, service, limits, anchored);
+    }
+
+    private static void need(YFields m, Double v, String key, String message) {
+        if (v == null) {
+            throw new InputError(m.location(), m.path() + ": missing " + key + "; " + message);
+        }
+    }
+
+    private static void forbid(YFields m, Double v, String key, String message) {
+        if (v != null) {
+            throw m.error(key, message);
+        }
     }
 }

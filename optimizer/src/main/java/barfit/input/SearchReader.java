@@ -71,7 +71,7 @@ public final class SearchReader {
         UnitSystem u = s.units();
         String len = u.unit(Dim.LENGTH);
         YFields f = doc.map("search", "the search space").allowOnly("widths", "depth", "bar_sizes",
-                "compression_sizes", "max_layers", "stirrups");
+                "compression_sizes", "max_layers", "stirrups", "max_bar_sizes_per_beam");
         List<Double> widths = d.widths();
         if (f.has("widths")) {
             widths = sortedLengths(f, "widths", "web widths, " + len, u);
@@ -95,7 +95,8 @@ public final class SearchReader {
         List<Integer> legs = d.stirrupLegs();
         List<Double> spacings = d.stirrupSpacings();
         if (f.has("stirrups")) {
-            YFields st = f.map("stirrups", "stirrup options {sizes, legs, spacing}").allowOnly("sizes", "legs", "spacing");
+            YFields st = f.map("stirrups", "stirrup options {sizes, legs, spacing}").allowOnly("sizes", "legs", "spacing",
+                    "bars_per_two_legs");
             if (st.has("sizes")) {
                 stirrupSizes = barList(st, "sizes", s.catalog());
             }
@@ -168,6 +169,36 @@ public final class SearchReader {
         }
         out.sort(java.util.Comparator.comparingDouble(BarSize::diameter));
         return out;
+    }
+
+    /** {@code search.max_bar_sizes_per_beam} (default 2): longitudinal bar sizes in one beam. */
+    public static int maxBarSizesPerBeam(YFields doc) {
+        if (!doc.has("search")) {
+            return 2;
+        }
+        YFields f = doc.map("search", "the search space");
+        if (!f.has("max_bar_sizes_per_beam")) {
+            return 2;
+        }
+        int v = f.positiveInt("max_bar_sizes_per_beam", "longitudinal bar sizes in one beam, 1 or 2");
+        if (v > 2) {
+            throw f.error("max_bar_sizes_per_beam", "expected 1 or 2 (a beam's top bars share one size, its bottom "
+                    + "bars another), got " + v);
+        }
+        return v;
+    }
+
+    /** {@code search.stirrups.bars_per_two_legs} (default 4): bars a pair of stirrup legs can hold in a layer. */
+    public static int barsPerTwoLegs(YFields doc) {
+        if (!doc.has("search")) {
+            return 4;
+        }
+        YFields f = doc.map("search", "the search space");
+        if (!f.has("stirrups")) {
+            return 4;
+        }
+        YFields st = f.map("stirrups", "stirrup options");
+        return st.has("bars_per_two_legs") ? st.positiveInt("bars_per_two_legs", "bars a pair of legs holds in a layer") : 4;
     }
 
     /** Rate conversions from US units to the SI rates the cost model holds. */

@@ -19,7 +19,7 @@ public final class DesignJson {
     private DesignJson() {
     }
 
-    public static String render(Settings settings, List<DesignOutcome> outcomes, String currency, boolean trail) {
+    public static String render(Settings settings, List<DesignItem> outcomes, String currency, boolean trail) {
         UnitSystem u = settings.units();
         ObjectNode root = Json.object();
         root.put("units", u.name());
@@ -29,8 +29,8 @@ public final class DesignJson {
         root.put("currency", currency);
         root.put("cost_basis", "per beam when a span is given, otherwise " + Money.perLengthLabel(u));
         ArrayNode arr = root.putArray("beams");
-        for (DesignOutcome o : outcomes) {
-            arr.add(beam(o, u, trail));
+        for (DesignItem o : outcomes) {
+            arr.add(o.section() != null ? beam(o.section(), u, trail) : BeamJson.beam(o.whole(), u, trail));
         }
         return Json.write(root);
     }
@@ -39,6 +39,7 @@ public final class DesignJson {
         var p = o.problem();
         ObjectNode b = Json.object();
         b.put("id", p.id());
+        b.put("kind", "section");
         b.put("status", o.status());
         Json.put(b, "Mu", p.mu(), Dim.MOMENT, u);
         if (p.vu() != null) {

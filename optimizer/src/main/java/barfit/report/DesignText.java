@@ -20,7 +20,7 @@ public final class DesignText {
     private DesignText() {
     }
 
-    public static String render(Settings settings, List<DesignOutcome> outcomes, String currency, boolean trail) {
+    public static String render(Settings settings, List<DesignItem> outcomes, String currency, boolean trail) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
         out.append("barfit design — ").append(settings.file()).append(" — ").append(settings.code().edition()).append('\n');
@@ -29,9 +29,13 @@ public final class DesignText {
                 .append("compare them with your own before relying on a price.\n\n");
         out.append(CheckText.materials(settings)).append('\n');
         int infeasible = 0;
-        for (DesignOutcome o : outcomes) {
+        for (DesignItem o : outcomes) {
             out.append('\n');
-            beam(o, u, currency, trail, out);
+            if (o.section() != null) {
+                beam(o.section(), u, currency, trail, out);
+            } else {
+                BeamText.render(o.whole(), u, currency, trail, out);
+            }
             if (!o.feasible()) {
                 infeasible++;
             }

@@ -74,18 +74,19 @@ public final class SpanChecks {
         }
         double wu = 1.2 * loads.dead() + 1.6 * loads.live();
         double ec = Deflection.ec(m, code);
-        double dD = deflectionAt(length, ends, s, mLeft, mMid, mRight, loads.dead() / wu, ec);
-        double dSus = deflectionAt(length, ends, s, mLeft, mMid, mRight,
-                (loads.dead() + loads.sustainedLive() * loads.live()) / wu, ec);
-        double dDL = deflectionAt(length, ends, s, mLeft, mMid, mRight, (loads.dead() + loads.live()) / wu, ec);
-        double live = dDL - dD;
-        BeamSection rhoSection = ends == EndCondition.CANTILEVER ? s.left() : s.mid();
-        Bending rhoBending = ends == EndCondition.CANTILEVER ? Bending.HOGGING : Bending.SAGGING;
-        double[] comp = faceSteel(rhoSection, rhoBending.compressionFace());
-        double[] tens = faceSteel(rhoSection, rhoBending.tensionFace());
-        double rhoPrime = comp[0] / (rhoSection.shape().width() * Math.max(tens[1], 1e-9));
+        double[] ratios = ratios(loads);
+        double[] ieL = s.left() != null && mLeft != null ? ieLevels(s.left(), Bending.HOGGING, mLeft, ratios) : null;
+        double[] ieM = s.mid() != null && mMid != null ? ieLevels(s.mid(), Bending.SAGGING, mMid, ratios) : null;
+        double[] ieR = s.right() != null && mRight != null ? ieLevels(s.right(), Bending.HOGGING, mRight, ratios) : null;
+        double rhoPrime = rhoPrime(ends == EndCondition.CANTILEVER ? s.left() : s.mid(),
+                ends == EndCondition.CANTILEVER ? Bending.HOGGING : Bending.SAGGING);
+        double[] dl = deflections(length, ends, ec, mLeft, mMid, mRight, ratios, ieL, ieM, ieR, rhoPrime);
+        double dD = dl[0];
+        double dSus = dl[1];
+        double dDL = dl[2];
+        double live = dl[3];
         double lambda = Deflection.lambdaDelta(rhoPrime);
-        double longTerm = lambda * dSus + live;
+        double longTerm = dl[4];
         if (t.isOn()) {
             t.value("h", Q.length(h), "below h,min: deflections are computed (9.3.2)");
             t.step("Ec", code.ec().shown() + " √f'c", code.ec().shown() + " × √{}", Q.stress(ec), Q.stress(m.fc()));
@@ -121,6 +122,73 @@ public final class SpanChecks {
         return new double[] {area, area > 0 ? moment / area : 0};
     }
 
+    /** Service-to-factored moment ratios for dead, sustained (dead plus the sustained live part) and total load. */
+    public static double[] ratios(ServiceLoads loads) {
+        double wu = 1.2 * loads.dead() + 1.6 * loads.live();
+        return new double[] {loads.dead() / wu, (loads.dead() + loads.sustainedLive() * loads.live()) / wu,
+            (loads.dead() + loads.live()) / wu};
+    }
+
+    /** Ie of Table 24.2.3.5 of one section at each of the three service levels. */
+    public static double[] ieLevels(BeamSection s, Bending bending, double mu, double[] ratios) {
+        double[] out = new double[ratios.length];
+        for (int i = 0; i < ratios.length; i++) {
+            out[i] = ieOf(s, bending, Math.abs(mu) * ratios[i]);
+        }
+        return out;
+    }
+
+    /** ρ' of 24.2.4.1: compression steel over b d of a section. */
+    public static double rhoPrime(BeamSection s, Bending bending) {
+        double[] comp = faceSteel(s, bending.compressionFace());
+        double[] tens = faceSteel(s, bending.tensionFace());
+        return comp[0] / (s.shape().width() * Math.max(tens[1], 1e-9));
+    }
+
+    /**
+     * The deflections {dead, sustained, dead + live, live, long-term + live} of a span from the Ie of its
+     * sections at each level (null for an absent section). Stiffer sections (larger Ie) or more
+     * compression steel (larger ρ') never give larger deflections, so optimistic Ie values give a lower
+     * bound: what a search may use to discard layouts that cannot pass.
+     */
+    public static double[] deflections(double length, EndCondition ends, double ec, Double mLeft, Double mMid,
+            Double mRight, double[] ratios, double[] ieLeft, double[] ieMid, double[] ieRight, double rhoPrime) {
+        double[] d = new double[3];
+        for (int i = 0; i < 3; i++) {
+            double ml = mLeft == null ? 0 : Math.abs(mLeft) * ratios[i];
+            double mm = mMid == null ? 0 : Math.abs(mMid) * ratios[i];
+            double mr = mRight == null ? 0 : Math.abs(mRight) * ratios[i];
+            double ie;
+            switch (ends) {
+                case SIMPLE -> ie = ieMid[i];
+                case CANTILEVER -> ie = ieLeft[i];
+                default -> {
+                    double sum = 0;
+                    int k = 0;
+                    if (ieLeft != null) {
+                        sum += ieLeft[i];
+                        k++;
+                    }
+                    if (ieRight != null) {
+                        sum += ieRight[i];
+                        k++;
+                    }
+                    ie = k == 0 ? ieMid[i] : 0.5 * (ieMid[i] + sum / k);
+                }
+            }
+            d[i] = Deflection.spanDeflection(ends, length, ec, ie, ml, mm, mr);
+        }
+        double live = d[2] - d[0];
+        double longTerm = Deflection.lambdaDelta(rhoPrime) * d[1] + live;
+        return new double[] {d[0], d[1], d[2], live, longTerm};
+    }
+
+    /** Whether deflections pass the limits. */
+    public static boolean within(double length, Limits limits, double[] deflections) {
+        return CheckResult.within(deflections[3], length / limits.live())
+                && CheckResult.within(deflections[4], length / limits.total());
+    }
+
     private static double ieOf(BeamSection s, Bending bending, double ma) {
         double[] t = faceSteel(s, bending.tensionFace());
         double[] c = faceSteel(s, bending.compressionFace());
@@ -129,33 +197,6 @@ public final class SpanChecks {
         Deflection.Stiffness st = Deflection.stiffness(s.shape(), bending, s.materials(), s.code(), t[0], t[1], c[0],
                 dPrime);
         return Deflection.ie(ma, st);
-    }
-
-    private static double deflectionAt(double length, EndCondition ends, Sections s, Double mLeft, Double mMid,
-            Double mRight, double ratio, double ec) {
-        double ml = mLeft == null ? 0 : Math.abs(mLeft) * ratio;
-        double mm = mMid == null ? 0 : Math.abs(mMid) * ratio;
-        double mr = mRight == null ? 0 : Math.abs(mRight) * ratio;
-        double ie;
-        switch (ends) {
-            case SIMPLE -> ie = ieOf(s.mid(), Bending.SAGGING, mm);
-            case CANTILEVER -> ie = ieOf(s.left(), Bending.HOGGING, ml);
-            default -> {
-                double iMid = ieOf(s.mid(), Bending.SAGGING, mm);
-                double sum = 0;
-                int k = 0;
-                if (s.left() != null && mLeft != null) {
-                    sum += ieOf(s.left(), Bending.HOGGING, ml);
-                    k++;
-                }
-                if (s.right() != null && mRight != null) {
-                    sum += ieOf(s.right(), Bending.HOGGING, mr);
-                    k++;
-                }
-                ie = k == 0 ? iMid : 0.5 * (iMid + sum / k);
-            }
-        }
-        return Deflection.spanDeflection(ends, length, ec, ie, ml, mm, mr);
     }
 
     private static String fmt(double d) {

@@ -70,6 +70,11 @@ public final class BeamDesigner {
             }
             BeamSelection.Choice c = r.choice();
             BeamLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
+            if (c.set().frame().deflection() && !BeamVerifier.deflectionOk(p, layout)) {
+                sel.cutDeflection(c);
+                cuts++;
+                continue;
+            }
             BeamReport report = BeamVerifier.verify(p, layout, true);
             if (!report.ok()) {
                 if (report.okApartFromDeflection()) {
@@ -99,16 +104,41 @@ public final class BeamDesigner {
     /** The checks working hardest in the chosen span, and the headroom cap when the height sits at it. */
     private List<Binding> binding(BeamProblem p, Design d) {
         List<Binding> out = new ArrayList<>();
-        for (CheckResult c : d.report().all()) {
-            if (c.pass() && c.ratio() >= 0.95 && Double.isFinite(c.ratio()) && !c.id().startsWith("cover")
-                    && !c.id().startsWith("layer_gap") && !c.id().startsWith("stirrup_legs_bars")) {
-                out.add(new Binding(c.id(), "ratio " + String.format(java.util.Locale.ROOT, "%.2f", c.ratio())));
+        for (var e : d.report().sections().entrySet()) {
+            String where = switch (e.getKey()) {
+                case LEFT -> "left support ";
+                case MID -> "mid-span ";
+                case RIGHT -> "right support ";
+            };
+            for (CheckResult c : e.getValue().checks()) {
+                if (tight(c)) {
+                    out.add(new Binding(where + c.id(), ratio(c)));
+                }
+            }
+        }
+        for (CheckResult c : d.report().zoneChecks()) {
+            if (tight(c)) {
+                out.add(new Binding(c.id(), ratio(c)));
+            }
+        }
+        for (CheckResult c : d.report().span().checks()) {
+            if (tight(c)) {
+                out.add(new Binding(c.id(), ratio(c)));
             }
         }
         if (p.maxDepth() != null && d.layout().height() >= p.maxDepth() - 1e-9) {
             out.add(new Binding("headroom", "h = max_depth"));
         }
         return out;
+    }
+
+    private static boolean tight(CheckResult c) {
+        return c.pass() && Double.isFinite(c.ratio()) && c.ratio() >= 0.95 && !c.id().startsWith("cover")
+                && !c.id().startsWith("layer_gap") && !c.id().startsWith("stirrup_legs_bars");
+    }
+
+    private static String ratio(CheckResult c) {
+        return String.format(java.util.Locale.ROOT, "%.2f", c.ratio());
     }
 
     private boolean feasible(BeamProblem q) {

@@ -92,6 +92,8 @@ public final class BeamGenerator {
     private final StirrupChooser chooser;
     private final List<BeamProblem.Zone> zones;
     private final double lm;
+    /** Zone stirrups depend only on the zone, the tension bars (d, As) and the legs asked for: remembered per frame. */
+    private final Map<String, Stirrups> zoneMemo = new HashMap<>();
 
     public BeamGenerator(BeamProblem problem, CostModel cost) {
         this.p = problem;
@@ -128,7 +130,7 @@ public final class BeamGenerator {
                 break;
             }
             evaluated++;
-            FrameSet fs = evaluate(f);
+            FrameSet fs = evaluate(f, incumbent);
             if (fs == null) {
                 continue;
             }
@@ -257,13 +259,88 @@ public final class BeamGenerator {
         return checks.stream().allMatch(CheckResult::pass);
     }
 
-    private FrameSet evaluate(Frame f) {
+    private FrameSet evaluate(Frame f, double incumbent) {
+        zoneMemo.clear();
         SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
         BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
         if (!framePasses(f, shape, smallest, smallest, 1)) {
             return null; // cover, flange width or skin rules fail for this frame whatever the bars
         }
         List<TopOpt> tops = tops(f);
+        if (p.bottomAnchored() || f.deflection()) {
+            return everything(f, shape, tops);
+        }
+        // supports first (they do not depend on the other options), then the mid-span options for two
+        // continuous bars, then more continuous bars only where a bound says they could pay
+        Map<String, List<BeamSection.BarGroup>> none = new LinkedHashMap<>();
+        none.put(null, List.of());
+        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), 0, none)
+                : List.of();
+        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), 0, none)
+                : List.of();
+        List<TopOpt> first = tops.stream().filter(t -> t.nc() == 2).toList();
+        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first));
+        FrameSet fs = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        double cut = Math.min(incumbent, fs.best());
+        for (TopOpt t : tops) {
+            if (t.nc() == 2) {
+                continue;
+            }
+            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
+                    + cheapestAbove(rights, t, p.rightSupport());
+            if (lb < cut) {
+                mids.addAll(mids(f, shape, List.of(t)));
+            }
+        }
+        return enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+    }
+
+    /** The cheapest support option of the top option's size holding its continuous bars (0 if no support). */
+    private static double cheapestAbove(List<SupportOpt> opts, TopOpt t, boolean present) {
+        if (!present) {
+            return 0;
+        }
+        double best = Double.POSITIVE_INFINITY;
+        for (SupportOpt s : opts) {
+            if (s.bar().equals(t.bar()) && s.counts().get(0) >= t.nc()) {
+                best = Math.min(best, s.cost());
+            }
+        }
+        return best;
+    }
+
+    /**
+     * A lower bound on the mid-span option cost for a top option: the least bottom area any layout
+     * could carry Mu with (the section model's strength bound, with the continuous bars as compression
+     * steel), priced per size, plus the cheapest stirrups of the mid-span zones.
+     */
+    private double bottomLowerBound(Frame f, TopOpt t) {
+        double widest = p.flange() != null ? p.flange().width() : f.b();
+        double fc = p.materials().fc();
+        double fy = p.materials().fy();
+        double comp = t.nc() * t.bar().area();
+        double dp = f.det().firstLayerCentroid(t.bar().diameter());
+        double best = Double.POSITIVE_INFINITY;
+        for (BarSize bb : p.space().barSizes()) {
+            double dMax = f.h() - f.det().firstLayerCentroid(bb.diameter());
+            double ceiling = (0.85 * fc * widest * dMax + comp * fy) / fy;
+            double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy, ceiling);
+            if (Double.isInfinite(area)) {
+                continue;
+            }
+            int n = Math.max(2, (int) Math.ceil(area / bb.area() - 1e-9));
+            best = Math.min(best, barCost(bb, n, p.span()));
+        }
+        double widestSpacing = p.space().stirrupSpacings().get(p.space().stirrupSpacings().size() - 1);
+        Stirrups lean = new Stirrups(f.ds(), p.space().stirrupLegs().get(0), widestSpacing);
+        for (int zi : zoneIndices(BeamProblem.Place.MID)) {
+            best += stirrupCost(f.b(), f.h(), lean, zones.get(zi));
+        }
+        return best;
+    }
+
+    /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
+    private FrameSet everything(Frame f, SectionShape shape, List<TopOpt> tops) {
         List<MidOpt> mids = mids(f, shape, tops);
         Map<String, List<BeamSection.BarGroup>> bottoms = new LinkedHashMap<>();
         if (p.bottomAnchored()) {
@@ -275,12 +352,17 @@ public final class BeamGenerator {
         } else {
             bottoms.put(null, List.of());
         }
-        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), f.extLeft(),
-                bottoms) : List.of();
-        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(),
-                f.extRight(), bottoms) : List.of();
-        FrameSet fs = new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null);
-        return enumerate(fs);
+        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), 0, bottoms)
+                : List.of();
+        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), 0, bottoms)
+                : List.of();
+        if (f.deflection()) {
+            DeflectionScreen screen = new DeflectionScreen(f, shape, mids, lefts, rights);
+            mids = screen.mids();
+            lefts = screen.lefts();
+            rights = screen.rights();
+        }
+        return enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
     }
 
     private List<TopOpt> tops(Frame f) {
@@ -360,7 +442,7 @@ public final class BeamGenerator {
                             boolean ok = true;
                             for (int zi : midZones) {
                                 BeamProblem.Zone z = zones.get(zi);
-                                Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(), legs, z.length());
+                                Stirrups st = zoneStirrups(shape, f, zi, bb, split, legs, d, as);
                                 if (st == null) {
                                     ok = false;
                                     break;
@@ -387,6 +469,18 @@ public final class BeamGenerator {
             }
         }
         return out;
+    }
+
+    private Stirrups zoneStirrups(SectionShape shape, Frame f, int zone, BarSize tension, int[] counts, int legs, double d,
+            double as) {
+        String key = zone + "|" + tension.designation() + java.util.Arrays.toString(counts) + "|" + legs;
+        if (zoneMemo.containsKey(key)) {
+            return zoneMemo.get(key);
+        }
+        BeamProblem.Zone z = zones.get(zone);
+        Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(), legs, z.length());
+        zoneMemo.put(key, st);
+        return st;
     }
 
     /** More than any choice of stirrups over the whole span could cost (the most legs, the closest spacing). */
@@ -462,7 +556,7 @@ public final class BeamGenerator {
                                 boolean ok = true;
                                 for (int zi : myZones) {
                                     BeamProblem.Zone z = zones.get(zi);
-                                    Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(), legs, z.length());
+                                    Stirrups st = zoneStirrups(shape, f, zi, t, split, legs, d, as);
                                     if (st == null) {
                                         ok = false;
                                         break;
@@ -481,6 +575,167 @@ public final class BeamGenerator {
             }
         }
         return out;
+    }
+
+    /**
+     * Below Table 9.3.1.1: drops the options that fail deflection even with the stiffest partners the
+     * frame offers (the largest Ie of every other section at every load level, the most compression
+     * steel), a bound the section model's deflection functions make safe. What remains is settled by the
+     * CP-SAT model's deflection cuts.
+     */
+    private final class DeflectionScreen {
+        private final List<MidOpt> mids = new ArrayList<>();
+        private final List<SupportOpt> lefts = new ArrayList<>();
+        private final List<SupportOpt> rights = new ArrayList<>();
+
+        DeflectionScreen(Frame f, SectionShape shape, List<MidOpt> allMids, List<SupportOpt> allLefts,
+                List<SupportOpt> allRights) {
+            double[] ratios = SpanChecks.ratios(p.service());
+            double ec = barfit.section.Deflection.ec(p.materials(), p.code());
+            Map<MidOpt, double[]> midIe = new HashMap<>();
+            Map<MidOpt, Double> midRho = new HashMap<>();
+            for (MidOpt m : allMids) {
+                BeamSection s = midSection(f, shape, m);
+                midIe.put(m, p.cantilever() ? null : SpanChecks.ieLevels(s, Bending.SAGGING, p.mMid(), ratios));
+                midRho.put(m, p.cantilever() ? 0.0 : SpanChecks.rhoPrime(s, Bending.SAGGING));
+            }
+            Map<SupportOpt, double[]> leftIe = new HashMap<>();
+            Map<SupportOpt, double[]> rightIe = new HashMap<>();
+            Map<SupportOpt, Double> leftRho = new HashMap<>();
+            for (SupportOpt l : allLefts) {
+                BeamSection s = supportSection(f, shape, l);
+                leftIe.put(l, SpanChecks.ieLevels(s, Bending.HOGGING, p.mLeft(), ratios));
+                leftRho.put(l, SpanChecks.rhoPrime(s, Bending.HOGGING));
+            }
+            for (SupportOpt r : allRights) {
+                rightIe.put(r, SpanChecks.ieLevels(supportSection(f, shape, r), Bending.HOGGING, p.mRight(), ratios));
+            }
+            for (MidOpt m : allMids) {
+                String tt = m.top().bar().designation();
+                double[] l = best(leftIe, tt);
+                double[] r = best(rightIe, tt);
+                double rho = p.cantilever() ? bestRho(leftRho, tt) : midRho.get(m);
+                if (passes(ec, ratios, l, midIe.get(m), r, rho)) {
+                    mids.add(m);
+                }
+            }
+            for (SupportOpt l : allLefts) {
+                String tt = l.bar().designation();
+                double[] mi = bestMid(midIe, tt);
+                double rho = p.cantilever() ? leftRho.get(l) : bestMidRho(midRho, tt);
+                if (passes(ec, ratios, leftIe.get(l), mi, best(rightIe, tt), rho)) {
+                    lefts.add(l);
+                }
+            }
+            for (SupportOpt r : allRights) {
+                String tt = r.bar().designation();
+                if (passes(ec, ratios, best(leftIe, tt), bestMid(midIe, tt), rightIe.get(r), bestMidRho(midRho, tt))) {
+                    rights.add(r);
+                }
+            }
+        }
+
+        private boolean passes(double ec, double[] ratios, double[] l, double[] m, double[] r, double rho) {
+            if ((p.leftSupport() && l == null) || (p.rightSupport() && r == null) || (p.midSection() && m == null)) {
+                return false;
+            }
+            double[] d = SpanChecks.deflections(p.span(), p.ends(), ec, p.mLeft(), p.mMid(), p.mRight(), ratios,
+                    p.leftSupport() ? l : null, m, p.rightSupport() ? r : null, rho);
+            return SpanChecks.within(p.span(), p.limits(), d);
+        }
+
+        private double[] best(Map<SupportOpt, double[]> ie, String tt) {
+            double[] out = null;
+            for (Map.Entry<SupportOpt, double[]> e : ie.entrySet()) {
+                if (e.getKey().bar().designation().equals(tt)) {
+                    out = max(out, e.getValue());
+                }
+            }
+            return out;
+        }
+
+        private double[] bestMid(Map<MidOpt, double[]> ie, String tt) {
+            double[] out = null;
+            for (Map.Entry<MidOpt, double[]> e : ie.entrySet()) {
+                if (e.getValue() != null && e.getKey().top().bar().designation().equals(tt)) {
+                    out = max(out, e.getValue());
+                }
+            }
+            return out;
+        }
+
+        private double bestMidRho(Map<MidOpt, Double> rho, String tt) {
+            double out = 0;
+            for (Map.Entry<MidOpt, Double> e : rho.entrySet()) {
+                if (e.getKey().top().bar().designation().equals(tt)) {
+                    out = Math.max(out, e.getValue());
+                }
+            }
+            return out;
+        }
+
+        private double bestRho(Map<SupportOpt, Double> rho, String tt) {
+            double out = 0;
+            for (Map.Entry<SupportOpt, Double> e : rho.entrySet()) {
+                if (e.getKey().bar().designation().equals(tt)) {
+                    out = Math.max(out, e.getValue());
+                }
+            }
+            return out;
+        }
+
+        private double[] max(double[] a, double[] b) {
+            if (a == null) {
+                return b.clone();
+            }
+            for (int i = 0; i < a.length; i++) {
+                a[i] = Math.max(a[i], b[i]);
+            }
+            return a;
+        }
+
+        List<MidOpt> mids() {
+            return mids;
+        }
+
+        List<SupportOpt> lefts() {
+            return lefts;
+        }
+
+        List<SupportOpt> rights() {
+            return rights;
+        }
+    }
+
+    private List<BeamSection.BarGroup> groups(BarSize bar, List<Integer> counts) {
+        List<BeamSection.BarGroup> g = new ArrayList<>();
+        counts.forEach(c -> g.add(new BeamSection.BarGroup(bar, c)));
+        return g;
+    }
+
+    private BeamSection midSection(Frame f, SectionShape shape, MidOpt m) {
+        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM, groups(m.bar(), m.counts()),
+                f.det()));
+        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(m.top().bar(),
+                m.top().nc())), f.det()));
+        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
+    }
+
+    private BeamSection supportSection(Frame f, SectionShape shape, SupportOpt s) {
+        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP, groups(s.bar(), s.counts()),
+                f.det()));
+        if (s.bottomKey() != null) {
+            // the bottom bars the option was built with: its key is "<size>[counts]"
+            String key = s.bottomKey();
+            BarSize bb = p.space().barSizes().stream().filter(b -> key.startsWith(b.designation() + "["))
+                    .findFirst().orElseThrow();
+            List<Integer> counts = new ArrayList<>();
+            for (String part : key.substring(key.indexOf('[') + 1, key.length() - 1).split(",")) {
+                counts.add(Integer.parseInt(part.strip()));
+            }
+            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, groups(bb, counts), f.det()));
+        }
+        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
     }
 
     // ------------------------------------------------------------------ combining and bounding

@@ -9,7 +9,8 @@ import java.util.Map;
 
 /** The full verification of a span: each flexural section, each stirrup zone, and the span checks. */
 public record BeamReport(Map<BeamProblem.Place, CheckReport> sections, List<CheckResult> zoneChecks,
-        SpanChecks.Result span, barfit.section.trail.Trail zoneTrail) {
+        SpanChecks.Result span, barfit.section.trail.Trail zoneTrail,
+        barfit.section.trail.Trail spanTrail) {
 
     public List<CheckResult> all() {
         List<CheckResult> out = new ArrayList<>();

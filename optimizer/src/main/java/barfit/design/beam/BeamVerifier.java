@@ -50,9 +50,20 @@ public final class BeamVerifier {
                 p.leftSupport() ? l.section(p, BeamProblem.Place.LEFT, null) : null,
                 p.midSection() ? l.section(p, BeamProblem.Place.MID, null) : null,
                 p.rightSupport() ? l.section(p, BeamProblem.Place.RIGHT, null) : null);
+        Trail st = withTrail ? Trail.recording() : Trail.off();
         SpanChecks.Result spanResult = SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(),
-                p.service(), p.limits(), withTrail ? Trail.recording() : Trail.off());
-        return new BeamReport(sections, zoneChecks, spanResult, zt);
+                p.service(), p.limits(), st);
+        return new BeamReport(sections, zoneChecks, spanResult, zt, st);
+    }
+
+    /** The span's depth and deflection checks alone (what the deflection cuts need). */
+    public static boolean deflectionOk(BeamProblem p, BeamLayout l) {
+        SpanChecks.Sections ss = new SpanChecks.Sections(
+                p.leftSupport() ? l.section(p, BeamProblem.Place.LEFT, null) : null,
+                p.midSection() ? l.section(p, BeamProblem.Place.MID, null) : null,
+                p.rightSupport() ? l.section(p, BeamProblem.Place.RIGHT, null) : null);
+        return SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(), p.service(), p.limits(),
+                Trail.off()).ok();
     }
 
     private static CheckReport check(BeamProblem p, BeamLayout l, BeamProblem.Place place, Double mu, Span span,

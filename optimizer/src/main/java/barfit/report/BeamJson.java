@@ -1,0 +1,172 @@
+package barfit.report;
+
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.section.CheckReport;
+import barfit.section.CheckResult;
+import barfit.section.FlexureResult;
+import barfit.section.LayerResult;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/** The JSON of one whole span in {@code barfit design}. */
+public final class BeamJson {
+    private BeamJson() {
+    }
+
+    public static ObjectNode beam(BeamDesigner.Outcome o, UnitSystem u, boolean trail) {
+        BeamProblem p = o.problem();
+        ObjectNode b = Json.object();
+        b.put("id", p.id());
+        b.put("kind", "span");
+        b.put("status", o.status());
+        Json.put(b, "span", p.span(), Dim.SPAN, u);
+        b.put("ends", p.ends().key());
+        if (p.maxDepth() != null) {
+            Json.put(b, "max_depth", p.maxDepth(), Dim.LENGTH, u);
+        }
+        if (!o.feasible()) {
+            ObjectNode dn = b.putObject("diagnosis");
+            dn.put("limit", o.diagnosis().limit());
+            dn.put("summary", o.diagnosis().summary());
+            ArrayNode fixes = dn.putArray("fixes");
+            o.diagnosis().fixes().forEach(fixes::add);
+            return b;
+        }
+        design(b, o.best(), p, u, trail);
+        ArrayNode bind = b.putArray("binding");
+        o.binding().forEach(x -> {
+            ObjectNode bo = bind.addObject();
+            bo.put("check", x.limit());
+            bo.put("when", x.when());
+        });
+        ArrayNode alts = b.putArray("alternatives");
+        for (BeamDesigner.Design d : o.alternatives()) {
+            design(alts.addObject(), d, p, u, false);
+        }
+        var pr = o.proof();
+        ObjectNode proof = b.putObject("proof");
+        proof.put("solver", "CP-SAT");
+        proof.put("status", pr.status());
+        proof.put("basis", "per span");
+        proof.put("objective", pr.objective() / 1e6);
+        proof.put("bound", pr.bound() / 1e6);
+        proof.put("gap", pr.gap());
+        proof.put("booleans", pr.booleans());
+        proof.put("frames", pr.frames());
+        proof.put("frames_evaluated", pr.framesEvaluated());
+        proof.put("frames_skipped_by_bound", pr.framesSkipped());
+        proof.put("solves", pr.solves());
+        proof.put("deflection_cuts", pr.deflectionCuts());
+        proof.put("workers", pr.workers());
+        proof.put("seed", pr.seed());
+        b.putNull("diagnosis");
+        return b;
+    }
+
+    private static ObjectNode layers(String face, barfit.catalogs.BarSize bar, List<Integer> counts) {
+        ObjectNode t = Json.object();
+        t.put("face", face);
+        ArrayNode arr = t.putArray("layers");
+        for (int c : counts) {
+            ObjectNode x = arr.addObject();
+            x.put("bar", bar.designation());
+            x.put("count", c);
+        }
+        return t;
+    }
+
+    static void design(ObjectNode o, BeamDesigner.Design d, BeamProblem p, UnitSystem u, boolean trail) {
+        BeamLayout l = d.layout();
+        Json.put(o, "width", l.width(), Dim.LENGTH, u);
+        Json.put(o, "height", l.height(), Dim.LENGTH, u);
+        o.set("bottom", layers("bottom", l.bottom(), l.bottomCounts()));
+        ObjectNode top = o.putObject("top");
+        top.put("bar", l.top().designation());
+        top.put("continuous", l.topContinuous());
+        if (l.topLeft() != null) {
+            top.set("left", layers("top", l.top(), l.topLeft()).get("layers"));
+            Json.put(top, "left_extension", l.extLeft(), Dim.SPAN, u);
+        }
+        if (l.topRight() != null) {
+            top.set("right", layers("top", l.top(), l.topRight()).get("layers"));
+            Json.put(top, "right_extension", l.extRight(), Dim.SPAN, u);
+        }
+        ArrayNode sections = o.putArray("sections");
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            ObjectNode s = sections.addObject();
+            s.put("at", e.getKey().name().toLowerCase(Locale.ROOT));
+            FlexureResult f = e.getValue().flexure();
+            var bending = f.bending();
+            ArrayNode tl = Json.array();
+            ArrayNode cl = Json.array();
+            for (LayerResult lr : f.layers()) {
+                ObjectNode x = (lr.layer().face() == bending.tensionFace() ? tl : cl).addObject();
+                x.put("bar", lr.layer().bar().designation());
+                x.put("count", lr.layer().count());
+            }
+            ObjectNode tension = s.putObject("tension");
+            tension.put("face", bending.tensionFace().word());
+            tension.set("layers", tl);
+            ObjectNode compression = s.putObject("compression");
+            compression.put("face", bending.compressionFace().word());
+            compression.set("layers", cl);
+            Json.put(s, "phi_Mn", f.phiMn(), Dim.MOMENT, u);
+            Json.put(s, "Mu", e.getValue().demand().mu(), Dim.MOMENT, u);
+            s.put("eps_t", CheckJson.round(f.epsT()));
+            Json.putRatio(s, "phi", f.phi());
+            ArrayNode checks = s.putArray("checks");
+            for (CheckResult c : e.getValue().checks()) {
+                checks.add(CheckJson.check(c, u));
+            }
+            if (trail) {
+                s.set("trail", Json.trail(e.getValue().trail(), u));
+            }
+        }
+        ArrayNode stirrups = o.putArray("stirrups");
+        List<BeamProblem.Zone> zones = p.zones();
+        for (int i = 0; i < zones.size(); i++) {
+            ObjectNode z = stirrups.addObject();
+            var s = l.zoneStirrups().get(i);
+            z.put("zone", zones.get(i).name());
+            z.put("bar", s.bar().designation());
+            z.put("legs", s.legs());
+            Json.put(z, "spacing", s.spacing(), Dim.LENGTH, u);
+            Json.put(z, "from", zones.get(i).from(), Dim.SPAN, u);
+            Json.put(z, "to", zones.get(i).to(), Dim.SPAN, u);
+            if (zones.get(i).vu() != null) {
+                Json.put(z, "Vu", zones.get(i).vu(), Dim.FORCE, u);
+            }
+        }
+        ArrayNode zoneChecks = o.putArray("zone_checks");
+        d.report().zoneChecks().forEach(c -> zoneChecks.add(CheckJson.check(c, u)));
+        var sr = d.report().span();
+        ObjectNode defl = o.putObject("deflection");
+        Json.put(defl, "h_min", sr.hMin(), Dim.LENGTH, u);
+        defl.put("computed", sr.liveDeflection() != null);
+        if (sr.liveDeflection() != null) {
+            Json.put(defl, "live", sr.liveDeflection(), Dim.LENGTH, u);
+            Json.put(defl, "live_limit", p.span() / p.limits().live(), Dim.LENGTH, u);
+            Json.put(defl, "long_term", sr.longTermDeflection(), Dim.LENGTH, u);
+            Json.put(defl, "long_term_limit", p.span() / p.limits().total(), Dim.LENGTH, u);
+        }
+        ArrayNode spanChecks = defl.putArray("checks");
+        sr.checks().forEach(c -> spanChecks.add(CheckJson.check(c, u)));
+        ArrayNode bars = o.putArray("bars");
+        for (BeamLayout.BarMark m : d.bars()) {
+            ObjectNode x = bars.addObject();
+            x.put("mark", m.mark());
+            x.put("role", m.role());
+            x.put("bar", m.bar().designation());
+            x.put("count", m.count());
+            Json.put(x, "length", m.length(), Dim.SPAN, u);
+        }
+        o.set("cost", DesignJson.cost(d.cost()));
+    }
+}

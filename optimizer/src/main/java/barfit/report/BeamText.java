@@ -1,0 +1,222 @@
+package barfit.report;
+
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.section.CheckReport;
+import barfit.section.CheckResult;
+import barfit.section.FlexureResult;
+import barfit.section.SpanChecks;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/** The terminal block of one whole span in {@code barfit design}. */
+public final class BeamText {
+    private BeamText() {
+    }
+
+    static String len(double mm, UnitSystem u) {
+        return u.compact(mm, Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+    }
+
+    static String span(double mm, UnitSystem u) {
+        return u.number(mm, Dim.SPAN) + " " + u.unit(Dim.SPAN);
+    }
+
+    static String counts(List<Integer> counts, String label) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < counts.size(); i++) {
+            sb.append(i == 0 ? "" : " + ").append(counts.get(i)).append(' ').append(label);
+        }
+        return sb.toString();
+    }
+
+    static String where(BeamProblem.Place place) {
+        return switch (place) {
+            case LEFT -> "left support";
+            case MID -> "mid-span";
+            case RIGHT -> "right support";
+        };
+    }
+
+    public static void render(BeamDesigner.Outcome o, UnitSystem u, String currency, boolean trail, StringBuilder out) {
+        BeamProblem p = o.problem();
+        out.append("Beam ").append(p.id()).append("   span ").append(span(p.span(), u)).append(", ")
+                .append(p.ends().words());
+        if (p.maxDepth() != null) {
+            out.append("   max depth ").append(len(p.maxDepth(), u));
+        }
+        out.append("   ").append(o.status().toUpperCase(Locale.ROOT)).append('\n');
+        if (!o.feasible()) {
+            var d = o.diagnosis();
+            out.append("  no layout in the search space passes.\n");
+            out.append("  binding limit: ").append(d.limit()).append(" — ").append(d.summary()).append('\n');
+            out.append(d.fixes().isEmpty() ? "  no single relaxed limit (depth, width) gives a passing layout\n"
+                    : "  what would work (one limit at a time): " + String.join("; ", d.fixes()) + "\n");
+            return;
+        }
+        BeamDesigner.Design d = o.best();
+        BeamLayout l = d.layout();
+        TextTable t = new TextTable(false, false);
+        t.row("demand", demand(p, u));
+        t.row("section", Words.shape(l.shape(), u) + (l.flange() != null ? " (flange counted at mid-span)" : ""));
+        t.row("bottom", counts(l.bottomCounts(), l.bottom().label()) + ", full span"
+                + (p.bottomAnchored() ? ", anchored at the supports (compression steel there)" : ""));
+        if (p.cantilever()) {
+            t.row("top", counts(l.topLeft(), l.top().label()) + ", full length");
+        } else {
+            t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span (compression steel at mid-span)");
+            if (p.leftSupport()) {
+                t.row("top at left", counts(l.topLeft(), l.top().label()) + "; the " + (BeamLayout.sum(l.topLeft())
+                        - l.topContinuous()) + " extra bars run " + span(l.extLeft(), u) + " past the face ("
+                        + extensionRule(p, l) + ")");
+            }
+            if (p.rightSupport()) {
+                t.row("top at right", counts(l.topRight(), l.top().label()) + "; the " + (BeamLayout.sum(l.topRight())
+                        - l.topContinuous()) + " extra bars run " + span(l.extRight(), u) + " past the face ("
+                        + extensionRule(p, l) + ")");
+            }
+        }
+        List<BeamProblem.Zone> zones = p.zones();
+        for (int i = 0; i < zones.size(); i++) {
+            BeamProblem.Zone z = zones.get(i);
+            var s = l.zoneStirrups().get(i);
+            t.row(i == 0 ? "stirrups" : "", z.name() + " zone " + span(z.from(), u) + "–" + span(z.to(), u) + ": "
+                    + Words.stirrups(s, u) + " (" + BeamLayout.stirrupSets(z.length(), s.spacing()) + " sets"
+                    + (z.vu() == null ? ", minimum" : ", Vu = " + u.withUnit(z.vu(), Dim.FORCE)) + ")");
+        }
+        boolean firstSection = true;
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            FlexureResult f = e.getValue().flexure();
+            double mu = e.getValue().demand().mu();
+            t.row(firstSection ? "sections" : "", where(e.getKey()) + ": Mu = " + u.withUnit(Math.abs(mu), Dim.MOMENT)
+                    + ", φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " (ratio " + Words.ratio(Math.abs(mu) / f.phiMn())
+                    + "), εt = " + Words.fixed(f.epsT(), 5) + ", φ = " + Words.fixed(f.phi(), 3));
+            firstSection = false;
+        }
+        t.row("deflection", deflection(d.report().span(), p, u));
+        t.row("binding", binding(o.binding()));
+        String cur = currency.isEmpty() ? "" : " (" + currency + ")";
+        t.row("cost" + cur, Money.breakdown(d.cost()) + "  for the span");
+        t.row("proof", proof(o.proof()));
+        t.write("  ", out);
+        out.append("  bar list:\n");
+        TextTable bars = new TextTable(false, false, true, false, true);
+        bars.row("mark", "role", "count", "bar", "length (" + u.unit(Dim.SPAN) + ")");
+        for (BeamLayout.BarMark b : d.bars()) {
+            bars.row(b.mark(), b.role(), String.valueOf(b.count()), b.bar().label(), u.number(b.length(), Dim.SPAN));
+        }
+        bars.write("    ", out);
+        if (!o.alternatives().isEmpty()) {
+            out.append("  alternatives (next cheapest distinct section or bar sizes):\n");
+            TextTable a = new TextTable(false, false, true, true);
+            int k = 1;
+            for (BeamDesigner.Design alt : o.alternatives()) {
+                BeamLayout al = alt.layout();
+                a.row("#" + k++, u.compact(al.width(), Dim.LENGTH) + " × " + u.compact(al.height(), Dim.LENGTH)
+                        + "  bottom " + counts(al.bottomCounts(), al.bottom().label()) + "  top " + al.top().label(),
+                        Money.amount(alt.cost().total()),
+                        String.format(Locale.ROOT, "+%.1f %%", 100 * (alt.cost().total() - d.cost().total()) / d.cost().total()));
+            }
+            a.write("    ", out);
+        }
+        if (trail) {
+            out.append("\n  Checks of the chosen span (section model)\n");
+            TextTable ct = new TextTable(false, false, false, true, false, true, true, false);
+            for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+                for (CheckResult c : e.getValue().checks()) {
+                    ct.row(where(e.getKey()), c.title(), c.clause(), Words.value(c.demand(), u),
+                            c.sense().equals("<=") ? "≤" : "≥", Words.value(c.limit(), u), Words.ratio(c.ratio()),
+                            c.pass() ? "ok" : "FAIL");
+                }
+            }
+            for (CheckResult c : d.report().zoneChecks()) {
+                ct.row("zones", c.title(), c.clause(), Words.value(c.demand(), u), c.sense().equals("<=") ? "≤" : "≥",
+                        Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
+            }
+            for (CheckResult c : d.report().span().checks()) {
+                ct.row("span", c.title(), c.clause(), Words.value(c.demand(), u), c.sense().equals("<=") ? "≤" : "≥",
+                        Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
+            }
+            ct.write("    ", out);
+            for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+                out.append("\n  Calculation trail, ").append(where(e.getKey())).append('\n');
+                TrailText.write(e.getValue().trail(), u, "    ", out);
+            }
+            out.append("\n  Calculation trail, stirrup zones\n");
+            TrailText.write(d.report().zoneTrail(), u, "    ", out);
+            out.append("\n  Calculation trail, span\n");
+            TrailText.write(d.report().spanTrail(), u, "    ", out);
+        }
+    }
+
+    static String binding(List<barfit.design.Binding> bs) {
+        if (bs.isEmpty()) {
+            return "no check above 0.95 of its limit";
+        }
+        StringBuilder sb = new StringBuilder();
+        for (var b : bs) {
+            sb.append(sb.length() == 0 ? "" : ", ").append(b.limit()).append(" (").append(b.when()).append(')');
+        }
+        return sb.toString();
+    }
+
+    static String extensionRule(BeamProblem p, BeamLayout l) {
+        var det = l.detailing(p.detailing());
+        return barfit.design.beam.Extension.of(p, l.width(), l.height(), det, l.top()).rule();
+    }
+
+    static String demand(BeamProblem p, UnitSystem u) {
+        StringBuilder sb = new StringBuilder("Mu");
+        if (p.mLeft() != null) {
+            sb.append(" left ").append(u.withUnit(p.mLeft(), Dim.MOMENT));
+        }
+        if (p.mMid() != null) {
+            sb.append(" mid ").append(u.withUnit(p.mMid(), Dim.MOMENT));
+        }
+        if (p.mRight() != null) {
+            sb.append(" right ").append(u.withUnit(p.mRight(), Dim.MOMENT));
+        }
+        if (p.vLeft() != null || p.vRight() != null) {
+            sb.append(";  Vu");
+            if (p.vLeft() != null) {
+                sb.append(" left ").append(u.withUnit(p.vLeft(), Dim.FORCE));
+            }
+            if (p.vRight() != null) {
+                sb.append(" right ").append(u.withUnit(p.vRight(), Dim.FORCE));
+            }
+        }
+        if (p.service() != null) {
+            sb.append(";  service D ").append(u.withUnit(p.service().dead(), Dim.LINE_LOAD)).append(", L ")
+                    .append(u.withUnit(p.service().live(), Dim.LINE_LOAD));
+        }
+        return sb.toString();
+    }
+
+    static String deflection(SpanChecks.Result r, BeamProblem p, UnitSystem u) {
+        if (r.liveDeflection() == null) {
+            return "not computed: h ≥ h,min = " + len(r.hMin(), u) + " of Table 9.3.1.1";
+        }
+        return "computed (h < h,min = " + len(r.hMin(), u) + "): live " + u.withUnit(r.liveDeflection(), Dim.LENGTH)
+                + " ≤ ℓ/" + fmt(p.limits().live()) + " = " + u.withUnit(p.span() / p.limits().live(), Dim.LENGTH)
+                + "; long-term + live " + u.withUnit(r.longTermDeflection(), Dim.LENGTH) + " ≤ ℓ/" + fmt(p.limits().total())
+                + " = " + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
+    }
+
+    private static String fmt(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+
+    static String proof(BeamDesigner.Proof p) {
+        return "CP-SAT " + p.status() + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective() / 1e6)
+                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound() / 1e6) + ", gap "
+                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over " + p.booleans() + " booleans; "
+                + p.framesEvaluated() + " of " + p.frames() + " frames evaluated, " + p.framesSkipped()
+                + " skipped by the cost bound; " + p.solves() + (p.solves() == 1 ? " solve" : " solves")
+                + (p.deflectionCuts() > 0 ? ", " + p.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
+                + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
+    }
+}
