@@ -50,6 +50,26 @@ class DesignExamplesTest {
                 "stirrups", "cost", "binding", "alternatives", "proof"}) {
                 assertTrue(b.has(key), "beam JSON has " + key);
             }
+            if (b.get("kind").asText().equals("span")) {
+                for (String key : new String[] {"sections", "deflection", "bars", "zone_checks"}) {
+                    assertTrue(b.has(key), "span JSON has " + key);
+                }
+                for (JsonNode s : b.get("sections")) {
+                    for (String key : new String[] {"at", "tension", "compression", "phi_Mn", "Mu", "eps_t", "phi", "checks"}) {
+                        assertTrue(s.has(key), "section JSON has " + key);
+                    }
+                }
+                for (JsonNode z : b.get("stirrups")) {
+                    for (String key : new String[] {"zone", "bar", "legs", "spacing", "from", "to"}) {
+                        assertTrue(z.has(key), "stirrup zone JSON has " + key);
+                    }
+                }
+                for (JsonNode m : b.get("bars")) {
+                    for (String key : new String[] {"mark", "bar", "count", "length"}) {
+                        assertTrue(m.has(key), "bar mark JSON has " + key);
+                    }
+                }
+            }
             for (String key : new String[] {"total", "concrete", "main_bars", "stirrups", "formwork", "depth_premium"}) {
                 assertTrue(b.get("cost").has(key), "cost has " + key);
             }

@@ -82,6 +82,10 @@ public final class BeamJson {
         return t;
     }
 
+    private static double ratio(CheckReport r) {
+        return Math.abs(r.demand().mu()) / r.flexure().phiMn();
+    }
+
     static void design(ObjectNode o, BeamDesigner.Design d, BeamProblem p, UnitSystem u, boolean trail) {
         BeamLayout l = d.layout();
         Json.put(o, "width", l.width(), Dim.LENGTH, u);
@@ -97,6 +101,13 @@ public final class BeamJson {
         if (l.topRight() != null) {
             top.set("right", layers("top", l.top(), l.topRight()).get("layers"));
             Json.put(top, "right_extension", l.extRight(), Dim.SPAN, u);
+        }
+        // the single-section fields at span level: those of the section with the highest Mu / phi Mn
+        Map.Entry<BeamProblem.Place, CheckReport> governing = null;
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            if (governing == null || ratio(e.getValue()) > ratio(governing.getValue())) {
+                governing = e;
+            }
         }
         ArrayNode sections = o.putArray("sections");
         for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
@@ -127,6 +138,16 @@ public final class BeamJson {
             }
             if (trail) {
                 s.set("trail", Json.trail(e.getValue().trail(), u));
+            }
+        }
+        if (governing != null) {
+            for (var node : sections) {
+                if (node.get("at").asText().equals(governing.getKey().name().toLowerCase(Locale.ROOT))) {
+                    o.put("governing_section", node.get("at").asText());
+                    for (String k : new String[] {"tension", "compression", "phi_Mn", "Mu", "eps_t", "phi"}) {
+                        o.set(k, node.get(k));
+                    }
+                }
             }
         }
         ArrayNode stirrups = o.putArray("stirrups");

@@ -1,0 +1,66 @@
+package barfit.design.beam;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import barfit.design.CostModel;
+import barfit.design.SolverOptions;
+import barfit.units.UnitSystem;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+
+/** Properties of whole-span answers on seeded random beams. */
+class BeamPropertiesTest {
+    private final BeamDesigner designer = new BeamDesigner(BeamOracleTest.COST, new SolverOptions(30, 1, 1),
+            UnitSystem.SI);
+
+    private long cost(BeamProblem p) {
+        var o = designer.design(p, 0);
+        return o.feasible() ? CostModel.units(o.best().cost().total()) : Long.MAX_VALUE;
+    }
+
+    @Test
+    void largerMomentsOrShearsNeverCostLess() {
+        Random r = new Random(44);
+        for (int i = 0; i < 40; i++) {
+            BeamProblem p = RandomBeams.small(r);
+            long base = cost(p);
+            assertTrue(cost(p.scaled(1.25, 1.0)) >= base, "moments x1.25 cost less: " + p);
+            if (p.vLeft() != null) {
+                assertTrue(cost(p.scaled(1.0, 1.4)) >= base, "shears x1.4 cost less: " + p);
+            }
+        }
+    }
+
+    @Test
+    void everyPrintedSpanPassesAndTheProofIsTight() {
+        Random r = new Random(45);
+        int seen = 0;
+        for (int i = 0; i < 40; i++) {
+            BeamProblem p = RandomBeams.small(r);
+            var o = designer.design(p, 2);
+            if (!o.feasible()) {
+                assertTrue(o.diagnosis() != null);
+                continue;
+            }
+            seen++;
+            assertTrue(BeamVerifier.verify(p, o.best().layout(), false).ok());
+            assertEquals("optimal", o.status());
+            assertEquals(o.proof().objective(), o.proof().bound());
+            for (var alt : o.alternatives()) {
+                assertTrue(alt.report().ok());
+                assertTrue(alt.cost().total() >= o.best().cost().total() - 1e-6);
+            }
+            // the bar list accounts for the cost of the bars
+            double main = 0;
+            for (var m : o.best().bars()) {
+                if (!m.mark().startsWith("S")) {
+                    main += m.count() * m.length() / 1000 * m.bar().massPerMetre();
+                }
+            }
+            double rates = BeamOracleTest.COST.rates().mainBarsPerKg() * BeamOracleTest.COST.rates().lapFactor();
+            assertEquals(o.best().cost().mainBars(), main * rates, 1e-6);
+        }
+        assertTrue(seen > 20);
+    }
+}
