@@ -250,8 +250,14 @@ public final class CandidateGenerator {
         List<Comp> comps = new ArrayList<>();
         for (BarSize c : compressionSizes) {
             int mmax = BarSpacing.maxBars(f.b(), f.det(), c, p.materials(), p.code());
+            if (p.space().hangersOnly()) {
+                mmax = Math.min(mmax, 2);
+            }
             for (int m = 2; m <= mmax; m++) {
                 comps.add(new Comp(c, m, cost.bars(c, m)));
+            }
+            if (p.space().hangersOnly()) {
+                break; // the lightest size only
             }
         }
         comps.sort(Comparator.comparingDouble(Comp::cost).thenComparingDouble(x -> x.bar().diameter())

@@ -15,7 +15,14 @@ public record SearchSpace(
         int maxLayers,
         List<BarSize> stirrupSizes,
         List<Integer> stirrupLegs,
-        List<Double> stirrupSpacings) {
+        List<Double> stirrupSpacings,
+        boolean hangersOnly) {
+
+    /** A space whose compression layer may be anything from the compression sizes. */
+    public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
+            int maxLayers, List<BarSize> stirrupSizes, List<Integer> stirrupLegs, List<Double> stirrupSpacings) {
+        this(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings, false);
+    }
 
     public SearchSpace {
         widths = List.copyOf(widths);
@@ -29,21 +36,32 @@ public record SearchSpace(
 
     public SearchSpace withWidths(List<Double> w) {
         return new SearchSpace(w, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings);
+                stirrupSpacings, hangersOnly);
     }
 
     public SearchSpace withDepths(List<Double> d) {
         return new SearchSpace(widths, d, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings);
+                stirrupSpacings, hangersOnly);
     }
 
     public SearchSpace withBarSizes(List<BarSize> bars, List<BarSize> comp) {
-        return new SearchSpace(widths, depths, bars, comp, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings);
+        return new SearchSpace(widths, depths, bars, comp, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
+                hangersOnly);
     }
 
     public SearchSpace withMaxLayers(int layers) {
         return new SearchSpace(widths, depths, barSizes, compressionSizes, layers, stirrupSizes, stirrupLegs,
-                stirrupSpacings);
+                stirrupSpacings, hangersOnly);
+    }
+
+    /**
+     * The same space with the compression layer limited to the minimum hangers: two bars of the lightest
+     * compression size (for a whole span, two continuous top bars). A design found in it needs no
+     * compression steel beyond the hangers.
+     */
+    public SearchSpace withHangersOnly() {
+        return new SearchSpace(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
+                stirrupSpacings, true);
     }
 
     /** Number of (width, depth, stirrup size) frames before any cap. */

@@ -88,7 +88,7 @@ public final class DesignInputReader {
             }
             out.add(new DesignBeam(id, b.location(), 0, null, cap, width, flange, span, whole(b, span.ends(), u)));
         }
-        return new DesignInput(settings, space, costs.rates(), costs.currency(), out, maxSizes, barsPerTwoLegs);
+        return new DesignInput(settings, space, costs.rates(), costs.currency(), out, maxSizes, barsPerTwoLegs, costs);
     }
 
     private static DesignBeam.WholeSpan whole(YFields b, EndCondition ends, UnitSystem u) {

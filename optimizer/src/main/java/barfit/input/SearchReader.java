@@ -7,6 +7,7 @@ import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YList;
 import barfit.catalogs.yaml.YNode;
 import barfit.catalogs.yaml.YScalar;
+import barfit.catalogs.yaml.YMap;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
 import barfit.section.trail.Dim;
@@ -206,14 +207,52 @@ public final class SearchReader {
     private static final double LB_PER_KG = 1.0 / 0.45359237;
     private static final double FT2_PER_M2 = 1.0 / (0.3048 * 0.3048);
 
-    public record Costs(CostRates rates, String currency) {
+    /**
+     * The rates, the currency label, and the concrete rate per f'c (MPa -> per m³) for studies of
+     * stronger concrete: the user's {@code concrete_per_m3_by_fc} (per yd³ by psi in US input), or an
+     * invented default table scaled to the file's rate at the file's f'c.
+     */
+    public record Costs(CostRates rates, String currency, java.util.NavigableMap<Double, Double> concreteByFc,
+            boolean concreteByFcGiven) {
+        /** The concrete rate at f'c (MPa), interpolated linearly between given grades; NaN outside them. */
+        public double concreteAt(double fc) {
+            var lo = concreteByFc.floorEntry(fc + 1e-9);
+            var hi = concreteByFc.ceilingEntry(fc - 1e-9);
+            if (lo == null || hi == null) {
+                return Double.NaN;
+            }
+            if (hi.getKey() - lo.getKey() < 1e-9) {
+                return lo.getValue();
+            }
+            return lo.getValue() + (hi.getValue() - lo.getValue()) * (fc - lo.getKey()) / (hi.getKey() - lo.getKey());
+        }
+    }
+
+    /** Invented relative prices of concrete by grade (MPa -> factor on 28 MPa), for trying the tool only. */
+    private static final double[][] GRADE_FACTORS = {{17, 0.90}, {21, 0.94}, {25, 0.97}, {28, 1.00}, {32, 1.04},
+        {35, 1.08}, {40, 1.15}, {45, 1.22}, {50, 1.30}, {55, 1.38}, {60, 1.46}, {70, 1.62}, {80, 1.80}};
+
+    private static java.util.NavigableMap<Double, Double> defaultByFc(double fc, double rate) {
+        java.util.TreeMap<Double, Double> rel = new java.util.TreeMap<>();
+        for (double[] g : GRADE_FACTORS) {
+            rel.put(g[0], g[1]);
+        }
+        var lo = rel.floorEntry(fc);
+        var hi = rel.ceilingEntry(fc);
+        double at = lo == null ? hi.getValue() : hi == null ? lo.getValue() : hi.getKey().equals(lo.getKey())
+                ? lo.getValue() : lo.getValue() + (hi.getValue() - lo.getValue()) * (fc - lo.getKey()) / (hi.getKey() - lo.getKey());
+        java.util.TreeMap<Double, Double> out = new java.util.TreeMap<>();
+        for (var e : rel.entrySet()) {
+            out.put(e.getKey(), rate * e.getValue() / at);
+        }
+        return out;
     }
 
     public static Costs costs(YFields doc, Settings s) {
         boolean us = s.units() == UnitSystem.US;
         CostRates d = CostRates.DEFAULTS;
         if (!doc.has("costs")) {
-            return new Costs(d, "");
+            return new Costs(d, "", defaultByFc(s.materials().fc(), d.concretePerM3()), false);
         }
         String[] keys = us
                 ? new String[] {"concrete_per_yd3", "main_bars_per_lb", "stirrups_per_lb", "formwork_per_ft2",
@@ -236,7 +275,34 @@ public final class SearchReader {
             throw f.error("lap_factor", "expected a lap and waste factor from 1.0 to 2.0, got " + SettingsReader.fmt(lap));
         }
         String currency = f.optText("currency", "a currency label such as EUR").orElse("");
-        return new Costs(new CostRates(concrete, bars, stirrups, formwork, premium, lap), currency);
+        String byKey = keys[7];
+        java.util.NavigableMap<Double, Double> byFc;
+        boolean given = f.has(byKey);
+        if (given) {
+            YFields g = f.map(byKey, "concrete rates by f'c: {" + (us ? "4000: 120, 5000: 128" : "28: 150, 35: 162") + "}");
+            java.util.TreeMap<Double, Double> m = new java.util.TreeMap<>();
+            for (var e : g.map().entries()) {
+                double grade;
+                try {
+                    grade = Double.parseDouble(e.key());
+                } catch (NumberFormatException ex) {
+                    throw new InputError(e.keyLocation(), g.path() + ": expected f'c values as keys, in "
+                            + s.units().unit(Dim.STRESS) + ", got '" + e.key() + "'");
+                }
+                double price = YFields.numberOf(e.value(), g.child(e.key()), "a rate >= 0");
+                if (price < 0 || grade <= 0) {
+                    throw new InputError(e.value().location(), g.child(e.key()) + ": expected a positive f'c and a rate >= 0");
+                }
+                m.put(s.units().toSI(grade, Dim.STRESS), us ? price * YD3_PER_M3 : price);
+            }
+            if (m.isEmpty()) {
+                throw f.error(byKey, "expected at least one f'c with its rate");
+            }
+            byFc = m;
+        } else {
+            byFc = defaultByFc(s.materials().fc(), concrete);
+        }
+        return new Costs(new CostRates(concrete, bars, stirrups, formwork, premium, lap), currency, byFc, given);
     }
 
     private static Optional<Double> rate(YFields f, String key, String what) {

@@ -369,7 +369,7 @@ public final class BeamGenerator {
         List<TopOpt> out = new ArrayList<>();
         for (BarSize t : p.space().barSizes()) {
             int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
-            int ncMax = p.cantilever() ? Math.min(2, nmax) : nmax;
+            int ncMax = p.cantilever() || p.space().hangersOnly() ? Math.min(2, nmax) : nmax;
             double extL = p.leftSupport() ? Extension.of(p, f.b(), f.h(), f.det(), t).length() : 0;
             double extR = p.rightSupport() ? Extension.of(p, f.b(), f.h(), f.det(), t).length() : 0;
             double run = Math.max(0, p.span() - extL - extR);

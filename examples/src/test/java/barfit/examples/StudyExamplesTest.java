@@ -1,0 +1,71 @@
+package barfit.examples;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The studies example: compare and sweep run as the README shows, and the sweep plot committed beside
+ * the example is regenerated here on every test run, so it cannot go stale.
+ */
+class StudyExamplesTest {
+    static final String FILE = "studies/transfer-girder-si.yaml";
+    static final Path PLOT = Path.of("studies/transfer-girder-sweep.svg");
+
+    @Test
+    void compareGivesEveryOptionAndARecommendation() throws Exception {
+        Run text = Run.of("compare", FILE);
+        assertEquals(0, text.exit(), text.err());
+        assertTrue(text.out().contains("recommended:"));
+        Run json = Run.of("compare", FILE, "--format", "json");
+        JsonNode beam = new ObjectMapper().readTree(json.out()).get("beams").get(0);
+        java.util.Set<String> kinds = new java.util.HashSet<>();
+        for (JsonNode o : beam.get("options")) {
+            kinds.add(o.get("kind").asText());
+            for (String key : new String[] {"kind", "feasible", "height", "width", "cost", "compression_steel_needed",
+                "tension", "compression", "phi_Mn", "eps_t", "phi"}) {
+                assertTrue(o.has(key), o.get("kind") + " has " + key);
+            }
+        }
+        assertEquals(java.util.Set.of("at_cap", "deepen", "no_compression_steel", "widen", "fc"), kinds);
+        assertTrue(beam.has("recommended"));
+        assertEquals(text.out(), Run.of("compare", FILE).out(), "same input, same output");
+    }
+
+    @Test
+    void sweepRegeneratesTheCommittedPlot() throws Exception {
+        Run json = Run.of("sweep", FILE, "--format", "json");
+        assertEquals(0, json.exit(), json.err());
+        JsonNode beam = new ObjectMapper().readTree(json.out()).get("beams").get(0);
+        for (String key : new String[] {"id", "points", "shallowest_feasible", "compression_needed_below"}) {
+            assertTrue(beam.has(key), "sweep JSON has " + key);
+        }
+        double previous = Double.POSITIVE_INFINITY;
+        for (JsonNode p : beam.get("points")) {
+            for (String key : new String[] {"cap", "feasible", "cost"}) {
+                assertTrue(p.has(key));
+            }
+            if (p.get("feasible").asBoolean()) {
+                assertTrue(p.get("cost").asDouble() <= previous + 1e-9, "cost never rises with the cap");
+                previous = p.get("cost").asDouble();
+            }
+        }
+        Run plot = Run.of("sweep", FILE, "--plot", PLOT.toString(), "--force");
+        assertEquals(0, plot.exit(), plot.err());
+        String svg = Files.readString(PLOT);
+        var factory = DocumentBuilderFactory.newInstance();
+        factory.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
+        var doc = factory.newDocumentBuilder().parse(PLOT.toFile());
+        assertEquals("svg", doc.getDocumentElement().getNodeName());
+        assertTrue(svg.contains("Beam TG-1"));
+        assertTrue(svg.contains("shallowest feasible"));
+        Run csv = Run.of("sweep", FILE, "--csv");
+        assertTrue(csv.out().startsWith("beam,cap_mm,feasible,cost"));
+    }
+}

@@ -1,0 +1,121 @@
+package barfit.cli;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.Location;
+import barfit.design.SolverOptions;
+import barfit.input.DesignInput;
+import barfit.input.DesignInputReader;
+import barfit.report.StudyJson;
+import barfit.report.StudyText;
+import barfit.section.trail.Dim;
+import barfit.study.Compare;
+import barfit.study.Target;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+@Command(name = "compare", mixinStandardHelpOptions = true,
+        description = "Price 'deepen or add compression steel' for each beam under its headroom cap: the cheapest "
+                + "design at the cap, with the cap lifted, at the shallowest depth needing no compression steel, wider, "
+                + "and with stronger concrete, side by side, with a recommendation.%n"
+                + "Exit code 0 when the beams have a passing option, 1 when one has none, 2 for bad input.")
+final class CompareCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "YAML input of barfit design (see examples/studies/)")
+    Path file;
+
+    @Option(names = "--beam", paramLabel = "ID", description = "study only this beam")
+    String beam;
+
+    @Option(names = "--cap", paramLabel = "DEPTH", description = "headroom cap to study (mm or in; default: the beam's max_depth)")
+    Double cap;
+
+    @Option(names = "--max-width", paramLabel = "WIDTH", description = "widest web for the widen option (default: two "
+            + "width steps beyond the search's widest)")
+    Double maxWidth;
+
+    @Option(names = "--fc", paramLabel = "FC", split = ",", description = "concrete strengths to try (MPa or psi), e.g. 35,40")
+    List<Double> fcs;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    OutputFormat format;
+
+    @Option(names = "--workers", defaultValue = "1", description = "CP-SAT workers (default: ${DEFAULT-VALUE})")
+    int workers;
+
+    @Option(names = "--seed", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
+    int seed;
+
+    @Override
+    public Integer call() {
+        DesignInput in = DesignInputReader.read(file);
+        var u = in.settings().units();
+        SolverOptions options = new SolverOptions(60, Math.max(1, workers), seed);
+        Double capMm = cap == null ? null : Studies.depthWithinSearch(in, "--cap", cap);
+        List<Double> widths = in.space().widths();
+        double widest = widths.get(widths.size() - 1);
+        double step = Compare.widthStep(widths, u == barfit.units.UnitSystem.US ? 50.8 : 50);
+        double maxW = maxWidth == null ? widest + 2 * step : u.toSI(maxWidth, Dim.LENGTH);
+        if (maxWidth != null && !(maxW > widest)) {
+            throw new InputError(Location.ofFile("--max-width"), "expected a width greater than the search's widest ("
+                    + u.compact(widest, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + "), got " + Studies.fmt(maxWidth));
+        }
+        List<Double> fcMpa = new ArrayList<>();
+        List<Double> asked = fcs;
+        if (asked == null) {
+            asked = new ArrayList<>();
+            double[] grades = u == barfit.units.UnitSystem.US ? new double[] {5000, 6000, 8000} : new double[] {35, 40, 50};
+            for (double g : grades) {
+                if (u.toSI(g, Dim.STRESS) > in.settings().materials().fc() + 1e-6) {
+                    asked.add(g);
+                }
+            }
+        }
+        for (double v : asked) {
+            double mpa = u.toSI(v, Dim.STRESS);
+            double lo = u == barfit.units.UnitSystem.US ? 2500 : 17;
+            double hi = u == barfit.units.UnitSystem.US ? 20000 : 140;
+            if (v < lo || v > hi) {
+                throw new InputError(Location.ofFile("--fc"), "expected f'c between " + Studies.fmt(lo) + " and "
+                        + Studies.fmt(hi) + " " + u.unit(Dim.STRESS) + ", got " + Studies.fmt(v));
+            }
+            if (Double.isNaN(in.costs().concreteAt(mpa))) {
+                throw new InputError(Location.ofFile("--fc"), "no concrete rate for f'c = " + Studies.fmt(v) + " "
+                        + u.unit(Dim.STRESS) + "; expected it within the grades of costs."
+                        + (u == barfit.units.UnitSystem.US ? "concrete_per_yd3_by_fc" : "concrete_per_m3_by_fc"));
+            }
+            fcMpa.add(mpa);
+        }
+        List<Target> targets = Studies.targets(in, beam, file, options);
+        List<Compare.Result> results = new ArrayList<>();
+        List<Boolean> perBeam = new ArrayList<>();
+        Compare.Say say = new Compare.Say() {
+            @Override
+            public String length(double mm) {
+                return u.compact(mm, Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+            }
+
+            @Override
+            public String stress(double mpa) {
+                return u.compact(mpa, Dim.STRESS) + " " + u.unit(Dim.STRESS);
+            }
+        };
+        for (Target t : targets) {
+            results.add(Compare.run(t, capMm, maxW, step, fcMpa, Studies.cost(in), fc -> Studies.costAtFc(in, fc), say));
+            perBeam.add(t.costPerBeam());
+        }
+        String text = format == OutputFormat.json ? StudyJson.compare(in.settings(), results, perBeam)
+                : StudyText.compare(in.settings(), results, perBeam, in.currency());
+        spec.commandLine().getOut().print(text);
+        spec.commandLine().getOut().flush();
+        return results.stream().allMatch(r -> r.recommended() != null) ? Main.OK : Main.FAILED;
+    }
+}

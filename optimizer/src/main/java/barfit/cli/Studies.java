@@ -1,0 +1,70 @@
+package barfit.cli;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.Location;
+import barfit.design.CostModel;
+import barfit.design.CostRates;
+import barfit.design.SolverOptions;
+import barfit.input.DesignBeam;
+import barfit.input.DesignInput;
+import barfit.section.trail.Dim;
+import barfit.study.SectionTarget;
+import barfit.study.SpanTarget;
+import barfit.study.Target;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+/** What compare and sweep share: the beams of a design file as study targets, and option checks. */
+final class Studies {
+    private Studies() {
+    }
+
+    static List<Target> targets(DesignInput in, String beam, Path file, SolverOptions options) {
+        List<DesignBeam> beams = in.beams();
+        if (beam != null) {
+            beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
+            if (beams.isEmpty()) {
+                throw new InputError(Location.ofFile(file.toString()), "--beam " + beam + ": no beam with that id; "
+                        + "expected one of: " + String.join(", ", in.beams().stream().map(DesignBeam::id).toList()));
+            }
+        }
+        List<Target> out = new ArrayList<>();
+        for (DesignBeam b : beams) {
+            out.add(b.isWhole() ? new SpanTarget(DesignCommand.span(in, b), options, in.settings().units())
+                    : new SectionTarget(DesignCommand.problem(in, b), options, in.settings().units()));
+        }
+        return out;
+    }
+
+    static CostModel cost(DesignInput in) {
+        return new CostModel(in.rates(), in.settings().detailing().cover());
+    }
+
+    /** The cost model with the concrete rate for another f'c (MPa). */
+    static CostModel costAtFc(DesignInput in, double fc) {
+        double rate = in.costs().concreteAt(fc);
+        CostRates r = in.rates();
+        return new CostModel(new CostRates(rate, r.mainBarsPerKg(), r.stirrupsPerKg(), r.formworkPerM2(),
+                r.depthPremiumPerM(), r.lapFactor()), in.settings().detailing().cover());
+    }
+
+    /** A length option in the user's units, checked to lie within the search's depths. */
+    static double depthWithinSearch(DesignInput in, String option, double userValue) {
+        var u = in.settings().units();
+        double mm = u.toSI(userValue, Dim.LENGTH);
+        List<Double> depths = in.space().depths();
+        double lo = depths.get(0);
+        double hi = depths.get(depths.size() - 1);
+        if (!(mm >= lo - 1e-6 && mm <= hi + 1e-6)) {
+            throw new InputError(Location.ofFile(option), "expected a depth within the search range "
+                    + u.compact(lo, Dim.LENGTH) + " to " + u.compact(hi, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ", got "
+                    + fmt(userValue));
+        }
+        return mm;
+    }
+
+    static String fmt(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+}

@@ -1,0 +1,115 @@
+package barfit.cli;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.Location;
+import barfit.design.SolverOptions;
+import barfit.input.DesignInput;
+import barfit.input.DesignInputReader;
+import barfit.report.StudyJson;
+import barfit.report.StudyText;
+import barfit.report.SweepPlot;
+import barfit.section.trail.Dim;
+import barfit.study.Sweep;
+import barfit.study.Target;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+@Command(name = "sweep", mixinStandardHelpOptions = true,
+        description = "The cheapest design at every depth cap in a range: the cost–depth frontier, the shallowest cap "
+                + "that works, and the cap below which compression steel is needed. A table, CSV, JSON or an SVG plot.%n"
+                + "Exit code 0 when some cap in the range works, 1 when none does, 2 for bad input.")
+final class SweepCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "YAML input of barfit design")
+    Path file;
+
+    @Option(names = "--beam", paramLabel = "ID", description = "sweep only this beam")
+    String beam;
+
+    @Option(names = "--from", paramLabel = "DEPTH", description = "shallowest cap (default: the search's shallowest depth)")
+    Double from;
+
+    @Option(names = "--to", paramLabel = "DEPTH", description = "deepest cap (default: the search's deepest depth)")
+    Double to;
+
+    @Option(names = "--step", paramLabel = "DEPTH", description = "cap step (default: the search's depth step)")
+    Double step;
+
+    @Option(names = "--csv", description = "print CSV instead of the table")
+    boolean csv;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
+    OutputFormat format;
+
+    @Option(names = "--plot", paramLabel = "FILE.svg", description = "also draw cost against depth cap into an SVG file")
+    Path plot;
+
+    @Option(names = "--force", description = "overwrite the plot file if it exists")
+    boolean force;
+
+    @Option(names = "--workers", defaultValue = "1", description = "CP-SAT workers (default: ${DEFAULT-VALUE})")
+    int workers;
+
+    @Option(names = "--seed", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
+    int seed;
+
+    @Override
+    public Integer call() throws IOException {
+        DesignInput in = DesignInputReader.read(file);
+        var u = in.settings().units();
+        List<Double> depths = in.space().depths();
+        double lo = from == null ? depths.get(0) : Studies.depthWithinSearch(in, "--from", from);
+        double hi = to == null ? depths.get(depths.size() - 1) : Studies.depthWithinSearch(in, "--to", to);
+        double st = step == null ? (depths.size() > 1 ? depths.get(1) - depths.get(0) : 25) : u.toSI(step, Dim.LENGTH);
+        if (step != null && !(step > 0)) {
+            throw new InputError(Location.ofFile("--step"), "expected a positive step, got " + Studies.fmt(step));
+        }
+        if (!(hi > lo)) {
+            throw new InputError(Location.ofFile("--from/--to"), "the range is empty: expected --from below --to");
+        }
+        if ((hi - lo) / st > 400) {
+            throw new InputError(Location.ofFile("--step"), "the range gives more than 400 caps; expected a larger step");
+        }
+        if (plot != null && Files.exists(plot) && !force) {
+            throw new InputError(Location.ofFile(plot.toString()), "the file exists; expected a new file name, or --force "
+                    + "to overwrite it");
+        }
+        List<Double> caps = new ArrayList<>();
+        for (int i = 0; lo + i * st <= hi + 1e-6; i++) {
+            caps.add(Math.round((lo + i * st) * 1e6) / 1e6);
+        }
+        SolverOptions options = new SolverOptions(60, Math.max(1, workers), seed);
+        List<Target> targets = Studies.targets(in, beam, file, options);
+        List<Sweep.Result> results = new ArrayList<>();
+        List<Boolean> perBeam = new ArrayList<>();
+        for (Target t : targets) {
+            results.add(Sweep.run(t, caps, Studies.cost(in)));
+            perBeam.add(t.costPerBeam());
+        }
+        String text = format == OutputFormat.json ? StudyJson.sweep(in.settings(), results, perBeam)
+                : csv ? StudyText.sweepCsv(results, u, perBeam)
+                : StudyText.sweep(in.settings(), results, perBeam, in.currency());
+        if (plot != null) {
+            if (results.size() != 1) {
+                throw new InputError(Location.ofFile("--plot"), "a plot shows one beam; expected --beam ID with --plot");
+            }
+            Files.writeString(plot, SweepPlot.svg(results.get(0), u, in.currency(), perBeam.get(0)),
+                    StandardCharsets.UTF_8);
+        }
+        spec.commandLine().getOut().print(text);
+        spec.commandLine().getOut().flush();
+        return results.stream().allMatch(r -> r.shallowestFeasible() != null) ? Main.OK : Main.FAILED;
+    }
+}

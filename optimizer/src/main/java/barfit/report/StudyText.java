@@ -1,0 +1,127 @@
+package barfit.report;
+
+import barfit.input.Settings;
+import barfit.section.trail.Dim;
+import barfit.study.Compare;
+import barfit.study.Summary;
+import barfit.study.Sweep;
+import barfit.units.UnitSystem;
+import java.util.List;
+import java.util.Locale;
+
+/** Terminal reports of {@code compare} and {@code sweep}. */
+public final class StudyText {
+    private StudyText() {
+    }
+
+    static String head(String command, Settings s) {
+        return "barfit " + command + " — " + s.file() + " — " + s.code().edition() + "\n" + Caution.text() + "\n"
+                + "Every option is designed by the same optimizer and cost model as barfit design (rates from the "
+                + "file, or invented defaults).\n";
+    }
+
+    static String cost(Summary s, UnitSystem u, boolean perBeam) {
+        return Money.amount(perBeam ? s.total() : Money.perLength(s.total(), u));
+    }
+
+    static String size(Summary s, UnitSystem u) {
+        return u.compact(s.width(), Dim.LENGTH) + " × " + u.compact(s.height(), Dim.LENGTH);
+    }
+
+    /** What this layout's compression layer is: the minimum hangers, or more, needed or by choice. */
+    static String compression(Summary s) {
+        return s.compressionNeeded() ? "more, needed" : s.compressionUsed() ? "more, by choice" : "minimum hangers";
+    }
+
+    public static String compare(Settings settings, List<Compare.Result> results, List<Boolean> perBeam, String currency) {
+        UnitSystem u = settings.units();
+        StringBuilder out = new StringBuilder(head("compare", settings));
+        for (int i = 0; i < results.size(); i++) {
+            Compare.Result r = results.get(i);
+            boolean pb = perBeam.get(i);
+            out.append("\nBeam ").append(r.id()).append("   cap ").append(u.compact(r.cap(), Dim.LENGTH)).append(' ')
+                    .append(u.unit(Dim.LENGTH)).append(r.capGiven() ? "" : " (no cap given: the deepest searched)")
+                    .append('\n');
+            TextTable t = new TextTable(false, false, false, false, true, true, false, false, true, true, true);
+            t.row("option", "b × h", "tension", "compression", "Mu/φMn", "εt", "φ", "compression layer", "bars/layers",
+                    "cost " + (pb ? "of the beam" : Money.perLengthLabel(u)) + (currency.isEmpty() ? "" : " " + currency),
+                    "vs best");
+            double best = results.get(i).options().stream().filter(o -> o.summary().feasible())
+                    .mapToDouble(o -> o.summary().total()).min().orElse(Double.NaN);
+            for (Compare.Option o : r.options()) {
+                Summary s = o.summary();
+                if (!s.feasible()) {
+                    t.row(o.label(), "none", "", "", "", "", "", "", "", "", "");
+                    continue;
+                }
+                t.row(o.label() + (o.kind().equals(r.recommended()) ? "  ◀" : ""), size(s, u), s.tension(), s.compression(),
+                        Words.ratio(s.mu() / s.phiMn()), Words.fixed(s.epsT(), 5),
+                        Words.fixed(s.phi(), 3) + (s.strainClass().equals("transition") ? " transition" : ""),
+                        compression(s), s.longitudinalBars() + " / " + s.layers(), cost(s, u, pb),
+                        String.format(Locale.ROOT, "+%.1f %%", 100 * (s.total() - best) / best));
+            }
+            t.write("  ", out);
+            out.append("  recommended: ").append(r.recommended() == null ? "none" : r.recommended()).append('\n');
+            for (String reason : r.reasons()) {
+                out.append("  · ").append(reason).append('\n');
+            }
+        }
+        return out.toString();
+    }
+
+    public static String sweep(Settings settings, List<Sweep.Result> results, List<Boolean> perBeam, String currency) {
+        UnitSystem u = settings.units();
+        StringBuilder out = new StringBuilder(head("sweep", settings));
+        for (int i = 0; i < results.size(); i++) {
+            Sweep.Result r = results.get(i);
+            boolean pb = perBeam.get(i);
+            out.append("\nBeam ").append(r.id()).append('\n');
+            TextTable t = new TextTable(true, false, true, false, false, false, true);
+            t.row("cap (" + u.unit(Dim.LENGTH) + ")", "feasible", "cost " + (pb ? "of the beam" : Money.perLengthLabel(u))
+                    + (currency.isEmpty() ? "" : " " + currency), "b × h", "tension", "compression layer", "εt");
+            for (Sweep.Point p : r.points()) {
+                Summary s = p.summary();
+                t.row(u.compact(p.cap(), Dim.LENGTH), s.feasible() ? "yes" : "no", s.feasible() ? cost(s, u, pb) : "",
+                        s.feasible() ? size(s, u) : "", s.feasible() ? s.tension() : "",
+                        s.feasible() ? compression(s) : "", s.feasible() ? Words.fixed(s.epsT(), 5) : "");
+            }
+            t.write("  ", out);
+            out.append("  shallowest cap with a passing design: ").append(r.shallowestFeasible() == null ? "none in range"
+                    : u.compact(r.shallowestFeasible(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)).append('\n');
+            out.append("  compression steel is necessary below: ").append(r.compressionNeededBelow() == null
+                    ? "every cap in range (no layout works with the minimum hangers alone)"
+                    : u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
+                            + " (under it, every passing layout needs compression steel beyond the minimum hangers)")
+                    .append('\n');
+            if (r.chosen().feasible()) {
+                out.append("  design (cap ").append(u.compact(r.chosenCap(), Dim.LENGTH)).append(' ')
+                        .append(u.unit(Dim.LENGTH)).append(") chooses ").append(size(r.chosen(), u)).append(" at ")
+                        .append(cost(r.chosen(), u, pb)).append('\n');
+            }
+        }
+        return out.toString();
+    }
+
+    public static String sweepCsv(List<Sweep.Result> results, UnitSystem u, List<Boolean> perBeam) {
+        StringBuilder sb = new StringBuilder("beam,cap_" + u.unit(Dim.LENGTH) + ",feasible,cost,width,height,tension,"
+                + "compression_steel_needed,eps_t\n");
+        for (int i = 0; i < results.size(); i++) {
+            for (Sweep.Point p : results.get(i).points()) {
+                Summary s = p.summary();
+                sb.append(csv(results.get(i).id())).append(',').append(u.compact(p.cap(), Dim.LENGTH)).append(',')
+                        .append(s.feasible()).append(',')
+                        .append(s.feasible() ? cost(s, u, perBeam.get(i)) : "").append(',')
+                        .append(s.feasible() ? u.compact(s.width(), Dim.LENGTH) : "").append(',')
+                        .append(s.feasible() ? u.compact(s.height(), Dim.LENGTH) : "").append(',')
+                        .append(s.feasible() ? csv(s.tension()) : "").append(',')
+                        .append(s.feasible() ? s.compressionNeeded() : "").append(',')
+                        .append(s.feasible() ? Words.fixed(s.epsT(), 5) : "").append('\n');
+            }
+        }
+        return sb.toString();
+    }
+
+    static String csv(String v) {
+        return v.contains(",") || v.contains("\"") ? "\"" + v.replace("\"", "\"\"") + "\"" : v;
+    }
+}

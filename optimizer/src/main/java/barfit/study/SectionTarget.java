@@ -1,0 +1,90 @@
+package barfit.study;
+
+import barfit.catalogs.BarSize;
+import barfit.design.CostModel;
+import barfit.design.DesignOutcome;
+import barfit.design.Layout;
+import barfit.design.SearchSpace;
+import barfit.design.SectionDesigner;
+import barfit.design.SectionProblem;
+import barfit.design.SolverOptions;
+import barfit.report.DesignText;
+import barfit.report.Words;
+import barfit.section.Materials;
+import barfit.section.SectionChecks;
+import barfit.section.Demand;
+import barfit.section.trail.Trail;
+import barfit.units.UnitSystem;
+import java.util.Comparator;
+
+/** A single section under study. */
+public final class SectionTarget implements Target {
+    private final SectionProblem p;
+    private final SolverOptions options;
+    private final UnitSystem units;
+
+    public SectionTarget(SectionProblem p, SolverOptions options, UnitSystem units) {
+        this.p = p;
+        this.options = options;
+        this.units = units;
+    }
+
+    public SectionProblem problem() {
+        return p;
+    }
+
+    @Override
+    public String id() {
+        return p.id();
+    }
+
+    @Override
+    public Double cap() {
+        return p.maxDepth();
+    }
+
+    @Override
+    public boolean costPerBeam() {
+        return p.span() != null;
+    }
+
+    @Override
+    public SearchSpace space() {
+        return p.space();
+    }
+
+    @Override
+    public Materials materials() {
+        return p.materials();
+    }
+
+    @Override
+    public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
+        SectionProblem q = new SectionProblem(p.id(), m, p.detailing(), p.code(), space, p.mu(), p.vu(), p.span(), cap,
+                freeWidth ? null : p.fixedWidth(), p.flange(), p.costLength());
+        DesignOutcome o = new SectionDesigner(cost, options, units).design(q, 0);
+        if (!o.feasible()) {
+            return Summary.none(o.diagnosis().summary());
+        }
+        Layout l = o.best().layout();
+        var f = o.best().report().flexure();
+        BarSize lightest = space.compressionSizes().stream().min(Comparator.comparingDouble(BarSize::massPerMetre))
+                .orElseThrow();
+        boolean used = !(l.compressionCount() == 2 && l.compressionBar().equals(lightest));
+        boolean needed = false;
+        if (used) {
+            Layout hangers = new Layout(l.width(), l.height(), l.flange(), l.bending(), l.tensionBar(), l.tensionCounts(),
+                    lightest, 2, l.stirrups(), l.skin());
+            needed = !SectionChecks.run(hangers.section(m, q.detailing(), q.code()), new Demand(q.mu(), q.vu()),
+                    q.span(), Trail.off()).ok();
+        }
+        int bars = l.tensionBarCount() + l.compressionCount();
+        return new Summary(true, l.width(), l.height(), l.bending().tensionFace().word() + " " + DesignText.bars(l),
+                l.bending().compressionFace().word() + " " + l.compressionCount() + " " + l.compressionBar().label(),
+                Words.stirrups(l.stirrups(), units), l.bending().tensionFace().word(), l.tensionCounts(),
+                l.tensionBar().designation(), l.bending().compressionFace().word(), l.compressionCount(),
+                l.compressionBar().designation(), f.phiMn(), Math.abs(q.mu()), f.epsT(), f.phi(), f.strainClass(), used,
+                needed, bars, l.tensionCounts().size() + 1, o.best().cost(), o.status() + " over "
+                        + o.proof().candidates() + " candidates");
+    }
+}

@@ -1,0 +1,110 @@
+package barfit.study;
+
+import barfit.design.CostModel;
+import barfit.design.SearchSpace;
+import barfit.design.SolverOptions;
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.design.beam.BeamVerifier;
+import barfit.section.CheckReport;
+import barfit.section.Materials;
+import barfit.units.UnitSystem;
+import java.util.List;
+
+/**
+ * A whole span under study. Its compression steel is the continuous top bars at mid-span; the minimum
+ * hangers are two of them.
+ */
+public final class SpanTarget implements Target {
+    private final BeamProblem p;
+    private final SolverOptions options;
+    private final UnitSystem units;
+
+    public SpanTarget(BeamProblem p, SolverOptions options, UnitSystem units) {
+        this.p = p;
+        this.options = options;
+        this.units = units;
+    }
+
+    @Override
+    public String id() {
+        return p.id();
+    }
+
+    @Override
+    public Double cap() {
+        return p.maxDepth();
+    }
+
+    @Override
+    public boolean costPerBeam() {
+        return true;
+    }
+
+    @Override
+    public SearchSpace space() {
+        return p.space();
+    }
+
+    @Override
+    public Materials materials() {
+        return p.materials();
+    }
+
+    @Override
+    public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
+        BeamProblem q = new BeamProblem(p.id(), m, p.detailing(), p.code(), space, p.span(), p.ends(), p.mLeft(),
+                p.mMid(), p.mRight(), p.vLeft(), p.vRight(), p.service(), p.limits(), cap, freeWidth ? null : p.fixedWidth(), p.flange(),
+                p.bottomAnchored(), p.maxBarSizes(), p.barsPerTwoLegs());
+        BeamDesigner.Outcome o = new BeamDesigner(cost, options, units).design(q, 0);
+        if (!o.feasible()) {
+            return Summary.none(o.diagnosis().summary());
+        }
+        BeamLayout l = o.best().layout();
+        CheckReport governing = null;
+        for (CheckReport r : o.best().report().sections().values()) {
+            if (governing == null || Math.abs(r.demand().mu()) / r.flexure().phiMn()
+                    > Math.abs(governing.demand().mu()) / governing.flexure().phiMn()) {
+                governing = r;
+            }
+        }
+        boolean used = !p.cantilever() && l.topContinuous() > 2;
+        boolean needed = false;
+        if (used) {
+            BeamLayout hangers = new BeamLayout(l.width(), l.height(), l.flange(), l.stirrupBar(), l.skin(), l.top(), 2,
+                    l.topLeft(), l.topRight(), l.bottom(), l.bottomCounts(), l.zoneStirrups(), l.extLeft(), l.extRight());
+            needed = !BeamVerifier.verify(q, hangers, false).ok();
+        }
+        int top = l.topContinuous();
+        if (l.topLeft() != null) {
+            top = Math.max(top, BeamLayout.sum(l.topLeft()));
+        }
+        if (l.topRight() != null) {
+            top = Math.max(top, BeamLayout.sum(l.topRight()));
+        }
+        int layers = l.bottomCounts().size() + Math.max(l.topLeft() == null ? 1 : l.topLeft().size(),
+                l.topRight() == null ? 1 : l.topRight().size());
+        var f = governing.flexure();
+        String bottom = "bottom " + counts(l.bottomCounts(), l.bottom().label());
+        String topText = "top " + l.topContinuous() + " " + l.top().label() + " continuous"
+                + (l.topLeft() != null ? ", " + counts(l.topLeft(), l.top().label()) + " at left" : "")
+                + (l.topRight() != null ? ", " + counts(l.topRight(), l.top().label()) + " at right" : "");
+        StringBuilder st = new StringBuilder();
+        for (var s : l.zoneStirrups()) {
+            st.append(st.length() == 0 ? "" : " / ").append(barfit.report.Words.stirrups(s, units));
+        }
+        return new Summary(true, l.width(), l.height(), bottom, topText, st.toString(), "bottom", l.bottomCounts(),
+                l.bottom().designation(), "top", l.topContinuous(), l.top().designation(), f.phiMn(),
+                Math.abs(governing.demand().mu()), f.epsT(), f.phi(), f.strainClass(), used, needed,
+                l.bottomCount() + top, layers, o.best().cost(), o.status() + " over " + o.proof().booleans() + " booleans");
+    }
+
+    private static String counts(List<Integer> c, String label) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < c.size(); i++) {
+            sb.append(i == 0 ? "" : " + ").append(c.get(i)).append(' ').append(label);
+        }
+        return sb.toString();
+    }
+}

@@ -1,0 +1,76 @@
+package barfit.study;
+
+import barfit.design.CostModel;
+import barfit.design.SearchSpace;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The cost–depth frontier: the cheapest design at every depth cap in a range. Each depth of the
+ * search is solved once, exactly (as is whether the minimum hangers alone can work there); a cap's
+ * answer is the cheapest over the depths it allows, so a cap reuses every shallower depth's work.
+ */
+public final class Sweep {
+    public record Point(double cap, Summary summary, double depthUsed) {
+    }
+
+    public record Result(String id, List<Point> points, Double shallowestFeasible, Double compressionNeededBelow,
+            Summary chosen, double chosenCap) {
+    }
+
+    private Sweep() {
+    }
+
+    public static Result run(Target t, List<Double> caps, CostModel cost) {
+        SearchSpace space = t.space();
+        double top = caps.get(caps.size() - 1);
+        Map<Double, Summary> atDepth = new LinkedHashMap<>();
+        Map<Double, Boolean> singlyAt = new LinkedHashMap<>();
+        for (double d : space.depths()) {
+            if (d > top + 1e-9) {
+                break;
+            }
+            atDepth.put(d, t.design(null, space.withDepths(List.of(d)), t.materials(), cost, false));
+        }
+        Double shallowest = null;
+        for (Map.Entry<Double, Summary> e : atDepth.entrySet()) {
+            if (e.getValue().feasible()) {
+                shallowest = e.getKey();
+                break;
+            }
+        }
+        // where the hangers alone first work (deeper still they keep working), caps below need compression steel
+        Double singly = null;
+        for (double d : atDepth.keySet()) {
+            Summary s = atDepth.get(d);
+            boolean ok = s.feasible() && !s.compressionUsed()
+                    || t.design(null, space.withDepths(List.of(d)).withHangersOnly(), t.materials(), cost, false).feasible();
+            singlyAt.put(d, ok);
+            if (ok) {
+                singly = d;
+                break;
+            }
+        }
+        List<Point> points = new ArrayList<>();
+        for (double cap : caps) {
+            Summary best = null;
+            double used = Double.NaN;
+            for (Map.Entry<Double, Summary> e : atDepth.entrySet()) {
+                if (e.getKey() > cap + 1e-9) {
+                    break;
+                }
+                Summary s = e.getValue();
+                if (s.feasible() && (best == null || s.total() < best.total() - 1e-9)) {
+                    best = s;
+                    used = e.getKey();
+                }
+            }
+            points.add(new Point(cap, best == null ? Summary.none("nothing passes with h ≤ cap") : best, used));
+        }
+        double chosenCap = t.cap() != null ? t.cap() : space.depths().get(space.depths().size() - 1);
+        Summary chosen = t.design(t.cap(), space, t.materials(), cost, false);
+        return new Result(t.id(), points, shallowest, singly, chosen, chosenCap);
+    }
+}

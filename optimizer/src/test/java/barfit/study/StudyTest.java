@@ -1,0 +1,138 @@
+package barfit.study;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import barfit.cli.Cli;
+import barfit.design.CostModel;
+import barfit.design.CostRates;
+import barfit.design.ExhaustiveSearch;
+import barfit.design.SectionDesigner;
+import barfit.design.SectionProblem;
+import barfit.design.SolverOptions;
+import barfit.units.UnitSystem;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+
+class StudyTest {
+    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40);
+    static final SolverOptions OPTIONS = new SolverOptions(30, 1, 1);
+
+    private static SectionProblem perMetre(SectionProblem p, Double cap) {
+        return new SectionProblem(p.id(), p.materials(), p.detailing(), p.code(), p.space(), p.mu(), p.vu(), null, cap,
+                p.fixedWidth(), p.flange(), 1.0);
+    }
+
+    private static final Compare.Say SAY = new Compare.Say() {
+        @Override
+        public String length(double mm) {
+            return mm + " mm";
+        }
+
+        @Override
+        public String stress(double mpa) {
+            return mpa + " MPa";
+        }
+    };
+
+    @Test
+    void atCapAndDeepenEqualTheExhaustiveOptimum() {
+        Random r = new Random(55);
+        ExhaustiveSearch oracle = new ExhaustiveSearch(COST);
+        int compared = 0;
+        for (int i = 0; i < 60; i++) {
+            SectionProblem p = barfit.design.RandomProblemsAccess.small(r);
+            List<Double> depths = p.space().depths();
+            double cap = depths.get(depths.size() / 2);
+            SectionProblem q = perMetre(p, cap);
+            Compare.Result c = Compare.run(new SectionTarget(q, OPTIONS, UnitSystem.SI), cap, 600, List.of(), COST,
+                    fc -> COST, SAY);
+            var atCap = oracle.solve(q);
+            var lifted = oracle.solve(perMetre(p, null));
+            Summary a = c.options().get(0).summary();
+            Summary d = c.options().get(1).summary();
+            assertEquals(atCap.best() != null, a.feasible(), "at cap feasibility, " + q);
+            assertEquals(lifted.best() != null, d.feasible(), "deepen feasibility, " + q);
+            if (a.feasible()) {
+                assertEquals(atCap.units(), CostModel.units(a.total()), "at cap, " + q);
+                compared++;
+            }
+            if (d.feasible()) {
+                assertEquals(lifted.units(), CostModel.units(d.total()), "deepen, " + q);
+                assertTrue(d.total() <= a.total() + 1e-9 || !a.feasible(), "lifting the cap never costs more");
+            }
+        }
+        assertTrue(compared > 25, "enough feasible comparisons: " + compared);
+    }
+
+    @Test
+    void sweepIsNonIncreasingAndMatchesFreshDesigns() {
+        Random r = new Random(56);
+        SectionDesigner designer = new SectionDesigner(COST, OPTIONS, UnitSystem.SI);
+        for (int i = 0; i < 25; i++) {
+            SectionProblem p = perMetre(barfit.design.RandomProblemsAccess.small(r), null);
+            List<Double> caps = new ArrayList<>(p.space().depths());
+            Sweep.Result s = Sweep.run(new SectionTarget(p, OPTIONS, UnitSystem.SI), caps, COST);
+            double previous = Double.POSITIVE_INFINITY;
+            for (Sweep.Point pt : s.points()) {
+                if (!pt.summary().feasible()) {
+                    assertTrue(previous == Double.POSITIVE_INFINITY, "once feasible, a higher cap stays feasible");
+                    continue;
+                }
+                assertTrue(pt.summary().total() <= previous + 1e-9, "cost rises with the cap at " + pt.cap());
+                previous = pt.summary().total();
+                var fresh = designer.design(p.withMaxDepth(pt.cap()), 0);
+                assertTrue(fresh.feasible());
+                assertEquals(CostModel.units(fresh.best().cost().total()), CostModel.units(pt.summary().total()),
+                        "sweep point at " + pt.cap() + " equals a fresh design");
+            }
+        }
+    }
+
+    @Test
+    void textbookBeamNeedsCompressionSteelAtItsDepth() throws Exception {
+        // McCormac & Brown 9th ed., Example 5.9: at b = 15 in and d = 28 in, Mu = 1030 ft-k needs compression
+        // steel (the book adds 3 #8 to 8 #10). Through compare: at the 31 in cap the chosen layout needs its
+        // compression steel, and the shallowest depth that works with the hangers alone is deeper than 31 in.
+        Cli out = Cli.run("compare", "src/test/resources/studies/doubly-textbook-us.yaml", "--format", "json", "--fc",
+                "5000");
+        assertEquals(0, out.exit(), out.err());
+        JsonNode beam = new ObjectMapper().readTree(out.out()).get("beams").get(0);
+        JsonNode atCap = beam.get("options").get(0);
+        assertEquals("at_cap", atCap.get("kind").asText());
+        assertTrue(atCap.get("feasible").asBoolean());
+        assertTrue(atCap.get("compression_steel_needed").asBoolean(), atCap.toString());
+        assertTrue(atCap.get("height").asDouble() <= 31);
+        JsonNode singly = beam.get("options").get(2);
+        assertEquals("no_compression_steel", singly.get("kind").asText());
+        assertTrue(singly.get("height").asDouble() > 31, singly.toString());
+        assertFalse(singly.get("compression_steel_needed").asBoolean());
+    }
+
+    @Test
+    void badStudyOptionsAreOneLineErrors() {
+        String f = "src/test/resources/studies/doubly-textbook-us.yaml";
+        String[][] cases = {
+            {"compare", f, "--cap", "50"},
+            {"compare", f, "--cap", "10"},
+            {"sweep", f, "--from", "40", "--to", "30"},
+            {"sweep", f, "--from", "20"},
+            {"sweep", f, "--step", "-1"},
+            {"compare", f, "--beam", "NOPE"},
+            {"sweep", f, "--beam", "NOPE"},
+            {"compare", f, "--fc", "90000"},
+        };
+        for (String[] c : cases) {
+            Cli r = Cli.run(c);
+            assertEquals(2, r.exit(), String.join(" ", c) + ": " + r.err());
+            assertEquals(1, r.err().strip().lines().count(), r.err());
+            assertTrue(r.err().startsWith("barfit: "), r.err());
+            assertFalse(r.err().contains("Exception"), r.err());
+        }
+    }
+}
