@@ -56,6 +56,10 @@ public final class StirrupChooser {
             if (legs < minLegs) {
                 continue;
             }
+            Stirrups widest = new Stirrups(det.stirrupBar(), legs, spacings.get(spacings.size() - 1));
+            if (cost(shape, widest, zoneLength) >= bestCost) {
+                continue; // even its widest spacing costs more than the best found
+            }
             int lo = -1;
             int hi = spacings.size() - 1;
             while (lo < hi) {
@@ -69,11 +73,7 @@ public final class StirrupChooser {
             }
             for (int i = lo; i >= 0; i--) {
                 Stirrups st = new Stirrups(det.stirrupBar(), legs, spacings.get(i));
-                double c = zoneLength > 0
-                        ? Math.max(1, Math.ceil(zoneLength / st.spacing() - 1e-9))
-                                * cost.stirrupSetLength(shape.width(), shape.height(), st.bar(), st.legs())
-                                * st.bar().massPerMetre()
-                        : cost.stirrups(shape.width(), shape.height(), st);
+                double c = cost(shape, st, zoneLength);
                 if (c >= bestCost) {
                     break;
                 }
@@ -85,6 +85,13 @@ public final class StirrupChooser {
             }
         }
         return best;
+    }
+
+    private double cost(SectionShape shape, Stirrups st, double zoneLength) {
+        return zoneLength > 0
+                ? Math.max(1, Math.ceil(zoneLength / st.spacing() - 1e-9))
+                        * cost.stirrupSetLength(shape.width(), shape.height(), st.bar(), st.legs()) * st.bar().massPerMetre()
+                : cost.stirrups(shape.width(), shape.height(), st);
     }
 
     private ShearVerdict verdict(SectionShape shape, Detailing det, Stirrups st, double d, double as, Double vu) {

@@ -93,7 +93,13 @@ public final class BeamGenerator {
     private final List<BeamProblem.Zone> zones;
     private final double lm;
     /** Zone stirrups depend only on the zone, the tension bars (d, As) and the legs asked for: remembered per frame. */
-    private final Map<String, Stirrups> zoneMemo = new HashMap<>();
+    private final Map<ZoneKey, Stirrups> zoneMemo = new HashMap<>();
+
+    private record ZoneKey(int zone, double d, double as, int legs) {
+    }
+
+    /** Zone indices per place, computed once. */
+    private final Map<BeamProblem.Place, List<Integer>> zonesAt = new java.util.EnumMap<>(BeamProblem.Place.class);
 
     public BeamGenerator(BeamProblem problem, CostModel cost) {
         this.p = problem;
@@ -473,7 +479,7 @@ public final class BeamGenerator {
 
     private Stirrups zoneStirrups(SectionShape shape, Frame f, int zone, BarSize tension, int[] counts, int legs, double d,
             double as) {
-        String key = zone + "|" + tension.designation() + java.util.Arrays.toString(counts) + "|" + legs;
+        ZoneKey key = new ZoneKey(zone, d, as, legs);
         if (zoneMemo.containsKey(key)) {
             return zoneMemo.get(key);
         }
@@ -495,6 +501,10 @@ public final class BeamGenerator {
     }
 
     private List<Integer> zoneIndices(BeamProblem.Place place) {
+        return zonesAt.computeIfAbsent(place, this::findZones);
+    }
+
+    private List<Integer> findZones(BeamProblem.Place place) {
         List<Integer> out = new ArrayList<>();
         for (int i = 0; i < zones.size(); i++) {
             if (zones.get(i).section() == place) {
@@ -771,10 +781,36 @@ public final class BeamGenerator {
                 l == null ? null : l.counts(), r == null ? null : r.counts(), m.bar(), m.counts(), st, extL, extR);
     }
 
+    /** Support options by top bar size, cheapest first. */
+    private static Map<BarSize, List<SupportOpt>> bySize(List<SupportOpt> opts) {
+        Map<BarSize, List<SupportOpt>> out = new java.util.IdentityHashMap<>();
+        for (SupportOpt s : opts) {
+            out.computeIfAbsent(s.bar(), k -> new ArrayList<>()).add(s);
+        }
+        out.values().forEach(l -> l.sort(Comparator.comparingDouble(SupportOpt::cost)));
+        return out;
+    }
+
+    private static SupportOpt cheapestIn(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, int legsNeeded,
+            String bottomKey) {
+        List<SupportOpt> l = index.get(bar);
+        if (l == null) {
+            return null;
+        }
+        for (SupportOpt s : l) {
+            if (s.counts().get(0) >= nc && s.legs() >= legsNeeded && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
+                return s;
+            }
+        }
+        return null;
+    }
+
     /** The frame's cheapest combination that passes, found by plain enumeration of its options. */
     private FrameSet enumerate(FrameSet fs) {
         double best = Double.POSITIVE_INFINITY;
         BeamLayout bestLayout = null;
+        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
+        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
         for (MidOpt m : fs.mids()) {
             TopOpt t = m.top();
             if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
@@ -784,13 +820,13 @@ public final class BeamGenerator {
             SupportOpt l = null;
             SupportOpt r = null;
             if (p.leftSupport()) {
-                l = cheapestSupport(fs.lefts(), t.bar(), p.cantilever() ? 2 : t.nc(), m.legsNeeded(), key);
+                l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m.legsNeeded(), key);
                 if (l == null) {
                     continue;
                 }
             }
             if (p.rightSupport()) {
-                r = cheapestSupport(fs.rights(), t.bar(), t.nc(), m.legsNeeded(), key);
+                r = cheapestIn(rights, t.bar(), t.nc(), m.legsNeeded(), key);
                 if (r == null) {
                     continue;
                 }
