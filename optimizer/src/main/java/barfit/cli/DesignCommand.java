@@ -101,11 +101,7 @@ final class DesignCommand implements Callable<Integer> {
     }
 
     static BeamProblem span(DesignInput in, DesignBeam b) {
-        var s = in.settings();
-        var w = b.whole();
-        return new BeamProblem(b.id(), s.materials(), s.detailing(), s.code(), in.space(), b.span().length(),
-                b.span().ends(), w.mLeft(), w.mMid(), w.mRight(), w.vLeft(), w.vRight(), w.service(), w.limits(),
-                b.maxDepth(), b.width(), b.flange(), w.bottomAnchored(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs());
+        return barfit.schedule.Spans.problem(in, b);
     }
 
     static SectionProblem problem(DesignInput in, DesignBeam b) {

@@ -1,0 +1,21 @@
+package barfit.schedule;
+
+import barfit.design.CostRates;
+import barfit.design.SearchSpace;
+import barfit.input.SearchReader;
+import barfit.input.Settings;
+import java.util.List;
+
+/**
+ * A whole schedule to design: the project settings, search space and costs, the beams (from the
+ * {@code beams:} of a YAML file or the rows of a CSV file), and the rationalisation (null: each beam its
+ * own optimum). {@code sources} names the files it was read from, for the report.
+ */
+public record ScheduleInput(List<String> sources, Settings settings, SearchSpace space, CostRates rates,
+        String currency, SearchReader.Costs costs, int maxBarSizesPerBeam, int barsPerTwoLegs,
+        List<ScheduleBeam> beams, Rationalise rationalise) {
+    public ScheduleInput {
+        sources = List.copyOf(sources);
+        beams = List.copyOf(beams);
+    }
+}

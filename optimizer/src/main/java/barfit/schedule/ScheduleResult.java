@@ -1,0 +1,66 @@
+package barfit.schedule;
+
+import barfit.design.beam.BeamDesigner;
+import java.util.List;
+
+/**
+ * A designed schedule: every beam's outcome in input order, the section sizes and bar sizes it uses, its
+ * total cost, the cost with every beam at its own optimum, the rationalisation's proof (null when not
+ * rationalised) and the price of standardisation (empty when not rationalised).
+ */
+public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<SectionSize> sizes, List<String> barSizes,
+        double beamsCost, double formworkSetsCost, double unconstrainedCost, Proof proof,
+        List<StandardisationPoint> standardisation, int threads, long millis) {
+
+    public ScheduleResult {
+        beams = List.copyOf(beams);
+        sizes = List.copyOf(sizes);
+        barSizes = List.copyOf(barSizes);
+        standardisation = List.copyOf(standardisation);
+    }
+
+    /**
+     * One scheduled beam: its outcome (for a rationalised schedule, the proven cheapest design in its
+     * assigned size with the schedule's bar sizes) and its own optimum cost without rationalisation
+     * (NaN when it has no passing design).
+     */
+    public record Beam(ScheduleBeam beam, BeamDesigner.Outcome outcome, double ownOptimum) {
+        public boolean feasible() {
+            return outcome.feasible();
+        }
+    }
+
+    /** A section size b x h (mm) and the beams that use it. */
+    public record SectionSize(double width, double height, List<String> beams) {
+        public SectionSize {
+            beams = List.copyOf(beams);
+        }
+    }
+
+    /**
+     * How the rationalised schedule was proven: the method, the status (OPTIMAL, FEASIBLE with a gap, or
+     * INFEASIBLE), the objective and best bound (currency), the bar-size sets considered and pruned by
+     * bound, the (beam, size) pairs evaluated exactly, the CP-SAT workers and seed.
+     */
+    public record Proof(String method, String status, double objective, double bound, int barSetsTotal,
+            int barSetsSolved, int barSetsPruned, int pairsEvaluated, int workers, int seed, long millis) {
+        public double gap() {
+            return objective == 0 ? 0 : Math.max(0, (objective - bound) / Math.abs(objective));
+        }
+    }
+
+    /** The least total cost with at most {@code sizes} section sizes (NaN when none is feasible). */
+    public record StandardisationPoint(int sizes, double cost, String status, List<String> barSizes) {
+        public StandardisationPoint {
+            barSizes = List.copyOf(barSizes);
+        }
+    }
+
+    public double totalCost() {
+        return beamsCost + formworkSetsCost;
+    }
+
+    public boolean allFeasible() {
+        return beams.stream().allMatch(Beam::feasible);
+    }
+}
