@@ -1,0 +1,647 @@
+package barfit.report.html;
+
+import barfit.catalogs.BarSize;
+import barfit.design.Layout;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.section.BarLayer;
+import barfit.section.BeamSection;
+import barfit.section.Bending;
+import barfit.section.CodeEquations;
+import barfit.section.Detailing;
+import barfit.section.Face;
+import barfit.section.Flange;
+import barfit.section.SectionShape;
+import barfit.section.SkinBars;
+import barfit.section.Stirrups;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+/**
+ * A beam section drawn to scale as SVG: the concrete (with the slab, dashed, where it is on the tension
+ * side and not counted), the clear cover, the stirrup as a bar of its own diameter with its bends and
+ * hooks, every longitudinal bar at its real size and position, skin bars, and the dimensions b, h and d.
+ * Coordinates are written in px; the root carries the scale and the px position of the web's top-left
+ * corner so a reader (or a test) can map any point back to mm.
+ */
+public final class SectionDrawing {
+    /** px from the top of the SVG to the top face of the section; the strain diagram uses the same. */
+    static final double TOP = 58;
+    /** px below the bottom face: b dimension, scale bar and the legend lines. */
+    static final double BELOW = 112;
+    private static final double LEFT = 60;
+    private static final double LABELS = 130;
+    private static final double MAX_HEIGHT_PX = 340;
+    private static final double MAX_WIDTH_PX = 400;
+
+    private static final String CONCRETE = "#e9e6df";
+    private static final String EDGE = "#4a4a4a";
+    private static final String SLAB_OFF = "#f7f6f3";
+    private static final String STEEL = "#1d2b3a";
+    private static final String STIRRUP = "#3d6d99";
+    private static final String OFF = "#a3a3a3";
+    private static final String DIM = "#6b6b6b";
+
+    private SectionDrawing() {
+    }
+
+    /** A layer of bars as drawn, and whether the section model counts it at this section. */
+    public record DrawnLayer(BarLayer layer, boolean counted) {
+    }
+
+    /**
+     * What one drawing shows: a title, the concrete outline, the detailing (cover, stirrup bar, layer
+     * gap), the bending at the section, every bar layer present, the stirrups of the zone the section
+     * sits in, skin bars (or null), d from the section's flexure (or null) and the code edition (for the
+     * inch-pound minimum hook extension).
+     */
+    public record View(String title, String subtitle, SectionShape shape, Detailing detailing, Bending bending,
+            List<DrawnLayer> layers, Stirrups stirrups, SkinBars skin, Double d, CodeEquations code) {
+        public View {
+            layers = List.copyOf(layers);
+        }
+    }
+
+    /**
+     * The view of a designed span at one of its sections: the bars the section model counts there, plus
+     * the full-span bottom bars at a hogging support when they are not anchored (present, not counted),
+     * and the stirrups of the zone at that section.
+     */
+    public static View of(BeamProblem p, BeamLayout l, BeamProblem.Place place, Double d, String title,
+            String subtitle) {
+        Stirrups st = stirrupsAt(p, l, place);
+        BeamSection s = l.section(p, place, st);
+        List<DrawnLayer> layers = new ArrayList<>();
+        for (BarLayer bl : s.layers()) {
+            layers.add(new DrawnLayer(bl, true));
+        }
+        Bending bending = BeamLayout.bending(p, place);
+        if (bending == Bending.HOGGING && !p.bottomAnchored()) {
+            List<BeamSection.BarGroup> groups = new ArrayList<>();
+            for (int c : l.bottomCounts()) {
+                groups.add(new BeamSection.BarGroup(l.bottom(), c));
+            }
+            for (BarLayer bl : BeamSection.stack(Face.BOTTOM, groups, s.detailing())) {
+                layers.add(new DrawnLayer(bl, false));
+            }
+        }
+        return new View(title, subtitle, s.shape(), s.detailing(), bending, layers, st, l.skin(), d, s.code());
+    }
+
+    /** The stirrups of the zone that contains the section: left end, mid-span or right end. */
+    static Stirrups stirrupsAt(BeamProblem p, BeamLayout l, BeamProblem.Place place) {
+        List<BeamProblem.Zone> zones = p.zones();
+        double x = switch (place) {
+            case LEFT -> 0;
+            case MID -> p.span() / 2;
+            case RIGHT -> p.span();
+        };
+        for (int i = 0; i < zones.size(); i++) {
+            if (x >= zones.get(i).from() - 1e-9 && x <= zones.get(i).to() + 1e-9) {
+                return l.zoneStirrups().get(i);
+            }
+        }
+        return l.zoneStirrups().get(0);
+    }
+
+    /** The length of slab drawn beyond a web face (mm): the slab is cut so the web stays large enough to read. */
+    static double stub(SectionShape s) {
+        Flange f = s.flange();
+        if (f == null) {
+            return 0;
+        }
+        double overhang = f.oneSided() ? f.width() - s.width() : (f.width() - s.width()) / 2;
+        return Math.max(0, Math.min(overhang, Math.max(75, 0.25 * s.width())));
+    }
+
+    /** Whether the drawn slab is shorter than the effective flange (a break line is drawn). */
+    static boolean slabCut(SectionShape s) {
+        Flange f = s.flange();
+        if (f == null) {
+            return false;
+        }
+        double overhang = f.oneSided() ? f.width() - s.width() : (f.width() - s.width()) / 2;
+        return overhang > stub(s) + 1e-9;
+    }
+
+    /**
+     * One scale for every section of a beam (px per mm), a multiple of 0.05 so the scale note reads
+     * cleanly: the height fits {@value #MAX_HEIGHT_PX} px and the drawn width {@value #MAX_WIDTH_PX} px.
+     */
+    public static double scaleFor(SectionShape shape) {
+        double drawnWidth = shape.width() + stub(shape) * (shape.flange() != null && !shape.flange().oneSided() ? 2 : 1);
+        double s = Math.min(MAX_HEIGHT_PX / shape.height(), MAX_WIDTH_PX / drawnWidth);
+        s = Math.min(1.5, Math.floor(s * 20 + 1e-9) / 20);
+        return Math.max(0.05, s);
+    }
+
+    /** px from the left of the SVG to the web's left face. */
+    static double originX(SectionShape shape, double scale) {
+        boolean slabLeft = shape.flange() != null && !shape.flange().oneSided();
+        return LEFT + (slabLeft ? stub(shape) * scale : 0);
+    }
+
+    /** Total SVG height for a section of height h at this scale (the strain diagram matches it). */
+    static double svgHeight(SectionShape shape, double scale) {
+        return TOP + shape.height() * scale + BELOW;
+    }
+
+    /** Inside bend diameter of a stirrup (Table 25.3.2): 4 db up to No. 16 (No. 5), 6 db above. */
+    static double insideBendDiameter(BarSize stirrup) {
+        double db = stirrup.diameter();
+        return (db <= 16.0 + 1e-6 ? 4 : 6) * db;
+    }
+
+    /** Straight extension of a 135-degree stirrup hook (Table 25.3.2): 6 db, at least 75 mm (3 in). */
+    static double hookExtension(BarSize stirrup, CodeEquations code) {
+        return Math.max(6 * stirrup.diameter(), code.inchPound() ? 76.2 : 75.0);
+    }
+
+    /**
+     * Centres of the bars of one layer across the web, mm from the left face. The outer bars sit inside
+     * the stirrup (cover + stirrup + db/2 from each side face, where the section model places them); the
+     * rest are spread evenly between. An inner layer sits directly over (under) bars of the layer
+     * outside it when it has no more bars than that layer.
+     */
+    static double[] xs(double width, Detailing det, BarLayer layer, double[] outer) {
+        int n = layer.count();
+        double db = layer.bar().diameter();
+        double edge = det.cover() + det.stirrupBar().diameter() + db / 2;
+        double[] x = new double[n];
+        if (outer != null && outer.length >= n && n >= 2) {
+            for (int i = 0; i < n; i++) {
+                x[i] = outer[(int) Math.round(i * (outer.length - 1) / (double) (n - 1))];
+            }
+            return x;
+        }
+        if (n == 1) {
+            x[0] = width / 2;
+            return x;
+        }
+        for (int i = 0; i < n; i++) {
+            x[i] = edge + i * (width - 2 * edge) / (n - 1);
+        }
+        return x;
+    }
+
+    /** A bar layer placed: its layer, whether counted, and the centres (mm from the web's top-left corner). */
+    record Placed(DrawnLayer drawn, double y, double[] x) {
+    }
+
+    static List<Placed> place(View v) {
+        List<Placed> out = new ArrayList<>();
+        double h = v.shape().height();
+        for (Face face : Face.values()) {
+            double[] outer = null;
+            List<DrawnLayer> onFace = v.layers().stream().filter(l -> l.layer().face() == face)
+                    .sorted(Comparator.comparingDouble(l -> l.layer().fromFace())).toList();
+            for (DrawnLayer dl : onFace) {
+                BarLayer bl = dl.layer();
+                double[] x = xs(v.shape().width(), v.detailing(), bl, outer);
+                double y = face == Face.TOP ? bl.fromFace() : h - bl.fromFace();
+                out.add(new Placed(dl, y, x));
+                if (outer == null) {
+                    outer = x;
+                }
+            }
+        }
+        return out;
+    }
+
+    public static String svg(View v, double scale, UnitSystem u) {
+        SectionShape shape = v.shape();
+        double b = shape.width();
+        double h = shape.height();
+        double ox = originX(shape, scale);
+        double oy = TOP;
+        Flange f = shape.flange();
+        double stub = stub(shape);
+        double leftStub = f != null && !f.oneSided() ? stub : 0;
+        double rightStub = f != null ? stub : 0;
+        double right = ox + (b + rightStub) * scale;
+        double width = right + 40 + LABELS;
+        double height = svgHeight(shape, scale);
+        Mm m = new Mm(ox, oy, scale);
+        StringBuilder out = new StringBuilder();
+        out.append("<svg xmlns=\"").append(Svg.NS).append("\" class=\"section-drawing\" width=\"").append(Svg.px(width))
+                .append("\" height=\"").append(Svg.px(height)).append("\" viewBox=\"0 0 ").append(Svg.px(width)).append(' ')
+                .append(Svg.px(height)).append("\" data-px-per-mm=\"").append(Svg.px(scale)).append("\" data-origin-x=\"")
+                .append(Svg.px(ox)).append("\" data-origin-y=\"").append(Svg.px(oy)).append("\" role=\"img\" aria-label=\"")
+                .append(Svg.esc(v.title())).append("\">\n");
+        out.append("<g font-family=\"sans-serif\" font-size=\"11\" fill=\"#222\">\n");
+        out.append("<text x=\"4\" y=\"16\" font-size=\"13\" font-weight=\"bold\">").append(Svg.esc(v.title()))
+                .append("</text>\n");
+        if (v.subtitle() != null) {
+            Svg.text(out, 4, 32, "start", null, v.subtitle());
+        }
+
+        concrete(out, v, m, leftStub, rightStub);
+        // clear cover: the outside face of the stirrup, dashed
+        double c = v.detailing().cover();
+        out.append("<rect class=\"cover\" x=\"").append(Svg.px(m.x(c))).append("\" y=\"").append(Svg.px(m.y(c)))
+                .append("\" width=\"").append(Svg.px((b - 2 * c) * scale)).append("\" height=\"")
+                .append(Svg.px((h - 2 * c) * scale)).append("\" fill=\"none\" stroke=\"").append(DIM)
+                .append("\" stroke-width=\"0.8\" stroke-dasharray=\"4 3\"/>\n");
+        List<Placed> placed = place(v);
+        stirrup(out, v, m, placed);
+        bars(out, v, m, placed);
+        skin(out, v, m, placed);
+        dimensions(out, v, m, u, leftStub, rightStub);
+        labels(out, v, m, placed, right + 40);
+        legend(out, v, m, u);
+        out.append("</g>\n</svg>\n");
+        return out.toString();
+    }
+
+    /** mm in the section (from the web's top-left corner) to px in the SVG. */
+    record Mm(double ox, double oy, double s) {
+        double x(double mm) {
+            return ox + mm * s;
+        }
+
+        double y(double mm) {
+            return oy + mm * s;
+        }
+    }
+
+    private static void concrete(StringBuilder out, View v, Mm m, double leftStub, double rightStub) {
+        SectionShape shape = v.shape();
+        double b = shape.width();
+        double h = shape.height();
+        Flange f = shape.flange();
+        if (f == null) {
+            out.append("<rect class=\"concrete\" x=\"").append(Svg.px(m.x(0))).append("\" y=\"").append(Svg.px(m.y(0)))
+                    .append("\" width=\"").append(Svg.px(b * m.s())).append("\" height=\"").append(Svg.px(h * m.s()))
+                    .append("\" fill=\"").append(CONCRETE).append("\" stroke=\"").append(EDGE).append("\" stroke-width=\"1.2\"/>\n");
+            return;
+        }
+        double hf = f.thickness();
+        boolean cut = slabCut(shape);
+        if (v.bending() == Bending.SAGGING) {
+            // the compression flange and the web are one piece: one outline
+            StringBuilder d = new StringBuilder();
+            d.append('M').append(p(m, 0, h)).append(" L").append(p(m, 0, hf));
+            if (leftStub > 0) {
+                d.append(" L").append(p(m, -leftStub, hf));
+                breakLine(d, m, -leftStub, hf, 0, cut, 1);
+            } else {
+                d.append(" L").append(p(m, 0, 0));
+            }
+            d.append(" L").append(p(m, b + rightStub, 0));
+            breakLine(d, m, b + rightStub, 0, hf, cut, -1);
+            d.append(" L").append(p(m, b, hf)).append(" L").append(p(m, b, h)).append(" Z");
+            out.append("<path class=\"concrete\" d=\"").append(d).append("\" fill=\"").append(CONCRETE)
+                    .append("\" stroke=\"").append(EDGE).append("\" stroke-width=\"1.2\"/>\n");
+            return;
+        }
+        // hogging: the slab is on the tension side and the section model does not count it; drawn pale
+        // and dashed beside the web
+        String slabStyle = "fill=\"" + SLAB_OFF + "\" stroke=\"" + OFF + "\" stroke-width=\"1\" stroke-dasharray=\"5 3\"";
+        if (leftStub > 0) {
+            StringBuilder d = new StringBuilder();
+            d.append('M').append(p(m, 0, 0)).append(" L").append(p(m, -leftStub, 0));
+            breakLine(d, m, -leftStub, 0, hf, cut, 1);
+            d.append(" L").append(p(m, 0, hf));
+            out.append("<path class=\"slab not-counted\" d=\"").append(d).append("\" ").append(slabStyle).append("/>\n");
+        }
+        if (rightStub > 0) {
+            StringBuilder d = new StringBuilder();
+            d.append('M').append(p(m, b, 0)).append(" L").append(p(m, b + rightStub, 0));
+            breakLine(d, m, b + rightStub, 0, hf, cut, -1);
+            d.append(" L").append(p(m, b, hf));
+            out.append("<path class=\"slab not-counted\" d=\"").append(d).append("\" ").append(slabStyle).append("/>\n");
+        }
+        out.append("<rect class=\"concrete\" x=\"").append(Svg.px(m.x(0))).append("\" y=\"").append(Svg.px(m.y(0)))
+                .append("\" width=\"").append(Svg.px(b * m.s())).append("\" height=\"").append(Svg.px(h * m.s()))
+                .append("\" fill=\"").append(CONCRETE).append("\" stroke=\"").append(EDGE).append("\" stroke-width=\"1.2\"/>\n");
+    }
+
+    /**
+     * The free edge of a slab from y0 to y1 (mm) at x: a zigzag break line when the slab goes on beyond
+     * what is drawn, else straight; {@code towardsWeb} is +1 for a left free edge, -1 for a right one.
+     */
+    private static void breakLine(StringBuilder d, Mm m, double x, double y0, double y1, boolean cut, int towardsWeb) {
+        if (cut) {
+            double zig = 6 / m.s();
+            double dy = y1 - y0;
+            d.append(" L").append(p(m, x, y0 + dy * 0.35));
+            d.append(" L").append(p(m, x - towardsWeb * zig, y0 + dy * 0.45));
+            d.append(" L").append(p(m, x + towardsWeb * zig, y0 + dy * 0.55));
+            d.append(" L").append(p(m, x, y0 + dy * 0.65));
+        }
+        d.append(" L").append(p(m, x, y1));
+    }
+
+    /**
+     * The stirrup along its centreline, stroke = its diameter: a closed hoop with corners bent to the
+     * inside diameter of Table 25.3.2 and both ends finished at the top-left corner with 135-degree hooks
+     * whose straight extension is 6 db, at least 75 mm (Table 25.3.2). Legs beyond two are crossties with
+     * a 135-degree hook at each end, as the cost model prices them.
+     */
+    private static void stirrup(StringBuilder out, View v, Mm m, List<Placed> placed) {
+        Stirrups st = v.stirrups();
+        if (st == null) {
+            return;
+        }
+        BarSize bar = st.bar();
+        double ds = bar.diameter();
+        double b = v.shape().width();
+        double h = v.shape().height();
+        double e = v.detailing().cover() + ds / 2;
+        double r = insideBendDiameter(bar) / 2 + ds / 2;
+        double ext = hookExtension(bar, v.code());
+        String stroke = "fill=\"none\" stroke=\"" + STIRRUP + "\" stroke-width=\"" + Svg.px(ds * m.s()) + "\"";
+        String rr = Svg.px(r * m.s());
+        StringBuilder d = new StringBuilder();
+        d.append('M').append(p(m, e + r, e));
+        d.append(" L").append(p(m, b - e - r, e));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, b - e, e + r));
+        d.append(" L").append(p(m, b - e, h - e - r));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, b - e - r, h - e));
+        d.append(" L").append(p(m, e + r, h - e));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, e, h - e - r));
+        d.append(" L").append(p(m, e, e + r));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, e + r, e));
+        out.append("<path class=\"stirrup\" d=\"").append(d).append("\" ").append(stroke)
+                .append(" stroke-linejoin=\"round\"/>\n");
+        // the two hook ends at the top-left corner: each turns 135 degrees round the corner bar and runs
+        // ext into the core along the diagonal
+        double cx = e + r;
+        double cy = e + r;
+        double k = Math.sqrt(0.5);
+        StringBuilder hooks = new StringBuilder();
+        hooks.append('M').append(p(m, cx - r, cy)).append(" A").append(rr).append(',').append(rr).append(" 0 0 0 ")
+                .append(p(m, cx - r * k, cy + r * k)).append(" L").append(p(m, cx - r * k + ext * k, cy + r * k + ext * k));
+        hooks.append(" M").append(p(m, cx, cy - r)).append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ")
+                .append(p(m, cx + r * k, cy - r * k)).append(" L").append(p(m, cx + r * k + ext * k, cy - r * k + ext * k));
+        out.append("<path class=\"stirrup hook\" d=\"").append(hooks).append("\" ").append(stroke)
+                .append(" stroke-linecap=\"butt\"/>\n");
+        for (double x : tieLegs(v, placed, e)) {
+            StringBuilder t = new StringBuilder();
+            // down the leg, then a 135-degree hook at each end (over the hoop's top and bottom legs)
+            t.append('M').append(p(m, x + r + r * k + ext * k, e + r - r * k + ext * k));
+            t.append(" L").append(p(m, x + r + r * k, e + r - r * k));
+            t.append(" A").append(rr).append(',').append(rr).append(" 0 0 0 ").append(p(m, x, e + r));
+            t.append(" L").append(p(m, x, h - e - r));
+            t.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, x - r - r * k, h - e - r + r * k));
+            t.append(" L").append(p(m, x - r - r * k - ext * k, h - e - r + r * k - ext * k));
+            out.append("<path class=\"stirrup tie\" d=\"").append(t).append("\" ").append(stroke)
+                    .append(" stroke-linecap=\"butt\"/>\n");
+        }
+    }
+
+    /**
+     * x (mm) of each crosstie leg: beside an inner bar of the fullest layer when the legs split that
+     * layer into groups of distinct bars, else evenly across the hoop.
+     */
+    static List<Double> tieLegs(View v, List<Placed> placed, double e) {
+        int ties = v.stirrups().legs() - 2;
+        List<Double> out = new ArrayList<>();
+        if (ties <= 0) {
+            return out;
+        }
+        Placed fullest = null;
+        for (Placed pl : placed) {
+            if (fullest == null || pl.x().length > fullest.x().length) {
+                fullest = pl;
+            }
+        }
+        double b = v.shape().width();
+        double ds = v.stirrups().bar().diameter();
+        if (fullest != null) {
+            int n = fullest.x().length;
+            int legs = v.stirrups().legs();
+            List<Integer> idx = new ArrayList<>();
+            for (int k = 1; k <= ties; k++) {
+                int i = (int) Math.round(k * (n - 1) / (double) (legs - 1));
+                if (i <= 0 || i >= n - 1 || idx.contains(i)) {
+                    idx.clear();
+                    break;
+                }
+                idx.add(i);
+            }
+            if (idx.size() == ties) {
+                double db = fullest.drawn().layer().bar().diameter();
+                for (int k = 1; k <= ties; k++) {
+                    double x = fullest.x()[idx.get(k - 1)];
+                    // the leg touches its bar on the side nearer where evenly spaced legs would be
+                    double even = e + (b - 2 * e) * k / (legs - 1);
+                    out.add(even < x ? x - db / 2 - ds / 2 : x + db / 2 + ds / 2);
+                }
+                return out;
+            }
+        }
+        for (int k = 1; k <= ties; k++) {
+            out.add(e + (b - 2 * e) * k / (ties + 1));
+        }
+        return out;
+    }
+
+    private static String p(Mm m, double x, double y) {
+        return Svg.px(m.x(x)) + "," + Svg.px(m.y(y));
+    }
+
+    private static void bars(StringBuilder out, View v, Mm m, List<Placed> placed) {
+        for (Placed pl : placed) {
+            BarLayer bl = pl.drawn().layer();
+            double r = bl.bar().diameter() / 2 * m.s();
+            String fill = pl.drawn().counted() ? STEEL : OFF;
+            String cls = pl.drawn().counted() ? "bar" : "bar not-counted";
+            for (double x : pl.x()) {
+                out.append("<circle class=\"").append(cls).append("\" data-face=\"").append(bl.face().word())
+                        .append("\" data-bar=\"").append(Svg.esc(bl.bar().label())).append("\" cx=\"")
+                        .append(Svg.px(m.x(x))).append("\" cy=\"").append(Svg.px(m.y(pl.y()))).append("\" r=\"")
+                        .append(Svg.px(r)).append("\" fill=\"").append(fill).append("\"/>\n");
+            }
+        }
+    }
+
+    /**
+     * Skin bars (9.7.2.3) on both side faces, inside the stirrup legs, at their spacing from the layer
+     * nearest the tension face over h/2, as the design rule places them.
+     */
+    static List<double[]> skinCentres(View v, List<Placed> placed) {
+        List<double[]> out = new ArrayList<>();
+        SkinBars skin = v.skin();
+        if (skin == null) {
+            return out;
+        }
+        double h = v.shape().height();
+        int n = Layout.skinBarsPerFace(h, skin.spacing());
+        Face tension = v.bending().tensionFace();
+        double y0 = tension == Face.BOTTOM ? h - v.detailing().firstLayerCentroid(skin.bar().diameter())
+                : v.detailing().firstLayerCentroid(skin.bar().diameter());
+        for (Placed pl : placed) {
+            if (pl.drawn().layer().face() == tension) {
+                y0 = pl.y();
+                break;
+            }
+        }
+        double edge = v.detailing().cover() + v.detailing().stirrupBar().diameter() + skin.bar().diameter() / 2;
+        double sign = tension == Face.BOTTOM ? -1 : 1;
+        for (int k = 1; k <= n; k++) {
+            double y = y0 + sign * k * skin.spacing();
+            out.add(new double[] {edge, y});
+            out.add(new double[] {v.shape().width() - edge, y});
+        }
+        return out;
+    }
+
+    private static void skin(StringBuilder out, View v, Mm m, List<Placed> placed) {
+        if (v.skin() == null) {
+            return;
+        }
+        double r = v.skin().bar().diameter() / 2 * m.s();
+        for (double[] c : skinCentres(v, placed)) {
+            out.append("<circle class=\"skin\" cx=\"").append(Svg.px(m.x(c[0]))).append("\" cy=\"").append(Svg.px(m.y(c[1])))
+                    .append("\" r=\"").append(Svg.px(r)).append("\" fill=\"#5b5b5b\"/>\n");
+        }
+    }
+
+    private static void dimensions(StringBuilder out, View v, Mm m, UnitSystem u, double leftStub, double rightStub) {
+        SectionShape shape = v.shape();
+        double b = shape.width();
+        double h = shape.height();
+        // b under the web
+        double yb = m.y(h) + 18;
+        dimLine(out, m.x(0), yb, m.x(b), yb, true, -1);
+        Svg.text(out, (m.x(0) + m.x(b)) / 2, yb + 14, "middle", null, "b = " + len(b, u));
+        // h at the left of everything drawn
+        double xh = m.x(-leftStub) - 18;
+        dimLine(out, xh, m.y(0), xh, m.y(h), false, 1);
+        rotated(out, xh - 5, (m.y(0) + m.y(h)) / 2, "h = " + len(h, u));
+        // d from the compression face to the centroid of the tension steel
+        if (v.d() != null) {
+            double xd = m.x(b + rightStub) + 16;
+            double top = v.bending() == Bending.SAGGING ? 0 : h - v.d();
+            double bottom = v.bending() == Bending.SAGGING ? v.d() : h;
+            dimLine(out, xd, m.y(top), xd, m.y(bottom), false, -1);
+            rotated(out, xd + 12, (m.y(top) + m.y(bottom)) / 2, "d = " + len(v.d(), u));
+            double yc = m.y(v.bending() == Bending.SAGGING ? v.d() : h - v.d());
+            out.append("<line x1=\"").append(Svg.px(m.x(b) - 4)).append("\" y1=\"").append(Svg.px(yc)).append("\" x2=\"")
+                    .append(Svg.px(xd + 3)).append("\" y2=\"").append(Svg.px(yc)).append("\" stroke=\"").append(DIM)
+                    .append("\" stroke-width=\"0.6\" stroke-dasharray=\"2 2\"/>\n");
+        }
+        Flange f = shape.flange();
+        if (f != null) {
+            String what = (f.oneSided() ? "L-beam: " : "T-beam: ") + "flange b_f = " + len(f.width(), u) + ", h_f = "
+                    + len(f.thickness(), u) + (slabCut(shape) ? " (slab cut)" : "");
+            Svg.text(out, m.x(-leftStub), m.y(0) - 6, "start", null, what);
+        }
+    }
+
+    private static void legend(StringBuilder out, View v, Mm m, UnitSystem u) {
+        double h = v.shape().height();
+        double y = m.y(h) + 50;
+        // a scale bar of 100 mm (4 in)
+        double barMm = u == UnitSystem.US ? 101.6 : 100;
+        double x0 = m.x(0) - (v.shape().flange() != null && !v.shape().flange().oneSided() ? stub(v.shape()) * m.s() : 0);
+        double x1 = x0 + barMm * m.s();
+        out.append("<rect x=\"").append(Svg.px(x0)).append("\" y=\"").append(Svg.px(y - 4)).append("\" width=\"")
+                .append(Svg.px(barMm * m.s() / 2)).append("\" height=\"4\" fill=\"#333\"/>\n");
+        out.append("<rect x=\"").append(Svg.px((x0 + x1) / 2)).append("\" y=\"").append(Svg.px(y - 4)).append("\" width=\"")
+                .append(Svg.px(barMm * m.s() / 2)).append("\" height=\"4\" fill=\"#fff\" stroke=\"#333\" stroke-width=\"0.8\"/>\n");
+        Svg.text(out, x1 + 6, y, "start", null, (u == UnitSystem.US ? "4 in" : "100 mm") + "   drawn to scale, "
+                + Svg.px(m.s()) + " px per mm");
+        String cover = "cover " + len(v.detailing().cover(), u) + " to the stirrup (dashed)";
+        Svg.text(out, x0, y + 16, "start", null, cover);
+        if (v.stirrups() != null) {
+            Stirrups s = v.stirrups();
+            String bend = (insideBendDiameter(s.bar()) / s.bar().diameter() == 4 ? "4" : "6") + " d_b";
+            Svg.text(out, x0, y + 30, "start", null, "stirrup " + s.bar().label() + ", " + s.legs() + " legs @ "
+                    + len(s.spacing(), u) + "; bends " + bend + " inside, 135° hooks + "
+                    + len(hookExtension(s.bar(), v.code()), u));
+        }
+        boolean anyOff = v.layers().stream().anyMatch(l -> !l.counted());
+        boolean slabOff = v.shape().flange() != null && v.bending() == Bending.HOGGING;
+        if (anyOff || slabOff) {
+            Svg.text(out, x0, y + 44, "start", null, "grey: present, not counted here"
+                    + (slabOff ? " (slab on the tension side)" : ""));
+        }
+    }
+
+    /** Bar labels to the right of the section, pushed apart so they never overlap, with leader lines. */
+    private static void labels(StringBuilder out, View v, Mm m, List<Placed> placed, double x) {
+        List<double[]> rows = new ArrayList<>();
+        List<String> texts = new ArrayList<>();
+        List<Boolean> counted = new ArrayList<>();
+        List<Placed> order = new ArrayList<>(placed);
+        order.sort(Comparator.comparingDouble(Placed::y));
+        for (Placed pl : order) {
+            BarLayer bl = pl.drawn().layer();
+            double lastX = pl.x()[pl.x().length - 1] + bl.bar().diameter() / 2;
+            rows.add(new double[] {m.y(pl.y()), m.x(lastX), m.y(pl.y())});
+            texts.add(bl.count() + " " + bl.bar().label() + (pl.drawn().counted() ? "" : " (not counted)"));
+            counted.add(pl.drawn().counted());
+        }
+        if (v.skin() != null) {
+            List<double[]> sk = skinCentres(v, placed);
+            if (!sk.isEmpty()) {
+                double yMid = 0;
+                for (double[] c : sk) {
+                    yMid += c[1];
+                }
+                yMid /= sk.size();
+                double[] last = sk.get(sk.size() - 1);
+                int at = 0;
+                while (at < rows.size() && rows.get(at)[0] < m.y(yMid)) {
+                    at++;
+                }
+                rows.add(at, new double[] {m.y(yMid), m.x(last[0] + v.skin().bar().diameter() / 2), m.y(yMid)});
+                texts.add(at, "skin " + sk.size() / 2 + " " + v.skin().bar().label() + " each face");
+                counted.add(at, true);
+            }
+        }
+        double gap = 14;
+        for (int i = 1; i < rows.size(); i++) {
+            rows.get(i)[0] = Math.max(rows.get(i)[0], rows.get(i - 1)[0] + gap);
+        }
+        double limit = m.y(v.shape().height()) + 8;
+        for (int i = rows.size() - 1; i >= 0; i--) {
+            double max = i == rows.size() - 1 ? limit : rows.get(i + 1)[0] - gap;
+            rows.get(i)[0] = Math.min(rows.get(i)[0], max);
+        }
+        for (int i = 0; i < rows.size(); i++) {
+            double[] r = rows.get(i);
+            out.append("<polyline fill=\"none\" stroke=\"").append(DIM).append("\" stroke-width=\"0.6\" points=\"")
+                    .append(Svg.px(r[1] + 2)).append(',').append(Svg.px(r[2])).append(' ').append(Svg.px(x - 10)).append(',')
+                    .append(Svg.px(r[0] - 4)).append(' ').append(Svg.px(x - 3)).append(',').append(Svg.px(r[0] - 4))
+                    .append("\"/>\n");
+            Svg.text(out, x, r[0], "start", counted.get(i) ? "bar-label" : "bar-label not-counted", texts.get(i));
+        }
+    }
+
+    /** A dimension line with oblique ticks; {@code towards} (+1 or -1) is the side of the object, for the extension lines. */
+    private static void dimLine(StringBuilder out, double x1, double y1, double x2, double y2, boolean horizontal,
+            int towards) {
+        out.append("<g stroke=\"").append(DIM).append("\" stroke-width=\"0.8\">");
+        out.append("<line x1=\"").append(Svg.px(x1)).append("\" y1=\"").append(Svg.px(y1)).append("\" x2=\"")
+                .append(Svg.px(x2)).append("\" y2=\"").append(Svg.px(y2)).append("\"/>");
+        // oblique ticks at both ends, and short extension lines back to the object
+        for (double[] pt : new double[][] {{x1, y1}, {x2, y2}}) {
+            out.append("<line x1=\"").append(Svg.px(pt[0] - 4)).append("\" y1=\"").append(Svg.px(pt[1] + 4))
+                    .append("\" x2=\"").append(Svg.px(pt[0] + 4)).append("\" y2=\"").append(Svg.px(pt[1] - 4)).append("\"/>");
+            if (horizontal) {
+                out.append("<line x1=\"").append(Svg.px(pt[0])).append("\" y1=\"").append(Svg.px(pt[1] + towards * 14))
+                        .append("\" x2=\"").append(Svg.px(pt[0])).append("\" y2=\"").append(Svg.px(pt[1] - towards * 3)).append("\"/>");
+            } else {
+                out.append("<line x1=\"").append(Svg.px(pt[0] - towards * 3)).append("\" y1=\"").append(Svg.px(pt[1]))
+                        .append("\" x2=\"").append(Svg.px(pt[0] + towards * 14)).append("\" y2=\"").append(Svg.px(pt[1])).append("\"/>");
+            }
+        }
+        out.append("</g>\n");
+    }
+
+    private static void rotated(StringBuilder out, double x, double y, String text) {
+        out.append("<text x=\"").append(Svg.px(x)).append("\" y=\"").append(Svg.px(y)).append("\" text-anchor=\"middle\"")
+                .append(" transform=\"rotate(-90 ").append(Svg.px(x)).append(' ').append(Svg.px(y)).append(")\">")
+                .append(Svg.esc(text)).append("</text>\n");
+    }
+
+    static String len(double mm, UnitSystem u) {
+        return u.compact(mm, Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+    }
+}
