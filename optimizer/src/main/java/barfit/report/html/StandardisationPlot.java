@@ -1,0 +1,106 @@
+package barfit.report.html;
+
+import barfit.report.Money;
+import barfit.schedule.ScheduleResult;
+import barfit.units.UnitSystem;
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.geom.Ellipse2D;
+import java.awt.geom.Rectangle2D;
+import java.text.DecimalFormat;
+import java.text.DecimalFormatSymbols;
+import java.util.List;
+import java.util.Locale;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.annotations.XYTextAnnotation;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.ViewBox;
+
+/**
+ * The price of standardisation as an SVG chart (JFreeChart drawn on JFreeSVG): the least total cost of
+ * the schedule against the most section sizes allowed, each point labelled with its cost. The same
+ * string serves as a file and inline in the HTML report: one {@code <svg>} element with a view box and
+ * no XML prolog, fixed defs prefix so it is the same run to run.
+ */
+public final class StandardisationPlot {
+    static final double WIDTH = 720;
+    static final double HEIGHT = 400;
+    private static final Color LINE = new Color(0x1f, 0x4e, 0x79);
+
+    private StandardisationPlot() {
+    }
+
+    public static String svg(List<ScheduleResult.StandardisationPoint> points, UnitSystem u, String currency) {
+        System.setProperty("java.awt.headless", "true");
+        XYSeries cost = new XYSeries("least total cost");
+        int kMin = Integer.MAX_VALUE;
+        int kMax = Integer.MIN_VALUE;
+        for (ScheduleResult.StandardisationPoint p : points) {
+            kMin = Math.min(kMin, p.sizes());
+            kMax = Math.max(kMax, p.sizes());
+            if (Double.isFinite(p.cost())) {
+                cost.add(p.sizes(), round(p.cost()));
+            }
+        }
+        if (points.isEmpty()) {
+            kMin = 1;
+            kMax = 1;
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        data.addSeries(cost);
+        NumberAxis x = new NumberAxis("most section sizes allowed (K)");
+        x.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        x.setRange(kMin - 0.5, kMax + 0.5);
+        NumberAxis y = new NumberAxis("total cost of the schedule" + (currency.isEmpty() ? "" : " (" + currency + ")"));
+        y.setAutoRangeIncludesZero(false);
+        // tick labels in a fixed locale, so the chart is the same on every machine
+        y.setNumberFormatOverride(new DecimalFormat("0.##", DecimalFormatSymbols.getInstance(Locale.ROOT)));
+        x.setNumberFormatOverride(new DecimalFormat("0", DecimalFormatSymbols.getInstance(Locale.ROOT)));
+        y.setUpperMargin(0.15);
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
+        renderer.setSeriesPaint(0, LINE);
+        renderer.setSeriesStroke(0, new BasicStroke(2.2f));
+        renderer.setSeriesShape(0, new Ellipse2D.Double(-4, -4, 8, 8));
+        XYPlot plot = new XYPlot(data, x, y, renderer);
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
+        plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
+        for (ScheduleResult.StandardisationPoint p : points) {
+            String text = Double.isFinite(p.cost()) ? Money.amount(p.cost()) : "none feasible";
+            double at = Double.isFinite(p.cost()) ? round(p.cost()) : Double.NaN;
+            if (!Double.isFinite(at)) {
+                continue;
+            }
+            // beside the point, clear of the line
+            XYTextAnnotation note = new XYTextAnnotation("  " + text, p.sizes() + 0.04, at);
+            note.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
+            note.setTextAnchor(TextAnchor.BOTTOM_LEFT);
+            plot.addAnnotation(note);
+        }
+        JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), plot, false);
+        chart.setTitle(new TextTitle("Price of standardisation: least total cost against the number of section sizes",
+                new Font(Font.SANS_SERIF, Font.BOLD, 14)));
+        chart.setBackgroundPaint(Color.WHITE);
+        chart.setAntiAlias(true);
+        SVGGraphics2D g = new SVGGraphics2D(WIDTH, HEIGHT);
+        g.setDefsKeyPrefix("standardisation-"); // a fixed prefix keeps the file the same from run to run
+        chart.draw(g, new Rectangle2D.Double(0, 0, WIDTH, HEIGHT));
+        String svg = g.getSVGElement(null, true, new ViewBox(0, 0, WIDTH, HEIGHT), null, null);
+        // nothing in the chart uses JFreeSVG's own namespace: drop it, so the only URIs left are SVG's and XLink's
+        svg = svg.replace(" xmlns:jfreesvg='http://www.jfree.org/jfreesvg/svg'", "");
+        return svg.replace("\r\n", "\n") + "\n";
+    }
+
+    /** Costs to cents, so the drawn points do not depend on the last bits of a sum. */
+    private static double round(double v) {
+        return Math.round(v * 100) / 100.0;
+    }
+}
