@@ -1,0 +1,739 @@
+package barfit.report.html;
+
+import barfit.catalogs.BarSize;
+import barfit.design.CostRates;
+import barfit.design.SearchSpace;
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.design.beam.Extension;
+import barfit.input.Settings;
+import barfit.report.Caution;
+import barfit.report.Money;
+import barfit.report.TrailText;
+import barfit.report.Words;
+import barfit.schedule.Rationalise;
+import barfit.schedule.ScheduleInput;
+import barfit.schedule.ScheduleResult;
+import barfit.section.CheckReport;
+import barfit.section.CheckResult;
+import barfit.section.FlexureResult;
+import barfit.section.SpanChecks;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * The HTML report of a designed schedule: one self-contained page (inline CSS and SVG, nothing fetched)
+ * with the caution, the project data and assumptions, the beam schedule, the rationalisation proof, the
+ * cost summary, the price of standardisation, and one block per beam with its bar list, its sections
+ * drawn to scale beside their strain and stress, every check and the calculation trail. The same result
+ * gives the same bytes: fixed formatting, input order, no times or dates.
+ */
+public final class ScheduleHtml {
+    private ScheduleHtml() {
+    }
+
+    public static String render(ScheduleResult r) {
+        ScheduleInput in = r.input();
+        Settings s = in.settings();
+        UnitSystem u = s.units();
+        List<String> ids = beamIds(r);
+        StringBuilder out = new StringBuilder(1 << 16);
+        String title = "Beam schedule: " + String.join(", ", in.sources());
+        out.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n");
+        out.append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n");
+        out.append("<title>").append(Svg.esc(title)).append("</title>\n<style>\n").append(CSS).append("</style>\n</head>\n<body>\n");
+        out.append("<header>\n<h1>").append(Svg.esc(title)).append("</h1>\n<p class=\"sub\">barfit schedule report · ")
+                .append(Svg.esc(s.code().edition())).append(" · ").append(unitsWords(u)).append("</p>\n</header>\n");
+        caution(out);
+        contents(r, out);
+        project(r, out);
+        schedule(r, ids, out);
+        if (r.proof() != null) {
+            proof(r, out);
+        }
+        costs(r, out);
+        if (!r.standardisation().isEmpty()) {
+            standardisation(r, out);
+        }
+        out.append("<section id=\"beams\">\n<h2>Beams</h2>\n");
+        for (int i = 0; i < r.beams().size(); i++) {
+            beam(r, r.beams().get(i), ids.get(i), out);
+        }
+        out.append("</section>\n");
+        out.append("<footer>\n<p>").append(Svg.esc(Caution.SHORT)).append("</p>\n</footer>\n</body>\n</html>\n");
+        return out.toString();
+    }
+
+    /** Element ids of the beam blocks: "beam-" and the mark, made safe for a fragment and unique. */
+    static List<String> beamIds(ScheduleResult r) {
+        List<String> out = new ArrayList<>();
+        Set<String> used = new HashSet<>();
+        for (ScheduleResult.Beam b : r.beams()) {
+            String base = "beam-" + b.beam().id().replaceAll("[^A-Za-z0-9_.-]", "_");
+            String id = base;
+            for (int k = 2; !used.add(id); k++) {
+                id = base + "-" + k;
+            }
+            out.add(id);
+        }
+        return out;
+    }
+
+    private static void caution(StringBuilder out) {
+        List<String> lines = Caution.LINES;
+        out.append("<aside class=\"caution\" role=\"note\">\n<p><strong>").append(Svg.esc(lines.get(0)))
+                .append("</strong></p>\n<p>");
+        for (int i = 1; i < lines.size(); i++) {
+            out.append(i == 1 ? "" : "\n").append(Svg.esc(lines.get(i)));
+        }
+        out.append("</p>\n<p>The cost rates are the input's (barfit's invented defaults where none are given): compare "
+                + "them with your own before relying on a price.</p>\n</aside>\n");
+    }
+
+    private static void contents(ScheduleResult r, StringBuilder out) {
+        out.append("<nav>\n<a href=\"#project\">Project data</a> · <a href=\"#schedule\">Schedule</a>");
+        if (r.proof() != null) {
+            out.append(" · <a href=\"#rationalisation\">Rationalisation</a>");
+        }
+        out.append(" · <a href=\"#costs\">Costs</a>");
+        if (!r.standardisation().isEmpty()) {
+            out.append(" · <a href=\"#standardisation\">Price of standardisation</a>");
+        }
+        out.append(" · <a href=\"#beams\">Beams</a>\n</nav>\n");
+    }
+
+    // ---------------------------------------------------------------- project data
+
+    private static void project(ScheduleResult r, StringBuilder out) {
+        ScheduleInput in = r.input();
+        Settings s = in.settings();
+        UnitSystem u = s.units();
+        var m = s.materials();
+        var det = s.detailing();
+        SearchSpace sp = in.space();
+        out.append("<section id=\"project\">\n<h2>Project data and assumptions</h2>\n<div class=\"cols\">\n");
+        out.append("<table class=\"kv\">\n<caption>Code, materials, detailing</caption>\n");
+        kv(out, "code", s.code().edition() + ", nonprestressed beams");
+        kv(out, "units", unitsWords(u));
+        kv(out, "concrete", "f'c = " + u.withUnit(m.fc(), Dim.STRESS) + ", λ = " + u.compact(m.lambda(), Dim.NUMBER)
+                + ", aggregate " + len(m.aggregate(), u));
+        kv(out, "steel", "fy = " + u.withUnit(m.fy(), Dim.STRESS) + " (longitudinal), fyt = " + u.withUnit(m.fyt(), Dim.STRESS)
+                + " (stirrups), Es = " + u.compact(s.code().es(), Dim.STRESS) + " " + u.unit(Dim.STRESS));
+        kv(out, "bar catalog", s.catalog().id() + ": " + s.catalog().title() + " (" + s.catalog().source() + ")");
+        kv(out, "cover", len(det.cover(), u) + " clear to the stirrups, exposure " + det.exposure().key() + " (20.5.1.3)");
+        kv(out, "layer gap", len(det.layerGap(), u) + " clear between layers (25.2.2)");
+        kv(out, "stirrups", "sizes " + labels(sp.stirrupSizes()) + "; legs " + joinInts(sp.stirrupLegs()) + "; spacing "
+                + range(sp.stirrupSpacings(), u));
+        out.append("</table>\n");
+        out.append("<table class=\"kv\">\n<caption>Search space</caption>\n");
+        kv(out, "widths", lengths(sp.widths(), u));
+        kv(out, "depths", range(sp.depths(), u));
+        kv(out, "bar sizes", labels(sp.barSizes()));
+        kv(out, "compression bar sizes", labels(sp.compressionSizes()));
+        kv(out, "layers of bars", "1 to " + sp.maxLayers() + " on the tension face");
+        kv(out, "bar sizes per beam", "at most " + in.maxBarSizesPerBeam());
+        out.append("</table>\n");
+        out.append("<table class=\"kv\">\n<caption>Cost rates").append(in.currency().isEmpty() ? ""
+                : " (" + Svg.esc(in.currency()) + ")").append("</caption>\n");
+        rates(in.rates(), u, out);
+        out.append("</table>\n</div>\n");
+
+        out.append("<h3>Rules of thumb the design uses</h3>\n<ul class=\"rules\">\n");
+        li(out, "Stirrup legs: two legs hold up to " + in.barsPerTwoLegs() + " bars in a layer, four legs up to "
+                + 2 * in.barsPerTwoLegs() + ", and so on (common practice, no clause); legs beyond two are crossties.");
+        li(out, "Top bars: two or more bars run the full span; the extra bars at a continuous support run past the "
+                + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0).");
+        li(out, "At most " + in.maxBarSizesPerBeam() + " longitudinal bar sizes per beam; bottom bars of one size run the "
+                + "full span.");
+        li(out, "Main-bar mass is multiplied by the lap factor " + u.compact(in.rates().lapFactor(), Dim.NUMBER)
+                + " for laps and waste.");
+        li(out, "Skin bars of the smallest bar size at the 24.3.2 spacing where h > " + (u == UnitSystem.US ? "36 in"
+                : "900 mm") + " (9.7.2.3), priced as main bars.");
+        li(out, "Stirrup zones follow the shear envelope of a uniformly loaded span: each support zone runs to where "
+                + "the shear has fallen to half its end value.");
+        li(out, "Deflection is computed (24.2) only where h is below the minimum of Table 9.3.1.1.");
+        li(out, "Bars are drawn where the checks place them: corner bars at cover + stirrup + d_b/2 from each face, "
+                + "the rest evenly between. Where the stirrup's bend radius (Table 25.3.2) is larger than the bar's, a "
+                + "real corner bar nests slightly further in, and the drawing shows it touching the bend.");
+        out.append("</ul>\n");
+
+        Rationalise ra = in.rationalise();
+        out.append("<h3>Rationalisation</h3>\n");
+        if (ra == null) {
+            out.append("<p>None: each beam is designed at its own optimum.</p>\n");
+        } else {
+            out.append("<table class=\"kv\">\n");
+            kv(out, "section sizes", ra.maxSectionSizes() == null ? "no limit" : "at most " + ra.maxSectionSizes()
+                    + " distinct b × h over the schedule");
+            kv(out, "bar sizes", ra.maxBarSizes() == null ? "no limit" : "at most " + ra.maxBarSizes()
+                    + " distinct longitudinal bar sizes over the schedule");
+            kv(out, "groups", ra.groupsSameSection() ? "beams of one group share b × h" : "groups do not constrain b × h");
+            kv(out, "formwork set", money(ra.formworkSetCost(), in.currency()) + " per distinct section size");
+            out.append("</table>\n");
+        }
+        out.append("</section>\n");
+    }
+
+    private static void rates(CostRates c, UnitSystem u, StringBuilder out) {
+        boolean us = u == UnitSystem.US;
+        // the rates are held per SI unit; show them per the input's units
+        double yd3 = 0.764554857984;
+        double lb = 0.45359237;
+        double ft2 = 0.3048 * 0.3048;
+        kv(out, "concrete", amount(us ? c.concretePerM3() * yd3 : c.concretePerM3()) + (us ? " per yd³" : " per m³"));
+        kv(out, "main bars", amount(us ? c.mainBarsPerKg() * lb : c.mainBarsPerKg()) + (us ? " per lb" : " per kg"));
+        kv(out, "stirrups", amount(us ? c.stirrupsPerKg() * lb : c.stirrupsPerKg()) + (us ? " per lb" : " per kg"));
+        kv(out, "formwork", amount(us ? c.formworkPerM2() * ft2 : c.formworkPerM2()) + (us ? " per ft²" : " per m²")
+                + " of contact");
+        kv(out, "depth premium", amount(us ? c.depthPremiumPerM() * ft2 : c.depthPremiumPerM())
+                + (us ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
+        kv(out, "lap factor", u.compact(c.lapFactor(), Dim.NUMBER) + " on main-bar mass");
+    }
+
+    // ---------------------------------------------------------------- schedule table
+
+    private static void schedule(ScheduleResult r, List<String> ids, StringBuilder out) {
+        UnitSystem u = r.input().settings().units();
+        String cur = r.input().currency();
+        boolean own = r.proof() != null;
+        out.append("<section id=\"schedule\">\n<h2>Beam schedule</h2>\n<div class=\"wide\">\n<table class=\"grid schedule\">\n");
+        out.append("<thead><tr><th>mark</th><th>group</th><th>span (").append(u.unit(Dim.SPAN)).append(")</th><th>b × h (")
+                .append(u.unit(Dim.LENGTH)).append(")</th><th>bottom, full span</th><th>top continuous</th>")
+                .append("<th>top at left support</th><th>top at right support</th><th>stirrups by zone</th>")
+                .append("<th>φMn / Mu (").append(u.unit(Dim.MOMENT)).append(")</th><th>cost")
+                .append(cur.isEmpty() ? "" : " (" + Svg.esc(cur) + ")").append("</th>");
+        if (own) {
+            out.append("<th>own optimum</th>");
+        }
+        out.append("</tr></thead>\n<tbody>\n");
+        for (int i = 0; i < r.beams().size(); i++) {
+            ScheduleResult.Beam b = r.beams().get(i);
+            BeamProblem p = b.outcome().problem();
+            out.append("<tr").append(b.feasible() ? "" : " class=\"infeasible\"").append("><td class=\"mark\"><a href=\"#")
+                    .append(Svg.esc(ids.get(i))).append("\">").append(Svg.esc(b.beam().id())).append("</a></td><td>")
+                    .append(Svg.esc(b.beam().group() == null ? "—" : b.beam().group())).append("</td><td class=\"num\">")
+                    .append(u.number(p.span(), Dim.SPAN)).append("</td>");
+            if (!b.feasible()) {
+                BeamDesigner.Diagnosis d = b.outcome().diagnosis();
+                out.append("<td colspan=\"").append(own ? 9 : 8).append("\">no passing layout in the search space — ")
+                        .append(Svg.esc(diagnosis(d))).append("</td></tr>\n");
+                continue;
+            }
+            BeamDesigner.Design d = b.outcome().best();
+            BeamLayout l = d.layout();
+            out.append("<td class=\"num\">").append(u.compact(l.width(), Dim.LENGTH)).append(" × ")
+                    .append(u.compact(l.height(), Dim.LENGTH)).append(l.flange() != null ? (l.flange().oneSided() ? " L" : " T") : "")
+                    .append("</td>");
+            out.append("<td>").append(Svg.esc(perLayer(l.bottomCounts(), l.bottom()))).append("</td>");
+            if (p.cantilever()) {
+                out.append("<td>—</td><td>").append(Svg.esc(perLayer(l.topLeft(), l.top()))).append(", full length</td><td>—</td>");
+            } else {
+                out.append("<td>").append(l.topContinuous()).append(' ').append(Svg.esc(l.top().label())).append("</td>");
+                out.append("<td>").append(p.leftSupport() ? Svg.esc(topAtSupport(l.topLeft(), l, l.extLeft(), u)) : "—")
+                        .append("</td>");
+                out.append("<td>").append(p.rightSupport() ? Svg.esc(topAtSupport(l.topRight(), l, l.extRight(), u)) : "—")
+                        .append("</td>");
+            }
+            out.append("<td class=\"lines\">");
+            List<BeamProblem.Zone> zones = p.zones();
+            for (int z = 0; z < zones.size(); z++) {
+                var st = l.zoneStirrups().get(z);
+                out.append(z == 0 ? "" : "<br>").append(Svg.esc(zones.get(z).name())).append(": ")
+                        .append(Svg.esc(st.bar().label())).append(" × ").append(st.legs()).append(" @ ")
+                        .append(u.compact(st.spacing(), Dim.LENGTH));
+            }
+            out.append("</td><td class=\"lines\">");
+            boolean first = true;
+            for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+                FlexureResult f = e.getValue().flexure();
+                double mu = Math.abs(e.getValue().demand().mu());
+                out.append(first ? "" : "<br>").append(shortPlace(e.getKey())).append(": ")
+                        .append(u.number(f.phiMn(), Dim.MOMENT)).append(" / ").append(u.number(mu, Dim.MOMENT));
+                first = false;
+            }
+            out.append("</td><td class=\"num\">").append(Money.amount(d.cost().total())).append("</td>");
+            if (own) {
+                out.append("<td class=\"num\">").append(Double.isFinite(b.ownOptimum()) ? Money.amount(b.ownOptimum()) : "—")
+                        .append("</td>");
+            }
+            out.append("</tr>\n");
+        }
+        out.append("</tbody>\n</table>\n</div>\n<p class=\"note\">Bars per layer from the face inward (\"3+2\": three in "
+                + "the outer layer, two in the next). At a support the count includes the continuous top bars; the "
+                + "extras run the length given past the face. Stirrups: size × legs @ spacing in ").append(u.unit(Dim.LENGTH))
+                .append(".</p>\n</section>\n");
+    }
+
+    /** "3+2 No. 25": bars per layer from the face inward. */
+    static String perLayer(List<Integer> counts, BarSize bar) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < counts.size(); i++) {
+            sb.append(i == 0 ? "" : "+").append(counts.get(i));
+        }
+        return sb.append(' ').append(bar.label()).toString();
+    }
+
+    private static String topAtSupport(List<Integer> counts, BeamLayout l, double ext, UnitSystem u) {
+        int extra = BeamLayout.sum(counts) - l.topContinuous();
+        return perLayer(counts, l.top()) + (extra > 0 ? "; " + extra + " extra, " + span(ext, u) + " past the face" : "");
+    }
+
+    private static String diagnosis(BeamDesigner.Diagnosis d) {
+        return "binding limit: " + d.limit() + " (" + d.summary() + ")" + (d.fixes().isEmpty()
+                ? "; no single relaxed limit (depth, width) gives a passing layout"
+                : "; what would work, one limit at a time: " + String.join("; ", d.fixes()));
+    }
+
+    // ---------------------------------------------------------------- rationalisation proof
+
+    private static void proof(ScheduleResult r, StringBuilder out) {
+        UnitSystem u = r.input().settings().units();
+        ScheduleResult.Proof p = r.proof();
+        String cur = r.input().currency();
+        out.append("<section id=\"rationalisation\">\n<h2>Rationalisation and its proof</h2>\n<div class=\"cols\">\n");
+        out.append("<table class=\"kv\">\n<caption>Proof</caption>\n");
+        kv(out, "method", p.method());
+        kv(out, "status", p.status());
+        kv(out, "objective", money(p.objective(), cur));
+        kv(out, "best bound", money(p.bound(), cur));
+        kv(out, "gap", String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()));
+        kv(out, "bar-size sets", p.barSetsTotal() + " considered, " + p.barSetsSolved() + " solved, " + p.barSetsPruned()
+                + " pruned by the cost bound");
+        kv(out, "(beam, size) pairs", p.pairsEvaluated() + " designed exactly");
+        // measured times are left out so that the same result always gives the same page
+        kv(out, "CP-SAT", p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed());
+        out.append("</table>\n");
+        out.append("<table class=\"grid\">\n<caption>Section sizes used</caption>\n<thead><tr><th>b × h (")
+                .append(u.unit(Dim.LENGTH)).append(")</th><th>beams</th></tr></thead>\n<tbody>\n");
+        for (ScheduleResult.SectionSize z : r.sizes()) {
+            out.append("<tr><td class=\"num\">").append(u.compact(z.width(), Dim.LENGTH)).append(" × ")
+                    .append(u.compact(z.height(), Dim.LENGTH)).append("</td><td>").append(Svg.esc(String.join(", ", z.beams())))
+                    .append("</td></tr>\n");
+        }
+        out.append("</tbody>\n</table>\n</div>\n<p>Bar sizes used: ").append(Svg.esc(r.barSizes().isEmpty() ? "none"
+                : String.join(", ", r.barSizes()))).append(".</p>\n</section>\n");
+    }
+
+    // ---------------------------------------------------------------- costs
+
+    private static void costs(ScheduleResult r, StringBuilder out) {
+        String cur = r.input().currency();
+        out.append("<section id=\"costs\">\n<h2>Cost summary</h2>\n<table class=\"kv money\">\n");
+        kv(out, "beams", money(r.beamsCost(), cur));
+        String sets = r.input().rationalise() == null ? "" : " (" + r.sizes().size() + " section "
+                + (r.sizes().size() == 1 ? "size" : "sizes") + ")";
+        kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), cur));
+        kvStrong(out, "total", money(r.totalCost(), cur));
+        kv(out, "every beam at its own optimum", money(r.unconstrainedCost(), cur));
+        double diff = r.totalCost() - r.unconstrainedCost();
+        String pct = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * diff / r.unconstrainedCost())
+                : "";
+        kv(out, "difference", (diff >= 0 ? "+" : "") + money(diff, cur) + pct);
+        out.append("</table>\n");
+        long none = r.beams().stream().filter(b -> !b.feasible()).count();
+        if (none > 0) {
+            out.append("<p class=\"warn\">").append(none).append(none == 1 ? " beam has" : " beams have")
+                    .append(" no passing layout: the costs cover only the beams that have one.</p>\n");
+        }
+        out.append("</section>\n");
+    }
+
+    // ---------------------------------------------------------------- price of standardisation
+
+    private static void standardisation(ScheduleResult r, StringBuilder out) {
+        UnitSystem u = r.input().settings().units();
+        String cur = r.input().currency();
+        List<ScheduleResult.StandardisationPoint> pts = new ArrayList<>(r.standardisation());
+        pts.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
+        out.append("<section id=\"standardisation\">\n<h2>Price of standardisation</h2>\n<table class=\"grid\">\n<thead><tr>")
+                .append("<th>most section sizes K</th><th>total cost").append(cur.isEmpty() ? "" : " (" + Svg.esc(cur) + ")")
+                .append("</th><th>saving of one more size</th><th>status</th><th>bar sizes</th></tr></thead>\n<tbody>\n");
+        double prev = Double.NaN;
+        for (ScheduleResult.StandardisationPoint p : pts) {
+            String saving = Double.isFinite(prev) && Double.isFinite(p.cost()) ? Money.amount(prev - p.cost()) : "—";
+            out.append("<tr><td class=\"num\">").append(p.sizes()).append("</td><td class=\"num\">")
+                    .append(Double.isFinite(p.cost()) ? Money.amount(p.cost()) : "none feasible").append("</td><td class=\"num\">")
+                    .append(saving).append("</td><td>").append(Svg.esc(p.status())).append("</td><td>")
+                    .append(Svg.esc(String.join(", ", p.barSizes()))).append("</td></tr>\n");
+            prev = p.cost();
+        }
+        out.append("</tbody>\n</table>\n<figure class=\"plot\">\n").append(StandardisationPlot.svg(pts, u, cur))
+                .append("</figure>\n</section>\n");
+    }
+
+    // ---------------------------------------------------------------- one beam
+
+    private static void beam(ScheduleResult r, ScheduleResult.Beam b, String id, StringBuilder out) {
+        UnitSystem u = r.input().settings().units();
+        String cur = r.input().currency();
+        BeamDesigner.Outcome o = b.outcome();
+        BeamProblem p = o.problem();
+        out.append("<section class=\"beam\" id=\"").append(Svg.esc(id)).append("\">\n<h3>Beam ").append(Svg.esc(b.beam().id()))
+                .append(" <span class=\"status ").append(o.feasible() ? "ok" : "none").append("\">")
+                .append(Svg.esc(o.status().toUpperCase(Locale.ROOT))).append("</span></h3>\n");
+        out.append("<div class=\"cols\">\n<table class=\"kv\">\n<caption>Data</caption>\n");
+        if (b.beam().group() != null) {
+            kv(out, "group", b.beam().group());
+        }
+        kv(out, "span", span(p.span(), u) + " clear, " + p.ends().words());
+        if (p.maxDepth() != null) {
+            kv(out, "headroom cap", "h ≤ " + len(p.maxDepth(), u));
+        }
+        if (p.fixedWidth() != null) {
+            kv(out, "width", "fixed at " + len(p.fixedWidth(), u));
+        }
+        if (p.flange() != null) {
+            kv(out, "flange", "b_f = " + len(p.flange().width(), u) + ", h_f = " + len(p.flange().thickness(), u)
+                    + (p.flange().oneSided() ? " (one side)" : "") + ", counted at mid-span only");
+        }
+        kv(out, "Mu", moments(p, u));
+        kv(out, "Vu at d from the faces", shears(p, u));
+        if (p.service() != null) {
+            kv(out, "service loads", "D = " + u.withUnit(p.service().dead(), Dim.LINE_LOAD) + ", L = "
+                    + u.withUnit(p.service().live(), Dim.LINE_LOAD) + (p.service().sustainedLive() > 0
+                    ? ", sustained " + u.compact(p.service().sustainedLive(), Dim.NUMBER) + " of L" : ""));
+            kv(out, "deflection limits", "live ℓ/" + plain(p.limits().live()) + ", long-term + live ℓ/"
+                    + plain(p.limits().total()));
+        }
+        kv(out, "bottom bars at supports", p.bottomAnchored() ? "anchored: compression steel there"
+                : "not anchored: not counted there");
+        out.append("</table>\n");
+        if (!o.feasible()) {
+            BeamDesigner.Diagnosis d = o.diagnosis();
+            out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>No layout in the search space passes.</strong></p>\n")
+                    .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(d.summary()))
+                    .append("</p>\n<p>").append(Svg.esc(d.fixes().isEmpty()
+                            ? "No single relaxed limit (depth, width) gives a passing layout."
+                            : "What would work, one limit at a time: " + String.join("; ", d.fixes()))).append("</p>\n</div>\n")
+                    .append("</section>\n");
+            return;
+        }
+        BeamDesigner.Design d = o.best();
+        BeamLayout l = d.layout();
+        out.append("<table class=\"kv\">\n<caption>Design</caption>\n");
+        kv(out, "section", Words.shape(l.shape(), u));
+        kv(out, "bottom", perLayer(l.bottomCounts(), l.bottom()) + ", full span");
+        if (p.cantilever()) {
+            kv(out, "top", perLayer(l.topLeft(), l.top()) + ", full length");
+        } else {
+            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span");
+            String rule = " (" + Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top()).rule() + ")";
+            if (p.leftSupport()) {
+                boolean extra = BeamLayout.sum(l.topLeft()) > l.topContinuous();
+                kv(out, "top at left support", topAtSupport(l.topLeft(), l, l.extLeft(), u) + (extra ? rule : ""));
+            }
+            if (p.rightSupport()) {
+                boolean extra = BeamLayout.sum(l.topRight()) > l.topContinuous();
+                kv(out, "top at right support", topAtSupport(l.topRight(), l, l.extRight(), u) + (extra ? rule : ""));
+            }
+        }
+        if (l.skin() != null) {
+            kv(out, "skin bars", l.skin().bar().label() + " @ " + len(l.skin().spacing(), u) + " each side face (9.7.2.3)");
+        }
+        List<BeamProblem.Zone> zones = p.zones();
+        for (int i = 0; i < zones.size(); i++) {
+            BeamProblem.Zone z = zones.get(i);
+            var st = l.zoneStirrups().get(i);
+            kv(out, "stirrups, " + z.name() + " zone", span(z.from(), u) + " to " + span(z.to(), u) + ": "
+                    + Words.stirrups(st, u) + ", " + BeamLayout.stirrupSets(z.length(), st.spacing()) + " sets"
+                    + (z.vu() == null ? " (minimum)" : " (Vu = " + u.withUnit(z.vu(), Dim.FORCE) + ")"));
+        }
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            FlexureResult f = e.getValue().flexure();
+            double mu = Math.abs(e.getValue().demand().mu());
+            kv(out, place(p, e.getKey()), "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " for Mu = "
+                    + u.withUnit(mu, Dim.MOMENT) + " (Mu/φMn " + Words.ratio(mu / f.phiMn()) + "), ε_t = "
+                    + Words.fixed(f.epsT(), 5) + ", φ = " + Words.fixed(f.phi(), 3));
+        }
+        kv(out, "deflection", deflection(d.report().span(), p, u));
+        kv(out, "binding", binding(o.binding()));
+        kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
+        kv(out, "proof", proofWords(o.proof()));
+        out.append("</table>\n</div>\n");
+
+        out.append("<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
+                .append("<th>bar</th><th>length (").append(u.unit(Dim.SPAN)).append(")</th></tr></thead>\n<tbody>\n");
+        for (BeamLayout.BarMark m : d.bars()) {
+            out.append("<tr><td>").append(Svg.esc(m.mark())).append("</td><td>").append(Svg.esc(m.role()))
+                    .append("</td><td class=\"num\">").append(m.count()).append("</td><td>").append(Svg.esc(m.bar().label()))
+                    .append("</td><td class=\"num\">").append(u.number(m.length(), Dim.SPAN)).append("</td></tr>\n");
+        }
+        out.append("</tbody>\n</table>\n");
+
+        out.append("<h4>Sections</h4>\n");
+        double scale = SectionDrawing.scaleFor(l.shape());
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            BeamProblem.Place where = e.getKey();
+            CheckReport rep = e.getValue();
+            FlexureResult f = rep.flexure();
+            double mu = rep.demand().mu();
+            String title = place(p, where) + " — " + f.bending().word();
+            String subtitle = "Mu = " + u.withUnit(mu, Dim.MOMENT) + ", φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT)
+                    + " (Mu/φMn " + Words.ratio(Math.abs(mu) / f.phiMn()) + ")";
+            SectionDrawing.View view = SectionDrawing.of(p, l, where, f.d(), title, subtitle);
+            out.append("<figure class=\"section-pair\" id=\"").append(Svg.esc(id)).append('-')
+                    .append(where.name().toLowerCase(Locale.ROOT)).append("\" data-place=\"").append(where.name())
+                    .append("\">\n<div class=\"pair\">\n").append(SectionDrawing.svg(view, scale, u))
+                    .append(StrainStressDiagram.svg(f, l.height(), p.materials(), scale, u)).append("</div>\n</figure>\n");
+        }
+
+        out.append("<h4>Checks</h4>\n<div class=\"wide\">\n<table class=\"grid checks\">\n<thead><tr><th>where</th><th>id</th>")
+                .append("<th>check</th><th>clause</th><th>demand</th><th></th><th>limit</th><th>ratio</th><th>result</th>")
+                .append("<th>note</th></tr></thead>\n<tbody>\n");
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            for (CheckResult c : e.getValue().checks()) {
+                check(out, place(p, e.getKey()), c, u);
+            }
+        }
+        for (CheckResult c : d.report().zoneChecks()) {
+            check(out, "stirrup zones", c, u);
+        }
+        for (CheckResult c : d.report().span().checks()) {
+            check(out, "span", c, u);
+        }
+        out.append("</tbody>\n</table>\n</div>\n");
+
+        out.append("<details class=\"trail\">\n<summary>Calculation trail</summary>\n");
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            trail(out, place(p, e.getKey()), e.getValue().trail(), u);
+        }
+        trail(out, "stirrup zones", d.report().zoneTrail(), u);
+        trail(out, "span", d.report().spanTrail(), u);
+        out.append("</details>\n</section>\n");
+    }
+
+    private static void check(StringBuilder out, String where, CheckResult c, UnitSystem u) {
+        out.append("<tr").append(c.pass() ? "" : " class=\"fail\"").append("><td>").append(Svg.esc(where)).append("</td><td>")
+                .append(Svg.esc(c.id())).append("</td><td>").append(Svg.esc(c.title())).append("</td><td>")
+                .append(Svg.esc(c.clause())).append("</td><td class=\"num\">").append(Svg.esc(Words.value(c.demand(), u)))
+                .append("</td><td>").append(c.sense().equals("<=") ? "≤" : "≥").append("</td><td class=\"num\">")
+                .append(Svg.esc(Words.value(c.limit(), u))).append("</td><td class=\"num\">").append(Words.ratio(c.ratio()))
+                .append("</td><td>").append(c.pass() ? "pass" : "FAIL").append("</td><td>")
+                .append(Svg.esc(c.note() == null ? "" : c.note())).append("</td></tr>\n");
+    }
+
+    private static void trail(StringBuilder out, String where, barfit.section.trail.Trail t, UnitSystem u) {
+        StringBuilder text = new StringBuilder();
+        TrailText.write(t, u, "", text);
+        out.append("<h5>").append(Svg.esc(where)).append("</h5>\n<pre>").append(Svg.esc(text.toString())).append("</pre>\n");
+    }
+
+    // ---------------------------------------------------------------- words
+
+    /** Where a section is; a cantilever's only section is its fixed end. */
+    static String place(BeamProblem problem, BeamProblem.Place p) {
+        if (problem.cantilever() && p == BeamProblem.Place.LEFT) {
+            return "Fixed end";
+        }
+        return switch (p) {
+            case LEFT -> "Left support";
+            case MID -> "Mid-span";
+            case RIGHT -> "Right support";
+        };
+    }
+
+    private static String shortPlace(BeamProblem.Place p) {
+        return switch (p) {
+            case LEFT -> "left";
+            case MID -> "mid";
+            case RIGHT -> "right";
+        };
+    }
+
+    private static String moments(BeamProblem p, UnitSystem u) {
+        List<String> parts = new ArrayList<>();
+        if (p.mLeft() != null) {
+            parts.add("left " + u.withUnit(p.mLeft(), Dim.MOMENT));
+        }
+        if (p.mMid() != null) {
+            parts.add("mid-span " + u.withUnit(p.mMid(), Dim.MOMENT));
+        }
+        if (p.mRight() != null) {
+            parts.add("right " + u.withUnit(p.mRight(), Dim.MOMENT));
+        }
+        return String.join(", ", parts) + " (+ sagging, − hogging)";
+    }
+
+    private static String shears(BeamProblem p, UnitSystem u) {
+        if (p.vLeft() == null && p.vRight() == null) {
+            return "not given: minimum stirrups";
+        }
+        List<String> parts = new ArrayList<>();
+        if (p.vLeft() != null) {
+            parts.add("left " + u.withUnit(p.vLeft(), Dim.FORCE));
+        }
+        if (p.vRight() != null) {
+            parts.add("right " + u.withUnit(p.vRight(), Dim.FORCE));
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String deflection(SpanChecks.Result r, BeamProblem p, UnitSystem u) {
+        if (r.liveDeflection() == null) {
+            return "not computed: h ≥ h,min = " + len(r.hMin(), u) + " of Table 9.3.1.1";
+        }
+        return "computed (h < h,min = " + len(r.hMin(), u) + "): live " + u.withUnit(r.liveDeflection(), Dim.LENGTH)
+                + " ≤ ℓ/" + plain(p.limits().live()) + " = " + u.withUnit(p.span() / p.limits().live(), Dim.LENGTH)
+                + "; long-term + live " + u.withUnit(r.longTermDeflection(), Dim.LENGTH) + " ≤ ℓ/"
+                + plain(p.limits().total()) + " = " + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
+    }
+
+    private static String binding(List<barfit.design.Binding> bs) {
+        if (bs.isEmpty()) {
+            return "no check above 0.95 of its limit";
+        }
+        List<String> parts = new ArrayList<>();
+        for (var b : bs) {
+            parts.add(b.limit() + " (" + b.when() + ")");
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String proofWords(BeamDesigner.Proof p) {
+        // objective and bound are in the selection's integer cost units (a millionth of the currency)
+        return "CP-SAT " + p.status() + ", objective " + String.format(Locale.ROOT, "%.4f", p.objective() / 1e6)
+                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound() / 1e6) + ", gap "
+                + String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()) + "; " + p.framesEvaluated() + " of " + p.frames()
+                + " frames evaluated, " + p.framesSkipped() + " skipped by the cost bound; " + p.solves()
+                + (p.solves() == 1 ? " solve" : " solves") + (p.deflectionCuts() > 0 ? ", " + p.deflectionCuts()
+                + " deflection cuts" : "") + "; " + p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed "
+                + p.seed();
+    }
+
+    private static String unitsWords(UnitSystem u) {
+        return u == UnitSystem.US ? "inch-pound units: in, psi, kip, kip·ft; spans and bar lengths in ft"
+                : "SI units: mm, MPa, kN, kN·m; spans and bar lengths in m";
+    }
+
+    static String len(double mm, UnitSystem u) {
+        return SectionDrawing.len(mm, u);
+    }
+
+    private static String span(double mm, UnitSystem u) {
+        return u.number(mm, Dim.SPAN) + " " + u.unit(Dim.SPAN);
+    }
+
+    private static String lengths(List<Double> mm, UnitSystem u) {
+        List<String> parts = new ArrayList<>();
+        for (double v : mm) {
+            parts.add(u.compact(v, Dim.LENGTH));
+        }
+        return String.join(", ", parts) + " " + u.unit(Dim.LENGTH);
+    }
+
+    /** "400 to 750 mm in steps of 25 mm" for an even range, else the list. */
+    private static String range(List<Double> mm, UnitSystem u) {
+        if (mm.size() >= 3) {
+            double step = mm.get(1) - mm.get(0);
+            boolean even = true;
+            for (int i = 2; i < mm.size(); i++) {
+                even &= Math.abs(mm.get(i) - mm.get(i - 1) - step) < 1e-6;
+            }
+            if (even) {
+                return u.compact(mm.get(0), Dim.LENGTH) + " to " + len(mm.get(mm.size() - 1), u) + " in steps of "
+                        + len(step, u);
+            }
+        }
+        return lengths(mm, u);
+    }
+
+    private static String labels(List<BarSize> bars) {
+        List<String> parts = new ArrayList<>();
+        for (BarSize b : bars) {
+            parts.add(b.label());
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String joinInts(List<Integer> v) {
+        List<String> parts = new ArrayList<>();
+        for (int i : v) {
+            parts.add(String.valueOf(i));
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String plain(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+
+    private static String amount(double v) {
+        return String.format(Locale.ROOT, "%.2f", v);
+    }
+
+    private static String money(double v, String currency) {
+        return Money.amount(v) + (currency.isEmpty() ? "" : " " + currency);
+    }
+
+    private static void kv(StringBuilder out, String key, String value) {
+        out.append("<tr><th>").append(Svg.esc(key)).append("</th><td>").append(Svg.esc(value)).append("</td></tr>\n");
+    }
+
+    private static void kvStrong(StringBuilder out, String key, String value) {
+        out.append("<tr class=\"total\"><th>").append(Svg.esc(key)).append("</th><td>").append(Svg.esc(value))
+                .append("</td></tr>\n");
+    }
+
+    private static void li(StringBuilder out, String text) {
+        out.append("<li>").append(Svg.esc(text)).append("</li>\n");
+    }
+
+    private static final String CSS = """
+            :root { color-scheme: light; }
+            body { font-family: sans-serif; font-size: 14px; line-height: 1.4; color: #1e1e1e; margin: 0 auto;
+                   padding: 16px 24px 40px; max-width: 1400px; background: #fff; }
+            h1 { font-size: 22px; margin: 0 0 4px; }
+            h2 { font-size: 18px; border-bottom: 2px solid #2b4a66; padding-bottom: 3px; margin-top: 32px; }
+            h3 { font-size: 16px; margin: 20px 0 8px; }
+            h4 { font-size: 14px; margin: 18px 0 6px; }
+            h5 { font-size: 13px; margin: 12px 0 4px; }
+            .sub { color: #555; margin: 0; }
+            nav { margin: 10px 0; }
+            a { color: #1f4e79; }
+            .caution { border: 2px solid #a8321e; background: #fbeee9; padding: 8px 14px; margin: 14px 0; }
+            .caution p { margin: 4px 0; }
+            .cols { display: flex; flex-wrap: wrap; gap: 18px; align-items: flex-start; }
+            .wide { overflow-x: auto; }
+            table { border-collapse: collapse; margin: 6px 0; }
+            caption { text-align: left; font-weight: bold; padding: 2px 0 4px; }
+            .kv th { text-align: left; font-weight: normal; color: #444; padding: 2px 12px 2px 0; vertical-align: top;
+                     white-space: nowrap; }
+            .kv td { padding: 2px 0; vertical-align: top; max-width: 640px; }
+            .kv tr.total th, .kv tr.total td { font-weight: bold; border-top: 1px solid #888; }
+            .grid th, .grid td { border: 1px solid #c8c8c8; padding: 3px 6px; vertical-align: top; }
+            .grid th { background: #eef2f6; text-align: left; }
+            td.mark, td.lines, .checks td:first-child { white-space: nowrap; }
+            .num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
+            tr.fail td { background: #f8d7d0; color: #7a1a0c; font-weight: bold; }
+            tr.infeasible td { background: #fbeee9; }
+            .status { font-size: 12px; padding: 1px 6px; border-radius: 3px; vertical-align: middle; }
+            .status.ok { background: #dcead5; color: #22501a; }
+            .status.none { background: #f8d7d0; color: #7a1a0c; }
+            .diagnosis { border-left: 4px solid #a8321e; padding: 4px 12px; background: #fbeee9; }
+            .warn { color: #7a1a0c; }
+            .note { color: #555; font-size: 13px; }
+            .rules li { margin: 2px 0; }
+            section.beam { border-top: 1px solid #bbb; margin-top: 28px; padding-top: 4px; }
+            figure { margin: 10px 0; }
+            .pair { display: flex; flex-wrap: wrap; gap: 8px; align-items: flex-start; }
+            .pair svg { border: 1px solid #e2e2e2; background: #fff; }
+            .plot svg { max-width: 100%; height: auto; }
+            details.trail { margin: 10px 0; }
+            details.trail summary { cursor: pointer; font-weight: bold; }
+            pre { font-size: 12px; background: #f7f7f5; padding: 6px 10px; overflow-x: auto; }
+            footer { margin-top: 36px; color: #555; border-top: 1px solid #ccc; }
+            @media print {
+              body { max-width: none; padding: 0; }
+              section.beam, figure, table { break-inside: avoid; }
+              nav { display: none; }
+            }
+            """;
+}
