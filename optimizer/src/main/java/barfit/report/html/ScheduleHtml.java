@@ -723,16 +723,22 @@ public final class ScheduleHtml {
             .rules li { margin: 2px 0; }
             section.beam { border-top: 1px solid #bbb; margin-top: 28px; padding-top: 4px; }
             figure { margin: 10px 0; }
-            .pair { display: flex; flex-wrap: wrap; gap: 8px; align-items: flex-start; }
-            .pair svg { border: 1px solid #e2e2e2; background: #fff; }
+            .pair { display: flex; gap: 8px; align-items: flex-start; }
+            /* both drawings shrink by the same factor when the page is narrow, so their heights still line up */
+            .pair svg { flex: 0 1 auto; min-width: 0; height: auto; border: 1px solid #e2e2e2; background: #fff; }
             .plot svg { max-width: 100%; height: auto; }
             details.trail { margin: 10px 0; }
             details.trail summary { cursor: pointer; font-weight: bold; }
-            pre { font-size: 12px; background: #f7f7f5; padding: 6px 10px; overflow-x: auto; }
+            pre { font-size: 12px; background: #f7f7f5; padding: 6px 10px; white-space: pre-wrap; }
             footer { margin-top: 36px; color: #555; border-top: 1px solid #ccc; }
+            @page { size: A4 landscape; margin: 12mm; }
             @media print {
-              body { max-width: none; padding: 0; }
-              section.beam, figure, table { break-inside: avoid; }
+              body { max-width: none; padding: 0; font-size: 12px; }
+              .wide { overflow: visible; }
+              .grid { font-size: 11px; }
+              section.beam { break-before: page; border-top: none; }
+              figure, tr, .kv { break-inside: avoid; }
+              h2, h3, h4, h5, caption { break-after: avoid; }
               nav { display: none; }
             }
             """;

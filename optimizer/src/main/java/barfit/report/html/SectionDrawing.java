@@ -544,8 +544,8 @@ public final class SectionDrawing {
                 .append(Svg.px(barMm * m.s() / 2)).append("\" height=\"4\" fill=\"#333\"/>\n");
         out.append("<rect x=\"").append(Svg.px((x0 + x1) / 2)).append("\" y=\"").append(Svg.px(y - 4)).append("\" width=\"")
                 .append(Svg.px(barMm * m.s() / 2)).append("\" height=\"4\" fill=\"#fff\" stroke=\"#333\" stroke-width=\"0.8\"/>\n");
-        Svg.text(out, x1 + 6, y, "start", null, (u == UnitSystem.US ? "4 in" : "100 mm") + "   drawn to scale, "
-                + Svg.px(m.s()) + " px per mm");
+        // the bar, not a ratio, states the scale: it stays true when the page is zoomed or printed
+        Svg.text(out, x1 + 6, y, "start", null, (u == UnitSystem.US ? "4 in" : "100 mm") + "   (section drawn to scale)");
         String cover = "cover " + len(v.detailing().cover(), u) + " to the stirrup (dashed)";
         Svg.text(out, x0, y + 16, "start", null, cover);
         if (v.stirrups() != null) {

@@ -138,8 +138,8 @@ class ScheduleHtmlTest {
     /**
      * The top-left corner bar at the right support of C1-C2 (hogging: top bars in tension), placed by hand:
      * its centre sits cover + stirrup diameter + db/2 from the top face and from the left face (inside the
-     * stirrup, where the checks put it). Common practice, no source; the stirrup and bar diameters are
-     * the catalog's nominal values of ASTM A615M, Table 1 (No. 10 = 9.5 mm).
+     * stirrup, where the checks put it: common practice, no source). The stirrup and bar diameters are
+     * the catalog's nominal values; No. 10 = 9.5 mm is ASTM A615M, Table 1 (from memory).
      */
     @Test
     void cornerBarSitsInsideTheStirrupWhereTheChecksPutIt() throws Exception {
@@ -160,7 +160,7 @@ class ScheduleHtmlTest {
 
         double cover = p.detailing().cover();
         double ds = l.stirrupBar().diameter();
-        assertEquals(9.5, ds, 0.05, "No. 10 stirrup, ASTM A615M Table 1");
+        assertEquals(9.5, ds, 0.05, "No. 10 stirrup, ASTM A615M Table 1 (from memory)");
         double db = l.top().diameter();
         double inside = cover + ds + db / 2;
         Element corner = null;
@@ -190,7 +190,8 @@ class ScheduleHtmlTest {
         }
         assertNotNull(hoop);
         assertEquals(ds * s, Double.parseDouble(hoop.getAttribute("stroke-width")), 0.001);
-        double inner = 2 * ds; // inside bend radius: 4 db for No. 10 to No. 16 stirrups, ACI 318-19 Table 25.3.2
+        // inside bend radius: diameter 4 db for No. 10 to No. 16 stirrups, ACI 318-19 Table 25.3.2 (from memory)
+        double inner = 2 * ds;
         double r = inner + ds / 2;
         assertTrue(hoop.getAttribute("d").startsWith("M" + Svg.px(ox + (cover + ds / 2 + r) * s) + ","
                 + Svg.px(oy + (cover + ds / 2) * s)), "hoop starts where its top-left bend ends: " + hoop.getAttribute("d"));
