@@ -28,7 +28,8 @@ import org.jfree.svg.ViewBox;
  * The price of standardisation as an SVG chart (JFreeChart drawn on JFreeSVG): the least total cost of
  * the schedule against the most section sizes allowed, each point labelled with its cost. The same
  * string serves as a file and inline in the HTML report: one {@code <svg>} element with a view box and
- * no XML prolog, fixed defs prefix so it is the same run to run.
+ * no XML prolog, fixed defs prefix so it is the same run to run. The unit system is taken like the other
+ * plots take it, though this chart has only a count and money on its axes.
  */
 public final class StandardisationPlot {
     static final double WIDTH = 720;
