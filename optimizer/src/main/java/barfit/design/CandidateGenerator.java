@@ -169,7 +169,7 @@ public final class CandidateGenerator {
                     }
                     Detailing det = new Detailing(cover, ds, p.detailing().layerGap(), p.detailing().exposure());
                     CostBreakdown fc = cost.frame(b, h, p.flange());
-                    SkinBars skin = Layout.skinFor(h, smallest, det, p.materials(), p.code());
+                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
                     double skinCost = skin == null ? 0 : cost.bars(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()));
                     double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
                     double steelLb = cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * massPerArea

@@ -56,7 +56,7 @@ public final class ExhaustiveSearch {
                     if (BarSpacing.innerWidth(b, det) <= 0) {
                         continue;
                     }
-                    SkinBars skin = Layout.skinFor(h, smallest, det, p.materials(), p.code());
+                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
                     for (BarSize t : p.space().barSizes()) {
                         int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
                         for (int layers = 1; layers <= p.space().maxLayers(); layers++) {

@@ -16,7 +16,16 @@ public record SearchSpace(
         List<BarSize> stirrupSizes,
         List<Integer> stirrupLegs,
         List<Double> stirrupSpacings,
-        boolean hangersOnly) {
+        boolean hangersOnly,
+        BarSize fixedSkinBar) {
+
+    /** A space with skin bars of its smallest bar size. */
+    public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
+            int maxLayers, List<BarSize> stirrupSizes, List<Integer> stirrupLegs, List<Double> stirrupSpacings,
+            boolean hangersOnly) {
+        this(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
+                hangersOnly, null);
+    }
 
     /** A space whose compression layer may be anything from the compression sizes. */
     public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
@@ -36,22 +45,22 @@ public record SearchSpace(
 
     public SearchSpace withWidths(List<Double> w) {
         return new SearchSpace(w, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly);
+                stirrupSpacings, hangersOnly, fixedSkinBar);
     }
 
     public SearchSpace withDepths(List<Double> d) {
         return new SearchSpace(widths, d, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly);
+                stirrupSpacings, hangersOnly, fixedSkinBar);
     }
 
     public SearchSpace withBarSizes(List<BarSize> bars, List<BarSize> comp) {
         return new SearchSpace(widths, depths, bars, comp, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
-                hangersOnly);
+                hangersOnly, fixedSkinBar);
     }
 
     public SearchSpace withMaxLayers(int layers) {
         return new SearchSpace(widths, depths, barSizes, compressionSizes, layers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly);
+                stirrupSpacings, hangersOnly, fixedSkinBar);
     }
 
     /**
@@ -61,7 +70,25 @@ public record SearchSpace(
      */
     public SearchSpace withHangersOnly() {
         return new SearchSpace(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, true);
+                stirrupSpacings, true, fixedSkinBar);
+    }
+
+    /**
+     * The same space with the longitudinal bars limited to {@code bars} (a schedule's bar sizes); skin
+     * bars keep the size they had, so limiting the main bars does not change them.
+     */
+    public SearchSpace withMainBars(List<BarSize> bars) {
+        List<BarSize> comp = compressionSizes.stream().filter(bars::contains).toList();
+        return new SearchSpace(widths, depths, bars, comp.isEmpty() ? bars : comp, maxLayers, stirrupSizes,
+                stirrupLegs, stirrupSpacings, hangersOnly, skinBar());
+    }
+
+    /** The size of skin bars (9.7.2.3): the smallest bar size searched unless fixed. */
+    public BarSize skinBar() {
+        if (fixedSkinBar != null) {
+            return fixedSkinBar;
+        }
+        return barSizes.stream().min(java.util.Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
     }
 
     /** Number of (width, depth, stirrup size) frames before any cap. */

@@ -41,19 +41,22 @@ public final class Deflection {
         double area = bw * h + (bf - bw) * hf;
         double firstMoment = bw * h * h / 2 + (bf - bw) * hf * hf / 2;
         double yc = firstMoment / area;
-        double ig = bw * Math.pow(h, 3) / 12 + bw * h * Math.pow(h / 2 - yc, 2)
-                + (bf - bw) * Math.pow(hf, 3) / 12 + (bf - bw) * hf * Math.pow(hf / 2 - yc, 2);
+        double ig = bw * h * h * h / 12 + bw * h * sq(h / 2 - yc) + (bf - bw) * hf * hf * hf / 12
+                + (bf - bw) * hf * sq(hf / 2 - yc);
         double yt = h - yc;
         double mcr = fr(m, code) * ig / yt;
         // cracked transformed section: solve the first moment about the neutral axis for kd
         double kd = crackedNeutralAxis(bf, hf, bw, n, as, d, asc, dPrime);
-        double icr = compressionInertia(bf, hf, bw, kd) + (n - 1) * asc * Math.pow(kd - dPrime, 2)
-                + n * as * Math.pow(d - kd, 2);
+        double icr = compressionInertia(bf, hf, bw, kd) + (n - 1) * asc * sq(kd - dPrime) + n * as * sq(d - kd);
         if (asc > 0 && kd < dPrime) {
             // compression bars below the neutral axis act in tension: count them with n
-            icr = compressionInertia(bf, hf, bw, kd) + n * asc * Math.pow(dPrime - kd, 2) + n * as * Math.pow(d - kd, 2);
+            icr = compressionInertia(bf, hf, bw, kd) + n * asc * sq(dPrime - kd) + n * as * sq(d - kd);
         }
         return new Stiffness(ig, yt, mcr, icr, kd, n, ec);
+    }
+
+    private static double sq(double x) {
+        return x * x;
     }
 
     private static double compressionFirstMoment(double bf, double hf, double bw, double x) {
@@ -70,7 +73,8 @@ public final class Deflection {
             double b = hf == 0 ? bw : bf;
             return b * x * x * x / 3;
         }
-        return bf * hf * hf * hf / 12 + bf * hf * Math.pow(x - hf / 2, 2) + bw * Math.pow(x - hf, 3) / 3;
+        double web = x - hf;
+        return bf * hf * hf * hf / 12 + bf * hf * sq(x - hf / 2) + bw * web * web * web / 3;
     }
 
     private static double crackedNeutralAxis(double bf, double hf, double bw, double n, double as, double d,

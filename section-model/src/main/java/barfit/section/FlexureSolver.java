@@ -127,7 +127,7 @@ public final class FlexureSolver {
             bp[n++] = (d[i] + db[i] / 2) / beta1;
         }
         bp[n++] = BIG * h;
-        Arrays.sort(bp, 0, n);
+        insertionSort(bp, n); // a dozen or so values: a plain insertion sort beats the general sort
         double lo = 0;
         double root = Double.NaN;
         for (int k = 0; k < n; k++) {
@@ -148,6 +148,18 @@ public final class FlexureSolver {
         c = root;
         finish();
         return this;
+    }
+
+    private static void insertionSort(double[] a, int n) {
+        for (int i = 1; i < n; i++) {
+            double v = a[i];
+            int j = i - 1;
+            while (j >= 0 && a[j] > v) {
+                a[j + 1] = a[j];
+                j--;
+            }
+            a[j + 1] = v;
+        }
     }
 
     /** Net axial force (compression positive) for neutral-axis depth {@code cc}. */

@@ -131,9 +131,10 @@ public final class SpanChecks {
 
     /** Ie of Table 24.2.3.5 of one section at each of the three service levels. */
     public static double[] ieLevels(BeamSection s, Bending bending, double mu, double[] ratios) {
+        Deflection.Stiffness st = stiffnessOf(s, bending); // the same section at every load level
         double[] out = new double[ratios.length];
         for (int i = 0; i < ratios.length; i++) {
-            out[i] = ieOf(s, bending, Math.abs(mu) * ratios[i]);
+            out[i] = Deflection.ie(Math.abs(mu) * ratios[i], st);
         }
         return out;
     }
@@ -189,14 +190,12 @@ public final class SpanChecks {
                 && CheckResult.within(deflections[4], length / limits.total());
     }
 
-    private static double ieOf(BeamSection s, Bending bending, double ma) {
+    private static Deflection.Stiffness stiffnessOf(BeamSection s, Bending bending) {
         double[] t = faceSteel(s, bending.tensionFace());
         double[] c = faceSteel(s, bending.compressionFace());
         // depth of the compression bars from the compression face
         double dPrime = c[0] > 0 ? s.shape().height() - c[1] : 0;
-        Deflection.Stiffness st = Deflection.stiffness(s.shape(), bending, s.materials(), s.code(), t[0], t[1], c[0],
-                dPrime);
-        return Deflection.ie(ma, st);
+        return Deflection.stiffness(s.shape(), bending, s.materials(), s.code(), t[0], t[1], c[0], dPrime);
     }
 
     private static String fmt(double d) {

@@ -48,7 +48,7 @@ public final class BeamExhaustive {
                     if (BarSpacing.innerWidth(b, det) <= 0) {
                         continue;
                     }
-                    SkinBars skin = Layout.skinFor(h, smallest, det, p.materials(), p.code());
+                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
                     Map<String, Boolean> sectionOk = new HashMap<>();
                     Map<String, Stirrups> zoneMemo = new HashMap<>();
                     for (BarSize tt : p.space().barSizes()) {

@@ -129,11 +129,39 @@ public final class BeamGenerator {
         BeamLayout incumbentLayout = null;
         int evaluated = 0;
         int skipped = 0;
+        // Below Table 9.3.1.1 a frame is costly to search without a cost to beat, and the cheapest bounds
+        // are often there: search the most promising frame at or above h,min first for that cost.
+        Frame opener = null;
+        for (Frame f : frames) {
+            if (!f.deflection() && Double.isFinite(f.lowerBound())) {
+                opener = f;
+                break;
+            }
+        }
+        if (opener != null && frames.get(0) != opener && frames.get(0).deflection()) {
+            evaluated++;
+            FrameSet fs = evaluate(opener, incumbent);
+            if (fs != null) {
+                sets.add(fs);
+                if (fs.best() < incumbent) {
+                    incumbent = fs.best();
+                    incumbentLayout = fs.bestLayout();
+                }
+            }
+        } else {
+            opener = null;
+        }
         for (int i = 0; i < frames.size(); i++) {
             Frame f = frames.get(i);
+            if (f == opener) {
+                continue;
+            }
             if (f.lowerBound() >= incumbent || Double.isInfinite(f.lowerBound())) {
                 skipped = frames.size() - i;
                 break;
+            }
+            if (Double.isFinite(incumbent) && frameLowerBound(f) >= incumbent - 1e-9) {
+                continue; // a closer look at its bars shows it cannot beat the incumbent
             }
             evaluated++;
             FrameSet fs = evaluate(f, incumbent);
@@ -182,7 +210,7 @@ public final class BeamGenerator {
                     if (deflection && p.service() == null) {
                         continue; // below Table 9.3.1.1 and nothing to compute deflection from
                     }
-                    SkinBars skin = Layout.skinFor(h, smallest, det, p.materials(), p.code());
+                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
                     double frameCost = cost.frame(b, h, p.flange()).total() * lm
                             + (skin == null ? 0 : barCost(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()), p.span()));
                     double extL = p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
@@ -266,7 +294,17 @@ public final class BeamGenerator {
     }
 
     private FrameSet evaluate(Frame f, double incumbent) {
+        return evaluate(f, incumbent, null);
+    }
+
+    /**
+     * The frame's options and its cheapest combination. With {@code pairs} (table mode) it also lowers
+     * {@code pairs[i][j]} to the cheapest passing combination with top bars of size i and bottom bars of
+     * size j, and prunes only what cannot improve any pair of that top size.
+     */
+    private FrameSet evaluate(Frame f, double incumbent, double[][] pairs) {
         zoneMemo.clear();
+        useFrame(f);
         SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
         BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
         if (!framePasses(f, shape, smallest, smallest, 1)) {
@@ -274,19 +312,29 @@ public final class BeamGenerator {
         }
         List<TopOpt> tops = tops(f);
         if (p.bottomAnchored() || f.deflection()) {
-            return everything(f, shape, tops);
+            return everything(f, shape, tops, incumbent, pairs);
         }
         // supports first (they do not depend on the other options), then the mid-span options for two
         // continuous bars, then more continuous bars only where a bound says they could pay
         Map<String, List<BeamSection.BarGroup>> none = new LinkedHashMap<>();
         none.put(null, List.of());
-        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), 0, none)
+        java.util.function.ToDoubleFunction<BarSize> supportLimit = pairs != null || Double.isInfinite(incumbent)
+                ? t -> Double.POSITIVE_INFINITY
+                : t -> incumbent - leastWithout(f, tops, t);
+        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), supportLimit, none)
                 : List.of();
-        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), 0, none)
+        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), supportLimit, none)
                 : List.of();
         List<TopOpt> first = tops.stream().filter(t -> t.nc() == 2).toList();
-        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first));
+        // a (top, bottom size) whose least possible cost cannot beat the incumbent (or, in table mode, the
+        // pair's best so far) is not searched
+        MidLimit worth = (t, bb) -> (pairs == null ? incumbent : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
+                - cheapestAbove(lefts, t, p.leftSupport()) - cheapestAbove(rights, t, p.rightSupport());
+        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first, worth));
         FrameSet fs = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        if (pairs != null) {
+            pairs(fs, pairs);
+        }
         double cut = Math.min(incumbent, fs.best());
         for (TopOpt t : tops) {
             if (t.nc() == 2) {
@@ -294,11 +342,204 @@ public final class BeamGenerator {
             }
             double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
                     + cheapestAbove(rights, t, p.rightSupport());
-            if (lb < cut) {
-                mids.addAll(mids(f, shape, List.of(t)));
+            if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
+                mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
+                        : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
+                        - cheapestAbove(lefts, tt, p.leftSupport()) - cheapestAbove(rights, tt, p.rightSupport())));
             }
         }
-        return enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        FrameSet out = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        if (pairs != null) {
+            pairs(out, pairs);
+        }
+        return out;
+    }
+
+    // ------------------------------------------------------------------ table mode
+
+    /**
+     * The exact cheapest cost of the span in one section size for each pair of bar sizes: {@code cost[i][j]}
+     * for top bars of the space's i-th bar size and bottom bars of its j-th, over every stirrup size,
+     * infinite where no layout of that pair passes. Nothing outside the size prunes it, so a schedule can
+     * price the size for any set of bar sizes it allows.
+     */
+    public record PairTable(double width, double height, double[][] cost) {
+        /** The cheapest over the pairs whose sizes are both allowed. */
+        public double best(boolean[] allowed) {
+            double best = Double.POSITIVE_INFINITY;
+            for (int i = 0; i < cost.length; i++) {
+                for (int j = 0; j < cost.length; j++) {
+                    if (allowed[i] && allowed[j]) {
+                        best = Math.min(best, cost[i][j]);
+                    }
+                }
+            }
+            return best;
+        }
+    }
+
+    private List<Frame> allFrames;
+
+    /** The frames of the problem, computed once. */
+    private List<Frame> cachedFrames() {
+        if (allFrames == null) {
+            allFrames = frames();
+        }
+        return allFrames;
+    }
+
+    /** The lower bound of each section size (b x h), the least over its stirrup sizes; absent sizes have no frame. */
+    public Map<List<Double>, Double> sizeLowerBounds() {
+        Map<List<Double>, Double> out = new LinkedHashMap<>();
+        for (Frame f : cachedFrames()) {
+            out.merge(List.of(f.b(), f.h()), f.lowerBound(), Math::min);
+        }
+        return out;
+    }
+
+    public PairTable pairTable(double b, double h) {
+        int n = p.space().barSizes().size();
+        double[][] cost = new double[n][n];
+        for (double[] row : cost) {
+            java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
+        }
+        for (Frame f : cachedFrames()) {
+            if (f.b() == b && f.h() == h && Double.isFinite(f.lowerBound())) {
+                evaluate(f, Double.POSITIVE_INFINITY, cost);
+            }
+        }
+        return new PairTable(b, h, cost);
+    }
+
+    private final Map<BarSize, Integer> barIndex = new java.util.IdentityHashMap<>();
+
+    private int index(BarSize bar) {
+        Integer i = barIndex.get(bar);
+        if (i == null) {
+            i = p.space().barSizes().indexOf(bar);
+            barIndex.put(bar, i);
+        }
+        return i;
+    }
+
+    /** The dearest pair of a top size found so far: a top option that cannot beat it improves no pair. */
+    private double worstPair(double[][] pairs, BarSize top) {
+        int i = index(top);
+        double worst = 0;
+        for (int j = 0; j < pairs.length; j++) {
+            if (p.maxBarSizes() >= 2 || j == i) {
+                worst = Math.max(worst, pairs[i][j]);
+            }
+        }
+        return worst;
+    }
+
+    /** Lowers each pair's entry to the cheapest passing combination of the frame's options. */
+    private void pairs(FrameSet fs, double[][] out) {
+        if (fs.frame().deflection()) {
+            deflectionPairs(fs, out);
+            return;
+        }
+        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
+        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
+        for (MidOpt m : fs.mids()) {
+            double total = combination(fs, m, lefts, rights);
+            int i = index(m.top().bar());
+            int j = index(m.bar());
+            out[i][j] = Math.min(out[i][j], total);
+        }
+    }
+
+    /** The cost of a mid-span option with the cheapest compatible supports (infinite if none). */
+    private double combination(FrameSet fs, MidOpt m, Map<BarSize, List<SupportOpt>> lefts,
+            Map<BarSize, List<SupportOpt>> rights) {
+        TopOpt t = m.top();
+        if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
+            return Double.POSITIVE_INFINITY;
+        }
+        String key = p.bottomAnchored() ? m.key() : null;
+        double total = fs.frame().cost() + t.cost() + m.cost();
+        if (p.leftSupport()) {
+            SupportOpt l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m.legsNeeded(), key);
+            if (l == null) {
+                return Double.POSITIVE_INFINITY;
+            }
+            total += l.cost();
+        }
+        if (p.rightSupport()) {
+            SupportOpt r = cheapestIn(rights, t.bar(), t.nc(), m.legsNeeded(), key);
+            if (r == null) {
+                return Double.POSITIVE_INFINITY;
+            }
+            total += r.cost();
+        }
+        return total;
+    }
+
+    /**
+     * Below Table 9.3.1.1 the cheapest compatible supports may fail deflection with a mid-span option
+     * while dearer ones pass: search each pair's combinations cheapest first, pruned by cost, asking the
+     * section model's span checks, so each entry is exact.
+     */
+    private void deflectionPairs(FrameSet fs, double[][] out) {
+        List<MidOpt> mids = new ArrayList<>(fs.mids());
+        mids.sort(Comparator.comparingDouble((MidOpt m) -> m.top().cost() + m.cost()));
+        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
+        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
+        for (MidOpt m : mids) {
+            TopOpt t = m.top();
+            if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
+                continue;
+            }
+            int i = index(t.bar());
+            int j = index(m.bar());
+            String key = p.bottomAnchored() ? m.key() : null;
+            double base = fs.frame().cost() + t.cost() + m.cost();
+            List<SupportOpt> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m.legsNeeded(), key,
+                    p.leftSupport());
+            List<SupportOpt> rs = compatible(rights, t.bar(), t.nc(), m.legsNeeded(), key, p.rightSupport());
+            if (ls.isEmpty() || rs.isEmpty()) {
+                continue;
+            }
+            double minR = rs.get(0) == null ? 0 : rs.get(0).cost();
+            double minL = ls.get(0) == null ? 0 : ls.get(0).cost();
+            if (base + minL + minR >= out[i][j] - 1e-9) {
+                continue;
+            }
+            for (SupportOpt l : ls) {
+                double withL = base + (l == null ? 0 : l.cost());
+                if (withL + minR >= out[i][j] - 1e-9) {
+                    break;
+                }
+                for (SupportOpt r : rs) {
+                    double total = withL + (r == null ? 0 : r.cost());
+                    if (total >= out[i][j] - 1e-9) {
+                        break;
+                    }
+                    if (BeamVerifier.deflectionOk(p, layout(fs.frame(), m, l, r))) {
+                        out[i][j] = total;
+                        break;
+                    }
+                }
+            }
+        }
+    }
+
+    /** The support options compatible with a mid-span option, cheapest first; a single null where no support. */
+    private static List<SupportOpt> compatible(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, int legsNeeded,
+            String bottomKey, boolean present) {
+        if (!present) {
+            java.util.List<SupportOpt> none = new ArrayList<>();
+            none.add(null);
+            return none;
+        }
+        List<SupportOpt> out = new ArrayList<>();
+        for (SupportOpt s : index.getOrDefault(bar, List.of())) {
+            if (s.counts().get(0) >= nc && s.legs() >= legsNeeded && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
+                out.add(s);
+            }
+        }
+        return out;
     }
 
     /** The cheapest support option of the top option's size holding its continuous bars (0 if no support). */
@@ -321,33 +562,40 @@ public final class BeamGenerator {
      * steel), priced per size, plus the cheapest stirrups of the mid-span zones.
      */
     private double bottomLowerBound(Frame f, TopOpt t) {
-        double widest = p.flange() != null ? p.flange().width() : f.b();
-        double fc = p.materials().fc();
-        double fy = p.materials().fy();
-        double comp = t.nc() * t.bar().area();
-        double dp = f.det().firstLayerCentroid(t.bar().diameter());
         double best = Double.POSITIVE_INFINITY;
         for (BarSize bb : p.space().barSizes()) {
-            double dMax = f.h() - f.det().firstLayerCentroid(bb.diameter());
-            double ceiling = (0.85 * fc * widest * dMax + comp * fy) / fy;
-            double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy, ceiling);
-            if (Double.isInfinite(area)) {
-                continue;
-            }
-            int n = Math.max(2, (int) Math.ceil(area / bb.area() - 1e-9));
-            best = Math.min(best, barCost(bb, n, p.span()));
+            best = Math.min(best, bottomBarLowerBound(f, t, bb));
         }
-        double widestSpacing = p.space().stirrupSpacings().get(p.space().stirrupSpacings().size() - 1);
-        Stirrups lean = new Stirrups(f.ds(), p.space().stirrupLegs().get(0), widestSpacing);
-        for (int zi : zoneIndices(BeamProblem.Place.MID)) {
-            best += stirrupCost(f.b(), f.h(), lean, zones.get(zi));
-        }
-        return best;
+        return best + leanMid(f);
     }
 
     /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
-    private FrameSet everything(Frame f, SectionShape shape, List<TopOpt> tops) {
-        List<MidOpt> mids = mids(f, shape, tops);
+    private FrameSet everything(Frame f, SectionShape shape, List<TopOpt> tops, double incumbent, double[][] pairs) {
+        // deflection and anchorage only add demands: what cannot beat the incumbent (or the pair's best so
+        // far) on cost alone is not searched
+        java.util.function.ToDoubleFunction<BarSize> limit = pairs != null || Double.isInfinite(incumbent)
+                ? t -> Double.POSITIVE_INFINITY
+                : t -> incumbent - leastWithout(f, tops, t);
+        // without anchored bottom bars the supports do not depend on the mid-span options: find them first,
+        // so the mid-span search knows the least the supports add
+        List<SupportOpt> early = null;
+        List<SupportOpt> earlyRight = null;
+        if (!p.bottomAnchored()) {
+            Map<String, List<BeamSection.BarGroup>> none = new LinkedHashMap<>();
+            none.put(null, List.of());
+            early = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, none) : List.of();
+            earlyRight = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, none)
+                    : List.of();
+        }
+        final List<SupportOpt> knownLeft = early;
+        final List<SupportOpt> knownRight = earlyRight;
+        if (f.deflection() && !p.bottomAnchored()) {
+            return deflectionFrame(f, shape, tops, incumbent, pairs, knownLeft, knownRight);
+        }
+        List<MidOpt> mids = mids(f, shape, tops, (t, bb) -> (pairs == null ? incumbent
+                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
+                - (knownLeft == null ? 0 : cheapestAbove(knownLeft, t, p.leftSupport()))
+                - (knownRight == null ? 0 : cheapestAbove(knownRight, t, p.rightSupport())));
         Map<String, List<BeamSection.BarGroup>> bottoms = new LinkedHashMap<>();
         if (p.bottomAnchored()) {
             for (MidOpt m : mids) {
@@ -358,17 +606,57 @@ public final class BeamGenerator {
         } else {
             bottoms.put(null, List.of());
         }
-        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), 0, bottoms)
-                : List.of();
-        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), 0, bottoms)
-                : List.of();
+        List<SupportOpt> lefts = knownLeft != null ? knownLeft : p.leftSupport()
+                ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
+        List<SupportOpt> rights = knownRight != null ? knownRight : p.rightSupport()
+                ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
+        return screened(f, shape, tops, mids, lefts, rights, pairs);
+    }
+
+    /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; pairs lowered. */
+    private FrameSet screened(Frame f, SectionShape shape, List<TopOpt> tops, List<MidOpt> mids, List<SupportOpt> lefts,
+            List<SupportOpt> rights, double[][] pairs) {
         if (f.deflection()) {
             DeflectionScreen screen = new DeflectionScreen(f, shape, mids, lefts, rights);
             mids = screen.mids();
             lefts = screen.lefts();
             rights = screen.rights();
         }
-        return enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        FrameSet out = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        if (pairs != null) {
+            pairs(out, pairs);
+        }
+        return out;
+    }
+
+    /**
+     * Below Table 9.3.1.1 (bottom bars not anchored): as for other frames, two continuous top bars first;
+     * their best passing combination then bounds which top options with more continuous bars (stiffer,
+     * dearer) are searched.
+     */
+    private FrameSet deflectionFrame(Frame f, SectionShape shape, List<TopOpt> tops, double incumbent, double[][] pairs,
+            List<SupportOpt> lefts, List<SupportOpt> rights) {
+        List<TopOpt> first = tops.stream().filter(t -> t.nc() == 2).toList();
+        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first, (t, bb) -> (pairs == null ? incumbent
+                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost() - cheapestAbove(lefts, t, p.leftSupport())
+                - cheapestAbove(rights, t, p.rightSupport())));
+        FrameSet fs = screened(f, shape, tops, new ArrayList<>(mids), lefts, rights, pairs);
+        double cut = Math.min(incumbent, fs.best());
+        boolean more = false;
+        for (TopOpt t : tops) {
+            if (t.nc() == 2) {
+                continue;
+            }
+            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
+                    + cheapestAbove(rights, t, p.rightSupport());
+            if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
+                mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
+                        : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
+                        - cheapestAbove(lefts, tt, p.leftSupport()) - cheapestAbove(rights, tt, p.rightSupport())));
+                more = true;
+            }
+        }
+        return more ? screened(f, shape, tops, mids, lefts, rights, pairs) : fs;
     }
 
     private List<TopOpt> tops(Frame f) {
@@ -386,7 +674,272 @@ public final class BeamGenerator {
         return out;
     }
 
+    /**
+     * The least a combination with top bars of size {@code t} could cost apart from one support's option:
+     * the frame, the cheapest top option of that size, and the least bottom bars (with the most continuous
+     * bars of that size as compression steel) and mid-span stirrups.
+     */
+    private double leastWithout(Frame f, List<TopOpt> tops, BarSize t) {
+        double top = Double.POSITIVE_INFINITY;
+        TopOpt most = null;
+        for (TopOpt o : tops) {
+            if (o.bar().equals(t)) {
+                top = Math.min(top, o.cost());
+                if (most == null || o.nc() > most.nc()) {
+                    most = o;
+                }
+            }
+        }
+        if (most == null) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double bottom = Double.POSITIVE_INFINITY;
+        for (BarSize bb : p.space().barSizes()) {
+            if (p.maxBarSizes() >= 2 || bb.equals(t)) {
+                bottom = Math.min(bottom, bottomBarLowerBound(f, most, bb));
+            }
+        }
+        return f.cost() + top + bottom + leanMid(f);
+    }
+
+    /**
+     * The most a mid-span option of a top option and bottom bar size may cost (its bars and stirrups) and
+     * still be part of something cheaper than what is known: what the search beats, less the least the
+     * rest of a combination costs. Options at or above it are not searched.
+     */
+    @FunctionalInterface
+    private interface MidLimit {
+        double of(TopOpt top, BarSize bottom);
+    }
+
+    /**
+     * The least the bottom bars of one size could cost with a top option's continuous bars as compression
+     * steel: the section model's strength bound on the area, in whole bars, no fewer than two or than crack
+     * control asks of the first layer.
+     */
+    private double bottomBarLowerBound(Frame f, TopOpt t, BarSize bb) {
+        int nb = p.space().barSizes().size();
+        int ti = index(t.bar());
+        int bi = index(bb);
+        if (bottomMemo == null || bottomMemo.length <= t.nc()) {
+            bottomMemo = new double[Math.max(t.nc() + 1, 16)][][];
+        }
+        if (bottomMemo[t.nc()] == null) {
+            bottomMemo[t.nc()] = new double[nb][nb];
+            for (double[] row : bottomMemo[t.nc()]) {
+                java.util.Arrays.fill(row, Double.NaN);
+            }
+        }
+        double known = bottomMemo[t.nc()][ti][bi];
+        if (Double.isNaN(known)) {
+            known = computeBottomBarLowerBound(f, t, bb);
+            bottomMemo[t.nc()][ti][bi] = known;
+        }
+        return known;
+    }
+
+    private Frame memoFrame;
+    private double asMinSagging = Double.NaN;
+    private double asMinHogging = Double.NaN;
+    private int[] crackMemo;
+
+    /** As,min of 9.6.1.2 per mm of d for the frame (the section model's rule at d = 1 mm). */
+    private double asMinPerDepth(Frame f, Bending bending) {
+        useFrame(f);
+        if (Double.isNaN(asMinSagging)) {
+            SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
+            Span span = new Span(p.span(), p.ends());
+            asMinSagging = SectionChecks.asMin(shape, Bending.SAGGING, span, p.materials(), p.code(), 1.0);
+            asMinHogging = SectionChecks.asMin(shape, Bending.HOGGING, span, p.materials(), p.code(), 1.0);
+        }
+        return bending == Bending.SAGGING ? asMinSagging : asMinHogging;
+    }
+
+    /** The fewest bars of a size crack control (24.3.2) allows in the frame's first layer. */
+    private int crackBars(Frame f, BarSize bar) {
+        useFrame(f);
+        if (crackMemo == null) {
+            crackMemo = new int[p.space().barSizes().size()];
+            java.util.Arrays.fill(crackMemo, -1);
+        }
+        int i = index(bar);
+        if (crackMemo[i] < 0) {
+            crackMemo[i] = BarSpacing.minBarsForCrackControl(f.b(), f.det(), bar, p.materials().fy(), p.code());
+        }
+        return crackMemo[i];
+    }
+
+    private void useFrame(Frame f) {
+        if (memoFrame != f) {
+            bottomMemo = null;
+            asMinSagging = Double.NaN;
+            asMinHogging = Double.NaN;
+            crackMemo = null;
+            leanMemo.clear();
+            memoFrame = f;
+        }
+    }
+
+    /**
+     * A tighter lower bound than the frame's first one, still without searching bars: the least of
+     * {@link #pairLowerBound}.
+     */
+    private double frameLowerBound(Frame f) {
+        double best = Double.POSITIVE_INFINITY;
+        for (double[] row : pairLowerBound(f)) {
+            for (double v : row) {
+                best = Math.min(best, v);
+            }
+        }
+        return best;
+    }
+
+    /**
+     * Per pair of bar sizes (top i, bottom j), a lower bound on any passing combination of the frame
+     * without searching bars: the cheapest top option of size i; the least bottom bars of size j (with
+     * the most continuous bars of size i as compression steel) and mid-span stirrups; and at each support
+     * the fewest bars of size i the section model's strength bound allows over their real extension, with
+     * the leanest stirrups of the support's zones.
+     */
+    private double[][] pairLowerBound(Frame f) {
+        useFrame(f);
+        int nb = p.space().barSizes().size();
+        double[][] out = new double[nb][nb];
+        for (double[] row : out) {
+            java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
+        }
+        List<TopOpt> tops = tops(f);
+        double fc = p.materials().fc();
+        double fy = p.materials().fy();
+        double leanMid = leanMid(f);
+        // anchored bottom bars are compression steel at the supports: allow the most there could be
+        double comp = 0;
+        if (p.bottomAnchored()) {
+            for (BarSize bb : p.space().barSizes()) {
+                comp = Math.max(comp, BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code()) * bb.area()
+                        * p.space().maxLayers());
+            }
+        }
+        for (int i = 0; i < nb; i++) {
+            BarSize t = p.space().barSizes().get(i);
+            double top = Double.POSITIVE_INFINITY;
+            TopOpt most = null;
+            for (TopOpt o : tops) {
+                if (o.bar().equals(t)) {
+                    top = Math.min(top, o.cost());
+                    if (most == null || o.nc() > most.nc()) {
+                        most = o;
+                    }
+                }
+            }
+            if (most == null) {
+                continue;
+            }
+            int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), t, fy, p.code());
+            double ext = Extension.of(p, f.b(), f.h(), f.det(), t).length();
+            double dMax = f.h() - f.det().firstLayerCentroid(t.diameter());
+            double dp = f.det().firstLayerCentroid(p.space().barSizes().get(0).diameter());
+            double supports = 0;
+            for (BeamProblem.Place place : new BeamProblem.Place[] {BeamProblem.Place.LEFT, BeamProblem.Place.RIGHT}) {
+                Double mu = place == BeamProblem.Place.LEFT ? (p.leftSupport() ? p.mLeft() : null)
+                        : (p.rightSupport() ? p.mRight() : null);
+                if (mu == null) {
+                    continue;
+                }
+                double ceiling = (0.85 * fc * f.b() * dMax + comp * fy) / fy;
+                double area = StrengthBound.minTensionArea(mu, dMax, comp, dp, dp, f.b(), fc, fy, ceiling);
+                if (Double.isInfinite(area)) {
+                    supports = Double.POSITIVE_INFINITY;
+                    break;
+                }
+                // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need
+                double dMin = f.h() - f.det().firstLayerCentroid(t.diameter())
+                        - (p.space().maxLayers() - 1) * (t.diameter() + f.det().layerGap());
+                double asMin = asMinPerDepth(f, Bending.HOGGING) * dMin;
+                area = Math.max(area, Math.min(asMin, 4.0 / 3.0 * area));
+                int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / t.area() - 1e-9));
+                supports += barCost(t, n, ext) + leanStirrups(f, place);
+            }
+            if (Double.isInfinite(supports)) {
+                continue;
+            }
+            for (int j = 0; j < nb; j++) {
+                BarSize u = p.space().barSizes().get(j);
+                if (p.maxBarSizes() < 2 && !u.equals(t)) {
+                    continue;
+                }
+                out[i][j] = f.cost() + top + bottomBarLowerBound(f, most, u) + leanMid + supports;
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Per pair of bar sizes, a lower bound on the span in one section size (the least over its stirrup
+     * sizes), or null where the problem has no frame of that size. Cheap: no bars are searched.
+     */
+    public double[][] pairLowerBounds(double b, double h) {
+        double[][] out = null;
+        for (Frame f : cachedFrames()) {
+            if (f.b() == b && f.h() == h) {
+                double[][] lb = Double.isFinite(f.lowerBound()) ? pairLowerBound(f) : null;
+                if (lb == null) {
+                    continue;
+                }
+                if (out == null) {
+                    out = lb;
+                } else {
+                    for (int i = 0; i < out.length; i++) {
+                        for (int j = 0; j < out.length; j++) {
+                            out[i][j] = Math.min(out[i][j], lb[i][j]);
+                        }
+                    }
+                }
+            }
+        }
+        if (out == null && cachedFrames().stream().anyMatch(f -> f.b() == b && f.h() == h)) {
+            int nb = p.space().barSizes().size();
+            out = new double[nb][nb];
+            for (double[] row : out) {
+                java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
+            }
+        }
+        return out;
+    }
+
+    /** {@link #bottomBarLowerBound} per frame: [continuous bars][top size][bottom size], NaN until asked. */
+    private double[][][] bottomMemo;
+
+    private double computeBottomBarLowerBound(Frame f, TopOpt t, BarSize bb) {
+        if (!p.midSection()) {
+            return barCost(bb, 2, p.span()); // a cantilever's bottom bars are two or more hangers
+        }
+        double widest = p.flange() != null ? p.flange().width() : f.b();
+        double fc = p.materials().fc();
+        double fy = p.materials().fy();
+        double comp = t.nc() * t.bar().area();
+        double dp = f.det().firstLayerCentroid(t.bar().diameter());
+        double dMax = f.h() - f.det().firstLayerCentroid(bb.diameter());
+        double ceiling = (0.85 * fc * widest * dMax + comp * fy) / fy;
+        double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy, ceiling);
+        if (Double.isInfinite(area)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need (9.6.1.3)
+        double dMin = f.h() - f.det().firstLayerCentroid(bb.diameter())
+                - (p.space().maxLayers() - 1) * (bb.diameter() + f.det().layerGap());
+        double asMin = asMinPerDepth(f, Bending.SAGGING) * dMin; // As,min is proportional to d
+        area = Math.max(area, Math.min(asMin, 4.0 / 3.0 * area));
+        int ncr = crackBars(f, bb);
+        int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / bb.area() - 1e-9));
+        return barCost(bb, n, p.span());
+    }
+
     private List<MidOpt> mids(Frame f, SectionShape shape, List<TopOpt> tops) {
+        return mids(f, shape, tops, (t, bb) -> Double.POSITIVE_INFINITY);
+    }
+
+    private List<MidOpt> mids(Frame f, SectionShape shape, List<TopOpt> tops, MidLimit cut) {
         List<MidOpt> out = new ArrayList<>();
         List<Integer> midZones = zoneIndices(BeamProblem.Place.MID);
         if (p.cantilever()) {
@@ -411,6 +964,12 @@ public final class BeamGenerator {
                 if (p.maxBarSizes() < 2 && !bb.equals(top.bar())) {
                     continue;
                 }
+                double limit = cut.of(top, bb);
+                if (bottomBarLowerBound(f, top, bb) + leanMid(f) >= limit - 1e-9) {
+                    continue;
+                }
+                // the cheapest option found so far for each number of legs it asks of the supports
+                Map<Integer, Double> cheapestByLegs = new HashMap<>();
                 int nmax = BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code());
                 int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), bb, p.materials().fy(), p.code());
                 int first = Math.max(2, ncr);
@@ -431,6 +990,9 @@ public final class BeamGenerator {
                     int nMin = java.util.Arrays.stream(min).sum();
                     double firstStirrups = Double.NaN;
                     for (int n = nMin; n <= layers * nmax; n++) {
+                        if (barCost(bb, n, p.span()) + leanMid(f) >= limit - 1e-9) {
+                            break; // this many bars cost more than an option could and still pay
+                        }
                         List<int[]> splits = midSearch.passingSplits(bb, n, layers, nmax, first);
                         if (splits.isEmpty()) {
                             if (!midSearch.passingSplit(bb, n, layers, nmax, first).anyDuctile()) {
@@ -459,6 +1021,7 @@ public final class BeamGenerator {
                             if (ok) {
                                 out.add(new MidOpt(top, bb, TensionSearch.toList(split), d, zs,
                                         barCost(bb, n, p.span()) + stirCost, p.legsFor(split[0])));
+                                cheapestByLegs.merge(p.legsFor(split[0]), barCost(bb, n, p.span()) + stirCost, Math::min);
                                 if (Double.isNaN(firstStirrups)) {
                                     firstStirrups = stirCost;
                                 }
@@ -468,6 +1031,15 @@ public final class BeamGenerator {
                         // stiffness: stop once one more bar costs more than all the stirrups could
                         if (!f.deflection() && !Double.isNaN(firstStirrups)
                                 && barCost(bb, n + 1 - nMin, p.span()) >= stirrupCeiling(f)) {
+                            break;
+                        }
+                        // tighter where the bottom bars meet nothing but the mid-span zones: an option with
+                        // n + 1 or more bars costs at least its bars and the leanest stirrups, and asks for
+                        // at least the legs of its fullest possible first layer; one found already that is
+                        // no dearer and asks no more legs of the supports is as good in every combination
+                        if (!f.deflection() && !p.bottomAnchored()
+                                && dominated(cheapestByLegs, p.legsFor((n + layers) / layers),
+                                        barCost(bb, n + 1, p.span()) + leanMid(f))) {
                             break;
                         }
                     }
@@ -487,6 +1059,53 @@ public final class BeamGenerator {
         Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(), legs, z.length());
         zoneMemo.put(key, st);
         return st;
+    }
+
+    /** Whether an option asking at most {@code legs} and costing at most {@code cost} has been found. */
+    private static boolean dominated(Map<Integer, Double> cheapestByLegs, int legs, double cost) {
+        for (Map.Entry<Integer, Double> e : cheapestByLegs.entrySet()) {
+            if (e.getKey() <= legs && e.getValue() <= cost + 1e-9) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The least the stirrups of the mid-span zones could cost (see {@link #leanStirrups}). */
+    private double leanMid(Frame f) {
+        return leanStirrups(f, BeamProblem.Place.MID);
+    }
+
+    private final Map<BeamProblem.Place, Double> leanMemo = new java.util.EnumMap<>(BeamProblem.Place.class);
+
+    /**
+     * The least the stirrups of the zones at a place could cost: each zone's cheapest stirrups (fewest
+     * legs allowed) for the most favourable section the frame could have (the deepest d, a tension area
+     * that takes Vc to its cap), which can only pass more than any real layout does. Infinite if even
+     * that fails.
+     */
+    private double leanStirrups(Frame f, BeamProblem.Place place) {
+        useFrame(f);
+        Double known = leanMemo.get(place);
+        if (known != null) {
+            return known;
+        }
+        SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
+        BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
+        double dMax = f.h() - f.det().firstLayerCentroid(smallest.diameter());
+        double asBig = 0.1 * f.b() * dMax;
+        double c = 0;
+        for (int zi : zoneIndices(place)) {
+            BeamProblem.Zone z = zones.get(zi);
+            Stirrups st = chooser.cheapest(shape, f.det(), dMax, asBig, z.vu(), p.space().stirrupLegs().get(0), z.length());
+            if (st == null) {
+                c = Double.POSITIVE_INFINITY;
+                break;
+            }
+            c += stirrupCost(f.b(), f.h(), st, z);
+        }
+        leanMemo.put(place, c);
+        return c;
     }
 
     /** More than any choice of stirrups over the whole span could cost (the most legs, the closest spacing). */
@@ -514,10 +1133,15 @@ public final class BeamGenerator {
         return out;
     }
 
-    private List<SupportOpt> supports(Frame f, SectionShape shape, BeamProblem.Place place, double mu, double extUnused,
-            Map<String, List<BeamSection.BarGroup>> bottoms) {
+    /**
+     * A continuous support's options. {@code limit} gives, per top bar size, the cost at or above which an
+     * option cannot be part of anything cheaper than the incumbent; the bar count stops rising there.
+     */
+    private List<SupportOpt> supports(Frame f, SectionShape shape, BeamProblem.Place place, double mu,
+            java.util.function.ToDoubleFunction<BarSize> limit, Map<String, List<BeamSection.BarGroup>> bottoms) {
         List<SupportOpt> out = new ArrayList<>();
         List<Integer> myZones = zoneIndices(place);
+        double leanZones = leanStirrups(f, place);
         supportProbe.frame(shape, Bending.HOGGING, new Span(p.span(), p.ends()));
         TensionSearch search = new TensionSearch(supportProbe, mu).frame(f.det());
         for (BarSize t : p.space().barSizes()) {
@@ -528,6 +1152,7 @@ public final class BeamGenerator {
                 continue;
             }
             double ext = Extension.of(p, f.b(), f.h(), f.det(), t).length();
+            double most = limit.applyAsDouble(t);
             for (Map.Entry<String, List<BeamSection.BarGroup>> bottom : bottoms.entrySet()) {
                 search.compression(bottom.getValue());
                 for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
@@ -544,6 +1169,9 @@ public final class BeamGenerator {
                     }
                     int nMin = java.util.Arrays.stream(min).sum();
                     for (int n = nMin; n <= layers * nmax; n++) {
+                        if (barCost(t, n, ext) + leanZones >= most - 1e-9) {
+                            break; // this many bars cost more than an option could and still pay
+                        }
                         List<int[]> splits = search.passingSplits(t, n, layers, nmax, first);
                         if (splits.isEmpty()) {
                             if (!search.passingSplit(t, n, layers, nmax, first).anyDuctile()) {
@@ -602,16 +1230,16 @@ public final class BeamGenerator {
                 List<SupportOpt> allRights) {
             double[] ratios = SpanChecks.ratios(p.service());
             double ec = barfit.section.Deflection.ec(p.materials(), p.code());
-            Map<MidOpt, double[]> midIe = new HashMap<>();
-            Map<MidOpt, Double> midRho = new HashMap<>();
+            Map<MidOpt, double[]> midIe = new java.util.IdentityHashMap<>();
+            Map<MidOpt, Double> midRho = new java.util.IdentityHashMap<>();
             for (MidOpt m : allMids) {
                 BeamSection s = midSection(f, shape, m);
                 midIe.put(m, p.cantilever() ? null : SpanChecks.ieLevels(s, Bending.SAGGING, p.mMid(), ratios));
                 midRho.put(m, p.cantilever() ? 0.0 : SpanChecks.rhoPrime(s, Bending.SAGGING));
             }
-            Map<SupportOpt, double[]> leftIe = new HashMap<>();
-            Map<SupportOpt, double[]> rightIe = new HashMap<>();
-            Map<SupportOpt, Double> leftRho = new HashMap<>();
+            Map<SupportOpt, double[]> leftIe = new java.util.IdentityHashMap<>();
+            Map<SupportOpt, double[]> rightIe = new java.util.IdentityHashMap<>();
+            Map<SupportOpt, Double> leftRho = new java.util.IdentityHashMap<>();
             for (SupportOpt l : allLefts) {
                 BeamSection s = supportSection(f, shape, l);
                 leftIe.put(l, SpanChecks.ieLevels(s, Bending.HOGGING, p.mLeft(), ratios));
@@ -620,29 +1248,61 @@ public final class BeamGenerator {
             for (SupportOpt r : allRights) {
                 rightIe.put(r, SpanChecks.ieLevels(supportSection(f, shape, r), Bending.HOGGING, p.mRight(), ratios));
             }
+            // the stiffest partners per top bar size, computed once
+            Map<String, double[]> bestLeft = new HashMap<>();
+            Map<String, double[]> bestRight = new HashMap<>();
+            Map<String, double[]> bestMidIe = new HashMap<>();
+            Map<String, Double> bestMidRho = new HashMap<>();
+            Map<String, Double> bestLeftRho = new HashMap<>();
+            for (String tt : topSizes(allMids, allLefts, allRights)) {
+                bestMidRho.put(tt, 0.0);
+                bestLeftRho.put(tt, 0.0);
+            }
+            for (Map.Entry<SupportOpt, double[]> e : leftIe.entrySet()) {
+                bestLeft.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
+            }
+            for (Map.Entry<SupportOpt, double[]> e : rightIe.entrySet()) {
+                bestRight.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
+            }
+            for (Map.Entry<MidOpt, double[]> e : midIe.entrySet()) {
+                if (e.getValue() != null) {
+                    bestMidIe.merge(e.getKey().top().bar().designation(), e.getValue().clone(), this::max);
+                }
+            }
+            for (Map.Entry<MidOpt, Double> e : midRho.entrySet()) {
+                bestMidRho.merge(e.getKey().top().bar().designation(), e.getValue(), Math::max);
+            }
+            for (Map.Entry<SupportOpt, Double> e : leftRho.entrySet()) {
+                bestLeftRho.merge(e.getKey().bar().designation(), e.getValue(), Math::max);
+            }
             for (MidOpt m : allMids) {
                 String tt = m.top().bar().designation();
-                double[] l = best(leftIe, tt);
-                double[] r = best(rightIe, tt);
-                double rho = p.cantilever() ? bestRho(leftRho, tt) : midRho.get(m);
-                if (passes(ec, ratios, l, midIe.get(m), r, rho)) {
+                double rho = p.cantilever() ? bestLeftRho.get(tt) : midRho.get(m);
+                if (passes(ec, ratios, bestLeft.get(tt), midIe.get(m), bestRight.get(tt), rho)) {
                     mids.add(m);
                 }
             }
             for (SupportOpt l : allLefts) {
                 String tt = l.bar().designation();
-                double[] mi = bestMid(midIe, tt);
-                double rho = p.cantilever() ? leftRho.get(l) : bestMidRho(midRho, tt);
-                if (passes(ec, ratios, leftIe.get(l), mi, best(rightIe, tt), rho)) {
+                double rho = p.cantilever() ? leftRho.get(l) : bestMidRho.get(tt);
+                if (passes(ec, ratios, leftIe.get(l), bestMidIe.get(tt), bestRight.get(tt), rho)) {
                     lefts.add(l);
                 }
             }
             for (SupportOpt r : allRights) {
                 String tt = r.bar().designation();
-                if (passes(ec, ratios, best(leftIe, tt), bestMid(midIe, tt), rightIe.get(r), bestMidRho(midRho, tt))) {
+                if (passes(ec, ratios, bestLeft.get(tt), bestMidIe.get(tt), rightIe.get(r), bestMidRho.get(tt))) {
                     rights.add(r);
                 }
             }
+        }
+
+        private java.util.Set<String> topSizes(List<MidOpt> ms, List<SupportOpt> ls, List<SupportOpt> rs) {
+            java.util.Set<String> out = new java.util.TreeSet<>();
+            ms.forEach(m -> out.add(m.top().bar().designation()));
+            ls.forEach(l -> out.add(l.bar().designation()));
+            rs.forEach(r -> out.add(r.bar().designation()));
+            return out;
         }
 
         private boolean passes(double ec, double[] ratios, double[] l, double[] m, double[] r, double rho) {
@@ -652,46 +1312,6 @@ public final class BeamGenerator {
             double[] d = SpanChecks.deflections(p.span(), p.ends(), ec, p.mLeft(), p.mMid(), p.mRight(), ratios,
                     p.leftSupport() ? l : null, m, p.rightSupport() ? r : null, rho);
             return SpanChecks.within(p.span(), p.limits(), d);
-        }
-
-        private double[] best(Map<SupportOpt, double[]> ie, String tt) {
-            double[] out = null;
-            for (Map.Entry<SupportOpt, double[]> e : ie.entrySet()) {
-                if (e.getKey().bar().designation().equals(tt)) {
-                    out = max(out, e.getValue());
-                }
-            }
-            return out;
-        }
-
-        private double[] bestMid(Map<MidOpt, double[]> ie, String tt) {
-            double[] out = null;
-            for (Map.Entry<MidOpt, double[]> e : ie.entrySet()) {
-                if (e.getValue() != null && e.getKey().top().bar().designation().equals(tt)) {
-                    out = max(out, e.getValue());
-                }
-            }
-            return out;
-        }
-
-        private double bestMidRho(Map<MidOpt, Double> rho, String tt) {
-            double out = 0;
-            for (Map.Entry<MidOpt, Double> e : rho.entrySet()) {
-                if (e.getKey().top().bar().designation().equals(tt)) {
-                    out = Math.max(out, e.getValue());
-                }
-            }
-            return out;
-        }
-
-        private double bestRho(Map<SupportOpt, Double> rho, String tt) {
-            double out = 0;
-            for (Map.Entry<SupportOpt, Double> e : rho.entrySet()) {
-                if (e.getKey().bar().designation().equals(tt)) {
-                    out = Math.max(out, e.getValue());
-                }
-            }
-            return out;
         }
 
         private double[] max(double[] a, double[] b) {
