@@ -33,9 +33,51 @@ final class BenchCommand implements Callable<Integer> {
             description = "whole spans also enumerated exhaustively on a reduced space (default: ${DEFAULT-VALUE})")
     int beamsCompared;
 
+    @Option(names = "--schedule", description = "time whole schedules instead: designed beam by beam, and rationalised")
+    boolean schedule;
+
+    @Option(names = "--schedule-beams", defaultValue = "1000",
+            description = "beams of the schedule designed without rationalisation (default: ${DEFAULT-VALUE})")
+    int scheduleBeams;
+
+    @Option(names = "--rationalised-beams", defaultValue = "300",
+            description = "beams of the rationalised schedule (default: ${DEFAULT-VALUE})")
+    int rationalisedBeams;
+
+    @Option(names = "--max-section-sizes", defaultValue = "6", description = "K of the rationalised schedule (default: ${DEFAULT-VALUE})")
+    int k;
+
+    @Option(names = "--max-bar-sizes", defaultValue = "3", description = "M of the rationalised schedule (default: ${DEFAULT-VALUE})")
+    int m;
+
+    @Option(names = "--threads", paramLabel = "N", description = "threads for schedules (default: the cores)")
+    Integer threads;
+
+    @Option(names = "--make-schedule", paramLabel = "N",
+            description = "write an invented schedule of N beams (settings.yaml and beams.csv) into --out and stop")
+    Integer make;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "where --make-schedule writes (must not hold those files)")
+    java.nio.file.Path outDir;
+
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
+        if (make != null) {
+            return makeSchedule(out);
+        }
+        if (schedule) {
+            int t = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+            out.println("barfit bench --schedule: invented schedules (seed " + seed + "), " + t + " threads, 1 CP-SAT "
+                    + "worker per solve");
+            var f = barfit.bench.ScheduleBench.run(scheduleBeams, rationalisedBeams, k, m, seed, t, out);
+            out.printf(Locale.ROOT, "{\"schedule_beams\": %d, \"schedule_seconds\": %.3f, \"rationalised_beams\": %d, "
+                    + "\"k\": %d, \"m\": %d, \"rationalised_seconds\": %.3f, \"status\": \"%s\", \"gap\": %.6f, "
+                    + "\"peak_heap_mb\": %.0f, \"threads\": %d}%n", f.beams(), f.seconds(), f.rationalisedBeams(), f.k(),
+                    f.m(), f.rationalisedSeconds(), f.status(), f.gap(), f.peakHeapMb(), f.threads());
+            out.flush();
+            return Main.OK;
+        }
         out.println("barfit bench: single sections, default search space, 1 CP-SAT worker, seed " + seed);
         var f = SectionBench.run(instances, Math.max(1, every), seed, out);
         out.printf(Locale.ROOT, "optimizer median %.2f ms (max %.2f ms); exhaustive median %.0f ms over %d layouts "
@@ -62,5 +104,27 @@ final class BenchCommand implements Callable<Integer> {
                 f.exhaustiveMsMedian(), f.speedup(), f.equalOptimum(), beamJson);
         out.flush();
         return equal ? Main.OK : Main.FAILED;
+    }
+
+    private int makeSchedule(PrintWriter out) {
+        if (make < 1 || make > 100_000) {
+            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--make-schedule"),
+                    "expected 1 to 100000 beams, got " + make);
+        }
+        if (outDir == null) {
+            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--out"),
+                    "--make-schedule needs --out DIR");
+        }
+        for (String name : new String[] {"settings.yaml", "beams.csv"}) {
+            if (java.nio.file.Files.exists(outDir.resolve(name))) {
+                throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile(outDir.resolve(name).toString()),
+                        "already exists; expected a directory without settings.yaml and beams.csv");
+            }
+        }
+        barfit.bench.ScheduleBench.write(outDir, make, seed, null);
+        out.println("wrote " + outDir.resolve("settings.yaml") + " and " + outDir.resolve("beams.csv") + " (" + make
+                + " invented beams, seed " + seed + ")");
+        out.flush();
+        return Main.OK;
     }
 }

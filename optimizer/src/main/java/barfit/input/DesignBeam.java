@@ -8,10 +8,11 @@ import barfit.section.SpanChecks;
 /**
  * A beam of a {@code design} file. A single section gives Mu in N·mm (+ sagging) and Vu in N or null;
  * a whole span gives {@code whole} instead. Both carry the headroom cap and fixed width in mm or null,
- * the flange, and the span (for the cost over the length and, with ends, the depth rule).
+ * the flange, and the span (for the cost over the length and, with ends, the depth rule). {@code group}
+ * names beams a schedule may make share one section size (null: none).
  */
 public record DesignBeam(String id, Location location, double mu, Double vu, Double maxDepth, Double width,
-        Flange flange, Span span, WholeSpan whole) {
+        Flange flange, Span span, WholeSpan whole, String group) {
 
     /**
      * The parts of a whole span: moments at the left support, mid-span and right support (N·mm, null

@@ -22,12 +22,17 @@ import java.util.Map;
  */
 public final class DesignInputReader {
     static final String[] BEAM_KEYS = {"id", "Mu", "Vu", "max_depth", "width", "flange", "span", "ends", "moments",
-        "shear", "service", "deflection_limits", "bottom_anchored_at_supports"};
+        "shear", "service", "deflection_limits", "bottom_anchored_at_supports", "group"};
 
     private DesignInputReader() {
     }
 
     public static DesignInput read(Path file) {
+        return read(file, true);
+    }
+
+    /** Reads a file whose {@code beams:} may be left out when {@code beamsRequired} is false (they come from elsewhere). */
+    public static DesignInput read(Path file, boolean beamsRequired) {
         YFields doc = SettingsReader.root(YamlReader.read(file));
         Settings settings = SettingsReader.read(doc, file);
         SearchSpace space = SearchReader.read(doc, settings);
@@ -36,8 +41,8 @@ public final class DesignInputReader {
         int barsPerTwoLegs = SearchReader.barsPerTwoLegs(doc);
         SectionReader sr = new SectionReader(settings);
         UnitSystem u = settings.units();
-        List<YFields> beams = doc.listOfMaps("beams", "beams");
-        if (beams.isEmpty()) {
+        List<YFields> beams = beamsRequired || doc.has("beams") ? doc.listOfMaps("beams", "beams") : List.of();
+        if (beams.isEmpty() && beamsRequired) {
             throw doc.error("beams", "expected at least one beam");
         }
         List<DesignBeam> out = new ArrayList<>();
@@ -49,6 +54,7 @@ public final class DesignInputReader {
             if (first != null) {
                 throw b.error("id", "beam id \"" + id + "\" is used twice (first at line " + first + "); expected unique ids");
             }
+            String group = b.has("group") ? b.text("group", "the group of beams that may share a section size") : null;
             Double cap = sr.optLength(b, "max_depth", "the headroom cap on the total height").orElse(null);
             Double width = sr.optLength(b, "width", "the fixed web width").orElse(null);
             Flange flange = null;
@@ -76,7 +82,7 @@ public final class DesignInputReader {
                         Dim.MOMENT);
                 Double vu = b.has("Vu") ? u.toSI(b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE)), Dim.FORCE)
                         : null;
-                out.add(new DesignBeam(id, b.location(), mu, vu, cap, width, flange, span, null));
+                out.add(new DesignBeam(id, b.location(), mu, vu, cap, width, flange, span, null, group));
                 continue;
             }
             if (b.has("Vu")) {
@@ -86,7 +92,7 @@ public final class DesignInputReader {
                 throw new InputError(b.location(), b.path() + ": a whole span needs span: <clear span, "
                         + u.unit(Dim.SPAN) + "> and ends: simple | one-end-continuous | both-ends-continuous | cantilever");
             }
-            out.add(new DesignBeam(id, b.location(), 0, null, cap, width, flange, span, whole(b, span.ends(), u)));
+            out.add(new DesignBeam(id, b.location(), 0, null, cap, width, flange, span, whole(b, span.ends(), u), group));
         }
         return new DesignInput(settings, space, costs.rates(), costs.currency(), out, maxSizes, barsPerTwoLegs, costs);
     }

@@ -60,7 +60,8 @@ public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<Section
         return beamsCost + formworkSetsCost;
     }
 
+    /** Every beam has a passing design and, when rationalised, the limits could be met. */
     public boolean allFeasible() {
-        return beams.stream().allMatch(Beam::feasible);
+        return beams.stream().allMatch(Beam::feasible) && (proof == null || !proof.status().equals("INFEASIBLE"));
     }
 }

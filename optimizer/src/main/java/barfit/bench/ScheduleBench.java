@@ -1,0 +1,120 @@
+package barfit.bench;
+
+import barfit.design.CostModel;
+import barfit.design.SolverOptions;
+import barfit.schedule.ScheduleInput;
+import barfit.schedule.ScheduleInputReader;
+import barfit.schedule.ScheduleResult;
+import barfit.schedule.ScheduleSolver;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.Locale;
+
+/**
+ * Whole schedules from {@link ScheduleGenerator}, written to files and read back as a user's would be:
+ * one without rationalisation, one rationalised to K section sizes and M bar sizes. Prints wall time,
+ * the proof and the peak heap.
+ */
+public final class ScheduleBench {
+    public record Figures(int beams, double seconds, int rationalisedBeams, int k, int m, double rationalisedSeconds,
+            String status, double gap, double peakHeapMb, int threads) {
+    }
+
+    private ScheduleBench() {
+    }
+
+    /** Writes an invented schedule: {@code settings.yaml} and {@code beams.csv} in {@code dir}. */
+    public static void write(Path dir, int beams, long seed, String rationalise) {
+        try {
+            Files.createDirectories(dir);
+            Files.writeString(dir.resolve("settings.yaml"), ScheduleGenerator.settings(
+                    "Invented schedule of " + beams + " beams, seed " + seed, rationalise));
+            Files.writeString(dir.resolve("beams.csv"), ScheduleGenerator.csv(beams, seed));
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    public static Figures run(int beams, int ratBeams, int k, int m, long seed, int threads, PrintWriter out) {
+        Path dir;
+        try {
+            dir = Files.createTempDirectory("barfit-schedule-bench");
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        try {
+            resetPeaks();
+            // warm-up on a small schedule so the figures are of compiled code
+            solve(dir.resolve("warm"), 30, seed + 99, null, threads);
+            write(dir.resolve("plain"), beams, seed, null);
+            long t0 = System.nanoTime();
+            ScheduleResult plain = solve(dir.resolve("plain"), beams, seed, null, threads);
+            double plainS = (System.nanoTime() - t0) / 1e9;
+            long feasible = plain.beams().stream().filter(ScheduleResult.Beam::feasible).count();
+            out.printf(Locale.ROOT, "%d beams, each its own optimum, %d threads: %.2f s wall (%.1f ms a beam); "
+                    + "%d with a design; total %.0f%n", beams, threads, plainS, 1000 * plainS / beams, feasible,
+                    plain.totalCost());
+            String rat = "rationalise: {max_section_sizes: " + k + ", max_bar_sizes: " + m + "}\n";
+            Path rdir = dir.resolve("rationalised");
+            write(rdir, ratBeams, seed + 1, rat);
+            t0 = System.nanoTime();
+            ScheduleResult r = solve(rdir, ratBeams, seed + 1, rat, threads);
+            double ratS = (System.nanoTime() - t0) / 1e9;
+            var p = r.proof();
+            out.printf(Locale.ROOT, "%d beams rationalised to K = %d sizes, M = %d bar sizes, %d threads: %.2f s wall; "
+                    + "%s, objective %.2f, bound %.2f, gap %.3f %%; %d of %d bar-size sets solved, %d pruned; "
+                    + "%d (beam, size) pairs priced; own optima %.2f (+%.2f %%); price of standardisation for "
+                    + "K = 1..%d%n", ratBeams, k, m, threads, ratS, p.status(), p.objective(), p.bound(), 100 * p.gap(),
+                    p.barSetsSolved(), p.barSetsTotal(), p.barSetsPruned(), p.pairsEvaluated(), r.unconstrainedCost(),
+                    100 * (r.totalCost() - r.unconstrainedCost()) / r.unconstrainedCost(), r.standardisation().size());
+            double peak = peakHeapMb();
+            out.printf(Locale.ROOT, "peak heap %.0f MB (of %.0f MB allowed)%n", peak,
+                    Runtime.getRuntime().maxMemory() / 1048576.0);
+            return new Figures(beams, plainS, ratBeams, k, m, ratS, p.status(), p.gap(), peak, threads);
+        } finally {
+            delete(dir);
+        }
+    }
+
+    private static ScheduleResult solve(Path dir, int beams, long seed, String rationalise, int threads) {
+        if (!Files.exists(dir.resolve("beams.csv"))) {
+            write(dir, beams, seed, rationalise);
+        }
+        ScheduleInput in = ScheduleInputReader.read(dir.resolve("settings.yaml"), dir.resolve("beams.csv"));
+        CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover());
+        return new ScheduleSolver(cost, new SolverOptions(60, 1, 1), threads, barfit.schedule.Progress.NONE).solve(in);
+    }
+
+    private static void resetPeaks() {
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == MemoryType.HEAP) {
+                pool.resetPeakUsage();
+            }
+        }
+    }
+
+    private static double peakHeapMb() {
+        long sum = 0;
+        for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == MemoryType.HEAP && pool.getPeakUsage() != null) {
+                sum += pool.getPeakUsage().getUsed();
+            }
+        }
+        return sum / 1048576.0;
+    }
+
+    private static void delete(Path dir) {
+        try (var s = Files.walk(dir)) {
+            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+        } catch (IOException e) {
+            // a temporary folder left behind is harmless
+        }
+    }
+}

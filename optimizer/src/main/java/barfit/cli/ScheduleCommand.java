@@ -1,0 +1,176 @@
+package barfit.cli;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.Location;
+import barfit.design.CostModel;
+import barfit.design.SolverOptions;
+import barfit.report.ScheduleCsv;
+import barfit.report.ScheduleJson;
+import barfit.report.ScheduleText;
+import barfit.schedule.ScheduleInput;
+import barfit.schedule.ScheduleInputReader;
+import barfit.schedule.ScheduleResult;
+import barfit.schedule.ScheduleSolver;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+@Command(name = "schedule", mixinStandardHelpOptions = true,
+        description = "Design every beam of a floor or building: each at its proven optimum, or rationalised to a few "
+                + "section and bar sizes (rationalise: in FILE) with the proof of the whole schedule's optimum.%n"
+                + "With --out DIR writes schedule.csv, schedule.json, report.html and standardisation.svg there.%n"
+                + "Exit code 0 when every beam has a passing design, 1 when one has none, 2 for bad input.")
+final class ScheduleCommand implements Callable<Integer> {
+    static final List<String> OUTPUTS = List.of("schedule.csv", "schedule.json", "report.html", "standardisation.svg");
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "YAML: settings, search, costs, rationalise and "
+            + "(unless --beams) beams (see examples/schedule/)")
+    Path file;
+
+    @Option(names = "--beams", paramLabel = "CSV", description = "read the beams from this CSV file instead of FILE")
+    Path beams;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "write the schedule files into DIR (created if missing)")
+    Path out;
+
+    @Option(names = "--force", description = "replace schedule files already in DIR")
+    boolean force;
+
+    @Option(names = "--quiet", description = "no progress bar")
+    boolean quiet;
+
+    @Option(names = "--format", defaultValue = "text", description = "what to print: text or json (default: ${DEFAULT-VALUE})")
+    OutputFormat format;
+
+    @Option(names = "--threads", paramLabel = "N", description = "beams designed in parallel (default: the cores, %d)")
+    Integer threads;
+
+    @Option(names = "--time-limit", paramLabel = "SECONDS", defaultValue = "60",
+            description = "CP-SAT time limit per solve (default: ${DEFAULT-VALUE})")
+    double timeLimit;
+
+    @Option(names = "--workers", paramLabel = "N", defaultValue = "1",
+            description = "CP-SAT workers per solve (default: ${DEFAULT-VALUE}; 1 gives repeatable answers)")
+    int workers;
+
+    @Option(names = "--seed", paramLabel = "N", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
+    int seed;
+
+    @Override
+    public Integer call() {
+        int cores = Runtime.getRuntime().availableProcessors();
+        int nThreads = threads == null ? cores : threads;
+        if (nThreads < 1 || nThreads > 256) {
+            throw new InputError(Location.ofFile("--threads"), "expected 1 to 256, got " + nThreads);
+        }
+        if (workers < 1 || workers > 64) {
+            throw new InputError(Location.ofFile("--workers"), "expected 1 to 64, got " + workers);
+        }
+        if (!(timeLimit > 0)) {
+            throw new InputError(Location.ofFile("--time-limit"), "expected a positive number of seconds");
+        }
+        if (out != null) {
+            checkOutputs();
+        }
+        ScheduleInput input = ScheduleInputReader.read(file, beams);
+        ProgressBar bar = new ProgressBar(spec.commandLine().getErr(), !quiet && ProgressBar.stderrIsTerminal());
+        CostModel cost = new CostModel(input.rates(), input.settings().detailing().cover());
+        ScheduleResult result;
+        try {
+            result = new ScheduleSolver(cost, new SolverOptions(timeLimit, workers, seed), nThreads, bar).solve(input);
+        } finally {
+            bar.finish();
+        }
+        String text = format == OutputFormat.json ? ScheduleJson.render(result) : ScheduleText.render(result);
+        if (out != null) {
+            write(result);
+            if (format == OutputFormat.text) {
+                text += "\nwrote " + String.join(", ", OUTPUTS.stream().map(f -> out.resolve(f).toString()).toList())
+                        + "\n";
+            }
+        }
+        spec.commandLine().getOut().print(text);
+        spec.commandLine().getOut().flush();
+        return result.allFeasible() ? Main.OK : Main.FAILED;
+    }
+
+    /** Before any work: refuse to replace a user's file without --force, and never replace an input. */
+    private void checkOutputs() {
+        if (Files.exists(out) && !Files.isDirectory(out)) {
+            throw new InputError(Location.ofFile(out.toString()), "--out: this is a file; expected a directory");
+        }
+        for (String name : OUTPUTS) {
+            Path target = out.resolve(name);
+            if (sameFile(target, file) || (beams != null && sameFile(target, beams))) {
+                throw new InputError(Location.ofFile(target.toString()), "--out would replace an input file; "
+                        + "expected another directory");
+            }
+            if (Files.exists(target) && !force) {
+                throw new InputError(Location.ofFile(target.toString()), "already exists; expected a new directory, "
+                        + "or --force to replace the schedule files");
+            }
+        }
+    }
+
+    private static boolean sameFile(Path a, Path b) {
+        try {
+            return Files.exists(a) && Files.exists(b) && Files.isSameFile(a, b);
+        } catch (IOException e) {
+            return false;
+        }
+    }
+
+    /** Writes every file to a temporary name first, then moves them in, so a failure leaves no half schedule. */
+    private void write(ScheduleResult r) {
+        Map<String, String> files = new LinkedHashMap<>();
+        files.put("schedule.csv", ScheduleCsv.render(r));
+        files.put("schedule.json", ScheduleJson.render(r));
+        files.put("report.html", barfit.report.html.ScheduleHtml.render(r));
+        files.put("standardisation.svg", barfit.report.html.StandardisationPlot.svg(r.standardisation(),
+                r.input().settings().units(), r.input().currency()));
+        List<Path> temps = new ArrayList<>();
+        try {
+            Files.createDirectories(out);
+            for (Map.Entry<String, String> e : files.entrySet()) {
+                Path tmp = out.resolve("." + e.getKey() + ".tmp");
+                Files.writeString(tmp, e.getValue(), StandardCharsets.UTF_8);
+                temps.add(tmp);
+            }
+            int i = 0;
+            for (String name : files.keySet()) {
+                Path tmp = temps.get(i++);
+                try {
+                    Files.move(tmp, out.resolve(name), StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+                } catch (AtomicMoveNotSupportedException e) {
+                    Files.move(tmp, out.resolve(name), StandardCopyOption.REPLACE_EXISTING);
+                }
+            }
+        } catch (IOException e) {
+            for (Path t : temps) {
+                try {
+                    Files.deleteIfExists(t);
+                } catch (IOException ignored) {
+                    // best effort: the error below is what matters
+                }
+            }
+            throw new InputError(Location.ofFile(out.toString()), "cannot write the schedule ("
+                    + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()) + ")");
+        }
+    }
+}

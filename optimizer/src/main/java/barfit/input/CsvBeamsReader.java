@@ -1,0 +1,396 @@
+package barfit.input;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.Location;
+import barfit.section.EndCondition;
+import barfit.section.Flange;
+import barfit.section.Span;
+import barfit.section.SpanChecks;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * Reads a schedule's beams from CSV: a header row naming the columns (any order), then one row per
+ * whole span, in the units of the settings file. Blank lines and lines starting with {@code #} are
+ * skipped; a cell may be quoted. Every cell is checked, and the first bad one is reported with its
+ * line and column.
+ *
+ * <pre>
+ * id,span,ends,m_left,m_mid,m_right,v_left,v_right,max_depth,group,flange_width,flange_thickness,dead,live
+ * </pre>
+ * {@code vu} may stand for both end shears. Optional: {@code width} (fixes b), {@code sustained_live}.
+ */
+public final class CsvBeamsReader {
+    static final List<String> REQUIRED = List.of("id", "span", "ends");
+    static final List<String> KNOWN = List.of("id", "span", "ends", "m_left", "m_mid", "m_right", "vu", "v_left",
+            "v_right", "max_depth", "group", "flange_width", "flange_thickness", "dead", "live", "sustained_live",
+            "width");
+
+    private final Path file;
+    private final Settings settings;
+    private final UnitSystem u;
+    private final double widestWeb;
+
+    private CsvBeamsReader(Path file, Settings settings, double widestWeb) {
+        this.file = file;
+        this.settings = settings;
+        this.u = settings.units();
+        this.widestWeb = widestWeb;
+    }
+
+    /** One cell: its text and where it starts. */
+    private record Cell(String text, int line, int column) {
+    }
+
+    /** One data row by column name. */
+    private record Row(int line, Map<String, Cell> cells) {
+    }
+
+    public static List<DesignBeam> read(Path file, Settings settings, double widestWeb) {
+        return new CsvBeamsReader(file, settings, widestWeb).read();
+    }
+
+    private List<DesignBeam> read() {
+        String text;
+        try {
+            byte[] bytes = Files.readAllBytes(file);
+            text = StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(bytes)).toString();
+        } catch (CharacterCodingException e) {
+            throw new InputError(Location.ofFile(file.toString()), "not valid UTF-8 text; expected a CSV file");
+        } catch (IOException e) {
+            throw new InputError(Location.ofFile(file.toString()), "cannot read the file ("
+                    + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()) + ")");
+        }
+        if (text.startsWith("\uFEFF")) {
+            text = text.substring(1);
+        }
+        String[] lines = text.split("\r\n|\n|\r", -1);
+        List<String> header = null;
+        int headerLine = 0;
+        List<Cell> headerCells = null;
+        List<Row> rows = new ArrayList<>();
+        for (int i = 0; i < lines.length; i++) {
+            String line = lines[i];
+            int no = i + 1;
+            if (line.isBlank() || line.stripLeading().startsWith("#")) {
+                continue;
+            }
+            List<Cell> cells = split(line, no);
+            if (header == null) {
+                headerCells = cells;
+                header = new ArrayList<>();
+                for (Cell c : cells) {
+                    String name = c.text().strip().toLowerCase(Locale.ROOT);
+                    if (!KNOWN.contains(name)) {
+                        throw error(c, "unknown column '" + c.text().strip() + "'; expected columns from: "
+                                + String.join(", ", KNOWN));
+                    }
+                    if (header.contains(name)) {
+                        throw error(c, "column '" + name + "' appears twice");
+                    }
+                    header.add(name);
+                }
+                headerLine = no;
+                for (String r : REQUIRED) {
+                    if (!header.contains(r)) {
+                        throw new InputError(new Location(file.toString(), no, 1), "the header has no '" + r
+                                + "' column; expected at least: " + String.join(", ", REQUIRED));
+                    }
+                }
+                if (header.contains("vu") && (header.contains("v_left") || header.contains("v_right"))) {
+                    throw error(headerCells.get(header.indexOf("vu")), "give either vu (both ends) or v_left and "
+                            + "v_right, not both");
+                }
+                continue;
+            }
+            if (cells.size() != header.size()) {
+                Cell at = cells.size() > header.size() ? cells.get(header.size()) : cells.get(cells.size() - 1);
+                throw error(at, "this row has " + cells.size() + " cells but the header (line " + headerLine + ") has "
+                        + header.size() + "; expected one cell per column (leave a cell empty when it does not apply)");
+            }
+            Map<String, Cell> byName = new LinkedHashMap<>();
+            for (int c = 0; c < cells.size(); c++) {
+                byName.put(header.get(c), cells.get(c));
+            }
+            rows.add(new Row(no, byName));
+        }
+        if (header == null) {
+            throw new InputError(Location.ofFile(file.toString()), "empty; expected a header row and one row per beam");
+        }
+        if (rows.isEmpty()) {
+            throw new InputError(new Location(file.toString(), headerLine, 1), "no beams after the header; expected one "
+                    + "row per beam");
+        }
+        List<DesignBeam> out = new ArrayList<>();
+        Map<String, Integer> ids = new HashMap<>();
+        for (Row r : rows) {
+            DesignBeam b = beam(r);
+            Integer first = ids.putIfAbsent(b.id(), r.line());
+            if (first != null) {
+                throw error(r.cells().get("id"), "beam id \"" + b.id() + "\" is used twice (first at line " + first
+                        + "); expected unique ids");
+            }
+            out.add(b);
+        }
+        return out;
+    }
+
+    /** Splits a line at commas outside double quotes ("" inside quotes is one quote). */
+    private List<Cell> split(String line, int no) {
+        List<Cell> out = new ArrayList<>();
+        int i = 0;
+        int n = line.length();
+        while (true) {
+            int start = i;
+            StringBuilder sb = new StringBuilder();
+            int j = i;
+            while (j < n && line.charAt(j) == ' ') {
+                j++;
+            }
+            if (j < n && line.charAt(j) == '"') {
+                j++;
+                boolean closed = false;
+                while (j < n) {
+                    char ch = line.charAt(j);
+                    if (ch == '"') {
+                        if (j + 1 < n && line.charAt(j + 1) == '"') {
+                            sb.append('"');
+                            j += 2;
+                            continue;
+                        }
+                        closed = true;
+                        j++;
+                        break;
+                    }
+                    sb.append(ch);
+                    j++;
+                }
+                if (!closed) {
+                    throw new InputError(new Location(file.toString(), no, start + 1), "a quoted cell is not closed; "
+                            + "expected a closing \"");
+                }
+                while (j < n && line.charAt(j) == ' ') {
+                    j++;
+                }
+                if (j < n && line.charAt(j) != ',') {
+                    throw new InputError(new Location(file.toString(), no, j + 1), "text after a quoted cell; expected "
+                            + "a comma");
+                }
+            } else {
+                while (j < n && line.charAt(j) != ',') {
+                    sb.append(line.charAt(j));
+                    j++;
+                }
+            }
+            out.add(new Cell(sb.toString().strip(), no, start + 1));
+            if (j >= n) {
+                break;
+            }
+            i = j + 1;
+        }
+        return out;
+    }
+
+    private InputError error(Cell c, String message) {
+        return new InputError(new Location(file.toString(), c.line(), c.column()), message);
+    }
+
+    private static boolean empty(Cell c) {
+        return c == null || c.text().isEmpty();
+    }
+
+    private Double number(Row r, String column, String what) {
+        Cell c = r.cells().get(column);
+        if (empty(c)) {
+            return null;
+        }
+        try {
+            double v = Double.parseDouble(c.text());
+            if (!Double.isFinite(v)) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw error(c, column + ": expected a number (" + what + "), got \"" + c.text() + "\"");
+        }
+    }
+
+    private Double positive(Row r, String column, String what, Dim dim) {
+        Double v = number(r, column, what);
+        if (v != null && v <= 0) {
+            throw error(r.cells().get(column), column + ": expected a positive number (" + what + "), got "
+                    + SettingsReader.fmt(v));
+        }
+        return v == null ? null : u.toSI(v, dim);
+    }
+
+    private Double nonNegative(Row r, String column, String what, Dim dim) {
+        Double v = number(r, column, what);
+        if (v != null && v < 0) {
+            throw error(r.cells().get(column), column + ": expected zero or more (" + what + "), got "
+                    + SettingsReader.fmt(v));
+        }
+        return v == null ? null : u.toSI(v, dim);
+    }
+
+    private DesignBeam beam(Row r) {
+        Cell idCell = r.cells().get("id");
+        if (empty(idCell)) {
+            throw error(idCell, "id: expected the beam's mark, e.g. B2-07");
+        }
+        String id = idCell.text();
+        Location where = new Location(file.toString(), r.line(), 1);
+        Cell spanCell = r.cells().get("span");
+        if (empty(spanCell)) {
+            throw error(spanCell, "span: expected the clear span, " + u.unit(Dim.SPAN));
+        }
+        double span = positive(r, "span", "the clear span, " + u.unit(Dim.SPAN), Dim.SPAN);
+        Cell endsCell = r.cells().get("ends");
+        EndCondition ends = empty(endsCell) ? null : EndCondition.byKey(endsCell.text());
+        if (ends == null) {
+            throw error(endsCell, "ends: expected simple, one-end-continuous, both-ends-continuous or cantilever, got \""
+                    + (endsCell == null ? "" : endsCell.text()) + "\"");
+        }
+        String moment = "factored moment, " + u.unit(Dim.MOMENT);
+        Double ml = siOrNull(number(r, "m_left", moment), Dim.MOMENT);
+        Double mm = siOrNull(number(r, "m_mid", moment), Dim.MOMENT);
+        Double mr = siOrNull(number(r, "m_right", moment), Dim.MOMENT);
+        switch (ends) {
+            case SIMPLE -> {
+                need(r, "m_mid", mm, "a simple span needs m_mid");
+                forbid(r, "m_left", ml, "a simple span has no support moment; leave m_left empty");
+                forbid(r, "m_right", mr, "a simple span has no support moment; leave m_right empty");
+            }
+            case ONE_END_CONTINUOUS -> {
+                need(r, "m_mid", mm, "a span continuous at one end needs m_mid and m_left or m_right");
+                if ((ml == null) == (mr == null)) {
+                    Cell at = r.cells().get(ml == null ? "m_left" : "m_right");
+                    throw error(at == null ? endsCell : at, "one-end-continuous: expected exactly one support moment, "
+                            + "m_left or m_right (the continuous end)");
+                }
+            }
+            case BOTH_ENDS_CONTINUOUS -> {
+                need(r, "m_left", ml, "a span continuous at both ends needs m_left, m_mid and m_right");
+                need(r, "m_mid", mm, "a span continuous at both ends needs m_left, m_mid and m_right");
+                need(r, "m_right", mr, "a span continuous at both ends needs m_left, m_mid and m_right");
+            }
+            case CANTILEVER -> {
+                need(r, "m_left", ml, "a cantilever is fixed at its left end: give m_left");
+                forbid(r, "m_mid", mm, "a cantilever is designed at its fixed end: leave m_mid empty");
+                forbid(r, "m_right", mr, "a cantilever is fixed at its left end: leave m_right empty");
+            }
+        }
+        if (ml != null && ml > 0) {
+            throw error(r.cells().get("m_left"), "m_left: a support moment is hogging; expected a negative value "
+                    + "(top in tension)");
+        }
+        if (mr != null && mr > 0) {
+            throw error(r.cells().get("m_right"), "m_right: a support moment is hogging; expected a negative value "
+                    + "(top in tension)");
+        }
+        if (mm != null && mm < 0) {
+            throw error(r.cells().get("m_mid"), "m_mid: the mid-span moment is sagging; expected a positive value");
+        }
+        if (ml != null && ml == 0) {
+            ml = null;
+        }
+        if (mr != null && mr == 0) {
+            mr = null;
+        }
+        String shear = "factored shear at d from the face, " + u.unit(Dim.FORCE);
+        Double vl;
+        Double vr;
+        if (r.cells().containsKey("vu")) {
+            vl = nonNegative(r, "vu", shear, Dim.FORCE);
+            vr = ends == EndCondition.CANTILEVER ? null : vl;
+        } else {
+            vl = nonNegative(r, "v_left", shear, Dim.FORCE);
+            vr = nonNegative(r, "v_right", shear, Dim.FORCE);
+            if (ends == EndCondition.CANTILEVER && vr != null) {
+                throw error(r.cells().get("v_right"), "v_right: a cantilever has its shear at the fixed (left) end "
+                        + "only; leave v_right empty");
+            }
+        }
+        Double cap = positive(r, "max_depth", "the headroom cap on the total height, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Double width = positive(r, "width", "the fixed web width, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Cell groupCell = r.cells().get("group");
+        String group = empty(groupCell) ? null : groupCell.text();
+        Double bf = positive(r, "flange_width", "the effective flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Double hf = positive(r, "flange_thickness", "the slab thickness, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Flange flange = null;
+        if ((bf == null) != (hf == null)) {
+            String missing = bf == null ? "flange_width" : "flange_thickness";
+            Cell at = r.cells().get(missing);
+            throw error(at == null ? r.cells().get(bf == null ? "flange_thickness" : "flange_width") : at,
+                    missing + ": a flange needs both flange_width and flange_thickness");
+        }
+        if (bf != null) {
+            if (ends == EndCondition.CANTILEVER) {
+                throw error(r.cells().get("flange_width"), "flange_width: a cantilever's section is in hogging, with "
+                        + "the slab in tension; leave the flange empty");
+            }
+            double web = width != null ? width : widestWeb;
+            if (bf < web) {
+                throw error(r.cells().get("flange_width"), "flange_width: the flange (" + u.compact(bf, Dim.LENGTH)
+                        + " " + u.unit(Dim.LENGTH) + ") is narrower than the web (" + u.compact(web, Dim.LENGTH) + " "
+                        + u.unit(Dim.LENGTH) + "); expected flange width >= web width");
+            }
+            flange = new Flange(bf, hf, false);
+        }
+        String load = "service load, " + u.unit(Dim.LINE_LOAD);
+        Double dead = positive(r, "dead", "the service dead load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD);
+        Double live = nonNegative(r, "live", "the service live load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD);
+        Double sustained = number(r, "sustained_live", "the sustained part of the live load, 0 to 1");
+        SpanChecks.ServiceLoads service = null;
+        if (dead != null || live != null) {
+            if (dead == null || live == null) {
+                String missing = dead == null ? "dead" : "live";
+                Cell at = r.cells().get(missing);
+                throw error(at == null ? r.cells().get(dead == null ? "live" : "dead") : at, missing
+                        + ": service loads need both dead and live (" + load + ")");
+            }
+            if (sustained != null && (sustained < 0 || sustained > 1)) {
+                throw error(r.cells().get("sustained_live"), "sustained_live: expected the sustained part of the live "
+                        + "load from 0 to 1, got " + SettingsReader.fmt(sustained));
+            }
+            service = new SpanChecks.ServiceLoads(dead, live, sustained == null ? 0 : sustained);
+        } else if (sustained != null) {
+            throw error(r.cells().get("sustained_live"), "sustained_live: given without dead and live loads");
+        }
+        DesignBeam.WholeSpan whole = new DesignBeam.WholeSpan(ml, mm, mr, vl, vr, service, SpanChecks.Limits.DEFAULT,
+                false);
+        return new DesignBeam(id, where, 0, null, cap, width, flange, new Span(span, ends), whole, group);
+    }
+
+    private Double siOrNull(Double v, Dim dim) {
+        return v == null ? null : u.toSI(v, dim);
+    }
+
+    private void need(Row r, String column, Double v, String message) {
+        if (v == null) {
+            Cell at = r.cells().get(column);
+            if (at == null) {
+                throw new InputError(new Location(file.toString(), r.line(), 1), "missing column '" + column + "'; "
+                        + message);
+            }
+            throw error(at, column + ": empty; " + message);
+        }
+    }
+
+    private void forbid(Row r, String column, Double v, String message) {
+        if (v != null) {
+            throw error(r.cells().get(column), column + ": " + message);
+        }
+    }
+}

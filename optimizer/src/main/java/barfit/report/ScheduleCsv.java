@@ -1,0 +1,85 @@
+package barfit.report;
+
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.schedule.ScheduleResult;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/** {@code schedule.csv}: one row per beam, in the input's units. */
+public final class ScheduleCsv {
+    private ScheduleCsv() {
+    }
+
+    public static String render(ScheduleResult r) {
+        UnitSystem u = r.input().settings().units();
+        String len = u.unit(Dim.LENGTH);
+        String mom = u.unit(Dim.MOMENT);
+        StringBuilder out = new StringBuilder();
+        out.append(String.join(",", "id", "group", "status", "width_" + len, "height_" + len, "bottom", "top_continuous",
+                "top_left", "top_right", "stirrups", "phiMn_left_" + mom, "Mu_left_" + mom, "phiMn_mid_" + mom,
+                "Mu_mid_" + mom, "phiMn_right_" + mom, "Mu_right_" + mom, "cost", "own_optimum_cost", "bar_marks"))
+                .append('\n');
+        for (ScheduleResult.Beam b : r.beams()) {
+            List<String> row = new ArrayList<>();
+            row.add(b.beam().id());
+            row.add(b.beam().group() == null ? "" : b.beam().group());
+            if (!b.feasible()) {
+                row.add("no design: " + b.outcome().diagnosis().limit() + " - " + b.outcome().diagnosis().summary());
+                for (int i = 0; i < 16; i++) {
+                    row.add("");
+                }
+                out.append(line(row)).append('\n');
+                continue;
+            }
+            BeamProblem p = b.outcome().problem();
+            BeamDesigner.Design d = b.outcome().best();
+            BeamLayout l = d.layout();
+            row.add("ok");
+            row.add(u.compact(l.width(), Dim.LENGTH));
+            row.add(u.compact(l.height(), Dim.LENGTH));
+            row.add(ScheduleRows.bottom(l));
+            row.add(ScheduleRows.topContinuous(p, l));
+            row.add(ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u));
+            row.add(ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u));
+            row.add(ScheduleRows.stirrups(p, l, u));
+            for (BeamProblem.Place place : BeamProblem.Place.values()) {
+                double[] s = ScheduleRows.strength(d, place, u);
+                row.add(s == null ? "" : num(s[0]));
+                row.add(s == null ? "" : num(s[1]));
+            }
+            row.add(Money.amount(d.cost().total()));
+            row.add(Double.isNaN(b.ownOptimum()) ? "" : Money.amount(b.ownOptimum()));
+            row.add(String.join("; ", ScheduleRows.marks(b.beam().id(), d, u)));
+            out.append(line(row)).append('\n');
+        }
+        return out.toString();
+    }
+
+    private static String num(double v) {
+        return String.format(Locale.ROOT, "%.1f", v);
+    }
+
+    private static String line(List<String> cells) {
+        StringBuilder sb = new StringBuilder();
+        for (String c : cells) {
+            if (sb.length() > 0) {
+                sb.append(',');
+            }
+            sb.append(quote(c));
+        }
+        return sb.toString();
+    }
+
+    /** RFC 4180 quoting where a cell holds a comma, quote or line break. */
+    static String quote(String c) {
+        if (c.contains(",") || c.contains("\"") || c.contains("\n")) {
+            return "\"" + c.replace("\"", "\"\"") + "\"";
+        }
+        return c;
+    }
+}

@@ -1,0 +1,115 @@
+package barfit.report;
+
+import barfit.schedule.ScheduleResult;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+/** {@code schedule.json}: the schedule, its proof and price of standardisation, and every beam in full. */
+public final class ScheduleJson {
+    private ScheduleJson() {
+    }
+
+    public static String render(ScheduleResult r) {
+        UnitSystem u = r.input().settings().units();
+        ObjectNode root = Json.object();
+        root.put("caution", Caution.SHORT);
+        root.put("code", r.input().settings().code().edition());
+        root.put("units", u.name());
+        root.set("unit_labels", Json.units(u));
+        root.put("currency", r.input().currency());
+        ArrayNode sources = root.putArray("sources");
+        r.input().sources().forEach(sources::add);
+        var rat = r.input().rationalise();
+        if (rat == null) {
+            root.putNull("rationalise");
+        } else {
+            ObjectNode ro = root.putObject("rationalise");
+            if (rat.maxSectionSizes() == null) {
+                ro.putNull("max_section_sizes");
+            } else {
+                ro.put("max_section_sizes", rat.maxSectionSizes());
+            }
+            if (rat.maxBarSizes() == null) {
+                ro.putNull("max_bar_sizes");
+            } else {
+                ro.put("max_bar_sizes", rat.maxBarSizes());
+            }
+            ro.put("groups", rat.groupsSameSection() ? "same_section" : "independent");
+            ro.put("formwork_set_cost", rat.formworkSetCost());
+        }
+        ObjectNode sum = root.putObject("summary");
+        sum.put("beams", r.beams().size());
+        sum.put("beams_without_design", r.beams().stream().filter(b -> !b.feasible()).count());
+        sum.put("beams_cost", round(r.beamsCost()));
+        sum.put("formwork_sets_cost", round(r.formworkSetsCost()));
+        sum.put("total_cost", round(r.totalCost()));
+        sum.put("own_optimum_cost", round(r.unconstrainedCost()));
+        ArrayNode sizes = sum.putArray("section_sizes");
+        for (ScheduleResult.SectionSize s : r.sizes()) {
+            ObjectNode so = sizes.addObject();
+            Json.put(so, "width", s.width(), Dim.LENGTH, u);
+            Json.put(so, "height", s.height(), Dim.LENGTH, u);
+            ArrayNode ids = so.putArray("beams");
+            s.beams().forEach(ids::add);
+        }
+        ArrayNode bars = sum.putArray("bar_sizes");
+        r.barSizes().forEach(bars::add);
+        if (r.proof() == null) {
+            root.putNull("proof");
+        } else {
+            var p = r.proof();
+            ObjectNode po = root.putObject("proof");
+            po.put("status", p.status());
+            po.put("method", p.method());
+            po.put("objective", round(p.objective()));
+            po.put("bound", round(p.bound()));
+            po.put("gap", Double.isNaN(p.gap()) ? 0 : p.gap());
+            po.put("bar_size_sets", p.barSetsTotal());
+            po.put("bar_size_sets_solved", p.barSetsSolved());
+            po.put("bar_size_sets_pruned", p.barSetsPruned());
+            po.put("pairs_priced", p.pairsEvaluated());
+            po.put("workers", p.workers());
+            po.put("seed", p.seed());
+        }
+        ArrayNode curve = root.putArray("standardisation");
+        for (ScheduleResult.StandardisationPoint p : r.standardisation()) {
+            ObjectNode c = curve.addObject();
+            c.put("max_section_sizes", p.sizes());
+            if (Double.isNaN(p.cost())) {
+                c.putNull("total_cost");
+            } else {
+                c.put("total_cost", round(p.cost()));
+            }
+            c.put("status", p.status());
+            ArrayNode bs = c.putArray("bar_sizes");
+            p.barSizes().forEach(bs::add);
+        }
+        ArrayNode beams = root.putArray("beams");
+        for (ScheduleResult.Beam b : r.beams()) {
+            ObjectNode bo = BeamJson.beam(b.outcome(), u, false);
+            if (b.beam().group() == null) {
+                bo.putNull("group");
+            } else {
+                bo.put("group", b.beam().group());
+            }
+            if (Double.isNaN(b.ownOptimum())) {
+                bo.putNull("own_optimum_cost");
+            } else {
+                bo.put("own_optimum_cost", round(b.ownOptimum()));
+            }
+            if (b.feasible()) {
+                for (var m : bo.withArray("bars")) {
+                    ((ObjectNode) m).put("schedule_mark", b.beam().id() + "/" + m.get("mark").asText());
+                }
+            }
+            beams.add(bo);
+        }
+        return Json.write(root);
+    }
+
+    private static double round(double v) {
+        return Math.round(v * 100) / 100.0;
+    }
+}

@@ -1,0 +1,91 @@
+package barfit.report;
+
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.section.CheckReport;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/** The words of one schedule row, shared by the text, CSV and HTML schedules. */
+public final class ScheduleRows {
+    private ScheduleRows() {
+    }
+
+    /** "3+2 No. 25": bars per layer from the face, and the size. */
+    public static String bars(List<Integer> counts, barfit.catalogs.BarSize bar) {
+        StringBuilder sb = new StringBuilder();
+        for (int c : counts) {
+            sb.append(sb.length() == 0 ? "" : "+").append(c);
+        }
+        return sb + " " + bar.label();
+    }
+
+    public static String size(BeamLayout l, UnitSystem u) {
+        return u.compact(l.width(), Dim.LENGTH) + " × " + u.compact(l.height(), Dim.LENGTH);
+    }
+
+    public static String bottom(BeamLayout l) {
+        return bars(l.bottomCounts(), l.bottom());
+    }
+
+    public static String topContinuous(BeamProblem p, BeamLayout l) {
+        return p.cantilever() ? bars(l.topLeft(), l.top()) : l.topContinuous() + " " + l.top().label();
+    }
+
+    /** Top bars at a continuous support with the extension of the extra bars, or "" where there is none. */
+    public static String topAt(BeamProblem p, BeamLayout l, BeamProblem.Place place, UnitSystem u) {
+        if (p.cantilever() || !(place == BeamProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())) {
+            return "";
+        }
+        List<Integer> counts = place == BeamProblem.Place.LEFT ? l.topLeft() : l.topRight();
+        int extra = BeamLayout.sum(counts) - l.topContinuous();
+        double ext = place == BeamProblem.Place.LEFT ? l.extLeft() : l.extRight();
+        return bars(counts, l.top()) + (extra > 0 ? " (" + extra + " extra × " + u.withUnit(ext, Dim.SPAN) + ")" : "");
+    }
+
+    /** "left: No. 10, 2 legs @ 150; middle: ..." */
+    public static String stirrups(BeamProblem p, BeamLayout l, UnitSystem u) {
+        List<String> parts = new ArrayList<>();
+        List<BeamProblem.Zone> zones = p.zones();
+        for (int i = 0; i < zones.size(); i++) {
+            var s = l.zoneStirrups().get(i);
+            parts.add(zones.get(i).name() + ": " + s.bar().label() + ", " + s.legs() + " legs @ "
+                    + u.compact(s.spacing(), Dim.LENGTH));
+        }
+        return String.join("; ", parts);
+    }
+
+    /** phi Mn and Mu (absolute, user units) at a place, or null where the span has no such section. */
+    public static double[] strength(BeamDesigner.Design d, BeamProblem.Place place, UnitSystem u) {
+        CheckReport r = d.report().sections().get(place);
+        if (r == null) {
+            return null;
+        }
+        return new double[] {u.fromSI(r.flexure().phiMn(), Dim.MOMENT), u.fromSI(Math.abs(r.demand().mu()), Dim.MOMENT)};
+    }
+
+    /** "B2-07/B1: 5 No. 25 × 7.20 m" for every bar mark of the beam. */
+    public static List<String> marks(String id, BeamDesigner.Design d, UnitSystem u) {
+        List<String> out = new ArrayList<>();
+        for (BeamLayout.BarMark m : d.bars()) {
+            out.add(id + "/" + m.mark() + ": " + m.count() + " " + m.bar().label() + " × " + u.withUnit(m.length(), Dim.SPAN));
+        }
+        return out;
+    }
+
+    public static String place(BeamProblem.Place p) {
+        return switch (p) {
+            case LEFT -> "left";
+            case MID -> "mid";
+            case RIGHT -> "right";
+        };
+    }
+
+    static Map<BeamProblem.Place, CheckReport> sections(BeamDesigner.Design d) {
+        return d.report().sections();
+    }
+}

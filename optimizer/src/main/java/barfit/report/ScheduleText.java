@@ -1,0 +1,121 @@
+package barfit.report;
+
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.BeamProblem;
+import barfit.schedule.ScheduleResult;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.util.Locale;
+
+/** The terminal summary of {@code barfit schedule}: the schedule table, the totals, the proof. */
+public final class ScheduleText {
+    private ScheduleText() {
+    }
+
+    public static String render(ScheduleResult r) {
+        UnitSystem u = r.input().settings().units();
+        StringBuilder out = new StringBuilder();
+        out.append(Caution.text()).append("\n\n");
+        out.append("Beam schedule: ").append(String.join(" + ", r.input().sources())).append(", ")
+                .append(r.beams().size()).append(r.beams().size() == 1 ? " beam" : " beams").append(", ")
+                .append(r.input().settings().code().edition()).append('\n');
+        var rat = r.input().rationalise();
+        out.append(rat == null ? "each beam at its own optimum (no rationalise: block)\n" : "rationalised: "
+                + limits(rat) + "\n");
+        out.append('\n');
+        TextTable t = new TextTable(false, false, false, false, false, false, false, false, true);
+        t.row("beam", "group", "b × h (" + u.unit(Dim.LENGTH) + ")", "bottom", "top continuous", "top left",
+                "top right", "stirrups", "cost");
+        for (ScheduleResult.Beam b : r.beams()) {
+            BeamProblem p = b.outcome().problem();
+            String group = b.beam().group() == null ? "" : b.beam().group();
+            if (!b.feasible()) {
+                var d = b.outcome().diagnosis();
+                t.row(b.beam().id(), group, "NO DESIGN", d.limit() + ": " + d.summary(), "", "", "", "", "");
+                continue;
+            }
+            BeamDesigner.Design d = b.outcome().best();
+            BeamLayout l = d.layout();
+            t.row(b.beam().id(), group, ScheduleRows.size(l, u), ScheduleRows.bottom(l), ScheduleRows.topContinuous(p, l),
+                    ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u), ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u),
+                    ScheduleRows.stirrups(p, l, u), Money.amount(d.cost().total()));
+        }
+        t.write("  ", out);
+        out.append('\n');
+        String cur = r.input().currency().isEmpty() ? "" : " " + r.input().currency();
+        out.append("section sizes: ").append(r.sizes().size()).append(" (");
+        for (int i = 0; i < r.sizes().size(); i++) {
+            var s = r.sizes().get(i);
+            out.append(i == 0 ? "" : ", ").append(u.compact(s.width(), Dim.LENGTH)).append(" × ")
+                    .append(u.compact(s.height(), Dim.LENGTH)).append(": ").append(s.beams().size());
+        }
+        out.append(");  bar sizes: ").append(r.barSizes().size()).append(" (").append(String.join(", ",
+                r.barSizes().stream().map(x -> labelOf(r, x)).toList())).append(")\n");
+        out.append("cost: beams ").append(Money.amount(r.beamsCost()));
+        if (r.formworkSetsCost() > 0) {
+            out.append(" + formwork sets ").append(Money.amount(r.formworkSetsCost()));
+        }
+        out.append(" = ").append(Money.amount(r.totalCost())).append(cur);
+        if (r.proof() != null) {
+            double extra = r.totalCost() - r.unconstrainedCost();
+            out.append(";  every beam at its own optimum: ").append(Money.amount(r.unconstrainedCost())).append(cur)
+                    .append(String.format(Locale.ROOT, " (rationalising adds %s, %.1f %%)", Money.amount(extra),
+                            r.unconstrainedCost() > 0 ? 100 * extra / r.unconstrainedCost() : 0));
+        }
+        out.append('\n');
+        if (r.proof() != null) {
+            out.append("proof: ").append(proof(r.proof())).append('\n');
+        }
+        if (!r.standardisation().isEmpty()) {
+            out.append("\nprice of standardisation (least total cost for at most K section sizes):\n");
+            TextTable s = new TextTable(true, true, true, false, false);
+            s.row("K", "total" + cur, "saving of the K-th size", "bar sizes", "status");
+            double prev = Double.NaN;
+            for (ScheduleResult.StandardisationPoint p : r.standardisation()) {
+                s.row(String.valueOf(p.sizes()), Double.isNaN(p.cost()) ? "none fits" : Money.amount(p.cost()),
+                        Double.isNaN(prev) || Double.isNaN(p.cost()) ? "" : Money.amount(prev - p.cost()),
+                        String.join(", ", p.barSizes().stream().map(x -> labelOf(r, x)).toList()), p.status());
+                prev = p.cost();
+            }
+            s.write("  ", out);
+        }
+        long failed = r.beams().stream().filter(b -> !b.feasible()).count();
+        if (failed > 0) {
+            out.append('\n').append(failed).append(failed == 1 ? " beam has" : " beams have")
+                    .append(" no passing design; see its diagnosis above.\n");
+        }
+        return out.toString();
+    }
+
+    static String labelOf(ScheduleResult r, String designation) {
+        return r.input().space().barSizes().stream().filter(b -> b.designation().equals(designation))
+                .map(barfit.catalogs.BarSize::label).findFirst().orElse(designation);
+    }
+
+    public static String limits(barfit.schedule.Rationalise rat) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(rat.maxSectionSizes() == null ? "any number of section sizes" : "at most " + rat.maxSectionSizes()
+                + " section sizes");
+        sb.append(", ").append(rat.maxBarSizes() == null ? "any number of bar sizes" : "at most " + rat.maxBarSizes()
+                + " longitudinal bar sizes");
+        if (rat.groupsSameSection()) {
+            sb.append(", beams of a group share b × h");
+        }
+        if (rat.formworkSetCost() > 0) {
+            sb.append(", formwork set ").append(Money.amount(rat.formworkSetCost())).append(" per size");
+        }
+        return sb.toString();
+    }
+
+    public static String proof(ScheduleResult.Proof p) {
+        if (p.status().equals("INFEASIBLE")) {
+            return "INFEASIBLE — " + p.method() + "; the beams are shown at their own optima";
+        }
+        return p.status() + " — objective " + Money.amount(p.objective()) + ", bound " + Money.amount(p.bound())
+                + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + p.method() + "; bar-size sets: "
+                + p.barSetsTotal() + " (" + p.barSetsSolved() + " solved, " + p.barSetsPruned() + " pruned by bound); "
+                + p.pairsEvaluated() + " (beam, size) pairs priced exactly; " + p.workers()
+                + (p.workers() == 1 ? " CP-SAT worker" : " CP-SAT workers") + ", seed " + p.seed();
+    }
+}

@@ -1,0 +1,71 @@
+package barfit.schedule;
+
+import barfit.catalogs.InputError;
+import barfit.catalogs.yaml.YFields;
+import barfit.catalogs.yaml.YamlReader;
+import barfit.input.CsvBeamsReader;
+import barfit.input.DesignBeam;
+import barfit.input.DesignInput;
+import barfit.input.DesignInputReader;
+import barfit.input.SettingsReader;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Reads a schedule: the settings, search space and costs of a {@code design} file, its optional
+ * {@code rationalise:} block, and the beams either from the file's {@code beams:} or from a CSV file.
+ * A schedule lists whole spans.
+ */
+public final class ScheduleInputReader {
+    private ScheduleInputReader() {
+    }
+
+    public static ScheduleInput read(Path file, Path csv) {
+        DesignInput di = DesignInputReader.read(file, csv == null);
+        YFields doc = SettingsReader.root(YamlReader.read(file));
+        if (csv != null && doc.has("beams")) {
+            throw doc.error("beams", "the beams come from --beams " + csv.getFileName()
+                    + "; expected no beams: in this file (or leave out --beams)");
+        }
+        List<DesignBeam> beams = csv == null ? di.beams()
+                : CsvBeamsReader.read(csv, di.settings(), di.space().widths().get(di.space().widths().size() - 1));
+        List<ScheduleBeam> out = new ArrayList<>();
+        for (DesignBeam b : beams) {
+            if (!b.isWhole()) {
+                throw new InputError(b.location(), "beam " + b.id() + ": a schedule lists whole spans; expected span, "
+                        + "ends and moments: {left, mid, right} instead of Mu");
+            }
+            out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(di, b)));
+        }
+        Rationalise rat = doc.has("rationalise") ? rationalise(doc) : null;
+        List<String> sources = new ArrayList<>(List.of(file.getFileName().toString()));
+        if (csv != null) {
+            sources.add(csv.getFileName().toString());
+        }
+        return new ScheduleInput(sources, di.settings(), di.space(), di.rates(), di.currency(), di.costs(),
+                di.maxBarSizesPerBeam(), di.barsPerTwoLegs(), out, rat);
+    }
+
+    private static Rationalise rationalise(YFields doc) {
+        YFields r = doc.map("rationalise", "the rationalisation {max_section_sizes, max_bar_sizes, groups, "
+                + "formwork_set_cost}").allowOnly("max_section_sizes", "max_bar_sizes", "groups", "formwork_set_cost");
+        Integer sizes = r.has("max_section_sizes")
+                ? r.positiveInt("max_section_sizes", "the most distinct b x h in the schedule, e.g. 6") : null;
+        Integer bars = r.has("max_bar_sizes")
+                ? r.positiveInt("max_bar_sizes", "the most distinct longitudinal bar sizes in the schedule, e.g. 3") : null;
+        boolean same = false;
+        if (r.has("groups")) {
+            String g = r.text("groups", "same_section or independent");
+            switch (g) {
+                case "same_section" -> same = true;
+                case "independent" -> same = false;
+                default -> throw r.error("groups", "expected same_section (beams with the same group share b x h) or "
+                        + "independent, got \"" + g + "\"");
+            }
+        }
+        double formwork = r.has("formwork_set_cost")
+                ? r.nonNegative("formwork_set_cost", "the cost of the forms for one section size") : 0;
+        return new Rationalise(sizes, bars, same, formwork);
+    }
+}
