@@ -31,8 +31,7 @@ public final class ScheduleText {
             BeamProblem p = b.outcome().problem();
             String group = b.beam().group() == null ? "" : b.beam().group();
             if (!b.feasible()) {
-                var d = b.outcome().diagnosis();
-                t.row(b.beam().id(), group, "NO DESIGN", d.limit() + ": " + d.summary(), "", "", "", "", "");
+                t.row(b.beam().id(), group, "NO DESIGN", "(see below)", "", "", "", "", "");
                 continue;
             }
             BeamDesigner.Design d = b.outcome().best();
@@ -83,7 +82,17 @@ public final class ScheduleText {
         long failed = r.beams().stream().filter(b -> !b.feasible()).count();
         if (failed > 0) {
             out.append('\n').append(failed).append(failed == 1 ? " beam has" : " beams have")
-                    .append(" no passing design; see its diagnosis above.\n");
+                    .append(" no passing design:\n");
+            for (ScheduleResult.Beam b : r.beams()) {
+                if (!b.feasible()) {
+                    var d = b.outcome().diagnosis();
+                    out.append("  ").append(b.beam().id()).append(": ").append(d.limit()).append(" — ").append(d.summary());
+                    if (!d.fixes().isEmpty()) {
+                        out.append("; ").append(String.join("; ", d.fixes()));
+                    }
+                    out.append('\n');
+                }
+            }
         }
         return out.toString();
     }
@@ -114,7 +123,8 @@ public final class ScheduleText {
         }
         return p.status() + " — objective " + Money.amount(p.objective()) + ", bound " + Money.amount(p.bound())
                 + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + p.method() + "; bar-size sets: "
-                + p.barSetsTotal() + " (" + p.barSetsSolved() + " solved, " + p.barSetsPruned() + " pruned by bound); "
+                + p.barSetsTotal() + " (" + p.barSetsSolved() + " solved to optimality, " + p.barSetsPruned()
+                + " ruled out by a bound); "
                 + p.pairsEvaluated() + " (beam, size) pairs priced exactly; " + p.workers()
                 + (p.workers() == 1 ? " CP-SAT worker" : " CP-SAT workers") + ", seed " + p.seed();
     }

@@ -569,7 +569,9 @@ public final class ScheduleSolver {
                     continue;
                 }
                 KMedian.Result r = solveSet(sets.get(idx), k, incumbent, hint);
-                solved++;
+                if (r.feasible()) {
+                    solved++;
+                }
                 if (!r.feasible()) {
                     if (r.status().equals("PRUNED")) {
                         pruned++;
@@ -669,7 +671,9 @@ public final class ScheduleSolver {
                             + priced + " but designs at " + (o.feasible() ? o.best().cost().total() : "nothing")
                             + "; this is a bug in the schedule search");
                 }
-                return o;
+                // reported against the beam as given (its own width and depth limits), designed in its size
+                return new BeamDesigner.Outcome(p, o.status(), o.best(), o.alternatives(), o.proof(), o.binding(),
+                        o.diagnosis());
             });
             List<ScheduleResult.Beam> out = new ArrayList<>();
             for (int i = 0; i < beams.size(); i++) {

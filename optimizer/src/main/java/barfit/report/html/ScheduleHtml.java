@@ -223,8 +223,8 @@ public final class ScheduleHtml {
                     .append(u.number(p.span(), Dim.SPAN)).append("</td>");
             if (!b.feasible()) {
                 BeamDesigner.Diagnosis d = b.outcome().diagnosis();
-                out.append("<td colspan=\"").append(own ? 9 : 8).append("\">no passing layout in the search space — ")
-                        .append(Svg.esc(diagnosis(d))).append("</td></tr>\n");
+                out.append("<td colspan=\"").append(own ? 9 : 8).append("\">").append(Svg.esc(headline(d)))
+                        .append(" — ").append(Svg.esc(diagnosis(d))).append("</td></tr>\n");
                 continue;
             }
             BeamDesigner.Design d = b.outcome().best();
@@ -284,6 +284,12 @@ public final class ScheduleHtml {
     private static String topAtSupport(List<Integer> counts, BeamLayout l, double ext, UnitSystem u) {
         int extra = BeamLayout.sum(counts) - l.topContinuous();
         return perLayer(counts, l.top()) + (extra > 0 ? "; " + extra + " extra, " + span(ext, u) + " past the face" : "");
+    }
+
+    /** What failed: the beam on its own, or its group's need to share one section size. */
+    private static String headline(BeamDesigner.Diagnosis d) {
+        return d.limit().equals("group") ? "No section size fits every beam of its group"
+                : "No layout in the search space passes";
     }
 
     private static String diagnosis(BeamDesigner.Diagnosis d) {
@@ -408,7 +414,8 @@ public final class ScheduleHtml {
         out.append("</table>\n");
         if (!o.feasible()) {
             BeamDesigner.Diagnosis d = o.diagnosis();
-            out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>No layout in the search space passes.</strong></p>\n")
+            out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>").append(Svg.esc(headline(d)))
+                    .append(".</strong></p>\n")
                     .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(d.summary()))
                     .append("</p>\n<p>").append(Svg.esc(d.fixes().isEmpty()
                             ? "No single relaxed limit (depth, width) gives a passing layout."

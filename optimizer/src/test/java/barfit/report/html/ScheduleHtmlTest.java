@@ -245,7 +245,7 @@ class ScheduleHtmlTest {
         assertTrue(noLayout.contains(Svg.esc(none.diagnosis().summary())), "the diagnosis is shown");
         assertFalse(noLayout.contains("section-drawing"), "no drawing without a design");
         String row = element(page, "<tr class=\"infeasible\">", "</tr>");
-        assertTrue(row.contains("no passing layout"));
+        assertTrue(row.contains("No layout in the search space passes"), row);
         assertTrue(page.contains("1 beam has no passing layout"));
     }
 
