@@ -73,8 +73,9 @@ final class BenchCommand implements Callable<Integer> {
             var f = barfit.bench.ScheduleBench.run(scheduleBeams, rationalisedBeams, k, m, seed, t, out);
             out.printf(Locale.ROOT, "{\"schedule_beams\": %d, \"schedule_seconds\": %.3f, \"rationalised_beams\": %d, "
                     + "\"k\": %d, \"m\": %d, \"rationalised_seconds\": %.3f, \"status\": \"%s\", \"gap\": %.6f, "
-                    + "\"peak_heap_mb\": %.0f, \"threads\": %d}%n", f.beams(), f.seconds(), f.rationalisedBeams(), f.k(),
-                    f.m(), f.rationalisedSeconds(), f.status(), f.gap(), f.peakHeapMb(), f.threads());
+                    + "\"peak_heap_mb\": %.0f, \"peak_live_heap_mb\": %.0f, \"threads\": %d}%n", f.beams(), f.seconds(),
+                    f.rationalisedBeams(), f.k(), f.m(), f.rationalisedSeconds(), f.status(), f.gap(), f.peakHeapMb(),
+                    f.peakLiveMb(), f.threads());
             out.flush();
             return Main.OK;
         }

@@ -15,6 +15,7 @@ final class ProgressBar implements Progress {
     private final long start = System.nanoTime();
     private long lastDraw;
     private boolean drawn;
+    private int width;
 
     ProgressBar(PrintWriter err, boolean enabled) {
         this.err = err;
@@ -42,15 +43,17 @@ final class ProgressBar implements Progress {
         lastDraw = now;
         int filled = total <= 0 ? WIDTH : (int) Math.round(WIDTH * (double) done / total);
         String bar = "#".repeat(filled) + ".".repeat(WIDTH - filled);
-        err.print(String.format(Locale.ROOT, "\r[%s] %3d%% %s %d/%d   ", bar, total <= 0 ? 100 : 100 * done / total,
-                phase, done, total));
+        String line = String.format(Locale.ROOT, "[%s] %3d%% %s %d/%d", bar, total <= 0 ? 100 : 100 * done / total,
+                phase, done, total);
+        err.print("\r" + line + " ".repeat(Math.max(0, width - line.length())));
+        width = Math.max(width, line.length());
         err.flush();
         drawn = true;
     }
 
     synchronized void finish() {
         if (drawn) {
-            err.print("\r" + " ".repeat(WIDTH + 70) + "\r");
+            err.print("\r" + " ".repeat(width) + "\r");
             err.flush();
         }
     }

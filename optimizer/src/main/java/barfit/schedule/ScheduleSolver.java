@@ -67,13 +67,18 @@ public final class ScheduleSolver {
 
     /** Runs {@code task} for 0..n-1 on the solver's threads; results in index order whatever the timing. */
     <T> List<T> parallel(int n, String phase, IntFunction<T> task) {
+        return parallel(n, phase, task, progress);
+    }
+
+    /** As {@link #parallel(int, String, IntFunction)}, reporting to {@code report} (quiet for small inner batches). */
+    <T> List<T> parallel(int n, String phase, IntFunction<T> task, Progress report) {
         AtomicInteger done = new AtomicInteger();
-        progress.update(phase, 0, n);
+        report.update(phase, 0, n);
         if (threads == 1 || n < 2) {
             List<T> out = new ArrayList<>();
             for (int i = 0; i < n; i++) {
                 out.add(task.apply(i));
-                progress.update(phase, done.incrementAndGet(), n);
+                report.update(phase, done.incrementAndGet(), n);
             }
             return out;
         }
@@ -88,7 +93,7 @@ public final class ScheduleSolver {
                 final int k = i;
                 futures.add(pool.submit(() -> {
                     T v = task.apply(k);
-                    progress.update(phase, done.incrementAndGet(), n);
+                    report.update(phase, done.incrementAndGet(), n);
                     return v;
                 }));
             }
@@ -242,7 +247,7 @@ public final class ScheduleSolver {
                     t[s] = generators.get(i).pairTable(sizes.get(s)[0], sizes.get(s)[1]);
                 }
                 return t;
-            });
+            }, Progress.NONE);
             for (int j = 0; j < beams.size(); j++) {
                 BeamGenerator.PairTable[] t = got.get(j);
                 for (int s = 0; s < t.length; s++) {
@@ -558,7 +563,11 @@ public final class ScheduleSolver {
             long bound = KMedian.NONE;
             int solved = 0;
             int pruned = 0;
+            int considered = 0;
             for (int idx : order) {
+                progress.update(k >= sizes.size() ? "rationalising: bar-size sets, any number of sizes"
+                        : "rationalising: bar-size sets for " + k + (k == 1 ? " size" : " sizes"), considered++,
+                        sets.size());
                 long qb = quickBound(matrix(sets.get(idx)), fixed); // bounds only rise as pricing goes on
                 if (qb == KMedian.NONE) {
                     continue;
