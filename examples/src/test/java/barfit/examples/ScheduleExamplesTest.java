@@ -40,7 +40,7 @@ import org.junit.jupiter.api.io.TempDir;
  * <li>{@code --out} into a directory that already holds schedule.csv is bad input (exit 2, one line,
  * nothing written) unless {@code --force} is given.</li>
  * </ul>
- * The library is solved three times (about 12 s each on two cores), the office a few times.
+ * The library is solved three times and the office twice, in one JVM: about 15 s on two cores.
  */
 class ScheduleExamplesTest {
     static final Path LIBRARY = Path.of("schedule/library-si.yaml");
