@@ -61,9 +61,11 @@ public final class ScheduleGenerator {
         List<Line> typical = new ArrayList<>();
         for (int i = 0; i < 8; i++) {
             int spans = r.nextInt(7) == 0 ? 1 : 2 + r.nextInt(4);
+            // 6.5.1: adjacent spans within 20 % of each other, so the approximate coefficients apply
             double[] ln = new double[spans];
+            double base = 5.4 + 0.6 * r.nextInt(6);
             for (int s = 0; s < spans; s++) {
-                ln[s] = 4.8 + 0.6 * r.nextInt(8);
+                ln[s] = base * (0.9 + 0.05 * r.nextInt(5));
             }
             boolean interior = r.nextInt(3) != 0;
             double tributary = interior ? 3.0 + r.nextInt(7) * 0.5 : 1.5 + r.nextInt(4) * 0.5;

@@ -142,8 +142,7 @@ final class ScheduleCommand implements Callable<Integer> {
         files.put("schedule.csv", ScheduleCsv.render(r));
         files.put("schedule.json", ScheduleJson.render(r));
         files.put("report.html", barfit.report.html.ScheduleHtml.render(r));
-        files.put("standardisation.svg", barfit.report.html.StandardisationPlot.svg(r.standardisation(),
-                r.input().settings().units(), r.input().currency()));
+        files.put("standardisation.svg", barfit.report.html.StandardisationPlot.svg(r));
         List<Path> temps = new ArrayList<>();
         try {
             Files.createDirectories(out);

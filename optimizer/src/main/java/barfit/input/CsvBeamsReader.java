@@ -29,13 +29,17 @@ import java.util.Map;
  * <pre>
  * id,span,ends,m_left,m_mid,m_right,v_left,v_right,max_depth,group,flange_width,flange_thickness,dead,live
  * </pre>
- * {@code vu} may stand for both end shears. Optional: {@code width} (fixes b), {@code sustained_live}.
+ * {@code vu} may stand for both end shears. Optional: {@code width} (fixes b), {@code flange_type} (T or L),
+ * {@code sustained_live}.
  */
 public final class CsvBeamsReader {
     static final List<String> REQUIRED = List.of("id", "span", "ends");
     static final List<String> KNOWN = List.of("id", "span", "ends", "m_left", "m_mid", "m_right", "vu", "v_left",
-            "v_right", "max_depth", "group", "flange_width", "flange_thickness", "dead", "live", "sustained_live",
-            "width");
+            "v_right", "max_depth", "group", "flange_width", "flange_thickness", "flange_type", "dead", "live",
+            "sustained_live", "width");
+
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
 
     private final Path file;
     private final Settings settings;
@@ -67,7 +71,7 @@ public final class CsvBeamsReader {
             byte[] bytes = Files.readAllBytes(file);
             text = StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(bytes)).toString();
         } catch (CharacterCodingException e) {
-            throw new InputError(Location.ofFile(file.toString()), "not valid UTF-8 text; expected a CSV file");
+            throw badEncoding();
         } catch (IOException e) {
             throw new InputError(Location.ofFile(file.toString()), "cannot read the file ("
                     + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()) + ")");
@@ -126,7 +130,7 @@ public final class CsvBeamsReader {
             rows.add(new Row(no, byName));
         }
         if (header == null) {
-            throw new InputError(Location.ofFile(file.toString()), "empty; expected a header row and one row per beam");
+            throw new InputError(new Location(file.toString(), 1, 1), "empty; expected a header row and one row per beam");
         }
         if (rows.isEmpty()) {
             throw new InputError(new Location(file.toString(), headerLine, 1), "no beams after the header; expected one "
@@ -144,6 +148,38 @@ public final class CsvBeamsReader {
             out.add(b);
         }
         return out;
+    }
+
+    /** Where the first byte that is not UTF-8 sits (line, column in characters), for the message. */
+    private InputError badEncoding() {
+        try {
+            byte[] bytes = Files.readAllBytes(file);
+            var decoder = StandardCharsets.UTF_8.newDecoder();
+            int line = 1;
+            int lineStart = 0;
+            for (int i = 0; i < bytes.length; i++) {
+                int len = 1;
+                int b = bytes[i] & 0xff;
+                if (b >= 0xc0) {
+                    len = b >= 0xf0 ? 4 : b >= 0xe0 ? 3 : 2;
+                }
+                try {
+                    decoder.reset().decode(java.nio.ByteBuffer.wrap(bytes, i, Math.min(len, bytes.length - i)));
+                } catch (CharacterCodingException bad) {
+                    int column = new String(bytes, lineStart, i - lineStart, StandardCharsets.UTF_8).length() + 1;
+                    return new InputError(new Location(file.toString(), line, column), "not valid UTF-8 text; "
+                            + "expected a CSV file saved as UTF-8");
+                }
+                if (b == '\n') {
+                    line++;
+                    lineStart = i + 1;
+                }
+                i += len - 1;
+            }
+        } catch (IOException e) {
+            // fall through to the message without a place
+        }
+        return new InputError(Location.ofFile(file.toString()), "not valid UTF-8 text; expected a CSV file saved as UTF-8");
     }
 
     /** Splits a line at commas outside double quotes ("" inside quotes is one quote). */
@@ -215,15 +251,15 @@ public final class CsvBeamsReader {
         if (empty(c)) {
             return null;
         }
-        try {
-            double v = Double.parseDouble(c.text());
-            if (!Double.isFinite(v)) {
-                throw new NumberFormatException();
-            }
-            return v;
-        } catch (NumberFormatException e) {
+        // plain decimal numbers only: Java's own syntax would let "6.0f" or "0x1p3" through
+        if (!DECIMAL.matcher(c.text()).matches()) {
             throw error(c, column + ": expected a number (" + what + "), got \"" + c.text() + "\"");
         }
+        double v = Double.parseDouble(c.text());
+        if (!Double.isFinite(v)) {
+            throw error(c, column + ": expected a number (" + what + "), got \"" + c.text() + "\"");
+        }
+        return v;
     }
 
     private Double positive(Row r, String column, String what, Dim dim) {
@@ -346,7 +382,19 @@ public final class CsvBeamsReader {
                         + " " + u.unit(Dim.LENGTH) + ") is narrower than the web (" + u.compact(web, Dim.LENGTH) + " "
                         + u.unit(Dim.LENGTH) + "); expected flange width >= web width");
             }
-            flange = new Flange(bf, hf, false);
+            Cell type = r.cells().get("flange_type");
+            boolean oneSided = false;
+            if (!empty(type)) {
+                if (type.text().equals("L")) {
+                    oneSided = true;
+                } else if (!type.text().equals("T")) {
+                    throw error(type, "flange_type: expected T (slab on both sides) or L (one side), got \""
+                            + type.text() + "\"");
+                }
+            }
+            flange = new Flange(bf, hf, oneSided);
+        } else if (!empty(r.cells().get("flange_type"))) {
+            throw error(r.cells().get("flange_type"), "flange_type: given without flange_width and flange_thickness");
         }
         String load = "service load, " + u.unit(Dim.LINE_LOAD);
         Double dead = positive(r, "dead", "the service dead load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD);

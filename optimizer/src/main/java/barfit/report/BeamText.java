@@ -66,7 +66,8 @@ public final class BeamText {
         t.row("bottom", counts(l.bottomCounts(), l.bottom().label()) + ", full span"
                 + (p.bottomAnchored() ? ", anchored at the supports (compression steel there)" : ""));
         if (p.cantilever()) {
-            t.row("top", counts(l.topLeft(), l.top().label()) + ", full length");
+            t.row("top", counts(l.topLeft(), l.top().label()) + ", full length and " + span(l.extLeft() - p.span(), u)
+                    + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
             t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span (compression steel at mid-span)");
             if (p.leftSupport()) {

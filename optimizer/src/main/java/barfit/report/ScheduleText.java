@@ -23,6 +23,10 @@ public final class ScheduleText {
         var rat = r.input().rationalise();
         out.append(rat == null ? "each beam at its own optimum (no rationalise: block)\n" : "rationalised: "
                 + limits(rat) + "\n");
+        boolean grouped = r.beams().stream().anyMatch(b -> b.beam().group() != null);
+        if (grouped && (rat == null || !rat.groupsSameSection())) {
+            out.append("note: the beams' groups are not used; rationalise: {groups: same_section} makes a group share b × h\n");
+        }
         out.append('\n');
         TextTable t = new TextTable(false, false, false, false, false, false, false, false, true);
         t.row("beam", "group", "b × h (" + u.unit(Dim.LENGTH) + ")", "bottom", "top continuous", "top left",
@@ -58,9 +62,11 @@ public final class ScheduleText {
         out.append(" = ").append(Money.amount(r.totalCost())).append(cur);
         if (r.proof() != null) {
             double extra = r.totalCost() - r.unconstrainedCost();
-            out.append(";  every beam at its own optimum: ").append(Money.amount(r.unconstrainedCost())).append(cur)
-                    .append(String.format(Locale.ROOT, " (rationalising adds %s, %.1f %%)", Money.amount(extra),
-                            r.unconstrainedCost() > 0 ? 100 * extra / r.unconstrainedCost() : 0));
+            out.append(";  every beam at its own optimum").append(r.input().rationalise().formworkSetCost() > 0
+                    ? " (with a set of forms per size)" : "").append(": ").append(Money.amount(r.unconstrainedCost()))
+                    .append(cur).append(String.format(Locale.ROOT, " (rationalising %s %s, %.1f %%)", extra >= 0 ? "adds"
+                    : "saves", Money.amount(Math.abs(extra)), r.unconstrainedCost() > 0 ? 100 * Math.abs(extra)
+                    / r.unconstrainedCost() : 0));
         }
         out.append('\n');
         if (r.proof() != null) {
@@ -69,7 +75,7 @@ public final class ScheduleText {
         if (!r.standardisation().isEmpty()) {
             out.append("\nprice of standardisation (least total cost for at most K section sizes):\n");
             TextTable s = new TextTable(true, true, true, false, false);
-            s.row("K", "total" + cur, "saving of the K-th size", "bar sizes", "status");
+            s.row("K", "total" + cur, "saving of the K-th size", "bar sizes allowed", "status");
             double prev = Double.NaN;
             for (ScheduleResult.StandardisationPoint p : r.standardisation()) {
                 s.row(String.valueOf(p.sizes()), Double.isNaN(p.cost()) ? "none fits" : Money.amount(p.cost()),

@@ -62,7 +62,7 @@ public final class ScheduleSolver {
             }
             return finish(in, out, 0, unconstrained, null, List.of(), t0);
         }
-        return new Rationalisation(in, own, designer, unconstrained, t0).run();
+        return new Rationalisation(in, own, designer, t0).run();
     }
 
     /** Runs {@code task} for 0..n-1 on the solver's threads; results in index order whatever the timing. */
@@ -148,7 +148,6 @@ public final class ScheduleSolver {
         private final ScheduleInput in;
         private final List<BeamDesigner.Outcome> own;
         private final BeamDesigner designer;
-        private final double unconstrained;
         private final long t0;
         private final Rationalise rat;
         private final List<BarSize> barSizes;
@@ -165,12 +164,10 @@ public final class ScheduleSolver {
         private int[] groupOf;
         private int priced;
 
-        Rationalisation(ScheduleInput in, List<BeamDesigner.Outcome> own, BeamDesigner designer, double unconstrained,
-                long t0) {
+        Rationalisation(ScheduleInput in, List<BeamDesigner.Outcome> own, BeamDesigner designer, long t0) {
             this.in = in;
             this.own = own;
             this.designer = designer;
-            this.unconstrained = unconstrained;
             this.t0 = t0;
             this.rat = in.rationalise();
             this.barSizes = in.space().barSizes();
@@ -547,6 +544,9 @@ public final class ScheduleSolver {
 
         private Solved solveAll(int k, int[] hint) {
             List<boolean[]> sets = barSets();
+            if (groups.isEmpty()) {
+                return new Solved(k, null, null, KMedian.NONE, sets.size(), 0, 0);
+            }
             long fixed = CostModel.units(rat.formworkSetCost());
             List<Long> quick = new ArrayList<>();
             for (boolean[] set : sets) {
@@ -696,7 +696,8 @@ public final class ScheduleSolver {
             if (best.result() == null) {
                 int fewest = curve.stream().filter(pt -> !Double.isNaN(pt.cost())).mapToInt(
                         ScheduleResult.StandardisationPoint::sizes).min().orElse(-1);
-                String why = (rat.maxSectionSizes() == null ? "the bar sizes allowed" : "at most "
+                String why = groups.isEmpty() ? "no beam is left to rationalise: each failed on its own or in its group"
+                        : (rat.maxSectionSizes() == null ? "the bar sizes allowed" : "at most "
                         + rat.maxSectionSizes() + " section sizes" + (rat.maxBarSizes() == null ? "" : " with "
                         + rat.maxBarSizes() + " bar sizes")) + " cannot hold every beam"
                         + (fewest > 0 ? "; at least " + fewest + " section sizes are needed" : "");
@@ -712,7 +713,18 @@ public final class ScheduleSolver {
                         best.bound() / CostModel.UNITS_PER_CURRENCY, best.setsTotal(), best.setsSolved(),
                         best.setsPruned(), priced, options.workers(), options.seed(), millis);
             }
-            return finish(in, out, formwork, unconstrained, proof, curve, t0);
+            // every beam at its own optimum, for comparison: the beams designed here, each in its own best
+            // size, with a set of forms for each distinct size
+            double ownTotal = 0;
+            java.util.Set<List<Double>> ownSizes = new java.util.HashSet<>();
+            for (int i = 0; i < beams.size(); i++) {
+                if (out.get(i).feasible() && own.get(i).feasible()) {
+                    var l = own.get(i).best().layout();
+                    ownTotal += own.get(i).best().cost().total();
+                    ownSizes.add(List.of(l.width(), l.height()));
+                }
+            }
+            return finish(in, out, formwork, ownTotal + ownSizes.size() * rat.formworkSetCost(), proof, curve, t0);
         }
     }
 }

@@ -132,7 +132,7 @@ public record BeamLayout(
         out.add(new BarMark("B1", "bottom, full span", bottom, bottomCount(), l));
         int k = 1;
         if (p.cantilever()) {
-            out.add(new BarMark("T1", "top, full length", top, sum(topLeft), l));
+            out.add(new BarMark("T1", "top, full length and ld past the support", top, sum(topLeft), extLeft));
         } else {
             out.add(new BarMark("T" + k++, "top continuous, full span", top, topContinuous, l));
             if (p.leftSupport() && sum(topLeft) > topContinuous) {

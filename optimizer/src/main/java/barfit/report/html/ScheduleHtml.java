@@ -234,7 +234,7 @@ public final class ScheduleHtml {
                     .append("</td>");
             out.append("<td>").append(Svg.esc(perLayer(l.bottomCounts(), l.bottom()))).append("</td>");
             if (p.cantilever()) {
-                out.append("<td>—</td><td>").append(Svg.esc(perLayer(l.topLeft(), l.top()))).append(", full length</td><td>—</td>");
+                out.append("<td>—</td><td>").append(Svg.esc(perLayer(l.topLeft(), l.top()))).append(", full length + ld</td><td>—</td>");
             } else {
                 out.append("<td>").append(l.topContinuous()).append(' ').append(Svg.esc(l.top().label())).append("</td>");
                 out.append("<td>").append(p.leftSupport() ? Svg.esc(topAtSupport(l.topLeft(), l, l.extLeft(), u)) : "—")
@@ -247,7 +247,7 @@ public final class ScheduleHtml {
             for (int z = 0; z < zones.size(); z++) {
                 var st = l.zoneStirrups().get(z);
                 out.append(z == 0 ? "" : "<br>").append(Svg.esc(zones.get(z).name())).append(": ")
-                        .append(Svg.esc(st.bar().label())).append(" × ").append(st.legs()).append(" @ ")
+                        .append(Svg.esc(st.bar().label())).append(", ").append(st.legs()).append(" legs @ ")
                         .append(u.compact(st.spacing(), Dim.LENGTH));
             }
             out.append("</td><td class=\"lines\">");
@@ -268,7 +268,7 @@ public final class ScheduleHtml {
         }
         out.append("</tbody>\n</table>\n</div>\n<p class=\"note\">Bars per layer from the face inward (\"3+2\": three in "
                 + "the outer layer, two in the next). At a support the count includes the continuous top bars; the "
-                + "extras run the length given past the face. Stirrups: size × legs @ spacing in ").append(u.unit(Dim.LENGTH))
+                + "extras run the length given past the face. Stirrups: size, legs @ spacing in ").append(u.unit(Dim.LENGTH))
                 .append(".</p>\n</section>\n");
     }
 
@@ -325,7 +325,7 @@ public final class ScheduleHtml {
                     .append("</td></tr>\n");
         }
         out.append("</tbody>\n</table>\n</div>\n<p>Bar sizes used: ").append(Svg.esc(r.barSizes().isEmpty() ? "none"
-                : String.join(", ", r.barSizes()))).append(".</p>\n</section>\n");
+                : labels(r, r.barSizes()))).append(".</p>\n</section>\n");
     }
 
     // ---------------------------------------------------------------- costs
@@ -338,7 +338,9 @@ public final class ScheduleHtml {
                 + (r.sizes().size() == 1 ? "size" : "sizes") + ")";
         kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), cur));
         kvStrong(out, "total", money(r.totalCost(), cur));
-        kv(out, "every beam at its own optimum", money(r.unconstrainedCost(), cur));
+        boolean sets2 = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
+        kv(out, "every beam at its own optimum" + (sets2 ? " (a set of forms per size)" : ""),
+                money(r.unconstrainedCost(), cur));
         double diff = r.totalCost() - r.unconstrainedCost();
         String pct = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * diff / r.unconstrainedCost())
                 : "";
@@ -361,14 +363,14 @@ public final class ScheduleHtml {
         pts.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
         out.append("<section id=\"standardisation\">\n<h2>Price of standardisation</h2>\n<table class=\"grid\">\n<thead><tr>")
                 .append("<th>most section sizes K</th><th>total cost").append(cur.isEmpty() ? "" : " (" + Svg.esc(cur) + ")")
-                .append("</th><th>saving of one more size</th><th>status</th><th>bar sizes</th></tr></thead>\n<tbody>\n");
+                .append("</th><th>saving of one more size</th><th>status</th><th>bar sizes allowed</th></tr></thead>\n<tbody>\n");
         double prev = Double.NaN;
         for (ScheduleResult.StandardisationPoint p : pts) {
             String saving = Double.isFinite(prev) && Double.isFinite(p.cost()) ? Money.amount(prev - p.cost()) : "—";
             out.append("<tr><td class=\"num\">").append(p.sizes()).append("</td><td class=\"num\">")
                     .append(Double.isFinite(p.cost()) ? Money.amount(p.cost()) : "none feasible").append("</td><td class=\"num\">")
                     .append(saving).append("</td><td>").append(Svg.esc(p.status())).append("</td><td>")
-                    .append(Svg.esc(String.join(", ", p.barSizes()))).append("</td></tr>\n");
+                    .append(Svg.esc(labels(r, p.barSizes()))).append("</td></tr>\n");
             prev = p.cost();
         }
         out.append("</tbody>\n</table>\n<figure class=\"plot\">\n").append(StandardisationPlot.svg(pts, u, cur))
@@ -429,7 +431,8 @@ public final class ScheduleHtml {
         kv(out, "section", Words.shape(l.shape(), u));
         kv(out, "bottom", perLayer(l.bottomCounts(), l.bottom()) + ", full span");
         if (p.cantilever()) {
-            kv(out, "top", perLayer(l.topLeft(), l.top()) + ", full length");
+            kv(out, "top", perLayer(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
+                    + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
             kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span");
             String rule = " (" + Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top()).rule() + ")";
@@ -650,6 +653,16 @@ public final class ScheduleHtml {
             }
         }
         return lengths(mm, u);
+    }
+
+    /** Bar designations as the catalog labels them ("No. 25"). */
+    private static String labels(ScheduleResult r, List<String> designations) {
+        List<String> parts = new ArrayList<>();
+        for (String d : designations) {
+            parts.add(r.input().space().barSizes().stream().filter(b -> b.designation().equals(d))
+                    .map(BarSize::label).findFirst().orElse(d));
+        }
+        return String.join(", ", parts);
     }
 
     private static String labels(List<BarSize> bars) {

@@ -35,11 +35,28 @@ public final class StandardisationPlot {
     static final double WIDTH = 720;
     static final double HEIGHT = 400;
     private static final Color LINE = new Color(0x1f, 0x4e, 0x79);
+    private static final Color MARK = new Color(0xb0, 0x3a, 0x2e);
 
     private StandardisationPlot() {
     }
 
     public static String svg(List<ScheduleResult.StandardisationPoint> points, UnitSystem u, String currency) {
+        return svg(points, u, currency, -1, null);
+    }
+
+    /** The schedule's plot: its chosen number of sizes marked, and what the curve leaves out said in a subtitle. */
+    public static String svg(ScheduleResult r) {
+        var rat = r.input().rationalise();
+        return svg(r.standardisation(), r.input().settings().units(), r.input().currency(), r.sizes().size(),
+                rat == null ? null : rat.maxSectionSizes());
+    }
+
+    /**
+     * {@code chosen}: the number of sizes of the schedule (marked; -1 for none); {@code limit}: the user's
+     * max_section_sizes, so a curve that stops short of it can say why.
+     */
+    public static String svg(List<ScheduleResult.StandardisationPoint> points, UnitSystem u, String currency, int chosen,
+            Integer limit) {
         System.setProperty("java.awt.headless", "true");
         XYSeries cost = new XYSeries("least total cost");
         int kMin = Integer.MAX_VALUE;
@@ -57,6 +74,13 @@ public final class StandardisationPlot {
         }
         XYSeriesCollection data = new XYSeriesCollection();
         data.addSeries(cost);
+        XYSeries mark = new XYSeries("the schedule");
+        for (ScheduleResult.StandardisationPoint p : points) {
+            if (p.sizes() == chosen && Double.isFinite(p.cost())) {
+                mark.add(p.sizes(), round(p.cost()));
+            }
+        }
+        data.addSeries(mark);
         NumberAxis x = new NumberAxis("most section sizes allowed (K)");
         x.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
         x.setRange(kMin - 0.5, kMax + 0.5);
@@ -70,7 +94,11 @@ public final class StandardisationPlot {
         renderer.setSeriesPaint(0, LINE);
         renderer.setSeriesStroke(0, new BasicStroke(2.2f));
         renderer.setSeriesShape(0, new Ellipse2D.Double(-4, -4, 8, 8));
+        renderer.setSeriesPaint(1, MARK);
+        renderer.setSeriesLinesVisible(1, false);
+        renderer.setSeriesShape(1, new Ellipse2D.Double(-7, -7, 14, 14));
         XYPlot plot = new XYPlot(data, x, y, renderer);
+        plot.setSeriesRenderingOrder(org.jfree.chart.plot.SeriesRenderingOrder.FORWARD); // the mark on top
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
         plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
@@ -89,6 +117,22 @@ public final class StandardisationPlot {
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), plot, false);
         chart.setTitle(new TextTitle("Price of standardisation: least total cost against the number of section sizes",
                 new Font(Font.SANS_SERIF, Font.BOLD, 14)));
+        List<String> notes = new java.util.ArrayList<>();
+        int lastInfeasible = points.stream().filter(p -> !Double.isFinite(p.cost()))
+                .mapToInt(ScheduleResult.StandardisationPoint::sizes).max().orElse(0);
+        if (lastInfeasible > 0) {
+            notes.add(lastInfeasible == 1 ? "no schedule fits in one section size"
+                    : "no schedule fits in " + lastInfeasible + " or fewer section sizes");
+        }
+        if (chosen > 0) {
+            notes.add("red: the schedule (" + chosen + (chosen == 1 ? " size)" : " sizes)"));
+        }
+        if (limit != null && kMax < limit && !points.isEmpty()) {
+            notes.add("with no limit the cheapest schedule uses " + kMax + " sizes: another would not pay for its forms");
+        }
+        for (String note : notes) {
+            chart.addSubtitle(new TextTitle(note, new Font(Font.SANS_SERIF, Font.PLAIN, 11)));
+        }
         chart.setBackgroundPaint(Color.WHITE);
         chart.setAntiAlias(true);
         SVGGraphics2D g = new SVGGraphics2D(WIDTH, HEIGHT);
