@@ -58,7 +58,7 @@ final class ScheduleCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "what to print: text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
-    @Option(names = "--threads", paramLabel = "N", description = "beams designed in parallel (default: the cores, %d)")
+    @Option(names = "--threads", paramLabel = "N", description = "beams designed in parallel (default: the number of cores)")
     Integer threads;
 
     @Option(names = "--time-limit", paramLabel = "SECONDS", defaultValue = "60",

@@ -110,13 +110,18 @@ final class KMedian {
      * linear relaxation's value, cheaply.
      */
     Lagrangian lagrangian(long ub) {
+        return lagrangian(ub, null);
+    }
+
+    /** As {@link #lagrangian(long)}, the search starting from {@code start} (prices from before) when given. */
+    Lagrangian lagrangian(long ub, double[] start) {
         double[] v = new double[n];
         for (int g = 0; g < n; g++) {
             long min = NONE;
             for (long c : cost[g]) {
                 min = Math.min(min, c);
             }
-            v[g] = min;
+            v[g] = start != null && start.length == n ? Math.max(start[g], min) : min;
         }
         double best = Double.NEGATIVE_INFINITY;
         double[] bestV = v.clone();
@@ -185,19 +190,62 @@ final class KMedian {
     }
 
     /**
-     * The (group, size) pairs any solution cheaper than {@code ub} could use: a solution's cost is at
-     * least the Lagrangian bound plus max(0, c - v) of each pair it uses, so a pair whose c - v reaches
-     * the gap is never in one.
+     * The (group, size) pairs any solution cheaper than {@code ub} could use. Forcing a pair into the
+     * relaxed problem raises its value by at least max(0, c - v) and, for a size the relaxed solution
+     * leaves shut, by what opening that size costs there; a pair whose forced value reaches {@code ub} is
+     * in no cheaper solution.
      */
     boolean[][] relevant(Lagrangian lag, long ub) {
         double gap = ub - lag.bound() + 1e-6 * Math.max(1, Math.abs(ub));
+        double[] v = lag.v();
+        // what opening a size the relaxed solution leaves shut costs at least: its own gain rho, less the
+        // gain of the size it would displace when k are open already
+        double[] rho = new double[m];
+        java.util.Arrays.fill(rho, fixed);
+        for (int g = 0; g < n; g++) {
+            for (int s = 0; s < m; s++) {
+                if (cost[g][s] != NONE && cost[g][s] < v[g]) {
+                    rho[s] += cost[g][s] - v[g];
+                }
+            }
+        }
+        Integer[] order = new Integer[m];
+        for (int s = 0; s < m; s++) {
+            order[s] = s;
+        }
+        java.util.Arrays.sort(order, (a, b) -> Double.compare(rho[a], rho[b]));
+        boolean[] chosen = new boolean[m];
+        int count = 0;
+        double worstChosen = 0;
+        for (int x = 0; x < k && x < m && rho[order[x]] < 0; x++) {
+            chosen[order[x]] = true;
+            worstChosen = rho[order[x]];
+            count++;
+        }
+        double[] open = new double[m];
+        for (int s = 0; s < m; s++) {
+            open[s] = chosen[s] ? 0 : count == k ? rho[s] - worstChosen : Math.max(0, rho[s]);
+        }
         boolean[][] out = new boolean[n][m];
         for (int g = 0; g < n; g++) {
             for (int s = 0; s < m; s++) {
-                out[g][s] = cost[g][s] != NONE && cost[g][s] - lag.v()[g] < gap;
+                out[g][s] = cost[g][s] != NONE && Math.max(0, cost[g][s] - v[g]) + open[s] < gap;
             }
         }
         return out;
+    }
+
+    /**
+     * The prices the linear relaxation over the pairs in {@code keep} puts on "each group in one size"
+     * (its duals), improved by the subgradient search: they are the best prices, so the bound nears the
+     * relaxation's value, which the subgradient alone approaches slowly.
+     */
+    Lagrangian fromRelaxation(long ub, boolean[][] keep) {
+        Relaxation lp = relax(ub, keep);
+        if (lp.duals() == null) {
+            return lagrangian(ub);
+        }
+        return lagrangian(ub, lp.duals());
     }
 
     /**
@@ -467,7 +515,7 @@ final class KMedian {
 
     /** The relaxation: its bound (units, rounded down), an integral solution if it found one, reduced costs. */
     private record Relaxation(long bound, int[] integral, double[][] xReduced, double[] yReduced, double value,
-            int variables) {
+            int variables, double[] duals) {
     }
 
     /**
@@ -501,8 +549,10 @@ final class KMedian {
                 sizes.setCoefficient(y[s], 1);
             }
         }
+        MPConstraint[] rows = new MPConstraint[n];
         for (int g = 0; g < n; g++) {
             MPConstraint one = lp.makeConstraint(1, 1, "g" + g);
+            rows[g] = one;
             for (int s = 0; s < m; s++) {
                 if (!keep[g][s]) {
                     continue;
@@ -520,7 +570,7 @@ final class KMedian {
         MPSolver.ResultStatus st = lp.solve();
         if (st != MPSolver.ResultStatus.OPTIMAL) {
             lp.delete();
-            return new Relaxation(0, null, null, null, 0, vars); // no bound beyond zero
+            return new Relaxation(0, null, null, null, 0, vars, null); // no bound beyond zero
         }
         double value = obj.value();
         // a safe integer bound: round down after allowing for the solver's tolerance
@@ -556,8 +606,12 @@ final class KMedian {
             }
             open = list.stream().mapToInt(Integer::intValue).toArray();
         }
+        double[] duals = new double[n];
+        for (int g = 0; g < n; g++) {
+            duals[g] = rows[g].dualValue() / scale;
+        }
         lp.delete();
-        return new Relaxation(Math.max(0, bound), open, xr, yr, value / scale, vars);
+        return new Relaxation(Math.max(0, bound), open, xr, yr, value / scale, vars, duals);
     }
 
     // ------------------------------------------------------------------ exact

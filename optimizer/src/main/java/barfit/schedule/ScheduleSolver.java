@@ -163,6 +163,8 @@ public final class ScheduleSolver {
         private final List<String> groupNames = new ArrayList<>();
         private int[] groupOf;
         private int priced;
+        private int pricedForProof;
+        private long proofMillis;
 
         Rationalisation(ScheduleInput in, List<BeamDesigner.Outcome> own, BeamDesigner designer, long t0) {
             this.in = in;
@@ -198,9 +200,13 @@ public final class ScheduleSolver {
             buildGroups();
             dropGroupsWithoutCommonSize();
             int k = rat.maxSectionSizes() == null ? sizes.size() : rat.maxSectionSizes();
-            Solved best = solveAll(k, null);
+            Solved best = solveAll(k, null, null);
+            pricedForProof = priced;
+            long proofMillis = (System.nanoTime() - t0) / 1_000_000;
+            this.proofMillis = proofMillis;
+            List<BeamDesigner.Outcome> outcomes = designBeams(best);
             List<ScheduleResult.StandardisationPoint> curve = standardisation(best);
-            return designFinal(best, curve);
+            return assemble(best, outcomes, curve);
         }
 
         /**
@@ -451,6 +457,7 @@ public final class ScheduleSolver {
          */
         private KMedian.Result solveSet(boolean[] bars, int k, long cutoff, int[] hint) {
             long fixed = CostModel.units(rat.formworkSetCost());
+            double[] warm = null;
             while (true) {
                 long[][] c = matrix(bars);
                 long qb = quickBound(c, fixed);
@@ -477,7 +484,7 @@ public final class ScheduleSolver {
                 KMedian.Result r = null;
                 if (missing.isEmpty()) {
                     long ub = km.objective(start);
-                    KMedian.Lagrangian lag = km.lagrangian(ub);
+                    KMedian.Lagrangian lag = km.lagrangian(ub, warm);
                     if (lag.floor() >= cutoff) {
                         return KMedian.Result.pruned(lag.floor());
                     }
@@ -485,12 +492,26 @@ public final class ScheduleSolver {
                     // relaxation gains from (they hold the bound down), then the rest, likeliest first
                     boolean[][] relevant = km.relevant(lag, ub);
                     missing = unpriced(relevant);
+                    if (missing.size() > groups.size()) {
+                        // the bound is loose: the linear relaxation's prices tighten it (and so the pairs to price)
+                        KMedian.Lagrangian tighter = km.fromRelaxation(ub, relevant);
+                        if (tighter.bound() > lag.bound()) {
+                            lag = tighter;
+                            if (lag.floor() >= cutoff) {
+                                return KMedian.Result.pruned(lag.floor());
+                            }
+                            relevant = km.relevant(lag, ub);
+                            missing = unpriced(relevant);
+                        }
+                    }
+                    warm = lag.v();
                     if (!missing.isEmpty()) {
                         List<int[]> used = unpriced(km.usedByRelaxation(lag));
                         if (!used.isEmpty()) {
                             missing = used;
                         } else {
-                            missing.sort(Comparator.comparingDouble((int[] bs) -> km.reducedCost(lag, groupOf[bs[0]],
+                            final KMedian.Lagrangian at = lag;
+                            missing.sort(Comparator.comparingDouble((int[] bs) -> km.reducedCost(at, groupOf[bs[0]],
                                     bs[1])).thenComparingInt(bs -> bs[0]).thenComparingInt(bs -> bs[1]));
                             missing = new ArrayList<>(missing.subList(0, Math.min(missing.size(),
                                     Math.max(64, groups.size()))));
@@ -542,7 +563,11 @@ public final class ScheduleSolver {
             return missing;
         }
 
-        private Solved solveAll(int k, int[] hint) {
+        /**
+         * {@code hint}: a schedule to start the local search from; {@code first}: a bar-size set to try
+         * before the others (a neighbouring K's best), so a good incumbent prunes the rest early.
+         */
+        private Solved solveAll(int k, int[] hint, boolean[] first) {
             List<boolean[]> sets = barSets();
             if (groups.isEmpty()) {
                 return new Solved(k, null, null, KMedian.NONE, sets.size(), 0, 0);
@@ -557,6 +582,15 @@ public final class ScheduleSolver {
                 order.add(i);
             }
             order.sort(Comparator.comparingLong(quick::get));
+            if (first != null) {
+                for (int i = 0; i < sets.size(); i++) {
+                    if (java.util.Arrays.equals(sets.get(i), first)) {
+                        order.remove(Integer.valueOf(i));
+                        order.add(0, i);
+                        break;
+                    }
+                }
+            }
             long incumbent = KMedian.NONE;
             int bestSet = -1;
             KMedian.Result best = null;
@@ -607,15 +641,22 @@ public final class ScheduleSolver {
             if (groups.isEmpty()) {
                 return List.of();
             }
-            Solved free = rat.maxSectionSizes() == null ? chosen : solveAll(sizes.size(), null);
+            Solved free = rat.maxSectionSizes() == null ? chosen : solveAll(sizes.size(), null, chosen.bars());
             if (free.result() == null) {
                 return List.of();
             }
             int most = distinct(free.result().assignment());
             List<ScheduleResult.StandardisationPoint> out = new ArrayList<>();
+            // upward from one size, each K started from the K - 1 schedule and its bar sizes
+            int[] hint = null;
+            boolean[] bars = chosen.bars() != null ? chosen.bars() : free.bars();
             for (int k = 1; k <= most; k++) {
                 Solved s = k == most ? free : rat.maxSectionSizes() != null && k == rat.maxSectionSizes() ? chosen
-                        : solveAll(k, null);
+                        : solveAll(k, hint, bars);
+                if (s.result() != null) {
+                    hint = s.result().assignment();
+                    bars = s.bars();
+                }
                 progress.update("price of standardisation", k, most);
                 if (s.result() == null) {
                     out.add(new ScheduleResult.StandardisationPoint(k, Double.NaN, "INFEASIBLE", List.of()));
@@ -641,7 +682,8 @@ public final class ScheduleSolver {
             return out;
         }
 
-        private ScheduleResult designFinal(Solved best, List<ScheduleResult.StandardisationPoint> curve) {
+        /** Each beam designed afresh in its size with the schedule's bar sizes; its cost must equal its price. */
+        private List<BeamDesigner.Outcome> designBeams(Solved best) {
             List<ScheduleBeam> beams = in.beams();
             int[] sizeOf = new int[beams.size()];
             java.util.Arrays.fill(sizeOf, -1);
@@ -684,6 +726,12 @@ public final class ScheduleSolver {
                 return new BeamDesigner.Outcome(p, o.status(), o.best(), o.alternatives(), o.proof(), o.binding(),
                         o.diagnosis());
             });
+            return outcomes;
+        }
+
+        private ScheduleResult assemble(Solved best, List<BeamDesigner.Outcome> outcomes,
+                List<ScheduleResult.StandardisationPoint> curve) {
+            List<ScheduleBeam> beams = in.beams();
             List<ScheduleResult.Beam> out = new ArrayList<>();
             for (int i = 0; i < beams.size(); i++) {
                 BeamDesigner.Outcome o = outcomes.get(i);
@@ -692,7 +740,6 @@ public final class ScheduleSolver {
             }
             double formwork = 0;
             ScheduleResult.Proof proof;
-            long millis = (System.nanoTime() - t0) / 1_000_000;
             if (best.result() == null) {
                 int fewest = curve.stream().filter(pt -> !Double.isNaN(pt.cost())).mapToInt(
                         ScheduleResult.StandardisationPoint::sizes).min().orElse(-1);
@@ -702,8 +749,8 @@ public final class ScheduleSolver {
                         + rat.maxBarSizes() + " bar sizes")) + " cannot hold every beam"
                         + (fewest > 0 ? "; at least " + fewest + " section sizes are needed" : "");
                 proof = new ScheduleResult.Proof(why, "INFEASIBLE", Double.NaN, Double.NaN,
-                        best.setsTotal(), best.setsSolved(), best.setsPruned(), priced, options.workers(), options.seed(),
-                        millis);
+                        best.setsTotal(), best.setsSolved(), best.setsPruned(), pricedForProof, options.workers(),
+                        options.seed(), proofMillis);
             } else {
                 int used = distinct(best.result().assignment());
                 formwork = used * rat.formworkSetCost();
@@ -711,7 +758,7 @@ public final class ScheduleSolver {
                 proof = new ScheduleResult.Proof(best.result().method() + "; sizes priced lazily against bar-free "
                         + "bounds", status, best.result().objective() / CostModel.UNITS_PER_CURRENCY,
                         best.bound() / CostModel.UNITS_PER_CURRENCY, best.setsTotal(), best.setsSolved(),
-                        best.setsPruned(), priced, options.workers(), options.seed(), millis);
+                        best.setsPruned(), pricedForProof, options.workers(), options.seed(), proofMillis);
             }
             // every beam at its own optimum, for comparison: the beams designed here, each in its own best
             // size, with a set of forms for each distinct size
