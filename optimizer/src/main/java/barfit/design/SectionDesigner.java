@@ -44,6 +44,22 @@ public final class SectionDesigner {
         }
         sel.exactlyOne(all);
         Selection.Result first = sel.solve(options);
+        if (first.status() != Selection.Status.OPTIMAL && first.status() != Selection.Status.FEASIBLE) {
+            // the time limit ended the solve before it had a solution: give the generator's cheapest
+            // candidate, as found but not proven (no bound)
+            int cheapest = 0;
+            for (int i = 1; i < cands.size(); i++) {
+                if (cands.get(i).units() < cands.get(cheapest).units()) {
+                    cheapest = i;
+                }
+            }
+            first = new Selection.Result(Selection.Status.FEASIBLE, null, cands.get(cheapest).units(), 0,
+                    first.seconds(), first.booleans());
+            Design best = verified(p, cands.get(cheapest));
+            Proof proof = new Proof(first.status(), first.objective(), first.bound(), cands.size(), gen.stats(),
+                    first.seconds(), options.workers(), options.seed());
+            return new DesignOutcome(p, "feasible", best, List.of(), proof, binding(p, best.layout()), null);
+        }
         int chosen = indexOf(first.chosen());
         Design best = verified(p, cands.get(chosen));
         List<Design> alts = new ArrayList<>();

@@ -52,6 +52,10 @@ public final class BeamText {
         out.append("   ").append(o.status().toUpperCase(Locale.ROOT)).append('\n');
         if (!o.feasible()) {
             var d = o.diagnosis();
+            if (o.status().equals("unknown")) {
+                out.append("  ").append(d.summary()).append("; ").append(String.join("; ", d.fixes())).append('\n');
+                return;
+            }
             out.append("  no layout in the search space passes.\n");
             out.append("  binding limit: ").append(d.limit()).append(" — ").append(d.summary()).append('\n');
             out.append(d.fixes().isEmpty() ? "  no single relaxed limit (depth, width) gives a passing layout\n"
@@ -212,6 +216,11 @@ public final class BeamText {
     }
 
     static String proof(BeamDesigner.Proof p) {
+        if (p.booleans() == 0 && p.status().equals("feasible")) {
+            return "not proven: the time limit ended CP-SAT before it had a solution; the generator's cheapest design"
+                    + " is given, with no bound (raise --time-limit for the proof); " + p.workers()
+                    + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
+        }
         return "CP-SAT " + p.status() + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective() / 1e6)
                 + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound() / 1e6) + ", gap "
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over " + p.booleans() + " booleans; "

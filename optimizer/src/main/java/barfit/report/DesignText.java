@@ -6,6 +6,7 @@ import barfit.design.DesignOutcome;
 import barfit.design.Diagnosis;
 import barfit.design.Layout;
 import barfit.design.Proof;
+import barfit.design.Selection;
 import barfit.input.Settings;
 import barfit.section.CheckReport;
 import barfit.section.trail.Dim;
@@ -172,6 +173,11 @@ public final class DesignText {
 
     static String proof(Proof p, UnitSystem u) {
         var s = p.stats();
+        if (p.status() == Selection.Status.FEASIBLE && p.bound() == 0) {
+            return "not proven: the time limit ended CP-SAT before it had a solution; the cheapest of " + p.candidates()
+                    + " candidates the generator found is given, with no bound (raise --time-limit for the proof); "
+                    + p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
+        }
         String bound = String.format(Locale.ROOT, "%.4f", Money.perLength(p.bound() / 10_000.0, u));
         String obj = String.format(Locale.ROOT, "%.4f", Money.perLength(p.objective() / 10_000.0, u));
         return "CP-SAT " + p.status().name().toLowerCase(Locale.ROOT) + " over " + p.candidates()

@@ -96,6 +96,22 @@ public final class BeamDesigner {
             }
             sel.exclude(c);
         }
+        if (best == null) {
+            // the time limit ended the first solve before it had a solution: give the generator's incumbent
+            // when it passes every check, as found but not proven (no bound)
+            BeamReport report = BeamVerifier.verify(p, out.incumbentLayout(), true);
+            Proof proof = new Proof(report.ok() ? "feasible" : "unknown", report.ok()
+                    ? Math.round(out.incumbent() * BeamGenerator.UNITS) : 0, 0, 0, stats.frames(),
+                    stats.framesEvaluated(), stats.framesSkipped(), solves, cuts, options.workers(), options.seed());
+            if (!report.ok()) {
+                return new Outcome(p, "unknown", null, List.of(), proof, List.of(), new Diagnosis("time limit",
+                        "the time limit (" + options.timeLimitSeconds() + " s) ended the search before a design"
+                                + " passing every check was found", List.of("raise --time-limit")));
+            }
+            Design d = new Design(out.incumbentLayout(), out.incumbentLayout().cost(p, cost), report,
+                    out.incumbentLayout().bars(p, cost));
+            return new Outcome(p, "feasible", d, List.of(), proof, binding(p, d), null);
+        }
         Proof proof = new Proof(first.status(), first.objective(), first.bound(), first.booleans(), stats.frames(),
                 stats.framesEvaluated(), stats.framesSkipped(), solves, cuts, options.workers(), options.seed());
         return new Outcome(p, first.status(), best, alts, proof, binding(p, best), null);
