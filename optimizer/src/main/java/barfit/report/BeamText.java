@@ -75,14 +75,10 @@ public final class BeamText {
         } else {
             t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span (compression steel at mid-span)");
             if (p.leftSupport()) {
-                t.row("top at left", counts(l.topLeft(), l.top().label()) + "; the " + (BeamLayout.sum(l.topLeft())
-                        - l.topContinuous()) + " extra bars run " + span(l.extLeft(), u) + " past the face ("
-                        + extensionRule(p, l) + ")");
+                t.row("top at left", supportTop(p, l, l.topLeft(), l.extLeft(), u));
             }
             if (p.rightSupport()) {
-                t.row("top at right", counts(l.topRight(), l.top().label()) + "; the " + (BeamLayout.sum(l.topRight())
-                        - l.topContinuous()) + " extra bars run " + span(l.extRight(), u) + " past the face ("
-                        + extensionRule(p, l) + ")");
+                t.row("top at right", supportTop(p, l, l.topRight(), l.extRight(), u));
             }
         }
         List<BeamProblem.Zone> zones = p.zones();
@@ -90,7 +86,7 @@ public final class BeamText {
             BeamProblem.Zone z = zones.get(i);
             var s = l.zoneStirrups().get(i);
             t.row(i == 0 ? "stirrups" : "", z.name() + " zone " + span(z.from(), u) + "–" + span(z.to(), u) + ": "
-                    + Words.stirrups(s, u) + " (" + BeamLayout.stirrupSets(z.length(), s.spacing()) + " sets"
+                    + Words.stirrups(s, u) + " (" + sets(BeamLayout.stirrupSets(z.length(), s.spacing()))
                     + (z.vu() == null ? ", minimum" : ", Vu = " + u.withUnit(z.vu(), Dim.FORCE)) + ")");
         }
         boolean firstSection = true;
@@ -213,6 +209,22 @@ public final class BeamText {
 
     private static String fmt(double v) {
         return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+
+    /** The top bars at one support: the continuous ones alone, or with the extra bars and how far they run. */
+    private static String supportTop(BeamProblem p, BeamLayout l, List<Integer> counts, double ext, UnitSystem u) {
+        int extra = BeamLayout.sum(counts) - l.topContinuous();
+        String all = counts(counts, l.top().label());
+        if (extra == 0) {
+            return all + "; the continuous bars alone, no extra bars";
+        }
+        return all + "; the " + (extra == 1 ? "extra bar runs " : extra + " extra bars run ") + span(ext, u)
+                + " past the face (" + extensionRule(p, l) + ")";
+    }
+
+    /** "1 set", "12 sets". */
+    public static String sets(int n) {
+        return n + (n == 1 ? " set" : " sets");
     }
 
     static String proof(BeamDesigner.Proof p) {

@@ -97,6 +97,8 @@ public final class SpanChecks {
             t.value("Δ(D)", Q.length(dD), "immediate, dead load");
             t.value("Δ(D + L)", Q.length(dDL), "immediate, dead plus live");
             t.step("Δ(L)", "Δ(D + L) − Δ(D)", "{} − {}", Q.length(live), Q.length(dDL), Q.length(dD));
+            t.note("ρ' = As' / (b d) at " + (ends == EndCondition.CANTILEVER ? "the support" : "mid-span")
+                    + ", b the width of the compression face (the flange's under sagging)");
             t.step("λΔ", "2.0 / (1 + 50 ρ')  (24.2.4.1)", "2.0 / (1 + 50 × {})", Q.number(lambda), Q.number(rhoPrime));
             t.step("Δ(long term)", "λΔ Δ(sustained) + Δ(L)", "{} × {} + {}", Q.length(longTerm), Q.number(lambda),
                     Q.length(dSus), Q.length(live));
@@ -139,11 +141,15 @@ public final class SpanChecks {
         return out;
     }
 
-    /** ρ' of 24.2.4.1: compression steel over b d of a section. */
+    /**
+     * ρ' of 24.2.4.1: compression steel over b d of a section, b the width of the compression face (Chapter 2
+     * notation): the flange's width under sagging, where the top flange is in compression; the web's otherwise.
+     */
     public static double rhoPrime(BeamSection s, Bending bending) {
         double[] comp = faceSteel(s, bending.compressionFace());
         double[] tens = faceSteel(s, bending.tensionFace());
-        return comp[0] / (s.shape().width() * Math.max(tens[1], 1e-9));
+        double b = bending == Bending.SAGGING && s.shape().flanged() ? s.shape().flange().width() : s.shape().width();
+        return comp[0] / (b * Math.max(tens[1], 1e-9));
     }
 
     /**

@@ -6,6 +6,7 @@ import static barfit.section.Sections.KIP_FT;
 import static barfit.section.Sections.KSI;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import barfit.catalogs.BarSize;
 import barfit.section.trail.Trail;
 import org.junit.jupiter.api.Test;
 
@@ -93,5 +94,17 @@ class DevelopmentAndDeflectionTest {
         // cantilever w L⁴ / (8 E I) with M = w L² / 2: w = 10, L = 2000 -> 10 x 2000⁴ / (8 x 25000 x 2e9) = 0.4 mm
         double mc = 10 * 2000.0 * 2000.0 / 2;
         assertEquals(0.4, Deflection.spanDeflection(EndCondition.CANTILEVER, 2000, 25_000, 2e9, mc, 0, 0), 1e-9);
+    }
+    @Test
+    void rhoPrimeTakesTheCompressionFaceWidth() {
+        // ACI 318-19 24.2.4.1.1 with Chapter 2's notation (b = width of the compression face): under sagging
+        // a top flange is the compression face, so rho' = As' / (bf d); under hogging the web's width.
+        BarSize bar = Sections.si("25");
+        SectionShape tee = new SectionShape(300, 500, new Flange(1200, 120, false));
+        BeamSection s = Sections.section(tee, Sections.materials(28, 420), Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI, Sections.bottomAtDepth(bar, 4, 500, 440), Sections.topAt(bar, 2, 60));
+        double as = bar.area();
+        assertEquals(2 * as / (1200 * 440), SpanChecks.rhoPrime(s, Bending.SAGGING), 1e-12);
+        assertEquals(4 * as / (300 * (500 - 60)), SpanChecks.rhoPrime(s, Bending.HOGGING), 1e-12);
     }
 }

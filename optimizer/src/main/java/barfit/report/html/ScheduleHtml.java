@@ -8,6 +8,7 @@ import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
 import barfit.design.beam.Extension;
 import barfit.input.Settings;
+import barfit.report.BeamText;
 import barfit.report.Caution;
 import barfit.report.Money;
 import barfit.report.TrailText;
@@ -453,7 +454,7 @@ public final class ScheduleHtml {
             BeamProblem.Zone z = zones.get(i);
             var st = l.zoneStirrups().get(i);
             kv(out, "stirrups, " + z.name() + " zone", span(z.from(), u) + " to " + span(z.to(), u) + ": "
-                    + Words.stirrups(st, u) + ", " + BeamLayout.stirrupSets(z.length(), st.spacing()) + " sets"
+                    + Words.stirrups(st, u) + ", " + BeamText.sets(BeamLayout.stirrupSets(z.length(), st.spacing()))
                     + (z.vu() == null ? " (minimum)" : " (Vu = " + u.withUnit(z.vu(), Dim.FORCE) + ")"));
         }
         for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
