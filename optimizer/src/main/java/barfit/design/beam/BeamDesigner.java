@@ -48,9 +48,23 @@ public final class BeamDesigner {
         this.units = units;
     }
 
+    /**
+     * The span's proven cheapest design and up to {@code alternatives} next-cheapest ones. Alternatives need
+     * the candidates the cost bound would discard: the generator keeps those within a margin of the
+     * cheapest, widened (10 %, 30 %, 100 %, everything) until enough are found.
+     */
     public Outcome design(BeamProblem p, int alternatives) {
+        Outcome o = design(p, alternatives, 0);
+        double[] margins = {0.1, 0.3, 1.0, Double.POSITIVE_INFINITY};
+        for (int i = 0; i < margins.length && o.feasible() && o.alternatives().size() < alternatives; i++) {
+            o = design(p, alternatives, margins[i]);
+        }
+        return o;
+    }
+
+    private Outcome design(BeamProblem p, int alternatives, double slack) {
         BeamGenerator gen = new BeamGenerator(p, cost);
-        BeamGenerator.Output out = gen.generate();
+        BeamGenerator.Output out = gen.generate(slack);
         var stats = out.stats();
         if (out.incumbentLayout() == null) {
             Proof proof = new Proof("infeasible", 0, 0, 0, stats.frames(), stats.framesEvaluated(), stats.framesSkipped(),

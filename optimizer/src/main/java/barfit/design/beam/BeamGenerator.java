@@ -122,6 +122,15 @@ public final class BeamGenerator {
     }
 
     public Output generate() {
+        return generate(0);
+    }
+
+    /**
+     * Generates the frames and options of the span. With {@code slack} 0 everything that cannot beat the
+     * cheapest design found is left out; with slack s everything costing more than (1 + s) times it, so
+     * that the next-cheapest designs within that margin stay in the candidate sets (alternatives).
+     */
+    public Output generate(double slack) {
         long t0 = System.nanoTime();
         List<Frame> frames = frames();
         List<FrameSet> sets = new ArrayList<>();
@@ -140,7 +149,7 @@ public final class BeamGenerator {
         }
         if (opener != null && frames.get(0) != opener && frames.get(0).deflection()) {
             evaluated++;
-            FrameSet fs = evaluate(opener, incumbent);
+            FrameSet fs = evaluate(opener, loose(incumbent, slack));
             if (fs != null) {
                 sets.add(fs);
                 if (fs.best() < incumbent) {
@@ -156,15 +165,15 @@ public final class BeamGenerator {
             if (f == opener) {
                 continue;
             }
-            if (f.lowerBound() >= incumbent || Double.isInfinite(f.lowerBound())) {
+            if (f.lowerBound() >= loose(incumbent, slack) || Double.isInfinite(f.lowerBound())) {
                 skipped = frames.size() - i;
                 break;
             }
-            if (Double.isFinite(incumbent) && frameLowerBound(f) >= incumbent - 1e-9) {
+            if (Double.isFinite(incumbent) && frameLowerBound(f) >= loose(incumbent, slack) - 1e-9) {
                 continue; // a closer look at its bars shows it cannot beat the incumbent
             }
             evaluated++;
-            FrameSet fs = evaluate(f, incumbent);
+            FrameSet fs = evaluate(f, loose(incumbent, slack));
             if (fs == null) {
                 continue;
             }
@@ -174,7 +183,7 @@ public final class BeamGenerator {
                 incumbentLayout = fs.bestLayout();
             }
         }
-        final double inc = incumbent;
+        final double inc = loose(incumbent, slack);
         List<FrameSet> kept = new ArrayList<>();
         for (FrameSet fs : sets) {
             if (fs.frame().lowerBound() < inc + 1e-9) {
@@ -183,6 +192,10 @@ public final class BeamGenerator {
         }
         return new Output(kept, incumbent, incumbentLayout, new Stats(frames.size(), evaluated, skipped,
                 midProbe.solves() + supportProbe.solves(), chooser.evaluations(), System.nanoTime() - t0));
+    }
+
+    private static double loose(double incumbent, double slack) {
+        return slack == 0 ? incumbent : incumbent * (1 + slack);
     }
 
     // ------------------------------------------------------------------ frames and their bounds

@@ -36,6 +36,7 @@ class BeamPropertiesTest {
     void everyPrintedSpanPassesAndTheProofIsTight() {
         Random r = new Random(45);
         int seen = 0;
+        int alternatives = 0;
         for (int i = 0; i < 40; i++) {
             BeamProblem p = RandomBeams.small(r);
             var o = designer.design(p, 2);
@@ -47,10 +48,14 @@ class BeamPropertiesTest {
             assertTrue(BeamVerifier.verify(p, o.best().layout(), false).ok());
             assertEquals("optimal", o.status());
             assertEquals(o.proof().objective(), o.proof().bound());
+            double previous = o.best().cost().total();
             for (var alt : o.alternatives()) {
                 assertTrue(alt.report().ok());
-                assertTrue(alt.cost().total() >= o.best().cost().total() - 1e-6);
+                assertTrue(BeamVerifier.verify(p, alt.layout(), false).ok());
+                assertTrue(alt.cost().total() >= previous - 1e-6, "alternatives come cheapest first");
+                previous = alt.cost().total();
             }
+            alternatives += o.alternatives().size();
             // the bar list accounts for the cost of the bars
             double main = 0;
             for (var m : o.best().bars()) {
@@ -62,5 +67,7 @@ class BeamPropertiesTest {
             assertEquals(o.best().cost().mainBars(), main * rates, 1e-6);
         }
         assertTrue(seen > 20);
+        // two were asked of every span; a small space may hold fewer distinct designs, but not across the board
+        assertTrue(alternatives > seen, "alternatives found: " + alternatives + " over " + seen + " spans");
     }
 }
