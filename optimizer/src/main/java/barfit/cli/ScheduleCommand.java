@@ -31,7 +31,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "schedule", mixinStandardHelpOptions = true,
         description = "Design every beam of a floor or building: each at its proven optimum, or rationalised to a few "
                 + "section and bar sizes (rationalise: in FILE) with the proof of the whole schedule's optimum.%n"
-                + "With --out DIR writes schedule.csv, schedule.json, report.html and standardisation.svg there.%n"
+                + "With --out DIR writes schedule.csv, schedule.json, report.html and (with rationalise:) standardisation.svg there.%n"
                 + "Exit code 0 when every beam has a passing design, 1 when one has none, 2 for bad input.")
 final class ScheduleCommand implements Callable<Integer> {
     static final List<String> OUTPUTS = List.of("schedule.csv", "schedule.json", "report.html", "standardisation.svg");
@@ -142,7 +142,9 @@ final class ScheduleCommand implements Callable<Integer> {
         files.put("schedule.csv", ScheduleCsv.render(r));
         files.put("schedule.json", ScheduleJson.render(r));
         files.put("report.html", barfit.report.html.ScheduleHtml.render(r));
-        files.put("standardisation.svg", barfit.report.html.StandardisationPlot.svg(r));
+        if (!r.standardisation().isEmpty()) { // the curve is computed only when the schedule is rationalised
+            files.put("standardisation.svg", barfit.report.html.StandardisationPlot.svg(r));
+        }
         List<Path> temps = new ArrayList<>();
         try {
             Files.createDirectories(out);
@@ -159,6 +161,9 @@ final class ScheduleCommand implements Callable<Integer> {
                 } catch (AtomicMoveNotSupportedException e) {
                     Files.move(tmp, out.resolve(name), StandardCopyOption.REPLACE_EXISTING);
                 }
+            }
+            if (!files.containsKey("standardisation.svg")) {
+                Files.deleteIfExists(out.resolve("standardisation.svg")); // an earlier run's curve (--force) would mislead
             }
         } catch (IOException e) {
             for (Path t : temps) {

@@ -63,9 +63,15 @@ public final class ScheduleJson {
             ObjectNode po = root.putObject("proof");
             po.put("status", p.status());
             po.put("method", p.method());
-            po.put("objective", round(p.objective()));
-            po.put("bound", round(p.bound()));
-            po.put("gap", Double.isNaN(p.gap()) ? 0 : p.gap());
+            if (Double.isNaN(p.objective())) { // no schedule meets the limits: nothing to bound
+                po.putNull("objective");
+                po.putNull("bound");
+                po.putNull("gap");
+            } else {
+                po.put("objective", round(p.objective()));
+                po.put("bound", round(p.bound()));
+                po.put("gap", p.gap());
+            }
             po.put("bar_size_sets", p.barSetsTotal());
             po.put("bar_size_sets_solved", p.barSetsSolved());
             po.put("bar_size_sets_pruned", p.barSetsPruned());

@@ -60,7 +60,9 @@ public final class ScheduleText {
             out.append(" + formwork sets ").append(Money.amount(r.formworkSetsCost()));
         }
         out.append(" = ").append(Money.amount(r.totalCost())).append(cur);
-        if (r.proof() != null) {
+        if (r.proof() != null && r.proof().status().equals("INFEASIBLE")) {
+            out.append(";  the limits cannot be met: every beam is shown at its own optimum, nothing is rationalised");
+        } else if (r.proof() != null) {
             double extra = r.totalCost() - r.unconstrainedCost();
             out.append(";  every beam at its own optimum").append(r.input().rationalise().formworkSetCost() > 0
                     ? " (with a set of forms per size)" : "").append(": ").append(Money.amount(r.unconstrainedCost()))

@@ -745,8 +745,9 @@ public final class ScheduleSolver {
                         ScheduleResult.StandardisationPoint::sizes).min().orElse(-1);
                 String why = groups.isEmpty() ? "no beam is left to rationalise: each failed on its own or in its group"
                         : (rat.maxSectionSizes() == null ? "the bar sizes allowed" : "at most "
-                        + rat.maxSectionSizes() + " section sizes" + (rat.maxBarSizes() == null ? "" : " with "
-                        + rat.maxBarSizes() + " bar sizes")) + " cannot hold every beam"
+                        + rat.maxSectionSizes() + (rat.maxSectionSizes() == 1 ? " section size" : " section sizes")
+                        + (rat.maxBarSizes() == null ? "" : " with " + rat.maxBarSizes()
+                        + (rat.maxBarSizes() == 1 ? " bar size" : " bar sizes"))) + " cannot hold every beam"
                         + (fewest > 0 ? "; at least " + fewest + " section sizes are needed" : "");
                 proof = new ScheduleResult.Proof(why, "INFEASIBLE", Double.NaN, Double.NaN,
                         best.setsTotal(), best.setsSolved(), best.setsPruned(), pricedForProof, options.workers(),
@@ -770,6 +771,9 @@ public final class ScheduleSolver {
                     ownTotal += own.get(i).best().cost().total();
                     ownSizes.add(List.of(l.width(), l.height()));
                 }
+            }
+            if (best.result() == null) {
+                formwork = ownSizes.size() * rat.formworkSetCost(); // the beams stand at their own optima, forms and all
             }
             return finish(in, out, formwork, ownTotal + ownSizes.size() * rat.formworkSetCost(), proof, curve, t0);
         }

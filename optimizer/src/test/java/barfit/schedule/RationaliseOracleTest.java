@@ -14,6 +14,7 @@ import barfit.design.SolverOptions;
 import barfit.design.beam.BeamExhaustive;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
+import barfit.design.beam.BeamVerifier;
 import barfit.input.SearchReader;
 import barfit.input.Settings;
 import barfit.section.CodeEquations;
@@ -110,6 +111,8 @@ class RationaliseOracleTest {
             }
             assertTrue(b.outcome().best().report().ok(), "re-verified — " + where);
             BeamLayout l = b.outcome().best().layout();
+            // verified afresh by the section model, against the beam as the schedule gave it
+            assertTrue(BeamVerifier.verify(b.beam().problem(), l, false).ok(), "verifies afresh — " + where);
             String size = l.width() + "x" + l.height();
             sizes.add(size);
             bars.add(l.top().designation());

@@ -309,9 +309,10 @@ public final class ScheduleHtml {
         out.append("<table class=\"kv\">\n<caption>Proof</caption>\n");
         kv(out, "method", p.method());
         kv(out, "status", p.status());
-        kv(out, "objective", money(p.objective(), cur));
-        kv(out, "best bound", money(p.bound(), cur));
-        kv(out, "gap", String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()));
+        boolean none = Double.isNaN(p.objective());
+        kv(out, "objective", none ? "— (no schedule meets the limits)" : money(p.objective(), cur));
+        kv(out, "best bound", none ? "—" : money(p.bound(), cur));
+        kv(out, "gap", none ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()));
         kv(out, "bar-size sets", p.barSetsTotal() + " considered, " + p.barSetsSolved() + " solved, " + p.barSetsPruned()
                 + " pruned by the cost bound");
         kv(out, "(beam, size) pairs", p.pairsEvaluated() + " designed exactly");
@@ -340,12 +341,16 @@ public final class ScheduleHtml {
         kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), cur));
         kvStrong(out, "total", money(r.totalCost(), cur));
         boolean sets2 = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
-        kv(out, "every beam at its own optimum" + (sets2 ? " (a set of forms per size)" : ""),
-                money(r.unconstrainedCost(), cur));
-        double diff = r.totalCost() - r.unconstrainedCost();
-        String pct = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * diff / r.unconstrainedCost())
-                : "";
-        kv(out, "difference", (diff >= 0 ? "+" : "") + money(diff, cur) + pct);
+        if (r.proof() != null && r.proof().status().equals("INFEASIBLE")) {
+            kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
+        } else {
+            kv(out, "every beam at its own optimum" + (sets2 ? " (a set of forms per size)" : ""),
+                    money(r.unconstrainedCost(), cur));
+            double diff = r.totalCost() - r.unconstrainedCost();
+            String pct = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * diff
+                    / r.unconstrainedCost()) : "";
+            kv(out, "difference", (diff >= 0 ? "+" : "") + money(diff, cur) + pct);
+        }
         out.append("</table>\n");
         long none = r.beams().stream().filter(b -> !b.feasible()).count();
         if (none > 0) {
@@ -374,7 +379,7 @@ public final class ScheduleHtml {
                     .append(Svg.esc(labels(r, p.barSizes()))).append("</td></tr>\n");
             prev = p.cost();
         }
-        out.append("</tbody>\n</table>\n<figure class=\"plot\">\n").append(StandardisationPlot.svg(pts, u, cur))
+        out.append("</tbody>\n</table>\n<figure class=\"plot\">\n").append(StandardisationPlot.svg(r))
                 .append("</figure>\n</section>\n");
     }
 
