@@ -20,19 +20,27 @@ public final class Main implements Runnable {
     public static final int FAILED = 1;
     public static final int BAD_INPUT = 2;
     public static final int INTERNAL = 3;
+    static final String OUT_OF_MEMORY = "barfit: out of memory; give the JVM more heap through the launcher, e.g. "
+            + "BARFIT_JAVA_OPTS=-Xmx4g ./barfit ...";
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed: check");
+        throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed: check, design, schedule, compare, sweep or bench");
     }
 
     public static void main(String[] args) {
         PrintStream out = new PrintStream(new FileOutputStream(FileDescriptor.out), true, StandardCharsets.UTF_8);
         PrintStream err = new PrintStream(new FileOutputStream(FileDescriptor.err), true, StandardCharsets.UTF_8);
-        int code = run(args, out, err);
+        int code;
+        try {
+            code = run(args, out, err);
+        } catch (OutOfMemoryError e) {
+            err.println(OUT_OF_MEMORY);
+            code = INTERNAL;
+        }
         out.flush();
         err.flush();
         System.exit(code);
@@ -53,6 +61,12 @@ public final class Main implements Runnable {
             if (ex instanceof InputError ie) {
                 c.getErr().println("barfit: " + ie.oneLine());
                 return BAD_INPUT;
+            }
+            for (Throwable t = ex; t != null; t = t.getCause()) {
+                if (t instanceof OutOfMemoryError) {
+                    c.getErr().println(OUT_OF_MEMORY);
+                    return INTERNAL;
+                }
             }
             c.getErr().println("barfit: internal error, please report it with the input file: " + ex);
             if (System.getenv("BARFIT_DEBUG") != null) {
