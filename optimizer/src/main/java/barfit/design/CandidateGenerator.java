@@ -266,6 +266,7 @@ public final class CandidateGenerator {
             return false;
         }
         double cheapestComp = comps.get(0).cost();
+        int maxLegs = p.space().stirrupLegs().stream().mapToInt(Integer::intValue).max().orElse(2);
         for (BarSize t : tensionSizes) {
             int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
             int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), t, p.materials().fy(), p.code());
@@ -312,8 +313,12 @@ public final class CandidateGenerator {
                     int nMin = Arrays.stream(counts).sum();
                     boolean ductilityStopped = scanUpward(f, shape, key, t, nmax, ncr, counts, c, m,
                             base + cm.cost(), stirLb, stirrupCache);
-                    if (!ductilityStopped && nMin <= nFloor) {
-                        break; // no compression layer can save a bar, nor make more bars ductile
+                    // later compression layers cost more; they cannot save a bar or make more bars ductile, and
+                    // when this one leaves the stirrup legs free (it holds as many as any, and needs no more than
+                    // the tension bars do) they cannot allow cheaper stirrups either
+                    boolean legsFree = m >= maxLegs && p.space().legsFor(m) <= p.space().legsFor(counts[0]);
+                    if (!ductilityStopped && nMin <= nFloor && legsFree) {
+                        break;
                     }
                 }
             }
@@ -346,15 +351,15 @@ public final class CandidateGenerator {
                 return false;
             }
             search.place(t, split);
-            Stirrups st = stirrups(f, shape, t, split, cache);
-            if (st != null) {
-                Layout lay = new Layout(f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m, st,
-                        f.skin());
-                Candidate cand = new Candidate(lay, lay.cost(cost));
-                Candidate kb = best.get(key);
-                if (kb == null || cand.units() < kb.units()) {
-                    best.put(key, cand);
-                    boundDirty = true;
+            offer(f, shape, key, t, split, c, m, cache);
+            // the legs rule: a more even split of the same bars may need fewer stirrup legs
+            int legs = p.space().legsFor(Math.max(split[0], m));
+            if (legs > p.space().legsFor(Math.max((n + layers - 1) / layers, m))) {
+                for (int[] alt : search.passingSplits(t, n, layers, nmax, first)) {
+                    if (p.space().legsFor(Math.max(alt[0], m)) < legs) {
+                        search.place(t, alt);
+                        offer(f, shape, key, t, alt, c, m, cache);
+                    }
                 }
             }
             n++;
@@ -403,13 +408,33 @@ public final class CandidateGenerator {
         return true;
     }
 
-    /** The cheapest stirrups for the tension bars just placed in the probe (cached per frame). */
-    private Stirrups stirrups(Frame f, SectionShape shape, BarSize t, int[] counts, Map<String, Stirrups> cache) {
-        String key = t.designation() + Arrays.toString(counts);
+    /** The layout of the bars just placed in the probe, with its cheapest stirrups, kept if the cheapest for its key. */
+    private void offer(Frame f, SectionShape shape, String key, BarSize t, int[] split, BarSize c, int m,
+            Map<String, Stirrups> cache) {
+        Stirrups st = stirrups(f, t, split, p.space().legsFor(Math.max(split[0], m)), Math.min(split[0], m), cache);
+        if (st == null) {
+            return;
+        }
+        Layout lay = new Layout(f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m, st, f.skin());
+        Candidate cand = new Candidate(lay, lay.cost(cost));
+        Candidate kb = best.get(key);
+        if (kb == null || cand.units() < kb.units()) {
+            best.put(key, cand);
+            boundDirty = true;
+        }
+    }
+
+    /**
+     * The cheapest stirrups for the tension bars just placed in the probe with at least {@code minLegs} legs
+     * (the legs the bars per layer need), cached per frame.
+     */
+    private Stirrups stirrups(Frame f, BarSize t, int[] counts, int minLegs, int maxLegs, Map<String, Stirrups> cache) {
+        String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs;
         if (cache.containsKey(key)) {
             return cache.get(key);
         }
-        Stirrups chosen = cheapestStirrups(f.b(), f.h(), f.det(), probe.d(), probe.tensionArea());
+        Stirrups chosen = chooser.cheapest(new SectionShape(f.b(), f.h(), p.flange()), f.det(), probe.d(),
+                probe.tensionArea(), p.vu(), minLegs, maxLegs, 0);
         cache.put(key, chosen);
         return chosen;
     }

@@ -61,18 +61,21 @@ public final class ExhaustiveSearch {
                         int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
                         for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
                             for (List<Integer> counts : countVectors(layers, nmax)) {
-                                Stirrups st = null;
-                                boolean stirrupsDone = false;
+                                // the cheapest stirrups per range of legs the bars allow (at least what the busiest layer needs, at most
+                                // one per bar of the outer tension layer and of the compression layer)
+                                java.util.Map<Integer, java.util.Optional<Stirrups>> byLegs = new java.util.HashMap<>();
                                 for (BarSize c : p.space().compressionSizes()) {
                                     int mmax = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
                                     if (!Layout.fitsHeight(h, det, t, layers, c)) {
                                         continue;
                                     }
                                     for (int m = 2; m <= mmax; m++) {
-                                        if (!stirrupsDone) {
-                                            st = cheapestStirrups(p, b, h, det, t, counts, c);
-                                            stirrupsDone = true;
-                                        }
+                                        int need = p.space().legsFor(Math.max(counts.get(0), m));
+                                        int most = Math.min(counts.get(0), m);
+                                        final BarSize cc = c;
+                                        Stirrups st = byLegs.computeIfAbsent(need * 1000 + most, k -> java.util.Optional
+                                                .ofNullable(cheapestStirrups(p, b, h, det, t, counts, cc, need, most)))
+                                                .orElse(null);
                                         if (st == null) {
                                             continue;
                                         }
@@ -120,10 +123,13 @@ public final class ExhaustiveSearch {
 
     /** The cheapest stirrup option whose shear checks pass for these tension bars (any hangers). */
     private Stirrups cheapestStirrups(SectionProblem p, double b, double h, Detailing det, BarSize t,
-            List<Integer> counts, BarSize c) {
+            List<Integer> counts, BarSize c, int minLegs, int maxLegs) {
         Stirrups best = null;
         double bestCost = Double.POSITIVE_INFINITY;
         for (int legs : p.space().stirrupLegs()) {
+            if (legs < minLegs || legs > maxLegs) {
+                continue;
+            }
             for (double s : p.space().stirrupSpacings()) {
                 Stirrups st = new Stirrups(det.stirrupBar(), legs, s);
                 Layout lay = new Layout(b, h, p.flange(), p.bending(), t, counts, c, 2, st, null);

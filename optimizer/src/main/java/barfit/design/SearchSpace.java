@@ -17,7 +17,18 @@ public record SearchSpace(
         List<Integer> stirrupLegs,
         List<Double> stirrupSpacings,
         boolean hangersOnly,
-        BarSize fixedSkinBar) {
+        BarSize fixedSkinBar,
+        int barsPerTwoLegs) {
+
+    /** Two stirrup legs hold up to four bars in a layer unless the user says otherwise (common practice). */
+    public static final int DEFAULT_BARS_PER_TWO_LEGS = 4;
+
+    public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
+            int maxLayers, List<BarSize> stirrupSizes, List<Integer> stirrupLegs, List<Double> stirrupSpacings,
+            boolean hangersOnly, BarSize fixedSkinBar) {
+        this(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
+                hangersOnly, fixedSkinBar, DEFAULT_BARS_PER_TWO_LEGS);
+    }
 
     /** A space with skin bars of its smallest bar size. */
     public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
@@ -45,22 +56,22 @@ public record SearchSpace(
 
     public SearchSpace withWidths(List<Double> w) {
         return new SearchSpace(w, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly, fixedSkinBar);
+                stirrupSpacings, hangersOnly, fixedSkinBar, barsPerTwoLegs);
     }
 
     public SearchSpace withDepths(List<Double> d) {
         return new SearchSpace(widths, d, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly, fixedSkinBar);
+                stirrupSpacings, hangersOnly, fixedSkinBar, barsPerTwoLegs);
     }
 
     public SearchSpace withBarSizes(List<BarSize> bars, List<BarSize> comp) {
         return new SearchSpace(widths, depths, bars, comp, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
-                hangersOnly, fixedSkinBar);
+                hangersOnly, fixedSkinBar, barsPerTwoLegs);
     }
 
     public SearchSpace withMaxLayers(int layers) {
         return new SearchSpace(widths, depths, barSizes, compressionSizes, layers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly, fixedSkinBar);
+                stirrupSpacings, hangersOnly, fixedSkinBar, barsPerTwoLegs);
     }
 
     /**
@@ -70,7 +81,7 @@ public record SearchSpace(
      */
     public SearchSpace withHangersOnly() {
         return new SearchSpace(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, true, fixedSkinBar);
+                stirrupSpacings, true, fixedSkinBar, barsPerTwoLegs);
     }
 
     /**
@@ -80,7 +91,7 @@ public record SearchSpace(
     public SearchSpace withMainBars(List<BarSize> bars) {
         List<BarSize> comp = compressionSizes.stream().filter(bars::contains).toList();
         return new SearchSpace(widths, depths, bars, comp.isEmpty() ? bars : comp, maxLayers, stirrupSizes,
-                stirrupLegs, stirrupSpacings, hangersOnly, skinBar());
+                stirrupLegs, stirrupSpacings, hangersOnly, skinBar(), barsPerTwoLegs);
     }
 
     /** The size of skin bars (9.7.2.3): the smallest bar size searched unless fixed. */
@@ -94,5 +105,16 @@ public record SearchSpace(
     /** Number of (width, depth, stirrup size) frames before any cap. */
     public int frameCount() {
         return widths.size() * depths.size() * stirrupSizes.size();
+    }
+
+    /** The same space with another legs rule: two legs hold up to {@code n} bars in a layer. */
+    public SearchSpace withBarsPerTwoLegs(int n) {
+        return new SearchSpace(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
+                stirrupSpacings, hangersOnly, fixedSkinBar, n);
+    }
+
+    /** Stirrup legs the bars of a layer need: two per {@code barsPerTwoLegs} bars (common practice, no clause). */
+    public int legsFor(int barsInLayer) {
+        return 2 * Math.max(1, (int) Math.ceil(barsInLayer / (double) barsPerTwoLegs));
     }
 }

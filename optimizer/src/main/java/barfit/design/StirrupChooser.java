@@ -49,11 +49,17 @@ public final class StirrupChooser {
      */
     public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
             double zoneLength) {
+        return cheapest(shape, det, d, as, vu, minLegs, Integer.MAX_VALUE, zoneLength);
+    }
+
+    /** As above with at most {@code maxLegs} legs (each leg's bend must hold a bar of each face). */
+    public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
+            int maxLegs, double zoneLength) {
         List<Double> spacings = space.stirrupSpacings();
         Stirrups best = null;
         double bestCost = Double.POSITIVE_INFINITY;
         for (int legs : space.stirrupLegs()) {
-            if (legs < minLegs) {
+            if (legs < minLegs || legs > maxLegs) {
                 continue;
             }
             Stirrups widest = new Stirrups(det.stirrupBar(), legs, spacings.get(spacings.size() - 1));

@@ -29,7 +29,7 @@ public final class CheckInputReader {
     public static CheckInput read(Path file) {
         YFields doc = SettingsReader.root(YamlReader.read(file));
         Settings settings = SettingsReader.read(doc, file);
-        SectionReader sr = new SectionReader(settings);
+        SectionReader common = new SectionReader(settings);
         UnitSystem u = settings.units();
         List<YFields> beams = doc.listOfMaps("beams", "beams");
         if (beams.isEmpty()) {
@@ -44,6 +44,9 @@ public final class CheckInputReader {
             if (first != null) {
                 throw b.error("id", "beam id \"" + id + "\" is used twice (first at line " + first + "); expected unique ids");
             }
+            // a beam's own stirrup bar sets where its bars sit (cover + stirrup + db/2), so it is read first
+            Stirrups stirrups = b.has("stirrups") ? common.stirrups(b.map("stirrups", "stirrups: {bar, legs, spacing}")) : null;
+            SectionReader sr = stirrups == null ? common : new SectionReader(settings.withStirrupBar(stirrups.bar()));
             SectionShape shape = sr.shape(b.map("section", "the section: {width, height}"));
             if (!b.has("bottom") && !b.has("top")) {
                 throw new InputError(b.location(), b.path() + ": beam " + id
@@ -61,7 +64,6 @@ public final class CheckInputReader {
                 double v = b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE));
                 vu = u.toSI(v, Dim.FORCE);
             }
-            Stirrups stirrups = b.has("stirrups") ? sr.stirrups(b.map("stirrups", "stirrups: {bar, legs, spacing}")) : null;
             SkinBars skin = b.has("skin") ? sr.skin(b.map("skin", "skin bars: {bar, spacing}")) : null;
             Span span = sr.span(b);
             BeamSection section = sr.section(shape, layers, stirrups, skin);

@@ -72,7 +72,7 @@ public final class SearchReader {
         UnitSystem u = s.units();
         String len = u.unit(Dim.LENGTH);
         YFields f = doc.map("search", "the search space").allowOnly("widths", "depth", "bar_sizes",
-                "compression_sizes", "max_layers", "stirrups", "max_bar_sizes_per_beam");
+                "compression_sizes", "max_layers", "stirrups", "max_bar_sizes_per_beam", "layer_gap"); // layer_gap: SettingsReader
         List<Double> widths = d.widths();
         if (f.has("widths")) {
             widths = sortedLengths(f, "widths", "web widths, " + len, u);
@@ -122,7 +122,8 @@ public final class SearchReader {
                 spacings = lengthRange(r, u, "stirrup spacings, " + len, 200);
             }
         }
-        return new SearchSpace(widths, depths, bars, comp, layers, stirrupSizes, legs, spacings);
+        return new SearchSpace(widths, depths, bars, comp, layers, stirrupSizes, legs, spacings)
+                .withBarsPerTwoLegs(barsPerTwoLegs(doc));
     }
 
     private static List<Double> sortedLengths(YFields f, String key, String what, UnitSystem u) {

@@ -24,4 +24,10 @@ public record Settings(
     public BarSize stirrupBar() {
         return detailing.stirrupBar();
     }
+
+    /** The same settings with another stirrup bar: a beam's own stirrups place its bars. */
+    public Settings withStirrupBar(BarSize bar) {
+        return bar.equals(detailing.stirrupBar()) ? this : new Settings(file, units, materials, catalog,
+                new Detailing(detailing.cover(), bar, detailing.layerGap(), detailing.exposure()), location);
+    }
 }

@@ -84,8 +84,25 @@ public final class SettingsReader {
                 .map(v -> toSI(units, v, Dim.LENGTH)).orElse(us ? 1.5 * 25.4 : 40.0);
         String stirrupName = doc.optText("stirrup", "the stirrup bar size").orElse(us ? "3" : "10");
         BarSize stirrup = bar(catalog, stirrupName, doc.locationOf("stirrup"), "stirrup");
-        double gap = doc.optPositive("layer_gap", "clear gap between bar layers, " + units.unit(Dim.LENGTH))
+        // layer_gap may stand at the top or under search: (where the search's other layout rules are)
+        YFields gapAt = doc;
+        if (doc.has("search")) {
+            YFields search = doc.map("search", "the search space");
+            if (search.has("layer_gap")) {
+                if (doc.has("layer_gap")) {
+                    throw search.error("layer_gap", "layer_gap is given twice (also at line "
+                            + doc.locationOf("layer_gap").line() + "); expected it once");
+                }
+                gapAt = search;
+            }
+        }
+        double gap = gapAt.optPositive("layer_gap", "clear gap between bar layers, " + units.unit(Dim.LENGTH))
                 .map(v -> toSI(units, v, Dim.LENGTH)).orElse(code.minLayerGap());
+        if (gap < code.minLayerGap() - 1e-9) {
+            throw gapAt.error("layer_gap", "a clear gap of " + fmt(units.fromSI(gap, Dim.LENGTH)) + " "
+                    + units.unit(Dim.LENGTH) + " between layers is below 25.2.2; expected at least "
+                    + fmt(units.fromSI(code.minLayerGap(), Dim.LENGTH)) + " " + units.unit(Dim.LENGTH));
+        }
         Exposure exposure = Exposure.INTERIOR;
         if (doc.has("exposure")) {
             String e = doc.text("exposure", "interior, weather or ground");

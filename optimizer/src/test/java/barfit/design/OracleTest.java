@@ -49,6 +49,8 @@ class OracleTest {
                 assertEquals(ref.cheapestKeys(3), mine, "alternatives — " + where);
             }
         }
-        assertTrue(feasible >= instances / 2, "enough feasible instances to mean something: " + feasible);
+        // spaces with two-leg stirrups only cannot hold more than four bars a layer (the legs rule), so a
+        // little under half of the random spaces have no design
+        assertTrue(feasible >= instances * 2 / 5, "enough feasible instances to mean something: " + feasible);
     }
 }
