@@ -163,20 +163,13 @@ public final class SectionDrawing {
     /**
      * Centres of the bars of one layer across the web, mm from the left face. The outer bars sit inside
      * the stirrup (cover + stirrup + db/2 from each side face, where the section model places them); the
-     * rest are spread evenly between. An inner layer sits directly over (under) bars of the layer
-     * outside it when it has no more bars than that layer.
+     * rest are spread evenly between, as the clear-spacing check of 25.2.1 assumes for every layer.
      */
-    static double[] xs(double width, Detailing det, BarLayer layer, double[] outer) {
+    static double[] xs(double width, Detailing det, BarLayer layer) {
         int n = layer.count();
         double db = layer.bar().diameter();
         double edge = det.cover() + det.stirrupBar().diameter() + db / 2;
         double[] x = new double[n];
-        if (outer != null && outer.length >= n && n >= 2) {
-            for (int i = 0; i < n; i++) {
-                x[i] = outer[(int) Math.round(i * (outer.length - 1) / (double) (n - 1))];
-            }
-            return x;
-        }
         if (n == 1) {
             x[0] = width / 2;
             return x;
@@ -195,17 +188,13 @@ public final class SectionDrawing {
         List<Placed> out = new ArrayList<>();
         double h = v.shape().height();
         for (Face face : Face.values()) {
-            double[] outer = null;
             List<DrawnLayer> onFace = v.layers().stream().filter(l -> l.layer().face() == face)
                     .sorted(Comparator.comparingDouble(l -> l.layer().fromFace())).toList();
             for (DrawnLayer dl : onFace) {
                 BarLayer bl = dl.layer();
-                double[] x = xs(v.shape().width(), v.detailing(), bl, outer);
+                double[] x = xs(v.shape().width(), v.detailing(), bl);
                 double y = face == Face.TOP ? bl.fromFace() : h - bl.fromFace();
                 out.add(new Placed(dl, y, x));
-                if (outer == null) {
-                    outer = x;
-                }
             }
         }
         return out;
@@ -368,76 +357,319 @@ public final class SectionDrawing {
         out.append("<path class=\"stirrup\" d=\"").append(d).append("\" ").append(stroke)
                 .append(" stroke-linejoin=\"round\"/>\n");
         // the two hook ends at the top-left corner: each turns 135 degrees round the corner bar and runs
-        // ext into the core along the diagonal
+        // into the core along the diagonal, cut short where it would run into another bar
+        List<Circle> circles = circles(v, placed);
         double cx = e + r;
         double cy = e + r;
         double k = Math.sqrt(0.5);
         StringBuilder hooks = new StringBuilder();
+        double ax = cx - r * k;
+        double ay = cy + r * k;
+        double ta = tail(ax, ay, k, k, ext, ds / 2, circles);
         hooks.append('M').append(p(m, cx - r, cy)).append(" A").append(rr).append(',').append(rr).append(" 0 0 0 ")
-                .append(p(m, cx - r * k, cy + r * k)).append(" L").append(p(m, cx - r * k + ext * k, cy + r * k + ext * k));
+                .append(p(m, ax, ay)).append(" L").append(p(m, ax + ta * k, ay + ta * k));
+        double bx = cx + r * k;
+        double by = cy - r * k;
+        double tb = tail(bx, by, k, k, ext, ds / 2, circles);
         hooks.append(" M").append(p(m, cx, cy - r)).append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ")
-                .append(p(m, cx + r * k, cy - r * k)).append(" L").append(p(m, cx + r * k + ext * k, cy - r * k + ext * k));
+                .append(p(m, bx, by)).append(" L").append(p(m, bx + tb * k, by + tb * k));
         out.append("<path class=\"stirrup hook\" d=\"").append(hooks).append("\" ").append(stroke)
                 .append(" stroke-linecap=\"butt\"/>\n");
-        for (double x : tieLegs(v, placed, e)) {
+        List<TieLeg> legs = tieLegs(v, placed, e);
+        for (int i = 0; i < legs.size(); i++) {
+            TieLeg leg = legs.get(i);
+            // down the leg, with a 135-degree hook at each end round the bar it wraps (or over the hoop)
+            HookEnd top = leg.end(true, v, e, r, circles);
+            HookEnd bottom = leg.end(false, v, e, r, circles);
+            // a tail stops halfway to the next leg so two tails never meet
+            double leftLimit = (i == 0 ? e : (legs.get(i - 1).x() + leg.x()) / 2);
+            double rightLimit = (i == legs.size() - 1 ? b - e : (legs.get(i + 1).x() + leg.x()) / 2);
+            double tTop = Math.min(tail(top.ex(), top.ey(), top.ux(), top.uy(), ext, ds / 2, circles),
+                    reach(top, leftLimit, rightLimit, ds / 2));
+            double tBottom = Math.min(tail(bottom.ex(), bottom.ey(), bottom.ux(), bottom.uy(), ext, ds / 2, circles),
+                    reach(bottom, leftLimit, rightLimit, ds / 2));
+            String rTop = Svg.px(top.radius() * m.s());
+            String rBottom = Svg.px(bottom.radius() * m.s());
             StringBuilder t = new StringBuilder();
-            // down the leg, then a 135-degree hook at each end (over the hoop's top and bottom legs)
-            t.append('M').append(p(m, x + r + r * k + ext * k, e + r - r * k + ext * k));
-            t.append(" L").append(p(m, x + r + r * k, e + r - r * k));
-            t.append(" A").append(rr).append(',').append(rr).append(" 0 0 0 ").append(p(m, x, e + r));
-            t.append(" L").append(p(m, x, h - e - r));
-            t.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, x - r - r * k, h - e - r + r * k));
-            t.append(" L").append(p(m, x - r - r * k - ext * k, h - e - r + r * k - ext * k));
+            t.append('M').append(p(m, top.ex() + tTop * top.ux(), top.ey() + tTop * top.uy()));
+            t.append(" L").append(p(m, top.ex(), top.ey()));
+            t.append(" A").append(rTop).append(',').append(rTop).append(" 0 0 ").append(top.side() > 0 ? 0 : 1).append(' ')
+                    .append(p(m, leg.x(), top.y()));
+            t.append(" L").append(p(m, leg.x(), bottom.y()));
+            t.append(" A").append(rBottom).append(',').append(rBottom).append(" 0 0 ").append(bottom.side() > 0 ? 0 : 1)
+                    .append(' ').append(p(m, bottom.ex(), bottom.ey()));
+            t.append(" L").append(p(m, bottom.ex() + tBottom * bottom.ux(), bottom.ey() + tBottom * bottom.uy()));
             out.append("<path class=\"stirrup tie\" d=\"").append(t).append("\" ").append(stroke)
                     .append(" stroke-linecap=\"butt\"/>\n");
         }
     }
 
+    /** How far a tail may run before its edge reaches x = left or x = right. */
+    private static double reach(HookEnd hk, double left, double right, double rt) {
+        double limit = hk.ux() > 0 ? right - rt - hk.ex() : hk.ex() - rt - left;
+        return Math.max(0, limit / Math.abs(hk.ux()));
+    }
+
+    /** A circle in the section, mm: a bar's centre and radius. */
+    record Circle(double x, double y, double r) {
+    }
+
+    /** Every longitudinal bar and skin bar drawn. */
+    static List<Circle> circles(View v, List<Placed> placed) {
+        List<Circle> out = new ArrayList<>();
+        for (Placed pl : placed) {
+            double rb = pl.drawn().layer().bar().diameter() / 2;
+            for (double x : pl.x()) {
+                out.add(new Circle(x, pl.y(), rb));
+            }
+        }
+        if (v.skin() != null) {
+            for (double[] c : skinCentres(v, placed)) {
+                out.add(new Circle(c[0], c[1], v.skin().bar().diameter() / 2));
+            }
+        }
+        return out;
+    }
+
     /**
-     * x (mm) of each crosstie leg: beside an inner bar of the fullest layer when the legs split that
-     * layer into groups of distinct bars, else evenly across the hoop.
+     * How far a hook's tail may run from (x, y) along the unit vector (ux, uy), at most {@code ext}, before
+     * a bar of thickness 2 {@code rt} would overlap a circle. A circle the tail starts against and leaves
+     * is the bar the hook wraps.
      */
-    static List<Double> tieLegs(View v, List<Placed> placed, double e) {
+    static double tail(double x, double y, double ux, double uy, double ext, double rt, List<Circle> circles) {
+        double len = ext;
+        for (Circle c : circles) {
+            double reach = c.r() + rt - 1e-6;
+            double wx = x - c.x();
+            double wy = y - c.y();
+            double along = wx * ux + wy * uy;
+            double gap = wx * wx + wy * wy - reach * reach;
+            if (gap < 0) {
+                if (along < 0) {
+                    len = 0;
+                }
+                continue;
+            }
+            double disc = along * along - gap;
+            if (disc < 0 || along >= 0) {
+                continue;
+            }
+            len = Math.min(len, Math.max(0, -along - Math.sqrt(disc)));
+        }
+        return len;
+    }
+
+    /**
+     * One end of a crosstie: the leg stops at y, bends 135 degrees towards {@code side} (+1 right) with
+     * centreline radius {@code radius} and leaves at (ex, ey) along (ux, uy).
+     */
+    record HookEnd(double y, double side, double radius, double ex, double ey, double ux, double uy) {
+    }
+
+    /**
+     * A crosstie leg: the x of its centreline (mm) and the bar each end wraps, or null where no bar of
+     * that face's outer layer touches the leg and the hook goes over the hoop.
+     */
+    record TieLeg(double x, Circle top, Circle bottom) {
+        HookEnd end(boolean atTop, View v, double e, double hoopRadius, List<Circle> all) {
+            double ds = v.stirrups().bar().diameter();
+            double b = v.shape().width();
+            double h = v.shape().height();
+            Circle bar = atTop ? top : bottom;
+            if (bar != null) {
+                // drawn tight round the bar, so the leg stays against it
+                return hook(atTop, Math.signum(bar.x() - x), bar.r() + ds / 2, bar.x(), bar.y());
+            }
+            // over the hoop: turned towards the core, or away from it, or bent tighter, whichever first
+            // keeps clear of the bars beside the leg
+            double in = x < b / 2 ? 1 : -1;
+            HookEnd last = null;
+            for (double rad = hoopRadius; rad >= ds - 1e-9; rad -= ds / 4) {
+                for (double sd : new double[] {in, -in}) {
+                    double cy = atTop ? e + rad : h - e - rad;
+                    last = last == null || sd == in ? hook(atTop, sd, rad, x + sd * rad, cy) : last;
+                    if (arcClear(atTop, hook(atTop, sd, rad, x + sd * rad, cy), all, ds / 2)) {
+                        return hook(atTop, sd, rad, x + sd * rad, cy);
+                    }
+                }
+            }
+            return last;
+        }
+
+        private HookEnd hook(boolean atTop, double side, double radius, double cx, double cy) {
+            double k = Math.sqrt(0.5);
+            double v1 = atTop ? -1 : 1;
+            return new HookEnd(cy, side, radius, cx + radius * side * k, cy + radius * v1 * k, side * k, -v1 * k);
+        }
+
+        /** Whether a hook's bend, from the leg round 135 degrees, keeps clear of every bar. */
+        private boolean arcClear(boolean atTop, HookEnd hk, List<Circle> all, double rt) {
+            double cx = x + hk.side() * hk.radius();
+            double a0 = hk.side() > 0 ? Math.PI : 0;
+            double sweep = (atTop ? hk.side() : -hk.side()) * 0.75 * Math.PI;
+            for (int i = 0; i <= 24; i++) {
+                double a = a0 + sweep * i / 24;
+                double px = cx + hk.radius() * Math.cos(a);
+                double py = hk.y() + hk.radius() * Math.sin(a);
+                for (Circle c : all) {
+                    if (Math.hypot(px - c.x(), py - c.y()) < c.r() + rt - 1e-6) {
+                        return false;
+                    }
+                }
+            }
+            return true;
+        }
+    }
+
+    /**
+     * The crosstie legs (the legs beyond two), each vertical and beside bars, never through one: it
+     * touches an interior bar of the tension face's outer layer, one roughly at each third (quarter...)
+     * point of the width and just outside it, mirrored about the centre line. Where that layer has too
+     * few interior bars the outer layer of the other face is used, and failing both the leg stands at its
+     * even position, moved clear of every bar.
+     */
+    static List<TieLeg> tieLegs(View v, List<Placed> placed, double e) {
         int ties = v.stirrups().legs() - 2;
-        List<Double> out = new ArrayList<>();
+        List<TieLeg> out = new ArrayList<>();
         if (ties <= 0) {
             return out;
         }
-        Placed fullest = null;
-        for (Placed pl : placed) {
-            if (fullest == null || pl.x().length > fullest.x().length) {
-                fullest = pl;
-            }
-        }
         double b = v.shape().width();
-        double ds = v.stirrups().bar().diameter();
-        if (fullest != null) {
-            int n = fullest.x().length;
-            int legs = v.stirrups().legs();
-            List<Integer> idx = new ArrayList<>();
-            for (int k = 1; k <= ties; k++) {
-                int i = (int) Math.round(k * (n - 1) / (double) (legs - 1));
-                if (i <= 0 || i >= n - 1 || idx.contains(i)) {
-                    idx.clear();
-                    break;
-                }
-                idx.add(i);
+        double rt = v.stirrups().bar().diameter() / 2;
+        List<Circle> all = circles(v, placed);
+        Face tension = v.bending().tensionFace();
+        Face other = tension == Face.TOP ? Face.BOTTOM : Face.TOP;
+        List<Circle> first = interior(outerLayer(placed, tension));
+        List<Circle> second = interior(outerLayer(placed, other));
+        List<Circle> otherOuter = layerCircles(outerLayer(placed, other));
+        List<Double> xs = new ArrayList<>();
+        List<Circle> used = new ArrayList<>();
+        double lo = e + 2 * rt;
+        for (int k = 1; k <= ties / 2; k++) {
+            double target = e + (b - 2 * e) * k / (ties + 1);
+            Double x = pick(target, first, otherOuter, all, used, lo, b / 2 - rt, b, rt);
+            if (x == null) {
+                x = pick(target, second, List.of(), all, used, lo, b / 2 - rt, b, rt);
             }
-            if (idx.size() == ties) {
-                double db = fullest.drawn().layer().bar().diameter();
-                for (int k = 1; k <= ties; k++) {
-                    double x = fullest.x()[idx.get(k - 1)];
-                    // the leg touches its bar on the side nearer where evenly spaced legs would be
-                    double even = e + (b - 2 * e) * k / (legs - 1);
-                    out.add(even < x ? x - db / 2 - ds / 2 : x + db / 2 + ds / 2);
-                }
-                return out;
+            if (x == null) {
+                x = nudge(target, all, lo, b / 2 - rt, rt);
             }
+            xs.add(x);
+            xs.add(b - x);
+            lo = x + 2 * rt;
         }
-        for (int k = 1; k <= ties; k++) {
-            out.add(e + (b - 2 * e) * k / (ties + 1));
+        if (ties % 2 == 1) {
+            Double x = pick(b / 2, first, otherOuter, all, used, lo, b - lo, b, rt);
+            if (x == null) {
+                x = pick(b / 2, second, List.of(), all, used, lo, b - lo, b, rt);
+            }
+            if (x == null) {
+                x = nudge(b / 2, all, lo, b - lo, rt);
+            }
+            xs.add(x);
+        }
+        xs.sort(Double::compare);
+        List<Circle> topOuter = layerCircles(outerLayer(placed, Face.TOP));
+        List<Circle> bottomOuter = layerCircles(outerLayer(placed, Face.BOTTOM));
+        for (double x : xs) {
+            out.add(new TieLeg(x, touching(x, topOuter, rt), touching(x, bottomOuter, rt)));
         }
         return out;
+    }
+
+    /** The layer nearest a face, or null. */
+    private static Placed outerLayer(List<Placed> placed, Face face) {
+        Placed best = null;
+        for (Placed pl : placed) {
+            BarLayer bl = pl.drawn().layer();
+            if (bl.face() == face && (best == null || bl.fromFace() < best.drawn().layer().fromFace())) {
+                best = pl;
+            }
+        }
+        return best;
+    }
+
+    private static List<Circle> layerCircles(Placed pl) {
+        List<Circle> out = new ArrayList<>();
+        if (pl != null) {
+            for (double x : pl.x()) {
+                out.add(new Circle(x, pl.y(), pl.drawn().layer().bar().diameter() / 2));
+            }
+        }
+        return out;
+    }
+
+    /** The bars of a layer other than its two corner bars. */
+    private static List<Circle> interior(Placed pl) {
+        List<Circle> all = layerCircles(pl);
+        return all.size() <= 2 ? List.of() : all.subList(1, all.size() - 1);
+    }
+
+    /** Whether a leg at x is clear of every bar (touching allowed). */
+    private static boolean clear(double x, List<Circle> all, double rt) {
+        for (Circle c : all) {
+            if (Math.abs(c.x() - x) < c.r() + rt - 1e-6) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** The bar of a layer that a leg at x touches, or null. */
+    private static Circle touching(double x, List<Circle> layer, double rt) {
+        for (Circle c : layer) {
+            if (Math.abs(Math.abs(c.x() - x) - (c.r() + rt)) < 1e-6) {
+                return c;
+            }
+        }
+        return null;
+    }
+
+    /**
+     * A leg position in [lo, hi] beside an unused bar of {@code bars}, the bar nearest the target first;
+     * of its two sides, one that also touches a bar of the other face first, then the one nearer the
+     * side face (so the hook's tail turns into the core).
+     */
+    private static Double pick(double target, List<Circle> bars, List<Circle> otherFace, List<Circle> all,
+            List<Circle> used, double lo, double hi, double b, double rt) {
+        List<Circle> order = new ArrayList<>(bars);
+        order.sort(Comparator.comparingDouble(c -> Math.abs(c.x() - target)));
+        for (Circle c : order) {
+            if (used.contains(c)) {
+                continue;
+            }
+            double out = c.x() <= b / 2 ? -1 : 1;
+            double[] sides = {c.x() + out * (c.r() + rt), c.x() - out * (c.r() + rt)};
+            if (touching(sides[1], otherFace, rt) != null && touching(sides[0], otherFace, rt) == null) {
+                sides = new double[] {sides[1], sides[0]};
+            }
+            for (double x : sides) {
+                if (x >= lo - 1e-9 && x <= hi + 1e-9 && clear(x, all, rt)) {
+                    used.add(c);
+                    return x;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** The clear position in [lo, hi] nearest the target: the target itself or just beside a bar. */
+    private static double nudge(double target, List<Circle> all, double lo, double hi, double rt) {
+        List<Double> options = new ArrayList<>();
+        options.add(target);
+        for (Circle c : all) {
+            options.add(c.x() - c.r() - rt);
+            options.add(c.x() + c.r() + rt);
+        }
+        double best = target;
+        double dist = Double.POSITIVE_INFINITY;
+        for (double x : options) {
+            if (x >= lo - 1e-9 && x <= hi + 1e-9 && clear(x, all, rt) && Math.abs(x - target) < dist) {
+                best = x;
+                dist = Math.abs(x - target);
+            }
+        }
+        return best;
     }
 
     private static String p(Mm m, double x, double y) {
