@@ -55,9 +55,19 @@ public final class BeamJson {
         proof.put("solver", "CP-SAT");
         proof.put("status", pr.status());
         proof.put("basis", "per span");
-        proof.put("objective", pr.objective() / 1e6);
-        proof.put("bound", pr.bound() / 1e6);
-        proof.put("gap", pr.gap());
+        if (pr.status().equals("infeasible") || pr.status().equals("unknown")) { // no design: nothing to bound
+            proof.putNull("objective");
+            proof.putNull("bound");
+            proof.putNull("gap");
+        } else if (pr.booleans() == 0) { // stopped by the time limit before a proof
+            proof.put("objective", pr.objective() / 1e6);
+            proof.putNull("bound");
+            proof.putNull("gap");
+        } else {
+            proof.put("objective", pr.objective() / 1e6);
+            proof.put("bound", pr.bound() / 1e6);
+            proof.put("gap", pr.gap());
+        }
         proof.put("booleans", pr.booleans());
         proof.put("frames", pr.frames());
         proof.put("frames_evaluated", pr.framesEvaluated());

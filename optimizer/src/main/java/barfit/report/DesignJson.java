@@ -6,6 +6,7 @@ import barfit.design.Design;
 import barfit.design.DesignOutcome;
 import barfit.design.Layout;
 import barfit.design.Proof;
+import barfit.design.Selection;
 import barfit.input.Settings;
 import barfit.section.CheckResult;
 import barfit.section.trail.Dim;
@@ -149,9 +150,19 @@ public final class DesignJson {
         o.put("solver", "CP-SAT");
         o.put("status", p.status().name().toLowerCase(java.util.Locale.ROOT));
         o.put("basis", Money.perLengthLabel(u));
-        o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
-        o.put("bound", round2(Money.perLength(p.bound() / 10_000.0, u)));
-        o.put("gap", p.gap());
+        if (p.status() == Selection.Status.INFEASIBLE) { // nothing passes: no objective to bound
+            o.putNull("objective");
+            o.putNull("bound");
+            o.putNull("gap");
+        } else if (p.status() == Selection.Status.FEASIBLE && p.bound() == 0) { // stopped before a proof
+            o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
+            o.putNull("bound");
+            o.putNull("gap");
+        } else {
+            o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
+            o.put("bound", round2(Money.perLength(p.bound() / 10_000.0, u)));
+            o.put("gap", p.gap());
+        }
         o.put("candidates", p.candidates());
         o.put("frames", p.stats().frames());
         o.put("frames_evaluated", p.stats().framesEvaluated());
