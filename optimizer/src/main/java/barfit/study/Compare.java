@@ -75,7 +75,8 @@ public final class Compare {
         for (double w = widths.get(widths.size() - 1) + step; w <= maxWidth + 1e-9; w += step) {
             widths.add(w);
         }
-        options.add(new Option("widen", "widths up to " + say.length(maxWidth) + ", h ≤ " + say.length(h),
+        options.add(new Option("widen", "widths up to " + say.length(widths.get(widths.size() - 1)) + ", h ≤ "
+                + say.length(h),
                 t.design(h, space.withWidths(widths), m, cost, true), null, null));
         for (double fc : fcs) {
             Materials mf = new Materials(fc, m.fy(), m.fyt(), m.aggregate(), m.lambda());
