@@ -32,6 +32,9 @@ public final class StudyJson {
         o.put("feasible", s.feasible());
         if (!s.feasible()) {
             o.put("reason", s.proof());
+            if (s.limit() != null && !s.limit().isEmpty()) {
+                o.put("limit", s.limit());
+            }
             return;
         }
         Json.put(o, "width", s.width(), Dim.LENGTH, u);
@@ -46,6 +49,10 @@ public final class StudyJson {
         c.put("depth_premium", DesignJson.round2(b.depthPremium()));
         o.put("compression_steel_needed", s.compressionNeeded());
         o.put("compression_steel_used", s.compressionUsed());
+        if (s.compressionNeeded()) {
+            o.put("hangers_alone_fail", s.hangersFail());
+        }
+        o.put("stirrups", s.stirrups());
         ObjectNode t = o.putObject("tension");
         t.put("face", s.tensionFace());
         ArrayNode tl = t.putArray("layers");
@@ -93,6 +100,11 @@ public final class StudyJson {
                 b.putNull("recommended");
             } else {
                 b.put("recommended", r.recommended());
+            }
+            if (r.recommendedFc() == null) {
+                b.putNull("recommended_fc");
+            } else {
+                Json.put(b, "recommended_fc", r.recommendedFc(), Dim.STRESS, u);
             }
             ArrayNode reasons = b.putArray("reasons");
             r.reasons().forEach(reasons::add);

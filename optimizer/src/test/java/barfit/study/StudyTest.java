@@ -135,4 +135,62 @@ class StudyTest {
             assertFalse(r.err().contains("Exception"), r.err());
         }
     }
+
+    @Test
+    void strongerConcreteRecommendationNamesItsGrade() throws Exception {
+        // With a dear storey height the 50 MPa option within the cap is cheapest (rates invented, no source).
+        String f = "src/test/resources/studies/transfer-girder-premium-si.yaml";
+        Cli json = Cli.run("compare", f, "--format", "json");
+        assertEquals(0, json.exit(), json.err());
+        JsonNode beam = new ObjectMapper().readTree(json.out()).get("beams").get(0);
+        assertEquals("fc", beam.get("recommended").asText());
+        assertEquals(50, beam.get("recommended_fc").asDouble(), 1e-9);
+        int fcOptions = 0;
+        for (JsonNode o : beam.get("options")) {
+            assertEquals(o.get("kind").asText().equals("fc"), o.has("fc"), o.toString());
+            fcOptions += o.get("kind").asText().equals("fc") ? 1 : 0;
+            assertTrue(o.get("stirrups").asText().contains("legs"), o.toString());
+        }
+        assertEquals(3, fcOptions);
+        Cli text = Cli.run("compare", f);
+        assertEquals(0, text.exit(), text.err());
+        List<String> marked = text.out().lines().filter(l -> l.contains("◀")).toList();
+        assertEquals(1, marked.size(), text.out());
+        assertTrue(marked.get(0).contains("f'c = 50 MPa"), marked.get(0));
+        assertTrue(text.out().contains("recommended: fc, f'c = 50 MPa"), text.out());
+        assertTrue(text.out().contains("depth premium"), "the cost is shown term by term: " + text.out());
+        Cli other = Cli.run("compare", "src/test/resources/studies/doubly-textbook-us.yaml", "--format", "json", "--fc",
+                "5000");
+        JsonNode b2 = new ObjectMapper().readTree(other.out()).get("beams").get(0);
+        assertTrue(b2.get("recommended_fc").isNull() || b2.get("recommended").asText().equals("fc"), b2.toString());
+    }
+
+    @Test
+    void cappedSpanWithoutServiceLoadsIsToldToGiveThem() {
+        // 9.6 m span, both ends continuous: Table 9.3.1.1 asks h >= l/21 = 457 mm (ACI 318-19 Table 9.3.1.1), above
+        // the 400 mm cap; without service loads deflection (24.2) cannot be computed, whatever the width or f'c.
+        Cli r = Cli.run("compare", "src/test/resources/studies/span-capped-no-service-si.yaml");
+        assertEquals(0, r.exit(), r.err());
+        String capLine = r.out().lines().filter(l -> l.contains("Nothing passes at the cap")).findFirst().orElseThrow();
+        assertTrue(capLine.contains("service"), capLine);
+        assertTrue(capLine.contains("cannot help"), capLine);
+        assertFalse(r.out().contains("widened or made stronger"), r.out());
+    }
+
+    @Test
+    void spanAtCapSaysWhatGovernsItsCompressionSteel() {
+        // The capped middle span of the clinic example (invented): its layout at the cap carries compression steel
+        // for deflection (24.2.4.1 lambda_Delta falls with rho'), but a layout without it also passes at the cap.
+        Cli r = Cli.run("compare", "src/test/resources/studies/span-capped-si.yaml");
+        assertEquals(0, r.exit(), r.err());
+        String out = r.out();
+        String atCap = out.lines().filter(l -> l.contains("At the cap the beam is")).findFirst().orElseThrow();
+        assertFalse(atCap.contains("without it the section fails"), atCap);
+        assertTrue(atCap.contains("deflection") && atCap.contains("matter of cost"), atCap);
+        String header = out.lines().filter(l -> l.strip().startsWith("option ") && l.contains("b × h")).findFirst()
+                .orElseThrow();
+        assertTrue(header.contains(" bottom ") && header.contains(" top "), header);
+        assertFalse(header.contains("compression  "), header);
+        assertTrue(out.contains("tension steel there"), out);
+    }
 }
