@@ -111,6 +111,9 @@ final class SweepCommand implements Callable<Integer> {
         for (int i = 0; lo + i * st <= hi + 1e-6; i++) {
             caps.add(Math.round((lo + i * st) * 1e6) / 1e6);
         }
+        if (caps.get(caps.size() - 1) < hi - 1e-6) {
+            caps.add(hi); // --to off the step grid: the range ends where it was asked to
+        }
         SolverOptions options = new SolverOptions(60, Math.max(1, workers), seed);
         List<Target> targets = Studies.targets(in, beam, file, options);
         if (plot != null && targets.size() != 1) {

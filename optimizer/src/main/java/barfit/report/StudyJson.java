@@ -132,8 +132,7 @@ public final class StudyJson {
                     Json.put(x, "width", s.width(), Dim.LENGTH, u);
                     Json.put(x, "height", s.height(), Dim.LENGTH, u);
                     x.put("compression_steel_needed", s.compressionNeeded());
-                    x.put("hangers_only_possible", r.compressionNeededBelow() != null
-                            && p.cap() >= r.compressionNeededBelow() - 1e-9);
+                    x.put("hangers_only_possible", r.hangersFrom() != null && p.cap() >= r.hangersFrom() - 1e-9);
                     x.put("tension", s.tension());
                     x.put("eps_t", CheckJson.round(s.epsT()));
                 } else {
@@ -150,6 +149,16 @@ public final class StudyJson {
             } else {
                 Json.put(b, "compression_needed_below", r.compressionNeededBelow(), Dim.LENGTH, u);
             }
+            // which a null compression_needed_below means: needed at every cap of the range, or at none
+            b.put("compression_needed_everywhere", r.compression().equals("everywhere"));
+            b.put("compression_note", switch (r.compression()) {
+                case "below" -> "needed below compression_needed_below";
+                case "everywhere" -> "needed at every cap in the range: the minimum hangers alone work at no depth up to "
+                        + "the last cap";
+                default -> "not needed within the range: the minimum hangers alone can work at every cap";
+            });
+            Json.put(b, "first_cap", r.firstCap(), Dim.LENGTH, u);
+            Json.put(b, "last_cap", r.lastCap(), Dim.LENGTH, u);
             ObjectNode chosen = b.putObject("design");
             Json.put(chosen, "cap", r.chosenCap(), Dim.LENGTH, u);
             summary(chosen, r.chosen(), u, perBeam.get(i));

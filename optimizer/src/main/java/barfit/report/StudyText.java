@@ -109,13 +109,18 @@ public final class StudyText {
                         s.feasible() ? compression(s) : "", s.feasible() ? Words.fixed(s.epsT(), 5) : "");
             }
             t.write("  ", out);
-            out.append("  shallowest cap with a passing design: ").append(r.shallowestFeasible() == null ? "none in range"
+            String range = u.compact(r.firstCap(), Dim.LENGTH) + " to " + u.compact(r.lastCap(), Dim.LENGTH) + " "
+                    + u.unit(Dim.LENGTH);
+            out.append("  shallowest cap with a passing design: ").append(r.shallowestFeasible() == null
+                    ? "not within the range (no cap from " + range + " passes)"
                     : u.compact(r.shallowestFeasible(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)).append('\n');
-            out.append("  compression steel is necessary below: ").append(r.compressionNeededBelow() == null
-                    ? "every cap in range (no layout works with the minimum hangers alone)"
-                    : u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
-                            + " (under it, every passing layout needs compression steel beyond the minimum hangers)")
-                    .append('\n');
+            out.append("  compression steel is necessary below: ").append(switch (r.compression()) {
+                case "below" -> u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
+                        + " (under it, every passing layout needs compression steel beyond the minimum hangers)";
+                case "everywhere" -> "every cap in the range (the minimum hangers alone work at no depth up to "
+                        + u.compact(r.lastCap(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ")";
+                default -> "not within the range (the minimum hangers alone can work at every cap from " + range + ")";
+            }).append('\n');
             if (r.chosen().feasible()) {
                 out.append("  design (cap ").append(u.compact(r.chosenCap(), Dim.LENGTH)).append(' ')
                         .append(u.unit(Dim.LENGTH)).append(") chooses ").append(size(r.chosen(), u)).append(" at ")

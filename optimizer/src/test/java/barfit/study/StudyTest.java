@@ -193,4 +193,31 @@ class StudyTest {
         assertFalse(header.contains("compression  "), header);
         assertTrue(out.contains("tension steel there"), out);
     }
+
+    @Test
+    void sweepReportsOnlyWithinTheRangeAsked() throws Exception {
+        // The transfer girder (invented) works with the minimum hangers alone from h = 725 mm; a range that stops
+        // short of it needs compression steel at every cap, one that starts beyond it at none.
+        String f = "src/test/resources/studies/transfer-girder-premium-si.yaml";
+        Cli low = Cli.run("sweep", f, "--from", "612", "--to", "700", "--format", "json");
+        assertEquals(0, low.exit(), low.err());
+        JsonNode b = new ObjectMapper().readTree(low.out()).get("beams").get(0);
+        JsonNode pts = b.get("points");
+        assertEquals(700, pts.get(pts.size() - 1).get("cap").asDouble(), 1e-9, "--to off the step grid is kept");
+        assertTrue(b.get("shallowest_feasible").asDouble() >= 612, b.toString());
+        assertTrue(b.get("compression_needed_below").isNull());
+        assertTrue(b.get("compression_needed_everywhere").asBoolean(), b.toString());
+        Cli lowText = Cli.run("sweep", f, "--from", "612", "--to", "700");
+        assertTrue(lowText.out().contains("every cap in the range (the minimum hangers alone work at no depth up to 700"),
+                lowText.out());
+        Cli high = Cli.run("sweep", f, "--from", "750", "--to", "800", "--format", "json");
+        JsonNode h = new ObjectMapper().readTree(high.out()).get("beams").get(0);
+        assertTrue(h.get("compression_needed_below").isNull());
+        assertFalse(h.get("compression_needed_everywhere").asBoolean(), h.toString());
+        assertEquals(750, h.get("shallowest_feasible").asDouble(), 1e-9);
+        Cli whole = Cli.run("sweep", f, "--format", "json");
+        JsonNode w = new ObjectMapper().readTree(whole.out()).get("beams").get(0);
+        assertEquals(725, w.get("compression_needed_below").asDouble(), 1e-9, w.toString());
+        assertFalse(w.get("compression_needed_everywhere").asBoolean());
+    }
 }
