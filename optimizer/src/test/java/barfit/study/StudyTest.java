@@ -220,4 +220,18 @@ class StudyTest {
         assertEquals(725, w.get("compression_needed_below").asDouble(), 1e-9, w.toString());
         assertFalse(w.get("compression_needed_everywhere").asBoolean());
     }
+
+    @Test
+    void plotAnnotationsStayOnTheCanvas() throws Exception {
+        // The capped span's design sits at the first cap, the left edge of the plot: its label must not run off it.
+        java.nio.file.Path svg = java.nio.file.Files.createTempDirectory("plot").resolve("span.svg");
+        Cli r = Cli.run("sweep", "src/test/resources/studies/span-capped-si.yaml", "--plot", svg.toString());
+        assertEquals(0, r.exit(), r.err());
+        var m = java.util.regex.Pattern.compile("<text x='([-0-9.]+)' y='([-0-9.]+)'[^>]*>design:")
+                .matcher(java.nio.file.Files.readString(svg));
+        assertTrue(m.find(), "the design is labelled");
+        double x = Double.parseDouble(m.group(1));
+        double y = Double.parseDouble(m.group(2));
+        assertTrue(x >= 0 && x <= 800 - 90 && y >= 0 && y <= 480, "label at " + x + ", " + y);
+    }
 }
