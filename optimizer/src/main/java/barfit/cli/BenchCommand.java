@@ -80,6 +80,14 @@ final class BenchCommand implements Callable<Integer> {
             out.flush();
             return Main.OK;
         }
+        if (instances < 1) {
+            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--instances"),
+                    "expected at least 1 single section to time, got " + instances);
+        }
+        if (beams < 0) {
+            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--beams"),
+                    "expected 0 (skip the spans) or more whole spans to time, got " + beams);
+        }
         out.println("barfit bench: single sections, default search space, 1 CP-SAT worker, seed " + seed);
         var f = SectionBench.run(instances, Math.max(1, every), seed, out);
         out.printf(Locale.ROOT, "optimizer median %.2f ms (max %.2f ms); exhaustive median %.0f ms over %d layouts "
@@ -97,15 +105,20 @@ final class BenchCommand implements Callable<Integer> {
                     b.speedup(), b.equalOptimum());
             equal &= b.equalOptimum();
             beamJson = String.format(Locale.ROOT, ", \"spans\": %d, \"span_optimizer_ms_median\": %.3f, "
-                    + "\"span_reduced_optimizer_ms_median\": %.3f, \"span_exhaustive_ms_median\": %.1f, "
-                    + "\"span_speedup\": %.1f, \"span_equal_optimum\": %s", b.instances(), b.optimizerMsMedian(),
-                    b.reducedOptimizerMsMedian(), b.exhaustiveMsMedian(), b.speedup(), b.equalOptimum());
+                    + "\"span_reduced_optimizer_ms_median\": %s, \"span_exhaustive_ms_median\": %s, "
+                    + "\"span_speedup\": %s, \"span_equal_optimum\": %s", b.instances(), b.optimizerMsMedian(),
+                    json(b.reducedOptimizerMsMedian(), 3), json(b.exhaustiveMsMedian(), 1), json(b.speedup(), 1), b.equalOptimum());
         }
-        out.printf(Locale.ROOT, "{\"instances\": %d, \"optimizer_ms_median\": %.3f, \"exhaustive_ms_median\": %.1f, "
-                + "\"speedup\": %.1f, \"equal_optimum\": %s%s}%n", f.instances(), f.optimizerMsMedian(),
-                f.exhaustiveMsMedian(), f.speedup(), f.equalOptimum(), beamJson);
+        out.printf(Locale.ROOT, "{\"instances\": %d, \"optimizer_ms_median\": %.3f, \"exhaustive_ms_median\": %s, "
+                + "\"speedup\": %s, \"equal_optimum\": %s%s}%n", f.instances(), f.optimizerMsMedian(),
+                json(f.exhaustiveMsMedian(), 1), json(f.speedup(), 1), f.equalOptimum(), beamJson);
         out.flush();
         return equal ? Main.OK : Main.FAILED;
+    }
+
+    /** A figure for the JSON line, or null when there is none (JSON has no NaN). */
+    static String json(double v, int decimals) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%." + decimals + "f", v) : "null";
     }
 
     private int makeSchedule(PrintWriter out) {

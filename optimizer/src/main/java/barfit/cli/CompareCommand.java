@@ -38,8 +38,8 @@ final class CompareCommand implements Callable<Integer> {
     @Option(names = "--cap", paramLabel = "DEPTH", description = "headroom cap to study (mm or in; default: the beam's max_depth)")
     Double cap;
 
-    @Option(names = "--max-width", paramLabel = "WIDTH", description = "widest web for the widen option (default: two "
-            + "width steps beyond the search's widest)")
+    @Option(names = "--max-width", paramLabel = "WIDTH", description = "widest web for the widen option, from one "
+            + "width step beyond the search's widest to 5 times it (default: two width steps beyond)")
     Double maxWidth;
 
     @Option(names = "--fc", paramLabel = "FC", split = ",", description = "concrete strengths to try (MPa or psi), e.g. 35,40")
@@ -64,9 +64,13 @@ final class CompareCommand implements Callable<Integer> {
         double widest = widths.get(widths.size() - 1);
         double step = Compare.widthStep(widths, u == barfit.units.UnitSystem.US ? 50.8 : 50);
         double maxW = maxWidth == null ? widest + 2 * step : u.toSI(maxWidth, Dim.LENGTH);
-        if (maxWidth != null && !(maxW > widest)) {
-            throw new InputError(Location.ofFile("--max-width"), "expected a width greater than the search's widest ("
-                    + u.compact(widest, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + "), got " + Studies.fmt(maxWidth));
+        double widestAllowed = 5 * widest;
+        if (maxWidth != null && !(maxW >= widest + step - 1e-6 && maxW <= widestAllowed + 1e-6)) {
+            throw new InputError(Location.ofFile("--max-width"), "expected a width from "
+                    + u.compact(widest + step, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (one width step of " + u.compact(step, Dim.LENGTH)
+                    + " beyond the search's widest, " + u.compact(widest, Dim.LENGTH) + ") to "
+                    + u.compact(widestAllowed, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (5 times the widest), got "
+                    + Studies.fmt(maxWidth));
         }
         List<Double> fcMpa = new ArrayList<>();
         List<Double> asked = fcs;
@@ -79,18 +83,28 @@ final class CompareCommand implements Callable<Integer> {
                 }
             }
         }
+        String byKey = "costs." + (u == barfit.units.UnitSystem.US ? "concrete_per_yd3_by_fc" : "concrete_per_m3_by_fc");
         for (double v : asked) {
             double mpa = u.toSI(v, Dim.STRESS);
             double lo = u == barfit.units.UnitSystem.US ? 2500 : 17;
             double hi = u == barfit.units.UnitSystem.US ? 20000 : 140;
-            if (v < lo || v > hi) {
+            if (!(v >= lo && v <= hi)) {
                 throw new InputError(Location.ofFile("--fc"), "expected f'c between " + Studies.fmt(lo) + " and "
                         + Studies.fmt(hi) + " " + u.unit(Dim.STRESS) + ", got " + Studies.fmt(v));
             }
             if (Double.isNaN(in.costs().concreteAt(mpa))) {
-                throw new InputError(Location.ofFile("--fc"), "no concrete rate for f'c = " + Studies.fmt(v) + " "
-                        + u.unit(Dim.STRESS) + "; expected it within the grades of costs."
-                        + (u == barfit.units.UnitSystem.US ? "concrete_per_yd3_by_fc" : "concrete_per_m3_by_fc"));
+                String grade = Studies.fmt(v) + " " + u.unit(Dim.STRESS);
+                if (fcs != null) {
+                    throw new InputError(Location.ofFile("--fc"), "no concrete rate for f'c = " + grade
+                            + "; expected it within the grades of " + byKey);
+                }
+                // the grade is one compare tries by default: the rate table in the file does not reach it
+                Location at = in.costs().concreteByFcAt() != null ? in.costs().concreteByFcAt()
+                        : Location.ofFile(file.toString());
+                throw new InputError(at, byKey + ": no rate for f'c = " + grade + ", a grade compare tries by default "
+                        + "(those of " + String.join(", ", asked.stream().map(Studies::fmt).toList()) + " "
+                        + u.unit(Dim.STRESS) + " above the file's f'c); expected a rate for it, or --fc with grades "
+                        + "the table covers");
             }
             fcMpa.add(mpa);
         }

@@ -65,6 +65,6 @@ final class Studies {
     }
 
     static String fmt(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+        return Double.isFinite(v) && v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
     }
 }

@@ -65,8 +65,26 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--seed", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
     int seed;
 
+    /** The plot must go to a new (or, with --force, an existing) file in an existing, writable directory. */
+    private void checkPlotFile() {
+        Location at = Location.ofFile(plot.toString());
+        if (Files.isDirectory(plot)) {
+            throw new InputError(at, "is a directory; expected an SVG file name for --plot");
+        }
+        if (Files.exists(plot) && !force) {
+            throw new InputError(at, "the file exists; expected a new file name, or --force to overwrite it");
+        }
+        Path dir = plot.toAbsolutePath().getParent();
+        if (dir == null || !Files.isDirectory(dir)) {
+            throw new InputError(at, "its directory does not exist; expected --plot in an existing directory");
+        }
+        if (!Files.isWritable(dir) || Files.exists(plot) && !Files.isWritable(plot)) {
+            throw new InputError(at, "not writable; expected --plot to name a file barfit may write");
+        }
+    }
+
     @Override
-    public Integer call() throws IOException {
+    public Integer call() {
         DesignInput in = DesignInputReader.read(file);
         var u = in.settings().units();
         List<Double> depths = in.space().depths();
@@ -82,16 +100,26 @@ final class SweepCommand implements Callable<Integer> {
         if ((hi - lo) / st > 400) {
             throw new InputError(Location.ofFile("--step"), "the range gives more than 400 caps; expected a larger step");
         }
-        if (plot != null && Files.exists(plot) && !force) {
-            throw new InputError(Location.ofFile(plot.toString()), "the file exists; expected a new file name, or --force "
-                    + "to overwrite it");
+        if (csv && format == OutputFormat.json) {
+            throw new InputError(Location.ofFile("--csv"), "--csv and --format json ask for two outputs; expected one of "
+                    + "them");
+        }
+        if (plot != null) {
+            checkPlotFile();
         }
         List<Double> caps = new ArrayList<>();
         for (int i = 0; lo + i * st <= hi + 1e-6; i++) {
             caps.add(Math.round((lo + i * st) * 1e6) / 1e6);
         }
+        if (caps.get(caps.size() - 1) < hi - 1e-6) {
+            caps.add(hi); // --to off the step grid: the range ends where it was asked to
+        }
         SolverOptions options = new SolverOptions(60, Math.max(1, workers), seed);
         List<Target> targets = Studies.targets(in, beam, file, options);
+        if (plot != null && targets.size() != 1) {
+            throw new InputError(Location.ofFile("--plot"), "a plot shows one beam; expected --beam ID with --plot (the "
+                    + "file has " + targets.size() + " beams)");
+        }
         List<Sweep.Result> results = new ArrayList<>();
         List<Boolean> perBeam = new ArrayList<>();
         for (Target t : targets) {
@@ -102,11 +130,13 @@ final class SweepCommand implements Callable<Integer> {
                 : csv ? StudyText.sweepCsv(results, u, perBeam)
                 : StudyText.sweep(in.settings(), results, perBeam, in.currency());
         if (plot != null) {
-            if (results.size() != 1) {
-                throw new InputError(Location.ofFile("--plot"), "a plot shows one beam; expected --beam ID with --plot");
+            try {
+                Files.writeString(plot, SweepPlot.svg(results.get(0), u, in.currency(), perBeam.get(0)),
+                        StandardCharsets.UTF_8);
+            } catch (IOException ex) {
+                throw new InputError(Location.ofFile(plot.toString()), "cannot write the plot ("
+                        + ex.getClass().getSimpleName() + "); expected a writable file in an existing directory");
             }
-            Files.writeString(plot, SweepPlot.svg(results.get(0), u, in.currency(), perBeam.get(0)),
-                    StandardCharsets.UTF_8);
         }
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();

@@ -214,7 +214,12 @@ public final class SearchReader {
      * invented default table scaled to the file's rate at the file's f'c.
      */
     public record Costs(CostRates rates, String currency, java.util.NavigableMap<Double, Double> concreteByFc,
-            boolean concreteByFcGiven) {
+            boolean concreteByFcGiven, barfit.catalogs.yaml.Location concreteByFcAt) {
+        public Costs(CostRates rates, String currency, java.util.NavigableMap<Double, Double> concreteByFc,
+                boolean concreteByFcGiven) {
+            this(rates, currency, concreteByFc, concreteByFcGiven, null);
+        }
+
         /** The concrete rate at f'c (MPa), interpolated linearly between given grades; NaN outside them. */
         public double concreteAt(double fc) {
             var lo = concreteByFc.floorEntry(fc + 1e-9);
@@ -303,7 +308,8 @@ public final class SearchReader {
         } else {
             byFc = defaultByFc(s.materials().fc(), concrete);
         }
-        return new Costs(new CostRates(concrete, bars, stirrups, formwork, premium, lap), currency, byFc, given);
+        return new Costs(new CostRates(concrete, bars, stirrups, formwork, premium, lap), currency, byFc, given,
+                given ? f.map().entry(byKey).keyLocation() : null);
     }
 
     private static Optional<Double> rate(YFields f, String key, String what) {

@@ -32,6 +32,9 @@ public final class StudyJson {
         o.put("feasible", s.feasible());
         if (!s.feasible()) {
             o.put("reason", s.proof());
+            if (s.limit() != null && !s.limit().isEmpty()) {
+                o.put("limit", s.limit());
+            }
             return;
         }
         Json.put(o, "width", s.width(), Dim.LENGTH, u);
@@ -46,6 +49,10 @@ public final class StudyJson {
         c.put("depth_premium", DesignJson.round2(b.depthPremium()));
         o.put("compression_steel_needed", s.compressionNeeded());
         o.put("compression_steel_used", s.compressionUsed());
+        if (s.compressionNeeded()) {
+            o.put("hangers_alone_fail", s.hangersFail());
+        }
+        o.put("stirrups", s.stirrups());
         ObjectNode t = o.putObject("tension");
         t.put("face", s.tensionFace());
         ArrayNode tl = t.putArray("layers");
@@ -94,6 +101,11 @@ public final class StudyJson {
             } else {
                 b.put("recommended", r.recommended());
             }
+            if (r.recommendedFc() == null) {
+                b.putNull("recommended_fc");
+            } else {
+                Json.put(b, "recommended_fc", r.recommendedFc(), Dim.STRESS, u);
+            }
             ArrayNode reasons = b.putArray("reasons");
             r.reasons().forEach(reasons::add);
         }
@@ -120,8 +132,7 @@ public final class StudyJson {
                     Json.put(x, "width", s.width(), Dim.LENGTH, u);
                     Json.put(x, "height", s.height(), Dim.LENGTH, u);
                     x.put("compression_steel_needed", s.compressionNeeded());
-                    x.put("hangers_only_possible", r.compressionNeededBelow() != null
-                            && p.cap() >= r.compressionNeededBelow() - 1e-9);
+                    x.put("hangers_only_possible", r.hangersFrom() != null && p.cap() >= r.hangersFrom() - 1e-9);
                     x.put("tension", s.tension());
                     x.put("eps_t", CheckJson.round(s.epsT()));
                 } else {
@@ -138,6 +149,16 @@ public final class StudyJson {
             } else {
                 Json.put(b, "compression_needed_below", r.compressionNeededBelow(), Dim.LENGTH, u);
             }
+            // which a null compression_needed_below means: needed at every cap of the range, or at none
+            b.put("compression_needed_everywhere", r.compression().equals("everywhere"));
+            b.put("compression_note", switch (r.compression()) {
+                case "below" -> "needed below compression_needed_below";
+                case "everywhere" -> "needed at every cap in the range: the minimum hangers alone work at no depth up to "
+                        + "the last cap";
+                default -> "not needed within the range: the minimum hangers alone can work at every cap";
+            });
+            Json.put(b, "first_cap", r.firstCap(), Dim.LENGTH, u);
+            Json.put(b, "last_cap", r.lastCap(), Dim.LENGTH, u);
             ObjectNode chosen = b.putObject("design");
             Json.put(chosen, "cap", r.chosenCap(), Dim.LENGTH, u);
             summary(chosen, r.chosen(), u, perBeam.get(i));

@@ -43,25 +43,48 @@ public final class StudyText {
                     .append(u.unit(Dim.LENGTH)).append(r.capGiven() ? "" : " (no cap given: the deepest searched)")
                     .append('\n');
             TextTable t = new TextTable(false, false, false, false, true, true, false, false, true, true, true);
-            t.row("option", "b × h", "tension", "compression", "Mu/φMn", "εt", "φ", "compression layer", "bars/layers",
-                    "cost " + (pb ? "of the beam" : Money.perLengthLabel(u)) + (currency.isEmpty() ? "" : " " + currency),
-                    "vs best");
+            String money = (pb ? "of the beam" : Money.perLengthLabel(u)) + (currency.isEmpty() ? "" : " " + currency);
+            // over a whole span the top bars are compression steel at mid-span but tension steel at the supports
+            t.row("option", "b × h", r.wholeSpan() ? "bottom" : "tension", r.wholeSpan() ? "top" : "compression",
+                    "Mu/φMn", "εt", "φ", "compression layer", "bars/layers", "cost " + money, "vs best");
+            TextTable terms = new TextTable(false, false, true, true, true, true, true, true);
+            terms.row("option", "stirrups", "concrete", "main bars", "stirrups", "formwork", "depth premium", "total");
             double best = results.get(i).options().stream().filter(o -> o.summary().feasible())
                     .mapToDouble(o -> o.summary().total()).min().orElse(Double.NaN);
+            java.util.Map<String, List<String>> none = new java.util.LinkedHashMap<>();
             for (Compare.Option o : r.options()) {
                 Summary s = o.summary();
                 if (!s.feasible()) {
                     t.row(o.label(), "none", "", "", "", "", "", "", "", "", "");
+                    none.computeIfAbsent(s.proof(), k -> new java.util.ArrayList<>()).add("'" + o.label() + "'");
                     continue;
                 }
-                t.row(o.label() + (o.kind().equals(r.recommended()) ? "  ◀" : ""), size(s, u), s.tension(), s.compression(),
+                t.row(o.label() + (o == r.best() ? "  ◀" : ""), size(s, u), s.tension(), s.compression(),
                         Words.ratio(s.mu() / s.phiMn()), Words.fixed(s.epsT(), 5),
                         Words.fixed(s.phi(), 3) + (s.strainClass().equals("transition") ? " transition" : ""),
                         compression(s), s.longitudinalBars() + " / " + s.layers(), cost(s, u, pb),
                         String.format(Locale.ROOT, "+%.1f %%", 100 * (s.total() - best) / best));
+                var c = pb ? s.cost() : Money.scaled(s.cost(), u);
+                terms.row(o.label(), s.stirrups(), Money.amount(c.concrete()), Money.amount(c.mainBars()),
+                        Money.amount(c.stirrups()), Money.amount(c.formwork()), Money.amount(c.depthPremium()),
+                        Money.amount(c.total()));
             }
             t.write("  ", out);
-            out.append("  recommended: ").append(r.recommended() == null ? "none" : r.recommended()).append('\n');
+            if (r.wholeSpan()) {
+                out.append("  top: the continuous bars are the compression steel at mid-span; the bars added at the "
+                        + "supports are tension steel there\n");
+            }
+            out.append("\n  stirrups, and the cost term by term (").append(money).append("; depth premium: the storey "
+                    + "height a deeper beam costs)\n");
+            terms.write("  ", out);
+            none.forEach((why, labels) -> out.append("  none for ").append(String.join(", ", labels)).append(": ")
+                    .append(why).append('\n'));
+            out.append("  recommended: ").append(r.recommended() == null ? "none" : r.recommended());
+            if (r.recommendedFc() != null) {
+                out.append(", f'c = ").append(u.compact(r.recommendedFc(), Dim.STRESS)).append(' ')
+                        .append(u.unit(Dim.STRESS));
+            }
+            out.append('\n');
             for (String reason : r.reasons()) {
                 out.append("  · ").append(reason).append('\n');
             }
@@ -86,13 +109,18 @@ public final class StudyText {
                         s.feasible() ? compression(s) : "", s.feasible() ? Words.fixed(s.epsT(), 5) : "");
             }
             t.write("  ", out);
-            out.append("  shallowest cap with a passing design: ").append(r.shallowestFeasible() == null ? "none in range"
+            String range = u.compact(r.firstCap(), Dim.LENGTH) + " to " + u.compact(r.lastCap(), Dim.LENGTH) + " "
+                    + u.unit(Dim.LENGTH);
+            out.append("  shallowest cap with a passing design: ").append(r.shallowestFeasible() == null
+                    ? "not within the range (no cap from " + range + " passes)"
                     : u.compact(r.shallowestFeasible(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)).append('\n');
-            out.append("  compression steel is necessary below: ").append(r.compressionNeededBelow() == null
-                    ? "every cap in range (no layout works with the minimum hangers alone)"
-                    : u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
-                            + " (under it, every passing layout needs compression steel beyond the minimum hangers)")
-                    .append('\n');
+            out.append("  compression steel is necessary below: ").append(switch (r.compression()) {
+                case "below" -> u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
+                        + " (under it, every passing layout needs compression steel beyond the minimum hangers)";
+                case "everywhere" -> "every cap in the range (the minimum hangers alone work at no depth up to "
+                        + u.compact(r.lastCap(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ")";
+                default -> "not within the range (the minimum hangers alone can work at every cap from " + range + ")";
+            }).append('\n');
             if (r.chosen().feasible()) {
                 out.append("  design (cap ").append(u.compact(r.chosenCap(), Dim.LENGTH)).append(' ')
                         .append(u.unit(Dim.LENGTH)).append(") chooses ").append(size(r.chosen(), u)).append(" at ")

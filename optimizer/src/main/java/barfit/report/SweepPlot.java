@@ -86,7 +86,7 @@ public final class SweepPlot {
 
         double first = u.fromSI(r.points().get(0).cap(), Dim.LENGTH);
         double last = u.fromSI(r.points().get(r.points().size() - 1).cap(), Dim.LENGTH);
-        if (r.compressionNeededBelow() != null) {
+        if (r.compression().equals("below")) {
             double split = u.fromSI(r.compressionNeededBelow(), Dim.LENGTH);
             double from = r.shallowestFeasible() == null ? first : u.fromSI(r.shallowestFeasible(), Dim.LENGTH);
             if (split > from) {
@@ -106,11 +106,15 @@ public final class SweepPlot {
             singly.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
             plot.addDomainMarker(singly, Layer.BACKGROUND);
         } else {
-            IntervalMarker doubly = new IntervalMarker(first, last, DOUBLY);
-            doubly.setLabel("compression steel needed at every cap");
-            doubly.setLabelBackgroundColor(CLEAR);
-            doubly.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
-            plot.addDomainMarker(doubly, Layer.BACKGROUND);
+            boolean everywhere = r.compression().equals("everywhere");
+            IntervalMarker whole = new IntervalMarker(first, last, everywhere ? DOUBLY : SINGLY);
+            whole.setLabel(everywhere ? "compression steel needed at every cap" : "the minimum hangers can suffice "
+                    + "at every cap");
+            whole.setLabelBackgroundColor(CLEAR);
+            whole.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+            whole.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
+            whole.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
+            plot.addDomainMarker(whole, Layer.BACKGROUND);
         }
         if (r.shallowestFeasible() != null) {
             ValueMarker shallow = new ValueMarker(u.fromSI(r.shallowestFeasible(), Dim.LENGTH), Color.GRAY,
@@ -134,12 +138,22 @@ public final class SweepPlot {
             plot.addDomainMarker(shallow);
         }
         if (r.chosen().feasible()) {
+            // keep the label inside the plot: to the right of the point in the left half, to the left in the
+            // right half; below it in the upper half of the costs, above it in the lower half
+            double cx = u.fromSI(r.chosenCap(), Dim.LENGTH);
+            double cy = cost(r.chosen().total(), u, perBeam);
+            double lo = frontier.isEmpty() ? cy : Math.min(cy, frontier.getMinY());
+            double hi = frontier.isEmpty() ? cy : Math.max(cy, frontier.getMaxY());
+            boolean right = cx <= (first + last) / 2;
+            boolean below = cy >= (lo + hi) / 2;
+            double dx = 0.012 * Math.max(last - first, 1e-9) * (right ? 1 : -1);
+            double dy = 0.03 * Math.max(hi - lo, Math.abs(cy) * 1e-3 + 1e-9) * (below ? -1 : 1);
             XYTextAnnotation note = new XYTextAnnotation("design: " + u.compact(r.chosen().width(), Dim.LENGTH) + " × "
-                    + u.compact(r.chosen().height(), Dim.LENGTH), u.fromSI(r.chosenCap(), Dim.LENGTH),
-                    cost(r.chosen().total(), u, perBeam));
+                    + u.compact(r.chosen().height(), Dim.LENGTH), cx + dx, cy + dy);
             note.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 11));
             note.setPaint(CHOSEN);
-            note.setTextAnchor(TextAnchor.BOTTOM_RIGHT);
+            note.setTextAnchor(below ? (right ? TextAnchor.TOP_LEFT : TextAnchor.TOP_RIGHT)
+                    : (right ? TextAnchor.BOTTOM_LEFT : TextAnchor.BOTTOM_RIGHT));
             plot.addAnnotation(note);
         }
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), plot, true);

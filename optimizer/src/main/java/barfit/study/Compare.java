@@ -17,8 +17,17 @@ public final class Compare {
     public record Option(String kind, String label, Summary summary, Double fc, String note) {
     }
 
+    /**
+     * @param best      the recommended option (null when none passes); {@code recommended} is its kind
+     * @param wholeSpan whether the beam is a whole span: its top bars are compression steel at mid-span
+     *                  but tension steel over the supports
+     */
     public record Result(String id, double cap, boolean capGiven, List<Option> options, String recommended,
-            List<String> reasons) {
+            List<String> reasons, Option best, boolean wholeSpan) {
+        /** The f'c (MPa) of the recommended option when it is stronger concrete, else null. */
+        public Double recommendedFc() {
+            return best != null && best.kind().equals("fc") ? best.fc() : null;
+        }
     }
 
     /** Words for lengths and stresses in the user's units. */
@@ -75,14 +84,15 @@ public final class Compare {
         for (double w = widths.get(widths.size() - 1) + step; w <= maxWidth + 1e-9; w += step) {
             widths.add(w);
         }
-        options.add(new Option("widen", "widths up to " + say.length(maxWidth) + ", h ≤ " + say.length(h),
+        options.add(new Option("widen", "widths up to " + say.length(widths.get(widths.size() - 1)) + ", h ≤ "
+                + say.length(h),
                 t.design(h, space.withWidths(widths), m, cost, true), null, null));
         for (double fc : fcs) {
             Materials mf = new Materials(fc, m.fy(), m.fyt(), m.aggregate(), m.lambda());
             options.add(new Option("fc", "f'c = " + say.stress(fc) + ", h ≤ " + say.length(h),
                     t.design(h, space, mf, costForFc.apply(fc), false), fc, null));
         }
-        return recommend(t.id(), h, capGiven, options, say);
+        return recommend(t.id(), h, capGiven, options, say, t instanceof SpanTarget);
     }
 
     /** The smallest step between the search's widths, or {@code fallback} (mm) with a single width. */
@@ -104,7 +114,7 @@ public final class Compare {
     }
 
     /** The cheapest feasible option, with its reasons in plain words. */
-    static Result recommend(String id, double cap, boolean capGiven, List<Option> options, Say say) {
+    static Result recommend(String id, double cap, boolean capGiven, List<Option> options, Say say, boolean span) {
         List<String> reasons = new ArrayList<>();
         Option best = null;
         for (Option o : options) {
@@ -115,19 +125,13 @@ public final class Compare {
         Option atCap = options.get(0);
         if (best == null) {
             reasons.add("No option studied gives a passing layout: see the design command's diagnosis.");
-            return new Result(id, cap, capGiven, options, null, reasons);
+            reasons.add(nothingAtCap(atCap.summary(), cap, say));
+            return new Result(id, cap, capGiven, options, null, reasons, null, span);
         }
         if (atCap.summary().feasible()) {
-            Summary s = atCap.summary();
-            reasons.add("At the cap the beam is " + say.length(s.width()) + " × " + say.length(s.height()) + " and "
-                    + (s.compressionNeeded() ? "needs compression steel beyond the hangers (without it the section fails)"
-                            : s.compressionUsed() ? "uses more compression steel than the hangers by choice, not need"
-                                    : "needs no compression steel beyond the hangers")
-                    + (s.strainClass().equals("transition") ? "; it works in the transition zone (φ = "
-                            + String.format(Locale.ROOT, "%.3f", s.phi()) + ")" : "") + ".");
+            reasons.add(atCapReason(atCap.summary(), options, cap, say));
         } else {
-            reasons.add("Nothing passes at the cap of " + say.length(cap) + ": the cap must be lifted or the section "
-                    + "widened or made stronger.");
+            reasons.add(nothingAtCap(atCap.summary(), cap, say));
         }
         double ref = best.summary().total();
         for (Option o : options) {
@@ -150,14 +154,53 @@ public final class Compare {
                     + say.length(best.summary().height()) + ", is cheapest" + (best.summary().height() > cap + 1e-9
                     ? "; it is deeper than the cap" : "");
             case "widen" -> "Widening to b = " + say.length(best.summary().width()) + " within the cap is cheapest";
-            default -> "Stronger concrete (" + best.label() + ") is cheapest";
+            default -> "Stronger concrete, f'c = " + say.stress(best.fc()) + " within the cap, is cheapest";
         };
         if (atCap.summary().feasible() && best != atCap) {
             why += String.format(Locale.ROOT, ": %.1f %% less than keeping the cap", 100 * (atCap.summary().total() - ref)
                     / atCap.summary().total());
         }
         reasons.add(0, why + ".");
-        return new Result(id, cap, capGiven, options, best.kind(), reasons);
+        return new Result(id, cap, capGiven, options, best.kind(), reasons, best, span);
+    }
+
+    /** What the design at the cap is, and why its compression steel is there. */
+    private static String atCapReason(Summary s, List<Option> options, double cap, Say say) {
+        String what;
+        if (s.compressionNeeded()) {
+            Summary singly = options.stream().filter(o -> o.kind().equals("no_compression_steel")).findFirst()
+                    .map(Option::summary).orElse(null);
+            String governs = s.hangersFail().isEmpty() ? "" : " (" + s.hangersFail() + ")";
+            if (singly != null && singly.feasible() && singly.height() <= cap + 1e-9) {
+                double diff = 100 * (singly.total() - s.total()) / s.total();
+                what = "carries compression steel beyond the hangers: with the hangers alone its other bars would fail"
+                        + governs + ", but another layout without it passes within the cap (h = "
+                        + say.length(singly.height()) + ", " + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
+                        + "), so the compression steel is a matter of cost, not of need";
+            } else {
+                what = "needs compression steel beyond the hangers: with the hangers alone it fails" + governs
+                        + ", and no layout without it passes within the cap";
+            }
+        } else {
+            what = s.compressionUsed() ? "uses more compression steel than the hangers by choice, not need"
+                    : "needs no compression steel beyond the hangers";
+        }
+        return "At the cap the beam is " + say.length(s.width()) + " × " + say.length(s.height()) + " and " + what
+                + (s.strainClass().equals("transition") ? "; it works in the transition zone (φ = "
+                        + String.format(Locale.ROOT, "%.3f", s.phi()) + ")" : "") + ".";
+    }
+
+    /** Why nothing passes at the cap, with the change that can help. */
+    private static String nothingAtCap(Summary s, double cap, Say say) {
+        String at = "Nothing passes at the cap of " + say.length(cap) + ": ";
+        return switch (s.limit() == null ? "" : s.limit()) {
+            case "deflection" -> at + s.proof() + " (widening or stronger concrete cannot help until then), or lift the cap "
+                    + "to Table 9.3.1.1's minimum.";
+            case "min_depth" -> at + s.proof() + ". Only a deeper beam meets Table 9.3.1.1; to keep the cap, design "
+                    + "the beam as a whole span with service loads so that its deflection is computed (24.2).";
+            case "headroom" -> at + s.proof() + ".";
+            default -> at + "the cap must be lifted or the section widened or made stronger.";
+        };
     }
 
     static String congestion(Summary s) {

@@ -64,7 +64,7 @@ public final class SectionTarget implements Target {
                 freeWidth ? null : p.fixedWidth(), p.flange(), p.costLength());
         DesignOutcome o = new SectionDesigner(cost, options, units).design(q, 0);
         if (!o.feasible()) {
-            return Summary.none(o.diagnosis().summary());
+            return Summary.none(o.diagnosis().summary(), o.diagnosis().limit());
         }
         Layout l = o.best().layout();
         var f = o.best().report().flexure();
@@ -72,11 +72,14 @@ public final class SectionTarget implements Target {
                 .orElseThrow();
         boolean used = !(l.compressionCount() == 2 && l.compressionBar().equals(lightest));
         boolean needed = false;
+        String fails = "";
         if (used) {
             Layout hangers = new Layout(l.width(), l.height(), l.flange(), l.bending(), l.tensionBar(), l.tensionCounts(),
                     lightest, 2, l.stirrups(), l.skin());
-            needed = !SectionChecks.run(hangers.section(m, q.detailing(), q.code()), new Demand(q.mu(), q.vu()),
-                    q.span(), Trail.off()).ok();
+            var r = SectionChecks.run(hangers.section(m, q.detailing(), q.code()), new Demand(q.mu(), q.vu()), q.span(),
+                    Trail.off());
+            needed = !r.ok();
+            fails = Summary.checks(r.failures());
         }
         int bars = l.tensionBarCount() + l.compressionCount();
         return new Summary(true, l.width(), l.height(), l.bending().tensionFace().word() + " " + DesignText.bars(l),
@@ -85,6 +88,6 @@ public final class SectionTarget implements Target {
                 l.tensionBar().designation(), l.bending().compressionFace().word(), l.compressionCount(),
                 l.compressionBar().designation(), f.phiMn(), Math.abs(q.mu()), f.epsT(), f.phi(), f.strainClass(), used,
                 needed, bars, l.tensionCounts().size() + 1, o.best().cost(), o.status() + " over "
-                        + o.proof().candidates() + " candidates");
+                        + o.proof().candidates() + " candidates", fails, null);
     }
 }

@@ -59,7 +59,7 @@ public final class SpanTarget implements Target {
                 p.bottomAnchored(), p.maxBarSizes(), p.barsPerTwoLegs());
         BeamDesigner.Outcome o = new BeamDesigner(cost, options, units).design(q, 0);
         if (!o.feasible()) {
-            return Summary.none(o.diagnosis().summary());
+            return Summary.none(o.diagnosis().summary(), o.diagnosis().limit());
         }
         BeamLayout l = o.best().layout();
         CheckReport governing = null;
@@ -71,10 +71,13 @@ public final class SpanTarget implements Target {
         }
         boolean used = !p.cantilever() && l.topContinuous() > 2;
         boolean needed = false;
+        String fails = "";
         if (used) {
             BeamLayout hangers = new BeamLayout(l.width(), l.height(), l.flange(), l.stirrupBar(), l.skin(), l.top(), 2,
                     l.topLeft(), l.topRight(), l.bottom(), l.bottomCounts(), l.zoneStirrups(), l.extLeft(), l.extRight());
-            needed = !BeamVerifier.verify(q, hangers, false).ok();
+            var r = BeamVerifier.verify(q, hangers, false);
+            needed = !r.ok();
+            fails = Summary.checks(r.failures());
         }
         int top = l.topContinuous();
         if (l.topLeft() != null) {
@@ -90,14 +93,13 @@ public final class SpanTarget implements Target {
         String topText = "top " + l.topContinuous() + " " + l.top().label() + " continuous"
                 + (l.topLeft() != null ? ", " + counts(l.topLeft(), l.top().label()) + " at left" : "")
                 + (l.topRight() != null ? ", " + counts(l.topRight(), l.top().label()) + " at right" : "");
-        StringBuilder st = new StringBuilder();
-        for (var s : l.zoneStirrups()) {
-            st.append(st.length() == 0 ? "" : " / ").append(barfit.report.Words.stirrups(s, units));
-        }
-        return new Summary(true, l.width(), l.height(), bottom, topText, st.toString(), "bottom", l.bottomCounts(),
+        List<String> zones = l.zoneStirrups().stream().map(s -> barfit.report.Words.stirrups(s, units)).toList();
+        String st = zones.stream().distinct().count() == 1 ? zones.get(0) + " throughout" : String.join(" / ", zones);
+        return new Summary(true, l.width(), l.height(), bottom, topText, st, "bottom", l.bottomCounts(),
                 l.bottom().designation(), "top", l.topContinuous(), l.top().designation(), f.phiMn(),
                 Math.abs(governing.demand().mu()), f.epsT(), f.phi(), f.strainClass(), used, needed,
-                l.bottomCount() + top, layers, o.best().cost(), o.status() + " over " + o.proof().booleans() + " booleans");
+                l.bottomCount() + top, layers, o.best().cost(), o.status() + " over " + o.proof().booleans() + " booleans",
+                fails, null);
     }
 
     private static String counts(List<Integer> c, String label) {

@@ -5,7 +5,10 @@ import barfit.design.CostBreakdown;
 /**
  * One design as a study reports it: size, bars, strength, whether compression steel beyond the
  * hangers is needed (tested by replacing it with the minimum hangers and re-checking), congestion,
- * and cost. {@code feasible} false means no layout in the studied space passes.
+ * and cost. {@code feasible} false means no layout in the studied space passes; {@code limit} then
+ * names what stops it (the diagnosis's limit, e.g. "deflection" or "min_depth"). {@code hangersFail}
+ * names the checks that fail when this layout's compression steel is replaced by the minimum hangers
+ * (empty when they do not fail).
  */
 public record Summary(
         boolean feasible,
@@ -30,14 +33,30 @@ public record Summary(
         int longitudinalBars,
         int layers,
         CostBreakdown cost,
-        String proof) {
+        String proof,
+        String hangersFail,
+        String limit) {
 
     public static Summary none(String proof) {
+        return none(proof, "");
+    }
+
+    public static Summary none(String proof, String limit) {
         return new Summary(false, 0, 0, "", "", "", "", java.util.List.of(), "", "", 0, "", 0, 0, 0, 0, "", false, false,
-                0, 0, null, proof);
+                0, 0, null, proof, "", limit);
     }
 
     public double total() {
         return cost == null ? Double.POSITIVE_INFINITY : cost.total();
+    }
+
+    /** The failing checks in words, each once: "deflection (24.2), flexure (22.3)". */
+    static String checks(java.util.List<barfit.section.CheckResult> failures) {
+        java.util.LinkedHashSet<String> seen = new java.util.LinkedHashSet<>();
+        for (var f : failures) {
+            String t = f.title();
+            seen.add((t.isEmpty() ? t : Character.toLowerCase(t.charAt(0)) + t.substring(1)) + " (" + f.clause() + ")");
+        }
+        return String.join(", ", seen);
     }
 }

@@ -16,8 +16,27 @@ public final class Sweep {
     public record Point(double cap, Summary summary, double depthUsed) {
     }
 
+    /**
+     * Everything is reported within the range of caps asked: {@code shallowestFeasible} is the first cap
+     * of the range with a passing design (null: none in the range); {@code hangersFrom} the shallowest
+     * depth up to the last cap where the minimum hangers alone can work (null: none);
+     * {@code compressionNeededBelow} that depth when caps of the range lie below it and it is within the
+     * range (null otherwise, {@link #compression()} says which).
+     */
     public record Result(String id, List<Point> points, Double shallowestFeasible, Double compressionNeededBelow,
-            Summary chosen, double chosenCap) {
+            Summary chosen, double chosenCap, Double hangersFrom) {
+        /** Where compression steel beyond the hangers is needed within the range: "below", "nowhere" or "everywhere". */
+        public String compression() {
+            return compressionNeededBelow != null ? "below" : hangersFrom == null ? "everywhere" : "nowhere";
+        }
+
+        public double firstCap() {
+            return points.get(0).cap();
+        }
+
+        public double lastCap() {
+            return points.get(points.size() - 1).cap();
+        }
     }
 
     private Sweep() {
@@ -33,13 +52,6 @@ public final class Sweep {
                 break;
             }
             atDepth.put(d, t.design(null, space.withDepths(List.of(d)), t.materials(), cost, false));
-        }
-        Double shallowest = null;
-        for (Map.Entry<Double, Summary> e : atDepth.entrySet()) {
-            if (e.getValue().feasible()) {
-                shallowest = e.getKey();
-                break;
-            }
         }
         // where the hangers alone first work (deeper still they keep working), caps below need compression steel
         Double singly = null;
@@ -69,8 +81,16 @@ public final class Sweep {
             }
             points.add(new Point(cap, best == null ? Summary.none("nothing passes with h ≤ cap") : best, used));
         }
+        Double shallowest = null;
+        for (Point p : points) {
+            if (p.summary().feasible()) {
+                shallowest = p.cap();
+                break;
+            }
+        }
+        Double below = singly != null && singly > caps.get(0) + 1e-9 && singly <= top + 1e-9 ? singly : null;
         double chosenCap = t.cap() != null ? t.cap() : space.depths().get(space.depths().size() - 1);
         Summary chosen = t.design(t.cap(), space, t.materials(), cost, false);
-        return new Result(t.id(), points, shallowest, singly, chosen, chosenCap);
+        return new Result(t.id(), points, shallowest, below, chosen, chosenCap, singly);
     }
 }

@@ -12,13 +12,15 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Every file in the bad-input corpus must give exit code 2 and exactly one line on stderr that names
  * the file and the line, says what was expected, and carries no stack trace. The first line of each
  * file says what to expect: {@code # expect LINE: text}. Files named design-* go to {@code design},
- * the others to {@code check}.
+ * compare-* to {@code compare}, the others to {@code check}. Bad command-line options get the same
+ * treatment: one line naming the option or file and what is expected, exit 2, nothing written.
  */
 class BadInputTest {
     static final Path CORPUS = Path.of("src/test/resources/bad-input");
@@ -42,7 +44,8 @@ class BadInputTest {
         String line = m.group(1);
         String text = m.group(2);
         String before = Files.readString(file);
-        String command = file.getFileName().toString().startsWith("design-") ? "design" : "check";
+        String name = file.getFileName().toString();
+        String command = name.startsWith("design-") ? "design" : name.startsWith("compare-") ? "compare" : "check";
         {
             Cli r = Cli.run(command, file.toString());
             assertEquals(2, r.exit(), "exit code; stderr: " + r.err());
@@ -54,5 +57,33 @@ class BadInputTest {
             assertFalse(err.contains("Exception") || err.contains("\tat "), "no stack trace: " + err);
         }
         assertEquals(before, Files.readString(file), "the input is untouched");
+    }
+
+    static final String STUDY = "src/test/resources/studies/doubly-textbook-us.yaml";
+
+    /** Each case: the arguments, then what the one line must start with after "barfit: ", then what it expects. */
+    static Stream<Arguments> badOptions() {
+        return Stream.of(
+                Arguments.of(List.of("compare", STUDY, "--max-width", "Infinity"), "--max-width:", "expected a width from"),
+                Arguments.of(List.of("compare", STUDY, "--max-width", "NaN"), "--max-width:", "got NaN"),
+                Arguments.of(List.of("compare", STUDY, "--max-width", "1e12"), "--max-width:", "5 times the widest"),
+                Arguments.of(List.of("compare", STUDY, "--fc", "NaN"), "--fc:", "expected f'c between"),
+                Arguments.of(List.of("sweep", STUDY, "--plot", "no-such-dir/x.svg"),
+                        "no-such-dir/x.svg:", "expected --plot in an existing directory"),
+                Arguments.of(List.of("sweep", STUDY, "--csv", "--format", "json"), "--csv:", "expected one of them"),
+                Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("badOptions")
+    void badOptionsRejectedWithOneLine(List<String> args, String where, String expected) {
+        Cli r = Cli.run(args.toArray(String[]::new));
+        assertEquals(2, r.exit(), "exit code; stderr: " + r.err());
+        assertEquals("", r.out(), "nothing on stdout");
+        String err = r.err().strip();
+        assertFalse(err.contains("\n"), "one line only: " + err);
+        assertTrue(err.startsWith("barfit: " + where), "names the option or file: " + err);
+        assertTrue(err.contains(expected), "says what is expected (" + expected + "): " + err);
+        assertFalse(err.contains("Exception") || err.contains("\tat "), "no stack trace: " + err);
     }
 }

@@ -135,4 +135,103 @@ class StudyTest {
             assertFalse(r.err().contains("Exception"), r.err());
         }
     }
+
+    @Test
+    void strongerConcreteRecommendationNamesItsGrade() throws Exception {
+        // With a dear storey height the 50 MPa option within the cap is cheapest (rates invented, no source).
+        String f = "src/test/resources/studies/transfer-girder-premium-si.yaml";
+        Cli json = Cli.run("compare", f, "--format", "json");
+        assertEquals(0, json.exit(), json.err());
+        JsonNode beam = new ObjectMapper().readTree(json.out()).get("beams").get(0);
+        assertEquals("fc", beam.get("recommended").asText());
+        assertEquals(50, beam.get("recommended_fc").asDouble(), 1e-9);
+        int fcOptions = 0;
+        for (JsonNode o : beam.get("options")) {
+            assertEquals(o.get("kind").asText().equals("fc"), o.has("fc"), o.toString());
+            fcOptions += o.get("kind").asText().equals("fc") ? 1 : 0;
+            assertTrue(o.get("stirrups").asText().contains("legs"), o.toString());
+        }
+        assertEquals(3, fcOptions);
+        Cli text = Cli.run("compare", f);
+        assertEquals(0, text.exit(), text.err());
+        List<String> marked = text.out().lines().filter(l -> l.contains("◀")).toList();
+        assertEquals(1, marked.size(), text.out());
+        assertTrue(marked.get(0).contains("f'c = 50 MPa"), marked.get(0));
+        assertTrue(text.out().contains("recommended: fc, f'c = 50 MPa"), text.out());
+        assertTrue(text.out().contains("depth premium"), "the cost is shown term by term: " + text.out());
+        Cli other = Cli.run("compare", "src/test/resources/studies/doubly-textbook-us.yaml", "--format", "json", "--fc",
+                "5000");
+        JsonNode b2 = new ObjectMapper().readTree(other.out()).get("beams").get(0);
+        assertTrue(b2.get("recommended_fc").isNull() || b2.get("recommended").asText().equals("fc"), b2.toString());
+    }
+
+    @Test
+    void cappedSpanWithoutServiceLoadsIsToldToGiveThem() {
+        // 9.6 m span, both ends continuous: Table 9.3.1.1 asks h >= l/21 = 457 mm (ACI 318-19 Table 9.3.1.1), above
+        // the 400 mm cap; without service loads deflection (24.2) cannot be computed, whatever the width or f'c.
+        Cli r = Cli.run("compare", "src/test/resources/studies/span-capped-no-service-si.yaml");
+        assertEquals(0, r.exit(), r.err());
+        String capLine = r.out().lines().filter(l -> l.contains("Nothing passes at the cap")).findFirst().orElseThrow();
+        assertTrue(capLine.contains("service"), capLine);
+        assertTrue(capLine.contains("cannot help"), capLine);
+        assertFalse(r.out().contains("widened or made stronger"), r.out());
+    }
+
+    @Test
+    void spanAtCapSaysWhatGovernsItsCompressionSteel() {
+        // The capped middle span of the clinic example (invented): its layout at the cap carries compression steel
+        // for deflection (24.2.4.1 lambda_Delta falls with rho'), but a layout without it also passes at the cap.
+        Cli r = Cli.run("compare", "src/test/resources/studies/span-capped-si.yaml");
+        assertEquals(0, r.exit(), r.err());
+        String out = r.out();
+        String atCap = out.lines().filter(l -> l.contains("At the cap the beam is")).findFirst().orElseThrow();
+        assertFalse(atCap.contains("without it the section fails"), atCap);
+        assertTrue(atCap.contains("deflection") && atCap.contains("matter of cost"), atCap);
+        String header = out.lines().filter(l -> l.strip().startsWith("option ") && l.contains("b × h")).findFirst()
+                .orElseThrow();
+        assertTrue(header.contains(" bottom ") && header.contains(" top "), header);
+        assertFalse(header.contains("compression  "), header);
+        assertTrue(out.contains("tension steel there"), out);
+    }
+
+    @Test
+    void sweepReportsOnlyWithinTheRangeAsked() throws Exception {
+        // The transfer girder (invented) works with the minimum hangers alone from h = 725 mm; a range that stops
+        // short of it needs compression steel at every cap, one that starts beyond it at none.
+        String f = "src/test/resources/studies/transfer-girder-premium-si.yaml";
+        Cli low = Cli.run("sweep", f, "--from", "612", "--to", "700", "--format", "json");
+        assertEquals(0, low.exit(), low.err());
+        JsonNode b = new ObjectMapper().readTree(low.out()).get("beams").get(0);
+        JsonNode pts = b.get("points");
+        assertEquals(700, pts.get(pts.size() - 1).get("cap").asDouble(), 1e-9, "--to off the step grid is kept");
+        assertTrue(b.get("shallowest_feasible").asDouble() >= 612, b.toString());
+        assertTrue(b.get("compression_needed_below").isNull());
+        assertTrue(b.get("compression_needed_everywhere").asBoolean(), b.toString());
+        Cli lowText = Cli.run("sweep", f, "--from", "612", "--to", "700");
+        assertTrue(lowText.out().contains("every cap in the range (the minimum hangers alone work at no depth up to 700"),
+                lowText.out());
+        Cli high = Cli.run("sweep", f, "--from", "750", "--to", "800", "--format", "json");
+        JsonNode h = new ObjectMapper().readTree(high.out()).get("beams").get(0);
+        assertTrue(h.get("compression_needed_below").isNull());
+        assertFalse(h.get("compression_needed_everywhere").asBoolean(), h.toString());
+        assertEquals(750, h.get("shallowest_feasible").asDouble(), 1e-9);
+        Cli whole = Cli.run("sweep", f, "--format", "json");
+        JsonNode w = new ObjectMapper().readTree(whole.out()).get("beams").get(0);
+        assertEquals(725, w.get("compression_needed_below").asDouble(), 1e-9, w.toString());
+        assertFalse(w.get("compression_needed_everywhere").asBoolean());
+    }
+
+    @Test
+    void plotAnnotationsStayOnTheCanvas() throws Exception {
+        // The capped span's design sits at the first cap, the left edge of the plot: its label must not run off it.
+        java.nio.file.Path svg = java.nio.file.Files.createTempDirectory("plot").resolve("span.svg");
+        Cli r = Cli.run("sweep", "src/test/resources/studies/span-capped-si.yaml", "--plot", svg.toString());
+        assertEquals(0, r.exit(), r.err());
+        var m = java.util.regex.Pattern.compile("<text x='([-0-9.]+)' y='([-0-9.]+)'[^>]*>design:")
+                .matcher(java.nio.file.Files.readString(svg));
+        assertTrue(m.find(), "the design is labelled");
+        double x = Double.parseDouble(m.group(1));
+        double y = Double.parseDouble(m.group(2));
+        assertTrue(x >= 0 && x <= 800 - 90 && y >= 0 && y <= 480, "label at " + x + ", " + y);
+    }
 }
