@@ -86,6 +86,9 @@ public final class CheckText {
         out.append("  c = ").append(u.withUnit(f.c(), Dim.LENGTH)).append("   a = ").append(u.withUnit(f.a(), Dim.LENGTH))
                 .append("   d = ").append(u.withUnit(f.d(), Dim.LENGTH)).append("   dt = ")
                 .append(u.withUnit(f.dt(), Dim.LENGTH)).append('\n');
+        if (b.span() != null && b.span().ends() == null) {
+            out.append("  minimum depth (Table 9.3.1.1) not checked: the span is given without its ends\n");
+        }
         ShearResult sh = r.shear();
         if (sh != null) {
             out.append("  Vu = ").append(u.withUnit(sh.vu(), Dim.FORCE)).append("   φVn = ")

@@ -121,6 +121,9 @@ public final class DesignText {
                     + Words.ratio(r.shear().vu() / r.shear().phiVn()));
         }
         t.row("binding", binding(o.binding()));
+        if (p.span() != null && p.span().ends() == null) {
+            t.row("not checked", "minimum depth (Table 9.3.1.1): the span is given without its ends");
+        }
         String cur = currency.isEmpty() ? "" : " (" + currency + ")";
         t.row("cost " + Money.perLengthLabel(u) + cur, Money.breakdown(Money.scaled(d.costPerMetre(), u)));
         if (p.span() != null) {

@@ -13,9 +13,21 @@ public final class Deflection {
     private Deflection() {
     }
 
-    /** Ec = 4700 √f'c (19.2.2.1(b), normal-weight concrete; 57 000 √f'c in psi). */
+    /**
+     * Ec = 4700 √f'c (19.2.2.1(b), normal-weight concrete; 57 000 √f'c in psi). For lightweight concrete
+     * (λ < 1) the density is not known, so 19.2.2.1(a) is taken at its lightest, wc = 1440 kg/m³ (90 lb/ft³):
+     * the lowest Ec, which gives the largest deflections.
+     */
     public static double ec(Materials m, CodeEquations code) {
-        return code.ec().si() * Math.sqrt(m.fc());
+        return code.ec().si() * lightweightEcFactor(m, code) * Math.sqrt(m.fc());
+    }
+
+    /** Ec of 19.2.2.1(a) at the lightest density over the normal-weight Ec; 1 for normal-weight concrete. */
+    public static double lightweightEcFactor(Materials m, CodeEquations code) {
+        if (m.lambda() >= 1) {
+            return 1;
+        }
+        return code.inchPound() ? 33 * Math.pow(90, 1.5) / 57_000 : 0.043 * Math.pow(1440, 1.5) / 4700;
     }
 
     /** fr = 0.62 λ √f'c (19.2.3.1). */

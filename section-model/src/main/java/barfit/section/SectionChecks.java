@@ -44,6 +44,10 @@ public final class SectionChecks {
         }
         if (withMinimumDepth && span != null && span.ends() != null) {
             minimumDepth(s, span, out, trail);
+        } else if (withMinimumDepth && span != null && trail.isOn()) {
+            trail.heading("Minimum depth", "Table 9.3.1.1");
+            trail.note("Not checked: the span is given without its ends (simple, one-end-continuous, "
+                    + "both-ends-continuous or cantilever), which Table 9.3.1.1 needs.");
         }
         return new CheckReport(s, demand, fr, shear, out, trail);
     }
@@ -473,14 +477,17 @@ public final class SectionChecks {
     private static void minimumDepth(BeamSection s, Span span, List<CheckResult> out, Trail t) {
         CodeEquations code = s.code();
         double fy = s.materials().fy();
-        double factor = 0.4 + fy / code.minDepthFyDivisor();
-        double hmin = span.length() / span.ends().minDepthDivisor() * factor;
+        double hmin = SpanChecks.minimumDepth(span.length(), span.ends(), s.materials(), code);
         if (t.isOn()) {
             t.heading("Minimum depth", "Table 9.3.1.1");
             String div = fmtDivisor(span.ends().minDepthDivisor());
-            t.step("h,min", "ℓ / " + div + " × (0.4 + fy / " + (code.inchPound() ? "100000" : "700") + ")",
-                    "{} / " + div + " × (0.4 + {} / " + (code.inchPound() ? "100000" : "700") + ")", Q.length(hmin),
+            String lw = s.materials().lambda() < 1 ? " × 1.218" : "";
+            t.step("h,min", "ℓ / " + div + " × (0.4 + fy / " + (code.inchPound() ? "100000" : "700") + ")" + lw,
+                    "{} / " + div + " × (0.4 + {} / " + (code.inchPound() ? "100000" : "700") + ")" + lw, Q.length(hmin),
                     Q.length(span.length()), Q.stress(fy));
+            if (s.materials().lambda() < 1) {
+                t.note("Lightweight concrete (λ < 1): 9.3.1.1.2's factor at wc = 1440 kg/m³, the largest.");
+            }
         }
         double h = s.shape().height();
         out.add(CheckResult.atLeast("min_depth", "Minimum depth (" + span.ends().words() + ")", "Table 9.3.1.1",

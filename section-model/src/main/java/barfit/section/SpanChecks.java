@@ -39,9 +39,17 @@ public final class SpanChecks {
     private SpanChecks() {
     }
 
-    /** h,min of Table 9.3.1.1 with the fy factor (normal-weight concrete). */
+    /** h,min of Table 9.3.1.1 with the fy factor (9.3.1.1.1) and, for lightweight concrete, 9.3.1.1.2's. */
     public static double minimumDepth(double length, EndCondition ends, Materials m, CodeEquations code) {
-        return length / ends.minDepthDivisor() * (0.4 + m.fy() / code.minDepthFyDivisor());
+        return length / ends.minDepthDivisor() * (0.4 + m.fy() / code.minDepthFyDivisor()) * lightweightDepthFactor(m);
+    }
+
+    /**
+     * 9.3.1.1.2 for lightweight concrete (λ < 1): the greater of 1.65 − 0.0003 wc and 1.09; wc is not known,
+     * so the lightest density of the clause, 1440 kg/m³, gives the largest factor, 1.218. 1 for normal weight.
+     */
+    public static double lightweightDepthFactor(Materials m) {
+        return m.lambda() < 1 ? Math.max(1.65 - 0.0003 * 1440, 1.09) : 1;
     }
 
     /**
@@ -58,9 +66,14 @@ public final class SpanChecks {
         List<CheckResult> out = new ArrayList<>();
         if (t.isOn()) {
             t.heading("Span: minimum depth and deflection", "Table 9.3.1.1, 9.3.2, 24.2");
+            String lw = m.lambda() < 1 ? " × 1.218" : "";
             t.step("h,min", "ℓ / " + fmt(ends.minDepthDivisor()) + " × (0.4 + fy / " + (code.inchPound() ? "100000" : "700")
-                    + ")", "{} / " + fmt(ends.minDepthDivisor()) + " × (0.4 + {} / " + (code.inchPound() ? "100000" : "700")
-                    + ")", Q.length(hMin), Q.length(length), Q.stress(m.fy()));
+                    + ")" + lw, "{} / " + fmt(ends.minDepthDivisor()) + " × (0.4 + {} / " + (code.inchPound() ? "100000"
+                    : "700") + ")" + lw, Q.length(hMin), Q.length(length), Q.stress(m.fy()));
+            if (m.lambda() < 1) {
+                t.note("Lightweight concrete (λ < 1): 9.3.1.1.2's factor at wc = 1440 kg/m³, the largest; Ec of "
+                        + "19.2.2.1(a) at the same density, the smallest.");
+            }
         }
         if (h >= hMin - 1e-9) {
             out.add(CheckResult.atLeast("min_depth", "Minimum depth (" + ends.words() + "); deflection need not be computed",

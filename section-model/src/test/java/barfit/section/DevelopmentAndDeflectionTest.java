@@ -107,4 +107,17 @@ class DevelopmentAndDeflectionTest {
         assertEquals(2 * as / (1200 * 440), SpanChecks.rhoPrime(s, Bending.SAGGING), 1e-12);
         assertEquals(4 * as / (300 * (500 - 60)), SpanChecks.rhoPrime(s, Bending.HOGGING), 1e-12);
     }
+    @Test
+    void lightweightConcreteRaisesMinimumDepthAndLowersEc() {
+        // ACI 318-19 9.3.1.1.2: factor max(1.65 - 0.0003 wc, 1.09); at wc = 1440 kg/m3 it is 1.218.
+        // Table 9.3.1.1 simply supported l/16 with fy = 420 MPa: 6000 / 16 x (0.4 + 420/700) = 375 mm.
+        Materials normal = new Materials(28, 420, 420, 20, 1.0);
+        Materials light = new Materials(28, 420, 420, 20, 0.75);
+        assertEquals(375.0, SpanChecks.minimumDepth(6000, EndCondition.SIMPLE, normal, CodeEquations.SI), 1e-9);
+        assertEquals(375.0 * 1.218, SpanChecks.minimumDepth(6000, EndCondition.SIMPLE, light, CodeEquations.SI), 1e-9);
+        // 19.2.2.1(a): Ec = wc^1.5 x 0.043 sqrt(f'c) = 1440^1.5 x 0.043 x sqrt(28) = 12 433 MPa at wc = 1440;
+        // 19.2.2.1(b): 4700 sqrt(28) = 24 870 MPa for normal-weight concrete
+        assertEquals(24870, Deflection.ec(normal, CodeEquations.SI), 1);
+        assertEquals(12433, Deflection.ec(light, CodeEquations.SI), 1);
+    }
 }

@@ -27,7 +27,8 @@ public record Extension(double length, String rule) {
         double cap = p.leftSupport() && p.rightSupport() ? p.span() / 2 : p.span();
         if (ld > rule03) {
             return ld > cap ? new Extension(cap, "ld of 25.4.2.4 exceeds the room: the extra bars run to "
-                    + (cap < p.span() ? "mid-span" : "the far end"))
+                    + (cap < p.span() ? "mid-span" : "the far end") + " and are not fully developed there; run them"
+                    + " through or hook them (not checked)")
                     : new Extension(ld, "ld of 25.4.2.4 governs over 0.3 × span");
         }
         return new Extension(rule03, "0.3 × span governs over ld of 25.4.2.4");
