@@ -106,7 +106,11 @@ public final class BeamJson {
         top.put("continuous", l.topContinuous());
         if (l.topLeft() != null) {
             top.set("left", layers("top", l.top(), l.topLeft()).get("layers"));
-            Json.put(top, "left_extension", l.extLeft(), Dim.SPAN, u);
+            // past the support face, as for a span's extra bars; a cantilever's bars also run its full length
+            Json.put(top, "left_extension", p.cantilever() ? l.extLeft() - p.span() : l.extLeft(), Dim.SPAN, u);
+            if (p.cantilever()) {
+                Json.put(top, "length", l.extLeft(), Dim.SPAN, u);
+            }
         }
         if (l.topRight() != null) {
             top.set("right", layers("top", l.top(), l.topRight()).get("layers"));

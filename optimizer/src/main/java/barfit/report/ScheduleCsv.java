@@ -43,7 +43,7 @@ public final class ScheduleCsv {
             row.add(u.compact(l.width(), Dim.LENGTH));
             row.add(u.compact(l.height(), Dim.LENGTH));
             row.add(ScheduleRows.bottom(l));
-            row.add(ScheduleRows.topContinuous(p, l));
+            row.add(ScheduleRows.topContinuous(p, l, u));
             row.add(ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u));
             row.add(ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u));
             row.add(ScheduleRows.stirrups(p, l, u));

@@ -32,8 +32,9 @@ public final class ScheduleRows {
         return bars(l.bottomCounts(), l.bottom());
     }
 
-    public static String topContinuous(BeamProblem p, BeamLayout l) {
-        return p.cantilever() ? bars(l.topLeft(), l.top()) : l.topContinuous() + " " + l.top().label();
+    public static String topContinuous(BeamProblem p, BeamLayout l, UnitSystem u) {
+        return p.cantilever() ? bars(l.topLeft(), l.top()) + " (full length + " + u.withUnit(l.extLeft() - p.span(),
+                Dim.SPAN) + " past the support)" : l.topContinuous() + " " + l.top().label();
     }
 
     /** Top bars at a continuous support with the extension of the extra bars, or "" where there is none. */
@@ -47,13 +48,14 @@ public final class ScheduleRows {
         return bars(counts, l.top()) + (extra > 0 ? " (" + extra + " extra × " + u.withUnit(ext, Dim.SPAN) + ")" : "");
     }
 
-    /** "left: No. 10, 2 legs @ 150; middle: ..." */
+    /** "left 0–2.4: No. 10, 2 legs @ 150; middle 2.4–7.2: ..." (zone ends in span units from the left face) */
     public static String stirrups(BeamProblem p, BeamLayout l, UnitSystem u) {
         List<String> parts = new ArrayList<>();
         List<BeamProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
             var s = l.zoneStirrups().get(i);
-            parts.add(zones.get(i).name() + ": " + s.bar().label() + ", " + s.legs() + " legs @ "
+            parts.add(zones.get(i).name() + " " + u.compact(zones.get(i).from(), Dim.SPAN) + "–"
+                    + u.compact(zones.get(i).to(), Dim.SPAN) + ": " + s.bar().label() + ", " + s.legs() + " legs @ "
                     + u.compact(s.spacing(), Dim.LENGTH));
         }
         return String.join("; ", parts);

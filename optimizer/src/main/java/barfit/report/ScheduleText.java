@@ -40,7 +40,7 @@ public final class ScheduleText {
             }
             BeamDesigner.Design d = b.outcome().best();
             BeamLayout l = d.layout();
-            t.row(b.beam().id(), group, ScheduleRows.size(l, u), ScheduleRows.bottom(l), ScheduleRows.topContinuous(p, l),
+            t.row(b.beam().id(), group, ScheduleRows.size(l, u), ScheduleRows.bottom(l), ScheduleRows.topContinuous(p, l, u),
                     ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u), ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u),
                     ScheduleRows.stirrups(p, l, u), Money.amount(d.cost().total()));
         }

@@ -235,7 +235,9 @@ public final class ScheduleHtml {
                     .append("</td>");
             out.append("<td>").append(Svg.esc(perLayer(l.bottomCounts(), l.bottom()))).append("</td>");
             if (p.cantilever()) {
-                out.append("<td>—</td><td>").append(Svg.esc(perLayer(l.topLeft(), l.top()))).append(", full length + ld</td><td>—</td>");
+                out.append("<td>").append(Svg.esc(perLayer(l.topLeft(), l.top()))).append(", full length + ")
+                        .append(Svg.esc(u.compact(l.extLeft() - p.span(), Dim.SPAN))).append(' ')
+                        .append(Svg.esc(u.unit(Dim.SPAN))).append(" past the support</td><td>—</td><td>—</td>");
             } else {
                 out.append("<td>").append(l.topContinuous()).append(' ').append(Svg.esc(l.top().label())).append("</td>");
                 out.append("<td>").append(p.leftSupport() ? Svg.esc(topAtSupport(l.topLeft(), l, l.extLeft(), u)) : "—")
