@@ -314,9 +314,12 @@ public final class CandidateGenerator {
                     boolean ductilityStopped = scanUpward(f, shape, key, t, nmax, ncr, counts, c, m,
                             base + cm.cost(), stirLb, stirrupCache);
                     // later compression layers cost more; they cannot save a bar or make more bars ductile, and
-                    // when this one leaves the stirrup legs free (it holds as many as any, and needs no more than
-                    // the tension bars do) they cannot allow cheaper stirrups either
-                    boolean legsFree = m >= maxLegs && p.space().legsFor(m) <= p.space().legsFor(counts[0]);
+                    // when this one leaves the stirrup legs free (it holds as many as any, needs no more than the
+                    // tension bars do, and no more even split of them needs fewer) they cannot allow cheaper
+                    // stirrups either
+                    int layersUsed = counts.length;
+                    boolean legsFree = m >= maxLegs && p.space().legsFor(m) <= p.space().legsFor(counts[0])
+                            && p.space().legsFor(counts[0]) == p.space().legsFor((nMin + layersUsed - 1) / layersUsed);
                     if (!ductilityStopped && nMin <= nFloor && legsFree) {
                         break;
                     }
