@@ -56,6 +56,9 @@ class TextbookFlexureTest {
         // Wight & MacGregor, Reinforced Concrete: Mechanics and Design, solutions manual, Problem 4-1:
         // b = 12 in, d = 21.5 in, As = 3 No. 9 = 3.00 in², f'c = 3500 psi, fy = 60 ksi
         // -> a = 5.04 in, c = 5.93 in, eps_t = 0.00788, Mn = 285 kip-ft, phi Mn = 256 kip-ft
+        // (the edition is unknown, so checked by hand too: a = As fy / (0.85 f'c b) = 180 / 35.7 = 5.04 in,
+        // c = a / 0.85 = 5.93 in, eps_t = 0.003 (21.5 - 5.93) / 5.93 = 0.00788, Mn = 180 (21.5 - 2.52) / 12
+        // = 284.7 kip-ft, phi = 0.90)
         FlexureResult r = Flexure.analyse(singly(12, 21.5, 3.00, 1.128, FC3500), Bending.SAGGING);
         near(5.04, r.a() / IN, 0.002, "a");
         near(5.93, r.c() / IN, 0.002, "c");
