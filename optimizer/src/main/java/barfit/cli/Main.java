@@ -67,6 +67,10 @@ public final class Main implements Runnable {
                     c.getErr().println(OUT_OF_MEMORY);
                     return INTERNAL;
                 }
+                if (t instanceof barfit.design.SetupError se) {
+                    c.getErr().println("barfit: " + se.getMessage());
+                    return INTERNAL;
+                }
             }
             c.getErr().println("barfit: internal error, please report it with the input file: " + ex);
             if (System.getenv("BARFIT_DEBUG") != null) {

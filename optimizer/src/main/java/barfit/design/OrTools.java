@@ -20,13 +20,13 @@ public final class OrTools {
         String tmp = System.getProperty("java.io.tmpdir");
         Path dir = tmp == null ? null : Path.of(tmp);
         if (dir == null || !Files.isDirectory(dir) || !Files.isWritable(dir)) {
-            throw new IllegalStateException("the temporary folder '" + tmp + "' is missing or not writable; "
+            throw new SetupError("the temporary folder '" + tmp + "' is missing or not writable; "
                     + "the solver unpacks its native library there (set TMPDIR or -Djava.io.tmpdir)");
         }
         try {
             Loader.loadNativeLibraries();
         } catch (UnsatisfiedLinkError | RuntimeException e) {
-            throw new IllegalStateException("cannot load the OR-Tools native library for this machine ("
+            throw new SetupError("cannot load the OR-Tools native library for this machine ("
                     + System.getProperty("os.name") + " " + System.getProperty("os.arch") + "): " + e.getMessage());
         }
         loaded = true;

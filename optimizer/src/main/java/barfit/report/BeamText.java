@@ -95,7 +95,7 @@ public final class BeamText {
             double mu = e.getValue().demand().mu();
             t.row(firstSection ? "sections" : "", where(e.getKey()) + ": Mu = " + u.withUnit(Math.abs(mu), Dim.MOMENT)
                     + ", φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " (ratio " + Words.ratio(Math.abs(mu) / f.phiMn())
-                    + "), εt = " + Words.fixed(f.epsT(), 5) + ", φ = " + Words.fixed(f.phi(), 3));
+                    + "), εt = " + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
             firstSection = false;
         }
         t.row("deflection", deflection(d.report().span(), p, u));

@@ -80,7 +80,7 @@ public final class CheckText {
         } else {
             line.append("no Mu given: capacity in ").append(f.bending().word()).append("   ");
         }
-        line.append("φMn = ").append(u.withUnit(f.phiMn(), Dim.MOMENT)).append("   φ = ").append(Words.fixed(f.phi(), 3))
+        line.append("φMn = ").append(u.withUnit(f.phiMn(), Dim.MOMENT)).append("   φ = ").append(Words.phi(f.phi()))
                 .append(" (").append(f.strainClass()).append(")   εt = ").append(Words.fixed(f.epsT(), 5));
         out.append(line).append('\n');
         out.append("  c = ").append(u.withUnit(f.c(), Dim.LENGTH)).append("   a = ").append(u.withUnit(f.a(), Dim.LENGTH))

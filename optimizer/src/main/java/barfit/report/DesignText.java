@@ -115,7 +115,7 @@ public final class DesignText {
         var f = r.flexure();
         t.row("strength", "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + "   Mu/φMn = "
                 + Words.ratio(Math.abs(p.mu()) / f.phiMn()) + "   εt = " + Words.fixed(f.epsT(), 5) + "   φ = "
-                + Words.fixed(f.phi(), 3) + " (" + f.strainClass() + ")");
+                + Words.phi(f.phi()) + " (" + f.strainClass() + ")");
         if (r.shear() != null) {
             t.row("shear", "φVn = " + u.withUnit(r.shear().phiVn(), Dim.FORCE) + "   Vu/φVn = "
                     + Words.ratio(r.shear().vu() / r.shear().phiVn()));

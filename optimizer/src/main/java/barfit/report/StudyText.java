@@ -61,7 +61,7 @@ public final class StudyText {
                 }
                 t.row(o.label() + (o == r.best() ? "  ◀" : ""), size(s, u), s.tension(), s.compression(),
                         Words.ratio(s.mu() / s.phiMn()), Words.fixed(s.epsT(), 5),
-                        Words.fixed(s.phi(), 3) + (s.strainClass().equals("transition") ? " transition" : ""),
+                        Words.phi(s.phi()) + (s.strainClass().equals("transition") ? " transition" : ""),
                         compression(s), s.longitudinalBars() + " / " + s.layers(), cost(s, u, pb),
                         String.format(Locale.ROOT, "+%.1f %%", 100 * (s.total() - best) / best));
                 var c = pb ? s.cost() : Money.scaled(s.cost(), u);

@@ -58,4 +58,15 @@ public final class Words {
     public static String fixed(double v, int decimals) {
         return String.format(Locale.ROOT, "%." + decimals + "f", v);
     }
+
+    /**
+     * φ to three decimals; to four when three would round a transition-zone φ up to 0.900 (or down to
+     * 0.650) and so read as tension- or compression-controlled.
+     */
+    public static String phi(double phi) {
+        String three = fixed(phi, 3);
+        boolean atLimit = three.equals("0.900") || three.equals("0.650");
+        boolean inside = phi < 0.9 - 1e-12 && phi > 0.65 + 1e-12;
+        return atLimit && inside ? fixed(phi, 4) : three;
+    }
 }

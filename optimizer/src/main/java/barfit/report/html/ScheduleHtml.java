@@ -469,7 +469,7 @@ public final class ScheduleHtml {
             double mu = Math.abs(e.getValue().demand().mu());
             kv(out, place(p, e.getKey()), "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " for Mu = "
                     + u.withUnit(mu, Dim.MOMENT) + " (Mu/φMn " + Words.ratio(mu / f.phiMn()) + "), ε_t = "
-                    + Words.fixed(f.epsT(), 5) + ", φ = " + Words.fixed(f.phi(), 3));
+                    + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
         }
         kv(out, "deflection", deflection(d.report().span(), p, u));
         kv(out, "binding", binding(o.binding()));

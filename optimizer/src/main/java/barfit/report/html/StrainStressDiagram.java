@@ -141,7 +141,7 @@ public final class StrainStressDiagram {
         double y = bottom + 34;
         Svg.text(out, STRAIN_LEFT, y, "start", "class", "ε_t = " + Svg.strain(f.epsT()) + ": " + f.strainClass()
                 + " (ε_ty = " + Words.fixed(f.epsTy(), 5) + ", ε_ty + 0.003 = " + Words.fixed(f.epsTy() + 0.003, 5)
-                + "), φ = " + Words.fixed(f.phi(), 3) + " (Table 21.2.2)");
+                + "), φ = " + Words.phi(f.phi()) + " (Table 21.2.2)");
         Svg.text(out, STRAIN_LEFT, y + 16, "start", "class", "c = " + len(f.c(), u) + ", a = β1 c = " + len(f.a(), u)
                 + ", d = " + len(f.d(), u) + ", d_t = " + len(f.dt(), u) + ";  Mn = " + u.withUnit(f.mn(), Dim.MOMENT)
                 + ", φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT));

@@ -1,0 +1,8 @@
+package barfit.design;
+
+/** The machine cannot run the solver (no temporary folder, no native library): not a bug, not bad input. */
+public final class SetupError extends RuntimeException {
+    public SetupError(String message) {
+        super(message);
+    }
+}
