@@ -14,6 +14,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -32,6 +33,9 @@ final class CompareCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE", description = "YAML input of barfit design (see examples/studies/)")
     Path file;
 
+    @CommandLine.Mixin
+    SolverFlags solver;
+
     @Option(names = "--beam", paramLabel = "ID", description = "study only this beam")
     String beam;
 
@@ -48,17 +52,13 @@ final class CompareCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
-    @Option(names = "--workers", defaultValue = "1", description = "CP-SAT workers (default: ${DEFAULT-VALUE})")
-    int workers;
 
-    @Option(names = "--seed", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
-    int seed;
 
     @Override
     public Integer call() {
         DesignInput in = DesignInputReader.read(file);
         var u = in.settings().units();
-        SolverOptions options = new SolverOptions(60, Math.max(1, workers), seed);
+        SolverOptions options = solver.options();
         Double capMm = cap == null ? null : Studies.depthWithinSearch(in, "--cap", cap);
         List<Double> widths = in.space().widths();
         double widest = widths.get(widths.size() - 1);

@@ -19,6 +19,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -36,6 +37,9 @@ final class DesignCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE", description = "YAML input (see examples/design/)")
     Path file;
 
+    @CommandLine.Mixin
+    SolverFlags solver;
+
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
@@ -46,16 +50,8 @@ final class DesignCommand implements Callable<Integer> {
             description = "also show the N next-cheapest distinct designs (default: ${DEFAULT-VALUE})")
     int alternatives;
 
-    @Option(names = "--time-limit", paramLabel = "SECONDS", defaultValue = "60",
-            description = "CP-SAT time limit per solve (default: ${DEFAULT-VALUE})")
-    double timeLimit;
 
-    @Option(names = "--workers", paramLabel = "N", defaultValue = "1",
-            description = "CP-SAT workers (default: ${DEFAULT-VALUE}; 1 gives repeatable answers)")
-    int workers;
 
-    @Option(names = "--seed", paramLabel = "N", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
-    int seed;
 
     @Option(names = "--trail", negatable = true, defaultValue = "false",
             description = "add the checks table and calculation trail of each chosen layout")
@@ -66,12 +62,7 @@ final class DesignCommand implements Callable<Integer> {
         if (alternatives < 0 || alternatives > 20) {
             throw new InputError(Location.ofFile("--alternatives"), "expected 0 to 20, got " + alternatives);
         }
-        if (workers < 1 || workers > 64) {
-            throw new InputError(Location.ofFile("--workers"), "expected 1 to 64, got " + workers);
-        }
-        if (!(timeLimit > 0)) {
-            throw new InputError(Location.ofFile("--time-limit"), "expected a positive number of seconds");
-        }
+        SolverOptions options = solver.options();
         DesignInput input = DesignInputReader.read(file);
         List<DesignBeam> beams = input.beams();
         if (beam != null) {
@@ -84,9 +75,9 @@ final class DesignCommand implements Callable<Integer> {
         }
         var settings = input.settings();
         CostModel cost = new CostModel(input.rates(), settings.detailing().cover());
-        SectionDesigner designer = new SectionDesigner(cost, new SolverOptions(timeLimit, workers, seed),
+        SectionDesigner designer = new SectionDesigner(cost, options,
                 settings.units());
-        BeamDesigner spans = new BeamDesigner(cost, new SolverOptions(timeLimit, workers, seed), settings.units());
+        BeamDesigner spans = new BeamDesigner(cost, options, settings.units());
         List<DesignItem> outcomes = new ArrayList<>();
         for (DesignBeam b : beams) {
             outcomes.add(b.isWhole() ? DesignItem.of(spans.design(span(input, b), alternatives))

@@ -22,6 +22,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -43,6 +44,9 @@ final class ScheduleCommand implements Callable<Integer> {
             + "(unless --beams) beams (see examples/schedule/)")
     Path file;
 
+    @CommandLine.Mixin
+    SolverFlags solver;
+
     @Option(names = "--beams", paramLabel = "CSV", description = "read the beams from this CSV file instead of FILE")
     Path beams;
 
@@ -61,16 +65,8 @@ final class ScheduleCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "beams designed in parallel (default: the number of cores)")
     Integer threads;
 
-    @Option(names = "--time-limit", paramLabel = "SECONDS", defaultValue = "60",
-            description = "CP-SAT time limit per solve (default: ${DEFAULT-VALUE})")
-    double timeLimit;
 
-    @Option(names = "--workers", paramLabel = "N", defaultValue = "1",
-            description = "CP-SAT workers per solve (default: ${DEFAULT-VALUE}; 1 gives repeatable answers)")
-    int workers;
 
-    @Option(names = "--seed", paramLabel = "N", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
-    int seed;
 
     @Override
     public Integer call() {
@@ -79,12 +75,7 @@ final class ScheduleCommand implements Callable<Integer> {
         if (nThreads < 1 || nThreads > 256) {
             throw new InputError(Location.ofFile("--threads"), "expected 1 to 256, got " + nThreads);
         }
-        if (workers < 1 || workers > 64) {
-            throw new InputError(Location.ofFile("--workers"), "expected 1 to 64, got " + workers);
-        }
-        if (!(timeLimit > 0)) {
-            throw new InputError(Location.ofFile("--time-limit"), "expected a positive number of seconds");
-        }
+        SolverOptions options = solver.options();
         if (out != null) {
             checkOutputs();
         }
@@ -93,7 +84,7 @@ final class ScheduleCommand implements Callable<Integer> {
         CostModel cost = new CostModel(input.rates(), input.settings().detailing().cover());
         ScheduleResult result;
         try {
-            result = new ScheduleSolver(cost, new SolverOptions(timeLimit, workers, seed), nThreads, bar).solve(input);
+            result = new ScheduleSolver(cost, options, nThreads, bar).solve(input);
         } finally {
             bar.finish();
         }

@@ -18,6 +18,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
+import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -34,6 +35,9 @@ final class SweepCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "FILE", description = "YAML input of barfit design")
     Path file;
+
+    @CommandLine.Mixin
+    SolverFlags solver;
 
     @Option(names = "--beam", paramLabel = "ID", description = "sweep only this beam")
     String beam;
@@ -59,11 +63,7 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--force", description = "overwrite the plot file if it exists")
     boolean force;
 
-    @Option(names = "--workers", defaultValue = "1", description = "CP-SAT workers (default: ${DEFAULT-VALUE})")
-    int workers;
 
-    @Option(names = "--seed", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
-    int seed;
 
     /** The plot must go to a new (or, with --force, an existing) file in an existing, writable directory. */
     private void checkPlotFile() {
@@ -114,7 +114,7 @@ final class SweepCommand implements Callable<Integer> {
         if (caps.get(caps.size() - 1) < hi - 1e-6) {
             caps.add(hi); // --to off the step grid: the range ends where it was asked to
         }
-        SolverOptions options = new SolverOptions(60, Math.max(1, workers), seed);
+        SolverOptions options = solver.options();
         List<Target> targets = Studies.targets(in, beam, file, options);
         if (plot != null && targets.size() != 1) {
             throw new InputError(Location.ofFile("--plot"), "a plot shows one beam; expected --beam ID with --plot (the "

@@ -103,7 +103,7 @@ public final class ExhaustiveSearch {
     }
 
     /** All count vectors n1 >= n2 >= ... >= 2 with n1 <= nmax. */
-    static List<List<Integer>> countVectors(int layers, int nmax) {
+    public static List<List<Integer>> countVectors(int layers, int nmax) {
         List<List<Integer>> out = new ArrayList<>();
         fill(layers, nmax, new ArrayList<>(), out);
         return out;

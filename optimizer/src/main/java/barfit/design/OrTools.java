@@ -1,6 +1,7 @@
 package barfit.design;
 
 import com.google.ortools.Loader;
+import com.google.ortools.sat.CpSolver;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -30,5 +31,14 @@ public final class OrTools {
                     + System.getProperty("os.name") + " " + System.getProperty("os.arch") + "): " + e.getMessage());
         }
         loaded = true;
+    }
+
+    /** A CP-SAT solver set up as the options say: workers, fixed seed, time limit, no log. */
+    public static CpSolver solver(SolverOptions o) {
+        load();
+        CpSolver solver = new CpSolver();
+        solver.getParameters().setNumWorkers(Math.max(1, o.workers())).setRandomSeed(o.seed())
+                .setMaxTimeInSeconds(o.timeLimitSeconds()).setLogSearchProgress(false);
+        return solver;
     }
 }

@@ -344,22 +344,10 @@ final class KMedian {
     /** Total cost with these sizes open, each group in its cheapest open size; NONE if a group fits none. */
     long total(boolean[] open) {
         long sum = 0;
-        int count = 0;
-        int[] list = new int[m];
-        for (int s = 0; s < m; s++) {
-            if (open[s]) {
-                list[count++] = s;
-            }
-        }
+        int[] list = openSizes(open);
+        int count = list.length;
         for (int g = 0; g < n; g++) {
-            long best = NONE;
-            long[] row = cost[g];
-            for (int x = 0; x < count; x++) {
-                long v = row[list[x]];
-                if (v < best) {
-                    best = v;
-                }
-            }
+            long best = cheapestOpen(cost[g], list, count);
             if (best == NONE) {
                 return NONE;
             }
@@ -395,9 +383,8 @@ final class KMedian {
         return out;
     }
 
-    /** A penalised total for the greedy: groups that fit no open size count a large fixed sum. */
-    private double penalised(boolean[] open) {
-        double sum = 0;
+    /** The indices of the open sizes, in order. */
+    private int[] openSizes(boolean[] open) {
         int count = 0;
         int[] list = new int[m];
         for (int s = 0; s < m; s++) {
@@ -405,15 +392,25 @@ final class KMedian {
                 list[count++] = s;
             }
         }
+        return Arrays.copyOf(list, count);
+    }
+
+    /** The least of a group's costs over the first {@code count} sizes of {@code open}; NONE if none fits. */
+    private static long cheapestOpen(long[] row, int[] open, int count) {
+        long best = NONE;
+        for (int x = 0; x < count; x++) {
+            best = Math.min(best, row[open[x]]);
+        }
+        return best;
+    }
+
+    /** A penalised total for the greedy: groups that fit no open size count a large fixed sum. */
+    private double penalised(boolean[] open) {
+        double sum = 0;
+        int[] list = openSizes(open);
+        int count = list.length;
         for (int g = 0; g < n; g++) {
-            long best = NONE;
-            long[] row = cost[g];
-            for (int x = 0; x < count; x++) {
-                long v = row[list[x]];
-                if (v < best) {
-                    best = v;
-                }
-            }
+            long best = cheapestOpen(cost[g], list, count);
             sum += best == NONE ? 1e18 : best;
         }
         return sum + (double) fixed * count;
@@ -676,9 +673,8 @@ final class KMedian {
             model.addHint(hintVars.get(i), hintValues.get(i));
         }
         model.minimize(objective);
-        CpSolver solver = new CpSolver();
-        solver.getParameters().setNumWorkers(Math.max(1, options.workers())).setRandomSeed(options.seed())
-                .setMaxTimeInSeconds(options.timeLimitSeconds()).setLinearizationLevel(2);
+        CpSolver solver = OrTools.solver(options);
+        solver.getParameters().setLinearizationLevel(2);
         CpSolverStatus st = solver.solve(model);
         if (st != CpSolverStatus.OPTIMAL && st != CpSolverStatus.FEASIBLE) {
             // nothing better within the time: the local-search solution with the relaxation's bound

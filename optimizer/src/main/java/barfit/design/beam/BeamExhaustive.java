@@ -2,6 +2,7 @@ package barfit.design.beam;
 
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
+import barfit.design.ExhaustiveSearch;
 import barfit.design.Layout;
 import barfit.section.BarSpacing;
 import barfit.section.CheckResult;
@@ -195,20 +196,8 @@ public final class BeamExhaustive {
     static List<List<Integer>> vectors(int maxLayers, int nmax) {
         List<List<Integer>> out = new ArrayList<>();
         for (int layers = 1; layers <= maxLayers; layers++) {
-            fill(layers, nmax, new ArrayList<>(), out);
+            out.addAll(ExhaustiveSearch.countVectors(layers, nmax));
         }
         return out;
-    }
-
-    private static void fill(int layers, int cap, List<Integer> cur, List<List<Integer>> out) {
-        if (cur.size() == layers) {
-            out.add(List.copyOf(cur));
-            return;
-        }
-        for (int v = 2; v <= cap; v++) {
-            cur.add(v);
-            fill(layers, v, cur, out);
-            cur.remove(cur.size() - 1);
-        }
     }
 }

@@ -1018,21 +1018,10 @@ public final class BeamGenerator {
                             double d = midSearch.d();
                             double as = midSearch.tensionArea();
                             int legs = p.legsFor(Math.max(split[0], top.nc()));
-                            Map<Integer, Stirrups> zs = new LinkedHashMap<>();
-                            double stirCost = 0;
-                            boolean ok = true;
-                            for (int zi : midZones) {
-                                BeamProblem.Zone z = zones.get(zi);
-                                Stirrups st = zoneStirrups(shape, f, zi, bb, split, legs, d, as);
-                                if (st == null) {
-                                    ok = false;
-                                    break;
-                                }
-                                zs.put(zi, st);
-                                stirCost += stirrupCost(f.b(), f.h(), st, z);
-                            }
-                            if (ok) {
-                                out.add(new MidOpt(top, bb, TensionSearch.toList(split), d, zs,
+                            ZoneSet zs = zoneSet(shape, f, midZones, bb, split, legs, d, as);
+                            if (zs != null) {
+                                double stirCost = zs.cost();
+                                out.add(new MidOpt(top, bb, TensionSearch.toList(split), d, zs.stirrups(),
                                         barCost(bb, n, p.span()) + stirCost, p.legsFor(split[0])));
                                 cheapestByLegs.merge(p.legsFor(split[0]), barCost(bb, n, p.span()) + stirCost, Math::min);
                                 if (Double.isNaN(firstStirrups)) {
@@ -1060,6 +1049,26 @@ public final class BeamGenerator {
             }
         }
         return out;
+    }
+
+    /** The cheapest stirrups of some zones for one set of tension bars, and their cost over the zones. */
+    private record ZoneSet(Map<Integer, Stirrups> stirrups, double cost) {
+    }
+
+    /** Stirrups with at least {@code legs} legs in each of the zones, or null if some zone has none that pass. */
+    private ZoneSet zoneSet(SectionShape shape, Frame f, List<Integer> zoneIds, BarSize tension, int[] counts, int legs,
+            double d, double as) {
+        Map<Integer, Stirrups> zs = new LinkedHashMap<>();
+        double cost = 0;
+        for (int zi : zoneIds) {
+            Stirrups st = zoneStirrups(shape, f, zi, tension, counts, legs, d, as);
+            if (st == null) {
+                return null;
+            }
+            zs.put(zi, st);
+            cost += stirrupCost(f.b(), f.h(), st, zones.get(zi));
+        }
+        return new ZoneSet(zs, cost);
     }
 
     private Stirrups zoneStirrups(SectionShape shape, Frame f, int zone, BarSize tension, int[] counts, int legs, double d,
@@ -1202,22 +1211,10 @@ public final class BeamGenerator {
                                 if (legs < p.legsFor(split[0])) {
                                     continue;
                                 }
-                                Map<Integer, Stirrups> zs = new LinkedHashMap<>();
-                                double stirCost = 0;
-                                boolean ok = true;
-                                for (int zi : myZones) {
-                                    BeamProblem.Zone z = zones.get(zi);
-                                    Stirrups st = zoneStirrups(shape, f, zi, t, split, legs, d, as);
-                                    if (st == null) {
-                                        ok = false;
-                                        break;
-                                    }
-                                    zs.put(zi, st);
-                                    stirCost += stirrupCost(f.b(), f.h(), st, z);
-                                }
-                                if (ok) {
-                                    out.add(new SupportOpt(t, TensionSearch.toList(split), d, legs, zs, bars + stirCost,
-                                            bottom.getKey()));
+                                ZoneSet zs = zoneSet(shape, f, myZones, t, split, legs, d, as);
+                                if (zs != null) {
+                                    out.add(new SupportOpt(t, TensionSearch.toList(split), d, legs, zs.stirrups(),
+                                            bars + zs.cost(), bottom.getKey()));
                                 }
                             }
                         }

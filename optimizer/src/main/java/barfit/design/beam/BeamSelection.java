@@ -221,9 +221,7 @@ public final class BeamSelection {
     }
 
     public Result solve(SolverOptions o, int solves, int cuts) {
-        CpSolver solver = new CpSolver();
-        solver.getParameters().setNumWorkers(Math.max(1, o.workers())).setRandomSeed(o.seed())
-                .setMaxTimeInSeconds(o.timeLimitSeconds()).setLogSearchProgress(false);
+        CpSolver solver = OrTools.solver(o);
         long t0 = System.nanoTime();
         CpSolverStatus st = solver.solve(model);
         double secs = (System.nanoTime() - t0) / 1e9;
