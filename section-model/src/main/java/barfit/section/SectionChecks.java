@@ -467,7 +467,7 @@ public final class SectionChecks {
                 : CheckResult.atLeast("shear_min", "Minimum shear reinforcement (not required, Vu ≤ φ 0.083 λ √f'c bw d)",
                         "9.6.3.1", Q.force(sh.minShearTrigger()), Q.force(sh.vu()), "provided stirrups exceed the need"));
         out.add(CheckResult.atMost("stirrup_spacing", "Stirrup spacing along the beam", "9.7.6.2.2",
-                Q.length(st.spacing()), Q.length(sh.sMaxAlong()), sh.highShear() ? "Vs > 0.33 √f'c bw d: halved limits"
+                Q.length(st.spacing()), Q.length(sh.sMaxAlong()), sh.highShear() ? "required Vs > " + s.code().vsSplit().shown() + " √f'c bw d: halved limits"
                         : null));
         double across = Shear.legSpacing(s);
         out.add(CheckResult.atMost("stirrup_legs", "Stirrup leg spacing across the width", "9.7.6.2.2",

@@ -54,7 +54,10 @@ public final class Shear {
         double vsCap = code.vsMax().si() * rootFc * bw * d;
         double vnLimit = phi * (vc + vsCap);
         double trigger = phi * code.shearMinTrigger().si() * lambda * rootFc * bw * d;
-        boolean high = vs > code.vsSplit().si() * rootFc * bw * d;
+        // Table 9.7.6.2.2 keys its halved limits on the Vs the section needs, not on what the stirrups give
+        double vsRequired = Math.max(0, vu / phi - vc);
+        double vsSplit = code.vsSplit().si() * rootFc * bw * d;
+        boolean high = vsRequired > vsSplit;
         double sAlong = high ? Math.min(d / 4, code.stirrupSpacingCapHigh()) : Math.min(d / 2, code.stirrupSpacingCap());
         double sAcross = high ? Math.min(d / 2, code.stirrupSpacingCapHigh()) : Math.min(d, code.stirrupSpacingCap());
 
@@ -110,9 +113,13 @@ public final class Shear {
                     "0.75 × " + code.shearMinTrigger().shown() + " × {} × √{} × {} × {}", Q.force(trigger),
                     Q.number(lambda), Q.stress(rootFc * rootFc), Q.length(bw), Q.length(d));
             if (st != null) {
-                t.step("s,max", high ? "min(d/4, " + (code.inchPound() ? "12 in" : "300 mm") + "), Vs > "
+                t.step("Vs,req", "max(0, Vu / φ − Vc)", "max(0, {} / 0.75 − {})", Q.force(vsRequired), Q.force(vu),
+                        Q.force(vc));
+                t.step(code.vsSplit().shown() + " √f'c bw d", "Table 9.7.6.2.2", code.vsSplit().shown()
+                        + " × √{} × {} × {}", Q.force(vsSplit), Q.stress(rootFc * rootFc), Q.length(bw), Q.length(d));
+                t.step("s,max", high ? "min(d/4, " + (code.inchPound() ? "12 in" : "300 mm") + "), Vs,req > "
                         + code.vsSplit().shown() + " √f'c bw d" : "min(d/2, " + (code.inchPound() ? "24 in" : "600 mm")
-                        + "), Vs ≤ " + code.vsSplit().shown() + " √f'c bw d", null, Q.length(sAlong));
+                        + "), Vs,req ≤ " + code.vsSplit().shown() + " √f'c bw d", null, Q.length(sAlong));
             }
         }
         return new ShearResult(vu, bw, d, rhoW, lambdaS, vc, row, vs, phiVn, vnLimit, avMin, av, trigger, sAlong,

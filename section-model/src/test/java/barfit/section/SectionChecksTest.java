@@ -73,17 +73,40 @@ class SectionChecksTest {
     }
 
     @Test
-    void stirrupSpacingHalvesAboveVsLimit() {
-        // ACI 318-19 Table 9.7.6.2.2: s <= min(d/2, 600 mm); if Vs > 0.33 sqrt(f'c) bw d, min(d/4, 300 mm)
+    void stirrupSpacingHalvesAboveRequiredVsLimit() {
+        // ACI 318-19 Table 9.7.6.2.2: s <= min(d/2, 600 mm); where the required Vs = Vu/phi - Vc exceeds
+        // 0.33 sqrt(f'c) bw d, min(d/4, 300 mm). Hand calculation from the clause: bw = 300, d = 500,
+        // f'c = 28 MPa: 0.33 x 5.2915 x 300 x 500 = 261.9 kN; 4 No. 29 (2580 mm², rho_w = 0.0172) with
+        // Av >= Av,min: Vc = max(0.17, 0.66 x 0.0172^(1/3)) x 5.2915 x 150 000 = 135.3 kN (row (b)).
         double h = 560;
         List<BarLayer> bars = List.of(Sections.bottomAtDepth(Sections.si("29"), 4, h, 500));
-        ShearResult lo = SectionChecks.run(siBeam(300, h, bars, new Stirrups(Sections.si("10"), 2, 200)),
-                new Demand(null, 100e3), null, Trail.off()).shear();
+        Stirrups dense = new Stirrups(Sections.si("10"), 4, 60); // provides Vs = 4 x 71 x 420 x 500 / 60 ≈ 1000 kN
+        // Vu = 250 kN: Vs,req = 333.3 - 135.3 = 198 kN <= 261.9 kN, so the full limits apply however much
+        // Vs the stirrups provide
+        ShearResult lo = SectionChecks.run(siBeam(300, h, bars, dense), new Demand(null, 250e3), null, Trail.off())
+                .shear();
+        assertFalse(lo.highShear());
         assertEquals(250, lo.sMaxAlong(), 1e-9);
-        ShearResult hi = SectionChecks.run(siBeam(300, h, bars, new Stirrups(Sections.si("10"), 4, 60)),
-                new Demand(null, 100e3), null, Trail.off()).shear();
+        // Vu = 400 kN: Vs,req = 533.3 - 135.3 = 398 kN > 261.9 kN: halved, s,max = d/4 = 125 mm
+        ShearResult hi = SectionChecks.run(siBeam(300, h, bars, new Stirrups(Sections.si("10"), 4, 100)),
+                new Demand(null, 400e3), null, Trail.off()).shear();
         assertTrue(hi.highShear());
         assertEquals(125, hi.sMaxAlong(), 1e-9);
+    }
+
+    @Test
+    void lightShearKeepsFullSpacingLimitOnAShallowBeam() {
+        // ACI 318-19 Table 9.7.6.2.2 read with the required Vs: a 300 x 300 mm beam, d = 250 mm, f'c = 28,
+        // Vu = 14.6 kN, No. 10 stirrups (2 legs) at 100 mm. The stirrups provide Vs = 2 x 71 x 420 x 250 / 100
+        // = 149 kN > 0.33 sqrt(f'c) bw d = 131 kN, but the beam needs none of it (Vu/phi = 19.5 kN < Vc):
+        // s,max = d/2 = 125 mm and the stirrups pass (hand calculation from the clause).
+        double h = 300;
+        List<BarLayer> bars = List.of(Sections.bottomAtDepth(Sections.si("16"), 3, h, 250));
+        CheckReport r = SectionChecks.run(siBeam(300, h, bars, new Stirrups(Sections.si("10"), 2, 100)),
+                new Demand(null, 14.6e3), null, Trail.off());
+        assertFalse(r.shear().highShear());
+        assertEquals(125, r.shear().sMaxAlong(), 1e-9);
+        assertTrue(r.check("stirrup_spacing").orElseThrow().pass());
     }
 
     // ---- minimum steel ----
