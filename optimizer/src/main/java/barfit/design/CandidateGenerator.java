@@ -8,6 +8,7 @@ import barfit.section.Bending;
 import barfit.section.CheckResult;
 import barfit.section.Detailing;
 import barfit.section.SectionChecks;
+import barfit.section.StirrupRules;
 import barfit.section.SectionProbe;
 import barfit.section.SectionShape;
 import barfit.section.StrengthBound;
@@ -61,6 +62,8 @@ public final class CandidateGenerator {
     private int keep;
     private double cachedBound = Double.POSITIVE_INFINITY;
     private boolean boundDirty = true;
+    /** Whether an option of the compression layer being tried relied on its bars (so needed ties). */
+    private boolean tiesRelied;
 
     public CandidateGenerator(SectionProblem problem, CostModel cost) {
         this.p = problem;
@@ -311,6 +314,7 @@ public final class CandidateGenerator {
                         continue;
                     }
                     int nMin = Arrays.stream(counts).sum();
+                    tiesRelied = false;
                     boolean ductilityStopped = scanUpward(f, shape, key, t, nmax, ncr, counts, c, m,
                             base + cm.cost(), stirLb, stirrupCache);
                     // later compression layers cost more; they cannot save a bar or make more bars ductile, and
@@ -320,7 +324,9 @@ public final class CandidateGenerator {
                     int layersUsed = counts.length;
                     boolean legsFree = m >= maxLegs && p.space().legsFor(m) <= p.space().legsFor(counts[0])
                             && p.space().legsFor(counts[0]) == p.space().legsFor((nMin + layersUsed - 1) / layersUsed);
-                    if (!ductilityStopped && nMin <= nFloor && legsFree) {
+                    // ties round compression steel that is relied on ask more of the stirrups as the layer
+                    // grows, so a later compression layer may then need fewer legs: keep trying
+                    if (!ductilityStopped && nMin <= nFloor && legsFree && !tiesRelied) {
                         break;
                     }
                 }
@@ -414,7 +420,19 @@ public final class CandidateGenerator {
     /** The layout of the bars just placed in the probe, with its cheapest stirrups, kept if the cheapest for its key. */
     private void offer(Frame f, SectionShape shape, String key, BarSize t, int[] split, BarSize c, int m,
             Map<String, Stirrups> cache) {
-        Stirrups st = stirrups(f, t, split, p.space().legsFor(Math.max(split[0], m)), Math.min(split[0], m), cache);
+        // the ties 9.7.6.4 asks round compression steel relied on, judged on these bars by the section model
+        Layout bars = new Layout(f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m,
+                new Stirrups(f.stirrupBar(), 2, p.space().stirrupSpacings().get(0)), f.skin());
+        StirrupRules.TieDemand ties = StirrupRules.ties(bars.section(p.materials(), p.detailing(), p.code()), bending,
+                p.mu());
+        if (ties.required()) {
+            tiesRelied = true;
+            if (!ties.sizeOk(f.stirrupBar().diameter())) {
+                return;
+            }
+        }
+        int minLegs = Math.max(p.space().legsFor(Math.max(split[0], m)), ties.minLegs());
+        Stirrups st = stirrups(f, t, split, minLegs, Math.min(split[0], m), ties.maxSpacing(), cache);
         if (st == null) {
             return;
         }
@@ -429,15 +447,17 @@ public final class CandidateGenerator {
 
     /**
      * The cheapest stirrups for the tension bars just placed in the probe with at least {@code minLegs} legs
-     * (the legs the bars per layer need), cached per frame.
+     * (the legs the bars per layer and the ties need), at most {@code maxLegs} and at most {@code maxSpacing}
+     * apart, cached per frame.
      */
-    private Stirrups stirrups(Frame f, BarSize t, int[] counts, int minLegs, int maxLegs, Map<String, Stirrups> cache) {
-        String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs;
+    private Stirrups stirrups(Frame f, BarSize t, int[] counts, int minLegs, int maxLegs, double maxSpacing,
+            Map<String, Stirrups> cache) {
+        String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs + "/" + maxSpacing;
         if (cache.containsKey(key)) {
             return cache.get(key);
         }
         Stirrups chosen = chooser.cheapest(new SectionShape(f.b(), f.h(), p.flange()), f.det(), probe.d(),
-                probe.tensionArea(), p.vu(), minLegs, maxLegs, 0);
+                probe.tensionArea(), p.vu(), minLegs, maxLegs, maxSpacing, 0);
         cache.put(key, chosen);
         return chosen;
     }

@@ -7,6 +7,7 @@ import barfit.section.CheckReport;
 import barfit.section.Demand;
 import barfit.section.Detailing;
 import barfit.section.SectionChecks;
+import barfit.section.StirrupRules;
 import barfit.section.SkinBars;
 import barfit.section.Stirrups;
 import barfit.section.trail.Trail;
@@ -63,18 +64,28 @@ public final class ExhaustiveSearch {
                             for (List<Integer> counts : countVectors(layers, nmax)) {
                                 // the cheapest stirrups per range of legs the bars allow (at least what the busiest layer needs, at most
                                 // one per bar of the outer tension layer and of the compression layer)
-                                java.util.Map<Integer, java.util.Optional<Stirrups>> byLegs = new java.util.HashMap<>();
+                                java.util.Map<String, java.util.Optional<Stirrups>> byLegs = new java.util.HashMap<>();
                                 for (BarSize c : p.space().compressionSizes()) {
                                     int mmax = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
                                     if (!Layout.fitsHeight(h, det, t, layers, c)) {
                                         continue;
                                     }
                                     for (int m = 2; m <= mmax; m++) {
-                                        int need = p.space().legsFor(Math.max(counts.get(0), m));
+                                        // the ties of 9.7.6.4 where these compression bars are relied on
+                                        Layout bars = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m,
+                                                new Stirrups(ds, 2, p.space().stirrupSpacings().get(0)), skin);
+                                        StirrupRules.TieDemand ties = StirrupRules.ties(
+                                                bars.section(p.materials(), p.detailing(), p.code()), p.bending(), p.mu());
+                                        if (!ties.sizeOk(ds.diameter())) {
+                                            continue;
+                                        }
+                                        int need = Math.max(p.space().legsFor(Math.max(counts.get(0), m)), ties.minLegs());
                                         int most = Math.min(counts.get(0), m);
+                                        double sMax = ties.maxSpacing();
                                         final BarSize cc = c;
-                                        Stirrups st = byLegs.computeIfAbsent(need * 1000 + most, k -> java.util.Optional
-                                                .ofNullable(cheapestStirrups(p, b, h, det, t, counts, cc, need, most)))
+                                        Stirrups st = byLegs.computeIfAbsent(need + "/" + most + "/" + sMax,
+                                                k -> java.util.Optional.ofNullable(
+                                                        cheapestStirrups(p, b, h, det, t, counts, cc, need, most, sMax)))
                                                 .orElse(null);
                                         if (st == null) {
                                             continue;
@@ -123,7 +134,7 @@ public final class ExhaustiveSearch {
 
     /** The cheapest stirrup option whose shear checks pass for these tension bars (any hangers). */
     private Stirrups cheapestStirrups(SectionProblem p, double b, double h, Detailing det, BarSize t,
-            List<Integer> counts, BarSize c, int minLegs, int maxLegs) {
+            List<Integer> counts, BarSize c, int minLegs, int maxLegs, double maxSpacing) {
         Stirrups best = null;
         double bestCost = Double.POSITIVE_INFINITY;
         for (int legs : p.space().stirrupLegs()) {
@@ -131,6 +142,9 @@ public final class ExhaustiveSearch {
                 continue;
             }
             for (double s : p.space().stirrupSpacings()) {
+                if (s > maxSpacing * (1 + 1e-9)) {
+                    continue;
+                }
                 Stirrups st = new Stirrups(det.stirrupBar(), legs, s);
                 Layout lay = new Layout(b, h, p.flange(), p.bending(), t, counts, c, 2, st, null);
                 BeamSection sec = lay.section(p.materials(), p.detailing(), p.code());

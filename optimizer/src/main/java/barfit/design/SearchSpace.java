@@ -20,8 +20,11 @@ public record SearchSpace(
         BarSize fixedSkinBar,
         int barsPerTwoLegs) {
 
-    /** Two stirrup legs hold up to four bars in a layer unless the user says otherwise (common practice). */
-    public static final int DEFAULT_BARS_PER_TWO_LEGS = 4;
+    /**
+     * No office legs rule unless the user asks for one: the code's rules (legs held by bars, 9.7.6.2.2
+     * across the width, 9.7.6.4's ties) apply always; 0 here means no stricter practice on top.
+     */
+    public static final int DEFAULT_BARS_PER_TWO_LEGS = 0;
 
     public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
             int maxLayers, List<BarSize> stirrupSizes, List<Integer> stirrupLegs, List<Double> stirrupSpacings,
@@ -113,8 +116,13 @@ public record SearchSpace(
                 stirrupSpacings, hangersOnly, fixedSkinBar, n);
     }
 
-    /** Stirrup legs the bars of a layer need: two per {@code barsPerTwoLegs} bars (common practice, no clause). */
+    /** The office's legs rule, or null when only the code's rules apply. */
+    public barfit.section.StirrupRules.Practice practice() {
+        return barsPerTwoLegs > 0 ? new barfit.section.StirrupRules.Practice(barsPerTwoLegs) : null;
+    }
+
+    /** Stirrup legs the bars of a layer need by the office's rule (two when there is none). */
     public int legsFor(int barsInLayer) {
-        return 2 * Math.max(1, (int) Math.ceil(barsInLayer / (double) barsPerTwoLegs));
+        return barsPerTwoLegs > 0 ? practice().legsFor(barsInLayer) : 2;
     }
 }

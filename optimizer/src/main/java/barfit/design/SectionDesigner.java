@@ -103,24 +103,10 @@ public final class SectionDesigner {
         return new Design(c.layout(), c.cost(), c.cost().times(p.costLength()), report);
     }
 
-    /**
-     * The section model's checks of a layout, and the project's legs rules: enough legs for the bars in
-     * the busiest layer (common practice), and no more legs than bars to hold their bends on either face.
-     */
+    /** The section model's checks of a layout, with the office's legs rule when the search has one. */
     static CheckReport check(SectionProblem p, Layout l, Trail trail) {
         BeamSection s = l.section(p.materials(), p.detailing(), p.code());
-        CheckReport r = SectionChecks.run(s, new Demand(p.mu(), p.vu()), p.span(), trail);
-        int busiest = Math.max(l.tensionCounts().get(0), l.compressionCount());
-        List<CheckResult> checks = new ArrayList<>(r.checks());
-        checks.add(CheckResult.atLeast("stirrup_legs_bars", "Stirrup legs for the bars per layer", "common practice",
-                Q.count(l.stirrups().legs()), Q.count(p.space().legsFor(busiest)), "two legs hold up to "
-                        + p.space().barsPerTwoLegs() + " bars a layer"));
-        // each leg's bend holds a bar on both faces (25.7.1.3 hooks stirrups around longitudinal bars)
-        int fewest = Math.min(l.tensionCounts().get(0), l.compressionCount());
-        checks.add(CheckResult.atMost("stirrup_legs_held", "Stirrup legs held by bars at both faces", "25.7.1.3",
-                Q.count(l.stirrups().legs()), Q.count(fewest), "a leg needs a bar in the outer tension layer and "
-                        + "in the compression layer"));
-        return new CheckReport(r.section(), r.demand(), r.flexure(), r.shear(), checks, r.trail());
+        return SectionChecks.run(s, new Demand(p.mu(), p.vu()), p.span(), trail, true, p.space().practice());
     }
 
     private static List<String> failingIds(SectionProblem p, Layout l) {

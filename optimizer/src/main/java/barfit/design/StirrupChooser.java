@@ -1,6 +1,7 @@
 package barfit.design;
 
 import barfit.section.BeamSection;
+import barfit.section.CheckResult;
 import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.Materials;
@@ -55,7 +56,22 @@ public final class StirrupChooser {
     /** As above with at most {@code maxLegs} legs (each leg's bend must hold a bar of each face). */
     public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
             int maxLegs, double zoneLength) {
+        return cheapest(shape, det, d, as, vu, minLegs, maxLegs, Double.POSITIVE_INFINITY, zoneLength);
+    }
+
+    /**
+     * As above with the spacing at most {@code maxSpacing} (the ties round compression steel that is relied
+     * on, 9.7.6.4.3), or null when no spacing of the space is that close.
+     */
+    public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
+            int maxLegs, double maxSpacing, double zoneLength) {
         List<Double> spacings = space.stirrupSpacings();
+        if (maxSpacing < spacings.get(spacings.size() - 1)) {
+            spacings = spacings.stream().filter(sp -> CheckResult.within(sp, maxSpacing)).toList();
+            if (spacings.isEmpty()) {
+                return null;
+            }
+        }
         Stirrups best = null;
         double bestCost = Double.POSITIVE_INFINITY;
         for (int legs : space.stirrupLegs()) {

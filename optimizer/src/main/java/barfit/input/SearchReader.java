@@ -190,17 +190,27 @@ public final class SearchReader {
         return v;
     }
 
-    /** {@code search.stirrups.bars_per_two_legs} (default 4): bars a pair of stirrup legs can hold in a layer. */
+    /**
+     * {@code search.stirrups.bars_per_two_legs}: an office's rule that two stirrup legs hold at most this
+     * many bars of a layer (at least 2); 0 when not given (the code's rules only).
+     */
     public static int barsPerTwoLegs(YFields doc) {
         if (!doc.has("search")) {
-            return 4;
+            return SearchSpace.DEFAULT_BARS_PER_TWO_LEGS;
         }
         YFields f = doc.map("search", "the search space");
         if (!f.has("stirrups")) {
-            return 4;
+            return SearchSpace.DEFAULT_BARS_PER_TWO_LEGS;
         }
         YFields st = f.map("stirrups", "stirrup options");
-        return st.has("bars_per_two_legs") ? st.positiveInt("bars_per_two_legs", "bars a pair of legs holds in a layer") : 4;
+        if (!st.has("bars_per_two_legs")) {
+            return SearchSpace.DEFAULT_BARS_PER_TWO_LEGS;
+        }
+        int n = st.positiveInt("bars_per_two_legs", "bars a pair of legs holds in a layer");
+        if (n < 2) {
+            throw st.error("bars_per_two_legs", "expected at least 2 bars for a pair of legs to hold, got " + n);
+        }
+        return n;
     }
 
     /** Rate conversions from US units to the SI rates the cost model holds. */

@@ -175,8 +175,9 @@ public final class BeamJson {
             Json.put(z, "spacing", s.spacing(), Dim.LENGTH, u);
             Json.put(z, "from", zones.get(i).from(), Dim.SPAN, u);
             Json.put(z, "to", zones.get(i).to(), Dim.SPAN, u);
-            if (zones.get(i).vu() != null) {
-                Json.put(z, "Vu", zones.get(i).vu(), Dim.FORCE, u);
+            Double zoneVu = d.report().zoneShears().get(i);
+            if (zoneVu != null) {
+                Json.put(z, "Vu", zoneVu, Dim.FORCE, u);
             }
         }
         ArrayNode zoneChecks = o.putArray("zone_checks");

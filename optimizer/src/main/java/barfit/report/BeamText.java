@@ -87,7 +87,8 @@ public final class BeamText {
             var s = l.zoneStirrups().get(i);
             t.row(i == 0 ? "stirrups" : "", z.name() + " zone " + span(z.from(), u) + "–" + span(z.to(), u) + ": "
                     + Words.stirrups(s, u) + " (" + sets(BeamLayout.stirrupSets(z.length(), s.spacing()))
-                    + (z.vu() == null ? ", minimum" : ", Vu = " + u.withUnit(z.vu(), Dim.FORCE)) + ")");
+                    + (d.report().zoneShears().get(i) == null ? ", minimum"
+                            : ", Vu = " + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE)) + ")");
         }
         boolean firstSection = true;
         for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {

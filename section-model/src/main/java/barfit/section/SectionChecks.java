@@ -25,6 +25,15 @@ public final class SectionChecks {
      * to the span checks (a whole beam is checked for depth and deflection once, not per section).
      */
     public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail, boolean withMinimumDepth) {
+        return run(s, demand, span, trail, withMinimumDepth, null);
+    }
+
+    /**
+     * As above, with an office's stricter stirrup-legs rule checked too ({@code practice} null: the code's
+     * rules only).
+     */
+    public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail, boolean withMinimumDepth,
+            StirrupRules.Practice practice) {
         List<CheckResult> out = new ArrayList<>();
         Bending bending = demand.bending();
         FlexureResult fr = Flexure.analyse(s, bending, trail);
@@ -42,6 +51,7 @@ public final class SectionChecks {
             shear = Shear.analyse(s, Math.abs(demand.vu()), d, fr.tensionSteelArea(), trail);
             shearChecks(s, shear, out);
         }
+        out.addAll(StirrupRules.checks(s, s, bending, demand.mu(), practice, "", trail));
         if (withMinimumDepth && span != null && span.ends() != null) {
             minimumDepth(s, span, out, trail);
         } else if (withMinimumDepth && span != null && trail.isOn()) {
@@ -368,7 +378,7 @@ public final class SectionChecks {
      */
     public static List<CheckResult> shearZone(BeamSection s, Bending bending, double vu, String zone, Trail trail) {
         FlexureResult fr = Flexure.analyse(s, bending);
-        double d = fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
+        double d = shearDepth(fr);
         if (trail.isOn()) {
             trail.note("Stirrup zone '" + zone + "': d and As from the " + bending.word() + " section.");
         }
@@ -381,6 +391,15 @@ public final class SectionChecks {
                     c.sense(), c.limit(), c.ratio(), c.pass(), c.note()));
         }
         return named;
+    }
+
+    /** The effective depth shear uses for a section bent in {@code bending}: d of the tension steel, else dt. */
+    public static double shearDepth(BeamSection s, Bending bending) {
+        return shearDepth(Flexure.analyse(s, bending));
+    }
+
+    private static double shearDepth(FlexureResult fr) {
+        return fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
     }
 
     /**

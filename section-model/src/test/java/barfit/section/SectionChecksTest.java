@@ -203,9 +203,12 @@ class SectionChecksTest {
     @Test
     void trailRecordsEveryCheckWithNumbers() {
         double h = 600;
-        BeamSection s = siBeam(300, h, BeamSection.stack(Face.BOTTOM,
-                List.of(new BeamSection.BarGroup(Sections.si("25"), 4)), Sections.detailing(40, Sections.si("10"))),
-                new Stirrups(Sections.si("10"), 2, 200));
+        Detailing det = Sections.detailing(40, Sections.si("10"));
+        List<BarLayer> bars = new java.util.ArrayList<>(BeamSection.stack(Face.BOTTOM,
+                List.of(new BeamSection.BarGroup(Sections.si("25"), 4)), det));
+        // two hangers: each stirrup leg's bend holds a bar at the top as well (25.7.1.3)
+        bars.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(Sections.si("13x"), 2)), det));
+        BeamSection s = siBeam(300, h, bars, new Stirrups(Sections.si("10"), 2, 200));
         Trail t = Trail.recording();
         CheckReport r = SectionChecks.run(s, new Demand(250e6, 150e3), new Span(6000, EndCondition.SIMPLE), t);
         long headings = t.entries().stream().filter(e -> e instanceof Trail.Heading).count();

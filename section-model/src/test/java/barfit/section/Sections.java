@@ -38,6 +38,7 @@ final class Sections {
             case "19" -> bar("No. 19", 19.1, 284);
             case "25" -> bar("No. 25", 25.4, 510);
             case "29" -> bar("No. 29", 28.7, 645);
+            case "36" -> bar("No. 36", 35.8, 1006);
             default -> throw new IllegalArgumentException(name);
         };
     }

@@ -158,10 +158,20 @@ public final class BeamExhaustive {
                 if (legs < need) {
                     continue;
                 }
-                var checks = barfit.section.SectionChecks.shearZone(l.section(p, zone.section(), st),
-                        BeamLayout.bending(p, zone.section()), zone.vu() == null ? 0 : zone.vu(), zone.name(), Trail.off());
+                // the legs held by bars and the ties round compression steel relied on, as the section model has them
+                boolean held = barfit.section.StirrupRules.checks(l.section(p, zone.section(), st),
+                        l.physicalSection(p, zone.section(), st), BeamLayout.bending(p, zone.section()),
+                        BeamLayout.momentAt(p, zone.section()), null, zone.name(), Trail.off()).stream()
+                        .allMatch(CheckResult::pass);
+                if (!held) {
+                    continue;
+                }
+                var trial = l.section(p, zone.section(), st);
+                Double vu = zone.vu(barfit.section.SectionChecks.shearDepth(trial, BeamLayout.bending(p, zone.section())));
+                var checks = barfit.section.SectionChecks.shearZone(trial, BeamLayout.bending(p, zone.section()),
+                        vu == null ? 0 : vu, zone.name(), Trail.off());
                 boolean ok = checks.stream().allMatch(CheckResult::pass);
-                if (zone.vu() == null && ok) {
+                if (vu == null && ok) {
                     var s2 = l.section(p, zone.section(), st);
                     var fr = barfit.section.Flexure.analyse(s2, BeamLayout.bending(p, zone.section()));
                     ok = barfit.section.SectionChecks.minimumStirrupsPass(s2, fr.d(), fr.tensionSteelArea());

@@ -17,6 +17,7 @@ import barfit.section.SectionShape;
 import barfit.section.SkinBars;
 import barfit.section.Span;
 import barfit.section.SpanChecks;
+import barfit.section.StirrupRules;
 import barfit.section.StrengthBound;
 import barfit.section.Stirrups;
 import java.util.ArrayList;
@@ -42,6 +43,8 @@ public final class BeamGenerator {
 
     /** The "legs" of a support option whose section sizes no stirrup zone: it limits nothing. */
     static final int NO_ZONES = 1000;
+    /** The most legs of a support option whose section sizes no stirrup zone: it asks nothing of the bottom bars. */
+    static final int NO_ZONES_MAX = 0;
 
     public record Frame(double b, double h, BarSize ds, Detailing det, SkinBars skin, double cost, double lowerBound,
             boolean deflection, double extLeft, double extRight) {
@@ -65,10 +68,18 @@ public final class BeamGenerator {
      * A support option; {@code legs} is the fewest stirrup legs its zones were given (each zone takes
      * the cheapest stirrups with at least that many), which must hold the bottom bars as well.
      */
-    public record SupportOpt(BarSize bar, List<Integer> counts, double d, int legs, Map<Integer, Stirrups> zones,
-            double cost, String bottomKey) {
+    public record SupportOpt(BarSize bar, List<Integer> counts, double d, int legs, int legsMax,
+            Map<Integer, Stirrups> zones, double cost, String bottomKey) {
         public int total() {
             return BeamLayout.sum(counts);
+        }
+
+        /**
+         * Whether its stirrups suit a mid-span option's bottom bars: enough legs for the office's rule
+         * and no more legs than the bottom bars' outer layer can hold (25.7.1.2, 25.7.1.3).
+         */
+        public boolean holds(MidOpt m) {
+            return legs >= m.legsNeeded() && legsMax <= m.counts().get(0);
         }
     }
 
@@ -95,7 +106,7 @@ public final class BeamGenerator {
     /** Zone stirrups depend only on the zone, the tension bars (d, As) and the legs asked for: remembered per frame. */
     private final Map<ZoneKey, Stirrups> zoneMemo = new HashMap<>();
 
-    private record ZoneKey(int zone, double d, double as, int legs) {
+    private record ZoneKey(int zone, double d, double as, int legs, int mostLegs, double maxSpacing) {
     }
 
     /** Zone indices per place, computed once. */
@@ -473,14 +484,14 @@ public final class BeamGenerator {
         String key = p.bottomAnchored() ? m.key() : null;
         double total = fs.frame().cost() + t.cost() + m.cost();
         if (p.leftSupport()) {
-            SupportOpt l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m.legsNeeded(), key);
+            SupportOpt l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key);
             if (l == null) {
                 return Double.POSITIVE_INFINITY;
             }
             total += l.cost();
         }
         if (p.rightSupport()) {
-            SupportOpt r = cheapestIn(rights, t.bar(), t.nc(), m.legsNeeded(), key);
+            SupportOpt r = cheapestIn(rights, t.bar(), t.nc(), m, key);
             if (r == null) {
                 return Double.POSITIVE_INFINITY;
             }
@@ -508,9 +519,9 @@ public final class BeamGenerator {
             int j = index(m.bar());
             String key = p.bottomAnchored() ? m.key() : null;
             double base = fs.frame().cost() + t.cost() + m.cost();
-            List<SupportOpt> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m.legsNeeded(), key,
+            List<SupportOpt> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key,
                     p.leftSupport());
-            List<SupportOpt> rs = compatible(rights, t.bar(), t.nc(), m.legsNeeded(), key, p.rightSupport());
+            List<SupportOpt> rs = compatible(rights, t.bar(), t.nc(), m, key, p.rightSupport());
             if (ls.isEmpty() || rs.isEmpty()) {
                 continue;
             }
@@ -539,7 +550,7 @@ public final class BeamGenerator {
     }
 
     /** The support options compatible with a mid-span option, cheapest first; a single null where no support. */
-    private static List<SupportOpt> compatible(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, int legsNeeded,
+    private static List<SupportOpt> compatible(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
             String bottomKey, boolean present) {
         if (!present) {
             java.util.List<SupportOpt> none = new ArrayList<>();
@@ -548,7 +559,7 @@ public final class BeamGenerator {
         }
         List<SupportOpt> out = new ArrayList<>();
         for (SupportOpt s : index.getOrDefault(bar, List.of())) {
-            if (s.counts().get(0) >= nc && s.legs() >= legsNeeded && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
+            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
                 out.add(s);
             }
         }
@@ -955,6 +966,7 @@ public final class BeamGenerator {
     private List<MidOpt> mids(Frame f, SectionShape shape, List<TopOpt> tops, MidLimit cut) {
         List<MidOpt> out = new ArrayList<>();
         List<Integer> midZones = zoneIndices(BeamProblem.Place.MID);
+        int mostLegs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
         if (p.cantilever()) {
             // the bottom bars of a cantilever are its hangers: two or more of one size, one layer
             TopOpt only = null;
@@ -1017,13 +1029,26 @@ public final class BeamGenerator {
                             midSearch.place(bb, split);
                             double d = midSearch.d();
                             double as = midSearch.tensionArea();
-                            int legs = p.legsFor(Math.max(split[0], top.nc()));
-                            ZoneSet zs = zoneSet(shape, f, midZones, bb, split, legs, d, as);
+                            // legs: the office's rule, the ties round top bars relied on (9.7.6.4), and no more
+                            // than the outer bottom layer and the continuous top bars hold (25.7.1.2, 25.7.1.3)
+                            StirrupRules.TieDemand ties = midZones.isEmpty() ? StirrupRules.TieDemand.NONE
+                                    : StirrupRules.ties(midSection(f, shape, top, bb, split), Bending.SAGGING, p.mMid());
+                            if (!ties.sizeOk(f.ds().diameter())) {
+                                continue;
+                            }
+                            int legs = Math.max(p.legsFor(Math.max(split[0], top.nc())), ties.minLegs());
+                            int most = Math.min(split[0], top.nc());
+                            ZoneSet zs = zoneSet(shape, f, midZones, bb, split, legs, most, ties.maxSpacing(), d, as);
                             if (zs != null) {
                                 double stirCost = zs.cost();
                                 out.add(new MidOpt(top, bb, TensionSearch.toList(split), d, zs.stirrups(),
                                         barCost(bb, n, p.span()) + stirCost, p.legsFor(split[0])));
-                                cheapestByLegs.merge(p.legsFor(split[0]), barCost(bb, n, p.span()) + stirCost, Math::min);
+                                // only an option whose bottom bars hold every legs count the supports may use
+                                // can stand for the dearer options with more bars below
+                                if (split[0] >= mostLegs) {
+                                    cheapestByLegs.merge(p.legsFor(split[0]), barCost(bb, n, p.span()) + stirCost,
+                                            Math::min);
+                                }
                                 if (Double.isNaN(firstStirrups)) {
                                     firstStirrups = stirCost;
                                 }
@@ -1055,13 +1080,16 @@ public final class BeamGenerator {
     private record ZoneSet(Map<Integer, Stirrups> stirrups, double cost) {
     }
 
-    /** Stirrups with at least {@code legs} legs in each of the zones, or null if some zone has none that pass. */
+    /**
+     * Stirrups with {@code legs} to {@code mostLegs} legs, at most {@code maxSpacing} apart, in each of the
+     * zones, or null if some zone has none that pass.
+     */
     private ZoneSet zoneSet(SectionShape shape, Frame f, List<Integer> zoneIds, BarSize tension, int[] counts, int legs,
-            double d, double as) {
+            int mostLegs, double maxSpacing, double d, double as) {
         Map<Integer, Stirrups> zs = new LinkedHashMap<>();
         double cost = 0;
         for (int zi : zoneIds) {
-            Stirrups st = zoneStirrups(shape, f, zi, tension, counts, legs, d, as);
+            Stirrups st = zoneStirrups(shape, f, zi, legs, mostLegs, maxSpacing, d, as);
             if (st == null) {
                 return null;
             }
@@ -1071,14 +1099,14 @@ public final class BeamGenerator {
         return new ZoneSet(zs, cost);
     }
 
-    private Stirrups zoneStirrups(SectionShape shape, Frame f, int zone, BarSize tension, int[] counts, int legs, double d,
-            double as) {
-        ZoneKey key = new ZoneKey(zone, d, as, legs);
+    private Stirrups zoneStirrups(SectionShape shape, Frame f, int zone, int legs, int mostLegs, double maxSpacing,
+            double d, double as) {
+        ZoneKey key = new ZoneKey(zone, d, as, legs, mostLegs, maxSpacing);
         if (zoneMemo.containsKey(key)) {
             return zoneMemo.get(key);
         }
         BeamProblem.Zone z = zones.get(zone);
-        Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(), legs, z.length());
+        Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(d), legs, mostLegs, maxSpacing, z.length());
         zoneMemo.put(key, st);
         return st;
     }
@@ -1119,7 +1147,8 @@ public final class BeamGenerator {
         double c = 0;
         for (int zi : zoneIndices(place)) {
             BeamProblem.Zone z = zones.get(zi);
-            Stirrups st = chooser.cheapest(shape, f.det(), dMax, asBig, z.vu(), p.space().stirrupLegs().get(0), z.length());
+            Stirrups st = chooser.cheapest(shape, f.det(), dMax, asBig, z.vuLeast(), p.space().stirrupLegs().get(0),
+                    z.length());
             if (st == null) {
                 c = Double.POSITIVE_INFINITY;
                 break;
@@ -1206,15 +1235,41 @@ public final class BeamGenerator {
                             double d = search.d();
                             double as = search.tensionArea();
                             double bars = barCost(t, n, ext);
-                            List<Integer> legOptions = myZones.isEmpty() ? List.of(NO_ZONES) : p.space().stirrupLegs();
-                            for (int legs : legOptions) {
-                                if (legs < p.legsFor(split[0])) {
+                            if (myZones.isEmpty()) {
+                                out.add(new SupportOpt(t, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX,
+                                        Map.of(), bars, bottom.getKey()));
+                                continue;
+                            }
+                            // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
+                            StirrupRules.TieDemand ties = StirrupRules.ties(
+                                    supportSection(f, shape, t, split, bottom.getValue()), Bending.HOGGING, mu);
+                            if (!ties.sizeOk(f.ds().diameter())) {
+                                continue;
+                            }
+                            // one option per range of legs: the fewest must meet the office's rule for the
+                            // bottom bars, the most must be held by them (both settled with the mid-span option)
+                            java.util.Set<Map<Integer, Stirrups>> seen = new java.util.HashSet<>();
+                            List<Integer> legOptions = p.space().stirrupLegs();
+                            for (int lo : legOptions) {
+                                if (lo < p.legsFor(split[0]) || lo < ties.minLegs()) {
                                     continue;
                                 }
-                                ZoneSet zs = zoneSet(shape, f, myZones, t, split, legs, d, as);
-                                if (zs != null) {
-                                    out.add(new SupportOpt(t, TensionSearch.toList(split), d, legs, zs.stirrups(),
-                                            bars + zs.cost(), bottom.getKey()));
+                                for (int hi : legOptions) {
+                                    if (hi < lo || hi > split[0]) {
+                                        continue;
+                                    }
+                                    ZoneSet zs = zoneSet(shape, f, myZones, t, split, lo, hi, ties.maxSpacing(), d, as);
+                                    if (zs == null || !seen.add(zs.stirrups())) {
+                                        continue;
+                                    }
+                                    int fewest = Integer.MAX_VALUE;
+                                    int mostUsed = 0;
+                                    for (Stirrups st : zs.stirrups().values()) {
+                                        fewest = Math.min(fewest, st.legs());
+                                        mostUsed = Math.max(mostUsed, st.legs());
+                                    }
+                                    out.add(new SupportOpt(t, TensionSearch.toList(split), d, fewest, mostUsed,
+                                            zs.stirrups(), bars + zs.cost(), bottom.getKey()));
                                 }
                             }
                         }
@@ -1378,13 +1433,33 @@ public final class BeamGenerator {
         return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
     }
 
+    /** The mid-span section of an option (bottom bars in tension, the continuous top bars above), for its ties. */
+    private BeamSection midSection(Frame f, SectionShape shape, TopOpt top, BarSize bottom, int[] split) {
+        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM,
+                groups(bottom, TensionSearch.toList(split)), f.det()));
+        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(top.bar(), top.nc())),
+                f.det()));
+        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
+    }
+
+    /** A support section of an option (top bars in tension, the bottom bars counted there), for its ties. */
+    private BeamSection supportSection(Frame f, SectionShape shape, BarSize top, int[] split,
+            List<BeamSection.BarGroup> bottom) {
+        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP,
+                groups(top, TensionSearch.toList(split)), f.det()));
+        if (!bottom.isEmpty()) {
+            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, bottom, f.det()));
+        }
+        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
+    }
+
     // ------------------------------------------------------------------ combining and bounding
 
     /** The cheapest compatible support option, or null. */
-    static SupportOpt cheapestSupport(List<SupportOpt> opts, BarSize bar, int nc, int legsNeeded, String bottomKey) {
+    static SupportOpt cheapestSupport(List<SupportOpt> opts, BarSize bar, int nc, MidOpt m, String bottomKey) {
         SupportOpt best = null;
         for (SupportOpt s : opts) {
-            if (s.bar().equals(bar) && s.counts().get(0) >= nc && s.legs() >= legsNeeded
+            if (s.bar().equals(bar) && s.counts().get(0) >= nc && s.holds(m)
                     && java.util.Objects.equals(s.bottomKey(), bottomKey) && (best == null || s.cost() < best.cost())) {
                 best = s;
             }
@@ -1421,14 +1496,14 @@ public final class BeamGenerator {
         return out;
     }
 
-    private static SupportOpt cheapestIn(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, int legsNeeded,
+    private static SupportOpt cheapestIn(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
             String bottomKey) {
         List<SupportOpt> l = index.get(bar);
         if (l == null) {
             return null;
         }
         for (SupportOpt s : l) {
-            if (s.counts().get(0) >= nc && s.legs() >= legsNeeded && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
+            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
                 return s;
             }
         }
@@ -1450,13 +1525,13 @@ public final class BeamGenerator {
             SupportOpt l = null;
             SupportOpt r = null;
             if (p.leftSupport()) {
-                l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m.legsNeeded(), key);
+                l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key);
                 if (l == null) {
                     continue;
                 }
             }
             if (p.rightSupport()) {
-                r = cheapestIn(rights, t.bar(), t.nc(), m.legsNeeded(), key);
+                r = cheapestIn(rights, t.bar(), t.nc(), m, key);
                 if (r == null) {
                     continue;
                 }

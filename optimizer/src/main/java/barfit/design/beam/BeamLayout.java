@@ -112,6 +112,26 @@ public record BeamLayout(
         return new BeamSection(shape(), p.materials(), det, layers, stirrups, skin, p.code());
     }
 
+    /**
+     * Every bar that is at a place, whether or not its strength is counted there (the bottom bars run
+     * the full span even where they are not anchored as compression steel): the bars the legs can hold.
+     */
+    public BeamSection physicalSection(BeamProblem p, BeamProblem.Place place, Stirrups stirrups) {
+        Detailing det = detailing(p.detailing());
+        List<BarLayer> layers = new ArrayList<>(BeamSection.stack(Face.TOP, groups(top, topAt(p, place)), det));
+        layers.addAll(BeamSection.stack(Face.BOTTOM, groups(bottom, bottomCounts), det));
+        return new BeamSection(shape(), p.materials(), det, layers, stirrups, skin, p.code());
+    }
+
+    /** The factored moment of the section at a place (N·mm), or null. */
+    public static Double momentAt(BeamProblem p, BeamProblem.Place place) {
+        return switch (place) {
+            case LEFT -> p.mLeft();
+            case MID -> p.mMid();
+            case RIGHT -> p.mRight();
+        };
+    }
+
     /** Most bars in any layer within a zone whose section is at {@code place} (for the stirrup legs). */
     public int barsPerLayer(BeamProblem p, BeamProblem.Place place) {
         int most = bottomCounts.get(0);

@@ -41,10 +41,54 @@ public record BeamProblem(
     /** Where a section or zone is. */
     public enum Place { LEFT, MID, RIGHT }
 
-    /** A stirrup zone: its place in the span (mm from the left face), design shear and the section it uses. */
-    public record Zone(String name, double from, double to, Double vu, Place section) {
+    /**
+     * A stirrup zone: its place in the span (mm from the left face), the section it uses and its design
+     * shear. A support zone is designed for the given shear at d from its face ({@code vu}); a zone away
+     * from the supports ({@code line} set) for the largest shear of the span's shear line over its length,
+     * which depends on the d of the section the zone is designed with, and for at least {@code floor}.
+     */
+    public record Zone(String name, double from, double to, Double vu, Place section, ShearLine line, double floor) {
+        public Zone(String name, double from, double to, Double vu, Place section) {
+            this(name, from, to, vu, section, null, 0);
+        }
+
         public double length() {
             return to - from;
+        }
+
+        /** The design shear of the zone for a section of effective depth d (N), or null for minimum stirrups. */
+        public Double vu(double d) {
+            if (line == null) {
+                return vu;
+            }
+            return Math.max(floor, Math.max(line.at(from, d), line.at(to, d)));
+        }
+
+        /**
+         * No more than the design shear for any d: the shear line only rises at the zone's ends as d grows
+         * (the given shears sit at d from the faces), so its value at d = 0 bounds it from below.
+         */
+        public Double vuLeast() {
+            return vu(0);
+        }
+    }
+
+    /**
+     * The shear along a uniformly loaded span (the README's assumption) through the given shears at d from
+     * the faces: (d, vLeft) and (l - d, -vRight); a cantilever fixed at the left falls from vLeft at d to
+     * nothing at the tip. Sections nearer a face than d take the shear at d (9.4.3.2). Magnitudes, N.
+     */
+    public record ShearLine(double span, double vLeft, double vRight, boolean cantilever) {
+        public double at(double x, double d) {
+            double l = span;
+            double dd = Math.min(d, 0.5 * l - 1e-6);
+            if (cantilever) {
+                double xx = Math.max(x, dd);
+                return vLeft * Math.max(0, l - xx) / (l - dd);
+            }
+            double xx = Math.min(Math.max(x, dd), l - dd);
+            double v = vLeft - (vLeft + vRight) * (xx - dd) / (l - 2 * dd);
+            return Math.abs(v);
         }
     }
 
@@ -66,10 +110,12 @@ public record BeamProblem(
     }
 
     /**
-     * Stirrup zones from the shear envelope of a uniformly loaded span between the two end shears: each
-     * support zone runs from the face to where the envelope has fallen to half that end's shear; the
-     * middle zone is designed for the larger shear at those points. A cantilever (fixed at the left)
-     * has a support zone to mid-length and an outer zone designed for half the support shear. Without
+     * Stirrup zones from the shear line of a uniformly loaded span through the two end shears at d from
+     * the faces ({@link ShearLine}): each support zone runs from the face to about where the line has
+     * fallen to half that end's shear and is designed for that end's shear; the middle zone for the
+     * largest shear of the line over its length (at the d of the section it uses) and at least the shear
+     * of live load on half the span where service loads are given. A cantilever (fixed at the left)
+     * has a support zone to mid-length and an outer zone designed for the line's shear at mid-length. Without
      * shears, minimum stirrups: one zone over a simple span, zones at the quarter points otherwise. The
      * stirrup legs of a zone hold the bars of the section it is designed with.
      */
@@ -79,7 +125,8 @@ public record BeamProblem(
         if (cantilever()) {
             Double v = vLeft;
             out.add(new Zone("support", 0, l / 2, v, Place.LEFT));
-            out.add(new Zone("outer", l / 2, l, v == null ? null : v / 2, Place.LEFT));
+            out.add(v == null ? new Zone("outer", l / 2, l, null, Place.LEFT)
+                    : new Zone("outer", l / 2, l, null, Place.LEFT, new ShearLine(l, v, 0, true), 0));
             return out;
         }
         if (vLeft == null && vRight == null) {
@@ -99,9 +146,17 @@ public record BeamProblem(
         double xl = total > 0 ? l * vl / (2 * total) : l / 4;
         double xr = total > 0 ? l * vr / (2 * total) : l / 4;
         out.add(new Zone("left", 0, xl, vl, leftSupport() ? Place.LEFT : Place.MID));
-        out.add(new Zone("middle", xl, l - xr, Math.max(vl, vr) / 2, Place.MID));
+        out.add(new Zone("middle", xl, l - xr, null, Place.MID, new ShearLine(l, vl, vr, false), midSpanLiveShear()));
         out.add(new Zone("right", l - xr, l, vr, rightSupport() ? Place.RIGHT : Place.MID));
         return out;
+    }
+
+    /**
+     * The factored shear of live load on half the span, 1.6 wL ln / 8, which a full-span shear line misses
+     * near mid-span (common practice); 0 without service loads.
+     */
+    public double midSpanLiveShear() {
+        return service == null ? 0 : 1.6 * service.live() * span / 8;
     }
 
     /** Widths the search may use. */
@@ -142,8 +197,13 @@ public record BeamProblem(
         return v == null ? null : v * k;
     }
 
-    /** Stirrup legs needed to hold the bars of a layer at stirrup corners and legs (common practice). */
+    /** The office's legs rule, or null when only the code's rules apply (barsPerTwoLegs 0). */
+    public barfit.section.StirrupRules.Practice practice() {
+        return barsPerTwoLegs > 0 ? new barfit.section.StirrupRules.Practice(barsPerTwoLegs) : null;
+    }
+
+    /** Stirrup legs the bars of a layer need by the office's rule (two when there is none). */
     public int legsFor(int barsInLayer) {
-        return 2 * Math.max(1, (int) Math.ceil(barsInLayer / (double) barsPerTwoLegs));
+        return barsPerTwoLegs > 0 ? practice().legsFor(barsInLayer) : 2;
     }
 }

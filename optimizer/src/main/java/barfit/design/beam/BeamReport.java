@@ -7,8 +7,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
-/** The full verification of a span: each flexural section, each stirrup zone, and the span checks. */
+/**
+ * The full verification of a span: each flexural section, each stirrup zone (with the design shear it was
+ * checked for, null for minimum stirrups), and the span checks.
+ */
 public record BeamReport(Map<BeamProblem.Place, CheckReport> sections, List<CheckResult> zoneChecks,
+        List<Double> zoneShears,
         SpanChecks.Result span, barfit.section.trail.Trail zoneTrail,
         barfit.section.trail.Trail spanTrail) {
 

@@ -154,6 +154,16 @@ public final class BeamSelection {
             need.addTerm(mv.get(i), fs.mids().get(i).legsNeeded());
         }
         model.addGreaterOrEqual(legs, need);
+        // and no more legs than the outer bottom layer holds (25.7.1.2, 25.7.1.3)
+        LinearExprBuilder most = LinearExpr.newBuilder();
+        for (int i = 0; i < opts.size(); i++) {
+            most.addTerm(sv.get(i), opts.get(i).legsMax());
+        }
+        LinearExprBuilder held = LinearExpr.newBuilder();
+        for (int i = 0; i < fs.mids().size(); i++) {
+            held.addTerm(mv.get(i), fs.mids().get(i).counts().get(0));
+        }
+        model.addLessOrEqual(most, held);
         // bottom bars counted as compression steel: the support option was built for those bottom bars
         if (p.bottomAnchored()) {
             Map<String, LinearExprBuilder[]> byKey = new LinkedHashMap<>();

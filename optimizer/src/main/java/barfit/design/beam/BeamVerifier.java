@@ -1,14 +1,15 @@
 package barfit.design.beam;
 
 import barfit.section.BeamSection;
+import barfit.section.Bending;
 import barfit.section.CheckReport;
 import barfit.section.CheckResult;
 import barfit.section.Demand;
 import barfit.section.SectionChecks;
 import barfit.section.Span;
 import barfit.section.SpanChecks;
+import barfit.section.StirrupRules;
 import barfit.section.Stirrups;
-import barfit.section.trail.Q;
 import barfit.section.trail.Trail;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -33,18 +34,20 @@ public final class BeamVerifier {
             sections.put(BeamProblem.Place.RIGHT, check(p, l, BeamProblem.Place.RIGHT, p.mRight(), span, withTrail));
         }
         List<CheckResult> zoneChecks = new ArrayList<>();
+        List<Double> zoneShears = new ArrayList<>();
         List<BeamProblem.Zone> zones = p.zones();
         Trail zt = withTrail ? Trail.recording() : Trail.off();
         for (int i = 0; i < zones.size(); i++) {
             BeamProblem.Zone z = zones.get(i);
             Stirrups st = l.zoneStirrups().get(i);
             BeamSection s = l.section(p, z.section(), st);
-            zoneChecks.addAll(SectionChecks.shearZone(s, BeamLayout.bending(p, z.section()), z.vu() == null ? 0 : z.vu(),
-                    z.name(), zt));
-            int need = p.legsFor(l.barsPerLayer(p, z.section()));
-            zoneChecks.add(CheckResult.atLeast("stirrup_legs_bars." + z.name(), "Stirrup legs for the bars per layer ("
-                    + z.name() + " zone)", "common practice", Q.count(st.legs()), Q.count(need),
-                    "two legs hold up to " + p.barsPerTwoLegs() + " bars a layer"));
+            Bending bending = BeamLayout.bending(p, z.section());
+            // the zone's design shear from the span's shear line at this section's own d
+            Double vu = z.vu(SectionChecks.shearDepth(s, bending));
+            zoneShears.add(vu);
+            zoneChecks.addAll(SectionChecks.shearZone(s, bending, vu == null ? 0 : vu, z.name(), zt));
+            zoneChecks.addAll(StirrupRules.checks(s, l.physicalSection(p, z.section(), st), bending,
+                    BeamLayout.momentAt(p, z.section()), p.practice(), z.name(), zt));
         }
         SpanChecks.Sections ss = new SpanChecks.Sections(
                 p.leftSupport() ? l.section(p, BeamProblem.Place.LEFT, null) : null,
@@ -53,7 +56,7 @@ public final class BeamVerifier {
         Trail st = withTrail ? Trail.recording() : Trail.off();
         SpanChecks.Result spanResult = SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(),
                 p.service(), p.limits(), st);
-        return new BeamReport(sections, zoneChecks, spanResult, zt, st);
+        return new BeamReport(sections, zoneChecks, zoneShears, spanResult, zt, st);
     }
 
     /** The span's depth and deflection checks alone (what the deflection cuts need). */

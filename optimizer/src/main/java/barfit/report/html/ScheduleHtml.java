@@ -462,7 +462,8 @@ public final class ScheduleHtml {
             var st = l.zoneStirrups().get(i);
             kv(out, "stirrups, " + z.name() + " zone", span(z.from(), u) + " to " + span(z.to(), u) + ": "
                     + Words.stirrups(st, u) + ", " + BeamText.sets(BeamLayout.stirrupSets(z.length(), st.spacing()))
-                    + (z.vu() == null ? " (minimum)" : " (Vu = " + u.withUnit(z.vu(), Dim.FORCE) + ")"));
+                    + (d.report().zoneShears().get(i) == null ? " (minimum)"
+                            : " (Vu = " + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE) + ")"));
         }
         for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             FlexureResult f = e.getValue().flexure();
