@@ -169,6 +169,15 @@ public final class SectionDesigner {
             add(out, failingIds(p, lean), "stirrups @ " + units.compact(sp.get(si + 1), Dim.LENGTH) + " "
                     + units.unit(Dim.LENGTH));
         }
+        // fewer stirrup legs, same spacing: says when the office's legs rule (or the code's) decided them
+        List<Integer> legs = p.space().stirrupLegs();
+        int li = legs.indexOf(l.stirrups().legs());
+        if (li > 0) {
+            Stirrups fewerLegs = new Stirrups(l.stirrups().bar(), legs.get(li - 1), l.stirrups().spacing());
+            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), t, l.tensionCounts(),
+                    l.compressionBar(), l.compressionCount(), fewerLegs, l.skin());
+            add(out, failingIds(p, lean), legs.get(li - 1) + " stirrup legs");
+        }
         return out;
     }
 

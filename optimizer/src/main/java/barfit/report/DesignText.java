@@ -161,11 +161,13 @@ public final class DesignText {
     /** "one No. 29 fewer → flexure; h = 475 mm → flexure, shear_strength; ..." */
     static String binding(List<Binding> bs) {
         if (bs.isEmpty()) {
-            return "nothing found by the one-step tests (fewer bars, shallower, narrower, wider stirrups)";
+            return "nothing found by the one-step tests (fewer bars, shallower, narrower, wider stirrups, fewer legs)";
         }
         Map<String, List<String>> byWhen = new LinkedHashMap<>();
         for (Binding b : bs) {
-            byWhen.computeIfAbsent(b.when(), k -> new java.util.ArrayList<>()).add(b.limit());
+            byWhen.computeIfAbsent(b.when(), k -> new java.util.ArrayList<>()).add(
+                    b.limit().startsWith("stirrup_legs_bars") ? b.limit() + " (the office's legs rule, not the code)"
+                            : b.limit());
         }
         StringBuilder sb = new StringBuilder();
         for (var e : byWhen.entrySet()) {

@@ -690,7 +690,11 @@ public final class BeamGenerator {
             int ncMax = p.cantilever() || p.space().hangersOnly() ? Math.min(2, nmax) : nmax;
             double extL = p.leftSupport() ? Extension.of(p, f.b(), f.h(), f.det(), t).length() : 0;
             double extR = p.rightSupport() ? Extension.of(p, f.b(), f.h(), f.det(), t).length() : 0;
-            double run = Math.max(0, p.span() - extL - extR);
+            // a continuous bar is priced over the span less the stretches the support options price it over;
+            // where the extras' ld makes those overlap, that is negative: a continuous bar then costs less
+            // than the two extras it replaces, and the sum still prices it at the full span
+            // (a cantilever's top bars are all priced with its support option)
+            double run = p.cantilever() ? 0 : p.span() - extL - extR;
             for (int nc = 2; nc <= ncMax; nc++) {
                 out.add(new TopOpt(t, nc, barCost(t, nc, run)));
             }
@@ -970,12 +974,19 @@ public final class BeamGenerator {
         if (p.cantilever()) {
             // the bottom bars of a cantilever are its hangers: two or more of one size, one layer
             TopOpt only = null;
+            // (in more than one layer only where they are anchored and so count as compression steel)
+            int bottomLayers = p.bottomAnchored() ? p.space().maxLayers() : 1;
             for (TopOpt t : tops) {
                 for (BarSize bb : p.space().barSizes()) {
                     int nmax = BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code());
-                    for (int n = 2; n <= nmax; n++) {
-                        out.add(new MidOpt(t, bb, List.of(n), f.det().firstLayerCentroid(bb.diameter()), Map.of(),
-                                barCost(bb, n, p.span()), p.legsFor(n)));
+                    for (int layers = 1; layers <= bottomLayers; layers++) {
+                        if (layers > 1 && !barfit.design.Layout.fitsHeight(f.h(), f.det(), bb, layers, t.bar())) {
+                            break;
+                        }
+                        for (List<Integer> counts : barfit.design.ExhaustiveSearch.countVectors(layers, nmax)) {
+                            out.add(new MidOpt(t, bb, counts, f.det().firstLayerCentroid(bb.diameter()), Map.of(),
+                                    barCost(bb, BeamLayout.sum(counts), p.span()), p.legsFor(counts.get(0))));
+                        }
                     }
                 }
             }

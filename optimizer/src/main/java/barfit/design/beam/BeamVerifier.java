@@ -10,6 +10,7 @@ import barfit.section.Span;
 import barfit.section.SpanChecks;
 import barfit.section.StirrupRules;
 import barfit.section.Stirrups;
+import barfit.section.trail.Q;
 import barfit.section.trail.Trail;
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -48,6 +49,18 @@ public final class BeamVerifier {
             zoneChecks.addAll(SectionChecks.shearZone(s, bending, vu == null ? 0 : vu, z.name(), zt));
             zoneChecks.addAll(StirrupRules.checks(s, l.physicalSection(p, z.section(), st), bending,
                     BeamLayout.momentAt(p, z.section()), p.practice(), z.name(), zt));
+        }
+        // extra top bars are developed past the support face (25.4.2.1): never cut short of ld
+        if (!p.cantilever()) {
+            double ld = Extension.developmentLength(p, l.width(), l.height(), l.detailing(p.detailing()), l.top());
+            if (p.leftSupport() && BeamLayout.sum(l.topLeft()) > l.topContinuous()) {
+                zoneChecks.add(CheckResult.atLeast("top_extension.left", "Extra top bars at the left support run ld "
+                        + "past the face", "25.4.2.1, 25.4.2.4", Q.length(l.extLeft()), Q.length(ld), null));
+            }
+            if (p.rightSupport() && BeamLayout.sum(l.topRight()) > l.topContinuous()) {
+                zoneChecks.add(CheckResult.atLeast("top_extension.right", "Extra top bars at the right support run ld "
+                        + "past the face", "25.4.2.1, 25.4.2.4", Q.length(l.extRight()), Q.length(ld), null));
+            }
         }
         SpanChecks.Sections ss = new SpanChecks.Sections(
                 p.leftSupport() ? l.section(p, BeamProblem.Place.LEFT, null) : null,

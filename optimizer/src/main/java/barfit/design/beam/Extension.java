@@ -11,31 +11,38 @@ import barfit.section.trail.Trail;
 /**
  * How far the extra top bars at a continuous support run into the span past the face: the larger of
  * 0.3 x span and the development length of 25.4.2.4 (top bars, Ktr taken as 0, cb from the cover and
- * the spacing of a full first layer, which is conservative), never more than the span, nor more than
- * half of it when both ends are continuous. A cantilever's top bars run its full length and, to be
- * anchored, the same development length past the support face into the back span (its own bars are
- * not checked further).
+ * the spacing of a full first layer, which is conservative). A bar is never cut short of ld: where ld
+ * passes mid-span of a span continuous at both ends the extras of the two supports overlap over the
+ * middle, and where it passes the far face the extras run through the span and on past that face
+ * (into the next span or support) until they are developed. A cantilever's top bars run its full
+ * length and, to be anchored, the same development length past the support face into the back span
+ * (its own bars are not checked further).
  */
-public record Extension(double length, String rule) {
+public record Extension(double length, double ld, String rule) {
 
     public static Extension of(BeamProblem p, double b, double h, Detailing det, BarSize top) {
         double ld = developmentLength(p, b, h, det, top);
         if (p.cantilever()) {
-            return new Extension(p.span() + ld, "full length of the cantilever and ld of 25.4.2.4 past the support face");
+            return new Extension(p.span() + ld, ld,
+                    "full length of the cantilever and ld of 25.4.2.4 past the support face");
         }
         double rule03 = 0.3 * p.span();
-        double cap = p.leftSupport() && p.rightSupport() ? p.span() / 2 : p.span();
-        if (ld > rule03) {
-            return ld > cap ? new Extension(cap, "ld of 25.4.2.4 exceeds the room: the extra bars run to "
-                    + (cap < p.span() ? "mid-span" : "the far end") + " and are not fully developed there; run them"
-                    + " through or hook them (not checked)")
-                    : new Extension(ld, "ld of 25.4.2.4 governs over 0.3 × span");
+        if (ld <= rule03) {
+            return new Extension(rule03, ld, "0.3 × span governs over ld of 25.4.2.4");
         }
-        return new Extension(rule03, "0.3 × span governs over ld of 25.4.2.4");
+        if (ld > p.span()) {
+            return new Extension(ld, ld, "ld of 25.4.2.4 exceeds the span: the extra bars run through it and "
+                    + "past the far face until developed");
+        }
+        if (p.leftSupport() && p.rightSupport() && ld > p.span() / 2) {
+            return new Extension(ld, ld, "ld of 25.4.2.4 governs, past mid-span: the extra bars of the two "
+                    + "supports overlap over the middle");
+        }
+        return new Extension(ld, ld, "ld of 25.4.2.4 governs over 0.3 × span");
     }
 
     /** ld of 25.4.2.4 for the top bars (Ktr taken as 0; cb from the cover and a full first layer's spacing). */
-    private static double developmentLength(BeamProblem p, double b, double h, Detailing det, BarSize top) {
+    static double developmentLength(BeamProblem p, double b, double h, Detailing det, BarSize top) {
         int firstLayer = Math.max(2, BarSpacing.maxBars(b, det, top, p.materials(), p.code()));
         Materials m = p.materials();
         CodeEquations code = p.code();

@@ -84,6 +84,7 @@ final class RandomBeams {
                 ? new Flange(widths.get(widths.size() - 1) + 500, 120, false) : null;
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
         return new BeamProblem("R", m, det, CodeEquations.SI, space, span, ends, ml, mm, mr, vl, vr, service,
-                SpanChecks.Limits.DEFAULT, cap, null, flange, r.nextInt(3) == 0, r.nextInt(4) == 0 ? 1 : 2, 4);
+                SpanChecks.Limits.DEFAULT, cap, null, flange, r.nextInt(3) == 0, r.nextInt(4) == 0 ? 1 : 2,
+                r.nextBoolean() ? 0 : 4); // the code's legs rules alone, or with the office rule of two legs per four bars
     }
 }
