@@ -56,7 +56,7 @@ final class RandomProblems {
         List<BarSize> comp = bars(r, new String[] {"10", "13", "16", "19", "22", "25"}, 1 + r.nextInt(3));
         SearchSpace base = p.space();
         SearchSpace space = new SearchSpace(widths, depths, tension, comp, 1 + r.nextInt(3), base.stirrupSizes(),
-                base.stirrupLegs(), base.stirrupSpacings());
+                base.stirrupLegs(), base.stirrupSpacings()).withBarsPerTwoLegs(base.barsPerTwoLegs());
         CodeEquations code = r.nextInt(3) == 0 ? CodeEquations.INCH_POUND : CodeEquations.SI;
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
         return new SectionProblem("M", p.materials(), p.detailing(), code, space, p.mu() * (0.5 + 1.5 * r.nextDouble()),
@@ -88,6 +88,8 @@ final class RandomProblems {
             span = new Span(3000 + 1000 * r.nextInt(7), r.nextBoolean() ? e : null);
         }
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
+        // the code's legs rules alone, or with an office's rule of two legs per four bars
+        space = space.withBarsPerTwoLegs(r.nextBoolean() ? 0 : 4);
         return new SectionProblem("R", m, det, CodeEquations.SI, space, mu, vu, span, cap, null, flange,
                 span == null ? 1.0 : span.length() / 1000);
     }

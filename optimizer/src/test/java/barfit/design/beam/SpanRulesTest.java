@@ -109,7 +109,7 @@ class SpanRulesTest {
             tiesSeen += checkSpan(p, o.best().layout(), "instance " + i + ": " + p);
         }
         assertTrue(designed > 25, "designed " + designed);
-        assertTrue(tiesSeen >= 0);
+        assertTrue(tiesSeen > 0, "no designed zone relied on its compression bars: the ties went untested");
     }
 
     /** Asserts the rules on one designed span; returns how many zones needed ties. */
