@@ -32,7 +32,8 @@ import org.junit.jupiter.api.Test;
 class BeamDiagnosisTest {
     private static final UnitSystem US = UnitSystem.US;
     private static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615").orElseThrow();
-    private static final CostModel COST = new CostModel(CostRates.DEFAULTS, US.toSI(1.5, Dim.LENGTH));
+    private static final CostModel COST = new CostModel(CostRates.DEFAULTS, US.toSI(1.5, Dim.LENGTH),
+            CodeEquations.INCH_POUND);
     private final BeamDesigner designer = new BeamDesigner(COST, new SolverOptions(30, 1, 1), US);
 
     private static BarSize bar(String s) {
