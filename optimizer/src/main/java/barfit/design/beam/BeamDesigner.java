@@ -194,6 +194,10 @@ public final class BeamDesigner {
         return String.format(java.util.Locale.ROOT, "%.2f", c.ratio());
     }
 
+    /** Steps of a search with a single depth or width (in inch-pound input, 1 in and 2 in): a grid, no clause. */
+    private static final double SI_DEPTH_STEP = 25.0;
+    private static final double SI_WIDTH_STEP = 50.0;
+
     /** Deflection limits that allow any deflection (a span divisor of 0: the limit ℓ/0 is infinite). */
     private static final double NO_LIMIT = 0;
 
@@ -321,7 +325,7 @@ public final class BeamDesigner {
         List<Double> grid = p.space().depths();
         double deepest = grid.get(grid.size() - 1);
         double step = grid.size() > 1 ? grid.get(grid.size() - 1) - grid.get(grid.size() - 2)
-                : p.code().inchPound() ? CodeEquations.MM_PER_IN : 25.0;
+                : p.code().inchPound() ? CodeEquations.MM_PER_IN : SI_DEPTH_STEP;
         List<Double> tries = new ArrayList<>();
         for (double h : grid) {
             if (p.depths().isEmpty() || h > tallest + 1e-9) {
@@ -348,7 +352,7 @@ public final class BeamDesigner {
         List<Double> grid = p.space().widths();
         double step = widths.size() > 1 ? widths.get(widths.size() - 1) - widths.get(widths.size() - 2)
                 : grid.size() > 1 ? grid.get(grid.size() - 1) - grid.get(grid.size() - 2)
-                : p.code().inchPound() ? 2 * CodeEquations.MM_PER_IN : 50.0;
+                : p.code().inchPound() ? 2 * CodeEquations.MM_PER_IN : SI_WIDTH_STEP;
         for (int k = 1; widest + k * step <= 2.5 * widest + 1e-9; k++) {
             double w = Math.round((widest + k * step) * 1e6) / 1e6;
             BeamLayout l = cheapest(p.withSpace(p.space().withDepths(List.of(h))).withFixedWidth(w));
