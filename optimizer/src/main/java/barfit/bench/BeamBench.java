@@ -66,7 +66,7 @@ public final class BeamBench {
     }
 
     public static Figures run(int n, int compare, long seed, PrintWriter out) {
-        CostModel cost = new CostModel(CostRates.DEFAULTS, 40);
+        CostModel cost = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
         BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(60, 1, 1), UnitSystem.SI);
         SearchSpace full = SectionBench.defaultSpace();
         for (BeamProblem p : instances(10, seed + 1, full)) {

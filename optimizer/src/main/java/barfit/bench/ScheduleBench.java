@@ -155,7 +155,7 @@ public final class ScheduleBench {
             write(dir, beams, seed, rationalise);
         }
         ScheduleInput in = ScheduleInputReader.read(dir.resolve("settings.yaml"), dir.resolve("beams.csv"));
-        CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover());
+        CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().units().code());
         return new ScheduleSolver(cost, new SolverOptions(60, 1, 1), threads, progress).solve(in);
     }
 

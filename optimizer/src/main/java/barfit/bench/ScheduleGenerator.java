@@ -1,5 +1,6 @@
 package barfit.bench;
 
+import barfit.section.LoadCombinations;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -83,7 +84,7 @@ public final class ScheduleGenerator {
                 Line line = typical.get(li);
                 double dead = deadArea * line.tributary() + 6.0; // kN/m, with a first guess of the web's weight
                 double live = liveArea * line.tributary();
-                double wu = Math.max(1.2 * dead + 1.6 * live, 1.4 * dead);
+                double wu = LoadCombinations.factored(dead, live);
                 int spans = line.spans().length;
                 String groupBase = "L" + (li + 1) + (roof ? "R" : "");
                 for (int s = 1; s <= spans && made < count; s++) {

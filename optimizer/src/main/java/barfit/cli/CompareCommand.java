@@ -86,8 +86,8 @@ final class CompareCommand implements Callable<Integer> {
         String byKey = "costs." + (u == barfit.units.UnitSystem.US ? "concrete_per_yd3_by_fc" : "concrete_per_m3_by_fc");
         for (double v : asked) {
             double mpa = u.toSI(v, Dim.STRESS);
-            double lo = u == barfit.units.UnitSystem.US ? 2500 : 17;
-            double hi = u == barfit.units.UnitSystem.US ? 20000 : 140;
+            double lo = u.limit(barfit.section.MaterialLimits.fcMin(u.code()), Dim.STRESS);
+            double hi = u.limit(barfit.section.MaterialLimits.fcMax(u.code()), Dim.STRESS);
             if (!(v >= lo && v <= hi)) {
                 throw new InputError(Location.ofFile("--fc"), "expected f'c between " + Studies.fmt(lo) + " and "
                         + Studies.fmt(hi) + " " + u.unit(Dim.STRESS) + ", got " + Studies.fmt(v));

@@ -74,7 +74,7 @@ final class DesignCommand implements Callable<Integer> {
             }
         }
         var settings = input.settings();
-        CostModel cost = new CostModel(input.rates(), settings.detailing().cover());
+        CostModel cost = new CostModel(input.rates(), settings.detailing().cover(), settings.units().code());
         SectionDesigner designer = new SectionDesigner(cost, options,
                 settings.units());
         BeamDesigner spans = new BeamDesigner(cost, options, settings.units());

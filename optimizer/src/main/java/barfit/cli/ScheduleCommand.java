@@ -81,7 +81,8 @@ final class ScheduleCommand implements Callable<Integer> {
         }
         ScheduleInput input = ScheduleInputReader.read(file, beams);
         ProgressBar bar = new ProgressBar(spec.commandLine().getErr(), !quiet && ProgressBar.stderrIsTerminal());
-        CostModel cost = new CostModel(input.rates(), input.settings().detailing().cover());
+        CostModel cost = new CostModel(input.rates(), input.settings().detailing().cover(),
+                input.settings().units().code());
         ScheduleResult result;
         try {
             result = new ScheduleSolver(cost, options, nThreads, bar).solve(input);

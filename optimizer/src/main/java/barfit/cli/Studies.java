@@ -38,7 +38,7 @@ final class Studies {
     }
 
     static CostModel cost(DesignInput in) {
-        return new CostModel(in.rates(), in.settings().detailing().cover());
+        return new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().units().code());
     }
 
     /** The cost model with the concrete rate for another f'c (MPa). */
@@ -46,7 +46,7 @@ final class Studies {
         double rate = in.costs().concreteAt(fc);
         CostRates r = in.rates();
         return new CostModel(new CostRates(rate, r.mainBarsPerKg(), r.stirrupsPerKg(), r.formworkPerM2(),
-                r.depthPremiumPerM(), r.lapFactor()), in.settings().detailing().cover());
+                r.depthPremiumPerM(), r.lapFactor()), in.settings().detailing().cover(), in.settings().units().code());
     }
 
     /** A length option in the user's units, checked to lie within the search's depths. */

@@ -216,9 +216,7 @@ public final class CandidateGenerator {
         double dMax = h - det.firstLayerCentroid(dbMin);
         double widest = p.flange() != null ? p.flange().width() : b;
         double fy = p.materials().fy();
-        double ceiling = (0.85 * p.materials().fc() * widest * dMax + compArea * fy) / fy;
-        return StrengthBound.minTensionArea(p.mu(), dMax, compArea, dpMin, dpMax, widest, p.materials().fc(), fy,
-                ceiling);
+        return StrengthBound.minTensionArea(p.mu(), dMax, compArea, dpMin, dpMax, widest, p.materials().fc(), fy);
     }
 
     /** The most tension steel any layout of this width can hold: the largest Vc any layout could have. */

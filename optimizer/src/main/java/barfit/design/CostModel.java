@@ -1,14 +1,16 @@
 package barfit.design;
 
 import barfit.catalogs.BarSize;
+import barfit.section.CodeEquations;
 import barfit.section.Flange;
+import barfit.section.StirrupHooks;
 import barfit.section.Stirrups;
 
 /**
  * The cost of a beam per metre of its length, from the user's rates. Concrete and formwork count the
  * web only below a flange (the slab is paid for anyway). A closed stirrup is its centre-line
  * perimeter plus two 135° hooks; each leg beyond two is a crosstie (one leg plus two hooks). Hooks
- * extend max(6 db, 75 mm) (25.3.2).
+ * extend as Table 25.3.2 asks ({@link StirrupHooks#extension135}, in the edition of the input).
  */
 public final class CostModel {
     /** Money is compared in these units (1/10000 of the currency), so CP-SAT works on integers. */
@@ -16,10 +18,13 @@ public final class CostModel {
 
     private final CostRates rates;
     private final double cover;
+    private final CodeEquations code;
 
-    public CostModel(CostRates rates, double cover) {
+    /** @param code the edition the input is in: it sets the least hook extension (75 mm or 3 in) */
+    public CostModel(CostRates rates, double cover, CodeEquations code) {
         this.rates = rates;
         this.cover = cover;
+        this.code = code;
     }
 
     public CostRates rates() {
@@ -45,7 +50,7 @@ public final class CostModel {
         double ds = bar.diameter();
         double w = b - 2 * cover - ds;
         double ht = h - 2 * cover - ds;
-        double hook = Math.max(6 * ds, 75.0);
+        double hook = StirrupHooks.extension135(bar, code);
         return 2 * w + 2 * ht + 2 * hook + (legs - 2) * (ht + 2 * hook);
     }
 

@@ -5,6 +5,7 @@ import barfit.section.BarLayer;
 import barfit.section.BarSpacing;
 import barfit.section.BeamSection;
 import barfit.section.CheckResult;
+import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.SectionChecks;
 import barfit.section.SectionProbe;
@@ -21,6 +22,10 @@ import java.util.List;
  * (deeper, wider, larger bars, one more layer).
  */
 final class Diagnoser {
+    /** Steps of a search with a single depth or width (in inch-pound input, 1 in and 2 in): a grid, no clause. */
+    private static final double SI_DEPTH_STEP = 25.0;
+    private static final double SI_WIDTH_STEP = 50.0;
+
     private Diagnoser() {
     }
 
@@ -124,7 +129,8 @@ final class Diagnoser {
         List<String> out = new ArrayList<>();
         SearchSpace sp = p.space();
         List<Double> depths = sp.depths();
-        double step = depths.size() > 1 ? depths.get(1) - depths.get(0) : 25.0;
+        double step = depths.size() > 1 ? depths.get(1) - depths.get(0)
+                : p.code().inchPound() ? CodeEquations.MM_PER_IN : SI_DEPTH_STEP;
         double deepest = depths.get(depths.size() - 1);
         List<Double> widths = p.widths();
         double widest = widths.get(widths.size() - 1);
@@ -142,7 +148,8 @@ final class Diagnoser {
         // wider, at the deepest allowed depth
         if (!p.depths().isEmpty()) {
             double h = p.depths().get(p.depths().size() - 1);
-            double wStep = widths.size() > 1 ? widths.get(1) - widths.get(0) : 50.0;
+            double wStep = widths.size() > 1 ? widths.get(1) - widths.get(0)
+                    : p.code().inchPound() ? 2 * CodeEquations.MM_PER_IN : SI_WIDTH_STEP;
             for (double w = widest + wStep; w <= 2.5 * widest + 1e-9; w += wStep) {
                 SectionProblem q = p.withSpace(sp.withDepths(List.of(h))).withFixedWidth(w).withMaxDepth(null);
                 if (feasible(q, cost)) {

@@ -10,6 +10,7 @@ import barfit.catalogs.yaml.YNode;
 import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.Exposure;
+import barfit.section.MaterialLimits;
 import barfit.section.Materials;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -48,8 +49,8 @@ public final class SettingsReader {
 
         YFields concrete = doc.map("concrete", "the concrete: {fc, aggregate}").allowOnly("fc", "aggregate", "lambda");
         double fc = toSI(units, concrete.positive("fc", "f'c, " + units.unit(Dim.STRESS)), Dim.STRESS);
-        double fcMin = us ? 2500 : 17;
-        double fcMax = us ? 20000 : 140;
+        double fcMin = units.limit(MaterialLimits.fcMin(code), Dim.STRESS);
+        double fcMax = units.limit(MaterialLimits.fcMax(code), Dim.STRESS);
         double fcUser = units.fromSI(fc, Dim.STRESS);
         if (fcUser < fcMin * (1 - 1e-9) || fcUser > fcMax) {
             throw concrete.error("fc", "expected f'c between " + fmt(fcMin) + " and " + fmt(fcMax) + " "
@@ -57,17 +58,18 @@ public final class SettingsReader {
         }
         double agg = concrete.optPositive("aggregate", "maximum aggregate size, " + units.unit(Dim.LENGTH))
                 .map(v -> toSI(units, v, Dim.LENGTH)).orElse(us ? 0.75 * 25.4 : 20.0);
-        double lambda = concrete.optPositive("lambda", "lightweight factor, 0.75 to 1.0").orElse(1.0);
-        if (lambda < 0.75 || lambda > 1.0) {
-            throw concrete.error("lambda", "expected the lightweight factor λ between 0.75 and 1.0 (19.2.4), got "
-                    + fmt(lambda));
+        String lambdaRange = MaterialLimits.LAMBDA_MIN + " to " + MaterialLimits.LAMBDA_MAX;
+        double lambda = concrete.optPositive("lambda", "lightweight factor, " + lambdaRange).orElse(MaterialLimits.LAMBDA_MAX);
+        if (lambda < MaterialLimits.LAMBDA_MIN || lambda > MaterialLimits.LAMBDA_MAX) {
+            throw concrete.error("lambda", "expected the lightweight factor λ between " + MaterialLimits.LAMBDA_MIN
+                    + " and " + MaterialLimits.LAMBDA_MAX + " (19.2.4), got " + fmt(lambda));
         }
 
         YFields steel = doc.map("steel", "the reinforcement: {fy}").allowOnly("fy", "fyt");
         double fy = toSI(units, steel.positive("fy", "fy, " + units.unit(Dim.STRESS)), Dim.STRESS);
         double fyUser = units.fromSI(fy, Dim.STRESS);
         double fyMin = us ? 40000 : 280;
-        double fyMax = us ? 80000 : 550;
+        double fyMax = units.limit(code.fyMax(), Dim.STRESS);
         if (fyUser < fyMin * (1 - 1e-9) || fyUser > fyMax * (1 + 1e-9)) {
             throw steel.error("fy", "expected fy between " + fmt(fyMin) + " and " + fmt(fyMax) + " "
                     + units.unit(Dim.STRESS) + " (Table 20.2.2.4(a) limits flexural bars to " + fmt(fyMax) + "), got "
@@ -81,7 +83,7 @@ public final class SettingsReader {
 
         BarCatalog catalog = catalog(doc, file, units);
         double cover = doc.optPositive("cover", "clear cover to the stirrups, " + units.unit(Dim.LENGTH))
-                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(us ? 1.5 * 25.4 : 40.0);
+                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(code.coverInterior());
         String stirrupName = doc.optText("stirrup", "the stirrup bar size").orElse(us ? "3" : "10");
         BarSize stirrup = bar(catalog, stirrupName, doc.locationOf("stirrup"), "stirrup");
         // layer_gap may stand at the top or under search: (where the search's other layout rules are)

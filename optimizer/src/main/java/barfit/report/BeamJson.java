@@ -20,6 +20,17 @@ public final class BeamJson {
     private BeamJson() {
     }
 
+    /** A size at which the span designs ({@code null} when none was found). */
+    private static void fix(ObjectNode dn, String key, BeamDesigner.Fix f, UnitSystem u) {
+        if (f == null) {
+            dn.putNull(key);
+            return;
+        }
+        ObjectNode o = dn.putObject(key);
+        Json.put(o, "width", f.width(), Dim.LENGTH, u);
+        Json.put(o, "height", f.height(), Dim.LENGTH, u);
+    }
+
     public static ObjectNode beam(BeamDesigner.Outcome o, UnitSystem u, boolean trail) {
         BeamProblem p = o.problem();
         ObjectNode b = Json.object();
@@ -33,10 +44,14 @@ public final class BeamJson {
         }
         if (!o.feasible()) {
             ObjectNode dn = b.putObject("diagnosis");
-            dn.put("limit", o.diagnosis().limit());
-            dn.put("summary", o.diagnosis().summary());
+            BeamDesigner.Diagnosis d = o.diagnosis();
+            dn.put("limit", d.limit());
+            dn.put("clause", d.clause());
+            dn.put("summary", d.summary());
             ArrayNode fixes = dn.putArray("fixes");
-            o.diagnosis().fixes().forEach(fixes::add);
+            d.fixes().forEach(fixes::add);
+            fix(dn, "deeper", d.deeper(), u);
+            fix(dn, "wider", d.wider(), u);
             return b;
         }
         design(b, o.best(), p, u, trail);

@@ -2,6 +2,7 @@ package barfit.report;
 
 import barfit.section.BarLayer;
 import barfit.section.CheckResult;
+import barfit.section.CodeTables;
 import barfit.section.SectionShape;
 import barfit.section.Stirrups;
 import barfit.section.trail.Dim;
@@ -66,7 +67,7 @@ public final class Words {
     public static String phi(double phi) {
         String three = fixed(phi, 3);
         boolean atLimit = three.equals("0.900") || three.equals("0.650");
-        boolean inside = phi < 0.9 - 1e-12 && phi > 0.65 + 1e-12;
+        boolean inside = phi < CodeTables.PHI_TENSION_CONTROLLED - 1e-12 && phi > CodeTables.PHI_COMPRESSION_CONTROLLED + 1e-12;
         return atLimit && inside ? fixed(phi, 4) : three;
     }
 }

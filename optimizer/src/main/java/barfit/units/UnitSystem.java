@@ -61,6 +61,11 @@ public enum UnitSystem {
         return siValue / factor(d);
     }
 
+    /** A limit of the code in the user's units, rounded to 1e-6 so that 80 000 psi reads as 80000. */
+    public double limit(double siValue, Dim d) {
+        return Math.round(fromSI(siValue, d) * 1e6) / 1e6;
+    }
+
     public String unit(Dim d) {
         if (this == SI) {
             return switch (d) {

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import barfit.units.UnitSystem;
+import barfit.section.CodeEquations;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -14,7 +15,7 @@ import org.junit.jupiter.api.Test;
  * exhaustive search's exactly (in cost units) and it finds a design exactly when one exists.
  */
 class OracleTest {
-    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40);
+    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
 
     @Test
     void optimizerMatchesExhaustiveEnumeration() {

@@ -44,7 +44,7 @@ import org.junit.jupiter.api.Test;
  */
 class RationaliseOracleTest {
     static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615m").orElseThrow();
-    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40);
+    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
 
     static BarSize bar(String s) {
         return BARS.find(s).orElseThrow();

@@ -12,6 +12,7 @@ import barfit.design.SectionDesigner;
 import barfit.design.SectionProblem;
 import barfit.design.SolverOptions;
 import barfit.units.UnitSystem;
+import barfit.section.CodeEquations;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.util.ArrayList;
@@ -20,7 +21,7 @@ import java.util.Random;
 import org.junit.jupiter.api.Test;
 
 class StudyTest {
-    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40);
+    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
     static final SolverOptions OPTIONS = new SolverOptions(30, 1, 1);
 
     private static SectionProblem perMetre(SectionProblem p, Double cap) {

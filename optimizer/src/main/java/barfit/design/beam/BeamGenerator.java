@@ -264,17 +264,15 @@ public final class BeamGenerator {
         double fc = p.materials().fc();
         double fy = p.materials().fy();
         double widest = p.flange() != null ? p.flange().width() : b;
-        double ceilingMid = (0.85 * fc * widest * dMax + compArea * fy) / fy;
-        double ceilingSup = (0.85 * fc * b * dMax + compArea * fy) / fy;
         double l = p.span();
         double bottom = p.midSection()
-                ? StrengthBound.minTensionArea(p.mMid(), dMax, compArea, dp, dp + 60, widest, fc, fy, ceilingMid)
+                ? StrengthBound.minTensionArea(p.mMid(), dMax, compArea, dp, dp + 60, widest, fc, fy)
                 : minPair;
         double area = Math.max(bottom, minPair) * l;
         double supportL = p.leftSupport()
-                ? StrengthBound.minTensionArea(p.mLeft(), dMax, compArea, dp, dp + 60, b, fc, fy, ceilingSup) : 0;
+                ? StrengthBound.minTensionArea(p.mLeft(), dMax, compArea, dp, dp + 60, b, fc, fy) : 0;
         double supportR = p.rightSupport()
-                ? StrengthBound.minTensionArea(p.mRight(), dMax, compArea, dp, dp + 60, b, fc, fy, ceilingSup) : 0;
+                ? StrengthBound.minTensionArea(p.mRight(), dMax, compArea, dp, dp + 60, b, fc, fy) : 0;
         if (Double.isInfinite(bottom) || Double.isInfinite(supportL) || Double.isInfinite(supportR)) {
             return Double.POSITIVE_INFINITY;
         }
@@ -874,8 +872,7 @@ public final class BeamGenerator {
                 if (mu == null) {
                     continue;
                 }
-                double ceiling = (0.85 * fc * f.b() * dMax + comp * fy) / fy;
-                double area = StrengthBound.minTensionArea(mu, dMax, comp, dp, dp, f.b(), fc, fy, ceiling);
+                double area = StrengthBound.minTensionArea(mu, dMax, comp, dp, dp, f.b(), fc, fy);
                 if (Double.isInfinite(area)) {
                     supports = Double.POSITIVE_INFINITY;
                     break;
@@ -884,7 +881,7 @@ public final class BeamGenerator {
                 double dMin = f.h() - f.det().firstLayerCentroid(t.diameter())
                         - (p.space().maxLayers() - 1) * (t.diameter() + f.det().layerGap());
                 double asMin = asMinPerDepth(f, Bending.HOGGING) * dMin;
-                area = Math.max(area, Math.min(asMin, 4.0 / 3.0 * area));
+                area = StrengthBound.withMinimumSteel(area, asMin);
                 int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / t.area() - 1e-9));
                 supports += barCost(t, n, ext) + leanStirrups(f, place);
             }
@@ -948,8 +945,7 @@ public final class BeamGenerator {
         double comp = t.nc() * t.bar().area();
         double dp = f.det().firstLayerCentroid(t.bar().diameter());
         double dMax = f.h() - f.det().firstLayerCentroid(bb.diameter());
-        double ceiling = (0.85 * fc * widest * dMax + comp * fy) / fy;
-        double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy, ceiling);
+        double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy);
         if (Double.isInfinite(area)) {
             return Double.POSITIVE_INFINITY;
         }
@@ -957,7 +953,7 @@ public final class BeamGenerator {
         double dMin = f.h() - f.det().firstLayerCentroid(bb.diameter())
                 - (p.space().maxLayers() - 1) * (bb.diameter() + f.det().layerGap());
         double asMin = asMinPerDepth(f, Bending.SAGGING) * dMin; // As,min is proportional to d
-        area = Math.max(area, Math.min(asMin, 4.0 / 3.0 * area));
+        area = StrengthBound.withMinimumSteel(area, asMin);
         int ncr = crackBars(f, bb);
         int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / bb.area() - 1e-9));
         return barCost(bb, n, p.span());

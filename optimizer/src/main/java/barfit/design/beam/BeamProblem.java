@@ -187,6 +187,11 @@ public record BeamProblem(
                 service, limits, maxDepth, w, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs);
     }
 
+    public BeamProblem withLimits(SpanChecks.Limits l) {
+        return new BeamProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
+                service, l, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs);
+    }
+
     public BeamProblem scaled(double moments, double shears) {
         return new BeamProblem(id, materials, detailing, code, space, span, ends, mul(mLeft, moments), mul(mMid, moments),
                 mul(mRight, moments), mul(vLeft, shears), mul(vRight, shears), service, limits, maxDepth, fixedWidth,

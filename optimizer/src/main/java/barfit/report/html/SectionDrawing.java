@@ -13,6 +13,7 @@ import barfit.section.Face;
 import barfit.section.Flange;
 import barfit.section.SectionShape;
 import barfit.section.SkinBars;
+import barfit.section.StirrupHooks;
 import barfit.section.Stirrups;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -147,17 +148,6 @@ public final class SectionDrawing {
     /** Total SVG height for a section of height h at this scale (the strain diagram matches it). */
     static double svgHeight(SectionShape shape, double scale) {
         return TOP + shape.height() * scale + BELOW;
-    }
-
-    /** Inside bend diameter of a stirrup (Table 25.3.2): 4 db up to No. 16 (No. 5), 6 db above. */
-    static double insideBendDiameter(BarSize stirrup) {
-        double db = stirrup.diameter();
-        return (db <= 16.0 + 1e-6 ? 4 : 6) * db;
-    }
-
-    /** Straight extension of a 135-degree stirrup hook (Table 25.3.2): 6 db, at least 75 mm (3 in). */
-    static double hookExtension(BarSize stirrup, CodeEquations code) {
-        return Math.max(6 * stirrup.diameter(), code.inchPound() ? 76.2 : 75.0);
     }
 
     /**
@@ -340,8 +330,8 @@ public final class SectionDrawing {
         double b = v.shape().width();
         double h = v.shape().height();
         double e = v.detailing().cover() + ds / 2;
-        double r = insideBendDiameter(bar) / 2 + ds / 2;
-        double ext = hookExtension(bar, v.code());
+        double r = StirrupHooks.insideBendDiameter(bar) / 2 + ds / 2;
+        double ext = StirrupHooks.extension135(bar, v.code());
         String stroke = "fill=\"none\" stroke=\"" + STIRRUP + "\" stroke-width=\"" + Svg.px(ds * m.s()) + "\"";
         String rr = Svg.px(r * m.s());
         StringBuilder d = new StringBuilder();
@@ -782,10 +772,10 @@ public final class SectionDrawing {
         Svg.text(out, x0, y + 16, "start", null, cover);
         if (v.stirrups() != null) {
             Stirrups s = v.stirrups();
-            String bend = (insideBendDiameter(s.bar()) / s.bar().diameter() == 4 ? "4" : "6") + " d_b";
+            String bend = Math.round(StirrupHooks.insideBendDiameter(s.bar()) / s.bar().diameter()) + " d_b";
             Svg.text(out, x0, y + 30, "start", null, "stirrup " + s.bar().label() + ", " + s.legs() + " legs @ "
                     + len(s.spacing(), u) + "; bends " + bend + " inside, 135° hooks + "
-                    + len(hookExtension(s.bar(), v.code()), u));
+                    + len(StirrupHooks.extension135(s.bar(), v.code()), u));
         }
         boolean anyOff = v.layers().stream().anyMatch(l -> !l.counted());
         boolean slabOff = v.shape().flange() != null && v.bending() == Bending.HOGGING;

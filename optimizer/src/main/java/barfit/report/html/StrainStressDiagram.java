@@ -2,6 +2,7 @@ package barfit.report.html;
 
 import barfit.report.Words;
 import barfit.section.Bending;
+import barfit.section.CodeTables;
 import barfit.section.FlexureResult;
 import barfit.section.LayerResult;
 import barfit.section.Materials;
@@ -41,7 +42,7 @@ public final class StrainStressDiagram {
         double bottom = top + h * scale;
         double faceC = sagging ? top : bottom;           // the compression face, px
         double dir = sagging ? 1 : -1;                   // px per mm away from the compression face, signed
-        double epsCu = 0.003;
+        double epsCu = CodeTables.EPS_CU;
         double epsFace = epsCu * (h - f.c()) / f.c();    // strain at the tension face
         double emax = Math.max(Math.max(epsFace, f.epsTy() * 1.1), 0.0005);
         double sx = STRAIN_WIDTH / (epsCu + emax);
@@ -102,7 +103,7 @@ public final class StrainStressDiagram {
         List<Label> stressRows = new ArrayList<>();
         double yCc = faceC + dir * f.concreteCentroid() * scale;
         arrow(out, sz, yCc, sz - BLOCK_WIDTH * 0.9, COMPRESSION);
-        stressRows.add(new Label(yCc, sz, "0.85 f'c = " + u.withUnit(0.85 * m.fc(), Dim.STRESS) + " over a = "
+        stressRows.add(new Label(yCc, sz, "0.85 f'c = " + u.withUnit(CodeTables.BLOCK_STRESS * m.fc(), Dim.STRESS) + " over a = "
                 + len(f.a(), u), "block-label"));
         stressRows.add(new Label(yCc + 0.01, sz, "C_c = " + force(f.concreteForce(), u) + " (block, net)", "block-label"));
 
@@ -140,7 +141,7 @@ public final class StrainStressDiagram {
         // what eps_t means for phi (Table 21.2.2) and ductility (9.3.3.1)
         double y = bottom + 34;
         Svg.text(out, STRAIN_LEFT, y, "start", "class", "ε_t = " + Svg.strain(f.epsT()) + ": " + f.strainClass()
-                + " (ε_ty = " + Words.fixed(f.epsTy(), 5) + ", ε_ty + 0.003 = " + Words.fixed(f.epsTy() + 0.003, 5)
+                + " (ε_ty = " + Words.fixed(f.epsTy(), 5) + ", ε_ty + 0.003 = " + Words.fixed(CodeTables.tensionControlledStrain(f.epsTy()), 5)
                 + "), φ = " + Words.phi(f.phi()) + " (Table 21.2.2)");
         Svg.text(out, STRAIN_LEFT, y + 16, "start", "class", "c = " + len(f.c(), u) + ", a = β1 c = " + len(f.a(), u)
                 + ", d = " + len(f.d(), u) + ", d_t = " + len(f.dt(), u) + ";  Mn = " + u.withUnit(f.mn(), Dim.MOMENT)

@@ -7,6 +7,7 @@ import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SolverOptions;
 import barfit.units.UnitSystem;
+import barfit.section.CodeEquations;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -15,7 +16,7 @@ import org.junit.jupiter.api.Test;
  * full section model) on random small beams: equal cost, and a design exactly when one exists.
  */
 class BeamOracleTest {
-    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40);
+    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
 
     @Test
     void optimizerMatchesExhaustiveEnumeration() {

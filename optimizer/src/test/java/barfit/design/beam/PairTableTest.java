@@ -8,6 +8,7 @@ import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SolverOptions;
 import barfit.units.UnitSystem;
+import barfit.section.CodeEquations;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
@@ -19,7 +20,7 @@ import org.junit.jupiter.api.Test;
  * and those bar sizes.
  */
 class PairTableTest {
-    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40);
+    static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
 
     @Test
     void everyEntryEqualsARestrictedDesign() {

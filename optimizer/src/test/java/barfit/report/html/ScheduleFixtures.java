@@ -48,7 +48,8 @@ final class ScheduleFixtures {
         }
         ScheduleInput input = new ScheduleInput(List.of(file.getFileName().toString()), in.settings(), in.space(),
                 in.rates(), in.currency(), in.costs(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs(), beams, null);
-        BeamDesigner designer = new BeamDesigner(new CostModel(in.rates(), in.settings().detailing().cover()),
+        BeamDesigner designer = new BeamDesigner(new CostModel(in.rates(), in.settings().detailing().cover(),
+                in.settings().units().code()),
                 new SolverOptions(60, 1, 1), in.settings().units());
         List<ScheduleResult.Beam> out = new ArrayList<>();
         Map<String, List<String>> sizes = new LinkedHashMap<>();

@@ -228,7 +228,8 @@ class ScheduleHtmlTest {
         ScheduleResult.Beam second = result.beams().get(1);
         BeamProblem capped = second.outcome().problem().withMaxDepth(300.0);
         var designer = new BeamDesigner(new barfit.design.CostModel(result.input().rates(),
-                result.input().settings().detailing().cover()), new barfit.design.SolverOptions(60, 1, 1),
+                result.input().settings().detailing().cover(), result.input().settings().units().code()),
+                new barfit.design.SolverOptions(60, 1, 1),
                 result.input().settings().units());
         BeamDesigner.Outcome none = designer.design(capped, 0);
         assertFalse(none.feasible(), "nothing fits under a 300 mm cap when the search starts at 400 mm");
