@@ -156,7 +156,7 @@ public record BeamProblem(
      * near mid-span (common practice); 0 without service loads.
      */
     public double midSpanLiveShear() {
-        return service == null ? 0 : 1.6 * service.live() * span / 8;
+        return service == null ? 0 : barfit.section.LoadCombinations.halfSpanLiveShear(service.live(), span);
     }
 
     /** Widths the search may use. */

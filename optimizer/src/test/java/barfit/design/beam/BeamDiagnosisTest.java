@@ -85,7 +85,7 @@ class BeamDiagnosisTest {
 
     @Test
     void deflectionThatFailsUnderTheCapIsNamedAndTheQuotedDepthDesigns() {
-        BeamProblem p = roofBeam(15, 160);
+        BeamProblem p = roofBeam(14, 160);
         // strength alone is not what stops it: with deflection set aside the span designs within the cap
         assertTrue(designer.design(p.withLimits(new SpanChecks.Limits(0, 0)), 0).feasible());
 
