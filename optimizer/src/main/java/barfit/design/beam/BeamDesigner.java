@@ -85,14 +85,14 @@ public final class BeamDesigner {
             BeamSelection.Choice c = r.choice();
             BeamLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
             if (c.set().frame().deflection() && !BeamVerifier.deflectionOk(p, layout)) {
-                sel.cutDeflection(c);
+                sel.cutDeflection(c, gen);
                 cuts++;
                 continue;
             }
             BeamReport report = BeamVerifier.verify(p, layout, true);
             if (!report.ok()) {
                 if (report.okApartFromDeflection()) {
-                    sel.cutDeflection(c);
+                    sel.cutDeflection(c, gen);
                     cuts++;
                     continue;
                 }

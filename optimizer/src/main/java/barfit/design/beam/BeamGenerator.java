@@ -1378,6 +1378,34 @@ public final class BeamGenerator {
         return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
     }
 
+    /**
+     * What the span's deflection takes from one mid-span option's section, for the deflection cuts: Ie of
+     * Table 24.2.3.5 at the dead, sustained and total service levels, then ρ' (24.2.4.1). Null where the
+     * section takes no part (a cantilever's deflection is its support's).
+     */
+    public double[] deflectionStiffness(Frame f, MidOpt m) {
+        if (p.cantilever()) {
+            return null;
+        }
+        BeamSection s = midSection(f, new SectionShape(f.b(), f.h(), p.flange()), m);
+        double[] ie = SpanChecks.ieLevels(s, Bending.SAGGING, p.mMid(), SpanChecks.ratios(p.service()));
+        return append(ie, SpanChecks.rhoPrime(s, Bending.SAGGING));
+    }
+
+    /** As {@link #deflectionStiffness(Frame, MidOpt)} for a support option; ρ' only at a cantilever's support. */
+    public double[] deflectionStiffness(Frame f, SupportOpt o, BeamProblem.Place place) {
+        BeamSection s = supportSection(f, new SectionShape(f.b(), f.h(), p.flange()), o);
+        double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING, place == BeamProblem.Place.LEFT ? p.mLeft() : p.mRight(),
+                SpanChecks.ratios(p.service()));
+        return p.cantilever() ? append(ie, SpanChecks.rhoPrime(s, Bending.HOGGING)) : ie;
+    }
+
+    private static double[] append(double[] a, double v) {
+        double[] out = java.util.Arrays.copyOf(a, a.length + 1);
+        out[a.length] = v;
+        return out;
+    }
+
     // ------------------------------------------------------------------ combining and bounding
 
     /** The cheapest compatible support option, or null. */
