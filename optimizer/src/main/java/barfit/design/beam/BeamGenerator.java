@@ -252,7 +252,7 @@ public final class BeamGenerator {
         double dp = det.firstLayerCentroid(smallest.diameter());
         double fc = p.materials().fc();
         double fy = p.materials().fy();
-        double widest = p.flange() != null ? p.flange().width() : b;
+        double widest = p.flange() != null ? p.flange().on(b).width() : b; // at its effective width on this web
         double ceilingMid = (0.85 * fc * widest * dMax + compArea * fy) / fy;
         double ceilingSup = (0.85 * fc * b * dMax + compArea * fy) / fy;
         double l = p.span();
@@ -927,7 +927,7 @@ public final class BeamGenerator {
         if (!p.midSection()) {
             return barCost(bb, 2, p.span()); // a cantilever's bottom bars are two or more hangers
         }
-        double widest = p.flange() != null ? p.flange().width() : f.b();
+        double widest = p.flange() != null ? p.flange().on(f.b()).width() : f.b(); // effective width on this web
         double fc = p.materials().fc();
         double fy = p.materials().fy();
         double comp = t.nc() * t.bar().area();
