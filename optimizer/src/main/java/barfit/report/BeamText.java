@@ -68,11 +68,10 @@ public final class BeamText {
         t.row("demand", demand(p, u));
         t.row("section", Words.shape(l.shape(), u) + (l.flange() != null ? " (flange counted at mid-span)" : ""));
         if (l.flange() != null && (p.leftSupport() || p.rightSupport())) {
-            double bf = l.shape().flange().width();
-            double spread = Math.min(bf, p.span() / 10);
+            var f = l.shape().flange();
             t.row("flange", "in tension over the supports: 24.3.4 asks part of the top bars to be spread over min(bf, ln/10) = "
-                    + u.withUnit(spread, Dim.LENGTH) + (bf > p.span() / 10 ? ", with more bars in the outer flange" : "")
-                    + " (not placed by barfit)");
+                    + u.withUnit(f.tensionBarsWidth(), Dim.LENGTH) + (f.outerFlangeBars() ? ", with more bars in the outer flange"
+                            : "") + " (not placed by barfit)");
         }
         t.row("bottom", counts(l.bottomCounts(), l.bottom().label()) + ", full span"
                 + (p.bottomAnchored() ? ", anchored at the supports (compression steel there)" : ""));

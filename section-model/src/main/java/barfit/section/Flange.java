@@ -58,6 +58,19 @@ public record Flange(double width, double thickness, boolean oneSided, double gi
         return new Flange(Math.min(given, limit(bw)), thickness, oneSided, given, clearToNextWeb, clearSpan);
     }
 
+    /**
+     * 24.3.4, a flange in tension: the width over which part of the flexural tension bars is to be
+     * distributed, the effective width or ln/10, whichever is smaller (NaN without a span).
+     */
+    public double tensionBarsWidth() {
+        return spanKnown() ? Math.min(width, clearSpan / 10) : Double.NaN;
+    }
+
+    /** 24.3.4: whether the effective width exceeds ln/10, so bars are also wanted in the outer flange. */
+    public boolean outerFlangeBars() {
+        return spanKnown() && width > clearSpan / 10;
+    }
+
     /** Whether the given width was wider than Table 6.3.2.1 allows, so the analysis takes less. */
     public boolean reduced() {
         return width < given;

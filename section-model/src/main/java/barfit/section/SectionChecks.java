@@ -383,14 +383,12 @@ public final class SectionChecks {
         if (!f.spanKnown()) {
             notes.add("ln limit not applied (no span given)");
         }
-        double ln = f.spanKnown() ? f.clearSpan() : Double.NaN;
         boolean inTension = bending == Bending.HOGGING;
         if (inTension) {
             notes.add("flange in tension: 24.3.4 asks part of the tension bars to be spread over "
-                    + (f.spanKnown() ? "min(bf, ln/10) = " + length(Math.min(f.width(), ln / 10), code)
+                    + (f.spanKnown() ? "min(bf, ln/10) = " + length(f.tensionBarsWidth(), code)
                             : "the effective width, at most ln/10")
-                    + (f.spanKnown() && f.width() > ln / 10 ? ", with more bars in the outer flange" : "")
-                    + " (not placed by barfit)");
+                    + (f.outerFlangeBars() ? ", with more bars in the outer flange" : "") + " (not placed by barfit)");
         }
         if (t.isOn()) {
             t.heading("Effective flange width", "6.3.2.1");
@@ -418,8 +416,8 @@ public final class SectionChecks {
                         + "bars be provided in the outer portions of the flange. barfit places the tension bars in "
                         + "the web only: distribute them and add the slab bars by hand.");
                 if (f.spanKnown()) {
-                    t.step("b,distribute", "min(bf, ln/10)", "min({}, {} / 10)", Q.length(Math.min(f.width(), ln / 10)),
-                            Q.length(f.width()), Q.length(ln));
+                    t.step("b,distribute", "min(bf, ln/10)", "min({}, {} / 10)", Q.length(f.tensionBarsWidth()),
+                            Q.length(f.width()), Q.length(f.clearSpan()));
                 }
             }
         }
