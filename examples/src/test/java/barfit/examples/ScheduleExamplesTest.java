@@ -205,8 +205,8 @@ class ScheduleExamplesTest {
             b.append("    service: {").append(service).append("}\n");
         }
         if (!r.get("flange_width").isEmpty()) {
-            b.append("    flange: {").append(keys(r, "width", "flange_width", "thickness", "flange_thickness"))
-                    .append("}\n");
+            b.append("    flange: {").append(keys(r, "width", "flange_width", "thickness", "flange_thickness", "type",
+                    "flange_type", "clear_to_next_web", "flange_clear_to_next_web")).append("}\n");
         }
         for (String k : new String[] {"max_depth", "width"}) {
             if (!r.get(k).isEmpty()) {

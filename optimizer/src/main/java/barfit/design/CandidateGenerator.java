@@ -214,7 +214,7 @@ public final class CandidateGenerator {
             return Double.POSITIVE_INFINITY;
         }
         double dMax = h - det.firstLayerCentroid(dbMin);
-        double widest = p.flange() != null ? p.flange().width() : b;
+        double widest = p.flange() != null ? p.flange().on(b).width() : b; // at its effective width on this web
         double fy = p.materials().fy();
         return StrengthBound.minTensionArea(p.mu(), dMax, compArea, dpMin, dpMax, widest, p.materials().fc(), fy);
     }

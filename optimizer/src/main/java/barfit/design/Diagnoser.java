@@ -43,7 +43,7 @@ final class Diagnoser {
         Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(), p.detailing().exposure());
         SectionShape shape = new SectionShape(b, h, p.flange());
 
-        // frame-level checks (cover, flange width, minimum depth) on the largest frame
+        // frame-level checks (cover, skin, minimum depth) on the largest frame
         BarSize t0 = p.space().barSizes().get(0);
         BarSize c0 = p.space().compressionSizes().get(0);
         BeamSection probeSection = new BeamSection(shape, p.materials(), det,
@@ -56,7 +56,6 @@ final class Diagnoser {
                     case "min_depth" -> "Table 9.3.1.1 needs h ≥ " + say(u, r.limit().value(), Dim.LENGTH) + " for this span, but the "
                             + "deepest depth allowed is " + say(u, h, Dim.LENGTH) + " (deflection is not computed for single sections)";
                     case "cover" -> "the cover is below Table 20.5.1.3.1 (" + say(u, r.limit().value(), Dim.LENGTH) + ")";
-                    case "flange_width" -> "the flange is wider than Table 6.3.2.1 allows (" + say(u, r.limit().value(), Dim.LENGTH) + ")";
                     default -> r.title() + " fails (" + r.clause() + ")";
                 };
                 return new Diagnosis(r.id(), summary, null, 0, fixes(p, cost, u));

@@ -47,7 +47,8 @@ public final class CheckInputReader {
             // a beam's own stirrup bar sets where its bars sit (cover + stirrup + db/2), so it is read first
             Stirrups stirrups = b.has("stirrups") ? common.stirrups(b.map("stirrups", "stirrups: {bar, legs, spacing}")) : null;
             SectionReader sr = stirrups == null ? common : new SectionReader(settings.withStirrupBar(stirrups.bar()));
-            SectionShape shape = sr.shape(b.map("section", "the section: {width, height}"));
+            Span span = sr.span(b); // the flange's effective width depends on it
+            SectionShape shape = sr.shape(b.map("section", "the section: {width, height}"), span);
             if (!b.has("bottom") && !b.has("top")) {
                 throw new InputError(b.location(), b.path() + ": beam " + id
                         + " has no bars; expected bottom: [{bar, count}] and/or top: [{bar, count}]");
@@ -65,7 +66,6 @@ public final class CheckInputReader {
                 vu = u.toSI(v, Dim.FORCE);
             }
             SkinBars skin = b.has("skin") ? sr.skin(b.map("skin", "skin bars: {bar, spacing}")) : null;
-            Span span = sr.span(b);
             BeamSection section = sr.section(shape, layers, stirrups, skin);
             out.add(new CheckBeam(id, b.location(), section, new Demand(mu, vu), span));
         }

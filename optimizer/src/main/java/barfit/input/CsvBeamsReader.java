@@ -30,13 +30,13 @@ import java.util.Map;
  * id,span,ends,m_left,m_mid,m_right,v_left,v_right,max_depth,group,flange_width,flange_thickness,dead,live
  * </pre>
  * {@code vu} may stand for both end shears. Optional: {@code width} (fixes b), {@code flange_type} (T or L),
- * {@code sustained_live}.
+ * {@code flange_clear_to_next_web} (sw of Table 6.3.2.1), {@code sustained_live}.
  */
 public final class CsvBeamsReader {
     static final List<String> REQUIRED = List.of("id", "span", "ends");
     static final List<String> KNOWN = List.of("id", "span", "ends", "m_left", "m_mid", "m_right", "vu", "v_left",
-            "v_right", "max_depth", "group", "flange_width", "flange_thickness", "flange_type", "dead", "live",
-            "sustained_live", "width");
+            "v_right", "max_depth", "group", "flange_width", "flange_thickness", "flange_type",
+            "flange_clear_to_next_web", "dead", "live", "sustained_live", "width");
 
     private static final java.util.regex.Pattern DECIMAL =
             java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
@@ -362,8 +362,10 @@ public final class CsvBeamsReader {
         Double width = positive(r, "width", "the fixed web width, " + u.unit(Dim.LENGTH), Dim.LENGTH);
         Cell groupCell = r.cells().get("group");
         String group = empty(groupCell) ? null : groupCell.text();
-        Double bf = positive(r, "flange_width", "the effective flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Double bf = positive(r, "flange_width", "the flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH);
         Double hf = positive(r, "flange_thickness", "the slab thickness, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Double sw = positive(r, "flange_clear_to_next_web", "the clear distance from the web to the next web, "
+                + u.unit(Dim.LENGTH), Dim.LENGTH);
         Flange flange = null;
         if ((bf == null) != (hf == null)) {
             String missing = bf == null ? "flange_width" : "flange_thickness";
@@ -392,9 +394,12 @@ public final class CsvBeamsReader {
                             + type.text() + "\"");
                 }
             }
-            flange = new Flange(bf, hf, oneSided);
+            flange = Flange.given(bf, hf, oneSided, sw, span);
         } else if (!empty(r.cells().get("flange_type"))) {
             throw error(r.cells().get("flange_type"), "flange_type: given without flange_width and flange_thickness");
+        } else if (sw != null) {
+            throw error(r.cells().get("flange_clear_to_next_web"),
+                    "flange_clear_to_next_web: given without flange_width and flange_thickness");
         }
         String load = "service load, " + u.unit(Dim.LINE_LOAD);
         Double dead = positive(r, "dead", "the service dead load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD);

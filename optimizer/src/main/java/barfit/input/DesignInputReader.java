@@ -57,13 +57,13 @@ public final class DesignInputReader {
             String group = b.has("group") ? b.text("group", "the group of beams that may share a section size") : null;
             Double cap = sr.optLength(b, "max_depth", "the headroom cap on the total height").orElse(null);
             Double width = sr.optLength(b, "width", "the fixed web width").orElse(null);
+            Span span = sr.span(b); // the flange's effective width depends on it
             Flange flange = null;
             if (b.has("flange")) {
                 YFields ff = b.map("flange", "the flange: {width, thickness}");
                 double minWeb = width != null ? width : space.widths().get(space.widths().size() - 1);
-                flange = sr.flange(ff, minWeb);
+                flange = sr.flange(ff, minWeb, span);
             }
-            Span span = sr.span(b);
             boolean whole = b.has("moments");
             if (whole && b.has("Mu")) {
                 throw b.error("Mu", "give either Mu (one section) or moments (a whole span), not both");

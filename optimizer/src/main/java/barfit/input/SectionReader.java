@@ -39,10 +39,16 @@ public final class SectionReader {
         return f.optPositive(key, what + ", " + u.unit(Dim.LENGTH)).map(v -> u.toSI(v, Dim.LENGTH));
     }
 
-    public Flange flange(YFields f, double webWidth) {
-        f.allowOnly("width", "thickness", "type");
-        double bf = length(f, "width", "effective flange width");
+    /**
+     * A flange as given: its width, slab thickness, type and, optionally, the clear distance to the next
+     * web. {@code span} (may be null) is the beam's span, taken as the clear span ln of Table 6.3.2.1; the
+     * section model takes the flange at its effective width on each web it is put on.
+     */
+    public Flange flange(YFields f, double webWidth, Span span) {
+        f.allowOnly("width", "thickness", "type", "clear_to_next_web");
+        double bf = length(f, "width", "flange width");
         double hf = length(f, "thickness", "flange (slab) thickness");
+        Double sw = optLength(f, "clear_to_next_web", "the clear distance from the web to the next web").orElse(null);
         boolean oneSided = false;
         if (f.has("type")) {
             String t = f.text("type", "T or L");
@@ -56,17 +62,18 @@ public final class SectionReader {
             throw f.error("width", "the flange (" + fmt(bf, Dim.LENGTH) + ") is narrower than the web ("
                     + fmt(webWidth, Dim.LENGTH) + "); expected flange width >= web width");
         }
-        return new Flange(bf, hf, oneSided);
+        return Flange.given(bf, hf, oneSided, sw, span == null ? null : span.length());
     }
 
-    public SectionShape shape(YFields sec) {
+    /** The section of a check beam; {@code span} (may be null) bounds its flange's effective width. */
+    public SectionShape shape(YFields sec, Span span) {
         sec.allowOnly("width", "height", "flange");
         double b = length(sec, "width", "web width");
         double h = length(sec, "height", "total height");
         Flange flange = null;
         if (sec.has("flange")) {
             YFields f = sec.map("flange", "the flange: {width, thickness}");
-            flange = flange(f, b);
+            flange = flange(f, b, span);
             if (flange.thickness() >= h) {
                 throw f.error("thickness", "the flange is as thick as the whole section; expected thickness < height");
             }

@@ -67,6 +67,12 @@ public final class BeamText {
         TextTable t = new TextTable(false, false);
         t.row("demand", demand(p, u));
         t.row("section", Words.shape(l.shape(), u) + (l.flange() != null ? " (flange counted at mid-span)" : ""));
+        if (l.flange() != null && (p.leftSupport() || p.rightSupport())) {
+            var f = l.shape().flange();
+            t.row("flange", "in tension over the supports: 24.3.4 asks part of the top bars to be spread over min(bf, ln/10) = "
+                    + u.withUnit(f.tensionBarsWidth(), Dim.LENGTH) + (f.outerFlangeBars() ? ", with more bars in the outer flange"
+                            : "") + " (not placed by barfit)");
+        }
         t.row("bottom", counts(l.bottomCounts(), l.bottom().label()) + ", full span"
                 + (p.bottomAnchored() ? ", anchored at the supports (compression steel there)" : ""));
         if (p.cantilever()) {

@@ -114,7 +114,8 @@ public final class CheckText {
         }
         t.write("  ", out);
         for (CheckResult c : r.checks()) {
-            if (c.note() != null && !c.pass()) {
+            // the flange's note says which width the analysis took and what is left to the engineer
+            if (c.note() != null && (!c.pass() || c.id().equals("flange_width"))) {
                 out.append("  note, ").append(c.id()).append(": ").append(c.note()).append('\n');
             }
         }

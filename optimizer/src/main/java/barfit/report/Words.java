@@ -21,7 +21,9 @@ public final class Words {
             return bh + " rectangular";
         }
         return bh + (s.flange().oneSided() ? " L" : " T") + ", flange " + u.compact(s.flange().width(), Dim.LENGTH)
-                + " × " + u.compact(s.flange().thickness(), Dim.LENGTH);
+                + " × " + u.compact(s.flange().thickness(), Dim.LENGTH) + (s.flange().reduced()
+                        ? " (given " + u.compact(s.flange().given(), Dim.LENGTH) + ", taken at its effective width, "
+                                + "Table 6.3.2.1)" : "");
     }
 
     public static String layers(List<BarLayer> layers) {

@@ -80,13 +80,18 @@ final class RandomProblems {
         SearchSpace space = new SearchSpace(widths, depths, tension, comp, layers, stirrupSizes, legs, spacings);
         double mu = (20 + r.nextDouble() * 900) * 1e6 * (r.nextInt(4) == 0 ? -1 : 1);
         Double vu = r.nextInt(3) == 0 ? null : (30 + r.nextDouble() * 450) * 1e3;
-        Flange flange = r.nextInt(4) == 0 ? new Flange(widths.get(widths.size() - 1) + 400 + 100 * r.nextInt(10),
-                100 + 10 * r.nextInt(8), r.nextInt(3) == 0) : null;
+        // the flange's draws come before the span's (kept in this order so the instances stay the same)
+        boolean flanged = r.nextInt(4) == 0;
+        double bf = flanged ? widths.get(widths.size() - 1) + 400 + 100 * r.nextInt(10) : 0;
+        double hf = flanged ? 100 + 10 * r.nextInt(8) : 0;
+        boolean oneSided = flanged && r.nextInt(3) == 0;
         Span span = null;
         if (r.nextInt(3) == 0) {
             EndCondition e = EndCondition.values()[r.nextInt(4)];
             span = new Span(3000 + 1000 * r.nextInt(7), r.nextBoolean() ? e : null);
         }
+        // the span, when given, is the flange's clear span too (Table 6.3.2.1 may cut the flange)
+        Flange flange = flanged ? Flange.given(bf, hf, oneSided, null, span == null ? null : span.length()) : null;
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
         // the code's legs rules alone, or with an office's rule of two legs per four bars
         space = space.withBarsPerTwoLegs(r.nextBoolean() ? 0 : 4);

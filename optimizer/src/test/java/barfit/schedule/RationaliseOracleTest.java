@@ -309,7 +309,7 @@ class RationaliseOracleTest {
             SpanChecks.ServiceLoads service = r.nextBoolean()
                     ? new SpanChecks.ServiceLoads(w / 1.5 * 0.6, w / 1.5 * 0.4, 0.25) : null;
             Double cap = r.nextInt(4) == 0 ? 500.0 : null;
-            Flange flange = ends != EndCondition.SIMPLE && r.nextInt(3) == 0 ? new Flange(1000, 120, false) : null;
+            Flange flange = ends != EndCondition.SIMPLE && r.nextInt(3) == 0 ? Flange.given(1000, 120, false, null, span) : null;
             BeamProblem p = new BeamProblem("S" + index + "-" + (i + 1), m, det, CodeEquations.SI, space, span, ends, ml,
                     mm, mr, v, v, service, SpanChecks.Limits.DEFAULT, cap, null, flange, false, 2, 4);
             String group = r.nextInt(3) == 0 ? "G" + r.nextInt(2) : null;

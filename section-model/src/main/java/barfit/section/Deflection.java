@@ -36,12 +36,19 @@ public final class Deflection {
     }
 
     /**
-     * @param shape    the section; its flange counts only when it is on the compression side
-     * @param as       tension steel area at depth d
-     * @param asc      compression steel area at depth dPrime (0 for none)
+     * Gross and cracked stiffness of a section. The cracked transformed section takes every bar layer at
+     * its own depth: a layer below the neutral axis as n As, a layer above it (in compression, displacing
+     * concrete) as (n − 1) As. kd is the root of the first moment of that section about the neutral axis.
+     *
+     * @param shape the section; its flange counts only when it is on the compression side
+     * @param depth each bar layer's depth from the extreme compression fibre of this bending, mm
+     * @param area  each bar layer's area, mm²
      */
-    public static Stiffness stiffness(SectionShape shape, Bending bending, Materials m, CodeEquations code, double as,
-            double d, double asc, double dPrime) {
+    public static Stiffness stiffness(SectionShape shape, Bending bending, Materials m, CodeEquations code,
+            double[] depth, double[] area) {
+        if (depth.length != area.length) {
+            throw new IllegalArgumentException("one area per layer depth");
+        }
         double ec = ec(m, code);
         double n = code.es() / ec;
         double h = shape.height();
@@ -50,21 +57,24 @@ public final class Deflection {
         double bf = f == null ? bw : f.width();
         double hf = f == null ? 0 : f.thickness();
         // gross section (flange on the compression side only), measured from the compression face
-        double area = bw * h + (bf - bw) * hf;
+        double grossArea = bw * h + (bf - bw) * hf;
         double firstMoment = bw * h * h / 2 + (bf - bw) * hf * hf / 2;
-        double yc = firstMoment / area;
+        double yc = firstMoment / grossArea;
         double ig = bw * h * h * h / 12 + bw * h * sq(h / 2 - yc) + (bf - bw) * hf * hf * hf / 12
                 + (bf - bw) * hf * sq(hf / 2 - yc);
         double yt = h - yc;
         double mcr = fr(m, code) * ig / yt;
-        // cracked transformed section: solve the first moment about the neutral axis for kd
-        double kd = crackedNeutralAxis(bf, hf, bw, n, as, d, asc, dPrime);
-        double icr = compressionInertia(bf, hf, bw, kd) + (n - 1) * asc * sq(kd - dPrime) + n * as * sq(d - kd);
-        if (asc > 0 && kd < dPrime) {
-            // compression bars below the neutral axis act in tension: count them with n
-            icr = compressionInertia(bf, hf, bw, kd) + n * asc * sq(dPrime - kd) + n * as * sq(d - kd);
+        double kd = crackedNeutralAxis(bf, hf, bw, n, depth, area);
+        double icr = compressionInertia(bf, hf, bw, kd);
+        for (int i = 0; i < depth.length; i++) {
+            icr += transformed(n, depth[i], kd) * area[i] * sq(depth[i] - kd);
         }
         return new Stiffness(ig, yt, mcr, icr, kd, n, ec);
+    }
+
+    /** The modular ratio a bar at {@code depth} counts with for a neutral axis at {@code x}: n below, n − 1 above. */
+    private static double transformed(double n, double depth, double x) {
+        return depth < x ? n - 1 : n;
     }
 
     private static double sq(double x) {
@@ -89,14 +99,24 @@ public final class Deflection {
         return bf * hf * hf * hf / 12 + bf * hf * sq(x - hf / 2) + bw * web * web * web / 3;
     }
 
-    private static double crackedNeutralAxis(double bf, double hf, double bw, double n, double as, double d,
-            double asc, double dPrime) {
+    /**
+     * kd: where the first moment of the cracked transformed section about the axis vanishes. That moment
+     * grows with the axis depth (its derivative is the transformed area above the axis plus that below),
+     * is negative at the compression face and positive at the deepest bar, so the root is unique.
+     */
+    private static double crackedNeutralAxis(double bf, double hf, double bw, double n, double[] depth,
+            double[] area) {
         double lo = 0;
-        double hi = d;
+        double hi = 0;
+        for (double d : depth) {
+            hi = Math.max(hi, d);
+        }
         for (int i = 0; i < 200; i++) {
             double x = 0.5 * (lo + hi);
-            double steelC = asc > 0 ? (x > dPrime ? (n - 1) * asc * (x - dPrime) : n * asc * (x - dPrime)) : 0;
-            double balance = compressionFirstMoment(bf, hf, bw, x) + steelC - n * as * (d - x);
+            double balance = compressionFirstMoment(bf, hf, bw, x);
+            for (int j = 0; j < depth.length; j++) {
+                balance += transformed(n, depth[j], x) * area[j] * (x - depth[j]);
+            }
             if (balance > 0) {
                 hi = x;
             } else {

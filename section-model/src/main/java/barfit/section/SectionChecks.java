@@ -15,7 +15,10 @@ public final class SectionChecks {
     private SectionChecks() {
     }
 
-    /** Runs all checks that apply. {@code span} may be null (then depth and flange-width limits are skipped). */
+    /**
+     * Runs all checks that apply. {@code span} may be null (then the depth limit is skipped). A flange
+     * carries its own clear span (its effective width depends on it), which a given span must equal.
+     */
     public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail) {
         return run(s, demand, span, trail, true);
     }
@@ -34,6 +37,7 @@ public final class SectionChecks {
      */
     public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail, boolean withMinimumDepth,
             StirrupRules.Practice practice) {
+        requireSameSpan(s, span);
         List<CheckResult> out = new ArrayList<>();
         Bending bending = demand.bending();
         FlexureResult fr = Flexure.analyse(s, bending, trail);
@@ -43,7 +47,7 @@ public final class SectionChecks {
         cover(s, out, trail);
         skin(s, out, trail);
         if (s.shape().flanged()) {
-            flangeWidth(s, span, out, trail);
+            flangeWidth(s, span, bending, out, trail);
         }
         ShearResult shear = null;
         if (demand.vu() != null) {
@@ -350,25 +354,107 @@ public final class SectionChecks {
                 Q.length(limit), skin.bar().label() + " on both side faces over h/2 from the tension face"));
     }
 
-    private static void flangeWidth(BeamSection s, Span span, List<CheckResult> out, Trail t) {
+    /**
+     * Table 6.3.2.1: the flange is analysed at its effective width (the section holds it so, see
+     * {@link Flange#on}); this says which width was taken and what the limit left unchecked. Where the
+     * flange is in tension ({@code bending} hogging), it also says what 24.3.4 asks of the tension bars.
+     * {@code bending} may be null (a frame check, before the bending is known).
+     */
+    private static void flangeWidth(BeamSection s, Span span, Bending bending, List<CheckResult> out, Trail t) {
         Flange f = s.shape().flange();
+        CodeEquations code = s.code();
         double bw = s.shape().width();
-        double hf = f.thickness();
-        double overhang = f.oneSided() ? 6 * hf : 8 * hf;
-        String formula = f.oneSided() ? "bw + min(6 hf, ln/12)" : "bw + 2 min(8 hf, ln/8)";
-        if (span != null) {
-            overhang = Math.min(overhang, span.length() / (f.oneSided() ? 12 : 8));
-        } else {
-            formula = f.oneSided() ? "bw + 6 hf (no span given)" : "bw + 2 × 8 hf (no span given)";
+        double limit = f.limit(bw);
+        List<String> terms = new ArrayList<>();
+        List<Q> args = new ArrayList<>();
+        args.add(Q.length(bw));
+        terms.add((f.oneSided() ? "6" : "8") + " × {}");
+        args.add(Q.length(f.thickness()));
+        if (f.webGapKnown()) {
+            terms.add("{} / 2");
+            args.add(Q.length(f.clearToNextWeb()));
         }
-        double limit = bw + (f.oneSided() ? 1 : 2) * overhang;
+        if (f.spanKnown()) {
+            terms.add("{} / " + (f.oneSided() ? "12" : "8"));
+            args.add(Q.length(f.clearSpan()));
+        }
+        String overhang = (f.oneSided() ? "6 hf" : "8 hf") + (f.webGapKnown() ? ", sw/2" : "")
+                + (f.spanKnown() ? (f.oneSided() ? ", ln/12" : ", ln/8") : "");
+        String formula = "bw + " + (f.oneSided() ? "" : "2 ") + "min(" + overhang + ")";
+        String sub = "{} + " + (f.oneSided() ? "" : "2 × ") + "min(" + String.join(", ", terms) + ")";
+        List<String> notes = new ArrayList<>();
+        if (f.reduced()) {
+            notes.add("flange given " + length(f.given(), code) + ", taken at its effective width " + length(f.width(), code)
+                    + " (Table 6.3.2.1)");
+        }
+        if (!f.webGapKnown()) {
+            notes.add("sw/2 limit not checked (give the flange's clear_to_next_web)");
+        }
+        if (!f.spanKnown()) {
+            notes.add("ln limit not applied (no span given)");
+        }
+        boolean inTension = bending == Bending.HOGGING;
+        if (inTension) {
+            notes.add("flange in tension: 24.3.4 asks part of the tension bars to be spread over "
+                    + (f.spanKnown() ? "min(bf, ln/10) = " + length(f.tensionBarsWidth(), code)
+                            : "the effective width, at most ln/10")
+                    + (f.outerFlangeBars() ? ", with more bars in the outer flange" : "") + " (not placed by barfit)");
+        }
         if (t.isOn()) {
             t.heading("Effective flange width", "6.3.2.1");
-            t.step("bf,max", formula, null, Q.length(limit));
-            t.note("The clear distance to the next web (sw/2) is not known to barfit; check it by hand.");
+            t.step("bf,max", formula, sub, Q.length(limit), args.toArray(new Q[0]));
+            if (f.reduced()) {
+                t.step("bf", "min(bf,given, bf,max)", "min({}, {})", Q.length(f.width()), Q.length(f.given()),
+                        Q.length(limit));
+                t.note("The flange given is wider than Table 6.3.2.1 allows: it is taken at its effective width in "
+                        + "every calculation of this section (strength, minimum steel, stiffness).");
+            } else {
+                t.value("bf", Q.length(f.width()), "as given, within the limit");
+            }
+            if (!f.webGapKnown()) {
+                t.note("The clear distance to the next web (sw) was not given, so the sw/2 limit was not checked; "
+                        + "give flange: {clear_to_next_web} or check it by hand.");
+            }
+            if (!f.spanKnown()) {
+                t.note("No span given: the ln limit of Table 6.3.2.1 was not applied.");
+            }
+            if (inTension) {
+                t.heading("Flange in tension", "24.3.4");
+                t.note("The flange is on the tension side. 24.3.4 asks that part of the flexural tension "
+                        + "reinforcement be distributed over the effective flange width or a width of ln/10, whichever "
+                        + "is smaller, and, where the effective flange width exceeds ln/10, that some longitudinal "
+                        + "bars be provided in the outer portions of the flange. barfit places the tension bars in "
+                        + "the web only: distribute them and add the slab bars by hand.");
+                if (f.spanKnown()) {
+                    t.step("b,distribute", "min(bf, ln/10)", "min({}, {} / 10)", Q.length(f.tensionBarsWidth()),
+                            Q.length(f.width()), Q.length(f.clearSpan()));
+                }
+            }
         }
-        out.add(CheckResult.atMost("flange_width", "Effective flange width", "Table 6.3.2.1", Q.length(f.width()),
-                Q.length(limit), "sw/2 limit not checked"));
+        out.add(CheckResult.atMost("flange_width", f.reduced() ? "Flange taken at its effective width"
+                : "Effective flange width", "Table 6.3.2.1", Q.length(f.width()), Q.length(limit),
+                String.join("; ", notes)));
+    }
+
+    /** A length in the edition's unit, for notes (mm, or in for inch-pound input). */
+    private static String length(double mm, CodeEquations code) {
+        double v = Math.round((code.inchPound() ? mm / 25.4 : mm) * 10) / 10.0;
+        return (v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v)) + (code.inchPound() ? " in" : " mm");
+    }
+
+    /**
+     * A span given to the checks must be the flange's own clear span (which sets its effective width): the
+     * readers build both from the beam's span. Without a span the flange's own is used as it is.
+     */
+    private static void requireSameSpan(BeamSection s, Span span) {
+        Flange f = s.shape().flange();
+        if (f == null || span == null) {
+            return;
+        }
+        if (!f.spanKnown() || Math.abs(f.clearSpan() - span.length()) > 1e-6) {
+            throw new IllegalArgumentException("the flange's clear span (" + f.clearSpan() + " mm) is not the span checked ("
+                    + (span == null ? "none" : span.length() + " mm") + "); build the flange with the beam's span");
+        }
     }
 
     /**
@@ -454,12 +540,13 @@ public final class SectionChecks {
      * cover, skin, flange width and minimum depth. The search runs these once per frame.
      */
     public static List<CheckResult> frameChecks(BeamSection s, Span span) {
+        requireSameSpan(s, span);
         List<CheckResult> out = new ArrayList<>();
         Trail off = Trail.off();
         cover(s, out, off);
         skin(s, out, off);
         if (s.shape().flanged()) {
-            flangeWidth(s, span, out, off);
+            flangeWidth(s, span, null, out, off);
         }
         if (span != null && span.ends() != null) {
             minimumDepth(s, span, out, off);

@@ -1,10 +1,17 @@
 package barfit.section;
 
-/** Concrete outline: web width, total height, optional top flange. mm. */
+/**
+ * Concrete outline: web width, total height, optional top flange. mm. The flange is held at its
+ * effective width on this web (Table 6.3.2.1, {@link Flange#on}), whatever width it was given, so every
+ * analysis of the section uses that width.
+ */
 public record SectionShape(double width, double height, Flange flange) {
     public SectionShape {
         if (!(width > 0) || !(height > 0)) {
             throw new IllegalArgumentException("width and height must be positive");
+        }
+        if (flange != null) {
+            flange = flange.on(width);
         }
     }
 

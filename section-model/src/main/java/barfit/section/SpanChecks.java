@@ -107,6 +107,11 @@ public final class SpanChecks {
                     Q.lineLoad(loads.live()));
             t.note("Service moments: Ma = Mu × w / wu; Ie of Table 24.2.3.5 at each critical section, averaged "
                     + "for a continuous span (24.2.3.6).");
+            t.note("Icr: cracked transformed section with every bar layer at its own depth, n As below the "
+                    + "neutral axis and (n − 1) As above it; Ig and Mcr of the gross concrete section.");
+            stiffnessTrail(s.left(), mLeft, Bending.HOGGING, "left support", t);
+            stiffnessTrail(s.mid(), mMid, Bending.SAGGING, "mid-span", t);
+            stiffnessTrail(s.right(), mRight, Bending.HOGGING, "right support", t);
             t.value("Δ(D)", Q.length(dD), "immediate, dead load");
             t.value("Δ(D + L)", Q.length(dDL), "immediate, dead plus live");
             t.step("Δ(L)", "Δ(D + L) − Δ(D)", "{} − {}", Q.length(live), Q.length(dDL), Q.length(dD));
@@ -209,12 +214,28 @@ public final class SpanChecks {
                 && CheckResult.within(deflections[4], length / limits.total());
     }
 
-    private static Deflection.Stiffness stiffnessOf(BeamSection s, Bending bending) {
-        double[] t = faceSteel(s, bending.tensionFace());
-        double[] c = faceSteel(s, bending.compressionFace());
-        // depth of the compression bars from the compression face
-        double dPrime = c[0] > 0 ? s.shape().height() - c[1] : 0;
-        return Deflection.stiffness(s.shape(), bending, s.materials(), s.code(), t[0], t[1], c[0], dPrime);
+    private static void stiffnessTrail(BeamSection s, Double mu, Bending bending, String where, Trail t) {
+        if (s == null || mu == null) {
+            return;
+        }
+        Deflection.Stiffness st = stiffnessOf(s, bending);
+        t.value("n (" + where + ")", Q.number(st.n()), "Es / Ec");
+        t.value("Ig (" + where + ")", Q.inertia(st.ig()), "gross concrete section");
+        t.value("Mcr (" + where + ")", Q.moment(st.mcr()), "fr Ig / yt, 24.2.3.5");
+        t.value("kd (" + where + ")", Q.length(st.kd()), "first moment of the cracked transformed section = 0");
+        t.value("Icr (" + where + ")", Q.inertia(st.icr()), "concrete above kd + Σ n or (n − 1) As (d − kd)²");
+    }
+
+    /** The section's gross and cracked stiffness in one bending, with every bar layer at its own depth. */
+    public static Deflection.Stiffness stiffnessOf(BeamSection s, Bending bending) {
+        List<BarLayer> layers = s.layers();
+        double[] depth = new double[layers.size()];
+        double[] area = new double[layers.size()];
+        for (int i = 0; i < layers.size(); i++) {
+            depth[i] = s.depthFromCompression(layers.get(i), bending);
+            area[i] = layers.get(i).area();
+        }
+        return Deflection.stiffness(s.shape(), bending, s.materials(), s.code(), depth, area);
     }
 
     private static String fmt(double d) {

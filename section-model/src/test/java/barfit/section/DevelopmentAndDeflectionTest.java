@@ -67,8 +67,8 @@ class DevelopmentAndDeflectionTest {
         // The book rounds n to 9 (Icr = 4067 in⁴); ACI 318-19 n = Es/Ec = 29,000/3122 = 9.29, and the hand
         // evaluation gives kd = 6.861 in and Icr = 12(6.861)³/3 + 9.29(3)(17 - 6.861)² = 4157 in⁴.
         Materials m = usMaterials(3000, 1.0);
-        var s = Deflection.stiffness(SectionShape.rectangular(12 * IN, 20 * IN), Bending.SAGGING, m, US, 3.00 * IN2,
-                17 * IN, 0, 0);
+        var s = Deflection.stiffness(SectionShape.rectangular(12 * IN, 20 * IN), Bending.SAGGING, m, US,
+                new double[] {17 * IN}, new double[] {3.00 * IN2});
         double in4 = Math.pow(IN, 4);
         assertEquals(8000, s.ig() / in4, 1e-6);
         assertEquals(10, s.yt() / IN, 1e-9);

@@ -108,14 +108,14 @@ public final class BeamDesigner {
             BeamSelection.Choice c = r.choice();
             BeamLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
             if (c.set().frame().deflection() && !BeamVerifier.deflectionOk(p, layout)) {
-                sel.cutDeflection(c);
+                sel.cutDeflection(c, gen);
                 cuts++;
                 continue;
             }
             BeamReport report = BeamVerifier.verify(p, layout, true);
             if (!report.ok()) {
                 if (report.okApartFromDeflection()) {
-                    sel.cutDeflection(c);
+                    sel.cutDeflection(c, gen);
                     cuts++;
                     continue;
                 }
@@ -186,8 +186,10 @@ public final class BeamDesigner {
     }
 
     private static boolean tight(CheckResult c) {
+        // a flange at its Table 6.3.2.1 width is not a limit the design works against
         return c.pass() && Double.isFinite(c.ratio()) && c.ratio() >= 0.95 && !c.id().startsWith("cover")
-                && !c.id().startsWith("layer_gap") && !c.id().startsWith("stirrup_legs_bars");
+                && !c.id().startsWith("layer_gap") && !c.id().startsWith("stirrup_legs_bars")
+                && !c.id().equals("flange_width");
     }
 
     private static String ratio(CheckResult c) {

@@ -263,7 +263,7 @@ public final class BeamGenerator {
         double dp = det.firstLayerCentroid(smallest.diameter());
         double fc = p.materials().fc();
         double fy = p.materials().fy();
-        double widest = p.flange() != null ? p.flange().width() : b;
+        double widest = p.flange() != null ? p.flange().on(b).width() : b; // at its effective width on this web
         double l = p.span();
         double bottom = p.midSection()
                 ? StrengthBound.minTensionArea(p.mMid(), dMax, compArea, dp, dp + 60, widest, fc, fy)
@@ -939,7 +939,7 @@ public final class BeamGenerator {
         if (!p.midSection()) {
             return barCost(bb, 2, p.span()); // a cantilever's bottom bars are two or more hangers
         }
-        double widest = p.flange() != null ? p.flange().width() : f.b();
+        double widest = p.flange() != null ? p.flange().on(f.b()).width() : f.b(); // effective width on this web
         double fc = p.materials().fc();
         double fy = p.materials().fy();
         double comp = t.nc() * t.bar().area();
@@ -1458,6 +1458,34 @@ public final class BeamGenerator {
             ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, bottom, f.det()));
         }
         return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
+    }
+
+    /**
+     * What the span's deflection takes from one mid-span option's section, for the deflection cuts: Ie of
+     * Table 24.2.3.5 at the dead, sustained and total service levels, then ρ' (24.2.4.1). Null where the
+     * section takes no part (a cantilever's deflection is its support's).
+     */
+    public double[] deflectionStiffness(Frame f, MidOpt m) {
+        if (p.cantilever()) {
+            return null;
+        }
+        BeamSection s = midSection(f, new SectionShape(f.b(), f.h(), p.flange()), m);
+        double[] ie = SpanChecks.ieLevels(s, Bending.SAGGING, p.mMid(), SpanChecks.ratios(p.service()));
+        return append(ie, SpanChecks.rhoPrime(s, Bending.SAGGING));
+    }
+
+    /** As {@link #deflectionStiffness(Frame, MidOpt)} for a support option; ρ' only at a cantilever's support. */
+    public double[] deflectionStiffness(Frame f, SupportOpt o, BeamProblem.Place place) {
+        BeamSection s = supportSection(f, new SectionShape(f.b(), f.h(), p.flange()), o);
+        double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING, place == BeamProblem.Place.LEFT ? p.mLeft() : p.mRight(),
+                SpanChecks.ratios(p.service()));
+        return p.cantilever() ? append(ie, SpanChecks.rhoPrime(s, Bending.HOGGING)) : ie;
+    }
+
+    private static double[] append(double[] a, double v) {
+        double[] out = java.util.Arrays.copyOf(a, a.length + 1);
+        out[a.length] = v;
+        return out;
     }
 
     // ------------------------------------------------------------------ combining and bounding

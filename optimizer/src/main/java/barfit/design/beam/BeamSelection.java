@@ -13,7 +13,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Objects;
 
 /**
  * The CP-SAT model of one span over the generator's options. One frame; in it one top option (top bar
@@ -21,7 +20,7 @@ import java.util.Objects;
  * support of the same top size whose first layer holds the continuous bars and whose stirrups have
  * legs enough for the bottom bars; at most {@code max_bar_sizes_per_beam} bar sizes. Deflection, which
  * couples everything, is added lazily: a combination found too flexible is cut off together with every
- * combination that has no more steel anywhere (same sizes, no more bars, no deeper bars).
+ * combination whose every section is no stiffer (Ie at each service level, and ρ').
  */
 public final class BeamSelection {
     /** The chosen combination and the solver's proof. */
@@ -46,6 +45,9 @@ public final class BeamSelection {
     private final List<Literal> all = new ArrayList<>();
     private final List<Long> costs = new ArrayList<>();
     private int booleans;
+    /** Each option's stiffness for the deflection cuts, computed once (options are compared by identity). */
+    private final Map<Object, double[]> stiffness = new java.util.IdentityHashMap<>();
+    private static final double[] NO_PART = new double[0];
 
     public BeamSelection(BeamProblem problem, List<BeamGenerator.FrameSet> sets) {
         OrTools.load();
@@ -182,39 +184,68 @@ public final class BeamSelection {
         return sv;
     }
 
-    /** Cuts off a combination found too flexible, with every combination that has no more steel. */
-    public void cutDeflection(Choice c) {
+    /**
+     * Cuts off a combination found too flexible together with every combination of its frame whose every
+     * section is no stiffer: Ie no larger at each service level and ρ' no larger where the long-term
+     * multiplier takes it. A span's deflections only grow as Ie or ρ' fall ({@link
+     * barfit.section.SpanChecks#deflections}), so each of those fails as well. (Fewer bars alone would not
+     * do: with every layer at its own depth, a layout with no more bars but spread over more layers can be
+     * the stiffer, and a shallower centroid raises ρ'.)
+     */
+    public void cutDeflection(Choice c, BeamGenerator gen) {
         int fi = sets.indexOf(c.set());
         BeamGenerator.FrameSet fs = c.set();
+        BeamGenerator.Frame f = fs.frame();
+        boolean known = p.service() != null;
         LinearExprBuilder weaker = LinearExpr.newBuilder();
-        int parts = 0;
+        int parts = 1;
         BeamGenerator.MidOpt m0 = c.mid();
+        double[] s0 = known ? stiffness(m0, () -> gen.deflectionStiffness(f, m0)) : null;
         for (int i = 0; i < fs.mids().size(); i++) {
             BeamGenerator.MidOpt m = fs.mids().get(i);
-            if (m.bar().equals(m0.bar()) && m.top().bar().equals(m0.top().bar()) && m.top().nc() <= m0.top().nc()
-                    && m.total() <= m0.total() && m.d() <= m0.d() + 1e-9) {
+            if (m == m0 || known && noStiffer(stiffness(m, () -> gen.deflectionStiffness(f, m)), s0)) {
                 weaker.add(midVars.get(fi).get(i));
             }
         }
-        parts++;
-        parts += weakerSupports(weaker, fs.lefts(), leftVars.get(fi), c.left());
-        parts += weakerSupports(weaker, fs.rights(), rightVars.get(fi), c.right());
+        parts += weakerSupports(weaker, fs.lefts(), leftVars.get(fi), c.left(), known,
+                o -> gen.deflectionStiffness(f, o, BeamProblem.Place.LEFT));
+        parts += weakerSupports(weaker, fs.rights(), rightVars.get(fi), c.right(), known,
+                o -> gen.deflectionStiffness(f, o, BeamProblem.Place.RIGHT));
         model.addLessOrEqual(weaker, parts - 1);
     }
 
     private int weakerSupports(LinearExprBuilder weaker, List<BeamGenerator.SupportOpt> opts, List<Literal> vars,
-            BeamGenerator.SupportOpt s0) {
+            BeamGenerator.SupportOpt s0, boolean known,
+            java.util.function.Function<BeamGenerator.SupportOpt, double[]> of) {
         if (s0 == null) {
             return 0;
         }
+        double[] k0 = known ? stiffness(s0, () -> of.apply(s0)) : null;
         for (int i = 0; i < opts.size(); i++) {
             BeamGenerator.SupportOpt s = opts.get(i);
-            if (s.bar().equals(s0.bar()) && s.total() <= s0.total() && s.d() <= s0.d() + 1e-9
-                    && Objects.equals(s.bottomKey(), s0.bottomKey())) {
+            if (s == s0 || known && noStiffer(stiffness(s, () -> of.apply(s)), k0)) {
                 weaker.add(vars.get(i));
             }
         }
         return 1;
+    }
+
+    private double[] stiffness(Object option, java.util.function.Supplier<double[]> of) {
+        double[] v = stiffness.computeIfAbsent(option, k -> {
+            double[] s = of.get();
+            return s == null ? NO_PART : s;
+        });
+        return v;
+    }
+
+    /** Whether a section's stiffness is nowhere above another's (a section that takes no part never is). */
+    private static boolean noStiffer(double[] a, double[] b) {
+        for (int i = 0; i < a.length; i++) {
+            if (a[i] > b[i]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Forbids a frame with given bar sizes (for the next distinct alternatives). */

@@ -407,8 +407,11 @@ public final class ScheduleHtml {
             kv(out, "width", "fixed at " + len(p.fixedWidth(), u));
         }
         if (p.flange() != null) {
-            kv(out, "flange", "b_f = " + len(p.flange().width(), u) + ", h_f = " + len(p.flange().thickness(), u)
-                    + (p.flange().oneSided() ? " (one side)" : "") + ", counted at mid-span only");
+            kv(out, "flange", "b_f = " + len(p.flange().given(), u) + " given, h_f = " + len(p.flange().thickness(), u)
+                    + (p.flange().oneSided() ? " (one side)" : "")
+                    + (p.flange().webGapKnown() ? ", clear to the next web " + len(p.flange().clearToNextWeb(), u)
+                            : ", clear distance to the next web not given (sw/2 limit not checked)")
+                    + "; taken at most at the effective width of Table 6.3.2.1, counted at mid-span only");
         }
         kv(out, "Mu", moments(p, u));
         kv(out, "Vu at d from the faces", shears(p, u));

@@ -81,7 +81,7 @@ final class RandomBeams {
                 ? new SpanChecks.ServiceLoads(8 + r.nextDouble() * 20, 4 + r.nextDouble() * 15, 0.25 * r.nextInt(2))
                 : null;
         Flange flange = ends != EndCondition.CANTILEVER && r.nextInt(4) == 0
-                ? new Flange(widths.get(widths.size() - 1) + 500, 120, false) : null;
+                ? Flange.given(widths.get(widths.size() - 1) + 500, 120, false, null, span) : null;
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
         return new BeamProblem("R", m, det, CodeEquations.SI, space, span, ends, ml, mm, mr, vl, vr, service,
                 SpanChecks.Limits.DEFAULT, cap, null, flange, r.nextInt(3) == 0, r.nextInt(4) == 0 ? 1 : 2,
