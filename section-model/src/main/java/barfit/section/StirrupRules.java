@@ -53,8 +53,9 @@ public final class StirrupRules {
     }
 
     /**
-     * Whether the compression-face bars are relied on: without them the section fails Mu ≤ φMn (when Mu is
-     * given) or εt ≥ 0.004 (9.3.3.1). Then 9.7.6.4 asks that they be enclosed by ties.
+     * Whether the compression-face bars are relied on as compression steel: some of them are in compression
+     * and without them the section fails Mu ≤ φMn (when Mu is given) or εt ≥ 0.004 (9.3.3.1). Then 9.7.6.4
+     * asks that they be enclosed by ties. Returns what they are relied on for, or null.
      */
     public static String compressionReliedOn(BeamSection s, Bending bending, Double mu) {
         List<BarLayer> without = new ArrayList<>();
@@ -65,6 +66,17 @@ public final class StirrupRules {
         }
         if (without.size() == s.layers().size() || without.isEmpty()) {
             return null; // no compression bars, or no tension bars to judge by
+        }
+        // bars on the compression face that the neutral axis leaves in tension are not compression steel
+        // (a shallow block in a flange): 9.7.6.4 has nothing to enclose
+        boolean inCompression = false;
+        for (LayerResult lr : Flexure.analyse(s, bending).layers()) {
+            if (lr.layer().face() == bending.compressionFace() && lr.strain() < 0) {
+                inCompression = true;
+            }
+        }
+        if (!inCompression) {
+            return null;
         }
         FlexureResult fr = Flexure.analyse(s.withLayers(without), bending);
         boolean strength = mu != null && !CheckResult.within(Math.abs(mu), fr.phiMn());

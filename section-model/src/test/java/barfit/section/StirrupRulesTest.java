@@ -121,7 +121,29 @@ class StirrupRulesTest {
         // which eps_t reaches 0.004, and phi Mn without top bars (about 92 kN·m) exceeds Mu = 60 kN·m.
         BeamSection s = beam(300, 500, Sections.si("16"), List.of(3), Sections.si("16"), 2, null);
         assertFalse(StirrupRules.ties(s, Bending.SAGGING, 60e6).required());
-        // the same bars for Mu = 100 kN·m: without the hangers phi Mn is short, so they are relied on for strength
-        assertEquals("strength", StirrupRules.compressionReliedOn(s, Bending.SAGGING, 100e6));
+        // (there the hangers are below the neutral axis: c = 35.1 / 0.85 = 41.3 mm < d' = 57.45 mm)
+        // 3 No. 29 (1935 mm²): a = 1935 x 420 / (0.85 x 28 x 300) = 113.8 mm, c = 133.9 mm > d': the hangers are
+        // in compression; for Mu at the full section's phi Mn, the section without them falls short (strength)
+        BeamSection heavier = beam(300, 500, Sections.si("29"), List.of(3), Sections.si("16"), 2, null);
+        double full = Flexure.analyse(heavier, Bending.SAGGING).phiMn();
+        assertEquals("strength", StirrupRules.compressionReliedOn(heavier, Bending.SAGGING, full));
+        assertEquals(null, StirrupRules.compressionReliedOn(heavier, Bending.SAGGING, 0.95 * full));
+    }
+
+    @Test
+    void topBarsLeftInTensionByAShallowBlockAreNotCompressionSteel() {
+        // T-beam, bw = 350, h = 525, flange 2200 x 200, 3 No. 25 bottom (1530 mm²): a = 1530 x 420 /
+        // (0.85 x 28 x 2200) = 12.3 mm, c = 14.5 mm, while the two No. 16 top bars sit 57.45 mm down: they are
+        // below the neutral axis, in tension, and add to Mn. Taking them away lowers phi Mn below an Mu set at
+        // the full section's strength, yet there is no compression steel for 9.7.6.4 to enclose.
+        List<BarLayer> layers = new ArrayList<>(BeamSection.stack(Face.BOTTOM,
+                List.of(new BeamSection.BarGroup(Sections.si("25"), 3)), DET));
+        layers.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(Sections.si("16"), 2)), DET));
+        BeamSection s = new BeamSection(new SectionShape(350, 525, new Flange(2200, 200, false)),
+                Sections.materials(28, 420), DET, layers, null, null, CodeEquations.SI);
+        FlexureResult full = Flexure.analyse(s, Bending.SAGGING);
+        assertTrue(full.c() < 57.45, "neutral axis above the top bars: c = " + full.c());
+        assertEquals(null, StirrupRules.compressionReliedOn(s, Bending.SAGGING, full.phiMn()));
+        assertFalse(StirrupRules.ties(s, Bending.SAGGING, full.phiMn()).required());
     }
 }

@@ -148,10 +148,18 @@ public final class ScheduleHtml {
         out.append("</table>\n</div>\n");
 
         out.append("<h3>Rules of thumb the design uses</h3>\n<ul class=\"rules\">\n");
-        li(out, "Stirrup legs: two legs hold up to " + in.barsPerTwoLegs() + " bars in a layer, four legs up to "
-                + 2 * in.barsPerTwoLegs() + ", and so on (common practice, no clause); legs beyond two are crossties.");
+        li(out, "Stirrup legs: no more legs than bars in the outer layer of either face, so that every leg's bend "
+                + "holds a bar (25.7.1.2, 25.7.1.3); legs beyond two are crossties; where compression bars are relied "
+                + "on, ties round them as 9.7.6.4 and 25.7.2 ask"
+                + (in.barsPerTwoLegs() > 0 ? "; and, the office's own rule, two legs hold up to " + in.barsPerTwoLegs()
+                        + " bars in a layer, four legs up to " + 2 * in.barsPerTwoLegs() + ", and so on (no clause)"
+                        : "") + ".");
+        li(out, "Stirrup zones: from the shear line of a uniformly loaded span through the given shears at d from "
+                + "the faces; the middle zone takes the line's largest shear over its length (and at least "
+                + "1.6 wL ℓ / 8 where service loads are given).");
         li(out, "Top bars: two or more bars run the full span; the extra bars at a continuous support run past the "
-                + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0).");
+                + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0), "
+                + "never cut short of it.");
         li(out, "At most " + in.maxBarSizesPerBeam() + " longitudinal bar sizes per beam; bottom bars of one size run the "
                 + "full span.");
         li(out, "Main-bar mass is multiplied by the lap factor " + u.compact(in.rates().lapFactor(), Dim.NUMBER)
