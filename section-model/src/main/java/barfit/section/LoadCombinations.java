@@ -5,9 +5,16 @@ public final class LoadCombinations {
     private LoadCombinations() {
     }
 
+    /** 5.3.1a: U = 1.4 D. */
+    public static final double DEAD_ALONE = 1.4;
+    /** 5.3.1b: U = 1.2 D + 1.6 L, the dead-load factor. */
+    public static final double DEAD_WITH_LIVE = 1.2;
+    /** 5.3.1b: the live-load factor. */
+    public static final double LIVE = 1.6;
+
     /** U = max(1.2 D + 1.6 L (5.3.1b), 1.4 D (5.3.1a)), in the units of D and L. */
     public static double factored(double dead, double live) {
-        return Math.max(1.2 * dead + 1.6 * live, 1.4 * dead);
+        return Math.max(DEAD_WITH_LIVE * dead + LIVE * live, DEAD_ALONE * dead);
     }
 
     /**
@@ -16,6 +23,6 @@ public final class LoadCombinations {
      * which a full-span shear line misses (common practice, no clause).
      */
     public static double halfSpanLiveShear(double live, double ln) {
-        return 1.6 * live * ln / 8;
+        return LIVE * live * ln / 8;
     }
 }
