@@ -13,7 +13,7 @@ import picocli.CommandLine.Command;
 @Command(name = "barfit", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Cheapest passing reinforced-concrete beam layouts to ACI 318-19, searched and proven.%n"
                 + "Results must be checked by a licensed professional engineer against the governing local code.",
-        subcommands = {CheckCommand.class, DesignCommand.class, ScheduleCommand.class, CompareCommand.class, SweepCommand.class,
+        subcommands = {CheckCommand.class, AnalyseCommand.class, DesignCommand.class, ScheduleCommand.class, CompareCommand.class, SweepCommand.class,
             BenchCommand.class})
 public final class Main implements Runnable {
     public static final int OK = 0;

@@ -23,7 +23,7 @@ import java.util.Locale;
 public final class SettingsReader {
     /** Top-level keys any command accepts; each command reads the ones it needs. */
     public static final String[] TOP_KEYS = {"units", "code", "concrete", "steel", "bars", "cover", "stirrup",
-            "layer_gap", "exposure", "beams", "search", "costs", "rationalise", "project"};
+            "layer_gap", "exposure", "beams", "lines", "search", "costs", "rationalise", "project"};
 
     private SettingsReader() {
     }
@@ -47,7 +47,7 @@ public final class SettingsReader {
         CodeEquations code = units.code();
         boolean us = units == UnitSystem.US;
 
-        YFields concrete = doc.map("concrete", "the concrete: {fc, aggregate}").allowOnly("fc", "aggregate", "lambda");
+        YFields concrete = doc.map("concrete", "the concrete: {fc, aggregate}").allowOnly("fc", "aggregate", "lambda", "density");
         double fc = toSI(units, concrete.positive("fc", "f'c, " + units.unit(Dim.STRESS)), Dim.STRESS);
         double fcMin = units.limit(MaterialLimits.fcMin(code), Dim.STRESS);
         double fcMax = units.limit(MaterialLimits.fcMax(code), Dim.STRESS);

@@ -19,7 +19,7 @@ import org.junit.jupiter.params.provider.MethodSource;
  * Every file in the bad-input corpus must give exit code 2 and exactly one line on stderr that names
  * the file and the line, says what was expected, and carries no stack trace. The first line of each
  * file says what to expect: {@code # expect LINE: text}. Files named design-* go to {@code design},
- * compare-* to {@code compare}, the others to {@code check}. Bad command-line options get the same
+ * compare-* to {@code compare}, analyse-* to {@code analyse}, the others to {@code check}. Bad command-line options get the same
  * treatment: one line naming the option or file and what is expected, exit 2, nothing written.
  */
 class BadInputTest {
@@ -45,7 +45,8 @@ class BadInputTest {
         String text = m.group(2);
         String before = Files.readString(file);
         String name = file.getFileName().toString();
-        String command = name.startsWith("design-") ? "design" : name.startsWith("compare-") ? "compare" : "check";
+        String command = name.startsWith("design-") ? "design" : name.startsWith("compare-") ? "compare"
+                : name.startsWith("analyse-") ? "analyse" : "check";
         {
             Cli r = Cli.run(command, file.toString());
             assertEquals(2, r.exit(), "exit code; stderr: " + r.err());

@@ -146,7 +146,7 @@ public final class LineAnalysis {
         if (n >= 2) {
             for (int parity = 1; parity <= 2; parity++) {
                 boolean[] alt = new boolean[n + 1];
-                StringBuilder nm = new StringBuilder("spans");
+                StringBuilder nm = new StringBuilder(n - parity < 2 ? "span" : "spans");
                 for (int s = parity; s <= n; s += 2) {
                     alt[s] = true;
                     nm.append(s == parity ? " " : ",").append(s);
@@ -181,7 +181,15 @@ public final class LineAnalysis {
         if (left && right) {
             overhangSets.add(new int[] {0, n + 1});
         }
+        // the same set of spans reached twice (alternate spans of a short line, a pair that is the whole
+        // line...) is one arrangement, named the first way
+        List<String> seen = new ArrayList<>();
         for (int i = 0; i < spanSets.size(); i++) {
+            String key = java.util.Arrays.toString(spanSets.get(i));
+            if (seen.contains(key)) {
+                continue;
+            }
+            seen.add(key);
             for (int[] oh : overhangSets) {
                 double[] k = new double[cases.size()];
                 k[0] = LoadCombinations.DEAD_WITH_LIVE;

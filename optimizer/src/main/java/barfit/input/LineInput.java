@@ -1,0 +1,52 @@
+package barfit.input;
+
+import barfit.analysis.Line;
+import barfit.analysis.Load;
+import barfit.analysis.Stiffness;
+import barfit.analysis.Support;
+import barfit.catalogs.yaml.Location;
+import barfit.section.SectionShape;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A beam line as given: spans centre-to-centre (mm), overhangs, supports, the superimposed service loads
+ * per segment (N/mm, N), the section analysed (and whose own weight is added), the sustained part of
+ * the live load, the method (stiffness analysis or the 6.5 coefficients), the redistribution asked at
+ * each support (percent) and the concrete's unit weight (N/mm³). Segment 0 is the left overhang, 1..n
+ * the spans, n + 1 the right overhang.
+ */
+public record LineInput(String id, Location location, List<Double> spans, double overhangLeft, double overhangRight,
+        List<Support> supports, List<Load> loads, SectionShape section, double sustainedLive, boolean coefficients,
+        List<Double> redistribution, double unitWeight, Double maxDepth) {
+
+    public LineInput {
+        spans = List.copyOf(spans);
+        supports = List.copyOf(supports);
+        loads = List.copyOf(loads);
+        redistribution = List.copyOf(redistribution);
+    }
+
+    /** The web's own weight per length, N/mm (gross concrete section, flange counted as given in the section). */
+    public double selfWeight(SectionShape shape) {
+        return unitWeight * shape.grossArea();
+    }
+
+    /**
+     * The line ready for analysis with a section: its own weight added as dead load on every segment,
+     * the beam's stiffness of Table 6.6.3.1.1, and d taken for the shears at d from the faces.
+     */
+    public Line toLine(SectionShape shape, double ec, double d) {
+        List<Load> all = new ArrayList<>(loads);
+        double sw = selfWeight(shape);
+        int segments = spans.size() + 2;
+        for (int s = 0; s < segments; s++) {
+            double len = s == 0 ? overhangLeft : s == segments - 1 ? overhangRight : spans.get(s - 1);
+            if (len > 0) {
+                all.add(Load.uniform(s, 0, len, sw, 0));
+            }
+        }
+        return new Line(id, spans, overhangLeft, overhangRight, supports, all, Stiffness.beamEI(ec, shape), ec, d,
+                coefficients ? null : redistribution);
+    }
+}

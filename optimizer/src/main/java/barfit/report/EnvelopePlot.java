@@ -1,0 +1,92 @@
+package barfit.report;
+
+import barfit.analysis.LineResult;
+import barfit.section.trail.Dim;
+import barfit.units.UnitSystem;
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.geom.Rectangle2D;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.CombinedDomainXYPlot;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+import org.jfree.svg.SVGGraphics2D;
+
+/**
+ * A line's factored moment and shear envelopes, one above the other on the same x (JFreeChart drawn on
+ * JFreeSVG, as the sweep plot): the largest and least values over the load arrangements, with the
+ * supports' centre lines marked.
+ */
+public final class EnvelopePlot {
+    private static final Color MAX = new Color(0x1f, 0x4e, 0x79);
+    private static final Color MIN = new Color(0xb0, 0x3a, 0x2e);
+    private static final Color SUPPORT = new Color(0x88, 0x88, 0x88);
+
+    private EnvelopePlot() {
+    }
+
+    public static String svg(LineResult r, String id, UnitSystem u) {
+        System.setProperty("java.awt.headless", "true");
+        XYSeries mMax = new XYSeries("M, largest", false);
+        XYSeries mMin = new XYSeries("M, least", false);
+        XYSeries vMax = new XYSeries("V, largest", false);
+        XYSeries vMin = new XYSeries("V, least", false);
+        for (LineResult.StationValues s : r.stations()) {
+            double x = u.fromSI(s.x(), Dim.SPAN);
+            mMax.add(x, u.fromSI(s.mMax(), Dim.MOMENT));
+            mMin.add(x, u.fromSI(s.mMin(), Dim.MOMENT));
+            vMax.add(x, u.fromSI(s.vMax(), Dim.FORCE));
+            vMin.add(x, u.fromSI(s.vMin(), Dim.FORCE));
+        }
+        XYPlot moments = plot(mMax, mMin, "M (" + u.unit(Dim.MOMENT) + "), + sagging");
+        XYPlot shears = plot(vMax, vMin, "V (" + u.unit(Dim.FORCE) + ")");
+        for (int j = 0; j <= r.line().spanCount(); j++) {
+            double x = u.fromSI(r.line().supportX(j), Dim.SPAN);
+            for (XYPlot p : new XYPlot[] {moments, shears}) {
+                ValueMarker m = new ValueMarker(x, SUPPORT, new BasicStroke(1f, BasicStroke.CAP_BUTT,
+                        BasicStroke.JOIN_MITER, 1f, new float[] {4f, 4f}, 0f));
+                p.addDomainMarker(m);
+            }
+        }
+        NumberAxis x = new NumberAxis("x along the line from the first support's centre line (" + u.unit(Dim.SPAN)
+                + ")");
+        x.setAutoRangeIncludesZero(false);
+        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(x);
+        combined.setGap(12);
+        combined.add(moments, 3);
+        combined.add(shears, 2);
+        JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), combined, true);
+        chart.setTitle(new TextTitle("Line " + id + ": factored moment and shear envelopes",
+                new Font(Font.SANS_SERIF, Font.BOLD, 14)));
+        chart.setBackgroundPaint(Color.WHITE);
+        chart.setAntiAlias(true);
+        SVGGraphics2D g = new SVGGraphics2D(900, 640);
+        g.setDefsKeyPrefix("envelope-"); // a fixed prefix keeps the file the same from run to run
+        chart.draw(g, new Rectangle2D.Double(0, 0, 900, 640));
+        return g.getSVGDocument().replace("\r\n", "\n") + "\n";
+    }
+
+    private static XYPlot plot(XYSeries hi, XYSeries lo, String label) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        data.addSeries(hi);
+        data.addSeries(lo);
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setSeriesPaint(0, MAX);
+        renderer.setSeriesPaint(1, MIN);
+        renderer.setSeriesStroke(0, new BasicStroke(2f));
+        renderer.setSeriesStroke(1, new BasicStroke(2f));
+        NumberAxis y = new NumberAxis(label);
+        XYPlot p = new XYPlot(data, null, y, renderer);
+        p.setBackgroundPaint(Color.WHITE);
+        p.setDomainGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
+        p.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
+        p.addRangeMarker(new ValueMarker(0, Color.BLACK, new BasicStroke(0.8f)));
+        return p;
+    }
+}
