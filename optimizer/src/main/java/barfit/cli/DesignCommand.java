@@ -10,6 +10,9 @@ import barfit.design.SolverOptions;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
+import barfit.input.LineInput;
+import barfit.input.LinesReader;
+import barfit.design.line.LineSpans;
 import barfit.report.DesignJson;
 import barfit.report.DesignItem;
 import barfit.report.DesignText;
@@ -63,14 +66,20 @@ final class DesignCommand implements Callable<Integer> {
             throw new InputError(Location.ofFile("--alternatives"), "expected 0 to 20, got " + alternatives);
         }
         SolverOptions options = solver.options();
-        DesignInput input = DesignInputReader.read(file);
+        DesignInput input = DesignInputReader.read(file, false);
+        List<LineInput> lines = LinesReader.read(DesignInputReader.document(file), input.settings());
+        if (input.beams().isEmpty() && lines.isEmpty()) {
+            throw new InputError(Location.ofFile(file.toString()), "has no beams: and no lines:; expected at least one");
+        }
         List<DesignBeam> beams = input.beams();
         if (beam != null) {
             beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
-            if (beams.isEmpty()) {
+            lines = lines.stream().filter(l -> l.id().equals(beam)).toList();
+            if (beams.isEmpty() && lines.isEmpty()) {
+                List<String> ids = new ArrayList<>(input.beams().stream().map(DesignBeam::id).toList());
+                LinesReader.read(DesignInputReader.document(file), input.settings()).forEach(l -> ids.add(l.id()));
                 throw new InputError(Location.ofFile(file.toString()), "--beam " + beam
-                        + ": no beam with that id; expected one of: "
-                        + String.join(", ", input.beams().stream().map(DesignBeam::id).toList()));
+                        + ": no beam or line with that id; expected one of: " + String.join(", ", ids));
             }
         }
         var settings = input.settings();
@@ -82,6 +91,16 @@ final class DesignCommand implements Callable<Integer> {
         for (DesignBeam b : beams) {
             outcomes.add(b.isWhole() ? DesignItem.of(spans.design(span(input, b), alternatives))
                     : DesignItem.of(designer.design(problem(input, b), alternatives)));
+        }
+        LineSpans byLine = new LineSpans(settings, input.space(), spans, input.maxBarSizesPerBeam(),
+                input.barsPerTwoLegs());
+        for (LineInput l : lines) {
+            LineSpans.Result r = byLine.design(l, alternatives);
+            for (int i = 0; i < r.parts().size(); i++) {
+                LineSpans.Part part = r.parts().get(i);
+                outcomes.add(DesignItem.of(part.outcome(), new DesignItem.LinePart(l.id(), part.name(), i == 0,
+                        l.spans().size(), r.rounds(), r.settled())));
+            }
         }
         String text = format == OutputFormat.json
                 ? DesignJson.render(settings, outcomes, input.currency(), trail)

@@ -31,6 +31,11 @@ public final class DesignInputReader {
         return read(file, true);
     }
 
+    /** The file's top-level map, for the readers of its other parts ({@code lines:}). */
+    public static YFields document(Path file) {
+        return SettingsReader.root(YamlReader.read(file));
+    }
+
     /** Reads a file whose {@code beams:} may be left out when {@code beamsRequired} is false (they come from elsewhere). */
     public static DesignInput read(Path file, boolean beamsRequired) {
         YFields doc = SettingsReader.root(YamlReader.read(file));

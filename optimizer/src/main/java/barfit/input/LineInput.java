@@ -37,16 +37,28 @@ public record LineInput(String id, Location location, List<Double> spans, double
      * the beam's stiffness of Table 6.6.3.1.1, and d taken for the shears at d from the faces.
      */
     public Line toLine(SectionShape shape, double ec, double d) {
+        List<SectionShape> all = new ArrayList<>();
+        for (int s = 0; s < spans.size() + 2; s++) {
+            all.add(shape);
+        }
+        return toLine(all, ec, d);
+    }
+
+    /** As above with a section per segment (left overhang, spans, right overhang). */
+    public Line toLine(List<SectionShape> shapes, double ec, double d) {
         List<Load> all = new ArrayList<>(loads);
-        double sw = selfWeight(shape);
         int segments = spans.size() + 2;
+        List<Double> ei = new ArrayList<>();
         for (int s = 0; s < segments; s++) {
             double len = s == 0 ? overhangLeft : s == segments - 1 ? overhangRight : spans.get(s - 1);
             if (len > 0) {
-                all.add(Load.uniform(s, 0, len, sw, 0));
+                all.add(Load.uniform(s, 0, len, selfWeight(shapes.get(s)), 0));
+            }
+            if (s >= 1 && s < segments - 1) {
+                ei.add(Stiffness.beamEI(ec, shapes.get(s)));
             }
         }
-        return new Line(id, spans, overhangLeft, overhangRight, supports, all, Stiffness.beamEI(ec, shape), ec, d,
+        return new Line(id, spans, overhangLeft, overhangRight, supports, all, ei, ec, d,
                 coefficients ? null : redistribution);
     }
 }

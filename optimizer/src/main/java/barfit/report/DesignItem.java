@@ -3,17 +3,28 @@ package barfit.report;
 import barfit.design.DesignOutcome;
 import barfit.design.beam.BeamDesigner;
 
-/** One beam's answer: a single section's or a whole span's (exactly one is set). */
-public record DesignItem(DesignOutcome section, BeamDesigner.Outcome whole) {
+/**
+ * One beam's answer: a single section's or a whole span's (exactly one is set); a span or overhang of a
+ * beam line designed from its analysis also says which line and part it is ({@code line}, else null).
+ */
+public record DesignItem(DesignOutcome section, BeamDesigner.Outcome whole, LinePart line) {
+    /** Where a whole span came from: its line, which part, and how many rounds of analysis and design it took. */
+    public record LinePart(String line, String part, boolean first, int spans, int rounds, boolean settled) {
+    }
+
     public boolean feasible() {
         return section != null ? section.feasible() : whole.feasible();
     }
 
     public static DesignItem of(DesignOutcome o) {
-        return new DesignItem(o, null);
+        return new DesignItem(o, null, null);
     }
 
     public static DesignItem of(BeamDesigner.Outcome o) {
-        return new DesignItem(null, o);
+        return new DesignItem(null, o, null);
+    }
+
+    public static DesignItem of(BeamDesigner.Outcome o, LinePart line) {
+        return new DesignItem(null, o, line);
     }
 }

@@ -32,6 +32,14 @@ public final class DesignText {
         int infeasible = 0;
         for (DesignItem o : outcomes) {
             out.append('\n');
+            if (o.line() != null && o.line().first()) {
+                out.append("Line ").append(o.line().line()).append(": designed span by span from its analysis, ")
+                        .append(o.line().rounds()).append(o.line().rounds() == 1 ? " round" : " rounds")
+                        .append(" of analysis and design").append(o.line().settled()
+                                ? " (the sections designed are those analysed)"
+                                : " (the sections still changed in the last round: check the envelope by hand)")
+                        .append('\n');
+            }
             if (o.section() != null) {
                 beam(o.section(), u, currency, trail, out);
             } else {

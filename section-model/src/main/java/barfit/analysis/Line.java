@@ -5,15 +5,23 @@ import java.util.List;
 /**
  * A beam line: spans centre-to-centre of supports (mm), optional overhangs past the end supports (0 for
  * none), one support per span end, service loads on its segments (the web's own weight included by the
- * caller as dead load), the beam's flexural stiffness EI (N·mm², see {@link Stiffness}), the concrete's Ec
+ * caller as dead load), the beam's flexural stiffness EI per span (N·mm², see {@link Stiffness}), the concrete's Ec
  * for the columns (MPa), an effective depth d for the shears at d (mm), and redistribution of the
  * negative moment at each support (percent, 0 for none; see {@link LineAnalysis}).
  */
 public record Line(String id, List<Double> spans, double overhangLeft, double overhangRight, List<Support> supports,
-        List<Load> loads, double beamEI, double ec, double d, List<Double> redistribution) {
+        List<Load> loads, List<Double> spanEI, double ec, double d, List<Double> redistribution) {
+
+    /** A line of one section throughout: the same EI on every span. */
+    public Line(String id, List<Double> spans, double overhangLeft, double overhangRight, List<Support> supports,
+            List<Load> loads, double beamEI, double ec, double d, List<Double> redistribution) {
+        this(id, spans, overhangLeft, overhangRight, supports, loads, java.util.Collections.nCopies(spans.size(), beamEI),
+                ec, d, redistribution);
+    }
 
     public Line {
         spans = List.copyOf(spans);
+        spanEI = List.copyOf(spanEI);
         supports = List.copyOf(supports);
         loads = List.copyOf(loads);
         redistribution = redistribution == null ? null : List.copyOf(redistribution);
@@ -32,8 +40,13 @@ public record Line(String id, List<Double> spans, double overhangLeft, double ov
         if (overhangLeft < 0 || overhangRight < 0) {
             throw new IllegalArgumentException("overhangs are zero or more");
         }
-        if (!(beamEI > 0)) {
-            throw new IllegalArgumentException("the beam's stiffness must be positive");
+        if (spanEI.size() != spans.size()) {
+            throw new IllegalArgumentException("one stiffness per span");
+        }
+        for (double ei : spanEI) {
+            if (!(ei > 0)) {
+                throw new IllegalArgumentException("the beam's stiffness must be positive");
+            }
         }
     }
 

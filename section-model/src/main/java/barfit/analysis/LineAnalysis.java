@@ -275,7 +275,7 @@ public final class LineAnalysis {
             RealMatrix k = new Array2DRowRealMatrix(free, free);
             double[] rhs = new double[free];
             for (int s = 1; s <= n; s++) {
-                double stiff = 2 * line.beamEI() / line.length(s);
+                double stiff = 2 * line.spanEI().get(s - 1) / line.length(s);
                 int a = dof[s - 1];
                 int b = dof[s];
                 if (a >= 0) {
@@ -310,7 +310,7 @@ public final class LineAnalysis {
         double[] left = new double[n + 2];
         double[] right = new double[n + 2];
         for (int s = 1; s <= n; s++) {
-            double stiff = 2 * line.beamEI() / line.length(s);
+            double stiff = 2 * line.spanEI().get(s - 1) / line.length(s);
             double mij = fLeft[s] + stiff * (2 * theta[s - 1] + theta[s]);
             double mji = fRight[s] + stiff * (2 * theta[s] + theta[s - 1]);
             left[s] = mij; // clockwise on the member's left end is sagging there

@@ -1,0 +1,212 @@
+package barfit.design.line;
+
+import barfit.analysis.Coefficients;
+import barfit.analysis.Line;
+import barfit.analysis.LineAnalysis;
+import barfit.analysis.LineResult;
+import barfit.analysis.Load;
+import barfit.design.SearchSpace;
+import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamProblem;
+import barfit.input.LineInput;
+import barfit.input.Settings;
+import barfit.section.Deflection;
+import barfit.section.EndCondition;
+import barfit.section.Flange;
+import barfit.section.SectionShape;
+import barfit.section.SpanChecks;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * Designs a beam line span by span from its analysis: each span becomes a whole-span problem with the
+ * moments at its support faces, its largest sagging moment and its shears at d from the envelope; each
+ * overhang a cantilever. Where design chooses sections other than those analysed, the line is analysed
+ * again with the chosen sections (their own weight and stiffness) and every span designed afresh against
+ * the new envelope, until the sections stop changing (at most {@link #MAX_ROUNDS} rounds). Each span's
+ * design is proved and re-verified against the envelope of the last analysis.
+ *
+ * <p>Service moments for deflection: the span's factored moments scaled by its dead-to-live proportion
+ * (the span's whole dead and live load, point and partial loads included), which over-states them where a
+ * live-load arrangement governs the factored envelope, so errs on the stiff side of the check.
+ */
+public final class LineSpans {
+    public static final int MAX_ROUNDS = 8;
+
+    /** A moment smaller than this share of the span's largest is taken as none (a pinned end's rounding). */
+    private static final double NEGLIGIBLE = 1e-6;
+
+    /** What the line's design gives: per segment designed, its problem and outcome; the rounds it took. */
+    public record Result(LineInput line, List<Part> parts, int rounds, boolean settled, LineResult analysis,
+            List<Coefficients.SpanValues> coefficients) {
+    }
+
+    /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
+    public record Part(int segment, String name, BeamProblem problem, BeamDesigner.Outcome outcome) {
+    }
+
+    private final Settings settings;
+    private final SearchSpace space;
+    private final BeamDesigner designer;
+    private final int maxBarSizes;
+    private final int barsPerTwoLegs;
+
+    public LineSpans(Settings settings, SearchSpace space, BeamDesigner designer, int maxBarSizes, int barsPerTwoLegs) {
+        this.settings = settings;
+        this.space = space;
+        this.designer = designer;
+        this.maxBarSizes = maxBarSizes;
+        this.barsPerTwoLegs = barsPerTwoLegs;
+    }
+
+    public Result design(LineInput in, int alternatives) {
+        int n = in.spans().size();
+        List<SectionShape> shapes = new ArrayList<>();
+        for (int s = 0; s < n + 2; s++) {
+            shapes.add(in.section());
+        }
+        double ec = Deflection.ec(settings.materials(), settings.code());
+        List<Part> parts = List.of();
+        LineResult analysis = null;
+        List<Coefficients.SpanValues> coefficients = null;
+        int round = 0;
+        boolean settled = false;
+        while (round < MAX_ROUNDS) {
+            round++;
+            Line line = in.toLine(shapes, ec, effectiveDepth(shapes));
+            List<BeamProblem> problems;
+            if (in.coefficients()) {
+                coefficients = Coefficients.analyse(line);
+                problems = fromCoefficients(in, line, coefficients);
+            } else {
+                analysis = LineAnalysis.analyse(line);
+                problems = fromAnalysis(in, line, analysis);
+            }
+            List<Part> next = new ArrayList<>();
+            List<SectionShape> chosen = new ArrayList<>(shapes);
+            for (BeamProblem p : problems) {
+                int seg = segmentOf(p, n);
+                BeamDesigner.Outcome o = designer.design(p, alternatives);
+                next.add(new Part(seg, partName(seg, n), p, o));
+                if (o.feasible()) {
+                    var l = o.best().layout();
+                    chosen.set(seg, new SectionShape(l.width(), l.height(), in.section().flange()));
+                }
+            }
+            parts = next;
+            if (sameSections(shapes, chosen)) {
+                settled = true;
+                break;
+            }
+            shapes = chosen;
+        }
+        return new Result(in, parts, round, settled, analysis, coefficients);
+    }
+
+    private static boolean sameSections(List<SectionShape> a, List<SectionShape> b) {
+        for (int i = 0; i < a.size(); i++) {
+            SectionShape x = a.get(i);
+            SectionShape y = b.get(i);
+            if (x.width() != y.width() || x.height() != y.height() || !Objects.equals(x.flange(), y.flange())) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** d for the shears at d: the shallowest section's height less cover, stirrup and half a 25 mm bar. */
+    private double effectiveDepth(List<SectionShape> shapes) {
+        double h = Double.POSITIVE_INFINITY;
+        for (SectionShape s : shapes) {
+            h = Math.min(h, s.height());
+        }
+        return h - settings.detailing().cover() - settings.stirrupBar().diameter() - 12.7;
+    }
+
+    private static String partName(int seg, int n) {
+        return seg == 0 ? "left overhang" : seg == n + 1 ? "right overhang" : "span " + seg;
+    }
+
+    private static int segmentOf(BeamProblem p, int n) {
+        String id = p.id();
+        if (id.endsWith("/left overhang")) {
+            return 0;
+        }
+        if (id.endsWith("/right overhang")) {
+            return n + 1;
+        }
+        return Integer.parseInt(id.substring(id.lastIndexOf("/span ") + 6));
+    }
+
+    private List<BeamProblem> fromAnalysis(LineInput in, Line line, LineResult r) {
+        List<BeamProblem> out = new ArrayList<>();
+        int n = in.spans().size();
+        for (LineResult.SpanValues s : r.spans()) {
+            double big = Math.max(Math.abs(s.mSpanMax()), Math.max(Math.abs(s.mLeftFace()), Math.abs(s.mRightFace())));
+            Double ml = s.mLeftFace() < -NEGLIGIBLE * big ? s.mLeftFace() : null;
+            Double mr = s.mRightFace() < -NEGLIGIBLE * big ? s.mRightFace() : null;
+            Double mm = s.mSpanMax() > NEGLIGIBLE * big ? s.mSpanMax() : null;
+            out.add(problem(in, line, s.index(), n, s.clear(), ml, mm, mr, s.vLeftD(), s.vRightD()));
+        }
+        for (LineResult.OverhangValues o : r.overhangs()) {
+            int seg = o.side().equals("left") ? 0 : n + 1;
+            out.add(cantilever(in, line, seg, n, o.clear(), o.mFace(), o.vD()));
+        }
+        return out;
+    }
+
+    private List<BeamProblem> fromCoefficients(LineInput in, Line line, List<Coefficients.SpanValues> c) {
+        List<BeamProblem> out = new ArrayList<>();
+        int n = in.spans().size();
+        for (Coefficients.SpanValues s : c) {
+            // Table 6.5.4 gives the shear at the face; taken there (the section at d would need 9.4.3.2)
+            out.add(problem(in, line, s.index(), n, s.clear(), s.mLeftFace() < 0 ? s.mLeftFace() : null, s.mSpan(),
+                    s.mRightFace() < 0 ? s.mRightFace() : null, s.vLeftFace(), s.vRightFace()));
+        }
+        return out;
+    }
+
+    private BeamProblem problem(LineInput in, Line line, int s, int n, double clear, Double ml, Double mm, Double mr,
+            double vl, double vr) {
+        // Table 9.3.1.1's end conditions: a span is continuous over an interior support
+        int continuous = (s > 1 ? 1 : 0) + (s < n ? 1 : 0);
+        EndCondition ends = continuous == 0 ? EndCondition.SIMPLE : continuous == 1 ? EndCondition.ONE_END_CONTINUOUS
+                : EndCondition.BOTH_ENDS_CONTINUOUS;
+        return new BeamProblem(in.id() + "/span " + s, settings.materials(), settings.detailing(), settings.code(), space,
+                clear, ends, ml, mm, mr, vl, vr, service(in, line, s), SpanChecks.Limits.DEFAULT, in.maxDepth(), null,
+                flange(in, clear), false, maxBarSizes, barsPerTwoLegs);
+    }
+
+    private BeamProblem cantilever(LineInput in, Line line, int seg, int n, double clear, double m, double v) {
+        return new BeamProblem(in.id() + "/" + partName(seg, n), settings.materials(), settings.detailing(),
+                settings.code(), space, clear, EndCondition.CANTILEVER, m, null, null, v, null, service(in, line, seg),
+                SpanChecks.Limits.DEFAULT, in.maxDepth(), null, null, false, maxBarSizes, barsPerTwoLegs);
+    }
+
+    /** The flange as given, bounded on each span by that span's clear length (Table 6.3.2.1). */
+    private static Flange flange(LineInput in, double clear) {
+        Flange f = in.section().flange();
+        if (f == null) {
+            return null;
+        }
+        return Flange.given(f.given(), f.thickness(), f.oneSided(),
+                Double.isNaN(f.clearToNextWeb()) ? null : f.clearToNextWeb(), clear);
+    }
+
+    /** Equivalent uniform service loads of a segment: its whole dead and live load over its length. */
+    private static SpanChecks.ServiceLoads service(LineInput in, Line line, int seg) {
+        double dead = 0;
+        double live = 0;
+        for (Load l : line.loads()) {
+            if (l.segment() != seg) {
+                continue;
+            }
+            double k = l.point() ? 1 : l.to() - l.from();
+            dead += l.dead() * k;
+            live += l.live() * k;
+        }
+        double len = line.length(seg);
+        return new SpanChecks.ServiceLoads(dead / len, live / len, in.sustainedLive());
+    }
+}
