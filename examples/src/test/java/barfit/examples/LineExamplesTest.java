@@ -1,0 +1,51 @@
+package barfit.examples;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** examples/lines runs through {@code analyse} and {@code design} as the README shows, the same bytes twice. */
+class LineExamplesTest {
+    static final String FILE = "lines/ashgrove-depot-lines-si.yaml";
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void analyseAndDesignTheLines() throws IOException {
+        Run text = Run.of("analyse", FILE);
+        assertEquals(0, text.exit(), text.err());
+        assertTrue(text.out().contains("CAUTION"));
+        assertEquals(text.out(), Run.of("analyse", FILE).out(), "same input, same output");
+        JsonNode root = new ObjectMapper().readTree(Run.of("analyse", FILE, "--format", "json").out());
+        assertEquals(2, root.get("lines").size());
+        for (JsonNode l : root.get("lines")) {
+            for (String k : new String[] {"id", "reactions", "stations", "spans"}) {
+                assertTrue(l.has(k), k);
+            }
+            for (JsonNode s : l.get("spans")) {
+                for (String k : new String[] {"index", "M_left_face", "M_span_max", "M_right_face", "V_left_d",
+                    "V_right_d", "inflection"}) {
+                    assertTrue(s.has(k), k);
+                }
+            }
+        }
+        // the committed plot is the one the command draws
+        Run plot = Run.of("analyse", FILE, "--line", "L1-B", "--plot", dir.toString());
+        assertEquals(0, plot.exit(), plot.err());
+        assertEquals(Files.readString(Path.of("lines/L1-B-envelope.svg")),
+                Files.readString(dir.resolve("L1-B-envelope.svg")), "regenerate with ./barfit analyse " + FILE
+                        + " --line L1-B --plot examples/lines --force");
+        Run design = Run.of("design", FILE);
+        assertEquals(0, design.exit(), design.err());
+        assertTrue(design.out().contains("Line L1-B: designed span by span from its analysis"));
+        assertEquals(design.out(), Run.of("design", FILE).out(), "same input, same output");
+    }
+}
