@@ -109,6 +109,13 @@ final class BenchCommand implements Callable<Integer> {
                     + "\"span_speedup\": %s, \"span_equal_optimum\": %s", b.instances(), b.optimizerMsMedian(),
                     json(b.reducedOptimizerMsMedian(), 3), json(b.exhaustiveMsMedian(), 1), json(b.speedup(), 1), b.equalOptimum());
         }
+        out.println();
+        var la = barfit.bench.LineBench.run(200);
+        out.printf(Locale.ROOT, "line analysis (six spans on columns, an overhang, %d arrangements, %d stations): "
+                + "median %.3f ms (max %.3f ms; CPU %.3f ms) over %d runs%n", la.arrangements(), la.stations(),
+                la.msMedian(), la.msMax(), la.cpuMsMedian(), la.runs());
+        beamJson += String.format(Locale.ROOT, ", \"line_analysis_ms_median\": %.3f, \"line_analysis_cpu_ms_median\": %.3f",
+                la.msMedian(), la.cpuMsMedian());
         out.printf(Locale.ROOT, "{\"instances\": %d, \"optimizer_ms_median\": %.3f, \"exhaustive_ms_median\": %s, "
                 + "\"speedup\": %s, \"equal_optimum\": %s%s}%n", f.instances(), f.optimizerMsMedian(),
                 json(f.exhaustiveMsMedian(), 1), json(f.speedup(), 1), f.equalOptimum(), beamJson);

@@ -63,9 +63,13 @@ public final class LineAnalysis {
         double[][] vl = new double[cases.size()][ns];
         double[][] vr = new double[cases.size()][ns];
         for (int c = 0; c < cases.size(); c++) {
+            List<List<Load>> bySegment = new ArrayList<>();
+            for (int s = 0; s < line.segments(); s++) {
+                bySegment.add(onSegment(cases.get(c).loads(), s));
+            }
             for (int k = 0; k < ns; k++) {
                 Station st = stations.get(k);
-                List<Load> on = onSegment(cases.get(c).loads(), st.segment());
+                List<Load> on = bySegment.get(st.segment());
                 m[c][k] = staticMoment(line, st.segment(), on, st.local());
                 vl[c][k] = staticShear(line, st.segment(), on, st.local(), false);
                 vr[c][k] = staticShear(line, st.segment(), on, st.local(), true);

@@ -44,6 +44,7 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             List<LineAnalysis.Station> stations, double[][] m, double[][] vl, double[][] vr,
             List<LineAnalysis.Combo> combos, List<LineAnalysis.Combo> service) {
         Evaluator ev = new Evaluator(line, cases, ends);
+        ev.stations(stations, m);
         int ns = stations.size();
         List<StationValues> sv = new ArrayList<>();
         for (int k = 0; k < ns; k++) {
@@ -56,7 +57,8 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             String b = null;
             String c = null;
             String d = null;
-            for (LineAnalysis.Combo co : combos) {
+            for (int ci = 0; ci < combos.size(); ci++) {
+                LineAnalysis.Combo co = combos.get(ci);
                 double[] e = ev.ends(co, st.segment());
                 double mo = 0;
                 double left = 0;
@@ -258,7 +260,17 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
          * A span's end moments in an arrangement, after redistribution (6.6.5): a negative moment at a
          * support is reduced by that support's percentage; the span follows by equilibrium.
          */
+        private final java.util.Map<LineAnalysis.Combo, double[][]> endsMemo = new java.util.IdentityHashMap<>();
+
         double[] ends(LineAnalysis.Combo co, int segment) {
+            double[][] known = endsMemo.computeIfAbsent(co, k -> new double[line.segments()][]);
+            if (known[segment] == null) {
+                known[segment] = endsOf(co, segment);
+            }
+            return known[segment];
+        }
+
+        private double[] endsOf(LineAnalysis.Combo co, int segment) {
             double left = 0;
             double right = 0;
             for (int i = 0; i < co.coef().length; i++) {
@@ -278,7 +290,57 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             return new double[] {left, right};
         }
 
+        private List<LineAnalysis.Station> stations;
+        private double[][] stationMoments;
+
+        /** The basic cases' static moments at the stations, so that moments there need no statics again. */
+        void stations(List<LineAnalysis.Station> st, double[][] m) {
+            this.stations = st;
+            this.stationMoments = m;
+        }
+
+        private int stationIndex(int segment, double x) {
+            if (stations == null) {
+                return -1;
+            }
+            int lo = 0;
+            int hi = stations.size() - 1;
+            while (lo <= hi) {
+                int mid = (lo + hi) >>> 1;
+                LineAnalysis.Station s = stations.get(mid);
+                int c = s.segment() != segment ? Integer.compare(s.segment(), segment) : Double.compare(s.local(), x);
+                if (c == 0 || s.segment() == segment && Math.abs(s.local() - x) < 1e-6) {
+                    return mid;
+                }
+                if (c < 0) {
+                    lo = mid + 1;
+                } else {
+                    hi = mid - 1;
+                }
+            }
+            return -1;
+        }
+
         double moment(LineAnalysis.Combo co, int segment, double x) {
+            int k = stationIndex(segment, x);
+            if (k >= 0) {
+                double mo = 0;
+                for (int i = 0; i < co.coef().length; i++) {
+                    if (co.coef()[i] != 0) {
+                        mo += co.coef()[i] * stationMoments[i][k];
+                    }
+                }
+                if (isSpan(line, segment)) {
+                    double[] e = ends(co, segment);
+                    double len = line.length(segment);
+                    mo += e[0] * (1 - x / len) + e[1] * x / len;
+                }
+                return mo;
+            }
+            return momentByStatics(co, segment, x);
+        }
+
+        double momentByStatics(LineAnalysis.Combo co, int segment, double x) {
             double mo = 0;
             for (int i = 0; i < co.coef().length; i++) {
                 if (co.coef()[i] != 0) {
