@@ -56,7 +56,7 @@ final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        DesignInput in = DesignInputReader.read(file);
+        DesignInput in = Studies.input(file);
         var u = in.settings().units();
         SolverOptions options = solver.options();
         Double capMm = cap == null ? null : Studies.depthWithinSearch(in, "--cap", cap);

@@ -7,6 +7,11 @@ import barfit.design.CostRates;
 import barfit.design.SolverOptions;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
+import barfit.input.DesignInputReader;
+import barfit.input.LineInput;
+import barfit.input.LinesReader;
+import barfit.design.beam.BeamDesigner;
+import barfit.design.line.LineSpans;
 import barfit.section.trail.Dim;
 import barfit.study.SectionTarget;
 import barfit.study.SpanTarget;
@@ -20,19 +25,52 @@ final class Studies {
     private Studies() {
     }
 
-    static List<Target> targets(DesignInput in, String beam, Path file, SolverOptions options) {
-        List<DesignBeam> beams = in.beams();
-        if (beam != null) {
-            beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
-            if (beams.isEmpty()) {
-                throw new InputError(Location.ofFile(file.toString()), "--beam " + beam + ": no beam with that id; "
-                        + "expected one of: " + String.join(", ", in.beams().stream().map(DesignBeam::id).toList()));
-            }
+    /** A design file whose beams: may be left out when it gives lines: instead. */
+    static DesignInput input(Path file) {
+        DesignInput in = DesignInputReader.read(file, false);
+        if (in.beams().isEmpty() && LinesReader.read(DesignInputReader.document(file), in.settings()).isEmpty()) {
+            throw new InputError(Location.ofFile(file.toString()), "has no beams: and no lines:; expected at least one");
         }
+        return in;
+    }
+
+    /**
+     * The file's beams, and the spans and overhangs of its lines (each designed from the line's analysis until
+     * the sections settle, then studied as a whole span with that envelope: "LINE/span 2"); {@code beam} picks
+     * a beam, a line (all its parts) or one part.
+     */
+    static List<Target> targets(DesignInput in, String beam, Path file, SolverOptions options) {
         List<Target> out = new ArrayList<>();
-        for (DesignBeam b : beams) {
+        List<String> ids = new ArrayList<>();
+        for (DesignBeam b : in.beams()) {
+            ids.add(b.id());
+            if (beam != null && !b.id().equals(beam)) {
+                continue;
+            }
             out.add(b.isWhole() ? new SpanTarget(DesignCommand.span(in, b), options, in.settings().units())
                     : new SectionTarget(DesignCommand.problem(in, b), options, in.settings().units()));
+        }
+        List<LineInput> lines = LinesReader.read(DesignInputReader.document(file), in.settings());
+        if (!lines.isEmpty()) {
+            BeamDesigner spans = new BeamDesigner(cost(in), options, in.settings().units());
+            LineSpans byLine = new LineSpans(in.settings(), in.space(), spans, in.maxBarSizesPerBeam(),
+                    in.barsPerTwoLegs());
+            for (LineInput l : lines) {
+                ids.add(l.id());
+                boolean whole = beam == null || beam.equals(l.id());
+                if (!whole && !beam.startsWith(l.id() + "/")) {
+                    continue;
+                }
+                for (LineSpans.Part part : byLine.design(l, 0).parts()) {
+                    if (whole || part.problem().id().equals(beam)) {
+                        out.add(new SpanTarget(part.problem(), options, in.settings().units()));
+                    }
+                }
+            }
+        }
+        if (out.isEmpty()) {
+            throw new InputError(Location.ofFile(file.toString()), "--beam " + beam + ": no beam, line or line part "
+                    + "(LINE/span N) with that id; expected one of: " + String.join(", ", ids));
         }
         return out;
     }

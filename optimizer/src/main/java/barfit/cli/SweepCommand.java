@@ -85,7 +85,7 @@ final class SweepCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        DesignInput in = DesignInputReader.read(file);
+        DesignInput in = Studies.input(file);
         var u = in.settings().units();
         List<Double> depths = in.space().depths();
         double lo = from == null ? depths.get(0) : Studies.depthWithinSearch(in, "--from", from);

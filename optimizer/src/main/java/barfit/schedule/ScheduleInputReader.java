@@ -22,8 +22,18 @@ public final class ScheduleInputReader {
     }
 
     public static ScheduleInput read(Path file, Path csv) {
-        DesignInput di = DesignInputReader.read(file, csv == null);
+        return read(file, csv, new barfit.design.SolverOptions(30, 1, 1));
+    }
+
+    /**
+     * As above; the spans and overhangs of the file's {@code lines:} join the beams, each with the envelope of
+     * its line designed span by span until the sections settle ({@code options} for those designs). The
+     * rationalisation may then choose other sections; the lines are not analysed again for them.
+     */
+    public static ScheduleInput read(Path file, Path csv, barfit.design.SolverOptions options) {
         YFields doc = SettingsReader.root(YamlReader.read(file));
+        boolean hasLines = doc.has("lines");
+        DesignInput di = DesignInputReader.read(file, csv == null && !hasLines);
         if (csv != null && doc.has("beams")) {
             throw doc.error("beams", "the beams come from --beams " + csv.getFileName()
                     + "; expected no beams: in this file (or leave out --beams)");
@@ -37,6 +47,21 @@ public final class ScheduleInputReader {
                         + "ends and moments: {left, mid, right} instead of Mu");
             }
             out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(di, b)));
+        }
+        if (hasLines) {
+            var lines = barfit.input.LinesReader.read(doc, di.settings());
+            var cost = new barfit.design.CostModel(di.rates(), di.settings().detailing().cover(), di.settings().code());
+            var byLine = new barfit.design.line.LineSpans(di.settings(), di.space(),
+                    new barfit.design.beam.BeamDesigner(cost, options, di.settings().units()), di.maxBarSizesPerBeam(),
+                    di.barsPerTwoLegs());
+            for (var l : lines) {
+                for (var part : byLine.design(l, 0).parts()) {
+                    out.add(new ScheduleBeam(part.problem().id(), null, l.location(), part.problem()));
+                }
+            }
+        }
+        if (out.isEmpty()) {
+            throw new InputError(doc.location(), "expected at least one beam (beams: or --beams) or line (lines:)");
         }
         Rationalise rat = doc.has("rationalise") ? rationalise(doc) : null;
         List<String> sources = new ArrayList<>(List.of(file.getFileName().toString()));
