@@ -47,5 +47,11 @@ class LineExamplesTest {
         assertEquals(0, design.exit(), design.err());
         assertTrue(design.out().contains("Line L1-B: designed span by span from its analysis"));
         assertEquals(design.out(), Run.of("design", FILE).out(), "same input, same output");
+        Run compare = Run.of("compare", FILE, "--beam", "L1-B/span 2");
+        assertEquals(0, compare.exit(), compare.err());
+        assertTrue(compare.out().contains("Beam L1-B/span 2"));
+        Run schedule = Run.of("schedule", FILE, "--quiet");
+        assertEquals(0, schedule.exit(), schedule.err());
+        assertTrue(schedule.out().contains("L1-4/span 3"));
     }
 }
