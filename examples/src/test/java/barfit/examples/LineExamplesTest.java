@@ -54,4 +54,15 @@ class LineExamplesTest {
         assertEquals(0, schedule.exit(), schedule.err());
         assertTrue(schedule.out().contains("L1-4/span 3"));
     }
+
+    @Test
+    void theLibraryAsLinesIsScheduled() throws IOException {
+        // schedule/library-lines-si.yaml: 24 lines (7 per level, two stair trimmers, a skylight trimmer),
+        // 56 parts with the two canopies, rationalised to at most 6 section sizes and 3 bar sizes
+        Run r = Run.of("schedule", "schedule/library-lines-si.yaml", "--format", "json", "--quiet");
+        assertEquals(0, r.exit(), r.err());
+        JsonNode root = new ObjectMapper().readTree(r.out());
+        assertEquals(56, root.get("beams").size());
+        assertTrue(root.toString().contains("OPTIMAL"));
+    }
 }

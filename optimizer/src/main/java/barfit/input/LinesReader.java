@@ -231,8 +231,8 @@ public final class LinesReader {
             throw new InputError(f.location(), f.path() + ": missing key 'loads'; expected the service loads {dead, live}"
                     + " in " + u.unit(Dim.LINE_LOAD) + " (the web's own weight is added by barfit)");
         }
-        YFields l = f.map("loads", "the service loads {dead, live, spans, points, partial}")
-                .allowOnly("dead", "live", "spans", "points", "partial");
+        YFields l = f.map("loads", "the service loads {dead, live, spans, overhangs, points, partial}")
+                .allowOnly("dead", "live", "spans", "overhangs", "points", "partial");
         String lineLoad = u.unit(Dim.LINE_LOAD);
         double dead = u.toSI(l.has("dead") ? l.nonNegative("dead", "superimposed dead load, " + lineLoad) : 0,
                 Dim.LINE_LOAD);
@@ -250,6 +250,27 @@ public final class LinesReader {
                 }
                 if (s.has("live")) {
                     lv[i] = u.toSI(s.nonNegative("live", "live load, " + lineLoad), Dim.LINE_LOAD);
+                }
+            }
+        }
+        if (l.has("overhangs")) {
+            YFields o = l.map("overhangs", "loads of the overhangs {left: {dead, live}, right: {dead, live}}")
+                    .allowOnly("left", "right");
+            for (String side : new String[] {"left", "right"}) {
+                if (!o.has(side)) {
+                    continue;
+                }
+                YFields x = o.map(side, "the " + side + " overhang's loads {dead, live}").allowOnly("dead", "live");
+                int i = side.equals("left") ? 0 : n + 1;
+                if ((i == 0 ? ol : or) == 0) {
+                    throw o.error(side, "the line has no " + side + " overhang; expected loads only on overhangs given "
+                            + "under overhangs:");
+                }
+                if (x.has("dead")) {
+                    d[i] = u.toSI(x.nonNegative("dead", "superimposed dead load, " + lineLoad), Dim.LINE_LOAD);
+                }
+                if (x.has("live")) {
+                    lv[i] = u.toSI(x.nonNegative("live", "live load, " + lineLoad), Dim.LINE_LOAD);
                 }
             }
         }
