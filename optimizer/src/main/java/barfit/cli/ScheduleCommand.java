@@ -79,7 +79,7 @@ final class ScheduleCommand implements Callable<Integer> {
         if (out != null) {
             checkOutputs();
         }
-        ScheduleInput input = ScheduleInputReader.read(file, beams, options);
+        ScheduleInput input = ScheduleInputReader.read(file, beams, options, nThreads);
         ProgressBar bar = new ProgressBar(spec.commandLine().getErr(), !quiet && ProgressBar.stderrIsTerminal());
         CostModel cost = new CostModel(input.rates(), input.settings().detailing().cover(),
                 input.settings().units().code());

@@ -31,6 +31,11 @@ public final class ScheduleInputReader {
      * rationalisation may then choose other sections; the lines are not analysed again for them.
      */
     public static ScheduleInput read(Path file, Path csv, barfit.design.SolverOptions options) {
+        return read(file, csv, options, 1);
+    }
+
+    /** As above, the lines designed {@code threads} at a time (the answer does not depend on it). */
+    public static ScheduleInput read(Path file, Path csv, barfit.design.SolverOptions options, int threads) {
         YFields doc = SettingsReader.root(YamlReader.read(file));
         boolean hasLines = doc.has("lines");
         DesignInput di = DesignInputReader.read(file, csv == null && !hasLines);
@@ -54,9 +59,30 @@ public final class ScheduleInputReader {
             var byLine = new barfit.design.line.LineSpans(di.settings(), di.space(),
                     new barfit.design.beam.BeamDesigner(cost, options, di.settings().units()), di.maxBarSizesPerBeam(),
                     di.barsPerTwoLegs());
-            for (var l : lines) {
-                for (var part : byLine.design(l, 0).parts()) {
-                    out.add(new ScheduleBeam(part.problem().id(), null, l.location(), part.problem()));
+            List<barfit.design.line.LineSpans.Result> results = new ArrayList<>();
+            var pool = java.util.concurrent.Executors.newFixedThreadPool(Math.max(1, Math.min(threads, lines.size())));
+            try {
+                List<java.util.concurrent.Future<barfit.design.line.LineSpans.Result>> futures = new ArrayList<>();
+                for (var l : lines) {
+                    futures.add(pool.submit(() -> byLine.design(l, 0)));
+                }
+                for (var f : futures) {
+                    results.add(f.get());
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted while designing the lines", e);
+            } catch (java.util.concurrent.ExecutionException e) {
+                if (e.getCause() instanceof RuntimeException re) {
+                    throw re;
+                }
+                throw new IllegalStateException(e.getCause());
+            } finally {
+                pool.shutdownNow();
+            }
+            for (int i = 0; i < lines.size(); i++) {
+                for (var part : results.get(i).parts()) {
+                    out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(), part.problem()));
                 }
             }
         }
