@@ -99,7 +99,7 @@ final class DesignCommand implements Callable<Integer> {
             for (int i = 0; i < r.parts().size(); i++) {
                 LineSpans.Part part = r.parts().get(i);
                 outcomes.add(DesignItem.of(part.outcome(), new DesignItem.LinePart(l.id(), part.name(), i == 0,
-                        l.spans().size(), r.rounds(), r.settled())));
+                        l.spans().size(), r.rounds(), r.settled(), l.redistribution(), r.redistribution(), r.epsT())));
             }
         }
         String text = format == OutputFormat.json

@@ -46,6 +46,11 @@ public record LineInput(String id, Location location, List<Double> spans, double
 
     /** As above with a section per segment (left overhang, spans, right overhang). */
     public Line toLine(List<SectionShape> shapes, double ec, double d) {
+        return toLine(shapes, ec, d, redistribution);
+    }
+
+    /** As above with the redistribution per support given (percent). */
+    public Line toLine(List<SectionShape> shapes, double ec, double d, List<Double> redistributionUsed) {
         List<Load> all = new ArrayList<>(loads);
         int segments = spans.size() + 2;
         List<Double> ei = new ArrayList<>();
@@ -59,6 +64,6 @@ public record LineInput(String id, Location location, List<Double> spans, double
             }
         }
         return new Line(id, spans, overhangLeft, overhangRight, supports, all, ei, ec, d,
-                coefficients ? null : redistribution);
+                coefficients ? null : redistributionUsed);
     }
 }

@@ -9,7 +9,8 @@ import barfit.design.beam.BeamDesigner;
  */
 public record DesignItem(DesignOutcome section, BeamDesigner.Outcome whole, LinePart line) {
     /** Where a whole span came from: its line, which part, and how many rounds of analysis and design it took. */
-    public record LinePart(String line, String part, boolean first, int spans, int rounds, boolean settled) {
+    public record LinePart(String line, String part, boolean first, int spans, int rounds, boolean settled,
+            java.util.List<Double> asked, java.util.List<Double> used, java.util.List<Double> epsT) {
     }
 
     public boolean feasible() {

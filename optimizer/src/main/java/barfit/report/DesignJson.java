@@ -38,6 +38,18 @@ public final class DesignJson {
                 l.put("part", o.line().part());
                 l.put("rounds", o.line().rounds());
                 l.put("settled", o.line().settled());
+                var red = l.putArray("redistribution");
+                for (int j = 0; j < o.line().asked().size(); j++) {
+                    var rj = red.addObject();
+                    rj.put("support", j + 1);
+                    rj.put("asked", o.line().asked().get(j));
+                    rj.put("used", o.line().used().get(j));
+                    if (Double.isNaN(o.line().epsT().get(j))) {
+                        rj.putNull("eps_t");
+                    } else {
+                        rj.put("eps_t", o.line().epsT().get(j));
+                    }
+                }
             }
             arr.add(b);
         }

@@ -39,6 +39,18 @@ public final class DesignText {
                                 ? " (the sections designed are those analysed)"
                                 : " (the sections still changed in the last round: check the envelope by hand)")
                         .append('\n');
+                var lp = o.line();
+                for (int j = 0; j < lp.asked().size(); j++) {
+                    if (lp.asked().get(j) > 0) {
+                        out.append("  redistribution at support ").append(j + 1).append(" (6.6.5): asked ")
+                                .append(u.compact(lp.asked().get(j), Dim.NUMBER)).append(" %, used ")
+                                .append(u.compact(lp.used().get(j), Dim.NUMBER)).append(" %")
+                                .append(Double.isNaN(lp.epsT().get(j)) ? "" : " (εt = " + String.format(Locale.ROOT,
+                                        "%.5f", lp.epsT().get(j)) + " beside it; allowed where εt ≥ 0.0075, at most "
+                                        + "1000 εt percent and 20 %)")
+                                .append('\n');
+                    }
+                }
             }
             if (o.section() != null) {
                 beam(o.section(), u, currency, trail, out);

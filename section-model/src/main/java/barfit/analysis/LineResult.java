@@ -167,7 +167,13 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         // where the most negative moment returns to zero, from each end that has negative moment
         List<Double> inflection = new ArrayList<>();
         List<StationValues> in = sv.stream().filter(st -> st.segment() == s).toList();
-        if (!in.isEmpty() && in.get(0).mMin() < 0) {
+        // a pinned end's moment is zero but for rounding: only a real negative moment counts
+        double scale = 0;
+        for (StationValues st : in) {
+            scale = Math.max(scale, Math.max(Math.abs(st.mMax()), Math.abs(st.mMin())));
+        }
+        double tiny = -1e-9 * scale;
+        if (!in.isEmpty() && in.get(0).mMin() < tiny) {
             for (int i = 1; i < in.size(); i++) {
                 if (in.get(i).mMin() >= 0) {
                     inflection.add(cross(in.get(i - 1), in.get(i)));
@@ -175,7 +181,7 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
                 }
             }
         }
-        if (!in.isEmpty() && in.get(in.size() - 1).mMin() < 0) {
+        if (!in.isEmpty() && in.get(in.size() - 1).mMin() < tiny) {
             for (int i = in.size() - 2; i >= 0; i--) {
                 if (in.get(i).mMin() >= 0) {
                     double x = cross(in.get(i), in.get(i + 1));

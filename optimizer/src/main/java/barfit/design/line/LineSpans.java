@@ -38,8 +38,13 @@ public final class LineSpans {
     private static final double NEGLIGIBLE = 1e-6;
 
     /** What the line's design gives: per segment designed, its problem and outcome; the rounds it took. */
+    /**
+     * {@code redistribution} is what the last analysis used per support (percent): what was asked, lowered
+     * where the sections designed beside the support do not allow it (6.6.5.3: εt ≥ 0.0075 and at most
+     * 1000 εt percent); {@code epsT} the least εt of those sections (NaN where none was asked).
+     */
     public record Result(LineInput line, List<Part> parts, int rounds, boolean settled, LineResult analysis,
-            List<Coefficients.SpanValues> coefficients) {
+            List<Coefficients.SpanValues> coefficients, List<Double> redistribution, List<Double> epsT) {
     }
 
     /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
@@ -72,9 +77,11 @@ public final class LineSpans {
         List<Coefficients.SpanValues> coefficients = null;
         int round = 0;
         boolean settled = false;
+        List<Double> red = new ArrayList<>(in.redistribution());
+        List<Double> epsT = new ArrayList<>();
         while (round < MAX_ROUNDS) {
             round++;
-            Line line = in.toLine(shapes, ec, effectiveDepth(shapes));
+            Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
             List<BeamProblem> problems;
             if (in.coefficients()) {
                 coefficients = Coefficients.analyse(line);
@@ -95,13 +102,53 @@ public final class LineSpans {
                 }
             }
             parts = next;
-            if (sameSections(shapes, chosen)) {
+            // 6.6.5: a support's redistribution stands only where the sections designed beside it allow it
+            epsT = supportStrains(in, parts);
+            boolean lowered = false;
+            for (int j = 0; j < red.size(); j++) {
+                if (red.get(j) > 0) {
+                    double allowed = barfit.analysis.RedistributionLimit.percent(epsT.get(j));
+                    if (red.get(j) > allowed + 1e-9) {
+                        red.set(j, allowed);
+                        lowered = true;
+                    }
+                }
+            }
+            if (!lowered && sameSections(shapes, chosen)) {
                 settled = true;
                 break;
             }
             shapes = chosen;
         }
-        return new Result(in, parts, round, settled, analysis, coefficients);
+        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT);
+    }
+
+    /** The least εt of the designed support sections beside each support (NaN where none is designed). */
+    private static List<Double> supportStrains(LineInput in, List<Part> parts) {
+        int n = in.spans().size();
+        List<Double> out = new ArrayList<>();
+        for (int j = 0; j <= n; j++) {
+            out.add(Double.NaN);
+        }
+        for (Part p : parts) {
+            if (!p.outcome().feasible() || p.segment() < 1 || p.segment() > n) {
+                continue;
+            }
+            var sections = p.outcome().best().report().sections();
+            var left = sections.get(BeamProblem.Place.LEFT);
+            var right = sections.get(BeamProblem.Place.RIGHT);
+            if (left != null) {
+                out.set(p.segment() - 1, least(out.get(p.segment() - 1), left.flexure().epsT()));
+            }
+            if (right != null) {
+                out.set(p.segment(), least(out.get(p.segment()), right.flexure().epsT()));
+            }
+        }
+        return out;
+    }
+
+    private static double least(double a, double b) {
+        return Double.isNaN(a) ? b : Math.min(a, b);
     }
 
     private static boolean sameSections(List<SectionShape> a, List<SectionShape> b) {

@@ -104,4 +104,49 @@ class LineSpansTest {
         // span 2's right end is hogging; the end column at support 1 gives span 1 a hogging left end
         assertTrue(r.parts().get(0).problem().mLeft() != null, "the end column takes moment");
     }
+
+    private LineSpans.Result designLine(String yaml) throws IOException {
+        Path f = dir.resolve("r.yaml");
+        Files.writeString(f, yaml);
+        DesignInput in = DesignInputReader.read(f, false);
+        LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
+        CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
+        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1), in.settings().units());
+        return new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs())
+                .design(line, 0);
+    }
+
+    @Test
+    void redistributionOnlyWhereTheSupportSectionsAllowIt() throws IOException {
+        // ACI 318-19 6.6.5.1 and 6.6.5.3: redistribution only where εt >= 0.0075 at the section, at most
+        // 1000 εt percent and 20 %. A heavily loaded line: its support sections end near εt = 0.005, so the
+        // 20 % asked is not used; a lightly loaded one keeps min(asked, 1000 εt).
+        String heavy = """
+                units: SI
+                concrete: {fc: 30}
+                steel: {fy: 420}
+                lines:
+                  - id: H
+                    spans: [7.0, 7.0, 7.0]
+                    supports: [{width: 400, kind: wall}]
+                    loads: {dead: 25, live: 15}
+                    section: {width: 300, height: 600}
+                    redistribution: 20
+                """;
+        LineSpans.Result h = designLine(heavy);
+        for (int j = 1; j <= 2; j++) {
+            double e = h.epsT().get(j);
+            assertTrue(e < 0.0075, "εt " + e);
+            assertEquals(0.0, h.redistribution().get(j), 0.0);
+        }
+        LineSpans.Result l = designLine(heavy.replace("dead: 25, live: 15", "dead: 8, live: 4")
+                .replace("redistribution: 20", "redistribution: 10"));
+        assertTrue(l.settled());
+        for (int j = 1; j <= 2; j++) {
+            double e = l.epsT().get(j);
+            double expected = e < 0.0075 ? 0 : Math.min(10, 1000 * e);
+            assertEquals(expected, l.redistribution().get(j), 1e-9, "εt " + e);
+        }
+        assertTrue(l.epsT().get(1) >= 0.0075, "a light line is ductile enough to redistribute: " + l.epsT());
+    }
 }
