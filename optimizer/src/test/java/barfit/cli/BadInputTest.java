@@ -18,13 +18,14 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * Every file in the bad-input corpus must give exit code 2 and exactly one line on stderr that names
  * the file and the line, says what was expected, and carries no stack trace. The first line of each
- * file says what to expect: {@code # expect LINE: text}. Files named design-* go to {@code design},
+ * file says what to expect: {@code # expect LINE: text}, or {@code # expect LINE:COLUMN: text} where the
+ * column matters too (syntax errors). Files named design-* go to {@code design},
  * compare-* to {@code compare}, the others to {@code check}. Bad command-line options get the same
  * treatment: one line naming the option or file and what is expected, exit 2, nothing written.
  */
 class BadInputTest {
     static final Path CORPUS = Path.of("src/test/resources/bad-input");
-    private static final Pattern EXPECT = Pattern.compile("# expect (\\d+): (.*)");
+    private static final Pattern EXPECT = Pattern.compile("# expect (\\d+(?::\\d+)?): (.*)");
 
     static Stream<Path> corpus() throws IOException {
         List<Path> files;
@@ -40,7 +41,7 @@ class BadInputTest {
     void rejectedWithOneLine(Path file) throws IOException {
         String first = Files.readAllLines(file).get(0);
         Matcher m = EXPECT.matcher(first);
-        assertTrue(m.matches(), "first line must be '# expect LINE: text': " + first);
+        assertTrue(m.matches(), "first line must be '# expect LINE: text' or '# expect LINE:COLUMN: text': " + first);
         String line = m.group(1);
         String text = m.group(2);
         String before = Files.readString(file);
