@@ -72,7 +72,15 @@ class BadInputTest {
                 Arguments.of(List.of("sweep", STUDY, "--plot", "no-such-dir/x.svg"),
                         "no-such-dir/x.svg:", "expected --plot in an existing directory"),
                 Arguments.of(List.of("sweep", STUDY, "--csv", "--format", "json"), "--csv:", "expected one of them"),
-                Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"));
+                Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"),
+                // a number the parser cannot read, in words (not "'abc' is not a double")
+                Arguments.of(List.of("compare", STUDY, "--fc", "abc"), "--fc:",
+                        "expected numbers separated by commas, got 'abc'"),
+                Arguments.of(List.of("design", STUDY, "--workers", "two"), "--workers:", "expected a whole number, got 'two'"),
+                // --force says what to replace: alone it is a usage error, not silently ignored
+                Arguments.of(List.of("sweep", STUDY, "--force"), "--force:", "expected --plot FILE.svg with it"),
+                Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
+                        "--force"), "--force:", "expected --out DIR with it"));
     }
 
     @ParameterizedTest(name = "{0}")
