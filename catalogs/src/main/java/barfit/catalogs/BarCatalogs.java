@@ -76,7 +76,7 @@ public final class BarCatalogs {
         } else if (units.equals("US")) {
             us = true;
         } else {
-            throw doc.error("units", "expected SI (mm, mm2, kg/m) or US (in, in2, lb/ft), got \"" + units + "\"");
+            throw doc.error("units", "expected SI (mm, mm2, kg/m) or US (in, in2, lb/ft), got \"" + Echo.cut(units) + "\"");
         }
         String labelPattern = doc.optText("label", "a label pattern such as \"#{size}\"").orElse("{size}");
         if (!labelPattern.contains("{size}")) {
@@ -92,7 +92,7 @@ public final class BarCatalogs {
             e.allowOnly("size", "diameter", "area", "mass");
             String size = e.text("size", "the bar's designation, e.g. \"29\"");
             if (!seen.add(BarCatalog.normalise(size))) {
-                throw e.error("size", "bar size \"" + size + "\" appears twice; expected each size once");
+                throw e.error("size", "bar size \"" + Echo.cut(size) + "\" appears twice; expected each size once");
             }
             String dUnit = us ? "in" : "mm";
             double d = e.positive("diameter", "nominal diameter, " + dUnit);

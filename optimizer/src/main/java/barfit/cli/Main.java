@@ -13,8 +13,8 @@ import picocli.CommandLine.Command;
 @Command(name = "barfit", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Cheapest passing reinforced-concrete beam layouts to ACI 318-19, searched and proven.%n"
                 + "Results must be checked by a licensed professional engineer against the governing local code.",
-        subcommands = {CheckCommand.class, AnalyseCommand.class, DesignCommand.class, ScheduleCommand.class, CompareCommand.class, SweepCommand.class,
-            BenchCommand.class})
+        subcommands = {CheckCommand.class, AnalyseCommand.class, DesignCommand.class, ScheduleCommand.class,
+            CompareCommand.class, SweepCommand.class, BenchCommand.class, CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
     public static final int OK = 0;
     public static final int FAILED = 1;
@@ -54,7 +54,7 @@ public final class Main implements Runnable {
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();
             String name = c.getCommandSpec().qualifiedName();
-            c.getErr().println("barfit: " + ex.getMessage().replace('\n', ' ') + " (see: " + name + " --help)");
+            c.getErr().println("barfit: " + usageMessage(ex) + " (see: " + name + " --help)");
             return BAD_INPUT;
         });
         cl.setExecutionExceptionHandler((ex, c, parseResult) -> {
@@ -82,6 +82,27 @@ public final class Main implements Runnable {
         cl.getOut().flush();
         cl.getErr().flush();
         return code;
+    }
+
+    /**
+     * A usage error in plain words: an option's value that is not a number reads "--fc: expected a number,
+     * got 'abc'", not the parser's "'abc' is not a double".
+     */
+    static String usageMessage(CommandLine.ParameterException ex) {
+        String message = ex.getMessage() == null ? "" : ex.getMessage().replace('\n', ' ');
+        boolean notConverted = ex.getCause() instanceof CommandLine.TypeConversionException
+                || message.matches(".*' is not an? (double|float|int|long|short|byte)\\b.*");
+        if (notConverted && ex.getArgSpec() != null) {
+            CommandLine.Model.ArgSpec arg = ex.getArgSpec();
+            String name = arg instanceof CommandLine.Model.OptionSpec o ? o.longestName() : arg.paramLabel();
+            Class<?> type = arg.auxiliaryTypes().length > 0 ? arg.auxiliaryTypes()[0] : arg.type();
+            boolean decimal = type == Double.class || type == double.class || type == Float.class || type == float.class;
+            String expected = arg.isMultiValue() ? (decimal ? "numbers" : "whole numbers") + " separated by commas"
+                    : decimal ? "a number" : "a whole number";
+            String value = ex.getValue() == null ? "" : ex.getValue();
+            return name + ": expected " + expected + ", got '" + barfit.catalogs.Echo.cut(value) + "'";
+        }
+        return message.length() > 300 ? message.substring(0, 300) + "…" : message; // an argument pasted whole
     }
 
     static final class Version implements CommandLine.IVersionProvider {

@@ -53,7 +53,7 @@ final class ScheduleCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "write the schedule files into DIR (created if missing)")
     Path out;
 
-    @Option(names = "--force", description = "replace schedule files already in DIR")
+    @Option(names = "--force", description = "with --out: replace schedule files already in DIR")
     boolean force;
 
     @Option(names = "--quiet", description = "no progress bar")
@@ -70,6 +70,10 @@ final class ScheduleCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (force && out == null) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--force: replaces the schedule files in --out "
+                    + "DIR; expected --out DIR with it");
+        }
         int cores = Runtime.getRuntime().availableProcessors();
         int nThreads = threads == null ? cores : threads;
         if (nThreads < 1 || nThreads > 256) {

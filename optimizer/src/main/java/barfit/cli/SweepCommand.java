@@ -60,7 +60,7 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--plot", paramLabel = "FILE.svg", description = "also draw cost against depth cap into an SVG file")
     Path plot;
 
-    @Option(names = "--force", description = "overwrite the plot file if it exists")
+    @Option(names = "--force", description = "with --plot: overwrite the plot file if it exists")
     boolean force;
 
 
@@ -85,6 +85,10 @@ final class SweepCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (force && plot == null) {
+            throw new CommandLine.ParameterException(spec.commandLine(), "--force: overwrites the --plot file; expected "
+                    + "--plot FILE.svg with it");
+        }
         DesignInput in = Studies.input(file);
         var u = in.settings().units();
         List<Double> depths = in.space().depths();

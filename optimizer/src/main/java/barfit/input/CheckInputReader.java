@@ -1,5 +1,6 @@
 package barfit.input;
 
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YamlReader;
@@ -39,10 +40,10 @@ public final class CheckInputReader {
         Map<String, Integer> ids = new HashMap<>();
         for (YFields b : beams) {
             b.allowOnly(BEAM_KEYS);
-            String id = b.text("id", "the beam's mark, e.g. B1");
+            String id = SettingsReader.id(b);
             Integer first = ids.putIfAbsent(id, b.location().line());
             if (first != null) {
-                throw b.error("id", "beam id \"" + id + "\" is used twice (first at line " + first + "); expected unique ids");
+                throw b.error("id", "beam id \"" + Echo.cut(id) + "\" is used twice (first at line " + first + "); expected unique ids");
             }
             // a beam's own stirrup bar sets where its bars sit (cover + stirrup + db/2), so it is read first
             Stirrups stirrups = b.has("stirrups") ? common.stirrups(b.map("stirrups", "stirrups: {bar, legs, spacing}")) : null;
@@ -59,11 +60,11 @@ public final class CheckInputReader {
             List<BarLayer> layers = new ArrayList<>(bottom);
             layers.addAll(top);
             Double mu = b.optNumber("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)")
-                    .map(v -> u.toSI(v, Dim.MOMENT)).orElse(null);
+                    .map(v -> u.toSI(InputLimits.require(b, "Mu", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
             Double vu = null;
             if (b.has("Vu")) {
                 double v = b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE));
-                vu = u.toSI(v, Dim.FORCE);
+                vu = u.toSI(InputLimits.require(b, "Vu", InputLimits.SHEAR, u, v), Dim.FORCE);
             }
             SkinBars skin = b.has("skin") ? sr.skin(b.map("skin", "skin bars: {bar, spacing}")) : null;
             BeamSection section = sr.section(shape, layers, stirrups, skin);

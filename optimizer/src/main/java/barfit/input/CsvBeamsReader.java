@@ -1,6 +1,9 @@
 package barfit.input;
 
+import barfit.catalogs.Decimal;
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
+import barfit.catalogs.InputFiles;
 import barfit.catalogs.yaml.Location;
 import barfit.section.EndCondition;
 import barfit.section.Flange;
@@ -8,10 +11,6 @@ import barfit.section.Span;
 import barfit.section.SpanChecks;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
-import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -23,8 +22,9 @@ import java.util.Map;
 /**
  * Reads a schedule's beams from CSV: a header row naming the columns (any order), then one row per
  * whole span, in the units of the settings file. Blank lines and lines starting with {@code #} are
- * skipped; a cell may be quoted. Every cell is checked, and the first bad one is reported with its
- * line and column.
+ * skipped; a cell may be quoted. The file is read as it streams in, at most
+ * {@link InputFiles#CSV_MAX_BYTES}; every cell is checked, against {@link InputLimits} too, and the
+ * first bad one is reported with its line and column.
  *
  * <pre>
  * id,span,ends,m_left,m_mid,m_right,v_left,v_right,max_depth,group,flange_width,flange_thickness,dead,live
@@ -37,9 +37,6 @@ public final class CsvBeamsReader {
     static final List<String> KNOWN = List.of("id", "span", "ends", "m_left", "m_mid", "m_right", "vu", "v_left",
             "v_right", "max_depth", "group", "flange_width", "flange_thickness", "flange_type",
             "flange_clear_to_next_web", "dead", "live", "sustained_live", "width");
-
-    private static final java.util.regex.Pattern DECIMAL =
-            java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
 
     private final Path file;
     private final Settings settings;
@@ -65,121 +62,101 @@ public final class CsvBeamsReader {
         return new CsvBeamsReader(file, settings, widestWeb).read();
     }
 
+    /** What to do with a CSV over {@link InputFiles#CSV_MAX_BYTES}. */
+    static final String TOO_LARGE_ADVICE = "expected a smaller file: split the beams into several schedules "
+            + "(by level or by beam line)";
+
+    /**
+     * Reads and checks the file row by row as it streams in: the first bad cell stops the reading, so a
+     * bad last row of a large file is found without holding the file in memory.
+     */
     private List<DesignBeam> read() {
-        String text;
-        try {
-            byte[] bytes = Files.readAllBytes(file);
-            text = StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(bytes)).toString();
-        } catch (CharacterCodingException e) {
-            throw badEncoding();
-        } catch (IOException e) {
-            throw new InputError(Location.ofFile(file.toString()), "cannot read the file ("
-                    + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()) + ")");
-        }
-        if (text.startsWith("\uFEFF")) {
-            text = text.substring(1);
-        }
-        String[] lines = text.split("\r\n|\n|\r", -1);
         List<String> header = null;
         int headerLine = 0;
-        List<Cell> headerCells = null;
-        List<Row> rows = new ArrayList<>();
-        for (int i = 0; i < lines.length; i++) {
-            String line = lines[i];
-            int no = i + 1;
-            if (line.isBlank() || line.stripLeading().startsWith("#")) {
-                continue;
-            }
-            List<Cell> cells = split(line, no);
-            if (header == null) {
-                headerCells = cells;
-                header = new ArrayList<>();
-                for (Cell c : cells) {
-                    String name = c.text().strip().toLowerCase(Locale.ROOT);
-                    if (!KNOWN.contains(name)) {
-                        throw error(c, "unknown column '" + c.text().strip() + "'; expected columns from: "
-                                + String.join(", ", KNOWN));
-                    }
-                    if (header.contains(name)) {
-                        throw error(c, "column '" + name + "' appears twice");
-                    }
-                    header.add(name);
+        List<DesignBeam> out = new ArrayList<>();
+        Map<String, Integer> ids = new HashMap<>();
+        try (InputFiles.Lines lines = InputFiles.lines(file, "a CSV file", InputFiles.CSV_MAX_BYTES, TOO_LARGE_ADVICE)) {
+            String line;
+            while ((line = lines.next()) != null) {
+                int no = lines.lineNumber();
+                if (no == 1 && line.startsWith("\uFEFF")) {
+                    line = line.substring(1); // a byte-order mark, as some spreadsheets write
                 }
-                headerLine = no;
-                for (String r : REQUIRED) {
-                    if (!header.contains(r)) {
-                        throw new InputError(new Location(file.toString(), no, 1), "the header has no '" + r
-                                + "' column; expected at least: " + String.join(", ", REQUIRED));
-                    }
+                if (line.isBlank() || line.stripLeading().startsWith("#")) {
+                    continue;
                 }
-                if (header.contains("vu") && (header.contains("v_left") || header.contains("v_right"))) {
-                    throw error(headerCells.get(header.indexOf("vu")), "give either vu (both ends) or v_left and "
-                            + "v_right, not both");
+                List<Cell> cells = split(line, no);
+                if (header == null) {
+                    header = header(cells, no);
+                    headerLine = no;
+                    continue;
                 }
-                continue;
+                if (cells.size() != header.size()) {
+                    Cell at = cells.size() > header.size() ? cells.get(header.size()) : cells.get(cells.size() - 1);
+                    throw error(at, "this row has " + cells.size() + " cells but the header (line " + headerLine
+                            + ") has " + header.size() + (separatorHint(line).isEmpty() ? "; expected one cell per "
+                            + "column (leave a cell empty when it does not apply)" : separatorHint(line)));
+                }
+                Map<String, Cell> byName = new LinkedHashMap<>();
+                for (int c = 0; c < cells.size(); c++) {
+                    byName.put(header.get(c), cells.get(c));
+                }
+                Row r = new Row(no, byName);
+                DesignBeam b = beam(r);
+                Integer first = ids.putIfAbsent(b.id(), r.line());
+                if (first != null) {
+                    throw error(r.cells().get("id"), "beam id \"" + Echo.cut(b.id()) + "\" is used twice (first at line "
+                            + first + "); expected unique ids");
+                }
+                out.add(b);
             }
-            if (cells.size() != header.size()) {
-                Cell at = cells.size() > header.size() ? cells.get(header.size()) : cells.get(cells.size() - 1);
-                throw error(at, "this row has " + cells.size() + " cells but the header (line " + headerLine + ") has "
-                        + header.size() + "; expected one cell per column (leave a cell empty when it does not apply)");
-            }
-            Map<String, Cell> byName = new LinkedHashMap<>();
-            for (int c = 0; c < cells.size(); c++) {
-                byName.put(header.get(c), cells.get(c));
-            }
-            rows.add(new Row(no, byName));
         }
         if (header == null) {
             throw new InputError(new Location(file.toString(), 1, 1), "empty; expected a header row and one row per beam");
         }
-        if (rows.isEmpty()) {
+        if (out.isEmpty()) {
             throw new InputError(new Location(file.toString(), headerLine, 1), "no beams after the header; expected one "
                     + "row per beam");
-        }
-        List<DesignBeam> out = new ArrayList<>();
-        Map<String, Integer> ids = new HashMap<>();
-        for (Row r : rows) {
-            DesignBeam b = beam(r);
-            Integer first = ids.putIfAbsent(b.id(), r.line());
-            if (first != null) {
-                throw error(r.cells().get("id"), "beam id \"" + b.id() + "\" is used twice (first at line " + first
-                        + "); expected unique ids");
-            }
-            out.add(b);
         }
         return out;
     }
 
-    /** Where the first byte that is not UTF-8 sits (line, column in characters), for the message. */
-    private InputError badEncoding() {
-        try {
-            byte[] bytes = Files.readAllBytes(file);
-            var decoder = StandardCharsets.UTF_8.newDecoder();
-            int line = 1;
-            int lineStart = 0;
-            for (int i = 0; i < bytes.length; i++) {
-                int len = 1;
-                int b = bytes[i] & 0xff;
-                if (b >= 0xc0) {
-                    len = b >= 0xf0 ? 4 : b >= 0xe0 ? 3 : 2;
-                }
-                try {
-                    decoder.reset().decode(java.nio.ByteBuffer.wrap(bytes, i, Math.min(len, bytes.length - i)));
-                } catch (CharacterCodingException bad) {
-                    int column = new String(bytes, lineStart, i - lineStart, StandardCharsets.UTF_8).length() + 1;
-                    return new InputError(new Location(file.toString(), line, column), "not valid UTF-8 text; "
-                            + "expected a CSV file saved as UTF-8");
-                }
-                if (b == '\n') {
-                    line++;
-                    lineStart = i + 1;
-                }
-                i += len - 1;
+    /** The header's column names, checked. */
+    private List<String> header(List<Cell> cells, int no) {
+        List<String> header = new ArrayList<>();
+        for (Cell c : cells) {
+            String name = c.text().strip().toLowerCase(Locale.ROOT);
+            if (!KNOWN.contains(name)) {
+                String separator = separatorHint(c.text());
+                throw error(c, "unknown column '" + Echo.cut(c.text().strip()) + "'" + (separator.isEmpty()
+                        ? "; expected columns from: " + String.join(", ", KNOWN) : separator));
             }
-        } catch (IOException e) {
-            // fall through to the message without a place
+            if (header.contains(name)) {
+                throw error(c, "column '" + Echo.cut(name) + "' appears twice");
+            }
+            header.add(name);
         }
-        return new InputError(Location.ofFile(file.toString()), "not valid UTF-8 text; expected a CSV file saved as UTF-8");
+        for (String r : REQUIRED) {
+            if (!header.contains(r)) {
+                throw new InputError(new Location(file.toString(), no, 1), "the header has no '" + r
+                        + "' column; expected at least: " + String.join(", ", REQUIRED));
+            }
+        }
+        if (header.contains("vu") && (header.contains("v_left") || header.contains("v_right"))) {
+            throw error(cells.get(header.indexOf("vu")), "give either vu (both ends) or v_left and v_right, not both");
+        }
+        return header;
+    }
+
+    /** A hint when the cells seem separated by semicolons or tabs, as some spreadsheets save "CSV". */
+    private static String separatorHint(String text) {
+        for (String[] sep : new String[][] {{";", "semicolons"}, {"\t", "tabs"}}) {
+            if (text.contains(sep[0])) {
+                return "; the cells seem to be separated by " + sep[1] + ": expected commas (save the CSV with ',' "
+                        + "as the separator)";
+            }
+        }
+        return "";
     }
 
     /** Splits a line at commas outside double quotes ("" inside quotes is one quote). */
@@ -251,32 +228,46 @@ public final class CsvBeamsReader {
         if (empty(c)) {
             return null;
         }
-        // plain decimal numbers only: Java's own syntax would let "6.0f" or "0x1p3" through
-        if (!DECIMAL.matcher(c.text()).matches()) {
-            throw error(c, column + ": expected a number (" + what + "), got \"" + c.text() + "\"");
+        // plain decimal numbers only (Java's own syntax would let "6.0f" or "0x1p3" through), read in one pass
+        double v = Decimal.parse(c.text());
+        if (Double.isNaN(v)) {
+            throw error(c, column + ": expected a number (" + what + "), got \"" + Echo.cut(c.text()) + "\"");
         }
-        double v = Double.parseDouble(c.text());
-        if (!Double.isFinite(v)) {
-            throw error(c, column + ": expected a number (" + what + "), got \"" + c.text() + "\"");
+        if (Double.isInfinite(v)) {
+            throw error(c, column + ": expected a number (" + what + "), got \"" + Echo.cut(c.text())
+                    + "\", too large a number");
         }
         return v;
     }
 
-    private Double positive(Row r, String column, String what, Dim dim) {
+    /** The value of {@code column} (in the file's units), refused outside {@code range}. */
+    private Double inRange(Row r, String column, Double v, InputLimits.Range range) {
+        if (v != null) {
+            String problem = range.problem(u, v);
+            if (problem != null) {
+                throw error(r.cells().get(column), column + ": " + problem);
+            }
+        }
+        return v;
+    }
+
+    private Double positive(Row r, String column, String what, Dim dim, InputLimits.Range range) {
         Double v = number(r, column, what);
         if (v != null && v <= 0) {
             throw error(r.cells().get(column), column + ": expected a positive number (" + what + "), got "
                     + SettingsReader.fmt(v));
         }
+        inRange(r, column, v, range);
         return v == null ? null : u.toSI(v, dim);
     }
 
-    private Double nonNegative(Row r, String column, String what, Dim dim) {
+    private Double nonNegative(Row r, String column, String what, Dim dim, InputLimits.Range range) {
         Double v = number(r, column, what);
         if (v != null && v < 0) {
             throw error(r.cells().get(column), column + ": expected zero or more (" + what + "), got "
                     + SettingsReader.fmt(v));
         }
+        inRange(r, column, v, range);
         return v == null ? null : u.toSI(v, dim);
     }
 
@@ -291,7 +282,7 @@ public final class CsvBeamsReader {
         if (empty(spanCell)) {
             throw error(spanCell, "span: expected the clear span, " + u.unit(Dim.SPAN));
         }
-        double span = positive(r, "span", "the clear span, " + u.unit(Dim.SPAN), Dim.SPAN);
+        double span = positive(r, "span", "the clear span, " + u.unit(Dim.SPAN), Dim.SPAN, InputLimits.SPAN);
         Cell endsCell = r.cells().get("ends");
         EndCondition ends = empty(endsCell) ? null : EndCondition.byKey(endsCell.text());
         if (ends == null) {
@@ -299,9 +290,9 @@ public final class CsvBeamsReader {
                     + (endsCell == null ? "" : endsCell.text()) + "\"");
         }
         String moment = "factored moment, " + u.unit(Dim.MOMENT);
-        Double ml = siOrNull(number(r, "m_left", moment), Dim.MOMENT);
-        Double mm = siOrNull(number(r, "m_mid", moment), Dim.MOMENT);
-        Double mr = siOrNull(number(r, "m_right", moment), Dim.MOMENT);
+        Double ml = siOrNull(inRange(r, "m_left", number(r, "m_left", moment), InputLimits.MOMENT), Dim.MOMENT);
+        Double mm = siOrNull(inRange(r, "m_mid", number(r, "m_mid", moment), InputLimits.MOMENT), Dim.MOMENT);
+        Double mr = siOrNull(inRange(r, "m_right", number(r, "m_right", moment), InputLimits.MOMENT), Dim.MOMENT);
         switch (ends) {
             case SIMPLE -> {
                 need(r, "m_mid", mm, "a simple span needs m_mid");
@@ -348,24 +339,28 @@ public final class CsvBeamsReader {
         Double vl;
         Double vr;
         if (r.cells().containsKey("vu")) {
-            vl = nonNegative(r, "vu", shear, Dim.FORCE);
+            vl = nonNegative(r, "vu", shear, Dim.FORCE, InputLimits.SHEAR);
             vr = ends == EndCondition.CANTILEVER ? null : vl;
         } else {
-            vl = nonNegative(r, "v_left", shear, Dim.FORCE);
-            vr = nonNegative(r, "v_right", shear, Dim.FORCE);
+            vl = nonNegative(r, "v_left", shear, Dim.FORCE, InputLimits.SHEAR);
+            vr = nonNegative(r, "v_right", shear, Dim.FORCE, InputLimits.SHEAR);
             if (ends == EndCondition.CANTILEVER && vr != null) {
                 throw error(r.cells().get("v_right"), "v_right: a cantilever has its shear at the fixed (left) end "
                         + "only; leave v_right empty");
             }
         }
-        Double cap = positive(r, "max_depth", "the headroom cap on the total height, " + u.unit(Dim.LENGTH), Dim.LENGTH);
-        Double width = positive(r, "width", "the fixed web width, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Double cap = positive(r, "max_depth", "the headroom cap on the total height, " + u.unit(Dim.LENGTH), Dim.LENGTH,
+                InputLimits.HEIGHT);
+        Double width = positive(r, "width", "the fixed web width, " + u.unit(Dim.LENGTH), Dim.LENGTH,
+                InputLimits.WEB_WIDTH);
         Cell groupCell = r.cells().get("group");
         String group = empty(groupCell) ? null : groupCell.text();
-        Double bf = positive(r, "flange_width", "the flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH);
-        Double hf = positive(r, "flange_thickness", "the slab thickness, " + u.unit(Dim.LENGTH), Dim.LENGTH);
+        Double bf = positive(r, "flange_width", "the flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH,
+                InputLimits.FLANGE_WIDTH);
+        Double hf = positive(r, "flange_thickness", "the slab thickness, " + u.unit(Dim.LENGTH), Dim.LENGTH,
+                InputLimits.FLANGE_THICKNESS);
         Double sw = positive(r, "flange_clear_to_next_web", "the clear distance from the web to the next web, "
-                + u.unit(Dim.LENGTH), Dim.LENGTH);
+                + u.unit(Dim.LENGTH), Dim.LENGTH, InputLimits.WEB_GAP);
         Flange flange = null;
         if ((bf == null) != (hf == null)) {
             String missing = bf == null ? "flange_width" : "flange_thickness";
@@ -374,10 +369,8 @@ public final class CsvBeamsReader {
                     missing + ": a flange needs both flange_width and flange_thickness");
         }
         if (bf != null) {
-            if (ends == EndCondition.CANTILEVER) {
-                throw error(r.cells().get("flange_width"), "flange_width: a cantilever's section is in hogging, with "
-                        + "the slab in tension; leave the flange empty");
-            }
+            // a cantilever's flange is in tension (hogging): the section model leaves it out of strength and
+            // the report says what 24.3.4 asks of the top bars, as for a support of any span
             double web = width != null ? width : widestWeb;
             if (bf < web) {
                 throw error(r.cells().get("flange_width"), "flange_width: the flange (" + u.compact(bf, Dim.LENGTH)
@@ -402,8 +395,10 @@ public final class CsvBeamsReader {
                     "flange_clear_to_next_web: given without flange_width and flange_thickness");
         }
         String load = "service load, " + u.unit(Dim.LINE_LOAD);
-        Double dead = positive(r, "dead", "the service dead load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD);
-        Double live = nonNegative(r, "live", "the service live load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD);
+        Double dead = positive(r, "dead", "the service dead load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD,
+                InputLimits.LINE_LOAD);
+        Double live = nonNegative(r, "live", "the service live load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD,
+                InputLimits.LINE_LOAD);
         Double sustained = number(r, "sustained_live", "the sustained part of the live load, 0 to 1");
         SpanChecks.ServiceLoads service = null;
         if (dead != null || live != null) {

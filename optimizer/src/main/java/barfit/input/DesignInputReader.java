@@ -1,5 +1,6 @@
 package barfit.input;
 
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YamlReader;
@@ -54,14 +55,15 @@ public final class DesignInputReader {
         Map<String, Integer> ids = new HashMap<>();
         for (YFields b : beams) {
             b.allowOnly(BEAM_KEYS);
-            String id = b.text("id", "the beam's mark, e.g. B1");
+            String id = SettingsReader.id(b);
             Integer first = ids.putIfAbsent(id, b.location().line());
             if (first != null) {
-                throw b.error("id", "beam id \"" + id + "\" is used twice (first at line " + first + "); expected unique ids");
+                throw b.error("id", "beam id \"" + Echo.cut(id) + "\" is used twice (first at line " + first + "); expected unique ids");
             }
             String group = b.has("group") ? b.text("group", "the group of beams that may share a section size") : null;
-            Double cap = sr.optLength(b, "max_depth", "the headroom cap on the total height").orElse(null);
-            Double width = sr.optLength(b, "width", "the fixed web width").orElse(null);
+            Double cap = sr.optLength(b, "max_depth", "the headroom cap on the total height", InputLimits.HEIGHT)
+                    .orElse(null);
+            Double width = sr.optLength(b, "width", "the fixed web width", InputLimits.WEB_WIDTH).orElse(null);
             Span span = sr.span(b); // the flange's effective width depends on it
             Flange flange = null;
             if (b.has("flange")) {
@@ -83,10 +85,10 @@ public final class DesignInputReader {
                     throw new InputError(b.location(), b.path() + ": missing key 'Mu'; expected the factored moment, "
                             + u.unit(Dim.MOMENT) + " (one section), or moments: {left, mid, right} (a whole span)");
                 }
-                double mu = u.toSI(b.number("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)"),
-                        Dim.MOMENT);
-                Double vu = b.has("Vu") ? u.toSI(b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE)), Dim.FORCE)
-                        : null;
+                double mu = u.toSI(InputLimits.require(b, "Mu", InputLimits.MOMENT, u,
+                        b.number("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)")), Dim.MOMENT);
+                Double vu = b.has("Vu") ? u.toSI(InputLimits.require(b, "Vu", InputLimits.SHEAR, u,
+                        b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE))), Dim.FORCE) : null;
                 out.add(new DesignBeam(id, b.location(), mu, vu, cap, width, flange, span, null, group));
                 continue;
             }
@@ -105,12 +107,12 @@ public final class DesignInputReader {
     private static DesignBeam.WholeSpan whole(YFields b, EndCondition ends, UnitSystem u) {
         YFields m = b.map("moments", "the factored moments {left, mid, right}").allowOnly("left", "mid", "right");
         String unit = u.unit(Dim.MOMENT);
-        Double left = m.optNumber("left", "the factored moment at the left support, " + unit).map(v -> u.toSI(v, Dim.MOMENT))
-                .orElse(null);
-        Double mid = m.optNumber("mid", "the factored moment at mid-span, " + unit).map(v -> u.toSI(v, Dim.MOMENT))
-                .orElse(null);
+        Double left = m.optNumber("left", "the factored moment at the left support, " + unit)
+                .map(v -> u.toSI(InputLimits.require(m, "left", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
+        Double mid = m.optNumber("mid", "the factored moment at mid-span, " + unit)
+                .map(v -> u.toSI(InputLimits.require(m, "mid", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
         Double right = m.optNumber("right", "the factored moment at the right support, " + unit)
-                .map(v -> u.toSI(v, Dim.MOMENT)).orElse(null);
+                .map(v -> u.toSI(InputLimits.require(m, "right", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
         switch (ends) {
             case SIMPLE -> {
                 need(m, mid, "mid", "a simple span needs moments: {mid}");
@@ -154,10 +156,10 @@ public final class DesignInputReader {
         Double vr = null;
         if (b.has("shear")) {
             YFields v = b.map("shear", "the factored shears at d from the faces {left, right}").allowOnly("left", "right");
-            vl = v.has("left") ? u.toSI(v.nonNegative("left", "the factored shear at the left end, " + u.unit(Dim.FORCE)),
-                    Dim.FORCE) : null;
-            vr = v.has("right") ? u.toSI(v.nonNegative("right", "the factored shear at the right end, "
-                    + u.unit(Dim.FORCE)), Dim.FORCE) : null;
+            vl = v.has("left") ? u.toSI(InputLimits.require(v, "left", InputLimits.SHEAR, u,
+                    v.nonNegative("left", "the factored shear at the left end, " + u.unit(Dim.FORCE))), Dim.FORCE) : null;
+            vr = v.has("right") ? u.toSI(InputLimits.require(v, "right", InputLimits.SHEAR, u,
+                    v.nonNegative("right", "the factored shear at the right end, " + u.unit(Dim.FORCE))), Dim.FORCE) : null;
             if (ends == EndCondition.CANTILEVER && vr != null) {
                 throw v.error("right", "a cantilever has its shear at the fixed (left) end only");
             }
@@ -165,8 +167,10 @@ public final class DesignInputReader {
         SpanChecks.ServiceLoads service = null;
         if (b.has("service")) {
             YFields s = b.map("service", "service loads {dead, live}").allowOnly("dead", "live", "sustained_live");
-            double dead = u.toSI(s.positive("dead", "service dead load, " + u.unit(Dim.LINE_LOAD)), Dim.LINE_LOAD);
-            double live = u.toSI(s.nonNegative("live", "service live load, " + u.unit(Dim.LINE_LOAD)), Dim.LINE_LOAD);
+            double dead = u.toSI(InputLimits.require(s, "dead", InputLimits.LINE_LOAD, u,
+                    s.positive("dead", "service dead load, " + u.unit(Dim.LINE_LOAD))), Dim.LINE_LOAD);
+            double live = u.toSI(InputLimits.require(s, "live", InputLimits.LINE_LOAD, u,
+                    s.nonNegative("live", "service live load, " + u.unit(Dim.LINE_LOAD))), Dim.LINE_LOAD);
             double sus = s.optNumber("sustained_live", "the sustained part of the live load, 0 to 1").orElse(0.0);
             if (sus < 0 || sus > 1) {
                 throw s.error("sustained_live", "expected the sustained part of the live load from 0 to 1, got "
@@ -179,7 +183,9 @@ public final class DesignInputReader {
             YFields d = b.map("deflection_limits", "deflection limits as span divisors {live, total}")
                     .allowOnly("live", "total");
             limits = new SpanChecks.Limits(d.optPositive("live", "span divisor for live-load deflection, e.g. 360")
-                    .orElse(360.0), d.optPositive("total", "span divisor for long-term deflection, e.g. 240").orElse(240.0));
+                    .map(x -> InputLimits.require(d, "live", InputLimits.SPAN_DIVISOR, u, x)).orElse(360.0),
+                    d.optPositive("total", "span divisor for long-term deflection, e.g. 240")
+                    .map(x -> InputLimits.require(d, "total", InputLimits.SPAN_DIVISOR, u, x)).orElse(240.0));
         }
         boolean anchored = b.optBool("bottom_anchored_at_supports").orElse(false);
         return new DesignBeam.WholeSpan(left, mid, right, vl, vr, service, limits, anchored);

@@ -28,6 +28,10 @@ public final class LinesReader {
     static final double UNIT_WEIGHT_SI = 24e3 / 1e9;
     static final double UNIT_WEIGHT_US_PCF = 150;
 
+    /** A support's width along the line: 0 (a knife edge) to 5 m (200 in). */
+    static final InputLimits.Range SUPPORT_WIDTH = new InputLimits.Range("a support width", Dim.LENGTH, 0, 5000, 0, 200,
+            false);
+
     private LinesReader() {
     }
 
@@ -97,6 +101,10 @@ public final class LinesReader {
             String path = f.child("spans") + "[" + (i + 1) + "]";
             double v = YFields.numberOf(n, path, "a span, " + u.unit(Dim.SPAN));
             YFields.requirePositive(n, path, v, "a span, " + u.unit(Dim.SPAN));
+            String problem = InputLimits.SPAN.problem(u, v);
+            if (problem != null) {
+                throw new InputError(n.location(), path + ": " + problem);
+            }
             spans.add(u.toSI(v, Dim.SPAN));
         }
         int n = spans.size();
@@ -134,8 +142,8 @@ public final class LinesReader {
             }
         }
         YFields sec = f.map("section", "the section analysed: {width, height}").allowOnly("width", "height");
-        double b = sr.length(sec, "width", "web width");
-        double h = sr.length(sec, "height", "total height");
+        double b = sr.length(sec, "width", "web width", InputLimits.WEB_WIDTH);
+        double h = sr.length(sec, "height", "total height", InputLimits.HEIGHT);
         barfit.section.Flange flange = null;
         if (f.has("flange")) {
             // its effective width for the line's stiffness and weight: on the shortest span (the least width)
@@ -161,7 +169,7 @@ public final class LinesReader {
             }
         }
         List<Double> redistribution = redistribution(f, n, coefficients);
-        Double cap = sr.optLength(f, "max_depth", "the headroom cap on the total height").orElse(null);
+        Double cap = sr.optLength(f, "max_depth", "the headroom cap on the total height", InputLimits.HEIGHT).orElse(null);
         return new LineInput(id, f.location(), spans, ol, or, supports, loads, shape, sus, coefficients, redistribution,
                 unitWeight, cap);
     }
@@ -182,7 +190,7 @@ public final class LinesReader {
 
     private static Support support(YFields s, SectionReader sr, UnitSystem u) {
         s.allowOnly("width", "kind", "below", "above");
-        double width = s.has("width") ? sr.length(s, "width", "the support's width along the line") : 0;
+        double width = s.has("width") ? sr.length(s, "width", "the support's width along the line", SUPPORT_WIDTH) : 0;
         Column below = s.has("below") ? column(s.map("below", "the column below {b, h, height}"), sr, u) : null;
         Column above = s.has("above") ? column(s.map("above", "the column above {b, h, height}"), sr, u) : null;
         SupportKind kind;
@@ -213,8 +221,8 @@ public final class LinesReader {
 
     private static Column column(YFields c, SectionReader sr, UnitSystem u) {
         c.allowOnly("b", "h", "height");
-        double b = sr.length(c, "b", "the column's width across the line");
-        double h = sr.length(c, "h", "the column's depth along the line");
+        double b = sr.length(c, "b", "the column's width across the line", InputLimits.WEB_WIDTH);
+        double h = sr.length(c, "h", "the column's depth along the line", InputLimits.HEIGHT);
         if (!c.has("height")) {
             throw new InputError(c.location(), c.path() + ": missing key 'height'; expected the storey height of the "
                     + "column, " + u.unit(Dim.SPAN));
@@ -234,9 +242,10 @@ public final class LinesReader {
         YFields l = f.map("loads", "the service loads {dead, live, spans, overhangs, points, partial}")
                 .allowOnly("dead", "live", "spans", "overhangs", "points", "partial");
         String lineLoad = u.unit(Dim.LINE_LOAD);
-        double dead = u.toSI(l.has("dead") ? l.nonNegative("dead", "superimposed dead load, " + lineLoad) : 0,
-                Dim.LINE_LOAD);
-        double live = u.toSI(l.has("live") ? l.nonNegative("live", "live load, " + lineLoad) : 0, Dim.LINE_LOAD);
+        double dead = u.toSI(l.has("dead") ? InputLimits.require(l, "dead", InputLimits.LINE_LOAD, u,
+                l.nonNegative("dead", "superimposed dead load, " + lineLoad)) : 0, Dim.LINE_LOAD);
+        double live = u.toSI(l.has("live") ? InputLimits.require(l, "live", InputLimits.LINE_LOAD, u,
+                l.nonNegative("live", "live load, " + lineLoad)) : 0, Dim.LINE_LOAD);
         double[] d = new double[n + 2];
         double[] lv = new double[n + 2];
         java.util.Arrays.fill(d, dead);

@@ -2,6 +2,7 @@ package barfit.input;
 
 import barfit.catalogs.BarCatalog;
 import barfit.catalogs.BarSize;
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YList;
@@ -10,6 +11,7 @@ import barfit.catalogs.yaml.YScalar;
 import barfit.catalogs.yaml.YMap;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
+import barfit.section.MaterialLimits;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import java.util.ArrayList;
@@ -75,12 +77,12 @@ public final class SearchReader {
                 "compression_sizes", "max_layers", "stirrups", "max_bar_sizes_per_beam", "layer_gap"); // layer_gap: SettingsReader
         List<Double> widths = d.widths();
         if (f.has("widths")) {
-            widths = sortedLengths(f, "widths", "web widths, " + len, u);
+            widths = sortedLengths(f, "widths", "web widths, " + len, u, InputLimits.WEB_WIDTH);
         }
         List<Double> depths = d.depths();
         if (f.has("depth")) {
             YFields r = f.map("depth", "the depth range {min, max, step}").allowOnly("min", "max", "step");
-            depths = lengthRange(r, u, "total heights, " + len, 2000);
+            depths = lengthRange(r, u, "total heights, " + len, 2000, InputLimits.HEIGHT);
         }
         List<BarSize> bars = f.has("bar_sizes") ? barList(f, "bar_sizes", s.catalog()) : d.barSizes();
         List<BarSize> comp = f.has("compression_sizes") ? barList(f, "compression_sizes", s.catalog())
@@ -106,9 +108,10 @@ public final class SearchReader {
                 TreeSet<Integer> set = new TreeSet<>();
                 for (int i = 0; i < l.size(); i++) {
                     double v = YFields.numberOf(l.get(i), st.child("legs") + "[" + (i + 1) + "]", "a whole number of legs >= 2");
-                    if (v != Math.rint(v) || v < 2 || v > 12) {
+                    if (v != Math.rint(v) || v < 2 || v > InputLimits.MAX_LEGS) {
                         throw new InputError(l.get(i).location(), st.child("legs") + "[" + (i + 1)
-                                + "]: expected a whole number of legs from 2 to 12, got " + ((YScalar) l.get(i)).text());
+                                + "]: expected a whole number of legs from 2 to " + InputLimits.MAX_LEGS + ", got "
+                                + Echo.cut(((YScalar) l.get(i)).text()));
                     }
                     set.add((int) v);
                 }
@@ -119,14 +122,15 @@ public final class SearchReader {
             }
             if (st.has("spacing")) {
                 YFields r = st.map("spacing", "the spacing range {min, max, step}").allowOnly("min", "max", "step");
-                spacings = lengthRange(r, u, "stirrup spacings, " + len, 200);
+                spacings = lengthRange(r, u, "stirrup spacings, " + len, 200, InputLimits.STIRRUP_SPACING);
             }
         }
         return new SearchSpace(widths, depths, bars, comp, layers, stirrupSizes, legs, spacings)
                 .withBarsPerTwoLegs(barsPerTwoLegs(doc));
     }
 
-    private static List<Double> sortedLengths(YFields f, String key, String what, UnitSystem u) {
+    private static List<Double> sortedLengths(YFields f, String key, String what, UnitSystem u,
+            InputLimits.Range range) {
         YList l = f.list(key, what);
         TreeSet<Double> set = new TreeSet<>();
         for (int i = 0; i < l.size(); i++) {
@@ -134,6 +138,10 @@ public final class SearchReader {
             String path = f.child(key) + "[" + (i + 1) + "]";
             double v = YFields.numberOf(n, path, "a positive number (" + what + ")");
             YFields.requirePositive(n, path, v, what);
+            String problem = range.problem(u, v);
+            if (problem != null) {
+                throw new InputError(n.location(), path + ": " + problem);
+            }
             set.add(u.toSI(v, Dim.LENGTH));
         }
         if (set.isEmpty()) {
@@ -142,9 +150,10 @@ public final class SearchReader {
         return List.copyOf(set);
     }
 
-    private static List<Double> lengthRange(YFields r, UnitSystem u, String what, int maxCount) {
-        double min = r.positive("min", "smallest of the " + what);
-        double max = r.positive("max", "largest of the " + what);
+    private static List<Double> lengthRange(YFields r, UnitSystem u, String what, int maxCount,
+            InputLimits.Range range) {
+        double min = InputLimits.require(r, "min", range, u, r.positive("min", "smallest of the " + what));
+        double max = InputLimits.require(r, "max", range, u, r.positive("max", "largest of the " + what));
         double step = r.positive("step", "step between " + what);
         if (max < min) {
             throw r.error("max", "expected max >= min (" + SettingsReader.fmt(min) + "), got " + SettingsReader.fmt(max));
@@ -303,11 +312,22 @@ public final class SearchReader {
                     grade = Double.parseDouble(e.key());
                 } catch (NumberFormatException ex) {
                     throw new InputError(e.keyLocation(), g.path() + ": expected f'c values as keys, in "
-                            + s.units().unit(Dim.STRESS) + ", got '" + e.key() + "'");
+                            + s.units().unit(Dim.STRESS) + ", got '" + Echo.cut(e.key()) + "'");
                 }
                 double price = YFields.numberOf(e.value(), g.child(e.key()), "a rate >= 0");
                 if (price < 0 || grade <= 0) {
                     throw new InputError(e.value().location(), g.child(e.key()) + ": expected a positive f'c and a rate >= 0");
+                }
+                double fcLo = s.units().limit(MaterialLimits.fcMin(s.units().code()), Dim.STRESS);
+                double fcHi = s.units().limit(MaterialLimits.fcMax(s.units().code()), Dim.STRESS);
+                if (!(grade >= fcLo * (1 - 1e-9) && grade <= fcHi * (1 + 1e-9))) {
+                    throw new InputError(e.keyLocation(), g.child(Echo.cut(e.key())) + ": expected f'c between "
+                            + SettingsReader.fmt(fcLo) + " and " + SettingsReader.fmt(fcHi) + " "
+                            + s.units().unit(Dim.STRESS) + ", got " + SettingsReader.fmt(grade));
+                }
+                String problem = InputLimits.RATE.problem(s.units(), price);
+                if (problem != null) {
+                    throw new InputError(e.value().location(), g.child(Echo.cut(e.key())) + ": " + problem);
                 }
                 m.put(s.units().toSI(grade, Dim.STRESS), us ? price * YD3_PER_M3 : price);
             }
@@ -326,6 +346,7 @@ public final class SearchReader {
         if (!f.has(key)) {
             return Optional.empty();
         }
-        return Optional.of(f.nonNegative(key, "a rate >= 0 (" + what + ")"));
+        return Optional.of(InputLimits.require(f, key, InputLimits.RATE, UnitSystem.SI,
+                f.nonNegative(key, "a rate >= 0 (" + what + ")")));
     }
 }

@@ -1,6 +1,7 @@
 package barfit.input;
 
 import barfit.catalogs.BarSize;
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.catalogs.yaml.YFields;
@@ -31,12 +32,17 @@ public final class SectionReader {
         this.u = settings.units();
     }
 
-    public double length(YFields f, String key, String what) {
-        return u.toSI(f.positive(key, what + ", " + u.unit(Dim.LENGTH)), Dim.LENGTH);
+    /** A positive length within {@code range} (null: no range), in mm. */
+    public double length(YFields f, String key, String what, InputLimits.Range range) {
+        double v = f.positive(key, what + ", " + u.unit(Dim.LENGTH));
+        if (range != null) {
+            InputLimits.require(f, key, range, u, v);
+        }
+        return u.toSI(v, Dim.LENGTH);
     }
 
-    public Optional<Double> optLength(YFields f, String key, String what) {
-        return f.optPositive(key, what + ", " + u.unit(Dim.LENGTH)).map(v -> u.toSI(v, Dim.LENGTH));
+    public Optional<Double> optLength(YFields f, String key, String what, InputLimits.Range range) {
+        return f.has(key) ? Optional.of(length(f, key, what, range)) : Optional.empty();
     }
 
     /**
@@ -46,16 +52,17 @@ public final class SectionReader {
      */
     public Flange flange(YFields f, double webWidth, Span span) {
         f.allowOnly("width", "thickness", "type", "clear_to_next_web");
-        double bf = length(f, "width", "flange width");
-        double hf = length(f, "thickness", "flange (slab) thickness");
-        Double sw = optLength(f, "clear_to_next_web", "the clear distance from the web to the next web").orElse(null);
+        double bf = length(f, "width", "flange width", InputLimits.FLANGE_WIDTH);
+        double hf = length(f, "thickness", "flange (slab) thickness", InputLimits.FLANGE_THICKNESS);
+        Double sw = optLength(f, "clear_to_next_web", "the clear distance from the web to the next web",
+                InputLimits.WEB_GAP).orElse(null);
         boolean oneSided = false;
         if (f.has("type")) {
             String t = f.text("type", "T or L");
             if (t.equals("L")) {
                 oneSided = true;
             } else if (!t.equals("T")) {
-                throw f.error("type", "expected T (flange on both sides) or L (one side), got \"" + t + "\"");
+                throw f.error("type", "expected T (flange on both sides) or L (one side), got \"" + Echo.cut(t) + "\"");
             }
         }
         if (bf < webWidth) {
@@ -68,8 +75,8 @@ public final class SectionReader {
     /** The section of a check beam; {@code span} (may be null) bounds its flange's effective width. */
     public SectionShape shape(YFields sec, Span span) {
         sec.allowOnly("width", "height", "flange");
-        double b = length(sec, "width", "web width");
-        double h = length(sec, "height", "total height");
+        double b = length(sec, "width", "web width", InputLimits.WEB_WIDTH);
+        double h = length(sec, "height", "total height", InputLimits.HEIGHT);
         Flange flange = null;
         if (sec.has("flange")) {
             YFields f = sec.map("flange", "the flange: {width, thickness}");
@@ -105,7 +112,7 @@ public final class SectionReader {
             double stacked = i == 0 ? det.firstLayerCentroid(db) : prevCentroid + prevDb / 2 + det.layerGap() + db / 2;
             double y = stacked;
             if (l.has("depth")) {
-                y = length(l, "depth", "distance from the " + face.word() + " face to the layer's centroid");
+                y = length(l, "depth", "distance from the " + face.word() + " face to the layer's centroid", null);
                 double least = det.firstLayerCentroid(db);
                 if (y < least - 1e-6) {
                     throw l.error("depth", "a depth of " + fmt(y, Dim.LENGTH) + " puts the bars inside the cover; expected at least cover + stirrup + db/2 = "
@@ -157,26 +164,30 @@ public final class SectionReader {
         if (legs < 2) {
             throw s.error("legs", "expected at least 2 legs (a closed stirrup), got " + legs);
         }
-        double spacing = length(s, "spacing", "stirrup spacing along the beam");
+        if (legs > InputLimits.MAX_LEGS) {
+            throw s.error("legs", "expected 2 to " + InputLimits.MAX_LEGS + " legs, got " + legs);
+        }
+        double spacing = length(s, "spacing", "stirrup spacing along the beam", InputLimits.STIRRUP_SPACING);
         return new Stirrups(bar, legs, spacing);
     }
 
     public SkinBars skin(YFields s) {
         s.allowOnly("bar", "spacing");
-        return new SkinBars(bar(s, "bar"), length(s, "spacing", "vertical spacing of skin bars"));
+        return new SkinBars(bar(s, "bar"), length(s, "spacing", "vertical spacing of skin bars", InputLimits.SKIN_SPACING));
     }
 
     public EndCondition ends(YFields beam) {
         String e = beam.text("ends", "simple, one-end-continuous, both-ends-continuous or cantilever");
         EndCondition ec = EndCondition.byKey(e);
         if (ec == null) {
-            throw beam.error("ends", "expected simple, one-end-continuous, both-ends-continuous or cantilever, got \"" + e + "\"");
+            throw beam.error("ends", "expected simple, one-end-continuous, both-ends-continuous or cantilever, got \"" + Echo.cut(e) + "\"");
         }
         return ec;
     }
 
     public Span span(YFields beam) {
-        Double len = beam.optPositive("span", "span length, " + u.unit(Dim.SPAN)).map(v -> u.toSI(v, Dim.SPAN)).orElse(null);
+        Double len = beam.optPositive("span", "span length, " + u.unit(Dim.SPAN))
+                .map(v -> u.toSI(InputLimits.require(beam, "span", InputLimits.SPAN, u, v), Dim.SPAN)).orElse(null);
         EndCondition ends = beam.has("ends") ? ends(beam) : null;
         if (ends != null && len == null) {
             throw beam.error("ends", "ends given without a span; expected span: <length in " + u.unit(Dim.SPAN) + ">");

@@ -3,6 +3,7 @@ package barfit.input;
 import barfit.catalogs.BarCatalog;
 import barfit.catalogs.BarCatalogs;
 import barfit.catalogs.BarSize;
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.catalogs.yaml.YFields;
@@ -36,12 +37,12 @@ public final class SettingsReader {
             case "SI" -> units = UnitSystem.SI;
             case "US" -> units = UnitSystem.US;
             default -> throw doc.error("units", "expected SI (mm, MPa, kN, kN·m, m) or US (in, psi, kip, kip·ft, ft), got \""
-                    + unitsText + "\"");
+                    + Echo.cut(unitsText) + "\"");
         }
         if (doc.has("code")) {
             String code = doc.text("code", "ACI 318-19");
             if (!code.replace(" ", "").equalsIgnoreCase("ACI318-19")) {
-                throw doc.error("code", "expected ACI 318-19 (the only code barfit checks), got \"" + code + "\"");
+                throw doc.error("code", "expected ACI 318-19 (the only code barfit checks), got \"" + Echo.cut(code) + "\"");
             }
         }
         CodeEquations code = units.code();
@@ -54,10 +55,12 @@ public final class SettingsReader {
         double fcUser = units.fromSI(fc, Dim.STRESS);
         if (fcUser < fcMin * (1 - 1e-9) || fcUser > fcMax) {
             throw concrete.error("fc", "expected f'c between " + fmt(fcMin) + " and " + fmt(fcMax) + " "
-                    + units.unit(Dim.STRESS) + " (Table 19.2.1.1 sets the minimum), got " + fmt(fcUser));
+                    + units.unit(Dim.STRESS) + " (Table 19.2.1.1 sets the minimum), got " + fmt(fcUser)
+                    + stressHint(units, fcUser, fcMin, fcMax));
         }
         double agg = concrete.optPositive("aggregate", "maximum aggregate size, " + units.unit(Dim.LENGTH))
-                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(us ? 0.75 * 25.4 : 20.0);
+                .map(v -> toSI(units, InputLimits.require(concrete, "aggregate", InputLimits.AGGREGATE, units, v),
+                        Dim.LENGTH)).orElse(us ? 0.75 * 25.4 : 20.0);
         String lambdaRange = MaterialLimits.LAMBDA_MIN + " to " + MaterialLimits.LAMBDA_MAX;
         double lambda = concrete.optPositive("lambda", "lightweight factor, " + lambdaRange).orElse(MaterialLimits.LAMBDA_MAX);
         if (lambda < MaterialLimits.LAMBDA_MIN || lambda > MaterialLimits.LAMBDA_MAX) {
@@ -73,17 +76,21 @@ public final class SettingsReader {
         if (fyUser < fyMin * (1 - 1e-9) || fyUser > fyMax * (1 + 1e-9)) {
             throw steel.error("fy", "expected fy between " + fmt(fyMin) + " and " + fmt(fyMax) + " "
                     + units.unit(Dim.STRESS) + " (Table 20.2.2.4(a) limits flexural bars to " + fmt(fyMax) + "), got "
-                    + fmt(fyUser));
+                    + fmt(fyUser) + stressHint(units, fyUser, fyMin, fyMax));
         }
         double fyt = steel.optPositive("fyt", "stirrup fyt, " + units.unit(Dim.STRESS))
                 .map(v -> toSI(units, v, Dim.STRESS)).orElse(fy);
-        if (units.fromSI(fyt, Dim.STRESS) < fyMin * (1 - 1e-9)) {
-            throw steel.error("fyt", "expected fyt of at least " + fmt(fyMin) + " " + units.unit(Dim.STRESS));
+        double fytUser = units.fromSI(fyt, Dim.STRESS);
+        double fytMax = units.limit(MaterialLimits.fytMax(code), Dim.STRESS);
+        if (fytUser < fyMin * (1 - 1e-9) || fytUser > fytMax * (1 + 1e-9)) {
+            throw steel.error("fyt", "expected fyt between " + fmt(fyMin) + " and " + fmt(fytMax) + " "
+                    + units.unit(Dim.STRESS) + ", got " + fmt(fytUser) + stressHint(units, fytUser, fyMin, fytMax));
         }
 
         BarCatalog catalog = catalog(doc, file, units);
         double cover = doc.optPositive("cover", "clear cover to the stirrups, " + units.unit(Dim.LENGTH))
-                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(code.coverInterior());
+                .map(v -> toSI(units, InputLimits.require(doc, "cover", InputLimits.COVER, units, v), Dim.LENGTH))
+                .orElse(code.coverInterior());
         String stirrupName = doc.optText("stirrup", "the stirrup bar size").orElse(us ? "3" : "10");
         BarSize stirrup = bar(catalog, stirrupName, doc.locationOf("stirrup"), "stirrup");
         // layer_gap may stand at the top or under search: (where the search's other layout rules are)
@@ -105,11 +112,12 @@ public final class SettingsReader {
                     + units.unit(Dim.LENGTH) + " between layers is below 25.2.2; expected at least "
                     + fmt(units.fromSI(code.minLayerGap(), Dim.LENGTH)) + " " + units.unit(Dim.LENGTH));
         }
+        InputLimits.require(gapAt, "layer_gap", InputLimits.LAYER_GAP, units, units.fromSI(gap, Dim.LENGTH));
         Exposure exposure = Exposure.INTERIOR;
         if (doc.has("exposure")) {
             String e = doc.text("exposure", "interior, weather or ground");
             exposure = Arrays.stream(Exposure.values()).filter(x -> x.key().equals(e)).findFirst()
-                    .orElseThrow(() -> doc.error("exposure", "expected interior, weather or ground, got \"" + e + "\""));
+                    .orElseThrow(() -> doc.error("exposure", "expected interior, weather or ground, got \"" + Echo.cut(e) + "\""));
         }
         Materials materials = new Materials(fc, fy, fyt, agg, lambda);
         Detailing detailing = new Detailing(cover, stirrup, gap, exposure);
@@ -127,7 +135,7 @@ public final class SettingsReader {
         Path p = base == null ? Path.of(id) : base.resolve(id);
         if (!Files.exists(p)) {
             throw doc.error("bars", "expected one of " + String.join(", ", BarCatalogs.BUILT_IN)
-                    + " or the path of a catalog file, got \"" + id + "\" (no such file)");
+                    + " or the path of a catalog file, got \"" + Echo.cut(id) + "\" (no such file)");
         }
         return BarCatalogs.load(Path.of(id).isAbsolute() ? p : relativeToCwd(p));
     }
@@ -142,7 +150,7 @@ public final class SettingsReader {
 
     /** Looks a bar size up, or fails at {@code where} listing the sizes the catalog has. */
     public static BarSize bar(BarCatalog catalog, String name, Location at, String path) {
-        return catalog.find(name).orElseThrow(() -> new InputError(at, path + ": bar size \"" + name
+        return catalog.find(name).orElseThrow(() -> new InputError(at, path + ": bar size \"" + Echo.cut(name)
                 + "\" is not in catalog " + catalog.id() + "; expected one of: "
                 + String.join(", ", catalog.designations())));
     }
@@ -156,6 +164,27 @@ public final class SettingsReader {
             return String.valueOf((long) v);
         }
         return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    /** A beam's mark: any text but an empty one. */
+    static String id(YFields beam) {
+        String id = beam.text("id", "the beam's mark, e.g. B1");
+        if (id.isEmpty()) {
+            throw beam.error("id", "expected the beam's mark, e.g. B1, got an empty text");
+        }
+        return id;
+    }
+
+    /** A hint when a stress out of range would be in range in the other unit system's unit. */
+    private static String stressHint(UnitSystem units, double v, double min, double max) {
+        double psiPerMpa = CodeEquations.PSI_PER_MPA;
+        if (units == UnitSystem.SI && v > max && v / psiPerMpa >= min && v / psiPerMpa <= max) {
+            return " (did you give psi? SI stresses are in MPa, or write units: US)";
+        }
+        if (units == UnitSystem.US && v < min && v * psiPerMpa >= min && v * psiPerMpa <= max) {
+            return " (did you give MPa? inch-pound stresses are in psi, or write units: SI)";
+        }
+        return "";
     }
 
     /** Reads the file and wraps the root as a map of settings. */

@@ -7,6 +7,7 @@ import barfit.section.CheckReport;
 import barfit.section.CheckResult;
 import barfit.section.FlexureResult;
 import barfit.section.SpanChecks;
+import barfit.section.SectionChecks;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import java.util.List;
@@ -66,12 +67,12 @@ public final class BeamText {
         BeamLayout l = d.layout();
         TextTable t = new TextTable(false, false);
         t.row("demand", demand(p, u));
-        t.row("section", Words.shape(l.shape(), u) + (l.flange() != null ? " (flange counted at mid-span)" : ""));
+        t.row("section", Words.shape(l.shape(), u) + (l.flange() == null ? ""
+                : p.cantilever() ? " (flange in tension at the fixed end: not counted in strength)"
+                : " (flange counted at mid-span)"));
         if (l.flange() != null && (p.leftSupport() || p.rightSupport())) {
-            var f = l.shape().flange();
-            t.row("flange", "in tension over the supports: 24.3.4 asks part of the top bars to be spread over min(bf, ln/10) = "
-                    + u.withUnit(f.tensionBarsWidth(), Dim.LENGTH) + (f.outerFlangeBars() ? ", with more bars in the outer flange"
-                            : "") + " (not placed by barfit)");
+            t.row("flange", (p.cantilever() ? "in tension at the fixed end: " : "in tension over the supports: ")
+                    + SectionChecks.tensionFlangeNote(l.shape().flange(), u.code()).replace("tension bars", "top bars"));
         }
         t.row("bottom", counts(l.bottomCounts(), l.bottom().label()) + ", full span"
                 + (p.bottomAnchored() ? ", anchored at the supports (compression steel there)" : ""));

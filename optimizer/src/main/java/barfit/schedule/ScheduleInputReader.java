@@ -1,5 +1,6 @@
 package barfit.schedule;
 
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YamlReader;
@@ -7,7 +8,9 @@ import barfit.input.CsvBeamsReader;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
+import barfit.input.InputLimits;
 import barfit.input.SettingsReader;
+import barfit.units.UnitSystem;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -112,11 +115,12 @@ public final class ScheduleInputReader {
                 case "same_section" -> same = true;
                 case "independent" -> same = false;
                 default -> throw r.error("groups", "expected same_section (beams with the same group share b x h) or "
-                        + "independent, got \"" + g + "\"");
+                        + "independent, got \"" + Echo.cut(g) + "\"");
             }
         }
         double formwork = r.has("formwork_set_cost")
-                ? r.nonNegative("formwork_set_cost", "the cost of the forms for one section size") : 0;
+                ? InputLimits.require(r, "formwork_set_cost", InputLimits.SET_COST, UnitSystem.SI,
+                        r.nonNegative("formwork_set_cost", "the cost of the forms for one section size")) : 0;
         return new Rationalise(sizes, bars, same, formwork);
     }
 }

@@ -18,13 +18,14 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * Every file in the bad-input corpus must give exit code 2 and exactly one line on stderr that names
  * the file and the line, says what was expected, and carries no stack trace. The first line of each
- * file says what to expect: {@code # expect LINE: text}. Files named design-* go to {@code design},
+ * file says what to expect: {@code # expect LINE: text}, or {@code # expect LINE:COLUMN: text} where the
+ * column matters too (syntax errors). Files named design-* go to {@code design},
  * compare-* to {@code compare}, analyse-* to {@code analyse}, the others to {@code check}. Bad command-line options get the same
  * treatment: one line naming the option or file and what is expected, exit 2, nothing written.
  */
 class BadInputTest {
     static final Path CORPUS = Path.of("src/test/resources/bad-input");
-    private static final Pattern EXPECT = Pattern.compile("# expect (\\d+): (.*)");
+    private static final Pattern EXPECT = Pattern.compile("# expect (\\d+(?::\\d+)?): (.*)");
 
     static Stream<Path> corpus() throws IOException {
         List<Path> files;
@@ -40,7 +41,7 @@ class BadInputTest {
     void rejectedWithOneLine(Path file) throws IOException {
         String first = Files.readAllLines(file).get(0);
         Matcher m = EXPECT.matcher(first);
-        assertTrue(m.matches(), "first line must be '# expect LINE: text': " + first);
+        assertTrue(m.matches(), "first line must be '# expect LINE: text' or '# expect LINE:COLUMN: text': " + first);
         String line = m.group(1);
         String text = m.group(2);
         String before = Files.readString(file);
@@ -72,7 +73,15 @@ class BadInputTest {
                 Arguments.of(List.of("sweep", STUDY, "--plot", "no-such-dir/x.svg"),
                         "no-such-dir/x.svg:", "expected --plot in an existing directory"),
                 Arguments.of(List.of("sweep", STUDY, "--csv", "--format", "json"), "--csv:", "expected one of them"),
-                Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"));
+                Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"),
+                // a number the parser cannot read, in words (not "'abc' is not a double")
+                Arguments.of(List.of("compare", STUDY, "--fc", "abc"), "--fc:",
+                        "expected numbers separated by commas, got 'abc'"),
+                Arguments.of(List.of("design", STUDY, "--workers", "two"), "--workers:", "expected a whole number, got 'two'"),
+                // --force says what to replace: alone it is a usage error, not silently ignored
+                Arguments.of(List.of("sweep", STUDY, "--force"), "--force:", "expected --plot FILE.svg with it"),
+                Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
+                        "--force"), "--force:", "expected --out DIR with it"));
     }
 
     @ParameterizedTest(name = "{0}")

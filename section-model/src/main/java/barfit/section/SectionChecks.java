@@ -395,10 +395,7 @@ public final class SectionChecks {
         }
         boolean inTension = bending == Bending.HOGGING;
         if (inTension) {
-            notes.add("flange in tension: 24.3.4 asks part of the tension bars to be spread over "
-                    + (f.spanKnown() ? "min(bf, ln/10) = " + length(f.tensionBarsWidth(), code)
-                            : "the effective width, at most ln/10")
-                    + (f.outerFlangeBars() ? ", with more bars in the outer flange" : "") + " (not placed by barfit)");
+            notes.add("flange in tension: " + tensionFlangeNote(f, code));
         }
         if (t.isOn()) {
             t.heading("Effective flange width", "6.3.2.1");
@@ -434,6 +431,17 @@ public final class SectionChecks {
         out.add(CheckResult.atMost("flange_width", f.reduced() ? "Flange taken at its effective width"
                 : "Effective flange width", "Table 6.3.2.1", Q.length(f.width()), Q.length(limit),
                 String.join("; ", notes)));
+    }
+
+    /**
+     * What 24.3.4 asks of the tension bars where the flange is in tension (hogging), in words: the note of
+     * the {@code flange_width} check, and what a span's report says of its supports.
+     */
+    public static String tensionFlangeNote(Flange f, CodeEquations code) {
+        return "24.3.4 asks part of the tension bars to be spread over "
+                + (f.spanKnown() ? "min(bf, ln/10) = " + length(f.tensionBarsWidth(), code)
+                        : "the effective width, at most ln/10")
+                + (f.outerFlangeBars() ? ", with more bars in the outer flange" : "") + " (not placed by barfit)";
     }
 
     /** A length in the edition's unit, for notes (mm, or in for inch-pound input). */

@@ -1,5 +1,7 @@
 package barfit.catalogs.yaml;
 
+import barfit.catalogs.Decimal;
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -55,7 +57,7 @@ public final class YFields {
         Set<String> ok = new LinkedHashSet<>(Arrays.asList(allowed));
         for (YMap.Entry e : map.entries()) {
             if (!ok.contains(e.key())) {
-                throw new InputError(e.keyLocation(), label(path) + "unknown key '" + e.key()
+                throw new InputError(e.keyLocation(), label(path) + "unknown key '" + Echo.cut(e.key())
                         + "'; expected one of: " + String.join(", ", ok));
             }
         }
@@ -189,26 +191,29 @@ public final class YFields {
     // ---- helpers usable on bare nodes ----
 
     public static double numberOf(YNode n, String path, String expected) {
-        if (n instanceof YScalar s && s.number()) {
-            double v;
-            try {
-                v = Double.parseDouble(s.text());
-            } catch (NumberFormatException e) {
-                throw new InputError(n.location(), path + ": expected " + expected + ", got " + n.kind());
-            }
-            if (!Double.isFinite(v)) {
-                throw new InputError(n.location(), path + ": expected " + expected + ", got " + n.kind());
-            }
-            return v;
+        String text = n instanceof YScalar s && !s.nul() && !s.bool() ? s.text().strip() : null;
+        // a number as written, or a quoted text that reads as a plain decimal ("300"); checked in one pass
+        double v = text == null ? Double.NaN : ((YScalar) n).number() ? parseYamlNumber(text) : Decimal.parse(text);
+        if (Double.isNaN(v)) {
+            throw new InputError(n.location(), path + ": expected " + expected + ", got " + n.kind());
         }
-        if (n instanceof YScalar s && !s.nul() && !s.bool() && looksNumeric(s.text())) {
-            return Double.parseDouble(s.text().strip());
+        if (Double.isInfinite(v)) {
+            throw new InputError(n.location(), path + ": expected " + expected + ", got " + n.kind()
+                    + ", too large a number");
         }
-        throw new InputError(n.location(), path + ": expected " + expected + ", got " + n.kind());
+        return v;
     }
 
-    private static boolean looksNumeric(String t) {
-        return t.strip().matches("[-+]?(\\d+\\.?\\d*|\\.\\d+)([eE][-+]?\\d+)?");
+    /**
+     * A scalar the YAML parser took for a number (its own scan of the digits is linear): NaN for the YAML
+     * forms Java does not read, such as "1_000" or "0x1F".
+     */
+    private static double parseYamlNumber(String text) {
+        try {
+            return Double.parseDouble(text);
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
     }
 
     public static void requirePositive(YNode n, String path, double v, String expected) {
@@ -226,6 +231,6 @@ public final class YFields {
     }
 
     private static String text(YNode n) {
-        return n instanceof YScalar s ? s.text() : n.kind();
+        return n instanceof YScalar s ? Echo.cut(s.text()) : n.kind();
     }
 }

@@ -1,8 +1,11 @@
 package barfit.catalogs.yaml;
 
+import barfit.catalogs.Echo;
+
 /**
  * A scalar as written. {@code number} is true for an unquoted integer or decimal, {@code bool} for
- * true/false, {@code nul} for null or an empty value.
+ * true/false, {@code nul} for null or an empty value. {@link #kind} quotes at most {@link Echo#MAX}
+ * characters of the text.
  */
 public record YScalar(String text, boolean number, boolean bool, boolean nul, Location location) implements YNode {
 
@@ -12,11 +15,11 @@ public record YScalar(String text, boolean number, boolean bool, boolean nul, Lo
             return "an empty value";
         }
         if (number) {
-            return "the number " + text;
+            return "the number " + Echo.cut(text);
         }
         if (bool) {
             return "the word " + text;
         }
-        return "the text \"" + text + "\"";
+        return "the text \"" + Echo.cut(text) + "\"";
     }
 }

@@ -419,7 +419,9 @@ public final class ScheduleHtml {
                     + (p.flange().oneSided() ? " (one side)" : "")
                     + (p.flange().webGapKnown() ? ", clear to the next web " + len(p.flange().clearToNextWeb(), u)
                             : ", clear distance to the next web not given (sw/2 limit not checked)")
-                    + "; taken at most at the effective width of Table 6.3.2.1, counted at mid-span only");
+                    + "; taken at most at the effective width of Table 6.3.2.1, "
+                    + (p.cantilever() ? "in tension at the fixed end, so not counted in strength (24.3.4: see the "
+                            + "checks)" : "counted at mid-span only"));
         }
         kv(out, "Mu", moments(p, u));
         kv(out, "Vu at d from the faces", shears(p, u));
