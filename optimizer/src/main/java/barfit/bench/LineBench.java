@@ -36,9 +36,12 @@ public final class LineBench {
         for (int s = 1; s <= spans.size(); s++) {
             loads.add(Load.uniform(s, 0, spans.get(s - 1), 26, 14));
         }
-        loads.add(Load.point(2, 3000, 60e3, 30e3));
-        loads.add(Load.uniform(5, 0, 2500, 10, 0));
-        double ec = 4700 * Math.sqrt(30);
+        double kN = 1000; // invented loads in kN and lengths in m, converted to N and mm
+        double m = 1000;
+        loads.add(Load.point(2, 3 * m, 60 * kN, 30 * kN));
+        loads.add(Load.uniform(5, 0, 2.5 * m, 10, 0));
+        double ec = barfit.section.Deflection.ec(new barfit.section.Materials(30, 420, 420, 20, 1.0),
+                barfit.section.CodeEquations.SI);
         return new Line("bench", spans, 0, 2200, sup, loads, Stiffness.beamEI(ec, SectionShape.rectangular(300, 600)), ec,
                 540, null);
     }
