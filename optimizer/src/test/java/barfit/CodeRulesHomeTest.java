@@ -117,6 +117,7 @@ class CodeRulesHomeTest {
                     "invented concrete price factors by grade: cost data"),
             new Allowed("barfit/bench/BeamBench.java", null, null, "invented spans for the timing bench: data"),
             new Allowed("barfit/bench/SectionBench.java", null, null, "invented sections for the timing bench: data"),
+            new Allowed("barfit/bench/LineBench.java", null, null, "an invented line for the timing bench: data"),
             new Allowed("barfit/bench/ScheduleGenerator.java", "0.9", "0.9 + 0.05 * r.nextInt(5)",
                     "invented span lengths: data"));
 
