@@ -99,7 +99,7 @@ public final class SpanTarget implements Target {
                 l.bottom().designation(), "top", l.topContinuous(), l.top().designation(), f.phiMn(),
                 Math.abs(governing.demand().mu()), f.epsT(), f.phi(), f.strainClass(), used, needed,
                 l.bottomCount() + top, layers, o.best().cost(), o.status() + " over " + o.proof().booleans() + " booleans",
-                fails, null);
+                fails, null, false);
     }
 
     private static String counts(List<Integer> c, String label) {
