@@ -88,7 +88,9 @@ public final class Compare {
             widths.add(w);
         }
         String within = capGiven ? ", h ≤ " + say.length(h) : "";
-        options.add(new Option("widen", "widths up to " + say.length(widths.get(widths.size() - 1)) + within,
+        // a beam that fixes its width is studied with the width free, narrower as well as wider
+        options.add(new Option("widen", (t.fixedWidth() != null ? "any width up to " : "widths up to ")
+                + say.length(widths.get(widths.size() - 1)) + within,
                 t.design(h, space.withWidths(widths), m, cost, true), null, null));
         for (double fc : fcs) {
             Materials mf = new Materials(fc, m.fy(), m.fyt(), m.aggregate(), m.lambda());
@@ -115,7 +117,7 @@ public final class Compare {
             }
             judged.add(o);
         }
-        return recommend(t.id(), h, capGiven, judged, say, t instanceof SpanTarget);
+        return recommend(t.id(), h, capGiven, judged, say, t instanceof SpanTarget, t.fixedWidth() != null);
     }
 
     /** The smallest step between the search's widths, or {@code fallback} (mm) with a single width. */
@@ -148,7 +150,8 @@ public final class Compare {
     public static final double MARGIN_PERCENT = 2.0;
 
     /** The cheapest feasible option, with its reasons in plain words. */
-    static Result recommend(String id, double cap, boolean capGiven, List<Option> options, Say say, boolean span) {
+    static Result recommend(String id, double cap, boolean capGiven, List<Option> options, Say say, boolean span,
+            boolean fixedWidth) {
         List<String> reasons = new ArrayList<>();
         Option best = null;
         Option bestSameGrade = null;
@@ -229,7 +232,10 @@ public final class Compare {
             case "no_compression_steel" -> "The shallowest depth without compression steel, h = "
                     + say.length(best.summary().height()) + ", is cheapest" + (best.summary().height() > cap + 1e-9
                     ? "; it is deeper than the cap" : "");
-            case "widen" -> "Widening to b = " + say.length(best.summary().width()) + scope + " is cheapest";
+            case "widen" -> (atCap.summary().feasible() && best.summary().width() < atCap.summary().width() - 1e-9
+                    ? "Narrowing to b = " : "Widening to b = ") + say.length(best.summary().width())
+                    + (fixedWidth && atCap.summary().feasible() ? " from the fixed " + say.length(atCap.summary().width())
+                    : "") + scope + " is cheapest";
             default -> "Stronger concrete, f'c = " + say.stress(best.fc()) + scope + ", is cheapest";
         };
         if (atCap.summary().feasible() && best != atCap) {
@@ -268,8 +274,8 @@ public final class Compare {
             if (s.compressionAvoidable() && singly != null && singly.feasible() && singly.height() <= cap + 1e-9) {
                 double diff = 100 * (singly.total() - s.total()) / s.total();
                 what = "carries compression steel beyond the hangers: with the hangers alone its other bars would fail"
-                        + governs + ", but another layout without it passes within the cap (h = "
-                        + say.length(singly.height()) + ", " + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
+                        + governs + ", but another layout without it passes " + (capGiven ? "within the cap"
+                        : "in the search") + " (h = " + say.length(singly.height()) + ", " + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
                         + "), so the compression steel is a matter of cost, not of need";
             } else {
                 what = "needs compression steel beyond the hangers: with the hangers alone it fails" + governs

@@ -59,6 +59,11 @@ public final class SectionTarget implements Target {
     }
 
     @Override
+    public Double fixedWidth() {
+        return p.fixedWidth();
+    }
+
+    @Override
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
         SectionProblem q = new SectionProblem(p.id(), m, p.detailing(), p.code(), space, p.mu(), p.vu(), p.span(), cap,
                 freeWidth ? null : p.fixedWidth(), p.flange(), p.costLength());

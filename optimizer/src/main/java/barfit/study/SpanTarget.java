@@ -53,6 +53,11 @@ public final class SpanTarget implements Target {
     }
 
     @Override
+    public Double fixedWidth() {
+        return p.fixedWidth();
+    }
+
+    @Override
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
         BeamProblem q = new BeamProblem(p.id(), m, p.detailing(), p.code(), space, p.span(), p.ends(), p.mLeft(),
                 p.mMid(), p.mRight(), p.vLeft(), p.vRight(), p.service(), p.limits(), cap, freeWidth ? null : p.fixedWidth(), p.flange(),

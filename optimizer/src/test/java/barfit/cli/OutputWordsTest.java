@@ -325,6 +325,27 @@ class OutputWordsTest {
     }
 
     @Test
+    void compareSaysNarrowingWhenAFixedWidthIsLetGo() throws IOException {
+        // the corridor beam with its web fixed at 400 mm: with the width free the cheapest web is narrower
+        Path f = write("fixed.yaml", CORRIDOR.replace("    span: 6.0\n", "    span: 6.0\n    width: 400\n"));
+        JsonNode b = json(Cli.run("compare", f.toString(), "--format", "json")).get("beams").get(0);
+        JsonNode widen = null;
+        for (JsonNode o : b.get("options")) {
+            if (o.get("kind").asText().equals("widen")) {
+                widen = o;
+            }
+        }
+        assertTrue(widen != null && widen.get("width").asDouble() < 400, String.valueOf(widen));
+        String out = Cli.run("compare", f.toString()).out();
+        assertFalse(out.contains("Widening to b = " + (int) widen.get("width").asDouble()), out);
+        assertFalse(out.contains("widths up to"), "the option lets the fixed width go, narrower too: " + out);
+        if (b.get("recommended").asText().equals("widen")) {
+            assertTrue(out.contains("Narrowing to b = " + (int) widen.get("width").asDouble() + " mm from the fixed 400 mm"),
+                    out);
+        }
+    }
+
+    @Test
     void compareTableAndTextAgreeOnWhetherCompressionSteelIsNeeded() throws IOException {
         // the capped middle span of the clinic example (invented): at the cap its layout relies on compression
         // steel for deflection, but a dearer layout without it passes within the cap too
