@@ -91,7 +91,7 @@ public final class BeamText {
             t.row("top", counts(l.topLeft(), l.top().label()) + ", full length and " + span(l.extLeft() - p.span(), u)
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
-            t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + topAtMid(d));
+            t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + topAtMid(d, u));
             if (p.leftSupport()) {
                 t.row("top at left", supportTop(p, l, l.topLeft(), l.extLeft(), u));
             }
@@ -177,13 +177,14 @@ public final class BeamText {
      * What the continuous top bars are at mid-span, read from the strain the section model found there: a
      * bar above the neutral axis is in compression (compression steel), one below it in tension.
      */
-    public static String topAtMid(BeamDesigner.Design d) {
+    public static String topAtMid(BeamDesigner.Design d, UnitSystem u) {
         double strain = strainAt(d, BeamProblem.Place.MID, barfit.section.Face.TOP);
         if (Double.isNaN(strain)) {
             return "";
         }
-        return strain < 0 ? " (compression steel at mid-span: above the neutral axis)"
-                : " (in tension at mid-span: below the neutral axis, so not compression steel there)";
+        String c = "c = " + u.withUnit(d.report().sections().get(BeamProblem.Place.MID).flexure().c(), Dim.LENGTH);
+        return strain < 0 ? " (compression steel at mid-span: above the neutral axis, " + c + ")"
+                : " (in tension at mid-span: below the neutral axis, " + c + ", so not compression steel there)";
     }
 
     /** The largest strain (+ tension) of a face's bars in the section at a place, NaN where none is counted. */

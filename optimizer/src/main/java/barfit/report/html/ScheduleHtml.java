@@ -452,7 +452,7 @@ public final class ScheduleHtml {
             kv(out, "top", perLayer(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
-            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + BeamText.topAtMid(d));
+            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + BeamText.topAtMid(d, u));
             String rule = " (" + Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top()).rule() + ")";
             if (p.leftSupport()) {
                 boolean extra = BeamLayout.sum(l.topLeft()) > l.topContinuous();
