@@ -133,10 +133,15 @@ class OutputWordsTest {
         JsonNode beams = json(Cli.run("design", f.toString(), "--format", "json")).get("beams");
         assertEquals(1, beams.get(0).get("warnings").size());
         assertEquals(0, beams.get(1).get("warnings").size());
-        Cli schedule = Cli.run("schedule", f.toString(), "--quiet");
+        Path out = dir.resolve("out");
+        Cli schedule = Cli.run("schedule", f.toString(), "--quiet", "--out", out.toString());
         assertEquals(0, schedule.exit(), schedule.err());
         String warning = schedule.out().lines().filter(l -> l.startsWith("WARNING")).findFirst().orElseThrow();
         assertTrue(warning.contains("no shears given for NS:") && !warning.contains("WS"), warning);
+        String html = Files.readString(out.resolve("report.html"));
+        String block = html.substring(html.indexOf("id=\"beam-NS\""), html.indexOf("id=\"beam-WS\""));
+        assertTrue(block.contains("<p class=\"warn\">Warning: no shears given"), "the report warns in the beam's block");
+        assertFalse(html.substring(html.indexOf("id=\"beam-WS\"")).contains("no shears given"));
     }
 
     /**
