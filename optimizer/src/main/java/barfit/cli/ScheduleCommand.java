@@ -95,10 +95,11 @@ final class ScheduleCommand implements Callable<Integer> {
         }
         String text = format == OutputFormat.json ? ScheduleJson.render(result) : ScheduleText.render(result);
         if (out != null) {
-            write(result);
+            List<String> written = write(result);
             if (format == OutputFormat.text) {
-                text += "\nwrote " + String.join(", ", OUTPUTS.stream().map(f -> out.resolve(f).toString()).toList())
-                        + "\n";
+                text += "\nwrote " + String.join(", ", written.stream().map(f -> out.resolve(f).toString()).toList())
+                        + (written.contains("standardisation.svg") ? "" : " (no standardisation.svg: its curve is "
+                        + "computed only for a schedule with a rationalise: block)") + "\n";
             }
         }
         spec.commandLine().getOut().print(text);
@@ -132,8 +133,11 @@ final class ScheduleCommand implements Callable<Integer> {
         }
     }
 
-    /** Writes every file to a temporary name first, then moves them in, so a failure leaves no half schedule. */
-    private void write(ScheduleResult r) {
+    /**
+     * Writes every file to a temporary name first, then moves them in, so a failure leaves no half schedule.
+     * Returns the names of the files written.
+     */
+    private List<String> write(ScheduleResult r) {
         Map<String, String> files = new LinkedHashMap<>();
         files.put("schedule.csv", ScheduleCsv.render(r));
         files.put("schedule.json", ScheduleJson.render(r));
@@ -161,6 +165,7 @@ final class ScheduleCommand implements Callable<Integer> {
             if (!files.containsKey("standardisation.svg")) {
                 Files.deleteIfExists(out.resolve("standardisation.svg")); // an earlier run's curve (--force) would mislead
             }
+            return new ArrayList<>(files.keySet());
         } catch (IOException e) {
             for (Path t : temps) {
                 try {

@@ -68,6 +68,11 @@ final class SweepCommand implements Callable<Integer> {
     /** The plot must go to a new (or, with --force, an existing) file in an existing, writable directory. */
     private void checkPlotFile() {
         Location at = Location.ofFile(plot.toString());
+        Path name = plot.getFileName();
+        // the plot is SVG text: a file named .png (or anything else) would hold what its name does not say
+        if (name == null || !name.toString().toLowerCase(java.util.Locale.ROOT).endsWith(".svg")) {
+            throw new InputError(at, "--plot writes an SVG drawing; expected a file name ending in .svg");
+        }
         if (Files.isDirectory(plot)) {
             throw new InputError(at, "is a directory; expected an SVG file name for --plot");
         }

@@ -45,13 +45,29 @@ public final class CostModel {
         return rates.mainBarsPerKg() * rates.lapFactor() * bar.massPerMetre() * count;
     }
 
-    /** Centre-line length of one stirrup set, mm. */
+    /**
+     * Centre-line length of one stirrup set, mm: the closed hoop and a crosstie for every leg beyond two,
+     * {@link #hoopLength} + (legs − 2) {@link #crosstieLength}; the bar list gives the two as separate bars.
+     */
     public double stirrupSetLength(double b, double h, BarSize bar, int legs) {
+        return hoopLength(b, h, bar) + (legs - 2) * crosstieLength(h, bar);
+    }
+
+    /** Centre-line length of the closed hoop, mm: its perimeter inside the cover plus two 135° hooks. */
+    public double hoopLength(double b, double h, BarSize bar) {
         double ds = bar.diameter();
         double w = b - 2 * cover - ds;
         double ht = h - 2 * cover - ds;
         double hook = StirrupHooks.extension135(bar, code);
-        return 2 * w + 2 * ht + 2 * hook + (legs - 2) * (ht + 2 * hook);
+        return 2 * w + 2 * ht + 2 * hook;
+    }
+
+    /** Centre-line length of one crosstie, mm: one leg the height of the hoop plus a 135° hook at each end. */
+    public double crosstieLength(double h, BarSize bar) {
+        double ds = bar.diameter();
+        double ht = h - 2 * cover - ds;
+        double hook = StirrupHooks.extension135(bar, code);
+        return ht + 2 * hook;
     }
 
     /** Stirrups, per metre of beam. */

@@ -152,7 +152,7 @@ final class Diagnoser {
             for (double w = widest + wStep; w <= 2.5 * widest + 1e-9; w += wStep) {
                 SectionProblem q = p.withSpace(sp.withDepths(List.of(h))).withFixedWidth(w).withMaxDepth(null);
                 if (feasible(q, cost)) {
-                    out.add("or b ≥ " + say(u, w, Dim.LENGTH) + " at h = " + say(u, h, Dim.LENGTH) + (p.fixedWidth() != null ? " (the beam fixes b)" : ""));
+                    out.add("b ≥ " + say(u, w, Dim.LENGTH) + " at h = " + say(u, h, Dim.LENGTH) + (p.fixedWidth() != null ? " (the beam fixes b)" : ""));
                     break;
                 }
             }
@@ -160,7 +160,7 @@ final class Diagnoser {
         // one more layer
         SectionProblem moreLayers = p.withSpace(sp.withMaxLayers(sp.maxLayers() + 1));
         if (feasible(moreLayers, cost)) {
-            out.add("or allow " + (sp.maxLayers() + 1) + " layers of tension bars (max_layers)");
+            out.add("allow " + (sp.maxLayers() + 1) + " layers of tension bars (max_layers)");
         }
         return out;
     }

@@ -7,6 +7,7 @@ import barfit.section.CheckReport;
 import barfit.section.CheckResult;
 import barfit.section.FlexureResult;
 import barfit.section.LayerResult;
+import barfit.section.SpanChecks;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -54,6 +55,8 @@ public final class BeamJson {
             fix(dn, "wider", d.wider(), u);
             return b;
         }
+        ArrayNode warnings = b.putArray("warnings");
+        BeamText.warnings(p).forEach(warnings::add);
         design(b, o.best(), p, u, trail);
         ArrayNode bind = b.putArray("binding");
         o.binding().forEach(x -> {
@@ -206,6 +209,35 @@ public final class BeamJson {
             Json.put(defl, "live_limit", p.span() / p.limits().live(), Dim.LENGTH, u);
             Json.put(defl, "long_term", sr.longTermDeflection(), Dim.LENGTH, u);
             Json.put(defl, "long_term_limit", p.span() / p.limits().total(), Dim.LENGTH, u);
+            // what a checker needs to follow it: each critical section's stiffness and, per service level,
+            // its moment and Ie, the Ie the span takes, and the immediate deflection
+            ArrayNode levels = defl.putArray("levels");
+            SpanChecks.LEVELS.forEach(levels::add);
+            ArrayNode secs = defl.putArray("sections");
+            for (SpanChecks.SectionStiffness ss : sr.sections()) {
+                ObjectNode x = secs.addObject();
+                x.put("at", ss.at());
+                Json.put(x, "Ig", ss.stiffness().ig(), Dim.INERTIA, u);
+                Json.put(x, "Icr", ss.stiffness().icr(), Dim.INERTIA, u);
+                Json.put(x, "kd", ss.stiffness().kd(), Dim.LENGTH, u);
+                Json.put(x, "yt", ss.stiffness().yt(), Dim.LENGTH, u);
+                Json.put(x, "Mcr", ss.stiffness().mcr(), Dim.MOMENT, u);
+                ArrayNode ma = x.putArray("Ma");
+                ArrayNode ie = x.putArray("Ie");
+                for (int i = 0; i < ss.ma().length; i++) {
+                    ma.add(u.json(ss.ma()[i], Dim.MOMENT));
+                    ie.add(u.json(ss.ie()[i], Dim.INERTIA));
+                }
+            }
+            ArrayNode ieSpan = defl.putArray("Ie_span");
+            for (double v : sr.ieSpan()) {
+                ieSpan.add(u.json(v, Dim.INERTIA));
+            }
+            ArrayNode imm = defl.putArray("immediate");
+            for (double v : sr.immediate()) {
+                imm.add(u.json(v, Dim.LENGTH));
+            }
+            Json.putRatio(defl, "lambda_delta", sr.lambdaDelta());
         }
         ArrayNode spanChecks = defl.putArray("checks");
         sr.checks().forEach(c -> spanChecks.add(CheckJson.check(c, u)));

@@ -16,7 +16,16 @@ import java.util.Map;
 
 /** The terminal block of one whole span in {@code barfit design}. */
 public final class BeamText {
+    /** The warning a span without shears gets: its stirrups are the minimum, its shear strength unchecked. */
+    public static final String NO_SHEARS = "no shears given: minimum stirrups (Av,min at the widest spacing allowed) in "
+            + "every zone; shear strength not checked (give shear: {left, right})";
+
     private BeamText() {
+    }
+
+    /** Warnings about what a designed span leaves unchecked: none, or the missing shears. */
+    public static List<String> warnings(BeamProblem p) {
+        return p.vLeft() == null && p.vRight() == null ? List.of(NO_SHEARS) : List.of();
     }
 
     static String len(double mm, UnitSystem u) {
@@ -54,17 +63,20 @@ public final class BeamText {
         if (!o.feasible()) {
             var d = o.diagnosis();
             if (o.status().equals("unknown")) {
-                out.append("  ").append(d.summary()).append("; ").append(String.join("; ", d.fixes())).append('\n');
+                out.append("  ").append(d.summary()).append("; ").append(Words.alternatives(d.fixes())).append('\n');
                 return;
             }
             out.append("  no layout in the search space passes.\n");
             out.append("  binding limit: ").append(d.limit()).append(" — ").append(d.summary()).append('\n');
             out.append(d.fixes().isEmpty() ? "  no single relaxed limit (depth, width) gives a passing layout\n"
-                    : "  what would work (one limit at a time): " + String.join("; ", d.fixes()) + "\n");
+                    : "  what would work (one limit at a time): " + Words.alternatives(d.fixes()) + "\n");
             return;
         }
         BeamDesigner.Design d = o.best();
         BeamLayout l = d.layout();
+        for (String w : warnings(p)) {
+            out.append("  WARNING: ").append(w).append('\n');
+        }
         TextTable t = new TextTable(false, false);
         t.row("demand", demand(p, u));
         t.row("section", Words.shape(l.shape(), u) + (l.flange() == null ? ""
@@ -75,12 +87,12 @@ public final class BeamText {
                     + SectionChecks.tensionFlangeNote(l.shape().flange(), u.code()).replace("tension bars", "top bars"));
         }
         t.row("bottom", counts(l.bottomCounts(), l.bottom().label()) + ", full span"
-                + (p.bottomAnchored() ? ", anchored at the supports (compression steel there)" : ""));
+                + (p.bottomAnchored() ? ", anchored at the supports" + bottomAtSupports(p, d) : ""));
         if (p.cantilever()) {
             t.row("top", counts(l.topLeft(), l.top().label()) + ", full length and " + span(l.extLeft() - p.span(), u)
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
-            t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span (compression steel at mid-span)");
+            t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + topAtMid(d, u));
             if (p.leftSupport()) {
                 t.row("top at left", supportTop(p, l, l.topLeft(), l.extLeft(), u));
             }
@@ -160,6 +172,47 @@ public final class BeamText {
             out.append("\n  Calculation trail, span\n");
             TrailText.write(d.report().spanTrail(), u, "    ", out);
         }
+    }
+
+    /**
+     * What the continuous top bars are at mid-span, read from the strain the section model found there: a
+     * bar above the neutral axis is in compression (compression steel), one below it in tension.
+     */
+    public static String topAtMid(BeamDesigner.Design d, UnitSystem u) {
+        double strain = strainAt(d, BeamProblem.Place.MID, barfit.section.Face.TOP);
+        if (Double.isNaN(strain)) {
+            return "";
+        }
+        String c = "c = " + u.withUnit(d.report().sections().get(BeamProblem.Place.MID).flexure().c(), Dim.LENGTH);
+        return strain < 0 ? " (compression steel at mid-span: above the neutral axis, " + c + ")"
+                : " (in tension at mid-span: below the neutral axis, " + c + ", so not compression steel there)";
+    }
+
+    /** The largest strain (+ tension) of a face's bars in the section at a place, NaN where none is counted. */
+    static double strainAt(BeamDesigner.Design d, BeamProblem.Place place, barfit.section.Face face) {
+        CheckReport r = d.report().sections().get(place);
+        double strain = Double.NaN;
+        if (r != null) {
+            for (barfit.section.LayerResult lr : r.flexure().layers()) {
+                if (lr.layer().face() == face && !(lr.strain() <= strain)) {
+                    strain = lr.strain();
+                }
+            }
+        }
+        return strain;
+    }
+
+    /** What the anchored bottom bars are at the continuous supports, read from their strain there. */
+    static String bottomAtSupports(BeamProblem p, BeamDesigner.Design d) {
+        List<String> tension = new java.util.ArrayList<>();
+        for (BeamProblem.Place place : List.of(BeamProblem.Place.LEFT, BeamProblem.Place.RIGHT)) {
+            if ((place == BeamProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())
+                    && strainAt(d, place, barfit.section.Face.BOTTOM) >= 0) {
+                tension.add(where(place));
+            }
+        }
+        return tension.isEmpty() ? " (compression steel there)" : " (counted, but in tension at the "
+                + String.join(" and ", tension) + ": below the neutral axis, so not compression steel there)";
     }
 
     static String binding(List<barfit.design.Binding> bs) {

@@ -70,8 +70,15 @@ public final class CheckJson {
             Json.put(so, "Vu", sh.vu(), Dim.FORCE, u);
             Json.put(so, "Vc", sh.vc(), Dim.FORCE, u);
             so.put("Vc_row", sh.vcRow());
+            so.put("checked", true);
             Json.put(so, "Vs", sh.vs(), Dim.FORCE, u);
+            Json.put(so, "Vs_stirrups", sh.vsStirrups(), Dim.FORCE, u);
+            so.put("Vs_limited", sh.vsStirrups() > sh.vs());
             Json.put(so, "phi_Vn", sh.phiVn(), Dim.FORCE, u);
+        } else {
+            ObjectNode so = o.putObject("shear");
+            so.put("checked", false);
+            so.put("note", CheckText.SHEAR_NOT_CHECKED);
         }
         ArrayNode checks = o.putArray("checks");
         for (CheckResult c : r.checks()) {

@@ -14,6 +14,9 @@ import java.util.List;
 
 /** The terminal report of {@code barfit check}. */
 public final class CheckText {
+    /** What a beam without a factored shear is told: its shear is not checked at all. */
+    public static final String SHEAR_NOT_CHECKED = "shear not checked (no Vu)";
+
     private CheckText() {
     }
 
@@ -60,11 +63,17 @@ public final class CheckText {
                         + (fx.isPresent() && vs.isPresent() ? ", " : "")
                         + vs.map(c -> "Vu/φVn = " + Words.ratio(c.ratio())).orElse("") + ")";
             }
+            if (r.shear() == null) {
+                verdict += "; " + SHEAR_NOT_CHECKED;
+            }
         } else {
             StringBuilder sb = new StringBuilder("FAIL: ");
             List<CheckResult> fails = r.failures();
             for (int i = 0; i < fails.size(); i++) {
                 sb.append(i == 0 ? "" : ", ").append(fails.get(i).id());
+            }
+            if (r.shear() == null) {
+                sb.append("; ").append(SHEAR_NOT_CHECKED);
             }
             verdict = sb.toString();
         }
@@ -91,9 +100,18 @@ public final class CheckText {
         }
         ShearResult sh = r.shear();
         if (sh != null) {
-            out.append("  Vu = ").append(u.withUnit(sh.vu(), Dim.FORCE)).append("   φVn = ")
+            out.append("  Vu = ").append(u.withUnit(sh.vu(), Dim.FORCE)).append("   φVn = φ (Vc + Vs) = ")
                     .append(u.withUnit(sh.phiVn(), Dim.FORCE)).append("   Vc = ").append(u.withUnit(sh.vc(), Dim.FORCE))
-                    .append(" (row ").append(sh.vcRow()).append(")   Vs = ").append(u.withUnit(sh.vs(), Dim.FORCE)).append('\n');
+                    .append(" (row ").append(sh.vcRow()).append(")   Vs = ").append(u.withUnit(sh.vs(), Dim.FORCE));
+            if (sh.vsStirrups() > sh.vs()) {
+                out.append(" (the stirrups give ").append(u.withUnit(sh.vsStirrups(), Dim.FORCE))
+                        .append("; Vs is limited to Vs,max = ").append(r.section().code().vsMax().shown())
+                        .append(" √f'c bw d, 22.5.1.2)");
+            }
+            out.append('\n');
+        } else {
+            out.append("  ").append(SHEAR_NOT_CHECKED).append(": give Vu to check shear strength, minimum stirrups "
+                    + "and their spacing\n");
         }
         out.append('\n');
         TextTable layers = new TextTable(false, false, true, true, true, true);

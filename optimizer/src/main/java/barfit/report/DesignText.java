@@ -127,7 +127,7 @@ public final class DesignText {
                 + (l.tensionCounts().size() == 1 ? " layer)" : " layers)"));
         t.row(l.bending().compressionFace().word(), l.compressionCount() + " " + l.compressionBar().label()
                 + (hangersOnly(l, p.space()) ? "  (hangers, counted in strength)" : "  (compression steel beyond the minimum hangers)"));
-        t.row("stirrups", Words.stirrups(l.stirrups(), u) + (p.vu() == null ? "  (minimum: no Vu given)" : ""));
+        t.row("stirrups", Words.stirrups(l.stirrups(), u) + (p.vu() == null ? "  (minimum stirrups; " + CheckText.SHEAR_NOT_CHECKED + ")" : ""));
         if (l.skin() != null) {
             t.row("skin bars", l.skin().bar().label() + " @ " + u.withUnit(l.skin().spacing(), Dim.LENGTH)
                     + " on both side faces (9.7.2.3)");
@@ -223,7 +223,7 @@ public final class DesignText {
         if (d.fixes().isEmpty()) {
             out.append("  no single relaxed limit (depth, width, one more layer) gives a passing layout\n");
         } else {
-            out.append("  what would work (one limit at a time): ").append(String.join("; ", d.fixes())).append('\n');
+            out.append("  what would work (one limit at a time): ").append(Words.alternatives(d.fixes())).append('\n');
         }
     }
 }

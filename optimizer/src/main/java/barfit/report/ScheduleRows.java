@@ -37,6 +37,12 @@ public final class ScheduleRows {
                 Dim.SPAN) + " past the support)" : l.topContinuous() + " " + l.top().label();
     }
 
+    /** As {@link #topContinuous}, shorter for the terminal. */
+    public static String topContinuousShort(BeamProblem p, BeamLayout l, UnitSystem u) {
+        return p.cantilever() ? bars(l.topLeft(), l.top()) + " (+ " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
+                + " past support)" : l.topContinuous() + " " + l.top().label();
+    }
+
     /** Top bars at a continuous support with the extension of the extra bars, or "" where there is none. */
     public static String topAt(BeamProblem p, BeamLayout l, BeamProblem.Place place, UnitSystem u) {
         if (p.cantilever() || !(place == BeamProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())) {
@@ -48,17 +54,50 @@ public final class ScheduleRows {
         return bars(counts, l.top()) + (extra > 0 ? " (" + extra + " extra × " + u.withUnit(ext, Dim.SPAN) + ")" : "");
     }
 
-    /** "left 0–2.4: No. 10, 2 legs @ 150; middle 2.4–7.2: ..." (zone ends in span units from the left face) */
+    /**
+     * "left 0.000–2.400 m: No. 10 × 2 legs @ 150 mm; middle 2.400–7.200 m: ...": zone ends from the left face
+     * with the span's fixed decimals and unit, spacing with its unit.
+     */
     public static String stirrups(BeamProblem p, BeamLayout l, UnitSystem u) {
         List<String> parts = new ArrayList<>();
         List<BeamProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
             var s = l.zoneStirrups().get(i);
-            parts.add(zones.get(i).name() + " " + u.compact(zones.get(i).from(), Dim.SPAN) + "–"
-                    + u.compact(zones.get(i).to(), Dim.SPAN) + ": " + s.bar().label() + ", " + s.legs() + " legs @ "
-                    + u.compact(s.spacing(), Dim.LENGTH));
+            parts.add(zones.get(i).name() + " " + range(zones.get(i).from(), zones.get(i).to(), u) + ": "
+                    + stirrup(s, u));
         }
         return String.join("; ", parts);
+    }
+
+    /**
+     * The zones condensed for the terminal: neighbouring zones with the same stirrups merged, "0.000–1.988 m:
+     * No. 10 × 2 legs @ 150 mm; 1.988–7.950 m: ...", or "No. 10 × 2 legs @ 200 mm over the whole span".
+     */
+    public static String stirrupsShort(BeamProblem p, BeamLayout l, UnitSystem u) {
+        List<BeamProblem.Zone> zones = p.zones();
+        List<String> parts = new ArrayList<>();
+        int i = 0;
+        while (i < zones.size()) {
+            var s = l.zoneStirrups().get(i);
+            int j = i;
+            while (j + 1 < zones.size() && l.zoneStirrups().get(j + 1).equals(s)) {
+                j++;
+            }
+            if (i == 0 && j == zones.size() - 1) {
+                return stirrup(s, u) + " over the whole " + (p.cantilever() ? "length" : "span");
+            }
+            parts.add(range(zones.get(i).from(), zones.get(j).to(), u) + ": " + stirrup(s, u));
+            i = j + 1;
+        }
+        return String.join("; ", parts);
+    }
+
+    private static String range(double from, double to, UnitSystem u) {
+        return u.number(from, Dim.SPAN) + "–" + u.number(to, Dim.SPAN) + " " + u.unit(Dim.SPAN);
+    }
+
+    private static String stirrup(barfit.section.Stirrups s, UnitSystem u) {
+        return Words.stirrups(s, u);
     }
 
     /** phi Mn and Mu (absolute, user units) at a place, or null where the span has no such section. */

@@ -6,6 +6,8 @@ import barfit.design.beam.BeamProblem;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 
 /** The terminal summary of {@code barfit schedule}: the schedule table, the totals, the proof. */
@@ -28,23 +30,38 @@ public final class ScheduleText {
             out.append("note: the beams' groups are not used; rationalise: {groups: same_section} makes a group share b × h\n");
         }
         out.append('\n');
-        TextTable t = new TextTable(false, false, false, false, false, false, false, false, true);
-        t.row("beam", "group", "b × h (" + u.unit(Dim.LENGTH) + ")", "bottom", "top continuous", "top left",
-                "top right", "stirrups", "cost");
+        // each beam's stirrups go on a line of their own under its row, so the table stays about 150 columns wide
+        TextTable t = new TextTable(false, false, false, false, false, false, false, true);
+        t.row("beam", "group", "b × h (" + u.unit(Dim.LENGTH) + ")", "bottom", "top continuous", "top at left",
+                "top at right", "cost");
+        List<String> noShears = new ArrayList<>();
         for (ScheduleResult.Beam b : r.beams()) {
             BeamProblem p = b.outcome().problem();
             String group = b.beam().group() == null ? "" : b.beam().group();
             if (!b.feasible()) {
-                t.row(b.beam().id(), group, "NO DESIGN", "(see below)", "", "", "", "", "");
+                t.row(b.beam().id(), group, "NO DESIGN", "(see below)", "", "", "", "");
                 continue;
             }
             BeamDesigner.Design d = b.outcome().best();
             BeamLayout l = d.layout();
-            t.row(b.beam().id(), group, ScheduleRows.size(l, u), ScheduleRows.bottom(l), ScheduleRows.topContinuous(p, l, u),
-                    ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u), ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u),
-                    ScheduleRows.stirrups(p, l, u), Money.amount(d.cost().total()));
+            t.row(b.beam().id(), group, ScheduleRows.size(l, u), ScheduleRows.bottom(l),
+                    ScheduleRows.topContinuousShort(p, l, u), ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u),
+                    ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u), Money.amount(d.cost().total()));
+            t.under("  stirrups " + ScheduleRows.stirrupsShort(p, l, u)
+                    + (BeamText.warnings(p).isEmpty() ? "" : "  (minimum: no shears given)"));
+            if (!BeamText.warnings(p).isEmpty()) {
+                noShears.add(b.beam().id());
+            }
         }
         t.write("  ", out);
+        out.append("  bars per layer from the face inward (\"3+2\": three in the outer layer); at a support the count "
+                + "includes the continuous bars,\n  and the extras run the length given past the face; stirrup zones "
+                + "are measured from the left face\n");
+        if (!noShears.isEmpty()) {
+            out.append("WARNING: no shears given for ").append(String.join(", ", noShears)).append(": minimum stirrups "
+                    + "(Av,min at the widest spacing allowed), shear strength not checked; give v_left, v_right (or "
+                    + "shear: {left, right})\n");
+        }
         out.append('\n');
         String cur = r.input().currency().isEmpty() ? "" : " " + r.input().currency();
         out.append("section sizes: ").append(r.sizes().size()).append(" (");
@@ -96,7 +113,7 @@ public final class ScheduleText {
                     var d = b.outcome().diagnosis();
                     out.append("  ").append(b.beam().id()).append(": ").append(d.limit()).append(" — ").append(d.summary());
                     if (!d.fixes().isEmpty()) {
-                        out.append("; ").append(String.join("; ", d.fixes()));
+                        out.append("; what would work (one limit at a time): ").append(Words.alternatives(d.fixes()));
                     }
                     out.append('\n');
                 }

@@ -47,7 +47,8 @@ public final class StudyJson {
         c.put("stirrups", DesignJson.round2(b.stirrups()));
         c.put("formwork", DesignJson.round2(b.formwork()));
         c.put("depth_premium", DesignJson.round2(b.depthPremium()));
-        o.put("compression_steel_needed", s.compressionNeeded());
+        o.put("compression_steel_needed", s.compressionRequired());
+        o.put("compression_steel_relied_on", s.compressionNeeded());
         o.put("compression_steel_used", s.compressionUsed());
         if (s.compressionNeeded()) {
             o.put("hangers_alone_fail", s.hangersFail());
@@ -98,8 +99,10 @@ public final class StudyJson {
             }
             if (r.recommended() == null) {
                 b.putNull("recommended");
+                b.putNull("recommended_label");
             } else {
                 b.put("recommended", r.recommended());
+                b.put("recommended_label", r.best().label());
             }
             if (r.recommendedFc() == null) {
                 b.putNull("recommended_fc");
@@ -131,7 +134,8 @@ public final class StudyJson {
                     x.put("cost", cost(s.total(), u, perBeam.get(i)));
                     Json.put(x, "width", s.width(), Dim.LENGTH, u);
                     Json.put(x, "height", s.height(), Dim.LENGTH, u);
-                    x.put("compression_steel_needed", s.compressionNeeded());
+                    x.put("compression_steel_needed", s.compressionRequired());
+                    x.put("compression_steel_relied_on", s.compressionNeeded());
                     x.put("hangers_only_possible", r.hangersFrom() != null && p.cap() >= r.hangersFrom() - 1e-9);
                     x.put("tension", s.tension());
                     x.put("eps_t", CheckJson.round(s.epsT()));
@@ -155,7 +159,9 @@ public final class StudyJson {
                 case "below" -> "needed below compression_needed_below";
                 case "everywhere" -> "needed at every cap in the range: the minimum hangers alone work at no depth up to "
                         + "the last cap";
-                default -> "not needed within the range: the minimum hangers alone can work at every cap";
+                default -> r.shallowestFeasible() == null ? "nothing passes in the range"
+                        : "not needed within the range: at every cap with a passing design the minimum hangers alone "
+                        + "can work";
             });
             Json.put(b, "first_cap", r.firstCap(), Dim.LENGTH, u);
             Json.put(b, "last_cap", r.lastCap(), Dim.LENGTH, u);

@@ -28,9 +28,34 @@ public final class StudyText {
         return u.compact(s.width(), Dim.LENGTH) + " × " + u.compact(s.height(), Dim.LENGTH);
     }
 
-    /** What this layout's compression layer is: the minimum hangers, or more, needed or by choice. */
+    /**
+     * What this layout's compression layer is: the minimum hangers, or more: needed (the layout relies on it
+     * and no layout without it passes within the same limits), for cost (relied on, but a layout with the
+     * hangers alone passes within the limits too) or by choice (not relied on).
+     */
     static String compression(Summary s) {
-        return s.compressionNeeded() ? "more, needed" : s.compressionUsed() ? "more, by choice" : "minimum hangers";
+        return s.compressionRequired() ? "more, needed" : s.compressionNeeded() ? "more, for cost"
+                : s.compressionUsed() ? "more, by choice" : "minimum hangers";
+    }
+
+    /** The legend of the compression-layer words, for those that appear, one to a line. */
+    static String compressionLegend(List<Summary> shown) {
+        List<String> parts = new java.util.ArrayList<>();
+        if (shown.stream().anyMatch(Summary::compressionRequired)) {
+            parts.add("more, needed: relied on, and no layout without it passes within the same limits");
+        }
+        if (shown.stream().anyMatch(s -> s.compressionNeeded() && !s.compressionRequired())) {
+            parts.add("more, for cost: relied on, but a dearer layout with the hangers alone passes within the same "
+                    + "limits too");
+        }
+        if (shown.stream().anyMatch(s -> s.compressionUsed() && !s.compressionNeeded())) {
+            parts.add("more, by choice: more than the hangers, not relied on");
+        }
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < parts.size(); i++) {
+            sb.append(i == 0 ? "  compression layer — " : "                      ").append(parts.get(i)).append('\n');
+        }
+        return sb.toString();
     }
 
     public static String compare(Settings settings, List<Compare.Result> results, List<Boolean> perBeam, String currency) {
@@ -46,11 +71,11 @@ public final class StudyText {
             String money = (pb ? "of the beam" : Money.perLengthLabel(u)) + (currency.isEmpty() ? "" : " " + currency);
             // over a whole span the top bars are compression steel at mid-span but tension steel at the supports
             t.row("option", "b × h", r.wholeSpan() ? "bottom" : "tension", r.wholeSpan() ? "top" : "compression",
-                    "Mu/φMn", "εt", "φ", "compression layer", "bars/layers", "cost " + money, "vs best");
+                    "Mu/φMn", "εt", "φ", "compression layer", "bars/layers", "cost " + money, "vs recommended");
             TextTable terms = new TextTable(false, false, true, true, true, true, true, true);
             terms.row("option", "stirrups", "concrete", "main bars", "stirrups", "formwork", "depth premium", "total");
-            double best = results.get(i).options().stream().filter(o -> o.summary().feasible())
-                    .mapToDouble(o -> o.summary().total()).min().orElse(Double.NaN);
+            // against the recommended option (◀): a cheaper stronger grade not worth its change shows below it
+            double best = r.best() != null ? r.best().summary().total() : Double.NaN;
             java.util.Map<String, List<String>> none = new java.util.LinkedHashMap<>();
             for (Compare.Option o : r.options()) {
                 Summary s = o.summary();
@@ -63,28 +88,27 @@ public final class StudyText {
                         Words.ratio(s.mu() / s.phiMn()), Words.fixed(s.epsT(), 5),
                         Words.phi(s.phi()) + (s.strainClass().equals("transition") ? " transition" : ""),
                         compression(s), s.longitudinalBars() + " / " + s.layers(), cost(s, u, pb),
-                        String.format(Locale.ROOT, "+%.1f %%", 100 * (s.total() - best) / best));
+                        String.format(Locale.ROOT, "%+.1f %%", 100 * (s.total() - best) / best));
                 var c = pb ? s.cost() : Money.scaled(s.cost(), u);
                 terms.row(o.label(), s.stirrups(), Money.amount(c.concrete()), Money.amount(c.mainBars()),
                         Money.amount(c.stirrups()), Money.amount(c.formwork()), Money.amount(c.depthPremium()),
                         Money.amount(c.total()));
             }
             t.write("  ", out);
+            out.append(compressionLegend(r.options().stream().map(Compare.Option::summary)
+                    .filter(Summary::feasible).toList()));
             if (r.wholeSpan()) {
-                out.append("  top: the continuous bars are the compression steel at mid-span; the bars added at the "
-                        + "supports are tension steel there\n");
+                out.append("  top: the continuous bars run the full span, the compression layer at mid-span (compression "
+                        + "steel there only where they lie above the neutral axis); the bars added at the supports are "
+                        + "tension steel there\n");
             }
             out.append("\n  stirrups, and the cost term by term (").append(money).append("; depth premium: the storey "
                     + "height a deeper beam costs)\n");
             terms.write("  ", out);
             none.forEach((why, labels) -> out.append("  none for ").append(String.join(", ", labels)).append(": ")
                     .append(why).append('\n'));
-            out.append("  recommended: ").append(r.recommended() == null ? "none" : r.recommended());
-            if (r.recommendedFc() != null) {
-                out.append(", f'c = ").append(u.compact(r.recommendedFc(), Dim.STRESS)).append(' ')
-                        .append(u.unit(Dim.STRESS));
-            }
-            out.append('\n');
+            out.append("  recommended: ").append(r.best() == null ? "none" : r.best().label() + " (b × h = "
+                    + size(r.best().summary(), u) + " " + u.unit(Dim.LENGTH) + ")").append('\n');
             for (String reason : r.reasons()) {
                 out.append("  · ").append(reason).append('\n');
             }
@@ -109,18 +133,25 @@ public final class StudyText {
                         s.feasible() ? compression(s) : "", s.feasible() ? Words.fixed(s.epsT(), 5) : "");
             }
             t.write("  ", out);
+            out.append(compressionLegend(r.points().stream().map(Sweep.Point::summary).filter(Summary::feasible)
+                    .toList()));
             String range = u.compact(r.firstCap(), Dim.LENGTH) + " to " + u.compact(r.lastCap(), Dim.LENGTH) + " "
                     + u.unit(Dim.LENGTH);
             out.append("  shallowest cap with a passing design: ").append(r.shallowestFeasible() == null
                     ? "not within the range (no cap from " + range + " passes)"
                     : u.compact(r.shallowestFeasible(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)).append('\n');
-            out.append("  compression steel is necessary below: ").append(switch (r.compression()) {
-                case "below" -> u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
-                        + " (under it, every passing layout needs compression steel beyond the minimum hangers)";
-                case "everywhere" -> "every cap in the range (the minimum hangers alone work at no depth up to "
-                        + u.compact(r.lastCap(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ")";
-                default -> "not within the range (the minimum hangers alone can work at every cap from " + range + ")";
-            }).append('\n');
+            if (r.shallowestFeasible() == null) {
+                out.append("  compression steel: nothing passes in the range, with or without it\n");
+            } else {
+                out.append("  compression steel is necessary below: ").append(switch (r.compression()) {
+                    case "below" -> u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
+                            + " (under it, every passing layout needs compression steel beyond the minimum hangers)";
+                    case "everywhere" -> "every cap in the range (the minimum hangers alone work at no depth up to "
+                            + u.compact(r.lastCap(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ")";
+                    default -> "no cap in the range (at every cap from " + range + " with a passing design, the minimum "
+                            + "hangers alone can work)";
+                }).append('\n');
+            }
             if (r.chosen().feasible()) {
                 out.append("  design (cap ").append(u.compact(r.chosenCap(), Dim.LENGTH)).append(' ')
                         .append(u.unit(Dim.LENGTH)).append(") chooses ").append(size(r.chosen(), u)).append(" at ")
@@ -142,7 +173,7 @@ public final class StudyText {
                         .append(s.feasible() ? u.compact(s.width(), Dim.LENGTH) : "").append(',')
                         .append(s.feasible() ? u.compact(s.height(), Dim.LENGTH) : "").append(',')
                         .append(s.feasible() ? csv(s.tension()) : "").append(',')
-                        .append(s.feasible() ? s.compressionNeeded() : "").append(',')
+                        .append(s.feasible() ? s.compressionRequired() : "").append(',')
                         .append(s.feasible() ? Words.fixed(s.epsT(), 5) : "").append('\n');
             }
         }

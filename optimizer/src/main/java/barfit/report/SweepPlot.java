@@ -109,7 +109,7 @@ public final class SweepPlot {
             boolean everywhere = r.compression().equals("everywhere");
             IntervalMarker whole = new IntervalMarker(first, last, everywhere ? DOUBLY : SINGLY);
             whole.setLabel(everywhere ? "compression steel needed at every cap" : "the minimum hangers can suffice "
-                    + "at every cap");
+                    + "wherever a design passes");
             whole.setLabelBackgroundColor(CLEAR);
             whole.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
             whole.setLabelTextAnchor(TextAnchor.TOP_RIGHT);

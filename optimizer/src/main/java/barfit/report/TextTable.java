@@ -3,9 +3,13 @@ package barfit.report;
 import java.util.ArrayList;
 import java.util.List;
 
-/** A plain text table: columns padded to their widest cell; numeric columns right-aligned. */
+/**
+ * A plain text table: columns padded to their widest cell; numeric columns right-aligned. A row may be
+ * followed by free lines ({@link #under}) that do not count in the column widths.
+ */
 public final class TextTable {
     private final List<String[]> rows = new ArrayList<>();
+    private final List<List<String>> under = new ArrayList<>();
     private final boolean[] right;
 
     public TextTable(boolean... rightAligned) {
@@ -14,6 +18,13 @@ public final class TextTable {
 
     public TextTable row(String... cells) {
         rows.add(cells);
+        under.add(new ArrayList<>());
+        return this;
+    }
+
+    /** A line printed under the last row, indented like the table, outside the columns. */
+    public TextTable under(String line) {
+        under.get(under.size() - 1).add(line);
         return this;
     }
 
@@ -25,7 +36,8 @@ public final class TextTable {
                 w[i] = Math.max(w[i], width(r[i]));
             }
         }
-        for (String[] r : rows) {
+        for (int k = 0; k < rows.size(); k++) {
+            String[] r = rows.get(k);
             StringBuilder line = new StringBuilder(indent);
             for (int i = 0; i < cols; i++) {
                 String c = i < r.length && r[i] != null ? r[i] : "";
@@ -40,6 +52,9 @@ public final class TextTable {
                 }
             }
             out.append(line.toString().stripTrailing()).append('\n');
+            for (String u : under.get(k)) {
+                out.append((indent + u).stripTrailing()).append('\n');
+            }
         }
     }
 

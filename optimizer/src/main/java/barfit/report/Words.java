@@ -47,6 +47,15 @@ public final class Words {
         return s.bar().label() + " × " + s.legs() + " legs @ " + u.compact(s.spacing(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
     }
 
+    /** Alternatives, one limit relaxed at a time, as one sentence: "a", "a; or b", "a; or b; or c". */
+    public static String alternatives(List<String> fixes) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < fixes.size(); i++) {
+            sb.append(i == 0 ? "" : "; or ").append(fixes.get(i));
+        }
+        return sb.toString();
+    }
+
     public static String value(barfit.section.trail.Q q, UnitSystem u) {
         return q == null ? "" : u.withUnit(q.value(), q.dim());
     }

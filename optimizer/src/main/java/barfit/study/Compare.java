@@ -61,10 +61,13 @@ public final class Compare {
         double h = cap != null ? cap : t.cap() != null ? t.cap() : deepest;
         Materials m = t.materials();
         List<Option> options = new ArrayList<>();
-        options.add(new Option("at_cap", "at the cap, h ≤ " + say.length(h), t.design(h, space, m, cost, false), null,
-                null));
-        options.add(new Option("deepen", "cap lifted, h ≤ " + say.length(deepest), t.design(null, space, m, cost, false),
-                null, null));
+        options.add(new Option("at_cap", (capGiven ? "at the cap, h ≤ " : "as given (no cap), h ≤ ") + say.length(h),
+                t.design(h, space, m, cost, false), null, null));
+        // with the cap at the deepest depth searched there is nothing to lift: the option would repeat the first
+        if (h < deepest - 1e-9) {
+            options.add(new Option("deepen", "cap lifted, h ≤ " + say.length(deepest),
+                    t.design(null, space, m, cost, false), null, null));
+        }
         Summary singly = null;
         double singlyDepth = Double.NaN;
         for (double d : depths) {
@@ -84,15 +87,37 @@ public final class Compare {
         for (double w = widths.get(widths.size() - 1) + step; w <= maxWidth + 1e-9; w += step) {
             widths.add(w);
         }
-        options.add(new Option("widen", "widths up to " + say.length(widths.get(widths.size() - 1)) + ", h ≤ "
-                + say.length(h),
+        String within = capGiven ? ", h ≤ " + say.length(h) : "";
+        // a beam that fixes its width is studied with the width free, narrower as well as wider
+        options.add(new Option("widen", (t.fixedWidth() != null ? "any width up to " : "widths up to ")
+                + say.length(widths.get(widths.size() - 1)) + within,
                 t.design(h, space.withWidths(widths), m, cost, true), null, null));
         for (double fc : fcs) {
             Materials mf = new Materials(fc, m.fy(), m.fyt(), m.aggregate(), m.lambda());
-            options.add(new Option("fc", "f'c = " + say.stress(fc) + ", h ≤ " + say.length(h),
+            options.add(new Option("fc", "f'c = " + say.stress(fc) + within,
                     t.design(h, space, mf, costForFc.apply(fc), false), fc, null));
         }
-        return recommend(t.id(), h, capGiven, options, say, t instanceof SpanTarget);
+        // a layout that relies on compression steel beyond the hangers "needs" it only when no layout with the
+        // hangers alone passes within the same limits; else the compression steel is a matter of cost
+        boolean singlyWithinCap = singly != null && singlyDepth <= h + 1e-9;
+        List<Option> judged = new ArrayList<>();
+        for (Option o : options) {
+            Summary s = o.summary();
+            if (s.feasible() && s.compressionNeeded()) {
+                boolean avoidable = switch (o.kind()) {
+                    case "deepen" -> singly != null;
+                    case "at_cap" -> singlyWithinCap;
+                    case "widen" -> singlyWithinCap || t.design(h, space.withWidths(widths).withHangersOnly(), m, cost,
+                            true).feasible();
+                    case "fc" -> t.design(h, space.withHangersOnly(), new Materials(o.fc(), m.fy(), m.fyt(),
+                            m.aggregate(), m.lambda()), costForFc.apply(o.fc()), false).feasible();
+                    default -> false;
+                };
+                o = new Option(o.kind(), o.label(), s.withAvoidable(avoidable), o.fc(), o.note());
+            }
+            judged.add(o);
+        }
+        return recommend(t.id(), h, capGiven, judged, say, t instanceof SpanTarget, t.fixedWidth() != null);
     }
 
     /** The smallest step between the search's widths, or {@code fallback} (mm) with a single width. */
@@ -106,20 +131,40 @@ public final class Compare {
 
     private static boolean sameDesign(Summary a, Summary b) {
         return a.width() == b.width() && a.height() == b.height() && a.tension().equals(b.tension())
-                && a.compression().equals(b.compression());
+                && a.compression().equals(b.compression()) && a.stirrups().equals(b.stirrups());
+    }
+
+    /** Costs that print the same, to the cent. */
+    private static boolean sameCost(Summary a, Summary b) {
+        return String.format(Locale.ROOT, "%.2f", a.total()).equals(String.format(Locale.ROOT, "%.2f", b.total()));
     }
 
     private static String pct(double v) {
         return String.format(Locale.ROOT, "%.1f %%", v);
     }
 
+    /**
+     * Options within this percentage of the cheapest are named for constructability to decide between; a
+     * change of concrete grade is recommended only when it saves more than this.
+     */
+    public static final double MARGIN_PERCENT = 2.0;
+
     /** The cheapest feasible option, with its reasons in plain words. */
-    static Result recommend(String id, double cap, boolean capGiven, List<Option> options, Say say, boolean span) {
+    static Result recommend(String id, double cap, boolean capGiven, List<Option> options, Say say, boolean span,
+            boolean fixedWidth) {
         List<String> reasons = new ArrayList<>();
         Option best = null;
+        Option bestSameGrade = null;
         for (Option o : options) {
-            if (o.summary().feasible() && (best == null || o.summary().total() < best.summary().total() - 1e-9)) {
+            if (!o.summary().feasible()) {
+                continue;
+            }
+            if (best == null || o.summary().total() < best.summary().total() - 1e-9) {
                 best = o;
+            }
+            if (!o.kind().equals("fc") && (bestSameGrade == null
+                    || o.summary().total() < bestSameGrade.summary().total() - 1e-9)) {
+                bestSameGrade = o;
             }
         }
         Option atCap = options.get(0);
@@ -128,64 +173,120 @@ public final class Compare {
             reasons.add(nothingAtCap(atCap.summary(), cap, say));
             return new Result(id, cap, capGiven, options, null, reasons, null, span);
         }
+        String gradeNote = null;
+        if (best.kind().equals("fc") && bestSameGrade != null) {
+            double saving = 100 * (bestSameGrade.summary().total() - best.summary().total())
+                    / bestSameGrade.summary().total();
+            if (saving <= MARGIN_PERCENT) {
+                gradeNote = "Stronger concrete, '" + best.label() + "', would save only " + pct(saving) + " against '"
+                        + bestSameGrade.label() + "': a change of concrete grade is recommended only when it saves "
+                        + "more than " + margin() + " (the margin within which constructability decides).";
+                best = bestSameGrade;
+            }
+        }
         if (atCap.summary().feasible()) {
-            reasons.add(atCapReason(atCap.summary(), options, cap, say));
+            reasons.add(atCapReason(atCap.summary(), options, cap, capGiven, say));
         } else {
             reasons.add(nothingAtCap(atCap.summary(), cap, say));
         }
+        if (gradeNote != null) {
+            reasons.add(gradeNote);
+        }
         double ref = best.summary().total();
+        List<Option> named = new ArrayList<>();
         for (Option o : options) {
-            if (o == best || !o.summary().feasible()) {
+            if (o == best || !o.summary().feasible() || named.contains(o)) {
                 continue;
             }
+            // options that give one design at one cost are named together
+            List<Option> same = new ArrayList<>();
+            for (Option x : options) {
+                if (x != best && x.summary().feasible() && !named.contains(x) && sameDesign(x.summary(), o.summary())
+                        && sameCost(x.summary(), o.summary())) {
+                    same.add(x);
+                }
+            }
+            named.addAll(same);
+            String who = quoted(same);
+            boolean one = same.size() == 1;
             double diff = 100 * (o.summary().total() - ref) / ref;
+            if (diff < -1e-9 && gradeNote != null) {
+                continue; // a stronger grade saving too little to recommend: said above
+            }
             if (sameDesign(o.summary(), best.summary())) {
-                reasons.add("'" + o.label() + "' gives the same design.");
-            } else if (diff <= 2.0) {
-                reasons.add("'" + o.label() + "' is within 2 % of the cheapest (" + pct(diff) + "): let constructability "
-                        + "decide (" + congestion(o.summary()) + ", against " + congestion(best.summary()) + ").");
+                reasons.add(who + (sameCost(o.summary(), best.summary()) ? (one ? " gives" : " give")
+                        + " the same design at the same cost." : (one ? " gives" : " give") + " the same layout, "
+                        + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
+                        + (o.kind().equals("fc") ? " (the stronger concrete buys nothing here)." : ".")));
+            } else if (diff <= MARGIN_PERCENT) {
+                reasons.add(who + (one ? " is" : " (the same design) are") + " within " + margin()
+                        + " of the recommended option (" + pct(diff) + " dearer): let constructability decide ("
+                        + congestion(o.summary()) + ", against " + congestion(best.summary()) + ").");
             }
         }
+        String scope = capGiven ? " within the cap" : "";
         String why = switch (best.kind()) {
-            case "at_cap" -> "Keeping the cap is cheapest";
+            case "at_cap" -> capGiven ? "Keeping the cap is cheapest" : "The design as given is cheapest";
             case "deepen" -> "Lifting the cap to h = " + say.length(best.summary().height()) + " is cheapest (any depth premium "
                     + "of the rates included); it needs the architect to accept the deeper beam";
             case "no_compression_steel" -> "The shallowest depth without compression steel, h = "
                     + say.length(best.summary().height()) + ", is cheapest" + (best.summary().height() > cap + 1e-9
                     ? "; it is deeper than the cap" : "");
-            case "widen" -> "Widening to b = " + say.length(best.summary().width()) + " within the cap is cheapest";
-            default -> "Stronger concrete, f'c = " + say.stress(best.fc()) + " within the cap, is cheapest";
+            case "widen" -> (atCap.summary().feasible() && best.summary().width() < atCap.summary().width() - 1e-9
+                    ? "Narrowing to b = " : "Widening to b = ") + say.length(best.summary().width())
+                    + (fixedWidth && atCap.summary().feasible() ? " from the fixed " + say.length(atCap.summary().width())
+                    : "") + scope + " is cheapest";
+            default -> "Stronger concrete, f'c = " + say.stress(best.fc()) + scope + ", is cheapest";
         };
         if (atCap.summary().feasible() && best != atCap) {
-            why += String.format(Locale.ROOT, ": %.1f %% less than keeping the cap", 100 * (atCap.summary().total() - ref)
-                    / atCap.summary().total());
+            double saving = 100 * (atCap.summary().total() - ref) / atCap.summary().total();
+            why += sameCost(atCap.summary(), best.summary()) ? ": the same cost as " + (capGiven ? "keeping the cap"
+                    : "the design as given")
+                    : String.format(Locale.ROOT, ": %.1f %% less than %s", saving, capGiven ? "keeping the cap"
+                    : "the design as given");
         }
         reasons.add(0, why + ".");
         return new Result(id, cap, capGiven, options, best.kind(), reasons, best, span);
     }
 
+    private static String margin() {
+        return (MARGIN_PERCENT == Math.rint(MARGIN_PERCENT) ? String.valueOf((long) MARGIN_PERCENT)
+                : String.valueOf(MARGIN_PERCENT)) + " %";
+    }
+
+    /** "'a'", "'a' and 'b'", "'a', 'b' and 'c'". */
+    private static String quoted(List<Option> os) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < os.size(); i++) {
+            sb.append(i == 0 ? "" : i == os.size() - 1 ? " and " : ", ").append('\'').append(os.get(i).label())
+                    .append('\'');
+        }
+        return sb.toString();
+    }
+
     /** What the design at the cap is, and why its compression steel is there. */
-    private static String atCapReason(Summary s, List<Option> options, double cap, Say say) {
+    private static String atCapReason(Summary s, List<Option> options, double cap, boolean capGiven, Say say) {
         String what;
         if (s.compressionNeeded()) {
             Summary singly = options.stream().filter(o -> o.kind().equals("no_compression_steel")).findFirst()
                     .map(Option::summary).orElse(null);
             String governs = s.hangersFail().isEmpty() ? "" : " (" + s.hangersFail() + ")";
-            if (singly != null && singly.feasible() && singly.height() <= cap + 1e-9) {
+            if (s.compressionAvoidable() && singly != null && singly.feasible() && singly.height() <= cap + 1e-9) {
                 double diff = 100 * (singly.total() - s.total()) / s.total();
                 what = "carries compression steel beyond the hangers: with the hangers alone its other bars would fail"
-                        + governs + ", but another layout without it passes within the cap (h = "
-                        + say.length(singly.height()) + ", " + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
+                        + governs + ", but another layout without it passes " + (capGiven ? "within the cap"
+                        : "in the search") + " (h = " + say.length(singly.height()) + ", " + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
                         + "), so the compression steel is a matter of cost, not of need";
             } else {
                 what = "needs compression steel beyond the hangers: with the hangers alone it fails" + governs
-                        + ", and no layout without it passes within the cap";
+                        + ", and no layout without it passes " + (capGiven ? "within the cap" : "in the search");
             }
         } else {
             what = s.compressionUsed() ? "uses more compression steel than the hangers by choice, not need"
                     : "needs no compression steel beyond the hangers";
         }
-        return "At the cap the beam is " + say.length(s.width()) + " × " + say.length(s.height()) + " and " + what
+        return (capGiven ? "At the cap the beam is " : "As given the beam is ") + say.length(s.width()) + " × "
+                + say.length(s.height()) + " and " + what
                 + (s.strainClass().equals("transition") ? "; it works in the transition zone (φ = "
                         + String.format(Locale.ROOT, "%.3f", s.phi()) + ")" : "") + ".";
     }
@@ -205,6 +306,6 @@ public final class Compare {
 
     static String congestion(Summary s) {
         return s.longitudinalBars() + " bars in " + s.layers() + (s.layers() == 1 ? " layer" : " layers")
-                + (s.compressionNeeded() ? " with compression steel" : "");
+                + (s.compressionUsed() ? " with compression steel" : "");
     }
 }

@@ -59,6 +59,11 @@ public final class SectionTarget implements Target {
     }
 
     @Override
+    public Double fixedWidth() {
+        return p.fixedWidth();
+    }
+
+    @Override
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
         SectionProblem q = new SectionProblem(p.id(), m, p.detailing(), p.code(), space, p.mu(), p.vu(), p.span(), cap,
                 freeWidth ? null : p.fixedWidth(), p.flange(), p.costLength());
@@ -88,6 +93,6 @@ public final class SectionTarget implements Target {
                 l.tensionBar().designation(), l.bending().compressionFace().word(), l.compressionCount(),
                 l.compressionBar().designation(), f.phiMn(), Math.abs(q.mu()), f.epsT(), f.phi(), f.strainClass(), used,
                 needed, bars, l.tensionCounts().size() + 1, o.best().cost(), o.status() + " over "
-                        + o.proof().candidates() + " candidates", fails, null);
+                        + o.proof().candidates() + " candidates", fails, null, false);
     }
 }

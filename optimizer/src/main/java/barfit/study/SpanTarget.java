@@ -53,6 +53,11 @@ public final class SpanTarget implements Target {
     }
 
     @Override
+    public Double fixedWidth() {
+        return p.fixedWidth();
+    }
+
+    @Override
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
         BeamProblem q = new BeamProblem(p.id(), m, p.detailing(), p.code(), space, p.span(), p.ends(), p.mLeft(),
                 p.mMid(), p.mRight(), p.vLeft(), p.vRight(), p.service(), p.limits(), cap, freeWidth ? null : p.fixedWidth(), p.flange(),
@@ -99,7 +104,7 @@ public final class SpanTarget implements Target {
                 l.bottom().designation(), "top", l.topContinuous(), l.top().designation(), f.phiMn(),
                 Math.abs(governing.demand().mu()), f.epsT(), f.phi(), f.strainClass(), used, needed,
                 l.bottomCount() + top, layers, o.best().cost(), o.status() + " over " + o.proof().booleans() + " booleans",
-                fails, null);
+                fails, null, false);
     }
 
     private static String counts(List<Integer> c, String label) {

@@ -3,12 +3,14 @@ package barfit.study;
 import barfit.design.CostBreakdown;
 
 /**
- * One design as a study reports it: size, bars, strength, whether compression steel beyond the
- * hangers is needed (tested by replacing it with the minimum hangers and re-checking), congestion,
- * and cost. {@code feasible} false means no layout in the studied space passes; {@code limit} then
- * names what stops it (the diagnosis's limit, e.g. "deflection" or "min_depth"). {@code hangersFail}
- * names the checks that fail when this layout's compression steel is replaced by the minimum hangers
- * (empty when they do not fail).
+ * One design as a study reports it: size, bars, strength, whether its compression steel beyond the
+ * hangers is relied on ({@code compressionNeeded}: tested by replacing it with the minimum hangers and
+ * re-checking), congestion, and cost. {@code feasible} false means no layout in the studied space
+ * passes; {@code limit} then names what stops it (the diagnosis's limit, e.g. "deflection" or
+ * "min_depth"). {@code hangersFail} names the checks that fail when this layout's compression steel is
+ * replaced by the minimum hangers (empty when they do not fail). {@code compressionAvoidable}: another
+ * layout with the minimum hangers alone passes within the same limits, so relying on compression steel
+ * is a matter of cost, not of need (set by the study that knows it).
  */
 public record Summary(
         boolean feasible,
@@ -35,7 +37,8 @@ public record Summary(
         CostBreakdown cost,
         String proof,
         String hangersFail,
-        String limit) {
+        String limit,
+        boolean compressionAvoidable) {
 
     public static Summary none(String proof) {
         return none(proof, "");
@@ -43,7 +46,19 @@ public record Summary(
 
     public static Summary none(String proof, String limit) {
         return new Summary(false, 0, 0, "", "", "", "", java.util.List.of(), "", "", 0, "", 0, 0, 0, 0, "", false, false,
-                0, 0, null, proof, "", limit);
+                0, 0, null, proof, "", limit, false);
+    }
+
+    /** The same design, knowing whether a layout with the minimum hangers alone passes within its limits. */
+    public Summary withAvoidable(boolean avoidable) {
+        return new Summary(feasible, width, height, tension, compression, stirrups, tensionFace, tensionCounts,
+                tensionBar, compressionFace, compressionCount, compressionBar, phiMn, mu, epsT, phi, strainClass,
+                compressionUsed, compressionNeeded, longitudinalBars, layers, cost, proof, hangersFail, limit, avoidable);
+    }
+
+    /** Compression steel beyond the hangers that nothing within the limits can do without. */
+    public boolean compressionRequired() {
+        return compressionNeeded && !compressionAvoidable;
     }
 
     public double total() {

@@ -20,14 +20,16 @@ public final class Sweep {
      * Everything is reported within the range of caps asked: {@code shallowestFeasible} is the first cap
      * of the range with a passing design (null: none in the range); {@code hangersFrom} the shallowest
      * depth up to the last cap where the minimum hangers alone can work (null: none);
-     * {@code compressionNeededBelow} that depth when caps of the range lie below it and it is within the
-     * range (null otherwise, {@link #compression()} says which).
+     * {@code compressionNeededBelow} that depth when caps of the range below it have a passing design
+     * and it is within the range (null otherwise, {@link #compression()} says which: where the shallowest
+     * passing cap is that depth, every passing design can do without compression steel).
      */
     public record Result(String id, List<Point> points, Double shallowestFeasible, Double compressionNeededBelow,
             Summary chosen, double chosenCap, Double hangersFrom) {
         /** Where compression steel beyond the hangers is needed within the range: "below", "nowhere" or "everywhere". */
         public String compression() {
-            return compressionNeededBelow != null ? "below" : hangersFrom == null ? "everywhere" : "nowhere";
+            return compressionNeededBelow != null ? "below"
+                    : hangersFrom == null && shallowestFeasible != null ? "everywhere" : "nowhere";
         }
 
         public double firstCap() {
@@ -79,7 +81,10 @@ public final class Sweep {
                     used = e.getKey();
                 }
             }
-            points.add(new Point(cap, best == null ? Summary.none("nothing passes with h ≤ cap") : best, used));
+            // within a cap at or above the depth where the hangers alone work, compression steel is a matter of cost
+            boolean avoidable = singly != null && cap >= singly - 1e-9;
+            points.add(new Point(cap, best == null ? Summary.none("nothing passes with h ≤ cap")
+                    : best.withAvoidable(avoidable), used));
         }
         Double shallowest = null;
         for (Point p : points) {
@@ -88,9 +93,16 @@ public final class Sweep {
                 break;
             }
         }
-        Double below = singly != null && singly > caps.get(0) + 1e-9 && singly <= top + 1e-9 ? singly : null;
+        // compression steel is necessary below the hangers' first depth only if some cap below it has a design:
+        // where nothing passes at all, it is not compression steel that is missing
+        Double below = singly != null && shallowest != null && shallowest < singly - 1e-9 && singly <= top + 1e-9
+                ? singly : null;
         double chosenCap = t.cap() != null ? t.cap() : space.depths().get(space.depths().size() - 1);
         Summary chosen = t.design(t.cap(), space, t.materials(), cost, false);
+        if (chosen.feasible() && chosen.compressionNeeded()) {
+            chosen = chosen.withAvoidable(singly != null && chosenCap >= singly - 1e-9
+                    || t.design(t.cap(), space.withHangersOnly(), t.materials(), cost, false).feasible());
+        }
         return new Result(t.id(), points, shallowest, below, chosen, chosenCap, singly);
     }
 }

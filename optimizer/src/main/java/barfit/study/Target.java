@@ -21,6 +21,9 @@ public interface Target {
 
     Materials materials();
 
+    /** The web width the beam fixes (mm), or null where the search chooses it. */
+    Double fixedWidth();
+
     /**
      * The cheapest design with h at most {@code cap} (null: up to the search's deepest), in the given
      * space and materials; {@code freeWidth} lets the width range over the space even where the beam

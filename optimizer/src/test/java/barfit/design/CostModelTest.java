@@ -21,6 +21,9 @@ class CostModelTest {
         assertEquals(hoop, cost.stirrupSetLength(300, 600, no10, 2), 1e-9);
         // each crosstie: one leg and two hooks
         assertEquals(hoop + 2 * (510.5 + 2 * 75), cost.stirrupSetLength(300, 600, no10, 4), 1e-9);
+        // the bar list gives the hoop and the crossties as separate bars: the same lengths, apart
+        assertEquals(hoop, cost.hoopLength(300, 600, no10), 1e-9);
+        assertEquals(510.5 + 2 * 75, cost.crosstieLength(600, no10), 1e-9);
     }
 
     @Test

@@ -48,10 +48,13 @@ public final class Shear {
         }
         boolean capped = vc > vcMax;
         vc = Math.min(vc, vcMax);
-        double vs = st == null ? 0 : av * fyt * d / st.spacing();
+        // the stirrups' Vs counts up to the 22.5.1.2 limit only: beyond it the web crushes first
+        double vsProvided = st == null ? 0 : av * fyt * d / st.spacing();
+        double vsCap = code.vsMax().si() * rootFc * bw * d;
+        double vs = Math.min(vsProvided, vsCap);
+        boolean vsCapped = vsProvided > vsCap;
         double phi = CodeTables.PHI_SHEAR;
         double phiVn = phi * (vc + vs);
-        double vsCap = code.vsMax().si() * rootFc * bw * d;
         double vnLimit = phi * (vc + vsCap);
         double trigger = phi * code.shearMinTrigger().si() * lambda * rootFc * bw * d;
         // Table 9.7.6.2.2 keys its halved limits on the Vs the section needs, not on what the stirrups give
@@ -102,8 +105,16 @@ public final class Shear {
             }
             t.value("Vc", Q.force(vc), "Table 22.5.5.1 row " + row);
             if (st != null) {
-                t.step("Vs", "Av fyt d / s  (22.5.8.5.3)", "{} × {} × {} / {}", Q.force(vs), Q.area(av), Q.stress(fyt),
-                        Q.length(d), Q.length(st.spacing()));
+                t.step(vsCapped ? "Vs,stirrups" : "Vs", "Av fyt d / s  (22.5.8.5.3)", "{} × {} × {} / {}",
+                        Q.force(vsProvided), Q.area(av), Q.stress(fyt), Q.length(d), Q.length(st.spacing()));
+                if (vsCapped) {
+                    t.step("Vs,max", code.vsMax().shown() + " √f'c bw d  (22.5.1.2)", code.vsMax().shown()
+                            + " × √{} × {} × {}", Q.force(vsCap), Q.stress(rootFc * rootFc), Q.length(bw), Q.length(d));
+                    t.step("Vs", "min(Vs,stirrups, Vs,max)", "min({}, {})", Q.force(vs), Q.force(vsProvided),
+                            Q.force(vsCap));
+                    t.note("The stirrups give more than Vs,max: the section carries no more than φ(Vc + Vs,max) "
+                            + "whatever the stirrups (22.5.1.2).");
+                }
             }
             t.step("φVn", "0.75 (Vc + Vs)", "0.75 × ({} + {})", Q.force(phiVn), Q.force(vc), Q.force(vs));
             t.step("φ(Vc + Vs,max)", "0.75 (Vc + " + code.vsMax().shown() + " √f'c bw d)  (22.5.1.2)",
@@ -122,7 +133,7 @@ public final class Shear {
                         + "), Vs,req ≤ " + code.vsSplit().shown() + " √f'c bw d", null, Q.length(sAlong));
             }
         }
-        return new ShearResult(vu, bw, d, rhoW, lambdaS, vc, row, vs, phiVn, vnLimit, avMin, av, trigger, sAlong,
-                sAcross, high);
+        return new ShearResult(vu, bw, d, rhoW, lambdaS, vc, row, vs, vsProvided, phiVn, vnLimit, avMin, av, trigger,
+                sAlong, sAcross, high);
     }
 }

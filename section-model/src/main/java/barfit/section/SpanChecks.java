@@ -29,8 +29,35 @@ public final class SpanChecks {
     public record Sections(BeamSection left, BeamSection mid, BeamSection right) {
     }
 
-    /** What was found: the checks, and the deflections when they were computed (mm, else null). */
-    public record Result(List<CheckResult> checks, double hMin, Double liveDeflection, Double longTermDeflection) {
+    /** The service levels deflection is computed at: dead, dead plus the sustained live part, dead plus live. */
+    public static final List<String> LEVELS = List.of("D", "D + sustained L", "D + L");
+
+    /**
+     * The stiffness of one critical section as deflection takes it: where it is ("left support",
+     * "mid-span", "right support"), its factored moment (N·mm, magnitude), Ig, Icr, Mcr and the rest of
+     * {@link Deflection.Stiffness}, and at each of the {@link #LEVELS} the service moment Ma (N·mm,
+     * magnitude) and Ie of Table 24.2.3.5 (mm⁴).
+     */
+    public record SectionStiffness(String at, double mu, Deflection.Stiffness stiffness, double[] ma, double[] ie) {
+    }
+
+    /**
+     * What was found: the checks, and the deflections when they were computed (mm, else null); then, per
+     * critical section, its stiffness ({@code sections}, empty when nothing was computed), the Ie the span
+     * takes at each level ({@code ieSpan}), the immediate deflections at each level ({@code immediate}) and
+     * the long-term multiplier λΔ (NaN when not computed).
+     */
+    public record Result(List<CheckResult> checks, double hMin, Double liveDeflection, Double longTermDeflection,
+            List<SectionStiffness> sections, double[] ieSpan, double[] immediate, double lambdaDelta) {
+        public Result(List<CheckResult> checks, double hMin, Double liveDeflection, Double longTermDeflection) {
+            this(checks, hMin, liveDeflection, longTermDeflection, List.of(), new double[0], new double[0], Double.NaN);
+        }
+
+        public Result {
+            checks = List.copyOf(checks);
+            sections = List.copyOf(sections);
+        }
+
         public boolean ok() {
             return checks.stream().allMatch(CheckResult::pass);
         }
@@ -100,25 +127,43 @@ public final class SpanChecks {
         double live = dl[3];
         double lambda = Deflection.lambdaDelta(rhoPrime);
         double longTerm = dl[4];
+        List<SectionStiffness> stiff = new ArrayList<>();
+        if (ieL != null) {
+            stiff.add(sectionStiffness("left support", s.left(), Bending.HOGGING, mLeft, ratios));
+        }
+        if (ieM != null) {
+            stiff.add(sectionStiffness("mid-span", s.mid(), Bending.SAGGING, mMid, ratios));
+        }
+        if (ieR != null) {
+            stiff.add(sectionStiffness("right support", s.right(), Bending.HOGGING, mRight, ratios));
+        }
+        double[] ieSpan = new double[3];
+        for (int i = 0; i < 3; i++) {
+            ieSpan[i] = spanIe(ends, i, ieL, ieM, ieR);
+        }
         if (t.isOn()) {
             t.value("h", Q.length(h), "below h,min: deflections are computed (9.3.2)");
             t.step("Ec", code.ec().shown() + " √f'c", code.ec().shown() + " × √{}", Q.stress(ec), Q.stress(m.fc()));
+            t.step("fr", code.fr().shown() + " λ √f'c  (19.2.3.1)", code.fr().shown() + " × {} × √{}",
+                    Q.stress(Deflection.fr(m, code)), Q.number(m.lambda()), Q.stress(m.fc()));
             t.step("wu", "1.2 D + 1.6 L  (5.3.1b)", "1.2 × {} + 1.6 × {}", Q.lineLoad(wu), Q.lineLoad(loads.dead()),
                     Q.lineLoad(loads.live()));
-            t.note("Service moments: Ma = Mu × w / wu; Ie of Table 24.2.3.5 at each critical section, averaged "
-                    + "for a continuous span (24.2.3.6).");
+            t.note("Service moments: Ma = |Mu| × w / wu at each critical section, for w = D, D + sustained L and "
+                    + "D + L; Ie of Table 24.2.3.5 at each critical section, averaged for a continuous span (24.2.3.6).");
             t.note("Icr: cracked transformed section with every bar layer at its own depth, n As below the "
                     + "neutral axis and (n − 1) As above it; Ig and Mcr of the gross concrete section.");
-            stiffnessTrail(s.left(), mLeft, Bending.HOGGING, "left support", t);
-            stiffnessTrail(s.mid(), mMid, Bending.SAGGING, "mid-span", t);
-            stiffnessTrail(s.right(), mRight, Bending.HOGGING, "right support", t);
-            t.value("Δ(D)", Q.length(dD), "immediate, dead load");
-            t.value("Δ(D + L)", Q.length(dDL), "immediate, dead plus live");
+            for (SectionStiffness ss : stiff) {
+                stiffnessTrail(ss, loads, wu, t);
+            }
+            for (int i = 0; i < 3; i++) {
+                ieSpanTrail(ends, i, stiff, ieSpan[i], t);
+            }
+            deflectionTrail(ends, length, ec, mLeft, mMid, mRight, ratios, ieSpan, dl, t);
             t.step("Δ(L)", "Δ(D + L) − Δ(D)", "{} − {}", Q.length(live), Q.length(dDL), Q.length(dD));
             t.note("ρ' = As' / (b d) at " + (ends == EndCondition.CANTILEVER ? "the support" : "mid-span")
                     + ", b the width of the compression face (the flange's under sagging)");
             t.step("λΔ", "2.0 / (1 + 50 ρ')  (24.2.4.1)", "2.0 / (1 + 50 × {})", Q.number(lambda), Q.number(rhoPrime));
-            t.step("Δ(long term)", "λΔ Δ(sustained) + Δ(L)", "{} × {} + {}", Q.length(longTerm), Q.number(lambda),
+            t.step("Δ(long term)", "λΔ Δ(D + sustained L) + Δ(L)", "{} × {} + {}", Q.length(longTerm), Q.number(lambda),
                     Q.length(dSus), Q.length(live));
         }
         out.add(CheckResult.atMost("deflection_live", "Immediate live-load deflection ≤ ℓ/" + fmt(limits.live()),
@@ -127,7 +172,41 @@ public final class SpanChecks {
         out.add(CheckResult.atMost("deflection_total", "Long-term plus live deflection ≤ ℓ/" + fmt(limits.total()),
                 "9.3.2, 24.2.4, Table 24.2.2", Q.length(longTerm), Q.length(length / limits.total()),
                 "λΔ = " + String.format(java.util.Locale.ROOT, "%.2f", lambda)));
-        return new Result(out, hMin, live, longTerm);
+        return new Result(out, hMin, live, longTerm, stiff, ieSpan, new double[] {dD, dSus, dDL}, lambda);
+    }
+
+    private static SectionStiffness sectionStiffness(String at, BeamSection s, Bending bending, double mu,
+            double[] ratios) {
+        Deflection.Stiffness st = stiffnessOf(s, bending);
+        double[] ma = new double[ratios.length];
+        double[] ie = new double[ratios.length];
+        for (int i = 0; i < ratios.length; i++) {
+            ma[i] = Math.abs(mu) * ratios[i];
+            ie[i] = Deflection.ie(ma[i], st);
+        }
+        return new SectionStiffness(at, Math.abs(mu), st, ma, ie);
+    }
+
+    /** The Ie a span takes at one level: as {@link #deflections} does. */
+    private static double spanIe(EndCondition ends, int i, double[] ieLeft, double[] ieMid, double[] ieRight) {
+        switch (ends) {
+            case SIMPLE:
+                return ieMid[i];
+            case CANTILEVER:
+                return ieLeft[i];
+            default:
+                double sum = 0;
+                int k = 0;
+                if (ieLeft != null) {
+                    sum += ieLeft[i];
+                    k++;
+                }
+                if (ieRight != null) {
+                    sum += ieRight[i];
+                    k++;
+                }
+                return k == 0 ? ieMid[i] : 0.5 * (ieMid[i] + sum / k);
+        }
     }
 
     /** Area and centroid depth (from the extreme compression fibre of the given bending) of one face's bars. */
@@ -183,25 +262,7 @@ public final class SpanChecks {
             double ml = mLeft == null ? 0 : Math.abs(mLeft) * ratios[i];
             double mm = mMid == null ? 0 : Math.abs(mMid) * ratios[i];
             double mr = mRight == null ? 0 : Math.abs(mRight) * ratios[i];
-            double ie;
-            switch (ends) {
-                case SIMPLE -> ie = ieMid[i];
-                case CANTILEVER -> ie = ieLeft[i];
-                default -> {
-                    double sum = 0;
-                    int k = 0;
-                    if (ieLeft != null) {
-                        sum += ieLeft[i];
-                        k++;
-                    }
-                    if (ieRight != null) {
-                        sum += ieRight[i];
-                        k++;
-                    }
-                    ie = k == 0 ? ieMid[i] : 0.5 * (ieMid[i] + sum / k);
-                }
-            }
-            d[i] = Deflection.spanDeflection(ends, length, ec, ie, ml, mm, mr);
+            d[i] = Deflection.spanDeflection(ends, length, ec, spanIe(ends, i, ieLeft, ieMid, ieRight), ml, mm, mr);
         }
         double live = d[2] - d[0];
         double longTerm = Deflection.lambdaDelta(rhoPrime) * d[1] + live;
@@ -214,16 +275,76 @@ public final class SpanChecks {
                 && CheckResult.within(deflections[4], length / limits.total());
     }
 
-    private static void stiffnessTrail(BeamSection s, Double mu, Bending bending, String where, Trail t) {
-        if (s == null || mu == null) {
-            return;
+    /** One critical section: n, Ig, yt, Mcr, kd, Icr, then Ma and Ie at each service level. */
+    private static void stiffnessTrail(SectionStiffness ss, ServiceLoads loads, double wu, Trail t) {
+        String where = " (" + ss.at() + ")";
+        Deflection.Stiffness st = ss.stiffness();
+        t.value("n" + where, Q.number(st.n()), "Es / Ec");
+        t.value("Ig" + where, Q.inertia(st.ig()), "gross concrete section");
+        t.value("yt" + where, Q.length(st.yt()), "centroid of the gross section to the tension face");
+        t.step("Mcr" + where, "fr Ig / yt  (24.2.3.5)", "{} × {} / {}", Q.moment(st.mcr()),
+                Q.stress(st.mcr() * st.yt() / st.ig()), Q.inertia(st.ig()), Q.length(st.yt()));
+        t.value("kd" + where, Q.length(st.kd()), "first moment of the cracked transformed section = 0");
+        t.value("Icr" + where, Q.inertia(st.icr()), "concrete above kd + Σ n or (n − 1) As (d − kd)²");
+        double[] w = {loads.dead(), loads.dead() + loads.sustainedLive() * loads.live(), loads.dead() + loads.live()};
+        for (int i = 0; i < ss.ma().length; i++) {
+            String level = ", " + LEVELS.get(i);
+            t.step("Ma" + where.substring(0, where.length() - 1) + level + ")", "|Mu| × w / wu", "{} × {} / {}",
+                    Q.moment(ss.ma()[i]), Q.moment(ss.mu()), Q.lineLoad(w[i]), Q.lineLoad(wu));
+            String ie = "Ie" + where.substring(0, where.length() - 1) + level + ")";
+            if (ss.ma()[i] <= 2.0 / 3.0 * st.mcr()) {
+                t.step(ie, "Ig, as Ma ≤ (2/3) Mcr  (Table 24.2.3.5)", "{}", Q.inertia(ss.ie()[i]), Q.inertia(st.ig()));
+            } else {
+                t.step(ie, "Icr / (1 − ((2/3) Mcr / Ma)² (1 − Icr / Ig)) ≤ Ig  (Table 24.2.3.5)",
+                        "{} / (1 − ((2/3) × {} / {})² × (1 − {} / {}))", Q.inertia(ss.ie()[i]), Q.inertia(st.icr()),
+                        Q.moment(st.mcr()), Q.moment(ss.ma()[i]), Q.inertia(st.icr()), Q.inertia(st.ig()));
+            }
         }
-        Deflection.Stiffness st = stiffnessOf(s, bending);
-        t.value("n (" + where + ")", Q.number(st.n()), "Es / Ec");
-        t.value("Ig (" + where + ")", Q.inertia(st.ig()), "gross concrete section");
-        t.value("Mcr (" + where + ")", Q.moment(st.mcr()), "fr Ig / yt, 24.2.3.5");
-        t.value("kd (" + where + ")", Q.length(st.kd()), "first moment of the cracked transformed section = 0");
-        t.value("Icr (" + where + ")", Q.inertia(st.icr()), "concrete above kd + Σ n or (n − 1) As (d − kd)²");
+    }
+
+    /** The Ie the span takes at one level: one section's, or the average of 24.2.3.6. */
+    private static void ieSpanTrail(EndCondition ends, int i, List<SectionStiffness> stiff, double ie, Trail t) {
+        String sym = "Ie (span, " + LEVELS.get(i) + ")";
+        SectionStiffness mid = null;
+        List<SectionStiffness> supports = new ArrayList<>();
+        for (SectionStiffness ss : stiff) {
+            if (ss.at().equals("mid-span")) {
+                mid = ss;
+            } else {
+                supports.add(ss);
+            }
+        }
+        if (ends == EndCondition.SIMPLE || ends == EndCondition.CANTILEVER || supports.isEmpty() || mid == null) {
+            t.value(sym, Q.inertia(ie), "the " + (ends == EndCondition.CANTILEVER ? "support" : "mid-span")
+                    + " section's");
+        } else if (supports.size() == 1) {
+            t.step(sym, "(Ie,mid + Ie,support) / 2  (24.2.3.6)", "({} + {}) / 2", Q.inertia(ie),
+                    Q.inertia(mid.ie()[i]), Q.inertia(supports.get(0).ie()[i]));
+        } else {
+            t.step(sym, "(Ie,mid + (Ie,left + Ie,right) / 2) / 2  (24.2.3.6)", "({} + ({} + {}) / 2) / 2",
+                    Q.inertia(ie), Q.inertia(mid.ie()[i]), Q.inertia(supports.get(0).ie()[i]),
+                    Q.inertia(supports.get(1).ie()[i]));
+        }
+    }
+
+    /** The immediate deflection at each level, with the span's formula and its numbers. */
+    private static void deflectionTrail(EndCondition ends, double length, double ec, Double mLeft, Double mMid,
+            Double mRight, double[] ratios, double[] ie, double[] dl, Trail t) {
+        for (int i = 0; i < 3; i++) {
+            String sym = "Δ(" + LEVELS.get(i) + ")";
+            double ml = mLeft == null ? 0 : Math.abs(mLeft) * ratios[i];
+            double mm = mMid == null ? 0 : Math.abs(mMid) * ratios[i];
+            double mr = mRight == null ? 0 : Math.abs(mRight) * ratios[i];
+            switch (ends) {
+                case SIMPLE -> t.step(sym, "5 Ma,mid ℓ² / (48 Ec Ie)", "5 × {} × {}² / (48 × {} × {})", Q.length(dl[i]),
+                        Q.moment(mm), Q.length(length), Q.stress(ec), Q.inertia(ie[i]));
+                case CANTILEVER -> t.step(sym, "Ma,support ℓ² / (4 Ec Ie)", "{} × {}² / (4 × {} × {})",
+                        Q.length(dl[i]), Q.moment(Math.max(ml, mr)), Q.length(length), Q.stress(ec), Q.inertia(ie[i]));
+                default -> t.step(sym, "5 ℓ² (Ma,mid − 0.1 (Ma,left + Ma,right)) / (48 Ec Ie)",
+                        "5 × {}² × ({} − 0.1 × ({} + {})) / (48 × {} × {})", Q.length(dl[i]), Q.length(length),
+                        Q.moment(mm), Q.moment(ml), Q.moment(mr), Q.stress(ec), Q.inertia(ie[i]));
+            }
+        }
     }
 
     /** The section's gross and cracked stiffness in one bending, with every bar layer at its own depth. */

@@ -59,6 +59,27 @@ class SectionChecksTest {
     }
 
     @Test
+    void vsBeyondTheSectionLimitIsNotCounted() {
+        // McCormac & Brown 9th ed., Example 8.2 section (bw = 14 in, d = 24 in, f'c = 3000 psi): Vc = 2 sqrt(f'c)
+        // bw d = 36,807 lb (the book's phi Vc = 27,605 lb / 0.75) and 8 sqrt(f'c) bw d = 147,228 lb (as printed).
+        // Four #3 legs (Av = 0.44 in²) at 3 in give Av fyt d / s = 0.44 x 60,000 x 24 / 3 = 211,200 lb by hand,
+        // more than ACI 318-19 22.5.1.2 lets the section carry: phi Vn = 0.75 (36,807 + 147,228) = 138,026 lb.
+        Stirrups dense = new Stirrups(Sections.us("3"), 4, 3 * IN);
+        ShearResult sh = SectionChecks.run(example82(dense), new Demand(null, 100 * KIP), null, Trail.off()).shear();
+        assertEquals(211_200, sh.vsStirrups() / KIP * 1000, 5, "Av fyt d / s, lb");
+        assertEquals(147_228, sh.vs() / KIP * 1000, 5, "Vs taken at Vs,max, lb");
+        assertEquals(138_026, sh.phiVn() / KIP * 1000, 10, "phi (Vc + Vs,max), lb");
+        // at 7.33 in (the book's spacing) the stirrups stay below the limit and count in full
+        ShearResult open = SectionChecks.run(example82(new Stirrups(Sections.us("3"), 2, 7.33 * IN)),
+                new Demand(null, 60 * KIP), null, Trail.off()).shear();
+        assertEquals(open.vsStirrups(), open.vs(), 1e-9);
+        Trail t = Trail.recording();
+        SectionChecks.run(example82(dense), new Demand(null, 100 * KIP), null, t);
+        assertTrue(t.entries().stream().anyMatch(e -> e instanceof Trail.Step st && st.symbol().equals("Vs,max")),
+                "the trail shows the limit it applied");
+    }
+
+    @Test
     void sizeEffectRowCWithoutStirrups() {
         // Hand evaluation of ACI 318-19 Table 22.5.5.1(c) and 22.5.5.1.3 (no published example found):
         // bw = 300, d = 500 mm, rho_w = 0.0100, f'c = 28 MPa: lambda_s = sqrt(2/(1 + 0.004 x 500)) = 0.8165;

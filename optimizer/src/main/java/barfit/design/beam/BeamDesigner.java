@@ -311,7 +311,7 @@ public final class BeamDesigner {
         }
         Fix wider = allowed.isEmpty() ? null : wider(p, tallest);
         if (wider != null) {
-            fixes.add("or b ≥ " + say(wider.width()) + " at h = " + say(wider.height())
+            fixes.add("b ≥ " + say(wider.width()) + " at h = " + say(wider.height())
                     + (p.fixedWidth() != null ? " (the beam fixes b)" : ""));
         }
         return new Diagnosis(limit, clause, summary, fixes, atCap, deeper, wider);

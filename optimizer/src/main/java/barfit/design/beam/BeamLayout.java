@@ -167,12 +167,20 @@ public record BeamLayout(
             out.add(new BarMark("K1", "skin bars, both faces", skin.bar(), 2 * Layout.skinBarsPerFace(height,
                     skin.spacing()), l));
         }
+        // a stirrup set is a closed hoop and, for each leg beyond two, a crosstie: separate bars, separate marks
         List<BeamProblem.Zone> zones = p.zones();
+        int s = 1;
         for (int i = 0; i < zones.size(); i++) {
-            Stirrups s = zoneStirrups.get(i);
-            int sets = stirrupSets(zones.get(i).length(), s.spacing());
-            out.add(new BarMark("S" + (i + 1), "stirrups, " + zones.get(i).name() + " zone, " + s.legs() + " legs",
-                    s.bar(), sets, cost.stirrupSetLength(width, height, s.bar(), s.legs())));
+            Stirrups st = zoneStirrups.get(i);
+            int sets = stirrupSets(zones.get(i).length(), st.spacing());
+            String zone = zones.get(i).name() + " zone";
+            out.add(new BarMark("S" + s++, "stirrup hoops, " + zone + (st.legs() > 2 ? " (2 of " + st.legs() + " legs)"
+                    : ", 2 legs"), st.bar(), sets, cost.hoopLength(width, height, st.bar())));
+            if (st.legs() > 2) {
+                int ties = st.legs() - 2;
+                out.add(new BarMark("S" + s++, "crossties, " + zone + " (" + ties + " per hoop)", st.bar(), sets * ties,
+                        cost.crosstieLength(height, st.bar())));
+            }
         }
         return out;
     }

@@ -258,8 +258,7 @@ public final class ScheduleHtml {
             for (int z = 0; z < zones.size(); z++) {
                 var st = l.zoneStirrups().get(z);
                 out.append(z == 0 ? "" : "<br>").append(Svg.esc(zones.get(z).name())).append(": ")
-                        .append(Svg.esc(st.bar().label())).append(", ").append(st.legs()).append(" legs @ ")
-                        .append(u.compact(st.spacing(), Dim.LENGTH));
+                        .append(Svg.esc(Words.stirrups(st, u)));
             }
             out.append("</td><td class=\"lines\">");
             boolean first = true;
@@ -279,8 +278,8 @@ public final class ScheduleHtml {
         }
         out.append("</tbody>\n</table>\n</div>\n<p class=\"note\">Bars per layer from the face inward (\"3+2\": three in "
                 + "the outer layer, two in the next). At a support the count includes the continuous top bars; the "
-                + "extras run the length given past the face. Stirrups: size, legs @ spacing in ").append(u.unit(Dim.LENGTH))
-                .append(".</p>\n</section>\n");
+                + "extras run the length given past the face. Stirrups: size × legs @ spacing, by zone (each zone's extent "
+                + "is in the beam's own section below).</p>\n</section>\n");
     }
 
     /** "3+2 No. 25": bars per layer from the face inward. */
@@ -306,7 +305,7 @@ public final class ScheduleHtml {
     private static String diagnosis(BeamDesigner.Diagnosis d) {
         return "binding limit: " + d.limit() + " (" + d.summary() + ")" + (d.fixes().isEmpty()
                 ? "; no single relaxed limit (depth, width) gives a passing layout"
-                : "; what would work, one limit at a time: " + String.join("; ", d.fixes()));
+                : "; what would work, one limit at a time: " + barfit.report.Words.alternatives(d.fixes()));
     }
 
     // ---------------------------------------------------------------- rationalisation proof
@@ -442,7 +441,7 @@ public final class ScheduleHtml {
                     .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(d.summary()))
                     .append("</p>\n<p>").append(Svg.esc(d.fixes().isEmpty()
                             ? "No single relaxed limit (depth, width) gives a passing layout."
-                            : "What would work, one limit at a time: " + String.join("; ", d.fixes()))).append("</p>\n</div>\n")
+                            : "What would work, one limit at a time: " + barfit.report.Words.alternatives(d.fixes()))).append("</p>\n</div>\n")
                     .append("</section>\n");
             return;
         }
@@ -455,7 +454,7 @@ public final class ScheduleHtml {
             kv(out, "top", perLayer(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
-            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span");
+            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + BeamText.topAtMid(d, u));
             String rule = " (" + Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top()).rule() + ")";
             if (p.leftSupport()) {
                 boolean extra = BeamLayout.sum(l.topLeft()) > l.topContinuous();
@@ -490,6 +489,9 @@ public final class ScheduleHtml {
         kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
         kv(out, "proof", proofWords(o.proof()));
         out.append("</table>\n</div>\n");
+        for (String w : BeamText.warnings(p)) {
+            out.append("<p class=\"warn\">Warning: ").append(Svg.esc(w)).append(".</p>\n");
+        }
 
         out.append("<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
                 .append("<th>bar</th><th>length (").append(u.unit(Dim.SPAN)).append(")</th></tr></thead>\n<tbody>\n");
@@ -516,6 +518,7 @@ public final class ScheduleHtml {
                     .append("\">\n<div class=\"pair\">\n").append(SectionDrawing.svg(view, scale, u))
                     .append(StrainStressDiagram.svg(f, l.height(), p.materials(), scale, u)).append("</div>\n</figure>\n");
         }
+        zoneDrawings(p, l, d, id, scale, u, out);
 
         out.append("<h4>Checks</h4>\n<div class=\"wide\">\n<table class=\"grid checks\">\n<thead><tr><th>where</th><th>id</th>")
                 .append("<th>check</th><th>clause</th><th>demand</th><th></th><th>limit</th><th>ratio</th><th>result</th>")
@@ -540,6 +543,53 @@ public final class ScheduleHtml {
         trail(out, "stirrup zones", d.report().zoneTrail(), u);
         trail(out, "span", d.report().spanTrail(), u);
         out.append("</details>\n</section>\n");
+    }
+
+    /**
+     * The stirrups of every zone whose arrangement (bar and legs) no section drawing above shows: a zone
+     * away from the sections drawn, or one with its own legs (four legs at an end, two in the middle...),
+     * drawn on the section the zone is designed with.
+     */
+    private static void zoneDrawings(BeamProblem p, BeamLayout l, BeamDesigner.Design d, String id, double scale,
+            UnitSystem u, StringBuilder out) {
+        Set<String> shown = new HashSet<>();
+        for (BeamProblem.Place where : d.report().sections().keySet()) {
+            shown.add(arrangement(where, SectionDrawing.stirrupsAt(p, l, where)));
+        }
+        // zones not shown yet, those with one arrangement on one section together (both ends of a span...)
+        Map<String, List<Integer>> missing = new java.util.LinkedHashMap<>();
+        List<BeamProblem.Zone> zones = p.zones();
+        for (int i = 0; i < zones.size(); i++) {
+            String key = arrangement(zones.get(i).section(), l.zoneStirrups().get(i));
+            if (d.report().sections().containsKey(zones.get(i).section()) && !shown.contains(key)) {
+                missing.computeIfAbsent(key, k -> new ArrayList<>()).add(i);
+            }
+        }
+        for (List<Integer> group : missing.values()) {
+            int first = group.get(0);
+            BeamProblem.Zone z = zones.get(first);
+            List<String> names = new ArrayList<>();
+            List<String> where = new ArrayList<>();
+            for (int i : group) {
+                names.add(zones.get(i).name());
+                where.add(u.number(zones.get(i).from(), Dim.SPAN) + "–" + span(zones.get(i).to(), u));
+            }
+            String title = "Stirrups, " + String.join(" and ", names) + (names.size() == 1 ? " zone" : " zones")
+                    + " (" + String.join(", ", where) + ")";
+            String subtitle = Words.stirrups(l.zoneStirrups().get(first), u) + "; bars as at "
+                    + (z.section() == BeamProblem.Place.MID ? "mid-span" : "the " + place(p, z.section())
+                    .toLowerCase(Locale.ROOT));
+            SectionDrawing.View view = SectionDrawing.ofZone(p, l, first,
+                    d.report().sections().get(z.section()).flexure().d(), title, subtitle);
+            out.append("<figure class=\"zone-section\" id=\"").append(Svg.esc(id)).append("-zone-")
+                    .append(Svg.esc(String.join("-", names))).append("\" data-zones=\"")
+                    .append(Svg.esc(String.join(" ", names))).append("\">\n").append(SectionDrawing.svg(view, scale, u))
+                    .append("</figure>\n");
+        }
+    }
+
+    private static String arrangement(BeamProblem.Place where, barfit.section.Stirrups st) {
+        return where.name() + "/" + st.bar().designation() + "/" + st.legs();
     }
 
     private static void check(StringBuilder out, String where, CheckResult c, UnitSystem u) {
@@ -768,6 +818,7 @@ public final class ScheduleHtml {
             .pair { display: flex; gap: 8px; align-items: flex-start; }
             /* both drawings shrink by the same factor when the page is narrow, so their heights still line up */
             .pair svg { flex: 0 1 auto; min-width: 0; height: auto; border: 1px solid #e2e2e2; background: #fff; }
+            .zone-section svg { max-width: 100%; height: auto; border: 1px solid #e2e2e2; background: #fff; }
             .plot svg { max-width: 100%; height: auto; }
             details.trail { margin: 10px 0; }
             details.trail summary { cursor: pointer; font-weight: bold; }

@@ -32,7 +32,7 @@ public final class SectionDrawing {
     /** px from the top of the SVG to the top face of the section; the strain diagram uses the same. */
     static final double TOP = 58;
     /** px below the bottom face: b dimension, scale bar and the legend lines. */
-    static final double BELOW = 112;
+    static final double BELOW = 126;
     private static final double LEFT = 60;
     private static final double LABELS = 130;
     private static final double MAX_HEIGHT_PX = 340;
@@ -73,7 +73,16 @@ public final class SectionDrawing {
      */
     public static View of(BeamProblem p, BeamLayout l, BeamProblem.Place place, Double d, String title,
             String subtitle) {
-        Stirrups st = stirrupsAt(p, l, place);
+        return of(p, l, place, stirrupsAt(p, l, place), d, title, subtitle);
+    }
+
+    /** The view of a stirrup zone: the section the zone is designed with, and the zone's own stirrups. */
+    public static View ofZone(BeamProblem p, BeamLayout l, int zone, Double d, String title, String subtitle) {
+        return of(p, l, p.zones().get(zone).section(), l.zoneStirrups().get(zone), d, title, subtitle);
+    }
+
+    private static View of(BeamProblem p, BeamLayout l, BeamProblem.Place place, Stirrups st, Double d, String title,
+            String subtitle) {
         BeamSection s = l.section(p, place, st);
         List<DrawnLayer> layers = new ArrayList<>();
         for (BarLayer bl : s.layers()) {
@@ -205,12 +214,6 @@ public final class SectionDrawing {
         double height = svgHeight(shape, scale);
         Mm m = new Mm(ox, oy, scale);
         StringBuilder out = new StringBuilder();
-        out.append("<svg xmlns=\"").append(Svg.NS).append("\" class=\"section-drawing\" width=\"").append(Svg.px(width))
-                .append("\" height=\"").append(Svg.px(height)).append("\" viewBox=\"0 0 ").append(Svg.px(width)).append(' ')
-                .append(Svg.px(height)).append("\" data-px-per-mm=\"").append(Svg.px(scale)).append("\" data-origin-x=\"")
-                .append(Svg.px(ox)).append("\" data-origin-y=\"").append(Svg.px(oy)).append("\" role=\"img\" aria-label=\"")
-                .append(Svg.esc(v.title())).append("\">\n");
-        out.append("<g font-family=\"sans-serif\" font-size=\"11\" fill=\"#222\">\n");
         out.append("<text x=\"4\" y=\"16\" font-size=\"13\" font-weight=\"bold\">").append(Svg.esc(v.title()))
                 .append("</text>\n");
         if (v.subtitle() != null) {
@@ -225,14 +228,25 @@ public final class SectionDrawing {
                 .append(Svg.px((h - 2 * c) * scale)).append("\" fill=\"none\" stroke=\"").append(DIM)
                 .append("\" stroke-width=\"0.8\" stroke-dasharray=\"4 3\"/>\n");
         List<Placed> placed = place(v);
-        stirrup(out, v, m, placed);
+        boolean shortTails = stirrup(out, v, m, placed);
         bars(out, v, m, placed);
         skin(out, v, m, placed);
         dimensions(out, v, m, u, leftStub, rightStub);
         labels(out, v, m, placed, right + 40);
-        legend(out, v, m, u);
-        out.append("</g>\n</svg>\n");
-        return out.toString();
+        double legendRight = legend(out, v, m, u, shortTails);
+        // wide enough for the legend's longest line and the titles (11 px text: about 6.3 px a character)
+        width = Math.max(width, Math.max(legendRight, Math.max(4 + 8 * v.title().length(),
+                v.subtitle() == null ? 0 : 4 + TEXT_PX * v.subtitle().length())) + 8);
+        StringBuilder svg = new StringBuilder(out.length() + 512);
+        svg.append("<svg xmlns=\"").append(Svg.NS).append("\" class=\"section-drawing\" width=\"").append(Svg.px(width))
+                .append("\" height=\"").append(Svg.px(height)).append("\" viewBox=\"0 0 ").append(Svg.px(width)).append(' ')
+                .append(Svg.px(height)).append("\" data-px-per-mm=\"").append(Svg.px(scale)).append("\" data-origin-x=\"")
+                .append(Svg.px(ox)).append("\" data-origin-y=\"").append(Svg.px(oy)).append("\" role=\"img\" aria-label=\"")
+                .append(Svg.esc(v.title())).append("\">\n");
+        svg.append("<g font-family=\"sans-serif\" font-size=\"11\" fill=\"#222\">\n");
+        svg.append(out);
+        svg.append("</g>\n</svg>\n");
+        return svg.toString();
     }
 
     /** mm in the section (from the web's top-left corner) to px in the SVG. */
@@ -320,10 +334,10 @@ public final class SectionDrawing {
      * whose straight extension is 6 db, at least 75 mm (Table 25.3.2). Legs beyond two are crossties with
      * a 135-degree hook at each end, as the cost model prices them.
      */
-    private static void stirrup(StringBuilder out, View v, Mm m, List<Placed> placed) {
+    private static boolean stirrup(StringBuilder out, View v, Mm m, List<Placed> placed) {
         Stirrups st = v.stirrups();
         if (st == null) {
-            return;
+            return false;
         }
         BarSize bar = st.bar();
         double ds = bar.diameter();
@@ -346,26 +360,30 @@ public final class SectionDrawing {
         d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, e + r, e));
         out.append("<path class=\"stirrup\" d=\"").append(d).append("\" ").append(stroke)
                 .append(" stroke-linejoin=\"round\"/>\n");
-        // the two hook ends at the top-left corner: each turns 135 degrees round the corner bar and runs
-        // into the core along the diagonal, cut short where it would run into another bar
+        // the two hook ends close the hoop at one corner: each turns 135 degrees round the corner and runs into
+        // the core along the diagonal; the corner is the first (top-left, top-right, bottom-left, bottom-right)
+        // where both tails run their full extension clear of every bar (a second layer close under a corner
+        // bar is in the way of the tails there), else the one where the shorter tail runs furthest
         List<Circle> circles = circles(v, placed);
-        double cx = e + r;
-        double cy = e + r;
-        double k = Math.sqrt(0.5);
-        StringBuilder hooks = new StringBuilder();
-        double ax = cx - r * k;
-        double ay = cy + r * k;
-        double ta = tail(ax, ay, k, k, ext, ds / 2, circles);
-        hooks.append('M').append(p(m, cx - r, cy)).append(" A").append(rr).append(',').append(rr).append(" 0 0 0 ")
-                .append(p(m, ax, ay)).append(" L").append(p(m, ax + ta * k, ay + ta * k));
-        double bx = cx + r * k;
-        double by = cy - r * k;
-        double tb = tail(bx, by, k, k, ext, ds / 2, circles);
-        hooks.append(" M").append(p(m, cx, cy - r)).append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ")
-                .append(p(m, bx, by)).append(" L").append(p(m, bx + tb * k, by + tb * k));
-        out.append("<path class=\"stirrup hook\" d=\"").append(hooks).append("\" ").append(stroke)
-                .append(" stroke-linecap=\"butt\"/>\n");
+        double rt = ds / 2 + clearance(bar);
         List<TieLeg> legs = tieLegs(v, placed, e);
+        List<Double> legXs = legs.stream().map(TieLeg::x).toList();
+        Corner corner = null;
+        for (int[] c : new int[][] {{-1, -1}, {1, -1}, {-1, 1}, {1, 1}}) {
+            Corner k = Corner.of(c[0], c[1], b, h, e, r, ext, rt, circles, legXs, ds);
+            if (corner == null || k.shortest() > corner.shortest() + 1e-9) {
+                corner = k;
+            }
+            if (k.shortest() >= ext - 1e-9) {
+                corner = k;
+                break;
+            }
+        }
+        StringBuilder hooks = new StringBuilder();
+        corner.path(hooks, m, rr);
+        out.append("<path class=\"stirrup hook\" data-corner=\"").append(corner.name()).append("\" d=\"").append(hooks)
+                .append("\" ").append(stroke).append(" stroke-linecap=\"butt\"/>\n");
+        boolean shortened = corner.shortest() < ext - 1e-6;
         for (int i = 0; i < legs.size(); i++) {
             TieLeg leg = legs.get(i);
             // down the leg, with a 135-degree hook at each end round the bar it wraps (or over the hoop)
@@ -374,10 +392,11 @@ public final class SectionDrawing {
             // a tail stops halfway to the next leg so two tails never meet
             double leftLimit = (i == 0 ? e : (legs.get(i - 1).x() + leg.x()) / 2);
             double rightLimit = (i == legs.size() - 1 ? b - e : (legs.get(i + 1).x() + leg.x()) / 2);
-            double tTop = Math.min(tail(top.ex(), top.ey(), top.ux(), top.uy(), ext, ds / 2, circles),
-                    reach(top, leftLimit, rightLimit, ds / 2));
-            double tBottom = Math.min(tail(bottom.ex(), bottom.ey(), bottom.ux(), bottom.uy(), ext, ds / 2, circles),
-                    reach(bottom, leftLimit, rightLimit, ds / 2));
+            double tTop = Math.min(tail(top.ex(), top.ey(), top.ux(), top.uy(), ext, rt, circles),
+                    reach(top, leftLimit, rightLimit, rt));
+            double tBottom = Math.min(tail(bottom.ex(), bottom.ey(), bottom.ux(), bottom.uy(), ext, rt, circles),
+                    reach(bottom, leftLimit, rightLimit, rt));
+            shortened |= Math.min(tTop, tBottom) < ext - 1e-6;
             String rTop = Svg.px(top.radius() * m.s());
             String rBottom = Svg.px(bottom.radius() * m.s());
             StringBuilder t = new StringBuilder();
@@ -391,6 +410,73 @@ public final class SectionDrawing {
             t.append(" L").append(p(m, bottom.ex() + tBottom * bottom.ux(), bottom.ey() + tBottom * bottom.uy()));
             out.append("<path class=\"stirrup tie\" d=\"").append(t).append("\" ").append(stroke)
                     .append(" stroke-linecap=\"butt\"/>\n");
+        }
+        return shortened;
+    }
+
+    /**
+     * The clear gap a drawn hook tail keeps from a bar it does not wrap, mm: half the stirrup's diameter, so
+     * that a tail stopped by a bar reads as stopped short of it, not as touching it (drawing only).
+     */
+    static double clearance(BarSize stirrup) {
+        return stirrup.diameter() / 2;
+    }
+
+    /**
+     * The corner where the hoop closes, as drawn: {@code sx} -1 at the left face, +1 at the right; {@code sy}
+     * -1 at the top, +1 at the bottom. (cx, cy) is the centre of the hoop's bend there, r its centreline
+     * radius; the hook from the side leg ends its bend at (ax, ay), the one from the top or bottom leg at
+     * (bx, by), and both tails run along (ux, uy) into the core, {@code ta} and {@code tb} long.
+     */
+    record Corner(int sx, int sy, double cx, double cy, double r, double ax, double ay, double bx, double by,
+            double ux, double uy, double ta, double tb) {
+        static Corner of(int sx, int sy, double b, double h, double e, double r, double ext, double rt,
+                List<Circle> circles, List<Double> legXs, double ds) {
+            double k = Math.sqrt(0.5);
+            double cx = sx < 0 ? e + r : b - e - r;
+            double cy = sy < 0 ? e + r : h - e - r;
+            double ux = -sx * k;
+            double uy = -sy * k;
+            // from the side leg: the bend ends on the side of the diagonal nearer the side face, and the other way
+            double ax = cx + sx * r * k;
+            double ay = cy - sy * r * k;
+            double bx = cx - sx * r * k;
+            double by = cy + sy * r * k;
+            // a tail also stops short of a crosstie's leg, a bar of the stirrup's own diameter
+            double ta = Math.min(tail(ax, ay, ux, uy, ext, rt, circles), beforeLegs(ax, ux, rt + ds / 2, legXs));
+            double tb = Math.min(tail(bx, by, ux, uy, ext, rt, circles), beforeLegs(bx, ux, rt + ds / 2, legXs));
+            return new Corner(sx, sy, cx, cy, r, ax, ay, bx, by, ux, uy, ta, tb);
+        }
+
+        /** How far along (ux, ·) from x a tail runs before its centreline comes within {@code gap} of a leg. */
+        private static double beforeLegs(double x, double ux, double gap, List<Double> legXs) {
+            double len = Double.POSITIVE_INFINITY;
+            for (double lx : legXs) {
+                double ahead = (lx - x) * Math.signum(ux);
+                if (ahead > 0) {
+                    len = Math.min(len, Math.max(0, (ahead - gap) / Math.abs(ux)));
+                }
+            }
+            return len;
+        }
+
+        double shortest() {
+            return Math.min(ta, tb);
+        }
+
+        String name() {
+            return (sy < 0 ? "top" : "bottom") + "-" + (sx < 0 ? "left" : "right");
+        }
+
+        /** Both hooks: from the end of the hoop's straight leg round the bend, then the tail. */
+        void path(StringBuilder d, Mm m, String rr) {
+            // mirrored corners turn the other way: the sweep flag follows the number of mirrors
+            int flip = sx * sy > 0 ? 0 : 1;
+            d.append('M').append(p(m, cx + sx * r, cy)).append(" A").append(rr).append(',').append(rr).append(" 0 0 ")
+                    .append(flip).append(' ').append(p(m, ax, ay)).append(" L").append(p(m, ax + ta * ux, ay + ta * uy));
+            d.append(" M").append(p(m, cx, cy + sy * r)).append(" A").append(rr).append(',').append(rr).append(" 0 0 ")
+                    .append(1 - flip).append(' ').append(p(m, bx, by)).append(" L")
+                    .append(p(m, bx + tb * ux, by + tb * uy));
         }
     }
 
@@ -423,8 +509,8 @@ public final class SectionDrawing {
 
     /**
      * How far a hook's tail may run from (x, y) along the unit vector (ux, uy), at most {@code ext}, before
-     * a bar of thickness 2 {@code rt} would overlap a circle. A circle the tail starts against and leaves
-     * is the bar the hook wraps.
+     * its centreline comes within {@code rt} of a circle (rt: half the tail's thickness plus the clearance it
+     * keeps). A circle the tail starts against and leaves is the bar the hook wraps.
      */
     static double tail(double x, double y, double ux, double uy, double ext, double rt, List<Circle> circles) {
         double len = ext;
@@ -435,7 +521,7 @@ public final class SectionDrawing {
             double along = wx * ux + wy * uy;
             double gap = wx * wx + wy * wy - reach * reach;
             if (gap < 0) {
-                if (along < 0) {
+                if (along < -1e-6) {
                     len = 0;
                 }
                 continue;
@@ -471,19 +557,26 @@ public final class SectionDrawing {
                 return hook(atTop, Math.signum(bar.x() - x), bar.r() + ds / 2, bar.x(), bar.y());
             }
             // over the hoop: turned towards the core, or away from it, or bent tighter, whichever first
-            // keeps clear of the bars beside the leg
+            // keeps the drawing's clearance from the bars beside the leg; failing all, the one that keeps furthest
             double in = x < b / 2 ? 1 : -1;
-            HookEnd last = null;
+            double keep = clearance(v.stirrups().bar());
+            HookEnd best = null;
+            double bestMargin = Double.NEGATIVE_INFINITY;
             for (double rad = hoopRadius; rad >= ds - 1e-9; rad -= ds / 4) {
                 for (double sd : new double[] {in, -in}) {
                     double cy = atTop ? e + rad : h - e - rad;
-                    last = last == null || sd == in ? hook(atTop, sd, rad, x + sd * rad, cy) : last;
-                    if (arcClear(atTop, hook(atTop, sd, rad, x + sd * rad, cy), all, ds / 2)) {
-                        return hook(atTop, sd, rad, x + sd * rad, cy);
+                    HookEnd hk = hook(atTop, sd, rad, x + sd * rad, cy);
+                    double margin = arcMargin(atTop, hk, all, ds / 2);
+                    if (margin >= keep - 1e-6) {
+                        return hk;
+                    }
+                    if (margin > bestMargin + 1e-9) {
+                        best = hk;
+                        bestMargin = margin;
                     }
                 }
             }
-            return last;
+            return best;
         }
 
         private HookEnd hook(boolean atTop, double side, double radius, double cx, double cy) {
@@ -492,22 +585,21 @@ public final class SectionDrawing {
             return new HookEnd(cy, side, radius, cx + radius * side * k, cy + radius * v1 * k, side * k, -v1 * k);
         }
 
-        /** Whether a hook's bend, from the leg round 135 degrees, keeps clear of every bar. */
-        private boolean arcClear(boolean atTop, HookEnd hk, List<Circle> all, double rt) {
+        /** The least clear distance from a hook's bend, from the leg round 135 degrees, to any bar. */
+        private double arcMargin(boolean atTop, HookEnd hk, List<Circle> all, double rt) {
             double cx = x + hk.side() * hk.radius();
             double a0 = hk.side() > 0 ? Math.PI : 0;
             double sweep = (atTop ? hk.side() : -hk.side()) * 0.75 * Math.PI;
+            double margin = Double.POSITIVE_INFINITY;
             for (int i = 0; i <= 24; i++) {
                 double a = a0 + sweep * i / 24;
                 double px = cx + hk.radius() * Math.cos(a);
                 double py = hk.y() + hk.radius() * Math.sin(a);
                 for (Circle c : all) {
-                    if (Math.hypot(px - c.x(), py - c.y()) < c.r() + rt - 1e-6) {
-                        return false;
-                    }
+                    margin = Math.min(margin, Math.hypot(px - c.x(), py - c.y()) - c.r() - rt);
                 }
             }
-            return true;
+            return margin;
         }
     }
 
@@ -532,14 +624,28 @@ public final class SectionDrawing {
         List<Circle> first = interior(outerLayer(placed, tension));
         List<Circle> second = interior(outerLayer(placed, other));
         List<Circle> otherOuter = layerCircles(outerLayer(placed, other));
+        List<Circle> topOuter = layerCircles(outerLayer(placed, Face.TOP));
+        List<Circle> bottomOuter = layerCircles(outerLayer(placed, Face.BOTTOM));
+        // how far the shorter of a leg's two hook tails would run, for choosing the side of a bar a leg takes
+        BarSize bar = v.stirrups().bar();
+        double hoopR = StirrupHooks.insideBendDiameter(bar) / 2 + rt;
+        double ext = StirrupHooks.extension135(bar, v.code());
+        double keep = rt + clearance(bar);
+        java.util.function.DoubleUnaryOperator tails = x -> {
+            TieLeg leg = new TieLeg(x, touching(x, topOuter, rt), touching(x, bottomOuter, rt));
+            HookEnd t = leg.end(true, v, e, hoopR, all);
+            HookEnd d = leg.end(false, v, e, hoopR, all);
+            return Math.min(tail(t.ex(), t.ey(), t.ux(), t.uy(), ext, keep, all),
+                    tail(d.ex(), d.ey(), d.ux(), d.uy(), ext, keep, all));
+        };
         List<Double> xs = new ArrayList<>();
         List<Circle> used = new ArrayList<>();
         double lo = e + 2 * rt;
         for (int k = 1; k <= ties / 2; k++) {
             double target = e + (b - 2 * e) * k / (ties + 1);
-            Double x = pick(target, first, otherOuter, all, used, lo, b / 2 - rt, b, rt);
+            Double x = pick(target, first, otherOuter, all, used, lo, b / 2 - rt, b, rt, tails, ext);
             if (x == null) {
-                x = pick(target, second, List.of(), all, used, lo, b / 2 - rt, b, rt);
+                x = pick(target, second, List.of(), all, used, lo, b / 2 - rt, b, rt, tails, ext);
             }
             if (x == null) {
                 x = nudge(target, all, lo, b / 2 - rt, rt);
@@ -549,9 +655,9 @@ public final class SectionDrawing {
             lo = x + 2 * rt;
         }
         if (ties % 2 == 1) {
-            Double x = pick(b / 2, first, otherOuter, all, used, lo, b - lo, b, rt);
+            Double x = pick(b / 2, first, otherOuter, all, used, lo, b - lo, b, rt, tails, ext);
             if (x == null) {
-                x = pick(b / 2, second, List.of(), all, used, lo, b - lo, b, rt);
+                x = pick(b / 2, second, List.of(), all, used, lo, b - lo, b, rt, tails, ext);
             }
             if (x == null) {
                 x = nudge(b / 2, all, lo, b - lo, rt);
@@ -559,8 +665,6 @@ public final class SectionDrawing {
             xs.add(x);
         }
         xs.sort(Double::compare);
-        List<Circle> topOuter = layerCircles(outerLayer(placed, Face.TOP));
-        List<Circle> bottomOuter = layerCircles(outerLayer(placed, Face.BOTTOM));
         for (double x : xs) {
             out.add(new TieLeg(x, touching(x, topOuter, rt), touching(x, bottomOuter, rt)));
         }
@@ -617,11 +721,13 @@ public final class SectionDrawing {
 
     /**
      * A leg position in [lo, hi] beside an unused bar of {@code bars}, the bar nearest the target first;
-     * of its two sides, one that also touches a bar of the other face first, then the one nearer the
-     * side face (so the hook's tail turns into the core).
+     * of its two sides, the one whose hooks' tails run their full extension {@code ext} (by {@code tails}),
+     * else the one where the shorter runs furthest; between equals, one that also touches a bar of the other
+     * face first, then the one nearer the side face (so the hook's tail turns into the core).
      */
     private static Double pick(double target, List<Circle> bars, List<Circle> otherFace, List<Circle> all,
-            List<Circle> used, double lo, double hi, double b, double rt) {
+            List<Circle> used, double lo, double hi, double b, double rt, java.util.function.DoubleUnaryOperator tails,
+            double ext) {
         List<Circle> order = new ArrayList<>(bars);
         order.sort(Comparator.comparingDouble(c -> Math.abs(c.x() - target)));
         for (Circle c : order) {
@@ -633,11 +739,20 @@ public final class SectionDrawing {
             if (touching(sides[1], otherFace, rt) != null && touching(sides[0], otherFace, rt) == null) {
                 sides = new double[] {sides[1], sides[0]};
             }
+            Double best = null;
+            double bestTail = -1;
             for (double x : sides) {
                 if (x >= lo - 1e-9 && x <= hi + 1e-9 && clear(x, all, rt)) {
-                    used.add(c);
-                    return x;
+                    double t = Math.min(ext, tails.applyAsDouble(x));
+                    if (t > bestTail + 1e-9) {
+                        best = x;
+                        bestTail = t;
+                    }
                 }
+            }
+            if (best != null) {
+                used.add(c);
+                return best;
             }
         }
         return null;
@@ -755,7 +870,11 @@ public final class SectionDrawing {
         }
     }
 
-    private static void legend(StringBuilder out, View v, Mm m, UnitSystem u) {
+    /** Width of a character of the 11 px sans-serif text, px, for sizing the drawing (an estimate). */
+    private static final double TEXT_PX = 6.3;
+
+    /** The legend under the section; returns the x (px) its longest line reaches. */
+    private static double legend(StringBuilder out, View v, Mm m, UnitSystem u, boolean shortTails) {
         double h = v.shape().height();
         double y = m.y(h) + 50;
         // a scale bar of 100 mm (4 in)
@@ -767,22 +886,30 @@ public final class SectionDrawing {
         out.append("<rect x=\"").append(Svg.px((x0 + x1) / 2)).append("\" y=\"").append(Svg.px(y - 4)).append("\" width=\"")
                 .append(Svg.px(barMm * m.s() / 2)).append("\" height=\"4\" fill=\"#fff\" stroke=\"#333\" stroke-width=\"0.8\"/>\n");
         // the bar, not a ratio, states the scale: it stays true when the page is zoomed or printed
-        Svg.text(out, x1 + 6, y, "start", null, (u == UnitSystem.US ? "4 in" : "100 mm") + "   (section drawn to scale)");
-        String cover = "cover " + len(v.detailing().cover(), u) + " to the stirrup (dashed)";
-        Svg.text(out, x0, y + 16, "start", null, cover);
+        String scaleText = (u == UnitSystem.US ? "4 in" : "100 mm") + "   (section drawn to scale)";
+        Svg.text(out, x1 + 6, y, "start", null, scaleText);
+        double reach = x1 + 6 + TEXT_PX * scaleText.length();
+        List<String> lines = new ArrayList<>();
+        lines.add("cover " + len(v.detailing().cover(), u) + " to the stirrup (dashed)");
         if (v.stirrups() != null) {
             Stirrups s = v.stirrups();
             String bend = Math.round(StirrupHooks.insideBendDiameter(s.bar()) / s.bar().diameter()) + " d_b";
-            Svg.text(out, x0, y + 30, "start", null, "stirrup " + s.bar().label() + ", " + s.legs() + " legs @ "
-                    + len(s.spacing(), u) + "; bends " + bend + " inside, 135° hooks + "
-                    + len(StirrupHooks.extension135(s.bar(), v.code()), u));
+            lines.add("stirrup " + s.bar().label() + ", " + s.legs() + " legs @ " + len(s.spacing(), u) + "; bends "
+                    + bend + " inside, 135° hooks + " + len(StirrupHooks.extension135(s.bar(), v.code()), u));
+            if (shortTails) {
+                lines.add("hook tails drawn short where a bar or crosstie is in the way");
+            }
         }
         boolean anyOff = v.layers().stream().anyMatch(l -> !l.counted());
         boolean slabOff = v.shape().flange() != null && v.bending() == Bending.HOGGING;
         if (anyOff || slabOff) {
-            Svg.text(out, x0, y + 44, "start", null, "grey: present, not counted here"
-                    + (slabOff ? " (slab on the tension side)" : ""));
+            lines.add("grey: present, not counted here" + (slabOff ? " (slab on the tension side)" : ""));
         }
+        for (int i = 0; i < lines.size(); i++) {
+            Svg.text(out, x0, y + 16 + 14 * i, "start", null, lines.get(i));
+            reach = Math.max(reach, x0 + TEXT_PX * lines.get(i).length());
+        }
+        return reach;
     }
 
     /** Bar labels to the right of the section, pushed apart so they never overlap, with leader lines. */

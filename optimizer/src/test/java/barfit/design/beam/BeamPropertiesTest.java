@@ -65,6 +65,23 @@ class BeamPropertiesTest {
             }
             double rates = BeamOracleTest.COST.rates().mainBarsPerKg() * BeamOracleTest.COST.rates().lapFactor();
             assertEquals(o.best().cost().mainBars(), main * rates, 1e-6);
+            // and of the stirrups: hoops and crossties, each set as the cost model prices it
+            double stirrupKg = 0;
+            double setKg = 0;
+            var zones = p.zones();
+            for (int z = 0; z < zones.size(); z++) {
+                var st = o.best().layout().zoneStirrups().get(z);
+                setKg += BeamLayout.stirrupSets(zones.get(z).length(), st.spacing()) * BeamOracleTest.COST.stirrupSetLength(
+                        o.best().layout().width(), o.best().layout().height(), st.bar(), st.legs()) / 1000
+                        * st.bar().massPerMetre();
+            }
+            for (var m : o.best().bars()) {
+                if (m.mark().startsWith("S")) {
+                    stirrupKg += m.count() * m.length() / 1000 * m.bar().massPerMetre();
+                }
+            }
+            assertEquals(setKg, stirrupKg, 1e-6, "the bar list's hoops and crossties weigh what is priced");
+            assertEquals(o.best().cost().stirrups(), stirrupKg * BeamOracleTest.COST.rates().stirrupsPerKg(), 1e-6);
         }
         assertTrue(seen > 20);
         // two were asked of every span; a small space may hold fewer distinct designs, but not across the board

@@ -34,11 +34,15 @@ final class ScheduleFixtures {
     }
 
     static synchronized ScheduleResult designed(String exampleFile) {
-        return CACHE.computeIfAbsent(exampleFile, ScheduleFixtures::design);
+        return CACHE.computeIfAbsent(exampleFile, f -> design(EXAMPLES.resolve(f)));
     }
 
-    private static ScheduleResult design(String exampleFile) {
-        Path file = EXAMPLES.resolve(exampleFile);
+    /** The same for any design file (a test resource). */
+    static synchronized ScheduleResult designed(Path file) {
+        return CACHE.computeIfAbsent(file.toString(), f -> design(file));
+    }
+
+    private static ScheduleResult design(Path file) {
         DesignInput in = DesignInputReader.read(file);
         List<ScheduleBeam> beams = new ArrayList<>();
         for (DesignBeam b : in.beams()) {

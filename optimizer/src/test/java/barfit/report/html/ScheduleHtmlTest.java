@@ -89,6 +89,37 @@ class ScheduleHtmlTest {
         }
     }
 
+    /**
+     * A zone whose stirrups no section drawing shows gets its own: the four-leg end zones of a simple span
+     * (invented), whose only section drawn, at mid-span, sits in the two-leg middle zone.
+     */
+    @Test
+    void everyZoneArrangementIsDrawn() throws Exception {
+        ScheduleResult r = ScheduleFixtures.designed(java.nio.file.Path.of("src/test/resources/drawings/end-zone-legs-si.yaml"));
+        String page = ScheduleHtml.render(r);
+        ScheduleResult.Beam b = r.beams().get(0);
+        List<Integer> legs = b.outcome().best().layout().zoneStirrups().stream().map(s -> s.legs()).toList();
+        assertEquals(List.of(4, 2, 4), legs, "the example's zones: four legs at the ends, two in the middle");
+        String mid = element(page, "<figure class=\"section-pair\" id=\"beam-SS-1-mid\"", "</figure>");
+        assertEquals(0, ties(svg(mid, "section-drawing")), "mid-span shows the middle zone's two legs");
+        String ends = element(page, "<figure class=\"zone-section\" id=\"beam-SS-1-zone-left-right\"", "</figure>");
+        Element svg = svg(ends, "section-drawing");
+        assertEquals(2, ties(svg), "the end zones' four legs: the hoop and two crossties");
+        assertEquals(b.outcome().best().layout().bottomCount() + b.outcome().best().layout().topContinuous(),
+                circles(svg, "bar").size(), "drawn on the mid-span section's bars");
+        assertTrue(ends.contains("left and right zones"), ends);
+        assertEquals(1, count(page, "<figure class=\"zone-section\""), "the middle zone is not drawn twice");
+    }
+
+    private static int ties(Element svg) {
+        int n = 0;
+        NodeList paths = svg.getElementsByTagName("path");
+        for (int i = 0; i < paths.getLength(); i++) {
+            n += ((Element) paths.item(i)).getAttribute("class").equals("stirrup tie") ? 1 : 0;
+        }
+        return n;
+    }
+
     @Test
     void carriesTheCaution() {
         for (String line : Caution.LINES) {

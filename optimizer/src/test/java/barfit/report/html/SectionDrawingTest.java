@@ -19,6 +19,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.junit.jupiter.api.Test;
 import org.w3c.dom.Document;
@@ -233,18 +235,62 @@ class SectionDrawingTest {
         }
     }
 
-    /** Hook tails (hoop and crossties) never cut into a bar: every bar centre is at least rb + rt away. */
+    /**
+     * Hook tails (hoop and crossties) never cut into a bar, nor end touching one: every bar centre is at
+     * least rb + rt away from a tail and, but for the bar the hook wraps (the one its tail starts against),
+     * rb + rt + the drawing's clearance from a tail that runs at all, so that a tail stopped by a bar reads
+     * as stopped short of it. (A hook with no room for any tail is only kept off the bars.)
+     */
     @Test
     void hookTailsKeepClearOfBars() throws Exception {
-        for (SectionDrawing.View v : views()) {
+        List<SectionDrawing.View> all = new ArrayList<>(views());
+        all.add(hoggingTwoLayers(2));
+        for (SectionDrawing.View v : all) {
             Drawn dr = draw(v);
             assertFalse(dr.tails().isEmpty());
+            double gap = SectionDrawing.clearance(v.stirrups().bar()) * dr.scale();
             for (Seg s : dr.tails()) {
                 for (Bar b : dr.bars()) {
-                    assertTrue(s.distance(b.x(), b.y()) >= b.r() + dr.rt() - TOL, "tail " + s + " cuts the bar at "
-                            + b.x() + "," + b.y());
+                    double d = s.distance(b.x(), b.y());
+                    assertTrue(d >= b.r() + dr.rt() - TOL, "tail " + s + " cuts the bar at " + b.x() + "," + b.y());
+                    // the tail's own bar: one end of the straight piece leaves it (a path may draw either way)
+                    boolean wrapped = Math.min(Math.hypot(s.x1() - b.x(), s.y1() - b.y()),
+                            Math.hypot(s.x2() - b.x(), s.y2() - b.y())) <= b.r() + dr.rt() + TOL;
+                    boolean runs = Math.hypot(s.x2() - s.x1(), s.y2() - s.y1()) > TOL;
+                    assertTrue(wrapped || !runs || d >= b.r() + dr.rt() + gap - TOL, "tail " + s + " touches the bar at "
+                            + b.x() + "," + b.y() + " (distance " + d + ")");
                 }
             }
         }
+    }
+
+    /**
+     * A support section with two top layers close under the corner bars (6 + 6 No. 16, 25 mm apart, 25.2.2)
+     * and one bottom layer of 3 No. 25, 350 × 525 mm: the second layer is in the way of hooks closing the
+     * hoop at a top corner, so it closes at a bottom one, where both 135° hooks run their full 75 mm
+     * (Table 25.3.2: 6 db = 57 mm, at least 75 mm).
+     */
+    @Test
+    void theHoopClosesWhereItsHooksRunTheirFullLength() throws Exception {
+        SectionDrawing.View v = hoggingTwoLayers(2);
+        String svg = SectionDrawing.svg(v, SectionDrawing.scaleFor(v.shape()), UnitSystem.SI);
+        Matcher m = Pattern.compile("<path class=\"stirrup hook\" data-corner=\"([a-z-]+)\"").matcher(svg);
+        assertTrue(m.find(), "the hoop's hooks are drawn");
+        assertTrue(m.group(1).startsWith("bottom"), "closed at " + m.group(1));
+        Drawn dr = draw(v);
+        assertEquals(2, dr.tails().size());
+        for (Seg s : dr.tails()) {
+            assertEquals(75 * dr.scale(), Math.hypot(s.x2() - s.x1(), s.y2() - s.y1()), TOL, "a full 75 mm tail");
+        }
+        assertFalse(svg.contains("drawn short"), "nothing is drawn short, so the legend does not say so");
+    }
+
+    private static SectionDrawing.View hoggingTwoLayers(int legs) {
+        Detailing si = new Detailing(40, NO10, 25, Exposure.INTERIOR);
+        List<SectionDrawing.DrawnLayer> drawn = new ArrayList<>();
+        layers(Face.TOP, si, NO16, 6, 6).forEach(l -> drawn.add(new SectionDrawing.DrawnLayer(l, true)));
+        layers(Face.BOTTOM, si, NO25, 3).forEach(l -> drawn.add(new SectionDrawing.DrawnLayer(l, false)));
+        return new SectionDrawing.View("test", null, SectionShape.rectangular(350, 525), si, Bending.HOGGING, drawn,
+                new Stirrups(NO10, legs, 150), null, null, CodeEquations.SI);
     }
 }
