@@ -20,6 +20,8 @@ public final class Main implements Runnable {
     public static final int FAILED = 1;
     public static final int BAD_INPUT = 2;
     public static final int INTERNAL = 3;
+    /** The commands that run the solver: only these load its native library. */
+    static final java.util.Set<String> SOLVING = java.util.Set.of("design", "schedule", "compare", "sweep", "bench");
     static final String OUT_OF_MEMORY = "barfit: out of memory; give the JVM more heap through the launcher, e.g. "
             + "BARFIT_JAVA_OPTS=-Xmx4g ./barfit ...";
 
@@ -48,6 +50,9 @@ public final class Main implements Runnable {
 
     /** Runs barfit in this process (the tests use this); returns the exit code. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
+        if (args.length > 0 && SOLVING.contains(args[0])) {
+            barfit.design.OrTools.loadInBackground(); // the solver's native library, while the input is read
+        }
         CommandLine cl = new CommandLine(new Main());
         cl.setOut(new PrintWriter(out, true));
         cl.setErr(new PrintWriter(err, true));
