@@ -47,17 +47,13 @@ public final class OrTools {
         if (loaded || cache == null || cache.isBlank()) {
             return;
         }
-        try {
-            if (!Files.isRegularFile(cacheFolder(Path.of(cache)).resolve(COMPLETE))) {
-                return;
-            }
-        } catch (IOException | RuntimeException e) {
-            return;
-        }
         Thread t = new Thread(() -> {
             try {
-                load();
-            } catch (RuntimeException | LinkageError e) {
+                // finding the folder scans the class path: here, not on the thread that reads the input
+                if (Files.isRegularFile(cacheFolder(Path.of(cache)).resolve(COMPLETE))) {
+                    load();
+                }
+            } catch (IOException | RuntimeException | LinkageError e) {
                 // load() on the solving thread tries again and reports it
             }
         }, "barfit-native-load");
