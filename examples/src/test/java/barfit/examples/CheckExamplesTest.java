@@ -12,7 +12,10 @@ import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** Every file in examples/check runs through {@code barfit check}; files named "*fails*" must exit 1. */
+/**
+ * Every file in examples/check runs through {@code barfit check}; files named "*fails*" must exit 1. The
+ * text and JSON reports equal their golden files byte for byte (see {@link Golden}).
+ */
 class CheckExamplesTest {
     static Stream<Path> examples() throws IOException {
         try (Stream<Path> s = Files.list(Path.of("check"))) {
@@ -20,6 +23,11 @@ class CheckExamplesTest {
             assertTrue(files.size() >= 3, "examples/check needs at least three files");
             return files.stream();
         }
+    }
+
+    /** The golden file of an example's output: check/NAME.txt or .json. */
+    static String golden(Path file, String extension) {
+        return "check/" + file.getFileName().toString().replaceFirst("\\.yaml$", "") + extension;
     }
 
     @ParameterizedTest(name = "{0}")
@@ -31,11 +39,12 @@ class CheckExamplesTest {
         assertEquals("", text.err());
         assertTrue(text.out().contains("CAUTION"), "every report carries the caution");
         assertTrue(text.out().contains("Calculation trail"));
-        Run again = Run.of("check", file.toString());
-        assertEquals(text.out(), again.out(), "same input, same output, byte for byte");
+        Golden.check(golden(file, ".txt"), text.out());
 
         Run json = Run.of("check", file.toString(), "--format", "json");
         assertEquals(expected, json.exit());
+        assertEquals("", json.err());
+        Golden.check(golden(file, ".json"), json.out());
         JsonNode root = new ObjectMapper().readTree(json.out());
         assertTrue(root.get("beams").size() > 0);
         for (JsonNode b : root.get("beams")) {

@@ -29,6 +29,7 @@ import org.junit.jupiter.api.io.TempDir;
  * The schedule examples in examples/schedule run through {@code barfit schedule --out} as their README
  * shows, and what they write holds together:
  * <ul>
+ * <li>what each prints and writes equals its golden files (see {@link #checkGolden});</li>
  * <li>exit 0, the four files, one schedule.csv row per input beam, schedule.json with the input's beams
  * in order, a rationalised proof that says OPTIMAL;</li>
  * <li>the total cost is the sum of the beams' costs plus one formwork set per section size used, and
@@ -72,6 +73,7 @@ class ScheduleExamplesTest {
         // library-si.yaml: rationalise: {max_section_sizes: 6, max_bar_sizes: 3, groups: same_section,
         // formwork_set_cost: 400}
         checkSchedule(libraryRun, library, ids(rows), groups(rows), 6, 3, 400);
+        checkGolden("library-si", libraryRun, library);
     }
 
     @Test
@@ -94,6 +96,21 @@ class ScheduleExamplesTest {
         // formwork_set_cost: 100}
         JsonNode root = checkSchedule(r, out, ids, groups, 3, 3, 100);
         assertEquals("US", root.get("units").asText());
+        checkGolden("office-us", r, out);
+    }
+
+    /**
+     * What a schedule printed and wrote against the golden files under schedule/NAME/ (see {@link Golden}):
+     * the terminal text, with the output folder (the only absolute path printed) read as OUT, schedule.csv,
+     * schedule.json (what --format json prints) and standardisation.svg byte for byte, and report.html by its
+     * SHA-256 (2.6 MB for the library: too large to keep; a mismatch leaves it under target/golden-actual).
+     */
+    static void checkGolden(String name, Run run, Path out) throws IOException {
+        Golden.check("schedule/" + name + "/stdout.txt", run.out().replace(out.toString(), "OUT"));
+        for (String f : List.of("schedule.csv", "schedule.json", "standardisation.svg")) {
+            Golden.check(Golden.DIR.resolve("schedule/" + name + "/" + f), Files.readAllBytes(out.resolve(f)));
+        }
+        Golden.checkDigest("schedule/" + name + "/report.html", Files.readAllBytes(out.resolve("report.html")));
     }
 
     /** Checks a rationalised schedule written into {@code out}; returns its schedule.json. */

@@ -9,10 +9,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The studies example: compare and sweep run as the README shows, and the sweep plot committed beside
- * the example is regenerated here on every test run, so it cannot go stale.
+ * The studies example: compare and sweep run as the README shows; their text, JSON and CSV equal their
+ * golden files, and the sweep plot drawn into a temporary folder equals the one committed beside the
+ * example, byte for byte (see {@link Golden}: {@code -Dgolden.update=true} rewrites both).
  */
 class StudyExamplesTest {
     static final String FILE = "studies/transfer-girder-si.yaml";
@@ -35,11 +37,18 @@ class StudyExamplesTest {
         }
         assertEquals(java.util.Set.of("at_cap", "deepen", "no_compression_steel", "widen", "fc"), kinds);
         assertTrue(beam.has("recommended"));
-        assertEquals(text.out(), Run.of("compare", FILE).out(), "same input, same output");
+        Golden.check("studies/transfer-girder-si.compare.txt", text.out());
+        Golden.check("studies/transfer-girder-si.compare.json", json.out());
     }
 
+    @TempDir
+    Path tmp;
+
     @Test
-    void sweepRegeneratesTheCommittedPlot() throws Exception {
+    void sweepDrawsTheCommittedPlot() throws Exception {
+        Run text = Run.of("sweep", FILE);
+        assertEquals(0, text.exit(), text.err());
+        Golden.check("studies/transfer-girder-si.sweep.txt", text.out());
         Run json = Run.of("sweep", FILE, "--format", "json");
         assertEquals(0, json.exit(), json.err());
         JsonNode beam = new ObjectMapper().readTree(json.out()).get("beams").get(0);
@@ -56,16 +65,20 @@ class StudyExamplesTest {
                 previous = p.get("cost").asDouble();
             }
         }
-        Run plot = Run.of("sweep", FILE, "--plot", PLOT.toString(), "--force");
+        Golden.check("studies/transfer-girder-si.sweep.json", json.out());
+        Path drawn = tmp.resolve("sweep.svg");
+        Run plot = Run.of("sweep", FILE, "--plot", drawn.toString());
         assertEquals(0, plot.exit(), plot.err());
-        String svg = Files.readString(PLOT);
+        String svg = Files.readString(drawn);
         var factory = DocumentBuilderFactory.newInstance();
         factory.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
-        var doc = factory.newDocumentBuilder().parse(PLOT.toFile());
+        var doc = factory.newDocumentBuilder().parse(drawn.toFile());
         assertEquals("svg", doc.getDocumentElement().getNodeName());
         assertTrue(svg.contains("Beam TG-1"));
         assertTrue(svg.contains("shallowest feasible"));
+        Golden.check(PLOT, Files.readAllBytes(drawn));
         Run csv = Run.of("sweep", FILE, "--csv");
         assertTrue(csv.out().startsWith("beam,cap_mm,feasible,cost"));
+        Golden.check("studies/transfer-girder-si.sweep.csv", csv.out());
     }
 }

@@ -10,7 +10,8 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = "Time the optimizer against plain enumeration on fixed, seeded instances in this process; "
+        description = "Time a whole ./barfit design of the three-beam example (child processes of the launcher), "
+                + "then the optimizer against plain enumeration on fixed, seeded instances in this process; "
                 + "prints a table and ends with one JSON line of figures.")
 final class BenchCommand implements Callable<Integer> {
     @Spec
@@ -50,6 +51,11 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--max-bar-sizes", defaultValue = "3", description = "M of the rationalised schedule (default: ${DEFAULT-VALUE})")
     int m;
 
+    @Option(names = "--startup-runs", paramLabel = "N", defaultValue = "7",
+            description = "whole runs of ./barfit design on the three-beam example whose median start-to-exit time "
+                    + "is given first (default: ${DEFAULT-VALUE}; 0 skips)")
+    int startupRuns;
+
     @Option(names = "--threads", paramLabel = "N", description = "threads for schedules (default: the cores)")
     Integer threads;
 
@@ -88,6 +94,11 @@ final class BenchCommand implements Callable<Integer> {
             throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--beams"),
                     "expected 0 (skip the spans) or more whole spans to time, got " + beams);
         }
+        if (startupRuns < 0 || startupRuns > 100) {
+            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--startup-runs"),
+                    "expected 0 (skip the start-up figure) to 100 runs, got " + startupRuns);
+        }
+        String startupJson = startup(out);
         out.println("barfit bench: single sections, default search space, 1 CP-SAT worker, seed " + seed);
         var f = SectionBench.run(instances, Math.max(1, every), seed, out);
         out.printf(Locale.ROOT, "optimizer median %.2f ms (max %.2f ms); exhaustive median %.0f ms over %d layouts "
@@ -117,10 +128,35 @@ final class BenchCommand implements Callable<Integer> {
         beamJson += String.format(Locale.ROOT, ", \"line_analysis_ms_median\": %.3f, \"line_analysis_cpu_ms_median\": %.3f",
                 la.msMedian(), la.cpuMsMedian());
         out.printf(Locale.ROOT, "{\"instances\": %d, \"optimizer_ms_median\": %.3f, \"exhaustive_ms_median\": %s, "
-                + "\"speedup\": %s, \"equal_optimum\": %s%s}%n", f.instances(), f.optimizerMsMedian(),
-                json(f.exhaustiveMsMedian(), 1), json(f.speedup(), 1), f.equalOptimum(), beamJson);
+                + "\"speedup\": %s, \"equal_optimum\": %s%s%s}%n", f.instances(), f.optimizerMsMedian(),
+                json(f.exhaustiveMsMedian(), 1), json(f.speedup(), 1), f.equalOptimum(), beamJson, startupJson);
         out.flush();
         return equal ? Main.OK : Main.FAILED;
+    }
+
+    /**
+     * The whole-process time of the three-beam design, through the launcher as a child process; prints
+     * it (or why it was not taken) and returns its fields for the JSON line.
+     */
+    private String startup(PrintWriter out) {
+        if (startupRuns == 0) {
+            return "";
+        }
+        try {
+            var s = barfit.bench.StartupBench.run(barfit.bench.StartupBench.launcher(), startupRuns);
+            out.printf(Locale.ROOT, "start-up: %s, whole process from start to exit, median of %d runs (after one "
+                    + "unmeasured): %.2f s (min %.2f s, max %.2f s)%n%n", s.command(), s.seconds().size(), s.median(),
+                    s.min(), s.max());
+            out.flush();
+            return String.format(Locale.ROOT, ", \"startup_runs\": %d, \"startup_design_s_median\": %.3f, "
+                    + "\"startup_design_s_min\": %.3f, \"startup_design_s_max\": %.3f", s.seconds().size(), s.median(),
+                    s.min(), s.max());
+        } catch (barfit.bench.StartupBench.NotMeasured e) {
+            out.println("start-up: not measured (" + e.getMessage() + ")");
+            out.println();
+            out.flush();
+            return ", \"startup_runs\": 0, \"startup_design_s_median\": null";
+        }
     }
 
     /** A figure for the JSON line, or null when there is none (JSON has no NaN). */

@@ -6,20 +6,45 @@ import java.io.FileOutputStream;
 import java.io.PrintStream;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.function.Supplier;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /** The {@code barfit} command line. Exit codes: 0 all pass, 1 a check fails, 2 bad input or usage. */
 @Command(name = "barfit", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Cheapest passing reinforced-concrete beam layouts to ACI 318-19, searched and proven.%n"
-                + "Results must be checked by a licensed professional engineer against the governing local code.",
-        subcommands = {CheckCommand.class, AnalyseCommand.class, DesignCommand.class, ScheduleCommand.class,
-            CompareCommand.class, SweepCommand.class, BenchCommand.class, CommandLine.HelpCommand.class})
+                + "Results must be checked by a licensed professional engineer against the governing local code.")
 public final class Main implements Runnable {
     public static final int OK = 0;
     public static final int FAILED = 1;
     public static final int BAD_INPUT = 2;
     public static final int INTERNAL = 3;
+    /**
+     * The commands, in the order help lists them. Only the one named first on the command line is given
+     * to picocli, which reflects over every command it is given (all six cost a short run about 40 ms);
+     * any other first word (none, --help, --version, a typo) gets them all, so that help and picocli's
+     * suggestions list them. {@code CommandsTest} checks each name against its class's @Command.
+     */
+    static final Map<String, Supplier<Object>> COMMANDS = commands();
+
+    private static Map<String, Supplier<Object>> commands() {
+        Map<String, Supplier<Object>> c = new LinkedHashMap<>();
+        c.put("check", CheckCommand::new);
+        c.put("analyse", AnalyseCommand::new);
+        c.put("design", DesignCommand::new);
+        c.put("schedule", ScheduleCommand::new);
+        c.put("compare", CompareCommand::new);
+        c.put("sweep", SweepCommand::new);
+        c.put("bench", BenchCommand::new);
+        c.put("help", CommandLine.HelpCommand::new);
+        return Collections.unmodifiableMap(c);
+    }
+
+    /** The commands that run the solver: only these load its native library. */
+    static final java.util.Set<String> SOLVING = java.util.Set.of("design", "schedule", "compare", "sweep", "bench");
     static final String OUT_OF_MEMORY = "barfit: out of memory; give the JVM more heap through the launcher, e.g. "
             + "BARFIT_JAVA_OPTS=-Xmx4g ./barfit ...";
 
@@ -48,7 +73,17 @@ public final class Main implements Runnable {
 
     /** Runs barfit in this process (the tests use this); returns the exit code. */
     public static int run(String[] args, PrintStream out, PrintStream err) {
+        if (args.length > 0 && SOLVING.contains(args[0])) {
+            barfit.design.OrTools.loadInBackground(); // the solver's native library, while the input is read
+        }
         CommandLine cl = new CommandLine(new Main());
+        // help names the other commands, so it needs them all
+        Supplier<Object> named = args.length > 0 && !args[0].equals("help") ? COMMANDS.get(args[0]) : null;
+        if (named != null) {
+            cl.addSubcommand(named.get());
+        } else {
+            COMMANDS.values().forEach(c -> cl.addSubcommand(c.get()));
+        }
         cl.setOut(new PrintWriter(out, true));
         cl.setErr(new PrintWriter(err, true));
         cl.setParameterExceptionHandler((ex, a) -> {

@@ -34,7 +34,8 @@ import org.xml.sax.InputSource;
 
 /**
  * The schedule report built from real designs of the example spans: its structure, the geometry of its
- * section drawings, and its promises (caution, nothing fetched, same bytes for the same result).
+ * section drawings, and its promises (caution, nothing fetched). That the same input gives the same
+ * bytes is checked across runs by the examples' golden files (examples/src/test/resources/golden).
  */
 class ScheduleHtmlTest {
     static final String EXAMPLE = "clinic-line-c-spans-si.yaml";
@@ -130,11 +131,6 @@ class ScheduleHtmlTest {
     }
 
     @Test
-    void sameResultSameBytes() {
-        assertEquals(html, ScheduleHtml.render(result));
-    }
-
-    @Test
     void fetchesNothing() {
         Set<String> allowed = Set.of("http://www.w3.org/2000/svg", "http://www.w3.org/1999/xlink",
                 "http://www.w3.org/1999/xhtml");
@@ -161,9 +157,6 @@ class ScheduleHtmlTest {
         String std = element(html, "<section id=\"standardisation\">", "</section>");
         assertEquals(result.standardisation().size(), count(std, "<tr><td class=\"num\">"), "one row per K");
         assertNotNull(svg(std, null), "the plot is inline");
-        assertEquals(StandardisationPlot.svg(result.standardisation(), result.input().settings().units(), ""),
-                StandardisationPlot.svg(result.standardisation(), result.input().settings().units(), ""),
-                "the plot is the same run to run");
     }
 
     /**
