@@ -256,10 +256,20 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         private final List<LineAnalysis.Case> cases;
         private final LineAnalysis.EndMoments[] ends;
 
+        /** Each case's loads on each segment, split once. */
+        private final List<List<List<Load>>> bySegment = new ArrayList<>();
+
         Evaluator(Line line, List<LineAnalysis.Case> cases, LineAnalysis.EndMoments[] ends) {
             this.line = line;
             this.cases = cases;
             this.ends = ends;
+            for (LineAnalysis.Case c : cases) {
+                List<List<Load>> per = new ArrayList<>();
+                for (int s = 0; s < line.segments(); s++) {
+                    per.add(LineAnalysis.onSegment(c.loads(), s));
+                }
+                bySegment.add(per);
+            }
         }
 
         /**
@@ -351,7 +361,7 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             for (int i = 0; i < co.coef().length; i++) {
                 if (co.coef()[i] != 0) {
                     mo += co.coef()[i] * LineAnalysis.staticMoment(line, segment,
-                            LineAnalysis.onSegment(cases.get(i).loads(), segment), x);
+                            bySegment.get(i).get(segment), x);
                 }
             }
             if (isSpan(line, segment)) {
@@ -367,7 +377,7 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             for (int i = 0; i < co.coef().length; i++) {
                 if (co.coef()[i] != 0) {
                     v += co.coef()[i] * LineAnalysis.staticShear(line, segment,
-                            LineAnalysis.onSegment(cases.get(i).loads(), segment), x, rightLimit);
+                            bySegment.get(i).get(segment), x, rightLimit);
                 }
             }
             if (isSpan(line, segment)) {
