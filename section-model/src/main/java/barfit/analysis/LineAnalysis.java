@@ -399,18 +399,7 @@ public final class LineAnalysis {
         int n = line.spanCount();
         double mo = 0;
         if (segment == 0) {
-            for (Load l : loads) {
-                double w = l.dead() + l.live();
-                if (l.point()) {
-                    if (l.from() < x) {
-                        mo -= w * (x - l.from());
-                    }
-                } else if (x > l.from()) {
-                    double u = Math.min(x, l.to());
-                    mo -= w * (x * (u - l.from()) - (u * u - l.from() * l.from()) / 2);
-                }
-            }
-            return mo;
+            return -momentOfLoadsBefore(loads, x);
         }
         if (segment == n + 1) {
             for (Load l : loads) {
@@ -426,6 +415,11 @@ public final class LineAnalysis {
             }
             return mo;
         }
+        return leftReaction(len, loads) * x - momentOfLoadsBefore(loads, x);
+    }
+
+    /** The left reaction of a simply supported span of length {@code len} under its loads. */
+    private static double leftReaction(double len, List<Load> loads) {
         double ra = 0;
         for (Load l : loads) {
             double w = l.dead() + l.live();
@@ -435,16 +429,21 @@ public final class LineAnalysis {
                 ra += w * ((len * l.to() - l.to() * l.to() / 2) - (len * l.from() - l.from() * l.from() / 2)) / len;
             }
         }
-        mo = ra * x;
+        return ra;
+    }
+
+    /** The moment about x of the loads (or parts of loads) to the left of x, downward loads positive. */
+    private static double momentOfLoadsBefore(List<Load> loads, double x) {
+        double mo = 0;
         for (Load l : loads) {
             double w = l.dead() + l.live();
             if (l.point()) {
                 if (l.from() < x) {
-                    mo -= w * (x - l.from());
+                    mo += w * (x - l.from());
                 }
             } else if (x > l.from()) {
                 double u = Math.min(x, l.to());
-                mo -= w * (x * (u - l.from()) - (u * u - l.from() * l.from()) / 2);
+                mo += w * (x * (u - l.from()) - (u * u - l.from() * l.from()) / 2);
             }
         }
         return mo;
@@ -475,14 +474,7 @@ public final class LineAnalysis {
             return v;
         }
         if (segment != 0) {
-            for (Load l : loads) {
-                double w = l.dead() + l.live();
-                if (l.point()) {
-                    v += w * (len - l.from()) / len;
-                } else {
-                    v += w * ((len * l.to() - l.to() * l.to() / 2) - (len * l.from() - l.from() * l.from() / 2)) / len;
-                }
-            }
+            v = leftReaction(len, loads);
         }
         for (Load l : loads) {
             double w = l.dead() + l.live();
