@@ -10,4 +10,8 @@ public final class RandomProblemsAccess {
     public static SectionProblem small(Random r) {
         return RandomProblems.small(r);
     }
+
+    public static SectionProblem medium(Random r) {
+        return RandomProblems.medium(r);
+    }
 }

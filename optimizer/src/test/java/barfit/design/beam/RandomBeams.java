@@ -17,7 +17,7 @@ import java.util.Random;
 import java.util.TreeSet;
 
 /** Seeded random small spans (invented data, for cross-checks only). */
-final class RandomBeams {
+public final class RandomBeams {
     static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615m").orElseThrow();
 
     private RandomBeams() {
@@ -36,7 +36,7 @@ final class RandomBeams {
         return new ArrayList<>(set);
     }
 
-    static BeamProblem small(Random r) {
+    public static BeamProblem small(Random r) {
         double fc = new double[] {25, 28, 35}[r.nextInt(3)];
         Materials m = new Materials(fc, 420, 420, 20, 1.0);
         Detailing det = new Detailing(40, bar("10"), 25, Exposure.INTERIOR);
