@@ -96,10 +96,13 @@ final class DesignCommand implements Callable<Integer> {
                 input.barsPerTwoLegs());
         for (LineInput l : lines) {
             LineSpans.Result r = byLine.design(l, alternatives);
+            List<String> undesigned = r.parts().stream().filter(pt -> !pt.outcome().feasible())
+                    .map(LineSpans.Part::name).toList();
             for (int i = 0; i < r.parts().size(); i++) {
                 LineSpans.Part part = r.parts().get(i);
                 outcomes.add(DesignItem.of(part.outcome(), new DesignItem.LinePart(l.id(), part.name(), i == 0,
-                        l.spans().size(), r.rounds(), r.settled(), l.redistribution(), r.redistribution(), r.epsT())));
+                        l.spans().size(), r.rounds(), r.settled(), l.redistribution(), r.redistribution(), r.epsT(),
+                        undesigned)));
             }
         }
         String text = format == OutputFormat.json

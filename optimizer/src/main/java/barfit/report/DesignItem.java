@@ -8,9 +8,14 @@ import barfit.design.beam.BeamDesigner;
  * beam line designed from its analysis also says which line and part it is ({@code line}, else null).
  */
 public record DesignItem(DesignOutcome section, BeamDesigner.Outcome whole, LinePart line) {
-    /** Where a whole span came from: its line, which part, and how many rounds of analysis and design it took. */
+    /**
+     * Where a whole span came from: its line, which part, and how many rounds of analysis and design it took;
+     * {@code undesigned} names the line's parts that have no design (the analysis kept its first estimate
+     * of their sections).
+     */
     public record LinePart(String line, String part, boolean first, int spans, int rounds, boolean settled,
-            java.util.List<Double> asked, java.util.List<Double> used, java.util.List<Double> epsT) {
+            java.util.List<Double> asked, java.util.List<Double> used, java.util.List<Double> epsT,
+            java.util.List<String> undesigned) {
     }
 
     public boolean feasible() {

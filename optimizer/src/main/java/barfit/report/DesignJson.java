@@ -38,6 +38,10 @@ public final class DesignJson {
                 l.put("part", o.line().part());
                 l.put("rounds", o.line().rounds());
                 l.put("settled", o.line().settled());
+                if (!o.line().undesigned().isEmpty()) {
+                    var none = l.putArray("undesigned");
+                    o.line().undesigned().forEach(none::add);
+                }
                 var red = l.putArray("redistribution");
                 for (int j = 0; j < o.line().asked().size(); j++) {
                     var rj = red.addObject();

@@ -35,7 +35,11 @@ public final class DesignText {
             if (o.line() != null && o.line().first()) {
                 out.append("Line ").append(o.line().line()).append(": designed span by span from its analysis, ")
                         .append(o.line().rounds()).append(o.line().rounds() == 1 ? " round" : " rounds")
-                        .append(" of analysis and design").append(o.line().settled()
+                        .append(" of analysis and design").append(!o.line().undesigned().isEmpty()
+                                ? " (no design for " + String.join(", ", o.line().undesigned()) + ": the analysis "
+                                        + "took the first estimate of the section there, so the envelope holds only "
+                                        + "once every part is designed)"
+                                : o.line().settled()
                                 ? " (the sections designed are those analysed)"
                                 : " (the sections still changed in the last round: check the envelope by hand)")
                         .append('\n');

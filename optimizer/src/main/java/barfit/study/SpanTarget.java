@@ -61,7 +61,8 @@ public final class SpanTarget implements Target {
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
         BeamProblem q = new BeamProblem(p.id(), m, p.detailing(), p.code(), space, p.span(), p.ends(), p.mLeft(),
                 p.mMid(), p.mRight(), p.vLeft(), p.vRight(), p.service(), p.limits(), cap, freeWidth ? null : p.fixedWidth(), p.flange(),
-                p.bottomAnchored(), p.maxBarSizes(), p.barsPerTwoLegs());
+                p.bottomAnchored(), p.maxBarSizes(), p.barsPerTwoLegs()).withAnalysis(p.analysedService(),
+                        p.shearDiagram());
         BeamDesigner.Outcome o = new BeamDesigner(cost, options, units).design(q, 0);
         if (!o.feasible()) {
             return Summary.none(o.diagnosis().summary(), o.diagnosis().limit());

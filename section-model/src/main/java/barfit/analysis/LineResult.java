@@ -23,12 +23,15 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
      * walls), most negative over the arrangements; the largest sagging moment; the largest shear at d from
      * each face where 9.4.3.2 lets the section at d be used, else at the face ({@code vLeftAtFace} says
      * which); the points where the negative moment ends (x along the line); and service moments: dead load
-     * alone and the envelope of dead plus live, at the faces (most negative) and in the span (largest).
+     * alone and the envelope of dead plus live, at the faces (most negative) and in the span (largest); for
+     * deflection, dead plus live in the one arrangement that gives the largest sagging moment in the span
+     * ({@code deflectionBy}), at the faces and in the span.
      */
     public record SpanValues(int index, double length, double clear, double mLeftFace, double mSpanMax,
             double mRightFace, double vLeftD, double vRightD, boolean vLeftAtFace, boolean vRightAtFace,
             List<Double> inflection, double deadLeft, double deadMid, double deadRight, double totalLeft,
-            double totalMid, double totalRight, double xMax) {
+            double totalMid, double totalRight, double xMax, double deflectionLeft, double deflectionMid,
+            double deflectionRight, String deflectionBy) {
     }
 
     /** An overhang: its length past the support's centre line, moment at the face and shear at d from it. */
@@ -202,16 +205,25 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         for (StationValues st : in) {
             dm = Math.max(dm, ev.moment(dead, s, st.local()));
         }
+        LineAnalysis.Combo deflectionBy = dead;
+        double deflectionMid = Double.NEGATIVE_INFINITY;
         for (LineAnalysis.Combo co : service) {
             tl = Math.min(tl, ev.moment(co, s, xl));
             tr = Math.min(tr, ev.moment(co, s, xr));
+            double own = Double.NEGATIVE_INFINITY;
             for (StationValues st : in) {
-                tm = Math.max(tm, ev.moment(co, s, st.local()));
+                own = Math.max(own, ev.moment(co, s, st.local()));
+            }
+            tm = Math.max(tm, own);
+            if (own > deflectionMid + 1e-9) {
+                deflectionMid = own;
+                deflectionBy = co;
             }
         }
         double clear = len - ls.width() / 2 - rs.width() / 2;
         return new SpanValues(s, len, clear, mLeft, mMax, mRight, vLeft, vRight, leftAtFace, rightAtFace, inflection,
-                dl, dm, dr, tl, tm, tr, xMax);
+                dl, dm, dr, tl, tm, tr, xMax, ev.moment(deflectionBy, s, xl), deflectionMid,
+                ev.moment(deflectionBy, s, xr), deflectionBy.name());
     }
 
     private static OverhangValues overhang(Line line, Evaluator ev, List<LineAnalysis.Combo> combos,

@@ -9,8 +9,9 @@ import java.util.List;
  * Checks of a whole span rather than one section: the minimum depth of Table 9.3.1.1, and where the
  * beam is shallower, its computed deflections (9.3.2, 24.2) against the limits of Table 24.2.2.
  *
- * <p>Service moments are the factored ones scaled by the load ratio: Ma = Mu x w / (1.2 D + 1.6 L)
- * (load combination 5.3.1b), for w = D, D + a sustained part of L, and D + L. The effective moment of
+ * <p>Service moments come from an analysis of the line where one was made ({@link ServiceMoments#analysed});
+ * otherwise they are the factored ones scaled by the load ratio: Ma = Mu x w / (1.2 D + 1.6 L) (load
+ * combination 5.3.1b), for w = D, D + a sustained part of L, and D + L. The effective moment of
  * inertia is that of Table 24.2.3.5 at each critical section, averaged over the positive and negative
  * moment sections of a continuous span (24.2.3.6); the long-term multiplier is that of 24.2.4.1 with
  * the compression steel at mid-span (at the support of a cantilever).
@@ -18,6 +19,71 @@ import java.util.List;
 public final class SpanChecks {
     /** Service line loads, N/mm, and the part of the live load that is sustained (0 to 1). */
     public record ServiceLoads(double dead, double live, double sustainedLive) {
+    }
+
+    /**
+     * The service moment Ma (N·mm, magnitude) at each critical section at each of the {@link #LEVELS}: the
+     * left and right support sections hogging, mid-span sagging; null where the span has no such section.
+     * {@code analysed} when they come from an analysis of the line rather than from scaled factored moments.
+     */
+    public record ServiceMoments(double[] left, double[] mid, double[] right, boolean analysed) {
+        /** Factored moments scaled by the load ratio of 5.3.1b at each level. */
+        public static ServiceMoments scaled(Double mLeft, Double mMid, Double mRight, ServiceLoads loads) {
+            double[] r = ratios(loads);
+            return new ServiceMoments(times(mLeft, r), times(mMid, r), times(mRight, r), false);
+        }
+
+        /**
+         * From an analysis: the moments of dead load alone and of dead plus live load in one arrangement
+         * (signed, sagging positive; null where the span has no such section), with D + sustained L taken
+         * as D + s (D+L − D) at each section, s the sustained share of the live load.
+         */
+        public static ServiceMoments analysed(Double deadLeft, Double deadMid, Double deadRight, Double totalLeft,
+                Double totalMid, Double totalRight, double sustainedLive) {
+            return new ServiceMoments(levels(deadLeft, totalLeft, sustainedLive, -1),
+                    levels(deadMid, totalMid, sustainedLive, 1), levels(deadRight, totalRight, sustainedLive, -1), true);
+        }
+
+        /** Every moment times k (a study's scaled demand). */
+        public ServiceMoments times(double k) {
+            return new ServiceMoments(mul(left, k), mul(mid, k), mul(right, k), analysed);
+        }
+
+        private static double[] times(Double m, double[] ratios) {
+            if (m == null) {
+                return null;
+            }
+            double[] out = new double[ratios.length];
+            for (int i = 0; i < ratios.length; i++) {
+                out[i] = Math.abs(m) * ratios[i];
+            }
+            return out;
+        }
+
+        private static double[] levels(Double dead, Double total, double sustained, int sign) {
+            if (dead == null || total == null) {
+                return null;
+            }
+            double d = Math.max(0, sign * dead);
+            double t = Math.max(0, sign * total);
+            return new double[] {d, Math.max(0, d + sustained * (t - d)), t};
+        }
+
+        private static double[] mul(double[] a, double k) {
+            if (a == null) {
+                return null;
+            }
+            double[] out = a.clone();
+            for (int i = 0; i < out.length; i++) {
+                out[i] *= Math.abs(k);
+            }
+            return out;
+        }
+
+        /** Ma at one section, 0 where it has none. */
+        static double at(double[] levels, int i) {
+            return levels == null ? 0 : levels[i];
+        }
     }
 
     /** Deflection limits as span divisors: immediate live and long-term total (Table 24.2.2). */
@@ -85,6 +151,16 @@ public final class SpanChecks {
      */
     public static Result run(double length, EndCondition ends, Sections s, Double mLeft, Double mMid, Double mRight,
             ServiceLoads loads, Limits limits, Trail t) {
+        return run(length, ends, s, mLeft, mMid, mRight, loads,
+                loads == null ? null : ServiceMoments.scaled(mLeft, mMid, mRight, loads), limits, t);
+    }
+
+    /**
+     * As {@link #run(double, EndCondition, Sections, Double, Double, Double, ServiceLoads, Limits, Trail)}, with
+     * the service moments given ({@code service}, null when {@code loads} is).
+     */
+    public static Result run(double length, EndCondition ends, Sections s, Double mLeft, Double mMid, Double mRight,
+            ServiceLoads loads, ServiceMoments service, Limits limits, Trail t) {
         BeamSection any = s.mid() != null ? s.mid() : s.left();
         Materials m = any.materials();
         CodeEquations code = any.code();
@@ -114,13 +190,13 @@ public final class SpanChecks {
         }
         double wu = 1.2 * loads.dead() + 1.6 * loads.live();
         double ec = Deflection.ec(m, code);
-        double[] ratios = ratios(loads);
-        double[] ieL = s.left() != null && mLeft != null ? ieLevels(s.left(), Bending.HOGGING, mLeft, ratios) : null;
-        double[] ieM = s.mid() != null && mMid != null ? ieLevels(s.mid(), Bending.SAGGING, mMid, ratios) : null;
-        double[] ieR = s.right() != null && mRight != null ? ieLevels(s.right(), Bending.HOGGING, mRight, ratios) : null;
+        ServiceMoments sm = service;
+        double[] ieL = s.left() != null && sm.left() != null ? ieLevels(s.left(), Bending.HOGGING, sm.left()) : null;
+        double[] ieM = s.mid() != null && sm.mid() != null ? ieLevels(s.mid(), Bending.SAGGING, sm.mid()) : null;
+        double[] ieR = s.right() != null && sm.right() != null ? ieLevels(s.right(), Bending.HOGGING, sm.right()) : null;
         double rhoPrime = rhoPrime(ends == EndCondition.CANTILEVER ? s.left() : s.mid(),
                 ends == EndCondition.CANTILEVER ? Bending.HOGGING : Bending.SAGGING);
-        double[] dl = deflections(length, ends, ec, mLeft, mMid, mRight, ratios, ieL, ieM, ieR, rhoPrime);
+        double[] dl = deflections(length, ends, ec, sm, ieL, ieM, ieR, rhoPrime);
         double dD = dl[0];
         double dSus = dl[1];
         double dDL = dl[2];
@@ -129,13 +205,13 @@ public final class SpanChecks {
         double longTerm = dl[4];
         List<SectionStiffness> stiff = new ArrayList<>();
         if (ieL != null) {
-            stiff.add(sectionStiffness("left support", s.left(), Bending.HOGGING, mLeft, ratios));
+            stiff.add(sectionStiffness("left support", s.left(), Bending.HOGGING, mLeft, sm.left()));
         }
         if (ieM != null) {
-            stiff.add(sectionStiffness("mid-span", s.mid(), Bending.SAGGING, mMid, ratios));
+            stiff.add(sectionStiffness("mid-span", s.mid(), Bending.SAGGING, mMid, sm.mid()));
         }
         if (ieR != null) {
-            stiff.add(sectionStiffness("right support", s.right(), Bending.HOGGING, mRight, ratios));
+            stiff.add(sectionStiffness("right support", s.right(), Bending.HOGGING, mRight, sm.right()));
         }
         double[] ieSpan = new double[3];
         for (int i = 0; i < 3; i++) {
@@ -146,19 +222,27 @@ public final class SpanChecks {
             t.step("Ec", code.ec().shown() + " √f'c", code.ec().shown() + " × √{}", Q.stress(ec), Q.stress(m.fc()));
             t.step("fr", code.fr().shown() + " λ √f'c  (19.2.3.1)", code.fr().shown() + " × {} × √{}",
                     Q.stress(Deflection.fr(m, code)), Q.number(m.lambda()), Q.stress(m.fc()));
-            t.step("wu", "1.2 D + 1.6 L  (5.3.1b)", "1.2 × {} + 1.6 × {}", Q.lineLoad(wu), Q.lineLoad(loads.dead()),
-                    Q.lineLoad(loads.live()));
-            t.note("Service moments: Ma = |Mu| × w / wu at each critical section, for w = D, D + sustained L and "
-                    + "D + L; Ie of Table 24.2.3.5 at each critical section, averaged for a continuous span (24.2.3.6).");
+            if (sm.analysed()) {
+                t.note("Service moments Ma from the analysis of the line: dead load alone, and dead plus live load in "
+                        + "the arrangement giving the largest sagging moment in the span, with D + sustained L = "
+                        + "D + " + fmtShare(loads.sustainedLive()) + " × L at each critical section; Ie of Table "
+                        + "24.2.3.5 at each critical section, averaged for a continuous span (24.2.3.6).");
+            } else {
+                t.step("wu", "1.2 D + 1.6 L  (5.3.1b)", "1.2 × {} + 1.6 × {}", Q.lineLoad(wu), Q.lineLoad(loads.dead()),
+                        Q.lineLoad(loads.live()));
+                t.note("Service moments: Ma = |Mu| × w / wu at each critical section, for w = D, D + sustained L and "
+                        + "D + L; Ie of Table 24.2.3.5 at each critical section, averaged for a continuous span "
+                        + "(24.2.3.6).");
+            }
             t.note("Icr: cracked transformed section with every bar layer at its own depth, n As below the "
                     + "neutral axis and (n − 1) As above it; Ig and Mcr of the gross concrete section.");
             for (SectionStiffness ss : stiff) {
-                stiffnessTrail(ss, loads, wu, t);
+                stiffnessTrail(ss, loads, wu, sm.analysed(), t);
             }
             for (int i = 0; i < 3; i++) {
                 ieSpanTrail(ends, i, stiff, ieSpan[i], t);
             }
-            deflectionTrail(ends, length, ec, mLeft, mMid, mRight, ratios, ieSpan, dl, t);
+            deflectionTrail(ends, length, ec, sm, ieSpan, dl, t);
             t.step("Δ(L)", "Δ(D + L) − Δ(D)", "{} − {}", Q.length(live), Q.length(dDL), Q.length(dD));
             t.note("ρ' = As' / (b d) at " + (ends == EndCondition.CANTILEVER ? "the support" : "mid-span")
                     + ", b the width of the compression face (the flange's under sagging)");
@@ -175,16 +259,14 @@ public final class SpanChecks {
         return new Result(out, hMin, live, longTerm, stiff, ieSpan, new double[] {dD, dSus, dDL}, lambda);
     }
 
-    private static SectionStiffness sectionStiffness(String at, BeamSection s, Bending bending, double mu,
-            double[] ratios) {
+    private static SectionStiffness sectionStiffness(String at, BeamSection s, Bending bending, Double mu,
+            double[] ma) {
         Deflection.Stiffness st = stiffnessOf(s, bending);
-        double[] ma = new double[ratios.length];
-        double[] ie = new double[ratios.length];
-        for (int i = 0; i < ratios.length; i++) {
-            ma[i] = Math.abs(mu) * ratios[i];
+        double[] ie = new double[ma.length];
+        for (int i = 0; i < ma.length; i++) {
             ie[i] = Deflection.ie(ma[i], st);
         }
-        return new SectionStiffness(at, Math.abs(mu), st, ma, ie);
+        return new SectionStiffness(at, mu == null ? 0 : Math.abs(mu), st, ma.clone(), ie);
     }
 
     /** The Ie a span takes at one level: as {@link #deflections} does. */
@@ -228,12 +310,12 @@ public final class SpanChecks {
             (loads.dead() + loads.live()) / wu};
     }
 
-    /** Ie of Table 24.2.3.5 of one section at each of the three service levels. */
-    public static double[] ieLevels(BeamSection s, Bending bending, double mu, double[] ratios) {
+    /** Ie of Table 24.2.3.5 of one section at each of the three service levels, for its Ma at each. */
+    public static double[] ieLevels(BeamSection s, Bending bending, double[] ma) {
         Deflection.Stiffness st = stiffnessOf(s, bending); // the same section at every load level
-        double[] out = new double[ratios.length];
-        for (int i = 0; i < ratios.length; i++) {
-            out[i] = Deflection.ie(Math.abs(mu) * ratios[i], st);
+        double[] out = new double[ma.length];
+        for (int i = 0; i < ma.length; i++) {
+            out[i] = Deflection.ie(ma[i], st);
         }
         return out;
     }
@@ -255,13 +337,13 @@ public final class SpanChecks {
      * compression steel (larger ρ') never give larger deflections, so optimistic Ie values give a lower
      * bound: what a search may use to discard layouts that cannot pass.
      */
-    public static double[] deflections(double length, EndCondition ends, double ec, Double mLeft, Double mMid,
-            Double mRight, double[] ratios, double[] ieLeft, double[] ieMid, double[] ieRight, double rhoPrime) {
+    public static double[] deflections(double length, EndCondition ends, double ec, ServiceMoments sm,
+            double[] ieLeft, double[] ieMid, double[] ieRight, double rhoPrime) {
         double[] d = new double[3];
         for (int i = 0; i < 3; i++) {
-            double ml = mLeft == null ? 0 : Math.abs(mLeft) * ratios[i];
-            double mm = mMid == null ? 0 : Math.abs(mMid) * ratios[i];
-            double mr = mRight == null ? 0 : Math.abs(mRight) * ratios[i];
+            double ml = ServiceMoments.at(sm.left(), i);
+            double mm = ServiceMoments.at(sm.mid(), i);
+            double mr = ServiceMoments.at(sm.right(), i);
             d[i] = Deflection.spanDeflection(ends, length, ec, spanIe(ends, i, ieLeft, ieMid, ieRight), ml, mm, mr);
         }
         double live = d[2] - d[0];
@@ -276,7 +358,7 @@ public final class SpanChecks {
     }
 
     /** One critical section: n, Ig, yt, Mcr, kd, Icr, then Ma and Ie at each service level. */
-    private static void stiffnessTrail(SectionStiffness ss, ServiceLoads loads, double wu, Trail t) {
+    private static void stiffnessTrail(SectionStiffness ss, ServiceLoads loads, double wu, boolean analysed, Trail t) {
         String where = " (" + ss.at() + ")";
         Deflection.Stiffness st = ss.stiffness();
         t.value("n" + where, Q.number(st.n()), "Es / Ec");
@@ -289,8 +371,13 @@ public final class SpanChecks {
         double[] w = {loads.dead(), loads.dead() + loads.sustainedLive() * loads.live(), loads.dead() + loads.live()};
         for (int i = 0; i < ss.ma().length; i++) {
             String level = ", " + LEVELS.get(i);
-            t.step("Ma" + where.substring(0, where.length() - 1) + level + ")", "|Mu| × w / wu", "{} × {} / {}",
-                    Q.moment(ss.ma()[i]), Q.moment(ss.mu()), Q.lineLoad(w[i]), Q.lineLoad(wu));
+            if (analysed) {
+                t.value("Ma" + where.substring(0, where.length() - 1) + level + ")", Q.moment(ss.ma()[i]),
+                        "from the analysis of the line");
+            } else {
+                t.step("Ma" + where.substring(0, where.length() - 1) + level + ")", "|Mu| × w / wu", "{} × {} / {}",
+                        Q.moment(ss.ma()[i]), Q.moment(ss.mu()), Q.lineLoad(w[i]), Q.lineLoad(wu));
+            }
             String ie = "Ie" + where.substring(0, where.length() - 1) + level + ")";
             if (ss.ma()[i] <= 2.0 / 3.0 * st.mcr()) {
                 t.step(ie, "Ig, as Ma ≤ (2/3) Mcr  (Table 24.2.3.5)", "{}", Q.inertia(ss.ie()[i]), Q.inertia(st.ig()));
@@ -328,13 +415,13 @@ public final class SpanChecks {
     }
 
     /** The immediate deflection at each level, with the span's formula and its numbers. */
-    private static void deflectionTrail(EndCondition ends, double length, double ec, Double mLeft, Double mMid,
-            Double mRight, double[] ratios, double[] ie, double[] dl, Trail t) {
+    private static void deflectionTrail(EndCondition ends, double length, double ec, ServiceMoments sm, double[] ie,
+            double[] dl, Trail t) {
         for (int i = 0; i < 3; i++) {
             String sym = "Δ(" + LEVELS.get(i) + ")";
-            double ml = mLeft == null ? 0 : Math.abs(mLeft) * ratios[i];
-            double mm = mMid == null ? 0 : Math.abs(mMid) * ratios[i];
-            double mr = mRight == null ? 0 : Math.abs(mRight) * ratios[i];
+            double ml = ServiceMoments.at(sm.left(), i);
+            double mm = ServiceMoments.at(sm.mid(), i);
+            double mr = ServiceMoments.at(sm.right(), i);
             switch (ends) {
                 case SIMPLE -> t.step(sym, "5 Ma,mid ℓ² / (48 Ec Ie)", "5 × {} × {}² / (48 × {} × {})", Q.length(dl[i]),
                         Q.moment(mm), Q.length(length), Q.stress(ec), Q.inertia(ie[i]));
@@ -357,6 +444,10 @@ public final class SpanChecks {
             area[i] = layers.get(i).area();
         }
         return Deflection.stiffness(s.shape(), bending, s.materials(), s.code(), depth, area);
+    }
+
+    private static String fmtShare(double share) {
+        return String.format(java.util.Locale.ROOT, "%.2f", share);
     }
 
     private static String fmt(double d) {

@@ -1300,13 +1300,13 @@ public final class BeamGenerator {
 
         DeflectionScreen(Frame f, SectionShape shape, List<MidOpt> allMids, List<SupportOpt> allLefts,
                 List<SupportOpt> allRights) {
-            double[] ratios = SpanChecks.ratios(p.service());
+            SpanChecks.ServiceMoments ma = p.serviceMoments();
             double ec = barfit.section.Deflection.ec(p.materials(), p.code());
             Map<MidOpt, double[]> midIe = new java.util.IdentityHashMap<>();
             Map<MidOpt, Double> midRho = new java.util.IdentityHashMap<>();
             for (MidOpt m : allMids) {
                 BeamSection s = midSection(f, shape, m);
-                midIe.put(m, p.cantilever() ? null : SpanChecks.ieLevels(s, Bending.SAGGING, p.mMid(), ratios));
+                midIe.put(m, p.cantilever() ? null : SpanChecks.ieLevels(s, Bending.SAGGING, ma.mid()));
                 midRho.put(m, p.cantilever() ? 0.0 : SpanChecks.rhoPrime(s, Bending.SAGGING));
             }
             Map<SupportOpt, double[]> leftIe = new java.util.IdentityHashMap<>();
@@ -1314,11 +1314,11 @@ public final class BeamGenerator {
             Map<SupportOpt, Double> leftRho = new java.util.IdentityHashMap<>();
             for (SupportOpt l : allLefts) {
                 BeamSection s = supportSection(f, shape, l);
-                leftIe.put(l, SpanChecks.ieLevels(s, Bending.HOGGING, p.mLeft(), ratios));
+                leftIe.put(l, SpanChecks.ieLevels(s, Bending.HOGGING, ma.left()));
                 leftRho.put(l, SpanChecks.rhoPrime(s, Bending.HOGGING));
             }
             for (SupportOpt r : allRights) {
-                rightIe.put(r, SpanChecks.ieLevels(supportSection(f, shape, r), Bending.HOGGING, p.mRight(), ratios));
+                rightIe.put(r, SpanChecks.ieLevels(supportSection(f, shape, r), Bending.HOGGING, ma.right()));
             }
             // the stiffest partners per top bar size, computed once
             Map<String, double[]> bestLeft = new HashMap<>();
@@ -1350,20 +1350,20 @@ public final class BeamGenerator {
             for (MidOpt m : allMids) {
                 String tt = m.top().bar().designation();
                 double rho = p.cantilever() ? bestLeftRho.get(tt) : midRho.get(m);
-                if (passes(ec, ratios, bestLeft.get(tt), midIe.get(m), bestRight.get(tt), rho)) {
+                if (passes(ec, ma, bestLeft.get(tt), midIe.get(m), bestRight.get(tt), rho)) {
                     mids.add(m);
                 }
             }
             for (SupportOpt l : allLefts) {
                 String tt = l.bar().designation();
                 double rho = p.cantilever() ? leftRho.get(l) : bestMidRho.get(tt);
-                if (passes(ec, ratios, leftIe.get(l), bestMidIe.get(tt), bestRight.get(tt), rho)) {
+                if (passes(ec, ma, leftIe.get(l), bestMidIe.get(tt), bestRight.get(tt), rho)) {
                     lefts.add(l);
                 }
             }
             for (SupportOpt r : allRights) {
                 String tt = r.bar().designation();
-                if (passes(ec, ratios, bestLeft.get(tt), bestMidIe.get(tt), rightIe.get(r), bestMidRho.get(tt))) {
+                if (passes(ec, ma, bestLeft.get(tt), bestMidIe.get(tt), rightIe.get(r), bestMidRho.get(tt))) {
                     rights.add(r);
                 }
             }
@@ -1377,11 +1377,11 @@ public final class BeamGenerator {
             return out;
         }
 
-        private boolean passes(double ec, double[] ratios, double[] l, double[] m, double[] r, double rho) {
+        private boolean passes(double ec, SpanChecks.ServiceMoments ma, double[] l, double[] m, double[] r, double rho) {
             if ((p.leftSupport() && l == null) || (p.rightSupport() && r == null) || (p.midSection() && m == null)) {
                 return false;
             }
-            double[] d = SpanChecks.deflections(p.span(), p.ends(), ec, p.mLeft(), p.mMid(), p.mRight(), ratios,
+            double[] d = SpanChecks.deflections(p.span(), p.ends(), ec, ma,
                     p.leftSupport() ? l : null, m, p.rightSupport() ? r : null, rho);
             return SpanChecks.within(p.span(), p.limits(), d);
         }
@@ -1470,15 +1470,15 @@ public final class BeamGenerator {
             return null;
         }
         BeamSection s = midSection(f, new SectionShape(f.b(), f.h(), p.flange()), m);
-        double[] ie = SpanChecks.ieLevels(s, Bending.SAGGING, p.mMid(), SpanChecks.ratios(p.service()));
+        double[] ie = SpanChecks.ieLevels(s, Bending.SAGGING, p.serviceMoments().mid());
         return append(ie, SpanChecks.rhoPrime(s, Bending.SAGGING));
     }
 
     /** As {@link #deflectionStiffness(Frame, MidOpt)} for a support option; ρ' only at a cantilever's support. */
     public double[] deflectionStiffness(Frame f, SupportOpt o, BeamProblem.Place place) {
         BeamSection s = supportSection(f, new SectionShape(f.b(), f.h(), p.flange()), o);
-        double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING, place == BeamProblem.Place.LEFT ? p.mLeft() : p.mRight(),
-                SpanChecks.ratios(p.service()));
+        double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING,
+                place == BeamProblem.Place.LEFT ? p.serviceMoments().left() : p.serviceMoments().right());
         return p.cantilever() ? append(ie, SpanChecks.rhoPrime(s, Bending.HOGGING)) : ie;
     }
 

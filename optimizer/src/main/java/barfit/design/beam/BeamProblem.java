@@ -36,7 +36,36 @@ public record BeamProblem(
         Flange flange,
         boolean bottomAnchored,
         int maxBarSizes,
-        int barsPerTwoLegs) {
+        int barsPerTwoLegs,
+        SpanChecks.ServiceMoments analysedService,
+        ShearDiagram shearDiagram) {
+
+    /** A span whose demand is given as moments and shears at its critical sections (no analysis of its own). */
+    public BeamProblem(String id, Materials materials, Detailing detailing, CodeEquations code, SearchSpace space,
+            double span, EndCondition ends, Double mLeft, Double mMid, Double mRight, Double vLeft, Double vRight,
+            SpanChecks.ServiceLoads service, SpanChecks.Limits limits, Double maxDepth, Double fixedWidth, Flange flange,
+            boolean bottomAnchored, int maxBarSizes, int barsPerTwoLegs) {
+        this(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight, service, limits,
+                maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, null, null);
+    }
+
+    /** The same span with the service moments and the shear diagram of an analysis of its line. */
+    public BeamProblem withAnalysis(SpanChecks.ServiceMoments analysed, ShearDiagram diagram) {
+        return new BeamProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
+                service, limits, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysed,
+                diagram);
+    }
+
+    /**
+     * Ma at the critical sections for deflection: the analysis' where the span comes from a line, else the
+     * factored moments scaled by the service load ratio; null without service loads.
+     */
+    public SpanChecks.ServiceMoments serviceMoments() {
+        if (service == null) {
+            return null;
+        }
+        return analysedService != null ? analysedService : SpanChecks.ServiceMoments.scaled(mLeft, mMid, mRight, service);
+    }
 
     /** Where a section or zone is. */
     public enum Place { LEFT, MID, RIGHT }
@@ -47,7 +76,7 @@ public record BeamProblem(
      * from the supports ({@code line} set) for the largest shear of the span's shear line over its length,
      * which depends on the d of the section the zone is designed with, and for at least {@code floor}.
      */
-    public record Zone(String name, double from, double to, Double vu, Place section, ShearLine line, double floor) {
+    public record Zone(String name, double from, double to, Double vu, Place section, ShearAlong line, double floor) {
         public Zone(String name, double from, double to, Double vu, Place section) {
             this(name, from, to, vu, section, null, 0);
         }
@@ -69,7 +98,10 @@ public record BeamProblem(
          * (the given shears sit at d from the faces), so its value at d = 0 bounds it from below.
          */
         public Double vuLeast() {
-            return vu(0);
+            if (line == null) {
+                return vu;
+            }
+            return Math.max(floor, line.least(from, to));
         }
     }
 
@@ -78,7 +110,18 @@ public record BeamProblem(
      * the faces: (d, vLeft) and (l - d, -vRight); a cantilever fixed at the left falls from vLeft at d to
      * nothing at the tip. Sections nearer a face than d take the shear at d (9.4.3.2). Magnitudes, N.
      */
-    public record ShearLine(double span, double vLeft, double vRight, boolean cantilever) {
+    public record ShearLine(double span, double vLeft, double vRight, boolean cantilever) implements ShearAlong {
+        @Override
+        public double least(double from, double to) {
+            return Math.max(at(from, 0), at(to, 0));
+        }
+
+        @Override
+        public ShearLine times(double k) {
+            return new ShearLine(span, vLeft * Math.abs(k), vRight * Math.abs(k), cantilever);
+        }
+
+        @Override
         public double at(double x, double d) {
             double l = span;
             double dd = Math.min(d, 0.5 * l - 1e-6);
@@ -120,6 +163,9 @@ public record BeamProblem(
      * stirrup legs of a zone hold the bars of the section it is designed with.
      */
     public List<Zone> zones() {
+        if (shearDiagram != null) {
+            return zonesFrom(shearDiagram);
+        }
         List<Zone> out = new ArrayList<>();
         double l = span;
         if (cantilever()) {
@@ -152,6 +198,31 @@ public record BeamProblem(
     }
 
     /**
+     * Stirrup zones from the shear diagram of the line's analysis: each support zone runs from the face
+     * to half way to where the shear is least and is designed for the largest shear over it (at d from the
+     * face where 9.4.3.2 allows), the middle zone likewise; the live-load arrangements on half spans are
+     * in the analysis, so no other floor is needed. A cantilever: a support zone to mid-length and an
+     * outer zone.
+     */
+    private List<Zone> zonesFrom(ShearDiagram diagram) {
+        List<Zone> out = new ArrayList<>();
+        double l = span;
+        if (cantilever()) {
+            out.add(new Zone("support", 0, l / 2, null, Place.LEFT, diagram, 0));
+            out.add(new Zone("outer", l / 2, l, null, Place.LEFT, diagram, 0));
+            return out;
+        }
+        // kept off the ends so that no zone is too short to hold a stirrup or two
+        double zero = Math.min(Math.max(diagram.whereLeast(), 0.2 * l), 0.8 * l);
+        double xl = zero / 2;
+        double xr = (l - zero) / 2;
+        out.add(new Zone("left", 0, xl, null, leftSupport() ? Place.LEFT : Place.MID, diagram, 0));
+        out.add(new Zone("middle", xl, l - xr, null, Place.MID, diagram, 0));
+        out.add(new Zone("right", l - xr, l, null, rightSupport() ? Place.RIGHT : Place.MID, diagram, 0));
+        return out;
+    }
+
+    /**
      * The factored shear of live load on half the span, 1.6 wL ln / 8, which a full-span shear line misses
      * near mid-span (common practice); 0 without service loads.
      */
@@ -174,28 +245,34 @@ public record BeamProblem(
 
     public BeamProblem withMaxDepth(Double cap) {
         return new BeamProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, limits, cap, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs);
+                service, limits, cap, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+                shearDiagram);
     }
 
     public BeamProblem withSpace(SearchSpace s) {
         return new BeamProblem(id, materials, detailing, code, s, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, limits, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs);
+                service, limits, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+                shearDiagram);
     }
 
     public BeamProblem withFixedWidth(Double w) {
         return new BeamProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, limits, maxDepth, w, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs);
+                service, limits, maxDepth, w, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+                shearDiagram);
     }
 
     public BeamProblem withLimits(SpanChecks.Limits l) {
         return new BeamProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, l, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs);
+                service, l, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+                shearDiagram);
     }
 
     public BeamProblem scaled(double moments, double shears) {
         return new BeamProblem(id, materials, detailing, code, space, span, ends, mul(mLeft, moments), mul(mMid, moments),
                 mul(mRight, moments), mul(vLeft, shears), mul(vRight, shears), service, limits, maxDepth, fixedWidth,
-                flange, bottomAnchored, maxBarSizes, barsPerTwoLegs);
+                flange, bottomAnchored, maxBarSizes, barsPerTwoLegs,
+                analysedService == null ? null : analysedService.times(moments),
+                shearDiagram == null ? null : shearDiagram.times(shears));
     }
 
     private static Double mul(Double v, double k) {

@@ -68,7 +68,7 @@ public final class BeamVerifier {
                 p.rightSupport() ? l.section(p, BeamProblem.Place.RIGHT, null) : null);
         Trail st = withTrail ? Trail.recording() : Trail.off();
         SpanChecks.Result spanResult = SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(),
-                p.service(), p.limits(), st);
+                p.service(), p.serviceMoments(), p.limits(), st);
         return new BeamReport(sections, zoneChecks, zoneShears, spanResult, zt, st);
     }
 
@@ -78,8 +78,8 @@ public final class BeamVerifier {
                 p.leftSupport() ? l.section(p, BeamProblem.Place.LEFT, null) : null,
                 p.midSection() ? l.section(p, BeamProblem.Place.MID, null) : null,
                 p.rightSupport() ? l.section(p, BeamProblem.Place.RIGHT, null) : null);
-        return SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(), p.service(), p.limits(),
-                Trail.off()).ok();
+        return SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(), p.service(),
+                p.serviceMoments(), p.limits(), Trail.off()).ok();
     }
 
     private static CheckReport check(BeamProblem p, BeamLayout l, BeamProblem.Place place, Double mu, Span span,

@@ -8,6 +8,7 @@ import barfit.analysis.Load;
 import barfit.design.SearchSpace;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamProblem;
+import barfit.design.beam.ShearDiagram;
 import barfit.input.LineInput;
 import barfit.input.Settings;
 import barfit.section.Deflection;
@@ -27,9 +28,11 @@ import java.util.Objects;
  * the new envelope, until the sections stop changing (at most {@link #MAX_ROUNDS} rounds). Each span's
  * design is proved and re-verified against the envelope of the last analysis.
  *
- * <p>Service moments for deflection: the span's factored moments scaled by its dead-to-live proportion
- * (the span's whole dead and live load, point and partial loads included), which over-states them where a
- * live-load arrangement governs the factored envelope, so errs on the stiff side of the check.
+ * <p>Each span and overhang takes from the analysis its service moments for deflection (dead load, and
+ * dead plus live in the arrangement with the largest sagging moment in the span) and its whole shear
+ * diagram, so that each stirrup zone is designed for the shear at the d of the section design chooses.
+ * With the 6.5 coefficients, which give neither, the factored moments are scaled by the span's
+ * dead-to-live proportion and the shears run straight between the faces.
  */
 public final class LineSpans {
     public static final int MAX_ROUNDS = 8;
@@ -194,11 +197,19 @@ public final class LineSpans {
             Double ml = s.mLeftFace() < -NEGLIGIBLE * big ? s.mLeftFace() : null;
             Double mr = s.mRightFace() < -NEGLIGIBLE * big ? s.mRightFace() : null;
             Double mm = s.mSpanMax() > NEGLIGIBLE * big ? s.mSpanMax() : null;
-            out.add(problem(in, line, s.index(), n, s.clear(), ml, mm, mr, s.vLeftD(), s.vRightD()));
+            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(ml == null ? null : s.deadLeft(),
+                    mm == null ? null : s.deadMid(), mr == null ? null : s.deadRight(),
+                    ml == null ? null : s.deflectionLeft(), mm == null ? null : s.deflectionMid(),
+                    mr == null ? null : s.deflectionRight(), in.sustainedLive());
+            out.add(problem(in, line, s.index(), n, s.clear(), ml, mm, mr, s.vLeftD(), s.vRightD())
+                    .withAnalysis(service, spanShear(line, r, s)));
         }
         for (LineResult.OverhangValues o : r.overhangs()) {
             int seg = o.side().equals("left") ? 0 : n + 1;
-            out.add(cantilever(in, line, seg, n, o.clear(), o.mFace(), o.vD()));
+            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(o.deadFace(), null, null,
+                    o.totalFace(), null, null, in.sustainedLive());
+            out.add(cantilever(in, line, seg, n, o.clear(), o.mFace(), o.vD())
+                    .withAnalysis(service, overhangShear(line, r, seg)));
         }
         return out;
     }
@@ -229,6 +240,56 @@ public final class LineSpans {
         return new BeamProblem(in.id() + "/" + partName(seg, n), settings.materials(), settings.detailing(),
                 settings.code(), space, clear, EndCondition.CANTILEVER, m, null, null, v, null, service(in, line, seg),
                 SpanChecks.Limits.DEFAULT, in.maxDepth(), null, null, false, maxBarSizes, barsPerTwoLegs);
+    }
+
+    /**
+     * A span's shear diagram handed to design: the envelope of |V| at the analysis' stations between its
+     * faces (the faces are stations), measured from the left face.
+     */
+    static ShearDiagram spanShear(Line line, LineResult r, LineResult.SpanValues s) {
+        double faceLeft = line.supports().get(s.index() - 1).width() / 2;
+        double faceRight = faceLeft + s.clear();
+        List<double[]> points = new ArrayList<>();
+        for (LineResult.StationValues st : r.stations()) {
+            if (st.segment() == s.index() && st.local() >= faceLeft - 1e-6 && st.local() <= faceRight + 1e-6) {
+                points.add(new double[] {Math.min(Math.max(st.local() - faceLeft, 0), s.clear()), magnitude(st)});
+            }
+        }
+        return diagram(s.clear(), points, s.vLeftAtFace(), s.vRightAtFace());
+    }
+
+    /** An overhang's, from the face of its support (x = 0, fixed) to its tip. */
+    static ShearDiagram overhangShear(Line line, LineResult r, int seg) {
+        boolean left = seg == 0;
+        double len = line.length(seg);
+        double half = line.supports().get(left ? 0 : line.spanCount()).width() / 2;
+        double clear = len - half;
+        List<double[]> points = new ArrayList<>();
+        for (LineResult.StationValues st : r.stations()) {
+            if (st.segment() != seg) {
+                continue;
+            }
+            double x = left ? len - half - st.local() : st.local() - half;
+            if (x >= -1e-6 && x <= clear + 1e-6) {
+                points.add(new double[] {Math.min(Math.max(x, 0), clear), magnitude(st)});
+            }
+        }
+        points.sort((a, b) -> Double.compare(a[0], b[0]));
+        return diagram(clear, points, false, true);
+    }
+
+    private static double magnitude(LineResult.StationValues st) {
+        return Math.max(0, Math.max(st.vMax(), -st.vMin()));
+    }
+
+    private static ShearDiagram diagram(double clear, List<double[]> points, boolean leftAtFace, boolean rightAtFace) {
+        double[] x = new double[points.size()];
+        double[] v = new double[points.size()];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = points.get(i)[0];
+            v[i] = points.get(i)[1];
+        }
+        return new ShearDiagram(clear, x, v, leftAtFace, rightAtFace);
     }
 
     /** The flange as given, bounded on each span by that span's clear length (Table 6.3.2.1). */
