@@ -41,8 +41,28 @@ public final class LineAnalysis {
     record EndMoments(double[] left, double[] right) {
     }
 
-    /** A factored combination of basic cases. */
-    record Combo(String name, double[] coef) {
+    /** A factored combination of basic cases; {@code nz} the cases it takes (non-zero factors), in order. */
+    record Combo(String name, double[] coef, int[] nz) {
+        Combo(String name, double[] coef) {
+            this(name, coef, nonZero(coef));
+        }
+
+        private static int[] nonZero(double[] coef) {
+            int n = 0;
+            for (double c : coef) {
+                if (c != 0) {
+                    n++;
+                }
+            }
+            int[] out = new int[n];
+            int k = 0;
+            for (int i = 0; i < coef.length; i++) {
+                if (coef[i] != 0) {
+                    out[k++] = i;
+                }
+            }
+            return out;
+        }
     }
 
     public static LineResult analyse(Line line) {
@@ -67,12 +87,16 @@ public final class LineAnalysis {
             for (int s = 0; s < line.segments(); s++) {
                 bySegment.add(onSegment(cases.get(c).loads(), s));
             }
+            double[] ra = new double[line.segments()];
+            for (int s = 0; s < line.segments(); s++) {
+                ra[s] = spanReaction(line, s, bySegment.get(s));
+            }
             for (int k = 0; k < ns; k++) {
                 Station st = stations.get(k);
                 List<Load> on = bySegment.get(st.segment());
-                m[c][k] = staticMoment(line, st.segment(), on, st.local());
-                vl[c][k] = staticShear(line, st.segment(), on, st.local(), false);
-                vr[c][k] = staticShear(line, st.segment(), on, st.local(), true);
+                m[c][k] = staticMoment(line, st.segment(), on, st.local(), ra[st.segment()]);
+                vl[c][k] = staticShear(line, st.segment(), on, st.local(), false, ra[st.segment()]);
+                vr[c][k] = staticShear(line, st.segment(), on, st.local(), true, ra[st.segment()]);
             }
         }
         List<Combo> combos = combos(line, cases);
@@ -392,6 +416,17 @@ public final class LineAnalysis {
      * supports' centre lines; for an overhang, a cantilever from its support. Sagging positive.
      */
     static double staticMoment(Line line, int segment, List<Load> loads, double x) {
+        return staticMoment(line, segment, loads, x, spanReaction(line, segment, loads));
+    }
+
+    /** The left reaction of a span's loads alone (simply supported), 0 for an overhang: what statics reuse. */
+    static double spanReaction(Line line, int segment, List<Load> loads) {
+        double len = line.length(segment);
+        return segment == 0 || segment == line.spanCount() + 1 || len == 0 ? 0 : leftReaction(len, loads);
+    }
+
+    /** As {@link #staticMoment(Line, int, List, double)} with the span's left reaction {@code ra} known. */
+    static double staticMoment(Line line, int segment, List<Load> loads, double x, double ra) {
         double len = line.length(segment);
         if (len == 0) {
             return 0;
@@ -415,7 +450,7 @@ public final class LineAnalysis {
             }
             return mo;
         }
-        return leftReaction(len, loads) * x - momentOfLoadsBefore(loads, x);
+        return ra * x - momentOfLoadsBefore(loads, x);
     }
 
     /** The left reaction of a simply supported span of length {@code len} under its loads. */
@@ -454,6 +489,11 @@ public final class LineAnalysis {
      * {@code rightLimit}, just right of it (a point load there counts only from the right).
      */
     static double staticShear(Line line, int segment, List<Load> loads, double x, boolean rightLimit) {
+        return staticShear(line, segment, loads, x, rightLimit, spanReaction(line, segment, loads));
+    }
+
+    /** As {@link #staticShear(Line, int, List, double, boolean)} with the span's left reaction known. */
+    static double staticShear(Line line, int segment, List<Load> loads, double x, boolean rightLimit, double ra) {
         double len = line.length(segment);
         if (len == 0) {
             return 0;
@@ -474,7 +514,7 @@ public final class LineAnalysis {
             return v;
         }
         if (segment != 0) {
-            v = leftReaction(len, loads);
+            v = ra;
         }
         for (Load l : loads) {
             double w = l.dead() + l.live();

@@ -43,12 +43,27 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
     public record Reaction(int support, double max, double min) {
     }
 
-    static LineResult build(Line line, List<LineAnalysis.Case> cases, LineAnalysis.EndMoments[] ends,
+    static LineResult build(Line line, List<LineAnalysis.Case> cases, LineAnalysis.EndMoments[] caseEnds,
             List<LineAnalysis.Station> stations, double[][] m, double[][] vl, double[][] vr,
             List<LineAnalysis.Combo> combos, List<LineAnalysis.Combo> service) {
-        Evaluator ev = new Evaluator(line, cases, ends);
+        Evaluator ev = new Evaluator(line, cases, caseEnds);
         ev.stations(stations, m);
         int ns = stations.size();
+        // each arrangement's end moments per segment, once
+        double[][][] ends = new double[combos.size()][line.segments()][];
+        for (int ci = 0; ci < combos.size(); ci++) {
+            for (int sg = 0; sg < line.segments(); sg++) {
+                ends[ci][sg] = ev.ends(combos.get(ci), sg);
+            }
+        }
+        // the service arrangements' moments at every station (what deflection and the service table read)
+        double[][] serviceM = new double[service.size()][ns];
+        for (int ci = 0; ci < service.size(); ci++) {
+            for (int k = 0; k < ns; k++) {
+                LineAnalysis.Station st = stations.get(k);
+                serviceM[ci][k] = ev.moment(service.get(ci), st.segment(), st.local(), k);
+            }
+        }
         List<StationValues> sv = new ArrayList<>();
         for (int k = 0; k < ns; k++) {
             LineAnalysis.Station st = stations.get(k);
@@ -62,17 +77,15 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             String d = null;
             for (int ci = 0; ci < combos.size(); ci++) {
                 LineAnalysis.Combo co = combos.get(ci);
-                double[] e = ev.ends(co, st.segment());
+                double[] e = ends[ci][st.segment()];
                 double mo = 0;
                 double left = 0;
                 double right = 0;
-                for (int i = 0; i < co.coef().length; i++) {
+                for (int i : co.nz()) {
                     double k2 = co.coef()[i];
-                    if (k2 != 0) {
-                        mo += k2 * m[i][k];
-                        left += k2 * vl[i][k];
-                        right += k2 * vr[i][k];
-                    }
+                    mo += k2 * m[i][k];
+                    left += k2 * vl[i][k];
+                    right += k2 * vr[i][k];
                 }
                 double len = line.length(st.segment());
                 if (isSpan(line, st.segment())) {
@@ -114,7 +127,7 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         }
         List<SpanValues> spans = new ArrayList<>();
         for (int s = 1; s <= line.spanCount(); s++) {
-            spans.add(span(line, ev, sv, combos, service, reactions, s));
+            spans.add(span(line, ev, sv, combos, service, serviceM, reactions, s));
         }
         List<OverhangValues> over = new ArrayList<>();
         if (line.overhangLeft() > 0) {
@@ -133,7 +146,7 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
     }
 
     private static SpanValues span(Line line, Evaluator ev, List<StationValues> sv, List<LineAnalysis.Combo> combos,
-            List<LineAnalysis.Combo> service, List<Reaction> reactions, int s) {
+            List<LineAnalysis.Combo> service, double[][] serviceM, List<Reaction> reactions, int s) {
         double len = line.length(s);
         Support ls = line.supports().get(s - 1);
         Support rs = line.supports().get(s);
@@ -202,17 +215,23 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         double tl = Double.POSITIVE_INFINITY;
         double tr = Double.POSITIVE_INFINITY;
         double tm = Double.NEGATIVE_INFINITY;
-        for (StationValues st : in) {
-            dm = Math.max(dm, ev.moment(dead, s, st.local()));
+        int first = 0;
+        while (sv.get(first).segment() != s) {
+            first++;
+        }
+        int last = first + in.size();
+        for (int k = first; k < last; k++) {
+            dm = Math.max(dm, serviceM[0][k]);
         }
         LineAnalysis.Combo deflectionBy = dead;
         double deflectionMid = Double.NEGATIVE_INFINITY;
-        for (LineAnalysis.Combo co : service) {
+        for (int ci = 0; ci < service.size(); ci++) {
+            LineAnalysis.Combo co = service.get(ci);
             tl = Math.min(tl, ev.moment(co, s, xl));
             tr = Math.min(tr, ev.moment(co, s, xr));
             double own = Double.NEGATIVE_INFINITY;
-            for (StationValues st : in) {
-                own = Math.max(own, ev.moment(co, s, st.local()));
+            for (int k = first; k < last; k++) {
+                own = Math.max(own, serviceM[ci][k]);
             }
             tm = Math.max(tm, own);
             if (own > deflectionMid + 1e-9) {
@@ -301,7 +320,7 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         private double[] endsOf(LineAnalysis.Combo co, int segment) {
             double left = 0;
             double right = 0;
-            for (int i = 0; i < co.coef().length; i++) {
+            for (int i : co.nz()) { // a case with no factor adds exactly nothing
                 left += co.coef()[i] * ends[i].left()[segment];
                 right += co.coef()[i] * ends[i].right()[segment];
             }
@@ -350,13 +369,15 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         }
 
         double moment(LineAnalysis.Combo co, int segment, double x) {
-            int k = stationIndex(segment, x);
+            return moment(co, segment, x, stationIndex(segment, x));
+        }
+
+        /** The moment at x, which is station k (or at no station when k < 0). */
+        double moment(LineAnalysis.Combo co, int segment, double x, int k) {
             if (k >= 0) {
                 double mo = 0;
-                for (int i = 0; i < co.coef().length; i++) {
-                    if (co.coef()[i] != 0) {
-                        mo += co.coef()[i] * stationMoments[i][k];
-                    }
+                for (int i : co.nz()) {
+                    mo += co.coef()[i] * stationMoments[i][k];
                 }
                 if (isSpan(line, segment)) {
                     double[] e = ends(co, segment);
