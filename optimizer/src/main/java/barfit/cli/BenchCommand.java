@@ -59,6 +59,14 @@ final class BenchCommand implements Callable<Integer> {
     @Option(names = "--threads", paramLabel = "N", description = "threads for schedules (default: the cores)")
     Integer threads;
 
+    @Option(names = "--library", paramLabel = "DIR",
+            description = "time the library example as lines against the same spans as a CSV schedule (DIR holds "
+                    + "library-lines-si.yaml, library-si.yaml and library-beams.csv: examples/schedule)")
+    java.nio.file.Path library;
+
+    @Option(names = "--runs", paramLabel = "N", defaultValue = "3", description = "runs of each form for --library (default: ${DEFAULT-VALUE})")
+    int runs;
+
     @Option(names = "--make-schedule", paramLabel = "N",
             description = "write an invented schedule of N beams (settings.yaml and beams.csv) into --out and stop")
     Integer make;
@@ -71,6 +79,25 @@ final class BenchCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         if (make != null) {
             return makeSchedule(out);
+        }
+        if (library != null) {
+            int t = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+            String[][] commands = barfit.bench.LibraryBench.commands(library, t);
+            if (commands == null) {
+                spec.commandLine().getErr().println("barfit bench --library: " + library + " does not hold "
+                        + "library-lines-si.yaml, library-si.yaml and library-beams.csv");
+                return Main.BAD_INPUT;
+            }
+            out.println("barfit bench --library: the library example as lines and as a CSV schedule, alternately, "
+                    + t + " threads, median of " + runs);
+            var f = barfit.bench.LibraryBench.run(commands, Math.max(1, runs));
+            out.printf(Locale.ROOT, "as lines %.2f s (CPU %.2f s), as a CSV schedule %.2f s (CPU %.2f s): ratio %.2f, "
+                    + "CPU ratio %.2f (at most 1 is the target)%n", f.linesSeconds(), f.linesCpuSeconds(), f.csvSeconds(),
+                    f.csvCpuSeconds(), f.ratio(), f.cpuRatio());
+            out.printf(Locale.ROOT, "{\"library_lines_seconds\": %.3f, \"library_csv_seconds\": %.3f, "
+                    + "\"library_ratio\": %.3f, \"library_cpu_ratio\": %.3f}%n", f.linesSeconds(), f.csvSeconds(),
+                    f.ratio(), f.cpuRatio());
+            return Main.OK;
         }
         if (schedule) {
             int t = threads == null ? Runtime.getRuntime().availableProcessors() : threads;

@@ -38,6 +38,9 @@ public final class DesignJson {
                 l.put("part", o.line().part());
                 l.put("rounds", o.line().rounds());
                 l.put("settled", o.line().settled());
+                if (o.line().held()) {
+                    l.put("held", true);
+                }
                 if (!o.line().undesigned().isEmpty()) {
                     var none = l.putArray("undesigned");
                     o.line().undesigned().forEach(none::add);

@@ -39,6 +39,9 @@ public final class DesignText {
                                 ? " (no design for " + String.join(", ", o.line().undesigned()) + ": the analysis "
                                         + "took the first estimate of the section there, so the envelope holds only "
                                         + "once every part is designed)"
+                                : o.line().settled() && o.line().held()
+                                ? " (the sections alternated from round to round: every part is held at the largest "
+                                        + "of them, with its bars designed for the envelope of exactly those sections)"
                                 : o.line().settled()
                                 ? " (the sections designed are those analysed)"
                                 : " (the sections still changed in the last round: check the envelope by hand)")

@@ -85,7 +85,9 @@ public final class ScheduleInputReader {
             }
             for (int i = 0; i < lines.size(); i++) {
                 for (var part : results.get(i).parts()) {
-                    out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(), part.problem()));
+                    // the line's last round designed it for this very problem: its own optimum
+                    out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(), part.problem(),
+                            part.outcome()));
                 }
             }
         }

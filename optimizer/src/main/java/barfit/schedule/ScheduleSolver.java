@@ -47,7 +47,8 @@ public final class ScheduleSolver {
         List<ScheduleBeam> beams = in.beams();
         BeamDesigner designer = new BeamDesigner(cost, options, in.settings().units());
         List<BeamDesigner.Outcome> own = parallel(beams.size(), "designing beams",
-                i -> designer.design(beams.get(i).problem(), 0));
+                i -> beams.get(i).designed() != null ? beams.get(i).designed()
+                        : designer.design(beams.get(i).problem(), 0));
         double unconstrained = 0;
         for (BeamDesigner.Outcome o : own) {
             if (o.feasible()) {

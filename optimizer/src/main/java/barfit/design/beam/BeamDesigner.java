@@ -77,17 +77,37 @@ public final class BeamDesigner {
      * cheapest, widened (10 %, 30 %, 100 %, everything) until enough are found.
      */
     public Outcome design(BeamProblem p, int alternatives) {
-        Outcome o = design(p, alternatives, 0);
+        return design(p, alternatives, (BeamLayout) null);
+    }
+
+    /**
+     * As {@link #design(BeamProblem, int)}, told of a layout that may pass ({@code hint}, e.g. the same span's
+     * design for a slightly different demand): when it passes every check and its section is in the search
+     * space, its cost bounds the search from the start. The optimum is the same; the search is shorter.
+     */
+    public Outcome design(BeamProblem p, int alternatives, BeamLayout hint) {
+        double ceiling = ceiling(p, hint);
+        Outcome o = design(p, alternatives, 0, ceiling);
         double[] margins = {0.1, 0.3, 1.0, Double.POSITIVE_INFINITY};
         for (int i = 0; i < margins.length && o.feasible() && o.alternatives().size() < alternatives; i++) {
-            o = design(p, alternatives, margins[i]);
+            o = design(p, alternatives, margins[i], ceiling);
         }
         return o;
     }
 
-    private Outcome design(BeamProblem p, int alternatives, double slack) {
+    /** The hint's cost, a hair above so that rounding never cuts the hint itself; infinite when unusable. */
+    private double ceiling(BeamProblem p, BeamLayout hint) {
+        if (hint == null || !p.widths().contains(hint.width()) || !p.depths().contains(hint.height())
+                || !BeamVerifier.verify(p, hint, false).ok()) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double c = hint.cost(p, cost).total();
+        return c * (1 + 1e-9) + 1e-9;
+    }
+
+    private Outcome design(BeamProblem p, int alternatives, double slack, double ceiling) {
         BeamGenerator gen = new BeamGenerator(p, cost);
-        BeamGenerator.Output out = gen.generate(slack);
+        BeamGenerator.Output out = gen.generate(slack, ceiling);
         var stats = out.stats();
         if (out.incumbentLayout() == null) {
             Proof proof = new Proof("infeasible", 0, 0, 0, stats.frames(), stats.framesEvaluated(), stats.framesSkipped(),

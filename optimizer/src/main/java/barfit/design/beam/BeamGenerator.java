@@ -142,7 +142,16 @@ public final class BeamGenerator {
      * that the next-cheapest designs within that margin stay in the candidate sets (alternatives).
      */
     public Output generate(double slack) {
+        return generate(slack, Double.POSITIVE_INFINITY);
+    }
+
+    /**
+     * As {@link #generate(double)}, with the cost of a design known to pass ({@code ceiling}, per span; a
+     * line's previous round, say) bounding the search from the start as the cheapest found would.
+     */
+    public Output generate(double slack, double ceiling) {
         long t0 = System.nanoTime();
+        final double roof = loose(ceiling, slack);
         List<Frame> frames = frames();
         List<FrameSet> sets = new ArrayList<>();
         double incumbent = Double.POSITIVE_INFINITY;
@@ -160,7 +169,7 @@ public final class BeamGenerator {
         }
         if (opener != null && frames.get(0) != opener && frames.get(0).deflection()) {
             evaluated++;
-            FrameSet fs = evaluate(opener, loose(incumbent, slack));
+            FrameSet fs = evaluate(opener, Math.min(loose(incumbent, slack), roof));
             if (fs != null) {
                 sets.add(fs);
                 if (fs.best() < incumbent) {
@@ -176,15 +185,15 @@ public final class BeamGenerator {
             if (f == opener) {
                 continue;
             }
-            if (f.lowerBound() >= loose(incumbent, slack) || Double.isInfinite(f.lowerBound())) {
+            if (f.lowerBound() >= Math.min(loose(incumbent, slack), roof) || Double.isInfinite(f.lowerBound())) {
                 skipped = frames.size() - i;
                 break;
             }
-            if (Double.isFinite(incumbent) && frameLowerBound(f) >= loose(incumbent, slack) - 1e-9) {
+            if (Double.isFinite(Math.min(incumbent, roof)) && frameLowerBound(f) >= Math.min(loose(incumbent, slack), roof) - 1e-9) {
                 continue; // a closer look at its bars shows it cannot beat the incumbent
             }
             evaluated++;
-            FrameSet fs = evaluate(f, loose(incumbent, slack));
+            FrameSet fs = evaluate(f, Math.min(loose(incumbent, slack), roof));
             if (fs == null) {
                 continue;
             }
@@ -194,7 +203,7 @@ public final class BeamGenerator {
                 incumbentLayout = fs.bestLayout();
             }
         }
-        final double inc = loose(incumbent, slack);
+        final double inc = Math.min(loose(incumbent, slack), roof);
         List<FrameSet> kept = new ArrayList<>();
         for (FrameSet fs : sets) {
             if (fs.frame().lowerBound() < inc + 1e-9) {

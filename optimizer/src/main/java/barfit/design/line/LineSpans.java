@@ -7,6 +7,7 @@ import barfit.analysis.LineResult;
 import barfit.analysis.Load;
 import barfit.design.SearchSpace;
 import barfit.design.beam.BeamDesigner;
+import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
 import barfit.design.beam.ShearDiagram;
 import barfit.input.LineInput;
@@ -47,7 +48,8 @@ public final class LineSpans {
      * 1000 εt percent); {@code epsT} the least εt of those sections (NaN where none was asked).
      */
     public record Result(LineInput line, List<Part> parts, int rounds, boolean settled, LineResult analysis,
-            List<Coefficients.SpanValues> coefficients, List<Double> redistribution, List<Double> epsT) {
+            List<Coefficients.SpanValues> coefficients, List<Double> redistribution, List<Double> epsT,
+            List<String> held) {
     }
 
     /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
@@ -82,7 +84,10 @@ public final class LineSpans {
         boolean settled = false;
         List<Double> red = new ArrayList<>(in.redistribution());
         List<Double> epsT = new ArrayList<>();
+        List<List<SectionShape>> seen = new ArrayList<>();
+        List<SectionShape> held = null;
         while (round < MAX_ROUNDS) {
+            seen.add(shapes);
             round++;
             Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
             List<BeamProblem> problems;
@@ -97,7 +102,10 @@ public final class LineSpans {
             List<SectionShape> chosen = new ArrayList<>(shapes);
             for (BeamProblem p : problems) {
                 int seg = segmentOf(p, n);
-                BeamDesigner.Outcome o = designer.design(p, alternatives);
+                if (held != null) {
+                    p = heldAt(p, held.get(seg));
+                }
+                BeamDesigner.Outcome o = designer.design(p, alternatives, previous(parts, seg));
                 next.add(new Part(seg, partName(seg, n), p, o));
                 if (o.feasible()) {
                     var l = o.best().layout();
@@ -121,9 +129,60 @@ public final class LineSpans {
                 settled = true;
                 break;
             }
+            int again = lowered || held != null ? -1 : indexOfSections(seen, chosen);
+            if (again >= 0) {
+                // the sections alternate: each span's own weight and stiffness move its neighbours' envelope
+                // back and forth. Hold every part at the largest section of the cycle and design its bars
+                // for the envelope of exactly those sections, which then settles.
+                held = largest(seen.subList(again, seen.size()));
+                chosen = held;
+            }
             shapes = chosen;
         }
-        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT);
+        List<String> heldParts = new ArrayList<>();
+        if (held != null) {
+            parts.forEach(pt -> heldParts.add(pt.name()));
+        }
+        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT, heldParts);
+    }
+
+    /** The segment's design in the previous round: a layout that may pass again, to bound the next search. */
+    private static BeamLayout previous(List<Part> parts, int seg) {
+        for (Part pt : parts) {
+            if (pt.segment() == seg && pt.outcome().feasible()) {
+                return pt.outcome().best().layout();
+            }
+        }
+        return null;
+    }
+
+    /** The part restricted to the one section it is held at. */
+    private static BeamProblem heldAt(BeamProblem p, SectionShape shape) {
+        return p.withFixedWidth(shape.width()).withSpace(p.space().withDepths(List.of(shape.height())));
+    }
+
+    private static int indexOfSections(List<List<SectionShape>> seen, List<SectionShape> shapes) {
+        for (int i = 0; i < seen.size(); i++) {
+            if (sameSections(seen.get(i), shapes)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /** Per segment, the deepest of the sections (the wider between equally deep ones). */
+    private static List<SectionShape> largest(List<List<SectionShape>> states) {
+        List<SectionShape> out = new ArrayList<>(states.get(0));
+        for (List<SectionShape> st : states) {
+            for (int i = 0; i < out.size(); i++) {
+                SectionShape a = out.get(i);
+                SectionShape b = st.get(i);
+                if (b.height() > a.height() || b.height() == a.height() && b.width() > a.width()) {
+                    out.set(i, b);
+                }
+            }
+        }
+        return out;
     }
 
     /** The least εt of the designed support sections beside each support (NaN where none is designed). */
