@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.CostModel;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
@@ -78,12 +79,12 @@ public final class BeamJson {
             proof.putNull("bound");
             proof.putNull("gap");
         } else if (pr.booleans() == 0) { // stopped by the time limit before a proof
-            proof.put("objective", pr.objective() / 1e6);
+            proof.put("objective", CostModel.SPAN_UNITS.currency(pr.objective()));
             proof.putNull("bound");
             proof.putNull("gap");
         } else {
-            proof.put("objective", pr.objective() / 1e6);
-            proof.put("bound", pr.bound() / 1e6);
+            proof.put("objective", CostModel.SPAN_UNITS.currency(pr.objective()));
+            proof.put("bound", CostModel.SPAN_UNITS.currency(pr.bound()));
             proof.put("gap", pr.gap());
         }
         proof.put("booleans", pr.booleans());

@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.CostModel;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
@@ -294,8 +295,8 @@ public final class BeamText {
                     + " is given, with no bound (raise --time-limit for the proof); " + p.workers()
                     + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
         }
-        return "CP-SAT " + p.status() + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective() / 1e6)
-                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound() / 1e6) + ", gap "
+        return "CP-SAT " + p.status() + " (objective " + String.format(Locale.ROOT, "%.4f", CostModel.SPAN_UNITS.currency(p.objective()))
+                + ", bound " + String.format(Locale.ROOT, "%.4f", CostModel.SPAN_UNITS.currency(p.bound())) + ", gap "
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over " + p.booleans() + " booleans; "
                 + p.framesEvaluated() + " of " + p.frames() + " frames evaluated, " + p.framesSkipped()
                 + " skipped by the cost bound; " + p.solves() + (p.solves() == 1 ? " solve" : " solves")

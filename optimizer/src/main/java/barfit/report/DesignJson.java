@@ -2,6 +2,7 @@ package barfit.report;
 
 import barfit.design.Binding;
 import barfit.design.CostBreakdown;
+import barfit.design.CostModel;
 import barfit.design.Design;
 import barfit.design.DesignOutcome;
 import barfit.design.Layout;
@@ -156,17 +157,18 @@ public final class DesignJson {
 
     static ObjectNode cost(CostBreakdown c) {
         ObjectNode o = Json.object();
-        o.put("total", round2(c.total()));
-        o.put("concrete", round2(c.concrete()));
-        o.put("main_bars", round2(c.mainBars()));
-        o.put("stirrups", round2(c.stirrups()));
-        o.put("formwork", round2(c.formwork()));
-        o.put("depth_premium", round2(c.depthPremium()));
+        o.put("total", money(c.total()));
+        o.put("concrete", money(c.concrete()));
+        o.put("main_bars", money(c.mainBars()));
+        o.put("stirrups", money(c.stirrups()));
+        o.put("formwork", money(c.formwork()));
+        o.put("depth_premium", money(c.depthPremium()));
         return o;
     }
 
-    static double round2(double v) {
-        return Math.round(v * 10_000.0) / 10_000.0;
+    /** A cost rounded to the searches' unit, 1/10 000 of the currency. */
+    static double money(double v) {
+        return CostModel.UNITS.rounded(v);
     }
 
     static ObjectNode proof(Proof p, UnitSystem u) {
@@ -179,12 +181,12 @@ public final class DesignJson {
             o.putNull("bound");
             o.putNull("gap");
         } else if (p.status() == Selection.Status.FEASIBLE && p.bound() == 0) { // stopped before a proof
-            o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
+            o.put("objective", money(Money.perLength(CostModel.currency(p.objective()), u)));
             o.putNull("bound");
             o.putNull("gap");
         } else {
-            o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
-            o.put("bound", round2(Money.perLength(p.bound() / 10_000.0, u)));
+            o.put("objective", money(Money.perLength(CostModel.currency(p.objective()), u)));
+            o.put("bound", money(Money.perLength(CostModel.currency(p.bound()), u)));
             o.put("gap", p.gap());
         }
         o.put("candidates", p.candidates());

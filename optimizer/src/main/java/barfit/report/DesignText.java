@@ -1,6 +1,7 @@
 package barfit.report;
 
 import barfit.design.Binding;
+import barfit.design.CostModel;
 import barfit.design.Design;
 import barfit.design.DesignOutcome;
 import barfit.design.Diagnosis;
@@ -207,8 +208,8 @@ public final class DesignText {
                     + " candidates the generator found is given, with no bound (raise --time-limit for the proof); "
                     + p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
         }
-        String bound = String.format(Locale.ROOT, "%.4f", Money.perLength(p.bound() / 10_000.0, u));
-        String obj = String.format(Locale.ROOT, "%.4f", Money.perLength(p.objective() / 10_000.0, u));
+        String bound = String.format(Locale.ROOT, "%.4f", Money.perLength(CostModel.currency(p.bound()), u));
+        String obj = String.format(Locale.ROOT, "%.4f", Money.perLength(CostModel.currency(p.objective()), u));
         return "CP-SAT " + p.status().name().toLowerCase(Locale.ROOT) + " over " + p.candidates()
                 + (p.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + ", bound " + bound + " "
                 + Money.perLengthLabel(u) + ", gap "

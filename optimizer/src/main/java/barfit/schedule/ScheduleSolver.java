@@ -661,7 +661,7 @@ public final class ScheduleSolver {
                 if (s.result() == null) {
                     out.add(new ScheduleResult.StandardisationPoint(k, Double.NaN, "INFEASIBLE", List.of()));
                 } else {
-                    out.add(new ScheduleResult.StandardisationPoint(k, s.result().objective() / CostModel.UNITS_PER_CURRENCY,
+                    out.add(new ScheduleResult.StandardisationPoint(k, CostModel.currency(s.result().objective()),
                             s.bound() >= s.result().objective() ? "OPTIMAL" : "FEASIBLE", names(s.bars())));
                 }
             }
@@ -757,8 +757,8 @@ public final class ScheduleSolver {
                 formwork = used * rat.formworkSetCost();
                 String status = best.bound() >= best.result().objective() ? "OPTIMAL" : "FEASIBLE";
                 proof = new ScheduleResult.Proof(best.result().method() + "; sizes priced lazily against bar-free "
-                        + "bounds", status, best.result().objective() / CostModel.UNITS_PER_CURRENCY,
-                        best.bound() / CostModel.UNITS_PER_CURRENCY, best.setsTotal(), best.setsSolved(),
+                        + "bounds", status, CostModel.currency(best.result().objective()),
+                        CostModel.currency(best.bound()), best.setsTotal(), best.setsSolved(),
                         best.setsPruned(), pricedForProof, options.workers(), options.seed(), proofMillis);
             }
             // every beam at its own optimum, for comparison: the beams designed here, each in its own best

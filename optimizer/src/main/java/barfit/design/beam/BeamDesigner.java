@@ -138,7 +138,7 @@ public final class BeamDesigner {
             // when it passes every check, as found but not proven (no bound)
             BeamReport report = BeamVerifier.verify(p, out.incumbentLayout(), true);
             Proof proof = new Proof(report.ok() ? "feasible" : "unknown", report.ok()
-                    ? Math.round(out.incumbent() * BeamGenerator.UNITS) : 0, 0, 0, stats.frames(),
+                    ? CostModel.SPAN_UNITS.units(out.incumbent()) : 0, 0, 0, stats.frames(),
                     stats.framesEvaluated(), stats.framesSkipped(), solves, cuts, options.workers(), options.seed());
             if (!report.ok()) {
                 return new Outcome(p, "unknown", null, List.of(), proof, List.of(), new Diagnosis("time limit",

@@ -1,6 +1,7 @@
 package barfit.design.beam;
 
 import barfit.catalogs.BarSize;
+import barfit.design.CostModel;
 import barfit.design.OrTools;
 import barfit.design.SolverOptions;
 import com.google.ortools.sat.CpModel;
@@ -59,7 +60,7 @@ public final class BeamSelection {
     private Literal bool(String name, double cost) {
         Literal v = model.newBoolVar(name);
         all.add(v);
-        costs.add(Math.round(cost * BeamGenerator.UNITS));
+        costs.add(CostModel.SPAN_UNITS.units(cost));
         booleans++;
         return v;
     }

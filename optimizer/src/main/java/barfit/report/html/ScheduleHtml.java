@@ -1,6 +1,7 @@
 package barfit.report.html;
 
 import barfit.catalogs.BarSize;
+import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
 import barfit.design.beam.BeamDesigner;
@@ -680,9 +681,8 @@ public final class ScheduleHtml {
     }
 
     private static String proofWords(BeamDesigner.Proof p) {
-        // objective and bound are in the selection's integer cost units (a millionth of the currency)
-        return "CP-SAT " + p.status() + ", objective " + String.format(Locale.ROOT, "%.4f", p.objective() / 1e6)
-                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound() / 1e6) + ", gap "
+        return "CP-SAT " + p.status() + ", objective " + String.format(Locale.ROOT, "%.4f", CostModel.SPAN_UNITS.currency(p.objective()))
+                + ", bound " + String.format(Locale.ROOT, "%.4f", CostModel.SPAN_UNITS.currency(p.bound())) + ", gap "
                 + String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()) + "; " + p.framesEvaluated() + " of " + p.frames()
                 + " frames evaluated, " + p.framesSkipped() + " skipped by the cost bound; " + p.solves()
                 + (p.solves() == 1 ? " solve" : " solves") + (p.deflectionCuts() > 0 ? ", " + p.deflectionCuts()
