@@ -2,6 +2,7 @@ package barfit.design;
 
 import com.google.ortools.Loader;
 import com.google.ortools.sat.CpSolver;
+import com.google.ortools.sat.CpSolverStatus;
 import java.io.IOException;
 import java.io.InputStream;
 import java.net.JarURLConnection;
@@ -188,5 +189,18 @@ public final class OrTools {
         solver.getParameters().setNumWorkers(Math.max(1, o.workers())).setRandomSeed(o.seed())
                 .setMaxTimeInSeconds(o.timeLimitSeconds()).setLogSearchProgress(false);
         return solver;
+    }
+
+    /**
+     * CP-SAT's status in the proof's words. UNKNOWN means a limit ended the solve before it had a solution
+     * or a proof ({@link Proof.Status#OUT_OF_TIME}); {@code model} names the model.
+     */
+    public static Proof.Status status(CpSolverStatus status, CpSolver solver, String model) {
+        return switch (status) {
+            case OPTIMAL -> Proof.Status.OPTIMAL;
+            case FEASIBLE -> Proof.Status.FEASIBLE;
+            case INFEASIBLE -> Proof.Status.INFEASIBLE;
+            case UNKNOWN, MODEL_INVALID, UNRECOGNIZED -> Proof.Status.OUT_OF_TIME;
+        };
     }
 }

@@ -1,13 +1,13 @@
 package barfit.report;
 
 import barfit.design.Binding;
+import barfit.design.CandidateGenerator;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
 import barfit.design.Design;
 import barfit.design.DesignOutcome;
 import barfit.design.Layout;
 import barfit.design.Proof;
-import barfit.design.Selection;
 import barfit.input.Settings;
 import barfit.section.CheckResult;
 import barfit.section.trail.Dim;
@@ -171,29 +171,30 @@ public final class DesignJson {
         return CostModel.UNITS.rounded(v);
     }
 
-    static ObjectNode proof(Proof p, UnitSystem u) {
+    static ObjectNode proof(Proof<CandidateGenerator.Stats> p, UnitSystem u) {
         ObjectNode o = Json.object();
         o.put("solver", "CP-SAT");
-        o.put("status", p.status().name().toLowerCase(java.util.Locale.ROOT));
+        o.put("status", Words.status(p.status()));
         o.put("basis", Money.perLengthLabel(u));
-        if (p.status() == Selection.Status.INFEASIBLE) { // nothing passes: no objective to bound
+        if (p.bounded()) {
+            o.put("objective", money(Money.perLength(p.objective(), u)));
+            o.put("bound", money(Money.perLength(p.bound(), u)));
+            o.put("gap", p.gap());
+        } else if (p.status() == Proof.Status.UNPROVEN) { // stopped before a proof
+            o.put("objective", money(Money.perLength(p.objective(), u)));
+            o.putNull("bound");
+            o.putNull("gap");
+        } else { // nothing passes: no objective to bound
             o.putNull("objective");
             o.putNull("bound");
             o.putNull("gap");
-        } else if (p.status() == Selection.Status.FEASIBLE && p.bound() == 0) { // stopped before a proof
-            o.put("objective", money(Money.perLength(CostModel.currency(p.objective()), u)));
-            o.putNull("bound");
-            o.putNull("gap");
-        } else {
-            o.put("objective", money(Money.perLength(CostModel.currency(p.objective()), u)));
-            o.put("bound", money(Money.perLength(CostModel.currency(p.bound()), u)));
-            o.put("gap", p.gap());
         }
-        o.put("candidates", p.candidates());
-        o.put("frames", p.stats().frames());
-        o.put("frames_evaluated", p.stats().framesEvaluated());
-        o.put("frames_skipped_by_bound", p.stats().framesPrunedByBound());
-        o.put("flexure_solves", p.stats().flexureSolves());
+        var s = p.search();
+        o.put("candidates", s.candidates());
+        o.put("frames", s.frames());
+        o.put("frames_evaluated", s.framesEvaluated());
+        o.put("frames_skipped_by_bound", s.framesPrunedByBound());
+        o.put("flexure_solves", s.flexureSolves());
         o.put("workers", p.workers());
         o.put("seed", p.seed());
         return o;

@@ -1,6 +1,7 @@
 package barfit.schedule;
 
 import barfit.design.OrTools;
+import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
@@ -676,7 +677,8 @@ final class KMedian {
         CpSolver solver = OrTools.solver(options);
         solver.getParameters().setLinearizationLevel(2);
         CpSolverStatus st = solver.solve(model);
-        if (st != CpSolverStatus.OPTIMAL && st != CpSolverStatus.FEASIBLE) {
+        Proof.Status status = OrTools.status(st, solver, "the schedule's k-median model");
+        if (status != Proof.Status.OPTIMAL && status != Proof.Status.FEASIBLE) {
             // nothing better within the time: the local-search solution with the relaxation's bound
             return new Result("FEASIBLE", ub, lp.bound, assign(start), "local search; CP-SAT " + st, lp.variables, kept);
         }
@@ -693,8 +695,7 @@ final class KMedian {
             openSizes = start;
             obj = ub;
         }
-        String status = st == CpSolverStatus.OPTIMAL || bound >= obj ? "OPTIMAL" : "FEASIBLE";
-        return new Result(status, obj, Math.min(bound, obj), assign(openSizes),
+        return new Result(status == Proof.Status.OPTIMAL || bound >= obj ? "OPTIMAL" : "FEASIBLE", obj, Math.min(bound, obj), assign(openSizes),
                 "relaxation, reduced-cost fixing and CP-SAT", lp.variables, kept);
     }
 }
