@@ -191,16 +191,31 @@ public final class OrTools {
         return solver;
     }
 
+    /** Characters of CP-SAT's reason for an invalid model quoted in the message. */
+    private static final int WHY_MAX = 200;
+
     /**
      * CP-SAT's status in the proof's words. UNKNOWN means a limit ended the solve before it had a solution
-     * or a proof ({@link Proof.Status#OUT_OF_TIME}); {@code model} names the model.
+     * or a proof ({@link Proof.Status#OUT_OF_TIME}); MODEL_INVALID means barfit built a model CP-SAT cannot
+     * take ({@code model} names it), a bug: it is thrown as {@link InvalidModelError}, never reported as an
+     * answer.
      */
     public static Proof.Status status(CpSolverStatus status, CpSolver solver, String model) {
         return switch (status) {
             case OPTIMAL -> Proof.Status.OPTIMAL;
             case FEASIBLE -> Proof.Status.FEASIBLE;
             case INFEASIBLE -> Proof.Status.INFEASIBLE;
-            case UNKNOWN, MODEL_INVALID, UNRECOGNIZED -> Proof.Status.OUT_OF_TIME;
+            case UNKNOWN -> Proof.Status.OUT_OF_TIME;
+            case MODEL_INVALID, UNRECOGNIZED -> {
+                // CP-SAT's own reason, on one line and cut: it can quote a whole constraint
+                String why = solver.getSolutionInfo() == null ? "" : solver.getSolutionInfo().strip().replaceAll("\\s+", " ");
+                if (why.length() > WHY_MAX) {
+                    why = why.substring(0, WHY_MAX) + "…";
+                }
+                throw new InvalidModelError("CP-SAT found " + model + " invalid (" + status
+                        + (why.isEmpty() ? "" : ": " + why) + "); this is a bug in barfit, not in the input: please "
+                        + "report it with the input file");
+            }
         };
     }
 }

@@ -9,7 +9,7 @@ package barfit.design;
 public record Proof<S>(Status status, double objective, double bound, double gap, SolverStats solver, S search,
         int workers, int seed) {
 
-    /** What the searches tell apart ({@link OrTools#status} maps CP-SAT's). */
+    /** What the searches tell apart. A model CP-SAT finds invalid is a bug, never a status: {@link OrTools#status}. */
     public enum Status {
         /** The objective meets the bound: nothing cheaper exists. */
         OPTIMAL,
