@@ -124,7 +124,8 @@ public final class ScheduleBench {
             out.printf(Locale.ROOT, "heap: at most %.0f MB in use after a collection (what the runs hold); peak %.0f MB "
                     + "including garbage not yet collected (of %.0f MB allowed)%n", liveMb, peak,
                     Runtime.getRuntime().maxMemory() / 1048576.0);
-            return new Figures(beams, plainS, ratBeams, k, m, mainS, ratS, p.status().name(), p.gap(), peak, liveMb, threads);
+            return new Figures(beams, plainS, ratBeams, k, m, mainS, ratS, p.status().name(), p.gap(), peak, liveMb,
+                    threads);
         } finally {
             live.unwatch();
             delete(dir);

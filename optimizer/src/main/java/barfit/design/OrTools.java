@@ -208,7 +208,8 @@ public final class OrTools {
             case UNKNOWN -> Proof.Status.OUT_OF_TIME;
             case MODEL_INVALID, UNRECOGNIZED -> {
                 // CP-SAT's own reason, on one line and cut: it can quote a whole constraint
-                String why = solver.getSolutionInfo() == null ? "" : solver.getSolutionInfo().strip().replaceAll("\\s+", " ");
+                String info = solver.getSolutionInfo();
+                String why = info == null ? "" : info.strip().replaceAll("\\s+", " ");
                 if (why.length() > WHY_MAX) {
                     why = why.substring(0, WHY_MAX) + "…";
                 }

@@ -58,7 +58,7 @@ public record Proof<S>(Status status, double objective, double bound, double gap
         return objective == 0 ? 0 : Math.max(0, (double) (objective - bound) / Math.abs(objective));
     }
 
-    /** Whether there is a design with a bound on what it could cost at least ({@link Status#OPTIMAL}, {@link Status#FEASIBLE}). */
+    /** Whether there is an objective with a bound below it: {@link Status#OPTIMAL} or {@link Status#FEASIBLE}. */
     public boolean bounded() {
         return status == Status.OPTIMAL || status == Status.FEASIBLE;
     }

@@ -1,7 +1,6 @@
 package barfit.schedule;
 
 import barfit.design.OrTools;
-import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
@@ -677,8 +676,8 @@ final class KMedian {
         CpSolver solver = OrTools.solver(options);
         solver.getParameters().setLinearizationLevel(2);
         CpSolverStatus st = solver.solve(model);
-        Proof.Status status = OrTools.status(st, solver, "the schedule's k-median model");
-        if (status != Proof.Status.OPTIMAL && status != Proof.Status.FEASIBLE) {
+        OrTools.status(st, solver, "the schedule's k-median model"); // MODEL_INVALID stops here, as a bug
+        if (st != CpSolverStatus.OPTIMAL && st != CpSolverStatus.FEASIBLE) {
             // nothing better within the time: the local-search solution with the relaxation's bound
             return new Result("FEASIBLE", ub, lp.bound, assign(start), "local search; CP-SAT " + st, lp.variables, kept);
         }
@@ -695,7 +694,8 @@ final class KMedian {
             openSizes = start;
             obj = ub;
         }
-        return new Result(status == Proof.Status.OPTIMAL || bound >= obj ? "OPTIMAL" : "FEASIBLE", obj, Math.min(bound, obj), assign(openSizes),
+        String status = st == CpSolverStatus.OPTIMAL || bound >= obj ? "OPTIMAL" : "FEASIBLE";
+        return new Result(status, obj, Math.min(bound, obj), assign(openSizes),
                 "relaxation, reduced-cost fixing and CP-SAT", lp.variables, kept);
     }
 }

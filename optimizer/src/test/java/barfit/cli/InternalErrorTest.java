@@ -31,15 +31,18 @@ class InternalErrorTest {
         CpSolver solver = OrTools.solver(new SolverOptions(10, 1, 1));
         InvalidModelError bug = assertThrows(InvalidModelError.class,
                 () -> OrTools.status(solver.solve(model), solver, "a hand-made model"));
-        for (Exception thrown : new Exception[] {bug, new IllegalStateException(bug)}) { // as thrown, or wrapped by a thread pool
+        // as thrown, and wrapped as a thread pool's failure is
+        for (Exception thrown : new Exception[] {bug, new IllegalStateException(bug)}) {
             StringWriter err = new StringWriter();
             int code = Main.failure(thrown, new PrintWriter(err, true));
             assertEquals(Main.INTERNAL, code);
             assertEquals(3, code);
             assertNotEquals(Main.BAD_INPUT, code);
             String said = err.toString();
-            assertTrue(said.startsWith("barfit: internal error: CP-SAT found a hand-made model invalid (MODEL_INVALID"), said);
-            assertTrue(said.contains("this is a bug in barfit, not in the input: please report it with the input file"), said);
+            assertTrue(said.startsWith("barfit: internal error: CP-SAT found a hand-made model invalid (MODEL_INVALID"),
+                    said);
+            assertTrue(said.contains("this is a bug in barfit, not in the input: please report it with the input file"),
+                    said);
             assertEquals(1, said.lines().count(), "one line: " + said);
         }
     }

@@ -146,7 +146,8 @@ public final class BeamDesigner {
             }
             Design d = new Design(out.incumbentLayout(), out.incumbentLayout().cost(p, cost), report,
                     out.incumbentLayout().bars(p, cost));
-            var proof = Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search, options);
+            var proof = Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search,
+                    options);
             return new Outcome(p, "feasible", d, List.of(), proof, binding(p, d), null);
         }
         var proof = Proof.solved(first.status(), first.objective(), first.bound(), CostModel.SPAN_UNITS, first.stats(),

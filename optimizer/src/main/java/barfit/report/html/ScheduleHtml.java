@@ -691,8 +691,8 @@ public final class ScheduleHtml {
                 + String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()) + "; " + s.generator().framesEvaluated() + " of "
                 + s.generator().frames() + " frames evaluated, " + s.generator().framesSkipped()
                 + " skipped by the cost bound; " + s.solves() + (s.solves() == 1 ? " solve" : " solves")
-                + (s.deflectionCuts() > 0 ? ", " + s.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed "
-                + p.seed();
+                + (s.deflectionCuts() > 0 ? ", " + s.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
+                + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
     }
 
     private static String unitsWords(UnitSystem u) {
