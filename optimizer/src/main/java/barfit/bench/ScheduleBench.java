@@ -116,14 +116,16 @@ public final class ScheduleBench {
                     + "%s, objective %.2f, bound %.2f, gap %.3f %%; %d of %d bar-size sets solved, %d pruned; "
                     + "%d (beam, size) pairs priced; own optima %.2f (+%.2f %%); price of standardisation for "
                     + "K = 1..%d%n", ratBeams, k, m, threads, mainS, ratS, p.status(), p.objective(), p.bound(), 100 * p.gap(),
-                    p.barSetsSolved(), p.barSetsTotal(), p.barSetsPruned(), p.pairsEvaluated(), r.unconstrainedCost(),
+                    p.search().barSetsSolved(), p.search().barSetsTotal(), p.search().barSetsPruned(),
+                    p.search().pairsEvaluated(), r.unconstrainedCost(),
                     100 * (r.totalCost() - r.unconstrainedCost()) / r.unconstrainedCost(), r.standardisation().size());
             double peak = peakHeapMb();
             double liveMb = live.peak / 1048576.0;
             out.printf(Locale.ROOT, "heap: at most %.0f MB in use after a collection (what the runs hold); peak %.0f MB "
                     + "including garbage not yet collected (of %.0f MB allowed)%n", liveMb, peak,
                     Runtime.getRuntime().maxMemory() / 1048576.0);
-            return new Figures(beams, plainS, ratBeams, k, m, mainS, ratS, p.status(), p.gap(), peak, liveMb, threads);
+            return new Figures(beams, plainS, ratBeams, k, m, mainS, ratS, p.status().name(), p.gap(), peak, liveMb,
+                    threads);
         } finally {
             live.unwatch();
             delete(dir);

@@ -13,7 +13,10 @@ import java.util.function.Supplier;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
-/** The {@code barfit} command line. Exit codes: 0 all pass, 1 a check fails, 2 bad input or usage. */
+/**
+ * The {@code barfit} command line. Exit codes: 0 all pass, 1 a check fails, 2 bad input or usage, 3 an
+ * internal error (a bug in barfit, or a machine that cannot run the solver or is out of memory).
+ */
 @Command(name = "barfit", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Cheapest passing reinforced-concrete beam layouts to ACI 318-19, searched and proven.%n"
                 + "Results must be checked by a licensed professional engineer against the governing local code.")
@@ -92,31 +95,38 @@ public final class Main implements Runnable {
             c.getErr().println("barfit: " + usageMessage(ex) + " (see: " + name + " --help)");
             return BAD_INPUT;
         });
-        cl.setExecutionExceptionHandler((ex, c, parseResult) -> {
-            if (ex instanceof InputError ie) {
-                c.getErr().println("barfit: " + ie.oneLine());
-                return BAD_INPUT;
-            }
-            for (Throwable t = ex; t != null; t = t.getCause()) {
-                if (t instanceof OutOfMemoryError) {
-                    c.getErr().println(OUT_OF_MEMORY);
-                    return INTERNAL;
-                }
-                if (t instanceof barfit.design.SetupError se) {
-                    c.getErr().println("barfit: " + se.getMessage());
-                    return INTERNAL;
-                }
-            }
-            c.getErr().println("barfit: internal error, please report it with the input file: " + ex);
-            if (System.getenv("BARFIT_DEBUG") != null) {
-                ex.printStackTrace(c.getErr());
-            }
-            return INTERNAL;
-        });
+        cl.setExecutionExceptionHandler((ex, c, parseResult) -> failure(ex, c.getErr()));
         int code = cl.execute(args);
         cl.getOut().flush();
         cl.getErr().flush();
         return code;
+    }
+
+    /** What a command's exception becomes: one line on stderr, and exit 2 for bad input, 3 for anything else. */
+    static int failure(Exception ex, PrintWriter err) {
+        if (ex instanceof InputError ie) {
+            err.println("barfit: " + ie.oneLine());
+            return BAD_INPUT;
+        }
+        for (Throwable t = ex; t != null; t = t.getCause()) {
+            if (t instanceof OutOfMemoryError) {
+                err.println(OUT_OF_MEMORY);
+                return INTERNAL;
+            }
+            if (t instanceof barfit.design.SetupError se) {
+                err.println("barfit: " + se.getMessage());
+                return INTERNAL;
+            }
+            if (t instanceof barfit.design.InvalidModelError bug) {
+                err.println("barfit: internal error: " + bug.getMessage());
+                return INTERNAL;
+            }
+        }
+        err.println("barfit: internal error, please report it with the input file: " + ex);
+        if (System.getenv("BARFIT_DEBUG") != null) {
+            ex.printStackTrace(err);
+        }
+        return INTERNAL;
     }
 
     /**

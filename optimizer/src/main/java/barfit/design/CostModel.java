@@ -13,8 +13,47 @@ import barfit.section.Stirrups;
  * extend as Table 25.3.2 asks ({@link StirrupHooks#extension135}, in the edition of the input).
  */
 public final class CostModel {
-    /** Money is compared in these units (1/10000 of the currency), so CP-SAT works on integers. */
-    public static final double UNITS_PER_CURRENCY = 10_000.0;
+    /**
+     * Money as the searches count it: whole numbers of a fixed fraction of the currency, so that CP-SAT,
+     * the k-median and the oracles compare integers. Every conversion between currency and these units
+     * goes through a scale; the proofs and the reports are given currency.
+     */
+    public enum Scale {
+        /** 1/10 000 of the currency. */
+        TEN_THOUSANDTHS(10_000.0),
+        /** 1/1 000 000 of the currency. */
+        MILLIONTHS(1_000_000.0);
+
+        private final double perCurrency;
+
+        Scale(double perCurrency) {
+            this.perCurrency = perCurrency;
+        }
+
+        /** An amount in currency to whole units of this scale (rounded to the nearest). */
+        public long units(double currency) {
+            return Math.round(currency * perCurrency);
+        }
+
+        /** Whole units of this scale back to currency. */
+        public double currency(long units) {
+            return units / perCurrency;
+        }
+
+        /** An amount in currency rounded to this scale's unit (what the JSON reports print of a cost). */
+        public double rounded(double currency) {
+            return currency(units(currency));
+        }
+    }
+
+    /** The searches' money: sections, the exhaustive oracles, the schedule's k-median. */
+    public static final Scale UNITS = Scale.TEN_THOUSANDTHS;
+    /**
+     * The span model's money, finer: a span's price is the sum of five parts each rounded on its own (the
+     * frame, the top bars, mid-span, each support), and millionths keep those roundings far below the
+     * ten-thousandths in which its designs are compared with the oracle and the schedule.
+     */
+    public static final Scale SPAN_UNITS = Scale.MILLIONTHS;
 
     private final CostRates rates;
     private final double cover;
@@ -77,7 +116,13 @@ public final class CostModel {
         return rates.stirrupsPerKg() * kgPerSet * setsPerMetre;
     }
 
+    /** An amount in currency to the searches' units ({@link #UNITS}). */
     public static long units(double cost) {
-        return Math.round(cost * UNITS_PER_CURRENCY);
+        return UNITS.units(cost);
+    }
+
+    /** The searches' units ({@link #UNITS}) back to currency. */
+    public static double currency(long units) {
+        return UNITS.currency(units);
     }
 }

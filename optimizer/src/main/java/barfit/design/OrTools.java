@@ -2,6 +2,7 @@ package barfit.design;
 
 import com.google.ortools.Loader;
 import com.google.ortools.sat.CpSolver;
+import com.google.ortools.sat.CpSolverStatus;
 import java.io.IOException;
 import java.io.InputStream;
 import java.net.JarURLConnection;
@@ -188,5 +189,34 @@ public final class OrTools {
         solver.getParameters().setNumWorkers(Math.max(1, o.workers())).setRandomSeed(o.seed())
                 .setMaxTimeInSeconds(o.timeLimitSeconds()).setLogSearchProgress(false);
         return solver;
+    }
+
+    /** Characters of CP-SAT's reason for an invalid model quoted in the message. */
+    private static final int WHY_MAX = 200;
+
+    /**
+     * CP-SAT's status in the proof's words. UNKNOWN means a limit ended the solve before it had a solution
+     * or a proof ({@link Proof.Status#OUT_OF_TIME}); MODEL_INVALID means barfit built a model CP-SAT cannot
+     * take ({@code model} names it), a bug: it is thrown as {@link InvalidModelError}, never reported as an
+     * answer.
+     */
+    public static Proof.Status status(CpSolverStatus status, CpSolver solver, String model) {
+        return switch (status) {
+            case OPTIMAL -> Proof.Status.OPTIMAL;
+            case FEASIBLE -> Proof.Status.FEASIBLE;
+            case INFEASIBLE -> Proof.Status.INFEASIBLE;
+            case UNKNOWN -> Proof.Status.OUT_OF_TIME;
+            case MODEL_INVALID, UNRECOGNIZED -> {
+                // CP-SAT's own reason, on one line and cut: it can quote a whole constraint
+                String info = solver.getSolutionInfo();
+                String why = info == null ? "" : info.strip().replaceAll("\\s+", " ");
+                if (why.length() > WHY_MAX) {
+                    why = why.substring(0, WHY_MAX) + "…";
+                }
+                throw new InvalidModelError("CP-SAT found " + model + " invalid (" + status
+                        + (why.isEmpty() ? "" : ": " + why) + "); this is a bug in barfit, not in the input: please "
+                        + "report it with the input file");
+            }
+        };
     }
 }

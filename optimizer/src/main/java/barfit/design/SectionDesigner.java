@@ -35,7 +35,7 @@ public final class SectionDesigner {
         CandidateGenerator.Output gen = new CandidateGenerator(p, cost).generate(1 + alternatives);
         List<Candidate> cands = gen.candidates();
         if (cands.isEmpty()) {
-            Proof proof = new Proof(Selection.Status.INFEASIBLE, 0, 0, 0, gen.stats(), 0, options.workers(), options.seed());
+            var proof = Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options);
             return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), Diagnoser.diagnose(p, cost, units));
         }
         Selection sel = new Selection();
@@ -45,7 +45,7 @@ public final class SectionDesigner {
         }
         sel.exactlyOne(all);
         Selection.Result first = sel.solve(options);
-        if (first.status() != Selection.Status.OPTIMAL && first.status() != Selection.Status.FEASIBLE) {
+        if (!solved(first)) {
             // the time limit ended the solve before it had a solution: give the generator's cheapest
             // candidate, as found but not proven (no bound)
             int cheapest = 0;
@@ -54,11 +54,8 @@ public final class SectionDesigner {
                     cheapest = i;
                 }
             }
-            first = new Selection.Result(Selection.Status.FEASIBLE, null, cands.get(cheapest).units(), 0,
-                    first.seconds(), first.booleans());
             Design best = verified(p, cands.get(cheapest));
-            Proof proof = new Proof(first.status(), first.objective(), first.bound(), cands.size(), gen.stats(),
-                    first.seconds(), options.workers(), options.seed());
+            var proof = Proof.unproven(cands.get(cheapest).units(), CostModel.UNITS, gen.stats(), options);
             return new DesignOutcome(p, "feasible", best, List.of(), proof, binding(p, best.layout()), null);
         }
         int chosen = indexOf(first.chosen());
@@ -67,17 +64,21 @@ public final class SectionDesigner {
         sel.exclude(chosen);
         for (int k = 0; k < alternatives && alts.size() < cands.size() - 1; k++) {
             Selection.Result r = sel.solve(options);
-            if (r.status() != Selection.Status.OPTIMAL && r.status() != Selection.Status.FEASIBLE) {
+            if (!solved(r)) {
                 break;
             }
             int i = indexOf(r.chosen());
             alts.add(verified(p, cands.get(i)));
             sel.exclude(i);
         }
-        String status = first.status() == Selection.Status.OPTIMAL ? "optimal" : "feasible";
-        Proof proof = new Proof(first.status(), first.objective(), first.bound(), cands.size(), gen.stats(),
-                first.seconds(), options.workers(), options.seed());
+        String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
+        var proof = Proof.solved(first.status(), first.objective(), first.bound(), CostModel.UNITS, first.stats(),
+                gen.stats(), options);
         return new DesignOutcome(p, status, best, alts, proof, binding(p, best.layout()), null);
+    }
+
+    private static boolean solved(Selection.Result r) {
+        return r.status() == Proof.Status.OPTIMAL || r.status() == Proof.Status.FEASIBLE;
     }
 
     private static int indexOf(boolean[] chosen) {

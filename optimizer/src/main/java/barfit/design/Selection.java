@@ -2,7 +2,6 @@ package barfit.design;
 
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
-import com.google.ortools.sat.CpSolverStatus;
 import com.google.ortools.sat.LinearExpr;
 import com.google.ortools.sat.Literal;
 import java.util.ArrayList;
@@ -11,18 +10,12 @@ import java.util.List;
 /**
  * The CP-SAT choice among candidates: one boolean per candidate, exactly one chosen per group, extra
  * linking constraints added by the caller (shared sections, bar-size limits...), minimum total cost in
- * integer cost units. Returns which candidates are chosen and the proof (status, objective, bound).
+ * integer cost units ({@link CostModel#UNITS}). Returns which candidates are chosen and the solver's
+ * answer (status, objective, bound, its statistics).
  */
 public final class Selection {
-    public enum Status { OPTIMAL, FEASIBLE, INFEASIBLE, UNKNOWN }
-
-    public record Result(Status status, boolean[] chosen, long objective, long bound, double seconds, int booleans) {
-        public double gap() {
-            if (objective == 0) {
-                return 0;
-            }
-            return Math.max(0, (double) (objective - bound) / Math.abs(objective));
-        }
+    /** {@code chosen}, {@code objective} and {@code bound} only when the status is OPTIMAL or FEASIBLE. */
+    public record Result(Proof.Status status, boolean[] chosen, long objective, long bound, Proof.SolverStats stats) {
     }
 
     private final CpModel model = new CpModel();
@@ -70,25 +63,18 @@ public final class Selection {
             objectiveSet = true;
         }
         CpSolver solver = OrTools.solver(o);
-        long t0 = System.nanoTime();
-        CpSolverStatus st = solver.solve(model);
-        double secs = (System.nanoTime() - t0) / 1e9;
-        Status status = switch (st) {
-            case OPTIMAL -> Status.OPTIMAL;
-            case FEASIBLE -> Status.FEASIBLE;
-            case INFEASIBLE -> Status.INFEASIBLE;
-            default -> Status.UNKNOWN;
-        };
+        Proof.Status status = OrTools.status(solver.solve(model), solver, "the section selection model");
         boolean[] chosen = new boolean[v.length];
         long obj = 0;
         long bound = 0;
-        if (status == Status.OPTIMAL || status == Status.FEASIBLE) {
+        if (status == Proof.Status.OPTIMAL || status == Proof.Status.FEASIBLE) {
             for (int i = 0; i < v.length; i++) {
                 chosen[i] = solver.booleanValue(v[i]);
             }
             obj = Math.round(solver.objectiveValue());
             bound = Math.round(solver.bestObjectiveBound());
         }
-        return new Result(status, chosen, obj, bound, secs, v.length);
+        return new Result(status, chosen, obj, bound, new Proof.SolverStats(v.length, solver.numConflicts(),
+                solver.numBranches(), solver.wallTime()));
     }
 }

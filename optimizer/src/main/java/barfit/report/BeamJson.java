@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.Proof;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
@@ -71,27 +72,28 @@ public final class BeamJson {
         var pr = o.proof();
         ObjectNode proof = b.putObject("proof");
         proof.put("solver", "CP-SAT");
-        proof.put("status", pr.status());
+        proof.put("status", Words.status(pr.status()));
         proof.put("basis", "per span");
-        if (pr.status().equals("infeasible") || pr.status().equals("unknown")) { // no design: nothing to bound
+        if (pr.bounded()) {
+            proof.put("objective", pr.objective());
+            proof.put("bound", pr.bound());
+            proof.put("gap", pr.gap());
+        } else if (pr.status() == Proof.Status.UNPROVEN) { // stopped by the time limit before a proof
+            proof.put("objective", pr.objective());
+            proof.putNull("bound");
+            proof.putNull("gap");
+        } else { // no design: nothing to bound
             proof.putNull("objective");
             proof.putNull("bound");
             proof.putNull("gap");
-        } else if (pr.booleans() == 0) { // stopped by the time limit before a proof
-            proof.put("objective", pr.objective() / 1e6);
-            proof.putNull("bound");
-            proof.putNull("gap");
-        } else {
-            proof.put("objective", pr.objective() / 1e6);
-            proof.put("bound", pr.bound() / 1e6);
-            proof.put("gap", pr.gap());
         }
-        proof.put("booleans", pr.booleans());
-        proof.put("frames", pr.frames());
-        proof.put("frames_evaluated", pr.framesEvaluated());
-        proof.put("frames_skipped_by_bound", pr.framesSkipped());
-        proof.put("solves", pr.solves());
-        proof.put("deflection_cuts", pr.deflectionCuts());
+        var s = pr.search();
+        proof.put("booleans", pr.solver().booleans());
+        proof.put("frames", s.generator().frames());
+        proof.put("frames_evaluated", s.generator().framesEvaluated());
+        proof.put("frames_skipped_by_bound", s.generator().framesSkipped());
+        proof.put("solves", s.solves());
+        proof.put("deflection_cuts", s.deflectionCuts());
         proof.put("workers", pr.workers());
         proof.put("seed", pr.seed());
         b.putNull("diagnosis");

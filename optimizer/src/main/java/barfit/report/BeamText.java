@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.Proof;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
@@ -288,18 +289,20 @@ public final class BeamText {
         return n + (n == 1 ? " set" : " sets");
     }
 
-    static String proof(BeamDesigner.Proof p) {
-        if (p.booleans() == 0 && p.status().equals("feasible")) {
+    public static String proof(Proof<BeamDesigner.Search> p) {
+        if (p.status() == Proof.Status.UNPROVEN) {
             return "not proven: the time limit ended CP-SAT before it had a solution; the generator's cheapest design"
                     + " is given, with no bound (raise --time-limit for the proof); " + p.workers()
                     + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
         }
-        return "CP-SAT " + p.status() + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective() / 1e6)
-                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound() / 1e6) + ", gap "
-                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over " + p.booleans() + " booleans; "
-                + p.framesEvaluated() + " of " + p.frames() + " frames evaluated, " + p.framesSkipped()
-                + " skipped by the cost bound; " + p.solves() + (p.solves() == 1 ? " solve" : " solves")
-                + (p.deflectionCuts() > 0 ? ", " + p.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
+        var s = p.search();
+        return "CP-SAT " + Words.status(p.status()) + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective())
+                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound()) + ", gap "
+                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over " + p.solver().booleans() + " booleans; "
+                + s.generator().framesEvaluated() + " of " + s.generator().frames() + " frames evaluated, "
+                + s.generator().framesSkipped() + " skipped by the cost bound; " + s.solves()
+                + (s.solves() == 1 ? " solve" : " solves")
+                + (s.deflectionCuts() > 0 ? ", " + s.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
                 + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
     }
 }

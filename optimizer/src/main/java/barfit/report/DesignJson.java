@@ -1,12 +1,13 @@
 package barfit.report;
 
 import barfit.design.Binding;
+import barfit.design.CandidateGenerator;
 import barfit.design.CostBreakdown;
+import barfit.design.CostModel;
 import barfit.design.Design;
 import barfit.design.DesignOutcome;
 import barfit.design.Layout;
 import barfit.design.Proof;
-import barfit.design.Selection;
 import barfit.input.Settings;
 import barfit.section.CheckResult;
 import barfit.section.trail.Dim;
@@ -159,42 +160,44 @@ public final class DesignJson {
 
     static ObjectNode cost(CostBreakdown c) {
         ObjectNode o = Json.object();
-        o.put("total", round2(c.total()));
-        o.put("concrete", round2(c.concrete()));
-        o.put("main_bars", round2(c.mainBars()));
-        o.put("stirrups", round2(c.stirrups()));
-        o.put("formwork", round2(c.formwork()));
-        o.put("depth_premium", round2(c.depthPremium()));
+        o.put("total", money(c.total()));
+        o.put("concrete", money(c.concrete()));
+        o.put("main_bars", money(c.mainBars()));
+        o.put("stirrups", money(c.stirrups()));
+        o.put("formwork", money(c.formwork()));
+        o.put("depth_premium", money(c.depthPremium()));
         return o;
     }
 
-    static double round2(double v) {
-        return Math.round(v * 10_000.0) / 10_000.0;
+    /** A cost rounded to the searches' unit, 1/10 000 of the currency. */
+    static double money(double v) {
+        return CostModel.UNITS.rounded(v);
     }
 
-    static ObjectNode proof(Proof p, UnitSystem u) {
+    static ObjectNode proof(Proof<CandidateGenerator.Stats> p, UnitSystem u) {
         ObjectNode o = Json.object();
         o.put("solver", "CP-SAT");
-        o.put("status", p.status().name().toLowerCase(java.util.Locale.ROOT));
+        o.put("status", Words.status(p.status()));
         o.put("basis", Money.perLengthLabel(u));
-        if (p.status() == Selection.Status.INFEASIBLE) { // nothing passes: no objective to bound
+        if (p.bounded()) {
+            o.put("objective", money(Money.perLength(p.objective(), u)));
+            o.put("bound", money(Money.perLength(p.bound(), u)));
+            o.put("gap", p.gap());
+        } else if (p.status() == Proof.Status.UNPROVEN) { // stopped before a proof
+            o.put("objective", money(Money.perLength(p.objective(), u)));
+            o.putNull("bound");
+            o.putNull("gap");
+        } else { // nothing passes: no objective to bound
             o.putNull("objective");
             o.putNull("bound");
             o.putNull("gap");
-        } else if (p.status() == Selection.Status.FEASIBLE && p.bound() == 0) { // stopped before a proof
-            o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
-            o.putNull("bound");
-            o.putNull("gap");
-        } else {
-            o.put("objective", round2(Money.perLength(p.objective() / 10_000.0, u)));
-            o.put("bound", round2(Money.perLength(p.bound() / 10_000.0, u)));
-            o.put("gap", p.gap());
         }
-        o.put("candidates", p.candidates());
-        o.put("frames", p.stats().frames());
-        o.put("frames_evaluated", p.stats().framesEvaluated());
-        o.put("frames_skipped_by_bound", p.stats().framesPrunedByBound());
-        o.put("flexure_solves", p.stats().flexureSolves());
+        var s = p.search();
+        o.put("candidates", s.candidates());
+        o.put("frames", s.frames());
+        o.put("frames_evaluated", s.framesEvaluated());
+        o.put("frames_skipped_by_bound", s.framesPrunedByBound());
+        o.put("flexure_solves", s.flexureSolves());
         o.put("workers", p.workers());
         o.put("seed", p.seed());
         return o;

@@ -1,12 +1,12 @@
 package barfit.report;
 
 import barfit.design.Binding;
+import barfit.design.CandidateGenerator;
 import barfit.design.Design;
 import barfit.design.DesignOutcome;
 import barfit.design.Diagnosis;
 import barfit.design.Layout;
 import barfit.design.Proof;
-import barfit.design.Selection;
 import barfit.input.Settings;
 import barfit.section.CheckReport;
 import barfit.section.trail.Dim;
@@ -203,17 +203,17 @@ public final class DesignText {
         return sb.toString();
     }
 
-    static String proof(Proof p, UnitSystem u) {
-        var s = p.stats();
-        if (p.status() == Selection.Status.FEASIBLE && p.bound() == 0) {
-            return "not proven: the time limit ended CP-SAT before it had a solution; the cheapest of " + p.candidates()
+    static String proof(Proof<CandidateGenerator.Stats> p, UnitSystem u) {
+        var s = p.search();
+        if (p.status() == Proof.Status.UNPROVEN) {
+            return "not proven: the time limit ended CP-SAT before it had a solution; the cheapest of " + s.candidates()
                     + " candidates the generator found is given, with no bound (raise --time-limit for the proof); "
                     + p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
         }
-        String bound = String.format(Locale.ROOT, "%.4f", Money.perLength(p.bound() / 10_000.0, u));
-        String obj = String.format(Locale.ROOT, "%.4f", Money.perLength(p.objective() / 10_000.0, u));
-        return "CP-SAT " + p.status().name().toLowerCase(Locale.ROOT) + " over " + p.candidates()
-                + (p.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + ", bound " + bound + " "
+        String bound = String.format(Locale.ROOT, "%.4f", Money.perLength(p.bound(), u));
+        String obj = String.format(Locale.ROOT, "%.4f", Money.perLength(p.objective(), u));
+        return "CP-SAT " + Words.status(p.status()) + " over " + s.candidates()
+                + (s.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + ", bound " + bound + " "
                 + Money.perLengthLabel(u) + ", gap "
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %); " + s.framesEvaluated() + " of " + s.frames()
                 + " frames evaluated, " + s.framesPrunedByBound() + " skipped by the cost bound; " + p.workers()

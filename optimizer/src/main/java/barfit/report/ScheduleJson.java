@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.Proof;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -61,9 +62,10 @@ public final class ScheduleJson {
         } else {
             var p = r.proof();
             ObjectNode po = root.putObject("proof");
-            po.put("status", p.status());
-            po.put("method", p.method());
-            if (Double.isNaN(p.objective())) { // no schedule meets the limits: nothing to bound
+            var s = p.search();
+            po.put("status", p.status().name());
+            po.put("method", s.method());
+            if (!p.bounded()) { // no schedule meets the limits: nothing to bound
                 po.putNull("objective");
                 po.putNull("bound");
                 po.putNull("gap");
@@ -72,10 +74,10 @@ public final class ScheduleJson {
                 po.put("bound", round(p.bound()));
                 po.put("gap", p.gap());
             }
-            po.put("bar_size_sets", p.barSetsTotal());
-            po.put("bar_size_sets_solved", p.barSetsSolved());
-            po.put("bar_size_sets_pruned", p.barSetsPruned());
-            po.put("pairs_priced", p.pairsEvaluated());
+            po.put("bar_size_sets", s.barSetsTotal());
+            po.put("bar_size_sets_solved", s.barSetsSolved());
+            po.put("bar_size_sets_pruned", s.barSetsPruned());
+            po.put("pairs_priced", s.pairsEvaluated());
             po.put("workers", p.workers());
             po.put("seed", p.seed());
         }
@@ -88,7 +90,7 @@ public final class ScheduleJson {
             } else {
                 c.put("total_cost", round(p.cost()));
             }
-            c.put("status", p.status());
+            c.put("status", p.status().name());
             ArrayNode bs = c.putArray("bar_sizes");
             p.barSizes().forEach(bs::add);
         }

@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.Proof;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
@@ -77,7 +78,7 @@ public final class ScheduleText {
             out.append(" + formwork sets ").append(Money.amount(r.formworkSetsCost()));
         }
         out.append(" = ").append(Money.amount(r.totalCost())).append(cur);
-        if (r.proof() != null && r.proof().status().equals("INFEASIBLE")) {
+        if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             out.append(";  the limits cannot be met: every beam is shown at its own optimum, nothing is rationalised");
         } else if (r.proof() != null) {
             double extra = r.totalCost() - r.unconstrainedCost();
@@ -99,7 +100,7 @@ public final class ScheduleText {
             for (ScheduleResult.StandardisationPoint p : r.standardisation()) {
                 s.row(String.valueOf(p.sizes()), Double.isNaN(p.cost()) ? "none fits" : Money.amount(p.cost()),
                         Double.isNaN(prev) || Double.isNaN(p.cost()) ? "" : Money.amount(prev - p.cost()),
-                        String.join(", ", p.barSizes().stream().map(x -> labelOf(r, x)).toList()), p.status());
+                        String.join(", ", p.barSizes().stream().map(x -> labelOf(r, x)).toList()), p.status().name());
                 prev = p.cost();
             }
             s.write("  ", out);
@@ -142,15 +143,16 @@ public final class ScheduleText {
         return sb.toString();
     }
 
-    public static String proof(ScheduleResult.Proof p) {
-        if (p.status().equals("INFEASIBLE")) {
-            return "INFEASIBLE — " + p.method() + "; the beams are shown at their own optima";
+    public static String proof(Proof<ScheduleResult.Search> p) {
+        var s = p.search();
+        if (p.status() == Proof.Status.INFEASIBLE) {
+            return "INFEASIBLE — " + s.method() + "; the beams are shown at their own optima";
         }
-        return p.status() + " — objective " + Money.amount(p.objective()) + ", bound " + Money.amount(p.bound())
-                + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + p.method() + "; bar-size sets: "
-                + p.barSetsTotal() + " (" + p.barSetsSolved() + " solved to optimality, " + p.barSetsPruned()
+        return p.status().name() + " — objective " + Money.amount(p.objective()) + ", bound " + Money.amount(p.bound())
+                + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + s.method() + "; bar-size sets: "
+                + s.barSetsTotal() + " (" + s.barSetsSolved() + " solved to optimality, " + s.barSetsPruned()
                 + " ruled out by a bound); "
-                + p.pairsEvaluated() + " (beam, size) pairs priced exactly; " + p.workers()
+                + s.pairsEvaluated() + " (beam, size) pairs priced exactly; " + p.workers()
                 + (p.workers() == 1 ? " CP-SAT worker" : " CP-SAT workers") + ", seed " + p.seed();
     }
 }

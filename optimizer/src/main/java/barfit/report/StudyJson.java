@@ -25,7 +25,7 @@ public final class StudyJson {
     }
 
     static double cost(double v, UnitSystem u, boolean perBeam) {
-        return DesignJson.round2(perBeam ? v : Money.perLength(v, u));
+        return DesignJson.money(perBeam ? v : Money.perLength(v, u));
     }
 
     static void summary(ObjectNode o, Summary s, UnitSystem u, boolean perBeam) {
@@ -41,12 +41,12 @@ public final class StudyJson {
         Json.put(o, "height", s.height(), Dim.LENGTH, u);
         ObjectNode c = o.putObject("cost");
         var b = perBeam ? s.cost() : Money.scaled(s.cost(), u);
-        c.put("total", DesignJson.round2(b.total()));
-        c.put("concrete", DesignJson.round2(b.concrete()));
-        c.put("main_bars", DesignJson.round2(b.mainBars()));
-        c.put("stirrups", DesignJson.round2(b.stirrups()));
-        c.put("formwork", DesignJson.round2(b.formwork()));
-        c.put("depth_premium", DesignJson.round2(b.depthPremium()));
+        c.put("total", DesignJson.money(b.total()));
+        c.put("concrete", DesignJson.money(b.concrete()));
+        c.put("main_bars", DesignJson.money(b.mainBars()));
+        c.put("stirrups", DesignJson.money(b.stirrups()));
+        c.put("formwork", DesignJson.money(b.formwork()));
+        c.put("depth_premium", DesignJson.money(b.depthPremium()));
         o.put("compression_steel_needed", s.compressionRequired());
         o.put("compression_steel_relied_on", s.compressionNeeded());
         o.put("compression_steel_used", s.compressionUsed());

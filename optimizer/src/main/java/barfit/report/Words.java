@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.Proof;
 import barfit.section.BarLayer;
 import barfit.section.CheckResult;
 import barfit.section.CodeTables;
@@ -13,6 +14,19 @@ import java.util.Locale;
 /** Short phrases shared by the reports. */
 public final class Words {
     private Words() {
+    }
+
+    /**
+     * A section's or span's proof status as its text and JSON say it: a design found but not proven reads
+     * "feasible" (its bound is left out), a search the time limit ended with nothing "unknown".
+     */
+    public static String status(Proof.Status s) {
+        return switch (s) {
+            case OPTIMAL -> "optimal";
+            case FEASIBLE, UNPROVEN -> "feasible";
+            case INFEASIBLE -> "infeasible";
+            case OUT_OF_TIME -> "unknown";
+        };
     }
 
     public static String shape(SectionShape s, UnitSystem u) {

@@ -676,6 +676,7 @@ final class KMedian {
         CpSolver solver = OrTools.solver(options);
         solver.getParameters().setLinearizationLevel(2);
         CpSolverStatus st = solver.solve(model);
+        OrTools.status(st, solver, "the schedule's k-median model"); // MODEL_INVALID stops here, as a bug
         if (st != CpSolverStatus.OPTIMAL && st != CpSolverStatus.FEASIBLE) {
             // nothing better within the time: the local-search solution with the relaxation's bound
             return new Result("FEASIBLE", ub, lp.bound, assign(start), "local search; CP-SAT " + st, lp.variables, kept);

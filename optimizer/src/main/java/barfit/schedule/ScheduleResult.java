@@ -1,5 +1,6 @@
 package barfit.schedule;
 
+import barfit.design.Proof;
 import barfit.design.beam.BeamDesigner;
 import java.util.List;
 
@@ -9,7 +10,7 @@ import java.util.List;
  * rationalised) and the price of standardisation (empty when not rationalised).
  */
 public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<SectionSize> sizes, List<String> barSizes,
-        double beamsCost, double formworkSetsCost, double unconstrainedCost, Proof proof,
+        double beamsCost, double formworkSetsCost, double unconstrainedCost, Proof<Search> proof,
         List<StandardisationPoint> standardisation, int threads, long millis) {
 
     public ScheduleResult {
@@ -38,19 +39,16 @@ public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<Section
     }
 
     /**
-     * How the rationalised schedule was proven: the method, the status (OPTIMAL, FEASIBLE with a gap, or
-     * INFEASIBLE), the objective and best bound (currency), the bar-size sets considered and pruned by
-     * bound, the (beam, size) pairs evaluated exactly, the CP-SAT workers and seed.
+     * The rationalisation's search, for its proof (whose status is OPTIMAL, FEASIBLE with a gap, or
+     * INFEASIBLE): the method (or why no schedule meets the limits), the bar-size sets considered, solved
+     * and pruned by bound, the (beam, size) pairs evaluated exactly, and the time to the proof (ms).
      */
-    public record Proof(String method, String status, double objective, double bound, int barSetsTotal,
-            int barSetsSolved, int barSetsPruned, int pairsEvaluated, int workers, int seed, long millis) {
-        public double gap() {
-            return objective == 0 ? 0 : Math.max(0, (objective - bound) / Math.abs(objective));
-        }
+    public record Search(String method, int barSetsTotal, int barSetsSolved, int barSetsPruned, int pairsEvaluated,
+            long millis) {
     }
 
     /** The least total cost with at most {@code sizes} section sizes (NaN when none is feasible). */
-    public record StandardisationPoint(int sizes, double cost, String status, List<String> barSizes) {
+    public record StandardisationPoint(int sizes, double cost, Proof.Status status, List<String> barSizes) {
         public StandardisationPoint {
             barSizes = List.copyOf(barSizes);
         }
@@ -62,6 +60,6 @@ public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<Section
 
     /** Every beam has a passing design and, when rationalised, the limits could be met. */
     public boolean allFeasible() {
-        return beams.stream().allMatch(Beam::feasible) && (proof == null || !proof.status().equals("INFEASIBLE"));
+        return beams.stream().allMatch(Beam::feasible) && (proof == null || proof.status() != Proof.Status.INFEASIBLE);
     }
 }

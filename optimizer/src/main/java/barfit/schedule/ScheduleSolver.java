@@ -2,6 +2,7 @@ package barfit.schedule;
 
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
+import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamGenerator;
@@ -117,7 +118,8 @@ public final class ScheduleSolver {
     }
 
     private ScheduleResult finish(ScheduleInput in, List<ScheduleResult.Beam> beams, double formworkSets,
-            double unconstrained, ScheduleResult.Proof proof, List<ScheduleResult.StandardisationPoint> curve, long t0) {
+            double unconstrained, Proof<ScheduleResult.Search> proof, List<ScheduleResult.StandardisationPoint> curve,
+            long t0) {
         Map<List<Double>, List<String>> sizes = new TreeMap<>(Comparator.<List<Double>>comparingDouble(l -> l.get(0))
                 .thenComparingDouble(l -> l.get(1)));
         Map<String, BarSize> bars = new TreeMap<>();
@@ -660,10 +662,11 @@ public final class ScheduleSolver {
                 }
                 progress.update("price of standardisation", k, most);
                 if (s.result() == null) {
-                    out.add(new ScheduleResult.StandardisationPoint(k, Double.NaN, "INFEASIBLE", List.of()));
+                    out.add(new ScheduleResult.StandardisationPoint(k, Double.NaN, Proof.Status.INFEASIBLE, List.of()));
                 } else {
-                    out.add(new ScheduleResult.StandardisationPoint(k, s.result().objective() / CostModel.UNITS_PER_CURRENCY,
-                            s.bound() >= s.result().objective() ? "OPTIMAL" : "FEASIBLE", names(s.bars())));
+                    out.add(new ScheduleResult.StandardisationPoint(k, CostModel.currency(s.result().objective()),
+                            s.bound() >= s.result().objective() ? Proof.Status.OPTIMAL : Proof.Status.FEASIBLE,
+                            names(s.bars())));
                 }
             }
             return out;
@@ -740,7 +743,7 @@ public final class ScheduleSolver {
                         own.get(i).feasible() ? own.get(i).best().cost().total() : Double.NaN));
             }
             double formwork = 0;
-            ScheduleResult.Proof proof;
+            Proof<ScheduleResult.Search> proof;
             if (best.result() == null) {
                 int fewest = curve.stream().filter(pt -> !Double.isNaN(pt.cost())).mapToInt(
                         ScheduleResult.StandardisationPoint::sizes).min().orElse(-1);
@@ -750,17 +753,17 @@ public final class ScheduleSolver {
                         + (rat.maxBarSizes() == null ? "" : " with " + rat.maxBarSizes()
                         + (rat.maxBarSizes() == 1 ? " bar size" : " bar sizes"))) + " cannot hold every beam"
                         + (fewest > 0 ? "; at least " + fewest + " section sizes are needed" : "");
-                proof = new ScheduleResult.Proof(why, "INFEASIBLE", Double.NaN, Double.NaN,
-                        best.setsTotal(), best.setsSolved(), best.setsPruned(), pricedForProof, options.workers(),
-                        options.seed(), proofMillis);
+                proof = Proof.none(Proof.Status.INFEASIBLE, new ScheduleResult.Search(why, best.setsTotal(),
+                        best.setsSolved(), best.setsPruned(), pricedForProof, proofMillis), options);
             } else {
                 int used = distinct(best.result().assignment());
                 formwork = used * rat.formworkSetCost();
-                String status = best.bound() >= best.result().objective() ? "OPTIMAL" : "FEASIBLE";
-                proof = new ScheduleResult.Proof(best.result().method() + "; sizes priced lazily against bar-free "
-                        + "bounds", status, best.result().objective() / CostModel.UNITS_PER_CURRENCY,
-                        best.bound() / CostModel.UNITS_PER_CURRENCY, best.setsTotal(), best.setsSolved(),
-                        best.setsPruned(), pricedForProof, options.workers(), options.seed(), proofMillis);
+                Proof.Status status = best.bound() >= best.result().objective() ? Proof.Status.OPTIMAL
+                        : Proof.Status.FEASIBLE;
+                proof = Proof.solved(status, best.result().objective(), best.bound(), CostModel.UNITS,
+                        Proof.SolverStats.NONE, new ScheduleResult.Search(best.result().method()
+                        + "; sizes priced lazily against bar-free bounds", best.setsTotal(), best.setsSolved(),
+                        best.setsPruned(), pricedForProof, proofMillis), options);
             }
             // every beam at its own optimum, for comparison: the beams designed here, each in its own best
             // size, with a set of forms for each distinct size

@@ -93,6 +93,6 @@ public final class SectionTarget implements Target {
                 l.tensionBar().designation(), l.bending().compressionFace().word(), l.compressionCount(),
                 l.compressionBar().designation(), f.phiMn(), Math.abs(q.mu()), f.epsT(), f.phi(), f.strainClass(), used,
                 needed, bars, l.tensionCounts().size() + 1, o.best().cost(), o.status() + " over "
-                        + o.proof().candidates() + " candidates", fails, null, false);
+                        + o.proof().search().candidates() + " candidates", fails, null, false);
     }
 }

@@ -104,7 +104,8 @@ public final class SpanTarget implements Target {
         return new Summary(true, l.width(), l.height(), bottom, topText, st, "bottom", l.bottomCounts(),
                 l.bottom().designation(), "top", l.topContinuous(), l.top().designation(), f.phiMn(),
                 Math.abs(governing.demand().mu()), f.epsT(), f.phi(), f.strainClass(), used, needed,
-                l.bottomCount() + top, layers, o.best().cost(), o.status() + " over " + o.proof().booleans() + " booleans",
+                l.bottomCount() + top, layers, o.best().cost(), o.status() + " over "
+                        + o.proof().solver().booleans() + " booleans",
                 fails, null, false);
     }
 

@@ -132,4 +132,19 @@ class CostModelTest {
         BarSize n8 = BarCatalogs.builtIn("astm-a615").orElseThrow().find("8").orElseThrow();
         assertEquals(8.811, cost.bars(n8, 3) * ftPerM, 1e-9);
     }
+
+    @Test
+    void moneyScalesConvertBothWays() {
+        // by hand from the scales' definitions (1/10 000 and 1/1 000 000 of the currency)
+        assertEquals(123_457L, CostModel.units(12.34567)); // 123 456.7 rounds up
+        assertEquals(12.3457, CostModel.currency(123_457L), 0);
+        assertEquals(12.3457, CostModel.UNITS.rounded(12.34567), 0);
+        assertEquals(12_345_679L, CostModel.SPAN_UNITS.units(12.3456789));
+        assertEquals(12.345679, CostModel.SPAN_UNITS.currency(12_345_679L), 0);
+        // a whole number of units survives the round trip exactly
+        for (long u : new long[] {0, 1, 9_999, 1_586_666, 123_456_789_012L}) {
+            assertEquals(u, CostModel.units(CostModel.currency(u)));
+            assertEquals(u, CostModel.SPAN_UNITS.units(CostModel.SPAN_UNITS.currency(u)));
+        }
+    }
 }

@@ -9,6 +9,7 @@ import barfit.catalogs.BarSize;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
+import barfit.design.Proof;
 import barfit.design.SearchSpace;
 import barfit.design.SolverOptions;
 import barfit.design.beam.BeamExhaustive;
@@ -77,7 +78,7 @@ class RationaliseOracleTest {
                             + b.outcome().best().layout().bottom() : "none " + b.outcome().diagnosis()) + " own " + b.ownOptimum());
                 }
             }
-            assertTrue(got.proof() != null && got.proof().status().equals("OPTIMAL"), "proof " + got.proof() + " — "
+            assertTrue(got.proof() != null && got.proof().status() == Proof.Status.OPTIMAL, "proof " + got.proof() + " — "
                     + where);
             assertEquals(ref.total, CostModel.units(got.totalCost()), in.beams().size() + 1.0,
                     "total against brute force " + ref + " — " + where);

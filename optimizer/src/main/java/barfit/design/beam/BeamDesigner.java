@@ -3,6 +3,7 @@ package barfit.design.beam;
 import barfit.design.Binding;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
+import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.section.CheckResult;
 import barfit.section.CodeEquations;
@@ -22,12 +23,11 @@ public final class BeamDesigner {
     public record Design(BeamLayout layout, CostBreakdown cost, BeamReport report, List<BeamLayout.BarMark> bars) {
     }
 
-    /** The proof of one beam's answer. */
-    public record Proof(String status, long objective, long bound, int booleans, int frames, int framesEvaluated,
-            int framesSkipped, int solves, int deflectionCuts, int workers, int seed) {
-        public double gap() {
-            return objective == 0 ? 0 : Math.max(0, (double) (objective - bound) / Math.abs(objective));
-        }
+    /**
+     * A span's search, for its proof: the generator's counts, the CP-SAT solves and the deflection cuts
+     * added between them.
+     */
+    public record Search(BeamGenerator.Stats generator, int solves, int deflectionCuts) {
     }
 
     /**
@@ -54,8 +54,8 @@ public final class BeamDesigner {
     public record Fix(double width, double height, BeamLayout layout) {
     }
 
-    public record Outcome(BeamProblem problem, String status, Design best, List<Design> alternatives, Proof proof,
-            List<Binding> binding, Diagnosis diagnosis) {
+    public record Outcome(BeamProblem problem, String status, Design best, List<Design> alternatives,
+            Proof<Search> proof, List<Binding> binding, Diagnosis diagnosis) {
         public boolean feasible() {
             return best != null;
         }
@@ -110,8 +110,7 @@ public final class BeamDesigner {
         BeamGenerator.Output out = gen.generate(slack, ceiling);
         var stats = out.stats();
         if (out.incumbentLayout() == null) {
-            Proof proof = new Proof("infeasible", 0, 0, 0, stats.frames(), stats.framesEvaluated(), stats.framesSkipped(),
-                    0, 0, options.workers(), options.seed());
+            var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(stats, 0, 0), options);
             return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), diagnose(p));
         }
         BeamSelection sel = new BeamSelection(p, out.sets());
@@ -121,7 +120,8 @@ public final class BeamDesigner {
         Design best = null;
         List<Design> alts = new ArrayList<>();
         while (best == null || alts.size() < alternatives) {
-            BeamSelection.Result r = sel.solve(options, ++solves, cuts);
+            solves++;
+            BeamSelection.Result r = sel.solve(options);
             if (r.choice() == null) {
                 break;
             }
@@ -157,21 +157,23 @@ public final class BeamDesigner {
             // the time limit ended the first solve before it had a solution: give the generator's incumbent
             // when it passes every check, as found but not proven (no bound)
             BeamReport report = BeamVerifier.verify(p, out.incumbentLayout(), true);
-            Proof proof = new Proof(report.ok() ? "feasible" : "unknown", report.ok()
-                    ? Math.round(out.incumbent() * BeamGenerator.UNITS) : 0, 0, 0, stats.frames(),
-                    stats.framesEvaluated(), stats.framesSkipped(), solves, cuts, options.workers(), options.seed());
+            Search search = new Search(stats, solves, cuts);
             if (!report.ok()) {
+                var proof = Proof.none(Proof.Status.OUT_OF_TIME, search, options);
                 return new Outcome(p, "unknown", null, List.of(), proof, List.of(), new Diagnosis("time limit",
                         "the time limit (" + options.timeLimitSeconds() + " s) ended the search before a design"
                                 + " passing every check was found", List.of("raise --time-limit")));
             }
             Design d = new Design(out.incumbentLayout(), out.incumbentLayout().cost(p, cost), report,
                     out.incumbentLayout().bars(p, cost));
+            var proof = Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search,
+                    options);
             return new Outcome(p, "feasible", d, List.of(), proof, binding(p, d), null);
         }
-        Proof proof = new Proof(first.status(), first.objective(), first.bound(), first.booleans(), stats.frames(),
-                stats.framesEvaluated(), stats.framesSkipped(), solves, cuts, options.workers(), options.seed());
-        return new Outcome(p, first.status(), best, alts, proof, binding(p, best), null);
+        var proof = Proof.solved(first.status(), first.objective(), first.bound(), CostModel.SPAN_UNITS, first.stats(),
+                new Search(stats, solves, cuts), options);
+        String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
+        return new Outcome(p, status, best, alts, proof, binding(p, best), null);
     }
 
     /** The checks working hardest in the chosen span, and the headroom cap when the height sits at it. */

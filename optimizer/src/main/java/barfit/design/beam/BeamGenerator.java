@@ -38,9 +38,6 @@ import java.util.Map;
  * worth handing over.
  */
 public final class BeamGenerator {
-    /** Money inside the beam model is counted in millionths of the currency. */
-    public static final double UNITS = 1_000_000.0;
-
     /** The "legs" of a support option whose section sizes no stirrup zone: it limits nothing. */
     static final int NO_ZONES = 1000;
     /** The most legs of a support option whose section sizes no stirrup zone: it asks nothing of the bottom bars. */

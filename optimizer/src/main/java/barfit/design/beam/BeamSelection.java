@@ -1,11 +1,12 @@
 package barfit.design.beam;
 
 import barfit.catalogs.BarSize;
+import barfit.design.CostModel;
 import barfit.design.OrTools;
+import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
-import com.google.ortools.sat.CpSolverStatus;
 import com.google.ortools.sat.LinearExpr;
 import com.google.ortools.sat.LinearExprBuilder;
 import com.google.ortools.sat.Literal;
@@ -28,11 +29,8 @@ public final class BeamSelection {
             BeamGenerator.SupportOpt right) {
     }
 
-    public record Result(String status, Choice choice, long objective, long bound, int booleans, int solves,
-            int deflectionCuts, double seconds) {
-        public double gap() {
-            return objective == 0 ? 0 : Math.max(0, (double) (objective - bound) / Math.abs(objective));
-        }
+    /** {@code choice}, {@code objective} and {@code bound} (in {@link CostModel#SPAN_UNITS}) only when solved. */
+    public record Result(Proof.Status status, Choice choice, long objective, long bound, Proof.SolverStats stats) {
     }
 
     private final CpModel model = new CpModel();
@@ -59,7 +57,7 @@ public final class BeamSelection {
     private Literal bool(String name, double cost) {
         Literal v = model.newBoolVar(name);
         all.add(v);
-        costs.add(Math.round(cost * BeamGenerator.UNITS));
+        costs.add(CostModel.SPAN_UNITS.units(cost));
         booleans++;
         return v;
     }
@@ -261,19 +259,13 @@ public final class BeamSelection {
         model.addEquality(same, 0);
     }
 
-    public Result solve(SolverOptions o, int solves, int cuts) {
+    public Result solve(SolverOptions o) {
         CpSolver solver = OrTools.solver(o);
-        long t0 = System.nanoTime();
-        CpSolverStatus st = solver.solve(model);
-        double secs = (System.nanoTime() - t0) / 1e9;
-        String status = switch (st) {
-            case OPTIMAL -> "optimal";
-            case FEASIBLE -> "feasible";
-            case INFEASIBLE -> "infeasible";
-            default -> "unknown";
-        };
-        if (!status.equals("optimal") && !status.equals("feasible")) {
-            return new Result(status, null, 0, 0, booleans, solves, cuts, secs);
+        Proof.Status status = OrTools.status(solver.solve(model), solver, "the span selection model of beam " + p.id());
+        Proof.SolverStats stats = new Proof.SolverStats(booleans, solver.numConflicts(), solver.numBranches(),
+                solver.wallTime());
+        if (status != Proof.Status.OPTIMAL && status != Proof.Status.FEASIBLE) {
+            return new Result(status, null, 0, 0, stats);
         }
         for (int fi = 0; fi < sets.size(); fi++) {
             if (!solver.booleanValue(frameVars.get(fi))) {
@@ -284,7 +276,7 @@ public final class BeamSelection {
             BeamGenerator.SupportOpt left = pick(solver, leftVars.get(fi), fs.lefts());
             BeamGenerator.SupportOpt right = pick(solver, rightVars.get(fi), fs.rights());
             return new Result(status, new Choice(fs, mid, left, right), Math.round(solver.objectiveValue()),
-                    Math.round(solver.bestObjectiveBound()), booleans, solves, cuts, secs);
+                    Math.round(solver.bestObjectiveBound()), stats);
         }
         throw new IllegalStateException("the solver chose no frame");
     }

@@ -2,6 +2,7 @@ package barfit.report.html;
 
 import barfit.catalogs.BarSize;
 import barfit.design.CostRates;
+import barfit.design.Proof;
 import barfit.design.SearchSpace;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
@@ -312,19 +313,20 @@ public final class ScheduleHtml {
 
     private static void proof(ScheduleResult r, StringBuilder out) {
         UnitSystem u = r.input().settings().units();
-        ScheduleResult.Proof p = r.proof();
+        Proof<ScheduleResult.Search> p = r.proof();
+        var s = p.search();
         String cur = r.input().currency();
         out.append("<section id=\"rationalisation\">\n<h2>Rationalisation and its proof</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Proof</caption>\n");
-        kv(out, "method", p.method());
-        kv(out, "status", p.status());
-        boolean none = Double.isNaN(p.objective());
+        kv(out, "method", s.method());
+        kv(out, "status", p.status().name());
+        boolean none = !p.bounded();
         kv(out, "objective", none ? "— (no schedule meets the limits)" : money(p.objective(), cur));
         kv(out, "best bound", none ? "—" : money(p.bound(), cur));
         kv(out, "gap", none ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()));
-        kv(out, "bar-size sets", p.barSetsTotal() + " considered, " + p.barSetsSolved() + " solved, " + p.barSetsPruned()
+        kv(out, "bar-size sets", s.barSetsTotal() + " considered, " + s.barSetsSolved() + " solved, " + s.barSetsPruned()
                 + " pruned by the cost bound");
-        kv(out, "(beam, size) pairs", p.pairsEvaluated() + " designed exactly");
+        kv(out, "(beam, size) pairs", s.pairsEvaluated() + " designed exactly");
         // measured times are left out so that the same result always gives the same page
         kv(out, "CP-SAT", p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed());
         out.append("</table>\n");
@@ -350,7 +352,7 @@ public final class ScheduleHtml {
         kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), cur));
         kvStrong(out, "total", money(r.totalCost(), cur));
         boolean sets2 = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
-        if (r.proof() != null && r.proof().status().equals("INFEASIBLE")) {
+        if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
         } else {
             kv(out, "every beam at its own optimum" + (sets2 ? " (a set of forms per size)" : ""),
@@ -384,7 +386,7 @@ public final class ScheduleHtml {
             String saving = Double.isFinite(prev) && Double.isFinite(p.cost()) ? Money.amount(prev - p.cost()) : "—";
             out.append("<tr><td class=\"num\">").append(p.sizes()).append("</td><td class=\"num\">")
                     .append(Double.isFinite(p.cost()) ? Money.amount(p.cost()) : "none feasible").append("</td><td class=\"num\">")
-                    .append(saving).append("</td><td>").append(Svg.esc(p.status())).append("</td><td>")
+                    .append(saving).append("</td><td>").append(Svg.esc(p.status().name())).append("</td><td>")
                     .append(Svg.esc(labels(r, p.barSizes()))).append("</td></tr>\n");
             prev = p.cost();
         }
@@ -679,15 +681,18 @@ public final class ScheduleHtml {
         return String.join(", ", parts);
     }
 
-    private static String proofWords(BeamDesigner.Proof p) {
-        // objective and bound are in the selection's integer cost units (a millionth of the currency)
-        return "CP-SAT " + p.status() + ", objective " + String.format(Locale.ROOT, "%.4f", p.objective() / 1e6)
-                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound() / 1e6) + ", gap "
-                + String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()) + "; " + p.framesEvaluated() + " of " + p.frames()
-                + " frames evaluated, " + p.framesSkipped() + " skipped by the cost bound; " + p.solves()
-                + (p.solves() == 1 ? " solve" : " solves") + (p.deflectionCuts() > 0 ? ", " + p.deflectionCuts()
-                + " deflection cuts" : "") + "; " + p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed "
-                + p.seed();
+    private static String proofWords(Proof<BeamDesigner.Search> p) {
+        if (p.status() == Proof.Status.UNPROVEN) {
+            return BeamText.proof(p);
+        }
+        var s = p.search();
+        return "CP-SAT " + Words.status(p.status()) + ", objective " + String.format(Locale.ROOT, "%.4f", p.objective())
+                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound()) + ", gap "
+                + String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()) + "; " + s.generator().framesEvaluated() + " of "
+                + s.generator().frames() + " frames evaluated, " + s.generator().framesSkipped()
+                + " skipped by the cost bound; " + s.solves() + (s.solves() == 1 ? " solve" : " solves")
+                + (s.deflectionCuts() > 0 ? ", " + s.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
+                + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
     }
 
     private static String unitsWords(UnitSystem u) {

@@ -1,6 +1,7 @@
 package barfit.report.html;
 
 import barfit.design.CostModel;
+import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
@@ -86,11 +87,12 @@ final class ScheduleFixtures {
      */
     static ScheduleResult withRenderingFixtures(ScheduleResult r) {
         double t = r.totalCost();
-        ScheduleResult.Proof proof = new ScheduleResult.Proof("rendering fixture", "OPTIMAL", t, t, 4, 3, 1, 9, 1, 1, 0);
+        Proof<ScheduleResult.Search> proof = new Proof<>(Proof.Status.OPTIMAL, t, t, 0, Proof.SolverStats.NONE,
+                new ScheduleResult.Search("rendering fixture", 4, 3, 1, 9, 0), 1, 1);
         List<ScheduleResult.StandardisationPoint> points = List.of(
-                new ScheduleResult.StandardisationPoint(1, t * 1.08, "OPTIMAL", r.barSizes()),
-                new ScheduleResult.StandardisationPoint(2, t * 1.02, "OPTIMAL", r.barSizes()),
-                new ScheduleResult.StandardisationPoint(3, t, "OPTIMAL", r.barSizes()));
+                new ScheduleResult.StandardisationPoint(1, t * 1.08, Proof.Status.OPTIMAL, r.barSizes()),
+                new ScheduleResult.StandardisationPoint(2, t * 1.02, Proof.Status.OPTIMAL, r.barSizes()),
+                new ScheduleResult.StandardisationPoint(3, t, Proof.Status.OPTIMAL, r.barSizes()));
         return new ScheduleResult(r.input(), r.beams(), r.sizes(), r.barSizes(), r.beamsCost(), r.formworkSetsCost(),
                 r.unconstrainedCost(), proof, points, r.threads(), r.millis());
     }

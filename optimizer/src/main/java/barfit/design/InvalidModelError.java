@@ -1,0 +1,11 @@
+package barfit.design;
+
+/**
+ * CP-SAT refused a model barfit built (MODEL_INVALID): a bug in barfit, never an answer and never the
+ * input's fault. The command line reports it as an internal error and asks for it to be reported.
+ */
+public final class InvalidModelError extends RuntimeException {
+    public InvalidModelError(String message) {
+        super(message);
+    }
+}
