@@ -10,9 +10,10 @@ public final class Caution {
     public static final List<String> LINES = List.of(
             "CAUTION: " + SHORT,
             "barfit covers only what this report lists: ACI 318-19 flexure, shear and detailing checks of",
-            "nonprestressed beam sections under the moments and shears given. It does not check the analysis that",
-            "produced them, torsion, axial load, seismic provisions, bar development and splices, deflection",
-            "(unless reported), fire resistance, durability beyond cover, or constructability beyond bar spacing.");
+            "nonprestressed beam sections under the moments and shears given, or for lines those of its own",
+            "gravity analysis. It does not check an analysis made elsewhere, lateral loads, torsion, axial load,",
+            "seismic provisions, bar development and splices, deflection (unless reported), fire resistance,",
+            "durability beyond cover, or constructability beyond bar spacing.");
 
     private Caution() {
     }
