@@ -47,7 +47,8 @@ class LineExamplesTest {
                         + " --line L1-B --plot examples/lines --force");
         Run design = Run.of("design", FILE);
         assertEquals(0, design.exit(), design.err());
-        assertTrue(design.out().contains("Line L1-B: designed span by span from its analysis"));
+        assertTrue(design.out().contains("Line L1-B: one section for the whole line"));
+        assertTrue(design.out().contains("Line L1-4: designed span by span from its analysis"));
         Golden.check("lines/ashgrove-depot-lines-si.design.txt", design.out());
         Golden.check("lines/ashgrove-depot-lines-si.design.json", Run.of("design", FILE, "--format", "json").out());
         Run compare = Run.of("compare", FILE, "--beam", "L1-B/span 2");

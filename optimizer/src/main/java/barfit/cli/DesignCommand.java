@@ -102,7 +102,7 @@ final class DesignCommand implements Callable<Integer> {
                 LineSpans.Part part = r.parts().get(i);
                 outcomes.add(DesignItem.of(part.outcome(), new DesignItem.LinePart(l.id(), part.name(), i == 0,
                         l.spans().size(), r.rounds(), r.settled(), l.redistribution(), r.redistribution(), r.epsT(),
-                        undesigned, !r.held().isEmpty())));
+                        undesigned, !r.held().isEmpty(), r.oneSection())));
             }
         }
         String text = format == OutputFormat.json

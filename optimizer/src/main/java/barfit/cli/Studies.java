@@ -63,7 +63,9 @@ final class Studies {
                 }
                 for (LineSpans.Part part : byLine.design(l, 0).parts()) {
                     if (whole || part.problem().id().equals(beam)) {
-                        out.add(new SpanTarget(part.problem(), options, in.settings().units()));
+                        // studied free of the section the line was designed at, with that section's envelope
+                        out.add(new SpanTarget(part.problem().withSpace(in.space()).withFixedWidth(null), options,
+                                in.settings().units()));
                     }
                 }
             }

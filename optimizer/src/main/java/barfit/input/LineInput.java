@@ -13,12 +13,21 @@ import java.util.List;
  * A beam line as given: spans centre-to-centre (mm), overhangs, supports, the superimposed service loads
  * per segment (N/mm, N), the section analysed (and whose own weight is added), the sustained part of
  * the live load, the method (stiffness analysis or the 6.5 coefficients), the redistribution asked at
- * each support (percent) and the concrete's unit weight (N/mm³). Segment 0 is the left overhang, 1..n
- * the spans, n + 1 the right overhang.
+ * each support (percent), the concrete's unit weight (N/mm³), the headroom cap, and whether the line is
+ * one set of forms ({@code oneSection}: one b x h throughout, the default) or each span its own section.
+ * Segment 0 is the left overhang, 1..n the spans, n + 1 the right overhang.
  */
 public record LineInput(String id, Location location, List<Double> spans, double overhangLeft, double overhangRight,
         List<Support> supports, List<Load> loads, SectionShape section, double sustainedLive, boolean coefficients,
-        List<Double> redistribution, double unitWeight, Double maxDepth) {
+        List<Double> redistribution, double unitWeight, Double maxDepth, boolean oneSection) {
+
+    /** As given before the forms were a choice: each span its own section. */
+    public LineInput(String id, Location location, List<Double> spans, double overhangLeft, double overhangRight,
+            List<Support> supports, List<Load> loads, SectionShape section, double sustainedLive, boolean coefficients,
+            List<Double> redistribution, double unitWeight, Double maxDepth) {
+        this(id, location, spans, overhangLeft, overhangRight, supports, loads, section, sustainedLive, coefficients,
+                redistribution, unitWeight, maxDepth, false);
+    }
 
     public LineInput {
         spans = List.copyOf(spans);

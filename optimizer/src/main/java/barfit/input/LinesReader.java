@@ -22,7 +22,7 @@ import java.util.Map;
  */
 public final class LinesReader {
     static final String[] LINE_KEYS = {"id", "spans", "overhangs", "supports", "loads", "sustained_live", "section",
-        "flange", "method", "redistribution", "max_depth"};
+        "flange", "method", "redistribution", "max_depth", "forms"};
 
     /** Default unit weight of reinforced concrete: 24 kN/m³ (150 lb/ft³), common practice. */
     static final double UNIT_WEIGHT_SI = 24e3 / 1e9;
@@ -170,8 +170,18 @@ public final class LinesReader {
         }
         List<Double> redistribution = redistribution(f, n, coefficients);
         Double cap = sr.optLength(f, "max_depth", "the headroom cap on the total height", InputLimits.HEIGHT).orElse(null);
+        boolean oneSection = true;
+        if (f.has("forms")) {
+            String forms = f.text("forms", "line or per-span");
+            if (forms.equals("per-span")) {
+                oneSection = false;
+            } else if (!forms.equals("line")) {
+                throw f.error("forms", "expected line (one b × h for the whole line) or per-span (each span its own "
+                        + "section), got \"" + forms + "\"");
+            }
+        }
         return new LineInput(id, f.location(), spans, ol, or, supports, loads, shape, sus, coefficients, redistribution,
-                unitWeight, cap);
+                unitWeight, cap, oneSection);
     }
 
     private static List<Support> supports(YFields f, int spans, SectionReader sr, UnitSystem u) {

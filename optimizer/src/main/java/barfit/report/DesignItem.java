@@ -11,11 +11,12 @@ public record DesignItem(DesignOutcome section, BeamDesigner.Outcome whole, Line
     /**
      * Where a whole span came from: its line, which part, and how many rounds of analysis and design it took;
      * {@code undesigned} names the line's parts that have no design (the analysis kept its first estimate
-     * of their sections); {@code held} when the sections alternated and every part was held at the largest.
+     * of their sections); {@code held} when the sections alternated and every part was held at the largest;
+     * {@code oneSection} how a line of one set of forms was designed (null for span by span).
      */
     public record LinePart(String line, String part, boolean first, int spans, int rounds, boolean settled,
             java.util.List<Double> asked, java.util.List<Double> used, java.util.List<Double> epsT,
-            java.util.List<String> undesigned, boolean held) {
+            java.util.List<String> undesigned, boolean held, barfit.design.line.LineSpans.OneSection oneSection) {
     }
 
     public boolean feasible() {

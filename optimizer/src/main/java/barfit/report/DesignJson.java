@@ -42,6 +42,12 @@ public final class DesignJson {
                 if (o.line().held()) {
                     l.put("held", true);
                 }
+                var one = o.line().oneSection();
+                l.put("forms", one == null ? "per-span" : one.fellBack() ? "per-span (no one section fits)" : "line");
+                if (one != null && !one.fellBack()) {
+                    l.put("sections_analysed", one.sections());
+                    l.put("sections_designed", one.designed());
+                }
                 if (!o.line().undesigned().isEmpty()) {
                     var none = l.putArray("undesigned");
                     o.line().undesigned().forEach(none::add);

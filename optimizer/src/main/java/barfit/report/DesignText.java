@@ -32,7 +32,28 @@ public final class DesignText {
         int infeasible = 0;
         for (DesignItem o : outcomes) {
             out.append('\n');
-            if (o.line() != null && o.line().first()) {
+            var one = o.line() == null ? null : o.line().oneSection();
+            if (o.line() != null && o.line().first() && one != null && !one.fellBack()) {
+                var l = o.whole().best() == null ? null : o.whole().best().layout();
+                out.append("Line ").append(o.line().line()).append(": one section for the whole line");
+                if (l != null) {
+                    out.append(", ").append(len(l.width(), u)).append(" × ").append(len(l.height(), u)).append(' ')
+                            .append(u.unit(Dim.LENGTH));
+                }
+                out.append(", the cheapest of ").append(one.sections()).append(" analysed each with its own weight and "
+                        + "stiffness (").append(one.designed()).append(" designed before the cost bound stopped the "
+                        + "search)");
+                if (o.line().rounds() > 1) {
+                    out.append("; analysed again ").append(o.line().rounds() - 1)
+                            .append(o.line().rounds() == 2 ? " time" : " times").append(" for the redistribution the "
+                            + "support sections allow");
+                }
+                out.append('\n');
+            } else if (o.line() != null && o.line().first()) {
+                if (one != null) {
+                    out.append("Line ").append(o.line().line()).append(": no one section of the search space carries "
+                            + "every part; each span takes its own\n");
+                }
                 out.append("Line ").append(o.line().line()).append(": designed span by span from its analysis, ")
                         .append(o.line().rounds()).append(o.line().rounds() == 1 ? " round" : " rounds")
                         .append(" of analysis and design").append(!o.line().undesigned().isEmpty()
@@ -46,6 +67,8 @@ public final class DesignText {
                                 ? " (the sections designed are those analysed)"
                                 : " (the sections still changed in the last round: check the envelope by hand)")
                         .append('\n');
+            }
+            if (o.line() != null && o.line().first()) {
                 var lp = o.line();
                 for (int j = 0; j < lp.asked().size(); j++) {
                     if (lp.asked().get(j) > 0) {

@@ -84,10 +84,18 @@ public final class ScheduleInputReader {
                 pool.shutdownNow();
             }
             for (int i = 0; i < lines.size(); i++) {
+                var one = results.get(i).oneSection();
                 for (var part : results.get(i).parts()) {
-                    // the line's last round designed it for this very problem: its own optimum
-                    out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(), part.problem(),
-                            part.outcome()));
+                    if (one != null && !one.fellBack()) {
+                        // one set of forms: the line's parts form a group that shares b x h, free to take
+                        // another section when the schedule standardises (with the envelope of this one)
+                        out.add(new ScheduleBeam(part.problem().id(), lines.get(i).id(), lines.get(i).location(),
+                                part.problem().withSpace(di.space()).withFixedWidth(null)));
+                    } else {
+                        // the line's last round designed it for this very problem: its own optimum
+                        out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(), part.problem(),
+                                part.outcome()));
+                    }
                 }
             }
         }

@@ -95,6 +95,19 @@ public final class BeamDesigner {
         return o;
     }
 
+    /**
+     * The part of a span's cost that its section alone fixes (concrete, formwork, depth premium over the
+     * span): a lower bound on any design of the span at that section.
+     */
+    public double frameCost(BeamProblem p, double b, double h) {
+        return cost.frame(b, h, p.flange()).times(p.span() / 1000.0).total();
+    }
+
+    /** A lower bound on any design of the span: the span generator's, before anything is searched. */
+    public double leastCost(BeamProblem p) {
+        return new BeamGenerator(p, cost).leastCost();
+    }
+
     /** The hint's cost, a hair above so that rounding never cuts the hint itself; infinite when unusable. */
     private double ceiling(BeamProblem p, BeamLayout hint) {
         if (hint == null || !p.widths().contains(hint.width()) || !p.depths().contains(hint.height())
@@ -105,10 +118,25 @@ public final class BeamDesigner {
         return c * (1 + 1e-9) + 1e-9;
     }
 
+    /**
+     * The span's optimum when it costs less than {@code ceiling}, else null (no diagnosis is made): for a
+     * search over several spans that only needs this one when it can still win.
+     */
+    public Outcome designUnder(BeamProblem p, double ceiling) {
+        return design(p, 0, 0, ceiling, false);
+    }
+
     private Outcome design(BeamProblem p, int alternatives, double slack, double ceiling) {
+        return design(p, alternatives, slack, ceiling, true);
+    }
+
+    private Outcome design(BeamProblem p, int alternatives, double slack, double ceiling, boolean diagnoseNone) {
         BeamGenerator gen = new BeamGenerator(p, cost);
         BeamGenerator.Output out = gen.generate(slack, ceiling);
         var stats = out.stats();
+        if (out.incumbentLayout() == null && !diagnoseNone) {
+            return null;
+        }
         if (out.incumbentLayout() == null) {
             var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(stats, 0, 0), options);
             return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), diagnose(p));

@@ -217,6 +217,19 @@ public final class BeamGenerator {
 
     // ------------------------------------------------------------------ frames and their bounds
 
+    /**
+     * No design of the span costs less than this: the least of its frames' lower bounds (concrete,
+     * formwork, skin bars, and the section model's strength bound on the bars and stirrups); infinite
+     * when no frame can hold it.
+     */
+    public double leastCost() {
+        double least = Double.POSITIVE_INFINITY;
+        for (Frame f : frames()) {
+            least = Math.min(least, f.lowerBound());
+        }
+        return least;
+    }
+
     private List<Frame> frames() {
         List<Frame> out = new ArrayList<>();
         BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();

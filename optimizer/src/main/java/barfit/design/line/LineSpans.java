@@ -49,7 +49,15 @@ public final class LineSpans {
      */
     public record Result(LineInput line, List<Part> parts, int rounds, boolean settled, LineResult analysis,
             List<Coefficients.SpanValues> coefficients, List<Double> redistribution, List<Double> epsT,
-            List<String> held) {
+            List<String> held, OneSection oneSection) {
+    }
+
+    /**
+     * How a line of one set of forms was designed: the sections analysed (each with its own weight and
+     * stiffness) and how many of them were designed before the cost bound stopped the search; or, where
+     * no one section carries every part, that the line fell back to span-by-span design.
+     */
+    public record OneSection(int sections, int designed, boolean fellBack) {
     }
 
     /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
@@ -71,6 +79,154 @@ public final class LineSpans {
     }
 
     public Result design(LineInput in, int alternatives) {
+        if (in.oneSection()) {
+            Result one = oneSection(in, alternatives);
+            if (one != null) {
+                return one;
+            }
+            Result bySpan = bySpan(in, alternatives);
+            return new Result(in, bySpan.parts(), bySpan.rounds(), bySpan.settled(), bySpan.analysis(),
+                    bySpan.coefficients(), bySpan.redistribution(), bySpan.epsT(), bySpan.held(),
+                    new OneSection(0, 0, true));
+        }
+        return bySpan(in, alternatives);
+    }
+
+    /**
+     * One b x h for the whole line: for each section of the search space (under the line's cap), the line
+     * analysed with that section's own weight and stiffness and every part designed at that section; the
+     * cheapest total wins. Sections are taken in order of the sum of the span generator's lower bounds of
+     * the parts (concrete, formwork and the section model's strength bound on the steel, for that
+     * section's own envelope), so the search stops at the first section whose bound reaches the cheapest
+     * total found. Exact for its model: every section is analysed as it is built.
+     * Null when no single section carries every part.
+     */
+    private Result oneSection(LineInput in, int alternatives) {
+        int n = in.spans().size();
+        double ec = Deflection.ec(settings.materials(), settings.code());
+        List<SectionShape> frames = new ArrayList<>();
+        for (double b : space.widths()) {
+            for (double h : space.depths()) {
+                if (in.maxDepth() == null || h <= in.maxDepth() + 1e-9) {
+                    frames.add(new SectionShape(b, h, in.section().flange()));
+                }
+            }
+        }
+        // the bound of each frame from the parts of its own analysis (their lengths and flanges)
+        List<Trial> trials = new ArrayList<>();
+        for (SectionShape f : frames) {
+            trials.add(trial(in, f, ec, new ArrayList<>(in.redistribution())));
+        }
+        trials.sort(java.util.Comparator.comparingDouble(Trial::bound));
+        Evaluated best = null;
+        int designed = 0;
+        for (Trial t : trials) {
+            if (best != null && t.bound() >= best.total() - 1e-9) {
+                break;
+            }
+            designed++;
+            Evaluated e = evaluate(in, t, ec, best == null ? Double.POSITIVE_INFINITY : best.total(), 0);
+            if (e != null && (best == null || e.total() < best.total() - 1e-9)) {
+                best = e;
+            }
+        }
+        if (best == null) {
+            return null;
+        }
+        if (alternatives > 0) {
+            best = evaluate(in, best.trial(), ec, Double.POSITIVE_INFINITY, alternatives);
+        }
+        return new Result(in, best.parts(), best.rounds(), true, best.trial().analysis(), best.trial().coefficients(),
+                best.trial().redistribution(), best.epsT(), List.of(), new OneSection(trials.size(), designed, false));
+    }
+
+    /** A section tried for the whole line: its analysis, the parts' problems held at it, and its bound. */
+    private record Trial(SectionShape shape, List<BeamProblem> problems, LineResult analysis,
+            List<Coefficients.SpanValues> coefficients, List<Double> redistribution, double bound) {
+    }
+
+    /** The parts designed at a trial's section, their total cost, the rounds redistribution took. */
+    private record Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {
+    }
+
+    private Trial trial(LineInput in, SectionShape shape, double ec, List<Double> red) {
+        int n = in.spans().size();
+        List<SectionShape> shapes = new ArrayList<>();
+        for (int s = 0; s < n + 2; s++) {
+            shapes.add(shape);
+        }
+        Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
+        List<BeamProblem> problems;
+        LineResult analysis = null;
+        List<Coefficients.SpanValues> coefficients = null;
+        if (in.coefficients()) {
+            coefficients = Coefficients.analyse(line);
+            problems = fromCoefficients(in, line, coefficients);
+        } else {
+            analysis = LineAnalysis.analyse(line);
+            problems = fromAnalysis(in, line, analysis);
+        }
+        List<BeamProblem> held = new ArrayList<>();
+        double bound = 0;
+        for (BeamProblem p : problems) {
+            BeamProblem q = heldAt(p, shape);
+            held.add(q);
+            bound += designer.leastCost(q);
+        }
+        return new Trial(shape, held, analysis, coefficients, List.copyOf(red), bound);
+    }
+
+    /**
+     * Every part designed at the trial's section, stopping as soon as the parts so far and the bounds of
+     * the rest reach {@code beat}; where the support sections do not allow the redistribution asked
+     * (6.6.5), the line is analysed again at the same section with what they allow. Null when a part has
+     * no design at this section or the total cannot beat {@code beat}.
+     */
+    private Evaluated evaluate(LineInput in, Trial t, double ec, double beat, int alternatives) {
+        int n = in.spans().size();
+        int rounds = 0;
+        Trial current = t;
+        while (true) {
+            rounds++;
+            List<Part> parts = new ArrayList<>();
+            double total = 0;
+            double rest = current.bound();
+            for (BeamProblem p : current.problems()) {
+                rest -= designer.leastCost(p);
+                // only a design that leaves room for the rest's bounds under the total to beat can matter
+                BeamDesigner.Outcome o = Double.isInfinite(beat) ? designer.design(p, alternatives)
+                        : designer.designUnder(p, beat - total - rest);
+                if (o == null || !o.feasible()) {
+                    return null;
+                }
+                total += o.best().cost().total();
+                if (total + rest >= beat - 1e-9) {
+                    return null;
+                }
+                int seg = segmentOf(p, n);
+                parts.add(new Part(seg, partName(seg, n), p, o));
+            }
+            List<Double> epsT = supportStrains(in, parts);
+            List<Double> red = new ArrayList<>(current.redistribution());
+            boolean lowered = false;
+            for (int j = 0; j < red.size(); j++) {
+                if (red.get(j) > 0) {
+                    double allowed = barfit.analysis.RedistributionLimit.percent(epsT.get(j));
+                    if (red.get(j) > allowed + 1e-9) {
+                        red.set(j, allowed);
+                        lowered = true;
+                    }
+                }
+            }
+            if (!lowered || rounds >= MAX_ROUNDS) {
+                return new Evaluated(current, parts, total, rounds, epsT);
+            }
+            current = trial(in, current.shape(), ec, red);
+        }
+    }
+
+    /** Span by span: each part its own section, the line analysed again until the sections settle. */
+    private Result bySpan(LineInput in, int alternatives) {
         int n = in.spans().size();
         List<SectionShape> shapes = new ArrayList<>();
         for (int s = 0; s < n + 2; s++) {
@@ -143,7 +299,7 @@ public final class LineSpans {
         if (held != null) {
             parts.forEach(pt -> heldParts.add(pt.name()));
         }
-        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT, heldParts);
+        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT, heldParts, null);
     }
 
     /** The segment's design in the previous round: a layout that may pass again, to bound the next search. */

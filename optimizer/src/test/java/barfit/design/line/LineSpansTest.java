@@ -59,6 +59,7 @@ class LineSpansTest {
                       points: [{span: 2, at: 2.5, dead: 40, live: 25}]
                     sustained_live: 0.3
                     section: {width: 300, height: 600}
+                    forms: per-span
                 """);
         DesignInput in = DesignInputReader.read(f, false);
         YFields doc = DesignInputReader.document(f);
@@ -177,7 +178,9 @@ class LineSpansTest {
                           live: %d
                           points: [{span: 1, at: %s, dead: 25, live: 10}]
                         section: {width: 300, height: 500}
-                    """.formatted(a, b, i % 2 == 0 ? "0" : "1.2", dead, live, 0.4 + 0.2 * rnd.nextInt(5));
+                        forms: %s
+                    """.formatted(a, b, i % 2 == 0 ? "0" : "1.2", dead, live, 0.4 + 0.2 * rnd.nextInt(5),
+                    i < 2 ? "per-span" : "line");
             Path f = dir.resolve("o" + i + ".yaml");
             Files.writeString(f, yaml);
             DesignInput in = DesignInputReader.read(f, false);
@@ -200,6 +203,62 @@ class LineSpansTest {
             }
         }
         assertTrue(feasible >= 6, "enough parts with a design to mean something: " + feasible);
+    }
+
+    @Test
+    void oneSectionIsTheCheapestOfEverySectionDesignedAlone() throws IOException {
+        // invented line; the search space is 2 widths x 4 depths. The line designed with the whole space
+        // must cost what the cheapest of the eight lines designed with one section each costs: the bound
+        // that stops the search early must never stop it before the cheapest
+        String line = """
+                lines:
+                  - id: F
+                    spans: [6.0, 7.2]
+                    overhangs: {left: 1.5}
+                    supports:
+                      - {width: 350, below: {b: 350, h: 350, height: 3.6}}
+                      - {width: 350, below: {b: 350, h: 350, height: 3.6}, above: {b: 350, h: 350, height: 3.4}}
+                      - {width: 300, kind: wall}
+                    loads: {dead: 18, live: 11}
+                    sustained_live: 0.25
+                    section: {width: 300, height: 500}
+                """;
+        String head = """
+                units: SI
+                concrete: {fc: 30}
+                steel: {fy: 420}
+                search:
+                  widths: %s
+                  depth: {min: %s, max: %s, step: 50}
+                  bar_sizes: ["16", "19", "22", "25"]
+                  max_layers: 2
+                """;
+        LineSpans.Result all = designLine(head.formatted("[250, 300]", 450, 600) + line);
+        assertTrue(all.oneSection() != null && !all.oneSection().fellBack(), "one section carries the line");
+        var first = all.parts().get(0).outcome().best().layout();
+        double total = 0;
+        for (LineSpans.Part p : all.parts()) {
+            var l = p.outcome().best().layout();
+            assertEquals(first.width(), l.width(), p.name() + ": one width");
+            assertEquals(first.height(), l.height(), p.name() + ": one height");
+            total += p.outcome().best().cost().total();
+        }
+        double cheapest = Double.POSITIVE_INFINITY;
+        for (int b : new int[] {250, 300}) {
+            for (int h = 450; h <= 600; h += 50) {
+                LineSpans.Result one = designLine(head.formatted("[" + b + "]", h, h) + line);
+                if (one.oneSection() == null || one.oneSection().fellBack()) {
+                    continue;
+                }
+                double sum = 0;
+                for (LineSpans.Part p : one.parts()) {
+                    sum += p.outcome().best().cost().total();
+                }
+                cheapest = Math.min(cheapest, sum);
+            }
+        }
+        assertEquals(cheapest, total, 1e-6, "the cheapest section for the whole line");
+        assertTrue(all.oneSection().designed() <= all.oneSection().sections());
     }
 
     private LineSpans.Result designLine(String yaml) throws IOException {
