@@ -26,7 +26,8 @@ public final class ScheduleText {
         var rat = r.input().rationalise();
         out.append(rat == null ? "each beam at its own optimum (no rationalise: block)\n" : "rationalised: "
                 + limits(rat) + "\n");
-        boolean grouped = r.beams().stream().anyMatch(b -> b.beam().group() != null);
+        // a line of one set of forms is a group that always shares b x h: only the user's groups need the note
+        boolean grouped = r.beams().stream().anyMatch(b -> b.beam().group() != null && !b.beam().sameSection());
         if (grouped && (rat == null || !rat.groupsSameSection())) {
             out.append("note: the beams' groups are not used; rationalise: {groups: same_section} makes a group share b × h\n");
         }

@@ -85,16 +85,19 @@ public final class ScheduleInputReader {
             }
             for (int i = 0; i < lines.size(); i++) {
                 var one = results.get(i).oneSection();
+                boolean standardised = doc.has("rationalise");
                 for (var part : results.get(i).parts()) {
-                    if (one != null && !one.fellBack()) {
-                        // one set of forms: the line's parts form a group that shares b x h, free to take
-                        // another section when the schedule standardises (with the envelope of this one)
-                        out.add(new ScheduleBeam(part.problem().id(), lines.get(i).id(), lines.get(i).location(),
-                                part.problem().withSpace(di.space()).withFixedWidth(null)));
+                    if (one != null && !one.fellBack() && standardised) {
+                        // one set of forms: the line's parts are a group sharing b x h, free to take another
+                        // section where the schedule standardises (with the envelope of the line's own)
+                        out.add(new ScheduleBeam(part.problem().id(), "line " + lines.get(i).id(),
+                                lines.get(i).location(), part.problem().withSpace(di.space()).withFixedWidth(null),
+                                null, true));
                     } else {
-                        // the line's last round designed it for this very problem: its own optimum
-                        out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(), part.problem(),
-                                part.outcome()));
+                        // designed with its line for this very problem: its own optimum (a line of one set
+                        // of forms holds each part at the line's section)
+                        out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(),
+                                part.problem(), part.outcome()));
                     }
                 }
             }

@@ -287,7 +287,7 @@ public final class ScheduleSolver {
                     continue;
                 }
                 String g = in.beams().get(i).group();
-                if (rat.groupsSameSection() && g != null) {
+                if ((rat.groupsSameSection() || in.beams().get(i).sameSection()) && g != null) {
                     named.computeIfAbsent(g, x -> new ArrayList<>()).add(i);
                 } else {
                     named.put("\u0000" + i, new ArrayList<>(List.of(i)));
