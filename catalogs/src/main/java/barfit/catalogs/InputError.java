@@ -7,6 +7,8 @@ import barfit.catalogs.yaml.Location;
  * file, the line and column where known, and what was expected. Never carries a stack trace to the user.
  */
 public final class InputError extends RuntimeException {
+    private static final long serialVersionUID = 1L;
+
     private final transient Location location;
 
     public InputError(Location location, String message) {

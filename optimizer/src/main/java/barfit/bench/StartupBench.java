@@ -35,6 +35,8 @@ public final class StartupBench {
 
     /** Why the figure could not be taken, when it could not. */
     public static final class NotMeasured extends Exception {
+        private static final long serialVersionUID = 1L;
+
         public NotMeasured(String why) {
             super(why);
         }
