@@ -181,9 +181,17 @@ public final class ScheduleBench {
 
     private static void delete(Path dir) {
         try (var s = Files.walk(dir)) {
-            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+            s.sorted(Comparator.reverseOrder()).forEach(p -> deleteQuietly(p));
         } catch (IOException e) {
             // a temporary folder left behind is harmless
+        }
+    }
+
+    private static void deleteQuietly(Path p) {
+        try {
+            Files.deleteIfExists(p);
+        } catch (IOException e) {
+            // as above: what cannot be deleted is left behind
         }
     }
 }

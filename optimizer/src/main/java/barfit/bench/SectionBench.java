@@ -41,12 +41,12 @@ public final class SectionBench {
         List<BarSize> bars = List.of("16", "19", "22", "25", "29", "32", "36").stream()
                 .map(s -> c.find(s).orElseThrow()).toList();
         List<Double> depths = new ArrayList<>();
-        for (double h = 400; h <= 800; h += 25) {
-            depths.add(h);
+        for (int h = 400; h <= 800; h += 25) {
+            depths.add((double) h);
         }
         List<Double> spacings = new ArrayList<>();
-        for (double s = 75; s <= 600; s += 25) {
-            spacings.add(s);
+        for (int s = 75; s <= 600; s += 25) {
+            spacings.add((double) s);
         }
         return new SearchSpace(List.of(250.0, 300.0, 350.0, 400.0), depths, bars, bars, 2,
                 List.of(c.find("10").orElseThrow()), List.of(2, 4), spacings);

@@ -60,8 +60,9 @@ public final class StartupBench {
 
     /** Runs {@code launcher design EXAMPLE} once unmeasured, then {@code runs} times, each to its exit. */
     public static Figures run(Path launcher, int runs) throws NotMeasured {
-        Path example = launcher.toAbsolutePath().getParent().resolve(EXAMPLE);
-        if (!Files.isRegularFile(example)) {
+        Path folder = launcher.toAbsolutePath().getParent();
+        Path example = folder == null ? null : folder.resolve(EXAMPLE);
+        if (example == null || !Files.isRegularFile(example)) {
             throw new NotMeasured(EXAMPLE + " is not beside the launcher");
         }
         List<String> command = List.of(launcher.toString(), "design", example.toString());

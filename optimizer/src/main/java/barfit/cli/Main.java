@@ -5,6 +5,7 @@ import java.io.FileDescriptor;
 import java.io.FileOutputStream;
 import java.io.PrintStream;
 import java.io.PrintWriter;
+import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 import java.util.Collections;
 import java.util.LinkedHashMap;
@@ -87,8 +88,9 @@ public final class Main implements Runnable {
         } else {
             COMMANDS.values().forEach(c -> cl.addSubcommand(c.get()));
         }
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
+        // picocli's own messages (usage, option errors) in the platform's charset, as they always were
+        cl.setOut(new PrintWriter(out, true, Charset.defaultCharset()));
+        cl.setErr(new PrintWriter(err, true, Charset.defaultCharset()));
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();
             String name = c.getCommandSpec().qualifiedName();

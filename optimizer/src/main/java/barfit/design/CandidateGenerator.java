@@ -160,7 +160,6 @@ public final class CandidateGenerator {
         }
         double minPair = 2 * tensionSizes.stream().mapToDouble(BarSize::area).min().orElse(0)
                 + 2 * compressionSizes.stream().mapToDouble(BarSize::area).min().orElse(0);
-        BarSize smallest = tensionSizes.stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
         for (double b : p.widths()) {
             for (double h : p.depths()) {
                 if (p.flange() != null && h <= p.flange().thickness()) {

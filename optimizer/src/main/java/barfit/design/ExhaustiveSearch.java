@@ -44,8 +44,6 @@ public final class ExhaustiveSearch {
         long checked = 0;
         java.util.Map<String, Long> perKey = new java.util.HashMap<>();
         Demand demand = new Demand(p.mu(), p.vu());
-        BarSize smallest = p.space().barSizes().stream()
-                .min(java.util.Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
         for (double b : p.widths()) {
             for (double h : p.depths()) {
                 if (p.flange() != null && h <= p.flange().thickness()) {

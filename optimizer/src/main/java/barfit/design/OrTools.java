@@ -94,7 +94,11 @@ public final class OrTools {
         if (url == null || !"jar".equals(url.getProtocol())) {
             throw new IOException("the native libraries are not in a jar: " + url);
         }
-        return base.resolve(jarOf(url).getFileName().toString().replaceFirst("\\.jar$", ""));
+        Path jar = jarOf(url).getFileName();
+        if (jar == null) {
+            throw new IOException("the native libraries' jar has no file name: " + url);
+        }
+        return base.resolve(jar.toString().replaceFirst("\\.jar$", ""));
     }
 
     /** Loads the library from {@code base}, unpacking it there first if needed; false if that cannot be done. */
@@ -176,9 +180,17 @@ public final class OrTools {
             return;
         }
         try (Stream<Path> s = Files.walk(root)) {
-            s.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+            s.sorted(Comparator.reverseOrder()).forEach(p -> deleteQuietly(p));
         } catch (IOException | RuntimeException e) {
             // a leftover temporary folder costs disk space only
+        }
+    }
+
+    private static void deleteQuietly(Path p) {
+        try {
+            Files.deleteIfExists(p);
+        } catch (IOException e) {
+            // as above: what cannot be deleted is left behind
         }
     }
 

@@ -287,7 +287,7 @@ public final class CsvBeamsReader {
         EndCondition ends = empty(endsCell) ? null : EndCondition.byKey(endsCell.text());
         if (ends == null) {
             throw error(endsCell, "ends: expected simple, one-end-continuous, both-ends-continuous or cantilever, got \""
-                    + (endsCell == null ? "" : endsCell.text()) + "\"");
+                    + endsCell.text() + "\"");
         }
         String moment = "factored moment, " + u.unit(Dim.MOMENT);
         Double ml = siOrNull(inRange(r, "m_left", number(r, "m_left", moment), InputLimits.MOMENT), Dim.MOMENT);

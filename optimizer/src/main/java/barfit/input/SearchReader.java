@@ -285,16 +285,16 @@ public final class SearchReader {
                 : new String[] {"concrete_per_m3", "main_bars_per_kg", "stirrups_per_kg", "formwork_per_m2",
                     "depth_premium_per_m", "lap_factor", "currency", "concrete_per_m3_by_fc"};
         YFields f = doc.map("costs", "the cost rates").allowOnly(keys);
-        double concrete = rate(f, keys[0], "concrete, per " + (us ? "yd³" : "m³")).map(v -> us ? v * YD3_PER_M3 : v)
+        double concrete = rate(f, keys[0], "concrete, per " + (us ? "yd³" : "m³")).map(v -> v * (us ? YD3_PER_M3 : 1.0))
                 .orElse(d.concretePerM3());
-        double bars = rate(f, keys[1], "main bars, per " + (us ? "lb" : "kg")).map(v -> us ? v * LB_PER_KG : v)
+        double bars = rate(f, keys[1], "main bars, per " + (us ? "lb" : "kg")).map(v -> v * (us ? LB_PER_KG : 1.0))
                 .orElse(d.mainBarsPerKg());
-        double stirrups = rate(f, keys[2], "stirrups, per " + (us ? "lb" : "kg")).map(v -> us ? v * LB_PER_KG : v)
+        double stirrups = rate(f, keys[2], "stirrups, per " + (us ? "lb" : "kg")).map(v -> v * (us ? LB_PER_KG : 1.0))
                 .orElse(d.stirrupsPerKg());
-        double formwork = rate(f, keys[3], "formwork, per " + (us ? "ft²" : "m²")).map(v -> us ? v * FT2_PER_M2 : v)
+        double formwork = rate(f, keys[3], "formwork, per " + (us ? "ft²" : "m²")).map(v -> v * (us ? FT2_PER_M2 : 1.0))
                 .orElse(d.formworkPerM2());
         double premium = rate(f, keys[4], "depth premium, per " + (us ? "ft of depth per ft of beam" : "m of depth per m of beam"))
-                .map(v -> us ? v * FT2_PER_M2 : v).orElse(d.depthPremiumPerM());
+                .map(v -> v * (us ? FT2_PER_M2 : 1.0)).orElse(d.depthPremiumPerM());
         double lap = f.optNumber("lap_factor", "the lap and waste factor, 1.0 or more").orElse(d.lapFactor());
         if (lap < 1.0 || lap > 2.0) {
             throw f.error("lap_factor", "expected a lap and waste factor from 1.0 to 2.0, got " + SettingsReader.fmt(lap));

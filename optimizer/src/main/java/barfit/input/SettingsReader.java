@@ -23,7 +23,7 @@ import java.util.Locale;
 /** Reads the project-wide keys every command shares. */
 public final class SettingsReader {
     /** Top-level keys any command accepts; each command reads the ones it needs. */
-    public static final String[] TOP_KEYS = {"units", "code", "concrete", "steel", "bars", "cover", "stirrup",
+    private static final String[] TOP_KEYS = {"units", "code", "concrete", "steel", "bars", "cover", "stirrup",
             "layer_gap", "exposure", "beams", "lines", "search", "costs", "rationalise", "project"};
 
     private SettingsReader() {

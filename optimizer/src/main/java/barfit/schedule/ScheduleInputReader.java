@@ -106,9 +106,9 @@ public final class ScheduleInputReader {
             throw new InputError(doc.location(), "expected at least one beam (beams: or --beams) or line (lines:)");
         }
         Rationalise rat = doc.has("rationalise") ? rationalise(doc) : null;
-        List<String> sources = new ArrayList<>(List.of(file.getFileName().toString()));
+        List<String> sources = new ArrayList<>(List.of(fileName(file)));
         if (csv != null) {
-            sources.add(csv.getFileName().toString());
+            sources.add(fileName(csv));
         }
         return new ScheduleInput(sources, di.settings(), di.space(), di.rates(), di.currency(), di.costs(),
                 di.maxBarSizesPerBeam(), di.barsPerTwoLegs(), out, rat);
@@ -135,5 +135,11 @@ public final class ScheduleInputReader {
                 ? InputLimits.require(r, "formwork_set_cost", InputLimits.SET_COST, UnitSystem.SI,
                         r.nonNegative("formwork_set_cost", "the cost of the forms for one section size")) : 0;
         return new Rationalise(sizes, bars, same, formwork);
+    }
+
+    /** The file's own name as the reports show it (the whole path for one that has none, such as a root). */
+    private static String fileName(Path p) {
+        Path name = p.getFileName();
+        return (name == null ? p : name).toString();
     }
 }

@@ -48,7 +48,6 @@ public final class Sweep {
         SearchSpace space = t.space();
         double top = caps.get(caps.size() - 1);
         Map<Double, Summary> atDepth = new LinkedHashMap<>();
-        Map<Double, Boolean> singlyAt = new LinkedHashMap<>();
         for (double d : space.depths()) {
             if (d > top + 1e-9) {
                 break;
@@ -57,11 +56,11 @@ public final class Sweep {
         }
         // where the hangers alone first work (deeper still they keep working), caps below need compression steel
         Double singly = null;
-        for (double d : atDepth.keySet()) {
-            Summary s = atDepth.get(d);
+        for (Map.Entry<Double, Summary> e : atDepth.entrySet()) {
+            double d = e.getKey();
+            Summary s = e.getValue();
             boolean ok = s.feasible() && !s.compressionUsed()
                     || t.design(null, space.withDepths(List.of(d)).withHangersOnly(), t.materials(), cost, false).feasible();
-            singlyAt.put(d, ok);
             if (ok) {
                 singly = d;
                 break;

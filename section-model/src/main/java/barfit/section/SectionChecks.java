@@ -83,7 +83,6 @@ public final class SectionChecks {
             List<CheckResult> out, Trail t) {
         Materials m = s.materials();
         CodeEquations code = s.code();
-        Flange f = s.shape().flange();
         double bw = minSteelWidth(s.shape(), fr.bending(), span);
         String bwNote = bw != s.shape().width()
                 ? "statically determinate with the flange in tension: bw taken as min(bf, 2 bw)" : null;
@@ -446,8 +445,9 @@ public final class SectionChecks {
 
     /** A length in the edition's unit, for notes (mm, or in for inch-pound input). */
     private static String length(double mm, CodeEquations code) {
-        double v = Math.round((code.inchPound() ? mm / 25.4 : mm) * 10) / 10.0;
-        return (v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v)) + (code.inchPound() ? " in" : " mm");
+        long tenths = Math.round((code.inchPound() ? mm / 25.4 : mm) * 10);
+        return (tenths % 10 == 0 ? String.valueOf(tenths / 10) : String.valueOf(tenths / 10.0))
+                + (code.inchPound() ? " in" : " mm");
     }
 
     /**
@@ -461,7 +461,7 @@ public final class SectionChecks {
         }
         if (!f.spanKnown() || Math.abs(f.clearSpan() - span.length()) > 1e-6) {
             throw new IllegalArgumentException("the flange's clear span (" + f.clearSpan() + " mm) is not the span checked ("
-                    + (span == null ? "none" : span.length() + " mm") + "); build the flange with the beam's span");
+                    + span.length() + " mm); build the flange with the beam's span");
         }
     }
 

@@ -298,7 +298,7 @@ public final class SpanChecks {
         Bending b = face == Face.BOTTOM ? Bending.SAGGING : Bending.HOGGING;
         for (BarLayer l : s.layersOn(face)) {
             area += l.area();
-            moment += l.area() * s.depthFromCompression(l, face == Face.BOTTOM ? Bending.SAGGING : Bending.HOGGING);
+            moment += l.area() * s.depthFromCompression(l, b);
         }
         return new double[] {area, area > 0 ? moment / area : 0};
     }

@@ -35,8 +35,6 @@ public final class BeamExhaustive {
         BeamLayout best = null;
         long bestUnits = Long.MAX_VALUE;
         long combos = 0;
-        BarSize smallest = p.space().barSizes().stream()
-                .min(java.util.Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
         List<BeamProblem.Zone> zones = p.zones();
         for (double b : p.widths()) {
             for (double h : p.depths()) {

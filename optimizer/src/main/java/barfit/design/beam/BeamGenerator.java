@@ -978,10 +978,6 @@ public final class BeamGenerator {
         return barCost(bb, n, p.span());
     }
 
-    private List<MidOpt> mids(Frame f, SectionShape shape, List<TopOpt> tops) {
-        return mids(f, shape, tops, (t, bb) -> Double.POSITIVE_INFINITY);
-    }
-
     private List<MidOpt> mids(Frame f, SectionShape shape, List<TopOpt> tops, MidLimit cut) {
         List<MidOpt> out = new ArrayList<>();
         List<Integer> midZones = zoneIndices(BeamProblem.Place.MID);

@@ -374,7 +374,6 @@ public final class ScheduleHtml {
     // ---------------------------------------------------------------- price of standardisation
 
     private static void standardisation(ScheduleResult r, StringBuilder out) {
-        UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
         List<ScheduleResult.StandardisationPoint> pts = new ArrayList<>(r.standardisation());
         pts.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));

@@ -654,7 +654,7 @@ public final class SectionDrawing {
             xs.add(b - x);
             lo = x + 2 * rt;
         }
-        if (ties % 2 == 1) {
+        if (ties % 2 != 0) {
             Double x = pick(b / 2, first, otherOuter, all, used, lo, b - lo, b, rt, tails, ext);
             if (x == null) {
                 x = pick(b / 2, second, List.of(), all, used, lo, b - lo, b, rt, tails, ext);
