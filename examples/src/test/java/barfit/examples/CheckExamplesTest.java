@@ -3,6 +3,8 @@ package barfit.examples;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import barfit.cli.Cli;
+import barfit.golden.Golden;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
@@ -34,14 +36,14 @@ class CheckExamplesTest {
     @MethodSource("examples")
     void runsAsDocumented(Path file) throws IOException {
         int expected = file.getFileName().toString().contains("fails") ? 1 : 0;
-        Run text = Run.of("check", file.toString());
+        Cli text = Cli.run("check", file.toString());
         assertEquals(expected, text.exit(), text.err());
         assertEquals("", text.err());
         assertTrue(text.out().contains("CAUTION"), "every report carries the caution");
         assertTrue(text.out().contains("Calculation trail"));
         Golden.check(golden(file, ".txt"), text.out());
 
-        Run json = Run.of("check", file.toString(), "--format", "json");
+        Cli json = Cli.run("check", file.toString(), "--format", "json");
         assertEquals(expected, json.exit());
         assertEquals("", json.err());
         Golden.check(golden(file, ".json"), json.out());

@@ -3,6 +3,8 @@ package barfit.examples;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import barfit.cli.Cli;
+import barfit.golden.Golden;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
@@ -35,11 +37,11 @@ class DesignExamplesTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("examples")
     void runsAsDocumented(Path file) throws IOException {
-        Run text = Run.of("design", file.toString(), "--alternatives", "2");
+        Cli text = Cli.run("design", file.toString(), "--alternatives", "2");
         assertEquals("", text.err());
         assertTrue(text.out().contains("CAUTION"));
         Golden.check(golden(file, ".txt"), text.out());
-        Run json = Run.of("design", file.toString(), "--format", "json", "--alternatives", "2");
+        Cli json = Cli.run("design", file.toString(), "--format", "json", "--alternatives", "2");
         assertEquals(text.exit(), json.exit());
         assertEquals("", json.err());
         Golden.check(golden(file, ".json"), json.out());

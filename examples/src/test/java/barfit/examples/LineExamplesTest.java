@@ -3,6 +3,8 @@ package barfit.examples;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import barfit.cli.Cli;
+import barfit.golden.Golden;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
@@ -20,11 +22,11 @@ class LineExamplesTest {
 
     @Test
     void analyseAndDesignTheLines() throws IOException {
-        Run text = Run.of("analyse", FILE);
+        Cli text = Cli.run("analyse", FILE);
         assertEquals(0, text.exit(), text.err());
         assertTrue(text.out().contains("CAUTION"));
         Golden.check("lines/ashgrove-depot-lines-si.analyse.txt", text.out());
-        Run jsonRun = Run.of("analyse", FILE, "--format", "json");
+        Cli jsonRun = Cli.run("analyse", FILE, "--format", "json");
         Golden.check("lines/ashgrove-depot-lines-si.analyse.json", jsonRun.out());
         JsonNode root = new ObjectMapper().readTree(jsonRun.out());
         assertEquals(2, root.get("lines").size());
@@ -40,21 +42,21 @@ class LineExamplesTest {
             }
         }
         // the committed plot is the one the command draws
-        Run plot = Run.of("analyse", FILE, "--line", "L1-B", "--plot", dir.toString());
+        Cli plot = Cli.run("analyse", FILE, "--line", "L1-B", "--plot", dir.toString());
         assertEquals(0, plot.exit(), plot.err());
         assertEquals(Files.readString(Path.of("lines/L1-B-envelope.svg")),
                 Files.readString(dir.resolve("L1-B-envelope.svg")), "regenerate with ./barfit analyse " + FILE
                         + " --line L1-B --plot examples/lines --force");
-        Run design = Run.of("design", FILE);
+        Cli design = Cli.run("design", FILE);
         assertEquals(0, design.exit(), design.err());
         assertTrue(design.out().contains("Line L1-B: one section for the whole line"));
         assertTrue(design.out().contains("Line L1-4: designed span by span from its analysis"));
         Golden.check("lines/ashgrove-depot-lines-si.design.txt", design.out());
-        Golden.check("lines/ashgrove-depot-lines-si.design.json", Run.of("design", FILE, "--format", "json").out());
-        Run compare = Run.of("compare", FILE, "--beam", "L1-B/span 2");
+        Golden.check("lines/ashgrove-depot-lines-si.design.json", Cli.run("design", FILE, "--format", "json").out());
+        Cli compare = Cli.run("compare", FILE, "--beam", "L1-B/span 2");
         assertEquals(0, compare.exit(), compare.err());
         assertTrue(compare.out().contains("Beam L1-B/span 2"));
-        Run schedule = Run.of("schedule", FILE, "--quiet");
+        Cli schedule = Cli.run("schedule", FILE, "--quiet");
         assertEquals(0, schedule.exit(), schedule.err());
         assertTrue(schedule.out().contains("L1-4/span 3"));
     }
@@ -63,7 +65,7 @@ class LineExamplesTest {
     void theLibraryAsLinesIsScheduled() throws IOException {
         // schedule/library-lines-si.yaml: 24 lines (7 per level, two stair trimmers, a skylight trimmer),
         // 56 parts with the two canopies, rationalised to at most 6 section sizes and 3 bar sizes
-        Run r = Run.of("schedule", "schedule/library-lines-si.yaml", "--format", "json", "--quiet");
+        Cli r = Cli.run("schedule", "schedule/library-lines-si.yaml", "--format", "json", "--quiet");
         assertEquals(0, r.exit(), r.err());
         JsonNode root = new ObjectMapper().readTree(r.out());
         assertEquals(56, root.get("beams").size());

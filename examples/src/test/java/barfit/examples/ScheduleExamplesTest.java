@@ -5,6 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import barfit.cli.Cli;
+import barfit.golden.Golden;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -55,12 +57,12 @@ class ScheduleExamplesTest {
 
     /** The library on two threads, written once and looked at by several tests. */
     static Path library;
-    static Run libraryRun;
+    static Cli libraryRun;
 
     @BeforeAll
     static void runLibrary() {
         library = tmp.resolve("library");
-        libraryRun = Run.of("schedule", LIBRARY.toString(), "--beams", LIBRARY_BEAMS.toString(), "--out",
+        libraryRun = Cli.run("schedule", LIBRARY.toString(), "--beams", LIBRARY_BEAMS.toString(), "--out",
                 library.toString(), "--quiet", "--threads", "2");
     }
 
@@ -79,7 +81,7 @@ class ScheduleExamplesTest {
     @Test
     void officeDesignsEveryBeamWithinTheLimits() throws IOException {
         Path out = tmp.resolve("office");
-        Run r = Run.of("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet");
+        Cli r = Cli.run("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet");
         assertEquals(0, r.exit(), r.err());
         assertEquals("", r.err());
         JsonNode beams = new ObjectMapper(new YAMLFactory()).readTree(OFFICE.toFile()).get("beams");
@@ -105,7 +107,7 @@ class ScheduleExamplesTest {
      * schedule.json (what --format json prints) and standardisation.svg byte for byte, and report.html by its
      * SHA-256 (2.6 MB for the library: too large to keep; a mismatch leaves it under target/golden-actual).
      */
-    static void checkGolden(String name, Run run, Path out) throws IOException {
+    static void checkGolden(String name, Cli run, Path out) throws IOException {
         Golden.check("schedule/" + name + "/stdout.txt", run.out().replace(out.toString(), "OUT"));
         for (String f : List.of("schedule.csv", "schedule.json", "standardisation.svg")) {
             Golden.check(Golden.DIR.resolve("schedule/" + name + "/" + f), Files.readAllBytes(out.resolve(f)));
@@ -114,7 +116,7 @@ class ScheduleExamplesTest {
     }
 
     /** Checks a rationalised schedule written into {@code out}; returns its schedule.json. */
-    static JsonNode checkSchedule(Run run, Path out, List<String> ids, Map<String, String> groups, int maxSections,
+    static JsonNode checkSchedule(Cli run, Path out, List<String> ids, Map<String, String> groups, int maxSections,
             int maxBars, double formworkSet) throws IOException {
         for (String f : OUTPUTS) {
             assertTrue(Files.isRegularFile(out.resolve(f)), f + " written");
@@ -196,7 +198,7 @@ class ScheduleExamplesTest {
         }
         Files.writeString(yaml, text.toString());
         Path out = dir.resolve("out");
-        Run r = Run.of("schedule", yaml.toString(), "--out", out.toString(), "--quiet", "--threads", "2");
+        Cli r = Cli.run("schedule", yaml.toString(), "--out", out.toString(), "--quiet", "--threads", "2");
         assertEquals(0, r.exit(), r.err());
         ObjectNode fromCsv = (ObjectNode) JSON.readTree(library.resolve("schedule.json").toFile());
         ObjectNode fromYaml = (ObjectNode) JSON.readTree(out.resolve("schedule.json").toFile());
@@ -252,7 +254,7 @@ class ScheduleExamplesTest {
     void repeatableWhateverTheThreads() throws IOException {
         assertEquals(0, libraryRun.exit(), libraryRun.err());
         Path again = tmp.resolve("library-one-thread");
-        Run r = Run.of("schedule", LIBRARY.toString(), "--beams", LIBRARY_BEAMS.toString(), "--out", again.toString(),
+        Cli r = Cli.run("schedule", LIBRARY.toString(), "--beams", LIBRARY_BEAMS.toString(), "--out", again.toString(),
                 "--quiet", "--threads", "1");
         assertEquals(0, r.exit(), r.err());
         for (String f : OUTPUTS) {
@@ -268,7 +270,7 @@ class ScheduleExamplesTest {
         Files.createDirectories(out);
         Path existing = out.resolve("schedule.csv");
         Files.writeString(existing, "an earlier schedule\n");
-        Run refused = Run.of("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet");
+        Cli refused = Cli.run("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet");
         assertEquals(2, refused.exit(), refused.err());
         assertEquals("", refused.out());
         String err = refused.err().strip();
@@ -280,7 +282,7 @@ class ScheduleExamplesTest {
             assertEquals(List.of(existing), files.toList(), "nothing else written");
         }
 
-        Run forced = Run.of("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet", "--force");
+        Cli forced = Cli.run("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet", "--force");
         assertEquals(0, forced.exit(), forced.err());
         String csv = Files.readString(existing);
         assertTrue(csv.startsWith("id,group,status,"), "replaced by the schedule: " + csv.lines().findFirst());

@@ -3,6 +3,8 @@ package barfit.examples;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import barfit.cli.Cli;
+import barfit.golden.Golden;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Files;
@@ -22,10 +24,10 @@ class StudyExamplesTest {
 
     @Test
     void compareGivesEveryOptionAndARecommendation() throws Exception {
-        Run text = Run.of("compare", FILE);
+        Cli text = Cli.run("compare", FILE);
         assertEquals(0, text.exit(), text.err());
         assertTrue(text.out().contains("recommended:"));
-        Run json = Run.of("compare", FILE, "--format", "json");
+        Cli json = Cli.run("compare", FILE, "--format", "json");
         JsonNode beam = new ObjectMapper().readTree(json.out()).get("beams").get(0);
         java.util.Set<String> kinds = new java.util.HashSet<>();
         for (JsonNode o : beam.get("options")) {
@@ -46,10 +48,10 @@ class StudyExamplesTest {
 
     @Test
     void sweepDrawsTheCommittedPlot() throws Exception {
-        Run text = Run.of("sweep", FILE);
+        Cli text = Cli.run("sweep", FILE);
         assertEquals(0, text.exit(), text.err());
         Golden.check("studies/transfer-girder-si.sweep.txt", text.out());
-        Run json = Run.of("sweep", FILE, "--format", "json");
+        Cli json = Cli.run("sweep", FILE, "--format", "json");
         assertEquals(0, json.exit(), json.err());
         JsonNode beam = new ObjectMapper().readTree(json.out()).get("beams").get(0);
         for (String key : new String[] {"id", "points", "shallowest_feasible", "compression_needed_below"}) {
@@ -67,7 +69,7 @@ class StudyExamplesTest {
         }
         Golden.check("studies/transfer-girder-si.sweep.json", json.out());
         Path drawn = tmp.resolve("sweep.svg");
-        Run plot = Run.of("sweep", FILE, "--plot", drawn.toString());
+        Cli plot = Cli.run("sweep", FILE, "--plot", drawn.toString());
         assertEquals(0, plot.exit(), plot.err());
         String svg = Files.readString(drawn);
         var factory = DocumentBuilderFactory.newInstance();
@@ -77,7 +79,7 @@ class StudyExamplesTest {
         assertTrue(svg.contains("Beam TG-1"));
         assertTrue(svg.contains("shallowest feasible"));
         Golden.check(PLOT, Files.readAllBytes(drawn));
-        Run csv = Run.of("sweep", FILE, "--csv");
+        Cli csv = Cli.run("sweep", FILE, "--csv");
         assertTrue(csv.out().startsWith("beam,cap_mm,feasible,cost"));
         Golden.check("studies/transfer-girder-si.sweep.csv", csv.out());
     }

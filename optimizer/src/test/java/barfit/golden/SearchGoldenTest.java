@@ -1,11 +1,9 @@
 package barfit.golden;
 
-import static org.junit.jupiter.api.Assertions.fail;
-
 import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.DesignOutcome;
-import barfit.design.RandomProblemsAccess;
+import barfit.design.RandomProblems;
 import barfit.design.SectionDesigner;
 import barfit.design.SectionProblem;
 import barfit.design.SolverOptions;
@@ -18,13 +16,7 @@ import barfit.report.DesignText;
 import barfit.report.Json;
 import barfit.section.CodeEquations;
 import barfit.units.UnitSystem;
-import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -33,19 +25,19 @@ import org.junit.jupiter.api.Test;
  * instance with its status, cost in cost units, a section's layout in words and a hash of the full JSON
  * output.
  * A change meant to keep behaviour (a refactor, a speed-up) must leave this file unchanged; rewrite it
- * with {@code -Dgolden.update=true} only when the answers are meant to change, and say why in the commit.
+ * with {@code -Dgolden.update=true} only when the answers are meant to change, and say why in the commit
+ * ({@link Golden} compares and rewrites it).
  */
 class SearchGoldenTest {
-    static final Path GOLDEN = Path.of("src/test/resources/golden/search-answers.txt");
     static final CostModel COST = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
 
     @Test
-    void answersOnSeededRandomProblemsAreUnchanged() throws IOException {
+    void answersOnSeededRandomProblemsAreUnchanged() {
         StringBuilder out = new StringBuilder();
         SectionDesigner sections = new SectionDesigner(COST, new SolverOptions(30, 1, 1), UnitSystem.SI);
         Random rnd = new Random(2_026_12L);
         for (int i = 0; i < 240; i++) {
-            SectionProblem p = i % 3 == 2 ? RandomProblemsAccess.medium(rnd) : RandomProblemsAccess.small(rnd);
+            SectionProblem p = i % 3 == 2 ? RandomProblems.medium(rnd) : RandomProblems.small(rnd);
             DesignOutcome o = sections.design(p, i % 5 == 0 ? 2 : 0);
             String json = Json.write(DesignJson.beam(o, UnitSystem.SI, i % 7 == 0));
             out.append("section ").append(i).append(' ').append(o.status()).append(' ')
@@ -63,36 +55,11 @@ class SearchGoldenTest {
                     .append(o.feasible() ? CostModel.units(o.best().cost().total()) : -1).append(' ')
                     .append(hash(json)).append('\n');
         }
-        String actual = out.toString().replace("\r", "");
-        if (Boolean.getBoolean("golden.update")) {
-            Files.createDirectories(GOLDEN.getParent());
-            Files.writeString(GOLDEN, actual, StandardCharsets.UTF_8);
-            return;
-        }
-        if (!Files.isRegularFile(GOLDEN)) {
-            fail("no golden file " + GOLDEN + "; write it with -Dgolden.update=true");
-        }
-        String[] want = Files.readString(GOLDEN, StandardCharsets.UTF_8).split("\n");
-        String[] got = actual.split("\n");
-        for (int k = 0; k < Math.max(want.length, got.length); k++) {
-            String w = k < want.length ? want[k] : "(none)";
-            String g = k < got.length ? got[k] : "(none)";
-            if (!w.equals(g)) {
-                Path kept = Path.of("target/golden-actual/search-answers.txt");
-                Files.createDirectories(kept.getParent());
-                Files.writeString(kept, actual, StandardCharsets.UTF_8);
-                fail("search answers changed at line " + (k + 1) + ":\n  was " + w + "\n  now " + g
-                        + "\nthe whole output is in " + kept + "; if intended, rewrite with -Dgolden.update=true");
-            }
-        }
+        Golden.check("search-answers.txt", out.toString().replace("\r", ""));
     }
 
+    /** The first 8 bytes of the output's SHA-256, in hex: enough to see that it changed. */
     static String hash(String s) {
-        try {
-            byte[] d = MessageDigest.getInstance("SHA-256").digest(s.getBytes(StandardCharsets.UTF_8));
-            return HexFormat.of().formatHex(d, 0, 8);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
+        return Golden.sha256(s.getBytes(StandardCharsets.UTF_8)).substring(0, 16);
     }
 }

@@ -1,4 +1,4 @@
-package barfit.examples;
+package barfit.golden;
 
 import static org.junit.jupiter.api.Assertions.fail;
 
@@ -13,46 +13,52 @@ import java.util.HexFormat;
 import java.util.List;
 
 /**
- * Golden files: what each example prints and writes, kept under {@code src/test/resources/golden/} and
- * compared byte for byte. Run with {@code -Dgolden.update=true} to rewrite them from the current output
- * instead (then review the difference with git). On a mismatch the output is also written under
- * {@code target/golden-actual/} with the same name, for a diff.
+ * Golden files: what a run prints and writes, kept under the module's {@code src/test/resources/golden/}
+ * and compared byte for byte (the examples' outputs, the searches' answers on seeded random problems).
+ * Run with {@code -Dgolden.update=true} to rewrite them from the current output instead (then review the
+ * difference with git). On a mismatch the output is also written under {@code target/golden-actual/} with
+ * the same name, for a diff. Shared with the examples module through the optimizer's test jar.
  */
-final class Golden {
-    static final Path DIR = Path.of("src/test/resources/golden");
+public final class Golden {
+    /** Paths are relative to the module the tests run in (Maven runs each module's tests in its folder). */
+    public static final Path DIR = Path.of("src/test/resources/golden");
     static final Path ACTUAL = Path.of("target/golden-actual");
     static final String UPDATE_PROPERTY = "golden.update";
-    static final String HOW_TO_UPDATE = "if the change is intended, rewrite the golden files with "
-            + "`mvn -B verify -Dgolden.update=true` (or `mvn -B test -pl examples -am -Dgolden.update=true`) and review "
-            + "`git diff examples/src/test/resources/golden examples/studies`";
 
     private Golden() {
     }
 
-    static boolean updating() {
+    /** What to do when the output changed, naming the module the tests run in. */
+    static String howToUpdate() {
+        String m = module();
+        return "if the change is intended, rewrite the golden files with `mvn -B verify -Dgolden.update=true` (or "
+                + "`mvn -B test -pl " + m + " -am -Dgolden.update=true`) and review `git diff " + m + "`";
+    }
+
+    public static boolean updating() {
         return Boolean.parseBoolean(System.getProperty(UPDATE_PROPERTY, "false"));
     }
 
     /** The output {@code actual} must equal the golden file {@code name} (a path under the golden folder). */
-    static void check(String name, String actual) {
+    public static void check(String name, String actual) {
         check(DIR.resolve(name), actual.getBytes(StandardCharsets.UTF_8));
     }
 
     /** Compares {@code actual} with the file {@code golden}, or rewrites the file when updating. */
-    static void check(Path golden, byte[] actual) {
+    public static void check(Path golden, byte[] actual) {
         if (updating()) {
             write(golden, actual);
             return;
         }
         if (!Files.isRegularFile(golden)) {
             keepActual(golden, actual);
-            fail("no golden file " + shown(golden) + "; the output is in " + shown(kept(golden)) + "; " + HOW_TO_UPDATE);
+            fail("no golden file " + shown(golden) + "; the output is in " + shown(kept(golden)) + "; " + howToUpdate());
         }
         byte[] expected = read(golden);
         if (!java.util.Arrays.equals(expected, actual)) {
             Path kept = keepActual(golden, actual);
             fail(shown(golden) + " differs from the output (" + firstDifference(expected, actual) + "); the output is in "
-                    + shown(kept) + "; " + HOW_TO_UPDATE);
+                    + shown(kept) + "; " + howToUpdate());
         }
     }
 
@@ -60,18 +66,18 @@ final class Golden {
      * For an output too large to keep in the repository: its SHA-256 must equal the one in the golden file
      * {@code name + ".sha256"}.
      */
-    static void checkDigest(String name, byte[] actual) {
+    public static void checkDigest(String name, byte[] actual) {
         Path golden = DIR.resolve(name + ".sha256");
         String line = sha256(actual) + "  " + Path.of(name).getFileName() + "\n";
         if (!updating() && Files.isRegularFile(golden) && !new String(read(golden), StandardCharsets.UTF_8).equals(line)) {
             Path kept = keepActual(DIR.resolve(name), actual);
             fail(name + " differs from the output whose SHA-256 is in " + shown(golden) + "; the output is in "
-                    + shown(kept) + "; " + HOW_TO_UPDATE);
+                    + shown(kept) + "; " + howToUpdate());
         }
         check(golden, line.getBytes(StandardCharsets.UTF_8));
     }
 
-    static String sha256(byte[] data) {
+    public static String sha256(byte[] data) {
         try {
             return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(data));
         } catch (NoSuchAlgorithmException e) {
@@ -111,9 +117,15 @@ final class Golden {
         return ACTUAL.resolve((golden.startsWith(DIR) ? DIR.relativize(golden) : golden.getFileName()).toString());
     }
 
-    /** A path in the examples module as seen from the repository's root, where the update command runs. */
+    /** A path in the module as seen from the repository's root, where the update command runs. */
     private static String shown(Path p) {
-        return "examples/" + p.toString().replace('\\', '/');
+        return module() + "/" + p.toString().replace('\\', '/');
+    }
+
+    /** The module the tests run in: Maven runs them in the module's folder. */
+    private static String module() {
+        Path here = Path.of("").toAbsolutePath().getFileName();
+        return here == null ? "." : here.toString();
     }
 
     private static byte[] read(Path p) {
