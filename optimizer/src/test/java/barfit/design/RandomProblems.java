@@ -15,18 +15,22 @@ import java.util.List;
 import java.util.Random;
 import java.util.TreeSet;
 
-/** Seeded random small design problems (invented data, for cross-checks only). */
-final class RandomProblems {
+/**
+ * Seeded random small design problems (invented data, for cross-checks only), and the draws they are
+ * made of, which the random spans ({@code RandomBeams}) share.
+ */
+public final class RandomProblems {
     static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615m").orElseThrow();
 
     private RandomProblems() {
     }
 
-    static BarSize bar(String s) {
+    public static BarSize bar(String s) {
         return BARS.find(s).orElseThrow();
     }
 
-    static List<Double> pick(Random r, double from, double to, double step, int count) {
+    /** {@code count} distinct values from {@code from} to {@code to} in steps of {@code step}, ascending. */
+    public static List<Double> pick(Random r, double from, double to, double step, int count) {
         TreeSet<Double> set = new TreeSet<>();
         int n = (int) Math.round((to - from) / step) + 1;
         while (set.size() < count) {
@@ -35,7 +39,8 @@ final class RandomProblems {
         return new ArrayList<>(set);
     }
 
-    static List<BarSize> bars(Random r, String[] pool, int count) {
+    /** {@code count} distinct sizes of {@code pool}, in the pool's order. */
+    public static List<BarSize> bars(Random r, String[] pool, int count) {
         TreeSet<Integer> idx = new TreeSet<>();
         while (idx.size() < count) {
             idx.add(r.nextInt(pool.length));
@@ -48,7 +53,7 @@ final class RandomProblems {
     }
 
     /** Wider spaces: more widths, depths and sizes, up to three layers, either edition's equations. */
-    static SectionProblem medium(Random r) {
+    public static SectionProblem medium(Random r) {
         SectionProblem p = small(r);
         List<Double> widths = pick(r, 200, 500, 50, 2 + r.nextInt(3));
         List<Double> depths = pick(r, 300, 1000, 50, 3 + r.nextInt(5));
@@ -63,7 +68,7 @@ final class RandomProblems {
                 p.vu(), p.span(), cap, null, p.flange(), p.costLength());
     }
 
-    static SectionProblem small(Random r) {
+    public static SectionProblem small(Random r) {
         double fc = new double[] {21, 25, 28, 35, 42}[r.nextInt(5)];
         double fy = new double[] {420, 420, 500}[r.nextInt(3)];
         Materials m = new Materials(fc, fy, Math.min(fy, 420), 20, 1.0);

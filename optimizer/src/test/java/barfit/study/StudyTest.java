@@ -47,7 +47,7 @@ class StudyTest {
         ExhaustiveSearch oracle = new ExhaustiveSearch(COST);
         int compared = 0;
         for (int i = 0; i < 60; i++) {
-            SectionProblem p = barfit.design.RandomProblemsAccess.small(r);
+            SectionProblem p = barfit.design.RandomProblems.small(r);
             List<Double> depths = p.space().depths();
             double cap = depths.get(depths.size() / 2);
             SectionProblem q = perMetre(p, cap);
@@ -80,7 +80,7 @@ class StudyTest {
         Random r = new Random(56);
         SectionDesigner designer = new SectionDesigner(COST, OPTIONS, UnitSystem.SI);
         for (int i = 0; i < 25; i++) {
-            SectionProblem p = perMetre(barfit.design.RandomProblemsAccess.small(r), null);
+            SectionProblem p = perMetre(barfit.design.RandomProblems.small(r), null);
             List<Double> caps = new ArrayList<>(p.space().depths());
             Sweep.Result s = Sweep.run(new SectionTarget(p, OPTIONS, UnitSystem.SI), caps, COST);
             double previous = Double.POSITIVE_INFINITY;

@@ -1,7 +1,9 @@
 package barfit.design.beam;
 
-import barfit.catalogs.BarCatalog;
-import barfit.catalogs.BarCatalogs;
+import static barfit.design.RandomProblems.bar;
+import static barfit.design.RandomProblems.bars;
+import static barfit.design.RandomProblems.pick;
+
 import barfit.catalogs.BarSize;
 import barfit.design.SearchSpace;
 import barfit.section.CodeEquations;
@@ -11,29 +13,12 @@ import barfit.section.Exposure;
 import barfit.section.Flange;
 import barfit.section.Materials;
 import barfit.section.SpanChecks;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
-import java.util.TreeSet;
 
 /** Seeded random small spans (invented data, for cross-checks only). */
 public final class RandomBeams {
-    static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615m").orElseThrow();
-
     private RandomBeams() {
-    }
-
-    static BarSize bar(String s) {
-        return BARS.find(s).orElseThrow();
-    }
-
-    static List<Double> pick(Random r, double from, double to, double step, int count) {
-        TreeSet<Double> set = new TreeSet<>();
-        int n = (int) Math.round((to - from) / step) + 1;
-        while (set.size() < count) {
-            set.add(from + step * r.nextInt(n));
-        }
-        return new ArrayList<>(set);
     }
 
     public static BeamProblem small(Random r) {
@@ -42,14 +27,7 @@ public final class RandomBeams {
         Detailing det = new Detailing(40, bar("10"), 25, Exposure.INTERIOR);
         List<Double> widths = pick(r, 250, 400, 50, 1 + r.nextInt(2));
         List<Double> depths = pick(r, 350, 750, 50, 2 + r.nextInt(2));
-        String[] pool = {"16", "19", "22", "25", "29"};
-        TreeSet<Integer> idx = new TreeSet<>();
-        int k = 1 + r.nextInt(2);
-        while (idx.size() < k) {
-            idx.add(r.nextInt(pool.length));
-        }
-        List<BarSize> sizes = new ArrayList<>();
-        idx.forEach(i -> sizes.add(bar(pool[i])));
+        List<BarSize> sizes = bars(r, new String[] {"16", "19", "22", "25", "29"}, 1 + r.nextInt(2));
         SearchSpace space = new SearchSpace(widths, depths, sizes, sizes, 1 + r.nextInt(2), List.of(bar("10")),
                 r.nextBoolean() ? List.of(2) : List.of(2, 4), pick(r, 100, 300, 50, 2 + r.nextInt(2)));
         EndCondition ends = EndCondition.values()[r.nextInt(4)];

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import barfit.catalogs.BarSize;
+import barfit.design.RandomProblems;
 import barfit.design.SolverOptions;
 import barfit.section.BeamSection;
 import barfit.section.Bending;
@@ -32,11 +33,11 @@ import org.junit.jupiter.api.Test;
  */
 class SpanRulesTest {
     private static final Materials M = new Materials(28, 420, 420, 20, 1.0);
-    private static final Detailing DET = new Detailing(40, RandomBeams.bar("10"), 25, Exposure.INTERIOR);
+    private static final Detailing DET = new Detailing(40, RandomProblems.bar("10"), 25, Exposure.INTERIOR);
 
     private static BeamProblem span(double l, EndCondition ends, Double vl, Double vr, SpanChecks.ServiceLoads service) {
-        var space = new barfit.design.SearchSpace(List.of(300.0), List.of(500.0), List.of(RandomBeams.bar("25")),
-                List.of(RandomBeams.bar("25")), 1, List.of(RandomBeams.bar("10")), List.of(2), List.of(100.0, 200.0));
+        var space = new barfit.design.SearchSpace(List.of(300.0), List.of(500.0), List.of(RandomProblems.bar("25")),
+                List.of(RandomProblems.bar("25")), 1, List.of(RandomProblems.bar("10")), List.of(2), List.of(100.0, 200.0));
         Double ml = ends == EndCondition.CANTILEVER || ends == EndCondition.BOTH_ENDS_CONTINUOUS ? -100e6 : null;
         Double mr = ends == EndCondition.BOTH_ENDS_CONTINUOUS ? -100e6 : null;
         Double mm = ends == EndCondition.CANTILEVER ? null : 80e6;
@@ -87,7 +88,7 @@ class SpanRulesTest {
         // more, at closer spacing). On a 2 m span continuous at both ends, half the span (1000 mm) is less:
         // the bars must run ld past the face all the same.
         BeamProblem p = span(2000, EndCondition.BOTH_ENDS_CONTINUOUS, 100e3, 100e3, null);
-        Extension e = Extension.of(p, 250, 500, DET, RandomBeams.bar("29"));
+        Extension e = Extension.of(p, 250, 500, DET, RandomProblems.bar("29"));
         assertTrue(e.length() >= 1207 - 1, "extension " + e.length());
         assertTrue(e.length() >= e.ld());
         assertTrue(e.length() > 1000, "not cut at mid-span");
