@@ -102,7 +102,6 @@ public final class LineSpans {
      * Null when no single section carries every part.
      */
     private Result oneSection(LineInput in, int alternatives) {
-        int n = in.spans().size();
         double ec = Deflection.ec(settings.materials(), settings.code());
         List<SectionShape> frames = new ArrayList<>();
         for (double b : space.widths()) {
