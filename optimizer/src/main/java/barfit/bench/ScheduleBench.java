@@ -137,11 +137,12 @@ public final class ScheduleBench {
         volatile long curveStart;
 
         @Override
-        public void update(String phase, int done, int total) {
-            if (curveStart == 0 && phase.startsWith("price of standardisation")) {
+        public void update(barfit.schedule.Progress.Phase phase, int done, int total) {
+            if (curveStart == 0 && phase.step() == barfit.schedule.Progress.Step.STANDARDISATION) {
                 curveStart = System.nanoTime();
             }
-            if (curveStart == 0 && phase.startsWith("rationalising") && phase.contains("any number")) {
+            if (curveStart == 0 && phase.step() == barfit.schedule.Progress.Step.BAR_SIZE_SETS
+                    && phase.maxSizes() == barfit.schedule.Progress.Phase.ANY_NUMBER) {
                 curveStart = System.nanoTime(); // the curve starts with the schedule without a size limit
             }
         }

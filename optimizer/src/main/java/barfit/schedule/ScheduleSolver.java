@@ -47,7 +47,7 @@ public final class ScheduleSolver {
         long t0 = System.nanoTime();
         List<ScheduleBeam> beams = in.beams();
         BeamDesigner designer = new BeamDesigner(cost, options, in.settings().units());
-        List<BeamDesigner.Outcome> own = parallel(beams.size(), "designing beams",
+        List<BeamDesigner.Outcome> own = parallel(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
                 i -> beams.get(i).designed() != null ? beams.get(i).designed()
                         : designer.design(beams.get(i).problem(), 0));
         double unconstrained = 0;
@@ -68,12 +68,12 @@ public final class ScheduleSolver {
     }
 
     /** Runs {@code task} for 0..n-1 on the solver's threads; results in index order whatever the timing. */
-    <T> List<T> parallel(int n, String phase, IntFunction<T> task) {
+    <T> List<T> parallel(int n, Progress.Phase phase, IntFunction<T> task) {
         return parallel(n, phase, task, progress);
     }
 
-    /** As {@link #parallel(int, String, IntFunction)}, reporting to {@code report} (quiet for small inner batches). */
-    <T> List<T> parallel(int n, String phase, IntFunction<T> task, Progress report) {
+    /** As {@link #parallel(int, Progress.Phase, IntFunction)}, reporting to {@code report} (quiet for small inner batches). */
+    <T> List<T> parallel(int n, Progress.Phase phase, IntFunction<T> task, Progress report) {
         AtomicInteger done = new AtomicInteger();
         report.update(phase, 0, n);
         if (threads == 1 || n < 2) {
@@ -199,7 +199,7 @@ public final class ScheduleSolver {
                 generators.add(own.get(i).feasible() ? new BeamGenerator(beams.get(i).problem(), cost) : null);
                 exact.add(new BeamGenerator.PairTable[sizes.size()]);
             }
-            lower = parallel(beams.size(), "bounding sizes", this::lowerBoundsOf);
+            lower = parallel(beams.size(), Progress.Phase.of(Progress.Step.BOUNDING_SIZES), this::lowerBoundsOf);
             buildGroups();
             dropGroupsWithoutCommonSize();
             int k = rat.maxSectionSizes() == null ? sizes.size() : rat.maxSectionSizes();
@@ -246,7 +246,7 @@ public final class ScheduleSolver {
                 }
             }
             List<Integer> beams = new ArrayList<>(byBeam.keySet());
-            List<BeamGenerator.PairTable[]> got = parallel(beams.size(), "pricing sizes", j -> {
+            List<BeamGenerator.PairTable[]> got = parallel(beams.size(), Progress.Phase.of(Progress.Step.PRICING_SIZES), j -> {
                 int i = beams.get(j);
                 BeamGenerator.PairTable[] t = new BeamGenerator.PairTable[sizes.size()];
                 for (int s : new java.util.TreeSet<>(byBeam.get(i))) {
@@ -602,9 +602,8 @@ public final class ScheduleSolver {
             int pruned = 0;
             int considered = 0;
             for (int idx : order) {
-                progress.update(k >= sizes.size() ? "rationalising: bar-size sets, any number of sizes"
-                        : "rationalising: bar-size sets for " + k + (k == 1 ? " size" : " sizes"), considered++,
-                        sets.size());
+                progress.update(new Progress.Phase(Progress.Step.BAR_SIZE_SETS, k >= sizes.size()
+                        ? Progress.Phase.ANY_NUMBER : k), considered++, sets.size());
                 long qb = quickBound(matrix(sets.get(idx)), fixed); // bounds only rise as pricing goes on
                 if (qb == KMedian.NONE) {
                     continue;
@@ -660,7 +659,7 @@ public final class ScheduleSolver {
                     hint = s.result().assignment();
                     bars = s.bars();
                 }
-                progress.update("price of standardisation", k, most);
+                progress.update(Progress.Phase.of(Progress.Step.STANDARDISATION), k, most);
                 if (s.result() == null) {
                     out.add(new ScheduleResult.StandardisationPoint(k, Double.NaN, Proof.Status.INFEASIBLE, List.of()));
                 } else {
@@ -706,7 +705,7 @@ public final class ScheduleSolver {
                     }
                 }
             }
-            List<BeamDesigner.Outcome> outcomes = parallel(beams.size(), "designing in the chosen sizes", i -> {
+            List<BeamDesigner.Outcome> outcomes = parallel(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_IN_CHOSEN_SIZES), i -> {
                 if (groupFailures.containsKey(i)) {
                     BeamDesigner.Outcome mine = own.get(i);
                     return new BeamDesigner.Outcome(mine.problem(), "infeasible", null, List.of(), mine.proof(),
