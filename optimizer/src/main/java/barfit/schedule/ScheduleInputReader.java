@@ -62,27 +62,9 @@ public final class ScheduleInputReader {
             var byLine = new barfit.design.line.LineSpans(di.settings(), di.space(),
                     new barfit.design.beam.BeamDesigner(cost, options, di.settings().units()), di.maxBarSizesPerBeam(),
                     di.barsPerTwoLegs());
-            List<barfit.design.line.LineSpans.Result> results = new ArrayList<>();
-            var pool = java.util.concurrent.Executors.newFixedThreadPool(Math.max(1, Math.min(threads, lines.size())));
-            try {
-                List<java.util.concurrent.Future<barfit.design.line.LineSpans.Result>> futures = new ArrayList<>();
-                for (var l : lines) {
-                    futures.add(pool.submit(() -> byLine.design(l, 0)));
-                }
-                for (var f : futures) {
-                    results.add(f.get());
-                }
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while designing the lines", e);
-            } catch (java.util.concurrent.ExecutionException e) {
-                if (e.getCause() instanceof RuntimeException re) {
-                    throw re;
-                }
-                throw new IllegalStateException(e.getCause());
-            } finally {
-                pool.shutdownNow();
-            }
+            List<barfit.design.line.LineSpans.Result> results = new Parallel(Math.min(threads, lines.size()),
+                    Progress.NONE).map(lines.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
+                    i -> byLine.design(lines.get(i), 0));
             for (int i = 0; i < lines.size(); i++) {
                 var one = results.get(i).oneSection();
                 boolean standardised = doc.has("rationalise");

@@ -13,11 +13,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.IntFunction;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -35,12 +30,14 @@ public final class ScheduleSolver {
     private final SolverOptions options;
     private final int threads;
     private final Progress progress;
+    private final Parallel pool;
 
     public ScheduleSolver(CostModel cost, SolverOptions options, int threads, Progress progress) {
         this.cost = cost;
         this.options = options;
         this.threads = Math.max(1, threads);
         this.progress = progress;
+        this.pool = new Parallel(threads, progress);
     }
 
     public ScheduleResult solve(ScheduleInput in) {
@@ -69,52 +66,11 @@ public final class ScheduleSolver {
 
     /** Runs {@code task} for 0..n-1 on the solver's threads; results in index order whatever the timing. */
     <T> List<T> parallel(int n, Progress.Phase phase, IntFunction<T> task) {
-        return parallel(n, phase, task, progress);
+        return pool.map(n, phase, task);
     }
 
-    /** As {@link #parallel(int, Progress.Phase, IntFunction)}, reporting to {@code report} (quiet for small inner batches). */
     <T> List<T> parallel(int n, Progress.Phase phase, IntFunction<T> task, Progress report) {
-        AtomicInteger done = new AtomicInteger();
-        report.update(phase, 0, n);
-        if (threads == 1 || n < 2) {
-            List<T> out = new ArrayList<>();
-            for (int i = 0; i < n; i++) {
-                out.add(task.apply(i));
-                report.update(phase, done.incrementAndGet(), n);
-            }
-            return out;
-        }
-        ExecutorService pool = Executors.newFixedThreadPool(Math.min(threads, n), r -> {
-            Thread t = new Thread(r, "barfit-schedule");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            List<Future<T>> futures = new ArrayList<>();
-            for (int i = 0; i < n; i++) {
-                final int k = i;
-                futures.add(pool.submit(() -> {
-                    T v = task.apply(k);
-                    report.update(phase, done.incrementAndGet(), n);
-                    return v;
-                }));
-            }
-            List<T> out = new ArrayList<>();
-            for (Future<T> f : futures) {
-                out.add(f.get());
-            }
-            return out;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted", e);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException re) {
-                throw re;
-            }
-            throw new IllegalStateException(e.getCause());
-        } finally {
-            pool.shutdownNow();
-        }
+        return pool.map(n, phase, task, report);
     }
 
     private ScheduleResult finish(ScheduleInput in, List<ScheduleResult.Beam> beams, double formworkSets,
