@@ -64,7 +64,7 @@ public final class ScheduleJson {
             ObjectNode po = root.putObject("proof");
             var s = p.search();
             po.put("status", p.status().name());
-            po.put("method", s.method());
+            po.put("method", ScheduleWords.method(r));
             if (!p.bounded()) { // no schedule meets the limits: nothing to bound
                 po.putNull("objective");
                 po.putNull("bound");

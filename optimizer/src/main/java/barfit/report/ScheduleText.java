@@ -91,7 +91,7 @@ public final class ScheduleText {
         }
         out.append('\n');
         if (r.proof() != null) {
-            out.append("proof: ").append(proof(r.proof())).append('\n');
+            out.append("proof: ").append(proof(r)).append('\n');
         }
         if (!r.standardisation().isEmpty()) {
             out.append("\nprice of standardisation (least total cost for at most K section sizes):\n");
@@ -144,13 +144,15 @@ public final class ScheduleText {
         return sb.toString();
     }
 
-    public static String proof(Proof<ScheduleResult.Search> p) {
+    public static String proof(ScheduleResult r) {
+        Proof<ScheduleResult.Search> p = r.proof();
         var s = p.search();
         if (p.status() == Proof.Status.INFEASIBLE) {
-            return "INFEASIBLE — " + s.method() + "; the beams are shown at their own optima";
+            return "INFEASIBLE — " + ScheduleWords.method(r) + "; the beams are shown at their own optima";
         }
         return p.status().name() + " — objective " + Money.amount(p.objective()) + ", bound " + Money.amount(p.bound())
-                + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + s.method() + "; bar-size sets: "
+                + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + ScheduleWords.method(r)
+                + "; bar-size sets: "
                 + s.barSetsTotal() + " (" + s.barSetsSolved() + " solved to optimality, " + s.barSetsPruned()
                 + " ruled out by a bound); "
                 + s.pairsEvaluated() + " (beam, size) pairs priced exactly; " + p.workers()

@@ -175,8 +175,8 @@ final class BarSetSearch {
         while (true) {
             long[][] cost = costMatrix(bars);
             long setBound = quickBound(cost, formworkSet);
-            if (setBound == KMedian.NONE) {
-                return KMedian.Result.infeasible("a beam fits no size with these bar sizes");
+            if (setBound == KMedian.NONE) { // a beam fits no size with these bar sizes
+                return KMedian.Result.infeasible();
             }
             if (setBound >= cutoff) {
                 return KMedian.Result.pruned(setBound);
@@ -184,8 +184,8 @@ final class BarSetSearch {
             KMedian kmedian = new KMedian(cost, formworkSet, k);
             // the cheap heuristic first: price what it uses until it uses only prices; then the proof
             int[] start = kmedian.heuristic(hint);
-            if (start == null) {
-                return KMedian.Result.infeasible("no " + k + " sizes hold every beam");
+            if (start == null) { // no k sizes hold every beam
+                return KMedian.Result.infeasible();
             }
             if (cutoff != KMedian.NONE) {
                 // before pricing anything for this set: can it beat the best found at all?

@@ -169,15 +169,8 @@ final class Rationaliser {
         double formwork = 0;
         Proof<ScheduleResult.Search> proof;
         if (best.result() == null) {
-            int fewest = curve.stream().filter(pt -> !Double.isNaN(pt.cost())).mapToInt(
-                    ScheduleResult.StandardisationPoint::sizes).min().orElse(-1);
-            String why = groups.isEmpty() ? "no beam is left to rationalise: each failed on its own or in its group"
-                    : (limits.maxSectionSizes() == null ? "the bar sizes allowed" : "at most "
-                    + limits.maxSectionSizes() + (limits.maxSectionSizes() == 1 ? " section size" : " section sizes")
-                    + (limits.maxBarSizes() == null ? "" : " with " + limits.maxBarSizes()
-                    + (limits.maxBarSizes() == 1 ? " bar size" : " bar sizes"))) + " cannot hold every beam"
-                    + (fewest > 0 ? "; at least " + fewest + " section sizes are needed" : "");
-            proof = Proof.none(Proof.Status.INFEASIBLE, new ScheduleResult.Search(why, best.setsTotal(),
+            ProofMethod why = groups.isEmpty() ? ProofMethod.NO_BEAM_LEFT : ProofMethod.LIMITS_TOO_TIGHT;
+            proof = Proof.none(Proof.Status.INFEASIBLE, new ScheduleResult.Search(why, null, best.setsTotal(),
                     best.setsSolved(), best.setsPruned(), pricedForProof, proofMillis), options);
         } else {
             int used = distinct(best.result().assignment());
@@ -185,9 +178,9 @@ final class Rationaliser {
             Proof.Status status = best.bound() >= best.result().objective() ? Proof.Status.OPTIMAL
                     : Proof.Status.FEASIBLE;
             proof = Proof.solved(status, best.result().objective(), best.bound(), CostModel.UNITS,
-                    Proof.SolverStats.NONE, new ScheduleResult.Search(best.result().method()
-                    + "; sizes priced lazily against bar-free bounds", best.setsTotal(), best.setsSolved(),
-                    best.setsPruned(), pricedForProof, proofMillis), options);
+                    Proof.SolverStats.NONE, new ScheduleResult.Search(best.result().method(),
+                    best.result().cpSatStatus(), best.setsTotal(), best.setsSolved(), best.setsPruned(),
+                    pricedForProof, proofMillis), options);
         }
         // every beam at its own optimum, for comparison: the beams designed here, each in its own best
         // size, with a set of forms for each distinct size

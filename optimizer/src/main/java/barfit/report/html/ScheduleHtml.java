@@ -12,6 +12,7 @@ import barfit.input.Settings;
 import barfit.report.BeamText;
 import barfit.report.Caution;
 import barfit.report.Money;
+import barfit.report.ScheduleWords;
 import barfit.report.TrailText;
 import barfit.report.Words;
 import barfit.schedule.Rationalise;
@@ -318,7 +319,7 @@ public final class ScheduleHtml {
         String cur = r.input().currency();
         out.append("<section id=\"rationalisation\">\n<h2>Rationalisation and its proof</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Proof</caption>\n");
-        kv(out, "method", s.method());
+        kv(out, "method", ScheduleWords.method(r));
         kv(out, "status", p.status().name());
         boolean none = !p.bounded();
         kv(out, "objective", none ? "— (no schedule meets the limits)" : money(p.objective(), cur));

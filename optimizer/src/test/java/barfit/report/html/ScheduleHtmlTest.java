@@ -151,7 +151,7 @@ class ScheduleHtmlTest {
     @Test
     void proofCostsAndStandardisationAreShown() throws Exception {
         String proof = element(html, "<section id=\"rationalisation\">", "</section>");
-        assertTrue(proof.contains("rendering fixture"), "the proof's method is shown");
+        assertTrue(proof.contains("linear relaxation integral; sizes priced lazily"), "the proof's method is shown");
         String costs = element(html, "<section id=\"costs\">", "</section>");
         assertTrue(costs.contains(barfit.report.Money.amount(result.totalCost())));
         String std = element(html, "<section id=\"standardisation\">", "</section>");
