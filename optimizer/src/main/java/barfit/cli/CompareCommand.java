@@ -6,9 +6,11 @@ import barfit.design.SolverOptions;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.report.StudyJson;
+import barfit.report.StudySay;
 import barfit.report.StudyText;
 import barfit.section.trail.Dim;
 import barfit.study.Compare;
+import barfit.study.Say;
 import barfit.study.Target;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -108,20 +110,10 @@ final class CompareCommand implements Callable<Integer> {
             }
             fcMpa.add(mpa);
         }
-        List<Target> targets = Studies.targets(in, beam, file, options);
+        Say say = new StudySay(u);
+        List<Target> targets = Studies.targets(in, beam, file, options, say);
         List<Compare.Result> results = new ArrayList<>();
         List<Boolean> perBeam = new ArrayList<>();
-        Compare.Say say = new Compare.Say() {
-            @Override
-            public String length(double mm) {
-                return u.compact(mm, Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
-            }
-
-            @Override
-            public String stress(double mpa) {
-                return u.compact(mpa, Dim.STRESS) + " " + u.unit(Dim.STRESS);
-            }
-        };
         for (Target t : targets) {
             results.add(Compare.run(t, capMm, maxW, step, fcMpa, Studies.cost(in), fc -> Studies.costAtFc(in, fc), say));
             perBeam.add(t.costPerBeam());

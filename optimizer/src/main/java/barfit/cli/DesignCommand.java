@@ -84,9 +84,8 @@ final class DesignCommand implements Callable<Integer> {
         }
         var settings = input.settings();
         CostModel cost = new CostModel(input.rates(), settings.detailing().cover(), settings.units().code());
-        SectionDesigner designer = new SectionDesigner(cost, options,
-                settings.units());
-        BeamDesigner spans = new BeamDesigner(cost, options, settings.units());
+        SectionDesigner designer = new SectionDesigner(cost, options);
+        BeamDesigner spans = new BeamDesigner(cost, options);
         List<DesignItem> outcomes = new ArrayList<>();
         for (DesignBeam b : beams) {
             outcomes.add(b.isWhole() ? DesignItem.of(spans.design(span(input, b), alternatives))

@@ -6,6 +6,7 @@ import barfit.design.SolverOptions;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.report.StudyJson;
+import barfit.report.StudySay;
 import barfit.report.StudyText;
 import barfit.report.SweepPlot;
 import barfit.section.trail.Dim;
@@ -124,7 +125,7 @@ final class SweepCommand implements Callable<Integer> {
             caps.add(hi); // --to off the step grid: the range ends where it was asked to
         }
         SolverOptions options = solver.options();
-        List<Target> targets = Studies.targets(in, beam, file, options);
+        List<Target> targets = Studies.targets(in, beam, file, options, new StudySay(u));
         if (plot != null && targets.size() != 1) {
             throw new InputError(Location.ofFile("--plot"), "a plot shows one beam; expected --beam ID with --plot (the "
                     + "file has " + targets.size() + " beams)");

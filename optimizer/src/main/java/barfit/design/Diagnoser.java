@@ -11,8 +11,6 @@ import barfit.section.SectionChecks;
 import barfit.section.SectionProbe;
 import barfit.section.SectionShape;
 import barfit.section.Stirrups;
-import barfit.section.trail.Dim;
-import barfit.units.UnitSystem;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -29,13 +27,11 @@ final class Diagnoser {
     private Diagnoser() {
     }
 
-    static Diagnosis diagnose(SectionProblem p, CostModel cost, UnitSystem u) {
+    static Diagnosis diagnose(SectionProblem p, CostModel cost) {
         List<Double> widths = p.widths();
         List<Double> depths = p.depths();
         if (depths.isEmpty()) {
-            String cap = p.maxDepth() == null ? "?" : say(u, p.maxDepth(), Dim.LENGTH);
-            return new Diagnosis("headroom", "max_depth " + cap + " is below the shallowest depth searched ("
-                    + say(u, p.space().depths().get(0), Dim.LENGTH) + ")", null, 0, fixes(p, cost, u));
+            return diagnosis(p, cost, "headroom", new Diagnosis.BelowShallowest(p.space().depths().get(0)), null, 0);
         }
         double b = widths.get(widths.size() - 1);
         double h = depths.get(depths.size() - 1);
@@ -52,13 +48,7 @@ final class Diagnoser {
                 null, Layout.skinFor(h, t0, det, p.materials(), p.code()), p.code());
         for (CheckResult r : SectionChecks.frameChecks(probeSection, p.span())) {
             if (!r.pass()) {
-                String summary = switch (r.id()) {
-                    case "min_depth" -> "Table 9.3.1.1 needs h ≥ " + say(u, r.limit().value(), Dim.LENGTH) + " for this span, but the "
-                            + "deepest depth allowed is " + say(u, h, Dim.LENGTH) + " (deflection is not computed for single sections)";
-                    case "cover" -> "the cover is below Table 20.5.1.3.1 (" + say(u, r.limit().value(), Dim.LENGTH) + ")";
-                    default -> r.title() + " fails (" + r.clause() + ")";
-                };
-                return new Diagnosis(r.id(), summary, null, 0, fixes(p, cost, u));
+                return diagnosis(p, cost, r.id(), new Diagnosis.FrameCheckFails(r, h), null, 0);
             }
         }
 
@@ -107,26 +97,25 @@ final class Diagnoser {
                 }
             }
         }
-        List<String> fixes = fixes(p, cost, u);
         if (strongest == null) {
-            return new Diagnosis("spacing", "no bar layout fits the web at b = " + say(u, b, Dim.LENGTH), null, 0, fixes);
+            return diagnosis(p, cost, "spacing", new Diagnosis.NoLayoutFits(b), null, 0);
         }
         if (bestPhiMn < Math.abs(p.mu())) {
-            return new Diagnosis("flexure", "the strongest ductile layout at " + say(u, b, Dim.LENGTH) + " × " + say(u, h, Dim.LENGTH)
-                    + " gives φMn = " + say(u, bestPhiMn, Dim.MOMENT) + " < Mu = " + say(u, Math.abs(p.mu()), Dim.MOMENT), strongest, bestPhiMn, fixes);
+            return diagnosis(p, cost, "flexure", new Diagnosis.FlexureFails(b, h, Math.abs(p.mu())), strongest, bestPhiMn);
         }
         if (p.vu() != null) {
-            return new Diagnosis("shear", "flexure can be met, but no stirrup option in the search carries Vu = "
-                    + say(u, p.vu(), Dim.FORCE) + " (or the section is too small for it, 22.5.1.2)", strongest, bestPhiMn, fixes);
+            return diagnosis(p, cost, "shear", new Diagnosis.ShearFails(p.vu()), strongest, bestPhiMn);
         }
-        return new Diagnosis("detailing", "strength can be met but no layout passes every detailing check",
-                strongest, bestPhiMn, fixes);
+        return diagnosis(p, cost, "detailing", new Diagnosis.DetailingFails(), strongest, bestPhiMn);
     }
 
-    /** One limit relaxed at a time; each answer found by the same generator. */
-    private static List<String> fixes(SectionProblem p, CostModel cost, UnitSystem u) {
-        List<String> out = new ArrayList<>();
+    /** The diagnosis with the changes that work, one limit relaxed at a time; each found by the same generator. */
+    private static Diagnosis diagnosis(SectionProblem p, CostModel cost, String limit, Diagnosis.Cause cause,
+            Layout strongest, double strongestPhiMn) {
         SearchSpace sp = p.space();
+        Diagnosis.Fix deeper = null;
+        Diagnosis.Fix wider = null;
+        Integer moreLayers = null;
         List<Double> depths = sp.depths();
         double step = depths.size() > 1 ? depths.get(1) - depths.get(0)
                 : p.code().inchPound() ? CodeEquations.MM_PER_IN : SI_DEPTH_STEP;
@@ -139,8 +128,7 @@ final class Diagnoser {
         for (double h = start; h <= limitH + 1e-9; h += step) {
             SectionProblem q = p.withMaxDepth(null).withSpace(sp.withDepths(List.of(h))).withFixedWidth(widest);
             if (feasible(q, cost)) {
-                out.add("needs h ≥ " + say(u, h, Dim.LENGTH) + " at b = " + say(u, widest, Dim.LENGTH)
-                        + (p.maxDepth() != null ? " (max_depth is " + say(u, p.maxDepth(), Dim.LENGTH) + ")" : ""));
+                deeper = new Diagnosis.Fix(widest, h);
                 break;
             }
         }
@@ -152,17 +140,18 @@ final class Diagnoser {
             for (double w = widest + wStep; w <= 2.5 * widest + 1e-9; w += wStep) {
                 SectionProblem q = p.withSpace(sp.withDepths(List.of(h))).withFixedWidth(w).withMaxDepth(null);
                 if (feasible(q, cost)) {
-                    out.add("b ≥ " + say(u, w, Dim.LENGTH) + " at h = " + say(u, h, Dim.LENGTH) + (p.fixedWidth() != null ? " (the beam fixes b)" : ""));
+                    wider = new Diagnosis.Fix(w, h);
                     break;
                 }
             }
         }
         // one more layer
-        SectionProblem moreLayers = p.withSpace(sp.withMaxLayers(sp.maxLayers() + 1));
-        if (feasible(moreLayers, cost)) {
-            out.add("allow " + (sp.maxLayers() + 1) + " layers of tension bars (max_layers)");
+        SectionProblem oneMoreLayer = p.withSpace(sp.withMaxLayers(sp.maxLayers() + 1));
+        if (feasible(oneMoreLayer, cost)) {
+            moreLayers = sp.maxLayers() + 1;
         }
-        return out;
+        return new Diagnosis(limit, cause, strongest, strongestPhiMn, deeper, wider, moreLayers, p.maxDepth(),
+                p.fixedWidth());
     }
 
     private static boolean feasible(SectionProblem q, CostModel cost) {
@@ -170,9 +159,5 @@ final class Diagnoser {
             return false;
         }
         return !new CandidateGenerator(q, cost).generate(1).candidates().isEmpty();
-    }
-
-    private static String say(UnitSystem u, double v, Dim d) {
-        return u.compact(v, d) + " " + u.unit(d);
     }
 }

@@ -29,7 +29,8 @@ public final class ScheduleCsv {
             row.add(b.beam().id());
             row.add(b.beam().group() == null ? "" : b.beam().group());
             if (!b.feasible()) {
-                row.add("no design: " + b.outcome().diagnosis().limit() + " - " + b.outcome().diagnosis().summary());
+                row.add("no design: " + b.outcome().diagnosis().limit() + " - "
+                        + DiagnosisWords.summary(b.outcome().diagnosis(), u));
                 for (int i = 0; i < 16; i++) {
                     row.add("");
                 }

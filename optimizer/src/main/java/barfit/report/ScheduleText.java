@@ -113,9 +113,11 @@ public final class ScheduleText {
             for (ScheduleResult.Beam b : r.beams()) {
                 if (!b.feasible()) {
                     var d = b.outcome().diagnosis();
-                    out.append("  ").append(b.beam().id()).append(": ").append(d.limit()).append(" — ").append(d.summary());
-                    if (!d.fixes().isEmpty()) {
-                        out.append("; what would work (one limit at a time): ").append(Words.alternatives(d.fixes()));
+                    out.append("  ").append(b.beam().id()).append(": ").append(d.limit()).append(" — ")
+                            .append(DiagnosisWords.summary(d, u));
+                    List<String> fixes = DiagnosisWords.fixes(d, u);
+                    if (!fixes.isEmpty()) {
+                        out.append("; what would work (one limit at a time): ").append(Words.alternatives(fixes));
                     }
                     out.append('\n');
                 }

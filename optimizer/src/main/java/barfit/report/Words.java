@@ -1,5 +1,6 @@
 package barfit.report;
 
+import barfit.design.Binding;
 import barfit.design.Proof;
 import barfit.section.BarLayer;
 import barfit.section.CheckResult;
@@ -26,6 +27,22 @@ public final class Words {
             case FEASIBLE, UNPROVEN -> "feasible";
             case INFEASIBLE -> "infeasible";
             case OUT_OF_TIME -> "unknown";
+        };
+    }
+
+    /**
+     * When a binding check fails, or how hard it works: "one No. 29 fewer", "h = 475 mm", "b = 300 mm",
+     * "stirrups @ 175 mm", "2 stirrup legs", "h = max_depth", or a span's ratio "0.97".
+     */
+    public static String when(Binding b, UnitSystem u) {
+        return switch (b.leaner()) {
+            case ONE_BAR_FEWER -> "one " + b.bar().label() + " fewer";
+            case SHALLOWER -> "h = " + u.compact(b.value(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+            case NARROWER -> "b = " + u.compact(b.value(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+            case STIRRUPS_WIDER_APART -> "stirrups @ " + u.compact(b.value(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+            case FEWER_LEGS -> (int) b.value() + " stirrup legs";
+            case AT_MAX_DEPTH -> "h = max_depth";
+            case NEAR_LIMIT -> String.format(Locale.ROOT, "%.2f", b.value());
         };
     }
 

@@ -2,8 +2,6 @@ package barfit.schedule;
 
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamProblem;
-import barfit.section.trail.Dim;
-import barfit.units.UnitSystem;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -96,18 +94,13 @@ final class BeamGroups {
 
     private static BeamDesigner.Diagnosis clash(ScheduleInput in, List<BeamDesigner.Outcome> own, String name,
             List<Integer> beams) {
-        UnitSystem u = in.settings().units();
-        List<String> optima = new ArrayList<>();
+        List<GroupClash.Member> members = new ArrayList<>();
         for (int i : beams) {
             BeamProblem p = in.beams().get(i).problem();
-            var l = own.get(i).best().layout();
-            optima.add(p.id() + " " + u.compact(l.width(), Dim.LENGTH) + " × " + u.compact(l.height(), Dim.LENGTH)
-                    + (p.maxDepth() != null ? " (max_depth " + u.compact(p.maxDepth(), Dim.LENGTH) + ")" : "")
-                    + (p.fixedWidth() != null ? " (width " + u.compact(p.fixedWidth(), Dim.LENGTH) + ")" : ""));
+            var layout = own.get(i).best().layout();
+            members.add(new GroupClash.Member(p.id(), layout.width(), layout.height(), p.maxDepth(), p.fixedWidth()));
         }
-        return new BeamDesigner.Diagnosis("group", "the beams of group " + name
-                + " share no section size in which each passes; their own optima: " + String.join("; ", optima),
-                List.of("give them different groups, or lift the max_depth or width that keeps them apart"));
+        return new BeamDesigner.Diagnosis("group", new GroupClash(name, members));
     }
 
     int count() {

@@ -60,7 +60,7 @@ public final class ScheduleInputReader {
             var lines = barfit.input.LinesReader.read(doc, di.settings());
             var cost = new barfit.design.CostModel(di.rates(), di.settings().detailing().cover(), di.settings().code());
             var byLine = new barfit.design.line.LineSpans(di.settings(), di.space(),
-                    new barfit.design.beam.BeamDesigner(cost, options, di.settings().units()), di.maxBarSizesPerBeam(),
+                    new barfit.design.beam.BeamDesigner(cost, options), di.maxBarSizesPerBeam(),
                     di.barsPerTwoLegs());
             List<barfit.design.line.LineSpans.Result> results = new Parallel(Math.min(threads, lines.size()),
                     Progress.NONE).map(lines.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),

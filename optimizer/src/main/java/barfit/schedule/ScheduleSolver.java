@@ -33,7 +33,7 @@ public final class ScheduleSolver {
     public ScheduleResult solve(ScheduleInput in) {
         long started = System.nanoTime();
         List<ScheduleBeam> beams = in.beams();
-        BeamDesigner designer = new BeamDesigner(cost, options, in.settings().units());
+        BeamDesigner designer = new BeamDesigner(cost, options);
         List<BeamDesigner.Outcome> own = pool.map(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
                 i -> beams.get(i).designed() != null ? beams.get(i).designed()
                         : designer.design(beams.get(i).problem(), 0));

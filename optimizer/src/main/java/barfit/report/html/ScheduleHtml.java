@@ -11,6 +11,7 @@ import barfit.design.beam.Extension;
 import barfit.input.Settings;
 import barfit.report.BeamText;
 import barfit.report.Caution;
+import barfit.report.DiagnosisWords;
 import barfit.report.Money;
 import barfit.report.ScheduleWords;
 import barfit.report.TrailText;
@@ -235,7 +236,7 @@ public final class ScheduleHtml {
             if (!b.feasible()) {
                 BeamDesigner.Diagnosis d = b.outcome().diagnosis();
                 out.append("<td colspan=\"").append(own ? 9 : 8).append("\">").append(Svg.esc(headline(d)))
-                        .append(" — ").append(Svg.esc(diagnosis(d))).append("</td></tr>\n");
+                        .append(" — ").append(Svg.esc(diagnosis(d, u))).append("</td></tr>\n");
                 continue;
             }
             BeamDesigner.Design d = b.outcome().best();
@@ -304,10 +305,11 @@ public final class ScheduleHtml {
                 : "No layout in the search space passes";
     }
 
-    private static String diagnosis(BeamDesigner.Diagnosis d) {
-        return "binding limit: " + d.limit() + " (" + d.summary() + ")" + (d.fixes().isEmpty()
+    private static String diagnosis(BeamDesigner.Diagnosis d, UnitSystem u) {
+        List<String> fixes = DiagnosisWords.fixes(d, u);
+        return "binding limit: " + d.limit() + " (" + DiagnosisWords.summary(d, u) + ")" + (fixes.isEmpty()
                 ? "; no single relaxed limit (depth, width) gives a passing layout"
-                : "; what would work, one limit at a time: " + barfit.report.Words.alternatives(d.fixes()));
+                : "; what would work, one limit at a time: " + Words.alternatives(fixes));
     }
 
     // ---------------------------------------------------------------- rationalisation proof
@@ -441,10 +443,11 @@ public final class ScheduleHtml {
             BeamDesigner.Diagnosis d = o.diagnosis();
             out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>").append(Svg.esc(headline(d)))
                     .append(".</strong></p>\n")
-                    .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(d.summary()))
-                    .append("</p>\n<p>").append(Svg.esc(d.fixes().isEmpty()
+                    .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(DiagnosisWords.summary(d, u)))
+                    .append("</p>\n<p>").append(Svg.esc(DiagnosisWords.fixes(d, u).isEmpty()
                             ? "No single relaxed limit (depth, width) gives a passing layout."
-                            : "What would work, one limit at a time: " + barfit.report.Words.alternatives(d.fixes()))).append("</p>\n</div>\n")
+                            : "What would work, one limit at a time: " + Words.alternatives(DiagnosisWords.fixes(d, u))))
+                    .append("</p>\n</div>\n")
                     .append("</section>\n");
             return;
         }
@@ -488,7 +491,7 @@ public final class ScheduleHtml {
                     + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
         }
         kv(out, "deflection", deflection(d.report().span(), p, u));
-        kv(out, "binding", binding(o.binding()));
+        kv(out, "binding", binding(o.binding(), u));
         kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
         kv(out, "proof", proofWords(o.proof()));
         out.append("</table>\n</div>\n");
@@ -671,13 +674,13 @@ public final class ScheduleHtml {
                 + plain(p.limits().total()) + " = " + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
     }
 
-    private static String binding(List<barfit.design.Binding> bs) {
+    private static String binding(List<barfit.design.Binding> bs, UnitSystem u) {
         if (bs.isEmpty()) {
             return "no check above 0.95 of its limit";
         }
         List<String> parts = new ArrayList<>();
         for (var b : bs) {
-            parts.add(b.limit() + " (" + b.when() + ")");
+            parts.add(b.limit() + " (" + Words.when(b, u) + ")");
         }
         return String.join(", ", parts);
     }

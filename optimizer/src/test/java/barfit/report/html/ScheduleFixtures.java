@@ -55,7 +55,7 @@ final class ScheduleFixtures {
                 in.rates(), in.currency(), in.costs(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs(), beams, null);
         BeamDesigner designer = new BeamDesigner(new CostModel(in.rates(), in.settings().detailing().cover(),
                 in.settings().units().code()),
-                new SolverOptions(60, 1, 1), in.settings().units());
+                new SolverOptions(60, 1, 1));
         List<ScheduleResult.Beam> out = new ArrayList<>();
         Map<String, List<String>> sizes = new LinkedHashMap<>();
         TreeSet<String> bars = new TreeSet<>();
