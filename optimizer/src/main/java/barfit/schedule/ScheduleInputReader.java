@@ -10,7 +10,6 @@ import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.input.InputLimits;
 import barfit.input.SettingsReader;
-import barfit.units.UnitSystem;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -114,7 +113,7 @@ public final class ScheduleInputReader {
             }
         }
         double formwork = r.has("formwork_set_cost")
-                ? InputLimits.require(r, "formwork_set_cost", InputLimits.SET_COST, UnitSystem.SI,
+                ? InputLimits.require(r, "formwork_set_cost", InputLimits.SET_COST,
                         r.nonNegative("formwork_set_cost", "the cost of the forms for one section size")) : 0;
         return new Rationalise(sizes, bars, same, formwork);
     }
