@@ -68,7 +68,7 @@ final class CompareCommand implements Callable<Integer> {
         double maxW = maxWidth == null ? widest + 2 * step : u.toSI(maxWidth, Dim.LENGTH);
         double widestAllowed = 5 * widest;
         if (maxWidth != null && !(maxW >= widest + step - 1e-6 && maxW <= widestAllowed + 1e-6)) {
-            throw new InputError(Location.ofFile("--max-width"), "expected a width from "
+            throw OptionError.of("--max-width", "expected a width from "
                     + u.compact(widest + step, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (one width step of " + u.compact(step, Dim.LENGTH)
                     + " beyond the search's widest, " + u.compact(widest, Dim.LENGTH) + ") to "
                     + u.compact(widestAllowed, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (5 times the widest), got "
@@ -91,13 +91,13 @@ final class CompareCommand implements Callable<Integer> {
             double lo = u.limit(barfit.section.MaterialLimits.fcMin(u.code()), Dim.STRESS);
             double hi = u.limit(barfit.section.MaterialLimits.fcMax(u.code()), Dim.STRESS);
             if (!(v >= lo && v <= hi)) {
-                throw new InputError(Location.ofFile("--fc"), "expected f'c between " + Studies.fmt(lo) + " and "
+                throw OptionError.of("--fc", "expected f'c between " + Studies.fmt(lo) + " and "
                         + Studies.fmt(hi) + " " + u.unit(Dim.STRESS) + ", got " + Studies.fmt(v));
             }
             if (Double.isNaN(in.costs().concreteAt(mpa))) {
                 String grade = Studies.fmt(v) + " " + u.unit(Dim.STRESS);
                 if (fcs != null) {
-                    throw new InputError(Location.ofFile("--fc"), "no concrete rate for f'c = " + grade
+                    throw OptionError.of("--fc", "no concrete rate for f'c = " + grade
                             + "; expected it within the grades of " + byKey);
                 }
                 // the grade is one compare tries by default: the rate table in the file does not reach it

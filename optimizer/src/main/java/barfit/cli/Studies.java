@@ -1,5 +1,6 @@
 package barfit.cli;
 
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
@@ -72,8 +73,8 @@ final class Studies {
             }
         }
         if (out.isEmpty()) {
-            throw new InputError(Location.ofFile(file.toString()), "--beam " + beam + ": no beam, line or line part "
-                    + "(LINE/span N) with that id; expected one of: " + String.join(", ", ids));
+            throw OptionError.of("--beam", "no beam, line or line part (LINE/span N) " + Echo.cut(beam) + " in " + file
+                    + "; expected one of: " + String.join(", ", ids));
         }
         return out;
     }
@@ -98,7 +99,7 @@ final class Studies {
         double lo = depths.get(0);
         double hi = depths.get(depths.size() - 1);
         if (!(mm >= lo - 1e-6 && mm <= hi + 1e-6)) {
-            throw new InputError(Location.ofFile(option), "expected a depth within the search range "
+            throw OptionError.of(option, "expected a depth within the search range "
                     + u.compact(lo, Dim.LENGTH) + " to " + u.compact(hi, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ", got "
                     + fmt(userValue));
         }
