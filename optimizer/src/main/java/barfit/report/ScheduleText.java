@@ -1,8 +1,6 @@
 package barfit.report;
 
 import barfit.design.Proof;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
@@ -37,19 +35,18 @@ public final class ScheduleText {
         t.row("beam", "group", "b × h (" + u.unit(Dim.LENGTH) + ")", "bottom", "top continuous", "top at left",
                 "top at right", "cost");
         List<String> noShears = new ArrayList<>();
-        for (ScheduleResult.Beam b : r.beams()) {
-            BeamProblem p = b.outcome().problem();
+        for (ScheduleRows.Row row : ScheduleRows.rows(r)) {
+            ScheduleResult.Beam b = row.entry();
+            BeamProblem p = row.problem();
             String group = b.beam().group() == null ? "" : b.beam().group();
-            if (!b.feasible()) {
+            if (!row.feasible()) {
                 t.row(b.beam().id(), group, "NO DESIGN", "(see below)", "", "", "", "");
                 continue;
             }
-            BeamDesigner.Design d = b.outcome().best();
-            BeamLayout l = d.layout();
-            t.row(b.beam().id(), group, ScheduleRows.size(l, u), ScheduleRows.bottom(l),
-                    ScheduleRows.topContinuousShort(p, l, u), ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u),
-                    ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u), Money.amount(d.cost().total()));
-            t.under("  stirrups " + ScheduleRows.stirrupsShort(p, l, u)
+            t.row(b.beam().id(), group, ScheduleRows.size(row, u), row.bottom(), ScheduleRows.topContinuousShort(row, u),
+                    ScheduleRows.topAt(row.left(), u), ScheduleRows.topAt(row.right(), u),
+                    Money.amount(row.design().cost().total()));
+            t.under("  stirrups " + ScheduleRows.stirrupsShort(row, u)
                     + (BeamText.warnings(p).isEmpty() ? "" : "  (minimum: no shears given)"));
             if (!BeamText.warnings(p).isEmpty()) {
                 noShears.add(b.beam().id());

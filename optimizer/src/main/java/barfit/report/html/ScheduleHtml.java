@@ -13,6 +13,7 @@ import barfit.report.BeamText;
 import barfit.report.Caution;
 import barfit.report.DiagnosisWords;
 import barfit.report.Money;
+import barfit.report.ScheduleRows;
 import barfit.report.ScheduleWords;
 import barfit.report.TrailText;
 import barfit.report.Words;
@@ -49,6 +50,7 @@ public final class ScheduleHtml {
         Settings s = in.settings();
         UnitSystem u = s.units();
         List<String> ids = beamIds(r);
+        List<ScheduleRows.Row> rows = ScheduleRows.rows(r);
         StringBuilder out = new StringBuilder(1 << 16);
         String title = "Beam schedule: " + String.join(", ", in.sources());
         out.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n");
@@ -59,7 +61,7 @@ public final class ScheduleHtml {
         caution(out);
         contents(r, out);
         project(r, out);
-        schedule(r, ids, out);
+        schedule(r, rows, ids, out);
         if (r.proof() != null) {
             proof(r, out);
         }
@@ -68,8 +70,8 @@ public final class ScheduleHtml {
             standardisation(r, out);
         }
         out.append("<section id=\"beams\">\n<h2>Beams</h2>\n");
-        for (int i = 0; i < r.beams().size(); i++) {
-            beam(r, r.beams().get(i), ids.get(i), out);
+        for (int i = 0; i < rows.size(); i++) {
+            beam(r, rows.get(i), ids.get(i), out);
         }
         out.append("</section>\n");
         out.append("<footer>\n<p>").append(Svg.esc(Caution.SHORT)).append("</p>\n</footer>\n</body>\n</html>\n");
@@ -212,7 +214,7 @@ public final class ScheduleHtml {
 
     // ---------------------------------------------------------------- schedule table
 
-    private static void schedule(ScheduleResult r, List<String> ids, StringBuilder out) {
+    private static void schedule(ScheduleResult r, List<ScheduleRows.Row> rows, List<String> ids, StringBuilder out) {
         UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
         boolean own = r.proof() != null;
@@ -226,53 +228,46 @@ public final class ScheduleHtml {
             out.append("<th>own optimum</th>");
         }
         out.append("</tr></thead>\n<tbody>\n");
-        for (int i = 0; i < r.beams().size(); i++) {
-            ScheduleResult.Beam b = r.beams().get(i);
-            BeamProblem p = b.outcome().problem();
-            out.append("<tr").append(b.feasible() ? "" : " class=\"infeasible\"").append("><td class=\"mark\"><a href=\"#")
+        for (int i = 0; i < rows.size(); i++) {
+            ScheduleRows.Row row = rows.get(i);
+            ScheduleResult.Beam b = row.entry();
+            out.append("<tr").append(row.feasible() ? "" : " class=\"infeasible\"").append("><td class=\"mark\"><a href=\"#")
                     .append(Svg.esc(ids.get(i))).append("\">").append(Svg.esc(b.beam().id())).append("</a></td><td>")
                     .append(Svg.esc(b.beam().group() == null ? "—" : b.beam().group())).append("</td><td class=\"num\">")
-                    .append(u.number(p.span(), Dim.SPAN)).append("</td>");
-            if (!b.feasible()) {
+                    .append(u.number(row.problem().span(), Dim.SPAN)).append("</td>");
+            if (!row.feasible()) {
                 BeamDesigner.Diagnosis d = b.outcome().diagnosis();
                 out.append("<td colspan=\"").append(own ? 9 : 8).append("\">").append(Svg.esc(headline(d)))
                         .append(" — ").append(Svg.esc(diagnosis(d, u))).append("</td></tr>\n");
                 continue;
             }
-            BeamDesigner.Design d = b.outcome().best();
-            BeamLayout l = d.layout();
+            BeamLayout l = row.layout();
             out.append("<td class=\"num\">").append(u.compact(l.width(), Dim.LENGTH)).append(" × ")
                     .append(u.compact(l.height(), Dim.LENGTH)).append(l.flange() != null ? (l.flange().oneSided() ? " L" : " T") : "")
                     .append("</td>");
-            out.append("<td>").append(Svg.esc(perLayer(l.bottomCounts(), l.bottom()))).append("</td>");
-            if (p.cantilever()) {
-                out.append("<td>").append(Svg.esc(perLayer(l.topLeft(), l.top()))).append(", full length + ")
-                        .append(Svg.esc(u.compact(l.extLeft() - p.span(), Dim.SPAN))).append(' ')
+            out.append("<td>").append(Svg.esc(row.bottom())).append("</td>");
+            if (row.cantilever()) {
+                out.append("<td>").append(Svg.esc(row.top())).append(", full length + ")
+                        .append(Svg.esc(u.compact(row.topPastSupport(), Dim.SPAN))).append(' ')
                         .append(Svg.esc(u.unit(Dim.SPAN))).append(" past the support</td><td>—</td><td>—</td>");
             } else {
-                out.append("<td>").append(l.topContinuous()).append(' ').append(Svg.esc(l.top().label())).append("</td>");
-                out.append("<td>").append(p.leftSupport() ? Svg.esc(topAtSupport(l.topLeft(), l, l.extLeft(), u)) : "—")
-                        .append("</td>");
-                out.append("<td>").append(p.rightSupport() ? Svg.esc(topAtSupport(l.topRight(), l, l.extRight(), u)) : "—")
-                        .append("</td>");
+                out.append("<td>").append(Svg.esc(row.top())).append("</td>");
+                out.append("<td>").append(row.left() != null ? Svg.esc(topAtSupport(row.left(), u)) : "—").append("</td>");
+                out.append("<td>").append(row.right() != null ? Svg.esc(topAtSupport(row.right(), u)) : "—").append("</td>");
             }
             out.append("<td class=\"lines\">");
-            List<BeamProblem.Zone> zones = p.zones();
-            for (int z = 0; z < zones.size(); z++) {
-                var st = l.zoneStirrups().get(z);
-                out.append(z == 0 ? "" : "<br>").append(Svg.esc(zones.get(z).name())).append(": ")
-                        .append(Svg.esc(Words.stirrups(st, u)));
+            for (int z = 0; z < row.zones().size(); z++) {
+                ScheduleRows.ZoneStirrups zone = row.zones().get(z);
+                out.append(z == 0 ? "" : "<br>").append(Svg.esc(zone.name())).append(": ")
+                        .append(Svg.esc(Words.stirrups(zone.stirrups(), u)));
             }
             out.append("</td><td class=\"lines\">");
-            boolean first = true;
-            for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
-                FlexureResult f = e.getValue().flexure();
-                double mu = Math.abs(e.getValue().demand().mu());
-                out.append(first ? "" : "<br>").append(shortPlace(e.getKey())).append(": ")
-                        .append(u.number(f.phiMn(), Dim.MOMENT)).append(" / ").append(u.number(mu, Dim.MOMENT));
-                first = false;
+            for (int k = 0; k < row.strengths().size(); k++) {
+                ScheduleRows.Strength st = row.strengths().get(k);
+                out.append(k == 0 ? "" : "<br>").append(ScheduleRows.place(st.place())).append(": ")
+                        .append(u.number(st.phiMn(), Dim.MOMENT)).append(" / ").append(u.number(st.mu(), Dim.MOMENT));
             }
-            out.append("</td><td class=\"num\">").append(Money.amount(d.cost().total())).append("</td>");
+            out.append("</td><td class=\"num\">").append(Money.amount(row.design().cost().total())).append("</td>");
             if (own) {
                 out.append("<td class=\"num\">").append(Double.isFinite(b.ownOptimum()) ? Money.amount(b.ownOptimum()) : "—")
                         .append("</td>");
@@ -285,18 +280,9 @@ public final class ScheduleHtml {
                 + "is in the beam's own section below).</p>\n</section>\n");
     }
 
-    /** "3+2 No. 25": bars per layer from the face inward. */
-    static String perLayer(List<Integer> counts, BarSize bar) {
-        StringBuilder sb = new StringBuilder();
-        for (int i = 0; i < counts.size(); i++) {
-            sb.append(i == 0 ? "" : "+").append(counts.get(i));
-        }
-        return sb.append(' ').append(bar.label()).toString();
-    }
-
-    private static String topAtSupport(List<Integer> counts, BeamLayout l, double ext, UnitSystem u) {
-        int extra = BeamLayout.sum(counts) - l.topContinuous();
-        return perLayer(counts, l.top()) + (extra > 0 ? "; " + extra + " extra, " + span(ext, u) + " past the face" : "");
+    /** The HTML's words for the top bars at a support: "4 No. 25; 2 extra, 2.100 m past the face". */
+    private static String topAtSupport(ScheduleRows.SupportTop at, UnitSystem u) {
+        return at.bars() + (at.extra() > 0 ? "; " + at.extra() + " extra, " + span(at.extension(), u) + " past the face" : "");
     }
 
     /** What failed: the beam on its own, or its group's need to share one section size. */
@@ -399,7 +385,8 @@ public final class ScheduleHtml {
 
     // ---------------------------------------------------------------- one beam
 
-    private static void beam(ScheduleResult r, ScheduleResult.Beam b, String id, StringBuilder out) {
+    private static void beam(ScheduleResult r, ScheduleRows.Row row, String id, StringBuilder out) {
+        ScheduleResult.Beam b = row.entry();
         UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
         BeamDesigner.Outcome o = b.outcome();
@@ -455,20 +442,20 @@ public final class ScheduleHtml {
         BeamLayout l = d.layout();
         out.append("<table class=\"kv\">\n<caption>Design</caption>\n");
         kv(out, "section", Words.shape(l.shape(), u));
-        kv(out, "bottom", perLayer(l.bottomCounts(), l.bottom()) + ", full span");
+        kv(out, "bottom", ScheduleRows.bars(l.bottomCounts(), l.bottom()) + ", full span");
         if (p.cantilever()) {
-            kv(out, "top", perLayer(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
+            kv(out, "top", ScheduleRows.bars(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
             kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + BeamText.topAtMid(d, u));
             String rule = " (" + Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top()).rule() + ")";
             if (p.leftSupport()) {
                 boolean extra = BeamLayout.sum(l.topLeft()) > l.topContinuous();
-                kv(out, "top at left support", topAtSupport(l.topLeft(), l, l.extLeft(), u) + (extra ? rule : ""));
+                kv(out, "top at left support", topAtSupport(row.left(), u) + (extra ? rule : ""));
             }
             if (p.rightSupport()) {
                 boolean extra = BeamLayout.sum(l.topRight()) > l.topContinuous();
-                kv(out, "top at right support", topAtSupport(l.topRight(), l, l.extRight(), u) + (extra ? rule : ""));
+                kv(out, "top at right support", topAtSupport(row.right(), u) + (extra ? rule : ""));
             }
         }
         if (l.skin() != null) {
@@ -625,14 +612,6 @@ public final class ScheduleHtml {
             case LEFT -> "Left support";
             case MID -> "Mid-span";
             case RIGHT -> "Right support";
-        };
-    }
-
-    private static String shortPlace(BeamProblem.Place p) {
-        return switch (p) {
-            case LEFT -> "left";
-            case MID -> "mid";
-            case RIGHT -> "right";
         };
     }
 
