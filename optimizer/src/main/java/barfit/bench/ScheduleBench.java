@@ -102,12 +102,12 @@ public final class ScheduleBench {
             out.printf(Locale.ROOT, "%d beams, each its own optimum, %d threads: %.2f s wall (%.1f ms a beam); "
                     + "%d with a design; total %.0f%n", beams, threads, plainS, 1000 * plainS / beams, feasible,
                     plain.totalCost());
-            String rat = "rationalise: {max_section_sizes: " + k + ", max_bar_sizes: " + m + "}\n";
+            String rationalise = "rationalise: {max_section_sizes: " + k + ", max_bar_sizes: " + m + "}\n";
             Path rdir = dir.resolve("rationalised");
-            write(rdir, ratBeams, seed + 1, rat);
+            write(rdir, ratBeams, seed + 1, rationalise);
             t0 = System.nanoTime();
             PhaseClock clock = new PhaseClock();
-            ScheduleResult r = solve(rdir, ratBeams, seed + 1, rat, threads, clock);
+            ScheduleResult r = solve(rdir, ratBeams, seed + 1, rationalise, threads, clock);
             double ratS = (System.nanoTime() - t0) / 1e9;
             double mainS = (clock.curveStart - t0) / 1e9;
             var p = r.proof();

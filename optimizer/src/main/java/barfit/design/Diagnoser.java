@@ -35,20 +35,23 @@ final class Diagnoser {
         }
         double b = widths.get(widths.size() - 1);
         double h = depths.get(depths.size() - 1);
-        BarSize ds = p.space().stirrupSizes().get(p.space().stirrupSizes().size() - 1);
-        Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(), p.detailing().exposure());
+        BarSize stirrupBar = p.space().stirrupSizes().get(p.space().stirrupSizes().size() - 1);
+        Detailing detailing = new Detailing(p.detailing().cover(), stirrupBar, p.detailing().layerGap(),
+                p.detailing().exposure());
         SectionShape shape = new SectionShape(b, h, p.flange());
 
         // frame-level checks (cover, skin, minimum depth) on the largest frame
-        BarSize t0 = p.space().barSizes().get(0);
-        BarSize c0 = p.space().compressionSizes().get(0);
-        BeamSection probeSection = new BeamSection(shape, p.materials(), det,
-                List.of(new BarLayer(p.bending().tensionFace(), t0, 2, det.firstLayerCentroid(t0.diameter())),
-                        new BarLayer(p.bending().compressionFace(), c0, 2, det.firstLayerCentroid(c0.diameter()))),
-                null, Layout.skinFor(h, t0, det, p.materials(), p.code()), p.code());
-        for (CheckResult r : SectionChecks.frameChecks(probeSection, p.span())) {
-            if (!r.pass()) {
-                return diagnosis(p, cost, r.id(), new Diagnosis.FrameCheckFails(r, h), null, 0);
+        BarSize smallestTension = p.space().barSizes().get(0);
+        BarSize smallestCompression = p.space().compressionSizes().get(0);
+        BeamSection probeSection = new BeamSection(shape, p.materials(), detailing,
+                List.of(new BarLayer(p.bending().tensionFace(), smallestTension, 2,
+                                detailing.firstLayerCentroid(smallestTension.diameter())),
+                        new BarLayer(p.bending().compressionFace(), smallestCompression, 2,
+                                detailing.firstLayerCentroid(smallestCompression.diameter()))),
+                null, Layout.skinFor(h, smallestTension, detailing, p.materials(), p.code()), p.code());
+        for (CheckResult check : SectionChecks.frameChecks(probeSection, p.span())) {
+            if (!check.pass()) {
+                return diagnosis(p, cost, check.id(), new Diagnosis.FrameCheckFails(check, h), null, 0);
             }
         }
 
@@ -58,31 +61,32 @@ final class Diagnoser {
         Layout strongest = null;
         double bestPhiMn = 0;
         for (BarSize t : p.space().barSizes()) {
-            int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
-            int ncr = BarSpacing.minBarsForCrackControl(b, det, t, p.materials().fy(), p.code());
-            if (nmax < Math.max(2, ncr)) {
+            int mostBars = BarSpacing.maxBars(b, detailing, t, p.materials(), p.code());
+            int fewestForCracks = BarSpacing.minBarsForCrackControl(b, detailing, t, p.materials().fy(), p.code());
+            if (mostBars < Math.max(2, fewestForCracks)) {
                 continue;
             }
             for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
                 for (BarSize c : p.space().compressionSizes()) {
-                    int m = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
-                    if (m < 2 || !Layout.fitsHeight(h, det, t, layers, c)) {
+                    int compressionBars = BarSpacing.maxBars(b, detailing, c, p.materials(), p.code());
+                    if (compressionBars < 2 || !Layout.fitsHeight(h, detailing, t, layers, c)) {
                         continue;
                     }
-                    for (int n = 2 * layers; n <= layers * nmax; n++) {
-                        int[] split = TensionSearch.greedySplit(n, layers, nmax, Math.max(2, ncr));
+                    for (int n = 2 * layers; n <= layers * mostBars; n++) {
+                        int[] split = TensionSearch.greedySplit(n, layers, mostBars, Math.max(2, fewestForCracks));
                         if (split == null) {
                             continue;
                         }
                         probe.clear();
-                        double y = det.firstLayerCentroid(t.diameter());
+                        double y = detailing.firstLayerCentroid(t.diameter());
                         for (int i = 0; i < split.length; i++) {
                             if (i > 0) {
-                                y += t.diameter() + det.layerGap();
+                                y += t.diameter() + detailing.layerGap();
                             }
                             probe.add(y, true, split[i] * t.area(), t.diameter());
                         }
-                        probe.add(det.firstLayerCentroid(c.diameter()), false, m * c.area(), c.diameter());
+                        probe.add(detailing.firstLayerCentroid(c.diameter()), false, compressionBars * c.area(),
+                                c.diameter());
                         probe.solve();
                         if (probe.ductilityOk() && probe.phiMn() > bestPhiMn) {
                             bestPhiMn = probe.phiMn();
@@ -90,8 +94,8 @@ final class Diagnoser {
                             for (int k : split) {
                                 counts.add(k);
                             }
-                            strongest = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m,
-                                    new Stirrups(ds, 2, p.space().stirrupSpacings().get(0)), null);
+                            strongest = new Layout(b, h, p.flange(), p.bending(), t, counts, c, compressionBars,
+                                    new Stirrups(stirrupBar, 2, p.space().stirrupSpacings().get(0)), null);
                         }
                     }
                 }
@@ -112,11 +116,11 @@ final class Diagnoser {
     /** The diagnosis with the changes that work, one limit relaxed at a time; each found by the same generator. */
     private static Diagnosis diagnosis(SectionProblem p, CostModel cost, String limit, Diagnosis.Cause cause,
             Layout strongest, double strongestPhiMn) {
-        SearchSpace sp = p.space();
+        SearchSpace space = p.space();
         Diagnosis.Fix deeper = null;
         Diagnosis.Fix wider = null;
         Integer moreLayers = null;
-        List<Double> depths = sp.depths();
+        List<Double> depths = space.depths();
         double step = depths.size() > 1 ? depths.get(1) - depths.get(0)
                 : p.code().inchPound() ? CodeEquations.MM_PER_IN : SI_DEPTH_STEP;
         double deepest = depths.get(depths.size() - 1);
@@ -124,10 +128,10 @@ final class Diagnoser {
         double widest = widths.get(widths.size() - 1);
         // deeper, at the widest width
         double start = p.depths().isEmpty() ? depths.get(0) : p.depths().get(p.depths().size() - 1) + step;
-        double limitH = Math.max(2 * deepest, deepest + 1000);
-        for (double h = start; h <= limitH + 1e-9; h += step) {
-            SectionProblem q = p.withMaxDepth(null).withSpace(sp.withDepths(List.of(h))).withFixedWidth(widest);
-            if (feasible(q, cost)) {
+        double highest = Math.max(2 * deepest, deepest + 1000);
+        for (double h = start; h <= highest + 1e-9; h += step) {
+            SectionProblem trial = p.withMaxDepth(null).withSpace(space.withDepths(List.of(h))).withFixedWidth(widest);
+            if (feasible(trial, cost)) {
                 deeper = new Diagnosis.Fix(widest, h);
                 break;
             }
@@ -135,20 +139,20 @@ final class Diagnoser {
         // wider, at the deepest allowed depth
         if (!p.depths().isEmpty()) {
             double h = p.depths().get(p.depths().size() - 1);
-            double wStep = widths.size() > 1 ? widths.get(1) - widths.get(0)
+            double widthStep = widths.size() > 1 ? widths.get(1) - widths.get(0)
                     : p.code().inchPound() ? 2 * CodeEquations.MM_PER_IN : SI_WIDTH_STEP;
-            for (double w = widest + wStep; w <= 2.5 * widest + 1e-9; w += wStep) {
-                SectionProblem q = p.withSpace(sp.withDepths(List.of(h))).withFixedWidth(w).withMaxDepth(null);
-                if (feasible(q, cost)) {
+            for (double w = widest + widthStep; w <= 2.5 * widest + 1e-9; w += widthStep) {
+                SectionProblem trial = p.withSpace(space.withDepths(List.of(h))).withFixedWidth(w).withMaxDepth(null);
+                if (feasible(trial, cost)) {
                     wider = new Diagnosis.Fix(w, h);
                     break;
                 }
             }
         }
         // one more layer
-        SectionProblem oneMoreLayer = p.withSpace(sp.withMaxLayers(sp.maxLayers() + 1));
+        SectionProblem oneMoreLayer = p.withSpace(space.withMaxLayers(space.maxLayers() + 1));
         if (feasible(oneMoreLayer, cost)) {
-            moreLayers = sp.maxLayers() + 1;
+            moreLayers = space.maxLayers() + 1;
         }
         return new Diagnosis(limit, cause, strongest, strongestPhiMn, deeper, wider, moreLayers, p.maxDepth(),
                 p.fixedWidth());

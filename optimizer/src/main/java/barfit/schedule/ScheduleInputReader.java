@@ -38,41 +38,42 @@ public final class ScheduleInputReader {
 
     /** As above, the lines designed {@code threads} at a time (the answer does not depend on it). */
     public static ScheduleInput read(Path file, Path csv, barfit.design.SolverOptions options, int threads) {
-        YFields doc = SettingsReader.root(YamlReader.read(file));
-        boolean hasLines = doc.has("lines");
-        DesignInput di = DesignInputReader.read(file, csv == null && !hasLines);
-        if (csv != null && doc.has("beams")) {
-            throw doc.error("beams", "the beams come from --beams " + csv.getFileName()
+        YFields document = SettingsReader.root(YamlReader.read(file));
+        boolean hasLines = document.has("lines");
+        DesignInput design = DesignInputReader.read(file, csv == null && !hasLines);
+        if (csv != null && document.has("beams")) {
+            throw document.error("beams", "the beams come from --beams " + csv.getFileName()
                     + "; expected no beams: in this file (or leave out --beams)");
         }
-        List<DesignBeam> beams = csv == null ? di.beams()
-                : CsvBeamsReader.read(csv, di.settings(), di.space().widths().get(di.space().widths().size() - 1));
+        List<DesignBeam> beams = csv == null ? design.beams()
+                : CsvBeamsReader.read(csv, design.settings(), design.space().widths().get(design.space().widths().size() - 1));
         List<ScheduleBeam> out = new ArrayList<>();
         for (DesignBeam b : beams) {
             if (!b.isWhole()) {
                 throw new InputError(b.location(), "beam " + b.id() + ": a schedule lists whole spans; expected span, "
                         + "ends and moments: {left, mid, right} instead of Mu");
             }
-            out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(di, b)));
+            out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(design, b)));
         }
         if (hasLines) {
-            var lines = barfit.input.LinesReader.read(doc, di.settings());
-            var cost = new barfit.design.CostModel(di.rates(), di.settings().detailing().cover(), di.settings().code());
-            var byLine = new barfit.design.line.LineSpans(di.settings(), di.space(),
-                    new barfit.design.beam.BeamDesigner(cost, options), di.maxBarSizesPerBeam(),
-                    di.barsPerTwoLegs());
+            var lines = barfit.input.LinesReader.read(document, design.settings());
+            var cost = new barfit.design.CostModel(design.rates(), design.settings().detailing().cover(),
+                    design.settings().code());
+            var byLine = new barfit.design.line.LineSpans(design.settings(), design.space(),
+                    new barfit.design.beam.BeamDesigner(cost, options), design.maxBarSizesPerBeam(),
+                    design.barsPerTwoLegs());
             List<barfit.design.line.LineSpans.Result> results = new Parallel(Math.min(threads, lines.size()),
                     Progress.NONE).map(lines.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
                     i -> byLine.design(lines.get(i), 0));
             for (int i = 0; i < lines.size(); i++) {
                 var one = results.get(i).oneSection();
-                boolean standardised = doc.has("rationalise");
+                boolean standardised = document.has("rationalise");
                 for (var part : results.get(i).parts()) {
                     if (one != null && !one.fellBack() && standardised) {
                         // one set of forms: the line's parts are a group sharing b x h, free to take another
                         // section where the schedule standardises (with the envelope of the line's own)
                         out.add(new ScheduleBeam(part.problem().id(), "line " + lines.get(i).id(),
-                                lines.get(i).location(), part.problem().withSpace(di.space()).withFixedWidth(null),
+                                lines.get(i).location(), part.problem().withSpace(design.space()).withFixedWidth(null),
                                 null, true));
                     } else {
                         // designed with its line for this very problem: its own optimum (a line of one set
@@ -84,37 +85,37 @@ public final class ScheduleInputReader {
             }
         }
         if (out.isEmpty()) {
-            throw new InputError(doc.location(), "expected at least one beam (beams: or --beams) or line (lines:)");
+            throw new InputError(document.location(), "expected at least one beam (beams: or --beams) or line (lines:)");
         }
-        Rationalise rat = doc.has("rationalise") ? rationalise(doc) : null;
+        Rationalise limits = document.has("rationalise") ? rationalise(document) : null;
         List<String> sources = new ArrayList<>(List.of(file.getFileName().toString()));
         if (csv != null) {
             sources.add(csv.getFileName().toString());
         }
-        return new ScheduleInput(sources, di.settings(), di.space(), di.rates(), di.currency(), di.costs(),
-                di.maxBarSizesPerBeam(), di.barsPerTwoLegs(), out, rat);
+        return new ScheduleInput(sources, design.settings(), design.space(), design.rates(), design.currency(), design.costs(),
+                design.maxBarSizesPerBeam(), design.barsPerTwoLegs(), out, limits);
     }
 
-    private static Rationalise rationalise(YFields doc) {
-        YFields r = doc.map("rationalise", "the rationalisation {max_section_sizes, max_bar_sizes, groups, "
+    private static Rationalise rationalise(YFields document) {
+        YFields block = document.map("rationalise", "the rationalisation {max_section_sizes, max_bar_sizes, groups, "
                 + "formwork_set_cost}").allowOnly("max_section_sizes", "max_bar_sizes", "groups", "formwork_set_cost");
-        Integer sizes = r.has("max_section_sizes")
-                ? r.positiveInt("max_section_sizes", "the most distinct b x h in the schedule, e.g. 6") : null;
-        Integer bars = r.has("max_bar_sizes")
-                ? r.positiveInt("max_bar_sizes", "the most distinct longitudinal bar sizes in the schedule, e.g. 3") : null;
-        boolean same = false;
-        if (r.has("groups")) {
-            String g = r.text("groups", "same_section or independent");
-            switch (g) {
-                case "same_section" -> same = true;
-                case "independent" -> same = false;
-                default -> throw r.error("groups", "expected same_section (beams with the same group share b x h) or "
-                        + "independent, got \"" + Echo.cut(g) + "\"");
+        Integer sizes = block.has("max_section_sizes")
+                ? block.positiveInt("max_section_sizes", "the most distinct b x h in the schedule, e.g. 6") : null;
+        Integer bars = block.has("max_bar_sizes")
+                ? block.positiveInt("max_bar_sizes", "the most distinct longitudinal bar sizes in the schedule, e.g. 3") : null;
+        boolean sameSection = false;
+        if (block.has("groups")) {
+            String groups = block.text("groups", "same_section or independent");
+            switch (groups) {
+                case "same_section" -> sameSection = true;
+                case "independent" -> sameSection = false;
+                default -> throw block.error("groups", "expected same_section (beams with the same group share b x h) or "
+                        + "independent, got \"" + Echo.cut(groups) + "\"");
             }
         }
-        double formwork = r.has("formwork_set_cost")
-                ? InputLimits.require(r, "formwork_set_cost", InputLimits.SET_COST,
-                        r.nonNegative("formwork_set_cost", "the cost of the forms for one section size")) : 0;
-        return new Rationalise(sizes, bars, same, formwork);
+        double formwork = block.has("formwork_set_cost")
+                ? InputLimits.require(block, "formwork_set_cost", InputLimits.SET_COST,
+                        block.nonNegative("formwork_set_cost", "the cost of the forms for one section size")) : 0;
+        return new Rationalise(sizes, bars, sameSection, formwork);
     }
 }

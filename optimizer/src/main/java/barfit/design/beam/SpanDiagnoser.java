@@ -68,9 +68,9 @@ final class SpanDiagnoser {
             BeamLayout free = p.service() == null ? null : cheapest(noDeflection);
             if (free != null) {
                 // every other check can be met within the cap: deflection fails at every allowed depth
-                SpanChecks.Limits l = p.limits();
-                boolean liveAlone = feasible(p.withLimits(new SpanChecks.Limits(l.live(), NO_LIMIT)));
-                boolean totalAlone = feasible(p.withLimits(new SpanChecks.Limits(NO_LIMIT, l.total())));
+                SpanChecks.Limits limits = p.limits();
+                boolean liveAlone = feasible(p.withLimits(new SpanChecks.Limits(limits.live(), NO_LIMIT)));
+                boolean totalAlone = feasible(p.withLimits(new SpanChecks.Limits(NO_LIMIT, limits.total())));
                 Diagnosis.Deflections which;
                 if (liveAlone && totalAlone) { // each can be met, not both at once
                     limit = "deflection_live, deflection_total";
@@ -87,7 +87,7 @@ final class SpanDiagnoser {
                 }
                 clause = "9.3.2, 24.2, Table 24.2.2";
                 atCap = BeamVerifier.verify(p, free, false).span().checks().stream().filter(c -> !c.pass()).toList();
-                cause = new Diagnosis.DeflectionFails(which, hMin, tallest, l.live(), l.total(), free.width(),
+                cause = new Diagnosis.DeflectionFails(which, hMin, tallest, limits.live(), limits.total(), free.width(),
                         free.height());
             } else if (shears && feasible(noDeflection.scaled(1.0, 0.0))) {
                 limit = "shear";

@@ -119,45 +119,49 @@ public final class ScheduleHtml {
     // ---------------------------------------------------------------- project data
 
     private static void project(ScheduleResult r, StringBuilder out) {
-        ScheduleInput in = r.input();
-        Settings s = in.settings();
-        UnitSystem u = s.units();
-        var m = s.materials();
-        var det = s.detailing();
-        SearchSpace sp = in.space();
+        ScheduleInput input = r.input();
+        Settings settings = input.settings();
+        UnitSystem u = settings.units();
+        var materials = settings.materials();
+        var detailing = settings.detailing();
+        SearchSpace space = input.space();
         out.append("<section id=\"project\">\n<h2>Project data and assumptions</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Code, materials, detailing</caption>\n");
-        kv(out, "code", s.code().edition() + ", nonprestressed beams");
+        kv(out, "code", settings.code().edition() + ", nonprestressed beams");
         kv(out, "units", unitsWords(u));
-        kv(out, "concrete", "f'c = " + u.withUnit(m.fc(), Dim.STRESS) + ", λ = " + u.compact(m.lambda(), Dim.NUMBER)
-                + ", aggregate " + len(m.aggregate(), u));
-        kv(out, "steel", "fy = " + u.withUnit(m.fy(), Dim.STRESS) + " (longitudinal), fyt = " + u.withUnit(m.fyt(), Dim.STRESS)
-                + " (stirrups), Es = " + u.compact(s.code().es(), Dim.STRESS) + " " + u.unit(Dim.STRESS));
-        kv(out, "bar catalog", s.catalog().id() + ": " + s.catalog().title() + " (" + s.catalog().source() + ")");
-        kv(out, "cover", len(det.cover(), u) + " clear to the stirrups, exposure " + det.exposure().key() + " (20.5.1.3)");
-        kv(out, "layer gap", len(det.layerGap(), u) + " clear between layers (25.2.2)");
-        kv(out, "stirrups", "sizes " + labels(sp.stirrupSizes()) + "; legs " + joinInts(sp.stirrupLegs()) + "; spacing "
-                + range(sp.stirrupSpacings(), u));
+        kv(out, "concrete", "f'c = " + u.withUnit(materials.fc(), Dim.STRESS) + ", λ = "
+                + u.compact(materials.lambda(), Dim.NUMBER)
+                + ", aggregate " + len(materials.aggregate(), u));
+        kv(out, "steel", "fy = " + u.withUnit(materials.fy(), Dim.STRESS) + " (longitudinal), fyt = "
+                + u.withUnit(materials.fyt(), Dim.STRESS)
+                + " (stirrups), Es = " + u.compact(settings.code().es(), Dim.STRESS) + " " + u.unit(Dim.STRESS));
+        kv(out, "bar catalog", settings.catalog().id() + ": " + settings.catalog().title() + " ("
+                + settings.catalog().source() + ")");
+        kv(out, "cover", len(detailing.cover(), u) + " clear to the stirrups, exposure " + detailing.exposure().key()
+                + " (20.5.1.3)");
+        kv(out, "layer gap", len(detailing.layerGap(), u) + " clear between layers (25.2.2)");
+        kv(out, "stirrups", "sizes " + labels(space.stirrupSizes()) + "; legs " + joinInts(space.stirrupLegs()) + "; spacing "
+                + range(space.stirrupSpacings(), u));
         out.append("</table>\n");
         out.append("<table class=\"kv\">\n<caption>Search space</caption>\n");
-        kv(out, "widths", lengths(sp.widths(), u));
-        kv(out, "depths", range(sp.depths(), u));
-        kv(out, "bar sizes", labels(sp.barSizes()));
-        kv(out, "compression bar sizes", labels(sp.compressionSizes()));
-        kv(out, "layers of bars", "1 to " + sp.maxLayers() + " on the tension face");
-        kv(out, "bar sizes per beam", "at most " + in.maxBarSizesPerBeam());
+        kv(out, "widths", lengths(space.widths(), u));
+        kv(out, "depths", range(space.depths(), u));
+        kv(out, "bar sizes", labels(space.barSizes()));
+        kv(out, "compression bar sizes", labels(space.compressionSizes()));
+        kv(out, "layers of bars", "1 to " + space.maxLayers() + " on the tension face");
+        kv(out, "bar sizes per beam", "at most " + input.maxBarSizesPerBeam());
         out.append("</table>\n");
-        out.append("<table class=\"kv\">\n<caption>Cost rates").append(in.currency().isEmpty() ? ""
-                : " (" + Svg.esc(in.currency()) + ")").append("</caption>\n");
-        rates(in.rates(), u, out);
+        out.append("<table class=\"kv\">\n<caption>Cost rates").append(input.currency().isEmpty() ? ""
+                : " (" + Svg.esc(input.currency()) + ")").append("</caption>\n");
+        rates(input.rates(), u, out);
         out.append("</table>\n</div>\n");
 
         out.append("<h3>Rules of thumb the design uses</h3>\n<ul class=\"rules\">\n");
         li(out, "Stirrup legs: no more legs than bars in the outer layer of either face, so that every leg's bend "
                 + "holds a bar (25.7.1.2, 25.7.1.3); legs beyond two are crossties; where compression bars are relied "
                 + "on, ties round them as 9.7.6.4 and 25.7.2 ask"
-                + (in.barsPerTwoLegs() > 0 ? "; and, the office's own rule, two legs hold up to " + in.barsPerTwoLegs()
-                        + " bars in a layer, four legs up to " + 2 * in.barsPerTwoLegs() + ", and so on (no clause)"
+                + (input.barsPerTwoLegs() > 0 ? "; and, the office's own rule, two legs hold up to " + input.barsPerTwoLegs()
+                        + " bars in a layer, four legs up to " + 2 * input.barsPerTwoLegs() + ", and so on (no clause)"
                         : "") + ".");
         li(out, "Stirrup zones: from the shear line of a uniformly loaded span through the given shears at d from "
                 + "the faces; the middle zone takes the line's largest shear over its length (and at least "
@@ -165,9 +169,9 @@ public final class ScheduleHtml {
         li(out, "Top bars: two or more bars run the full span; the extra bars at a continuous support run past the "
                 + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0), "
                 + "never cut short of it.");
-        li(out, "At most " + in.maxBarSizesPerBeam() + " longitudinal bar sizes per beam; bottom bars of one size run the "
+        li(out, "At most " + input.maxBarSizesPerBeam() + " longitudinal bar sizes per beam; bottom bars of one size run the "
                 + "full span.");
-        li(out, "Main-bar mass is multiplied by the lap factor " + u.compact(in.rates().lapFactor(), Dim.NUMBER)
+        li(out, "Main-bar mass is multiplied by the lap factor " + u.compact(input.rates().lapFactor(), Dim.NUMBER)
                 + " for laps and waste.");
         li(out, "Skin bars of the smallest bar size at the 24.3.2 spacing where h > " + (u == UnitSystem.US ? "36 in"
                 : "900 mm") + " (9.7.2.3), priced as main bars.");
@@ -179,37 +183,42 @@ public final class ScheduleHtml {
                 + "real corner bar nests slightly further in, and the drawing shows it touching the bend.");
         out.append("</ul>\n");
 
-        Rationalise ra = in.rationalise();
+        Rationalise rationalise = input.rationalise();
         out.append("<h3>Rationalisation</h3>\n");
-        if (ra == null) {
+        if (rationalise == null) {
             out.append("<p>None: each beam is designed at its own optimum.</p>\n");
         } else {
             out.append("<table class=\"kv\">\n");
-            kv(out, "section sizes", ra.maxSectionSizes() == null ? "no limit" : "at most " + ra.maxSectionSizes()
+            kv(out, "section sizes", rationalise.maxSectionSizes() == null ? "no limit" : "at most "
+                    + rationalise.maxSectionSizes()
                     + " distinct b × h over the schedule");
-            kv(out, "bar sizes", ra.maxBarSizes() == null ? "no limit" : "at most " + ra.maxBarSizes()
+            kv(out, "bar sizes", rationalise.maxBarSizes() == null ? "no limit" : "at most " + rationalise.maxBarSizes()
                     + " distinct longitudinal bar sizes over the schedule");
-            kv(out, "groups", ra.groupsSameSection() ? "beams of one group share b × h" : "groups do not constrain b × h");
-            kv(out, "formwork set", money(ra.formworkSetCost(), in.currency()) + " per distinct section size");
+            kv(out, "groups", rationalise.groupsSameSection() ? "beams of one group share b × h"
+                    : "groups do not constrain b × h");
+            kv(out, "formwork set", money(rationalise.formworkSetCost(), input.currency()) + " per distinct section size");
             out.append("</table>\n");
         }
         out.append("</section>\n");
     }
 
-    private static void rates(CostRates c, UnitSystem u, StringBuilder out) {
-        boolean us = u == UnitSystem.US;
+    private static void rates(CostRates rates, UnitSystem u, StringBuilder out) {
+        boolean inchPound = u == UnitSystem.US;
         // the rates are held per SI unit; show them per the input's units
-        double yd3 = 0.764554857984;
-        double lb = 0.45359237;
-        double ft2 = 0.3048 * 0.3048;
-        kv(out, "concrete", amount(us ? c.concretePerM3() * yd3 : c.concretePerM3()) + (us ? " per yd³" : " per m³"));
-        kv(out, "main bars", amount(us ? c.mainBarsPerKg() * lb : c.mainBarsPerKg()) + (us ? " per lb" : " per kg"));
-        kv(out, "stirrups", amount(us ? c.stirrupsPerKg() * lb : c.stirrupsPerKg()) + (us ? " per lb" : " per kg"));
-        kv(out, "formwork", amount(us ? c.formworkPerM2() * ft2 : c.formworkPerM2()) + (us ? " per ft²" : " per m²")
-                + " of contact");
-        kv(out, "depth premium", amount(us ? c.depthPremiumPerM() * ft2 : c.depthPremiumPerM())
-                + (us ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
-        kv(out, "lap factor", u.compact(c.lapFactor(), Dim.NUMBER) + " on main-bar mass");
+        double m3PerCubicYard = 0.764554857984;
+        double kgPerPound = 0.45359237;
+        double m2PerSquareFoot = 0.3048 * 0.3048;
+        kv(out, "concrete", amount(inchPound ? rates.concretePerM3() * m3PerCubicYard : rates.concretePerM3())
+                + (inchPound ? " per yd³" : " per m³"));
+        kv(out, "main bars", amount(inchPound ? rates.mainBarsPerKg() * kgPerPound : rates.mainBarsPerKg())
+                + (inchPound ? " per lb" : " per kg"));
+        kv(out, "stirrups", amount(inchPound ? rates.stirrupsPerKg() * kgPerPound : rates.stirrupsPerKg())
+                + (inchPound ? " per lb" : " per kg"));
+        kv(out, "formwork", amount(inchPound ? rates.formworkPerM2() * m2PerSquareFoot : rates.formworkPerM2())
+                + (inchPound ? " per ft²" : " per m²") + " of contact");
+        kv(out, "depth premium", amount(inchPound ? rates.depthPremiumPerM() * m2PerSquareFoot : rates.depthPremiumPerM())
+                + (inchPound ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
+        kv(out, "lap factor", u.compact(rates.lapFactor(), Dim.NUMBER) + " on main-bar mass");
     }
 
     // ---------------------------------------------------------------- schedule table
@@ -302,28 +311,29 @@ public final class ScheduleHtml {
 
     private static void proof(ScheduleResult r, StringBuilder out) {
         UnitSystem u = r.input().settings().units();
-        Proof<ScheduleResult.Search> p = r.proof();
-        var s = p.search();
-        String cur = r.input().currency();
+        Proof<ScheduleResult.Search> proof = r.proof();
+        ScheduleResult.Search search = proof.search();
+        String currency = r.input().currency();
         out.append("<section id=\"rationalisation\">\n<h2>Rationalisation and its proof</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Proof</caption>\n");
         kv(out, "method", ScheduleWords.method(r));
-        kv(out, "status", p.status().name());
-        boolean none = !p.bounded();
-        kv(out, "objective", none ? "— (no schedule meets the limits)" : money(p.objective(), cur));
-        kv(out, "best bound", none ? "—" : money(p.bound(), cur));
-        kv(out, "gap", none ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()));
-        kv(out, "bar-size sets", s.barSetsTotal() + " considered, " + s.barSetsSolved() + " solved, " + s.barSetsPruned()
-                + " pruned by the cost bound");
-        kv(out, "(beam, size) pairs", s.pairsEvaluated() + " designed exactly");
+        kv(out, "status", proof.status().name());
+        boolean noSchedule = !proof.bounded();
+        kv(out, "objective", noSchedule ? "— (no schedule meets the limits)" : money(proof.objective(), currency));
+        kv(out, "best bound", noSchedule ? "—" : money(proof.bound(), currency));
+        kv(out, "gap", noSchedule ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * proof.gap()));
+        kv(out, "bar-size sets", search.barSetsTotal() + " considered, " + search.barSetsSolved() + " solved, "
+                + search.barSetsPruned() + " pruned by the cost bound");
+        kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly");
         // measured times are left out so that the same result always gives the same page
-        kv(out, "CP-SAT", p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed());
+        kv(out, "CP-SAT", proof.workers() + (proof.workers() == 1 ? " worker" : " workers") + ", seed " + proof.seed());
         out.append("</table>\n");
         out.append("<table class=\"grid\">\n<caption>Section sizes used</caption>\n<thead><tr><th>b × h (")
                 .append(u.unit(Dim.LENGTH)).append(")</th><th>beams</th></tr></thead>\n<tbody>\n");
-        for (ScheduleResult.SectionSize z : r.sizes()) {
-            out.append("<tr><td class=\"num\">").append(u.compact(z.width(), Dim.LENGTH)).append(" × ")
-                    .append(u.compact(z.height(), Dim.LENGTH)).append("</td><td>").append(Svg.esc(String.join(", ", z.beams())))
+        for (ScheduleResult.SectionSize size : r.sizes()) {
+            out.append("<tr><td class=\"num\">").append(u.compact(size.width(), Dim.LENGTH)).append(" × ")
+                    .append(u.compact(size.height(), Dim.LENGTH)).append("</td><td>")
+                            .append(Svg.esc(String.join(", ", size.beams())))
                     .append("</td></tr>\n");
         }
         out.append("</tbody>\n</table>\n</div>\n<p>Bar sizes used: ").append(Svg.esc(r.barSizes().isEmpty() ? "none"
@@ -333,28 +343,28 @@ public final class ScheduleHtml {
     // ---------------------------------------------------------------- costs
 
     private static void costs(ScheduleResult r, StringBuilder out) {
-        String cur = r.input().currency();
+        String currency = r.input().currency();
         out.append("<section id=\"costs\">\n<h2>Cost summary</h2>\n<table class=\"kv money\">\n");
-        kv(out, "beams", money(r.beamsCost(), cur));
+        kv(out, "beams", money(r.beamsCost(), currency));
         String sets = r.input().rationalise() == null ? "" : " (" + r.sizes().size() + " section "
                 + (r.sizes().size() == 1 ? "size" : "sizes") + ")";
-        kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), cur));
-        kvStrong(out, "total", money(r.totalCost(), cur));
-        boolean sets2 = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
+        kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), currency));
+        kvStrong(out, "total", money(r.totalCost(), currency));
+        boolean formsPerSize = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
         if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
         } else {
-            kv(out, "every beam at its own optimum" + (sets2 ? " (a set of forms per size)" : ""),
-                    money(r.unconstrainedCost(), cur));
-            double diff = r.totalCost() - r.unconstrainedCost();
-            String pct = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * diff
+            kv(out, "every beam at its own optimum" + (formsPerSize ? " (a set of forms per size)" : ""),
+                    money(r.unconstrainedCost(), currency));
+            double difference = r.totalCost() - r.unconstrainedCost();
+            String percent = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * difference
                     / r.unconstrainedCost()) : "";
-            kv(out, "difference", (diff >= 0 ? "+" : "") + money(diff, cur) + pct);
+            kv(out, "difference", (difference >= 0 ? "+" : "") + money(difference, currency) + percent);
         }
         out.append("</table>\n");
-        long none = r.beams().stream().filter(b -> !b.feasible()).count();
-        if (none > 0) {
-            out.append("<p class=\"warn\">").append(none).append(none == 1 ? " beam has" : " beams have")
+        long withoutDesign = r.beams().stream().filter(b -> !b.feasible()).count();
+        if (withoutDesign > 0) {
+            out.append("<p class=\"warn\">").append(withoutDesign).append(withoutDesign == 1 ? " beam has" : " beams have")
                     .append(" no passing layout: the costs cover only the beams that have one.</p>\n");
         }
         out.append("</section>\n");
@@ -364,20 +374,23 @@ public final class ScheduleHtml {
 
     private static void standardisation(ScheduleResult r, StringBuilder out) {
         UnitSystem u = r.input().settings().units();
-        String cur = r.input().currency();
-        List<ScheduleResult.StandardisationPoint> pts = new ArrayList<>(r.standardisation());
-        pts.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
+        String currency = r.input().currency();
+        List<ScheduleResult.StandardisationPoint> points = new ArrayList<>(r.standardisation());
+        points.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
         out.append("<section id=\"standardisation\">\n<h2>Price of standardisation</h2>\n<table class=\"grid\">\n<thead><tr>")
-                .append("<th>most section sizes K</th><th>total cost").append(cur.isEmpty() ? "" : " (" + Svg.esc(cur) + ")")
+                .append("<th>most section sizes K</th><th>total cost").append(currency.isEmpty() ? "" : " ("
+                        + Svg.esc(currency) + ")")
                 .append("</th><th>saving of one more size</th><th>status</th><th>bar sizes allowed</th></tr></thead>\n<tbody>\n");
-        double prev = Double.NaN;
-        for (ScheduleResult.StandardisationPoint p : pts) {
-            String saving = Double.isFinite(prev) && Double.isFinite(p.cost()) ? Money.amount(prev - p.cost()) : "—";
-            out.append("<tr><td class=\"num\">").append(p.sizes()).append("</td><td class=\"num\">")
-                    .append(Double.isFinite(p.cost()) ? Money.amount(p.cost()) : "none feasible").append("</td><td class=\"num\">")
-                    .append(saving).append("</td><td>").append(Svg.esc(p.status().name())).append("</td><td>")
-                    .append(Svg.esc(labels(r, p.barSizes()))).append("</td></tr>\n");
-            prev = p.cost();
+        double previous = Double.NaN;
+        for (ScheduleResult.StandardisationPoint point : points) {
+            String saving = Double.isFinite(previous) && Double.isFinite(point.cost())
+                    ? Money.amount(previous - point.cost()) : "—";
+            out.append("<tr><td class=\"num\">").append(point.sizes()).append("</td><td class=\"num\">")
+                    .append(Double.isFinite(point.cost()) ? Money.amount(point.cost()) : "none feasible")
+                    .append("</td><td class=\"num\">")
+                    .append(saving).append("</td><td>").append(Svg.esc(point.status().name())).append("</td><td>")
+                    .append(Svg.esc(labels(r, point.barSizes()))).append("</td></tr>\n");
+            previous = point.cost();
         }
         out.append("</tbody>\n</table>\n<figure class=\"plot\">\n").append(StandardisationPlot.svg(r))
                 .append("</figure>\n</section>\n");
