@@ -247,7 +247,7 @@ public final class BeamJson {
         for (BeamLayout.BarMark m : d.bars()) {
             ObjectNode x = bars.addObject();
             x.put("mark", m.mark());
-            x.put("role", m.role());
+            x.put("role", Words.role(m));
             x.put("bar", m.bar().designation());
             x.put("count", m.count());
             Json.put(x, "length", m.length(), Dim.SPAN, u);

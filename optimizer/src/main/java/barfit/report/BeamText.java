@@ -131,7 +131,7 @@ public final class BeamText {
         TextTable bars = new TextTable(false, false, true, false, true);
         bars.row("mark", "role", "count", "bar", "length (" + u.unit(Dim.SPAN) + ")");
         for (BeamLayout.BarMark b : d.bars()) {
-            bars.row(b.mark(), b.role(), String.valueOf(b.count()), b.bar().label(), u.number(b.length(), Dim.SPAN));
+            bars.row(b.mark(), Words.role(b), String.valueOf(b.count()), b.bar().label(), u.number(b.length(), Dim.SPAN));
         }
         bars.write("    ", out);
         if (!o.alternatives().isEmpty()) {
@@ -231,7 +231,7 @@ public final class BeamText {
 
     static String extensionRule(BeamProblem p, BeamLayout l) {
         var det = l.detailing(p.detailing());
-        return barfit.design.beam.Extension.of(p, l.width(), l.height(), det, l.top()).rule();
+        return Words.extension(barfit.design.beam.Extension.of(p, l.width(), l.height(), det, l.top()).governs());
     }
 
     static String demand(BeamProblem p, UnitSystem u) {

@@ -461,7 +461,8 @@ public final class ScheduleHtml {
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
             kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + BeamText.topAtMid(d, u));
-            String rule = " (" + Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top()).rule() + ")";
+            String rule = " (" + Words.extension(Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()),
+                    l.top()).governs()) + ")";
             if (p.leftSupport()) {
                 boolean extra = BeamLayout.sum(l.topLeft()) > l.topContinuous();
                 kv(out, "top at left support", topAtSupport(row.left(), u) + (extra ? rule : ""));
@@ -502,7 +503,7 @@ public final class ScheduleHtml {
         out.append("<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
                 .append("<th>bar</th><th>length (").append(u.unit(Dim.SPAN)).append(")</th></tr></thead>\n<tbody>\n");
         for (BeamLayout.BarMark m : d.bars()) {
-            out.append("<tr><td>").append(Svg.esc(m.mark())).append("</td><td>").append(Svg.esc(m.role()))
+            out.append("<tr><td>").append(Svg.esc(m.mark())).append("</td><td>").append(Svg.esc(Words.role(m)))
                     .append("</td><td class=\"num\">").append(m.count()).append("</td><td>").append(Svg.esc(m.bar().label()))
                     .append("</td><td class=\"num\">").append(u.number(m.length(), Dim.SPAN)).append("</td></tr>\n");
         }
