@@ -130,7 +130,7 @@ public final class ScheduleText {
                 .map(barfit.catalogs.BarSize::label).findFirst().orElse(designation);
     }
 
-    public static String limits(barfit.schedule.Rationalise rationalise) {
+    public static String limits(barfit.input.Rationalise rationalise) {
         StringBuilder words = new StringBuilder();
         words.append(rationalise.maxSectionSizes() == null ? "any number of section sizes"
                 : "at most " + rationalise.maxSectionSizes() + " section sizes");

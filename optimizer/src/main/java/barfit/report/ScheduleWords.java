@@ -1,6 +1,6 @@
 package barfit.report;
 
-import barfit.schedule.Rationalise;
+import barfit.input.Rationalise;
 import barfit.schedule.ScheduleResult;
 
 /** Words the schedule's reports share about the whole schedule: how it was proven, or why it could not be. */

@@ -2,6 +2,7 @@ package barfit.schedule;
 
 import barfit.design.CostModel;
 import barfit.design.SolverOptions;
+import barfit.input.Rationalise;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;

@@ -6,6 +6,7 @@ import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamProblem;
+import barfit.input.Rationalise;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashSet;
