@@ -106,7 +106,7 @@ class CodeRulesHomeTest {
                     "the lowest bar grade accepted (Grade 280 / 40): a range check of the input, no clause"),
             new Allowed("barfit/cli/BenchCommand.java", "100000", "make > 100_000",
                     "the most beams the bench writes: a limit of the tool"),
-            new Allowed("barfit/design/beam/BeamDesigner.java", "25", "SI_DEPTH_STEP = 25.0",
+            new Allowed("barfit/design/beam/SpanDiagnoser.java", "25", "SI_DEPTH_STEP = 25.0",
                     "the depth step of a one-depth search (1 in in inch-pound input): a grid, not a code rule"),
             new Allowed("barfit/design/Diagnoser.java", "25", "SI_DEPTH_STEP = 25.0",
                     "the depth step of a one-depth search (1 in in inch-pound input): a grid, not a code rule"),

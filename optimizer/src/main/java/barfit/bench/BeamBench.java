@@ -67,7 +67,7 @@ public final class BeamBench {
 
     public static Figures run(int n, int compare, long seed, PrintWriter out) {
         CostModel cost = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
-        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(60, 1, 1), UnitSystem.SI);
+        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(60, 1, 1));
         SearchSpace full = SectionBench.defaultSpace();
         for (BeamProblem p : instances(10, seed + 1, full)) {
             designer.design(p, 0); // warm up

@@ -102,12 +102,12 @@ public final class ScheduleBench {
             out.printf(Locale.ROOT, "%d beams, each its own optimum, %d threads: %.2f s wall (%.1f ms a beam); "
                     + "%d with a design; total %.0f%n", beams, threads, plainS, 1000 * plainS / beams, feasible,
                     plain.totalCost());
-            String rat = "rationalise: {max_section_sizes: " + k + ", max_bar_sizes: " + m + "}\n";
+            String rationalise = "rationalise: {max_section_sizes: " + k + ", max_bar_sizes: " + m + "}\n";
             Path rdir = dir.resolve("rationalised");
-            write(rdir, ratBeams, seed + 1, rat);
+            write(rdir, ratBeams, seed + 1, rationalise);
             t0 = System.nanoTime();
             PhaseClock clock = new PhaseClock();
-            ScheduleResult r = solve(rdir, ratBeams, seed + 1, rat, threads, clock);
+            ScheduleResult r = solve(rdir, ratBeams, seed + 1, rationalise, threads, clock);
             double ratS = (System.nanoTime() - t0) / 1e9;
             double mainS = (clock.curveStart - t0) / 1e9;
             var p = r.proof();
@@ -137,11 +137,12 @@ public final class ScheduleBench {
         volatile long curveStart;
 
         @Override
-        public void update(String phase, int done, int total) {
-            if (curveStart == 0 && phase.startsWith("price of standardisation")) {
+        public void update(barfit.schedule.Progress.Phase phase, int done, int total) {
+            if (curveStart == 0 && phase.step() == barfit.schedule.Progress.Step.STANDARDISATION) {
                 curveStart = System.nanoTime();
             }
-            if (curveStart == 0 && phase.startsWith("rationalising") && phase.contains("any number")) {
+            if (curveStart == 0 && phase.step() == barfit.schedule.Progress.Step.BAR_SIZE_SETS
+                    && phase.maxSizes() == barfit.schedule.Progress.Phase.ANY_NUMBER) {
                 curveStart = System.nanoTime(); // the curve starts with the schedule without a size limit
             }
         }

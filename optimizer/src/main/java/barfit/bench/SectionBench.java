@@ -70,7 +70,7 @@ public final class SectionBench {
 
     public static Figures run(int n, int exhaustiveEvery, long seed, PrintWriter out) {
         CostModel cost = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
-        SectionDesigner designer = new SectionDesigner(cost, new SolverOptions(60, 1, 1), UnitSystem.SI);
+        SectionDesigner designer = new SectionDesigner(cost, new SolverOptions(60, 1, 1));
         ExhaustiveSearch oracle = new ExhaustiveSearch(cost);
         List<SectionProblem> problems = instances(n, seed);
         // warm up the JIT and the native library on instances outside the measured set

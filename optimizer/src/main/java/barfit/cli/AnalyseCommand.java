@@ -3,6 +3,7 @@ package barfit.cli;
 import barfit.analysis.Coefficients;
 import barfit.analysis.LineAnalysis;
 import barfit.analysis.LineResult;
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.catalogs.yaml.YFields;
@@ -56,7 +57,7 @@ final class AnalyseCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         if (force && plot == null) {
-            throw new InputError(Location.ofFile("--force"), "has nothing to replace without --plot DIR");
+            throw OptionError.of("--force", "has nothing to replace without --plot DIR");
         }
         YFields doc = SettingsReader.root(YamlReader.read(file));
         Settings settings = SettingsReader.read(doc, file);
@@ -68,7 +69,7 @@ final class AnalyseCommand implements Callable<Integer> {
         if (line != null) {
             List<LineInput> only = lines.stream().filter(l -> l.id().equals(line)).toList();
             if (only.isEmpty()) {
-                throw new InputError(Location.ofFile(file.toString()), "--line " + line + ": no line with that id; "
+                throw OptionError.of("--line", "no line " + Echo.cut(line) + " in " + file + "; "
                         + "expected one of: " + String.join(", ", lines.stream().map(LineInput::id).toList()));
             }
             lines = only;

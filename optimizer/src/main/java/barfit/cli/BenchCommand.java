@@ -114,16 +114,13 @@ final class BenchCommand implements Callable<Integer> {
             return Main.OK;
         }
         if (instances < 1) {
-            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--instances"),
-                    "expected at least 1 single section to time, got " + instances);
+            throw OptionError.of("--instances", "expected at least 1 single section to time, got " + instances);
         }
         if (beams < 0) {
-            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--beams"),
-                    "expected 0 (skip the spans) or more whole spans to time, got " + beams);
+            throw OptionError.of("--beams", "expected 0 (skip the spans) or more whole spans to time, got " + beams);
         }
         if (startupRuns < 0 || startupRuns > 100) {
-            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--startup-runs"),
-                    "expected 0 (skip the start-up figure) to 100 runs, got " + startupRuns);
+            throw OptionError.of("--startup-runs", "expected 0 (skip the start-up figure) to 100 runs, got " + startupRuns);
         }
         String startupJson = startup(out);
         out.println("barfit bench: single sections, default search space, 1 CP-SAT worker, seed " + seed);
@@ -193,12 +190,10 @@ final class BenchCommand implements Callable<Integer> {
 
     private int makeSchedule(PrintWriter out) {
         if (make < 1 || make > 100_000) {
-            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--make-schedule"),
-                    "expected 1 to 100000 beams, got " + make);
+            throw OptionError.of("--make-schedule", "expected 1 to 100000 beams, got " + make);
         }
         if (outDir == null) {
-            throw new barfit.catalogs.InputError(barfit.catalogs.yaml.Location.ofFile("--out"),
-                    "--make-schedule needs --out DIR");
+            throw OptionError.of("--out", "--make-schedule needs --out DIR");
         }
         for (String name : new String[] {"settings.yaml", "beams.csv"}) {
             if (java.nio.file.Files.exists(outDir.resolve(name))) {

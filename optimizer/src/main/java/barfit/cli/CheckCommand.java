@@ -1,7 +1,6 @@
 package barfit.cli;
 
-import barfit.catalogs.InputError;
-import barfit.catalogs.yaml.Location;
+import barfit.catalogs.Echo;
 import barfit.input.CheckBeam;
 import barfit.input.CheckInput;
 import barfit.input.CheckInputReader;
@@ -48,8 +47,7 @@ final class CheckCommand implements Callable<Integer> {
         if (beam != null) {
             beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
             if (beams.isEmpty()) {
-                throw new InputError(Location.ofFile(file.toString()), "--beam " + beam
-                        + ": no beam with that id; expected one of: "
+                throw OptionError.of("--beam", "no beam " + Echo.cut(beam) + " in " + file + "; expected one of: "
                         + String.join(", ", input.beams().stream().map(CheckBeam::id).toList()));
             }
         }

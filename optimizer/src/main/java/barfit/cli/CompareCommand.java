@@ -6,9 +6,11 @@ import barfit.design.SolverOptions;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.report.StudyJson;
+import barfit.report.StudySay;
 import barfit.report.StudyText;
 import barfit.section.trail.Dim;
 import barfit.study.Compare;
+import barfit.study.Say;
 import barfit.study.Target;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -66,7 +68,7 @@ final class CompareCommand implements Callable<Integer> {
         double maxW = maxWidth == null ? widest + 2 * step : u.toSI(maxWidth, Dim.LENGTH);
         double widestAllowed = 5 * widest;
         if (maxWidth != null && !(maxW >= widest + step - 1e-6 && maxW <= widestAllowed + 1e-6)) {
-            throw new InputError(Location.ofFile("--max-width"), "expected a width from "
+            throw OptionError.of("--max-width", "expected a width from "
                     + u.compact(widest + step, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (one width step of " + u.compact(step, Dim.LENGTH)
                     + " beyond the search's widest, " + u.compact(widest, Dim.LENGTH) + ") to "
                     + u.compact(widestAllowed, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (5 times the widest), got "
@@ -89,13 +91,13 @@ final class CompareCommand implements Callable<Integer> {
             double lo = u.limit(barfit.section.MaterialLimits.fcMin(u.code()), Dim.STRESS);
             double hi = u.limit(barfit.section.MaterialLimits.fcMax(u.code()), Dim.STRESS);
             if (!(v >= lo && v <= hi)) {
-                throw new InputError(Location.ofFile("--fc"), "expected f'c between " + Studies.fmt(lo) + " and "
+                throw OptionError.of("--fc", "expected f'c between " + Studies.fmt(lo) + " and "
                         + Studies.fmt(hi) + " " + u.unit(Dim.STRESS) + ", got " + Studies.fmt(v));
             }
             if (Double.isNaN(in.costs().concreteAt(mpa))) {
                 String grade = Studies.fmt(v) + " " + u.unit(Dim.STRESS);
                 if (fcs != null) {
-                    throw new InputError(Location.ofFile("--fc"), "no concrete rate for f'c = " + grade
+                    throw OptionError.of("--fc", "no concrete rate for f'c = " + grade
                             + "; expected it within the grades of " + byKey);
                 }
                 // the grade is one compare tries by default: the rate table in the file does not reach it
@@ -108,20 +110,10 @@ final class CompareCommand implements Callable<Integer> {
             }
             fcMpa.add(mpa);
         }
-        List<Target> targets = Studies.targets(in, beam, file, options);
+        Say say = new StudySay(u);
+        List<Target> targets = Studies.targets(in, beam, file, options, say);
         List<Compare.Result> results = new ArrayList<>();
         List<Boolean> perBeam = new ArrayList<>();
-        Compare.Say say = new Compare.Say() {
-            @Override
-            public String length(double mm) {
-                return u.compact(mm, Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
-            }
-
-            @Override
-            public String stress(double mpa) {
-                return u.compact(mpa, Dim.STRESS) + " " + u.unit(Dim.STRESS);
-            }
-        };
         for (Target t : targets) {
             results.add(Compare.run(t, capMm, maxW, step, fcMpa, Studies.cost(in), fc -> Studies.costAtFc(in, fc), say));
             perBeam.add(t.costPerBeam());

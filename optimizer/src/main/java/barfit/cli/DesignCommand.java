@@ -1,5 +1,6 @@
 package barfit.cli;
 
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
@@ -63,7 +64,7 @@ final class DesignCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (alternatives < 0 || alternatives > 20) {
-            throw new InputError(Location.ofFile("--alternatives"), "expected 0 to 20, got " + alternatives);
+            throw OptionError.of("--alternatives", "expected 0 to 20, got " + alternatives);
         }
         SolverOptions options = solver.options();
         DesignInput input = DesignInputReader.read(file, false);
@@ -78,15 +79,14 @@ final class DesignCommand implements Callable<Integer> {
             if (beams.isEmpty() && lines.isEmpty()) {
                 List<String> ids = new ArrayList<>(input.beams().stream().map(DesignBeam::id).toList());
                 LinesReader.read(DesignInputReader.document(file), input.settings()).forEach(l -> ids.add(l.id()));
-                throw new InputError(Location.ofFile(file.toString()), "--beam " + beam
-                        + ": no beam or line with that id; expected one of: " + String.join(", ", ids));
+                throw OptionError.of("--beam", "no beam or line " + Echo.cut(beam) + " in " + file + "; expected one of: "
+                        + String.join(", ", ids));
             }
         }
         var settings = input.settings();
         CostModel cost = new CostModel(input.rates(), settings.detailing().cover(), settings.units().code());
-        SectionDesigner designer = new SectionDesigner(cost, options,
-                settings.units());
-        BeamDesigner spans = new BeamDesigner(cost, options, settings.units());
+        SectionDesigner designer = new SectionDesigner(cost, options);
+        BeamDesigner spans = new BeamDesigner(cost, options);
         List<DesignItem> outcomes = new ArrayList<>();
         for (DesignBeam b : beams) {
             outcomes.add(b.isWhole() ? DesignItem.of(spans.design(span(input, b), alternatives))

@@ -1,6 +1,7 @@
 package barfit.cli;
 
 import barfit.schedule.Progress;
+import barfit.schedule.Progress.Phase;
 import java.io.PrintWriter;
 import java.util.Locale;
 
@@ -31,8 +32,22 @@ final class ProgressBar implements Progress {
         return System.console() != null;
     }
 
+    /** The phase in words, as the bar shows it. */
+    static String words(Phase phase) {
+        return switch (phase.step()) {
+            case DESIGNING_BEAMS -> "designing beams";
+            case BOUNDING_SIZES -> "bounding sizes";
+            case PRICING_SIZES -> "pricing sizes";
+            case BAR_SIZE_SETS -> phase.maxSizes() == Phase.ANY_NUMBER
+                    ? "rationalising: bar-size sets, any number of sizes"
+                    : "rationalising: bar-size sets for " + phase.maxSizes() + (phase.maxSizes() == 1 ? " size" : " sizes");
+            case STANDARDISATION -> "price of standardisation";
+            case DESIGNING_IN_CHOSEN_SIZES -> "designing in the chosen sizes";
+        };
+    }
+
     @Override
-    public synchronized void update(String phase, int done, int total) {
+    public synchronized void update(Phase phase, int done, int total) {
         if (!enabled) {
             return;
         }
@@ -44,7 +59,7 @@ final class ProgressBar implements Progress {
         int filled = total <= 0 ? WIDTH : (int) Math.round(WIDTH * (double) done / total);
         String bar = "#".repeat(filled) + ".".repeat(WIDTH - filled);
         String line = String.format(Locale.ROOT, "[%s] %3d%% %s %d/%d", bar, total <= 0 ? 100 : 100 * done / total,
-                phase, done, total);
+                words(phase), done, total);
         err.print("\r" + line + " ".repeat(Math.max(0, width - line.length())));
         width = Math.max(width, line.length());
         err.flush();

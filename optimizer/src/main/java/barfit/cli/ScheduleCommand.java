@@ -77,7 +77,7 @@ final class ScheduleCommand implements Callable<Integer> {
         int cores = Runtime.getRuntime().availableProcessors();
         int nThreads = threads == null ? cores : threads;
         if (nThreads < 1 || nThreads > 256) {
-            throw new InputError(Location.ofFile("--threads"), "expected 1 to 256, got " + nThreads);
+            throw OptionError.of("--threads", "expected 1 to 256, got " + nThreads);
         }
         SolverOptions options = solver.options();
         if (out != null) {
@@ -110,13 +110,12 @@ final class ScheduleCommand implements Callable<Integer> {
     /** Before any work: refuse to replace a user's file without --force, and never replace an input. */
     private void checkOutputs() {
         if (Files.exists(out) && !Files.isDirectory(out)) {
-            throw new InputError(Location.ofFile(out.toString()), "--out: this is a file; expected a directory");
+            throw OptionError.of("--out", out + " is a file; expected a directory");
         }
         for (String name : OUTPUTS) {
             Path target = out.resolve(name);
             if (sameFile(target, file) || (beams != null && sameFile(target, beams))) {
-                throw new InputError(Location.ofFile(target.toString()), "--out would replace an input file; "
-                        + "expected another directory");
+                throw OptionError.of("--out", target + " would replace an input file; expected another directory");
             }
             if (Files.exists(target) && !force) {
                 throw new InputError(Location.ofFile(target.toString()), "already exists; expected a new directory, "

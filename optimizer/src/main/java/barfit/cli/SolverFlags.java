@@ -1,7 +1,5 @@
 package barfit.cli;
 
-import barfit.catalogs.InputError;
-import barfit.catalogs.yaml.Location;
 import barfit.design.SolverOptions;
 import picocli.CommandLine.Option;
 
@@ -20,10 +18,10 @@ final class SolverFlags {
 
     SolverOptions options() {
         if (workers < 1 || workers > 64) {
-            throw new InputError(Location.ofFile("--workers"), "expected 1 to 64, got " + workers);
+            throw OptionError.of("--workers", "expected 1 to 64, got " + workers);
         }
         if (!(timeLimit > 0) || Double.isInfinite(timeLimit)) {
-            throw new InputError(Location.ofFile("--time-limit"), "expected a positive number of seconds");
+            throw OptionError.of("--time-limit", "expected a positive number of seconds");
         }
         return new SolverOptions(timeLimit, workers, seed);
     }

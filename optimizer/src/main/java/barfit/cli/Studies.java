@@ -1,5 +1,6 @@
 package barfit.cli;
 
+import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
@@ -13,6 +14,7 @@ import barfit.input.LinesReader;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.line.LineSpans;
 import barfit.section.trail.Dim;
+import barfit.study.Say;
 import barfit.study.SectionTarget;
 import barfit.study.SpanTarget;
 import barfit.study.Target;
@@ -39,7 +41,7 @@ final class Studies {
      * the sections settle, then studied as a whole span with that envelope: "LINE/span 2"); {@code beam} picks
      * a beam, a line (all its parts) or one part.
      */
-    static List<Target> targets(DesignInput in, String beam, Path file, SolverOptions options) {
+    static List<Target> targets(DesignInput in, String beam, Path file, SolverOptions options, Say say) {
         List<Target> out = new ArrayList<>();
         List<String> ids = new ArrayList<>();
         for (DesignBeam b : in.beams()) {
@@ -47,12 +49,12 @@ final class Studies {
             if (beam != null && !b.id().equals(beam)) {
                 continue;
             }
-            out.add(b.isWhole() ? new SpanTarget(DesignCommand.span(in, b), options, in.settings().units())
-                    : new SectionTarget(DesignCommand.problem(in, b), options, in.settings().units()));
+            out.add(b.isWhole() ? new SpanTarget(DesignCommand.span(in, b), options, say)
+                    : new SectionTarget(DesignCommand.problem(in, b), options, say));
         }
         List<LineInput> lines = LinesReader.read(DesignInputReader.document(file), in.settings());
         if (!lines.isEmpty()) {
-            BeamDesigner spans = new BeamDesigner(cost(in), options, in.settings().units());
+            BeamDesigner spans = new BeamDesigner(cost(in), options);
             LineSpans byLine = new LineSpans(in.settings(), in.space(), spans, in.maxBarSizesPerBeam(),
                     in.barsPerTwoLegs());
             for (LineInput l : lines) {
@@ -65,14 +67,14 @@ final class Studies {
                     if (whole || part.problem().id().equals(beam)) {
                         // studied free of the section the line was designed at, with that section's envelope
                         out.add(new SpanTarget(part.problem().withSpace(in.space()).withFixedWidth(null), options,
-                                in.settings().units()));
+                                say));
                     }
                 }
             }
         }
         if (out.isEmpty()) {
-            throw new InputError(Location.ofFile(file.toString()), "--beam " + beam + ": no beam, line or line part "
-                    + "(LINE/span N) with that id; expected one of: " + String.join(", ", ids));
+            throw OptionError.of("--beam", "no beam, line or line part (LINE/span N) " + Echo.cut(beam) + " in " + file
+                    + "; expected one of: " + String.join(", ", ids));
         }
         return out;
     }
@@ -97,7 +99,7 @@ final class Studies {
         double lo = depths.get(0);
         double hi = depths.get(depths.size() - 1);
         if (!(mm >= lo - 1e-6 && mm <= hi + 1e-6)) {
-            throw new InputError(Location.ofFile(option), "expected a depth within the search range "
+            throw OptionError.of(option, "expected a depth within the search range "
                     + u.compact(lo, Dim.LENGTH) + " to " + u.compact(hi, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ", got "
                     + fmt(userValue));
         }

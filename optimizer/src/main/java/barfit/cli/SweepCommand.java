@@ -6,6 +6,7 @@ import barfit.design.SolverOptions;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.report.StudyJson;
+import barfit.report.StudySay;
 import barfit.report.StudyText;
 import barfit.report.SweepPlot;
 import barfit.section.trail.Dim;
@@ -101,16 +102,16 @@ final class SweepCommand implements Callable<Integer> {
         double hi = to == null ? depths.get(depths.size() - 1) : Studies.depthWithinSearch(in, "--to", to);
         double st = step == null ? (depths.size() > 1 ? depths.get(1) - depths.get(0) : 25) : u.toSI(step, Dim.LENGTH);
         if (step != null && !(step > 0)) {
-            throw new InputError(Location.ofFile("--step"), "expected a positive step, got " + Studies.fmt(step));
+            throw OptionError.of("--step", "expected a positive step, got " + Studies.fmt(step));
         }
         if (!(hi > lo)) {
-            throw new InputError(Location.ofFile("--from/--to"), "the range is empty: expected --from below --to");
+            throw OptionError.of("--from/--to", "the range is empty: expected --from below --to");
         }
         if ((hi - lo) / st > 400) {
-            throw new InputError(Location.ofFile("--step"), "the range gives more than 400 caps; expected a larger step");
+            throw OptionError.of("--step", "the range gives more than 400 caps; expected a larger step");
         }
         if (csv && format == OutputFormat.json) {
-            throw new InputError(Location.ofFile("--csv"), "--csv and --format json ask for two outputs; expected one of "
+            throw OptionError.of("--csv", "--csv and --format json ask for two outputs; expected one of "
                     + "them");
         }
         if (plot != null) {
@@ -124,9 +125,9 @@ final class SweepCommand implements Callable<Integer> {
             caps.add(hi); // --to off the step grid: the range ends where it was asked to
         }
         SolverOptions options = solver.options();
-        List<Target> targets = Studies.targets(in, beam, file, options);
+        List<Target> targets = Studies.targets(in, beam, file, options, new StudySay(u));
         if (plot != null && targets.size() != 1) {
-            throw new InputError(Location.ofFile("--plot"), "a plot shows one beam; expected --beam ID with --plot (the "
+            throw OptionError.of("--plot", "a plot shows one beam; expected --beam ID with --plot (the "
                     + "file has " + targets.size() + " beams)");
         }
         List<Sweep.Result> results = new ArrayList<>();

@@ -1,13 +1,49 @@
 package barfit.design;
 
-import java.util.List;
+import barfit.section.CheckResult;
 
 /**
- * Why no layout passes: the limit that binds, the strongest ductile layout within the limits and
- * its phi Mn, and the least changes (one limit relaxed at a time) that would give a passing design.
+ * Why no layout passes, as data the reports put in words: the limit that binds ({@code limit}, a check id
+ * or {@code headroom}, {@code spacing}, {@code flexure}, {@code shear}, {@code detailing}) and the facts
+ * behind it ({@code cause}), the strongest ductile layout within the limits and its phi Mn (null and 0
+ * where none was looked for), and the least changes, one limit relaxed at a time, that give a passing
+ * design: {@code deeper}, {@code wider} (null where none was found) and {@code moreLayers}, the layers of
+ * tension bars that would do (null where one more does not). {@code maxDepth} and {@code fixedWidth} are the
+ * beam's own (null where it has none).
  */
-public record Diagnosis(String limit, String summary, Layout strongest, double strongestPhiMn, List<String> fixes) {
-    public Diagnosis {
-        fixes = List.copyOf(fixes);
+public record Diagnosis(String limit, Cause cause, Layout strongest, double strongestPhiMn, Fix deeper, Fix wider,
+        Integer moreLayers, Double maxDepth, Double fixedWidth) {
+
+    /** What stops the section, as facts. */
+    public sealed interface Cause permits BelowShallowest, FrameCheckFails, NoLayoutFits, FlexureFails, ShearFails,
+            DetailingFails {
+    }
+
+    /** {@code max_depth} is below the shallowest depth searched, {@code shallowest}. */
+    public record BelowShallowest(double shallowest) implements Cause {
+    }
+
+    /** A check of the frame alone (minimum depth, cover...) fails on the largest frame, {@code deepest} deep. */
+    public record FrameCheckFails(CheckResult check, double deepest) implements Cause {
+    }
+
+    /** No bar layout fits the web at the widest width allowed. */
+    public record NoLayoutFits(double width) implements Cause {
+    }
+
+    /** The strongest ductile layout on the largest frame ({@code strongestPhiMn}) is below Mu. */
+    public record FlexureFails(double width, double height, double mu) implements Cause {
+    }
+
+    /** Flexure can be met, but no stirrup option carries {@code vu}. */
+    public record ShearFails(double vu) implements Cause {
+    }
+
+    /** Strength can be met but no layout passes every detailing check. */
+    public record DetailingFails() implements Cause {
+    }
+
+    /** A size at which the section designs. */
+    public record Fix(double width, double height) {
     }
 }

@@ -8,10 +8,8 @@ import barfit.section.CheckResult;
 import barfit.section.Demand;
 import barfit.section.SectionChecks;
 import barfit.section.Stirrups;
-import barfit.section.trail.Dim;
 import barfit.section.trail.Q;
 import barfit.section.trail.Trail;
-import barfit.units.UnitSystem;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -23,12 +21,10 @@ import java.util.List;
 public final class SectionDesigner {
     private final CostModel cost;
     private final SolverOptions options;
-    private final UnitSystem units;
 
-    public SectionDesigner(CostModel cost, SolverOptions options, UnitSystem units) {
+    public SectionDesigner(CostModel cost, SolverOptions options) {
         this.cost = cost;
         this.options = options;
-        this.units = units;
     }
 
     public DesignOutcome design(SectionProblem p, int alternatives) {
@@ -36,7 +32,7 @@ public final class SectionDesigner {
         List<Candidate> cands = gen.candidates();
         if (cands.isEmpty()) {
             var proof = Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options);
-            return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), Diagnoser.diagnose(p, cost, units));
+            return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), Diagnoser.diagnose(p, cost));
         }
         Selection sel = new Selection();
         List<Integer> all = new ArrayList<>();
@@ -122,69 +118,68 @@ public final class SectionDesigner {
     List<Binding> binding(SectionProblem p, Layout l) {
         List<Binding> out = new ArrayList<>();
         // one tension bar fewer
-        int n = l.tensionBarCount();
+        int tensionBars = l.tensionBarCount();
         int layers = l.tensionCounts().size();
-        BarSize t = l.tensionBar();
-        var det = l.detailing(p.detailing());
-        int nmax = BarSpacing.maxBars(l.width(), det, t, p.materials(), p.code());
-        int[] fewer = TensionSearch.greedySplit(n - 1, layers, nmax, 2);
+        BarSize tensionBar = l.tensionBar();
+        var detailing = l.detailing(p.detailing());
+        int mostBars = BarSpacing.maxBars(l.width(), detailing, tensionBar, p.materials(), p.code());
+        int[] fewer = TensionSearch.greedySplit(tensionBars - 1, layers, mostBars, 2);
         if (fewer == null && layers > 1) {
-            fewer = TensionSearch.greedySplit(n - 1, layers - 1, nmax, 2);
+            fewer = TensionSearch.greedySplit(tensionBars - 1, layers - 1, mostBars, 2);
         }
         if (fewer != null) {
             List<Integer> counts = new ArrayList<>();
             for (int c : fewer) {
                 counts.add(c);
             }
-            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), t, counts, l.compressionBar(),
-                    l.compressionCount(), l.stirrups(), l.skin());
-            add(out, failingIds(p, lean), "one " + t.label() + " fewer");
+            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, counts,
+                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.ONE_BAR_FEWER, tensionBars - 1, tensionBar);
         }
         // one depth step shallower, same bars
         List<Double> depths = p.space().depths();
-        int hi = depths.indexOf(l.height());
-        if (hi > 0) {
-            double h2 = depths.get(hi - 1);
-            Layout lean = new Layout(l.width(), h2, l.flange(), l.bending(), t, l.tensionCounts(), l.compressionBar(),
-                    l.compressionCount(), l.stirrups(), l.skin());
-            add(out, failingIds(p, lean), "h = " + units.compact(h2, Dim.LENGTH) + " " + units.unit(Dim.LENGTH));
+        int depthIndex = depths.indexOf(l.height());
+        if (depthIndex > 0) {
+            double shallower = depths.get(depthIndex - 1);
+            Layout lean = new Layout(l.width(), shallower, l.flange(), l.bending(), tensionBar, l.tensionCounts(),
+                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.SHALLOWER, shallower, null);
         }
         if (p.maxDepth() != null && l.height() >= p.maxDepth() - 1e-9) {
-            out.add(new Binding("headroom", "h = max_depth"));
+            out.add(new Binding("headroom", Binding.Leaner.AT_MAX_DEPTH, l.height()));
         }
         // next narrower width, same bars
         List<Double> widths = p.widths();
-        int wi = widths.indexOf(l.width());
-        if (wi > 0) {
-            Layout lean = new Layout(widths.get(wi - 1), l.height(), l.flange(), l.bending(), t, l.tensionCounts(),
-                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
-            add(out, failingIds(p, lean), "b = " + units.compact(widths.get(wi - 1), Dim.LENGTH) + " " + units.unit(Dim.LENGTH));
+        int widthIndex = widths.indexOf(l.width());
+        if (widthIndex > 0) {
+            Layout lean = new Layout(widths.get(widthIndex - 1), l.height(), l.flange(), l.bending(), tensionBar,
+                    l.tensionCounts(), l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.NARROWER, widths.get(widthIndex - 1), null);
         }
         // stirrups one spacing step wider
-        List<Double> sp = p.space().stirrupSpacings();
-        int si = sp.indexOf(l.stirrups().spacing());
-        if (si >= 0 && si < sp.size() - 1) {
-            Stirrups wider = new Stirrups(l.stirrups().bar(), l.stirrups().legs(), sp.get(si + 1));
-            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), t, l.tensionCounts(),
+        List<Double> spacings = p.space().stirrupSpacings();
+        int spacingIndex = spacings.indexOf(l.stirrups().spacing());
+        if (spacingIndex >= 0 && spacingIndex < spacings.size() - 1) {
+            Stirrups wider = new Stirrups(l.stirrups().bar(), l.stirrups().legs(), spacings.get(spacingIndex + 1));
+            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, l.tensionCounts(),
                     l.compressionBar(), l.compressionCount(), wider, l.skin());
-            add(out, failingIds(p, lean), "stirrups @ " + units.compact(sp.get(si + 1), Dim.LENGTH) + " "
-                    + units.unit(Dim.LENGTH));
+            add(out, failingIds(p, lean), Binding.Leaner.STIRRUPS_WIDER_APART, spacings.get(spacingIndex + 1), null);
         }
         // fewer stirrup legs, same spacing: says when the office's legs rule (or the code's) decided them
         List<Integer> legs = p.space().stirrupLegs();
-        int li = legs.indexOf(l.stirrups().legs());
-        if (li > 0) {
-            Stirrups fewerLegs = new Stirrups(l.stirrups().bar(), legs.get(li - 1), l.stirrups().spacing());
-            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), t, l.tensionCounts(),
+        int legsIndex = legs.indexOf(l.stirrups().legs());
+        if (legsIndex > 0) {
+            Stirrups fewerLegs = new Stirrups(l.stirrups().bar(), legs.get(legsIndex - 1), l.stirrups().spacing());
+            Layout lean = new Layout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, l.tensionCounts(),
                     l.compressionBar(), l.compressionCount(), fewerLegs, l.skin());
-            add(out, failingIds(p, lean), legs.get(li - 1) + " stirrup legs");
+            add(out, failingIds(p, lean), Binding.Leaner.FEWER_LEGS, legs.get(legsIndex - 1), null);
         }
         return out;
     }
 
-    private static void add(List<Binding> out, List<String> ids, String when) {
+    private static void add(List<Binding> out, List<String> ids, Binding.Leaner leaner, double value, BarSize bar) {
         for (String id : ids) {
-            out.add(new Binding(id, when));
+            out.add(new Binding(id, leaner, value, bar));
         }
     }
 }

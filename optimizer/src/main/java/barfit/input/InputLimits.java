@@ -132,6 +132,14 @@ public final class InputLimits {
         return v;
     }
 
+    /** As above, for a value without units (a count, a cost): its range is the same in either system. */
+    public static double require(YFields f, String key, Range r, double v) {
+        if (r.dim() != Dim.NUMBER || r.siMin() != r.usMin() || r.siMax() != r.usMax()) {
+            throw new IllegalArgumentException(r.what() + " has units; give the file's units");
+        }
+        return require(f, key, r, UnitSystem.SI, v);
+    }
+
     static String fmt(double v) {
         if (v == Math.rint(v) && Math.abs(v) < 1e12) {
             return String.valueOf((long) v);

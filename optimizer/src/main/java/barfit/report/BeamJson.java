@@ -49,9 +49,9 @@ public final class BeamJson {
             BeamDesigner.Diagnosis d = o.diagnosis();
             dn.put("limit", d.limit());
             dn.put("clause", d.clause());
-            dn.put("summary", d.summary());
+            dn.put("summary", DiagnosisWords.summary(d, u));
             ArrayNode fixes = dn.putArray("fixes");
-            d.fixes().forEach(fixes::add);
+            DiagnosisWords.fixes(d, u).forEach(fixes::add);
             fix(dn, "deeper", d.deeper(), u);
             fix(dn, "wider", d.wider(), u);
             return b;
@@ -63,7 +63,7 @@ public final class BeamJson {
         o.binding().forEach(x -> {
             ObjectNode bo = bind.addObject();
             bo.put("check", x.limit());
-            bo.put("when", x.when());
+            bo.put("when", Words.when(x, u));
         });
         ArrayNode alts = b.putArray("alternatives");
         for (BeamDesigner.Design d : o.alternatives()) {
@@ -247,7 +247,7 @@ public final class BeamJson {
         for (BeamLayout.BarMark m : d.bars()) {
             ObjectNode x = bars.addObject();
             x.put("mark", m.mark());
-            x.put("role", m.role());
+            x.put("role", Words.role(m));
             x.put("bar", m.bar().designation());
             x.put("count", m.count());
             Json.put(x, "length", m.length(), Dim.SPAN, u);

@@ -64,13 +64,15 @@ public final class BeamText {
         if (!o.feasible()) {
             var d = o.diagnosis();
             if (o.status().equals("unknown")) {
-                out.append("  ").append(d.summary()).append("; ").append(Words.alternatives(d.fixes())).append('\n');
+                out.append("  ").append(DiagnosisWords.summary(d, u)).append("; ")
+                        .append(Words.alternatives(DiagnosisWords.fixes(d, u))).append('\n');
                 return;
             }
             out.append("  no layout in the search space passes.\n");
-            out.append("  binding limit: ").append(d.limit()).append(" — ").append(d.summary()).append('\n');
-            out.append(d.fixes().isEmpty() ? "  no single relaxed limit (depth, width) gives a passing layout\n"
-                    : "  what would work (one limit at a time): " + Words.alternatives(d.fixes()) + "\n");
+            out.append("  binding limit: ").append(d.limit()).append(" — ").append(DiagnosisWords.summary(d, u)).append('\n');
+            List<String> fixes = DiagnosisWords.fixes(d, u);
+            out.append(fixes.isEmpty() ? "  no single relaxed limit (depth, width) gives a passing layout\n"
+                    : "  what would work (one limit at a time): " + Words.alternatives(fixes) + "\n");
             return;
         }
         BeamDesigner.Design d = o.best();
@@ -120,7 +122,7 @@ public final class BeamText {
             firstSection = false;
         }
         t.row("deflection", deflection(d.report().span(), p, u));
-        t.row("binding", binding(o.binding()));
+        t.row("binding", binding(o.binding(), u));
         String cur = currency.isEmpty() ? "" : " (" + currency + ")";
         t.row("cost" + cur, Money.breakdown(d.cost()) + "  for the span");
         t.row("proof", proof(o.proof()));
@@ -129,7 +131,7 @@ public final class BeamText {
         TextTable bars = new TextTable(false, false, true, false, true);
         bars.row("mark", "role", "count", "bar", "length (" + u.unit(Dim.SPAN) + ")");
         for (BeamLayout.BarMark b : d.bars()) {
-            bars.row(b.mark(), b.role(), String.valueOf(b.count()), b.bar().label(), u.number(b.length(), Dim.SPAN));
+            bars.row(b.mark(), Words.role(b), String.valueOf(b.count()), b.bar().label(), u.number(b.length(), Dim.SPAN));
         }
         bars.write("    ", out);
         if (!o.alternatives().isEmpty()) {
@@ -216,20 +218,20 @@ public final class BeamText {
                 + String.join(" and ", tension) + ": below the neutral axis, so not compression steel there)";
     }
 
-    static String binding(List<barfit.design.Binding> bs) {
+    static String binding(List<barfit.design.Binding> bs, UnitSystem u) {
         if (bs.isEmpty()) {
             return "no check above 0.95 of its limit";
         }
         StringBuilder sb = new StringBuilder();
         for (var b : bs) {
-            sb.append(sb.length() == 0 ? "" : ", ").append(b.limit()).append(" (").append(b.when()).append(')');
+            sb.append(sb.length() == 0 ? "" : ", ").append(b.limit()).append(" (").append(Words.when(b, u)).append(')');
         }
         return sb.toString();
     }
 
     static String extensionRule(BeamProblem p, BeamLayout l) {
         var det = l.detailing(p.detailing());
-        return barfit.design.beam.Extension.of(p, l.width(), l.height(), det, l.top()).rule();
+        return Words.extension(barfit.design.beam.Extension.of(p, l.width(), l.height(), det, l.top()).governs());
     }
 
     static String demand(BeamProblem p, UnitSystem u) {

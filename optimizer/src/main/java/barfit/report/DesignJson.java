@@ -89,7 +89,7 @@ public final class DesignJson {
             for (Binding x : o.binding()) {
                 ObjectNode bo = bind.addObject();
                 bo.put("check", x.limit());
-                bo.put("when", x.when());
+                bo.put("when", Words.when(x, u));
             }
             ArrayNode alts = b.putArray("alternatives");
             for (Design d : o.alternatives()) {
@@ -102,14 +102,14 @@ public final class DesignJson {
             var d = o.diagnosis();
             ObjectNode dn = b.putObject("diagnosis");
             dn.put("limit", d.limit());
-            dn.put("summary", d.summary());
+            dn.put("summary", DiagnosisWords.summary(d, u));
             if (d.strongest() != null) {
                 ObjectNode s = dn.putObject("strongest");
                 layout(s, d.strongest(), u);
                 Json.put(s, "phi_Mn", d.strongestPhiMn(), Dim.MOMENT, u);
             }
             ArrayNode fixes = dn.putArray("fixes");
-            d.fixes().forEach(fixes::add);
+            DiagnosisWords.fixes(d, u).forEach(fixes::add);
             b.set("proof", proof(o.proof(), u));
         }
         return b;

@@ -170,7 +170,7 @@ public final class DesignText {
             t.row("shear", "φVn = " + u.withUnit(r.shear().phiVn(), Dim.FORCE) + "   Vu/φVn = "
                     + Words.ratio(r.shear().vu() / r.shear().phiVn()));
         }
-        t.row("binding", binding(o.binding()));
+        t.row("binding", binding(o.binding(), u));
         if (p.span() != null && p.span().ends() == null) {
             t.row("not checked", "minimum depth (Table 9.3.1.1): the span is given without its ends");
         }
@@ -209,13 +209,13 @@ public final class DesignText {
     }
 
     /** "one No. 29 fewer → flexure; h = 475 mm → flexure, shear_strength; ..." */
-    static String binding(List<Binding> bs) {
+    static String binding(List<Binding> bs, UnitSystem u) {
         if (bs.isEmpty()) {
             return "nothing found by the one-step tests (fewer bars, shallower, narrower, wider stirrups, fewer legs)";
         }
         Map<String, List<String>> byWhen = new LinkedHashMap<>();
         for (Binding b : bs) {
-            byWhen.computeIfAbsent(b.when(), k -> new java.util.ArrayList<>()).add(
+            byWhen.computeIfAbsent(Words.when(b, u), k -> new java.util.ArrayList<>()).add(
                     b.limit().startsWith("stirrup_legs_bars") ? b.limit() + " (the office's legs rule, not the code)"
                             : b.limit());
         }
@@ -245,15 +245,16 @@ public final class DesignText {
 
     static void diagnosis(Diagnosis d, UnitSystem u, StringBuilder out) {
         out.append("  no layout in the search space passes.\n");
-        out.append("  binding limit: ").append(d.limit()).append(" — ").append(d.summary()).append('\n');
+        out.append("  binding limit: ").append(d.limit()).append(" — ").append(DiagnosisWords.summary(d, u)).append('\n');
         if (d.strongest() != null) {
             out.append("  strongest ductile layout: ").append(describeBars(d.strongest(), u)).append("  φMn = ")
                     .append(u.withUnit(d.strongestPhiMn(), Dim.MOMENT)).append('\n');
         }
-        if (d.fixes().isEmpty()) {
+        List<String> fixes = DiagnosisWords.fixes(d, u);
+        if (fixes.isEmpty()) {
             out.append("  no single relaxed limit (depth, width, one more layer) gives a passing layout\n");
         } else {
-            out.append("  what would work (one limit at a time): ").append(Words.alternatives(d.fixes())).append('\n');
+            out.append("  what would work (one limit at a time): ").append(Words.alternatives(fixes)).append('\n');
         }
     }
 }

@@ -1,7 +1,6 @@
 package barfit.report;
 
 import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
@@ -24,31 +23,31 @@ public final class ScheduleCsv {
                 "top_left", "top_right", "stirrups", "phiMn_left_" + mom, "Mu_left_" + mom, "phiMn_mid_" + mom,
                 "Mu_mid_" + mom, "phiMn_right_" + mom, "Mu_right_" + mom, "cost", "own_optimum_cost", "bar_marks"))
                 .append('\n');
-        for (ScheduleResult.Beam b : r.beams()) {
+        for (ScheduleRows.Row schedule : ScheduleRows.rows(r)) {
+            ScheduleResult.Beam b = schedule.entry();
             List<String> row = new ArrayList<>();
             row.add(b.beam().id());
             row.add(b.beam().group() == null ? "" : b.beam().group());
             if (!b.feasible()) {
-                row.add("no design: " + b.outcome().diagnosis().limit() + " - " + b.outcome().diagnosis().summary());
+                row.add("no design: " + b.outcome().diagnosis().limit() + " - "
+                        + DiagnosisWords.summary(b.outcome().diagnosis(), u));
                 for (int i = 0; i < 16; i++) {
                     row.add("");
                 }
                 out.append(line(row)).append('\n');
                 continue;
             }
-            BeamProblem p = b.outcome().problem();
-            BeamDesigner.Design d = b.outcome().best();
-            BeamLayout l = d.layout();
+            BeamDesigner.Design d = schedule.design();
             row.add("ok");
-            row.add(u.compact(l.width(), Dim.LENGTH));
-            row.add(u.compact(l.height(), Dim.LENGTH));
-            row.add(ScheduleRows.bottom(l));
-            row.add(ScheduleRows.topContinuous(p, l, u));
-            row.add(ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u));
-            row.add(ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u));
-            row.add(ScheduleRows.stirrups(p, l, u));
+            row.add(u.compact(schedule.layout().width(), Dim.LENGTH));
+            row.add(u.compact(schedule.layout().height(), Dim.LENGTH));
+            row.add(schedule.bottom());
+            row.add(ScheduleRows.topContinuous(schedule, u));
+            row.add(ScheduleRows.topAt(schedule.left(), u));
+            row.add(ScheduleRows.topAt(schedule.right(), u));
+            row.add(ScheduleRows.stirrups(schedule, u));
             for (BeamProblem.Place place : BeamProblem.Place.values()) {
-                double[] s = ScheduleRows.strength(d, place, u);
+                double[] s = ScheduleRows.strength(schedule, place, u);
                 row.add(s == null ? "" : num(s[0]));
                 row.add(s == null ? "" : num(s[1]));
             }

@@ -22,23 +22,23 @@ public final class ScheduleJson {
         root.put("currency", r.input().currency());
         ArrayNode sources = root.putArray("sources");
         r.input().sources().forEach(sources::add);
-        var rat = r.input().rationalise();
-        if (rat == null) {
+        var rationalise = r.input().rationalise();
+        if (rationalise == null) {
             root.putNull("rationalise");
         } else {
-            ObjectNode ro = root.putObject("rationalise");
-            if (rat.maxSectionSizes() == null) {
-                ro.putNull("max_section_sizes");
+            ObjectNode limits = root.putObject("rationalise");
+            if (rationalise.maxSectionSizes() == null) {
+                limits.putNull("max_section_sizes");
             } else {
-                ro.put("max_section_sizes", rat.maxSectionSizes());
+                limits.put("max_section_sizes", rationalise.maxSectionSizes());
             }
-            if (rat.maxBarSizes() == null) {
-                ro.putNull("max_bar_sizes");
+            if (rationalise.maxBarSizes() == null) {
+                limits.putNull("max_bar_sizes");
             } else {
-                ro.put("max_bar_sizes", rat.maxBarSizes());
+                limits.put("max_bar_sizes", rationalise.maxBarSizes());
             }
-            ro.put("groups", rat.groupsSameSection() ? "same_section" : "independent");
-            ro.put("formwork_set_cost", rat.formworkSetCost());
+            limits.put("groups", rationalise.groupsSameSection() ? "same_section" : "independent");
+            limits.put("formwork_set_cost", rationalise.formworkSetCost());
         }
         ObjectNode sum = root.putObject("summary");
         sum.put("beams", r.beams().size());
@@ -64,7 +64,7 @@ public final class ScheduleJson {
             ObjectNode po = root.putObject("proof");
             var s = p.search();
             po.put("status", p.status().name());
-            po.put("method", s.method());
+            po.put("method", ScheduleWords.method(r));
             if (!p.bounded()) { // no schedule meets the limits: nothing to bound
                 po.putNull("objective");
                 po.putNull("bound");

@@ -1,22 +1,103 @@
 package barfit.report;
 
+import barfit.catalogs.BarSize;
 import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
+import barfit.schedule.ScheduleResult;
 import barfit.section.CheckReport;
+import barfit.section.Stirrups;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
-/** The words of one schedule row, shared by the text, CSV and HTML schedules. */
+/**
+ * The rows of a schedule, built here once for the text, CSV and HTML schedules: each beam's bars, top bars
+ * at the supports, stirrup zones and strengths as data (lengths in mm, moments in N·mm). The text and CSV
+ * word them with the phrases below; the HTML report words the same rows its own way.
+ */
 public final class ScheduleRows {
     private ScheduleRows() {
     }
 
+    /**
+     * One beam's row. Where the beam has no design, {@code design} and everything drawn from it are null
+     * (and {@code zones} and {@code strengths} empty).
+     *
+     * @param top            the top bars of the schedule's "top continuous" column: a cantilever's per layer
+     *                       ("3+2 No. 25"), else the continuous count ("2 No. 25")
+     * @param topPastSupport a cantilever's top bars' run past the support face (mm); NaN for other spans
+     * @param left           the top bars at the left support, null where the span has no continuous support there
+     * @param right          the same at the right support
+     * @param strengths      phi Mn and Mu at each section the span has, in the design's order
+     */
+    public record Row(ScheduleResult.Beam entry, BeamProblem problem, BeamDesigner.Design design, BeamLayout layout,
+            String bottom, String top, double topPastSupport, SupportTop left, SupportTop right, List<ZoneStirrups> zones,
+            List<Strength> strengths) {
+        public boolean feasible() {
+            return design != null;
+        }
+
+        public boolean cantilever() {
+            return problem.cantilever();
+        }
+    }
+
+    /** Top bars at a continuous support: per layer, with {@code extra} of them run {@code extension} (mm) past the face. */
+    public record SupportTop(String bars, int extra, double extension) {
+    }
+
+    /** A stirrup zone: its name, its extent from the left face (mm) and its stirrups. */
+    public record ZoneStirrups(String name, double from, double to, Stirrups stirrups) {
+    }
+
+    /** phi Mn and |Mu| (N·mm) at a section of the span. */
+    public record Strength(BeamProblem.Place place, double phiMn, double mu) {
+    }
+
+    public static List<Row> rows(ScheduleResult r) {
+        List<Row> out = new ArrayList<>();
+        for (ScheduleResult.Beam b : r.beams()) {
+            out.add(row(b));
+        }
+        return out;
+    }
+
+    public static Row row(ScheduleResult.Beam b) {
+        BeamProblem p = b.outcome().problem();
+        if (!b.feasible()) {
+            return new Row(b, p, null, null, null, null, Double.NaN, null, null, List.of(), List.of());
+        }
+        BeamDesigner.Design d = b.outcome().best();
+        BeamLayout l = d.layout();
+        String top = p.cantilever() ? bars(l.topLeft(), l.top()) : l.topContinuous() + " " + l.top().label();
+        double past = p.cantilever() ? l.extLeft() - p.span() : Double.NaN;
+        List<ZoneStirrups> zones = new ArrayList<>();
+        for (int i = 0; i < p.zones().size(); i++) {
+            BeamProblem.Zone z = p.zones().get(i);
+            zones.add(new ZoneStirrups(z.name(), z.from(), z.to(), l.zoneStirrups().get(i)));
+        }
+        List<Strength> strengths = new ArrayList<>();
+        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            strengths.add(new Strength(e.getKey(), e.getValue().flexure().phiMn(), Math.abs(e.getValue().demand().mu())));
+        }
+        return new Row(b, p, d, l, bars(l.bottomCounts(), l.bottom()), top, past,
+                supportTop(p, l, BeamProblem.Place.LEFT), supportTop(p, l, BeamProblem.Place.RIGHT), zones, strengths);
+    }
+
+    private static SupportTop supportTop(BeamProblem p, BeamLayout l, BeamProblem.Place place) {
+        if (p.cantilever() || !(place == BeamProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())) {
+            return null;
+        }
+        List<Integer> counts = place == BeamProblem.Place.LEFT ? l.topLeft() : l.topRight();
+        return new SupportTop(bars(counts, l.top()), BeamLayout.sum(counts) - l.topContinuous(),
+                place == BeamProblem.Place.LEFT ? l.extLeft() : l.extRight());
+    }
+
     /** "3+2 No. 25": bars per layer from the face, and the size. */
-    public static String bars(List<Integer> counts, barfit.catalogs.BarSize bar) {
+    public static String bars(List<Integer> counts, BarSize bar) {
         StringBuilder sb = new StringBuilder();
         for (int c : counts) {
             sb.append(sb.length() == 0 ? "" : "+").append(c);
@@ -24,47 +105,40 @@ public final class ScheduleRows {
         return sb + " " + bar.label();
     }
 
-    public static String size(BeamLayout l, UnitSystem u) {
-        return u.compact(l.width(), Dim.LENGTH) + " × " + u.compact(l.height(), Dim.LENGTH);
+    // ---------------------------------------------------------------- the text's and the CSV's words
+
+    public static String size(Row row, UnitSystem u) {
+        return u.compact(row.layout().width(), Dim.LENGTH) + " × " + u.compact(row.layout().height(), Dim.LENGTH);
     }
 
-    public static String bottom(BeamLayout l) {
-        return bars(l.bottomCounts(), l.bottom());
-    }
-
-    public static String topContinuous(BeamProblem p, BeamLayout l, UnitSystem u) {
-        return p.cantilever() ? bars(l.topLeft(), l.top()) + " (full length + " + u.withUnit(l.extLeft() - p.span(),
-                Dim.SPAN) + " past the support)" : l.topContinuous() + " " + l.top().label();
+    public static String topContinuous(Row row, UnitSystem u) {
+        return row.cantilever() ? row.top() + " (full length + " + u.withUnit(row.topPastSupport(), Dim.SPAN)
+                + " past the support)" : row.top();
     }
 
     /** As {@link #topContinuous}, shorter for the terminal. */
-    public static String topContinuousShort(BeamProblem p, BeamLayout l, UnitSystem u) {
-        return p.cantilever() ? bars(l.topLeft(), l.top()) + " (+ " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
-                + " past support)" : l.topContinuous() + " " + l.top().label();
+    public static String topContinuousShort(Row row, UnitSystem u) {
+        return row.cantilever() ? row.top() + " (+ " + u.withUnit(row.topPastSupport(), Dim.SPAN) + " past support)"
+                : row.top();
     }
 
     /** Top bars at a continuous support with the extension of the extra bars, or "" where there is none. */
-    public static String topAt(BeamProblem p, BeamLayout l, BeamProblem.Place place, UnitSystem u) {
-        if (p.cantilever() || !(place == BeamProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())) {
+    public static String topAt(SupportTop at, UnitSystem u) {
+        if (at == null) {
             return "";
         }
-        List<Integer> counts = place == BeamProblem.Place.LEFT ? l.topLeft() : l.topRight();
-        int extra = BeamLayout.sum(counts) - l.topContinuous();
-        double ext = place == BeamProblem.Place.LEFT ? l.extLeft() : l.extRight();
-        return bars(counts, l.top()) + (extra > 0 ? " (" + extra + " extra × " + u.withUnit(ext, Dim.SPAN) + ")" : "");
+        return at.bars() + (at.extra() > 0 ? " (" + at.extra() + " extra × " + u.withUnit(at.extension(), Dim.SPAN) + ")"
+                : "");
     }
 
     /**
      * "left 0.000–2.400 m: No. 10 × 2 legs @ 150 mm; middle 2.400–7.200 m: ...": zone ends from the left face
      * with the span's fixed decimals and unit, spacing with its unit.
      */
-    public static String stirrups(BeamProblem p, BeamLayout l, UnitSystem u) {
+    public static String stirrups(Row row, UnitSystem u) {
         List<String> parts = new ArrayList<>();
-        List<BeamProblem.Zone> zones = p.zones();
-        for (int i = 0; i < zones.size(); i++) {
-            var s = l.zoneStirrups().get(i);
-            parts.add(zones.get(i).name() + " " + range(zones.get(i).from(), zones.get(i).to(), u) + ": "
-                    + stirrup(s, u));
+        for (ZoneStirrups z : row.zones()) {
+            parts.add(z.name() + " " + range(z.from(), z.to(), u) + ": " + Words.stirrups(z.stirrups(), u));
         }
         return String.join("; ", parts);
     }
@@ -73,20 +147,20 @@ public final class ScheduleRows {
      * The zones condensed for the terminal: neighbouring zones with the same stirrups merged, "0.000–1.988 m:
      * No. 10 × 2 legs @ 150 mm; 1.988–7.950 m: ...", or "No. 10 × 2 legs @ 200 mm over the whole span".
      */
-    public static String stirrupsShort(BeamProblem p, BeamLayout l, UnitSystem u) {
-        List<BeamProblem.Zone> zones = p.zones();
+    public static String stirrupsShort(Row row, UnitSystem u) {
+        List<ZoneStirrups> zones = row.zones();
         List<String> parts = new ArrayList<>();
         int i = 0;
         while (i < zones.size()) {
-            var s = l.zoneStirrups().get(i);
+            Stirrups s = zones.get(i).stirrups();
             int j = i;
-            while (j + 1 < zones.size() && l.zoneStirrups().get(j + 1).equals(s)) {
+            while (j + 1 < zones.size() && zones.get(j + 1).stirrups().equals(s)) {
                 j++;
             }
             if (i == 0 && j == zones.size() - 1) {
-                return stirrup(s, u) + " over the whole " + (p.cantilever() ? "length" : "span");
+                return Words.stirrups(s, u) + " over the whole " + (row.cantilever() ? "length" : "span");
             }
-            parts.add(range(zones.get(i).from(), zones.get(j).to(), u) + ": " + stirrup(s, u));
+            parts.add(range(zones.get(i).from(), zones.get(j).to(), u) + ": " + Words.stirrups(s, u));
             i = j + 1;
         }
         return String.join("; ", parts);
@@ -96,17 +170,14 @@ public final class ScheduleRows {
         return u.number(from, Dim.SPAN) + "–" + u.number(to, Dim.SPAN) + " " + u.unit(Dim.SPAN);
     }
 
-    private static String stirrup(barfit.section.Stirrups s, UnitSystem u) {
-        return Words.stirrups(s, u);
-    }
-
     /** phi Mn and Mu (absolute, user units) at a place, or null where the span has no such section. */
-    public static double[] strength(BeamDesigner.Design d, BeamProblem.Place place, UnitSystem u) {
-        CheckReport r = d.report().sections().get(place);
-        if (r == null) {
-            return null;
+    public static double[] strength(Row row, BeamProblem.Place place, UnitSystem u) {
+        for (Strength s : row.strengths()) {
+            if (s.place() == place) {
+                return new double[] {u.fromSI(s.phiMn(), Dim.MOMENT), u.fromSI(s.mu(), Dim.MOMENT)};
+            }
         }
-        return new double[] {u.fromSI(r.flexure().phiMn(), Dim.MOMENT), u.fromSI(Math.abs(r.demand().mu()), Dim.MOMENT)};
+        return null;
     }
 
     /** "B2-07/B1: 5 No. 25 × 7.20 m" for every bar mark of the beam. */
@@ -118,15 +189,12 @@ public final class ScheduleRows {
         return out;
     }
 
+    /** "left", "mid", "right". */
     public static String place(BeamProblem.Place p) {
         return switch (p) {
             case LEFT -> "left";
             case MID -> "mid";
             case RIGHT -> "right";
         };
-    }
-
-    static Map<BeamProblem.Place, CheckReport> sections(BeamDesigner.Design d) {
-        return d.report().sections();
     }
 }

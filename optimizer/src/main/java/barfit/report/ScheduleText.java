@@ -1,8 +1,6 @@
 package barfit.report;
 
 import barfit.design.Proof;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
@@ -23,39 +21,38 @@ public final class ScheduleText {
         out.append("Beam schedule: ").append(String.join(" + ", r.input().sources())).append(", ")
                 .append(r.beams().size()).append(r.beams().size() == 1 ? " beam" : " beams").append(", ")
                 .append(r.input().settings().code().edition()).append('\n');
-        var rat = r.input().rationalise();
-        out.append(rat == null ? "each beam at its own optimum (no rationalise: block)\n" : "rationalised: "
-                + limits(rat) + "\n");
+        var rationalise = r.input().rationalise();
+        out.append(rationalise == null ? "each beam at its own optimum (no rationalise: block)\n" : "rationalised: "
+                + limits(rationalise) + "\n");
         // a line of one set of forms is a group that always shares b x h: only the user's groups need the note
         boolean grouped = r.beams().stream().anyMatch(b -> b.beam().group() != null && !b.beam().sameSection());
-        if (grouped && (rat == null || !rat.groupsSameSection())) {
+        if (grouped && (rationalise == null || !rationalise.groupsSameSection())) {
             out.append("note: the beams' groups are not used; rationalise: {groups: same_section} makes a group share b × h\n");
         }
         out.append('\n');
         // each beam's stirrups go on a line of their own under its row, so the table stays about 150 columns wide
-        TextTable t = new TextTable(false, false, false, false, false, false, false, true);
-        t.row("beam", "group", "b × h (" + u.unit(Dim.LENGTH) + ")", "bottom", "top continuous", "top at left",
+        TextTable table = new TextTable(false, false, false, false, false, false, false, true);
+        table.row("beam", "group", "b × h (" + u.unit(Dim.LENGTH) + ")", "bottom", "top continuous", "top at left",
                 "top at right", "cost");
         List<String> noShears = new ArrayList<>();
-        for (ScheduleResult.Beam b : r.beams()) {
-            BeamProblem p = b.outcome().problem();
+        for (ScheduleRows.Row row : ScheduleRows.rows(r)) {
+            ScheduleResult.Beam b = row.entry();
+            BeamProblem problem = row.problem();
             String group = b.beam().group() == null ? "" : b.beam().group();
-            if (!b.feasible()) {
-                t.row(b.beam().id(), group, "NO DESIGN", "(see below)", "", "", "", "");
+            if (!row.feasible()) {
+                table.row(b.beam().id(), group, "NO DESIGN", "(see below)", "", "", "", "");
                 continue;
             }
-            BeamDesigner.Design d = b.outcome().best();
-            BeamLayout l = d.layout();
-            t.row(b.beam().id(), group, ScheduleRows.size(l, u), ScheduleRows.bottom(l),
-                    ScheduleRows.topContinuousShort(p, l, u), ScheduleRows.topAt(p, l, BeamProblem.Place.LEFT, u),
-                    ScheduleRows.topAt(p, l, BeamProblem.Place.RIGHT, u), Money.amount(d.cost().total()));
-            t.under("  stirrups " + ScheduleRows.stirrupsShort(p, l, u)
-                    + (BeamText.warnings(p).isEmpty() ? "" : "  (minimum: no shears given)"));
-            if (!BeamText.warnings(p).isEmpty()) {
+            table.row(b.beam().id(), group, ScheduleRows.size(row, u), row.bottom(),
+                    ScheduleRows.topContinuousShort(row, u), ScheduleRows.topAt(row.left(), u),
+                    ScheduleRows.topAt(row.right(), u), Money.amount(row.design().cost().total()));
+            table.under("  stirrups " + ScheduleRows.stirrupsShort(row, u)
+                    + (BeamText.warnings(problem).isEmpty() ? "" : "  (minimum: no shears given)"));
+            if (!BeamText.warnings(problem).isEmpty()) {
                 noShears.add(b.beam().id());
             }
         }
-        t.write("  ", out);
+        table.write("  ", out);
         out.append("  bars per layer from the face inward (\"3+2\": three in the outer layer); at a support the count "
                 + "includes the continuous bars,\n  and the extras run the length given past the face; stirrup zones "
                 + "are measured from the left face\n");
@@ -65,12 +62,12 @@ public final class ScheduleText {
                     + "shear: {left, right})\n");
         }
         out.append('\n');
-        String cur = r.input().currency().isEmpty() ? "" : " " + r.input().currency();
+        String currency = r.input().currency().isEmpty() ? "" : " " + r.input().currency();
         out.append("section sizes: ").append(r.sizes().size()).append(" (");
         for (int i = 0; i < r.sizes().size(); i++) {
-            var s = r.sizes().get(i);
-            out.append(i == 0 ? "" : ", ").append(u.compact(s.width(), Dim.LENGTH)).append(" × ")
-                    .append(u.compact(s.height(), Dim.LENGTH)).append(": ").append(s.beams().size());
+            var curve = r.sizes().get(i);
+            out.append(i == 0 ? "" : ", ").append(u.compact(curve.width(), Dim.LENGTH)).append(" × ")
+                    .append(u.compact(curve.height(), Dim.LENGTH)).append(": ").append(curve.beams().size());
         }
         out.append(");  bar sizes: ").append(r.barSizes().size()).append(" (").append(String.join(", ",
                 r.barSizes().stream().map(x -> labelOf(r, x)).toList())).append(")\n");
@@ -78,33 +75,35 @@ public final class ScheduleText {
         if (r.formworkSetsCost() > 0) {
             out.append(" + formwork sets ").append(Money.amount(r.formworkSetsCost()));
         }
-        out.append(" = ").append(Money.amount(r.totalCost())).append(cur);
+        out.append(" = ").append(Money.amount(r.totalCost())).append(currency);
         if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             out.append(";  the limits cannot be met: every beam is shown at its own optimum, nothing is rationalised");
         } else if (r.proof() != null) {
             double extra = r.totalCost() - r.unconstrainedCost();
             out.append(";  every beam at its own optimum").append(r.input().rationalise().formworkSetCost() > 0
                     ? " (with a set of forms per size)" : "").append(": ").append(Money.amount(r.unconstrainedCost()))
-                    .append(cur).append(String.format(Locale.ROOT, " (rationalising %s %s, %.1f %%)", extra >= 0 ? "adds"
-                    : "saves", Money.amount(Math.abs(extra)), r.unconstrainedCost() > 0 ? 100 * Math.abs(extra)
-                    / r.unconstrainedCost() : 0));
+                    .append(currency).append(String.format(Locale.ROOT, " (rationalising %s %s, %.1f %%)",
+                            extra >= 0 ? "adds" : "saves", Money.amount(Math.abs(extra)), r.unconstrainedCost() > 0
+                                    ? 100 * Math.abs(extra) / r.unconstrainedCost() : 0));
         }
         out.append('\n');
         if (r.proof() != null) {
-            out.append("proof: ").append(proof(r.proof())).append('\n');
+            out.append("proof: ").append(proof(r)).append('\n');
         }
         if (!r.standardisation().isEmpty()) {
             out.append("\nprice of standardisation (least total cost for at most K section sizes):\n");
-            TextTable s = new TextTable(true, true, true, false, false);
-            s.row("K", "total" + cur, "saving of the K-th size", "bar sizes allowed", "status");
-            double prev = Double.NaN;
-            for (ScheduleResult.StandardisationPoint p : r.standardisation()) {
-                s.row(String.valueOf(p.sizes()), Double.isNaN(p.cost()) ? "none fits" : Money.amount(p.cost()),
-                        Double.isNaN(prev) || Double.isNaN(p.cost()) ? "" : Money.amount(prev - p.cost()),
-                        String.join(", ", p.barSizes().stream().map(x -> labelOf(r, x)).toList()), p.status().name());
-                prev = p.cost();
+            TextTable curve = new TextTable(true, true, true, false, false);
+            curve.row("K", "total" + currency, "saving of the K-th size", "bar sizes allowed", "status");
+            double previous = Double.NaN;
+            for (ScheduleResult.StandardisationPoint point : r.standardisation()) {
+                curve.row(String.valueOf(point.sizes()), Double.isNaN(point.cost()) ? "none fits"
+                        : Money.amount(point.cost()),
+                        Double.isNaN(previous) || Double.isNaN(point.cost()) ? "" : Money.amount(previous - point.cost()),
+                        String.join(", ", point.barSizes().stream().map(x -> labelOf(r, x)).toList()),
+                        point.status().name());
+                previous = point.cost();
             }
-            s.write("  ", out);
+            curve.write("  ", out);
         }
         long failed = r.beams().stream().filter(b -> !b.feasible()).count();
         if (failed > 0) {
@@ -113,9 +112,11 @@ public final class ScheduleText {
             for (ScheduleResult.Beam b : r.beams()) {
                 if (!b.feasible()) {
                     var d = b.outcome().diagnosis();
-                    out.append("  ").append(b.beam().id()).append(": ").append(d.limit()).append(" — ").append(d.summary());
-                    if (!d.fixes().isEmpty()) {
-                        out.append("; what would work (one limit at a time): ").append(Words.alternatives(d.fixes()));
+                    out.append("  ").append(b.beam().id()).append(": ").append(d.limit()).append(" — ")
+                            .append(DiagnosisWords.summary(d, u));
+                    List<String> fixes = DiagnosisWords.fixes(d, u);
+                    if (!fixes.isEmpty()) {
+                        out.append("; what would work (one limit at a time): ").append(Words.alternatives(fixes));
                     }
                     out.append('\n');
                 }
@@ -129,28 +130,30 @@ public final class ScheduleText {
                 .map(barfit.catalogs.BarSize::label).findFirst().orElse(designation);
     }
 
-    public static String limits(barfit.schedule.Rationalise rat) {
-        StringBuilder sb = new StringBuilder();
-        sb.append(rat.maxSectionSizes() == null ? "any number of section sizes" : "at most " + rat.maxSectionSizes()
-                + " section sizes");
-        sb.append(", ").append(rat.maxBarSizes() == null ? "any number of bar sizes" : "at most " + rat.maxBarSizes()
-                + " longitudinal bar sizes");
-        if (rat.groupsSameSection()) {
-            sb.append(", beams of a group share b × h");
+    public static String limits(barfit.input.Rationalise rationalise) {
+        StringBuilder words = new StringBuilder();
+        words.append(rationalise.maxSectionSizes() == null ? "any number of section sizes"
+                : "at most " + rationalise.maxSectionSizes() + " section sizes");
+        words.append(", ").append(rationalise.maxBarSizes() == null ? "any number of bar sizes"
+                : "at most " + rationalise.maxBarSizes() + " longitudinal bar sizes");
+        if (rationalise.groupsSameSection()) {
+            words.append(", beams of a group share b × h");
         }
-        if (rat.formworkSetCost() > 0) {
-            sb.append(", formwork set ").append(Money.amount(rat.formworkSetCost())).append(" per size");
+        if (rationalise.formworkSetCost() > 0) {
+            words.append(", formwork set ").append(Money.amount(rationalise.formworkSetCost())).append(" per size");
         }
-        return sb.toString();
+        return words.toString();
     }
 
-    public static String proof(Proof<ScheduleResult.Search> p) {
+    public static String proof(ScheduleResult r) {
+        Proof<ScheduleResult.Search> p = r.proof();
         var s = p.search();
         if (p.status() == Proof.Status.INFEASIBLE) {
-            return "INFEASIBLE — " + s.method() + "; the beams are shown at their own optima";
+            return "INFEASIBLE — " + ScheduleWords.method(r) + "; the beams are shown at their own optima";
         }
         return p.status().name() + " — objective " + Money.amount(p.objective()) + ", bound " + Money.amount(p.bound())
-                + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + s.method() + "; bar-size sets: "
+                + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + ScheduleWords.method(r)
+                + "; bar-size sets: "
                 + s.barSetsTotal() + " (" + s.barSetsSolved() + " solved to optimality, " + s.barSetsPruned()
                 + " ruled out by a bound); "
                 + s.pairsEvaluated() + " (beam, size) pairs priced exactly; " + p.workers()

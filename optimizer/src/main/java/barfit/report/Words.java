@@ -1,6 +1,9 @@
 package barfit.report;
 
+import barfit.design.Binding;
 import barfit.design.Proof;
+import barfit.design.beam.BeamLayout;
+import barfit.design.beam.Extension;
 import barfit.section.BarLayer;
 import barfit.section.CheckResult;
 import barfit.section.CodeTables;
@@ -26,6 +29,50 @@ public final class Words {
             case FEASIBLE, UNPROVEN -> "feasible";
             case INFEASIBLE -> "infeasible";
             case OUT_OF_TIME -> "unknown";
+        };
+    }
+
+    /**
+     * When a binding check fails, or how hard it works: "one No. 29 fewer", "h = 475 mm", "b = 300 mm",
+     * "stirrups @ 175 mm", "2 stirrup legs", "h = max_depth", or a span's ratio "0.97".
+     */
+    public static String when(Binding b, UnitSystem u) {
+        return switch (b.leaner()) {
+            case ONE_BAR_FEWER -> "one " + b.bar().label() + " fewer";
+            case SHALLOWER -> "h = " + u.compact(b.value(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+            case NARROWER -> "b = " + u.compact(b.value(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+            case STIRRUPS_WIDER_APART -> "stirrups @ " + u.compact(b.value(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+            case FEWER_LEGS -> (int) b.value() + " stirrup legs";
+            case AT_MAX_DEPTH -> "h = max_depth";
+            case NEAR_LIMIT -> String.format(Locale.ROOT, "%.2f", b.value());
+        };
+    }
+
+    /** What sets the run of the extra top bars past the face. */
+    public static String extension(Extension.Governs governs) {
+        return switch (governs) {
+            case CANTILEVER -> "full length of the cantilever and ld of 25.4.2.4 past the support face";
+            case THREE_TENTHS_OF_SPAN -> "0.3 × span governs over ld of 25.4.2.4";
+            case LD_BEYOND_SPAN -> "ld of 25.4.2.4 exceeds the span: the extra bars run through it and past the far face "
+                    + "until developed";
+            case LD_PAST_MID_SPAN -> "ld of 25.4.2.4 governs, past mid-span: the extra bars of the two supports overlap "
+                    + "over the middle";
+            case LD -> "ld of 25.4.2.4 governs over 0.3 × span";
+        };
+    }
+
+    /** A bar mark's role: "bottom, full span", "stirrup hoops, left zone (2 of 4 legs)", "crossties, ...". */
+    public static String role(BeamLayout.BarMark m) {
+        return switch (m.role()) {
+            case BOTTOM -> "bottom, full span";
+            case CANTILEVER_TOP -> "top, full length and ld past the support";
+            case TOP_CONTINUOUS -> "top continuous, full span";
+            case TOP_EXTRA_LEFT -> "top extra at left support";
+            case TOP_EXTRA_RIGHT -> "top extra at right support";
+            case SKIN -> "skin bars, both faces";
+            case HOOPS -> "stirrup hoops, " + m.zone() + " zone" + (m.legs() > 2 ? " (2 of " + m.legs() + " legs)"
+                    : ", 2 legs");
+            case CROSSTIES -> "crossties, " + m.zone() + " zone (" + (m.legs() - 2) + " per hoop)";
         };
     }
 

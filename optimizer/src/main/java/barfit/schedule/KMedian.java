@@ -31,19 +31,24 @@ import java.util.List;
 final class KMedian {
     static final long NONE = Long.MAX_VALUE;
 
-    /** The answer: each group's size index, the objective and best bound (cost units), how it was proven. */
-    record Result(String status, long objective, long bound, int[] assignment, String method, int variables,
-            int variablesKept) {
+    /**
+     * The answer: each group's size index, the objective and best bound (cost units), how it was proven
+     * ({@code cpSatStatus}: CP-SAT's status where it stopped short, else null; no method when there is no
+     * answer).
+     */
+    record Result(String status, long objective, long bound, int[] assignment, ProofMethod method,
+            String cpSatStatus, int variables, int variablesKept) {
         boolean feasible() {
             return assignment != null;
         }
 
-        static Result infeasible(String why) {
-            return new Result("INFEASIBLE", NONE, NONE, null, why, 0, 0);
+        static Result infeasible() {
+            return new Result("INFEASIBLE", NONE, NONE, null, null, null, 0, 0);
         }
 
+        /** Nothing cheaper than the best found: the relaxation's bound is at or above it. */
         static Result pruned(long bound) {
-            return new Result("PRUNED", NONE, bound, null, "relaxation bound at or above the best found", 0, 0);
+            return new Result("PRUNED", NONE, bound, null, null, null, 0, 0);
         }
     }
 
@@ -283,8 +288,7 @@ final class KMedian {
             return Result.pruned(lag.floor());
         }
         if (lag.floor() >= ub) {
-            return new Result("OPTIMAL", ub, ub, assign(start), "Lagrangian bound meets the local-search solution",
-                    0, 0);
+            return new Result("OPTIMAL", ub, ub, assign(start), ProofMethod.LAGRANGIAN_BOUND, null, 0, 0);
         }
         int[] startAssign = assign(start);
         boolean[][] keep = new boolean[n][];
@@ -299,12 +303,11 @@ final class KMedian {
         }
         if (lp.integral != null && total(lp.integral) <= ub) {
             long obj = total(lp.integral);
-            return new Result("OPTIMAL", obj, obj, assign(lp.integral), "linear relaxation integral",
+            return new Result("OPTIMAL", obj, obj, assign(lp.integral), ProofMethod.LINEAR_RELAXATION_INTEGRAL, null,
                     lp.variables, lp.variables);
         }
         if (bound >= ub) {
-            return new Result("OPTIMAL", ub, ub, assign(start), "relaxation bound meets the local-search solution",
-                    lp.variables, 0);
+            return new Result("OPTIMAL", ub, ub, assign(start), ProofMethod.RELAXATION_BOUND, null, lp.variables, 0);
         }
         return exact(start, ub, lp, options, keep);
     }
@@ -312,11 +315,11 @@ final class KMedian {
     /** Heuristic then proof in one call. */
     Result solve(long cutoff, SolverOptions options, int[] hint) {
         if (!eachGroupFits()) {
-            return Result.infeasible("a group fits no size");
+            return Result.infeasible(); // a group fits no size
         }
         int[] start = heuristic(hint);
         if (start == null) {
-            return Result.infeasible("no " + k + " sizes hold every group");
+            return Result.infeasible(); // no k sizes hold every group
         }
         return prove(start, cutoff, options);
     }
@@ -679,7 +682,8 @@ final class KMedian {
         OrTools.status(st, solver, "the schedule's k-median model"); // MODEL_INVALID stops here, as a bug
         if (st != CpSolverStatus.OPTIMAL && st != CpSolverStatus.FEASIBLE) {
             // nothing better within the time: the local-search solution with the relaxation's bound
-            return new Result("FEASIBLE", ub, lp.bound, assign(start), "local search; CP-SAT " + st, lp.variables, kept);
+            return new Result("FEASIBLE", ub, lp.bound, assign(start), ProofMethod.CP_SAT_STOPPED, st.name(),
+                    lp.variables, kept);
         }
         List<Integer> chosen = new ArrayList<>();
         for (int s = 0; s < m; s++) {
@@ -695,7 +699,7 @@ final class KMedian {
             obj = ub;
         }
         String status = st == CpSolverStatus.OPTIMAL || bound >= obj ? "OPTIMAL" : "FEASIBLE";
-        return new Result(status, obj, Math.min(bound, obj), assign(openSizes),
-                "relaxation, reduced-cost fixing and CP-SAT", lp.variables, kept);
+        return new Result(status, obj, Math.min(bound, obj), assign(openSizes), ProofMethod.CP_SAT, null,
+                lp.variables, kept);
     }
 }

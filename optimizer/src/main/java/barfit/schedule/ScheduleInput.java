@@ -2,6 +2,7 @@ package barfit.schedule;
 
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
+import barfit.input.Rationalise;
 import barfit.input.SearchReader;
 import barfit.input.Settings;
 import java.util.List;

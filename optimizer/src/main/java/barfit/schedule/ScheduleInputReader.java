@@ -1,24 +1,16 @@
 package barfit.schedule;
 
-import barfit.catalogs.Echo;
-import barfit.catalogs.InputError;
-import barfit.catalogs.yaml.YFields;
-import barfit.catalogs.yaml.YamlReader;
-import barfit.input.CsvBeamsReader;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
-import barfit.input.DesignInputReader;
-import barfit.input.InputLimits;
-import barfit.input.SettingsReader;
-import barfit.units.UnitSystem;
+import barfit.input.LineInput;
+import barfit.input.ScheduleFileReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Reads a schedule: the settings, search space and costs of a {@code design} file, its optional
- * {@code rationalise:} block, and the beams either from the file's {@code beams:} or from a CSV file.
- * A schedule lists whole spans.
+ * A schedule's files ({@link ScheduleFileReader}, which refuses bad input) turned into the problems to
+ * solve: each beam a whole span, and each line's spans and overhangs with their envelopes.
  */
 public final class ScheduleInputReader {
     private ScheduleInputReader() {
@@ -39,59 +31,31 @@ public final class ScheduleInputReader {
 
     /** As above, the lines designed {@code threads} at a time (the answer does not depend on it). */
     public static ScheduleInput read(Path file, Path csv, barfit.design.SolverOptions options, int threads) {
-        YFields doc = SettingsReader.root(YamlReader.read(file));
-        boolean hasLines = doc.has("lines");
-        DesignInput di = DesignInputReader.read(file, csv == null && !hasLines);
-        if (csv != null && doc.has("beams")) {
-            throw doc.error("beams", "the beams come from --beams " + csv.getFileName()
-                    + "; expected no beams: in this file (or leave out --beams)");
-        }
-        List<DesignBeam> beams = csv == null ? di.beams()
-                : CsvBeamsReader.read(csv, di.settings(), di.space().widths().get(di.space().widths().size() - 1));
+        ScheduleFileReader.ScheduleFile read = ScheduleFileReader.read(file, csv);
+        DesignInput design = read.design();
         List<ScheduleBeam> out = new ArrayList<>();
-        for (DesignBeam b : beams) {
-            if (!b.isWhole()) {
-                throw new InputError(b.location(), "beam " + b.id() + ": a schedule lists whole spans; expected span, "
-                        + "ends and moments: {left, mid, right} instead of Mu");
-            }
-            out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(di, b)));
+        for (DesignBeam b : read.beams()) {
+            out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(design, b)));
         }
-        if (hasLines) {
-            var lines = barfit.input.LinesReader.read(doc, di.settings());
-            var cost = new barfit.design.CostModel(di.rates(), di.settings().detailing().cover(), di.settings().code());
-            var byLine = new barfit.design.line.LineSpans(di.settings(), di.space(),
-                    new barfit.design.beam.BeamDesigner(cost, options, di.settings().units()), di.maxBarSizesPerBeam(),
-                    di.barsPerTwoLegs());
-            List<barfit.design.line.LineSpans.Result> results = new ArrayList<>();
-            var pool = java.util.concurrent.Executors.newFixedThreadPool(Math.max(1, Math.min(threads, lines.size())));
-            try {
-                List<java.util.concurrent.Future<barfit.design.line.LineSpans.Result>> futures = new ArrayList<>();
-                for (var l : lines) {
-                    futures.add(pool.submit(() -> byLine.design(l, 0)));
-                }
-                for (var f : futures) {
-                    results.add(f.get());
-                }
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while designing the lines", e);
-            } catch (java.util.concurrent.ExecutionException e) {
-                if (e.getCause() instanceof RuntimeException re) {
-                    throw re;
-                }
-                throw new IllegalStateException(e.getCause());
-            } finally {
-                pool.shutdownNow();
-            }
+        List<LineInput> lines = read.lines();
+        if (!lines.isEmpty()) {
+            var cost = new barfit.design.CostModel(design.rates(), design.settings().detailing().cover(),
+                    design.settings().code());
+            var byLine = new barfit.design.line.LineSpans(design.settings(), design.space(),
+                    new barfit.design.beam.BeamDesigner(cost, options), design.maxBarSizesPerBeam(),
+                    design.barsPerTwoLegs());
+            List<barfit.design.line.LineSpans.Result> results = new Parallel(Math.min(threads, lines.size()),
+                    Progress.NONE).map(lines.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
+                    i -> byLine.design(lines.get(i), 0));
             for (int i = 0; i < lines.size(); i++) {
                 var one = results.get(i).oneSection();
-                boolean standardised = doc.has("rationalise");
+                boolean standardised = read.rationalise() != null;
                 for (var part : results.get(i).parts()) {
                     if (one != null && !one.fellBack() && standardised) {
                         // one set of forms: the line's parts are a group sharing b x h, free to take another
                         // section where the schedule standardises (with the envelope of the line's own)
                         out.add(new ScheduleBeam(part.problem().id(), "line " + lines.get(i).id(),
-                                lines.get(i).location(), part.problem().withSpace(di.space()).withFixedWidth(null),
+                                lines.get(i).location(), part.problem().withSpace(design.space()).withFixedWidth(null),
                                 null, true));
                     } else {
                         // designed with its line for this very problem: its own optimum (a line of one set
@@ -102,44 +66,7 @@ public final class ScheduleInputReader {
                 }
             }
         }
-        if (out.isEmpty()) {
-            throw new InputError(doc.location(), "expected at least one beam (beams: or --beams) or line (lines:)");
-        }
-        Rationalise rat = doc.has("rationalise") ? rationalise(doc) : null;
-        List<String> sources = new ArrayList<>(List.of(fileName(file)));
-        if (csv != null) {
-            sources.add(fileName(csv));
-        }
-        return new ScheduleInput(sources, di.settings(), di.space(), di.rates(), di.currency(), di.costs(),
-                di.maxBarSizesPerBeam(), di.barsPerTwoLegs(), out, rat);
-    }
-
-    private static Rationalise rationalise(YFields doc) {
-        YFields r = doc.map("rationalise", "the rationalisation {max_section_sizes, max_bar_sizes, groups, "
-                + "formwork_set_cost}").allowOnly("max_section_sizes", "max_bar_sizes", "groups", "formwork_set_cost");
-        Integer sizes = r.has("max_section_sizes")
-                ? r.positiveInt("max_section_sizes", "the most distinct b x h in the schedule, e.g. 6") : null;
-        Integer bars = r.has("max_bar_sizes")
-                ? r.positiveInt("max_bar_sizes", "the most distinct longitudinal bar sizes in the schedule, e.g. 3") : null;
-        boolean same = false;
-        if (r.has("groups")) {
-            String g = r.text("groups", "same_section or independent");
-            switch (g) {
-                case "same_section" -> same = true;
-                case "independent" -> same = false;
-                default -> throw r.error("groups", "expected same_section (beams with the same group share b x h) or "
-                        + "independent, got \"" + Echo.cut(g) + "\"");
-            }
-        }
-        double formwork = r.has("formwork_set_cost")
-                ? InputLimits.require(r, "formwork_set_cost", InputLimits.SET_COST, UnitSystem.SI,
-                        r.nonNegative("formwork_set_cost", "the cost of the forms for one section size")) : 0;
-        return new Rationalise(sizes, bars, same, formwork);
-    }
-
-    /** The file's own name as the reports show it (the whole path for one that has none, such as a root). */
-    private static String fileName(Path p) {
-        Path name = p.getFileName();
-        return (name == null ? p : name).toString();
+        return new ScheduleInput(read.sources(), design.settings(), design.space(), design.rates(), design.currency(),
+                design.costs(), design.maxBarSizesPerBeam(), design.barsPerTwoLegs(), out, read.rationalise());
     }
 }

@@ -40,11 +40,12 @@ public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<Section
 
     /**
      * The rationalisation's search, for its proof (whose status is OPTIMAL, FEASIBLE with a gap, or
-     * INFEASIBLE): the method (or why no schedule meets the limits), the bar-size sets considered, solved
-     * and pruned by bound, the (beam, size) pairs evaluated exactly, and the time to the proof (ms).
+     * INFEASIBLE): the method (or, INFEASIBLE, why no schedule meets the limits) and CP-SAT's status where
+     * it stopped short (else null), the bar-size sets considered, solved and pruned by bound, the
+     * (beam, size) pairs evaluated exactly, and the time to the proof (ms).
      */
-    public record Search(String method, int barSetsTotal, int barSetsSolved, int barSetsPruned, int pairsEvaluated,
-            long millis) {
+    public record Search(ProofMethod method, String cpSatStatus, int barSetsTotal, int barSetsSolved,
+            int barSetsPruned, int pairsEvaluated, long millis) {
     }
 
     /** The least total cost with at most {@code sizes} section sizes (NaN when none is feasible). */

@@ -30,13 +30,6 @@ public final class Compare {
         }
     }
 
-    /** Words for lengths and stresses in the user's units. */
-    public interface Say {
-        String length(double mm);
-
-        String stress(double mpa);
-    }
-
     private Compare() {
     }
 

@@ -8,25 +8,22 @@ import barfit.design.SearchSpace;
 import barfit.design.SectionDesigner;
 import barfit.design.SectionProblem;
 import barfit.design.SolverOptions;
-import barfit.report.DesignText;
-import barfit.report.Words;
 import barfit.section.Materials;
 import barfit.section.SectionChecks;
 import barfit.section.Demand;
 import barfit.section.trail.Trail;
-import barfit.units.UnitSystem;
 import java.util.Comparator;
 
 /** A single section under study. */
 public final class SectionTarget implements Target {
     private final SectionProblem p;
     private final SolverOptions options;
-    private final UnitSystem units;
+    private final Say say;
 
-    public SectionTarget(SectionProblem p, SolverOptions options, UnitSystem units) {
+    public SectionTarget(SectionProblem p, SolverOptions options, Say say) {
         this.p = p;
         this.options = options;
-        this.units = units;
+        this.say = say;
     }
 
     public SectionProblem problem() {
@@ -67,9 +64,9 @@ public final class SectionTarget implements Target {
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
         SectionProblem q = new SectionProblem(p.id(), m, p.detailing(), p.code(), space, p.mu(), p.vu(), p.span(), cap,
                 freeWidth ? null : p.fixedWidth(), p.flange(), p.costLength());
-        DesignOutcome o = new SectionDesigner(cost, options, units).design(q, 0);
+        DesignOutcome o = new SectionDesigner(cost, options).design(q, 0);
         if (!o.feasible()) {
-            return Summary.none(o.diagnosis().summary(), o.diagnosis().limit());
+            return Summary.none(say.why(o.diagnosis()), o.diagnosis().limit());
         }
         Layout l = o.best().layout();
         var f = o.best().report().flexure();
@@ -87,9 +84,9 @@ public final class SectionTarget implements Target {
             fails = Summary.checks(r.failures());
         }
         int bars = l.tensionBarCount() + l.compressionCount();
-        return new Summary(true, l.width(), l.height(), l.bending().tensionFace().word() + " " + DesignText.bars(l),
+        return new Summary(true, l.width(), l.height(), l.bending().tensionFace().word() + " " + Summary.bars(l.tensionCounts(), l.tensionBar().label()),
                 l.bending().compressionFace().word() + " " + l.compressionCount() + " " + l.compressionBar().label(),
-                Words.stirrups(l.stirrups(), units), l.bending().tensionFace().word(), l.tensionCounts(),
+                say.stirrups(l.stirrups()), l.bending().tensionFace().word(), l.tensionCounts(),
                 l.tensionBar().designation(), l.bending().compressionFace().word(), l.compressionCount(),
                 l.compressionBar().designation(), f.phiMn(), Math.abs(q.mu()), f.epsT(), f.phi(), f.strainClass(), used,
                 needed, bars, l.tensionCounts().size() + 1, o.best().cost(), o.status() + " over "

@@ -9,7 +9,6 @@ import barfit.design.beam.BeamProblem;
 import barfit.design.beam.BeamVerifier;
 import barfit.section.CheckReport;
 import barfit.section.Materials;
-import barfit.units.UnitSystem;
 import java.util.List;
 
 /**
@@ -19,12 +18,12 @@ import java.util.List;
 public final class SpanTarget implements Target {
     private final BeamProblem p;
     private final SolverOptions options;
-    private final UnitSystem units;
+    private final Say say;
 
-    public SpanTarget(BeamProblem p, SolverOptions options, UnitSystem units) {
+    public SpanTarget(BeamProblem p, SolverOptions options, Say say) {
         this.p = p;
         this.options = options;
-        this.units = units;
+        this.say = say;
     }
 
     @Override
@@ -63,9 +62,9 @@ public final class SpanTarget implements Target {
                 p.mMid(), p.mRight(), p.vLeft(), p.vRight(), p.service(), p.limits(), cap, freeWidth ? null : p.fixedWidth(), p.flange(),
                 p.bottomAnchored(), p.maxBarSizes(), p.barsPerTwoLegs()).withAnalysis(p.analysedService(),
                         p.shearDiagram());
-        BeamDesigner.Outcome o = new BeamDesigner(cost, options, units).design(q, 0);
+        BeamDesigner.Outcome o = new BeamDesigner(cost, options).design(q, 0);
         if (!o.feasible()) {
-            return Summary.none(o.diagnosis().summary(), o.diagnosis().limit());
+            return Summary.none(say.why(o.diagnosis()), o.diagnosis().limit());
         }
         BeamLayout l = o.best().layout();
         CheckReport governing = null;
@@ -95,11 +94,11 @@ public final class SpanTarget implements Target {
         int layers = l.bottomCounts().size() + Math.max(l.topLeft() == null ? 1 : l.topLeft().size(),
                 l.topRight() == null ? 1 : l.topRight().size());
         var f = governing.flexure();
-        String bottom = "bottom " + counts(l.bottomCounts(), l.bottom().label());
+        String bottom = "bottom " + Summary.bars(l.bottomCounts(), l.bottom().label());
         String topText = "top " + l.topContinuous() + " " + l.top().label() + " continuous"
-                + (l.topLeft() != null ? ", " + counts(l.topLeft(), l.top().label()) + " at left" : "")
-                + (l.topRight() != null ? ", " + counts(l.topRight(), l.top().label()) + " at right" : "");
-        List<String> zones = l.zoneStirrups().stream().map(s -> barfit.report.Words.stirrups(s, units)).toList();
+                + (l.topLeft() != null ? ", " + Summary.bars(l.topLeft(), l.top().label()) + " at left" : "")
+                + (l.topRight() != null ? ", " + Summary.bars(l.topRight(), l.top().label()) + " at right" : "");
+        List<String> zones = l.zoneStirrups().stream().map(say::stirrups).toList();
         String st = zones.stream().distinct().count() == 1 ? zones.get(0) + " throughout" : String.join(" / ", zones);
         return new Summary(true, l.width(), l.height(), bottom, topText, st, "bottom", l.bottomCounts(),
                 l.bottom().designation(), "top", l.topContinuous(), l.top().designation(), f.phiMn(),
@@ -107,13 +106,5 @@ public final class SpanTarget implements Target {
                 l.bottomCount() + top, layers, o.best().cost(), o.status() + " over "
                         + o.proof().solver().booleans() + " booleans",
                 fails, null, false);
-    }
-
-    private static String counts(List<Integer> c, String label) {
-        StringBuilder sb = new StringBuilder();
-        for (int i = 0; i < c.size(); i++) {
-            sb.append(i == 0 ? "" : " + ").append(c.get(i)).append(' ').append(label);
-        }
-        return sb.toString();
     }
 }

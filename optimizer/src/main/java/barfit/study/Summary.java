@@ -65,6 +65,15 @@ public record Summary(
         return cost == null ? Double.POSITIVE_INFINITY : cost.total();
     }
 
+    /** Bars by layer from the face: "3 No. 25 + 2 No. 25". */
+    static String bars(java.util.List<Integer> counts, String label) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < counts.size(); i++) {
+            sb.append(i == 0 ? "" : " + ").append(counts.get(i)).append(' ').append(label);
+        }
+        return sb.toString();
+    }
+
     /** The failing checks in words, each once: "deflection (24.2), flexure (22.3)". */
     static String checks(java.util.List<barfit.section.CheckResult> failures) {
         java.util.LinkedHashSet<String> seen = new java.util.LinkedHashSet<>();

@@ -81,7 +81,16 @@ class BadInputTest {
                 // --force says what to replace: alone it is a usage error, not silently ignored
                 Arguments.of(List.of("sweep", STUDY, "--force"), "--force:", "expected --plot FILE.svg with it"),
                 Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
-                        "--force"), "--force:", "expected --out DIR with it"));
+                        "--force"), "--force:", "expected --out DIR with it"),
+                // an option's error names the option, not the input file as if the option were in it
+                Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
+                        "--threads", "0"), "--threads:", "expected 1 to 256, got 0"),
+                Arguments.of(List.of("design", STUDY, "--beam", "NO-SUCH"), "--beam:",
+                        "no beam or line NO-SUCH in " + STUDY + "; expected one of:"),
+                Arguments.of(List.of("compare", STUDY, "--beam", "NO-SUCH"), "--beam:",
+                        "no beam, line or line part (LINE/span N) NO-SUCH in " + STUDY + "; expected one of:"),
+                Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
+                        "--out", BadCsvTest.BEAMS.toString()), "--out:", BadCsvTest.BEAMS + " is a file; expected a directory"));
     }
 
     @ParameterizedTest(name = "{0}")

@@ -10,8 +10,7 @@ import org.junit.jupiter.api.Test;
 
 /** Properties every answer must have, on seeded random problems. */
 class DesignPropertiesTest {
-    private final SectionDesigner designer = new SectionDesigner(OracleTest.COST, new SolverOptions(30, 1, 1),
-            UnitSystem.SI);
+    private final SectionDesigner designer = new SectionDesigner(OracleTest.COST, new SolverOptions(30, 1, 1));
 
     private long cost(SectionProblem p) {
         DesignOutcome o = designer.design(p, 0);

@@ -15,8 +15,7 @@ import org.junit.jupiter.api.Test;
  * asked for, and never cheaper than the code's rules alone.
  */
 class LegsRuleTest {
-    private final SectionDesigner designer = new SectionDesigner(OracleTest.COST, new SolverOptions(30, 1, 1),
-            UnitSystem.SI);
+    private final SectionDesigner designer = new SectionDesigner(OracleTest.COST, new SolverOptions(30, 1, 1));
 
     @Test
     void theOfficeRuleIsOffByDefaultAndNeverCheaper() {

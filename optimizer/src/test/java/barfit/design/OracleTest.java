@@ -20,7 +20,7 @@ class OracleTest {
     @Test
     void optimizerMatchesExhaustiveEnumeration() {
         Random rnd = new Random(Long.getLong("oracle.seed", 318_19L));
-        SectionDesigner designer = new SectionDesigner(COST, new SolverOptions(30, 1, 1), UnitSystem.SI);
+        SectionDesigner designer = new SectionDesigner(COST, new SolverOptions(30, 1, 1));
         ExhaustiveSearch oracle = new ExhaustiveSearch(COST);
         int feasible = 0;
         int instances = Integer.getInteger("oracle.instances", 320);

@@ -34,7 +34,7 @@ class SearchGoldenTest {
     @Test
     void answersOnSeededRandomProblemsAreUnchanged() {
         StringBuilder out = new StringBuilder();
-        SectionDesigner sections = new SectionDesigner(COST, new SolverOptions(30, 1, 1), UnitSystem.SI);
+        SectionDesigner sections = new SectionDesigner(COST, new SolverOptions(30, 1, 1));
         Random rnd = new Random(2_026_12L);
         for (int i = 0; i < 240; i++) {
             SectionProblem p = i % 3 == 2 ? RandomProblems.medium(rnd) : RandomProblems.small(rnd);
@@ -45,7 +45,7 @@ class SearchGoldenTest {
                     .append(o.feasible() ? DesignText.describe(o.best().layout(), UnitSystem.SI) : "-").append(' ')
                     .append(hash(json)).append('\n');
         }
-        BeamDesigner spans = new BeamDesigner(COST, new SolverOptions(30, 1, 1), UnitSystem.SI);
+        BeamDesigner spans = new BeamDesigner(COST, new SolverOptions(30, 1, 1));
         Random beams = new Random(2_026_13L);
         for (int i = 0; i < 60; i++) {
             BeamProblem p = RandomBeams.small(beams);

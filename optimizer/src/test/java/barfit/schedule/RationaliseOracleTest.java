@@ -16,6 +16,7 @@ import barfit.design.beam.BeamExhaustive;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
 import barfit.design.beam.BeamVerifier;
+import barfit.input.Rationalise;
 import barfit.input.SearchReader;
 import barfit.input.Settings;
 import barfit.section.CodeEquations;

@@ -11,7 +11,6 @@ import barfit.design.ExhaustiveSearch;
 import barfit.design.SectionDesigner;
 import barfit.design.SectionProblem;
 import barfit.design.SolverOptions;
-import barfit.units.UnitSystem;
 import barfit.section.CodeEquations;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -29,7 +28,7 @@ class StudyTest {
                 p.fixedWidth(), p.flange(), 1.0);
     }
 
-    private static final Compare.Say SAY = new Compare.Say() {
+    private static final Say SAY = new Say() {
         @Override
         public String length(double mm) {
             return mm + " mm";
@@ -38,6 +37,21 @@ class StudyTest {
         @Override
         public String stress(double mpa) {
             return mpa + " MPa";
+        }
+
+        @Override
+        public String stirrups(barfit.section.Stirrups s) {
+            return s.toString();
+        }
+
+        @Override
+        public String why(barfit.design.Diagnosis d) {
+            return d.limit();
+        }
+
+        @Override
+        public String why(barfit.design.beam.BeamDesigner.Diagnosis d) {
+            return d.limit();
         }
     };
 
@@ -51,7 +65,7 @@ class StudyTest {
             List<Double> depths = p.space().depths();
             double cap = depths.get(depths.size() / 2);
             SectionProblem q = perMetre(p, cap);
-            Compare.Result c = Compare.run(new SectionTarget(q, OPTIONS, UnitSystem.SI), cap, 600, List.of(), COST,
+            Compare.Result c = Compare.run(new SectionTarget(q, OPTIONS, SAY), cap, 600, List.of(), COST,
                     fc -> COST, SAY);
             var atCap = oracle.solve(q);
             var lifted = oracle.solve(perMetre(p, null));
@@ -78,11 +92,11 @@ class StudyTest {
     @Test
     void sweepIsNonIncreasingAndMatchesFreshDesigns() {
         Random r = new Random(56);
-        SectionDesigner designer = new SectionDesigner(COST, OPTIONS, UnitSystem.SI);
+        SectionDesigner designer = new SectionDesigner(COST, OPTIONS);
         for (int i = 0; i < 25; i++) {
             SectionProblem p = perMetre(barfit.design.RandomProblems.small(r), null);
             List<Double> caps = new ArrayList<>(p.space().depths());
-            Sweep.Result s = Sweep.run(new SectionTarget(p, OPTIONS, UnitSystem.SI), caps, COST);
+            Sweep.Result s = Sweep.run(new SectionTarget(p, OPTIONS, SAY), caps, COST);
             double previous = Double.POSITIVE_INFINITY;
             for (Sweep.Point pt : s.points()) {
                 if (!pt.summary().feasible()) {

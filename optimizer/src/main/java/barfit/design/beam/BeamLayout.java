@@ -141,31 +141,50 @@ public record BeamLayout(
         return most;
     }
 
-    /** A bar mark of the schedule: count bars of one size, each {@code length} long (mm). */
-    public record BarMark(String mark, String role, BarSize bar, int count, double length) {
+    /**
+     * A bar mark of the schedule: count bars of one size, each {@code length} long (mm), in a role; a
+     * stirrup's hoops and crossties name their zone and the stirrups' legs (else null and 0).
+     */
+    public record BarMark(String mark, Role role, BarSize bar, int count, double length, String zone, int legs) {
+        BarMark(String mark, Role role, BarSize bar, int count, double length) {
+            this(mark, role, bar, count, length, null, 0);
+        }
+    }
+
+    /** What a bar mark is for (the reports word it). */
+    public enum Role {
+        BOTTOM,
+        /** A cantilever's top bars: its full length and ld past the support. */
+        CANTILEVER_TOP,
+        TOP_CONTINUOUS,
+        TOP_EXTRA_LEFT,
+        TOP_EXTRA_RIGHT,
+        SKIN,
+        /** A zone's closed hoops: two of its legs. */
+        HOOPS,
+        /** A zone's crossties: one per leg beyond two, per hoop. */
+        CROSSTIES
     }
 
     /** The bar list: bottom, top continuous, top extras at each support, stirrups per zone. */
     public List<BarMark> bars(BeamProblem p, CostModel cost) {
         List<BarMark> out = new ArrayList<>();
         double l = p.span();
-        out.add(new BarMark("B1", "bottom, full span", bottom, bottomCount(), l));
+        out.add(new BarMark("B1", Role.BOTTOM, bottom, bottomCount(), l));
         int k = 1;
         if (p.cantilever()) {
-            out.add(new BarMark("T1", "top, full length and ld past the support", top, sum(topLeft), extLeft));
+            out.add(new BarMark("T1", Role.CANTILEVER_TOP, top, sum(topLeft), extLeft));
         } else {
-            out.add(new BarMark("T" + k++, "top continuous, full span", top, topContinuous, l));
+            out.add(new BarMark("T" + k++, Role.TOP_CONTINUOUS, top, topContinuous, l));
             if (p.leftSupport() && sum(topLeft) > topContinuous) {
-                out.add(new BarMark("T" + k++, "top extra at left support", top, sum(topLeft) - topContinuous, extLeft));
+                out.add(new BarMark("T" + k++, Role.TOP_EXTRA_LEFT, top, sum(topLeft) - topContinuous, extLeft));
             }
             if (p.rightSupport() && sum(topRight) > topContinuous) {
-                out.add(new BarMark("T" + k++, "top extra at right support", top, sum(topRight) - topContinuous,
-                        extRight));
+                out.add(new BarMark("T" + k++, Role.TOP_EXTRA_RIGHT, top, sum(topRight) - topContinuous, extRight));
             }
         }
         if (skin != null) {
-            out.add(new BarMark("K1", "skin bars, both faces", skin.bar(), 2 * Layout.skinBarsPerFace(height,
-                    skin.spacing()), l));
+            out.add(new BarMark("K1", Role.SKIN, skin.bar(), 2 * Layout.skinBarsPerFace(height, skin.spacing()), l));
         }
         // a stirrup set is a closed hoop and, for each leg beyond two, a crosstie: separate bars, separate marks
         List<BeamProblem.Zone> zones = p.zones();
@@ -173,13 +192,13 @@ public record BeamLayout(
         for (int i = 0; i < zones.size(); i++) {
             Stirrups st = zoneStirrups.get(i);
             int sets = stirrupSets(zones.get(i).length(), st.spacing());
-            String zone = zones.get(i).name() + " zone";
-            out.add(new BarMark("S" + s++, "stirrup hoops, " + zone + (st.legs() > 2 ? " (2 of " + st.legs() + " legs)"
-                    : ", 2 legs"), st.bar(), sets, cost.hoopLength(width, height, st.bar())));
+            String zone = zones.get(i).name();
+            out.add(new BarMark("S" + s++, Role.HOOPS, st.bar(), sets, cost.hoopLength(width, height, st.bar()), zone,
+                    st.legs()));
             if (st.legs() > 2) {
                 int ties = st.legs() - 2;
-                out.add(new BarMark("S" + s++, "crossties, " + zone + " (" + ties + " per hoop)", st.bar(), sets * ties,
-                        cost.crosstieLength(height, st.bar())));
+                out.add(new BarMark("S" + s++, Role.CROSSTIES, st.bar(), sets * ties, cost.crosstieLength(height,
+                        st.bar()), zone, st.legs()));
             }
         }
         return out;
@@ -191,8 +210,8 @@ public record BeamLayout(
 
     /** The cost of the whole span. */
     public CostBreakdown cost(BeamProblem p, CostModel cost) {
-        double lm = p.span() / 1000.0;
-        CostBreakdown frame = cost.frame(width, height, flange).times(lm);
+        double spanMetres = p.span() / 1000.0;
+        CostBreakdown frame = cost.frame(width, height, flange).times(spanMetres);
         double bars = 0;
         double stirrups = 0;
         for (BarMark b : bars(p, cost)) {

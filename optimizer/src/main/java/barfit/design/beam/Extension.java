@@ -18,27 +18,37 @@ import barfit.section.trail.Trail;
  * length and, to be anchored, the same development length past the support face into the back span
  * (its own bars are not checked further).
  */
-public record Extension(double length, double ld, String rule) {
+public record Extension(double length, double ld, Governs governs) {
+    /** What sets the run (the reports word it). */
+    public enum Governs {
+        /** A cantilever: its full length and ld past the support face. */
+        CANTILEVER,
+        /** 0.3 x span, over ld. */
+        THREE_TENTHS_OF_SPAN,
+        /** ld, over 0.3 x span. */
+        LD,
+        /** ld, past mid-span of a span continuous at both ends: the two supports' extras overlap. */
+        LD_PAST_MID_SPAN,
+        /** ld, longer than the span: the extras run through it and past the far face. */
+        LD_BEYOND_SPAN
+    }
 
     public static Extension of(BeamProblem p, double b, double h, Detailing det, BarSize top) {
         double ld = developmentLength(p, b, h, det, top);
         if (p.cantilever()) {
-            return new Extension(p.span() + ld, ld,
-                    "full length of the cantilever and ld of 25.4.2.4 past the support face");
+            return new Extension(p.span() + ld, ld, Governs.CANTILEVER);
         }
         double rule03 = 0.3 * p.span();
         if (ld <= rule03) {
-            return new Extension(rule03, ld, "0.3 × span governs over ld of 25.4.2.4");
+            return new Extension(rule03, ld, Governs.THREE_TENTHS_OF_SPAN);
         }
         if (ld > p.span()) {
-            return new Extension(ld, ld, "ld of 25.4.2.4 exceeds the span: the extra bars run through it and "
-                    + "past the far face until developed");
+            return new Extension(ld, ld, Governs.LD_BEYOND_SPAN);
         }
         if (p.leftSupport() && p.rightSupport() && ld > p.span() / 2) {
-            return new Extension(ld, ld, "ld of 25.4.2.4 governs, past mid-span: the extra bars of the two "
-                    + "supports overlap over the middle");
+            return new Extension(ld, ld, Governs.LD_PAST_MID_SPAN);
         }
-        return new Extension(ld, ld, "ld of 25.4.2.4 governs over 0.3 × span");
+        return new Extension(ld, ld, Governs.LD);
     }
 
     /** ld of 25.4.2.4 for the top bars (Ktr taken as 0; cb from the cover and a full first layer's spacing). */

@@ -8,13 +8,16 @@ import barfit.design.beam.BeamDesigner;
 import barfit.design.beam.BeamLayout;
 import barfit.design.beam.BeamProblem;
 import barfit.design.beam.Extension;
+import barfit.input.Rationalise;
 import barfit.input.Settings;
 import barfit.report.BeamText;
 import barfit.report.Caution;
+import barfit.report.DiagnosisWords;
 import barfit.report.Money;
+import barfit.report.ScheduleRows;
+import barfit.report.ScheduleWords;
 import barfit.report.TrailText;
 import barfit.report.Words;
-import barfit.schedule.Rationalise;
 import barfit.schedule.ScheduleInput;
 import barfit.schedule.ScheduleResult;
 import barfit.section.CheckReport;
@@ -47,6 +50,7 @@ public final class ScheduleHtml {
         Settings s = in.settings();
         UnitSystem u = s.units();
         List<String> ids = beamIds(r);
+        List<ScheduleRows.Row> rows = ScheduleRows.rows(r);
         StringBuilder out = new StringBuilder(1 << 16);
         String title = "Beam schedule: " + String.join(", ", in.sources());
         out.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n");
@@ -57,7 +61,7 @@ public final class ScheduleHtml {
         caution(out);
         contents(r, out);
         project(r, out);
-        schedule(r, ids, out);
+        schedule(r, rows, ids, out);
         if (r.proof() != null) {
             proof(r, out);
         }
@@ -66,8 +70,8 @@ public final class ScheduleHtml {
             standardisation(r, out);
         }
         out.append("<section id=\"beams\">\n<h2>Beams</h2>\n");
-        for (int i = 0; i < r.beams().size(); i++) {
-            beam(r, r.beams().get(i), ids.get(i), out);
+        for (int i = 0; i < rows.size(); i++) {
+            beam(r, rows.get(i), ids.get(i), out);
         }
         out.append("</section>\n");
         out.append("<footer>\n<p>").append(Svg.esc(Caution.SHORT)).append("</p>\n</footer>\n</body>\n</html>\n");
@@ -115,45 +119,49 @@ public final class ScheduleHtml {
     // ---------------------------------------------------------------- project data
 
     private static void project(ScheduleResult r, StringBuilder out) {
-        ScheduleInput in = r.input();
-        Settings s = in.settings();
-        UnitSystem u = s.units();
-        var m = s.materials();
-        var det = s.detailing();
-        SearchSpace sp = in.space();
+        ScheduleInput input = r.input();
+        Settings settings = input.settings();
+        UnitSystem u = settings.units();
+        var materials = settings.materials();
+        var detailing = settings.detailing();
+        SearchSpace space = input.space();
         out.append("<section id=\"project\">\n<h2>Project data and assumptions</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Code, materials, detailing</caption>\n");
-        kv(out, "code", s.code().edition() + ", nonprestressed beams");
+        kv(out, "code", settings.code().edition() + ", nonprestressed beams");
         kv(out, "units", unitsWords(u));
-        kv(out, "concrete", "f'c = " + u.withUnit(m.fc(), Dim.STRESS) + ", λ = " + u.compact(m.lambda(), Dim.NUMBER)
-                + ", aggregate " + len(m.aggregate(), u));
-        kv(out, "steel", "fy = " + u.withUnit(m.fy(), Dim.STRESS) + " (longitudinal), fyt = " + u.withUnit(m.fyt(), Dim.STRESS)
-                + " (stirrups), Es = " + u.compact(s.code().es(), Dim.STRESS) + " " + u.unit(Dim.STRESS));
-        kv(out, "bar catalog", s.catalog().id() + ": " + s.catalog().title() + " (" + s.catalog().source() + ")");
-        kv(out, "cover", len(det.cover(), u) + " clear to the stirrups, exposure " + det.exposure().key() + " (20.5.1.3)");
-        kv(out, "layer gap", len(det.layerGap(), u) + " clear between layers (25.2.2)");
-        kv(out, "stirrups", "sizes " + labels(sp.stirrupSizes()) + "; legs " + joinInts(sp.stirrupLegs()) + "; spacing "
-                + range(sp.stirrupSpacings(), u));
+        kv(out, "concrete", "f'c = " + u.withUnit(materials.fc(), Dim.STRESS) + ", λ = "
+                + u.compact(materials.lambda(), Dim.NUMBER)
+                + ", aggregate " + len(materials.aggregate(), u));
+        kv(out, "steel", "fy = " + u.withUnit(materials.fy(), Dim.STRESS) + " (longitudinal), fyt = "
+                + u.withUnit(materials.fyt(), Dim.STRESS)
+                + " (stirrups), Es = " + u.compact(settings.code().es(), Dim.STRESS) + " " + u.unit(Dim.STRESS));
+        kv(out, "bar catalog", settings.catalog().id() + ": " + settings.catalog().title() + " ("
+                + settings.catalog().source() + ")");
+        kv(out, "cover", len(detailing.cover(), u) + " clear to the stirrups, exposure " + detailing.exposure().key()
+                + " (20.5.1.3)");
+        kv(out, "layer gap", len(detailing.layerGap(), u) + " clear between layers (25.2.2)");
+        kv(out, "stirrups", "sizes " + labels(space.stirrupSizes()) + "; legs " + joinInts(space.stirrupLegs()) + "; spacing "
+                + range(space.stirrupSpacings(), u));
         out.append("</table>\n");
         out.append("<table class=\"kv\">\n<caption>Search space</caption>\n");
-        kv(out, "widths", lengths(sp.widths(), u));
-        kv(out, "depths", range(sp.depths(), u));
-        kv(out, "bar sizes", labels(sp.barSizes()));
-        kv(out, "compression bar sizes", labels(sp.compressionSizes()));
-        kv(out, "layers of bars", "1 to " + sp.maxLayers() + " on the tension face");
-        kv(out, "bar sizes per beam", "at most " + in.maxBarSizesPerBeam());
+        kv(out, "widths", lengths(space.widths(), u));
+        kv(out, "depths", range(space.depths(), u));
+        kv(out, "bar sizes", labels(space.barSizes()));
+        kv(out, "compression bar sizes", labels(space.compressionSizes()));
+        kv(out, "layers of bars", "1 to " + space.maxLayers() + " on the tension face");
+        kv(out, "bar sizes per beam", "at most " + input.maxBarSizesPerBeam());
         out.append("</table>\n");
-        out.append("<table class=\"kv\">\n<caption>Cost rates").append(in.currency().isEmpty() ? ""
-                : " (" + Svg.esc(in.currency()) + ")").append("</caption>\n");
-        rates(in.rates(), u, out);
+        out.append("<table class=\"kv\">\n<caption>Cost rates").append(input.currency().isEmpty() ? ""
+                : " (" + Svg.esc(input.currency()) + ")").append("</caption>\n");
+        rates(input.rates(), u, out);
         out.append("</table>\n</div>\n");
 
         out.append("<h3>Rules of thumb the design uses</h3>\n<ul class=\"rules\">\n");
         li(out, "Stirrup legs: no more legs than bars in the outer layer of either face, so that every leg's bend "
                 + "holds a bar (25.7.1.2, 25.7.1.3); legs beyond two are crossties; where compression bars are relied "
                 + "on, ties round them as 9.7.6.4 and 25.7.2 ask"
-                + (in.barsPerTwoLegs() > 0 ? "; and, the office's own rule, two legs hold up to " + in.barsPerTwoLegs()
-                        + " bars in a layer, four legs up to " + 2 * in.barsPerTwoLegs() + ", and so on (no clause)"
+                + (input.barsPerTwoLegs() > 0 ? "; and, the office's own rule, two legs hold up to " + input.barsPerTwoLegs()
+                        + " bars in a layer, four legs up to " + 2 * input.barsPerTwoLegs() + ", and so on (no clause)"
                         : "") + ".");
         li(out, "Stirrup zones: from the shear line of a uniformly loaded span through the given shears at d from "
                 + "the faces; the middle zone takes the line's largest shear over its length (and at least "
@@ -161,9 +169,9 @@ public final class ScheduleHtml {
         li(out, "Top bars: two or more bars run the full span; the extra bars at a continuous support run past the "
                 + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0), "
                 + "never cut short of it.");
-        li(out, "At most " + in.maxBarSizesPerBeam() + " longitudinal bar sizes per beam; bottom bars of one size run the "
+        li(out, "At most " + input.maxBarSizesPerBeam() + " longitudinal bar sizes per beam; bottom bars of one size run the "
                 + "full span.");
-        li(out, "Main-bar mass is multiplied by the lap factor " + u.compact(in.rates().lapFactor(), Dim.NUMBER)
+        li(out, "Main-bar mass is multiplied by the lap factor " + u.compact(input.rates().lapFactor(), Dim.NUMBER)
                 + " for laps and waste.");
         li(out, "Skin bars of the smallest bar size at the 24.3.2 spacing where h > " + (u == UnitSystem.US ? "36 in"
                 : "900 mm") + " (9.7.2.3), priced as main bars.");
@@ -175,42 +183,47 @@ public final class ScheduleHtml {
                 + "real corner bar nests slightly further in, and the drawing shows it touching the bend.");
         out.append("</ul>\n");
 
-        Rationalise ra = in.rationalise();
+        Rationalise rationalise = input.rationalise();
         out.append("<h3>Rationalisation</h3>\n");
-        if (ra == null) {
+        if (rationalise == null) {
             out.append("<p>None: each beam is designed at its own optimum.</p>\n");
         } else {
             out.append("<table class=\"kv\">\n");
-            kv(out, "section sizes", ra.maxSectionSizes() == null ? "no limit" : "at most " + ra.maxSectionSizes()
+            kv(out, "section sizes", rationalise.maxSectionSizes() == null ? "no limit" : "at most "
+                    + rationalise.maxSectionSizes()
                     + " distinct b × h over the schedule");
-            kv(out, "bar sizes", ra.maxBarSizes() == null ? "no limit" : "at most " + ra.maxBarSizes()
+            kv(out, "bar sizes", rationalise.maxBarSizes() == null ? "no limit" : "at most " + rationalise.maxBarSizes()
                     + " distinct longitudinal bar sizes over the schedule");
-            kv(out, "groups", ra.groupsSameSection() ? "beams of one group share b × h" : "groups do not constrain b × h");
-            kv(out, "formwork set", money(ra.formworkSetCost(), in.currency()) + " per distinct section size");
+            kv(out, "groups", rationalise.groupsSameSection() ? "beams of one group share b × h"
+                    : "groups do not constrain b × h");
+            kv(out, "formwork set", money(rationalise.formworkSetCost(), input.currency()) + " per distinct section size");
             out.append("</table>\n");
         }
         out.append("</section>\n");
     }
 
-    private static void rates(CostRates c, UnitSystem u, StringBuilder out) {
-        boolean us = u == UnitSystem.US;
+    private static void rates(CostRates rates, UnitSystem u, StringBuilder out) {
+        boolean inchPound = u == UnitSystem.US;
         // the rates are held per SI unit; show them per the input's units
-        double yd3 = 0.764554857984;
-        double lb = 0.45359237;
-        double ft2 = 0.3048 * 0.3048;
-        kv(out, "concrete", amount(us ? c.concretePerM3() * yd3 : c.concretePerM3()) + (us ? " per yd³" : " per m³"));
-        kv(out, "main bars", amount(us ? c.mainBarsPerKg() * lb : c.mainBarsPerKg()) + (us ? " per lb" : " per kg"));
-        kv(out, "stirrups", amount(us ? c.stirrupsPerKg() * lb : c.stirrupsPerKg()) + (us ? " per lb" : " per kg"));
-        kv(out, "formwork", amount(us ? c.formworkPerM2() * ft2 : c.formworkPerM2()) + (us ? " per ft²" : " per m²")
-                + " of contact");
-        kv(out, "depth premium", amount(us ? c.depthPremiumPerM() * ft2 : c.depthPremiumPerM())
-                + (us ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
-        kv(out, "lap factor", u.compact(c.lapFactor(), Dim.NUMBER) + " on main-bar mass");
+        double m3PerCubicYard = 0.764554857984;
+        double kgPerPound = 0.45359237;
+        double m2PerSquareFoot = 0.3048 * 0.3048;
+        kv(out, "concrete", amount(inchPound ? rates.concretePerM3() * m3PerCubicYard : rates.concretePerM3())
+                + (inchPound ? " per yd³" : " per m³"));
+        kv(out, "main bars", amount(inchPound ? rates.mainBarsPerKg() * kgPerPound : rates.mainBarsPerKg())
+                + (inchPound ? " per lb" : " per kg"));
+        kv(out, "stirrups", amount(inchPound ? rates.stirrupsPerKg() * kgPerPound : rates.stirrupsPerKg())
+                + (inchPound ? " per lb" : " per kg"));
+        kv(out, "formwork", amount(inchPound ? rates.formworkPerM2() * m2PerSquareFoot : rates.formworkPerM2())
+                + (inchPound ? " per ft²" : " per m²") + " of contact");
+        kv(out, "depth premium", amount(inchPound ? rates.depthPremiumPerM() * m2PerSquareFoot : rates.depthPremiumPerM())
+                + (inchPound ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
+        kv(out, "lap factor", u.compact(rates.lapFactor(), Dim.NUMBER) + " on main-bar mass");
     }
 
     // ---------------------------------------------------------------- schedule table
 
-    private static void schedule(ScheduleResult r, List<String> ids, StringBuilder out) {
+    private static void schedule(ScheduleResult r, List<ScheduleRows.Row> rows, List<String> ids, StringBuilder out) {
         UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
         boolean own = r.proof() != null;
@@ -224,53 +237,46 @@ public final class ScheduleHtml {
             out.append("<th>own optimum</th>");
         }
         out.append("</tr></thead>\n<tbody>\n");
-        for (int i = 0; i < r.beams().size(); i++) {
-            ScheduleResult.Beam b = r.beams().get(i);
-            BeamProblem p = b.outcome().problem();
-            out.append("<tr").append(b.feasible() ? "" : " class=\"infeasible\"").append("><td class=\"mark\"><a href=\"#")
+        for (int i = 0; i < rows.size(); i++) {
+            ScheduleRows.Row row = rows.get(i);
+            ScheduleResult.Beam b = row.entry();
+            out.append("<tr").append(row.feasible() ? "" : " class=\"infeasible\"").append("><td class=\"mark\"><a href=\"#")
                     .append(Svg.esc(ids.get(i))).append("\">").append(Svg.esc(b.beam().id())).append("</a></td><td>")
                     .append(Svg.esc(b.beam().group() == null ? "—" : b.beam().group())).append("</td><td class=\"num\">")
-                    .append(u.number(p.span(), Dim.SPAN)).append("</td>");
-            if (!b.feasible()) {
+                    .append(u.number(row.problem().span(), Dim.SPAN)).append("</td>");
+            if (!row.feasible()) {
                 BeamDesigner.Diagnosis d = b.outcome().diagnosis();
                 out.append("<td colspan=\"").append(own ? 9 : 8).append("\">").append(Svg.esc(headline(d)))
-                        .append(" — ").append(Svg.esc(diagnosis(d))).append("</td></tr>\n");
+                        .append(" — ").append(Svg.esc(diagnosis(d, u))).append("</td></tr>\n");
                 continue;
             }
-            BeamDesigner.Design d = b.outcome().best();
-            BeamLayout l = d.layout();
+            BeamLayout l = row.layout();
             out.append("<td class=\"num\">").append(u.compact(l.width(), Dim.LENGTH)).append(" × ")
                     .append(u.compact(l.height(), Dim.LENGTH)).append(l.flange() != null ? (l.flange().oneSided() ? " L" : " T") : "")
                     .append("</td>");
-            out.append("<td>").append(Svg.esc(perLayer(l.bottomCounts(), l.bottom()))).append("</td>");
-            if (p.cantilever()) {
-                out.append("<td>").append(Svg.esc(perLayer(l.topLeft(), l.top()))).append(", full length + ")
-                        .append(Svg.esc(u.compact(l.extLeft() - p.span(), Dim.SPAN))).append(' ')
+            out.append("<td>").append(Svg.esc(row.bottom())).append("</td>");
+            if (row.cantilever()) {
+                out.append("<td>").append(Svg.esc(row.top())).append(", full length + ")
+                        .append(Svg.esc(u.compact(row.topPastSupport(), Dim.SPAN))).append(' ')
                         .append(Svg.esc(u.unit(Dim.SPAN))).append(" past the support</td><td>—</td><td>—</td>");
             } else {
-                out.append("<td>").append(l.topContinuous()).append(' ').append(Svg.esc(l.top().label())).append("</td>");
-                out.append("<td>").append(p.leftSupport() ? Svg.esc(topAtSupport(l.topLeft(), l, l.extLeft(), u)) : "—")
-                        .append("</td>");
-                out.append("<td>").append(p.rightSupport() ? Svg.esc(topAtSupport(l.topRight(), l, l.extRight(), u)) : "—")
-                        .append("</td>");
+                out.append("<td>").append(Svg.esc(row.top())).append("</td>");
+                out.append("<td>").append(row.left() != null ? Svg.esc(topAtSupport(row.left(), u)) : "—").append("</td>");
+                out.append("<td>").append(row.right() != null ? Svg.esc(topAtSupport(row.right(), u)) : "—").append("</td>");
             }
             out.append("<td class=\"lines\">");
-            List<BeamProblem.Zone> zones = p.zones();
-            for (int z = 0; z < zones.size(); z++) {
-                var st = l.zoneStirrups().get(z);
-                out.append(z == 0 ? "" : "<br>").append(Svg.esc(zones.get(z).name())).append(": ")
-                        .append(Svg.esc(Words.stirrups(st, u)));
+            for (int z = 0; z < row.zones().size(); z++) {
+                ScheduleRows.ZoneStirrups zone = row.zones().get(z);
+                out.append(z == 0 ? "" : "<br>").append(Svg.esc(zone.name())).append(": ")
+                        .append(Svg.esc(Words.stirrups(zone.stirrups(), u)));
             }
             out.append("</td><td class=\"lines\">");
-            boolean first = true;
-            for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
-                FlexureResult f = e.getValue().flexure();
-                double mu = Math.abs(e.getValue().demand().mu());
-                out.append(first ? "" : "<br>").append(shortPlace(e.getKey())).append(": ")
-                        .append(u.number(f.phiMn(), Dim.MOMENT)).append(" / ").append(u.number(mu, Dim.MOMENT));
-                first = false;
+            for (int k = 0; k < row.strengths().size(); k++) {
+                ScheduleRows.Strength st = row.strengths().get(k);
+                out.append(k == 0 ? "" : "<br>").append(ScheduleRows.place(st.place())).append(": ")
+                        .append(u.number(st.phiMn(), Dim.MOMENT)).append(" / ").append(u.number(st.mu(), Dim.MOMENT));
             }
-            out.append("</td><td class=\"num\">").append(Money.amount(d.cost().total())).append("</td>");
+            out.append("</td><td class=\"num\">").append(Money.amount(row.design().cost().total())).append("</td>");
             if (own) {
                 out.append("<td class=\"num\">").append(Double.isFinite(b.ownOptimum()) ? Money.amount(b.ownOptimum()) : "—")
                         .append("</td>");
@@ -283,18 +289,9 @@ public final class ScheduleHtml {
                 + "is in the beam's own section below).</p>\n</section>\n");
     }
 
-    /** "3+2 No. 25": bars per layer from the face inward. */
-    static String perLayer(List<Integer> counts, BarSize bar) {
-        StringBuilder sb = new StringBuilder();
-        for (int i = 0; i < counts.size(); i++) {
-            sb.append(i == 0 ? "" : "+").append(counts.get(i));
-        }
-        return sb.append(' ').append(bar.label()).toString();
-    }
-
-    private static String topAtSupport(List<Integer> counts, BeamLayout l, double ext, UnitSystem u) {
-        int extra = BeamLayout.sum(counts) - l.topContinuous();
-        return perLayer(counts, l.top()) + (extra > 0 ? "; " + extra + " extra, " + span(ext, u) + " past the face" : "");
+    /** The HTML's words for the top bars at a support: "4 No. 25; 2 extra, 2.100 m past the face". */
+    private static String topAtSupport(ScheduleRows.SupportTop at, UnitSystem u) {
+        return at.bars() + (at.extra() > 0 ? "; " + at.extra() + " extra, " + span(at.extension(), u) + " past the face" : "");
     }
 
     /** What failed: the beam on its own, or its group's need to share one section size. */
@@ -303,38 +300,40 @@ public final class ScheduleHtml {
                 : "No layout in the search space passes";
     }
 
-    private static String diagnosis(BeamDesigner.Diagnosis d) {
-        return "binding limit: " + d.limit() + " (" + d.summary() + ")" + (d.fixes().isEmpty()
+    private static String diagnosis(BeamDesigner.Diagnosis d, UnitSystem u) {
+        List<String> fixes = DiagnosisWords.fixes(d, u);
+        return "binding limit: " + d.limit() + " (" + DiagnosisWords.summary(d, u) + ")" + (fixes.isEmpty()
                 ? "; no single relaxed limit (depth, width) gives a passing layout"
-                : "; what would work, one limit at a time: " + barfit.report.Words.alternatives(d.fixes()));
+                : "; what would work, one limit at a time: " + Words.alternatives(fixes));
     }
 
     // ---------------------------------------------------------------- rationalisation proof
 
     private static void proof(ScheduleResult r, StringBuilder out) {
         UnitSystem u = r.input().settings().units();
-        Proof<ScheduleResult.Search> p = r.proof();
-        var s = p.search();
-        String cur = r.input().currency();
+        Proof<ScheduleResult.Search> proof = r.proof();
+        ScheduleResult.Search search = proof.search();
+        String currency = r.input().currency();
         out.append("<section id=\"rationalisation\">\n<h2>Rationalisation and its proof</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Proof</caption>\n");
-        kv(out, "method", s.method());
-        kv(out, "status", p.status().name());
-        boolean none = !p.bounded();
-        kv(out, "objective", none ? "— (no schedule meets the limits)" : money(p.objective(), cur));
-        kv(out, "best bound", none ? "—" : money(p.bound(), cur));
-        kv(out, "gap", none ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()));
-        kv(out, "bar-size sets", s.barSetsTotal() + " considered, " + s.barSetsSolved() + " solved, " + s.barSetsPruned()
-                + " pruned by the cost bound");
-        kv(out, "(beam, size) pairs", s.pairsEvaluated() + " designed exactly");
+        kv(out, "method", ScheduleWords.method(r));
+        kv(out, "status", proof.status().name());
+        boolean noSchedule = !proof.bounded();
+        kv(out, "objective", noSchedule ? "— (no schedule meets the limits)" : money(proof.objective(), currency));
+        kv(out, "best bound", noSchedule ? "—" : money(proof.bound(), currency));
+        kv(out, "gap", noSchedule ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * proof.gap()));
+        kv(out, "bar-size sets", search.barSetsTotal() + " considered, " + search.barSetsSolved() + " solved, "
+                + search.barSetsPruned() + " pruned by the cost bound");
+        kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly");
         // measured times are left out so that the same result always gives the same page
-        kv(out, "CP-SAT", p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed());
+        kv(out, "CP-SAT", proof.workers() + (proof.workers() == 1 ? " worker" : " workers") + ", seed " + proof.seed());
         out.append("</table>\n");
         out.append("<table class=\"grid\">\n<caption>Section sizes used</caption>\n<thead><tr><th>b × h (")
                 .append(u.unit(Dim.LENGTH)).append(")</th><th>beams</th></tr></thead>\n<tbody>\n");
-        for (ScheduleResult.SectionSize z : r.sizes()) {
-            out.append("<tr><td class=\"num\">").append(u.compact(z.width(), Dim.LENGTH)).append(" × ")
-                    .append(u.compact(z.height(), Dim.LENGTH)).append("</td><td>").append(Svg.esc(String.join(", ", z.beams())))
+        for (ScheduleResult.SectionSize size : r.sizes()) {
+            out.append("<tr><td class=\"num\">").append(u.compact(size.width(), Dim.LENGTH)).append(" × ")
+                    .append(u.compact(size.height(), Dim.LENGTH)).append("</td><td>")
+                            .append(Svg.esc(String.join(", ", size.beams())))
                     .append("</td></tr>\n");
         }
         out.append("</tbody>\n</table>\n</div>\n<p>Bar sizes used: ").append(Svg.esc(r.barSizes().isEmpty() ? "none"
@@ -344,28 +343,28 @@ public final class ScheduleHtml {
     // ---------------------------------------------------------------- costs
 
     private static void costs(ScheduleResult r, StringBuilder out) {
-        String cur = r.input().currency();
+        String currency = r.input().currency();
         out.append("<section id=\"costs\">\n<h2>Cost summary</h2>\n<table class=\"kv money\">\n");
-        kv(out, "beams", money(r.beamsCost(), cur));
+        kv(out, "beams", money(r.beamsCost(), currency));
         String sets = r.input().rationalise() == null ? "" : " (" + r.sizes().size() + " section "
                 + (r.sizes().size() == 1 ? "size" : "sizes") + ")";
-        kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), cur));
-        kvStrong(out, "total", money(r.totalCost(), cur));
-        boolean sets2 = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
+        kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), currency));
+        kvStrong(out, "total", money(r.totalCost(), currency));
+        boolean formsPerSize = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
         if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
         } else {
-            kv(out, "every beam at its own optimum" + (sets2 ? " (a set of forms per size)" : ""),
-                    money(r.unconstrainedCost(), cur));
-            double diff = r.totalCost() - r.unconstrainedCost();
-            String pct = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * diff
+            kv(out, "every beam at its own optimum" + (formsPerSize ? " (a set of forms per size)" : ""),
+                    money(r.unconstrainedCost(), currency));
+            double difference = r.totalCost() - r.unconstrainedCost();
+            String percent = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * difference
                     / r.unconstrainedCost()) : "";
-            kv(out, "difference", (diff >= 0 ? "+" : "") + money(diff, cur) + pct);
+            kv(out, "difference", (difference >= 0 ? "+" : "") + money(difference, currency) + percent);
         }
         out.append("</table>\n");
-        long none = r.beams().stream().filter(b -> !b.feasible()).count();
-        if (none > 0) {
-            out.append("<p class=\"warn\">").append(none).append(none == 1 ? " beam has" : " beams have")
+        long withoutDesign = r.beams().stream().filter(b -> !b.feasible()).count();
+        if (withoutDesign > 0) {
+            out.append("<p class=\"warn\">").append(withoutDesign).append(withoutDesign == 1 ? " beam has" : " beams have")
                     .append(" no passing layout: the costs cover only the beams that have one.</p>\n");
         }
         out.append("</section>\n");
@@ -374,20 +373,23 @@ public final class ScheduleHtml {
     // ---------------------------------------------------------------- price of standardisation
 
     private static void standardisation(ScheduleResult r, StringBuilder out) {
-        String cur = r.input().currency();
-        List<ScheduleResult.StandardisationPoint> pts = new ArrayList<>(r.standardisation());
-        pts.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
+        String currency = r.input().currency();
+        List<ScheduleResult.StandardisationPoint> points = new ArrayList<>(r.standardisation());
+        points.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
         out.append("<section id=\"standardisation\">\n<h2>Price of standardisation</h2>\n<table class=\"grid\">\n<thead><tr>")
-                .append("<th>most section sizes K</th><th>total cost").append(cur.isEmpty() ? "" : " (" + Svg.esc(cur) + ")")
+                .append("<th>most section sizes K</th><th>total cost").append(currency.isEmpty() ? "" : " ("
+                        + Svg.esc(currency) + ")")
                 .append("</th><th>saving of one more size</th><th>status</th><th>bar sizes allowed</th></tr></thead>\n<tbody>\n");
-        double prev = Double.NaN;
-        for (ScheduleResult.StandardisationPoint p : pts) {
-            String saving = Double.isFinite(prev) && Double.isFinite(p.cost()) ? Money.amount(prev - p.cost()) : "—";
-            out.append("<tr><td class=\"num\">").append(p.sizes()).append("</td><td class=\"num\">")
-                    .append(Double.isFinite(p.cost()) ? Money.amount(p.cost()) : "none feasible").append("</td><td class=\"num\">")
-                    .append(saving).append("</td><td>").append(Svg.esc(p.status().name())).append("</td><td>")
-                    .append(Svg.esc(labels(r, p.barSizes()))).append("</td></tr>\n");
-            prev = p.cost();
+        double previous = Double.NaN;
+        for (ScheduleResult.StandardisationPoint point : points) {
+            String saving = Double.isFinite(previous) && Double.isFinite(point.cost())
+                    ? Money.amount(previous - point.cost()) : "—";
+            out.append("<tr><td class=\"num\">").append(point.sizes()).append("</td><td class=\"num\">")
+                    .append(Double.isFinite(point.cost()) ? Money.amount(point.cost()) : "none feasible")
+                    .append("</td><td class=\"num\">")
+                    .append(saving).append("</td><td>").append(Svg.esc(point.status().name())).append("</td><td>")
+                    .append(Svg.esc(labels(r, point.barSizes()))).append("</td></tr>\n");
+            previous = point.cost();
         }
         out.append("</tbody>\n</table>\n<figure class=\"plot\">\n").append(StandardisationPlot.svg(r))
                 .append("</figure>\n</section>\n");
@@ -395,7 +397,8 @@ public final class ScheduleHtml {
 
     // ---------------------------------------------------------------- one beam
 
-    private static void beam(ScheduleResult r, ScheduleResult.Beam b, String id, StringBuilder out) {
+    private static void beam(ScheduleResult r, ScheduleRows.Row row, String id, StringBuilder out) {
+        ScheduleResult.Beam b = row.entry();
         UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
         BeamDesigner.Outcome o = b.outcome();
@@ -439,10 +442,11 @@ public final class ScheduleHtml {
             BeamDesigner.Diagnosis d = o.diagnosis();
             out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>").append(Svg.esc(headline(d)))
                     .append(".</strong></p>\n")
-                    .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(d.summary()))
-                    .append("</p>\n<p>").append(Svg.esc(d.fixes().isEmpty()
+                    .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(DiagnosisWords.summary(d, u)))
+                    .append("</p>\n<p>").append(Svg.esc(DiagnosisWords.fixes(d, u).isEmpty()
                             ? "No single relaxed limit (depth, width) gives a passing layout."
-                            : "What would work, one limit at a time: " + barfit.report.Words.alternatives(d.fixes()))).append("</p>\n</div>\n")
+                            : "What would work, one limit at a time: " + Words.alternatives(DiagnosisWords.fixes(d, u))))
+                    .append("</p>\n</div>\n")
                     .append("</section>\n");
             return;
         }
@@ -450,20 +454,21 @@ public final class ScheduleHtml {
         BeamLayout l = d.layout();
         out.append("<table class=\"kv\">\n<caption>Design</caption>\n");
         kv(out, "section", Words.shape(l.shape(), u));
-        kv(out, "bottom", perLayer(l.bottomCounts(), l.bottom()) + ", full span");
+        kv(out, "bottom", ScheduleRows.bars(l.bottomCounts(), l.bottom()) + ", full span");
         if (p.cantilever()) {
-            kv(out, "top", perLayer(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
+            kv(out, "top", ScheduleRows.bars(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
             kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + BeamText.topAtMid(d, u));
-            String rule = " (" + Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top()).rule() + ")";
+            String rule = " (" + Words.extension(Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()),
+                    l.top()).governs()) + ")";
             if (p.leftSupport()) {
                 boolean extra = BeamLayout.sum(l.topLeft()) > l.topContinuous();
-                kv(out, "top at left support", topAtSupport(l.topLeft(), l, l.extLeft(), u) + (extra ? rule : ""));
+                kv(out, "top at left support", topAtSupport(row.left(), u) + (extra ? rule : ""));
             }
             if (p.rightSupport()) {
                 boolean extra = BeamLayout.sum(l.topRight()) > l.topContinuous();
-                kv(out, "top at right support", topAtSupport(l.topRight(), l, l.extRight(), u) + (extra ? rule : ""));
+                kv(out, "top at right support", topAtSupport(row.right(), u) + (extra ? rule : ""));
             }
         }
         if (l.skin() != null) {
@@ -486,7 +491,7 @@ public final class ScheduleHtml {
                     + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
         }
         kv(out, "deflection", deflection(d.report().span(), p, u));
-        kv(out, "binding", binding(o.binding()));
+        kv(out, "binding", binding(o.binding(), u));
         kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
         kv(out, "proof", proofWords(o.proof()));
         out.append("</table>\n</div>\n");
@@ -497,7 +502,7 @@ public final class ScheduleHtml {
         out.append("<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
                 .append("<th>bar</th><th>length (").append(u.unit(Dim.SPAN)).append(")</th></tr></thead>\n<tbody>\n");
         for (BeamLayout.BarMark m : d.bars()) {
-            out.append("<tr><td>").append(Svg.esc(m.mark())).append("</td><td>").append(Svg.esc(m.role()))
+            out.append("<tr><td>").append(Svg.esc(m.mark())).append("</td><td>").append(Svg.esc(Words.role(m)))
                     .append("</td><td class=\"num\">").append(m.count()).append("</td><td>").append(Svg.esc(m.bar().label()))
                     .append("</td><td class=\"num\">").append(u.number(m.length(), Dim.SPAN)).append("</td></tr>\n");
         }
@@ -623,14 +628,6 @@ public final class ScheduleHtml {
         };
     }
 
-    private static String shortPlace(BeamProblem.Place p) {
-        return switch (p) {
-            case LEFT -> "left";
-            case MID -> "mid";
-            case RIGHT -> "right";
-        };
-    }
-
     private static String moments(BeamProblem p, UnitSystem u) {
         List<String> parts = new ArrayList<>();
         if (p.mLeft() != null) {
@@ -669,13 +666,13 @@ public final class ScheduleHtml {
                 + plain(p.limits().total()) + " = " + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
     }
 
-    private static String binding(List<barfit.design.Binding> bs) {
+    private static String binding(List<barfit.design.Binding> bs, UnitSystem u) {
         if (bs.isEmpty()) {
             return "no check above 0.95 of its limit";
         }
         List<String> parts = new ArrayList<>();
         for (var b : bs) {
-            parts.add(b.limit() + " (" + b.when() + ")");
+            parts.add(b.limit() + " (" + Words.when(b, u) + ")");
         }
         return String.join(", ", parts);
     }

@@ -12,6 +12,7 @@ import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
 import barfit.design.SolverOptions;
+import barfit.report.DiagnosisWords;
 import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.EndCondition;
@@ -34,7 +35,7 @@ class BeamDiagnosisTest {
     private static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615").orElseThrow();
     private static final CostModel COST = new CostModel(CostRates.DEFAULTS, US.toSI(1.5, Dim.LENGTH),
             CodeEquations.INCH_POUND);
-    private final BeamDesigner designer = new BeamDesigner(COST, new SolverOptions(30, 1, 1), US);
+    private final BeamDesigner designer = new BeamDesigner(COST, new SolverOptions(30, 1, 1));
 
     private static BarSize bar(String s) {
         return BARS.find(s).orElseThrow();
@@ -94,13 +95,15 @@ class BeamDiagnosisTest {
         BeamDesigner.Diagnosis d = o.diagnosis();
         assertTrue(d.limit().startsWith("deflection_"), "names the deflection check that fails: " + d.limit());
         assertTrue(d.clause().contains("24.2"), d.clause());
-        assertTrue(d.summary().contains("deflection"), d.summary());
+        assertTrue(d.cause() instanceof BeamDesigner.Diagnosis.DeflectionFails, String.valueOf(d.cause()));
+        assertTrue(DiagnosisWords.summary(d, US).contains("deflection"), DiagnosisWords.summary(d, US));
         assertFalse(d.atCap().isEmpty(), "the failing deflection of the cheapest otherwise-passing layout is given");
         d.atCap().forEach(c -> assertTrue(c.id().startsWith("deflection") && !c.pass(), c.id()));
 
         BeamDesigner.Fix deeper = d.deeper();
         assertNotNull(deeper, "a depth that works is quoted");
-        assertTrue(d.fixes().get(0).contains(US.compact(deeper.height(), Dim.LENGTH) + " in"), d.fixes().get(0));
+        String fix = DiagnosisWords.fixes(d, US).get(0);
+        assertTrue(fix.contains(US.compact(deeper.height(), Dim.LENGTH) + " in"), fix);
         assertTrue(deeper.height() > p.maxDepth());
         assertTrue(BeamVerifier.verify(p.withMaxDepth(deeper.height()), deeper.layout(), false).ok());
         assertTrue(designsAt(p, deeper.height()), "the quoted depth designs");
@@ -115,7 +118,7 @@ class BeamDiagnosisTest {
         BeamDesigner.Outcome o = designer.design(p, 0);
         assertFalse(o.feasible());
         BeamDesigner.Diagnosis d = o.diagnosis();
-        assertEquals("strength", d.limit(), d.summary());
+        assertEquals("strength", d.limit(), String.valueOf(d.cause()));
         assertTrue(d.atCap().isEmpty());
         BeamDesigner.Fix deeper = d.deeper();
         assertNotNull(deeper);

@@ -21,7 +21,7 @@ class BeamOracleTest {
     @Test
     void optimizerMatchesExhaustiveEnumeration() {
         Random rnd = new Random(Long.getLong("beam.seed", 2027L));
-        BeamDesigner designer = new BeamDesigner(COST, new SolverOptions(30, 1, 1), UnitSystem.SI);
+        BeamDesigner designer = new BeamDesigner(COST, new SolverOptions(30, 1, 1));
         BeamExhaustive oracle = new BeamExhaustive(COST);
         int instances = Integer.getInteger("beam.instances", 110);
         int feasible = 0;

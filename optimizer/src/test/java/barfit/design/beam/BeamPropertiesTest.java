@@ -11,8 +11,7 @@ import org.junit.jupiter.api.Test;
 
 /** Properties of whole-span answers on seeded random beams. */
 class BeamPropertiesTest {
-    private final BeamDesigner designer = new BeamDesigner(BeamOracleTest.COST, new SolverOptions(30, 1, 1),
-            UnitSystem.SI);
+    private final BeamDesigner designer = new BeamDesigner(BeamOracleTest.COST, new SolverOptions(30, 1, 1));
 
     private long cost(BeamProblem p) {
         var o = designer.design(p, 0);

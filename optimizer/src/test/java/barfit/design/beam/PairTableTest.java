@@ -25,7 +25,7 @@ class PairTableTest {
     @Test
     void everyEntryEqualsARestrictedDesign() {
         Random rnd = new Random(Long.getLong("pairs.seed", 4049L));
-        BeamDesigner designer = new BeamDesigner(COST, new SolverOptions(30, 1, 1), UnitSystem.SI);
+        BeamDesigner designer = new BeamDesigner(COST, new SolverOptions(30, 1, 1));
         int instances = Integer.getInteger("pairs.instances", 25);
         int compared = 0;
         int finite = 0;

@@ -96,7 +96,7 @@ class SpanRulesTest {
 
     @Test
     void randomSpansPassTheRulesWrittenFromTheClauses() {
-        BeamDesigner designer = new BeamDesigner(BeamOracleTest.COST, new SolverOptions(30, 1, 1), UnitSystem.SI);
+        BeamDesigner designer = new BeamDesigner(BeamOracleTest.COST, new SolverOptions(30, 1, 1));
         Random r = new Random(Long.getLong("spanrules.seed", 1010L));
         int designed = 0;
         int tiesSeen = 0;

@@ -65,7 +65,7 @@ class LineSpansTest {
         YFields doc = DesignInputReader.document(f);
         LineInput line = LinesReader.read(doc, in.settings()).get(0);
         CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
-        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1), in.settings().units());
+        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1));
         LineSpans.Result r = new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(),
                 in.barsPerTwoLegs()).design(line, 0);
         assertTrue(r.settled(), "settled in " + r.rounds() + " rounds");
@@ -186,7 +186,7 @@ class LineSpansTest {
             DesignInput in = DesignInputReader.read(f, false);
             LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
             CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
-            BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1), in.settings().units());
+            BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1));
             LineSpans.Result r = new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(),
                     in.barsPerTwoLegs()).design(line, 0);
             barfit.design.beam.BeamExhaustive oracle = new barfit.design.beam.BeamExhaustive(cost);
@@ -267,7 +267,7 @@ class LineSpansTest {
         DesignInput in = DesignInputReader.read(f, false);
         LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
         CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
-        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1), in.settings().units());
+        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1));
         return new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs())
                 .design(line, 0);
     }

@@ -55,7 +55,7 @@ final class ScheduleFixtures {
                 in.rates(), in.currency(), in.costs(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs(), beams, null);
         BeamDesigner designer = new BeamDesigner(new CostModel(in.rates(), in.settings().detailing().cover(),
                 in.settings().units().code()),
-                new SolverOptions(60, 1, 1), in.settings().units());
+                new SolverOptions(60, 1, 1));
         List<ScheduleResult.Beam> out = new ArrayList<>();
         Map<String, List<String>> sizes = new LinkedHashMap<>();
         TreeSet<String> bars = new TreeSet<>();
@@ -88,7 +88,8 @@ final class ScheduleFixtures {
     static ScheduleResult withRenderingFixtures(ScheduleResult r) {
         double t = r.totalCost();
         Proof<ScheduleResult.Search> proof = new Proof<>(Proof.Status.OPTIMAL, t, t, 0, Proof.SolverStats.NONE,
-                new ScheduleResult.Search("rendering fixture", 4, 3, 1, 9, 0), 1, 1);
+                new ScheduleResult.Search(barfit.schedule.ProofMethod.LINEAR_RELAXATION_INTEGRAL, null, 4, 3, 1, 9, 0),
+                1, 1);
         List<ScheduleResult.StandardisationPoint> points = List.of(
                 new ScheduleResult.StandardisationPoint(1, t * 1.08, Proof.Status.OPTIMAL, r.barSizes()),
                 new ScheduleResult.StandardisationPoint(2, t * 1.02, Proof.Status.OPTIMAL, r.barSizes()),

@@ -151,7 +151,7 @@ class ScheduleHtmlTest {
     @Test
     void proofCostsAndStandardisationAreShown() throws Exception {
         String proof = element(html, "<section id=\"rationalisation\">", "</section>");
-        assertTrue(proof.contains("rendering fixture"), "the proof's method is shown");
+        assertTrue(proof.contains("linear relaxation integral; sizes priced lazily"), "the proof's method is shown");
         String costs = element(html, "<section id=\"costs\">", "</section>");
         assertTrue(costs.contains(barfit.report.Money.amount(result.totalCost())));
         String std = element(html, "<section id=\"standardisation\">", "</section>");
@@ -253,8 +253,7 @@ class ScheduleHtmlTest {
         BeamProblem capped = second.outcome().problem().withMaxDepth(300.0);
         var designer = new BeamDesigner(new barfit.design.CostModel(result.input().rates(),
                 result.input().settings().detailing().cover(), result.input().settings().units().code()),
-                new barfit.design.SolverOptions(60, 1, 1),
-                result.input().settings().units());
+                new barfit.design.SolverOptions(60, 1, 1));
         BeamDesigner.Outcome none = designer.design(capped, 0);
         assertFalse(none.feasible(), "nothing fits under a 300 mm cap when the search starts at 400 mm");
 
@@ -267,7 +266,8 @@ class ScheduleHtmlTest {
         String fails = element(page, "<section class=\"beam\" id=\"beam-F-1\">", "</section>");
         assertEquals(report.failures().size(), count(fails, "<tr class=\"fail\">"), "every failing check is marked");
         String noLayout = element(page, "<section class=\"beam\" id=\"beam-N-1\">", "</section>");
-        assertTrue(noLayout.contains(Svg.esc(none.diagnosis().summary())), "the diagnosis is shown");
+        assertTrue(noLayout.contains(Svg.esc(barfit.report.DiagnosisWords.summary(none.diagnosis(),
+                result.input().settings().units()))), "the diagnosis is shown");
         assertFalse(noLayout.contains("section-drawing"), "no drawing without a design");
         String row = element(page, "<tr class=\"infeasible\">", "</tr>");
         assertTrue(row.contains("No layout in the search space passes"), row);

@@ -1,4 +1,4 @@
-package barfit.schedule;
+package barfit.input;
 
 /**
  * The {@code rationalise:} settings of a schedule. {@code maxSectionSizes} limits the distinct b x h over
