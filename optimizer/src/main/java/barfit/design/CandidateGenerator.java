@@ -174,7 +174,7 @@ public final class CandidateGenerator {
                     SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
                     double skinCost = skin == null ? 0 : cost.bars(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()));
                     double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
-                    double steelLb = cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * massPerArea
+                    double steelLb = cost.mainBarPricePerKg() * massPerArea
                             * Math.max(areaLb + 2 * compressionSizes.get(0).area(), minPair);
                     double cheapestStirrups = Double.POSITIVE_INFINITY;
                     for (int legs : p.space().stirrupLegs()) {

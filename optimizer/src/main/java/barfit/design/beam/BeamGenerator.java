@@ -121,7 +121,7 @@ public final class BeamGenerator {
     }
 
     private double barCost(BarSize bar, int count, double length) {
-        return cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * bar.massPerMetre() * count * length / 1000.0;
+        return cost.bars(bar, count, length);
     }
 
     private double stirrupCost(double b, double h, Stirrups s, BeamProblem.Zone z) {
@@ -237,7 +237,7 @@ public final class BeamGenerator {
         for (BarSize s : p.space().barSizes()) {
             massPerArea = Math.min(massPerArea, s.massPerMetre() / s.area());
         }
-        double rate = cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * massPerArea;
+        double rate = cost.mainBarPricePerKg() * massPerArea;
         for (double b : p.widths()) {
             for (double h : p.depths()) {
                 if (p.flange() != null && h <= p.flange().thickness()) {
