@@ -2,6 +2,7 @@ package barfit.design.beam;
 
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
+import barfit.design.FrameEnumerator;
 import barfit.design.Layout;
 import barfit.design.StirrupChooser;
 import barfit.design.TensionSearch;
@@ -238,30 +239,23 @@ public final class BeamGenerator {
             massPerArea = Math.min(massPerArea, s.massPerMetre() / s.area());
         }
         double rate = cost.mainBarPricePerKg() * massPerArea;
-        for (double b : p.widths()) {
-            for (double h : p.depths()) {
-                if (p.flange() != null && h <= p.flange().thickness()) {
-                    continue;
-                }
-                for (BarSize ds : p.space().stirrupSizes()) {
-                    Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(),
-                            p.detailing().exposure());
-                    if (BarSpacing.innerWidth(b, det) <= smallest.diameter()) {
-                        continue;
-                    }
-                    boolean deflection = h < SpanChecks.minimumDepth(p.span(), p.ends(), p.materials(), p.code()) - 1e-9;
-                    if (deflection && p.service() == null) {
-                        continue; // below Table 9.3.1.1 and nothing to compute deflection from
-                    }
-                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-                    double frameCost = cost.frame(b, h, p.flange()).total() * lm
-                            + (skin == null ? 0 : barCost(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()), p.span()));
-                    double extL = p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-                    double extR = p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-                    double lb = frameCost + steelLowerBound(b, h, det, smallest, rate) + stirrupLowerBound(b, h, ds);
-                    out.add(new Frame(b, h, ds, det, skin, frameCost, lb, deflection, extL, extR));
-                }
+        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(),
+                p.flange(), p.space(), p.detailing())) {
+            double b = cell.width();
+            double h = cell.height();
+            BarSize ds = cell.stirrupBar();
+            Detailing det = cell.detailing();
+            boolean deflection = h < SpanChecks.minimumDepth(p.span(), p.ends(), p.materials(), p.code()) - 1e-9;
+            if (deflection && p.service() == null) {
+                continue; // below Table 9.3.1.1 and nothing to compute deflection from
             }
+            SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
+            double frameCost = cost.frame(b, h, p.flange()).total() * lm
+                    + (skin == null ? 0 : barCost(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()), p.span()));
+            double extL = p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
+            double extR = p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
+            double lb = frameCost + steelLowerBound(b, h, det, smallest, rate) + stirrupLowerBound(b, h, ds);
+            out.add(new Frame(b, h, ds, det, skin, frameCost, lb, deflection, extL, extR));
         }
         out.sort(Comparator.comparingDouble(Frame::lowerBound).thenComparingDouble(Frame::b)
                 .thenComparingDouble(Frame::h).thenComparingDouble(f -> f.ds().diameter()));
