@@ -39,6 +39,8 @@ import java.util.Map;
  * worth handing over.
  */
 public final class BeamGenerator {
+    /** Support options designed with no bottom bars counted at the support: one pass, without them. */
+    private static final List<BottomBars> NO_BOTTOM_BARS = java.util.Collections.singletonList(null);
     /** The "legs" of a support option whose section sizes no stirrup zone: it limits nothing. */
     static final int NO_ZONES = 1000;
     /** The most legs of a support option whose section sizes no stirrup zone: it asks nothing of the bottom bars. */
@@ -57,17 +59,19 @@ public final class BeamGenerator {
             return BeamLayout.sum(counts);
         }
 
-        public String key() {
-            return bar.designation() + counts;
+        /** Its bottom bars, which a support option counts as compression steel where they are anchored. */
+        public BottomBars bottom() {
+            return new BottomBars(bar, counts);
         }
     }
 
     /**
      * A support option; {@code legs} is the fewest stirrup legs its zones were given (each zone takes
-     * the cheapest stirrups with at least that many), which must hold the bottom bars as well.
+     * the cheapest stirrups with at least that many), which must hold the bottom bars as well; {@code bottom}
+     * the bottom bars it was designed with as compression steel (anchored bottom bars), null for none.
      */
     public record SupportOpt(BarSize bar, List<Integer> counts, double d, int legs, int legsMax,
-            Map<Integer, Stirrups> zones, double cost, String bottomKey) {
+            Map<Integer, Stirrups> zones, double cost, BottomBars bottom) {
         public int total() {
             return BeamLayout.sum(counts);
         }
@@ -351,8 +355,7 @@ public final class BeamGenerator {
         }
         // supports first (they do not depend on the other options), then the mid-span options for two
         // continuous bars, then more continuous bars only where a bound says they could pay
-        Map<String, List<BeamSection.BarGroup>> none = new LinkedHashMap<>();
-        none.put(null, List.of());
+        List<BottomBars> none = NO_BOTTOM_BARS;
         java.util.function.ToDoubleFunction<BarSize> supportLimit = pairs != null || Double.isInfinite(incumbent)
                 ? t -> Double.POSITIVE_INFINITY
                 : t -> incumbent - leastWithout(f, tops, t);
@@ -492,7 +495,7 @@ public final class BeamGenerator {
         if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
             return Double.POSITIVE_INFINITY;
         }
-        String key = p.bottomAnchored() ? m.key() : null;
+        BottomBars key = p.bottomAnchored() ? m.bottom() : null;
         double total = fs.frame().cost() + t.cost() + m.cost();
         if (p.leftSupport()) {
             SupportOpt l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key);
@@ -528,7 +531,7 @@ public final class BeamGenerator {
             }
             int i = index(t.bar());
             int j = index(m.bar());
-            String key = p.bottomAnchored() ? m.key() : null;
+            BottomBars key = p.bottomAnchored() ? m.bottom() : null;
             double base = fs.frame().cost() + t.cost() + m.cost();
             List<SupportOpt> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key,
                     p.leftSupport());
@@ -562,7 +565,7 @@ public final class BeamGenerator {
 
     /** The support options compatible with a mid-span option, cheapest first; a single null where no support. */
     private static List<SupportOpt> compatible(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
-            String bottomKey, boolean present) {
+            BottomBars bottom, boolean present) {
         if (!present) {
             java.util.List<SupportOpt> none = new ArrayList<>();
             none.add(null);
@@ -570,7 +573,7 @@ public final class BeamGenerator {
         }
         List<SupportOpt> out = new ArrayList<>();
         for (SupportOpt s : index.getOrDefault(bar, List.of())) {
-            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
+            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottom(), bottom)) {
                 out.add(s);
             }
         }
@@ -616,8 +619,7 @@ public final class BeamGenerator {
         List<SupportOpt> early = null;
         List<SupportOpt> earlyRight = null;
         if (!p.bottomAnchored()) {
-            Map<String, List<BeamSection.BarGroup>> none = new LinkedHashMap<>();
-            none.put(null, List.of());
+            List<BottomBars> none = NO_BOTTOM_BARS;
             early = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, none) : List.of();
             earlyRight = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, none)
                     : List.of();
@@ -631,15 +633,15 @@ public final class BeamGenerator {
                 : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
                 - (knownLeft == null ? 0 : cheapestAbove(knownLeft, t, p.leftSupport()))
                 - (knownRight == null ? 0 : cheapestAbove(knownRight, t, p.rightSupport())));
-        Map<String, List<BeamSection.BarGroup>> bottoms = new LinkedHashMap<>();
+        List<BottomBars> bottoms;
         if (p.bottomAnchored()) {
+            java.util.Set<BottomBars> distinct = new java.util.LinkedHashSet<>();
             for (MidOpt m : mids) {
-                List<BeamSection.BarGroup> g = new ArrayList<>();
-                m.counts().forEach(c -> g.add(new BeamSection.BarGroup(m.bar(), c)));
-                bottoms.putIfAbsent(m.key(), g);
+                distinct.add(m.bottom());
             }
+            bottoms = new ArrayList<>(distinct);
         } else {
-            bottoms.put(null, List.of());
+            bottoms = NO_BOTTOM_BARS;
         }
         List<SupportOpt> lefts = knownLeft != null ? knownLeft : p.leftSupport()
                 ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
@@ -1205,7 +1207,7 @@ public final class BeamGenerator {
      * option cannot be part of anything cheaper than the incumbent; the bar count stops rising there.
      */
     private List<SupportOpt> supports(Frame f, SectionShape shape, BeamProblem.Place place, double mu,
-            java.util.function.ToDoubleFunction<BarSize> limit, Map<String, List<BeamSection.BarGroup>> bottoms) {
+            java.util.function.ToDoubleFunction<BarSize> limit, List<BottomBars> bottoms) {
         List<SupportOpt> out = new ArrayList<>();
         List<Integer> myZones = zoneIndices(place);
         double leanZones = leanStirrups(f, place);
@@ -1220,10 +1222,11 @@ public final class BeamGenerator {
             }
             double ext = Extension.of(p, f.b(), f.h(), f.det(), t).length();
             double most = limit.applyAsDouble(t);
-            for (Map.Entry<String, List<BeamSection.BarGroup>> bottom : bottoms.entrySet()) {
-                search.compression(bottom.getValue());
+            for (BottomBars bottom : bottoms) {
+                List<BeamSection.BarGroup> bottomGroups = bottom == null ? List.of() : bottom.groups();
+                search.compression(bottomGroups);
                 for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
-                    BarSize other = bottom.getValue().isEmpty() ? t : bottom.getValue().get(0).bar();
+                    BarSize other = bottom == null ? t : bottom.bar();
                     if (!framePasses(f, shape, t, other, layers)) {
                         if (layers == 1) {
                             break;
@@ -1253,12 +1256,12 @@ public final class BeamGenerator {
                             double bars = barCost(t, n, ext);
                             if (myZones.isEmpty()) {
                                 out.add(new SupportOpt(t, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX,
-                                        Map.of(), bars, bottom.getKey()));
+                                        Map.of(), bars, bottom));
                                 continue;
                             }
                             // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
                             StirrupRules.TieDemand ties = StirrupRules.ties(
-                                    supportSection(f, shape, t, split, bottom.getValue()), Bending.HOGGING, mu);
+                                    supportSection(f, shape, t, split, bottomGroups), Bending.HOGGING, mu);
                             if (!ties.sizeOk(f.ds().diameter())) {
                                 continue;
                             }
@@ -1285,7 +1288,7 @@ public final class BeamGenerator {
                                         mostUsed = Math.max(mostUsed, st.legs());
                                     }
                                     out.add(new SupportOpt(t, TensionSearch.toList(split), d, fewest, mostUsed,
-                                            zs.stirrups(), bars + zs.cost(), bottom.getKey()));
+                                            zs.stirrups(), bars + zs.cost(), bottom));
                                 }
                             }
                         }
@@ -1435,16 +1438,8 @@ public final class BeamGenerator {
     private BeamSection supportSection(Frame f, SectionShape shape, SupportOpt s) {
         List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP, groups(s.bar(), s.counts()),
                 f.det()));
-        if (s.bottomKey() != null) {
-            // the bottom bars the option was built with: its key is "<size>[counts]"
-            String key = s.bottomKey();
-            BarSize bb = p.space().barSizes().stream().filter(b -> key.startsWith(b.designation() + "["))
-                    .findFirst().orElseThrow();
-            List<Integer> counts = new ArrayList<>();
-            for (String part : key.substring(key.indexOf('[') + 1, key.length() - 1).split(",")) {
-                counts.add(Integer.parseInt(part.strip()));
-            }
-            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, groups(bb, counts), f.det()));
+        if (s.bottom() != null) { // the bottom bars the option was built with
+            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, s.bottom().groups(), f.det()));
         }
         return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
     }
@@ -1500,11 +1495,11 @@ public final class BeamGenerator {
     // ------------------------------------------------------------------ combining and bounding
 
     /** The cheapest compatible support option, or null. */
-    static SupportOpt cheapestSupport(List<SupportOpt> opts, BarSize bar, int nc, MidOpt m, String bottomKey) {
+    static SupportOpt cheapestSupport(List<SupportOpt> opts, BarSize bar, int nc, MidOpt m, BottomBars bottom) {
         SupportOpt best = null;
         for (SupportOpt s : opts) {
             if (s.bar().equals(bar) && s.counts().get(0) >= nc && s.holds(m)
-                    && java.util.Objects.equals(s.bottomKey(), bottomKey) && (best == null || s.cost() < best.cost())) {
+                    && java.util.Objects.equals(s.bottom(), bottom) && (best == null || s.cost() < best.cost())) {
                 best = s;
             }
         }
@@ -1541,13 +1536,13 @@ public final class BeamGenerator {
     }
 
     private static SupportOpt cheapestIn(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
-            String bottomKey) {
+            BottomBars bottom) {
         List<SupportOpt> l = index.get(bar);
         if (l == null) {
             return null;
         }
         for (SupportOpt s : l) {
-            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
+            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottom(), bottom)) {
                 return s;
             }
         }
@@ -1565,7 +1560,7 @@ public final class BeamGenerator {
             if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
                 continue;
             }
-            String key = p.bottomAnchored() ? m.key() : null;
+            BottomBars key = p.bottomAnchored() ? m.bottom() : null;
             SupportOpt l = null;
             SupportOpt r = null;
             if (p.leftSupport()) {

@@ -166,13 +166,13 @@ public final class BeamSelection {
         model.addLessOrEqual(most, held);
         // bottom bars counted as compression steel: the support option was built for those bottom bars
         if (p.bottomAnchored()) {
-            Map<String, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
+            Map<BottomBars, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
             for (int i = 0; i < opts.size(); i++) {
-                byKey.computeIfAbsent(opts.get(i).bottomKey(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
+                byKey.computeIfAbsent(opts.get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
                     LinearExpr.newBuilder()})[0].add(sv.get(i));
             }
             for (int i = 0; i < fs.mids().size(); i++) {
-                byKey.computeIfAbsent(fs.mids().get(i).key(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
+                byKey.computeIfAbsent(fs.mids().get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
                     LinearExpr.newBuilder()})[1].add(mv.get(i));
             }
             for (LinearExprBuilder[] pair : byKey.values()) {
