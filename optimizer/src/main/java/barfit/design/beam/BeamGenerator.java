@@ -46,55 +46,11 @@ public final class BeamGenerator {
     /** The most legs of a support option whose section sizes no stirrup zone: it asks nothing of the bottom bars. */
     static final int NO_ZONES_MAX = 0;
 
-    public record Frame(double b, double h, BarSize ds, Detailing det, SkinBars skin, double cost, double lowerBound,
-            boolean deflection, double extLeft, double extRight) {
-    }
-
-    public record TopOpt(BarSize bar, int nc, double cost) {
-    }
-
-    public record MidOpt(TopOpt top, BarSize bar, List<Integer> counts, double d, Map<Integer, Stirrups> zones,
-            double cost, int legsNeeded) {
-        public int total() {
-            return BeamLayout.sum(counts);
-        }
-
-        /** Its bottom bars, which a support option counts as compression steel where they are anchored. */
-        public BottomBars bottom() {
-            return new BottomBars(bar, counts);
-        }
-    }
-
-    /**
-     * A support option; {@code legs} is the fewest stirrup legs its zones were given (each zone takes
-     * the cheapest stirrups with at least that many), which must hold the bottom bars as well; {@code bottom}
-     * the bottom bars it was designed with as compression steel (anchored bottom bars), null for none.
-     */
-    public record SupportOpt(BarSize bar, List<Integer> counts, double d, int legs, int legsMax,
-            Map<Integer, Stirrups> zones, double cost, BottomBars bottom) {
-        public int total() {
-            return BeamLayout.sum(counts);
-        }
-
-        /**
-         * Whether its stirrups suit a mid-span option's bottom bars: enough legs for the office's rule
-         * and no more legs than the bottom bars' outer layer can hold (25.7.1.2, 25.7.1.3).
-         */
-        public boolean holds(MidOpt m) {
-            return legs >= m.legsNeeded() && legsMax <= m.counts().get(0);
-        }
-    }
-
-    /** One frame's options and its best combination found by enumeration (infinite if none). */
-    public record FrameSet(Frame frame, List<TopOpt> tops, List<MidOpt> mids, List<SupportOpt> lefts,
-            List<SupportOpt> rights, double best, BeamLayout bestLayout) {
-    }
-
     public record Stats(int frames, int framesEvaluated, int framesSkipped, int flexureSolves, int shearEvaluations,
             long nanos) {
     }
 
-    public record Output(List<FrameSet> sets, double incumbent, BeamLayout incumbentLayout, Stats stats) {
+    public record Output(List<FrameOptions> sets, double incumbent, BeamLayout incumbentLayout, Stats stats) {
     }
 
     private final BeamProblem p;
@@ -154,16 +110,16 @@ public final class BeamGenerator {
     public Output generate(double slack, double ceiling) {
         long t0 = System.nanoTime();
         final double roof = loose(ceiling, slack);
-        List<Frame> frames = frames();
-        List<FrameSet> sets = new ArrayList<>();
+        List<SpanFrame> frames = frames();
+        List<FrameOptions> sets = new ArrayList<>();
         double incumbent = Double.POSITIVE_INFINITY;
         BeamLayout incumbentLayout = null;
         int evaluated = 0;
         int skipped = 0;
         // Below Table 9.3.1.1 a frame is costly to search without a cost to beat, and the cheapest bounds
         // are often there: search the most promising frame at or above h,min first for that cost.
-        Frame opener = null;
-        for (Frame f : frames) {
+        SpanFrame opener = null;
+        for (SpanFrame f : frames) {
             if (!f.deflection() && Double.isFinite(f.lowerBound())) {
                 opener = f;
                 break;
@@ -171,7 +127,7 @@ public final class BeamGenerator {
         }
         if (opener != null && frames.get(0) != opener && frames.get(0).deflection()) {
             evaluated++;
-            FrameSet fs = evaluate(opener, Math.min(loose(incumbent, slack), roof));
+            FrameOptions fs = evaluate(opener, Math.min(loose(incumbent, slack), roof));
             if (fs != null) {
                 sets.add(fs);
                 if (fs.best() < incumbent) {
@@ -183,7 +139,7 @@ public final class BeamGenerator {
             opener = null;
         }
         for (int i = 0; i < frames.size(); i++) {
-            Frame f = frames.get(i);
+            SpanFrame f = frames.get(i);
             if (f == opener) {
                 continue;
             }
@@ -195,7 +151,7 @@ public final class BeamGenerator {
                 continue; // a closer look at its bars shows it cannot beat the incumbent
             }
             evaluated++;
-            FrameSet fs = evaluate(f, Math.min(loose(incumbent, slack), roof));
+            FrameOptions fs = evaluate(f, Math.min(loose(incumbent, slack), roof));
             if (fs == null) {
                 continue;
             }
@@ -206,8 +162,8 @@ public final class BeamGenerator {
             }
         }
         final double inc = Math.min(loose(incumbent, slack), roof);
-        List<FrameSet> kept = new ArrayList<>();
-        for (FrameSet fs : sets) {
+        List<FrameOptions> kept = new ArrayList<>();
+        for (FrameOptions fs : sets) {
             if (fs.frame().lowerBound() < inc + 1e-9) {
                 kept.add(prune(fs, inc));
             }
@@ -229,14 +185,14 @@ public final class BeamGenerator {
      */
     public double leastCost() {
         double least = Double.POSITIVE_INFINITY;
-        for (Frame f : frames()) {
+        for (SpanFrame f : frames()) {
             least = Math.min(least, f.lowerBound());
         }
         return least;
     }
 
-    private List<Frame> frames() {
-        List<Frame> out = new ArrayList<>();
+    private List<SpanFrame> frames() {
+        List<SpanFrame> out = new ArrayList<>();
         BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
         double massPerArea = Double.MAX_VALUE;
         for (BarSize s : p.space().barSizes()) {
@@ -259,10 +215,10 @@ public final class BeamGenerator {
             double extL = p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
             double extR = p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
             double lb = frameCost + steelLowerBound(b, h, det, smallest, rate) + stirrupLowerBound(b, h, ds);
-            out.add(new Frame(b, h, ds, det, skin, frameCost, lb, deflection, extL, extR));
+            out.add(new SpanFrame(b, h, ds, det, skin, frameCost, lb, deflection, extL, extR));
         }
-        out.sort(Comparator.comparingDouble(Frame::lowerBound).thenComparingDouble(Frame::b)
-                .thenComparingDouble(Frame::h).thenComparingDouble(f -> f.ds().diameter()));
+        out.sort(Comparator.comparingDouble(SpanFrame::lowerBound).thenComparingDouble(SpanFrame::b)
+                .thenComparingDouble(SpanFrame::h).thenComparingDouble(f -> f.stirrupBar().diameter()));
         return out;
     }
 
@@ -319,7 +275,7 @@ public final class BeamGenerator {
      * the 25.2.2 gap of {@code layers} stacked layers of {@code a}), asked of the section model on a
      * stand-in section holding {@code layers} layers of {@code a} and one layer of {@code c}.
      */
-    private boolean framePasses(Frame f, SectionShape shape, BarSize a, BarSize c, int layers) {
+    private boolean framePasses(SpanFrame f, SectionShape shape, BarSize a, BarSize c, int layers) {
         List<BeamSection.BarGroup> groups = new ArrayList<>();
         for (int i = 0; i < layers; i++) {
             groups.add(new BeamSection.BarGroup(a, 2));
@@ -332,7 +288,7 @@ public final class BeamGenerator {
         return checks.stream().allMatch(CheckResult::pass);
     }
 
-    private FrameSet evaluate(Frame f, double incumbent) {
+    private FrameOptions evaluate(SpanFrame f, double incumbent) {
         return evaluate(f, incumbent, null);
     }
 
@@ -341,7 +297,7 @@ public final class BeamGenerator {
      * {@code pairs[i][j]} to the cheapest passing combination with top bars of size i and bottom bars of
      * size j, and prunes only what cannot improve any pair of that top size.
      */
-    private FrameSet evaluate(Frame f, double incumbent, double[][] pairs) {
+    private FrameOptions evaluate(SpanFrame f, double incumbent, double[][] pairs) {
         zoneMemo.clear();
         useFrame(f);
         SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
@@ -349,7 +305,7 @@ public final class BeamGenerator {
         if (!framePasses(f, shape, smallest, smallest, 1)) {
             return null; // cover, flange width or skin rules fail for this frame whatever the bars
         }
-        List<TopOpt> tops = tops(f);
+        List<TopOption> tops = tops(f);
         if (p.bottomAnchored() || f.deflection()) {
             return everything(f, shape, tops, incumbent, pairs);
         }
@@ -359,23 +315,23 @@ public final class BeamGenerator {
         java.util.function.ToDoubleFunction<BarSize> supportLimit = pairs != null || Double.isInfinite(incumbent)
                 ? t -> Double.POSITIVE_INFINITY
                 : t -> incumbent - leastWithout(f, tops, t);
-        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), supportLimit, none)
+        List<SupportOption> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), supportLimit, none)
                 : List.of();
-        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), supportLimit, none)
+        List<SupportOption> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), supportLimit, none)
                 : List.of();
-        List<TopOpt> first = tops.stream().filter(t -> t.nc() == 2).toList();
+        List<TopOption> first = tops.stream().filter(t -> t.continuous() == 2).toList();
         // a (top, bottom size) whose least possible cost cannot beat the incumbent (or, in table mode, the
         // pair's best so far) is not searched
         MidLimit worth = (t, bb) -> (pairs == null ? incumbent : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
                 - cheapestAbove(lefts, t, p.leftSupport()) - cheapestAbove(rights, t, p.rightSupport());
-        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first, worth));
-        FrameSet fs = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        List<MidOption> mids = new ArrayList<>(mids(f, shape, first, worth));
+        FrameOptions fs = enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         if (pairs != null) {
             pairs(fs, pairs);
         }
         double cut = Math.min(incumbent, fs.best());
-        for (TopOpt t : tops) {
-            if (t.nc() == 2) {
+        for (TopOption t : tops) {
+            if (t.continuous() == 2) {
                 continue;
             }
             double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
@@ -386,7 +342,7 @@ public final class BeamGenerator {
                         - cheapestAbove(lefts, tt, p.leftSupport()) - cheapestAbove(rights, tt, p.rightSupport())));
             }
         }
-        FrameSet out = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        FrameOptions out = enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         if (pairs != null) {
             pairs(out, pairs);
         }
@@ -416,10 +372,10 @@ public final class BeamGenerator {
         }
     }
 
-    private List<Frame> allFrames;
+    private List<SpanFrame> allFrames;
 
     /** The frames of the problem, computed once. */
-    private List<Frame> cachedFrames() {
+    private List<SpanFrame> cachedFrames() {
         if (allFrames == null) {
             allFrames = frames();
         }
@@ -429,7 +385,7 @@ public final class BeamGenerator {
     /** The lower bound of each section size (b x h), the least over its stirrup sizes; absent sizes have no frame. */
     public Map<List<Double>, Double> sizeLowerBounds() {
         Map<List<Double>, Double> out = new LinkedHashMap<>();
-        for (Frame f : cachedFrames()) {
+        for (SpanFrame f : cachedFrames()) {
             out.merge(List.of(f.b(), f.h()), f.lowerBound(), Math::min);
         }
         return out;
@@ -441,7 +397,7 @@ public final class BeamGenerator {
         for (double[] row : cost) {
             java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
         }
-        for (Frame f : cachedFrames()) {
+        for (SpanFrame f : cachedFrames()) {
             if (f.b() == b && f.h() == h && Double.isFinite(f.lowerBound())) {
                 evaluate(f, Double.POSITIVE_INFINITY, cost);
             }
@@ -473,14 +429,14 @@ public final class BeamGenerator {
     }
 
     /** Lowers each pair's entry to the cheapest passing combination of the frame's options. */
-    private void pairs(FrameSet fs, double[][] out) {
+    private void pairs(FrameOptions fs, double[][] out) {
         if (fs.frame().deflection()) {
             deflectionPairs(fs, out);
             return;
         }
-        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
-        for (MidOpt m : fs.mids()) {
+        Map<BarSize, List<SupportOption>> lefts = bySize(fs.lefts());
+        Map<BarSize, List<SupportOption>> rights = bySize(fs.rights());
+        for (MidOption m : fs.mids()) {
             double total = combination(fs, m, lefts, rights);
             int i = index(m.top().bar());
             int j = index(m.bar());
@@ -489,23 +445,23 @@ public final class BeamGenerator {
     }
 
     /** The cost of a mid-span option with the cheapest compatible supports (infinite if none). */
-    private double combination(FrameSet fs, MidOpt m, Map<BarSize, List<SupportOpt>> lefts,
-            Map<BarSize, List<SupportOpt>> rights) {
-        TopOpt t = m.top();
+    private double combination(FrameOptions fs, MidOption m, Map<BarSize, List<SupportOption>> lefts,
+            Map<BarSize, List<SupportOption>> rights) {
+        TopOption t = m.top();
         if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
             return Double.POSITIVE_INFINITY;
         }
         BottomBars key = p.bottomAnchored() ? m.bottom() : null;
         double total = fs.frame().cost() + t.cost() + m.cost();
         if (p.leftSupport()) {
-            SupportOpt l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key);
+            SupportOption l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key);
             if (l == null) {
                 return Double.POSITIVE_INFINITY;
             }
             total += l.cost();
         }
         if (p.rightSupport()) {
-            SupportOpt r = cheapestIn(rights, t.bar(), t.nc(), m, key);
+            SupportOption r = cheapestIn(rights, t.bar(), t.continuous(), m, key);
             if (r == null) {
                 return Double.POSITIVE_INFINITY;
             }
@@ -519,13 +475,13 @@ public final class BeamGenerator {
      * while dearer ones pass: search each pair's combinations cheapest first, pruned by cost, asking the
      * section model's span checks, so each entry is exact.
      */
-    private void deflectionPairs(FrameSet fs, double[][] out) {
-        List<MidOpt> mids = new ArrayList<>(fs.mids());
-        mids.sort(Comparator.comparingDouble((MidOpt m) -> m.top().cost() + m.cost()));
-        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
-        for (MidOpt m : mids) {
-            TopOpt t = m.top();
+    private void deflectionPairs(FrameOptions fs, double[][] out) {
+        List<MidOption> mids = new ArrayList<>(fs.mids());
+        mids.sort(Comparator.comparingDouble((MidOption m) -> m.top().cost() + m.cost()));
+        Map<BarSize, List<SupportOption>> lefts = bySize(fs.lefts());
+        Map<BarSize, List<SupportOption>> rights = bySize(fs.rights());
+        for (MidOption m : mids) {
+            TopOption t = m.top();
             if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
                 continue;
             }
@@ -533,9 +489,9 @@ public final class BeamGenerator {
             int j = index(m.bar());
             BottomBars key = p.bottomAnchored() ? m.bottom() : null;
             double base = fs.frame().cost() + t.cost() + m.cost();
-            List<SupportOpt> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key,
+            List<SupportOption> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key,
                     p.leftSupport());
-            List<SupportOpt> rs = compatible(rights, t.bar(), t.nc(), m, key, p.rightSupport());
+            List<SupportOption> rs = compatible(rights, t.bar(), t.continuous(), m, key, p.rightSupport());
             if (ls.isEmpty() || rs.isEmpty()) {
                 continue;
             }
@@ -544,12 +500,12 @@ public final class BeamGenerator {
             if (base + minL + minR >= out[i][j] - 1e-9) {
                 continue;
             }
-            for (SupportOpt l : ls) {
+            for (SupportOption l : ls) {
                 double withL = base + (l == null ? 0 : l.cost());
                 if (withL + minR >= out[i][j] - 1e-9) {
                     break;
                 }
-                for (SupportOpt r : rs) {
+                for (SupportOption r : rs) {
                     double total = withL + (r == null ? 0 : r.cost());
                     if (total >= out[i][j] - 1e-9) {
                         break;
@@ -564,15 +520,15 @@ public final class BeamGenerator {
     }
 
     /** The support options compatible with a mid-span option, cheapest first; a single null where no support. */
-    private static List<SupportOpt> compatible(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
+    private static List<SupportOption> compatible(Map<BarSize, List<SupportOption>> index, BarSize bar, int nc, MidOption m,
             BottomBars bottom, boolean present) {
         if (!present) {
-            java.util.List<SupportOpt> none = new ArrayList<>();
+            java.util.List<SupportOption> none = new ArrayList<>();
             none.add(null);
             return none;
         }
-        List<SupportOpt> out = new ArrayList<>();
-        for (SupportOpt s : index.getOrDefault(bar, List.of())) {
+        List<SupportOption> out = new ArrayList<>();
+        for (SupportOption s : index.getOrDefault(bar, List.of())) {
             if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottom(), bottom)) {
                 out.add(s);
             }
@@ -581,13 +537,13 @@ public final class BeamGenerator {
     }
 
     /** The cheapest support option of the top option's size holding its continuous bars (0 if no support). */
-    private static double cheapestAbove(List<SupportOpt> opts, TopOpt t, boolean present) {
+    private static double cheapestAbove(List<SupportOption> opts, TopOption t, boolean present) {
         if (!present) {
             return 0;
         }
         double best = Double.POSITIVE_INFINITY;
-        for (SupportOpt s : opts) {
-            if (s.bar().equals(t.bar()) && s.counts().get(0) >= t.nc()) {
+        for (SupportOption s : opts) {
+            if (s.bar().equals(t.bar()) && s.counts().get(0) >= t.continuous()) {
                 best = Math.min(best, s.cost());
             }
         }
@@ -599,7 +555,7 @@ public final class BeamGenerator {
      * could carry Mu with (the section model's strength bound, with the continuous bars as compression
      * steel), priced per size, plus the cheapest stirrups of the mid-span zones.
      */
-    private double bottomLowerBound(Frame f, TopOpt t) {
+    private double bottomLowerBound(SpanFrame f, TopOption t) {
         double best = Double.POSITIVE_INFINITY;
         for (BarSize bb : p.space().barSizes()) {
             best = Math.min(best, bottomBarLowerBound(f, t, bb));
@@ -608,7 +564,7 @@ public final class BeamGenerator {
     }
 
     /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
-    private FrameSet everything(Frame f, SectionShape shape, List<TopOpt> tops, double incumbent, double[][] pairs) {
+    private FrameOptions everything(SpanFrame f, SectionShape shape, List<TopOption> tops, double incumbent, double[][] pairs) {
         // deflection and anchorage only add demands: what cannot beat the incumbent (or the pair's best so
         // far) on cost alone is not searched
         java.util.function.ToDoubleFunction<BarSize> limit = pairs != null || Double.isInfinite(incumbent)
@@ -616,50 +572,50 @@ public final class BeamGenerator {
                 : t -> incumbent - leastWithout(f, tops, t);
         // without anchored bottom bars the supports do not depend on the mid-span options: find them first,
         // so the mid-span search knows the least the supports add
-        List<SupportOpt> early = null;
-        List<SupportOpt> earlyRight = null;
+        List<SupportOption> early = null;
+        List<SupportOption> earlyRight = null;
         if (!p.bottomAnchored()) {
             List<BottomBars> none = NO_BOTTOM_BARS;
             early = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, none) : List.of();
             earlyRight = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, none)
                     : List.of();
         }
-        final List<SupportOpt> knownLeft = early;
-        final List<SupportOpt> knownRight = earlyRight;
+        final List<SupportOption> knownLeft = early;
+        final List<SupportOption> knownRight = earlyRight;
         if (f.deflection() && !p.bottomAnchored()) {
             return deflectionFrame(f, shape, tops, incumbent, pairs, knownLeft, knownRight);
         }
-        List<MidOpt> mids = mids(f, shape, tops, (t, bb) -> (pairs == null ? incumbent
+        List<MidOption> mids = mids(f, shape, tops, (t, bb) -> (pairs == null ? incumbent
                 : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
                 - (knownLeft == null ? 0 : cheapestAbove(knownLeft, t, p.leftSupport()))
                 - (knownRight == null ? 0 : cheapestAbove(knownRight, t, p.rightSupport())));
         List<BottomBars> bottoms;
         if (p.bottomAnchored()) {
             java.util.Set<BottomBars> distinct = new java.util.LinkedHashSet<>();
-            for (MidOpt m : mids) {
+            for (MidOption m : mids) {
                 distinct.add(m.bottom());
             }
             bottoms = new ArrayList<>(distinct);
         } else {
             bottoms = NO_BOTTOM_BARS;
         }
-        List<SupportOpt> lefts = knownLeft != null ? knownLeft : p.leftSupport()
+        List<SupportOption> lefts = knownLeft != null ? knownLeft : p.leftSupport()
                 ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
-        List<SupportOpt> rights = knownRight != null ? knownRight : p.rightSupport()
+        List<SupportOption> rights = knownRight != null ? knownRight : p.rightSupport()
                 ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
         return screened(f, shape, tops, mids, lefts, rights, pairs);
     }
 
     /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; pairs lowered. */
-    private FrameSet screened(Frame f, SectionShape shape, List<TopOpt> tops, List<MidOpt> mids, List<SupportOpt> lefts,
-            List<SupportOpt> rights, double[][] pairs) {
+    private FrameOptions screened(SpanFrame f, SectionShape shape, List<TopOption> tops, List<MidOption> mids, List<SupportOption> lefts,
+            List<SupportOption> rights, double[][] pairs) {
         if (f.deflection()) {
             DeflectionScreen screen = new DeflectionScreen(f, shape, mids, lefts, rights);
             mids = screen.mids();
             lefts = screen.lefts();
             rights = screen.rights();
         }
-        FrameSet out = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        FrameOptions out = enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         if (pairs != null) {
             pairs(out, pairs);
         }
@@ -671,17 +627,17 @@ public final class BeamGenerator {
      * their best passing combination then bounds which top options with more continuous bars (stiffer,
      * dearer) are searched.
      */
-    private FrameSet deflectionFrame(Frame f, SectionShape shape, List<TopOpt> tops, double incumbent, double[][] pairs,
-            List<SupportOpt> lefts, List<SupportOpt> rights) {
-        List<TopOpt> first = tops.stream().filter(t -> t.nc() == 2).toList();
-        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first, (t, bb) -> (pairs == null ? incumbent
+    private FrameOptions deflectionFrame(SpanFrame f, SectionShape shape, List<TopOption> tops, double incumbent, double[][] pairs,
+            List<SupportOption> lefts, List<SupportOption> rights) {
+        List<TopOption> first = tops.stream().filter(t -> t.continuous() == 2).toList();
+        List<MidOption> mids = new ArrayList<>(mids(f, shape, first, (t, bb) -> (pairs == null ? incumbent
                 : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost() - cheapestAbove(lefts, t, p.leftSupport())
                 - cheapestAbove(rights, t, p.rightSupport())));
-        FrameSet fs = screened(f, shape, tops, new ArrayList<>(mids), lefts, rights, pairs);
+        FrameOptions fs = screened(f, shape, tops, new ArrayList<>(mids), lefts, rights, pairs);
         double cut = Math.min(incumbent, fs.best());
         boolean more = false;
-        for (TopOpt t : tops) {
-            if (t.nc() == 2) {
+        for (TopOption t : tops) {
+            if (t.continuous() == 2) {
                 continue;
             }
             double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
@@ -696,8 +652,8 @@ public final class BeamGenerator {
         return more ? screened(f, shape, tops, mids, lefts, rights, pairs) : fs;
     }
 
-    private List<TopOpt> tops(Frame f) {
-        List<TopOpt> out = new ArrayList<>();
+    private List<TopOption> tops(SpanFrame f) {
+        List<TopOption> out = new ArrayList<>();
         for (BarSize t : p.space().barSizes()) {
             int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
             int ncMax = p.cantilever() || p.space().hangersOnly() ? Math.min(2, nmax) : nmax;
@@ -709,7 +665,7 @@ public final class BeamGenerator {
             // (a cantilever's top bars are all priced with its support option)
             double run = p.cantilever() ? 0 : p.span() - extL - extR;
             for (int nc = 2; nc <= ncMax; nc++) {
-                out.add(new TopOpt(t, nc, barCost(t, nc, run)));
+                out.add(new TopOption(t, nc, barCost(t, nc, run)));
             }
         }
         return out;
@@ -720,13 +676,13 @@ public final class BeamGenerator {
      * the frame, the cheapest top option of that size, and the least bottom bars (with the most continuous
      * bars of that size as compression steel) and mid-span stirrups.
      */
-    private double leastWithout(Frame f, List<TopOpt> tops, BarSize t) {
+    private double leastWithout(SpanFrame f, List<TopOption> tops, BarSize t) {
         double top = Double.POSITIVE_INFINITY;
-        TopOpt most = null;
-        for (TopOpt o : tops) {
+        TopOption most = null;
+        for (TopOption o : tops) {
             if (o.bar().equals(t)) {
                 top = Math.min(top, o.cost());
-                if (most == null || o.nc() > most.nc()) {
+                if (most == null || o.continuous() > most.continuous()) {
                     most = o;
                 }
             }
@@ -750,7 +706,7 @@ public final class BeamGenerator {
      */
     @FunctionalInterface
     private interface MidLimit {
-        double of(TopOpt top, BarSize bottom);
+        double of(TopOption top, BarSize bottom);
     }
 
     /**
@@ -758,34 +714,34 @@ public final class BeamGenerator {
      * steel: the section model's strength bound on the area, in whole bars, no fewer than two or than crack
      * control asks of the first layer.
      */
-    private double bottomBarLowerBound(Frame f, TopOpt t, BarSize bb) {
+    private double bottomBarLowerBound(SpanFrame f, TopOption t, BarSize bb) {
         int nb = p.space().barSizes().size();
         int ti = index(t.bar());
         int bi = index(bb);
-        if (bottomMemo == null || bottomMemo.length <= t.nc()) {
-            bottomMemo = new double[Math.max(t.nc() + 1, 16)][][];
+        if (bottomMemo == null || bottomMemo.length <= t.continuous()) {
+            bottomMemo = new double[Math.max(t.continuous() + 1, 16)][][];
         }
-        if (bottomMemo[t.nc()] == null) {
-            bottomMemo[t.nc()] = new double[nb][nb];
-            for (double[] row : bottomMemo[t.nc()]) {
+        if (bottomMemo[t.continuous()] == null) {
+            bottomMemo[t.continuous()] = new double[nb][nb];
+            for (double[] row : bottomMemo[t.continuous()]) {
                 java.util.Arrays.fill(row, Double.NaN);
             }
         }
-        double known = bottomMemo[t.nc()][ti][bi];
+        double known = bottomMemo[t.continuous()][ti][bi];
         if (Double.isNaN(known)) {
             known = computeBottomBarLowerBound(f, t, bb);
-            bottomMemo[t.nc()][ti][bi] = known;
+            bottomMemo[t.continuous()][ti][bi] = known;
         }
         return known;
     }
 
-    private Frame memoFrame;
+    private SpanFrame memoFrame;
     private double asMinSagging = Double.NaN;
     private double asMinHogging = Double.NaN;
     private int[] crackMemo;
 
     /** As,min of 9.6.1.2 per mm of d for the frame (the section model's rule at d = 1 mm). */
-    private double asMinPerDepth(Frame f, Bending bending) {
+    private double asMinPerDepth(SpanFrame f, Bending bending) {
         useFrame(f);
         if (Double.isNaN(asMinSagging)) {
             SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
@@ -797,7 +753,7 @@ public final class BeamGenerator {
     }
 
     /** The fewest bars of a size crack control (24.3.2) allows in the frame's first layer. */
-    private int crackBars(Frame f, BarSize bar) {
+    private int crackBars(SpanFrame f, BarSize bar) {
         useFrame(f);
         if (crackMemo == null) {
             crackMemo = new int[p.space().barSizes().size()];
@@ -810,7 +766,7 @@ public final class BeamGenerator {
         return crackMemo[i];
     }
 
-    private void useFrame(Frame f) {
+    private void useFrame(SpanFrame f) {
         if (memoFrame != f) {
             bottomMemo = null;
             asMinSagging = Double.NaN;
@@ -825,7 +781,7 @@ public final class BeamGenerator {
      * A tighter lower bound than the frame's first one, still without searching bars: the least of
      * {@link #pairLowerBound}.
      */
-    private double frameLowerBound(Frame f) {
+    private double frameLowerBound(SpanFrame f) {
         double best = Double.POSITIVE_INFINITY;
         for (double[] row : pairLowerBound(f)) {
             for (double v : row) {
@@ -842,14 +798,14 @@ public final class BeamGenerator {
      * the fewest bars of size i the section model's strength bound allows over their real extension, with
      * the leanest stirrups of the support's zones.
      */
-    private double[][] pairLowerBound(Frame f) {
+    private double[][] pairLowerBound(SpanFrame f) {
         useFrame(f);
         int nb = p.space().barSizes().size();
         double[][] out = new double[nb][nb];
         for (double[] row : out) {
             java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
         }
-        List<TopOpt> tops = tops(f);
+        List<TopOption> tops = tops(f);
         double fc = p.materials().fc();
         double fy = p.materials().fy();
         double leanMid = leanMid(f);
@@ -864,11 +820,11 @@ public final class BeamGenerator {
         for (int i = 0; i < nb; i++) {
             BarSize t = p.space().barSizes().get(i);
             double top = Double.POSITIVE_INFINITY;
-            TopOpt most = null;
-            for (TopOpt o : tops) {
+            TopOption most = null;
+            for (TopOption o : tops) {
                 if (o.bar().equals(t)) {
                     top = Math.min(top, o.cost());
-                    if (most == null || o.nc() > most.nc()) {
+                    if (most == null || o.continuous() > most.continuous()) {
                         most = o;
                     }
                 }
@@ -920,7 +876,7 @@ public final class BeamGenerator {
      */
     public double[][] pairLowerBounds(double b, double h) {
         double[][] out = null;
-        for (Frame f : cachedFrames()) {
+        for (SpanFrame f : cachedFrames()) {
             if (f.b() == b && f.h() == h) {
                 double[][] lb = Double.isFinite(f.lowerBound()) ? pairLowerBound(f) : null;
                 if (lb == null) {
@@ -950,14 +906,14 @@ public final class BeamGenerator {
     /** {@link #bottomBarLowerBound} per frame: [continuous bars][top size][bottom size], NaN until asked. */
     private double[][][] bottomMemo;
 
-    private double computeBottomBarLowerBound(Frame f, TopOpt t, BarSize bb) {
+    private double computeBottomBarLowerBound(SpanFrame f, TopOption t, BarSize bb) {
         if (!p.midSection()) {
             return barCost(bb, 2, p.span()); // a cantilever's bottom bars are two or more hangers
         }
         double widest = p.flange() != null ? p.flange().on(f.b()).width() : f.b(); // effective width on this web
         double fc = p.materials().fc();
         double fy = p.materials().fy();
-        double comp = t.nc() * t.bar().area();
+        double comp = t.continuous() * t.bar().area();
         double dp = f.det().firstLayerCentroid(t.bar().diameter());
         double dMax = f.h() - f.det().firstLayerCentroid(bb.diameter());
         double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy);
@@ -974,16 +930,16 @@ public final class BeamGenerator {
         return barCost(bb, n, p.span());
     }
 
-    private List<MidOpt> mids(Frame f, SectionShape shape, List<TopOpt> tops, MidLimit cut) {
-        List<MidOpt> out = new ArrayList<>();
+    private List<MidOption> mids(SpanFrame f, SectionShape shape, List<TopOption> tops, MidLimit cut) {
+        List<MidOption> out = new ArrayList<>();
         List<Integer> midZones = zoneIndices(BeamProblem.Place.MID);
         int mostLegs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
         if (p.cantilever()) {
             // the bottom bars of a cantilever are its hangers: two or more of one size, one layer
-            TopOpt only = null;
+            TopOption only = null;
             // (in more than one layer only where they are anchored and so count as compression steel)
             int bottomLayers = p.bottomAnchored() ? p.space().maxLayers() : 1;
-            for (TopOpt t : tops) {
+            for (TopOption t : tops) {
                 for (BarSize bb : p.space().barSizes()) {
                     int nmax = BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code());
                     for (int layers = 1; layers <= bottomLayers; layers++) {
@@ -991,7 +947,7 @@ public final class BeamGenerator {
                             break;
                         }
                         for (List<Integer> counts : barfit.design.ExhaustiveSearch.countVectors(layers, nmax)) {
-                            out.add(new MidOpt(t, bb, counts, f.det().firstLayerCentroid(bb.diameter()), Map.of(),
+                            out.add(new MidOption(t, bb, counts, f.det().firstLayerCentroid(bb.diameter()), Map.of(),
                                     barCost(bb, BeamLayout.sum(counts), p.span()), p.legsFor(counts.get(0))));
                         }
                     }
@@ -1001,8 +957,8 @@ public final class BeamGenerator {
         }
         midProbe.frame(shape, Bending.SAGGING, new Span(p.span(), p.ends()));
         midSearch.frame(f.det());
-        for (TopOpt top : tops) {
-            midSearch.compression(List.of(new BeamSection.BarGroup(top.bar(), top.nc())));
+        for (TopOption top : tops) {
+            midSearch.compression(List.of(new BeamSection.BarGroup(top.bar(), top.continuous())));
             for (BarSize bb : p.space().barSizes()) {
                 if (p.maxBarSizes() < 2 && !bb.equals(top.bar())) {
                     continue;
@@ -1051,15 +1007,15 @@ public final class BeamGenerator {
                             // than the outer bottom layer and the continuous top bars hold (25.7.1.2, 25.7.1.3)
                             StirrupRules.TieDemand ties = midZones.isEmpty() ? StirrupRules.TieDemand.NONE
                                     : StirrupRules.ties(midSection(f, shape, top, bb, split), Bending.SAGGING, p.mMid());
-                            if (!ties.sizeOk(f.ds().diameter())) {
+                            if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
-                            int legs = Math.max(p.legsFor(Math.max(split[0], top.nc())), ties.minLegs());
-                            int most = Math.min(split[0], top.nc());
+                            int legs = Math.max(p.legsFor(Math.max(split[0], top.continuous())), ties.minLegs());
+                            int most = Math.min(split[0], top.continuous());
                             ZoneSet zs = zoneSet(shape, f, midZones, bb, split, legs, most, ties.maxSpacing(), d, as);
                             if (zs != null) {
                                 double stirCost = zs.cost();
-                                out.add(new MidOpt(top, bb, TensionSearch.toList(split), d, zs.stirrups(),
+                                out.add(new MidOption(top, bb, TensionSearch.toList(split), d, zs.stirrups(),
                                         barCost(bb, n, p.span()) + stirCost, p.legsFor(split[0])));
                                 // only an option whose bottom bars hold every legs count the supports may use
                                 // can stand for the dearer options with more bars below
@@ -1102,7 +1058,7 @@ public final class BeamGenerator {
      * Stirrups with {@code legs} to {@code mostLegs} legs, at most {@code maxSpacing} apart, in each of the
      * zones, or null if some zone has none that pass.
      */
-    private ZoneSet zoneSet(SectionShape shape, Frame f, List<Integer> zoneIds, BarSize tension, int[] counts, int legs,
+    private ZoneSet zoneSet(SectionShape shape, SpanFrame f, List<Integer> zoneIds, BarSize tension, int[] counts, int legs,
             int mostLegs, double maxSpacing, double d, double as) {
         Map<Integer, Stirrups> zs = new LinkedHashMap<>();
         double cost = 0;
@@ -1117,7 +1073,7 @@ public final class BeamGenerator {
         return new ZoneSet(zs, cost);
     }
 
-    private Stirrups zoneStirrups(SectionShape shape, Frame f, int zone, int legs, int mostLegs, double maxSpacing,
+    private Stirrups zoneStirrups(SectionShape shape, SpanFrame f, int zone, int legs, int mostLegs, double maxSpacing,
             double d, double as) {
         ZoneKey key = new ZoneKey(zone, d, as, legs, mostLegs, maxSpacing);
         if (zoneMemo.containsKey(key)) {
@@ -1140,7 +1096,7 @@ public final class BeamGenerator {
     }
 
     /** The least the stirrups of the mid-span zones could cost (see {@link #leanStirrups}). */
-    private double leanMid(Frame f) {
+    private double leanMid(SpanFrame f) {
         return leanStirrups(f, BeamProblem.Place.MID);
     }
 
@@ -1152,7 +1108,7 @@ public final class BeamGenerator {
      * that takes Vc to its cap), which can only pass more than any real layout does. Infinite if even
      * that fails.
      */
-    private double leanStirrups(Frame f, BeamProblem.Place place) {
+    private double leanStirrups(SpanFrame f, BeamProblem.Place place) {
         useFrame(f);
         Double known = leanMemo.get(place);
         if (known != null) {
@@ -1178,9 +1134,9 @@ public final class BeamGenerator {
     }
 
     /** More than any choice of stirrups over the whole span could cost (the most legs, the closest spacing). */
-    private double stirrupCeiling(Frame f) {
+    private double stirrupCeiling(SpanFrame f) {
         int legs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
-        Stirrups dense = new Stirrups(f.ds(), legs, p.space().stirrupSpacings().get(0));
+        Stirrups dense = new Stirrups(f.stirrupBar(), legs, p.space().stirrupSpacings().get(0));
         double c = 0;
         for (BeamProblem.Zone z : zones) {
             c += stirrupCost(f.b(), f.h(), dense, z);
@@ -1206,9 +1162,9 @@ public final class BeamGenerator {
      * A continuous support's options. {@code limit} gives, per top bar size, the cost at or above which an
      * option cannot be part of anything cheaper than the incumbent; the bar count stops rising there.
      */
-    private List<SupportOpt> supports(Frame f, SectionShape shape, BeamProblem.Place place, double mu,
+    private List<SupportOption> supports(SpanFrame f, SectionShape shape, BeamProblem.Place place, double mu,
             java.util.function.ToDoubleFunction<BarSize> limit, List<BottomBars> bottoms) {
-        List<SupportOpt> out = new ArrayList<>();
+        List<SupportOption> out = new ArrayList<>();
         List<Integer> myZones = zoneIndices(place);
         double leanZones = leanStirrups(f, place);
         supportProbe.frame(shape, Bending.HOGGING, new Span(p.span(), p.ends()));
@@ -1255,14 +1211,14 @@ public final class BeamGenerator {
                             double as = search.tensionArea();
                             double bars = barCost(t, n, ext);
                             if (myZones.isEmpty()) {
-                                out.add(new SupportOpt(t, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX,
+                                out.add(new SupportOption(t, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX,
                                         Map.of(), bars, bottom));
                                 continue;
                             }
                             // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
                             StirrupRules.TieDemand ties = StirrupRules.ties(
                                     supportSection(f, shape, t, split, bottomGroups), Bending.HOGGING, mu);
-                            if (!ties.sizeOk(f.ds().diameter())) {
+                            if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
                             // one option per range of legs: the fewest must meet the office's rule for the
@@ -1287,7 +1243,7 @@ public final class BeamGenerator {
                                         fewest = Math.min(fewest, st.legs());
                                         mostUsed = Math.max(mostUsed, st.legs());
                                     }
-                                    out.add(new SupportOpt(t, TensionSearch.toList(split), d, fewest, mostUsed,
+                                    out.add(new SupportOption(t, TensionSearch.toList(split), d, fewest, mostUsed,
                                             zs.stirrups(), bars + zs.cost(), bottom));
                                 }
                             }
@@ -1306,30 +1262,30 @@ public final class BeamGenerator {
      * CP-SAT model's deflection cuts.
      */
     private final class DeflectionScreen {
-        private final List<MidOpt> mids = new ArrayList<>();
-        private final List<SupportOpt> lefts = new ArrayList<>();
-        private final List<SupportOpt> rights = new ArrayList<>();
+        private final List<MidOption> mids = new ArrayList<>();
+        private final List<SupportOption> lefts = new ArrayList<>();
+        private final List<SupportOption> rights = new ArrayList<>();
 
-        DeflectionScreen(Frame f, SectionShape shape, List<MidOpt> allMids, List<SupportOpt> allLefts,
-                List<SupportOpt> allRights) {
+        DeflectionScreen(SpanFrame f, SectionShape shape, List<MidOption> allMids, List<SupportOption> allLefts,
+                List<SupportOption> allRights) {
             SpanChecks.ServiceMoments ma = p.serviceMoments();
             double ec = barfit.section.Deflection.ec(p.materials(), p.code());
-            Map<MidOpt, double[]> midIe = new java.util.IdentityHashMap<>();
-            Map<MidOpt, Double> midRho = new java.util.IdentityHashMap<>();
-            for (MidOpt m : allMids) {
+            Map<MidOption, double[]> midIe = new java.util.IdentityHashMap<>();
+            Map<MidOption, Double> midRho = new java.util.IdentityHashMap<>();
+            for (MidOption m : allMids) {
                 BeamSection s = midSection(f, shape, m);
                 midIe.put(m, p.cantilever() ? null : SpanChecks.ieLevels(s, Bending.SAGGING, ma.mid()));
                 midRho.put(m, p.cantilever() ? 0.0 : SpanChecks.rhoPrime(s, Bending.SAGGING));
             }
-            Map<SupportOpt, double[]> leftIe = new java.util.IdentityHashMap<>();
-            Map<SupportOpt, double[]> rightIe = new java.util.IdentityHashMap<>();
-            Map<SupportOpt, Double> leftRho = new java.util.IdentityHashMap<>();
-            for (SupportOpt l : allLefts) {
+            Map<SupportOption, double[]> leftIe = new java.util.IdentityHashMap<>();
+            Map<SupportOption, double[]> rightIe = new java.util.IdentityHashMap<>();
+            Map<SupportOption, Double> leftRho = new java.util.IdentityHashMap<>();
+            for (SupportOption l : allLefts) {
                 BeamSection s = supportSection(f, shape, l);
                 leftIe.put(l, SpanChecks.ieLevels(s, Bending.HOGGING, ma.left()));
                 leftRho.put(l, SpanChecks.rhoPrime(s, Bending.HOGGING));
             }
-            for (SupportOpt r : allRights) {
+            for (SupportOption r : allRights) {
                 rightIe.put(r, SpanChecks.ieLevels(supportSection(f, shape, r), Bending.HOGGING, ma.right()));
             }
             // the stiffest partners per top bar size, computed once
@@ -1342,38 +1298,38 @@ public final class BeamGenerator {
                 bestMidRho.put(tt, 0.0);
                 bestLeftRho.put(tt, 0.0);
             }
-            for (Map.Entry<SupportOpt, double[]> e : leftIe.entrySet()) {
+            for (Map.Entry<SupportOption, double[]> e : leftIe.entrySet()) {
                 bestLeft.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
             }
-            for (Map.Entry<SupportOpt, double[]> e : rightIe.entrySet()) {
+            for (Map.Entry<SupportOption, double[]> e : rightIe.entrySet()) {
                 bestRight.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
             }
-            for (Map.Entry<MidOpt, double[]> e : midIe.entrySet()) {
+            for (Map.Entry<MidOption, double[]> e : midIe.entrySet()) {
                 if (e.getValue() != null) {
                     bestMidIe.merge(e.getKey().top().bar().designation(), e.getValue().clone(), this::max);
                 }
             }
-            for (Map.Entry<MidOpt, Double> e : midRho.entrySet()) {
+            for (Map.Entry<MidOption, Double> e : midRho.entrySet()) {
                 bestMidRho.merge(e.getKey().top().bar().designation(), e.getValue(), Math::max);
             }
-            for (Map.Entry<SupportOpt, Double> e : leftRho.entrySet()) {
+            for (Map.Entry<SupportOption, Double> e : leftRho.entrySet()) {
                 bestLeftRho.merge(e.getKey().bar().designation(), e.getValue(), Math::max);
             }
-            for (MidOpt m : allMids) {
+            for (MidOption m : allMids) {
                 String tt = m.top().bar().designation();
                 double rho = p.cantilever() ? bestLeftRho.get(tt) : midRho.get(m);
                 if (passes(ec, ma, bestLeft.get(tt), midIe.get(m), bestRight.get(tt), rho)) {
                     mids.add(m);
                 }
             }
-            for (SupportOpt l : allLefts) {
+            for (SupportOption l : allLefts) {
                 String tt = l.bar().designation();
                 double rho = p.cantilever() ? leftRho.get(l) : bestMidRho.get(tt);
                 if (passes(ec, ma, leftIe.get(l), bestMidIe.get(tt), bestRight.get(tt), rho)) {
                     lefts.add(l);
                 }
             }
-            for (SupportOpt r : allRights) {
+            for (SupportOption r : allRights) {
                 String tt = r.bar().designation();
                 if (passes(ec, ma, bestLeft.get(tt), bestMidIe.get(tt), rightIe.get(r), bestMidRho.get(tt))) {
                     rights.add(r);
@@ -1381,7 +1337,7 @@ public final class BeamGenerator {
             }
         }
 
-        private java.util.Set<String> topSizes(List<MidOpt> ms, List<SupportOpt> ls, List<SupportOpt> rs) {
+        private java.util.Set<String> topSizes(List<MidOption> ms, List<SupportOption> ls, List<SupportOption> rs) {
             java.util.Set<String> out = new java.util.TreeSet<>();
             ms.forEach(m -> out.add(m.top().bar().designation()));
             ls.forEach(l -> out.add(l.bar().designation()));
@@ -1408,15 +1364,15 @@ public final class BeamGenerator {
             return a;
         }
 
-        List<MidOpt> mids() {
+        List<MidOption> mids() {
             return mids;
         }
 
-        List<SupportOpt> lefts() {
+        List<SupportOption> lefts() {
             return lefts;
         }
 
-        List<SupportOpt> rights() {
+        List<SupportOption> rights() {
             return rights;
         }
     }
@@ -1427,15 +1383,15 @@ public final class BeamGenerator {
         return g;
     }
 
-    private BeamSection midSection(Frame f, SectionShape shape, MidOpt m) {
+    private BeamSection midSection(SpanFrame f, SectionShape shape, MidOption m) {
         List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM, groups(m.bar(), m.counts()),
                 f.det()));
         ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(m.top().bar(),
-                m.top().nc())), f.det()));
+                m.top().continuous())), f.det()));
         return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
     }
 
-    private BeamSection supportSection(Frame f, SectionShape shape, SupportOpt s) {
+    private BeamSection supportSection(SpanFrame f, SectionShape shape, SupportOption s) {
         List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP, groups(s.bar(), s.counts()),
                 f.det()));
         if (s.bottom() != null) { // the bottom bars the option was built with
@@ -1445,16 +1401,16 @@ public final class BeamGenerator {
     }
 
     /** The mid-span section of an option (bottom bars in tension, the continuous top bars above), for its ties. */
-    private BeamSection midSection(Frame f, SectionShape shape, TopOpt top, BarSize bottom, int[] split) {
+    private BeamSection midSection(SpanFrame f, SectionShape shape, TopOption top, BarSize bottom, int[] split) {
         List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM,
                 groups(bottom, TensionSearch.toList(split)), f.det()));
-        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(top.bar(), top.nc())),
+        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(top.bar(), top.continuous())),
                 f.det()));
         return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
     }
 
     /** A support section of an option (top bars in tension, the bottom bars counted there), for its ties. */
-    private BeamSection supportSection(Frame f, SectionShape shape, BarSize top, int[] split,
+    private BeamSection supportSection(SpanFrame f, SectionShape shape, BarSize top, int[] split,
             List<BeamSection.BarGroup> bottom) {
         List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP,
                 groups(top, TensionSearch.toList(split)), f.det()));
@@ -1469,7 +1425,7 @@ public final class BeamGenerator {
      * Table 24.2.3.5 at the dead, sustained and total service levels, then ρ' (24.2.4.1). Null where the
      * section takes no part (a cantilever's deflection is its support's).
      */
-    public double[] deflectionStiffness(Frame f, MidOpt m) {
+    public double[] deflectionStiffness(SpanFrame f, MidOption m) {
         if (p.cantilever()) {
             return null;
         }
@@ -1478,8 +1434,8 @@ public final class BeamGenerator {
         return append(ie, SpanChecks.rhoPrime(s, Bending.SAGGING));
     }
 
-    /** As {@link #deflectionStiffness(Frame, MidOpt)} for a support option; ρ' only at a cantilever's support. */
-    public double[] deflectionStiffness(Frame f, SupportOpt o, BeamProblem.Place place) {
+    /** As {@link #deflectionStiffness(SpanFrame, MidOption)} for a support option; ρ' only at a cantilever's support. */
+    public double[] deflectionStiffness(SpanFrame f, SupportOption o, BeamProblem.Place place) {
         BeamSection s = supportSection(f, new SectionShape(f.b(), f.h(), p.flange()), o);
         double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING,
                 place == BeamProblem.Place.LEFT ? p.serviceMoments().left() : p.serviceMoments().right());
@@ -1495,9 +1451,9 @@ public final class BeamGenerator {
     // ------------------------------------------------------------------ combining and bounding
 
     /** The cheapest compatible support option, or null. */
-    static SupportOpt cheapestSupport(List<SupportOpt> opts, BarSize bar, int nc, MidOpt m, BottomBars bottom) {
-        SupportOpt best = null;
-        for (SupportOpt s : opts) {
+    static SupportOption cheapestSupport(List<SupportOption> opts, BarSize bar, int nc, MidOption m, BottomBars bottom) {
+        SupportOption best = null;
+        for (SupportOption s : opts) {
             if (s.bar().equals(bar) && s.counts().get(0) >= nc && s.holds(m)
                     && java.util.Objects.equals(s.bottom(), bottom) && (best == null || s.cost() < best.cost())) {
                 best = s;
@@ -1507,7 +1463,7 @@ public final class BeamGenerator {
     }
 
     /** Builds the layout of a combination. */
-    public BeamLayout layout(Frame f, MidOpt m, SupportOpt l, SupportOpt r) {
+    public BeamLayout layout(SpanFrame f, MidOption m, SupportOption l, SupportOption r) {
         List<Stirrups> st = new ArrayList<>();
         for (int i = 0; i < zones.size(); i++) {
             Stirrups s = m.zones().get(i);
@@ -1521,27 +1477,27 @@ public final class BeamGenerator {
         }
         double extL = l == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
         double extR = r == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
-        return new BeamLayout(f.b(), f.h(), p.flange(), f.ds(), f.skin(), m.top().bar(), m.top().nc(),
+        return new BeamLayout(f.b(), f.h(), p.flange(), f.stirrupBar(), f.skin(), m.top().bar(), m.top().continuous(),
                 l == null ? null : l.counts(), r == null ? null : r.counts(), m.bar(), m.counts(), st, extL, extR);
     }
 
     /** Support options by top bar size, cheapest first. */
-    private static Map<BarSize, List<SupportOpt>> bySize(List<SupportOpt> opts) {
-        Map<BarSize, List<SupportOpt>> out = new java.util.IdentityHashMap<>();
-        for (SupportOpt s : opts) {
+    private static Map<BarSize, List<SupportOption>> bySize(List<SupportOption> opts) {
+        Map<BarSize, List<SupportOption>> out = new java.util.IdentityHashMap<>();
+        for (SupportOption s : opts) {
             out.computeIfAbsent(s.bar(), k -> new ArrayList<>()).add(s);
         }
-        out.values().forEach(l -> l.sort(Comparator.comparingDouble(SupportOpt::cost)));
+        out.values().forEach(l -> l.sort(Comparator.comparingDouble(SupportOption::cost)));
         return out;
     }
 
-    private static SupportOpt cheapestIn(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
+    private static SupportOption cheapestIn(Map<BarSize, List<SupportOption>> index, BarSize bar, int nc, MidOption m,
             BottomBars bottom) {
-        List<SupportOpt> l = index.get(bar);
+        List<SupportOption> l = index.get(bar);
         if (l == null) {
             return null;
         }
-        for (SupportOpt s : l) {
+        for (SupportOption s : l) {
             if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottom(), bottom)) {
                 return s;
             }
@@ -1550,27 +1506,27 @@ public final class BeamGenerator {
     }
 
     /** The frame's cheapest combination that passes, found by plain enumeration of its options. */
-    private FrameSet enumerate(FrameSet fs) {
+    private FrameOptions enumerate(FrameOptions fs) {
         double best = Double.POSITIVE_INFINITY;
         BeamLayout bestLayout = null;
-        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
-        for (MidOpt m : fs.mids()) {
-            TopOpt t = m.top();
+        Map<BarSize, List<SupportOption>> lefts = bySize(fs.lefts());
+        Map<BarSize, List<SupportOption>> rights = bySize(fs.rights());
+        for (MidOption m : fs.mids()) {
+            TopOption t = m.top();
             if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
                 continue;
             }
             BottomBars key = p.bottomAnchored() ? m.bottom() : null;
-            SupportOpt l = null;
-            SupportOpt r = null;
+            SupportOption l = null;
+            SupportOption r = null;
             if (p.leftSupport()) {
-                l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key);
+                l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key);
                 if (l == null) {
                     continue;
                 }
             }
             if (p.rightSupport()) {
-                r = cheapestIn(rights, t.bar(), t.nc(), m, key);
+                r = cheapestIn(rights, t.bar(), t.continuous(), m, key);
                 if (r == null) {
                     continue;
                 }
@@ -1585,23 +1541,23 @@ public final class BeamGenerator {
                 bestLayout = lay;
             }
         }
-        return new FrameSet(fs.frame(), fs.tops(), fs.mids(), fs.lefts(), fs.rights(), best, bestLayout);
+        return new FrameOptions(fs.frame(), fs.tops(), fs.mids(), fs.lefts(), fs.rights(), best, bestLayout);
     }
 
     /** Drops the options that cannot be part of anything cheaper than the incumbent. */
-    private FrameSet prune(FrameSet fs, double incumbent) {
+    private FrameOptions prune(FrameOptions fs, double incumbent) {
         double frame = fs.frame().cost();
         Map<String, Double> cheapestLeft = new HashMap<>();
         Map<String, Double> cheapestRight = new HashMap<>();
-        for (SupportOpt s : fs.lefts()) {
+        for (SupportOption s : fs.lefts()) {
             cheapestLeft.merge(s.bar().designation(), s.cost(), Math::min);
         }
-        for (SupportOpt s : fs.rights()) {
+        for (SupportOption s : fs.rights()) {
             cheapestRight.merge(s.bar().designation(), s.cost(), Math::min);
         }
-        List<MidOpt> mids = new ArrayList<>();
+        List<MidOption> mids = new ArrayList<>();
         Map<String, Double> cheapestMidPlusTop = new HashMap<>();
-        for (MidOpt m : fs.mids()) {
+        for (MidOption m : fs.mids()) {
             String tb = m.top().bar().designation();
             double lb = frame + m.top().cost() + m.cost() + (p.leftSupport() ? cheapestLeft.getOrDefault(tb, 1e300) : 0)
                     + (p.rightSupport() ? cheapestRight.getOrDefault(tb, 1e300) : 0);
@@ -1610,9 +1566,9 @@ public final class BeamGenerator {
                 cheapestMidPlusTop.merge(tb, m.top().cost() + m.cost(), Math::min);
             }
         }
-        List<TopOpt> tops = fs.tops().stream().filter(t -> mids.stream().anyMatch(m -> m.top().equals(t))).toList();
-        List<SupportOpt> lefts = new ArrayList<>();
-        for (SupportOpt s : fs.lefts()) {
+        List<TopOption> tops = fs.tops().stream().filter(t -> mids.stream().anyMatch(m -> m.top().equals(t))).toList();
+        List<SupportOption> lefts = new ArrayList<>();
+        for (SupportOption s : fs.lefts()) {
             String tb = s.bar().designation();
             double lb = frame + cheapestMidPlusTop.getOrDefault(tb, 1e300) + s.cost()
                     + (p.rightSupport() ? cheapestRight.getOrDefault(tb, 1e300) : 0);
@@ -1620,8 +1576,8 @@ public final class BeamGenerator {
                 lefts.add(s);
             }
         }
-        List<SupportOpt> rights = new ArrayList<>();
-        for (SupportOpt s : fs.rights()) {
+        List<SupportOption> rights = new ArrayList<>();
+        for (SupportOption s : fs.rights()) {
             String tb = s.bar().designation();
             double lb = frame + cheapestMidPlusTop.getOrDefault(tb, 1e300) + s.cost()
                     + (p.leftSupport() ? cheapestLeft.getOrDefault(tb, 1e300) : 0);
@@ -1629,7 +1585,7 @@ public final class BeamGenerator {
                 rights.add(s);
             }
         }
-        return new FrameSet(fs.frame(), tops, mids, lefts, rights, fs.best(), fs.bestLayout());
+        return new FrameOptions(fs.frame(), tops, mids, lefts, rights, fs.best(), fs.bestLayout());
     }
 
     public BeamProblem problem() {

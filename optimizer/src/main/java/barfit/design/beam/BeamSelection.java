@@ -25,8 +25,8 @@ import java.util.Map;
  */
 public final class BeamSelection {
     /** The chosen combination and the solver's proof. */
-    public record Choice(BeamGenerator.FrameSet set, BeamGenerator.MidOpt mid, BeamGenerator.SupportOpt left,
-            BeamGenerator.SupportOpt right) {
+    public record Choice(FrameOptions set, MidOption mid, SupportOption left,
+            SupportOption right) {
     }
 
     /** {@code choice}, {@code objective} and {@code bound} (in {@link CostModel#SPAN_UNITS}) only when solved. */
@@ -34,7 +34,7 @@ public final class BeamSelection {
     }
 
     private final CpModel model = new CpModel();
-    private final List<BeamGenerator.FrameSet> sets;
+    private final List<FrameOptions> sets;
     private final BeamProblem p;
     private final List<Literal> frameVars = new ArrayList<>();
     private final List<List<Literal>> midVars = new ArrayList<>();
@@ -47,7 +47,7 @@ public final class BeamSelection {
     private final Map<Object, double[]> stiffness = new java.util.IdentityHashMap<>();
     private static final double[] NO_PART = new double[0];
 
-    public BeamSelection(BeamProblem problem, List<BeamGenerator.FrameSet> sets) {
+    public BeamSelection(BeamProblem problem, List<FrameOptions> sets) {
         OrTools.load();
         this.p = problem;
         this.sets = sets;
@@ -68,10 +68,10 @@ public final class BeamSelection {
             sizeUsed.put(s.designation(), model.newBoolVar("size_" + s.designation()));
         }
         for (int fi = 0; fi < sets.size(); fi++) {
-            BeamGenerator.FrameSet fs = sets.get(fi);
+            FrameOptions fs = sets.get(fi);
             Literal y = bool("frame" + fi, fs.frame().cost());
             frameVars.add(y);
-            List<BeamGenerator.TopOpt> tops = fs.tops();
+            List<TopOption> tops = fs.tops();
             List<Literal> topVars = new ArrayList<>();
             for (int i = 0; i < tops.size(); i++) {
                 Literal x = bool("f" + fi + "_top" + i, tops.get(i).cost());
@@ -81,7 +81,7 @@ public final class BeamSelection {
             model.addEquality(LinearExpr.sum(topVars.toArray(new Literal[0])), y);
             List<Literal> mv = new ArrayList<>();
             for (int i = 0; i < fs.mids().size(); i++) {
-                BeamGenerator.MidOpt m = fs.mids().get(i);
+                MidOption m = fs.mids().get(i);
                 Literal x = bool("f" + fi + "_mid" + i, m.cost());
                 mv.add(x);
                 model.addImplication(x, sizeUsed.get(m.bar().designation()));
@@ -106,7 +106,7 @@ public final class BeamSelection {
         model.minimize(LinearExpr.weightedSum(all.toArray(new Literal[0]), c));
     }
 
-    private List<Literal> supports(int fi, String side, BeamGenerator.FrameSet fs, List<BeamGenerator.SupportOpt> opts,
+    private List<Literal> supports(int fi, String side, FrameOptions fs, List<SupportOption> opts,
             List<Literal> topVars, List<Literal> mv, boolean present) {
         List<Literal> sv = new ArrayList<>();
         if (!present) {
@@ -115,7 +115,7 @@ public final class BeamSelection {
         for (int i = 0; i < opts.size(); i++) {
             sv.add(bool("f" + fi + "_" + side + i, opts.get(i).cost()));
         }
-        List<BeamGenerator.TopOpt> tops = fs.tops();
+        List<TopOption> tops = fs.tops();
         // same top size at the support as over the span
         for (BarSize s : p.space().barSizes()) {
             LinearExprBuilder lhs = LinearExpr.newBuilder();
@@ -140,7 +140,7 @@ public final class BeamSelection {
             }
             LinearExprBuilder nc = LinearExpr.newBuilder();
             for (int ti = 0; ti < tops.size(); ti++) {
-                nc.addTerm(topVars.get(ti), tops.get(ti).nc());
+                nc.addTerm(topVars.get(ti), tops.get(ti).continuous());
             }
             model.addGreaterOrEqual(first, nc);
         }
@@ -192,15 +192,15 @@ public final class BeamSelection {
      */
     public void cutDeflection(Choice c, BeamGenerator gen) {
         int fi = sets.indexOf(c.set());
-        BeamGenerator.FrameSet fs = c.set();
-        BeamGenerator.Frame f = fs.frame();
+        FrameOptions fs = c.set();
+        SpanFrame f = fs.frame();
         boolean known = p.service() != null;
         LinearExprBuilder weaker = LinearExpr.newBuilder();
         int parts = 1;
-        BeamGenerator.MidOpt m0 = c.mid();
+        MidOption m0 = c.mid();
         double[] s0 = known ? stiffness(m0, () -> gen.deflectionStiffness(f, m0)) : null;
         for (int i = 0; i < fs.mids().size(); i++) {
-            BeamGenerator.MidOpt m = fs.mids().get(i);
+            MidOption m = fs.mids().get(i);
             if (m == m0 || known && noStiffer(stiffness(m, () -> gen.deflectionStiffness(f, m)), s0)) {
                 weaker.add(midVars.get(fi).get(i));
             }
@@ -212,15 +212,15 @@ public final class BeamSelection {
         model.addLessOrEqual(weaker, parts - 1);
     }
 
-    private int weakerSupports(LinearExprBuilder weaker, List<BeamGenerator.SupportOpt> opts, List<Literal> vars,
-            BeamGenerator.SupportOpt s0, boolean known,
-            java.util.function.Function<BeamGenerator.SupportOpt, double[]> of) {
+    private int weakerSupports(LinearExprBuilder weaker, List<SupportOption> opts, List<Literal> vars,
+            SupportOption s0, boolean known,
+            java.util.function.Function<SupportOption, double[]> of) {
         if (s0 == null) {
             return 0;
         }
         double[] k0 = known ? stiffness(s0, () -> of.apply(s0)) : null;
         for (int i = 0; i < opts.size(); i++) {
-            BeamGenerator.SupportOpt s = opts.get(i);
+            SupportOption s = opts.get(i);
             if (s == s0 || known && noStiffer(stiffness(s, () -> of.apply(s)), k0)) {
                 weaker.add(vars.get(i));
             }
@@ -251,7 +251,7 @@ public final class BeamSelection {
         int fi = sets.indexOf(c.set());
         LinearExprBuilder same = LinearExpr.newBuilder();
         for (int i = 0; i < c.set().mids().size(); i++) {
-            BeamGenerator.MidOpt m = c.set().mids().get(i);
+            MidOption m = c.set().mids().get(i);
             if (m.bar().equals(c.mid().bar()) && m.top().bar().equals(c.mid().top().bar())) {
                 same.add(midVars.get(fi).get(i));
             }
@@ -271,10 +271,10 @@ public final class BeamSelection {
             if (!solver.booleanValue(frameVars.get(fi))) {
                 continue;
             }
-            BeamGenerator.FrameSet fs = sets.get(fi);
-            BeamGenerator.MidOpt mid = pick(solver, midVars.get(fi), fs.mids());
-            BeamGenerator.SupportOpt left = pick(solver, leftVars.get(fi), fs.lefts());
-            BeamGenerator.SupportOpt right = pick(solver, rightVars.get(fi), fs.rights());
+            FrameOptions fs = sets.get(fi);
+            MidOption mid = pick(solver, midVars.get(fi), fs.mids());
+            SupportOption left = pick(solver, leftVars.get(fi), fs.lefts());
+            SupportOption right = pick(solver, rightVars.get(fi), fs.rights());
             return new Result(status, new Choice(fs, mid, left, right), Math.round(solver.objectiveValue()),
                     Math.round(solver.bestObjectiveBound()), stats);
         }
