@@ -59,6 +59,7 @@ public final class BeamGenerator {
     private final SectionProbe supportProbe;
     private final TensionSearch midSearch;
     private final StirrupChooser chooser;
+    private final SpanSections sections;
     private final List<BeamProblem.Zone> zones;
     private final double lm;
     /** Zone stirrups depend only on the zone, the tension bars (d, As) and the legs asked for: remembered per frame. */
@@ -78,6 +79,7 @@ public final class BeamGenerator {
         this.midSearch = new TensionSearch(midProbe, p.mMid() == null ? 0 : p.mMid());
         this.chooser = new StirrupChooser(p.materials(), p.code(), p.space(), cost);
         this.zones = p.zones();
+        this.sections = new SpanSections(p);
         this.lm = p.span() / 1000.0;
     }
 
@@ -610,7 +612,7 @@ public final class BeamGenerator {
     private FrameOptions screened(SpanFrame f, SectionShape shape, List<TopOption> tops, List<MidOption> mids, List<SupportOption> lefts,
             List<SupportOption> rights, double[][] pairs) {
         if (f.deflection()) {
-            DeflectionScreen screen = new DeflectionScreen(f, shape, mids, lefts, rights);
+            DeflectionScreen screen = new DeflectionScreen(p, sections, f, shape, mids, lefts, rights);
             mids = screen.mids();
             lefts = screen.lefts();
             rights = screen.rights();
@@ -1006,7 +1008,7 @@ public final class BeamGenerator {
                             // legs: the office's rule, the ties round top bars relied on (9.7.6.4), and no more
                             // than the outer bottom layer and the continuous top bars hold (25.7.1.2, 25.7.1.3)
                             StirrupRules.TieDemand ties = midZones.isEmpty() ? StirrupRules.TieDemand.NONE
-                                    : StirrupRules.ties(midSection(f, shape, top, bb, split), Bending.SAGGING, p.mMid());
+                                    : StirrupRules.ties(sections.mid(f, shape, top, bb, split), Bending.SAGGING, p.mMid());
                             if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
@@ -1217,7 +1219,7 @@ public final class BeamGenerator {
                             }
                             // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
                             StirrupRules.TieDemand ties = StirrupRules.ties(
-                                    supportSection(f, shape, t, split, bottomGroups), Bending.HOGGING, mu);
+                                    sections.support(f, shape, t, split, bottomGroups), Bending.HOGGING, mu);
                             if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
@@ -1252,199 +1254,6 @@ public final class BeamGenerator {
                 }
             }
         }
-        return out;
-    }
-
-    /**
-     * Below Table 9.3.1.1: drops the options that fail deflection even with the stiffest partners the
-     * frame offers (the largest Ie of every other section at every load level, the most compression
-     * steel), a bound the section model's deflection functions make safe. What remains is settled by the
-     * CP-SAT model's deflection cuts.
-     */
-    private final class DeflectionScreen {
-        private final List<MidOption> mids = new ArrayList<>();
-        private final List<SupportOption> lefts = new ArrayList<>();
-        private final List<SupportOption> rights = new ArrayList<>();
-
-        DeflectionScreen(SpanFrame f, SectionShape shape, List<MidOption> allMids, List<SupportOption> allLefts,
-                List<SupportOption> allRights) {
-            SpanChecks.ServiceMoments ma = p.serviceMoments();
-            double ec = barfit.section.Deflection.ec(p.materials(), p.code());
-            Map<MidOption, double[]> midIe = new java.util.IdentityHashMap<>();
-            Map<MidOption, Double> midRho = new java.util.IdentityHashMap<>();
-            for (MidOption m : allMids) {
-                BeamSection s = midSection(f, shape, m);
-                midIe.put(m, p.cantilever() ? null : SpanChecks.ieLevels(s, Bending.SAGGING, ma.mid()));
-                midRho.put(m, p.cantilever() ? 0.0 : SpanChecks.rhoPrime(s, Bending.SAGGING));
-            }
-            Map<SupportOption, double[]> leftIe = new java.util.IdentityHashMap<>();
-            Map<SupportOption, double[]> rightIe = new java.util.IdentityHashMap<>();
-            Map<SupportOption, Double> leftRho = new java.util.IdentityHashMap<>();
-            for (SupportOption l : allLefts) {
-                BeamSection s = supportSection(f, shape, l);
-                leftIe.put(l, SpanChecks.ieLevels(s, Bending.HOGGING, ma.left()));
-                leftRho.put(l, SpanChecks.rhoPrime(s, Bending.HOGGING));
-            }
-            for (SupportOption r : allRights) {
-                rightIe.put(r, SpanChecks.ieLevels(supportSection(f, shape, r), Bending.HOGGING, ma.right()));
-            }
-            // the stiffest partners per top bar size, computed once
-            Map<String, double[]> bestLeft = new HashMap<>();
-            Map<String, double[]> bestRight = new HashMap<>();
-            Map<String, double[]> bestMidIe = new HashMap<>();
-            Map<String, Double> bestMidRho = new HashMap<>();
-            Map<String, Double> bestLeftRho = new HashMap<>();
-            for (String tt : topSizes(allMids, allLefts, allRights)) {
-                bestMidRho.put(tt, 0.0);
-                bestLeftRho.put(tt, 0.0);
-            }
-            for (Map.Entry<SupportOption, double[]> e : leftIe.entrySet()) {
-                bestLeft.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
-            }
-            for (Map.Entry<SupportOption, double[]> e : rightIe.entrySet()) {
-                bestRight.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
-            }
-            for (Map.Entry<MidOption, double[]> e : midIe.entrySet()) {
-                if (e.getValue() != null) {
-                    bestMidIe.merge(e.getKey().top().bar().designation(), e.getValue().clone(), this::max);
-                }
-            }
-            for (Map.Entry<MidOption, Double> e : midRho.entrySet()) {
-                bestMidRho.merge(e.getKey().top().bar().designation(), e.getValue(), Math::max);
-            }
-            for (Map.Entry<SupportOption, Double> e : leftRho.entrySet()) {
-                bestLeftRho.merge(e.getKey().bar().designation(), e.getValue(), Math::max);
-            }
-            for (MidOption m : allMids) {
-                String tt = m.top().bar().designation();
-                double rho = p.cantilever() ? bestLeftRho.get(tt) : midRho.get(m);
-                if (passes(ec, ma, bestLeft.get(tt), midIe.get(m), bestRight.get(tt), rho)) {
-                    mids.add(m);
-                }
-            }
-            for (SupportOption l : allLefts) {
-                String tt = l.bar().designation();
-                double rho = p.cantilever() ? leftRho.get(l) : bestMidRho.get(tt);
-                if (passes(ec, ma, leftIe.get(l), bestMidIe.get(tt), bestRight.get(tt), rho)) {
-                    lefts.add(l);
-                }
-            }
-            for (SupportOption r : allRights) {
-                String tt = r.bar().designation();
-                if (passes(ec, ma, bestLeft.get(tt), bestMidIe.get(tt), rightIe.get(r), bestMidRho.get(tt))) {
-                    rights.add(r);
-                }
-            }
-        }
-
-        private java.util.Set<String> topSizes(List<MidOption> ms, List<SupportOption> ls, List<SupportOption> rs) {
-            java.util.Set<String> out = new java.util.TreeSet<>();
-            ms.forEach(m -> out.add(m.top().bar().designation()));
-            ls.forEach(l -> out.add(l.bar().designation()));
-            rs.forEach(r -> out.add(r.bar().designation()));
-            return out;
-        }
-
-        private boolean passes(double ec, SpanChecks.ServiceMoments ma, double[] l, double[] m, double[] r, double rho) {
-            if ((p.leftSupport() && l == null) || (p.rightSupport() && r == null) || (p.midSection() && m == null)) {
-                return false;
-            }
-            double[] d = SpanChecks.deflections(p.span(), p.ends(), ec, ma,
-                    p.leftSupport() ? l : null, m, p.rightSupport() ? r : null, rho);
-            return SpanChecks.within(p.span(), p.limits(), d);
-        }
-
-        private double[] max(double[] a, double[] b) {
-            if (a == null) {
-                return b.clone();
-            }
-            for (int i = 0; i < a.length; i++) {
-                a[i] = Math.max(a[i], b[i]);
-            }
-            return a;
-        }
-
-        List<MidOption> mids() {
-            return mids;
-        }
-
-        List<SupportOption> lefts() {
-            return lefts;
-        }
-
-        List<SupportOption> rights() {
-            return rights;
-        }
-    }
-
-    private List<BeamSection.BarGroup> groups(BarSize bar, List<Integer> counts) {
-        List<BeamSection.BarGroup> g = new ArrayList<>();
-        counts.forEach(c -> g.add(new BeamSection.BarGroup(bar, c)));
-        return g;
-    }
-
-    private BeamSection midSection(SpanFrame f, SectionShape shape, MidOption m) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM, groups(m.bar(), m.counts()),
-                f.det()));
-        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(m.top().bar(),
-                m.top().continuous())), f.det()));
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    private BeamSection supportSection(SpanFrame f, SectionShape shape, SupportOption s) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP, groups(s.bar(), s.counts()),
-                f.det()));
-        if (s.bottom() != null) { // the bottom bars the option was built with
-            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, s.bottom().groups(), f.det()));
-        }
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    /** The mid-span section of an option (bottom bars in tension, the continuous top bars above), for its ties. */
-    private BeamSection midSection(SpanFrame f, SectionShape shape, TopOption top, BarSize bottom, int[] split) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM,
-                groups(bottom, TensionSearch.toList(split)), f.det()));
-        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(top.bar(), top.continuous())),
-                f.det()));
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    /** A support section of an option (top bars in tension, the bottom bars counted there), for its ties. */
-    private BeamSection supportSection(SpanFrame f, SectionShape shape, BarSize top, int[] split,
-            List<BeamSection.BarGroup> bottom) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP,
-                groups(top, TensionSearch.toList(split)), f.det()));
-        if (!bottom.isEmpty()) {
-            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, bottom, f.det()));
-        }
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    /**
-     * What the span's deflection takes from one mid-span option's section, for the deflection cuts: Ie of
-     * Table 24.2.3.5 at the dead, sustained and total service levels, then ρ' (24.2.4.1). Null where the
-     * section takes no part (a cantilever's deflection is its support's).
-     */
-    public double[] deflectionStiffness(SpanFrame f, MidOption m) {
-        if (p.cantilever()) {
-            return null;
-        }
-        BeamSection s = midSection(f, new SectionShape(f.b(), f.h(), p.flange()), m);
-        double[] ie = SpanChecks.ieLevels(s, Bending.SAGGING, p.serviceMoments().mid());
-        return append(ie, SpanChecks.rhoPrime(s, Bending.SAGGING));
-    }
-
-    /** As {@link #deflectionStiffness(SpanFrame, MidOption)} for a support option; ρ' only at a cantilever's support. */
-    public double[] deflectionStiffness(SpanFrame f, SupportOption o, BeamProblem.Place place) {
-        BeamSection s = supportSection(f, new SectionShape(f.b(), f.h(), p.flange()), o);
-        double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING,
-                place == BeamProblem.Place.LEFT ? p.serviceMoments().left() : p.serviceMoments().right());
-        return p.cantilever() ? append(ie, SpanChecks.rhoPrime(s, Bending.HOGGING)) : ie;
-    }
-
-    private static double[] append(double[] a, double v) {
-        double[] out = java.util.Arrays.copyOf(a, a.length + 1);
-        out[a.length] = v;
         return out;
     }
 
@@ -1588,7 +1397,8 @@ public final class BeamGenerator {
         return new FrameOptions(fs.frame(), tops, mids, lefts, rights, fs.best(), fs.bestLayout());
     }
 
-    public BeamProblem problem() {
-        return p;
+    /** The sections of this span's options, for the deflection cuts. */
+    SpanSections sections() {
+        return sections;
     }
 }

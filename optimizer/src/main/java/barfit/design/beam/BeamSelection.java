@@ -190,7 +190,7 @@ public final class BeamSelection {
      * do: with every layer at its own depth, a layout with no more bars but spread over more layers can be
      * the stiffer, and a shallower centroid raises ρ'.)
      */
-    public void cutDeflection(Choice c, BeamGenerator gen) {
+    void cutDeflection(Choice c, SpanSections sections) {
         int fi = sets.indexOf(c.set());
         FrameOptions fs = c.set();
         SpanFrame f = fs.frame();
@@ -198,17 +198,17 @@ public final class BeamSelection {
         LinearExprBuilder weaker = LinearExpr.newBuilder();
         int parts = 1;
         MidOption m0 = c.mid();
-        double[] s0 = known ? stiffness(m0, () -> gen.deflectionStiffness(f, m0)) : null;
+        double[] s0 = known ? stiffness(m0, () -> sections.deflectionStiffness(f, m0)) : null;
         for (int i = 0; i < fs.mids().size(); i++) {
             MidOption m = fs.mids().get(i);
-            if (m == m0 || known && noStiffer(stiffness(m, () -> gen.deflectionStiffness(f, m)), s0)) {
+            if (m == m0 || known && noStiffer(stiffness(m, () -> sections.deflectionStiffness(f, m)), s0)) {
                 weaker.add(midVars.get(fi).get(i));
             }
         }
         parts += weakerSupports(weaker, fs.lefts(), leftVars.get(fi), c.left(), known,
-                o -> gen.deflectionStiffness(f, o, BeamProblem.Place.LEFT));
+                o -> sections.deflectionStiffness(f, o, BeamProblem.Place.LEFT));
         parts += weakerSupports(weaker, fs.rights(), rightVars.get(fi), c.right(), known,
-                o -> gen.deflectionStiffness(f, o, BeamProblem.Place.RIGHT));
+                o -> sections.deflectionStiffness(f, o, BeamProblem.Place.RIGHT));
         model.addLessOrEqual(weaker, parts - 1);
     }
 
