@@ -60,6 +60,7 @@ public final class BeamGenerator {
     private final TensionSearch midSearch;
     private final StirrupChooser chooser;
     private final SpanSections sections;
+    private final Combinations combinations;
     private final List<BeamProblem.Zone> zones;
     private final double lm;
     /** Zone stirrups depend only on the zone, the tension bars (d, As) and the legs asked for: remembered per frame. */
@@ -80,6 +81,7 @@ public final class BeamGenerator {
         this.chooser = new StirrupChooser(p.materials(), p.code(), p.space(), cost);
         this.zones = p.zones();
         this.sections = new SpanSections(p);
+        this.combinations = new Combinations(p, zones);
         this.lm = p.span() / 1000.0;
     }
 
@@ -167,7 +169,7 @@ public final class BeamGenerator {
         List<FrameOptions> kept = new ArrayList<>();
         for (FrameOptions fs : sets) {
             if (fs.frame().lowerBound() < inc + 1e-9) {
-                kept.add(prune(fs, inc));
+                kept.add(combinations.prune(fs, inc));
             }
         }
         return new Output(kept, incumbent, incumbentLayout, new Stats(frames.size(), evaluated, skipped,
@@ -325,9 +327,9 @@ public final class BeamGenerator {
         // a (top, bottom size) whose least possible cost cannot beat the incumbent (or, in table mode, the
         // pair's best so far) is not searched
         MidLimit worth = (t, bb) -> (pairs == null ? incumbent : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
-                - cheapestAbove(lefts, t, p.leftSupport()) - cheapestAbove(rights, t, p.rightSupport());
+                - Combinations.cheapestAbove(lefts, t, p.leftSupport()) - Combinations.cheapestAbove(rights, t, p.rightSupport());
         List<MidOption> mids = new ArrayList<>(mids(f, shape, first, worth));
-        FrameOptions fs = enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        FrameOptions fs = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         if (pairs != null) {
             pairs(fs, pairs);
         }
@@ -336,15 +338,15 @@ public final class BeamGenerator {
             if (t.continuous() == 2) {
                 continue;
             }
-            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
-                    + cheapestAbove(rights, t, p.rightSupport());
+            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + Combinations.cheapestAbove(lefts, t, p.leftSupport())
+                    + Combinations.cheapestAbove(rights, t, p.rightSupport());
             if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
                 mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
                         : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
-                        - cheapestAbove(lefts, tt, p.leftSupport()) - cheapestAbove(rights, tt, p.rightSupport())));
+                        - Combinations.cheapestAbove(lefts, tt, p.leftSupport()) - Combinations.cheapestAbove(rights, tt, p.rightSupport())));
             }
         }
-        FrameOptions out = enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         if (pairs != null) {
             pairs(out, pairs);
         }
@@ -436,40 +438,15 @@ public final class BeamGenerator {
             deflectionPairs(fs, out);
             return;
         }
-        Map<BarSize, List<SupportOption>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOption>> rights = bySize(fs.rights());
+        Map<BarSize, List<SupportOption>> lefts = Combinations.bySize(fs.lefts());
+        Map<BarSize, List<SupportOption>> rights = Combinations.bySize(fs.rights());
         for (MidOption m : fs.mids()) {
-            double total = combination(fs, m, lefts, rights);
+            Combinations.Cheapest c = combinations.cheapestWith(fs.frame(), m, lefts, rights);
+            double total = c == null ? Double.POSITIVE_INFINITY : c.cost();
             int i = index(m.top().bar());
             int j = index(m.bar());
             out[i][j] = Math.min(out[i][j], total);
         }
-    }
-
-    /** The cost of a mid-span option with the cheapest compatible supports (infinite if none). */
-    private double combination(FrameOptions fs, MidOption m, Map<BarSize, List<SupportOption>> lefts,
-            Map<BarSize, List<SupportOption>> rights) {
-        TopOption t = m.top();
-        if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
-            return Double.POSITIVE_INFINITY;
-        }
-        BottomBars key = p.bottomAnchored() ? m.bottom() : null;
-        double total = fs.frame().cost() + t.cost() + m.cost();
-        if (p.leftSupport()) {
-            SupportOption l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key);
-            if (l == null) {
-                return Double.POSITIVE_INFINITY;
-            }
-            total += l.cost();
-        }
-        if (p.rightSupport()) {
-            SupportOption r = cheapestIn(rights, t.bar(), t.continuous(), m, key);
-            if (r == null) {
-                return Double.POSITIVE_INFINITY;
-            }
-            total += r.cost();
-        }
-        return total;
     }
 
     /**
@@ -480,20 +457,20 @@ public final class BeamGenerator {
     private void deflectionPairs(FrameOptions fs, double[][] out) {
         List<MidOption> mids = new ArrayList<>(fs.mids());
         mids.sort(Comparator.comparingDouble((MidOption m) -> m.top().cost() + m.cost()));
-        Map<BarSize, List<SupportOption>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOption>> rights = bySize(fs.rights());
+        Map<BarSize, List<SupportOption>> lefts = Combinations.bySize(fs.lefts());
+        Map<BarSize, List<SupportOption>> rights = Combinations.bySize(fs.rights());
         for (MidOption m : mids) {
             TopOption t = m.top();
-            if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
+            if (!combinations.sizesAllowed(m)) {
                 continue;
             }
             int i = index(t.bar());
             int j = index(m.bar());
-            BottomBars key = p.bottomAnchored() ? m.bottom() : null;
+            BottomBars key = combinations.anchored(m);
             double base = fs.frame().cost() + t.cost() + m.cost();
-            List<SupportOption> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key,
+            List<SupportOption> ls = Combinations.compatible(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key,
                     p.leftSupport());
-            List<SupportOption> rs = compatible(rights, t.bar(), t.continuous(), m, key, p.rightSupport());
+            List<SupportOption> rs = Combinations.compatible(rights, t.bar(), t.continuous(), m, key, p.rightSupport());
             if (ls.isEmpty() || rs.isEmpty()) {
                 continue;
             }
@@ -512,44 +489,13 @@ public final class BeamGenerator {
                     if (total >= out[i][j] - 1e-9) {
                         break;
                     }
-                    if (BeamVerifier.deflectionOk(p, layout(fs.frame(), m, l, r))) {
+                    if (BeamVerifier.deflectionOk(p, combinations.layout(fs.frame(), m, l, r))) {
                         out[i][j] = total;
                         break;
                     }
                 }
             }
         }
-    }
-
-    /** The support options compatible with a mid-span option, cheapest first; a single null where no support. */
-    private static List<SupportOption> compatible(Map<BarSize, List<SupportOption>> index, BarSize bar, int nc, MidOption m,
-            BottomBars bottom, boolean present) {
-        if (!present) {
-            java.util.List<SupportOption> none = new ArrayList<>();
-            none.add(null);
-            return none;
-        }
-        List<SupportOption> out = new ArrayList<>();
-        for (SupportOption s : index.getOrDefault(bar, List.of())) {
-            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottom(), bottom)) {
-                out.add(s);
-            }
-        }
-        return out;
-    }
-
-    /** The cheapest support option of the top option's size holding its continuous bars (0 if no support). */
-    private static double cheapestAbove(List<SupportOption> opts, TopOption t, boolean present) {
-        if (!present) {
-            return 0;
-        }
-        double best = Double.POSITIVE_INFINITY;
-        for (SupportOption s : opts) {
-            if (s.bar().equals(t.bar()) && s.counts().get(0) >= t.continuous()) {
-                best = Math.min(best, s.cost());
-            }
-        }
-        return best;
     }
 
     /**
@@ -589,8 +535,8 @@ public final class BeamGenerator {
         }
         List<MidOption> mids = mids(f, shape, tops, (t, bb) -> (pairs == null ? incumbent
                 : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
-                - (knownLeft == null ? 0 : cheapestAbove(knownLeft, t, p.leftSupport()))
-                - (knownRight == null ? 0 : cheapestAbove(knownRight, t, p.rightSupport())));
+                - (knownLeft == null ? 0 : Combinations.cheapestAbove(knownLeft, t, p.leftSupport()))
+                - (knownRight == null ? 0 : Combinations.cheapestAbove(knownRight, t, p.rightSupport())));
         List<BottomBars> bottoms;
         if (p.bottomAnchored()) {
             java.util.Set<BottomBars> distinct = new java.util.LinkedHashSet<>();
@@ -617,7 +563,7 @@ public final class BeamGenerator {
             lefts = screen.lefts();
             rights = screen.rights();
         }
-        FrameOptions out = enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
+        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         if (pairs != null) {
             pairs(out, pairs);
         }
@@ -633,8 +579,8 @@ public final class BeamGenerator {
             List<SupportOption> lefts, List<SupportOption> rights) {
         List<TopOption> first = tops.stream().filter(t -> t.continuous() == 2).toList();
         List<MidOption> mids = new ArrayList<>(mids(f, shape, first, (t, bb) -> (pairs == null ? incumbent
-                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost() - cheapestAbove(lefts, t, p.leftSupport())
-                - cheapestAbove(rights, t, p.rightSupport())));
+                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost() - Combinations.cheapestAbove(lefts, t, p.leftSupport())
+                - Combinations.cheapestAbove(rights, t, p.rightSupport())));
         FrameOptions fs = screened(f, shape, tops, new ArrayList<>(mids), lefts, rights, pairs);
         double cut = Math.min(incumbent, fs.best());
         boolean more = false;
@@ -642,12 +588,12 @@ public final class BeamGenerator {
             if (t.continuous() == 2) {
                 continue;
             }
-            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
-                    + cheapestAbove(rights, t, p.rightSupport());
+            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + Combinations.cheapestAbove(lefts, t, p.leftSupport())
+                    + Combinations.cheapestAbove(rights, t, p.rightSupport());
             if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
                 mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
                         : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
-                        - cheapestAbove(lefts, tt, p.leftSupport()) - cheapestAbove(rights, tt, p.rightSupport())));
+                        - Combinations.cheapestAbove(lefts, tt, p.leftSupport()) - Combinations.cheapestAbove(rights, tt, p.rightSupport())));
                 more = true;
             }
         }
@@ -1257,144 +1203,9 @@ public final class BeamGenerator {
         return out;
     }
 
-    // ------------------------------------------------------------------ combining and bounding
-
-    /** The cheapest compatible support option, or null. */
-    static SupportOption cheapestSupport(List<SupportOption> opts, BarSize bar, int nc, MidOption m, BottomBars bottom) {
-        SupportOption best = null;
-        for (SupportOption s : opts) {
-            if (s.bar().equals(bar) && s.counts().get(0) >= nc && s.holds(m)
-                    && java.util.Objects.equals(s.bottom(), bottom) && (best == null || s.cost() < best.cost())) {
-                best = s;
-            }
-        }
-        return best;
-    }
-
-    /** Builds the layout of a combination. */
-    public BeamLayout layout(SpanFrame f, MidOption m, SupportOption l, SupportOption r) {
-        List<Stirrups> st = new ArrayList<>();
-        for (int i = 0; i < zones.size(); i++) {
-            Stirrups s = m.zones().get(i);
-            if (s == null && l != null) {
-                s = l.zones().get(i);
-            }
-            if (s == null && r != null) {
-                s = r.zones().get(i);
-            }
-            st.add(s);
-        }
-        double extL = l == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
-        double extR = r == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
-        return new BeamLayout(f.b(), f.h(), p.flange(), f.stirrupBar(), f.skin(), m.top().bar(), m.top().continuous(),
-                l == null ? null : l.counts(), r == null ? null : r.counts(), m.bar(), m.counts(), st, extL, extR);
-    }
-
-    /** Support options by top bar size, cheapest first. */
-    private static Map<BarSize, List<SupportOption>> bySize(List<SupportOption> opts) {
-        Map<BarSize, List<SupportOption>> out = new java.util.IdentityHashMap<>();
-        for (SupportOption s : opts) {
-            out.computeIfAbsent(s.bar(), k -> new ArrayList<>()).add(s);
-        }
-        out.values().forEach(l -> l.sort(Comparator.comparingDouble(SupportOption::cost)));
-        return out;
-    }
-
-    private static SupportOption cheapestIn(Map<BarSize, List<SupportOption>> index, BarSize bar, int nc, MidOption m,
-            BottomBars bottom) {
-        List<SupportOption> l = index.get(bar);
-        if (l == null) {
-            return null;
-        }
-        for (SupportOption s : l) {
-            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottom(), bottom)) {
-                return s;
-            }
-        }
-        return null;
-    }
-
-    /** The frame's cheapest combination that passes, found by plain enumeration of its options. */
-    private FrameOptions enumerate(FrameOptions fs) {
-        double best = Double.POSITIVE_INFINITY;
-        BeamLayout bestLayout = null;
-        Map<BarSize, List<SupportOption>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOption>> rights = bySize(fs.rights());
-        for (MidOption m : fs.mids()) {
-            TopOption t = m.top();
-            if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
-                continue;
-            }
-            BottomBars key = p.bottomAnchored() ? m.bottom() : null;
-            SupportOption l = null;
-            SupportOption r = null;
-            if (p.leftSupport()) {
-                l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key);
-                if (l == null) {
-                    continue;
-                }
-            }
-            if (p.rightSupport()) {
-                r = cheapestIn(rights, t.bar(), t.continuous(), m, key);
-                if (r == null) {
-                    continue;
-                }
-            }
-            double total = fs.frame().cost() + t.cost() + m.cost() + (l == null ? 0 : l.cost()) + (r == null ? 0 : r.cost());
-            if (total < best - 1e-9) {
-                BeamLayout lay = layout(fs.frame(), m, l, r);
-                if (fs.frame().deflection() && !BeamVerifier.verify(p, lay, false).ok()) {
-                    continue;
-                }
-                best = total;
-                bestLayout = lay;
-            }
-        }
-        return new FrameOptions(fs.frame(), fs.tops(), fs.mids(), fs.lefts(), fs.rights(), best, bestLayout);
-    }
-
-    /** Drops the options that cannot be part of anything cheaper than the incumbent. */
-    private FrameOptions prune(FrameOptions fs, double incumbent) {
-        double frame = fs.frame().cost();
-        Map<String, Double> cheapestLeft = new HashMap<>();
-        Map<String, Double> cheapestRight = new HashMap<>();
-        for (SupportOption s : fs.lefts()) {
-            cheapestLeft.merge(s.bar().designation(), s.cost(), Math::min);
-        }
-        for (SupportOption s : fs.rights()) {
-            cheapestRight.merge(s.bar().designation(), s.cost(), Math::min);
-        }
-        List<MidOption> mids = new ArrayList<>();
-        Map<String, Double> cheapestMidPlusTop = new HashMap<>();
-        for (MidOption m : fs.mids()) {
-            String tb = m.top().bar().designation();
-            double lb = frame + m.top().cost() + m.cost() + (p.leftSupport() ? cheapestLeft.getOrDefault(tb, 1e300) : 0)
-                    + (p.rightSupport() ? cheapestRight.getOrDefault(tb, 1e300) : 0);
-            if (lb <= incumbent + 1e-9) {
-                mids.add(m);
-                cheapestMidPlusTop.merge(tb, m.top().cost() + m.cost(), Math::min);
-            }
-        }
-        List<TopOption> tops = fs.tops().stream().filter(t -> mids.stream().anyMatch(m -> m.top().equals(t))).toList();
-        List<SupportOption> lefts = new ArrayList<>();
-        for (SupportOption s : fs.lefts()) {
-            String tb = s.bar().designation();
-            double lb = frame + cheapestMidPlusTop.getOrDefault(tb, 1e300) + s.cost()
-                    + (p.rightSupport() ? cheapestRight.getOrDefault(tb, 1e300) : 0);
-            if (lb <= incumbent + 1e-9) {
-                lefts.add(s);
-            }
-        }
-        List<SupportOption> rights = new ArrayList<>();
-        for (SupportOption s : fs.rights()) {
-            String tb = s.bar().designation();
-            double lb = frame + cheapestMidPlusTop.getOrDefault(tb, 1e300) + s.cost()
-                    + (p.leftSupport() ? cheapestLeft.getOrDefault(tb, 1e300) : 0);
-            if (lb <= incumbent + 1e-9) {
-                rights.add(s);
-            }
-        }
-        return new FrameOptions(fs.frame(), tops, mids, lefts, rights, fs.best(), fs.bestLayout());
+    /** Builds the layout of a combination (a support option null where the span has no such support). */
+    public BeamLayout layout(SpanFrame f, MidOption m, SupportOption left, SupportOption right) {
+        return combinations.layout(f, m, left, right);
     }
 
     /** The sections of this span's options, for the deflection cuts. */
