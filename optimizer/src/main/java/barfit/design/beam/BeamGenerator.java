@@ -53,6 +53,54 @@ public final class BeamGenerator {
     public record Output(List<FrameOptions> sets, double incumbent, BeamLayout incumbentLayout, Stats stats) {
     }
 
+    /**
+     * What a frame's options must beat to be worth searching, and what evaluating a frame lowers: for a
+     * span's design one cost, the cheapest design found; for pricing a size one cost per pair of top and
+     * bottom bar sizes.
+     */
+    interface Target {
+        /** A combination with top bars of size {@code top} and bottom bars of size {@code bottom} pays only below this. */
+        double limit(BarSize top, BarSize bottom);
+
+        /** Any combination with top bars of this size pays only below this. */
+        double limitForTop(BarSize top);
+
+        /** The one cost every combination must beat, or infinity where each pair of sizes has its own. */
+        double common();
+
+        /** Takes account of a frame's options and their cheapest combination. */
+        void lower(FrameOptions evaluated);
+    }
+
+    /** The span's design: a combination pays only below the cheapest found (or the search's ceiling). */
+    private static final class Cheapest implements Target {
+        private double cost;
+
+        Cheapest(double cost) {
+            this.cost = cost;
+        }
+
+        @Override
+        public double limit(BarSize top, BarSize bottom) {
+            return cost;
+        }
+
+        @Override
+        public double limitForTop(BarSize top) {
+            return cost;
+        }
+
+        @Override
+        public double common() {
+            return cost;
+        }
+
+        @Override
+        public void lower(FrameOptions evaluated) {
+            cost = Math.min(cost, evaluated.best());
+        }
+    }
+
     private final BeamProblem p;
     private final CostModel cost;
     private final SectionProbe midProbe;
@@ -114,7 +162,7 @@ public final class BeamGenerator {
     public Output generate(double slack, double ceiling) {
         long t0 = System.nanoTime();
         final double roof = loose(ceiling, slack);
-        List<SpanFrame> frames = frames();
+        List<SpanFrame> frames = cachedFrames();
         List<FrameOptions> sets = new ArrayList<>();
         double incumbent = Double.POSITIVE_INFINITY;
         BeamLayout incumbentLayout = null;
@@ -131,7 +179,7 @@ public final class BeamGenerator {
         }
         if (opener != null && frames.get(0) != opener && frames.get(0).deflection()) {
             evaluated++;
-            FrameOptions fs = evaluate(opener, Math.min(loose(incumbent, slack), roof));
+            FrameOptions fs = evaluate(opener, new Cheapest(Math.min(loose(incumbent, slack), roof)));
             if (fs != null) {
                 sets.add(fs);
                 if (fs.best() < incumbent) {
@@ -155,7 +203,7 @@ public final class BeamGenerator {
                 continue; // a closer look at its bars shows it cannot beat the incumbent
             }
             evaluated++;
-            FrameOptions fs = evaluate(f, Math.min(loose(incumbent, slack), roof));
+            FrameOptions fs = evaluate(f, new Cheapest(Math.min(loose(incumbent, slack), roof)));
             if (fs == null) {
                 continue;
             }
@@ -292,16 +340,11 @@ public final class BeamGenerator {
         return checks.stream().allMatch(CheckResult::pass);
     }
 
-    private FrameOptions evaluate(SpanFrame f, double incumbent) {
-        return evaluate(f, incumbent, null);
-    }
-
     /**
-     * The frame's options and its cheapest combination. With {@code pairs} (table mode) it also lowers
-     * {@code pairs[i][j]} to the cheapest passing combination with top bars of size i and bottom bars of
-     * size j, and prunes only what cannot improve any pair of that top size.
+     * The frame's options and its cheapest combination, searched only as far as {@code target} says they
+     * could pay; null if the frame fails whatever its bars.
      */
-    private FrameOptions evaluate(SpanFrame f, double incumbent, double[][] pairs) {
+    FrameOptions evaluate(SpanFrame f, Target target) {
         zoneMemo.clear();
         useFrame(f);
         SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
@@ -311,107 +354,82 @@ public final class BeamGenerator {
         }
         List<TopOption> tops = tops(f);
         if (p.bottomAnchored() || f.deflection()) {
-            return everything(f, shape, tops, incumbent, pairs);
+            return everything(f, shape, tops, target);
         }
         // supports first (they do not depend on the other options), then the mid-span options for two
         // continuous bars, then more continuous bars only where a bound says they could pay
-        List<BottomBars> none = NO_BOTTOM_BARS;
-        java.util.function.ToDoubleFunction<BarSize> supportLimit = pairs != null || Double.isInfinite(incumbent)
-                ? t -> Double.POSITIVE_INFINITY
-                : t -> incumbent - leastWithout(f, tops, t);
-        List<SupportOption> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), supportLimit, none)
-                : List.of();
-        List<SupportOption> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), supportLimit, none)
-                : List.of();
-        List<TopOption> first = tops.stream().filter(t -> t.continuous() == 2).toList();
-        // a (top, bottom size) whose least possible cost cannot beat the incumbent (or, in table mode, the
-        // pair's best so far) is not searched
-        MidLimit worth = (t, bb) -> (pairs == null ? incumbent : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
-                - Combinations.cheapestAbove(lefts, t, p.leftSupport()) - Combinations.cheapestAbove(rights, t, p.rightSupport());
-        List<MidOption> mids = new ArrayList<>(mids(f, shape, first, worth));
-        FrameOptions fs = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
-        if (pairs != null) {
-            pairs(fs, pairs);
-        }
-        double cut = Math.min(incumbent, fs.best());
+        java.util.function.ToDoubleFunction<BarSize> supportLimit = supportLimit(f, tops, target);
+        List<SupportOption> lefts = p.leftSupport()
+                ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), supportLimit, NO_BOTTOM_BARS) : List.of();
+        List<SupportOption> rights = p.rightSupport()
+                ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), supportLimit, NO_BOTTOM_BARS) : List.of();
+        List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
+        List<MidOption> mids = new ArrayList<>(mids(f, shape, twoContinuous, midLimit(f, target, lefts, rights)));
+        target.lower(combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY,
+                null)));
+        addMoreContinuous(f, shape, tops, mids, target, lefts, rights);
+        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
+                Double.POSITIVE_INFINITY, null));
+        target.lower(out);
+        return out;
+    }
+
+    /**
+     * Per top bar size, the cost at or above which a support option cannot be part of anything that pays:
+     * what must be beaten less the least the rest of a combination costs (no limit without one cost to beat).
+     */
+    private java.util.function.ToDoubleFunction<BarSize> supportLimit(SpanFrame f, List<TopOption> tops,
+            Target target) {
+        double common = target.common();
+        return Double.isInfinite(common) ? t -> Double.POSITIVE_INFINITY : t -> common - leastWithout(f, tops, t);
+    }
+
+    /**
+     * A mid-span option pays only below what its pair of sizes must beat less the frame, its top option
+     * and the cheapest support options that could go with it ({@code lefts} or {@code rights} null: not
+     * known yet, counted as nothing).
+     */
+    private MidLimit midLimit(SpanFrame f, Target target, List<SupportOption> lefts, List<SupportOption> rights) {
+        return (top, bottom) -> target.limit(top.bar(), bottom) - f.cost() - top.cost()
+                - (lefts == null ? 0 : Combinations.cheapestAbove(lefts, top, p.leftSupport()))
+                - (rights == null ? 0 : Combinations.cheapestAbove(rights, top, p.rightSupport()));
+    }
+
+    /**
+     * Adds the mid-span options of the top options with more than two continuous bars whose least cost
+     * (the frame's bounds, the cheapest supports) could still pay; whether it added any.
+     */
+    private boolean addMoreContinuous(SpanFrame f, SectionShape shape, List<TopOption> tops, List<MidOption> mids,
+            Target target, List<SupportOption> lefts, List<SupportOption> rights) {
+        boolean added = false;
         for (TopOption t : tops) {
             if (t.continuous() == 2) {
                 continue;
             }
-            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + Combinations.cheapestAbove(lefts, t, p.leftSupport())
+            double least = f.cost() + t.cost() + bottomLowerBound(f, t)
+                    + Combinations.cheapestAbove(lefts, t, p.leftSupport())
                     + Combinations.cheapestAbove(rights, t, p.rightSupport());
-            if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
-                mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
-                        : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
-                        - Combinations.cheapestAbove(lefts, tt, p.leftSupport()) - Combinations.cheapestAbove(rights, tt, p.rightSupport())));
+            if (least < target.limitForTop(t.bar())) {
+                mids.addAll(mids(f, shape, List.of(t), midLimit(f, target, lefts, rights)));
+                added = true;
             }
         }
-        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
-        if (pairs != null) {
-            pairs(out, pairs);
-        }
-        return out;
-    }
-
-    // ------------------------------------------------------------------ table mode
-
-    /**
-     * The exact cheapest cost of the span in one section size for each pair of bar sizes: {@code cost[i][j]}
-     * for top bars of the space's i-th bar size and bottom bars of its j-th, over every stirrup size,
-     * infinite where no layout of that pair passes. Nothing outside the size prunes it, so a schedule can
-     * price the size for any set of bar sizes it allows.
-     */
-    public record PairTable(double width, double height, double[][] cost) {
-        /** The cheapest over the pairs whose sizes are both allowed. */
-        public double best(boolean[] allowed) {
-            double best = Double.POSITIVE_INFINITY;
-            for (int i = 0; i < cost.length; i++) {
-                for (int j = 0; j < cost.length; j++) {
-                    if (allowed[i] && allowed[j]) {
-                        best = Math.min(best, cost[i][j]);
-                    }
-                }
-            }
-            return best;
-        }
+        return added;
     }
 
     private List<SpanFrame> allFrames;
 
     /** The frames of the problem, computed once. */
-    private List<SpanFrame> cachedFrames() {
+    List<SpanFrame> cachedFrames() {
         if (allFrames == null) {
             allFrames = frames();
         }
         return allFrames;
     }
 
-    /** The lower bound of each section size (b x h), the least over its stirrup sizes; absent sizes have no frame. */
-    public Map<List<Double>, Double> sizeLowerBounds() {
-        Map<List<Double>, Double> out = new LinkedHashMap<>();
-        for (SpanFrame f : cachedFrames()) {
-            out.merge(List.of(f.b(), f.h()), f.lowerBound(), Math::min);
-        }
-        return out;
-    }
-
-    public PairTable pairTable(double b, double h) {
-        int n = p.space().barSizes().size();
-        double[][] cost = new double[n][n];
-        for (double[] row : cost) {
-            java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
-        }
-        for (SpanFrame f : cachedFrames()) {
-            if (f.b() == b && f.h() == h && Double.isFinite(f.lowerBound())) {
-                evaluate(f, Double.POSITIVE_INFINITY, cost);
-            }
-        }
-        return new PairTable(b, h, cost);
-    }
-
     private final Map<BarSize, Integer> barIndex = new java.util.IdentityHashMap<>();
 
-    private int index(BarSize bar) {
+    int index(BarSize bar) {
         Integer i = barIndex.get(bar);
         if (i == null) {
             i = p.space().barSizes().indexOf(bar);
@@ -420,82 +438,8 @@ public final class BeamGenerator {
         return i;
     }
 
-    /** The dearest pair of a top size found so far: a top option that cannot beat it improves no pair. */
-    private double worstPair(double[][] pairs, BarSize top) {
-        int i = index(top);
-        double worst = 0;
-        for (int j = 0; j < pairs.length; j++) {
-            if (p.maxBarSizes() >= 2 || j == i) {
-                worst = Math.max(worst, pairs[i][j]);
-            }
-        }
-        return worst;
-    }
-
-    /** Lowers each pair's entry to the cheapest passing combination of the frame's options. */
-    private void pairs(FrameOptions fs, double[][] out) {
-        if (fs.frame().deflection()) {
-            deflectionPairs(fs, out);
-            return;
-        }
-        Map<BarSize, List<SupportOption>> lefts = Combinations.bySize(fs.lefts());
-        Map<BarSize, List<SupportOption>> rights = Combinations.bySize(fs.rights());
-        for (MidOption m : fs.mids()) {
-            Combinations.Cheapest c = combinations.cheapestWith(fs.frame(), m, lefts, rights);
-            double total = c == null ? Double.POSITIVE_INFINITY : c.cost();
-            int i = index(m.top().bar());
-            int j = index(m.bar());
-            out[i][j] = Math.min(out[i][j], total);
-        }
-    }
-
-    /**
-     * Below Table 9.3.1.1 the cheapest compatible supports may fail deflection with a mid-span option
-     * while dearer ones pass: search each pair's combinations cheapest first, pruned by cost, asking the
-     * section model's span checks, so each entry is exact.
-     */
-    private void deflectionPairs(FrameOptions fs, double[][] out) {
-        List<MidOption> mids = new ArrayList<>(fs.mids());
-        mids.sort(Comparator.comparingDouble((MidOption m) -> m.top().cost() + m.cost()));
-        Map<BarSize, List<SupportOption>> lefts = Combinations.bySize(fs.lefts());
-        Map<BarSize, List<SupportOption>> rights = Combinations.bySize(fs.rights());
-        for (MidOption m : mids) {
-            TopOption t = m.top();
-            if (!combinations.sizesAllowed(m)) {
-                continue;
-            }
-            int i = index(t.bar());
-            int j = index(m.bar());
-            BottomBars key = combinations.anchored(m);
-            double base = fs.frame().cost() + t.cost() + m.cost();
-            List<SupportOption> ls = Combinations.compatible(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, key,
-                    p.leftSupport());
-            List<SupportOption> rs = Combinations.compatible(rights, t.bar(), t.continuous(), m, key, p.rightSupport());
-            if (ls.isEmpty() || rs.isEmpty()) {
-                continue;
-            }
-            double minR = rs.get(0) == null ? 0 : rs.get(0).cost();
-            double minL = ls.get(0) == null ? 0 : ls.get(0).cost();
-            if (base + minL + minR >= out[i][j] - 1e-9) {
-                continue;
-            }
-            for (SupportOption l : ls) {
-                double withL = base + (l == null ? 0 : l.cost());
-                if (withL + minR >= out[i][j] - 1e-9) {
-                    break;
-                }
-                for (SupportOption r : rs) {
-                    double total = withL + (r == null ? 0 : r.cost());
-                    if (total >= out[i][j] - 1e-9) {
-                        break;
-                    }
-                    if (BeamVerifier.deflectionOk(p, combinations.layout(fs.frame(), m, l, r))) {
-                        out[i][j] = total;
-                        break;
-                    }
-                }
-            }
-        }
+    Combinations combinations() {
+        return combinations;
     }
 
     /**
@@ -512,31 +456,23 @@ public final class BeamGenerator {
     }
 
     /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
-    private FrameOptions everything(SpanFrame f, SectionShape shape, List<TopOption> tops, double incumbent, double[][] pairs) {
-        // deflection and anchorage only add demands: what cannot beat the incumbent (or the pair's best so
-        // far) on cost alone is not searched
-        java.util.function.ToDoubleFunction<BarSize> limit = pairs != null || Double.isInfinite(incumbent)
-                ? t -> Double.POSITIVE_INFINITY
-                : t -> incumbent - leastWithout(f, tops, t);
+    private FrameOptions everything(SpanFrame f, SectionShape shape, List<TopOption> tops, Target target) {
+        // deflection and anchorage only add demands: what cannot beat the target on cost alone is not searched
+        java.util.function.ToDoubleFunction<BarSize> limit = supportLimit(f, tops, target);
         // without anchored bottom bars the supports do not depend on the mid-span options: find them first,
         // so the mid-span search knows the least the supports add
-        List<SupportOption> early = null;
-        List<SupportOption> earlyRight = null;
+        List<SupportOption> knownLeft = null;
+        List<SupportOption> knownRight = null;
         if (!p.bottomAnchored()) {
-            List<BottomBars> none = NO_BOTTOM_BARS;
-            early = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, none) : List.of();
-            earlyRight = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, none)
-                    : List.of();
+            knownLeft = p.leftSupport()
+                    ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, NO_BOTTOM_BARS) : List.of();
+            knownRight = p.rightSupport()
+                    ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, NO_BOTTOM_BARS) : List.of();
         }
-        final List<SupportOption> knownLeft = early;
-        final List<SupportOption> knownRight = earlyRight;
         if (f.deflection() && !p.bottomAnchored()) {
-            return deflectionFrame(f, shape, tops, incumbent, pairs, knownLeft, knownRight);
+            return belowMinimumDepth(f, shape, tops, target, knownLeft, knownRight);
         }
-        List<MidOption> mids = mids(f, shape, tops, (t, bb) -> (pairs == null ? incumbent
-                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
-                - (knownLeft == null ? 0 : Combinations.cheapestAbove(knownLeft, t, p.leftSupport()))
-                - (knownRight == null ? 0 : Combinations.cheapestAbove(knownRight, t, p.rightSupport())));
+        List<MidOption> mids = mids(f, shape, tops, midLimit(f, target, knownLeft, knownRight));
         List<BottomBars> bottoms;
         if (p.bottomAnchored()) {
             java.util.Set<BottomBars> distinct = new java.util.LinkedHashSet<>();
@@ -551,22 +487,21 @@ public final class BeamGenerator {
                 ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
         List<SupportOption> rights = knownRight != null ? knownRight : p.rightSupport()
                 ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
-        return screened(f, shape, tops, mids, lefts, rights, pairs);
+        return screened(f, shape, tops, mids, lefts, rights, target);
     }
 
-    /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; pairs lowered. */
-    private FrameOptions screened(SpanFrame f, SectionShape shape, List<TopOption> tops, List<MidOption> mids, List<SupportOption> lefts,
-            List<SupportOption> rights, double[][] pairs) {
+    /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; the target lowered. */
+    private FrameOptions screened(SpanFrame f, SectionShape shape, List<TopOption> tops, List<MidOption> mids,
+            List<SupportOption> lefts, List<SupportOption> rights, Target target) {
         if (f.deflection()) {
             DeflectionScreen screen = new DeflectionScreen(p, sections, f, shape, mids, lefts, rights);
             mids = screen.mids();
             lefts = screen.lefts();
             rights = screen.rights();
         }
-        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
-        if (pairs != null) {
-            pairs(out, pairs);
-        }
+        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
+                Double.POSITIVE_INFINITY, null));
+        target.lower(out);
         return out;
     }
 
@@ -575,29 +510,13 @@ public final class BeamGenerator {
      * their best passing combination then bounds which top options with more continuous bars (stiffer,
      * dearer) are searched.
      */
-    private FrameOptions deflectionFrame(SpanFrame f, SectionShape shape, List<TopOption> tops, double incumbent, double[][] pairs,
+    private FrameOptions belowMinimumDepth(SpanFrame f, SectionShape shape, List<TopOption> tops, Target target,
             List<SupportOption> lefts, List<SupportOption> rights) {
-        List<TopOption> first = tops.stream().filter(t -> t.continuous() == 2).toList();
-        List<MidOption> mids = new ArrayList<>(mids(f, shape, first, (t, bb) -> (pairs == null ? incumbent
-                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost() - Combinations.cheapestAbove(lefts, t, p.leftSupport())
-                - Combinations.cheapestAbove(rights, t, p.rightSupport())));
-        FrameOptions fs = screened(f, shape, tops, new ArrayList<>(mids), lefts, rights, pairs);
-        double cut = Math.min(incumbent, fs.best());
-        boolean more = false;
-        for (TopOption t : tops) {
-            if (t.continuous() == 2) {
-                continue;
-            }
-            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + Combinations.cheapestAbove(lefts, t, p.leftSupport())
-                    + Combinations.cheapestAbove(rights, t, p.rightSupport());
-            if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
-                mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
-                        : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
-                        - Combinations.cheapestAbove(lefts, tt, p.leftSupport()) - Combinations.cheapestAbove(rights, tt, p.rightSupport())));
-                more = true;
-            }
-        }
-        return more ? screened(f, shape, tops, mids, lefts, rights, pairs) : fs;
+        List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
+        List<MidOption> mids = new ArrayList<>(mids(f, shape, twoContinuous, midLimit(f, target, lefts, rights)));
+        FrameOptions first = screened(f, shape, tops, new ArrayList<>(mids), lefts, rights, target);
+        boolean more = addMoreContinuous(f, shape, tops, mids, target, lefts, rights);
+        return more ? screened(f, shape, tops, mids, lefts, rights, target) : first;
     }
 
     private List<TopOption> tops(SpanFrame f) {
@@ -746,7 +665,7 @@ public final class BeamGenerator {
      * the fewest bars of size i the section model's strength bound allows over their real extension, with
      * the leanest stirrups of the support's zones.
      */
-    private double[][] pairLowerBound(SpanFrame f) {
+    double[][] pairLowerBound(SpanFrame f) {
         useFrame(f);
         int nb = p.space().barSizes().size();
         double[][] out = new double[nb][nb];
@@ -813,39 +732,6 @@ public final class BeamGenerator {
                     continue;
                 }
                 out[i][j] = f.cost() + top + bottomBarLowerBound(f, most, u) + leanMid + supports;
-            }
-        }
-        return out;
-    }
-
-    /**
-     * Per pair of bar sizes, a lower bound on the span in one section size (the least over its stirrup
-     * sizes), or null where the problem has no frame of that size. Cheap: no bars are searched.
-     */
-    public double[][] pairLowerBounds(double b, double h) {
-        double[][] out = null;
-        for (SpanFrame f : cachedFrames()) {
-            if (f.b() == b && f.h() == h) {
-                double[][] lb = Double.isFinite(f.lowerBound()) ? pairLowerBound(f) : null;
-                if (lb == null) {
-                    continue;
-                }
-                if (out == null) {
-                    out = lb;
-                } else {
-                    for (int i = 0; i < out.length; i++) {
-                        for (int j = 0; j < out.length; j++) {
-                            out[i][j] = Math.min(out[i][j], lb[i][j]);
-                        }
-                    }
-                }
-            }
-        }
-        if (out == null && cachedFrames().stream().anyMatch(f -> f.b() == b && f.h() == h)) {
-            int nb = p.space().barSizes().size();
-            out = new double[nb][nb];
-            for (double[] row : out) {
-                java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
             }
         }
         return out;
