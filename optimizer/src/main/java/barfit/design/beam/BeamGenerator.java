@@ -102,44 +102,54 @@ public final class BeamGenerator {
     }
 
     private final BeamProblem p;
-    private final CostModel cost;
-    private final SectionProbe midProbe;
-    private final SectionProbe supportProbe;
-    private final TensionSearch midSearch;
-    private final StirrupChooser chooser;
-    private final SpanSections sections;
+    private final SpanContext ctx;
     private final Combinations combinations;
-    private final List<BeamProblem.Zone> zones;
-    private final double lm;
+    /** The span's frames, made at the first use. */
+    private List<SpanFrame> frames;
+    /** The bounds of the frame last bounded or evaluated (see {@link #bounds}). */
+    private FrameBounds bounds;
     /** Zone stirrups depend only on the zone, the tension bars (d, As) and the legs asked for: remembered per frame. */
     private final Map<ZoneKey, Stirrups> zoneMemo = new HashMap<>();
 
     private record ZoneKey(int zone, double d, double as, int legs, int mostLegs, double maxSpacing) {
     }
 
-    /** Zone indices per place, computed once. */
-    private final Map<BeamProblem.Place, List<Integer>> zonesAt = new java.util.EnumMap<>(BeamProblem.Place.class);
-
     public BeamGenerator(BeamProblem problem, CostModel cost) {
         this.p = problem;
-        this.cost = cost;
-        this.midProbe = new SectionProbe(p.materials(), p.code());
-        this.supportProbe = new SectionProbe(p.materials(), p.code());
-        this.midSearch = new TensionSearch(midProbe, p.mMid() == null ? 0 : p.mMid());
-        this.chooser = new StirrupChooser(p.materials(), p.code(), p.space(), cost);
-        this.zones = p.zones();
-        this.sections = new SpanSections(p);
-        this.combinations = new Combinations(p, zones);
-        this.lm = p.span() / 1000.0;
+        this.ctx = new SpanContext(problem, cost);
+        this.combinations = new Combinations(problem, ctx.zones());
     }
 
-    private double barCost(BarSize bar, int count, double length) {
-        return cost.bars(bar, count, length);
+    SpanContext context() {
+        return ctx;
     }
 
-    private double stirrupCost(double b, double h, Stirrups s, BeamProblem.Zone z) {
-        return cost.rates().stirrupsPerKg() * s.bar().massPerMetre() * BeamLayout.stirrupSets(z.length(), s.spacing())
-                * cost.stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0;
+    List<SpanFrame> frames() {
+        if (frames == null) {
+            frames = SpanFrames.of(ctx);
+        }
+        return frames;
+    }
+
+    /**
+     * No design of the span costs less than this: the least of its frames' lower bounds (concrete,
+     * formwork, skin bars, and the section model's strength bound on the bars and stirrups); infinite
+     * when no frame can hold it.
+     */
+    public double leastCost() {
+        double least = Double.POSITIVE_INFINITY;
+        for (SpanFrame f : frames()) {
+            least = Math.min(least, f.lowerBound());
+        }
+        return least;
+    }
+
+    /** A frame's bounds; those of the last frame asked about are kept, so a frame bounded then evaluated computes them once. */
+    FrameBounds bounds(SpanFrame f) {
+        if (bounds == null || bounds.frame() != f) {
+            bounds = new FrameBounds(ctx, f);
+        }
+        return bounds;
     }
 
     public Output generate() {
@@ -162,7 +172,7 @@ public final class BeamGenerator {
     public Output generate(double slack, double ceiling) {
         long t0 = System.nanoTime();
         final double roof = loose(ceiling, slack);
-        List<SpanFrame> frames = cachedFrames();
+        List<SpanFrame> frames = frames();
         List<FrameOptions> sets = new ArrayList<>();
         double incumbent = Double.POSITIVE_INFINITY;
         BeamLayout incumbentLayout = null;
@@ -199,7 +209,7 @@ public final class BeamGenerator {
                 skipped = frames.size() - i;
                 break;
             }
-            if (Double.isFinite(Math.min(incumbent, roof)) && frameLowerBound(f) >= Math.min(loose(incumbent, slack), roof) - 1e-9) {
+            if (Double.isFinite(Math.min(incumbent, roof)) && bounds(f).least(tops(f)) >= Math.min(loose(incumbent, slack), roof) - 1e-9) {
                 continue; // a closer look at its bars shows it cannot beat the incumbent
             }
             evaluated++;
@@ -221,103 +231,11 @@ public final class BeamGenerator {
             }
         }
         return new Output(kept, incumbent, incumbentLayout, new Stats(frames.size(), evaluated, skipped,
-                midProbe.solves() + supportProbe.solves(), chooser.evaluations(), System.nanoTime() - t0));
+                ctx.flexureSolves(), ctx.shearEvaluations(), System.nanoTime() - t0));
     }
 
     private static double loose(double incumbent, double slack) {
         return slack == 0 ? incumbent : incumbent * (1 + slack);
-    }
-
-    // ------------------------------------------------------------------ frames and their bounds
-
-    /**
-     * No design of the span costs less than this: the least of its frames' lower bounds (concrete,
-     * formwork, skin bars, and the section model's strength bound on the bars and stirrups); infinite
-     * when no frame can hold it.
-     */
-    public double leastCost() {
-        double least = Double.POSITIVE_INFINITY;
-        for (SpanFrame f : frames()) {
-            least = Math.min(least, f.lowerBound());
-        }
-        return least;
-    }
-
-    private List<SpanFrame> frames() {
-        List<SpanFrame> out = new ArrayList<>();
-        BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
-        double massPerArea = Double.MAX_VALUE;
-        for (BarSize s : p.space().barSizes()) {
-            massPerArea = Math.min(massPerArea, s.massPerMetre() / s.area());
-        }
-        double rate = cost.mainBarPricePerKg() * massPerArea;
-        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(),
-                p.flange(), p.space(), p.detailing())) {
-            double b = cell.width();
-            double h = cell.height();
-            BarSize ds = cell.stirrupBar();
-            Detailing det = cell.detailing();
-            boolean deflection = h < SpanChecks.minimumDepth(p.span(), p.ends(), p.materials(), p.code()) - 1e-9;
-            if (deflection && p.service() == null) {
-                continue; // below Table 9.3.1.1 and nothing to compute deflection from
-            }
-            SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-            double frameCost = cost.frame(b, h, p.flange()).total() * lm
-                    + (skin == null ? 0 : barCost(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()), p.span()));
-            double extL = p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-            double extR = p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-            double lb = frameCost + steelLowerBound(b, h, det, smallest, rate) + stirrupLowerBound(b, h, ds);
-            out.add(new SpanFrame(b, h, ds, det, skin, frameCost, lb, deflection, extL, extR));
-        }
-        out.sort(Comparator.comparingDouble(SpanFrame::lowerBound).thenComparingDouble(SpanFrame::b)
-                .thenComparingDouble(SpanFrame::h).thenComparingDouble(f -> f.stirrupBar().diameter()));
-        return out;
-    }
-
-    /** The least bar cost any layout of the frame could have, from the section model's strength bound. */
-    private double steelLowerBound(double b, double h, Detailing det, BarSize smallest, double rate) {
-        double minPair = 2 * smallest.area();
-        double compArea = 0;
-        for (BarSize s : p.space().barSizes()) {
-            int n = BarSpacing.maxBars(b, det, s, p.materials(), p.code());
-            if (n >= 2) {
-                compArea = Math.max(compArea, n * s.area() * p.space().maxLayers());
-            }
-        }
-        double dMax = h - det.firstLayerCentroid(smallest.diameter());
-        double dp = det.firstLayerCentroid(smallest.diameter());
-        double fc = p.materials().fc();
-        double fy = p.materials().fy();
-        double widest = p.flange() != null ? p.flange().on(b).width() : b; // at its effective width on this web
-        double l = p.span();
-        double bottom = p.midSection()
-                ? StrengthBound.minTensionArea(p.mMid(), dMax, compArea, dp, dp + 60, widest, fc, fy)
-                : minPair;
-        double area = Math.max(bottom, minPair) * l;
-        double supportL = p.leftSupport()
-                ? StrengthBound.minTensionArea(p.mLeft(), dMax, compArea, dp, dp + 60, b, fc, fy) : 0;
-        double supportR = p.rightSupport()
-                ? StrengthBound.minTensionArea(p.mRight(), dMax, compArea, dp, dp + 60, b, fc, fy) : 0;
-        if (Double.isInfinite(bottom) || Double.isInfinite(supportL) || Double.isInfinite(supportR)) {
-            return Double.POSITIVE_INFINITY;
-        }
-        if (p.cantilever()) {
-            area += Math.max(supportL, minPair) * l;
-        } else {
-            // the continuous pair over the span, and the rest of each support's steel over at least 0.3 x span
-            area += minPair * l + Math.max(0, supportL - minPair) * 0.3 * l + Math.max(0, supportR - minPair) * 0.3 * l;
-        }
-        return rate * area / 1000.0;
-    }
-
-    private double stirrupLowerBound(double b, double h, BarSize ds) {
-        double total = 0;
-        double widest = p.space().stirrupSpacings().get(p.space().stirrupSpacings().size() - 1);
-        int fewestLegs = p.space().stirrupLegs().get(0);
-        for (BeamProblem.Zone z : zones) {
-            total += stirrupCost(b, h, new Stirrups(ds, fewestLegs, widest), z);
-        }
-        return total;
     }
 
     // ------------------------------------------------------------------ one frame
@@ -346,7 +264,7 @@ public final class BeamGenerator {
      */
     FrameOptions evaluate(SpanFrame f, Target target) {
         zoneMemo.clear();
-        useFrame(f);
+        bounds(f);
         SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
         BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
         if (!framePasses(f, shape, smallest, smallest, 1)) {
@@ -381,7 +299,7 @@ public final class BeamGenerator {
     private java.util.function.ToDoubleFunction<BarSize> supportLimit(SpanFrame f, List<TopOption> tops,
             Target target) {
         double common = target.common();
-        return Double.isInfinite(common) ? t -> Double.POSITIVE_INFINITY : t -> common - leastWithout(f, tops, t);
+        return Double.isInfinite(common) ? t -> Double.POSITIVE_INFINITY : t -> common - bounds(f).besideSupports(tops, t);
     }
 
     /**
@@ -406,7 +324,7 @@ public final class BeamGenerator {
             if (t.continuous() == 2) {
                 continue;
             }
-            double least = f.cost() + t.cost() + bottomLowerBound(f, t)
+            double least = f.cost() + t.cost() + bounds(f).midSpan(t)
                     + Combinations.cheapestAbove(lefts, t, p.leftSupport())
                     + Combinations.cheapestAbove(rights, t, p.rightSupport());
             if (least < target.limitForTop(t.bar())) {
@@ -417,42 +335,8 @@ public final class BeamGenerator {
         return added;
     }
 
-    private List<SpanFrame> allFrames;
-
-    /** The frames of the problem, computed once. */
-    List<SpanFrame> cachedFrames() {
-        if (allFrames == null) {
-            allFrames = frames();
-        }
-        return allFrames;
-    }
-
-    private final Map<BarSize, Integer> barIndex = new java.util.IdentityHashMap<>();
-
-    int index(BarSize bar) {
-        Integer i = barIndex.get(bar);
-        if (i == null) {
-            i = p.space().barSizes().indexOf(bar);
-            barIndex.put(bar, i);
-        }
-        return i;
-    }
-
     Combinations combinations() {
         return combinations;
-    }
-
-    /**
-     * A lower bound on the mid-span option cost for a top option: the least bottom area any layout
-     * could carry Mu with (the section model's strength bound, with the continuous bars as compression
-     * steel), priced per size, plus the cheapest stirrups of the mid-span zones.
-     */
-    private double bottomLowerBound(SpanFrame f, TopOption t) {
-        double best = Double.POSITIVE_INFINITY;
-        for (BarSize bb : p.space().barSizes()) {
-            best = Math.min(best, bottomBarLowerBound(f, t, bb));
-        }
-        return best + leanMid(f);
     }
 
     /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
@@ -494,7 +378,7 @@ public final class BeamGenerator {
     private FrameOptions screened(SpanFrame f, SectionShape shape, List<TopOption> tops, List<MidOption> mids,
             List<SupportOption> lefts, List<SupportOption> rights, Target target) {
         if (f.deflection()) {
-            DeflectionScreen screen = new DeflectionScreen(p, sections, f, shape, mids, lefts, rights);
+            DeflectionScreen screen = new DeflectionScreen(p, ctx.sections(), f, shape, mids, lefts, rights);
             mids = screen.mids();
             lefts = screen.lefts();
             rights = screen.rights();
@@ -519,7 +403,7 @@ public final class BeamGenerator {
         return more ? screened(f, shape, tops, mids, lefts, rights, target) : first;
     }
 
-    private List<TopOption> tops(SpanFrame f) {
+    List<TopOption> tops(SpanFrame f) {
         List<TopOption> out = new ArrayList<>();
         for (BarSize t : p.space().barSizes()) {
             int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
@@ -532,38 +416,10 @@ public final class BeamGenerator {
             // (a cantilever's top bars are all priced with its support option)
             double run = p.cantilever() ? 0 : p.span() - extL - extR;
             for (int nc = 2; nc <= ncMax; nc++) {
-                out.add(new TopOption(t, nc, barCost(t, nc, run)));
+                out.add(new TopOption(t, nc, ctx.barCost(t, nc, run)));
             }
         }
         return out;
-    }
-
-    /**
-     * The least a combination with top bars of size {@code t} could cost apart from one support's option:
-     * the frame, the cheapest top option of that size, and the least bottom bars (with the most continuous
-     * bars of that size as compression steel) and mid-span stirrups.
-     */
-    private double leastWithout(SpanFrame f, List<TopOption> tops, BarSize t) {
-        double top = Double.POSITIVE_INFINITY;
-        TopOption most = null;
-        for (TopOption o : tops) {
-            if (o.bar().equals(t)) {
-                top = Math.min(top, o.cost());
-                if (most == null || o.continuous() > most.continuous()) {
-                    most = o;
-                }
-            }
-        }
-        if (most == null) {
-            return Double.POSITIVE_INFINITY;
-        }
-        double bottom = Double.POSITIVE_INFINITY;
-        for (BarSize bb : p.space().barSizes()) {
-            if (p.maxBarSizes() >= 2 || bb.equals(t)) {
-                bottom = Math.min(bottom, bottomBarLowerBound(f, most, bb));
-            }
-        }
-        return f.cost() + top + bottom + leanMid(f);
     }
 
     /**
@@ -576,197 +432,9 @@ public final class BeamGenerator {
         double of(TopOption top, BarSize bottom);
     }
 
-    /**
-     * The least the bottom bars of one size could cost with a top option's continuous bars as compression
-     * steel: the section model's strength bound on the area, in whole bars, no fewer than two or than crack
-     * control asks of the first layer.
-     */
-    private double bottomBarLowerBound(SpanFrame f, TopOption t, BarSize bb) {
-        int nb = p.space().barSizes().size();
-        int ti = index(t.bar());
-        int bi = index(bb);
-        if (bottomMemo == null || bottomMemo.length <= t.continuous()) {
-            bottomMemo = new double[Math.max(t.continuous() + 1, 16)][][];
-        }
-        if (bottomMemo[t.continuous()] == null) {
-            bottomMemo[t.continuous()] = new double[nb][nb];
-            for (double[] row : bottomMemo[t.continuous()]) {
-                java.util.Arrays.fill(row, Double.NaN);
-            }
-        }
-        double known = bottomMemo[t.continuous()][ti][bi];
-        if (Double.isNaN(known)) {
-            known = computeBottomBarLowerBound(f, t, bb);
-            bottomMemo[t.continuous()][ti][bi] = known;
-        }
-        return known;
-    }
-
-    private SpanFrame memoFrame;
-    private double asMinSagging = Double.NaN;
-    private double asMinHogging = Double.NaN;
-    private int[] crackMemo;
-
-    /** As,min of 9.6.1.2 per mm of d for the frame (the section model's rule at d = 1 mm). */
-    private double asMinPerDepth(SpanFrame f, Bending bending) {
-        useFrame(f);
-        if (Double.isNaN(asMinSagging)) {
-            SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
-            Span span = new Span(p.span(), p.ends());
-            asMinSagging = SectionChecks.asMin(shape, Bending.SAGGING, span, p.materials(), p.code(), 1.0);
-            asMinHogging = SectionChecks.asMin(shape, Bending.HOGGING, span, p.materials(), p.code(), 1.0);
-        }
-        return bending == Bending.SAGGING ? asMinSagging : asMinHogging;
-    }
-
-    /** The fewest bars of a size crack control (24.3.2) allows in the frame's first layer. */
-    private int crackBars(SpanFrame f, BarSize bar) {
-        useFrame(f);
-        if (crackMemo == null) {
-            crackMemo = new int[p.space().barSizes().size()];
-            java.util.Arrays.fill(crackMemo, -1);
-        }
-        int i = index(bar);
-        if (crackMemo[i] < 0) {
-            crackMemo[i] = BarSpacing.minBarsForCrackControl(f.b(), f.det(), bar, p.materials().fy(), p.code());
-        }
-        return crackMemo[i];
-    }
-
-    private void useFrame(SpanFrame f) {
-        if (memoFrame != f) {
-            bottomMemo = null;
-            asMinSagging = Double.NaN;
-            asMinHogging = Double.NaN;
-            crackMemo = null;
-            leanMemo.clear();
-            memoFrame = f;
-        }
-    }
-
-    /**
-     * A tighter lower bound than the frame's first one, still without searching bars: the least of
-     * {@link #pairLowerBound}.
-     */
-    private double frameLowerBound(SpanFrame f) {
-        double best = Double.POSITIVE_INFINITY;
-        for (double[] row : pairLowerBound(f)) {
-            for (double v : row) {
-                best = Math.min(best, v);
-            }
-        }
-        return best;
-    }
-
-    /**
-     * Per pair of bar sizes (top i, bottom j), a lower bound on any passing combination of the frame
-     * without searching bars: the cheapest top option of size i; the least bottom bars of size j (with
-     * the most continuous bars of size i as compression steel) and mid-span stirrups; and at each support
-     * the fewest bars of size i the section model's strength bound allows over their real extension, with
-     * the leanest stirrups of the support's zones.
-     */
-    double[][] pairLowerBound(SpanFrame f) {
-        useFrame(f);
-        int nb = p.space().barSizes().size();
-        double[][] out = new double[nb][nb];
-        for (double[] row : out) {
-            java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
-        }
-        List<TopOption> tops = tops(f);
-        double fc = p.materials().fc();
-        double fy = p.materials().fy();
-        double leanMid = leanMid(f);
-        // anchored bottom bars are compression steel at the supports: allow the most there could be
-        double comp = 0;
-        if (p.bottomAnchored()) {
-            for (BarSize bb : p.space().barSizes()) {
-                comp = Math.max(comp, BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code()) * bb.area()
-                        * p.space().maxLayers());
-            }
-        }
-        for (int i = 0; i < nb; i++) {
-            BarSize t = p.space().barSizes().get(i);
-            double top = Double.POSITIVE_INFINITY;
-            TopOption most = null;
-            for (TopOption o : tops) {
-                if (o.bar().equals(t)) {
-                    top = Math.min(top, o.cost());
-                    if (most == null || o.continuous() > most.continuous()) {
-                        most = o;
-                    }
-                }
-            }
-            if (most == null) {
-                continue;
-            }
-            int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), t, fy, p.code());
-            double ext = Extension.of(p, f.b(), f.h(), f.det(), t).length();
-            double dMax = f.h() - f.det().firstLayerCentroid(t.diameter());
-            double dp = f.det().firstLayerCentroid(p.space().barSizes().get(0).diameter());
-            double supports = 0;
-            for (BeamProblem.Place place : new BeamProblem.Place[] {BeamProblem.Place.LEFT, BeamProblem.Place.RIGHT}) {
-                Double mu = place == BeamProblem.Place.LEFT ? (p.leftSupport() ? p.mLeft() : null)
-                        : (p.rightSupport() ? p.mRight() : null);
-                if (mu == null) {
-                    continue;
-                }
-                double area = StrengthBound.minTensionArea(mu, dMax, comp, dp, dp, f.b(), fc, fy);
-                if (Double.isInfinite(area)) {
-                    supports = Double.POSITIVE_INFINITY;
-                    break;
-                }
-                // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need
-                double dMin = f.h() - f.det().firstLayerCentroid(t.diameter())
-                        - (p.space().maxLayers() - 1) * (t.diameter() + f.det().layerGap());
-                double asMin = asMinPerDepth(f, Bending.HOGGING) * dMin;
-                area = StrengthBound.withMinimumSteel(area, asMin);
-                int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / t.area() - 1e-9));
-                supports += barCost(t, n, ext) + leanStirrups(f, place);
-            }
-            if (Double.isInfinite(supports)) {
-                continue;
-            }
-            for (int j = 0; j < nb; j++) {
-                BarSize u = p.space().barSizes().get(j);
-                if (p.maxBarSizes() < 2 && !u.equals(t)) {
-                    continue;
-                }
-                out[i][j] = f.cost() + top + bottomBarLowerBound(f, most, u) + leanMid + supports;
-            }
-        }
-        return out;
-    }
-
-    /** {@link #bottomBarLowerBound} per frame: [continuous bars][top size][bottom size], NaN until asked. */
-    private double[][][] bottomMemo;
-
-    private double computeBottomBarLowerBound(SpanFrame f, TopOption t, BarSize bb) {
-        if (!p.midSection()) {
-            return barCost(bb, 2, p.span()); // a cantilever's bottom bars are two or more hangers
-        }
-        double widest = p.flange() != null ? p.flange().on(f.b()).width() : f.b(); // effective width on this web
-        double fc = p.materials().fc();
-        double fy = p.materials().fy();
-        double comp = t.continuous() * t.bar().area();
-        double dp = f.det().firstLayerCentroid(t.bar().diameter());
-        double dMax = f.h() - f.det().firstLayerCentroid(bb.diameter());
-        double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy);
-        if (Double.isInfinite(area)) {
-            return Double.POSITIVE_INFINITY;
-        }
-        // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need (9.6.1.3)
-        double dMin = f.h() - f.det().firstLayerCentroid(bb.diameter())
-                - (p.space().maxLayers() - 1) * (bb.diameter() + f.det().layerGap());
-        double asMin = asMinPerDepth(f, Bending.SAGGING) * dMin; // As,min is proportional to d
-        area = StrengthBound.withMinimumSteel(area, asMin);
-        int ncr = crackBars(f, bb);
-        int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / bb.area() - 1e-9));
-        return barCost(bb, n, p.span());
-    }
-
     private List<MidOption> mids(SpanFrame f, SectionShape shape, List<TopOption> tops, MidLimit cut) {
         List<MidOption> out = new ArrayList<>();
-        List<Integer> midZones = zoneIndices(BeamProblem.Place.MID);
+        List<Integer> midZones = ctx.zonesAt(BeamProblem.Place.MID);
         int mostLegs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
         if (p.cantilever()) {
             // the bottom bars of a cantilever are its hangers: two or more of one size, one layer
@@ -782,23 +450,23 @@ public final class BeamGenerator {
                         }
                         for (List<Integer> counts : barfit.design.ExhaustiveSearch.countVectors(layers, nmax)) {
                             out.add(new MidOption(t, bb, counts, f.det().firstLayerCentroid(bb.diameter()), Map.of(),
-                                    barCost(bb, BeamLayout.sum(counts), p.span()), p.legsFor(counts.get(0))));
+                                    ctx.barCost(bb, BeamLayout.sum(counts), p.span()), p.legsFor(counts.get(0))));
                         }
                     }
                 }
             }
             return out;
         }
-        midProbe.frame(shape, Bending.SAGGING, new Span(p.span(), p.ends()));
-        midSearch.frame(f.det());
+        ctx.midProbe().frame(shape, Bending.SAGGING, new Span(p.span(), p.ends()));
+        ctx.midSearch().frame(f.det());
         for (TopOption top : tops) {
-            midSearch.compression(List.of(new BeamSection.BarGroup(top.bar(), top.continuous())));
+            ctx.midSearch().compression(List.of(new BeamSection.BarGroup(top.bar(), top.continuous())));
             for (BarSize bb : p.space().barSizes()) {
                 if (p.maxBarSizes() < 2 && !bb.equals(top.bar())) {
                     continue;
                 }
                 double limit = cut.of(top, bb);
-                if (bottomBarLowerBound(f, top, bb) + leanMid(f) >= limit - 1e-9) {
+                if (bounds(f).bottomBars(top, bb) + bounds(f).leanMid() >= limit - 1e-9) {
                     continue;
                 }
                 // the cheapest option found so far for each number of legs it asks of the supports
@@ -816,31 +484,31 @@ public final class BeamGenerator {
                     if (!barfit.design.Layout.fitsHeight(f.h(), f.det(), bb, layers, top.bar())) {
                         break;
                     }
-                    int[] min = midSearch.minCounts(bb, nmax, ncr, layers, layers * nmax);
+                    int[] min = ctx.midSearch().minCounts(bb, nmax, ncr, layers, layers * nmax);
                     if (min == null) {
                         continue;
                     }
                     int nMin = java.util.Arrays.stream(min).sum();
                     double firstStirrups = Double.NaN;
                     for (int n = nMin; n <= layers * nmax; n++) {
-                        if (barCost(bb, n, p.span()) + leanMid(f) >= limit - 1e-9) {
+                        if (ctx.barCost(bb, n, p.span()) + bounds(f).leanMid() >= limit - 1e-9) {
                             break; // this many bars cost more than an option could and still pay
                         }
-                        List<int[]> splits = midSearch.passingSplits(bb, n, layers, nmax, first);
+                        List<int[]> splits = ctx.midSearch().passingSplits(bb, n, layers, nmax, first);
                         if (splits.isEmpty()) {
-                            if (!midSearch.passingSplit(bb, n, layers, nmax, first).anyDuctile()) {
+                            if (!ctx.midSearch().passingSplit(bb, n, layers, nmax, first).anyDuctile()) {
                                 break; // more bars only lower eps_t
                             }
                             continue;
                         }
                         for (int[] split : splits) {
-                            midSearch.place(bb, split);
-                            double d = midSearch.d();
-                            double as = midSearch.tensionArea();
+                            ctx.midSearch().place(bb, split);
+                            double d = ctx.midSearch().d();
+                            double as = ctx.midSearch().tensionArea();
                             // legs: the office's rule, the ties round top bars relied on (9.7.6.4), and no more
                             // than the outer bottom layer and the continuous top bars hold (25.7.1.2, 25.7.1.3)
                             StirrupRules.TieDemand ties = midZones.isEmpty() ? StirrupRules.TieDemand.NONE
-                                    : StirrupRules.ties(sections.mid(f, shape, top, bb, split), Bending.SAGGING, p.mMid());
+                                    : StirrupRules.ties(ctx.sections().mid(f, shape, top, bb, split), Bending.SAGGING, p.mMid());
                             if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
@@ -850,11 +518,11 @@ public final class BeamGenerator {
                             if (zs != null) {
                                 double stirCost = zs.cost();
                                 out.add(new MidOption(top, bb, TensionSearch.toList(split), d, zs.stirrups(),
-                                        barCost(bb, n, p.span()) + stirCost, p.legsFor(split[0])));
+                                        ctx.barCost(bb, n, p.span()) + stirCost, p.legsFor(split[0])));
                                 // only an option whose bottom bars hold every legs count the supports may use
                                 // can stand for the dearer options with more bars below
                                 if (split[0] >= mostLegs) {
-                                    cheapestByLegs.merge(p.legsFor(split[0]), barCost(bb, n, p.span()) + stirCost,
+                                    cheapestByLegs.merge(p.legsFor(split[0]), ctx.barCost(bb, n, p.span()) + stirCost,
                                             Math::min);
                                 }
                                 if (Double.isNaN(firstStirrups)) {
@@ -865,7 +533,7 @@ public final class BeamGenerator {
                         // more bars only pay through cheaper stirrups (rho_w, fewer legs) or, below Table 9.3.1.1,
                         // stiffness: stop once one more bar costs more than all the stirrups could
                         if (!f.deflection() && !Double.isNaN(firstStirrups)
-                                && barCost(bb, n + 1 - nMin, p.span()) >= stirrupCeiling(f)) {
+                                && ctx.barCost(bb, n + 1 - nMin, p.span()) >= bounds(f).stirrupCeiling()) {
                             break;
                         }
                         // tighter where the bottom bars meet nothing but the mid-span zones: an option with
@@ -874,7 +542,7 @@ public final class BeamGenerator {
                         // no dearer and asks no more legs of the supports is as good in every combination
                         if (!f.deflection() && !p.bottomAnchored()
                                 && dominated(cheapestByLegs, p.legsFor((n + layers) / layers),
-                                        barCost(bb, n + 1, p.span()) + leanMid(f))) {
+                                        ctx.barCost(bb, n + 1, p.span()) + bounds(f).leanMid())) {
                             break;
                         }
                     }
@@ -902,7 +570,7 @@ public final class BeamGenerator {
                 return null;
             }
             zs.put(zi, st);
-            cost += stirrupCost(f.b(), f.h(), st, zones.get(zi));
+            cost += ctx.stirrupCost(f.b(), f.h(), st, ctx.zones().get(zi));
         }
         return new ZoneSet(zs, cost);
     }
@@ -913,8 +581,8 @@ public final class BeamGenerator {
         if (zoneMemo.containsKey(key)) {
             return zoneMemo.get(key);
         }
-        BeamProblem.Zone z = zones.get(zone);
-        Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(d), legs, mostLegs, maxSpacing, z.length());
+        BeamProblem.Zone z = ctx.zones().get(zone);
+        Stirrups st = ctx.chooser().cheapest(shape, f.det(), d, as, z.vu(d), legs, mostLegs, maxSpacing, z.length());
         zoneMemo.put(key, st);
         return st;
     }
@@ -929,69 +597,6 @@ public final class BeamGenerator {
         return false;
     }
 
-    /** The least the stirrups of the mid-span zones could cost (see {@link #leanStirrups}). */
-    private double leanMid(SpanFrame f) {
-        return leanStirrups(f, BeamProblem.Place.MID);
-    }
-
-    private final Map<BeamProblem.Place, Double> leanMemo = new java.util.EnumMap<>(BeamProblem.Place.class);
-
-    /**
-     * The least the stirrups of the zones at a place could cost: each zone's cheapest stirrups (fewest
-     * legs allowed) for the most favourable section the frame could have (the deepest d, a tension area
-     * that takes Vc to its cap), which can only pass more than any real layout does. Infinite if even
-     * that fails.
-     */
-    private double leanStirrups(SpanFrame f, BeamProblem.Place place) {
-        useFrame(f);
-        Double known = leanMemo.get(place);
-        if (known != null) {
-            return known;
-        }
-        SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
-        BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
-        double dMax = f.h() - f.det().firstLayerCentroid(smallest.diameter());
-        double asBig = 0.1 * f.b() * dMax;
-        double c = 0;
-        for (int zi : zoneIndices(place)) {
-            BeamProblem.Zone z = zones.get(zi);
-            Stirrups st = chooser.cheapest(shape, f.det(), dMax, asBig, z.vuLeast(), p.space().stirrupLegs().get(0),
-                    z.length());
-            if (st == null) {
-                c = Double.POSITIVE_INFINITY;
-                break;
-            }
-            c += stirrupCost(f.b(), f.h(), st, z);
-        }
-        leanMemo.put(place, c);
-        return c;
-    }
-
-    /** More than any choice of stirrups over the whole span could cost (the most legs, the closest spacing). */
-    private double stirrupCeiling(SpanFrame f) {
-        int legs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
-        Stirrups dense = new Stirrups(f.stirrupBar(), legs, p.space().stirrupSpacings().get(0));
-        double c = 0;
-        for (BeamProblem.Zone z : zones) {
-            c += stirrupCost(f.b(), f.h(), dense, z);
-        }
-        return c;
-    }
-
-    private List<Integer> zoneIndices(BeamProblem.Place place) {
-        return zonesAt.computeIfAbsent(place, this::findZones);
-    }
-
-    private List<Integer> findZones(BeamProblem.Place place) {
-        List<Integer> out = new ArrayList<>();
-        for (int i = 0; i < zones.size(); i++) {
-            if (zones.get(i).section() == place) {
-                out.add(i);
-            }
-        }
-        return out;
-    }
-
     /**
      * A continuous support's options. {@code limit} gives, per top bar size, the cost at or above which an
      * option cannot be part of anything cheaper than the incumbent; the bar count stops rising there.
@@ -999,10 +604,10 @@ public final class BeamGenerator {
     private List<SupportOption> supports(SpanFrame f, SectionShape shape, BeamProblem.Place place, double mu,
             java.util.function.ToDoubleFunction<BarSize> limit, List<BottomBars> bottoms) {
         List<SupportOption> out = new ArrayList<>();
-        List<Integer> myZones = zoneIndices(place);
-        double leanZones = leanStirrups(f, place);
-        supportProbe.frame(shape, Bending.HOGGING, new Span(p.span(), p.ends()));
-        TensionSearch search = new TensionSearch(supportProbe, mu).frame(f.det());
+        List<Integer> myZones = ctx.zonesAt(place);
+        double leanZones = bounds(f).leanStirrups(place);
+        ctx.supportProbe().frame(shape, Bending.HOGGING, new Span(p.span(), p.ends()));
+        TensionSearch search = new TensionSearch(ctx.supportProbe(), mu).frame(f.det());
         for (BarSize t : p.space().barSizes()) {
             int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
             int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), t, p.materials().fy(), p.code());
@@ -1029,7 +634,7 @@ public final class BeamGenerator {
                     }
                     int nMin = java.util.Arrays.stream(min).sum();
                     for (int n = nMin; n <= layers * nmax; n++) {
-                        if (barCost(t, n, ext) + leanZones >= most - 1e-9) {
+                        if (ctx.barCost(t, n, ext) + leanZones >= most - 1e-9) {
                             break; // this many bars cost more than an option could and still pay
                         }
                         List<int[]> splits = search.passingSplits(t, n, layers, nmax, first);
@@ -1043,7 +648,7 @@ public final class BeamGenerator {
                             search.place(t, split);
                             double d = search.d();
                             double as = search.tensionArea();
-                            double bars = barCost(t, n, ext);
+                            double bars = ctx.barCost(t, n, ext);
                             if (myZones.isEmpty()) {
                                 out.add(new SupportOption(t, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX,
                                         Map.of(), bars, bottom));
@@ -1051,7 +656,7 @@ public final class BeamGenerator {
                             }
                             // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
                             StirrupRules.TieDemand ties = StirrupRules.ties(
-                                    sections.support(f, shape, t, split, bottomGroups), Bending.HOGGING, mu);
+                                    ctx.sections().support(f, shape, t, split, bottomGroups), Bending.HOGGING, mu);
                             if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
@@ -1096,6 +701,6 @@ public final class BeamGenerator {
 
     /** The sections of this span's options, for the deflection cuts. */
     SpanSections sections() {
-        return sections;
+        return ctx.sections();
     }
 }

@@ -28,7 +28,7 @@ public final class PairTables {
     public PairTable exact(double b, double h) {
         double[][] cost = infinite(p.space().barSizes().size());
         Table table = new Table(cost);
-        for (SpanFrame f : generator.cachedFrames()) {
+        for (SpanFrame f : generator.frames()) {
             if (f.b() == b && f.h() == h && Double.isFinite(f.lowerBound())) {
                 generator.evaluate(f, table);
             }
@@ -42,9 +42,9 @@ public final class PairTables {
      */
     public double[][] lowerBounds(double b, double h) {
         double[][] out = null;
-        for (SpanFrame f : generator.cachedFrames()) {
+        for (SpanFrame f : generator.frames()) {
             if (f.b() == b && f.h() == h && Double.isFinite(f.lowerBound())) {
-                double[][] bounds = generator.pairLowerBound(f);
+                double[][] bounds = generator.bounds(f).pairs(generator.tops(f));
                 if (out == null) {
                     out = bounds;
                 } else {
@@ -56,7 +56,7 @@ public final class PairTables {
                 }
             }
         }
-        if (out == null && generator.cachedFrames().stream().anyMatch(f -> f.b() == b && f.h() == h)) {
+        if (out == null && generator.frames().stream().anyMatch(f -> f.b() == b && f.h() == h)) {
             out = infinite(p.space().barSizes().size());
         }
         return out;
@@ -83,13 +83,13 @@ public final class PairTables {
 
         @Override
         public double limit(BarSize top, BarSize bottom) {
-            return cost[generator.index(top)][generator.index(bottom)];
+            return cost[generator.context().index(top)][generator.context().index(bottom)];
         }
 
         /** The dearest pair of a top size found so far: a top option that cannot beat it improves no pair. */
         @Override
         public double limitForTop(BarSize top) {
-            int i = generator.index(top);
+            int i = generator.context().index(top);
             double worst = 0;
             for (int j = 0; j < cost.length; j++) {
                 if (p.maxBarSizes() >= 2 || j == i) {
@@ -117,8 +117,8 @@ public final class PairTables {
             for (MidOption m : fs.mids()) {
                 Combinations.Cheapest c = combinations.cheapestWith(fs.frame(), m, lefts, rights);
                 double total = c == null ? Double.POSITIVE_INFINITY : c.cost();
-                int i = generator.index(m.top().bar());
-                int j = generator.index(m.bar());
+                int i = generator.context().index(m.top().bar());
+                int j = generator.context().index(m.bar());
                 cost[i][j] = Math.min(cost[i][j], total);
             }
         }
@@ -139,8 +139,8 @@ public final class PairTables {
                 if (!combinations.sizesAllowed(m)) {
                     continue;
                 }
-                int i = generator.index(t.bar());
-                int j = generator.index(m.bar());
+                int i = generator.context().index(t.bar());
+                int j = generator.context().index(m.bar());
                 BottomBars bottom = combinations.anchored(m);
                 double base = fs.frame().cost() + t.cost() + m.cost();
                 List<SupportOption> leftOptions = Combinations.compatible(lefts, t.bar(),
