@@ -25,9 +25,9 @@ final class Combinations {
     private final BeamProblem p;
     private final List<BeamProblem.Zone> zones;
 
-    Combinations(BeamProblem problem, List<BeamProblem.Zone> zones) {
-        this.p = problem;
-        this.zones = zones;
+    Combinations(SpanContext ctx) {
+        this.p = ctx.problem();
+        this.zones = ctx.zones();
     }
 
     /** Support options by top bar size, cheapest first. */

@@ -17,10 +17,12 @@ import java.util.Map;
  */
 public final class PairTables {
     private final BeamGenerator generator;
+    private final SpanContext ctx;
     private final BeamProblem p;
 
     public PairTables(BeamProblem problem, CostModel cost) {
         this.generator = new BeamGenerator(problem, cost);
+        this.ctx = generator.context();
         this.p = problem;
     }
 
@@ -44,7 +46,7 @@ public final class PairTables {
         double[][] out = null;
         for (SpanFrame f : generator.frames()) {
             if (f.b() == b && f.h() == h && Double.isFinite(f.lowerBound())) {
-                double[][] bounds = generator.bounds(f).pairs(generator.tops(f));
+                double[][] bounds = generator.bounds(f).pairs(OptionGenerator.tops(ctx, f));
                 if (out == null) {
                     out = bounds;
                 } else {
@@ -83,13 +85,13 @@ public final class PairTables {
 
         @Override
         public double limit(BarSize top, BarSize bottom) {
-            return cost[generator.context().index(top)][generator.context().index(bottom)];
+            return cost[ctx.index(top)][ctx.index(bottom)];
         }
 
         /** The dearest pair of a top size found so far: a top option that cannot beat it improves no pair. */
         @Override
         public double limitForTop(BarSize top) {
-            int i = generator.context().index(top);
+            int i = ctx.index(top);
             double worst = 0;
             for (int j = 0; j < cost.length; j++) {
                 if (p.maxBarSizes() >= 2 || j == i) {
@@ -117,8 +119,8 @@ public final class PairTables {
             for (MidOption m : fs.mids()) {
                 Combinations.Cheapest c = combinations.cheapestWith(fs.frame(), m, lefts, rights);
                 double total = c == null ? Double.POSITIVE_INFINITY : c.cost();
-                int i = generator.context().index(m.top().bar());
-                int j = generator.context().index(m.bar());
+                int i = ctx.index(m.top().bar());
+                int j = ctx.index(m.bar());
                 cost[i][j] = Math.min(cost[i][j], total);
             }
         }
@@ -139,8 +141,8 @@ public final class PairTables {
                 if (!combinations.sizesAllowed(m)) {
                     continue;
                 }
-                int i = generator.context().index(t.bar());
-                int j = generator.context().index(m.bar());
+                int i = ctx.index(t.bar());
+                int j = ctx.index(m.bar());
                 BottomBars bottom = combinations.anchored(m);
                 double base = fs.frame().cost() + t.cost() + m.cost();
                 List<SupportOption> leftOptions = Combinations.compatible(lefts, t.bar(),
