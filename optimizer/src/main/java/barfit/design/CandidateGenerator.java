@@ -12,7 +12,6 @@ import barfit.section.StirrupRules;
 import barfit.section.SectionProbe;
 import barfit.section.SectionShape;
 import barfit.section.StrengthBound;
-import barfit.section.ShearVerdict;
 import barfit.section.SkinBars;
 import barfit.section.Stirrups;
 import java.util.ArrayList;

@@ -137,7 +137,8 @@ public final class CostModel {
 
     /** {@code sets} stirrup sets (a zone's stirrups). */
     public double stirrupSets(double b, double h, Stirrups s, int sets) {
-        return rates.stirrupsPerKg() * s.bar().massPerMetre() * sets * stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0;
+        return rates.stirrupsPerKg() * s.bar().massPerMetre() * sets * stirrupSetLength(b, h, s.bar(), s.legs())
+                / 1000.0;
     }
 
     /** An amount in currency to the searches' units ({@link #UNITS}). */

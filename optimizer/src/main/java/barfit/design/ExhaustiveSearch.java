@@ -59,11 +59,11 @@ public final class ExhaustiveSearch {
                         // one per bar of the outer tension layer and of the compression layer)
                         java.util.Map<String, java.util.Optional<Stirrups>> byLegs = new java.util.HashMap<>();
                         for (BarSize c : p.space().compressionSizes()) {
-                            int mmax = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
+                            int compressionFit = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
                             if (!Layout.fitsHeight(h, det, t, layers, c)) {
                                 continue;
                             }
-                            for (int m = 2; m <= mmax; m++) {
+                            for (int m = 2; m <= compressionFit; m++) {
                                 // the ties of 9.7.6.4 where these compression bars are relied on
                                 Layout bars = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m,
                                         new Stirrups(ds, 2, p.space().stirrupSpacings().get(0)), skin);
@@ -74,11 +74,12 @@ public final class ExhaustiveSearch {
                                 }
                                 int need = Math.max(p.space().legsFor(Math.max(counts.get(0), m)), ties.minLegs());
                                 int most = Math.min(counts.get(0), m);
-                                double sMax = ties.maxSpacing();
-                                final BarSize cc = c;
-                                Stirrups st = byLegs.computeIfAbsent(need + "/" + most + "/" + sMax,
+                                double maxSpacing = ties.maxSpacing();
+                                final BarSize compressionBar = c;
+                                Stirrups st = byLegs.computeIfAbsent(need + "/" + most + "/" + maxSpacing,
                                         k -> java.util.Optional.ofNullable(
-                                                cheapestStirrups(p, b, h, det, t, counts, cc, need, most, sMax)))
+                                                cheapestStirrups(p, b, h, det, t, counts, compressionBar, need, most,
+                                                        maxSpacing)))
                                         .orElse(null);
                                 if (st == null) {
                                     continue;
@@ -88,10 +89,10 @@ public final class ExhaustiveSearch {
                                 checked++;
                                 CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
                                 if (r.ok()) {
-                                    long u = CostModel.units(lay.cost(cost).total());
-                                    perKey.merge(lay.distinctKey(), u, Math::min);
-                                    if (u < bestUnits) {
-                                        bestUnits = u;
+                                    long units = CostModel.units(lay.cost(cost).total());
+                                    perKey.merge(lay.distinctKey(), units, Math::min);
+                                    if (units < bestUnits) {
+                                        bestUnits = units;
                                         best = lay;
                                     }
                                 }

@@ -36,7 +36,7 @@ public final class BeamGenerator {
      * bottom bar sizes.
      */
     interface Target {
-        /** A combination with top bars of size {@code top} and bottom bars of size {@code bottom} pays only below this. */
+        /** A combination with top bars of size {@code top} and bottom bars of {@code bottom} pays only below this. */
         double limit(BarSize top, BarSize bottom);
 
         /** Any combination with top bars of this size pays only below this. */
@@ -125,7 +125,10 @@ public final class BeamGenerator {
         return least;
     }
 
-    /** A frame's bounds; those of the last frame asked about are kept, so a frame bounded then evaluated computes them once. */
+    /**
+     * A frame's bounds; those of the last frame asked about are kept, so that a frame bounded and then
+     * evaluated computes them once.
+     */
     FrameBounds bounds(SpanFrame f) {
         if (bounds == null || bounds.frame() != f) {
             bounds = new FrameBounds(ctx, f);

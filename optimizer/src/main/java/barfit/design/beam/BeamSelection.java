@@ -79,26 +79,26 @@ public final class BeamSelection {
                 model.addImplication(x, sizeUsed.get(tops.get(i).bar().designation()));
             }
             model.addEquality(LinearExpr.sum(topVars.toArray(new Literal[0])), y);
-            List<Literal> mv = new ArrayList<>();
+            List<Literal> midLiterals = new ArrayList<>();
             for (int i = 0; i < fs.mids().size(); i++) {
                 MidOption m = fs.mids().get(i);
                 Literal x = bool("f" + fi + "_mid" + i, m.cost());
-                mv.add(x);
+                midLiterals.add(x);
                 model.addImplication(x, sizeUsed.get(m.bar().designation()));
             }
-            midVars.add(mv);
+            midVars.add(midLiterals);
             // each top option is carried by exactly one mid-span option built on it
             for (int ti = 0; ti < tops.size(); ti++) {
                 List<Literal> on = new ArrayList<>();
                 for (int i = 0; i < fs.mids().size(); i++) {
                     if (fs.mids().get(i).top().equals(tops.get(ti))) {
-                        on.add(mv.get(i));
+                        on.add(midLiterals.get(i));
                     }
                 }
                 model.addEquality(LinearExpr.sum(on.toArray(new Literal[0])), topVars.get(ti));
             }
-            leftVars.add(supports(fi, "left", fs, fs.lefts(), topVars, mv, p.leftSupport()));
-            rightVars.add(supports(fi, "right", fs, fs.rights(), topVars, mv, p.rightSupport()));
+            leftVars.add(supports(fi, "left", fs, fs.lefts(), topVars, midLiterals, p.leftSupport()));
+            rightVars.add(supports(fi, "right", fs, fs.rights(), topVars, midLiterals, p.rightSupport()));
         }
         model.addExactlyOne(frameVars.toArray(new Literal[0]));
         model.addLessOrEqual(LinearExpr.sum(sizeUsed.values().toArray(new Literal[0])), p.maxBarSizes());
@@ -107,13 +107,13 @@ public final class BeamSelection {
     }
 
     private List<Literal> supports(int fi, String side, FrameOptions fs, List<SupportOption> opts,
-            List<Literal> topVars, List<Literal> mv, boolean present) {
-        List<Literal> sv = new ArrayList<>();
+            List<Literal> topVars, List<Literal> midLiterals, boolean present) {
+        List<Literal> supportLiterals = new ArrayList<>();
         if (!present) {
-            return sv;
+            return supportLiterals;
         }
         for (int i = 0; i < opts.size(); i++) {
-            sv.add(bool("f" + fi + "_" + side + i, opts.get(i).cost()));
+            supportLiterals.add(bool("f" + fi + "_" + side + i, opts.get(i).cost()));
         }
         List<TopOption> tops = fs.tops();
         // same top size at the support as over the span
@@ -122,7 +122,7 @@ public final class BeamSelection {
             LinearExprBuilder rhs = LinearExpr.newBuilder();
             for (int i = 0; i < opts.size(); i++) {
                 if (opts.get(i).bar().equals(s)) {
-                    lhs.add(sv.get(i));
+                    lhs.add(supportLiterals.get(i));
                 }
             }
             for (int ti = 0; ti < tops.size(); ti++) {
@@ -136,32 +136,32 @@ public final class BeamSelection {
         if (!p.cantilever()) {
             LinearExprBuilder first = LinearExpr.newBuilder();
             for (int i = 0; i < opts.size(); i++) {
-                first.addTerm(sv.get(i), opts.get(i).counts().get(0));
+                first.addTerm(supportLiterals.get(i), opts.get(i).counts().get(0));
             }
-            LinearExprBuilder nc = LinearExpr.newBuilder();
+            LinearExprBuilder continuous = LinearExpr.newBuilder();
             for (int ti = 0; ti < tops.size(); ti++) {
-                nc.addTerm(topVars.get(ti), tops.get(ti).continuous());
+                continuous.addTerm(topVars.get(ti), tops.get(ti).continuous());
             }
-            model.addGreaterOrEqual(first, nc);
+            model.addGreaterOrEqual(first, continuous);
         }
         // stirrup legs at the support hold the bottom bars too
         LinearExprBuilder legs = LinearExpr.newBuilder();
         for (int i = 0; i < opts.size(); i++) {
-            legs.addTerm(sv.get(i), opts.get(i).legs());
+            legs.addTerm(supportLiterals.get(i), opts.get(i).legs());
         }
         LinearExprBuilder need = LinearExpr.newBuilder();
         for (int i = 0; i < fs.mids().size(); i++) {
-            need.addTerm(mv.get(i), fs.mids().get(i).legsNeeded());
+            need.addTerm(midLiterals.get(i), fs.mids().get(i).legsNeeded());
         }
         model.addGreaterOrEqual(legs, need);
         // and no more legs than the outer bottom layer holds (25.7.1.2, 25.7.1.3)
         LinearExprBuilder most = LinearExpr.newBuilder();
         for (int i = 0; i < opts.size(); i++) {
-            most.addTerm(sv.get(i), opts.get(i).legsMax());
+            most.addTerm(supportLiterals.get(i), opts.get(i).legsMax());
         }
         LinearExprBuilder held = LinearExpr.newBuilder();
         for (int i = 0; i < fs.mids().size(); i++) {
-            held.addTerm(mv.get(i), fs.mids().get(i).counts().get(0));
+            held.addTerm(midLiterals.get(i), fs.mids().get(i).counts().get(0));
         }
         model.addLessOrEqual(most, held);
         // bottom bars counted as compression steel: the support option was built for those bottom bars
@@ -169,17 +169,17 @@ public final class BeamSelection {
             Map<BottomBars, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
             for (int i = 0; i < opts.size(); i++) {
                 byKey.computeIfAbsent(opts.get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
-                    LinearExpr.newBuilder()})[0].add(sv.get(i));
+                    LinearExpr.newBuilder()})[0].add(supportLiterals.get(i));
             }
             for (int i = 0; i < fs.mids().size(); i++) {
                 byKey.computeIfAbsent(fs.mids().get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
-                    LinearExpr.newBuilder()})[1].add(mv.get(i));
+                    LinearExpr.newBuilder()})[1].add(midLiterals.get(i));
             }
             for (LinearExprBuilder[] pair : byKey.values()) {
                 model.addEquality(pair[0], pair[1]);
             }
         }
-        return sv;
+        return supportLiterals;
     }
 
     /**

@@ -107,7 +107,8 @@ final class DeflectionScreen {
     /** Whether the span passes its deflection limits with these sections' Ie (null: none found) and ρ'. */
     private boolean passes(double ec, SpanChecks.ServiceMoments service, double[] left, double[] mid, double[] right,
             double rho) {
-        if ((p.leftSupport() && left == null) || (p.rightSupport() && right == null) || (p.midSection() && mid == null)) {
+        if ((p.leftSupport() && left == null) || (p.rightSupport() && right == null)
+                || (p.midSection() && mid == null)) {
             return false;
         }
         double[] deflections = SpanChecks.deflections(p.span(), p.ends(), ec, service, p.leftSupport() ? left : null,

@@ -82,7 +82,10 @@ final class SpanSections {
         return append(ie, SpanChecks.rhoPrime(s, Bending.SAGGING));
     }
 
-    /** As {@link #deflectionStiffness(SpanFrame, MidOption)} for a support option; ρ' only at a cantilever's support. */
+    /**
+     * As {@link #deflectionStiffness(SpanFrame, MidOption)} for a support option; ρ' only at a cantilever's
+     * support.
+     */
     double[] deflectionStiffness(SpanFrame f, SupportOption o, BeamProblem.Place place) {
         BeamSection s = support(f, new SectionShape(f.b(), f.h(), p.flange()), o);
         double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING,
