@@ -16,7 +16,7 @@ import java.util.function.ToDoubleFunction;
  * left to the CP-SAT model; a cheap enumeration per frame ({@link Combinations}) gives the incumbent that
  * bounds which frames ({@link FrameBounds}) and options are worth handing over.
  *
- * <p>A frame's evaluation is told what to beat by a {@link Target}: the cheapest design found, when
+ * <p>A frame's evaluation is told what to beat by a {@link CostToBeat}: the cheapest design found, when
  * designing the span; the cheapest found per pair of bar sizes, when {@link PairTables} prices a size.
  */
 public final class BeamGenerator {
@@ -35,7 +35,7 @@ public final class BeamGenerator {
      * span's design one cost, the cheapest design found; for pricing a size one cost per pair of top and
      * bottom bar sizes.
      */
-    interface Target {
+    interface CostToBeat {
         /** A combination with top bars of size {@code top} and bottom bars of {@code bottom} pays only below this. */
         double limit(BarSize top, BarSize bottom);
 
@@ -50,7 +50,7 @@ public final class BeamGenerator {
     }
 
     /** The span's design: a combination pays only below the cheapest found (or the search's ceiling). */
-    private static final class Cheapest implements Target {
+    private static final class Cheapest implements CostToBeat {
         private double cost;
 
         Cheapest(double cost) {
@@ -230,10 +230,10 @@ public final class BeamGenerator {
     }
 
     /**
-     * The frame's options and its cheapest combination, searched only as far as {@code target} says they
+     * The frame's options and its cheapest combination, searched only as far as {@code toBeat} says they
      * could pay; null if the frame fails whatever its bars.
      */
-    FrameOptions evaluate(SpanFrame f, Target target) {
+    FrameOptions evaluate(SpanFrame f, CostToBeat toBeat) {
         FrameBounds frameBounds = bounds(f);
         OptionGenerator options = new OptionGenerator(ctx, frameBounds);
         if (!options.framePasses(ctx.smallestBar(), ctx.smallestBar(), 1)) {
@@ -241,23 +241,23 @@ public final class BeamGenerator {
         }
         List<TopOption> tops = options.tops();
         if (p.bottomAnchored() || f.deflection()) {
-            return everything(options, frameBounds, tops, target);
+            return everything(options, frameBounds, tops, toBeat);
         }
         // supports first (they do not depend on the other options), then the mid-span options for two
         // continuous bars, then more continuous bars only where a bound says they could pay
-        ToDoubleFunction<BarSize> supportLimit = supportLimit(frameBounds, tops, target);
+        ToDoubleFunction<BarSize> supportLimit = supportLimit(frameBounds, tops, toBeat);
         List<SupportOption> lefts = p.leftSupport()
                 ? options.supports(BeamProblem.Place.LEFT, p.mLeft(), supportLimit, NO_BOTTOM_BARS) : List.of();
         List<SupportOption> rights = p.rightSupport()
                 ? options.supports(BeamProblem.Place.RIGHT, p.mRight(), supportLimit, NO_BOTTOM_BARS) : List.of();
         List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
-        List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, target, lefts, rights)));
-        target.lower(combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY,
+        List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, toBeat, lefts, rights)));
+        toBeat.lower(combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY,
                 null)));
-        addMoreContinuous(options, frameBounds, tops, mids, target, lefts, rights);
+        addMoreContinuous(options, frameBounds, tops, mids, toBeat, lefts, rights);
         FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
                 Double.POSITIVE_INFINITY, null));
-        target.lower(out);
+        toBeat.lower(out);
         return out;
     }
 
@@ -266,8 +266,8 @@ public final class BeamGenerator {
      * what must be beaten less the least the rest of a combination costs (no limit without one cost to beat).
      */
     private static ToDoubleFunction<BarSize> supportLimit(FrameBounds frameBounds, List<TopOption> tops,
-            Target target) {
-        double common = target.common();
+            CostToBeat toBeat) {
+        double common = toBeat.common();
         return Double.isInfinite(common) ? t -> Double.POSITIVE_INFINITY
                 : t -> common - frameBounds.besideSupports(tops, t);
     }
@@ -277,9 +277,9 @@ public final class BeamGenerator {
      * and the cheapest support options that could go with it ({@code lefts} or {@code rights} null: not
      * known yet, counted as nothing).
      */
-    private OptionGenerator.MidLimit midLimit(SpanFrame f, Target target, List<SupportOption> lefts,
+    private OptionGenerator.MidLimit midLimit(SpanFrame f, CostToBeat toBeat, List<SupportOption> lefts,
             List<SupportOption> rights) {
-        return (top, bottom) -> target.limit(top.bar(), bottom) - f.cost() - top.cost()
+        return (top, bottom) -> toBeat.limit(top.bar(), bottom) - f.cost() - top.cost()
                 - (lefts == null ? 0 : Combinations.cheapestAbove(lefts, top, p.leftSupport()))
                 - (rights == null ? 0 : Combinations.cheapestAbove(rights, top, p.rightSupport()));
     }
@@ -289,7 +289,7 @@ public final class BeamGenerator {
      * (the frame's bounds, the cheapest supports) could still pay; whether it added any.
      */
     private boolean addMoreContinuous(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
-            List<MidOption> mids, Target target, List<SupportOption> lefts, List<SupportOption> rights) {
+            List<MidOption> mids, CostToBeat toBeat, List<SupportOption> lefts, List<SupportOption> rights) {
         SpanFrame f = frameBounds.frame();
         boolean added = false;
         for (TopOption t : tops) {
@@ -299,8 +299,8 @@ public final class BeamGenerator {
             double least = f.cost() + t.cost() + frameBounds.midSpan(t)
                     + Combinations.cheapestAbove(lefts, t, p.leftSupport())
                     + Combinations.cheapestAbove(rights, t, p.rightSupport());
-            if (least < target.limitForTop(t.bar())) {
-                mids.addAll(options.mids(List.of(t), midLimit(f, target, lefts, rights)));
+            if (least < toBeat.limitForTop(t.bar())) {
+                mids.addAll(options.mids(List.of(t), midLimit(f, toBeat, lefts, rights)));
                 added = true;
             }
         }
@@ -309,10 +309,10 @@ public final class BeamGenerator {
 
     /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
     private FrameOptions everything(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
-            Target target) {
+            CostToBeat toBeat) {
         SpanFrame f = frameBounds.frame();
-        // deflection and anchorage only add demands: what cannot beat the target on cost alone is not searched
-        ToDoubleFunction<BarSize> limit = supportLimit(frameBounds, tops, target);
+        // deflection and anchorage only add demands: what cannot beat the cost on cost alone is not searched
+        ToDoubleFunction<BarSize> limit = supportLimit(frameBounds, tops, toBeat);
         // without anchored bottom bars the supports do not depend on the mid-span options: find them first,
         // so the mid-span search knows the least the supports add
         List<SupportOption> knownLeft = null;
@@ -324,9 +324,9 @@ public final class BeamGenerator {
                     ? options.supports(BeamProblem.Place.RIGHT, p.mRight(), limit, NO_BOTTOM_BARS) : List.of();
         }
         if (f.deflection() && !p.bottomAnchored()) {
-            return belowMinimumDepth(options, frameBounds, tops, target, knownLeft, knownRight);
+            return belowMinimumDepth(options, frameBounds, tops, toBeat, knownLeft, knownRight);
         }
-        List<MidOption> mids = options.mids(tops, midLimit(f, target, knownLeft, knownRight));
+        List<MidOption> mids = options.mids(tops, midLimit(f, toBeat, knownLeft, knownRight));
         List<BottomBars> bottoms;
         if (p.bottomAnchored()) {
             Set<BottomBars> distinct = new LinkedHashSet<>();
@@ -341,7 +341,7 @@ public final class BeamGenerator {
                 ? options.supports(BeamProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
         List<SupportOption> rights = knownRight != null ? knownRight : p.rightSupport()
                 ? options.supports(BeamProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
-        return screened(options, f, tops, mids, lefts, rights, target);
+        return screened(options, f, tops, mids, lefts, rights, toBeat);
     }
 
     /**
@@ -350,18 +350,18 @@ public final class BeamGenerator {
      * dearer) are searched.
      */
     private FrameOptions belowMinimumDepth(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
-            Target target, List<SupportOption> lefts, List<SupportOption> rights) {
+            CostToBeat toBeat, List<SupportOption> lefts, List<SupportOption> rights) {
         SpanFrame f = frameBounds.frame();
         List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
-        List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, target, lefts, rights)));
-        FrameOptions first = screened(options, f, tops, new ArrayList<>(mids), lefts, rights, target);
-        boolean more = addMoreContinuous(options, frameBounds, tops, mids, target, lefts, rights);
-        return more ? screened(options, f, tops, mids, lefts, rights, target) : first;
+        List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, toBeat, lefts, rights)));
+        FrameOptions first = screened(options, f, tops, new ArrayList<>(mids), lefts, rights, toBeat);
+        boolean more = addMoreContinuous(options, frameBounds, tops, mids, toBeat, lefts, rights);
+        return more ? screened(options, f, tops, mids, lefts, rights, toBeat) : first;
     }
 
-    /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; the target lowered. */
+    /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; the cost lowered. */
     private FrameOptions screened(OptionGenerator options, SpanFrame f, List<TopOption> tops, List<MidOption> mids,
-            List<SupportOption> lefts, List<SupportOption> rights, Target target) {
+            List<SupportOption> lefts, List<SupportOption> rights, CostToBeat toBeat) {
         if (f.deflection()) {
             DeflectionScreen screen = new DeflectionScreen(p, ctx.sections(), f, options.shape(), mids, lefts, rights);
             mids = screen.mids();
@@ -370,7 +370,7 @@ public final class BeamGenerator {
         }
         FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
                 Double.POSITIVE_INFINITY, null));
-        target.lower(out);
+        toBeat.lower(out);
         return out;
     }
 }

@@ -76,7 +76,7 @@ public final class PairTables {
      * The evaluation's target in table mode: a combination is worth having if it is cheaper than the best
      * found for its pair of bar sizes, and each frame's options lower every pair's entry they can.
      */
-    private final class Table implements BeamGenerator.Target {
+    private final class Table implements BeamGenerator.CostToBeat {
         private final double[][] cost;
 
         Table(double[][] cost) {
