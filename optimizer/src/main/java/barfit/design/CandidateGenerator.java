@@ -12,7 +12,6 @@ import barfit.section.StirrupRules;
 import barfit.section.SectionProbe;
 import barfit.section.SectionShape;
 import barfit.section.StrengthBound;
-import barfit.section.ShearVerdict;
 import barfit.section.SkinBars;
 import barfit.section.Stirrups;
 import java.util.ArrayList;
@@ -148,7 +147,6 @@ public final class CandidateGenerator {
 
     private List<Frame> frames() {
         List<Frame> out = new ArrayList<>();
-        double cover = p.detailing().cover();
         double dbMin = Double.MAX_VALUE;
         double massPerArea = Double.MAX_VALUE;
         for (BarSize bs : tensionSizes) {
@@ -160,32 +158,27 @@ public final class CandidateGenerator {
         }
         double minPair = 2 * tensionSizes.stream().mapToDouble(BarSize::area).min().orElse(0)
                 + 2 * compressionSizes.stream().mapToDouble(BarSize::area).min().orElse(0);
-        for (double b : p.widths()) {
-            for (double h : p.depths()) {
-                if (p.flange() != null && h <= p.flange().thickness()) {
-                    continue;
-                }
-                for (BarSize ds : p.space().stirrupSizes()) {
-                    if (b <= 2 * (cover + ds.diameter()) + dbMin) {
-                        continue;
-                    }
-                    Detailing det = new Detailing(cover, ds, p.detailing().layerGap(), p.detailing().exposure());
-                    CostBreakdown fc = cost.frame(b, h, p.flange());
-                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-                    double skinCost = skin == null ? 0 : cost.bars(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()));
-                    double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
-                    double steelLb = cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * massPerArea
-                            * Math.max(areaLb + 2 * compressionSizes.get(0).area(), minPair);
-                    double cheapestStirrups = Double.POSITIVE_INFINITY;
-                    for (int legs : p.space().stirrupLegs()) {
-                        for (double sp : p.space().stirrupSpacings()) {
-                            cheapestStirrups = Math.min(cheapestStirrups, cost.stirrups(b, h, new Stirrups(ds, legs, sp)));
-                        }
-                    }
-                    double lb = fc.total() + skinCost + steelLb + cheapestStirrups;
-                    out.add(new Frame(b, h, ds, det, fc, skin, skinCost, lb, areaLb, cheapestStirrups, new double[] {Double.NaN}));
+        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(),
+                p.detailing())) {
+            double b = cell.width();
+            double h = cell.height();
+            BarSize ds = cell.stirrupBar();
+            Detailing det = cell.detailing();
+            CostBreakdown frameCost = cost.frame(b, h, p.flange());
+            SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
+            double skinCost = skin == null ? 0 : cost.bars(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()));
+            double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
+            double steelLb = cost.mainBarPricePerKg() * massPerArea
+                    * Math.max(areaLb + 2 * compressionSizes.get(0).area(), minPair);
+            double cheapestStirrups = Double.POSITIVE_INFINITY;
+            for (int legs : p.space().stirrupLegs()) {
+                for (double spacing : p.space().stirrupSpacings()) {
+                    cheapestStirrups = Math.min(cheapestStirrups, cost.stirrups(b, h, new Stirrups(ds, legs, spacing)));
                 }
             }
+            double lb = frameCost.total() + skinCost + steelLb + cheapestStirrups;
+            out.add(new Frame(b, h, ds, det, frameCost, skin, skinCost, lb, areaLb, cheapestStirrups,
+                    new double[] {Double.NaN}));
         }
         out.sort(Comparator.comparingDouble(Frame::lowerBound).thenComparingDouble(Frame::b)
                 .thenComparingDouble(Frame::h).thenComparingDouble(f -> f.stirrupBar().diameter()));

@@ -79,9 +79,28 @@ public final class CostModel {
         return new CostBreakdown(concrete, 0, 0, formwork, premium);
     }
 
+    /**
+     * The price of a kilogram of main (longitudinal) bars in the beam: the rate times the lap and waste
+     * factor. Every main-bar price is this times a mass, multiplied in the order of the methods below:
+     * a product in another order can differ in its last bit, and so change which design is cheapest.
+     */
+    public double mainBarPricePerKg() {
+        return rates.mainBarsPerKg() * rates.lapFactor();
+    }
+
     /** Main (longitudinal) bars, per metre. */
     public double bars(BarSize bar, int count) {
-        return rates.mainBarsPerKg() * rates.lapFactor() * bar.massPerMetre() * count;
+        return mainBarPricePerKg() * bar.massPerMetre() * count;
+    }
+
+    /** {@code count} main bars each {@code length} mm long. */
+    public double bars(BarSize bar, int count, double length) {
+        return bars(bar, count) * length / 1000.0;
+    }
+
+    /** Main bars of one size, {@code metres} of them in all. */
+    public double barMetres(BarSize bar, double metres) {
+        return mainBarPricePerKg() * bar.massPerMetre() * metres;
     }
 
     /**
@@ -114,6 +133,12 @@ public final class CostModel {
         double setsPerMetre = 1000.0 / s.spacing();
         double kgPerSet = stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0 * s.bar().massPerMetre();
         return rates.stirrupsPerKg() * kgPerSet * setsPerMetre;
+    }
+
+    /** {@code sets} stirrup sets (a zone's stirrups). */
+    public double stirrupSets(double b, double h, Stirrups s, int sets) {
+        return rates.stirrupsPerKg() * s.bar().massPerMetre() * sets * stirrupSetLength(b, h, s.bar(), s.legs())
+                / 1000.0;
     }
 
     /** An amount in currency to the searches' units ({@link #UNITS}). */

@@ -44,62 +44,56 @@ public final class ExhaustiveSearch {
         long checked = 0;
         java.util.Map<String, Long> perKey = new java.util.HashMap<>();
         Demand demand = new Demand(p.mu(), p.vu());
-        for (double b : p.widths()) {
-            for (double h : p.depths()) {
-                if (p.flange() != null && h <= p.flange().thickness()) {
-                    continue;
-                }
-                for (BarSize ds : p.space().stirrupSizes()) {
-                    Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(),
-                            p.detailing().exposure());
-                    if (BarSpacing.innerWidth(b, det) <= 0) {
-                        continue;
-                    }
-                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-                    for (BarSize t : p.space().barSizes()) {
-                        int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
-                        for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
-                            for (List<Integer> counts : countVectors(layers, nmax)) {
-                                // the cheapest stirrups per range of legs the bars allow (at least what the busiest layer needs, at most
-                                // one per bar of the outer tension layer and of the compression layer)
-                                java.util.Map<String, java.util.Optional<Stirrups>> byLegs = new java.util.HashMap<>();
-                                for (BarSize c : p.space().compressionSizes()) {
-                                    int mmax = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
-                                    if (!Layout.fitsHeight(h, det, t, layers, c)) {
-                                        continue;
-                                    }
-                                    for (int m = 2; m <= mmax; m++) {
-                                        // the ties of 9.7.6.4 where these compression bars are relied on
-                                        Layout bars = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m,
-                                                new Stirrups(ds, 2, p.space().stirrupSpacings().get(0)), skin);
-                                        StirrupRules.TieDemand ties = StirrupRules.ties(
-                                                bars.section(p.materials(), p.detailing(), p.code()), p.bending(), p.mu());
-                                        if (!ties.sizeOk(ds.diameter())) {
-                                            continue;
-                                        }
-                                        int need = Math.max(p.space().legsFor(Math.max(counts.get(0), m)), ties.minLegs());
-                                        int most = Math.min(counts.get(0), m);
-                                        double sMax = ties.maxSpacing();
-                                        final BarSize cc = c;
-                                        Stirrups st = byLegs.computeIfAbsent(need + "/" + most + "/" + sMax,
-                                                k -> java.util.Optional.ofNullable(
-                                                        cheapestStirrups(p, b, h, det, t, counts, cc, need, most, sMax)))
-                                                .orElse(null);
-                                        if (st == null) {
-                                            continue;
-                                        }
-                                        Layout lay = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m, st, skin);
-                                        BeamSection s = lay.section(p.materials(), p.detailing(), p.code());
-                                        checked++;
-                                        CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
-                                        if (r.ok()) {
-                                            long u = CostModel.units(lay.cost(cost).total());
-                                            perKey.merge(lay.distinctKey(), u, Math::min);
-                                            if (u < bestUnits) {
-                                                bestUnits = u;
-                                                best = lay;
-                                            }
-                                        }
+        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(),
+                p.detailing())) {
+            double b = cell.width();
+            double h = cell.height();
+            BarSize ds = cell.stirrupBar();
+            Detailing det = cell.detailing();
+            SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
+            for (BarSize t : p.space().barSizes()) {
+                int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
+                for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
+                    for (List<Integer> counts : countVectors(layers, nmax)) {
+                        // the cheapest stirrups per range of legs the bars allow (at least what the busiest layer needs, at most
+                        // one per bar of the outer tension layer and of the compression layer)
+                        java.util.Map<String, java.util.Optional<Stirrups>> byLegs = new java.util.HashMap<>();
+                        for (BarSize c : p.space().compressionSizes()) {
+                            int compressionFit = BarSpacing.maxBars(b, det, c, p.materials(), p.code());
+                            if (!Layout.fitsHeight(h, det, t, layers, c)) {
+                                continue;
+                            }
+                            for (int m = 2; m <= compressionFit; m++) {
+                                // the ties of 9.7.6.4 where these compression bars are relied on
+                                Layout bars = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m,
+                                        new Stirrups(ds, 2, p.space().stirrupSpacings().get(0)), skin);
+                                StirrupRules.TieDemand ties = StirrupRules.ties(
+                                        bars.section(p.materials(), p.detailing(), p.code()), p.bending(), p.mu());
+                                if (!ties.sizeOk(ds.diameter())) {
+                                    continue;
+                                }
+                                int need = Math.max(p.space().legsFor(Math.max(counts.get(0), m)), ties.minLegs());
+                                int most = Math.min(counts.get(0), m);
+                                double maxSpacing = ties.maxSpacing();
+                                final BarSize compressionBar = c;
+                                Stirrups st = byLegs.computeIfAbsent(need + "/" + most + "/" + maxSpacing,
+                                        k -> java.util.Optional.ofNullable(
+                                                cheapestStirrups(p, b, h, det, t, counts, compressionBar, need, most,
+                                                        maxSpacing)))
+                                        .orElse(null);
+                                if (st == null) {
+                                    continue;
+                                }
+                                Layout lay = new Layout(b, h, p.flange(), p.bending(), t, counts, c, m, st, skin);
+                                BeamSection s = lay.section(p.materials(), p.detailing(), p.code());
+                                checked++;
+                                CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
+                                if (r.ok()) {
+                                    long units = CostModel.units(lay.cost(cost).total());
+                                    perKey.merge(lay.distinctKey(), units, Math::min);
+                                    if (units < bestUnits) {
+                                        bestUnits = units;
+                                        best = lay;
                                     }
                                 }
                             }

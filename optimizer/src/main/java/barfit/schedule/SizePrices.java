@@ -2,7 +2,8 @@ package barfit.schedule;
 
 import barfit.design.CostModel;
 import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamGenerator;
+import barfit.design.beam.PairTable;
+import barfit.design.beam.PairTables;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -27,12 +28,12 @@ final class SizePrices {
     private final Parallel pool;
     /** Every section size any beam may take, ordered by width then height. */
     private final List<Size> sizes;
-    /** Each beam's generator; null where the beam has no design on its own (it is left out). */
-    private final List<BeamGenerator> generators = new ArrayList<>();
+    /** Each beam's pricing; null where the beam has no design on its own (it is left out). */
+    private final List<PairTables> generators = new ArrayList<>();
     /** {@code lower.get(i)[s][top][bottom]}: a lower bound on beam i in size s; {@code [s]} null where it has no frame. */
     private final List<double[][][]> lower;
     /** {@code exact.get(i)[s]}: beam i priced exactly in size s, once asked for. */
-    private final List<BeamGenerator.PairTable[]> exact = new ArrayList<>();
+    private final List<PairTable[]> exact = new ArrayList<>();
     private int pricedPairs;
 
     /** Bounds every beam with a design of its own ({@code own}) in every size, beam by beam in parallel. */
@@ -41,8 +42,8 @@ final class SizePrices {
         this.pool = pool;
         this.sizes = sizesOf(in);
         for (int i = 0; i < beams.size(); i++) {
-            generators.add(own.get(i).feasible() ? new BeamGenerator(beams.get(i).problem(), cost) : null);
-            exact.add(new BeamGenerator.PairTable[sizes.size()]);
+            generators.add(own.get(i).feasible() ? new PairTables(beams.get(i).problem(), cost) : null);
+            exact.add(new PairTable[sizes.size()]);
         }
         this.lower = pool.map(beams.size(), Progress.Phase.of(Progress.Step.BOUNDING_SIZES),
                 beam -> lowerBoundsOf(beam, own.get(beam)));
@@ -74,13 +75,13 @@ final class SizePrices {
      */
     private double[][][] lowerBoundsOf(int beam, BeamDesigner.Outcome own) {
         double[][][] out = new double[sizes.size()][][];
-        BeamGenerator generator = generators.get(beam);
+        PairTables generator = generators.get(beam);
         if (generator == null) {
             return out;
         }
         double floor = own.best().cost().total();
         for (int s = 0; s < sizes.size(); s++) {
-            double[][] bound = generator.pairLowerBounds(sizes.get(s).width(), sizes.get(s).height());
+            double[][] bound = generator.lowerBounds(sizes.get(s).width(), sizes.get(s).height());
             if (bound != null) {
                 for (double[] row : bound) {
                     for (int j = 0; j < row.length; j++) {
@@ -117,7 +118,7 @@ final class SizePrices {
 
     /** Beam {@code beam} in size {@code size} with bar sizes {@code bars}: exact where priced, else the lower bound. */
     double price(int beam, int size, boolean[] bars) {
-        BeamGenerator.PairTable table = exact.get(beam)[size];
+        PairTable table = exact.get(beam)[size];
         if (table != null) {
             return table.best(bars);
         }
@@ -145,18 +146,18 @@ final class SizePrices {
             }
         }
         List<Integer> beamsToPrice = new ArrayList<>(sizesByBeam.keySet());
-        List<BeamGenerator.PairTable[]> tables = pool.map(beamsToPrice.size(),
+        List<PairTable[]> tables = pool.map(beamsToPrice.size(),
                 Progress.Phase.of(Progress.Step.PRICING_SIZES), j -> {
                     int beam = beamsToPrice.get(j);
-                    BeamGenerator.PairTable[] row = new BeamGenerator.PairTable[sizes.size()];
+                    PairTable[] row = new PairTable[sizes.size()];
                     for (int s : sizesByBeam.get(beam)) {
-                        row[s] = generators.get(beam).pairTable(sizes.get(s).width(), sizes.get(s).height());
+                        row[s] = generators.get(beam).exact(sizes.get(s).width(), sizes.get(s).height());
                     }
                     return row;
                 }, Progress.NONE);
         for (int j = 0; j < beamsToPrice.size(); j++) {
             int beam = beamsToPrice.get(j);
-            BeamGenerator.PairTable[] row = tables.get(j);
+            PairTable[] row = tables.get(j);
             for (int s = 0; s < row.length; s++) {
                 if (row[s] != null) {
                     checkBound(beam, s, row[s]);
@@ -168,7 +169,7 @@ final class SizePrices {
     }
 
     /** The search is exact only if no bound exceeds its price: a breach is a bug, never a result. */
-    private void checkBound(int beam, int size, BeamGenerator.PairTable table) {
+    private void checkBound(int beam, int size, PairTable table) {
         double[][] bound = lower.get(beam)[size];
         for (int top = 0; top < bound.length; top++) {
             for (int bottom = 0; bottom < bound.length; bottom++) {

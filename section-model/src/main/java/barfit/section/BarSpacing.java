@@ -16,6 +16,14 @@ public final class BarSpacing {
         return bw - 2 * (det.cover() + det.stirrupBar().diameter());
     }
 
+    /**
+     * Whether the web leaves bars of this size room between the inner faces of its stirrup legs: an inner
+     * width of one bar diameter or less holds no bar beside another, so no layer of them.
+     */
+    public static boolean roomFor(double bw, Detailing det, BarSize bar) {
+        return innerWidth(bw, det) > bar.diameter();
+    }
+
     /** Least clear spacing between bars in a layer: max(25 mm, db, 4/3 aggregate) (25.2.1). */
     public static double minClear(BarSize bar, Materials m, CodeEquations code) {
         return Math.max(code.minClearSpacing(), Math.max(bar.diameter(), 4.0 / 3.0 * m.aggregate()));

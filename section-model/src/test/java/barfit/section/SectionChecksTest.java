@@ -190,6 +190,18 @@ class SectionChecksTest {
     }
 
     @Test
+    void aWebNoWiderThanABarBetweenItsStirrupLegsHasNoRoomForBars() {
+        // inner width = bw - 2 (cover + stirrup diameter), bars against the legs (common practice, no source);
+        // 150 mm web, 40 mm cover, No. 10 stirrups (9.5 mm, ASTM A615M Table 1): 150 - 2 x 49.5 = 51 mm
+        Detailing det = Sections.detailing(40, Sections.si("10"));
+        assertEquals(51, BarSpacing.innerWidth(150, det), 1e-9);
+        assertTrue(BarSpacing.roomFor(150, det, Sections.si("29"))); // 28.7 mm bars in 51 mm
+        assertFalse(BarSpacing.roomFor(127, det, Sections.si("29"))); // 28 mm inside
+        assertFalse(BarSpacing.roomFor(110, det, Sections.si("16"))); // 11 mm inside, 15.9 mm bars
+        assertTrue(BarSpacing.roomFor(120, det, Sections.si("16"))); // 21 mm inside
+    }
+
+    @Test
     void minimumDepthUsesTheFyFactor() {
         // ACI 318-19 Table 9.3.1.1: simple span 6 m, fy = 420 MPa -> 6000/16 = 375 mm; for fy = 280 MPa
         // the factor (0.4 + 280/700) = 0.8 -> 300 mm

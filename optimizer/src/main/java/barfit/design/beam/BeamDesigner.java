@@ -187,14 +187,14 @@ public final class BeamDesigner {
             BeamSelection.Choice c = r.choice();
             BeamLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
             if (c.set().frame().deflection() && !BeamVerifier.deflectionOk(p, layout)) {
-                sel.cutDeflection(c, gen);
+                sel.cutDeflection(c, gen.sections());
                 cuts++;
                 continue;
             }
             BeamReport report = BeamVerifier.verify(p, layout, true);
             if (!report.ok()) {
                 if (report.okApartFromDeflection()) {
-                    sel.cutDeflection(c, gen);
+                    sel.cutDeflection(c, gen.sections());
                     cuts++;
                     continue;
                 }

@@ -3,6 +3,7 @@ package barfit.design.beam;
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.ExhaustiveSearch;
+import barfit.design.FrameEnumerator;
 import barfit.design.Layout;
 import barfit.section.BarSpacing;
 import barfit.section.CheckResult;
@@ -36,74 +37,68 @@ public final class BeamExhaustive {
         long bestUnits = Long.MAX_VALUE;
         long combos = 0;
         List<BeamProblem.Zone> zones = p.zones();
-        for (double b : p.widths()) {
-            for (double h : p.depths()) {
-                if (p.flange() != null && h <= p.flange().thickness()) {
-                    continue;
-                }
-                for (BarSize ds : p.space().stirrupSizes()) {
-                    Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(),
-                            p.detailing().exposure());
-                    if (BarSpacing.innerWidth(b, det) <= 0) {
+        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(),
+                p.detailing())) {
+            double b = cell.width();
+            double h = cell.height();
+            BarSize stirrupBar = cell.stirrupBar();
+            Detailing det = cell.detailing();
+            SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
+            Map<String, Boolean> sectionOk = new HashMap<>();
+            Map<String, Stirrups> zoneMemo = new HashMap<>();
+            for (BarSize topBar : p.space().barSizes()) {
+                int topFit = BarSpacing.maxBars(b, det, topBar, p.materials(), p.code());
+                for (BarSize bottomBar : p.space().barSizes()) {
+                    if (!topBar.equals(bottomBar) && p.maxBarSizes() < 2) {
                         continue;
                     }
-                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-                    Map<String, Boolean> sectionOk = new HashMap<>();
-                    Map<String, Stirrups> zoneMemo = new HashMap<>();
-                    for (BarSize tt : p.space().barSizes()) {
-                        int nmaxT = BarSpacing.maxBars(b, det, tt, p.materials(), p.code());
-                        for (BarSize tb : p.space().barSizes()) {
-                            if (!tt.equals(tb) && p.maxBarSizes() < 2) {
-                                continue;
-                            }
-                            int nmaxB = BarSpacing.maxBars(b, det, tb, p.materials(), p.code());
-                            for (List<Integer> bottom : vectors(p.space().maxLayers(), nmaxB)) {
-                                int ncMax = p.cantilever() ? 2 : nmaxT;
-                                for (int nc = 2; nc <= ncMax; nc++) {
-                                    for (List<Integer> left : p.leftSupport() ? vectors(p.space().maxLayers(), nmaxT)
-                                            : singletonNull()) {
-                                        if (left != null && left.get(0) < nc) {
-                                            continue;
+                    int bottomFit = BarSpacing.maxBars(b, det, bottomBar, p.materials(), p.code());
+                    for (List<Integer> bottom : vectors(p.space().maxLayers(), bottomFit)) {
+                        int mostContinuous = p.cantilever() ? 2 : topFit;
+                        for (int continuous = 2; continuous <= mostContinuous; continuous++) {
+                            for (List<Integer> left : p.leftSupport() ? vectors(p.space().maxLayers(), topFit)
+                                    : singletonNull()) {
+                                if (left != null && left.get(0) < continuous) {
+                                    continue;
+                                }
+                                for (List<Integer> right : p.rightSupport()
+                                        ? vectors(p.space().maxLayers(), topFit) : singletonNull()) {
+                                    if (right != null && right.get(0) < continuous) {
+                                        continue;
+                                    }
+                                    double extL = left == null ? 0
+                                            : Extension.of(p, b, h, det, topBar).length();
+                                    double extR = right == null ? 0
+                                            : Extension.of(p, b, h, det, topBar).length();
+                                    // stirrups: the cheapest passing option per zone for these bars
+                                    BeamLayout trial = new BeamLayout(b, h, p.flange(), stirrupBar, skin, topBar,
+                                            continuous, left, right, bottomBar, bottom,
+                                            fill(zones.size(), new Stirrups(stirrupBar, 2, 100)),
+                                            extL, extR);
+                                    List<Stirrups> st = new ArrayList<>();
+                                    for (int z = 0; z < zones.size(); z++) {
+                                        Stirrups s = zoneStirrups(p, trial, z, zoneMemo);
+                                        if (s == null) {
+                                            break;
                                         }
-                                        for (List<Integer> right : p.rightSupport()
-                                                ? vectors(p.space().maxLayers(), nmaxT) : singletonNull()) {
-                                            if (right != null && right.get(0) < nc) {
-                                                continue;
-                                            }
-                                            double extL = left == null ? 0
-                                                    : Extension.of(p, b, h, det, tt).length();
-                                            double extR = right == null ? 0
-                                                    : Extension.of(p, b, h, det, tt).length();
-                                            // stirrups: the cheapest passing option per zone for these bars
-                                            BeamLayout trial = new BeamLayout(b, h, p.flange(), ds, skin, tt, nc, left,
-                                                    right, tb, bottom, fill(zones.size(), new Stirrups(ds, 2, 100)),
-                                                    extL, extR);
-                                            List<Stirrups> st = new ArrayList<>();
-                                            for (int z = 0; z < zones.size(); z++) {
-                                                Stirrups s = zoneStirrups(p, trial, z, zoneMemo);
-                                                if (s == null) {
-                                                    break;
-                                                }
-                                                st.add(s);
-                                            }
-                                            if (st.size() < zones.size()) {
-                                                continue;
-                                            }
-                                            BeamLayout lay = new BeamLayout(b, h, p.flange(), ds, skin, tt, nc, left,
-                                                    right, tb, bottom, st, extL, extR);
-                                            combos++;
-                                            if (!sectionsOk(p, lay, sectionOk)) {
-                                                continue;
-                                            }
-                                            if (!BeamVerifier.verify(p, lay, false).ok()) {
-                                                continue;
-                                            }
-                                            long u = CostModel.units(lay.cost(p, cost).total());
-                                            if (u < bestUnits) {
-                                                bestUnits = u;
-                                                best = lay;
-                                            }
-                                        }
+                                        st.add(s);
+                                    }
+                                    if (st.size() < zones.size()) {
+                                        continue;
+                                    }
+                                    BeamLayout lay = new BeamLayout(b, h, p.flange(), stirrupBar, skin, topBar,
+                                            continuous, left, right, bottomBar, bottom, st, extL, extR);
+                                    combos++;
+                                    if (!sectionsOk(p, lay, sectionOk)) {
+                                        continue;
+                                    }
+                                    if (!BeamVerifier.verify(p, lay, false).ok()) {
+                                        continue;
+                                    }
+                                    long units = CostModel.units(lay.cost(p, cost).total());
+                                    if (units < bestUnits) {
+                                        bestUnits = units;
+                                        best = lay;
                                     }
                                 }
                             }

@@ -2,131 +2,143 @@ package barfit.design.beam;
 
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
-import barfit.design.Layout;
-import barfit.design.StirrupChooser;
-import barfit.design.TensionSearch;
-import barfit.section.BarLayer;
-import barfit.section.BarSpacing;
-import barfit.section.BeamSection;
-import barfit.section.Bending;
-import barfit.section.CheckResult;
-import barfit.section.Detailing;
-import barfit.section.SectionChecks;
-import barfit.section.SectionProbe;
-import barfit.section.SectionShape;
-import barfit.section.SkinBars;
-import barfit.section.Span;
-import barfit.section.SpanChecks;
-import barfit.section.StirrupRules;
-import barfit.section.StrengthBound;
-import barfit.section.Stirrups;
 import java.util.ArrayList;
-import java.util.Comparator;
-import java.util.HashMap;
-import java.util.LinkedHashMap;
+import java.util.Collections;
+import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Map;
+import java.util.Set;
+import java.util.function.ToDoubleFunction;
 
 /**
- * Candidates for a whole span, frame by frame (width, height, stirrup size), asked of the section
- * model: the top options (top bar size and continuous count), the mid-span options (bottom bars with
- * those continuous bars as compression steel, and the stirrups of the zones that use the mid-span
- * section), and each continuous support's options (top bars there, with its zone stirrups for each
- * number of legs). How they fit together (same top size, continuous bars within the support's first
- * layer, stirrup legs enough for the bottom bars, bar sizes per beam, deflection) is left to the CP-SAT
- * model; a cheap enumeration per frame gives the incumbent that bounds which frames and options are
- * worth handing over.
+ * Candidates for a whole span, frame by frame ({@link SpanFrames}), each frame's options asked of the
+ * section model ({@link OptionGenerator}). How they fit together (same top size, continuous bars within
+ * the support's first layer, stirrup legs enough for the bottom bars, bar sizes per beam, deflection) is
+ * left to the CP-SAT model; a cheap enumeration per frame ({@link Combinations}) gives the incumbent that
+ * bounds which frames ({@link FrameBounds}) and options are worth handing over.
+ *
+ * <p>A frame's evaluation is told what to beat by a {@link CostToBeat}: the cheapest design found, when
+ * designing the span; the cheapest found per pair of bar sizes, when {@link PairTables} prices a size.
  */
 public final class BeamGenerator {
-    /** The "legs" of a support option whose section sizes no stirrup zone: it limits nothing. */
-    static final int NO_ZONES = 1000;
-    /** The most legs of a support option whose section sizes no stirrup zone: it asks nothing of the bottom bars. */
-    static final int NO_ZONES_MAX = 0;
-
-    public record Frame(double b, double h, BarSize ds, Detailing det, SkinBars skin, double cost, double lowerBound,
-            boolean deflection, double extLeft, double extRight) {
-    }
-
-    public record TopOpt(BarSize bar, int nc, double cost) {
-    }
-
-    public record MidOpt(TopOpt top, BarSize bar, List<Integer> counts, double d, Map<Integer, Stirrups> zones,
-            double cost, int legsNeeded) {
-        public int total() {
-            return BeamLayout.sum(counts);
-        }
-
-        public String key() {
-            return bar.designation() + counts;
-        }
-    }
-
-    /**
-     * A support option; {@code legs} is the fewest stirrup legs its zones were given (each zone takes
-     * the cheapest stirrups with at least that many), which must hold the bottom bars as well.
-     */
-    public record SupportOpt(BarSize bar, List<Integer> counts, double d, int legs, int legsMax,
-            Map<Integer, Stirrups> zones, double cost, String bottomKey) {
-        public int total() {
-            return BeamLayout.sum(counts);
-        }
-
-        /**
-         * Whether its stirrups suit a mid-span option's bottom bars: enough legs for the office's rule
-         * and no more legs than the bottom bars' outer layer can hold (25.7.1.2, 25.7.1.3).
-         */
-        public boolean holds(MidOpt m) {
-            return legs >= m.legsNeeded() && legsMax <= m.counts().get(0);
-        }
-    }
-
-    /** One frame's options and its best combination found by enumeration (infinite if none). */
-    public record FrameSet(Frame frame, List<TopOpt> tops, List<MidOpt> mids, List<SupportOpt> lefts,
-            List<SupportOpt> rights, double best, BeamLayout bestLayout) {
-    }
+    /** Support options designed with no bottom bars counted at the support: one pass, without them. */
+    private static final List<BottomBars> NO_BOTTOM_BARS = Collections.singletonList(null);
 
     public record Stats(int frames, int framesEvaluated, int framesSkipped, int flexureSolves, int shearEvaluations,
             long nanos) {
     }
 
-    public record Output(List<FrameSet> sets, double incumbent, BeamLayout incumbentLayout, Stats stats) {
+    public record Output(List<FrameOptions> sets, double incumbent, BeamLayout incumbentLayout, Stats stats) {
+    }
+
+    /**
+     * What a frame's options must beat to be worth searching, and what evaluating a frame lowers: for a
+     * span's design one cost, the cheapest design found; for pricing a size one cost per pair of top and
+     * bottom bar sizes.
+     */
+    interface CostToBeat {
+        /** A combination with top bars of size {@code top} and bottom bars of {@code bottom} pays only below this. */
+        double limit(BarSize top, BarSize bottom);
+
+        /** Any combination with top bars of this size pays only below this. */
+        double limitForTop(BarSize top);
+
+        /** The one cost every combination must beat, or infinity where each pair of sizes has its own. */
+        double common();
+
+        /** Takes account of a frame's options and their cheapest combination. */
+        void lower(FrameOptions evaluated);
+    }
+
+    /** The span's design: a combination pays only below the cheapest found (or the search's ceiling). */
+    private static final class Cheapest implements CostToBeat {
+        private double cost;
+
+        Cheapest(double cost) {
+            this.cost = cost;
+        }
+
+        @Override
+        public double limit(BarSize top, BarSize bottom) {
+            return cost;
+        }
+
+        @Override
+        public double limitForTop(BarSize top) {
+            return cost;
+        }
+
+        @Override
+        public double common() {
+            return cost;
+        }
+
+        @Override
+        public void lower(FrameOptions evaluated) {
+            cost = Math.min(cost, evaluated.best());
+        }
     }
 
     private final BeamProblem p;
-    private final CostModel cost;
-    private final SectionProbe midProbe;
-    private final SectionProbe supportProbe;
-    private final TensionSearch midSearch;
-    private final StirrupChooser chooser;
-    private final List<BeamProblem.Zone> zones;
-    private final double lm;
-    /** Zone stirrups depend only on the zone, the tension bars (d, As) and the legs asked for: remembered per frame. */
-    private final Map<ZoneKey, Stirrups> zoneMemo = new HashMap<>();
-
-    private record ZoneKey(int zone, double d, double as, int legs, int mostLegs, double maxSpacing) {
-    }
-
-    /** Zone indices per place, computed once. */
-    private final Map<BeamProblem.Place, List<Integer>> zonesAt = new java.util.EnumMap<>(BeamProblem.Place.class);
+    private final SpanContext ctx;
+    private final Combinations combinations;
+    /** The span's frames, made at the first use. */
+    private List<SpanFrame> frames;
+    /** The bounds of the frame last bounded or evaluated (see {@link #bounds}). */
+    private FrameBounds bounds;
 
     public BeamGenerator(BeamProblem problem, CostModel cost) {
         this.p = problem;
-        this.cost = cost;
-        this.midProbe = new SectionProbe(p.materials(), p.code());
-        this.supportProbe = new SectionProbe(p.materials(), p.code());
-        this.midSearch = new TensionSearch(midProbe, p.mMid() == null ? 0 : p.mMid());
-        this.chooser = new StirrupChooser(p.materials(), p.code(), p.space(), cost);
-        this.zones = p.zones();
-        this.lm = p.span() / 1000.0;
+        this.ctx = new SpanContext(problem, cost);
+        this.combinations = new Combinations(ctx);
     }
 
-    private double barCost(BarSize bar, int count, double length) {
-        return cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * bar.massPerMetre() * count * length / 1000.0;
+    SpanContext context() {
+        return ctx;
     }
 
-    private double stirrupCost(double b, double h, Stirrups s, BeamProblem.Zone z) {
-        return cost.rates().stirrupsPerKg() * s.bar().massPerMetre() * BeamLayout.stirrupSets(z.length(), s.spacing())
-                * cost.stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0;
+    Combinations combinations() {
+        return combinations;
+    }
+
+    /** The sections of this span's options, for the deflection cuts. */
+    SpanSections sections() {
+        return ctx.sections();
+    }
+
+    List<SpanFrame> frames() {
+        if (frames == null) {
+            frames = SpanFrames.of(ctx);
+        }
+        return frames;
+    }
+
+    /**
+     * No design of the span costs less than this: the least of its frames' lower bounds (concrete,
+     * formwork, skin bars, and the section model's strength bound on the bars and stirrups); infinite
+     * when no frame can hold it.
+     */
+    public double leastCost() {
+        double least = Double.POSITIVE_INFINITY;
+        for (SpanFrame f : frames()) {
+            least = Math.min(least, f.lowerBound());
+        }
+        return least;
+    }
+
+    /**
+     * A frame's bounds; those of the last frame asked about are kept, so that a frame bounded and then
+     * evaluated computes them once.
+     */
+    FrameBounds bounds(SpanFrame f) {
+        if (bounds == null || bounds.frame() != f) {
+            bounds = new FrameBounds(ctx, f);
+        }
+        return bounds;
+    }
+
+    /** Builds the layout of a combination (a support option null where the span has no such support). */
+    public BeamLayout layout(SpanFrame f, MidOption m, SupportOption left, SupportOption right) {
+        return combinations.layout(f, m, left, right);
     }
 
     public Output generate() {
@@ -149,16 +161,16 @@ public final class BeamGenerator {
     public Output generate(double slack, double ceiling) {
         long t0 = System.nanoTime();
         final double roof = loose(ceiling, slack);
-        List<Frame> frames = frames();
-        List<FrameSet> sets = new ArrayList<>();
+        List<SpanFrame> frames = frames();
+        List<FrameOptions> sets = new ArrayList<>();
         double incumbent = Double.POSITIVE_INFINITY;
         BeamLayout incumbentLayout = null;
         int evaluated = 0;
         int skipped = 0;
         // Below Table 9.3.1.1 a frame is costly to search without a cost to beat, and the cheapest bounds
         // are often there: search the most promising frame at or above h,min first for that cost.
-        Frame opener = null;
-        for (Frame f : frames) {
+        SpanFrame opener = null;
+        for (SpanFrame f : frames) {
             if (!f.deflection() && Double.isFinite(f.lowerBound())) {
                 opener = f;
                 break;
@@ -166,7 +178,7 @@ public final class BeamGenerator {
         }
         if (opener != null && frames.get(0) != opener && frames.get(0).deflection()) {
             evaluated++;
-            FrameSet fs = evaluate(opener, Math.min(loose(incumbent, slack), roof));
+            FrameOptions fs = evaluate(opener, new Cheapest(Math.min(loose(incumbent, slack), roof)));
             if (fs != null) {
                 sets.add(fs);
                 if (fs.best() < incumbent) {
@@ -178,19 +190,21 @@ public final class BeamGenerator {
             opener = null;
         }
         for (int i = 0; i < frames.size(); i++) {
-            Frame f = frames.get(i);
+            SpanFrame f = frames.get(i);
             if (f == opener) {
                 continue;
             }
-            if (f.lowerBound() >= Math.min(loose(incumbent, slack), roof) || Double.isInfinite(f.lowerBound())) {
+            double toBeat = Math.min(loose(incumbent, slack), roof);
+            if (f.lowerBound() >= toBeat || Double.isInfinite(f.lowerBound())) {
                 skipped = frames.size() - i;
                 break;
             }
-            if (Double.isFinite(Math.min(incumbent, roof)) && frameLowerBound(f) >= Math.min(loose(incumbent, slack), roof) - 1e-9) {
+            if (Double.isFinite(Math.min(incumbent, roof))
+                    && bounds(f).least(OptionGenerator.tops(ctx, f)) >= toBeat - 1e-9) {
                 continue; // a closer look at its bars shows it cannot beat the incumbent
             }
             evaluated++;
-            FrameSet fs = evaluate(f, Math.min(loose(incumbent, slack), roof));
+            FrameOptions fs = evaluate(f, new Cheapest(toBeat));
             if (fs == null) {
                 continue;
             }
@@ -200,474 +214,134 @@ public final class BeamGenerator {
                 incumbentLayout = fs.bestLayout();
             }
         }
-        final double inc = Math.min(loose(incumbent, slack), roof);
-        List<FrameSet> kept = new ArrayList<>();
-        for (FrameSet fs : sets) {
-            if (fs.frame().lowerBound() < inc + 1e-9) {
-                kept.add(prune(fs, inc));
+        final double toBeat = Math.min(loose(incumbent, slack), roof);
+        List<FrameOptions> kept = new ArrayList<>();
+        for (FrameOptions fs : sets) {
+            if (fs.frame().lowerBound() < toBeat + 1e-9) {
+                kept.add(combinations.prune(fs, toBeat));
             }
         }
         return new Output(kept, incumbent, incumbentLayout, new Stats(frames.size(), evaluated, skipped,
-                midProbe.solves() + supportProbe.solves(), chooser.evaluations(), System.nanoTime() - t0));
+                ctx.flexureSolves(), ctx.shearEvaluations(), System.nanoTime() - t0));
     }
 
     private static double loose(double incumbent, double slack) {
         return slack == 0 ? incumbent : incumbent * (1 + slack);
     }
 
-    // ------------------------------------------------------------------ frames and their bounds
-
     /**
-     * No design of the span costs less than this: the least of its frames' lower bounds (concrete,
-     * formwork, skin bars, and the section model's strength bound on the bars and stirrups); infinite
-     * when no frame can hold it.
+     * The frame's options and its cheapest combination, searched only as far as {@code toBeat} says they
+     * could pay; null if the frame fails whatever its bars.
      */
-    public double leastCost() {
-        double least = Double.POSITIVE_INFINITY;
-        for (Frame f : frames()) {
-            least = Math.min(least, f.lowerBound());
-        }
-        return least;
-    }
-
-    private List<Frame> frames() {
-        List<Frame> out = new ArrayList<>();
-        BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
-        double massPerArea = Double.MAX_VALUE;
-        for (BarSize s : p.space().barSizes()) {
-            massPerArea = Math.min(massPerArea, s.massPerMetre() / s.area());
-        }
-        double rate = cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * massPerArea;
-        for (double b : p.widths()) {
-            for (double h : p.depths()) {
-                if (p.flange() != null && h <= p.flange().thickness()) {
-                    continue;
-                }
-                for (BarSize ds : p.space().stirrupSizes()) {
-                    Detailing det = new Detailing(p.detailing().cover(), ds, p.detailing().layerGap(),
-                            p.detailing().exposure());
-                    if (BarSpacing.innerWidth(b, det) <= smallest.diameter()) {
-                        continue;
-                    }
-                    boolean deflection = h < SpanChecks.minimumDepth(p.span(), p.ends(), p.materials(), p.code()) - 1e-9;
-                    if (deflection && p.service() == null) {
-                        continue; // below Table 9.3.1.1 and nothing to compute deflection from
-                    }
-                    SkinBars skin = Layout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-                    double frameCost = cost.frame(b, h, p.flange()).total() * lm
-                            + (skin == null ? 0 : barCost(skin.bar(), 2 * Layout.skinBarsPerFace(h, skin.spacing()), p.span()));
-                    double extL = p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-                    double extR = p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-                    double lb = frameCost + steelLowerBound(b, h, det, smallest, rate) + stirrupLowerBound(b, h, ds);
-                    out.add(new Frame(b, h, ds, det, skin, frameCost, lb, deflection, extL, extR));
-                }
-            }
-        }
-        out.sort(Comparator.comparingDouble(Frame::lowerBound).thenComparingDouble(Frame::b)
-                .thenComparingDouble(Frame::h).thenComparingDouble(f -> f.ds().diameter()));
-        return out;
-    }
-
-    /** The least bar cost any layout of the frame could have, from the section model's strength bound. */
-    private double steelLowerBound(double b, double h, Detailing det, BarSize smallest, double rate) {
-        double minPair = 2 * smallest.area();
-        double compArea = 0;
-        for (BarSize s : p.space().barSizes()) {
-            int n = BarSpacing.maxBars(b, det, s, p.materials(), p.code());
-            if (n >= 2) {
-                compArea = Math.max(compArea, n * s.area() * p.space().maxLayers());
-            }
-        }
-        double dMax = h - det.firstLayerCentroid(smallest.diameter());
-        double dp = det.firstLayerCentroid(smallest.diameter());
-        double fc = p.materials().fc();
-        double fy = p.materials().fy();
-        double widest = p.flange() != null ? p.flange().on(b).width() : b; // at its effective width on this web
-        double l = p.span();
-        double bottom = p.midSection()
-                ? StrengthBound.minTensionArea(p.mMid(), dMax, compArea, dp, dp + 60, widest, fc, fy)
-                : minPair;
-        double area = Math.max(bottom, minPair) * l;
-        double supportL = p.leftSupport()
-                ? StrengthBound.minTensionArea(p.mLeft(), dMax, compArea, dp, dp + 60, b, fc, fy) : 0;
-        double supportR = p.rightSupport()
-                ? StrengthBound.minTensionArea(p.mRight(), dMax, compArea, dp, dp + 60, b, fc, fy) : 0;
-        if (Double.isInfinite(bottom) || Double.isInfinite(supportL) || Double.isInfinite(supportR)) {
-            return Double.POSITIVE_INFINITY;
-        }
-        if (p.cantilever()) {
-            area += Math.max(supportL, minPair) * l;
-        } else {
-            // the continuous pair over the span, and the rest of each support's steel over at least 0.3 x span
-            area += minPair * l + Math.max(0, supportL - minPair) * 0.3 * l + Math.max(0, supportR - minPair) * 0.3 * l;
-        }
-        return rate * area / 1000.0;
-    }
-
-    private double stirrupLowerBound(double b, double h, BarSize ds) {
-        double total = 0;
-        double widest = p.space().stirrupSpacings().get(p.space().stirrupSpacings().size() - 1);
-        int fewestLegs = p.space().stirrupLegs().get(0);
-        for (BeamProblem.Zone z : zones) {
-            total += stirrupCost(b, h, new Stirrups(ds, fewestLegs, widest), z);
-        }
-        return total;
-    }
-
-    // ------------------------------------------------------------------ one frame
-
-    /**
-     * The checks that depend on bar sizes but not counts (cover for the largest bar, skin, flange width,
-     * the 25.2.2 gap of {@code layers} stacked layers of {@code a}), asked of the section model on a
-     * stand-in section holding {@code layers} layers of {@code a} and one layer of {@code c}.
-     */
-    private boolean framePasses(Frame f, SectionShape shape, BarSize a, BarSize c, int layers) {
-        List<BeamSection.BarGroup> groups = new ArrayList<>();
-        for (int i = 0; i < layers; i++) {
-            groups.add(new BeamSection.BarGroup(a, 2));
-        }
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM, groups, f.det()));
-        ls.add(new BarLayer(barfit.section.Face.TOP, c, 2, f.det().firstLayerCentroid(c.diameter())));
-        BeamSection s = new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-        List<CheckResult> checks = new ArrayList<>(SectionChecks.frameChecks(s, new Span(p.span(), null)));
-        checks.addAll(SectionChecks.layerGaps(s));
-        return checks.stream().allMatch(CheckResult::pass);
-    }
-
-    private FrameSet evaluate(Frame f, double incumbent) {
-        return evaluate(f, incumbent, null);
-    }
-
-    /**
-     * The frame's options and its cheapest combination. With {@code pairs} (table mode) it also lowers
-     * {@code pairs[i][j]} to the cheapest passing combination with top bars of size i and bottom bars of
-     * size j, and prunes only what cannot improve any pair of that top size.
-     */
-    private FrameSet evaluate(Frame f, double incumbent, double[][] pairs) {
-        zoneMemo.clear();
-        useFrame(f);
-        SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
-        BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
-        if (!framePasses(f, shape, smallest, smallest, 1)) {
+    FrameOptions evaluate(SpanFrame f, CostToBeat toBeat) {
+        FrameBounds frameBounds = bounds(f);
+        OptionGenerator options = new OptionGenerator(ctx, frameBounds);
+        if (!options.framePasses(ctx.smallestBar(), ctx.smallestBar(), 1)) {
             return null; // cover, flange width or skin rules fail for this frame whatever the bars
         }
-        List<TopOpt> tops = tops(f);
+        List<TopOption> tops = options.tops();
         if (p.bottomAnchored() || f.deflection()) {
-            return everything(f, shape, tops, incumbent, pairs);
+            return everything(options, frameBounds, tops, toBeat);
         }
         // supports first (they do not depend on the other options), then the mid-span options for two
         // continuous bars, then more continuous bars only where a bound says they could pay
-        Map<String, List<BeamSection.BarGroup>> none = new LinkedHashMap<>();
-        none.put(null, List.of());
-        java.util.function.ToDoubleFunction<BarSize> supportLimit = pairs != null || Double.isInfinite(incumbent)
-                ? t -> Double.POSITIVE_INFINITY
-                : t -> incumbent - leastWithout(f, tops, t);
-        List<SupportOpt> lefts = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), supportLimit, none)
-                : List.of();
-        List<SupportOpt> rights = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), supportLimit, none)
-                : List.of();
-        List<TopOpt> first = tops.stream().filter(t -> t.nc() == 2).toList();
-        // a (top, bottom size) whose least possible cost cannot beat the incumbent (or, in table mode, the
-        // pair's best so far) is not searched
-        MidLimit worth = (t, bb) -> (pairs == null ? incumbent : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
-                - cheapestAbove(lefts, t, p.leftSupport()) - cheapestAbove(rights, t, p.rightSupport());
-        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first, worth));
-        FrameSet fs = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
-        if (pairs != null) {
-            pairs(fs, pairs);
-        }
-        double cut = Math.min(incumbent, fs.best());
-        for (TopOpt t : tops) {
-            if (t.nc() == 2) {
-                continue;
-            }
-            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
-                    + cheapestAbove(rights, t, p.rightSupport());
-            if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
-                mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
-                        : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
-                        - cheapestAbove(lefts, tt, p.leftSupport()) - cheapestAbove(rights, tt, p.rightSupport())));
-            }
-        }
-        FrameSet out = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
-        if (pairs != null) {
-            pairs(out, pairs);
-        }
+        ToDoubleFunction<BarSize> supportLimit = supportLimit(frameBounds, tops, toBeat);
+        List<SupportOption> lefts = p.leftSupport()
+                ? options.supports(BeamProblem.Place.LEFT, p.mLeft(), supportLimit, NO_BOTTOM_BARS) : List.of();
+        List<SupportOption> rights = p.rightSupport()
+                ? options.supports(BeamProblem.Place.RIGHT, p.mRight(), supportLimit, NO_BOTTOM_BARS) : List.of();
+        List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
+        List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, toBeat, lefts, rights)));
+        toBeat.lower(combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY,
+                null)));
+        addMoreContinuous(options, frameBounds, tops, mids, toBeat, lefts, rights);
+        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
+                Double.POSITIVE_INFINITY, null));
+        toBeat.lower(out);
         return out;
     }
 
-    // ------------------------------------------------------------------ table mode
-
     /**
-     * The exact cheapest cost of the span in one section size for each pair of bar sizes: {@code cost[i][j]}
-     * for top bars of the space's i-th bar size and bottom bars of its j-th, over every stirrup size,
-     * infinite where no layout of that pair passes. Nothing outside the size prunes it, so a schedule can
-     * price the size for any set of bar sizes it allows.
+     * Per top bar size, the cost at or above which a support option cannot be part of anything that pays:
+     * what must be beaten less the least the rest of a combination costs (no limit without one cost to beat).
      */
-    public record PairTable(double width, double height, double[][] cost) {
-        /** The cheapest over the pairs whose sizes are both allowed. */
-        public double best(boolean[] allowed) {
-            double best = Double.POSITIVE_INFINITY;
-            for (int i = 0; i < cost.length; i++) {
-                for (int j = 0; j < cost.length; j++) {
-                    if (allowed[i] && allowed[j]) {
-                        best = Math.min(best, cost[i][j]);
-                    }
-                }
-            }
-            return best;
-        }
-    }
-
-    private List<Frame> allFrames;
-
-    /** The frames of the problem, computed once. */
-    private List<Frame> cachedFrames() {
-        if (allFrames == null) {
-            allFrames = frames();
-        }
-        return allFrames;
-    }
-
-    /** The lower bound of each section size (b x h), the least over its stirrup sizes; absent sizes have no frame. */
-    public Map<List<Double>, Double> sizeLowerBounds() {
-        Map<List<Double>, Double> out = new LinkedHashMap<>();
-        for (Frame f : cachedFrames()) {
-            out.merge(List.of(f.b(), f.h()), f.lowerBound(), Math::min);
-        }
-        return out;
-    }
-
-    public PairTable pairTable(double b, double h) {
-        int n = p.space().barSizes().size();
-        double[][] cost = new double[n][n];
-        for (double[] row : cost) {
-            java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
-        }
-        for (Frame f : cachedFrames()) {
-            if (f.b() == b && f.h() == h && Double.isFinite(f.lowerBound())) {
-                evaluate(f, Double.POSITIVE_INFINITY, cost);
-            }
-        }
-        return new PairTable(b, h, cost);
-    }
-
-    private final Map<BarSize, Integer> barIndex = new java.util.IdentityHashMap<>();
-
-    private int index(BarSize bar) {
-        Integer i = barIndex.get(bar);
-        if (i == null) {
-            i = p.space().barSizes().indexOf(bar);
-            barIndex.put(bar, i);
-        }
-        return i;
-    }
-
-    /** The dearest pair of a top size found so far: a top option that cannot beat it improves no pair. */
-    private double worstPair(double[][] pairs, BarSize top) {
-        int i = index(top);
-        double worst = 0;
-        for (int j = 0; j < pairs.length; j++) {
-            if (p.maxBarSizes() >= 2 || j == i) {
-                worst = Math.max(worst, pairs[i][j]);
-            }
-        }
-        return worst;
-    }
-
-    /** Lowers each pair's entry to the cheapest passing combination of the frame's options. */
-    private void pairs(FrameSet fs, double[][] out) {
-        if (fs.frame().deflection()) {
-            deflectionPairs(fs, out);
-            return;
-        }
-        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
-        for (MidOpt m : fs.mids()) {
-            double total = combination(fs, m, lefts, rights);
-            int i = index(m.top().bar());
-            int j = index(m.bar());
-            out[i][j] = Math.min(out[i][j], total);
-        }
-    }
-
-    /** The cost of a mid-span option with the cheapest compatible supports (infinite if none). */
-    private double combination(FrameSet fs, MidOpt m, Map<BarSize, List<SupportOpt>> lefts,
-            Map<BarSize, List<SupportOpt>> rights) {
-        TopOpt t = m.top();
-        if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
-            return Double.POSITIVE_INFINITY;
-        }
-        String key = p.bottomAnchored() ? m.key() : null;
-        double total = fs.frame().cost() + t.cost() + m.cost();
-        if (p.leftSupport()) {
-            SupportOpt l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key);
-            if (l == null) {
-                return Double.POSITIVE_INFINITY;
-            }
-            total += l.cost();
-        }
-        if (p.rightSupport()) {
-            SupportOpt r = cheapestIn(rights, t.bar(), t.nc(), m, key);
-            if (r == null) {
-                return Double.POSITIVE_INFINITY;
-            }
-            total += r.cost();
-        }
-        return total;
+    private static ToDoubleFunction<BarSize> supportLimit(FrameBounds frameBounds, List<TopOption> tops,
+            CostToBeat toBeat) {
+        double common = toBeat.common();
+        return Double.isInfinite(common) ? t -> Double.POSITIVE_INFINITY
+                : t -> common - frameBounds.besideSupports(tops, t);
     }
 
     /**
-     * Below Table 9.3.1.1 the cheapest compatible supports may fail deflection with a mid-span option
-     * while dearer ones pass: search each pair's combinations cheapest first, pruned by cost, asking the
-     * section model's span checks, so each entry is exact.
+     * A mid-span option pays only below what its pair of sizes must beat less the frame, its top option
+     * and the cheapest support options that could go with it ({@code lefts} or {@code rights} null: not
+     * known yet, counted as nothing).
      */
-    private void deflectionPairs(FrameSet fs, double[][] out) {
-        List<MidOpt> mids = new ArrayList<>(fs.mids());
-        mids.sort(Comparator.comparingDouble((MidOpt m) -> m.top().cost() + m.cost()));
-        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
-        for (MidOpt m : mids) {
-            TopOpt t = m.top();
-            if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
-                continue;
-            }
-            int i = index(t.bar());
-            int j = index(m.bar());
-            String key = p.bottomAnchored() ? m.key() : null;
-            double base = fs.frame().cost() + t.cost() + m.cost();
-            List<SupportOpt> ls = compatible(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key,
-                    p.leftSupport());
-            List<SupportOpt> rs = compatible(rights, t.bar(), t.nc(), m, key, p.rightSupport());
-            if (ls.isEmpty() || rs.isEmpty()) {
-                continue;
-            }
-            double minR = rs.get(0) == null ? 0 : rs.get(0).cost();
-            double minL = ls.get(0) == null ? 0 : ls.get(0).cost();
-            if (base + minL + minR >= out[i][j] - 1e-9) {
-                continue;
-            }
-            for (SupportOpt l : ls) {
-                double withL = base + (l == null ? 0 : l.cost());
-                if (withL + minR >= out[i][j] - 1e-9) {
-                    break;
-                }
-                for (SupportOpt r : rs) {
-                    double total = withL + (r == null ? 0 : r.cost());
-                    if (total >= out[i][j] - 1e-9) {
-                        break;
-                    }
-                    if (BeamVerifier.deflectionOk(p, layout(fs.frame(), m, l, r))) {
-                        out[i][j] = total;
-                        break;
-                    }
-                }
-            }
-        }
-    }
-
-    /** The support options compatible with a mid-span option, cheapest first; a single null where no support. */
-    private static List<SupportOpt> compatible(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
-            String bottomKey, boolean present) {
-        if (!present) {
-            java.util.List<SupportOpt> none = new ArrayList<>();
-            none.add(null);
-            return none;
-        }
-        List<SupportOpt> out = new ArrayList<>();
-        for (SupportOpt s : index.getOrDefault(bar, List.of())) {
-            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
-                out.add(s);
-            }
-        }
-        return out;
-    }
-
-    /** The cheapest support option of the top option's size holding its continuous bars (0 if no support). */
-    private static double cheapestAbove(List<SupportOpt> opts, TopOpt t, boolean present) {
-        if (!present) {
-            return 0;
-        }
-        double best = Double.POSITIVE_INFINITY;
-        for (SupportOpt s : opts) {
-            if (s.bar().equals(t.bar()) && s.counts().get(0) >= t.nc()) {
-                best = Math.min(best, s.cost());
-            }
-        }
-        return best;
+    private OptionGenerator.MidLimit midLimit(SpanFrame f, CostToBeat toBeat, List<SupportOption> lefts,
+            List<SupportOption> rights) {
+        return (top, bottom) -> toBeat.limit(top.bar(), bottom) - f.cost() - top.cost()
+                - (lefts == null ? 0 : Combinations.cheapestAbove(lefts, top, p.leftSupport()))
+                - (rights == null ? 0 : Combinations.cheapestAbove(rights, top, p.rightSupport()));
     }
 
     /**
-     * A lower bound on the mid-span option cost for a top option: the least bottom area any layout
-     * could carry Mu with (the section model's strength bound, with the continuous bars as compression
-     * steel), priced per size, plus the cheapest stirrups of the mid-span zones.
+     * Adds the mid-span options of the top options with more than two continuous bars whose least cost
+     * (the frame's bounds, the cheapest supports) could still pay; whether it added any.
      */
-    private double bottomLowerBound(Frame f, TopOpt t) {
-        double best = Double.POSITIVE_INFINITY;
-        for (BarSize bb : p.space().barSizes()) {
-            best = Math.min(best, bottomBarLowerBound(f, t, bb));
+    private boolean addMoreContinuous(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
+            List<MidOption> mids, CostToBeat toBeat, List<SupportOption> lefts, List<SupportOption> rights) {
+        SpanFrame f = frameBounds.frame();
+        boolean added = false;
+        for (TopOption t : tops) {
+            if (t.continuous() == 2) {
+                continue;
+            }
+            double least = f.cost() + t.cost() + frameBounds.midSpan(t)
+                    + Combinations.cheapestAbove(lefts, t, p.leftSupport())
+                    + Combinations.cheapestAbove(rights, t, p.rightSupport());
+            if (least < toBeat.limitForTop(t.bar())) {
+                mids.addAll(options.mids(List.of(t), midLimit(f, toBeat, lefts, rights)));
+                added = true;
+            }
         }
-        return best + leanMid(f);
+        return added;
     }
 
     /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
-    private FrameSet everything(Frame f, SectionShape shape, List<TopOpt> tops, double incumbent, double[][] pairs) {
-        // deflection and anchorage only add demands: what cannot beat the incumbent (or the pair's best so
-        // far) on cost alone is not searched
-        java.util.function.ToDoubleFunction<BarSize> limit = pairs != null || Double.isInfinite(incumbent)
-                ? t -> Double.POSITIVE_INFINITY
-                : t -> incumbent - leastWithout(f, tops, t);
+    private FrameOptions everything(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
+            CostToBeat toBeat) {
+        SpanFrame f = frameBounds.frame();
+        // deflection and anchorage only add demands: what cannot beat the cost on cost alone is not searched
+        ToDoubleFunction<BarSize> limit = supportLimit(frameBounds, tops, toBeat);
         // without anchored bottom bars the supports do not depend on the mid-span options: find them first,
         // so the mid-span search knows the least the supports add
-        List<SupportOpt> early = null;
-        List<SupportOpt> earlyRight = null;
+        List<SupportOption> knownLeft = null;
+        List<SupportOption> knownRight = null;
         if (!p.bottomAnchored()) {
-            Map<String, List<BeamSection.BarGroup>> none = new LinkedHashMap<>();
-            none.put(null, List.of());
-            early = p.leftSupport() ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, none) : List.of();
-            earlyRight = p.rightSupport() ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, none)
-                    : List.of();
+            knownLeft = p.leftSupport()
+                    ? options.supports(BeamProblem.Place.LEFT, p.mLeft(), limit, NO_BOTTOM_BARS) : List.of();
+            knownRight = p.rightSupport()
+                    ? options.supports(BeamProblem.Place.RIGHT, p.mRight(), limit, NO_BOTTOM_BARS) : List.of();
         }
-        final List<SupportOpt> knownLeft = early;
-        final List<SupportOpt> knownRight = earlyRight;
         if (f.deflection() && !p.bottomAnchored()) {
-            return deflectionFrame(f, shape, tops, incumbent, pairs, knownLeft, knownRight);
+            return belowMinimumDepth(options, frameBounds, tops, toBeat, knownLeft, knownRight);
         }
-        List<MidOpt> mids = mids(f, shape, tops, (t, bb) -> (pairs == null ? incumbent
-                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost()
-                - (knownLeft == null ? 0 : cheapestAbove(knownLeft, t, p.leftSupport()))
-                - (knownRight == null ? 0 : cheapestAbove(knownRight, t, p.rightSupport())));
-        Map<String, List<BeamSection.BarGroup>> bottoms = new LinkedHashMap<>();
+        List<MidOption> mids = options.mids(tops, midLimit(f, toBeat, knownLeft, knownRight));
+        List<BottomBars> bottoms;
         if (p.bottomAnchored()) {
-            for (MidOpt m : mids) {
-                List<BeamSection.BarGroup> g = new ArrayList<>();
-                m.counts().forEach(c -> g.add(new BeamSection.BarGroup(m.bar(), c)));
-                bottoms.putIfAbsent(m.key(), g);
+            Set<BottomBars> distinct = new LinkedHashSet<>();
+            for (MidOption m : mids) {
+                distinct.add(m.bottom());
             }
+            bottoms = new ArrayList<>(distinct);
         } else {
-            bottoms.put(null, List.of());
+            bottoms = NO_BOTTOM_BARS;
         }
-        List<SupportOpt> lefts = knownLeft != null ? knownLeft : p.leftSupport()
-                ? supports(f, shape, BeamProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
-        List<SupportOpt> rights = knownRight != null ? knownRight : p.rightSupport()
-                ? supports(f, shape, BeamProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
-        return screened(f, shape, tops, mids, lefts, rights, pairs);
-    }
-
-    /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; pairs lowered. */
-    private FrameSet screened(Frame f, SectionShape shape, List<TopOpt> tops, List<MidOpt> mids, List<SupportOpt> lefts,
-            List<SupportOpt> rights, double[][] pairs) {
-        if (f.deflection()) {
-            DeflectionScreen screen = new DeflectionScreen(f, shape, mids, lefts, rights);
-            mids = screen.mids();
-            lefts = screen.lefts();
-            rights = screen.rights();
-        }
-        FrameSet out = enumerate(new FrameSet(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
-        if (pairs != null) {
-            pairs(out, pairs);
-        }
-        return out;
+        List<SupportOption> lefts = knownLeft != null ? knownLeft : p.leftSupport()
+                ? options.supports(BeamProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
+        List<SupportOption> rights = knownRight != null ? knownRight : p.rightSupport()
+                ? options.supports(BeamProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
+        return screened(options, f, tops, mids, lefts, rights, toBeat);
     }
 
     /**
@@ -675,975 +349,28 @@ public final class BeamGenerator {
      * their best passing combination then bounds which top options with more continuous bars (stiffer,
      * dearer) are searched.
      */
-    private FrameSet deflectionFrame(Frame f, SectionShape shape, List<TopOpt> tops, double incumbent, double[][] pairs,
-            List<SupportOpt> lefts, List<SupportOpt> rights) {
-        List<TopOpt> first = tops.stream().filter(t -> t.nc() == 2).toList();
-        List<MidOpt> mids = new ArrayList<>(mids(f, shape, first, (t, bb) -> (pairs == null ? incumbent
-                : pairs[index(t.bar())][index(bb)]) - f.cost() - t.cost() - cheapestAbove(lefts, t, p.leftSupport())
-                - cheapestAbove(rights, t, p.rightSupport())));
-        FrameSet fs = screened(f, shape, tops, new ArrayList<>(mids), lefts, rights, pairs);
-        double cut = Math.min(incumbent, fs.best());
-        boolean more = false;
-        for (TopOpt t : tops) {
-            if (t.nc() == 2) {
-                continue;
-            }
-            double lb = f.cost() + t.cost() + bottomLowerBound(f, t) + cheapestAbove(lefts, t, p.leftSupport())
-                    + cheapestAbove(rights, t, p.rightSupport());
-            if (lb < (pairs == null ? cut : worstPair(pairs, t.bar()))) {
-                mids.addAll(mids(f, shape, List.of(t), (tt, bb) -> (pairs == null ? cut
-                        : pairs[index(tt.bar())][index(bb)]) - f.cost() - tt.cost()
-                        - cheapestAbove(lefts, tt, p.leftSupport()) - cheapestAbove(rights, tt, p.rightSupport())));
-                more = true;
-            }
-        }
-        return more ? screened(f, shape, tops, mids, lefts, rights, pairs) : fs;
+    private FrameOptions belowMinimumDepth(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
+            CostToBeat toBeat, List<SupportOption> lefts, List<SupportOption> rights) {
+        SpanFrame f = frameBounds.frame();
+        List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
+        List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, toBeat, lefts, rights)));
+        FrameOptions first = screened(options, f, tops, new ArrayList<>(mids), lefts, rights, toBeat);
+        boolean more = addMoreContinuous(options, frameBounds, tops, mids, toBeat, lefts, rights);
+        return more ? screened(options, f, tops, mids, lefts, rights, toBeat) : first;
     }
 
-    private List<TopOpt> tops(Frame f) {
-        List<TopOpt> out = new ArrayList<>();
-        for (BarSize t : p.space().barSizes()) {
-            int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
-            int ncMax = p.cantilever() || p.space().hangersOnly() ? Math.min(2, nmax) : nmax;
-            double extL = p.leftSupport() ? Extension.of(p, f.b(), f.h(), f.det(), t).length() : 0;
-            double extR = p.rightSupport() ? Extension.of(p, f.b(), f.h(), f.det(), t).length() : 0;
-            // a continuous bar is priced over the span less the stretches the support options price it over;
-            // where the extras' ld makes those overlap, that is negative: a continuous bar then costs less
-            // than the two extras it replaces, and the sum still prices it at the full span
-            // (a cantilever's top bars are all priced with its support option)
-            double run = p.cantilever() ? 0 : p.span() - extL - extR;
-            for (int nc = 2; nc <= ncMax; nc++) {
-                out.add(new TopOpt(t, nc, barCost(t, nc, run)));
-            }
+    /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; the cost lowered. */
+    private FrameOptions screened(OptionGenerator options, SpanFrame f, List<TopOption> tops, List<MidOption> mids,
+            List<SupportOption> lefts, List<SupportOption> rights, CostToBeat toBeat) {
+        if (f.deflection()) {
+            DeflectionScreen screen = new DeflectionScreen(p, ctx.sections(), f, options.shape(), mids, lefts, rights);
+            mids = screen.mids();
+            lefts = screen.lefts();
+            rights = screen.rights();
         }
+        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
+                Double.POSITIVE_INFINITY, null));
+        toBeat.lower(out);
         return out;
-    }
-
-    /**
-     * The least a combination with top bars of size {@code t} could cost apart from one support's option:
-     * the frame, the cheapest top option of that size, and the least bottom bars (with the most continuous
-     * bars of that size as compression steel) and mid-span stirrups.
-     */
-    private double leastWithout(Frame f, List<TopOpt> tops, BarSize t) {
-        double top = Double.POSITIVE_INFINITY;
-        TopOpt most = null;
-        for (TopOpt o : tops) {
-            if (o.bar().equals(t)) {
-                top = Math.min(top, o.cost());
-                if (most == null || o.nc() > most.nc()) {
-                    most = o;
-                }
-            }
-        }
-        if (most == null) {
-            return Double.POSITIVE_INFINITY;
-        }
-        double bottom = Double.POSITIVE_INFINITY;
-        for (BarSize bb : p.space().barSizes()) {
-            if (p.maxBarSizes() >= 2 || bb.equals(t)) {
-                bottom = Math.min(bottom, bottomBarLowerBound(f, most, bb));
-            }
-        }
-        return f.cost() + top + bottom + leanMid(f);
-    }
-
-    /**
-     * The most a mid-span option of a top option and bottom bar size may cost (its bars and stirrups) and
-     * still be part of something cheaper than what is known: what the search beats, less the least the
-     * rest of a combination costs. Options at or above it are not searched.
-     */
-    @FunctionalInterface
-    private interface MidLimit {
-        double of(TopOpt top, BarSize bottom);
-    }
-
-    /**
-     * The least the bottom bars of one size could cost with a top option's continuous bars as compression
-     * steel: the section model's strength bound on the area, in whole bars, no fewer than two or than crack
-     * control asks of the first layer.
-     */
-    private double bottomBarLowerBound(Frame f, TopOpt t, BarSize bb) {
-        int nb = p.space().barSizes().size();
-        int ti = index(t.bar());
-        int bi = index(bb);
-        if (bottomMemo == null || bottomMemo.length <= t.nc()) {
-            bottomMemo = new double[Math.max(t.nc() + 1, 16)][][];
-        }
-        if (bottomMemo[t.nc()] == null) {
-            bottomMemo[t.nc()] = new double[nb][nb];
-            for (double[] row : bottomMemo[t.nc()]) {
-                java.util.Arrays.fill(row, Double.NaN);
-            }
-        }
-        double known = bottomMemo[t.nc()][ti][bi];
-        if (Double.isNaN(known)) {
-            known = computeBottomBarLowerBound(f, t, bb);
-            bottomMemo[t.nc()][ti][bi] = known;
-        }
-        return known;
-    }
-
-    private Frame memoFrame;
-    private double asMinSagging = Double.NaN;
-    private double asMinHogging = Double.NaN;
-    private int[] crackMemo;
-
-    /** As,min of 9.6.1.2 per mm of d for the frame (the section model's rule at d = 1 mm). */
-    private double asMinPerDepth(Frame f, Bending bending) {
-        useFrame(f);
-        if (Double.isNaN(asMinSagging)) {
-            SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
-            Span span = new Span(p.span(), p.ends());
-            asMinSagging = SectionChecks.asMin(shape, Bending.SAGGING, span, p.materials(), p.code(), 1.0);
-            asMinHogging = SectionChecks.asMin(shape, Bending.HOGGING, span, p.materials(), p.code(), 1.0);
-        }
-        return bending == Bending.SAGGING ? asMinSagging : asMinHogging;
-    }
-
-    /** The fewest bars of a size crack control (24.3.2) allows in the frame's first layer. */
-    private int crackBars(Frame f, BarSize bar) {
-        useFrame(f);
-        if (crackMemo == null) {
-            crackMemo = new int[p.space().barSizes().size()];
-            java.util.Arrays.fill(crackMemo, -1);
-        }
-        int i = index(bar);
-        if (crackMemo[i] < 0) {
-            crackMemo[i] = BarSpacing.minBarsForCrackControl(f.b(), f.det(), bar, p.materials().fy(), p.code());
-        }
-        return crackMemo[i];
-    }
-
-    private void useFrame(Frame f) {
-        if (memoFrame != f) {
-            bottomMemo = null;
-            asMinSagging = Double.NaN;
-            asMinHogging = Double.NaN;
-            crackMemo = null;
-            leanMemo.clear();
-            memoFrame = f;
-        }
-    }
-
-    /**
-     * A tighter lower bound than the frame's first one, still without searching bars: the least of
-     * {@link #pairLowerBound}.
-     */
-    private double frameLowerBound(Frame f) {
-        double best = Double.POSITIVE_INFINITY;
-        for (double[] row : pairLowerBound(f)) {
-            for (double v : row) {
-                best = Math.min(best, v);
-            }
-        }
-        return best;
-    }
-
-    /**
-     * Per pair of bar sizes (top i, bottom j), a lower bound on any passing combination of the frame
-     * without searching bars: the cheapest top option of size i; the least bottom bars of size j (with
-     * the most continuous bars of size i as compression steel) and mid-span stirrups; and at each support
-     * the fewest bars of size i the section model's strength bound allows over their real extension, with
-     * the leanest stirrups of the support's zones.
-     */
-    private double[][] pairLowerBound(Frame f) {
-        useFrame(f);
-        int nb = p.space().barSizes().size();
-        double[][] out = new double[nb][nb];
-        for (double[] row : out) {
-            java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
-        }
-        List<TopOpt> tops = tops(f);
-        double fc = p.materials().fc();
-        double fy = p.materials().fy();
-        double leanMid = leanMid(f);
-        // anchored bottom bars are compression steel at the supports: allow the most there could be
-        double comp = 0;
-        if (p.bottomAnchored()) {
-            for (BarSize bb : p.space().barSizes()) {
-                comp = Math.max(comp, BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code()) * bb.area()
-                        * p.space().maxLayers());
-            }
-        }
-        for (int i = 0; i < nb; i++) {
-            BarSize t = p.space().barSizes().get(i);
-            double top = Double.POSITIVE_INFINITY;
-            TopOpt most = null;
-            for (TopOpt o : tops) {
-                if (o.bar().equals(t)) {
-                    top = Math.min(top, o.cost());
-                    if (most == null || o.nc() > most.nc()) {
-                        most = o;
-                    }
-                }
-            }
-            if (most == null) {
-                continue;
-            }
-            int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), t, fy, p.code());
-            double ext = Extension.of(p, f.b(), f.h(), f.det(), t).length();
-            double dMax = f.h() - f.det().firstLayerCentroid(t.diameter());
-            double dp = f.det().firstLayerCentroid(p.space().barSizes().get(0).diameter());
-            double supports = 0;
-            for (BeamProblem.Place place : new BeamProblem.Place[] {BeamProblem.Place.LEFT, BeamProblem.Place.RIGHT}) {
-                Double mu = place == BeamProblem.Place.LEFT ? (p.leftSupport() ? p.mLeft() : null)
-                        : (p.rightSupport() ? p.mRight() : null);
-                if (mu == null) {
-                    continue;
-                }
-                double area = StrengthBound.minTensionArea(mu, dMax, comp, dp, dp, f.b(), fc, fy);
-                if (Double.isInfinite(area)) {
-                    supports = Double.POSITIVE_INFINITY;
-                    break;
-                }
-                // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need
-                double dMin = f.h() - f.det().firstLayerCentroid(t.diameter())
-                        - (p.space().maxLayers() - 1) * (t.diameter() + f.det().layerGap());
-                double asMin = asMinPerDepth(f, Bending.HOGGING) * dMin;
-                area = StrengthBound.withMinimumSteel(area, asMin);
-                int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / t.area() - 1e-9));
-                supports += barCost(t, n, ext) + leanStirrups(f, place);
-            }
-            if (Double.isInfinite(supports)) {
-                continue;
-            }
-            for (int j = 0; j < nb; j++) {
-                BarSize u = p.space().barSizes().get(j);
-                if (p.maxBarSizes() < 2 && !u.equals(t)) {
-                    continue;
-                }
-                out[i][j] = f.cost() + top + bottomBarLowerBound(f, most, u) + leanMid + supports;
-            }
-        }
-        return out;
-    }
-
-    /**
-     * Per pair of bar sizes, a lower bound on the span in one section size (the least over its stirrup
-     * sizes), or null where the problem has no frame of that size. Cheap: no bars are searched.
-     */
-    public double[][] pairLowerBounds(double b, double h) {
-        double[][] out = null;
-        for (Frame f : cachedFrames()) {
-            if (f.b() == b && f.h() == h) {
-                double[][] lb = Double.isFinite(f.lowerBound()) ? pairLowerBound(f) : null;
-                if (lb == null) {
-                    continue;
-                }
-                if (out == null) {
-                    out = lb;
-                } else {
-                    for (int i = 0; i < out.length; i++) {
-                        for (int j = 0; j < out.length; j++) {
-                            out[i][j] = Math.min(out[i][j], lb[i][j]);
-                        }
-                    }
-                }
-            }
-        }
-        if (out == null && cachedFrames().stream().anyMatch(f -> f.b() == b && f.h() == h)) {
-            int nb = p.space().barSizes().size();
-            out = new double[nb][nb];
-            for (double[] row : out) {
-                java.util.Arrays.fill(row, Double.POSITIVE_INFINITY);
-            }
-        }
-        return out;
-    }
-
-    /** {@link #bottomBarLowerBound} per frame: [continuous bars][top size][bottom size], NaN until asked. */
-    private double[][][] bottomMemo;
-
-    private double computeBottomBarLowerBound(Frame f, TopOpt t, BarSize bb) {
-        if (!p.midSection()) {
-            return barCost(bb, 2, p.span()); // a cantilever's bottom bars are two or more hangers
-        }
-        double widest = p.flange() != null ? p.flange().on(f.b()).width() : f.b(); // effective width on this web
-        double fc = p.materials().fc();
-        double fy = p.materials().fy();
-        double comp = t.nc() * t.bar().area();
-        double dp = f.det().firstLayerCentroid(t.bar().diameter());
-        double dMax = f.h() - f.det().firstLayerCentroid(bb.diameter());
-        double area = StrengthBound.minTensionArea(p.mMid(), dMax, comp, dp, dp, widest, fc, fy);
-        if (Double.isInfinite(area)) {
-            return Double.POSITIVE_INFINITY;
-        }
-        // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need (9.6.1.3)
-        double dMin = f.h() - f.det().firstLayerCentroid(bb.diameter())
-                - (p.space().maxLayers() - 1) * (bb.diameter() + f.det().layerGap());
-        double asMin = asMinPerDepth(f, Bending.SAGGING) * dMin; // As,min is proportional to d
-        area = StrengthBound.withMinimumSteel(area, asMin);
-        int ncr = crackBars(f, bb);
-        int n = Math.max(Math.max(2, ncr), (int) Math.ceil(area / bb.area() - 1e-9));
-        return barCost(bb, n, p.span());
-    }
-
-    private List<MidOpt> mids(Frame f, SectionShape shape, List<TopOpt> tops, MidLimit cut) {
-        List<MidOpt> out = new ArrayList<>();
-        List<Integer> midZones = zoneIndices(BeamProblem.Place.MID);
-        int mostLegs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
-        if (p.cantilever()) {
-            // the bottom bars of a cantilever are its hangers: two or more of one size, one layer
-            TopOpt only = null;
-            // (in more than one layer only where they are anchored and so count as compression steel)
-            int bottomLayers = p.bottomAnchored() ? p.space().maxLayers() : 1;
-            for (TopOpt t : tops) {
-                for (BarSize bb : p.space().barSizes()) {
-                    int nmax = BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code());
-                    for (int layers = 1; layers <= bottomLayers; layers++) {
-                        if (layers > 1 && !barfit.design.Layout.fitsHeight(f.h(), f.det(), bb, layers, t.bar())) {
-                            break;
-                        }
-                        for (List<Integer> counts : barfit.design.ExhaustiveSearch.countVectors(layers, nmax)) {
-                            out.add(new MidOpt(t, bb, counts, f.det().firstLayerCentroid(bb.diameter()), Map.of(),
-                                    barCost(bb, BeamLayout.sum(counts), p.span()), p.legsFor(counts.get(0))));
-                        }
-                    }
-                }
-            }
-            return out;
-        }
-        midProbe.frame(shape, Bending.SAGGING, new Span(p.span(), p.ends()));
-        midSearch.frame(f.det());
-        for (TopOpt top : tops) {
-            midSearch.compression(List.of(new BeamSection.BarGroup(top.bar(), top.nc())));
-            for (BarSize bb : p.space().barSizes()) {
-                if (p.maxBarSizes() < 2 && !bb.equals(top.bar())) {
-                    continue;
-                }
-                double limit = cut.of(top, bb);
-                if (bottomBarLowerBound(f, top, bb) + leanMid(f) >= limit - 1e-9) {
-                    continue;
-                }
-                // the cheapest option found so far for each number of legs it asks of the supports
-                Map<Integer, Double> cheapestByLegs = new HashMap<>();
-                int nmax = BarSpacing.maxBars(f.b(), f.det(), bb, p.materials(), p.code());
-                int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), bb, p.materials().fy(), p.code());
-                int first = Math.max(2, ncr);
-                if (nmax < first || !framePasses(f, shape, bb, top.bar(), 1)) {
-                    continue;
-                }
-                for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
-                    if (layers > 1 && !framePasses(f, shape, bb, top.bar(), layers)) {
-                        break;
-                    }
-                    if (!barfit.design.Layout.fitsHeight(f.h(), f.det(), bb, layers, top.bar())) {
-                        break;
-                    }
-                    int[] min = midSearch.minCounts(bb, nmax, ncr, layers, layers * nmax);
-                    if (min == null) {
-                        continue;
-                    }
-                    int nMin = java.util.Arrays.stream(min).sum();
-                    double firstStirrups = Double.NaN;
-                    for (int n = nMin; n <= layers * nmax; n++) {
-                        if (barCost(bb, n, p.span()) + leanMid(f) >= limit - 1e-9) {
-                            break; // this many bars cost more than an option could and still pay
-                        }
-                        List<int[]> splits = midSearch.passingSplits(bb, n, layers, nmax, first);
-                        if (splits.isEmpty()) {
-                            if (!midSearch.passingSplit(bb, n, layers, nmax, first).anyDuctile()) {
-                                break; // more bars only lower eps_t
-                            }
-                            continue;
-                        }
-                        for (int[] split : splits) {
-                            midSearch.place(bb, split);
-                            double d = midSearch.d();
-                            double as = midSearch.tensionArea();
-                            // legs: the office's rule, the ties round top bars relied on (9.7.6.4), and no more
-                            // than the outer bottom layer and the continuous top bars hold (25.7.1.2, 25.7.1.3)
-                            StirrupRules.TieDemand ties = midZones.isEmpty() ? StirrupRules.TieDemand.NONE
-                                    : StirrupRules.ties(midSection(f, shape, top, bb, split), Bending.SAGGING, p.mMid());
-                            if (!ties.sizeOk(f.ds().diameter())) {
-                                continue;
-                            }
-                            int legs = Math.max(p.legsFor(Math.max(split[0], top.nc())), ties.minLegs());
-                            int most = Math.min(split[0], top.nc());
-                            ZoneSet zs = zoneSet(shape, f, midZones, bb, split, legs, most, ties.maxSpacing(), d, as);
-                            if (zs != null) {
-                                double stirCost = zs.cost();
-                                out.add(new MidOpt(top, bb, TensionSearch.toList(split), d, zs.stirrups(),
-                                        barCost(bb, n, p.span()) + stirCost, p.legsFor(split[0])));
-                                // only an option whose bottom bars hold every legs count the supports may use
-                                // can stand for the dearer options with more bars below
-                                if (split[0] >= mostLegs) {
-                                    cheapestByLegs.merge(p.legsFor(split[0]), barCost(bb, n, p.span()) + stirCost,
-                                            Math::min);
-                                }
-                                if (Double.isNaN(firstStirrups)) {
-                                    firstStirrups = stirCost;
-                                }
-                            }
-                        }
-                        // more bars only pay through cheaper stirrups (rho_w, fewer legs) or, below Table 9.3.1.1,
-                        // stiffness: stop once one more bar costs more than all the stirrups could
-                        if (!f.deflection() && !Double.isNaN(firstStirrups)
-                                && barCost(bb, n + 1 - nMin, p.span()) >= stirrupCeiling(f)) {
-                            break;
-                        }
-                        // tighter where the bottom bars meet nothing but the mid-span zones: an option with
-                        // n + 1 or more bars costs at least its bars and the leanest stirrups, and asks for
-                        // at least the legs of its fullest possible first layer; one found already that is
-                        // no dearer and asks no more legs of the supports is as good in every combination
-                        if (!f.deflection() && !p.bottomAnchored()
-                                && dominated(cheapestByLegs, p.legsFor((n + layers) / layers),
-                                        barCost(bb, n + 1, p.span()) + leanMid(f))) {
-                            break;
-                        }
-                    }
-                }
-            }
-        }
-        return out;
-    }
-
-    /** The cheapest stirrups of some zones for one set of tension bars, and their cost over the zones. */
-    private record ZoneSet(Map<Integer, Stirrups> stirrups, double cost) {
-    }
-
-    /**
-     * Stirrups with {@code legs} to {@code mostLegs} legs, at most {@code maxSpacing} apart, in each of the
-     * zones, or null if some zone has none that pass.
-     */
-    private ZoneSet zoneSet(SectionShape shape, Frame f, List<Integer> zoneIds, BarSize tension, int[] counts, int legs,
-            int mostLegs, double maxSpacing, double d, double as) {
-        Map<Integer, Stirrups> zs = new LinkedHashMap<>();
-        double cost = 0;
-        for (int zi : zoneIds) {
-            Stirrups st = zoneStirrups(shape, f, zi, legs, mostLegs, maxSpacing, d, as);
-            if (st == null) {
-                return null;
-            }
-            zs.put(zi, st);
-            cost += stirrupCost(f.b(), f.h(), st, zones.get(zi));
-        }
-        return new ZoneSet(zs, cost);
-    }
-
-    private Stirrups zoneStirrups(SectionShape shape, Frame f, int zone, int legs, int mostLegs, double maxSpacing,
-            double d, double as) {
-        ZoneKey key = new ZoneKey(zone, d, as, legs, mostLegs, maxSpacing);
-        if (zoneMemo.containsKey(key)) {
-            return zoneMemo.get(key);
-        }
-        BeamProblem.Zone z = zones.get(zone);
-        Stirrups st = chooser.cheapest(shape, f.det(), d, as, z.vu(d), legs, mostLegs, maxSpacing, z.length());
-        zoneMemo.put(key, st);
-        return st;
-    }
-
-    /** Whether an option asking at most {@code legs} and costing at most {@code cost} has been found. */
-    private static boolean dominated(Map<Integer, Double> cheapestByLegs, int legs, double cost) {
-        for (Map.Entry<Integer, Double> e : cheapestByLegs.entrySet()) {
-            if (e.getKey() <= legs && e.getValue() <= cost + 1e-9) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    /** The least the stirrups of the mid-span zones could cost (see {@link #leanStirrups}). */
-    private double leanMid(Frame f) {
-        return leanStirrups(f, BeamProblem.Place.MID);
-    }
-
-    private final Map<BeamProblem.Place, Double> leanMemo = new java.util.EnumMap<>(BeamProblem.Place.class);
-
-    /**
-     * The least the stirrups of the zones at a place could cost: each zone's cheapest stirrups (fewest
-     * legs allowed) for the most favourable section the frame could have (the deepest d, a tension area
-     * that takes Vc to its cap), which can only pass more than any real layout does. Infinite if even
-     * that fails.
-     */
-    private double leanStirrups(Frame f, BeamProblem.Place place) {
-        useFrame(f);
-        Double known = leanMemo.get(place);
-        if (known != null) {
-            return known;
-        }
-        SectionShape shape = new SectionShape(f.b(), f.h(), p.flange());
-        BarSize smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
-        double dMax = f.h() - f.det().firstLayerCentroid(smallest.diameter());
-        double asBig = 0.1 * f.b() * dMax;
-        double c = 0;
-        for (int zi : zoneIndices(place)) {
-            BeamProblem.Zone z = zones.get(zi);
-            Stirrups st = chooser.cheapest(shape, f.det(), dMax, asBig, z.vuLeast(), p.space().stirrupLegs().get(0),
-                    z.length());
-            if (st == null) {
-                c = Double.POSITIVE_INFINITY;
-                break;
-            }
-            c += stirrupCost(f.b(), f.h(), st, z);
-        }
-        leanMemo.put(place, c);
-        return c;
-    }
-
-    /** More than any choice of stirrups over the whole span could cost (the most legs, the closest spacing). */
-    private double stirrupCeiling(Frame f) {
-        int legs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
-        Stirrups dense = new Stirrups(f.ds(), legs, p.space().stirrupSpacings().get(0));
-        double c = 0;
-        for (BeamProblem.Zone z : zones) {
-            c += stirrupCost(f.b(), f.h(), dense, z);
-        }
-        return c;
-    }
-
-    private List<Integer> zoneIndices(BeamProblem.Place place) {
-        return zonesAt.computeIfAbsent(place, this::findZones);
-    }
-
-    private List<Integer> findZones(BeamProblem.Place place) {
-        List<Integer> out = new ArrayList<>();
-        for (int i = 0; i < zones.size(); i++) {
-            if (zones.get(i).section() == place) {
-                out.add(i);
-            }
-        }
-        return out;
-    }
-
-    /**
-     * A continuous support's options. {@code limit} gives, per top bar size, the cost at or above which an
-     * option cannot be part of anything cheaper than the incumbent; the bar count stops rising there.
-     */
-    private List<SupportOpt> supports(Frame f, SectionShape shape, BeamProblem.Place place, double mu,
-            java.util.function.ToDoubleFunction<BarSize> limit, Map<String, List<BeamSection.BarGroup>> bottoms) {
-        List<SupportOpt> out = new ArrayList<>();
-        List<Integer> myZones = zoneIndices(place);
-        double leanZones = leanStirrups(f, place);
-        supportProbe.frame(shape, Bending.HOGGING, new Span(p.span(), p.ends()));
-        TensionSearch search = new TensionSearch(supportProbe, mu).frame(f.det());
-        for (BarSize t : p.space().barSizes()) {
-            int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
-            int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), t, p.materials().fy(), p.code());
-            int first = Math.max(2, ncr);
-            if (nmax < first) {
-                continue;
-            }
-            double ext = Extension.of(p, f.b(), f.h(), f.det(), t).length();
-            double most = limit.applyAsDouble(t);
-            for (Map.Entry<String, List<BeamSection.BarGroup>> bottom : bottoms.entrySet()) {
-                search.compression(bottom.getValue());
-                for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
-                    BarSize other = bottom.getValue().isEmpty() ? t : bottom.getValue().get(0).bar();
-                    if (!framePasses(f, shape, t, other, layers)) {
-                        if (layers == 1) {
-                            break;
-                        }
-                        break;
-                    }
-                    int[] min = search.minCounts(t, nmax, ncr, layers, layers * nmax);
-                    if (min == null) {
-                        continue;
-                    }
-                    int nMin = java.util.Arrays.stream(min).sum();
-                    for (int n = nMin; n <= layers * nmax; n++) {
-                        if (barCost(t, n, ext) + leanZones >= most - 1e-9) {
-                            break; // this many bars cost more than an option could and still pay
-                        }
-                        List<int[]> splits = search.passingSplits(t, n, layers, nmax, first);
-                        if (splits.isEmpty()) {
-                            if (!search.passingSplit(t, n, layers, nmax, first).anyDuctile()) {
-                                break;
-                            }
-                            continue;
-                        }
-                        for (int[] split : splits) {
-                            search.place(t, split);
-                            double d = search.d();
-                            double as = search.tensionArea();
-                            double bars = barCost(t, n, ext);
-                            if (myZones.isEmpty()) {
-                                out.add(new SupportOpt(t, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX,
-                                        Map.of(), bars, bottom.getKey()));
-                                continue;
-                            }
-                            // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
-                            StirrupRules.TieDemand ties = StirrupRules.ties(
-                                    supportSection(f, shape, t, split, bottom.getValue()), Bending.HOGGING, mu);
-                            if (!ties.sizeOk(f.ds().diameter())) {
-                                continue;
-                            }
-                            // one option per range of legs: the fewest must meet the office's rule for the
-                            // bottom bars, the most must be held by them (both settled with the mid-span option)
-                            java.util.Set<Map<Integer, Stirrups>> seen = new java.util.HashSet<>();
-                            List<Integer> legOptions = p.space().stirrupLegs();
-                            for (int lo : legOptions) {
-                                if (lo < p.legsFor(split[0]) || lo < ties.minLegs()) {
-                                    continue;
-                                }
-                                for (int hi : legOptions) {
-                                    if (hi < lo || hi > split[0]) {
-                                        continue;
-                                    }
-                                    ZoneSet zs = zoneSet(shape, f, myZones, t, split, lo, hi, ties.maxSpacing(), d, as);
-                                    if (zs == null || !seen.add(zs.stirrups())) {
-                                        continue;
-                                    }
-                                    int fewest = Integer.MAX_VALUE;
-                                    int mostUsed = 0;
-                                    for (Stirrups st : zs.stirrups().values()) {
-                                        fewest = Math.min(fewest, st.legs());
-                                        mostUsed = Math.max(mostUsed, st.legs());
-                                    }
-                                    out.add(new SupportOpt(t, TensionSearch.toList(split), d, fewest, mostUsed,
-                                            zs.stirrups(), bars + zs.cost(), bottom.getKey()));
-                                }
-                            }
-                        }
-                    }
-                }
-            }
-        }
-        return out;
-    }
-
-    /**
-     * Below Table 9.3.1.1: drops the options that fail deflection even with the stiffest partners the
-     * frame offers (the largest Ie of every other section at every load level, the most compression
-     * steel), a bound the section model's deflection functions make safe. What remains is settled by the
-     * CP-SAT model's deflection cuts.
-     */
-    private final class DeflectionScreen {
-        private final List<MidOpt> mids = new ArrayList<>();
-        private final List<SupportOpt> lefts = new ArrayList<>();
-        private final List<SupportOpt> rights = new ArrayList<>();
-
-        DeflectionScreen(Frame f, SectionShape shape, List<MidOpt> allMids, List<SupportOpt> allLefts,
-                List<SupportOpt> allRights) {
-            SpanChecks.ServiceMoments ma = p.serviceMoments();
-            double ec = barfit.section.Deflection.ec(p.materials(), p.code());
-            Map<MidOpt, double[]> midIe = new java.util.IdentityHashMap<>();
-            Map<MidOpt, Double> midRho = new java.util.IdentityHashMap<>();
-            for (MidOpt m : allMids) {
-                BeamSection s = midSection(f, shape, m);
-                midIe.put(m, p.cantilever() ? null : SpanChecks.ieLevels(s, Bending.SAGGING, ma.mid()));
-                midRho.put(m, p.cantilever() ? 0.0 : SpanChecks.rhoPrime(s, Bending.SAGGING));
-            }
-            Map<SupportOpt, double[]> leftIe = new java.util.IdentityHashMap<>();
-            Map<SupportOpt, double[]> rightIe = new java.util.IdentityHashMap<>();
-            Map<SupportOpt, Double> leftRho = new java.util.IdentityHashMap<>();
-            for (SupportOpt l : allLefts) {
-                BeamSection s = supportSection(f, shape, l);
-                leftIe.put(l, SpanChecks.ieLevels(s, Bending.HOGGING, ma.left()));
-                leftRho.put(l, SpanChecks.rhoPrime(s, Bending.HOGGING));
-            }
-            for (SupportOpt r : allRights) {
-                rightIe.put(r, SpanChecks.ieLevels(supportSection(f, shape, r), Bending.HOGGING, ma.right()));
-            }
-            // the stiffest partners per top bar size, computed once
-            Map<String, double[]> bestLeft = new HashMap<>();
-            Map<String, double[]> bestRight = new HashMap<>();
-            Map<String, double[]> bestMidIe = new HashMap<>();
-            Map<String, Double> bestMidRho = new HashMap<>();
-            Map<String, Double> bestLeftRho = new HashMap<>();
-            for (String tt : topSizes(allMids, allLefts, allRights)) {
-                bestMidRho.put(tt, 0.0);
-                bestLeftRho.put(tt, 0.0);
-            }
-            for (Map.Entry<SupportOpt, double[]> e : leftIe.entrySet()) {
-                bestLeft.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
-            }
-            for (Map.Entry<SupportOpt, double[]> e : rightIe.entrySet()) {
-                bestRight.merge(e.getKey().bar().designation(), e.getValue().clone(), this::max);
-            }
-            for (Map.Entry<MidOpt, double[]> e : midIe.entrySet()) {
-                if (e.getValue() != null) {
-                    bestMidIe.merge(e.getKey().top().bar().designation(), e.getValue().clone(), this::max);
-                }
-            }
-            for (Map.Entry<MidOpt, Double> e : midRho.entrySet()) {
-                bestMidRho.merge(e.getKey().top().bar().designation(), e.getValue(), Math::max);
-            }
-            for (Map.Entry<SupportOpt, Double> e : leftRho.entrySet()) {
-                bestLeftRho.merge(e.getKey().bar().designation(), e.getValue(), Math::max);
-            }
-            for (MidOpt m : allMids) {
-                String tt = m.top().bar().designation();
-                double rho = p.cantilever() ? bestLeftRho.get(tt) : midRho.get(m);
-                if (passes(ec, ma, bestLeft.get(tt), midIe.get(m), bestRight.get(tt), rho)) {
-                    mids.add(m);
-                }
-            }
-            for (SupportOpt l : allLefts) {
-                String tt = l.bar().designation();
-                double rho = p.cantilever() ? leftRho.get(l) : bestMidRho.get(tt);
-                if (passes(ec, ma, leftIe.get(l), bestMidIe.get(tt), bestRight.get(tt), rho)) {
-                    lefts.add(l);
-                }
-            }
-            for (SupportOpt r : allRights) {
-                String tt = r.bar().designation();
-                if (passes(ec, ma, bestLeft.get(tt), bestMidIe.get(tt), rightIe.get(r), bestMidRho.get(tt))) {
-                    rights.add(r);
-                }
-            }
-        }
-
-        private java.util.Set<String> topSizes(List<MidOpt> ms, List<SupportOpt> ls, List<SupportOpt> rs) {
-            java.util.Set<String> out = new java.util.TreeSet<>();
-            ms.forEach(m -> out.add(m.top().bar().designation()));
-            ls.forEach(l -> out.add(l.bar().designation()));
-            rs.forEach(r -> out.add(r.bar().designation()));
-            return out;
-        }
-
-        private boolean passes(double ec, SpanChecks.ServiceMoments ma, double[] l, double[] m, double[] r, double rho) {
-            if ((p.leftSupport() && l == null) || (p.rightSupport() && r == null) || (p.midSection() && m == null)) {
-                return false;
-            }
-            double[] d = SpanChecks.deflections(p.span(), p.ends(), ec, ma,
-                    p.leftSupport() ? l : null, m, p.rightSupport() ? r : null, rho);
-            return SpanChecks.within(p.span(), p.limits(), d);
-        }
-
-        private double[] max(double[] a, double[] b) {
-            if (a == null) {
-                return b.clone();
-            }
-            for (int i = 0; i < a.length; i++) {
-                a[i] = Math.max(a[i], b[i]);
-            }
-            return a;
-        }
-
-        List<MidOpt> mids() {
-            return mids;
-        }
-
-        List<SupportOpt> lefts() {
-            return lefts;
-        }
-
-        List<SupportOpt> rights() {
-            return rights;
-        }
-    }
-
-    private List<BeamSection.BarGroup> groups(BarSize bar, List<Integer> counts) {
-        List<BeamSection.BarGroup> g = new ArrayList<>();
-        counts.forEach(c -> g.add(new BeamSection.BarGroup(bar, c)));
-        return g;
-    }
-
-    private BeamSection midSection(Frame f, SectionShape shape, MidOpt m) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM, groups(m.bar(), m.counts()),
-                f.det()));
-        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(m.top().bar(),
-                m.top().nc())), f.det()));
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    private BeamSection supportSection(Frame f, SectionShape shape, SupportOpt s) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP, groups(s.bar(), s.counts()),
-                f.det()));
-        if (s.bottomKey() != null) {
-            // the bottom bars the option was built with: its key is "<size>[counts]"
-            String key = s.bottomKey();
-            BarSize bb = p.space().barSizes().stream().filter(b -> key.startsWith(b.designation() + "["))
-                    .findFirst().orElseThrow();
-            List<Integer> counts = new ArrayList<>();
-            for (String part : key.substring(key.indexOf('[') + 1, key.length() - 1).split(",")) {
-                counts.add(Integer.parseInt(part.strip()));
-            }
-            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, groups(bb, counts), f.det()));
-        }
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    /** The mid-span section of an option (bottom bars in tension, the continuous top bars above), for its ties. */
-    private BeamSection midSection(Frame f, SectionShape shape, TopOpt top, BarSize bottom, int[] split) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.BOTTOM,
-                groups(bottom, TensionSearch.toList(split)), f.det()));
-        ls.addAll(BeamSection.stack(barfit.section.Face.TOP, List.of(new BeamSection.BarGroup(top.bar(), top.nc())),
-                f.det()));
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    /** A support section of an option (top bars in tension, the bottom bars counted there), for its ties. */
-    private BeamSection supportSection(Frame f, SectionShape shape, BarSize top, int[] split,
-            List<BeamSection.BarGroup> bottom) {
-        List<BarLayer> ls = new ArrayList<>(BeamSection.stack(barfit.section.Face.TOP,
-                groups(top, TensionSearch.toList(split)), f.det()));
-        if (!bottom.isEmpty()) {
-            ls.addAll(BeamSection.stack(barfit.section.Face.BOTTOM, bottom, f.det()));
-        }
-        return new BeamSection(shape, p.materials(), f.det(), ls, null, f.skin(), p.code());
-    }
-
-    /**
-     * What the span's deflection takes from one mid-span option's section, for the deflection cuts: Ie of
-     * Table 24.2.3.5 at the dead, sustained and total service levels, then ρ' (24.2.4.1). Null where the
-     * section takes no part (a cantilever's deflection is its support's).
-     */
-    public double[] deflectionStiffness(Frame f, MidOpt m) {
-        if (p.cantilever()) {
-            return null;
-        }
-        BeamSection s = midSection(f, new SectionShape(f.b(), f.h(), p.flange()), m);
-        double[] ie = SpanChecks.ieLevels(s, Bending.SAGGING, p.serviceMoments().mid());
-        return append(ie, SpanChecks.rhoPrime(s, Bending.SAGGING));
-    }
-
-    /** As {@link #deflectionStiffness(Frame, MidOpt)} for a support option; ρ' only at a cantilever's support. */
-    public double[] deflectionStiffness(Frame f, SupportOpt o, BeamProblem.Place place) {
-        BeamSection s = supportSection(f, new SectionShape(f.b(), f.h(), p.flange()), o);
-        double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING,
-                place == BeamProblem.Place.LEFT ? p.serviceMoments().left() : p.serviceMoments().right());
-        return p.cantilever() ? append(ie, SpanChecks.rhoPrime(s, Bending.HOGGING)) : ie;
-    }
-
-    private static double[] append(double[] a, double v) {
-        double[] out = java.util.Arrays.copyOf(a, a.length + 1);
-        out[a.length] = v;
-        return out;
-    }
-
-    // ------------------------------------------------------------------ combining and bounding
-
-    /** The cheapest compatible support option, or null. */
-    static SupportOpt cheapestSupport(List<SupportOpt> opts, BarSize bar, int nc, MidOpt m, String bottomKey) {
-        SupportOpt best = null;
-        for (SupportOpt s : opts) {
-            if (s.bar().equals(bar) && s.counts().get(0) >= nc && s.holds(m)
-                    && java.util.Objects.equals(s.bottomKey(), bottomKey) && (best == null || s.cost() < best.cost())) {
-                best = s;
-            }
-        }
-        return best;
-    }
-
-    /** Builds the layout of a combination. */
-    public BeamLayout layout(Frame f, MidOpt m, SupportOpt l, SupportOpt r) {
-        List<Stirrups> st = new ArrayList<>();
-        for (int i = 0; i < zones.size(); i++) {
-            Stirrups s = m.zones().get(i);
-            if (s == null && l != null) {
-                s = l.zones().get(i);
-            }
-            if (s == null && r != null) {
-                s = r.zones().get(i);
-            }
-            st.add(s);
-        }
-        double extL = l == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
-        double extR = r == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
-        return new BeamLayout(f.b(), f.h(), p.flange(), f.ds(), f.skin(), m.top().bar(), m.top().nc(),
-                l == null ? null : l.counts(), r == null ? null : r.counts(), m.bar(), m.counts(), st, extL, extR);
-    }
-
-    /** Support options by top bar size, cheapest first. */
-    private static Map<BarSize, List<SupportOpt>> bySize(List<SupportOpt> opts) {
-        Map<BarSize, List<SupportOpt>> out = new java.util.IdentityHashMap<>();
-        for (SupportOpt s : opts) {
-            out.computeIfAbsent(s.bar(), k -> new ArrayList<>()).add(s);
-        }
-        out.values().forEach(l -> l.sort(Comparator.comparingDouble(SupportOpt::cost)));
-        return out;
-    }
-
-    private static SupportOpt cheapestIn(Map<BarSize, List<SupportOpt>> index, BarSize bar, int nc, MidOpt m,
-            String bottomKey) {
-        List<SupportOpt> l = index.get(bar);
-        if (l == null) {
-            return null;
-        }
-        for (SupportOpt s : l) {
-            if (s.counts().get(0) >= nc && s.holds(m) && java.util.Objects.equals(s.bottomKey(), bottomKey)) {
-                return s;
-            }
-        }
-        return null;
-    }
-
-    /** The frame's cheapest combination that passes, found by plain enumeration of its options. */
-    private FrameSet enumerate(FrameSet fs) {
-        double best = Double.POSITIVE_INFINITY;
-        BeamLayout bestLayout = null;
-        Map<BarSize, List<SupportOpt>> lefts = bySize(fs.lefts());
-        Map<BarSize, List<SupportOpt>> rights = bySize(fs.rights());
-        for (MidOpt m : fs.mids()) {
-            TopOpt t = m.top();
-            if (!t.bar().equals(m.bar()) && p.maxBarSizes() < 2) {
-                continue;
-            }
-            String key = p.bottomAnchored() ? m.key() : null;
-            SupportOpt l = null;
-            SupportOpt r = null;
-            if (p.leftSupport()) {
-                l = cheapestIn(lefts, t.bar(), p.cantilever() ? 2 : t.nc(), m, key);
-                if (l == null) {
-                    continue;
-                }
-            }
-            if (p.rightSupport()) {
-                r = cheapestIn(rights, t.bar(), t.nc(), m, key);
-                if (r == null) {
-                    continue;
-                }
-            }
-            double total = fs.frame().cost() + t.cost() + m.cost() + (l == null ? 0 : l.cost()) + (r == null ? 0 : r.cost());
-            if (total < best - 1e-9) {
-                BeamLayout lay = layout(fs.frame(), m, l, r);
-                if (fs.frame().deflection() && !BeamVerifier.verify(p, lay, false).ok()) {
-                    continue;
-                }
-                best = total;
-                bestLayout = lay;
-            }
-        }
-        return new FrameSet(fs.frame(), fs.tops(), fs.mids(), fs.lefts(), fs.rights(), best, bestLayout);
-    }
-
-    /** Drops the options that cannot be part of anything cheaper than the incumbent. */
-    private FrameSet prune(FrameSet fs, double incumbent) {
-        double frame = fs.frame().cost();
-        Map<String, Double> cheapestLeft = new HashMap<>();
-        Map<String, Double> cheapestRight = new HashMap<>();
-        for (SupportOpt s : fs.lefts()) {
-            cheapestLeft.merge(s.bar().designation(), s.cost(), Math::min);
-        }
-        for (SupportOpt s : fs.rights()) {
-            cheapestRight.merge(s.bar().designation(), s.cost(), Math::min);
-        }
-        List<MidOpt> mids = new ArrayList<>();
-        Map<String, Double> cheapestMidPlusTop = new HashMap<>();
-        for (MidOpt m : fs.mids()) {
-            String tb = m.top().bar().designation();
-            double lb = frame + m.top().cost() + m.cost() + (p.leftSupport() ? cheapestLeft.getOrDefault(tb, 1e300) : 0)
-                    + (p.rightSupport() ? cheapestRight.getOrDefault(tb, 1e300) : 0);
-            if (lb <= incumbent + 1e-9) {
-                mids.add(m);
-                cheapestMidPlusTop.merge(tb, m.top().cost() + m.cost(), Math::min);
-            }
-        }
-        List<TopOpt> tops = fs.tops().stream().filter(t -> mids.stream().anyMatch(m -> m.top().equals(t))).toList();
-        List<SupportOpt> lefts = new ArrayList<>();
-        for (SupportOpt s : fs.lefts()) {
-            String tb = s.bar().designation();
-            double lb = frame + cheapestMidPlusTop.getOrDefault(tb, 1e300) + s.cost()
-                    + (p.rightSupport() ? cheapestRight.getOrDefault(tb, 1e300) : 0);
-            if (lb <= incumbent + 1e-9) {
-                lefts.add(s);
-            }
-        }
-        List<SupportOpt> rights = new ArrayList<>();
-        for (SupportOpt s : fs.rights()) {
-            String tb = s.bar().designation();
-            double lb = frame + cheapestMidPlusTop.getOrDefault(tb, 1e300) + s.cost()
-                    + (p.leftSupport() ? cheapestLeft.getOrDefault(tb, 1e300) : 0);
-            if (lb <= incumbent + 1e-9) {
-                rights.add(s);
-            }
-        }
-        return new FrameSet(fs.frame(), tops, mids, lefts, rights, fs.best(), fs.bestLayout());
-    }
-
-    public BeamProblem problem() {
-        return p;
     }
 }

@@ -219,7 +219,7 @@ public record BeamLayout(
             if (b.mark().startsWith("S")) {
                 stirrups += cost.rates().stirrupsPerKg() * b.bar().massPerMetre() * metres;
             } else {
-                bars += cost.rates().mainBarsPerKg() * cost.rates().lapFactor() * b.bar().massPerMetre() * metres;
+                bars += cost.barMetres(b.bar(), metres);
             }
         }
         return frame.plus(new CostBreakdown(0, bars, stirrups, 0, 0));

@@ -25,8 +25,8 @@ import java.util.Map;
  */
 public final class BeamSelection {
     /** The chosen combination and the solver's proof. */
-    public record Choice(BeamGenerator.FrameSet set, BeamGenerator.MidOpt mid, BeamGenerator.SupportOpt left,
-            BeamGenerator.SupportOpt right) {
+    public record Choice(FrameOptions set, MidOption mid, SupportOption left,
+            SupportOption right) {
     }
 
     /** {@code choice}, {@code objective} and {@code bound} (in {@link CostModel#SPAN_UNITS}) only when solved. */
@@ -34,7 +34,7 @@ public final class BeamSelection {
     }
 
     private final CpModel model = new CpModel();
-    private final List<BeamGenerator.FrameSet> sets;
+    private final List<FrameOptions> sets;
     private final BeamProblem p;
     private final List<Literal> frameVars = new ArrayList<>();
     private final List<List<Literal>> midVars = new ArrayList<>();
@@ -47,7 +47,7 @@ public final class BeamSelection {
     private final Map<Object, double[]> stiffness = new java.util.IdentityHashMap<>();
     private static final double[] NO_PART = new double[0];
 
-    public BeamSelection(BeamProblem problem, List<BeamGenerator.FrameSet> sets) {
+    public BeamSelection(BeamProblem problem, List<FrameOptions> sets) {
         OrTools.load();
         this.p = problem;
         this.sets = sets;
@@ -68,10 +68,10 @@ public final class BeamSelection {
             sizeUsed.put(s.designation(), model.newBoolVar("size_" + s.designation()));
         }
         for (int fi = 0; fi < sets.size(); fi++) {
-            BeamGenerator.FrameSet fs = sets.get(fi);
+            FrameOptions fs = sets.get(fi);
             Literal y = bool("frame" + fi, fs.frame().cost());
             frameVars.add(y);
-            List<BeamGenerator.TopOpt> tops = fs.tops();
+            List<TopOption> tops = fs.tops();
             List<Literal> topVars = new ArrayList<>();
             for (int i = 0; i < tops.size(); i++) {
                 Literal x = bool("f" + fi + "_top" + i, tops.get(i).cost());
@@ -79,26 +79,26 @@ public final class BeamSelection {
                 model.addImplication(x, sizeUsed.get(tops.get(i).bar().designation()));
             }
             model.addEquality(LinearExpr.sum(topVars.toArray(new Literal[0])), y);
-            List<Literal> mv = new ArrayList<>();
+            List<Literal> midLiterals = new ArrayList<>();
             for (int i = 0; i < fs.mids().size(); i++) {
-                BeamGenerator.MidOpt m = fs.mids().get(i);
+                MidOption m = fs.mids().get(i);
                 Literal x = bool("f" + fi + "_mid" + i, m.cost());
-                mv.add(x);
+                midLiterals.add(x);
                 model.addImplication(x, sizeUsed.get(m.bar().designation()));
             }
-            midVars.add(mv);
+            midVars.add(midLiterals);
             // each top option is carried by exactly one mid-span option built on it
             for (int ti = 0; ti < tops.size(); ti++) {
                 List<Literal> on = new ArrayList<>();
                 for (int i = 0; i < fs.mids().size(); i++) {
                     if (fs.mids().get(i).top().equals(tops.get(ti))) {
-                        on.add(mv.get(i));
+                        on.add(midLiterals.get(i));
                     }
                 }
                 model.addEquality(LinearExpr.sum(on.toArray(new Literal[0])), topVars.get(ti));
             }
-            leftVars.add(supports(fi, "left", fs, fs.lefts(), topVars, mv, p.leftSupport()));
-            rightVars.add(supports(fi, "right", fs, fs.rights(), topVars, mv, p.rightSupport()));
+            leftVars.add(supports(fi, "left", fs, fs.lefts(), topVars, midLiterals, p.leftSupport()));
+            rightVars.add(supports(fi, "right", fs, fs.rights(), topVars, midLiterals, p.rightSupport()));
         }
         model.addExactlyOne(frameVars.toArray(new Literal[0]));
         model.addLessOrEqual(LinearExpr.sum(sizeUsed.values().toArray(new Literal[0])), p.maxBarSizes());
@@ -106,23 +106,23 @@ public final class BeamSelection {
         model.minimize(LinearExpr.weightedSum(all.toArray(new Literal[0]), c));
     }
 
-    private List<Literal> supports(int fi, String side, BeamGenerator.FrameSet fs, List<BeamGenerator.SupportOpt> opts,
-            List<Literal> topVars, List<Literal> mv, boolean present) {
-        List<Literal> sv = new ArrayList<>();
+    private List<Literal> supports(int fi, String side, FrameOptions fs, List<SupportOption> opts,
+            List<Literal> topVars, List<Literal> midLiterals, boolean present) {
+        List<Literal> supportLiterals = new ArrayList<>();
         if (!present) {
-            return sv;
+            return supportLiterals;
         }
         for (int i = 0; i < opts.size(); i++) {
-            sv.add(bool("f" + fi + "_" + side + i, opts.get(i).cost()));
+            supportLiterals.add(bool("f" + fi + "_" + side + i, opts.get(i).cost()));
         }
-        List<BeamGenerator.TopOpt> tops = fs.tops();
+        List<TopOption> tops = fs.tops();
         // same top size at the support as over the span
         for (BarSize s : p.space().barSizes()) {
             LinearExprBuilder lhs = LinearExpr.newBuilder();
             LinearExprBuilder rhs = LinearExpr.newBuilder();
             for (int i = 0; i < opts.size(); i++) {
                 if (opts.get(i).bar().equals(s)) {
-                    lhs.add(sv.get(i));
+                    lhs.add(supportLiterals.get(i));
                 }
             }
             for (int ti = 0; ti < tops.size(); ti++) {
@@ -136,50 +136,50 @@ public final class BeamSelection {
         if (!p.cantilever()) {
             LinearExprBuilder first = LinearExpr.newBuilder();
             for (int i = 0; i < opts.size(); i++) {
-                first.addTerm(sv.get(i), opts.get(i).counts().get(0));
+                first.addTerm(supportLiterals.get(i), opts.get(i).counts().get(0));
             }
-            LinearExprBuilder nc = LinearExpr.newBuilder();
+            LinearExprBuilder continuous = LinearExpr.newBuilder();
             for (int ti = 0; ti < tops.size(); ti++) {
-                nc.addTerm(topVars.get(ti), tops.get(ti).nc());
+                continuous.addTerm(topVars.get(ti), tops.get(ti).continuous());
             }
-            model.addGreaterOrEqual(first, nc);
+            model.addGreaterOrEqual(first, continuous);
         }
         // stirrup legs at the support hold the bottom bars too
         LinearExprBuilder legs = LinearExpr.newBuilder();
         for (int i = 0; i < opts.size(); i++) {
-            legs.addTerm(sv.get(i), opts.get(i).legs());
+            legs.addTerm(supportLiterals.get(i), opts.get(i).legs());
         }
         LinearExprBuilder need = LinearExpr.newBuilder();
         for (int i = 0; i < fs.mids().size(); i++) {
-            need.addTerm(mv.get(i), fs.mids().get(i).legsNeeded());
+            need.addTerm(midLiterals.get(i), fs.mids().get(i).legsNeeded());
         }
         model.addGreaterOrEqual(legs, need);
         // and no more legs than the outer bottom layer holds (25.7.1.2, 25.7.1.3)
         LinearExprBuilder most = LinearExpr.newBuilder();
         for (int i = 0; i < opts.size(); i++) {
-            most.addTerm(sv.get(i), opts.get(i).legsMax());
+            most.addTerm(supportLiterals.get(i), opts.get(i).legsMax());
         }
         LinearExprBuilder held = LinearExpr.newBuilder();
         for (int i = 0; i < fs.mids().size(); i++) {
-            held.addTerm(mv.get(i), fs.mids().get(i).counts().get(0));
+            held.addTerm(midLiterals.get(i), fs.mids().get(i).counts().get(0));
         }
         model.addLessOrEqual(most, held);
         // bottom bars counted as compression steel: the support option was built for those bottom bars
         if (p.bottomAnchored()) {
-            Map<String, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
+            Map<BottomBars, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
             for (int i = 0; i < opts.size(); i++) {
-                byKey.computeIfAbsent(opts.get(i).bottomKey(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
-                    LinearExpr.newBuilder()})[0].add(sv.get(i));
+                byKey.computeIfAbsent(opts.get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
+                    LinearExpr.newBuilder()})[0].add(supportLiterals.get(i));
             }
             for (int i = 0; i < fs.mids().size(); i++) {
-                byKey.computeIfAbsent(fs.mids().get(i).key(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
-                    LinearExpr.newBuilder()})[1].add(mv.get(i));
+                byKey.computeIfAbsent(fs.mids().get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
+                    LinearExpr.newBuilder()})[1].add(midLiterals.get(i));
             }
             for (LinearExprBuilder[] pair : byKey.values()) {
                 model.addEquality(pair[0], pair[1]);
             }
         }
-        return sv;
+        return supportLiterals;
     }
 
     /**
@@ -190,37 +190,37 @@ public final class BeamSelection {
      * do: with every layer at its own depth, a layout with no more bars but spread over more layers can be
      * the stiffer, and a shallower centroid raises ρ'.)
      */
-    public void cutDeflection(Choice c, BeamGenerator gen) {
+    void cutDeflection(Choice c, SpanSections sections) {
         int fi = sets.indexOf(c.set());
-        BeamGenerator.FrameSet fs = c.set();
-        BeamGenerator.Frame f = fs.frame();
+        FrameOptions fs = c.set();
+        SpanFrame f = fs.frame();
         boolean known = p.service() != null;
         LinearExprBuilder weaker = LinearExpr.newBuilder();
         int parts = 1;
-        BeamGenerator.MidOpt m0 = c.mid();
-        double[] s0 = known ? stiffness(m0, () -> gen.deflectionStiffness(f, m0)) : null;
+        MidOption m0 = c.mid();
+        double[] s0 = known ? stiffness(m0, () -> sections.deflectionStiffness(f, m0)) : null;
         for (int i = 0; i < fs.mids().size(); i++) {
-            BeamGenerator.MidOpt m = fs.mids().get(i);
-            if (m == m0 || known && noStiffer(stiffness(m, () -> gen.deflectionStiffness(f, m)), s0)) {
+            MidOption m = fs.mids().get(i);
+            if (m == m0 || known && noStiffer(stiffness(m, () -> sections.deflectionStiffness(f, m)), s0)) {
                 weaker.add(midVars.get(fi).get(i));
             }
         }
         parts += weakerSupports(weaker, fs.lefts(), leftVars.get(fi), c.left(), known,
-                o -> gen.deflectionStiffness(f, o, BeamProblem.Place.LEFT));
+                o -> sections.deflectionStiffness(f, o, BeamProblem.Place.LEFT));
         parts += weakerSupports(weaker, fs.rights(), rightVars.get(fi), c.right(), known,
-                o -> gen.deflectionStiffness(f, o, BeamProblem.Place.RIGHT));
+                o -> sections.deflectionStiffness(f, o, BeamProblem.Place.RIGHT));
         model.addLessOrEqual(weaker, parts - 1);
     }
 
-    private int weakerSupports(LinearExprBuilder weaker, List<BeamGenerator.SupportOpt> opts, List<Literal> vars,
-            BeamGenerator.SupportOpt s0, boolean known,
-            java.util.function.Function<BeamGenerator.SupportOpt, double[]> of) {
+    private int weakerSupports(LinearExprBuilder weaker, List<SupportOption> opts, List<Literal> vars,
+            SupportOption s0, boolean known,
+            java.util.function.Function<SupportOption, double[]> of) {
         if (s0 == null) {
             return 0;
         }
         double[] k0 = known ? stiffness(s0, () -> of.apply(s0)) : null;
         for (int i = 0; i < opts.size(); i++) {
-            BeamGenerator.SupportOpt s = opts.get(i);
+            SupportOption s = opts.get(i);
             if (s == s0 || known && noStiffer(stiffness(s, () -> of.apply(s)), k0)) {
                 weaker.add(vars.get(i));
             }
@@ -251,7 +251,7 @@ public final class BeamSelection {
         int fi = sets.indexOf(c.set());
         LinearExprBuilder same = LinearExpr.newBuilder();
         for (int i = 0; i < c.set().mids().size(); i++) {
-            BeamGenerator.MidOpt m = c.set().mids().get(i);
+            MidOption m = c.set().mids().get(i);
             if (m.bar().equals(c.mid().bar()) && m.top().bar().equals(c.mid().top().bar())) {
                 same.add(midVars.get(fi).get(i));
             }
@@ -271,10 +271,10 @@ public final class BeamSelection {
             if (!solver.booleanValue(frameVars.get(fi))) {
                 continue;
             }
-            BeamGenerator.FrameSet fs = sets.get(fi);
-            BeamGenerator.MidOpt mid = pick(solver, midVars.get(fi), fs.mids());
-            BeamGenerator.SupportOpt left = pick(solver, leftVars.get(fi), fs.lefts());
-            BeamGenerator.SupportOpt right = pick(solver, rightVars.get(fi), fs.rights());
+            FrameOptions fs = sets.get(fi);
+            MidOption mid = pick(solver, midVars.get(fi), fs.mids());
+            SupportOption left = pick(solver, leftVars.get(fi), fs.lefts());
+            SupportOption right = pick(solver, rightVars.get(fi), fs.rights());
             return new Result(status, new Choice(fs, mid, left, right), Math.round(solver.objectiveValue()),
                     Math.round(solver.bestObjectiveBound()), stats);
         }

@@ -31,11 +31,11 @@ class PairTableTest {
         int finite = 0;
         for (int i = 0; i < instances; i++) {
             BeamProblem p = RandomBeams.small(rnd);
-            BeamGenerator gen = new BeamGenerator(p, COST);
+            PairTables tables = new PairTables(p, COST);
             List<BarSize> sizes = p.space().barSizes();
             for (double b : p.widths()) {
                 for (double h : p.depths()) {
-                    BeamGenerator.PairTable t = gen.pairTable(b, h);
+                    PairTable t = tables.exact(b, h);
                     for (int x = 0; x < sizes.size(); x++) {
                         for (int y = x; y < sizes.size(); y++) {
                             boolean[] allowed = new boolean[sizes.size()];
