@@ -139,6 +139,20 @@ public final class LineSpans {
                 best.trial().redistribution(), best.epsT(), List.of(), new OneSection(trials.size(), designed, false));
     }
 
+    /** One analysis of the line (by stiffness or by the 6.5 coefficients) and the part problems from it. */
+    private record Analysed(List<BeamProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {
+    }
+
+    private Analysed analyse(LineInput in, List<SectionShape> shapes, double ec, List<Double> red) {
+        Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
+        if (in.coefficients()) {
+            List<Coefficients.SpanValues> c = Coefficients.analyse(line);
+            return new Analysed(fromCoefficients(in, line, c), null, c);
+        }
+        LineResult r = LineAnalysis.analyse(line);
+        return new Analysed(fromAnalysis(in, line, r), r, null);
+    }
+
     /** A section tried for the whole line: its analysis, the parts' problems held at it, and its bound. */
     private record Trial(SectionShape shape, List<BeamProblem> problems, LineResult analysis,
             List<Coefficients.SpanValues> coefficients, List<Double> redistribution, double bound) {
@@ -154,17 +168,10 @@ public final class LineSpans {
         for (int s = 0; s < n + 2; s++) {
             shapes.add(shape);
         }
-        Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
-        List<BeamProblem> problems;
-        LineResult analysis = null;
-        List<Coefficients.SpanValues> coefficients = null;
-        if (in.coefficients()) {
-            coefficients = Coefficients.analyse(line);
-            problems = fromCoefficients(in, line, coefficients);
-        } else {
-            analysis = LineAnalysis.analyse(line);
-            problems = fromAnalysis(in, line, analysis);
-        }
+        Analysed a = analyse(in, shapes, ec, red);
+        List<BeamProblem> problems = a.problems();
+        LineResult analysis = a.analysis();
+        List<Coefficients.SpanValues> coefficients = a.coefficients();
         List<BeamProblem> held = new ArrayList<>();
         double bound = 0;
         for (BeamProblem p : problems) {
@@ -207,16 +214,7 @@ public final class LineSpans {
             }
             List<Double> epsT = supportStrains(in, parts);
             List<Double> red = new ArrayList<>(current.redistribution());
-            boolean lowered = false;
-            for (int j = 0; j < red.size(); j++) {
-                if (red.get(j) > 0) {
-                    double allowed = barfit.analysis.RedistributionLimit.percent(epsT.get(j));
-                    if (red.get(j) > allowed + 1e-9) {
-                        red.set(j, allowed);
-                        lowered = true;
-                    }
-                }
-            }
+            boolean lowered = lowerToAllowed(red, epsT);
             if (!lowered || rounds >= MAX_ROUNDS) {
                 return new Evaluated(current, parts, total, rounds, epsT);
             }
@@ -244,14 +242,12 @@ public final class LineSpans {
         while (round < MAX_ROUNDS) {
             seen.add(shapes);
             round++;
-            Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
-            List<BeamProblem> problems;
+            Analysed a = analyse(in, shapes, ec, red);
+            List<BeamProblem> problems = a.problems();
             if (in.coefficients()) {
-                coefficients = Coefficients.analyse(line);
-                problems = fromCoefficients(in, line, coefficients);
+                coefficients = a.coefficients();
             } else {
-                analysis = LineAnalysis.analyse(line);
-                problems = fromAnalysis(in, line, analysis);
+                analysis = a.analysis();
             }
             List<Part> next = new ArrayList<>();
             List<SectionShape> chosen = new ArrayList<>(shapes);
@@ -270,16 +266,7 @@ public final class LineSpans {
             parts = next;
             // 6.6.5: a support's redistribution stands only where the sections designed beside it allow it
             epsT = supportStrains(in, parts);
-            boolean lowered = false;
-            for (int j = 0; j < red.size(); j++) {
-                if (red.get(j) > 0) {
-                    double allowed = barfit.analysis.RedistributionLimit.percent(epsT.get(j));
-                    if (red.get(j) > allowed + 1e-9) {
-                        red.set(j, allowed);
-                        lowered = true;
-                    }
-                }
-            }
+            boolean lowered = lowerToAllowed(red, epsT);
             if (!lowered && sameSections(shapes, chosen)) {
                 settled = true;
                 break;
@@ -338,6 +325,24 @@ public final class LineSpans {
             }
         }
         return out;
+    }
+
+    /**
+     * Lowers each support's redistribution (percent, in place) to what the sections designed beside it
+     * allow (6.6.5: εt ≥ 0.0075, at most 1000 εt percent); true when any was lowered.
+     */
+    private static boolean lowerToAllowed(List<Double> red, List<Double> epsT) {
+        boolean lowered = false;
+        for (int j = 0; j < red.size(); j++) {
+            if (red.get(j) > 0) {
+                double allowed = barfit.analysis.RedistributionLimit.percent(epsT.get(j));
+                if (red.get(j) > allowed + 1e-9) {
+                    red.set(j, allowed);
+                    lowered = true;
+                }
+            }
+        }
+        return lowered;
     }
 
     /** The least εt of the designed support sections beside each support (NaN where none is designed). */
