@@ -7,9 +7,9 @@ import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamExhaustive;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanExhaustive;
+import barfit.design.span.SpanProblem;
 import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.EndCondition;
@@ -42,12 +42,12 @@ public final class BeamBench {
                 List.of(c.find("10").orElseThrow()), List.of(2, 4), List.of(100.0, 150.0, 200.0, 250.0, 300.0));
     }
 
-    static List<BeamProblem> instances(int n, long seed, SearchSpace space) {
+    static List<SpanProblem> instances(int n, long seed, SearchSpace space) {
         Random r = new Random(seed);
         BarCatalog c = BarCatalogs.builtIn("astm-a615m").orElseThrow();
         Materials m = new Materials(28, 420, 420, 20, 1.0);
         Detailing det = new Detailing(40, c.find("10").orElseThrow(), 25, Exposure.INTERIOR);
-        List<BeamProblem> out = new ArrayList<>();
+        List<SpanProblem> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             double span = 5000 + 500 * r.nextInt(8);
             double base = 120 + r.nextDouble() * 200;
@@ -58,7 +58,7 @@ public final class BeamBench {
             SpanChecks.ServiceLoads service = new SpanChecks.ServiceLoads(10 + 10 * r.nextDouble(), 5 + 8 * r.nextDouble(),
                     0.25);
             Double cap = r.nextInt(4) == 0 ? 450.0 + 50 * r.nextInt(3) : null;
-            out.add(new BeamProblem("S" + (i + 1), m, det, CodeEquations.SI, space, span, EndCondition.BOTH_ENDS_CONTINUOUS,
+            out.add(new SpanProblem("S" + (i + 1), m, det, CodeEquations.SI, space, span, EndCondition.BOTH_ENDS_CONTINUOUS,
                     ml, mm, mr, v, v * (0.85 + 0.3 * r.nextDouble()), service, SpanChecks.Limits.DEFAULT, cap, null, null,
                     false, 2, 4));
         }
@@ -67,14 +67,14 @@ public final class BeamBench {
 
     public static Figures run(int n, int compare, long seed, PrintWriter out) {
         CostModel cost = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
-        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(60, 1, 1));
+        SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(60, 1, 1));
         SearchSpace full = SectionBench.defaultSpace();
-        for (BeamProblem p : instances(10, seed + 1, full)) {
+        for (SpanProblem p : instances(10, seed + 1, full)) {
             designer.design(p, 0); // warm up
         }
         double[] opt = new double[n];
         out.printf(Locale.ROOT, "%-5s %10s %12s%n", "span", "optimizer", "cost");
-        List<BeamProblem> problems = instances(n, seed, full);
+        List<SpanProblem> problems = instances(n, seed, full);
         for (int i = 0; i < n; i++) {
             long t0 = System.nanoTime();
             var o = designer.design(problems.get(i), 0);
@@ -84,16 +84,16 @@ public final class BeamBench {
             out.flush();
         }
         out.println("reduced space (2 widths, 3 depths, No. 19/22/25, one layer) against exhaustive enumeration:");
-        BeamExhaustive oracle = new BeamExhaustive(cost);
-        List<BeamProblem> small = instances(compare, seed + 2, reducedSpace());
-        for (BeamProblem p : small) {
+        SpanExhaustive oracle = new SpanExhaustive(cost);
+        List<SpanProblem> small = instances(compare, seed + 2, reducedSpace());
+        for (SpanProblem p : small) {
             designer.design(p, 0);
         }
         double[] ro = new double[compare];
         double[] ex = new double[compare];
         boolean equal = true;
         for (int i = 0; i < compare; i++) {
-            BeamProblem p = small.get(i);
+            SpanProblem p = small.get(i);
             long t0 = System.nanoTime();
             var o = designer.design(p, 0);
             ro[i] = (System.nanoTime() - t0) / 1e6;

@@ -5,11 +5,11 @@ import barfit.catalogs.BarCatalogs;
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
-import barfit.design.DesignOutcome;
-import barfit.design.ExhaustiveSearch;
+import barfit.design.section.DesignOutcome;
+import barfit.design.section.SectionExhaustive;
 import barfit.design.SearchSpace;
-import barfit.design.SectionDesigner;
-import barfit.design.SectionProblem;
+import barfit.design.section.SectionDesigner;
+import barfit.design.section.SectionProblem;
 import barfit.design.SolverOptions;
 import barfit.section.CodeEquations;
 import barfit.section.Detailing;
@@ -71,7 +71,7 @@ public final class SectionBench {
     public static Figures run(int n, int exhaustiveEvery, long seed, PrintWriter out) {
         CostModel cost = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
         SectionDesigner designer = new SectionDesigner(cost, new SolverOptions(60, 1, 1));
-        ExhaustiveSearch oracle = new ExhaustiveSearch(cost);
+        SectionExhaustive oracle = new SectionExhaustive(cost);
         List<SectionProblem> problems = instances(n, seed);
         // warm up the JIT and the native library on instances outside the measured set
         for (SectionProblem p : instances(30, seed + 1)) {
@@ -91,7 +91,7 @@ public final class SectionBench {
             String eq = "-";
             if (i % exhaustiveEvery == 0) {
                 long t1 = System.nanoTime();
-                ExhaustiveSearch.Result ref = oracle.solve(p);
+                SectionExhaustive.Result ref = oracle.solve(p);
                 double ms = (System.nanoTime() - t1) / 1e6;
                 exh.add(ms);
                 checked += ref.layoutsChecked();

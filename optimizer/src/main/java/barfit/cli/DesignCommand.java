@@ -4,9 +4,9 @@ import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
-import barfit.design.DesignOutcome;
-import barfit.design.SectionDesigner;
-import barfit.design.SectionProblem;
+import barfit.design.section.DesignOutcome;
+import barfit.design.section.SectionDesigner;
+import barfit.design.section.SectionProblem;
 import barfit.design.SolverOptions;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
@@ -17,8 +17,8 @@ import barfit.design.line.LineSpans;
 import barfit.report.DesignJson;
 import barfit.report.DesignItem;
 import barfit.report.DesignText;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -86,7 +86,7 @@ final class DesignCommand implements Callable<Integer> {
         var settings = input.settings();
         CostModel cost = new CostModel(input.rates(), settings.detailing().cover(), settings.units().code());
         SectionDesigner designer = new SectionDesigner(cost, options);
-        BeamDesigner spans = new BeamDesigner(cost, options);
+        SpanDesigner spans = new SpanDesigner(cost, options);
         List<DesignItem> outcomes = new ArrayList<>();
         for (DesignBeam b : beams) {
             outcomes.add(b.isWhole() ? DesignItem.of(spans.design(span(input, b), alternatives))
@@ -113,7 +113,7 @@ final class DesignCommand implements Callable<Integer> {
         return outcomes.stream().allMatch(DesignItem::feasible) ? Main.OK : Main.FAILED;
     }
 
-    static BeamProblem span(DesignInput in, DesignBeam b) {
+    static SpanProblem span(DesignInput in, DesignBeam b) {
         return barfit.schedule.Spans.problem(in, b);
     }
 

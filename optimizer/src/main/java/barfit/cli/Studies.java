@@ -11,7 +11,7 @@ import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.input.LineInput;
 import barfit.input.LinesReader;
-import barfit.design.beam.BeamDesigner;
+import barfit.design.span.SpanDesigner;
 import barfit.design.line.LineSpans;
 import barfit.section.trail.Dim;
 import barfit.study.Say;
@@ -54,7 +54,7 @@ final class Studies {
         }
         List<LineInput> lines = LinesReader.read(DesignInputReader.document(file), in.settings());
         if (!lines.isEmpty()) {
-            BeamDesigner spans = new BeamDesigner(cost(in), options);
+            SpanDesigner spans = new SpanDesigner(cost(in), options);
             LineSpans byLine = new LineSpans(in.settings(), in.space(), spans, in.maxBarSizesPerBeam(),
                     in.barsPerTwoLegs());
             for (LineInput l : lines) {

@@ -1,5 +1,6 @@
 package barfit.design;
 
+import barfit.design.section.SectionLayout;
 import barfit.section.CheckResult;
 
 /**
@@ -11,7 +12,7 @@ import barfit.section.CheckResult;
  * tension bars that would do (null where one more does not). {@code maxDepth} and {@code fixedWidth} are the
  * beam's own (null where it has none).
  */
-public record Diagnosis(String limit, Cause cause, Layout strongest, double strongestPhiMn, Fix deeper, Fix wider,
+public record Diagnosis(String limit, Cause cause, SectionLayout strongest, double strongestPhiMn, Fix deeper, Fix wider,
         Integer moreLayers, Double maxDepth, Double fixedWidth) {
 
     /** What stops the section, as facts. */

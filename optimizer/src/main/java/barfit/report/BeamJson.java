@@ -1,9 +1,9 @@
 package barfit.report;
 
 import barfit.design.Proof;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
 import barfit.section.CheckReport;
 import barfit.section.CheckResult;
 import barfit.section.FlexureResult;
@@ -23,7 +23,7 @@ public final class BeamJson {
     }
 
     /** A size at which the span designs ({@code null} when none was found). */
-    private static void fix(ObjectNode dn, String key, BeamDesigner.Fix f, UnitSystem u) {
+    private static void fix(ObjectNode dn, String key, SpanDesigner.Fix f, UnitSystem u) {
         if (f == null) {
             dn.putNull(key);
             return;
@@ -33,8 +33,8 @@ public final class BeamJson {
         Json.put(o, "height", f.height(), Dim.LENGTH, u);
     }
 
-    public static ObjectNode beam(BeamDesigner.Outcome o, UnitSystem u, boolean trail) {
-        BeamProblem p = o.problem();
+    public static ObjectNode beam(SpanDesigner.Outcome o, UnitSystem u, boolean trail) {
+        SpanProblem p = o.problem();
         ObjectNode b = Json.object();
         b.put("id", p.id());
         b.put("kind", "span");
@@ -46,7 +46,7 @@ public final class BeamJson {
         }
         if (!o.feasible()) {
             ObjectNode dn = b.putObject("diagnosis");
-            BeamDesigner.Diagnosis d = o.diagnosis();
+            SpanDesigner.Diagnosis d = o.diagnosis();
             dn.put("limit", d.limit());
             dn.put("clause", d.clause());
             dn.put("summary", DiagnosisWords.summary(d, u));
@@ -66,7 +66,7 @@ public final class BeamJson {
             bo.put("when", Words.when(x, u));
         });
         ArrayNode alts = b.putArray("alternatives");
-        for (BeamDesigner.Design d : o.alternatives()) {
+        for (SpanDesigner.Design d : o.alternatives()) {
             design(alts.addObject(), d, p, u, false);
         }
         var pr = o.proof();
@@ -116,8 +116,8 @@ public final class BeamJson {
         return Math.abs(r.demand().mu()) / r.flexure().phiMn();
     }
 
-    static void design(ObjectNode o, BeamDesigner.Design d, BeamProblem p, UnitSystem u, boolean trail) {
-        BeamLayout l = d.layout();
+    static void design(ObjectNode o, SpanDesigner.Design d, SpanProblem p, UnitSystem u, boolean trail) {
+        SpanLayout l = d.layout();
         Json.put(o, "width", l.width(), Dim.LENGTH, u);
         Json.put(o, "height", l.height(), Dim.LENGTH, u);
         o.set("bottom", layers("bottom", l.bottom(), l.bottomCounts()));
@@ -137,14 +137,14 @@ public final class BeamJson {
             Json.put(top, "right_extension", l.extRight(), Dim.SPAN, u);
         }
         // the single-section fields at span level: those of the section with the highest Mu / phi Mn
-        Map.Entry<BeamProblem.Place, CheckReport> governing = null;
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+        Map.Entry<SpanProblem.Place, CheckReport> governing = null;
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             if (governing == null || ratio(e.getValue()) > ratio(governing.getValue())) {
                 governing = e;
             }
         }
         ArrayNode sections = o.putArray("sections");
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             ObjectNode s = sections.addObject();
             s.put("at", e.getKey().name().toLowerCase(Locale.ROOT));
             FlexureResult f = e.getValue().flexure();
@@ -185,7 +185,7 @@ public final class BeamJson {
             }
         }
         ArrayNode stirrups = o.putArray("stirrups");
-        List<BeamProblem.Zone> zones = p.zones();
+        List<SpanProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
             ObjectNode z = stirrups.addObject();
             var s = l.zoneStirrups().get(i);
@@ -244,7 +244,7 @@ public final class BeamJson {
         ArrayNode spanChecks = defl.putArray("checks");
         sr.checks().forEach(c -> spanChecks.add(CheckJson.check(c, u)));
         ArrayNode bars = o.putArray("bars");
-        for (BeamLayout.BarMark m : d.bars()) {
+        for (SpanLayout.BarMark m : d.bars()) {
             ObjectNode x = bars.addObject();
             x.put("mark", m.mark());
             x.put("role", Words.role(m));

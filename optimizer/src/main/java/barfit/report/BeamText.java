@@ -1,9 +1,9 @@
 package barfit.report;
 
 import barfit.design.Proof;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
 import barfit.section.CheckReport;
 import barfit.section.CheckResult;
 import barfit.section.FlexureResult;
@@ -25,7 +25,7 @@ public final class BeamText {
     }
 
     /** Warnings about what a designed span leaves unchecked: none, or the missing shears. */
-    public static List<String> warnings(BeamProblem p) {
+    public static List<String> warnings(SpanProblem p) {
         return p.vLeft() == null && p.vRight() == null ? List.of(NO_SHEARS) : List.of();
     }
 
@@ -45,7 +45,7 @@ public final class BeamText {
         return sb.toString();
     }
 
-    static String where(BeamProblem.Place place) {
+    static String where(SpanProblem.Place place) {
         return switch (place) {
             case LEFT -> "left support";
             case MID -> "mid-span";
@@ -53,8 +53,8 @@ public final class BeamText {
         };
     }
 
-    public static void render(BeamDesigner.Outcome o, UnitSystem u, String currency, boolean trail, StringBuilder out) {
-        BeamProblem p = o.problem();
+    public static void render(SpanDesigner.Outcome o, UnitSystem u, String currency, boolean trail, StringBuilder out) {
+        SpanProblem p = o.problem();
         out.append("Beam ").append(p.id()).append("   span ").append(span(p.span(), u)).append(", ")
                 .append(p.ends().words());
         if (p.maxDepth() != null) {
@@ -75,8 +75,8 @@ public final class BeamText {
                     : "  what would work (one limit at a time): " + Words.alternatives(fixes) + "\n");
             return;
         }
-        BeamDesigner.Design d = o.best();
-        BeamLayout l = d.layout();
+        SpanDesigner.Design d = o.best();
+        SpanLayout l = d.layout();
         for (String w : warnings(p)) {
             out.append("  WARNING: ").append(w).append('\n');
         }
@@ -103,17 +103,17 @@ public final class BeamText {
                 t.row("top at right", supportTop(p, l, l.topRight(), l.extRight(), u));
             }
         }
-        List<BeamProblem.Zone> zones = p.zones();
+        List<SpanProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
-            BeamProblem.Zone z = zones.get(i);
+            SpanProblem.Zone z = zones.get(i);
             var s = l.zoneStirrups().get(i);
             t.row(i == 0 ? "stirrups" : "", z.name() + " zone " + span(z.from(), u) + "–" + span(z.to(), u) + ": "
-                    + Words.stirrups(s, u) + " (" + sets(BeamLayout.stirrupSets(z.length(), s.spacing()))
+                    + Words.stirrups(s, u) + " (" + sets(SpanLayout.stirrupSets(z.length(), s.spacing()))
                     + (d.report().zoneShears().get(i) == null ? ", minimum"
                             : ", Vu = " + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE)) + ")");
         }
         boolean firstSection = true;
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             FlexureResult f = e.getValue().flexure();
             double mu = e.getValue().demand().mu();
             t.row(firstSection ? "sections" : "", where(e.getKey()) + ": Mu = " + u.withUnit(Math.abs(mu), Dim.MOMENT)
@@ -130,7 +130,7 @@ public final class BeamText {
         out.append("  bar list:\n");
         TextTable bars = new TextTable(false, false, true, false, true);
         bars.row("mark", "role", "count", "bar", "length (" + u.unit(Dim.SPAN) + ")");
-        for (BeamLayout.BarMark b : d.bars()) {
+        for (SpanLayout.BarMark b : d.bars()) {
             bars.row(b.mark(), Words.role(b), String.valueOf(b.count()), b.bar().label(), u.number(b.length(), Dim.SPAN));
         }
         bars.write("    ", out);
@@ -138,8 +138,8 @@ public final class BeamText {
             out.append("  alternatives (next cheapest distinct section or bar sizes):\n");
             TextTable a = new TextTable(false, false, true, true);
             int k = 1;
-            for (BeamDesigner.Design alt : o.alternatives()) {
-                BeamLayout al = alt.layout();
+            for (SpanDesigner.Design alt : o.alternatives()) {
+                SpanLayout al = alt.layout();
                 a.row("#" + k++, u.compact(al.width(), Dim.LENGTH) + " × " + u.compact(al.height(), Dim.LENGTH)
                         + "  bottom " + counts(al.bottomCounts(), al.bottom().label()) + "  top " + al.top().label(),
                         Money.amount(alt.cost().total()),
@@ -150,7 +150,7 @@ public final class BeamText {
         if (trail) {
             out.append("\n  Checks of the chosen span (section model)\n");
             TextTable ct = new TextTable(false, false, false, true, false, true, true, false);
-            for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
                 for (CheckResult c : e.getValue().checks()) {
                     ct.row(where(e.getKey()), c.title(), c.clause(), Words.value(c.demand(), u),
                             c.sense().equals("<=") ? "≤" : "≥", Words.value(c.limit(), u), Words.ratio(c.ratio()),
@@ -166,7 +166,7 @@ public final class BeamText {
                         Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
             }
             ct.write("    ", out);
-            for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
                 out.append("\n  Calculation trail, ").append(where(e.getKey())).append('\n');
                 TrailText.write(e.getValue().trail(), u, "    ", out);
             }
@@ -181,18 +181,18 @@ public final class BeamText {
      * What the continuous top bars are at mid-span, read from the strain the section model found there: a
      * bar above the neutral axis is in compression (compression steel), one below it in tension.
      */
-    public static String topAtMid(BeamDesigner.Design d, UnitSystem u) {
-        double strain = strainAt(d, BeamProblem.Place.MID, barfit.section.Face.TOP);
+    public static String topAtMid(SpanDesigner.Design d, UnitSystem u) {
+        double strain = strainAt(d, SpanProblem.Place.MID, barfit.section.Face.TOP);
         if (Double.isNaN(strain)) {
             return "";
         }
-        String c = "c = " + u.withUnit(d.report().sections().get(BeamProblem.Place.MID).flexure().c(), Dim.LENGTH);
+        String c = "c = " + u.withUnit(d.report().sections().get(SpanProblem.Place.MID).flexure().c(), Dim.LENGTH);
         return strain < 0 ? " (compression steel at mid-span: above the neutral axis, " + c + ")"
                 : " (in tension at mid-span: below the neutral axis, " + c + ", so not compression steel there)";
     }
 
     /** The largest strain (+ tension) of a face's bars in the section at a place, NaN where none is counted. */
-    static double strainAt(BeamDesigner.Design d, BeamProblem.Place place, barfit.section.Face face) {
+    static double strainAt(SpanDesigner.Design d, SpanProblem.Place place, barfit.section.Face face) {
         CheckReport r = d.report().sections().get(place);
         double strain = Double.NaN;
         if (r != null) {
@@ -206,10 +206,10 @@ public final class BeamText {
     }
 
     /** What the anchored bottom bars are at the continuous supports, read from their strain there. */
-    static String bottomAtSupports(BeamProblem p, BeamDesigner.Design d) {
+    static String bottomAtSupports(SpanProblem p, SpanDesigner.Design d) {
         List<String> tension = new java.util.ArrayList<>();
-        for (BeamProblem.Place place : List.of(BeamProblem.Place.LEFT, BeamProblem.Place.RIGHT)) {
-            if ((place == BeamProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())
+        for (SpanProblem.Place place : List.of(SpanProblem.Place.LEFT, SpanProblem.Place.RIGHT)) {
+            if ((place == SpanProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())
                     && strainAt(d, place, barfit.section.Face.BOTTOM) >= 0) {
                 tension.add(where(place));
             }
@@ -229,12 +229,12 @@ public final class BeamText {
         return sb.toString();
     }
 
-    static String extensionRule(BeamProblem p, BeamLayout l) {
+    static String extensionRule(SpanProblem p, SpanLayout l) {
         var det = l.detailing(p.detailing());
-        return Words.extension(barfit.design.beam.Extension.of(p, l.width(), l.height(), det, l.top()).governs());
+        return Words.extension(barfit.design.span.Extension.of(p, l.width(), l.height(), det, l.top()).governs());
     }
 
-    static String demand(BeamProblem p, UnitSystem u) {
+    static String demand(SpanProblem p, UnitSystem u) {
         StringBuilder sb = new StringBuilder("Mu");
         if (p.mLeft() != null) {
             sb.append(" left ").append(u.withUnit(p.mLeft(), Dim.MOMENT));
@@ -261,7 +261,7 @@ public final class BeamText {
         return sb.toString();
     }
 
-    static String deflection(SpanChecks.Result r, BeamProblem p, UnitSystem u) {
+    static String deflection(SpanChecks.Result r, SpanProblem p, UnitSystem u) {
         if (r.liveDeflection() == null) {
             return "not computed: h ≥ h,min = " + len(r.hMin(), u) + " of Table 9.3.1.1";
         }
@@ -276,8 +276,8 @@ public final class BeamText {
     }
 
     /** The top bars at one support: the continuous ones alone, or with the extra bars and how far they run. */
-    private static String supportTop(BeamProblem p, BeamLayout l, List<Integer> counts, double ext, UnitSystem u) {
-        int extra = BeamLayout.sum(counts) - l.topContinuous();
+    private static String supportTop(SpanProblem p, SpanLayout l, List<Integer> counts, double ext, UnitSystem u) {
+        int extra = SpanLayout.sum(counts) - l.topContinuous();
         String all = counts(counts, l.top().label());
         if (extra == 0) {
             return all + "; the continuous bars alone, no extra bars";
@@ -291,7 +291,7 @@ public final class BeamText {
         return n + (n == 1 ? " set" : " sets");
     }
 
-    public static String proof(Proof<BeamDesigner.Search> p) {
+    public static String proof(Proof<SpanDesigner.Search> p) {
         if (p.status() == Proof.Status.UNPROVEN) {
             return "not proven: the time limit ended CP-SAT before it had a solution; the generator's cheapest design"
                     + " is given, with no bound (raise --time-limit for the proof); " + p.workers()

@@ -1,13 +1,13 @@
 package barfit.report;
 
-import barfit.design.DesignOutcome;
-import barfit.design.beam.BeamDesigner;
+import barfit.design.section.DesignOutcome;
+import barfit.design.span.SpanDesigner;
 
 /**
  * One beam's answer: a single section's or a whole span's (exactly one is set); a span or overhang of a
  * beam line designed from its analysis also says which line and part it is ({@code line}, else null).
  */
-public record DesignItem(DesignOutcome section, BeamDesigner.Outcome whole, LinePart line) {
+public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, LinePart line) {
     /**
      * Where a whole span came from: its line, which part, and how many rounds of analysis and design it took;
      * {@code undesigned} names the line's parts that have no design (the analysis kept its first estimate
@@ -27,11 +27,11 @@ public record DesignItem(DesignOutcome section, BeamDesigner.Outcome whole, Line
         return new DesignItem(o, null, null);
     }
 
-    public static DesignItem of(BeamDesigner.Outcome o) {
+    public static DesignItem of(SpanDesigner.Outcome o) {
         return new DesignItem(null, o, null);
     }
 
-    public static DesignItem of(BeamDesigner.Outcome o, LinePart line) {
+    public static DesignItem of(SpanDesigner.Outcome o, LinePart line) {
         return new DesignItem(null, o, line);
     }
 }

@@ -1,12 +1,12 @@
 package barfit.report;
 
 import barfit.design.Binding;
-import barfit.design.CandidateGenerator;
+import barfit.design.section.SectionGenerator;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
-import barfit.design.Design;
-import barfit.design.DesignOutcome;
-import barfit.design.Layout;
+import barfit.design.section.Design;
+import barfit.design.section.DesignOutcome;
+import barfit.design.section.SectionLayout;
 import barfit.design.Proof;
 import barfit.input.Settings;
 import barfit.section.CheckResult;
@@ -115,7 +115,7 @@ public final class DesignJson {
         return b;
     }
 
-    static void layout(ObjectNode o, Layout l, UnitSystem u) {
+    static void layout(ObjectNode o, SectionLayout l, UnitSystem u) {
         Json.put(o, "width", l.width(), Dim.LENGTH, u);
         Json.put(o, "height", l.height(), Dim.LENGTH, u);
         ObjectNode t = o.putObject("tension");
@@ -180,7 +180,7 @@ public final class DesignJson {
         return CostModel.UNITS.rounded(v);
     }
 
-    static ObjectNode proof(Proof<CandidateGenerator.Stats> p, UnitSystem u) {
+    static ObjectNode proof(Proof<SectionGenerator.Stats> p, UnitSystem u) {
         ObjectNode o = Json.object();
         o.put("solver", "CP-SAT");
         o.put("status", Words.status(p.status()));

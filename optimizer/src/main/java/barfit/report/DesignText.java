@@ -1,11 +1,11 @@
 package barfit.report;
 
 import barfit.design.Binding;
-import barfit.design.CandidateGenerator;
-import barfit.design.Design;
-import barfit.design.DesignOutcome;
+import barfit.design.section.SectionGenerator;
+import barfit.design.section.Design;
+import barfit.design.section.DesignOutcome;
 import barfit.design.Diagnosis;
-import barfit.design.Layout;
+import barfit.design.section.SectionLayout;
 import barfit.design.Proof;
 import barfit.input.Settings;
 import barfit.section.CheckReport;
@@ -98,7 +98,7 @@ public final class DesignText {
     }
 
     /** Whether the compression layer is just the two lightest bars the search allows. */
-    static boolean hangersOnly(Layout l, barfit.design.SearchSpace space) {
+    static boolean hangersOnly(SectionLayout l, barfit.design.SearchSpace space) {
         var lightest = space.compressionSizes().stream()
                 .min(java.util.Comparator.comparingDouble(barfit.catalogs.BarSize::massPerMetre)).orElseThrow();
         return l.compressionCount() == 2 && l.compressionBar().equals(lightest);
@@ -108,20 +108,20 @@ public final class DesignText {
         return u.compact(v, Dim.LENGTH);
     }
 
-    public static String describe(Layout l, UnitSystem u) {
+    public static String describe(SectionLayout l, UnitSystem u) {
         return len(l.width(), u) + " × " + len(l.height(), u) + "  " + l.bending().tensionFace().word() + " "
                 + bars(l) + "  " + l.bending().compressionFace().word() + " " + l.compressionCount() + " "
                 + l.compressionBar().label() + "  stirrups " + Words.stirrups(l.stirrups(), u);
     }
 
     /** Size and longitudinal bars only. */
-    public static String describeBars(Layout l, UnitSystem u) {
+    public static String describeBars(SectionLayout l, UnitSystem u) {
         return len(l.width(), u) + " × " + len(l.height(), u) + "  " + l.bending().tensionFace().word() + " "
                 + bars(l) + "  " + l.bending().compressionFace().word() + " " + l.compressionCount() + " "
                 + l.compressionBar().label();
     }
 
-    public static String bars(Layout l) {
+    public static String bars(SectionLayout l) {
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < l.tensionCounts().size(); i++) {
             sb.append(i == 0 ? "" : " + ").append(l.tensionCounts().get(i)).append(' ').append(l.tensionBar().label());
@@ -149,7 +149,7 @@ public final class DesignText {
             return;
         }
         Design d = o.best();
-        Layout l = d.layout();
+        SectionLayout l = d.layout();
         CheckReport r = d.report();
         TextTable t = new TextTable(false, false);
         t.row("section", Words.shape(l.shape(), u));
@@ -226,7 +226,7 @@ public final class DesignText {
         return sb.toString();
     }
 
-    static String proof(Proof<CandidateGenerator.Stats> p, UnitSystem u) {
+    static String proof(Proof<SectionGenerator.Stats> p, UnitSystem u) {
         var s = p.search();
         if (p.status() == Proof.Status.UNPROVEN) {
             return "not proven: the time limit ended CP-SAT before it had a solution; the cheapest of " + s.candidates()

@@ -1,7 +1,7 @@
 package barfit.report;
 
 import barfit.design.Diagnosis;
-import barfit.design.beam.BeamDesigner;
+import barfit.design.span.SpanDesigner;
 import barfit.schedule.GroupClash;
 import barfit.section.CheckResult;
 import barfit.section.trail.Dim;
@@ -68,24 +68,24 @@ public final class DiagnosisWords {
 
     // ---------------------------------------------------------------- whole spans
 
-    public static String summary(BeamDesigner.Diagnosis d, UnitSystem u) {
-        BeamDesigner.Diagnosis.Cause cause = d.cause();
-        if (cause instanceof BeamDesigner.Diagnosis.BelowShallowest) {
+    public static String summary(SpanDesigner.Diagnosis d, UnitSystem u) {
+        SpanDesigner.Diagnosis.Cause cause = d.cause();
+        if (cause instanceof SpanDesigner.Diagnosis.BelowShallowest) {
             return "max_depth is below the shallowest depth searched";
         }
-        if (cause instanceof BeamDesigner.Diagnosis.DeflectionUnchecked c) {
+        if (cause instanceof SpanDesigner.Diagnosis.DeflectionUnchecked c) {
             return "every allowed depth is below Table 9.3.1.1 (h,min = " + say(u, c.hMin()) + ") and no service loads "
                     + "are given, so deflection cannot be checked: give service: {dead, live}";
         }
-        if (cause instanceof BeamDesigner.Diagnosis.DeflectionFails c) {
+        if (cause instanceof SpanDesigner.Diagnosis.DeflectionFails c) {
             return deflection(c, d.atCap(), u);
         }
-        if (cause instanceof BeamDesigner.Diagnosis.ShearFails c) {
+        if (cause instanceof SpanDesigner.Diagnosis.ShearFails c) {
             return "the moments can be carried within the cap" + (c.deflectionSetAside() ? " (deflection set aside)" : "")
                     + ", but no stirrups in the search carry the factored shears (or the web is too small for them, "
                     + "22.5.1.2)";
         }
-        if (cause instanceof BeamDesigner.Diagnosis.StrengthFails c) {
+        if (cause instanceof SpanDesigner.Diagnosis.StrengthFails c) {
             List<String> aside = new ArrayList<>();
             if (c.deflectionSetAside()) {
                 aside.add("deflection set aside");
@@ -97,7 +97,7 @@ public final class DiagnosisWords {
                     + "no layout within the limits carries "
                     + "the factored moments with every flexure, ductility, minimum steel, spacing and detailing check met";
         }
-        if (cause instanceof BeamDesigner.Diagnosis.TimeLimit c) {
+        if (cause instanceof SpanDesigner.Diagnosis.TimeLimit c) {
             return "the time limit (" + c.seconds() + " s) ended the search before a design passing every check was found";
         }
         if (cause instanceof GroupClash c) {
@@ -113,7 +113,7 @@ public final class DiagnosisWords {
         throw new IllegalArgumentException("no words for " + cause);
     }
 
-    private static String deflection(BeamDesigner.Diagnosis.DeflectionFails c, List<CheckResult> atCap, UnitSystem u) {
+    private static String deflection(SpanDesigner.Diagnosis.DeflectionFails c, List<CheckResult> atCap, UnitSystem u) {
         String live = "the immediate live-load deflection within ℓ/" + divisor(c.liveDivisor());
         String total = "the long-term plus live deflection within ℓ/" + divisor(c.totalDivisor());
         String what = switch (c.which()) {
@@ -135,20 +135,20 @@ public final class DiagnosisWords {
         return sb.toString();
     }
 
-    public static List<String> fixes(BeamDesigner.Diagnosis d, UnitSystem u) {
-        if (d.cause() instanceof BeamDesigner.Diagnosis.TimeLimit) {
+    public static List<String> fixes(SpanDesigner.Diagnosis d, UnitSystem u) {
+        if (d.cause() instanceof SpanDesigner.Diagnosis.TimeLimit) {
             return List.of("raise --time-limit");
         }
         if (d.cause() instanceof GroupClash) {
             return List.of("give them different groups, or lift the max_depth or width that keeps them apart");
         }
         List<String> out = new ArrayList<>();
-        BeamDesigner.Fix deeper = d.deeper();
+        SpanDesigner.Fix deeper = d.deeper();
         if (deeper != null) {
             out.add("needs h ≥ " + say(u, deeper.height()) + ": the span designs at " + say(u, deeper.width()) + " × "
                     + say(u, deeper.height()) + (d.maxDepth() != null ? " (max_depth is " + say(u, d.maxDepth()) + ")" : ""));
         }
-        BeamDesigner.Fix wider = d.wider();
+        SpanDesigner.Fix wider = d.wider();
         if (wider != null) {
             out.add("b ≥ " + say(u, wider.width()) + " at h = " + say(u, wider.height())
                     + (d.fixedWidth() != null ? " (the beam fixes b)" : ""));

@@ -1,7 +1,7 @@
 package barfit.report;
 
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -37,7 +37,7 @@ public final class ScheduleCsv {
                 out.append(line(row)).append('\n');
                 continue;
             }
-            BeamDesigner.Design d = schedule.design();
+            SpanDesigner.Design d = schedule.design();
             row.add("ok");
             row.add(u.compact(schedule.layout().width(), Dim.LENGTH));
             row.add(u.compact(schedule.layout().height(), Dim.LENGTH));
@@ -46,7 +46,7 @@ public final class ScheduleCsv {
             row.add(ScheduleRows.topAt(schedule.left(), u));
             row.add(ScheduleRows.topAt(schedule.right(), u));
             row.add(ScheduleRows.stirrups(schedule, u));
-            for (BeamProblem.Place place : BeamProblem.Place.values()) {
+            for (SpanProblem.Place place : SpanProblem.Place.values()) {
                 double[] s = ScheduleRows.strength(schedule, place, u);
                 row.add(s == null ? "" : num(s[0]));
                 row.add(s == null ? "" : num(s[1]));

@@ -1,9 +1,9 @@
 package barfit.report;
 
 import barfit.catalogs.BarSize;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
 import barfit.schedule.ScheduleResult;
 import barfit.section.CheckReport;
 import barfit.section.Stirrups;
@@ -33,7 +33,7 @@ public final class ScheduleRows {
      * @param right          the same at the right support
      * @param strengths      phi Mn and Mu at each section the span has, in the design's order
      */
-    public record Row(ScheduleResult.Beam entry, BeamProblem problem, BeamDesigner.Design design, BeamLayout layout,
+    public record Row(ScheduleResult.Beam entry, SpanProblem problem, SpanDesigner.Design design, SpanLayout layout,
             String bottom, String top, double topPastSupport, SupportTop left, SupportTop right, List<ZoneStirrups> zones,
             List<Strength> strengths) {
         public boolean feasible() {
@@ -54,7 +54,7 @@ public final class ScheduleRows {
     }
 
     /** phi Mn and |Mu| (N·mm) at a section of the span. */
-    public record Strength(BeamProblem.Place place, double phiMn, double mu) {
+    public record Strength(SpanProblem.Place place, double phiMn, double mu) {
     }
 
     public static List<Row> rows(ScheduleResult r) {
@@ -66,34 +66,34 @@ public final class ScheduleRows {
     }
 
     public static Row row(ScheduleResult.Beam b) {
-        BeamProblem p = b.outcome().problem();
+        SpanProblem p = b.outcome().problem();
         if (!b.feasible()) {
             return new Row(b, p, null, null, null, null, Double.NaN, null, null, List.of(), List.of());
         }
-        BeamDesigner.Design d = b.outcome().best();
-        BeamLayout l = d.layout();
+        SpanDesigner.Design d = b.outcome().best();
+        SpanLayout l = d.layout();
         String top = p.cantilever() ? bars(l.topLeft(), l.top()) : l.topContinuous() + " " + l.top().label();
         double past = p.cantilever() ? l.extLeft() - p.span() : Double.NaN;
         List<ZoneStirrups> zones = new ArrayList<>();
         for (int i = 0; i < p.zones().size(); i++) {
-            BeamProblem.Zone z = p.zones().get(i);
+            SpanProblem.Zone z = p.zones().get(i);
             zones.add(new ZoneStirrups(z.name(), z.from(), z.to(), l.zoneStirrups().get(i)));
         }
         List<Strength> strengths = new ArrayList<>();
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             strengths.add(new Strength(e.getKey(), e.getValue().flexure().phiMn(), Math.abs(e.getValue().demand().mu())));
         }
         return new Row(b, p, d, l, bars(l.bottomCounts(), l.bottom()), top, past,
-                supportTop(p, l, BeamProblem.Place.LEFT), supportTop(p, l, BeamProblem.Place.RIGHT), zones, strengths);
+                supportTop(p, l, SpanProblem.Place.LEFT), supportTop(p, l, SpanProblem.Place.RIGHT), zones, strengths);
     }
 
-    private static SupportTop supportTop(BeamProblem p, BeamLayout l, BeamProblem.Place place) {
-        if (p.cantilever() || !(place == BeamProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())) {
+    private static SupportTop supportTop(SpanProblem p, SpanLayout l, SpanProblem.Place place) {
+        if (p.cantilever() || !(place == SpanProblem.Place.LEFT ? p.leftSupport() : p.rightSupport())) {
             return null;
         }
-        List<Integer> counts = place == BeamProblem.Place.LEFT ? l.topLeft() : l.topRight();
-        return new SupportTop(bars(counts, l.top()), BeamLayout.sum(counts) - l.topContinuous(),
-                place == BeamProblem.Place.LEFT ? l.extLeft() : l.extRight());
+        List<Integer> counts = place == SpanProblem.Place.LEFT ? l.topLeft() : l.topRight();
+        return new SupportTop(bars(counts, l.top()), SpanLayout.sum(counts) - l.topContinuous(),
+                place == SpanProblem.Place.LEFT ? l.extLeft() : l.extRight());
     }
 
     /** "3+2 No. 25": bars per layer from the face, and the size. */
@@ -171,7 +171,7 @@ public final class ScheduleRows {
     }
 
     /** phi Mn and Mu (absolute, user units) at a place, or null where the span has no such section. */
-    public static double[] strength(Row row, BeamProblem.Place place, UnitSystem u) {
+    public static double[] strength(Row row, SpanProblem.Place place, UnitSystem u) {
         for (Strength s : row.strengths()) {
             if (s.place() == place) {
                 return new double[] {u.fromSI(s.phiMn(), Dim.MOMENT), u.fromSI(s.mu(), Dim.MOMENT)};
@@ -181,16 +181,16 @@ public final class ScheduleRows {
     }
 
     /** "B2-07/B1: 5 No. 25 × 7.20 m" for every bar mark of the beam. */
-    public static List<String> marks(String id, BeamDesigner.Design d, UnitSystem u) {
+    public static List<String> marks(String id, SpanDesigner.Design d, UnitSystem u) {
         List<String> out = new ArrayList<>();
-        for (BeamLayout.BarMark m : d.bars()) {
+        for (SpanLayout.BarMark m : d.bars()) {
             out.add(id + "/" + m.mark() + ": " + m.count() + " " + m.bar().label() + " × " + u.withUnit(m.length(), Dim.SPAN));
         }
         return out;
     }
 
     /** "left", "mid", "right". */
-    public static String place(BeamProblem.Place p) {
+    public static String place(SpanProblem.Place p) {
         return switch (p) {
             case LEFT -> "left";
             case MID -> "mid";

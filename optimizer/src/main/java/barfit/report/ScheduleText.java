@@ -1,7 +1,7 @@
 package barfit.report;
 
 import barfit.design.Proof;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanProblem;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -37,7 +37,7 @@ public final class ScheduleText {
         List<String> noShears = new ArrayList<>();
         for (ScheduleRows.Row row : ScheduleRows.rows(r)) {
             ScheduleResult.Beam b = row.entry();
-            BeamProblem problem = row.problem();
+            SpanProblem problem = row.problem();
             String group = b.beam().group() == null ? "" : b.beam().group();
             if (!row.feasible()) {
                 table.row(b.beam().id(), group, "NO DESIGN", "(see below)", "", "", "", "");

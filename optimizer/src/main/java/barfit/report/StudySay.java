@@ -1,7 +1,7 @@
 package barfit.report;
 
 import barfit.design.Diagnosis;
-import barfit.design.beam.BeamDesigner;
+import barfit.design.span.SpanDesigner;
 import barfit.section.Stirrups;
 import barfit.section.trail.Dim;
 import barfit.study.Say;
@@ -36,7 +36,7 @@ public final class StudySay implements Say {
     }
 
     @Override
-    public String why(BeamDesigner.Diagnosis d) {
+    public String why(SpanDesigner.Diagnosis d) {
         return DiagnosisWords.summary(d, units);
     }
 }

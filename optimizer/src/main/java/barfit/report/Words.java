@@ -2,8 +2,8 @@ package barfit.report;
 
 import barfit.design.Binding;
 import barfit.design.Proof;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.Extension;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.Extension;
 import barfit.section.BarLayer;
 import barfit.section.CheckResult;
 import barfit.section.CodeTables;
@@ -62,7 +62,7 @@ public final class Words {
     }
 
     /** A bar mark's role: "bottom, full span", "stirrup hoops, left zone (2 of 4 legs)", "crossties, ...". */
-    public static String role(BeamLayout.BarMark m) {
+    public static String role(SpanLayout.BarMark m) {
         return switch (m.role()) {
             case BOTTOM -> "bottom, full span";
             case CANTILEVER_TOP -> "top, full length and ld past the support";

@@ -1,7 +1,7 @@
 package barfit.schedule;
 
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -21,10 +21,10 @@ final class BeamGroups {
     private final List<String> names = new ArrayList<>();
     private int[] groupOf;
     /** Beams of a group that share no size in which each passes: each with why, for the report. */
-    private final Map<Integer, BeamDesigner.Diagnosis> failures = new TreeMap<>();
+    private final Map<Integer, SpanDesigner.Diagnosis> failures = new TreeMap<>();
 
     /** Groups the beams, pricing exactly each size a group of two or more might share to see that one fits. */
-    BeamGroups(ScheduleInput in, List<BeamDesigner.Outcome> own, SizePrices prices) {
+    BeamGroups(ScheduleInput in, List<SpanDesigner.Outcome> own, SizePrices prices) {
         Map<String, List<Integer>> named = new LinkedHashMap<>();
         for (int i = 0; i < in.beams().size(); i++) {
             if (!own.get(i).feasible()) {
@@ -51,7 +51,7 @@ final class BeamGroups {
         }
     }
 
-    private void dropGroupsWithoutCommonSize(ScheduleInput in, List<BeamDesigner.Outcome> own, SizePrices prices) {
+    private void dropGroupsWithoutCommonSize(ScheduleInput in, List<SpanDesigner.Outcome> own, SizePrices prices) {
         boolean[] allBars = new boolean[in.space().barSizes().size()];
         Arrays.fill(allBars, true);
         List<Integer> clashing = new ArrayList<>();
@@ -79,7 +79,7 @@ final class BeamGroups {
         }
         for (int k = clashing.size() - 1; k >= 0; k--) {
             int g = clashing.get(k);
-            BeamDesigner.Diagnosis why = clash(in, own, names.get(g), members.get(g));
+            SpanDesigner.Diagnosis why = clash(in, own, names.get(g), members.get(g));
             for (int i : members.get(g)) {
                 failures.put(i, why);
             }
@@ -92,15 +92,15 @@ final class BeamGroups {
         return beams.stream().allMatch(i -> Double.isFinite(prices.price(i, size, bars)));
     }
 
-    private static BeamDesigner.Diagnosis clash(ScheduleInput in, List<BeamDesigner.Outcome> own, String name,
+    private static SpanDesigner.Diagnosis clash(ScheduleInput in, List<SpanDesigner.Outcome> own, String name,
             List<Integer> beams) {
         List<GroupClash.Member> members = new ArrayList<>();
         for (int i : beams) {
-            BeamProblem p = in.beams().get(i).problem();
+            SpanProblem p = in.beams().get(i).problem();
             var layout = own.get(i).best().layout();
             members.add(new GroupClash.Member(p.id(), layout.width(), layout.height(), p.maxDepth(), p.fixedWidth()));
         }
-        return new BeamDesigner.Diagnosis("group", new GroupClash(name, members));
+        return new SpanDesigner.Diagnosis("group", new GroupClash(name, members));
     }
 
     int count() {
@@ -122,7 +122,7 @@ final class BeamGroups {
     }
 
     /** Why beam {@code beam}'s group could not be rationalised, or null where it could. */
-    BeamDesigner.Diagnosis failure(int beam) {
+    SpanDesigner.Diagnosis failure(int beam) {
         return failures.get(beam);
     }
 }

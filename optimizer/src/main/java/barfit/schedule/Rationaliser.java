@@ -4,8 +4,8 @@ import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 import barfit.input.Rationalise;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -28,15 +28,15 @@ final class Rationaliser {
 
     private final ScheduleInput in;
     private final Rationalise limits;
-    private final List<BeamDesigner.Outcome> own;
-    private final BeamDesigner designer;
+    private final List<SpanDesigner.Outcome> own;
+    private final SpanDesigner designer;
     private final CostModel cost;
     private final SolverOptions options;
     private final Parallel pool;
     private final Progress progress;
     private final List<BarSize> barSizes;
 
-    Rationaliser(ScheduleInput in, List<BeamDesigner.Outcome> own, BeamDesigner designer, CostModel cost,
+    Rationaliser(ScheduleInput in, List<SpanDesigner.Outcome> own, SpanDesigner designer, CostModel cost,
             SolverOptions options, Parallel pool, Progress progress) {
         this.in = in;
         this.limits = in.rationalise();
@@ -58,7 +58,7 @@ final class Rationaliser {
         BarSetSearch.Solved best = search.solve(k, null, null);
         int pricedForProof = prices.pricedPairs();
         long proofMillis = (System.nanoTime() - started) / 1_000_000;
-        List<BeamDesigner.Outcome> outcomes = designInChosenSizes(best, groups, prices);
+        List<SpanDesigner.Outcome> outcomes = designInChosenSizes(best, groups, prices);
         List<ScheduleResult.StandardisationPoint> curve = standardisation(best, search, groups, prices.sizeCount());
         return assemble(best, outcomes, curve, groups, pricedForProof, proofMillis);
     }
@@ -113,7 +113,7 @@ final class Rationaliser {
     }
 
     /** Each beam designed afresh in its size with the schedule's bar sizes; its cost must equal its price. */
-    private List<BeamDesigner.Outcome> designInChosenSizes(BarSetSearch.Solved best, BeamGroups groups,
+    private List<SpanDesigner.Outcome> designInChosenSizes(BarSetSearch.Solved best, BeamGroups groups,
             SizePrices prices) {
         List<ScheduleBeam> beams = in.beams();
         int[] sizeOf = new int[beams.size()];
@@ -135,18 +135,18 @@ final class Rationaliser {
         }
         return pool.map(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_IN_CHOSEN_SIZES), i -> {
             if (groups.failure(i) != null) {
-                BeamDesigner.Outcome mine = own.get(i);
-                return new BeamDesigner.Outcome(mine.problem(), "infeasible", null, List.of(), mine.proof(),
+                SpanDesigner.Outcome mine = own.get(i);
+                return new SpanDesigner.Outcome(mine.problem(), "infeasible", null, List.of(), mine.proof(),
                         List.of(), groups.failure(i));
             }
             if (sizeOf[i] < 0) {
                 return own.get(i);
             }
             SizePrices.Size size = prices.sizes().get(sizeOf[i]);
-            BeamProblem given = beams.get(i).problem();
-            BeamProblem restricted = given.withFixedWidth(size.width()).withSpace(given.space()
+            SpanProblem given = beams.get(i).problem();
+            SpanProblem restricted = given.withFixedWidth(size.width()).withSpace(given.space()
                     .withDepths(List.of(size.height())).withMainBars(allowed));
-            BeamDesigner.Outcome o = designer.design(restricted, 0);
+            SpanDesigner.Outcome o = designer.design(restricted, 0);
             double price = prices.exactPrice(i, sizeOf[i], best.bars());
             if (!o.feasible() || Math.abs(o.best().cost().total() - price) > 1e-3) {
                 throw new IllegalStateException("beam " + given.id() + " in " + size.width() + " x " + size.height()
@@ -154,12 +154,12 @@ final class Rationaliser {
                         : "nothing") + "; this is a bug in the schedule search");
             }
             // reported against the beam as given (its own width and depth limits), designed in its size
-            return new BeamDesigner.Outcome(given, o.status(), o.best(), o.alternatives(), o.proof(), o.binding(),
+            return new SpanDesigner.Outcome(given, o.status(), o.best(), o.alternatives(), o.proof(), o.binding(),
                     o.diagnosis());
         });
     }
 
-    private Rationalised assemble(BarSetSearch.Solved best, List<BeamDesigner.Outcome> outcomes,
+    private Rationalised assemble(BarSetSearch.Solved best, List<SpanDesigner.Outcome> outcomes,
             List<ScheduleResult.StandardisationPoint> curve, BeamGroups groups, int pricedForProof, long proofMillis) {
         List<ScheduleBeam> beams = in.beams();
         List<ScheduleResult.Beam> out = new ArrayList<>();

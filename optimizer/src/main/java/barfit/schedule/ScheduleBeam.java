@@ -1,8 +1,8 @@
 package barfit.schedule;
 
 import barfit.catalogs.yaml.Location;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 
 /**
  * One beam of a schedule as the user gave it: its mark, its group (beams of a group share b x h when
@@ -11,14 +11,14 @@ import barfit.design.beam.BeamProblem;
  * line), else null; {@code sameSection} when its group shares b x h whatever the rationalisation's
  * setting (the parts of a line of one set of forms).
  */
-public record ScheduleBeam(String id, String group, Location location, BeamProblem problem,
-        BeamDesigner.Outcome designed, boolean sameSection) {
-    public ScheduleBeam(String id, String group, Location location, BeamProblem problem) {
+public record ScheduleBeam(String id, String group, Location location, SpanProblem problem,
+        SpanDesigner.Outcome designed, boolean sameSection) {
+    public ScheduleBeam(String id, String group, Location location, SpanProblem problem) {
         this(id, group, location, problem, null, false);
     }
 
-    public ScheduleBeam(String id, String group, Location location, BeamProblem problem,
-            BeamDesigner.Outcome designed) {
+    public ScheduleBeam(String id, String group, Location location, SpanProblem problem,
+            SpanDesigner.Outcome designed) {
         this(id, group, location, problem, designed, false);
     }
 }

@@ -42,7 +42,7 @@ public final class ScheduleInputReader {
             var cost = new barfit.design.CostModel(design.rates(), design.settings().detailing().cover(),
                     design.settings().code());
             var byLine = new barfit.design.line.LineSpans(design.settings(), design.space(),
-                    new barfit.design.beam.BeamDesigner(cost, options), design.maxBarSizesPerBeam(),
+                    new barfit.design.span.SpanDesigner(cost, options), design.maxBarSizesPerBeam(),
                     design.barsPerTwoLegs());
             List<barfit.design.line.LineSpans.Result> results = new Parallel(Math.min(threads, lines.size()),
                     Progress.NONE).map(lines.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),

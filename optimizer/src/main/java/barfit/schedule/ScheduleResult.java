@@ -1,7 +1,7 @@
 package barfit.schedule;
 
 import barfit.design.Proof;
-import barfit.design.beam.BeamDesigner;
+import barfit.design.span.SpanDesigner;
 import java.util.List;
 
 /**
@@ -25,7 +25,7 @@ public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<Section
      * assigned size with the schedule's bar sizes) and its own optimum cost without rationalisation
      * (NaN when it has no passing design).
      */
-    public record Beam(ScheduleBeam beam, BeamDesigner.Outcome outcome, double ownOptimum) {
+    public record Beam(ScheduleBeam beam, SpanDesigner.Outcome outcome, double ownOptimum) {
         public boolean feasible() {
             return outcome.feasible();
         }

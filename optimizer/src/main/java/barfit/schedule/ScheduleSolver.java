@@ -4,7 +4,7 @@ import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamDesigner;
+import barfit.design.span.SpanDesigner;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -33,15 +33,15 @@ public final class ScheduleSolver {
     public ScheduleResult solve(ScheduleInput in) {
         long started = System.nanoTime();
         List<ScheduleBeam> beams = in.beams();
-        BeamDesigner designer = new BeamDesigner(cost, options);
-        List<BeamDesigner.Outcome> own = pool.map(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
+        SpanDesigner designer = new SpanDesigner(cost, options);
+        List<SpanDesigner.Outcome> own = pool.map(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
                 i -> beams.get(i).designed() != null ? beams.get(i).designed()
                         : designer.design(beams.get(i).problem(), 0));
         if (in.rationalise() == null) {
             double unconstrained = 0;
             List<ScheduleResult.Beam> out = new ArrayList<>();
             for (int i = 0; i < beams.size(); i++) {
-                BeamDesigner.Outcome o = own.get(i);
+                SpanDesigner.Outcome o = own.get(i);
                 double ownCost = o.feasible() ? o.best().cost().total() : Double.NaN;
                 if (o.feasible()) {
                     unconstrained += ownCost;

@@ -1,9 +1,9 @@
 package barfit.schedule;
 
 import barfit.design.CostModel;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.PairTable;
-import barfit.design.beam.PairTables;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.PairTable;
+import barfit.design.span.PairTables;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -37,7 +37,7 @@ final class SizePrices {
     private int pricedPairs;
 
     /** Bounds every beam with a design of its own ({@code own}) in every size, beam by beam in parallel. */
-    SizePrices(ScheduleInput in, List<BeamDesigner.Outcome> own, CostModel cost, Parallel pool) {
+    SizePrices(ScheduleInput in, List<SpanDesigner.Outcome> own, CostModel cost, Parallel pool) {
         this.beams = in.beams();
         this.pool = pool;
         this.sizes = sizesOf(in);
@@ -73,7 +73,7 @@ final class SizePrices {
      * Lower bounds for one beam in every size: the generator's bar-free bound per bar pair, and never
      * below the beam's own optimum (no size or bar set can do better than the best of all).
      */
-    private double[][][] lowerBoundsOf(int beam, BeamDesigner.Outcome own) {
+    private double[][][] lowerBoundsOf(int beam, SpanDesigner.Outcome own) {
         double[][][] out = new double[sizes.size()][][];
         PairTables generator = generators.get(beam);
         if (generator == null) {

@@ -1,6 +1,6 @@
 package barfit.schedule;
 
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanProblem;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 
@@ -9,10 +9,10 @@ public final class Spans {
     private Spans() {
     }
 
-    public static BeamProblem problem(DesignInput in, DesignBeam b) {
+    public static SpanProblem problem(DesignInput in, DesignBeam b) {
         var s = in.settings();
         var w = b.whole();
-        return new BeamProblem(b.id(), s.materials(), s.detailing(), s.code(), in.space(), b.span().length(),
+        return new SpanProblem(b.id(), s.materials(), s.detailing(), s.code(), in.space(), b.span().length(),
                 b.span().ends(), w.mLeft(), w.mMid(), w.mRight(), w.vLeft(), w.vRight(), w.service(), w.limits(),
                 b.maxDepth(), b.width(), b.flange(), w.bottomAnchored(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs());
     }

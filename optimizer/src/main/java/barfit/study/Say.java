@@ -1,7 +1,7 @@
 package barfit.study;
 
 import barfit.design.Diagnosis;
-import barfit.design.beam.BeamDesigner;
+import barfit.design.span.SpanDesigner;
 import barfit.section.Stirrups;
 
 /**
@@ -20,5 +20,5 @@ public interface Say {
     String why(Diagnosis d);
 
     /** Why a whole span has no design. */
-    String why(BeamDesigner.Diagnosis d);
+    String why(SpanDesigner.Diagnosis d);
 }

@@ -2,11 +2,11 @@ package barfit.study;
 
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
-import barfit.design.DesignOutcome;
-import barfit.design.Layout;
+import barfit.design.section.DesignOutcome;
+import barfit.design.section.SectionLayout;
 import barfit.design.SearchSpace;
-import barfit.design.SectionDesigner;
-import barfit.design.SectionProblem;
+import barfit.design.section.SectionDesigner;
+import barfit.design.section.SectionProblem;
 import barfit.design.SolverOptions;
 import barfit.section.Materials;
 import barfit.section.SectionChecks;
@@ -68,7 +68,7 @@ public final class SectionTarget implements Target {
         if (!o.feasible()) {
             return Summary.none(say.why(o.diagnosis()), o.diagnosis().limit());
         }
-        Layout l = o.best().layout();
+        SectionLayout l = o.best().layout();
         var f = o.best().report().flexure();
         BarSize lightest = space.compressionSizes().stream().min(Comparator.comparingDouble(BarSize::massPerMetre))
                 .orElseThrow();
@@ -76,7 +76,7 @@ public final class SectionTarget implements Target {
         boolean needed = false;
         String fails = "";
         if (used) {
-            Layout hangers = new Layout(l.width(), l.height(), l.flange(), l.bending(), l.tensionBar(), l.tensionCounts(),
+            SectionLayout hangers = new SectionLayout(l.width(), l.height(), l.flange(), l.bending(), l.tensionBar(), l.tensionCounts(),
                     lightest, 2, l.stirrups(), l.skin());
             var r = SectionChecks.run(hangers.section(m, q.detailing(), q.code()), new Demand(q.mu(), q.vu()), q.span(),
                     Trail.off());

@@ -3,10 +3,10 @@ package barfit.study;
 import barfit.design.CostModel;
 import barfit.design.SearchSpace;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.BeamVerifier;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.SpanVerifier;
 import barfit.section.CheckReport;
 import barfit.section.Materials;
 import java.util.List;
@@ -16,11 +16,11 @@ import java.util.List;
  * hangers are two of them.
  */
 public final class SpanTarget implements Target {
-    private final BeamProblem p;
+    private final SpanProblem p;
     private final SolverOptions options;
     private final Say say;
 
-    public SpanTarget(BeamProblem p, SolverOptions options, Say say) {
+    public SpanTarget(SpanProblem p, SolverOptions options, Say say) {
         this.p = p;
         this.options = options;
         this.say = say;
@@ -58,15 +58,15 @@ public final class SpanTarget implements Target {
 
     @Override
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
-        BeamProblem q = new BeamProblem(p.id(), m, p.detailing(), p.code(), space, p.span(), p.ends(), p.mLeft(),
+        SpanProblem q = new SpanProblem(p.id(), m, p.detailing(), p.code(), space, p.span(), p.ends(), p.mLeft(),
                 p.mMid(), p.mRight(), p.vLeft(), p.vRight(), p.service(), p.limits(), cap, freeWidth ? null : p.fixedWidth(), p.flange(),
                 p.bottomAnchored(), p.maxBarSizes(), p.barsPerTwoLegs()).withAnalysis(p.analysedService(),
                         p.shearDiagram());
-        BeamDesigner.Outcome o = new BeamDesigner(cost, options).design(q, 0);
+        SpanDesigner.Outcome o = new SpanDesigner(cost, options).design(q, 0);
         if (!o.feasible()) {
             return Summary.none(say.why(o.diagnosis()), o.diagnosis().limit());
         }
-        BeamLayout l = o.best().layout();
+        SpanLayout l = o.best().layout();
         CheckReport governing = null;
         for (CheckReport r : o.best().report().sections().values()) {
             if (governing == null || Math.abs(r.demand().mu()) / r.flexure().phiMn()
@@ -78,18 +78,18 @@ public final class SpanTarget implements Target {
         boolean needed = false;
         String fails = "";
         if (used) {
-            BeamLayout hangers = new BeamLayout(l.width(), l.height(), l.flange(), l.stirrupBar(), l.skin(), l.top(), 2,
+            SpanLayout hangers = new SpanLayout(l.width(), l.height(), l.flange(), l.stirrupBar(), l.skin(), l.top(), 2,
                     l.topLeft(), l.topRight(), l.bottom(), l.bottomCounts(), l.zoneStirrups(), l.extLeft(), l.extRight());
-            var r = BeamVerifier.verify(q, hangers, false);
+            var r = SpanVerifier.verify(q, hangers, false);
             needed = !r.ok();
             fails = Summary.checks(r.failures());
         }
         int top = l.topContinuous();
         if (l.topLeft() != null) {
-            top = Math.max(top, BeamLayout.sum(l.topLeft()));
+            top = Math.max(top, SpanLayout.sum(l.topLeft()));
         }
         if (l.topRight() != null) {
-            top = Math.max(top, BeamLayout.sum(l.topRight()));
+            top = Math.max(top, SpanLayout.sum(l.topRight()));
         }
         int layers = l.bottomCounts().size() + Math.max(l.topLeft() == null ? 1 : l.topLeft().size(),
                 l.topRight() == null ? 1 : l.topRight().size());

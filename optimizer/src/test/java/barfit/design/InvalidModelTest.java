@@ -1,5 +1,6 @@
 package barfit.design;
 
+import barfit.design.section.SectionSelection;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -55,11 +56,11 @@ class InvalidModelTest {
     @Test
     void aSectionSelectionWithAnInvalidModelStopsAsABug() {
         // the same path a design takes: candidates, one chosen, solved; the broken constraint added by hand
-        Selection sel = new Selection();
+        SectionSelection sel = new SectionSelection();
         int a = sel.add(12_000, "a");
         int b = sel.add(15_000, "b");
         sel.exactlyOne(List.of(a, b));
-        Selection.Result fine = sel.solve(OPTIONS);
+        SectionSelection.Result fine = sel.solve(OPTIONS);
         assertEquals(Proof.Status.OPTIMAL, fine.status());
         assertEquals(12_000, fine.objective());
         overflow(sel.model());

@@ -2,14 +2,14 @@ package barfit.golden;
 
 import barfit.design.CostModel;
 import barfit.design.CostRates;
-import barfit.design.DesignOutcome;
-import barfit.design.RandomProblems;
-import barfit.design.SectionDesigner;
-import barfit.design.SectionProblem;
+import barfit.design.section.DesignOutcome;
+import barfit.design.section.RandomProblems;
+import barfit.design.section.SectionDesigner;
+import barfit.design.section.SectionProblem;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.RandomBeams;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.RandomSpans;
 import barfit.report.BeamJson;
 import barfit.report.DesignJson;
 import barfit.report.DesignText;
@@ -45,11 +45,11 @@ class SearchGoldenTest {
                     .append(o.feasible() ? DesignText.describe(o.best().layout(), UnitSystem.SI) : "-").append(' ')
                     .append(hash(json)).append('\n');
         }
-        BeamDesigner spans = new BeamDesigner(COST, new SolverOptions(30, 1, 1));
+        SpanDesigner spans = new SpanDesigner(COST, new SolverOptions(30, 1, 1));
         Random beams = new Random(2_026_13L);
         for (int i = 0; i < 60; i++) {
-            BeamProblem p = RandomBeams.small(beams);
-            BeamDesigner.Outcome o = spans.design(p, i % 6 == 0 ? 1 : 0);
+            SpanProblem p = RandomSpans.small(beams);
+            SpanDesigner.Outcome o = spans.design(p, i % 6 == 0 ? 1 : 0);
             String json = Json.write(BeamJson.beam(o, UnitSystem.SI, i % 7 == 0));
             out.append("span ").append(i).append(' ').append(o.status()).append(' ')
                     .append(o.feasible() ? CostModel.units(o.best().cost().total()) : -1).append(' ')

@@ -12,10 +12,10 @@ import barfit.design.CostRates;
 import barfit.design.Proof;
 import barfit.design.SearchSpace;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamExhaustive;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.BeamVerifier;
+import barfit.design.span.SpanExhaustive;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.SpanVerifier;
 import barfit.input.Rationalise;
 import barfit.input.SearchReader;
 import barfit.input.Settings;
@@ -112,9 +112,9 @@ class RationaliseOracleTest {
                 continue;
             }
             assertTrue(b.outcome().best().report().ok(), "re-verified — " + where);
-            BeamLayout l = b.outcome().best().layout();
+            SpanLayout l = b.outcome().best().layout();
             // verified afresh by the section model, against the beam as the schedule gave it
-            assertTrue(BeamVerifier.verify(b.beam().problem(), l, false).ok(), "verifies afresh — " + where);
+            assertTrue(SpanVerifier.verify(b.beam().problem(), l, false).ok(), "verifies afresh — " + where);
             String size = l.width() + "x" + l.height();
             sizes.add(size);
             bars.add(l.top().designation());
@@ -148,7 +148,7 @@ class RationaliseOracleTest {
         }
         int nb = space.barSizes().size();
         int take = in.rationalise().maxBarSizes() == null ? nb : Math.min(in.rationalise().maxBarSizes(), nb);
-        BeamExhaustive oracle = new BeamExhaustive(COST);
+        SpanExhaustive oracle = new SpanExhaustive(COST);
         int n = in.beams().size();
         // beams with no design at all, and groups with no common size, are left out as the schedule does
         long[][][] price = new long[1 << nb][n][sizes.size()];
@@ -163,12 +163,12 @@ class RationaliseOracleTest {
                 }
             }
             for (int i = 0; i < n; i++) {
-                BeamProblem p = in.beams().get(i).problem();
+                SpanProblem p = in.beams().get(i).problem();
                 for (int s = 0; s < sizes.size(); s++) {
-                    BeamProblem q = p.withFixedWidth(sizes.get(s)[0]).withSpace(p.space()
+                    SpanProblem q = p.withFixedWidth(sizes.get(s)[0]).withSpace(p.space()
                             .withDepths(List.of(sizes.get(s)[1])).withMainBars(allowed));
                     boolean widthOk = p.fixedWidth() == null || p.fixedWidth() == sizes.get(s)[0];
-                    BeamExhaustive.Result e = widthOk ? oracle.solve(q) : null;
+                    SpanExhaustive.Result e = widthOk ? oracle.solve(q) : null;
                     price[set][i][s] = e == null || e.best() == null ? Long.MAX_VALUE : e.units();
                 }
             }
@@ -312,7 +312,7 @@ class RationaliseOracleTest {
                     ? new SpanChecks.ServiceLoads(w / 1.5 * 0.6, w / 1.5 * 0.4, 0.25) : null;
             Double cap = r.nextInt(4) == 0 ? 500.0 : null;
             Flange flange = ends != EndCondition.SIMPLE && r.nextInt(3) == 0 ? Flange.given(1000, 120, false, null, span) : null;
-            BeamProblem p = new BeamProblem("S" + index + "-" + (i + 1), m, det, CodeEquations.SI, space, span, ends, ml,
+            SpanProblem p = new SpanProblem("S" + index + "-" + (i + 1), m, det, CodeEquations.SI, space, span, ends, ml,
                     mm, mr, v, v, service, SpanChecks.Limits.DEFAULT, cap, null, flange, false, 2, 4);
             String group = r.nextInt(3) == 0 ? "G" + r.nextInt(2) : null;
             beams.add(new ScheduleBeam(p.id(), group, Location.ofFile("oracle"), p));

@@ -7,9 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import barfit.cli.Cli;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
-import barfit.design.ExhaustiveSearch;
-import barfit.design.SectionDesigner;
-import barfit.design.SectionProblem;
+import barfit.design.section.SectionExhaustive;
+import barfit.design.section.SectionDesigner;
+import barfit.design.section.SectionProblem;
 import barfit.design.SolverOptions;
 import barfit.section.CodeEquations;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -50,7 +50,7 @@ class StudyTest {
         }
 
         @Override
-        public String why(barfit.design.beam.BeamDesigner.Diagnosis d) {
+        public String why(barfit.design.span.SpanDesigner.Diagnosis d) {
             return d.limit();
         }
     };
@@ -58,10 +58,10 @@ class StudyTest {
     @Test
     void atCapAndDeepenEqualTheExhaustiveOptimum() {
         Random r = new Random(55);
-        ExhaustiveSearch oracle = new ExhaustiveSearch(COST);
+        SectionExhaustive oracle = new SectionExhaustive(COST);
         int compared = 0;
         for (int i = 0; i < 60; i++) {
-            SectionProblem p = barfit.design.RandomProblems.small(r);
+            SectionProblem p = barfit.design.section.RandomProblems.small(r);
             List<Double> depths = p.space().depths();
             double cap = depths.get(depths.size() / 2);
             SectionProblem q = perMetre(p, cap);
@@ -94,7 +94,7 @@ class StudyTest {
         Random r = new Random(56);
         SectionDesigner designer = new SectionDesigner(COST, OPTIONS);
         for (int i = 0; i < 25; i++) {
-            SectionProblem p = perMetre(barfit.design.RandomProblems.small(r), null);
+            SectionProblem p = perMetre(barfit.design.section.RandomProblems.small(r), null);
             List<Double> caps = new ArrayList<>(p.space().depths());
             Sweep.Result s = Sweep.run(new SectionTarget(p, OPTIONS, SAY), caps, COST);
             double previous = Double.POSITIVE_INFINITY;

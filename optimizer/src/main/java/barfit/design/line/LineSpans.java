@@ -6,10 +6,10 @@ import barfit.analysis.LineAnalysis;
 import barfit.analysis.LineResult;
 import barfit.analysis.Load;
 import barfit.design.SearchSpace;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.ShearDiagram;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.ShearDiagram;
 import barfit.input.LineInput;
 import barfit.input.Settings;
 import barfit.section.Deflection;
@@ -61,16 +61,16 @@ public final class LineSpans {
     }
 
     /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
-    public record Part(int segment, String name, BeamProblem problem, BeamDesigner.Outcome outcome) {
+    public record Part(int segment, String name, SpanProblem problem, SpanDesigner.Outcome outcome) {
     }
 
     private final Settings settings;
     private final SearchSpace space;
-    private final BeamDesigner designer;
+    private final SpanDesigner designer;
     private final int maxBarSizes;
     private final int barsPerTwoLegs;
 
-    public LineSpans(Settings settings, SearchSpace space, BeamDesigner designer, int maxBarSizes, int barsPerTwoLegs) {
+    public LineSpans(Settings settings, SearchSpace space, SpanDesigner designer, int maxBarSizes, int barsPerTwoLegs) {
         this.settings = settings;
         this.space = space;
         this.designer = designer;
@@ -140,7 +140,7 @@ public final class LineSpans {
     }
 
     /** One analysis of the line (by stiffness or by the 6.5 coefficients) and the part problems from it. */
-    private record Analysed(List<BeamProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {
+    private record Analysed(List<SpanProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {
     }
 
     private Analysed analyse(LineInput in, List<SectionShape> shapes, double ec, List<Double> red) {
@@ -154,7 +154,7 @@ public final class LineSpans {
     }
 
     /** A section tried for the whole line: its analysis, the parts' problems held at it, and its bound. */
-    private record Trial(SectionShape shape, List<BeamProblem> problems, LineResult analysis,
+    private record Trial(SectionShape shape, List<SpanProblem> problems, LineResult analysis,
             List<Coefficients.SpanValues> coefficients, List<Double> redistribution, double bound) {
     }
 
@@ -169,13 +169,13 @@ public final class LineSpans {
             shapes.add(shape);
         }
         Analysed a = analyse(in, shapes, ec, red);
-        List<BeamProblem> problems = a.problems();
+        List<SpanProblem> problems = a.problems();
         LineResult analysis = a.analysis();
         List<Coefficients.SpanValues> coefficients = a.coefficients();
-        List<BeamProblem> held = new ArrayList<>();
+        List<SpanProblem> held = new ArrayList<>();
         double bound = 0;
-        for (BeamProblem p : problems) {
-            BeamProblem q = heldAt(p, shape);
+        for (SpanProblem p : problems) {
+            SpanProblem q = heldAt(p, shape);
             held.add(q);
             bound += designer.leastCost(q);
         }
@@ -197,10 +197,10 @@ public final class LineSpans {
             List<Part> parts = new ArrayList<>();
             double total = 0;
             double rest = current.bound();
-            for (BeamProblem p : current.problems()) {
+            for (SpanProblem p : current.problems()) {
                 rest -= designer.leastCost(p);
                 // only a design that leaves room for the rest's bounds under the total to beat can matter
-                BeamDesigner.Outcome o = Double.isInfinite(beat) ? designer.design(p, alternatives)
+                SpanDesigner.Outcome o = Double.isInfinite(beat) ? designer.design(p, alternatives)
                         : designer.designUnder(p, beat - total - rest);
                 if (o == null || !o.feasible()) {
                     return null;
@@ -243,7 +243,7 @@ public final class LineSpans {
             seen.add(shapes);
             round++;
             Analysed a = analyse(in, shapes, ec, red);
-            List<BeamProblem> problems = a.problems();
+            List<SpanProblem> problems = a.problems();
             if (in.coefficients()) {
                 coefficients = a.coefficients();
             } else {
@@ -251,12 +251,12 @@ public final class LineSpans {
             }
             List<Part> next = new ArrayList<>();
             List<SectionShape> chosen = new ArrayList<>(shapes);
-            for (BeamProblem p : problems) {
+            for (SpanProblem p : problems) {
                 int seg = segmentOf(p, n);
                 if (held != null) {
                     p = heldAt(p, held.get(seg));
                 }
-                BeamDesigner.Outcome o = designer.design(p, alternatives, previous(parts, seg));
+                SpanDesigner.Outcome o = designer.design(p, alternatives, previous(parts, seg));
                 next.add(new Part(seg, partName(seg, n), p, o));
                 if (o.feasible()) {
                     var l = o.best().layout();
@@ -289,7 +289,7 @@ public final class LineSpans {
     }
 
     /** The segment's design in the previous round: a layout that may pass again, to bound the next search. */
-    private static BeamLayout previous(List<Part> parts, int seg) {
+    private static SpanLayout previous(List<Part> parts, int seg) {
         for (Part pt : parts) {
             if (pt.segment() == seg && pt.outcome().feasible()) {
                 return pt.outcome().best().layout();
@@ -299,7 +299,7 @@ public final class LineSpans {
     }
 
     /** The part restricted to the one section it is held at. */
-    private static BeamProblem heldAt(BeamProblem p, SectionShape shape) {
+    private static SpanProblem heldAt(SpanProblem p, SectionShape shape) {
         return p.withFixedWidth(shape.width()).withSpace(p.space().withDepths(List.of(shape.height())));
     }
 
@@ -357,8 +357,8 @@ public final class LineSpans {
                 continue;
             }
             var sections = p.outcome().best().report().sections();
-            var left = sections.get(BeamProblem.Place.LEFT);
-            var right = sections.get(BeamProblem.Place.RIGHT);
+            var left = sections.get(SpanProblem.Place.LEFT);
+            var right = sections.get(SpanProblem.Place.RIGHT);
             if (left != null) {
                 out.set(p.segment() - 1, least(out.get(p.segment() - 1), left.flexure().epsT()));
             }
@@ -397,7 +397,7 @@ public final class LineSpans {
         return seg == 0 ? "left overhang" : seg == n + 1 ? "right overhang" : "span " + seg;
     }
 
-    private static int segmentOf(BeamProblem p, int n) {
+    private static int segmentOf(SpanProblem p, int n) {
         String id = p.id();
         if (id.endsWith("/left overhang")) {
             return 0;
@@ -408,8 +408,8 @@ public final class LineSpans {
         return Integer.parseInt(id.substring(id.lastIndexOf("/span ") + 6));
     }
 
-    private List<BeamProblem> fromAnalysis(LineInput in, Line line, LineResult r) {
-        List<BeamProblem> out = new ArrayList<>();
+    private List<SpanProblem> fromAnalysis(LineInput in, Line line, LineResult r) {
+        List<SpanProblem> out = new ArrayList<>();
         int n = in.spans().size();
         for (LineResult.SpanValues s : r.spans()) {
             double big = Math.max(Math.abs(s.mSpanMax()), Math.max(Math.abs(s.mLeftFace()), Math.abs(s.mRightFace())));
@@ -433,8 +433,8 @@ public final class LineSpans {
         return out;
     }
 
-    private List<BeamProblem> fromCoefficients(LineInput in, Line line, List<Coefficients.SpanValues> c) {
-        List<BeamProblem> out = new ArrayList<>();
+    private List<SpanProblem> fromCoefficients(LineInput in, Line line, List<Coefficients.SpanValues> c) {
+        List<SpanProblem> out = new ArrayList<>();
         int n = in.spans().size();
         for (Coefficients.SpanValues s : c) {
             // Table 6.5.4 gives the shear at the face; taken there (the section at d would need 9.4.3.2)
@@ -444,19 +444,19 @@ public final class LineSpans {
         return out;
     }
 
-    private BeamProblem problem(LineInput in, Line line, int s, int n, double clear, Double ml, Double mm, Double mr,
+    private SpanProblem problem(LineInput in, Line line, int s, int n, double clear, Double ml, Double mm, Double mr,
             double vl, double vr) {
         // Table 9.3.1.1's end conditions: a span is continuous over an interior support
         int continuous = (s > 1 ? 1 : 0) + (s < n ? 1 : 0);
         EndCondition ends = continuous == 0 ? EndCondition.SIMPLE : continuous == 1 ? EndCondition.ONE_END_CONTINUOUS
                 : EndCondition.BOTH_ENDS_CONTINUOUS;
-        return new BeamProblem(in.id() + "/span " + s, settings.materials(), settings.detailing(), settings.code(), space,
+        return new SpanProblem(in.id() + "/span " + s, settings.materials(), settings.detailing(), settings.code(), space,
                 clear, ends, ml, mm, mr, vl, vr, service(in, line, s), SpanChecks.Limits.DEFAULT, in.maxDepth(), null,
                 flange(in, clear), false, maxBarSizes, barsPerTwoLegs);
     }
 
-    private BeamProblem cantilever(LineInput in, Line line, int seg, int n, double clear, double m, double v) {
-        return new BeamProblem(in.id() + "/" + partName(seg, n), settings.materials(), settings.detailing(),
+    private SpanProblem cantilever(LineInput in, Line line, int seg, int n, double clear, double m, double v) {
+        return new SpanProblem(in.id() + "/" + partName(seg, n), settings.materials(), settings.detailing(),
                 settings.code(), space, clear, EndCondition.CANTILEVER, m, null, null, v, null, service(in, line, seg),
                 SpanChecks.Limits.DEFAULT, in.maxDepth(), null, null, false, maxBarSizes, barsPerTwoLegs);
     }

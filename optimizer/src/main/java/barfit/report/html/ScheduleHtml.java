@@ -4,10 +4,10 @@ import barfit.catalogs.BarSize;
 import barfit.design.CostRates;
 import barfit.design.Proof;
 import barfit.design.SearchSpace;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.Extension;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.Extension;
 import barfit.input.Rationalise;
 import barfit.input.Settings;
 import barfit.report.BeamText;
@@ -245,12 +245,12 @@ public final class ScheduleHtml {
                     .append(Svg.esc(b.beam().group() == null ? "—" : b.beam().group())).append("</td><td class=\"num\">")
                     .append(u.number(row.problem().span(), Dim.SPAN)).append("</td>");
             if (!row.feasible()) {
-                BeamDesigner.Diagnosis d = b.outcome().diagnosis();
+                SpanDesigner.Diagnosis d = b.outcome().diagnosis();
                 out.append("<td colspan=\"").append(own ? 9 : 8).append("\">").append(Svg.esc(headline(d)))
                         .append(" — ").append(Svg.esc(diagnosis(d, u))).append("</td></tr>\n");
                 continue;
             }
-            BeamLayout l = row.layout();
+            SpanLayout l = row.layout();
             out.append("<td class=\"num\">").append(u.compact(l.width(), Dim.LENGTH)).append(" × ")
                     .append(u.compact(l.height(), Dim.LENGTH)).append(l.flange() != null ? (l.flange().oneSided() ? " L" : " T") : "")
                     .append("</td>");
@@ -295,12 +295,12 @@ public final class ScheduleHtml {
     }
 
     /** What failed: the beam on its own, or its group's need to share one section size. */
-    private static String headline(BeamDesigner.Diagnosis d) {
+    private static String headline(SpanDesigner.Diagnosis d) {
         return d.limit().equals("group") ? "No section size fits every beam of its group"
                 : "No layout in the search space passes";
     }
 
-    private static String diagnosis(BeamDesigner.Diagnosis d, UnitSystem u) {
+    private static String diagnosis(SpanDesigner.Diagnosis d, UnitSystem u) {
         List<String> fixes = DiagnosisWords.fixes(d, u);
         return "binding limit: " + d.limit() + " (" + DiagnosisWords.summary(d, u) + ")" + (fixes.isEmpty()
                 ? "; no single relaxed limit (depth, width) gives a passing layout"
@@ -401,8 +401,8 @@ public final class ScheduleHtml {
         ScheduleResult.Beam b = row.entry();
         UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
-        BeamDesigner.Outcome o = b.outcome();
-        BeamProblem p = o.problem();
+        SpanDesigner.Outcome o = b.outcome();
+        SpanProblem p = o.problem();
         out.append("<section class=\"beam\" id=\"").append(Svg.esc(id)).append("\">\n<h3>Beam ").append(Svg.esc(b.beam().id()))
                 .append(" <span class=\"status ").append(o.feasible() ? "ok" : "none").append("\">")
                 .append(Svg.esc(o.status().toUpperCase(Locale.ROOT))).append("</span></h3>\n");
@@ -439,7 +439,7 @@ public final class ScheduleHtml {
                 : "not anchored: not counted there");
         out.append("</table>\n");
         if (!o.feasible()) {
-            BeamDesigner.Diagnosis d = o.diagnosis();
+            SpanDesigner.Diagnosis d = o.diagnosis();
             out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>").append(Svg.esc(headline(d)))
                     .append(".</strong></p>\n")
                     .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(DiagnosisWords.summary(d, u)))
@@ -450,8 +450,8 @@ public final class ScheduleHtml {
                     .append("</section>\n");
             return;
         }
-        BeamDesigner.Design d = o.best();
-        BeamLayout l = d.layout();
+        SpanDesigner.Design d = o.best();
+        SpanLayout l = d.layout();
         out.append("<table class=\"kv\">\n<caption>Design</caption>\n");
         kv(out, "section", Words.shape(l.shape(), u));
         kv(out, "bottom", ScheduleRows.bars(l.bottomCounts(), l.bottom()) + ", full span");
@@ -463,27 +463,27 @@ public final class ScheduleHtml {
             String rule = " (" + Words.extension(Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()),
                     l.top()).governs()) + ")";
             if (p.leftSupport()) {
-                boolean extra = BeamLayout.sum(l.topLeft()) > l.topContinuous();
+                boolean extra = SpanLayout.sum(l.topLeft()) > l.topContinuous();
                 kv(out, "top at left support", topAtSupport(row.left(), u) + (extra ? rule : ""));
             }
             if (p.rightSupport()) {
-                boolean extra = BeamLayout.sum(l.topRight()) > l.topContinuous();
+                boolean extra = SpanLayout.sum(l.topRight()) > l.topContinuous();
                 kv(out, "top at right support", topAtSupport(row.right(), u) + (extra ? rule : ""));
             }
         }
         if (l.skin() != null) {
             kv(out, "skin bars", l.skin().bar().label() + " @ " + len(l.skin().spacing(), u) + " each side face (9.7.2.3)");
         }
-        List<BeamProblem.Zone> zones = p.zones();
+        List<SpanProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
-            BeamProblem.Zone z = zones.get(i);
+            SpanProblem.Zone z = zones.get(i);
             var st = l.zoneStirrups().get(i);
             kv(out, "stirrups, " + z.name() + " zone", span(z.from(), u) + " to " + span(z.to(), u) + ": "
-                    + Words.stirrups(st, u) + ", " + BeamText.sets(BeamLayout.stirrupSets(z.length(), st.spacing()))
+                    + Words.stirrups(st, u) + ", " + BeamText.sets(SpanLayout.stirrupSets(z.length(), st.spacing()))
                     + (d.report().zoneShears().get(i) == null ? " (minimum)"
                             : " (Vu = " + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE) + ")"));
         }
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             FlexureResult f = e.getValue().flexure();
             double mu = Math.abs(e.getValue().demand().mu());
             kv(out, place(p, e.getKey()), "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " for Mu = "
@@ -501,7 +501,7 @@ public final class ScheduleHtml {
 
         out.append("<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
                 .append("<th>bar</th><th>length (").append(u.unit(Dim.SPAN)).append(")</th></tr></thead>\n<tbody>\n");
-        for (BeamLayout.BarMark m : d.bars()) {
+        for (SpanLayout.BarMark m : d.bars()) {
             out.append("<tr><td>").append(Svg.esc(m.mark())).append("</td><td>").append(Svg.esc(Words.role(m)))
                     .append("</td><td class=\"num\">").append(m.count()).append("</td><td>").append(Svg.esc(m.bar().label()))
                     .append("</td><td class=\"num\">").append(u.number(m.length(), Dim.SPAN)).append("</td></tr>\n");
@@ -510,8 +510,8 @@ public final class ScheduleHtml {
 
         out.append("<h4>Sections</h4>\n");
         double scale = SectionDrawing.scaleFor(l.shape());
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
-            BeamProblem.Place where = e.getKey();
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            SpanProblem.Place where = e.getKey();
             CheckReport rep = e.getValue();
             FlexureResult f = rep.flexure();
             double mu = rep.demand().mu();
@@ -529,7 +529,7 @@ public final class ScheduleHtml {
         out.append("<h4>Checks</h4>\n<div class=\"wide\">\n<table class=\"grid checks\">\n<thead><tr><th>where</th><th>id</th>")
                 .append("<th>check</th><th>clause</th><th>demand</th><th></th><th>limit</th><th>ratio</th><th>result</th>")
                 .append("<th>note</th></tr></thead>\n<tbody>\n");
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             for (CheckResult c : e.getValue().checks()) {
                 check(out, place(p, e.getKey()), c, u);
             }
@@ -543,7 +543,7 @@ public final class ScheduleHtml {
         out.append("</tbody>\n</table>\n</div>\n");
 
         out.append("<details class=\"trail\">\n<summary>Calculation trail</summary>\n");
-        for (Map.Entry<BeamProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+        for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             trail(out, place(p, e.getKey()), e.getValue().trail(), u);
         }
         trail(out, "stirrup zones", d.report().zoneTrail(), u);
@@ -556,15 +556,15 @@ public final class ScheduleHtml {
      * away from the sections drawn, or one with its own legs (four legs at an end, two in the middle...),
      * drawn on the section the zone is designed with.
      */
-    private static void zoneDrawings(BeamProblem p, BeamLayout l, BeamDesigner.Design d, String id, double scale,
+    private static void zoneDrawings(SpanProblem p, SpanLayout l, SpanDesigner.Design d, String id, double scale,
             UnitSystem u, StringBuilder out) {
         Set<String> shown = new HashSet<>();
-        for (BeamProblem.Place where : d.report().sections().keySet()) {
+        for (SpanProblem.Place where : d.report().sections().keySet()) {
             shown.add(arrangement(where, SectionDrawing.stirrupsAt(p, l, where)));
         }
         // zones not shown yet, those with one arrangement on one section together (both ends of a span...)
         Map<String, List<Integer>> missing = new java.util.LinkedHashMap<>();
-        List<BeamProblem.Zone> zones = p.zones();
+        List<SpanProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
             String key = arrangement(zones.get(i).section(), l.zoneStirrups().get(i));
             if (d.report().sections().containsKey(zones.get(i).section()) && !shown.contains(key)) {
@@ -573,7 +573,7 @@ public final class ScheduleHtml {
         }
         for (List<Integer> group : missing.values()) {
             int first = group.get(0);
-            BeamProblem.Zone z = zones.get(first);
+            SpanProblem.Zone z = zones.get(first);
             List<String> names = new ArrayList<>();
             List<String> where = new ArrayList<>();
             for (int i : group) {
@@ -583,7 +583,7 @@ public final class ScheduleHtml {
             String title = "Stirrups, " + String.join(" and ", names) + (names.size() == 1 ? " zone" : " zones")
                     + " (" + String.join(", ", where) + ")";
             String subtitle = Words.stirrups(l.zoneStirrups().get(first), u) + "; bars as at "
-                    + (z.section() == BeamProblem.Place.MID ? "mid-span" : "the " + place(p, z.section())
+                    + (z.section() == SpanProblem.Place.MID ? "mid-span" : "the " + place(p, z.section())
                     .toLowerCase(Locale.ROOT));
             SectionDrawing.View view = SectionDrawing.ofZone(p, l, first,
                     d.report().sections().get(z.section()).flexure().d(), title, subtitle);
@@ -594,7 +594,7 @@ public final class ScheduleHtml {
         }
     }
 
-    private static String arrangement(BeamProblem.Place where, barfit.section.Stirrups st) {
+    private static String arrangement(SpanProblem.Place where, barfit.section.Stirrups st) {
         return where.name() + "/" + st.bar().designation() + "/" + st.legs();
     }
 
@@ -617,8 +617,8 @@ public final class ScheduleHtml {
     // ---------------------------------------------------------------- words
 
     /** Where a section is; a cantilever's only section is its fixed end. */
-    static String place(BeamProblem problem, BeamProblem.Place p) {
-        if (problem.cantilever() && p == BeamProblem.Place.LEFT) {
+    static String place(SpanProblem problem, SpanProblem.Place p) {
+        if (problem.cantilever() && p == SpanProblem.Place.LEFT) {
             return "Fixed end";
         }
         return switch (p) {
@@ -628,7 +628,7 @@ public final class ScheduleHtml {
         };
     }
 
-    private static String moments(BeamProblem p, UnitSystem u) {
+    private static String moments(SpanProblem p, UnitSystem u) {
         List<String> parts = new ArrayList<>();
         if (p.mLeft() != null) {
             parts.add("left " + u.withUnit(p.mLeft(), Dim.MOMENT));
@@ -642,7 +642,7 @@ public final class ScheduleHtml {
         return String.join(", ", parts) + " (+ sagging, − hogging)";
     }
 
-    private static String shears(BeamProblem p, UnitSystem u) {
+    private static String shears(SpanProblem p, UnitSystem u) {
         if (p.vLeft() == null && p.vRight() == null) {
             return "not given: minimum stirrups";
         }
@@ -656,7 +656,7 @@ public final class ScheduleHtml {
         return String.join(", ", parts);
     }
 
-    private static String deflection(SpanChecks.Result r, BeamProblem p, UnitSystem u) {
+    private static String deflection(SpanChecks.Result r, SpanProblem p, UnitSystem u) {
         if (r.liveDeflection() == null) {
             return "not computed: h ≥ h,min = " + len(r.hMin(), u) + " of Table 9.3.1.1";
         }
@@ -677,7 +677,7 @@ public final class ScheduleHtml {
         return String.join(", ", parts);
     }
 
-    private static String proofWords(Proof<BeamDesigner.Search> p) {
+    private static String proofWords(Proof<SpanDesigner.Search> p) {
         if (p.status() == Proof.Status.UNPROVEN) {
             return BeamText.proof(p);
         }

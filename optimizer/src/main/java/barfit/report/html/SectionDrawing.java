@@ -1,9 +1,9 @@
 package barfit.report.html;
 
 import barfit.catalogs.BarSize;
-import barfit.design.Layout;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
+import barfit.design.section.SectionLayout;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
 import barfit.section.BarLayer;
 import barfit.section.BeamSection;
 import barfit.section.Bending;
@@ -71,24 +71,24 @@ public final class SectionDrawing {
      * the full-span bottom bars at a hogging support when they are not anchored (present, not counted),
      * and the stirrups of the zone at that section.
      */
-    public static View of(BeamProblem p, BeamLayout l, BeamProblem.Place place, Double d, String title,
+    public static View of(SpanProblem p, SpanLayout l, SpanProblem.Place place, Double d, String title,
             String subtitle) {
         return of(p, l, place, stirrupsAt(p, l, place), d, title, subtitle);
     }
 
     /** The view of a stirrup zone: the section the zone is designed with, and the zone's own stirrups. */
-    public static View ofZone(BeamProblem p, BeamLayout l, int zone, Double d, String title, String subtitle) {
+    public static View ofZone(SpanProblem p, SpanLayout l, int zone, Double d, String title, String subtitle) {
         return of(p, l, p.zones().get(zone).section(), l.zoneStirrups().get(zone), d, title, subtitle);
     }
 
-    private static View of(BeamProblem p, BeamLayout l, BeamProblem.Place place, Stirrups st, Double d, String title,
+    private static View of(SpanProblem p, SpanLayout l, SpanProblem.Place place, Stirrups st, Double d, String title,
             String subtitle) {
         BeamSection s = l.section(p, place, st);
         List<DrawnLayer> layers = new ArrayList<>();
         for (BarLayer bl : s.layers()) {
             layers.add(new DrawnLayer(bl, true));
         }
-        Bending bending = BeamLayout.bending(p, place);
+        Bending bending = SpanLayout.bending(p, place);
         if (bending == Bending.HOGGING && !p.bottomAnchored()) {
             List<BeamSection.BarGroup> groups = new ArrayList<>();
             for (int c : l.bottomCounts()) {
@@ -102,8 +102,8 @@ public final class SectionDrawing {
     }
 
     /** The stirrups of the zone that contains the section: left end, mid-span or right end. */
-    static Stirrups stirrupsAt(BeamProblem p, BeamLayout l, BeamProblem.Place place) {
-        List<BeamProblem.Zone> zones = p.zones();
+    static Stirrups stirrupsAt(SpanProblem p, SpanLayout l, SpanProblem.Place place) {
+        List<SpanProblem.Zone> zones = p.zones();
         double x = switch (place) {
             case LEFT -> 0;
             case MID -> p.span() / 2;
@@ -807,7 +807,7 @@ public final class SectionDrawing {
             return out;
         }
         double h = v.shape().height();
-        int n = Layout.skinBarsPerFace(h, skin.spacing());
+        int n = SectionLayout.skinBarsPerFace(h, skin.spacing());
         Face tension = v.bending().tensionFace();
         double y0 = tension == Face.BOTTOM ? h - v.detailing().firstLayerCentroid(skin.bar().diameter())
                 : v.detailing().firstLayerCentroid(skin.bar().diameter());

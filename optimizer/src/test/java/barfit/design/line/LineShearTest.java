@@ -9,8 +9,8 @@ import barfit.analysis.LineResult;
 import barfit.analysis.Load;
 import barfit.analysis.Support;
 import barfit.analysis.SupportKind;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.ShearDiagram;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.ShearDiagram;
 import barfit.section.SpanChecks;
 import java.util.List;
 import java.util.Random;
@@ -76,13 +76,13 @@ class LineShearTest {
     void zonesTakeTheEnvelopeAndTheBoundNeverExceedsIt() {
         LineResult r = simpleSpan();
         ShearDiagram v = LineSpans.spanShear(r.line(), r, r.spans().get(0));
-        BeamProblem p = new BeamProblem("S", null, null, null, null, L, barfit.section.EndCondition.SIMPLE, null,
+        SpanProblem p = new SpanProblem("S", null, null, null, null, L, barfit.section.EndCondition.SIMPLE, null,
                 1e8, null, v.at(0, 500), v.at(L, 500), null, null, null, null, null, false, 2, 0)
                 .withAnalysis(null, v);
-        List<BeamProblem.Zone> zones = p.zones();
+        List<SpanProblem.Zone> zones = p.zones();
         assertEquals(3, zones.size());
         Random rnd = new Random(7);
-        for (BeamProblem.Zone z : zones) {
+        for (SpanProblem.Zone z : zones) {
             for (int k = 0; k < 200; k++) {
                 double d = 100 + 900 * rnd.nextDouble();
                 double at = z.vu(d);

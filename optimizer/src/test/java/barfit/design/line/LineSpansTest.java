@@ -9,10 +9,10 @@ import barfit.analysis.LineResult;
 import barfit.catalogs.yaml.YFields;
 import barfit.design.CostModel;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.BeamVerifier;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.SpanVerifier;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.input.LineInput;
@@ -65,7 +65,7 @@ class LineSpansTest {
         YFields doc = DesignInputReader.document(f);
         LineInput line = LinesReader.read(doc, in.settings()).get(0);
         CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
-        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1));
+        SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
         LineSpans.Result r = new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(),
                 in.barsPerTwoLegs()).design(line, 0);
         assertTrue(r.settled(), "settled in " + r.rounds() + " rounds");
@@ -101,7 +101,7 @@ class LineSpansTest {
                 LineResult.OverhangValues o = a.overhangs().get(0);
                 assertEquals(o.mFace(), prob.mLeft(), 1e-6 * Math.abs(o.mFace()), p.name());
             }
-            assertTrue(BeamVerifier.verify(prob, p.outcome().best().layout(), false).ok(), p.name());
+            assertTrue(SpanVerifier.verify(prob, p.outcome().best().layout(), false).ok(), p.name());
             if (p.segment() >= 1 && p.segment() <= n) {
                 zonesCarryTheFreshEnvelope(fresh, a, p);
             }
@@ -121,11 +121,11 @@ class LineSpansTest {
         var layout = p.outcome().best().layout();
         LineResult.SpanValues s = a.spans().get(p.segment() - 1);
         double faceLeft = fresh.supports().get(p.segment() - 1).width() / 2;
-        List<BeamProblem.Zone> zones = prob.zones();
+        List<SpanProblem.Zone> zones = prob.zones();
         for (int z = 0; z < zones.size(); z++) {
-            BeamProblem.Zone zone = zones.get(z);
+            SpanProblem.Zone zone = zones.get(z);
             var section = layout.section(prob, zone.section(), null);
-            double d = barfit.section.SectionChecks.shearDepth(section, BeamLayout.bending(prob, zone.section()));
+            double d = barfit.section.SectionChecks.shearDepth(section, SpanLayout.bending(prob, zone.section()));
             double designed = zone.vu(d);
             for (LineResult.StationValues st : a.stations()) {
                 if (st.segment() != p.segment()) {
@@ -186,10 +186,10 @@ class LineSpansTest {
             DesignInput in = DesignInputReader.read(f, false);
             LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
             CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
-            BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1));
+            SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
             LineSpans.Result r = new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(),
                     in.barsPerTwoLegs()).design(line, 0);
-            barfit.design.beam.BeamExhaustive oracle = new barfit.design.beam.BeamExhaustive(cost);
+            barfit.design.span.SpanExhaustive oracle = new barfit.design.span.SpanExhaustive(cost);
             for (LineSpans.Part p : r.parts()) {
                 var ref = oracle.solve(p.problem());
                 String where = "line " + i + " " + p.name();
@@ -267,7 +267,7 @@ class LineSpansTest {
         DesignInput in = DesignInputReader.read(f, false);
         LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
         CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
-        BeamDesigner designer = new BeamDesigner(cost, new SolverOptions(30, 1, 1));
+        SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
         return new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs())
                 .design(line, 0);
     }

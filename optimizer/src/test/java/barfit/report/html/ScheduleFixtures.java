@@ -3,8 +3,8 @@ package barfit.report.html;
 import barfit.design.CostModel;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
@@ -53,7 +53,7 @@ final class ScheduleFixtures {
         }
         ScheduleInput input = new ScheduleInput(List.of(file.getFileName().toString()), in.settings(), in.space(),
                 in.rates(), in.currency(), in.costs(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs(), beams, null);
-        BeamDesigner designer = new BeamDesigner(new CostModel(in.rates(), in.settings().detailing().cover(),
+        SpanDesigner designer = new SpanDesigner(new CostModel(in.rates(), in.settings().detailing().cover(),
                 in.settings().units().code()),
                 new SolverOptions(60, 1, 1));
         List<ScheduleResult.Beam> out = new ArrayList<>();
@@ -61,11 +61,11 @@ final class ScheduleFixtures {
         TreeSet<String> bars = new TreeSet<>();
         double total = 0;
         for (ScheduleBeam b : beams) {
-            BeamDesigner.Outcome o = designer.design(b.problem(), 0);
+            SpanDesigner.Outcome o = designer.design(b.problem(), 0);
             double cost = o.feasible() ? o.best().cost().total() : Double.NaN;
             out.add(new ScheduleResult.Beam(b, o, cost));
             if (o.feasible()) {
-                BeamLayout l = o.best().layout();
+                SpanLayout l = o.best().layout();
                 total += cost;
                 sizes.computeIfAbsent(l.width() + "x" + l.height(), k -> new ArrayList<>()).add(b.id());
                 bars.add(l.bottom().label());

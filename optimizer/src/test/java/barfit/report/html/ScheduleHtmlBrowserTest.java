@@ -5,8 +5,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
 import barfit.schedule.ScheduleResult;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -95,14 +95,14 @@ class ScheduleHtmlBrowserTest {
             ScheduleResult.Beam b = r.beams().get(i);
             JsonNode rendered = beams.get(i);
             assertEquals("beam-" + b.beam().id(), rendered.get("id").asText());
-            BeamProblem p = b.outcome().problem();
-            BeamLayout l = b.outcome().best().layout();
-            List<BeamProblem.Place> places = new ArrayList<>(b.outcome().best().report().sections().keySet());
+            SpanProblem p = b.outcome().problem();
+            SpanLayout l = b.outcome().best().layout();
+            List<SpanProblem.Place> places = new ArrayList<>(b.outcome().best().report().sections().keySet());
             assertEquals(places.size(), rendered.get("drawings").size(), b.beam().id() + ": one drawing per section");
             for (int k = 0; k < places.size(); k++) {
                 JsonNode d = rendered.get("drawings").get(k);
                 assertEquals(places.get(k).name(), d.get("place").asText());
-                assertEquals(BeamLayout.sum(l.topAt(p, places.get(k))) + l.bottomCount(), d.get("bars").asInt(),
+                assertEquals(SpanLayout.sum(l.topAt(p, places.get(k))) + l.bottomCount(), d.get("bars").asInt(),
                         b.beam().id() + " " + places.get(k) + ": every bar rendered");
                 assertEquals(1, d.get("diagram").asInt());
                 sections++;

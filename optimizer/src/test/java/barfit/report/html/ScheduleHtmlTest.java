@@ -6,11 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import barfit.catalogs.BarSize;
-import barfit.design.beam.BeamDesigner;
-import barfit.design.beam.BeamLayout;
-import barfit.design.beam.BeamProblem;
-import barfit.design.beam.BeamReport;
-import barfit.design.beam.BeamVerifier;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
+import barfit.design.span.SpanReport;
+import barfit.design.span.SpanVerifier;
 import barfit.report.Caution;
 import barfit.schedule.ScheduleBeam;
 import barfit.schedule.ScheduleResult;
@@ -60,17 +60,17 @@ class ScheduleHtmlTest {
             String id = "beam-" + b.beam().id();
             String block = element(html, "<section class=\"beam\" id=\"" + id + "\">", "</section>");
             assertTrue(b.feasible(), b.beam().id() + " has a passing design in the example");
-            BeamProblem p = b.outcome().problem();
-            BeamLayout l = b.outcome().best().layout();
+            SpanProblem p = b.outcome().problem();
+            SpanLayout l = b.outcome().best().layout();
             Set<String> scales = new HashSet<>();
-            for (BeamProblem.Place place : b.outcome().best().report().sections().keySet()) {
+            for (SpanProblem.Place place : b.outcome().best().report().sections().keySet()) {
                 String fig = element(block, "<figure class=\"section-pair\" id=\"" + id + "-"
                         + place.name().toLowerCase(java.util.Locale.ROOT) + "\"", "</figure>");
                 Element svg = svg(fig, "section-drawing");
                 double scale = Double.parseDouble(svg.getAttribute("data-px-per-mm"));
                 scales.add(svg.getAttribute("data-px-per-mm"));
                 // every bar present at the section: the top bars there and the full-span bottom bars
-                int expected = BeamLayout.sum(l.topAt(p, place)) + l.bottomCount();
+                int expected = SpanLayout.sum(l.topAt(p, place)) + l.bottomCount();
                 List<Element> circles = circles(svg, "bar");
                 assertEquals(expected, circles.size(), id + " " + place + ": one circle per bar");
                 for (Element c : circles) {
@@ -169,9 +169,9 @@ class ScheduleHtmlTest {
     void cornerBarSitsInsideTheStirrupWhereTheChecksPutIt() throws Exception {
         ScheduleResult.Beam b = result.beams().get(0);
         assertEquals("C1-C2", b.beam().id());
-        BeamLayout l = b.outcome().best().layout();
-        BeamProblem p = b.outcome().problem();
-        assertEquals(Bending.HOGGING, BeamLayout.bending(p, BeamProblem.Place.RIGHT));
+        SpanLayout l = b.outcome().best().layout();
+        SpanProblem p = b.outcome().problem();
+        assertEquals(Bending.HOGGING, SpanLayout.bending(p, SpanProblem.Place.RIGHT));
         String fig = element(html, "<figure class=\"section-pair\" id=\"beam-C1-C2-right\"", "</figure>");
         Element svg = svg(fig, "section-drawing");
         double s = Double.parseDouble(svg.getAttribute("data-px-per-mm"));
@@ -241,20 +241,20 @@ class ScheduleHtmlTest {
     @Test
     void failuresAndInfeasibleBeamsAreShown() {
         ScheduleResult.Beam first = result.beams().get(0);
-        BeamDesigner.Outcome o = first.outcome();
-        BeamProblem harder = o.problem().scaled(1.5, 1.0);
-        BeamLayout l = o.best().layout();
-        BeamReport report = BeamVerifier.verify(harder, l, true);
+        SpanDesigner.Outcome o = first.outcome();
+        SpanProblem harder = o.problem().scaled(1.5, 1.0);
+        SpanLayout l = o.best().layout();
+        SpanReport report = SpanVerifier.verify(harder, l, true);
         assertFalse(report.ok(), "the layout cannot carry 1.5 times its moments");
-        BeamDesigner.Design d = new BeamDesigner.Design(l, o.best().cost(), report, o.best().bars());
-        BeamDesigner.Outcome failing = new BeamDesigner.Outcome(harder, "checked", d, List.of(), o.proof(), List.of(), null);
+        SpanDesigner.Design d = new SpanDesigner.Design(l, o.best().cost(), report, o.best().bars());
+        SpanDesigner.Outcome failing = new SpanDesigner.Outcome(harder, "checked", d, List.of(), o.proof(), List.of(), null);
 
         ScheduleResult.Beam second = result.beams().get(1);
-        BeamProblem capped = second.outcome().problem().withMaxDepth(300.0);
-        var designer = new BeamDesigner(new barfit.design.CostModel(result.input().rates(),
+        SpanProblem capped = second.outcome().problem().withMaxDepth(300.0);
+        var designer = new SpanDesigner(new barfit.design.CostModel(result.input().rates(),
                 result.input().settings().detailing().cover(), result.input().settings().units().code()),
                 new barfit.design.SolverOptions(60, 1, 1));
-        BeamDesigner.Outcome none = designer.design(capped, 0);
+        SpanDesigner.Outcome none = designer.design(capped, 0);
         assertFalse(none.feasible(), "nothing fits under a 300 mm cap when the search starts at 400 mm");
 
         List<ScheduleResult.Beam> beams = List.of(

@@ -1,0 +1,190 @@
+package barfit.design.section;
+
+import barfit.design.Binding;
+import barfit.design.CostModel;
+import barfit.design.Proof;
+import barfit.design.SolverOptions;
+import barfit.design.TensionSearch;
+import barfit.catalogs.BarSize;
+import barfit.section.BarSpacing;
+import barfit.section.BeamSection;
+import barfit.section.CheckReport;
+import barfit.section.CheckResult;
+import barfit.section.Demand;
+import barfit.section.SectionChecks;
+import barfit.section.Stirrups;
+import barfit.section.trail.Q;
+import barfit.section.trail.Trail;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Designs one section: generates candidates, lets CP-SAT choose the cheapest (and the next distinct
+ * ones), re-verifies every chosen layout with the full section model, says what binds, and diagnoses
+ * a beam that cannot pass.
+ */
+public final class SectionDesigner {
+    private final CostModel cost;
+    private final SolverOptions options;
+
+    public SectionDesigner(CostModel cost, SolverOptions options) {
+        this.cost = cost;
+        this.options = options;
+    }
+
+    public DesignOutcome design(SectionProblem p, int alternatives) {
+        SectionGenerator.Output gen = new SectionGenerator(p, cost).generate(1 + alternatives);
+        List<Candidate> cands = gen.candidates();
+        if (cands.isEmpty()) {
+            var proof = Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options);
+            return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), SectionDiagnoser.diagnose(p, cost));
+        }
+        SectionSelection sel = new SectionSelection();
+        List<Integer> all = new ArrayList<>();
+        for (int i = 0; i < cands.size(); i++) {
+            all.add(sel.add(cands.get(i).units(), "c" + i));
+        }
+        sel.exactlyOne(all);
+        SectionSelection.Result first = sel.solve(options);
+        if (!solved(first)) {
+            // the time limit ended the solve before it had a solution: give the generator's cheapest
+            // candidate, as found but not proven (no bound)
+            int cheapest = 0;
+            for (int i = 1; i < cands.size(); i++) {
+                if (cands.get(i).units() < cands.get(cheapest).units()) {
+                    cheapest = i;
+                }
+            }
+            Design best = verified(p, cands.get(cheapest));
+            var proof = Proof.unproven(cands.get(cheapest).units(), CostModel.UNITS, gen.stats(), options);
+            return new DesignOutcome(p, "feasible", best, List.of(), proof, binding(p, best.layout()), null);
+        }
+        int chosen = indexOf(first.chosen());
+        Design best = verified(p, cands.get(chosen));
+        List<Design> alts = new ArrayList<>();
+        sel.exclude(chosen);
+        for (int k = 0; k < alternatives && alts.size() < cands.size() - 1; k++) {
+            SectionSelection.Result r = sel.solve(options);
+            if (!solved(r)) {
+                break;
+            }
+            int i = indexOf(r.chosen());
+            alts.add(verified(p, cands.get(i)));
+            sel.exclude(i);
+        }
+        String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
+        var proof = Proof.solved(first.status(), first.objective(), first.bound(), CostModel.UNITS, first.stats(),
+                gen.stats(), options);
+        return new DesignOutcome(p, status, best, alts, proof, binding(p, best.layout()), null);
+    }
+
+    private static boolean solved(SectionSelection.Result r) {
+        return r.status() == Proof.Status.OPTIMAL || r.status() == Proof.Status.FEASIBLE;
+    }
+
+    private static int indexOf(boolean[] chosen) {
+        for (int i = 0; i < chosen.length; i++) {
+            if (chosen[i]) {
+                return i;
+            }
+        }
+        throw new IllegalStateException("the solver chose no candidate");
+    }
+
+    /** The full section model on a chosen layout; a failure here is a bug, never printed as a design. */
+    Design verified(SectionProblem p, Candidate c) {
+        CheckReport report = check(p, c.layout(), Trail.recording());
+        if (!report.ok()) {
+            StringBuilder sb = new StringBuilder();
+            for (CheckResult r : report.failures()) {
+                sb.append(sb.length() == 0 ? "" : ", ").append(r.id());
+            }
+            throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
+                    + " fail on the chosen layout); this is a bug in the search");
+        }
+        return new Design(c.layout(), c.cost(), c.cost().times(p.costLength()), report);
+    }
+
+    /** The section model's checks of a layout, with the office's legs rule when the search has one. */
+    static CheckReport check(SectionProblem p, SectionLayout l, Trail trail) {
+        BeamSection s = l.section(p.materials(), p.detailing(), p.code());
+        return SectionChecks.run(s, new Demand(p.mu(), p.vu()), p.span(), trail, true, p.space().practice());
+    }
+
+    private static List<String> failingIds(SectionProblem p, SectionLayout l) {
+        List<String> ids = new ArrayList<>();
+        for (CheckResult r : check(p, l, Trail.off()).failures()) {
+            ids.add(r.id());
+        }
+        return ids;
+    }
+
+    /** What fails when the design is made one step leaner in each direction. */
+    List<Binding> binding(SectionProblem p, SectionLayout l) {
+        List<Binding> out = new ArrayList<>();
+        // one tension bar fewer
+        int tensionBars = l.tensionBarCount();
+        int layers = l.tensionCounts().size();
+        BarSize tensionBar = l.tensionBar();
+        var detailing = l.detailing(p.detailing());
+        int mostBars = BarSpacing.maxBars(l.width(), detailing, tensionBar, p.materials(), p.code());
+        int[] fewer = TensionSearch.greedySplit(tensionBars - 1, layers, mostBars, 2);
+        if (fewer == null && layers > 1) {
+            fewer = TensionSearch.greedySplit(tensionBars - 1, layers - 1, mostBars, 2);
+        }
+        if (fewer != null) {
+            List<Integer> counts = new ArrayList<>();
+            for (int c : fewer) {
+                counts.add(c);
+            }
+            SectionLayout lean = new SectionLayout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, counts,
+                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.ONE_BAR_FEWER, tensionBars - 1, tensionBar);
+        }
+        // one depth step shallower, same bars
+        List<Double> depths = p.space().depths();
+        int depthIndex = depths.indexOf(l.height());
+        if (depthIndex > 0) {
+            double shallower = depths.get(depthIndex - 1);
+            SectionLayout lean = new SectionLayout(l.width(), shallower, l.flange(), l.bending(), tensionBar, l.tensionCounts(),
+                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.SHALLOWER, shallower, null);
+        }
+        if (p.maxDepth() != null && l.height() >= p.maxDepth() - 1e-9) {
+            out.add(new Binding("headroom", Binding.Leaner.AT_MAX_DEPTH, l.height()));
+        }
+        // next narrower width, same bars
+        List<Double> widths = p.widths();
+        int widthIndex = widths.indexOf(l.width());
+        if (widthIndex > 0) {
+            SectionLayout lean = new SectionLayout(widths.get(widthIndex - 1), l.height(), l.flange(), l.bending(), tensionBar,
+                    l.tensionCounts(), l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.NARROWER, widths.get(widthIndex - 1), null);
+        }
+        // stirrups one spacing step wider
+        List<Double> spacings = p.space().stirrupSpacings();
+        int spacingIndex = spacings.indexOf(l.stirrups().spacing());
+        if (spacingIndex >= 0 && spacingIndex < spacings.size() - 1) {
+            Stirrups wider = new Stirrups(l.stirrups().bar(), l.stirrups().legs(), spacings.get(spacingIndex + 1));
+            SectionLayout lean = new SectionLayout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, l.tensionCounts(),
+                    l.compressionBar(), l.compressionCount(), wider, l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.STIRRUPS_WIDER_APART, spacings.get(spacingIndex + 1), null);
+        }
+        // fewer stirrup legs, same spacing: says when the office's legs rule (or the code's) decided them
+        List<Integer> legs = p.space().stirrupLegs();
+        int legsIndex = legs.indexOf(l.stirrups().legs());
+        if (legsIndex > 0) {
+            Stirrups fewerLegs = new Stirrups(l.stirrups().bar(), legs.get(legsIndex - 1), l.stirrups().spacing());
+            SectionLayout lean = new SectionLayout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, l.tensionCounts(),
+                    l.compressionBar(), l.compressionCount(), fewerLegs, l.skin());
+            add(out, failingIds(p, lean), Binding.Leaner.FEWER_LEGS, legs.get(legsIndex - 1), null);
+        }
+        return out;
+    }
+
+    private static void add(List<Binding> out, List<String> ids, Binding.Leaner leaner, double value, BarSize bar) {
+        for (String id : ids) {
+            out.add(new Binding(id, leaner, value, bar));
+        }
+    }
+}

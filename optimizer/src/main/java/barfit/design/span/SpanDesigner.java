@@ -1,0 +1,274 @@
+package barfit.design.span;
+
+import barfit.design.Binding;
+import barfit.design.CostBreakdown;
+import barfit.design.CostModel;
+import barfit.design.Proof;
+import barfit.design.SolverOptions;
+import barfit.section.CheckResult;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Designs a whole span: candidates from {@link SpanGenerator}, the choice and its proof from
+ * {@link SpanSelection} (with deflection cuts as needed), every chosen span re-verified by
+ * {@link SpanVerifier}, what binds, the next distinct alternatives, or a diagnosis.
+ */
+public final class SpanDesigner {
+    /** A chosen span with its cost and full verification. */
+    public record Design(SpanLayout layout, CostBreakdown cost, SpanReport report, List<SpanLayout.BarMark> bars) {
+    }
+
+    /**
+     * A span's search, for its proof: the generator's counts, the CP-SAT solves and the deflection cuts
+     * added between them.
+     */
+    public record Search(SpanGenerator.Stats generator, int solves, int deflectionCuts) {
+    }
+
+    /**
+     * Why a span has no design, as data the reports put in words: {@code limit} names what fails at the cap
+     * (a check id such as {@code deflection_total}, or {@code strength}, {@code shear}, {@code headroom},
+     * {@code deflection} when it cannot be computed, {@code group}, {@code time limit}) and {@code clause} its
+     * clause; {@code cause} holds the facts behind it. {@code atCap} lists the failing checks of the cheapest
+     * layout that passes everything else within the cap (when deflection alone fails), and {@code deeper} and
+     * {@code wider} the changes that work, each found by designing the span and verified (null when none was
+     * found); {@code maxDepth} and {@code fixedWidth} are the span's own (null where it has none).
+     */
+    public record Diagnosis(String limit, String clause, Cause cause, List<CheckResult> atCap, Fix deeper, Fix wider,
+            Double maxDepth, Double fixedWidth) {
+        public Diagnosis {
+            atCap = List.copyOf(atCap);
+        }
+
+        /** A span stopped by something other than its own limits (the time limit, a schedule's group). */
+        public Diagnosis(String limit, Cause cause) {
+            this(limit, "", cause, List.of(), null, null, null, null);
+        }
+
+        /** What stops the span, as facts: one of the records here, or a later stage's own (a schedule's group). */
+        public interface Cause {
+        }
+
+        /** {@code max_depth} is below the shallowest depth searched. */
+        public record BelowShallowest() implements Cause {
+        }
+
+        /** Every allowed depth is below Table 9.3.1.1's {@code hMin} and no service loads are given to compute deflection. */
+        public record DeflectionUnchecked(double hMin) implements Cause {
+        }
+
+        /** Which deflection limits no layout within the cap meets: one, each alone but not both, or neither. */
+        public enum Deflections { LIVE, TOTAL, EACH_BUT_NOT_BOTH, NEITHER }
+
+        /**
+         * Deflection, computed below Table 9.3.1.1's {@code hMin}, fails at every depth up to {@code tallest},
+         * though the cheapest layout meeting every other check is {@code width} x {@code height}; the limits as
+         * span divisors.
+         */
+        public record DeflectionFails(Deflections which, double hMin, double tallest, double liveDivisor,
+                double totalDivisor, double width, double height) implements Cause {
+        }
+
+        /** The moments can be carried within the cap (deflection set aside where it is computed), not the shears. */
+        public record ShearFails(boolean deflectionSetAside) implements Cause {
+        }
+
+        /** No layout carries the moments, even with deflection set aside and the shears taken as zero where given. */
+        public record StrengthFails(boolean deflectionSetAside, boolean shearsTakenAsZero) implements Cause {
+        }
+
+        /** The time limit ({@code seconds} per solve) ended the search before a design passing every check was found. */
+        public record TimeLimit(double seconds) implements Cause {
+        }
+    }
+
+    /** A size at which the span designs, with the cheapest layout found there (it passes SpanVerifier). */
+    public record Fix(double width, double height, SpanLayout layout) {
+    }
+
+    public record Outcome(SpanProblem problem, String status, Design best, List<Design> alternatives,
+            Proof<Search> proof, List<Binding> binding, Diagnosis diagnosis) {
+        public boolean feasible() {
+            return best != null;
+        }
+    }
+
+    private final CostModel cost;
+    private final SolverOptions options;
+
+    public SpanDesigner(CostModel cost, SolverOptions options) {
+        this.cost = cost;
+        this.options = options;
+    }
+
+    /**
+     * The span's proven cheapest design and up to {@code alternatives} next-cheapest ones. Alternatives need
+     * the candidates the cost bound would discard: the generator keeps those within a margin of the
+     * cheapest, widened (10 %, 30 %, 100 %, everything) until enough are found.
+     */
+    public Outcome design(SpanProblem p, int alternatives) {
+        return design(p, alternatives, (SpanLayout) null);
+    }
+
+    /**
+     * As {@link #design(SpanProblem, int)}, told of a layout that may pass ({@code hint}, e.g. the same span's
+     * design for a slightly different demand): when it passes every check and its section is in the search
+     * space, its cost bounds the search from the start. The optimum is the same; the search is shorter.
+     */
+    public Outcome design(SpanProblem p, int alternatives, SpanLayout hint) {
+        double ceiling = ceiling(p, hint);
+        Outcome o = design(p, alternatives, 0, ceiling);
+        double[] margins = {0.1, 0.3, 1.0, Double.POSITIVE_INFINITY};
+        for (int i = 0; i < margins.length && o.feasible() && o.alternatives().size() < alternatives; i++) {
+            o = design(p, alternatives, margins[i], ceiling);
+        }
+        return o;
+    }
+
+    /**
+     * The part of a span's cost that its section alone fixes (concrete, formwork, depth premium over the
+     * span): a lower bound on any design of the span at that section.
+     */
+    public double frameCost(SpanProblem p, double b, double h) {
+        return cost.frame(b, h, p.flange()).times(p.span() / 1000.0).total();
+    }
+
+    /** A lower bound on any design of the span: the span generator's, before anything is searched. */
+    public double leastCost(SpanProblem p) {
+        return new SpanGenerator(p, cost).leastCost();
+    }
+
+    /** The hint's cost, a hair above so that rounding never cuts the hint itself; infinite when unusable. */
+    private double ceiling(SpanProblem p, SpanLayout hint) {
+        if (hint == null || !p.widths().contains(hint.width()) || !p.depths().contains(hint.height())
+                || !SpanVerifier.verify(p, hint, false).ok()) {
+            return Double.POSITIVE_INFINITY;
+        }
+        double c = hint.cost(p, cost).total();
+        return c * (1 + 1e-9) + 1e-9;
+    }
+
+    /**
+     * The span's optimum when it costs less than {@code ceiling}, else null (no diagnosis is made): for a
+     * search over several spans that only needs this one when it can still win.
+     */
+    public Outcome designUnder(SpanProblem p, double ceiling) {
+        return design(p, 0, 0, ceiling, false);
+    }
+
+    private Outcome design(SpanProblem p, int alternatives, double slack, double ceiling) {
+        return design(p, alternatives, slack, ceiling, true);
+    }
+
+    private Outcome design(SpanProblem p, int alternatives, double slack, double ceiling, boolean diagnoseNone) {
+        SpanGenerator gen = new SpanGenerator(p, cost);
+        SpanGenerator.Output out = gen.generate(slack, ceiling);
+        var stats = out.stats();
+        if (out.incumbentLayout() == null && !diagnoseNone) {
+            return null;
+        }
+        if (out.incumbentLayout() == null) {
+            var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(stats, 0, 0), options);
+            return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), new SpanDiagnoser(cost).diagnose(p));
+        }
+        SpanSelection sel = new SpanSelection(p, out.sets());
+        int solves = 0;
+        int cuts = 0;
+        SpanSelection.Result first = null;
+        Design best = null;
+        List<Design> alts = new ArrayList<>();
+        while (best == null || alts.size() < alternatives) {
+            solves++;
+            SpanSelection.Result r = sel.solve(options);
+            if (r.choice() == null) {
+                break;
+            }
+            SpanSelection.Choice c = r.choice();
+            SpanLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
+            if (c.set().frame().deflection() && !SpanVerifier.deflectionOk(p, layout)) {
+                sel.cutDeflection(c, gen.sections());
+                cuts++;
+                continue;
+            }
+            SpanReport report = SpanVerifier.verify(p, layout, true);
+            if (!report.ok()) {
+                if (report.okApartFromDeflection()) {
+                    sel.cutDeflection(c, gen.sections());
+                    cuts++;
+                    continue;
+                }
+                StringBuilder sb = new StringBuilder();
+                report.failures().forEach(f -> sb.append(sb.length() == 0 ? "" : ", ").append(f.id()));
+                throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
+                        + " fail on the chosen layout); this is a bug in the search");
+            }
+            Design d = new Design(layout, layout.cost(p, cost), report, layout.bars(p, cost));
+            if (best == null) {
+                best = d;
+                first = r;
+            } else {
+                alts.add(d);
+            }
+            sel.exclude(c);
+        }
+        if (best == null) {
+            // the time limit ended the first solve before it had a solution: give the generator's incumbent
+            // when it passes every check, as found but not proven (no bound)
+            SpanReport report = SpanVerifier.verify(p, out.incumbentLayout(), true);
+            Search search = new Search(stats, solves, cuts);
+            if (!report.ok()) {
+                var proof = Proof.none(Proof.Status.OUT_OF_TIME, search, options);
+                return new Outcome(p, "unknown", null, List.of(), proof, List.of(), new Diagnosis("time limit",
+                        new Diagnosis.TimeLimit(options.timeLimitSeconds())));
+            }
+            Design d = new Design(out.incumbentLayout(), out.incumbentLayout().cost(p, cost), report,
+                    out.incumbentLayout().bars(p, cost));
+            var proof = Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search,
+                    options);
+            return new Outcome(p, "feasible", d, List.of(), proof, binding(p, d), null);
+        }
+        var proof = Proof.solved(first.status(), first.objective(), first.bound(), CostModel.SPAN_UNITS, first.stats(),
+                new Search(stats, solves, cuts), options);
+        String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
+        return new Outcome(p, status, best, alts, proof, binding(p, best), null);
+    }
+
+    /** The checks working hardest in the chosen span, and the headroom cap when the height sits at it. */
+    private List<Binding> binding(SpanProblem p, Design d) {
+        List<Binding> out = new ArrayList<>();
+        for (var e : d.report().sections().entrySet()) {
+            String where = switch (e.getKey()) {
+                case LEFT -> "left support ";
+                case MID -> "mid-span ";
+                case RIGHT -> "right support ";
+            };
+            for (CheckResult c : e.getValue().checks()) {
+                if (tight(c)) {
+                    out.add(new Binding(where + c.id(), Binding.Leaner.NEAR_LIMIT, c.ratio()));
+                }
+            }
+        }
+        for (CheckResult c : d.report().zoneChecks()) {
+            if (tight(c)) {
+                out.add(new Binding(c.id(), Binding.Leaner.NEAR_LIMIT, c.ratio()));
+            }
+        }
+        for (CheckResult c : d.report().span().checks()) {
+            if (tight(c)) {
+                out.add(new Binding(c.id(), Binding.Leaner.NEAR_LIMIT, c.ratio()));
+            }
+        }
+        if (p.maxDepth() != null && d.layout().height() >= p.maxDepth() - 1e-9) {
+            out.add(new Binding("headroom", Binding.Leaner.AT_MAX_DEPTH, d.layout().height()));
+        }
+        return out;
+    }
+
+    private static boolean tight(CheckResult c) {
+        // a flange at its Table 6.3.2.1 width is not a limit the design works against
+        return c.pass() && Double.isFinite(c.ratio()) && c.ratio() >= 0.95 && !c.id().startsWith("cover")
+                && !c.id().startsWith("layer_gap") && !c.id().startsWith("stirrup_legs_bars")
+                && !c.id().equals("flange_width");
+    }
+}
