@@ -115,7 +115,7 @@ class CodeRulesHomeTest {
             // cost data and invented bench data
             new Allowed("barfit/input/SearchReader.java", null, "GRADE_FACTORS",
                     "invented concrete price factors by grade: cost data"),
-            new Allowed("barfit/bench/BeamBench.java", null, null, "invented spans for the timing bench: data"),
+            new Allowed("barfit/bench/SpanBench.java", null, null, "invented spans for the timing bench: data"),
             new Allowed("barfit/bench/SectionBench.java", null, null, "invented sections for the timing bench: data"),
             new Allowed("barfit/bench/LineBench.java", null, null, "an invented line for the timing bench: data"),
             new Allowed("barfit/bench/ScheduleGenerator.java", "0.9", "0.9 + 0.05 * r.nextInt(5)",

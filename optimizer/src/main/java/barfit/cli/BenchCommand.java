@@ -133,7 +133,7 @@ final class BenchCommand implements Callable<Integer> {
         if (beams > 0) {
             out.println();
             out.println("whole spans (two supports, mid-span, shear, service loads), default search space:");
-            var b = barfit.bench.BeamBench.run(beams, Math.max(0, beamsCompared), seed, out);
+            var b = barfit.bench.SpanBench.run(beams, Math.max(0, beamsCompared), seed, out);
             out.printf(Locale.ROOT, "spans: optimizer median %.2f ms (max %.2f ms) on the default space; on the reduced "
                     + "space median %.2f ms against exhaustive %.0f ms: speedup %.0fx; equal optimum: %s%n",
                     b.optimizerMsMedian(), b.optimizerMsMax(), b.reducedOptimizerMsMedian(), b.exhaustiveMsMedian(),

@@ -32,7 +32,7 @@ public final class DesignJson {
         root.put("cost_basis", "per beam when a span is given, otherwise " + Money.perLengthLabel(u));
         ArrayNode arr = root.putArray("beams");
         for (DesignItem o : outcomes) {
-            ObjectNode b = o.section() != null ? beam(o.section(), u, trail) : BeamJson.beam(o.whole(), u, trail);
+            ObjectNode b = o.section() != null ? beam(o.section(), u, trail) : SpanJson.beam(o.whole(), u, trail);
             if (o.line() != null) {
                 ObjectNode l = b.putObject("line");
                 l.put("id", o.line().line());

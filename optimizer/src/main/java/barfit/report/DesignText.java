@@ -85,7 +85,7 @@ public final class DesignText {
             if (o.section() != null) {
                 beam(o.section(), u, currency, trail, out);
             } else {
-                BeamText.render(o.whole(), u, currency, trail, out);
+                SpanText.render(o.whole(), u, currency, trail, out);
             }
             if (!o.feasible()) {
                 infeasible++;

@@ -96,7 +96,7 @@ public final class ScheduleJson {
         }
         ArrayNode beams = root.putArray("beams");
         for (ScheduleResult.Beam b : r.beams()) {
-            ObjectNode bo = BeamJson.beam(b.outcome(), u, false);
+            ObjectNode bo = SpanJson.beam(b.outcome(), u, false);
             if (b.beam().group() == null) {
                 bo.putNull("group");
             } else {

@@ -47,8 +47,8 @@ public final class ScheduleText {
                     ScheduleRows.topContinuousShort(row, u), ScheduleRows.topAt(row.left(), u),
                     ScheduleRows.topAt(row.right(), u), Money.amount(row.design().cost().total()));
             table.under("  stirrups " + ScheduleRows.stirrupsShort(row, u)
-                    + (BeamText.warnings(problem).isEmpty() ? "" : "  (minimum: no shears given)"));
-            if (!BeamText.warnings(problem).isEmpty()) {
+                    + (SpanText.warnings(problem).isEmpty() ? "" : "  (minimum: no shears given)"));
+            if (!SpanText.warnings(problem).isEmpty()) {
                 noShears.add(b.beam().id());
             }
         }

@@ -10,7 +10,7 @@ import barfit.design.SolverOptions;
 import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanProblem;
 import barfit.design.span.RandomSpans;
-import barfit.report.BeamJson;
+import barfit.report.SpanJson;
 import barfit.report.DesignJson;
 import barfit.report.DesignText;
 import barfit.report.Json;
@@ -50,7 +50,7 @@ class SearchGoldenTest {
         for (int i = 0; i < 60; i++) {
             SpanProblem p = RandomSpans.small(beams);
             SpanDesigner.Outcome o = spans.design(p, i % 6 == 0 ? 1 : 0);
-            String json = Json.write(BeamJson.beam(o, UnitSystem.SI, i % 7 == 0));
+            String json = Json.write(SpanJson.beam(o, UnitSystem.SI, i % 7 == 0));
             out.append("span ").append(i).append(' ').append(o.status()).append(' ')
                     .append(o.feasible() ? CostModel.units(o.best().cost().total()) : -1).append(' ')
                     .append(hash(json)).append('\n');

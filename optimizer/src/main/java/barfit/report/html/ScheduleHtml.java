@@ -10,7 +10,7 @@ import barfit.design.span.SpanProblem;
 import barfit.design.span.Extension;
 import barfit.input.Rationalise;
 import barfit.input.Settings;
-import barfit.report.BeamText;
+import barfit.report.SpanText;
 import barfit.report.Caution;
 import barfit.report.DiagnosisWords;
 import barfit.report.Money;
@@ -459,7 +459,7 @@ public final class ScheduleHtml {
             kv(out, "top", ScheduleRows.bars(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
                     + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
-            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + BeamText.topAtMid(d, u));
+            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + SpanText.topAtMid(d, u));
             String rule = " (" + Words.extension(Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()),
                     l.top()).governs()) + ")";
             if (p.leftSupport()) {
@@ -479,7 +479,7 @@ public final class ScheduleHtml {
             SpanProblem.Zone z = zones.get(i);
             var st = l.zoneStirrups().get(i);
             kv(out, "stirrups, " + z.name() + " zone", span(z.from(), u) + " to " + span(z.to(), u) + ": "
-                    + Words.stirrups(st, u) + ", " + BeamText.sets(SpanLayout.stirrupSets(z.length(), st.spacing()))
+                    + Words.stirrups(st, u) + ", " + SpanText.sets(SpanLayout.stirrupSets(z.length(), st.spacing()))
                     + (d.report().zoneShears().get(i) == null ? " (minimum)"
                             : " (Vu = " + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE) + ")"));
         }
@@ -495,7 +495,7 @@ public final class ScheduleHtml {
         kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
         kv(out, "proof", proofWords(o.proof()));
         out.append("</table>\n</div>\n");
-        for (String w : BeamText.warnings(p)) {
+        for (String w : SpanText.warnings(p)) {
             out.append("<p class=\"warn\">Warning: ").append(Svg.esc(w)).append(".</p>\n");
         }
 
@@ -679,7 +679,7 @@ public final class ScheduleHtml {
 
     private static String proofWords(Proof<SpanDesigner.Search> p) {
         if (p.status() == Proof.Status.UNPROVEN) {
-            return BeamText.proof(p);
+            return SpanText.proof(p);
         }
         var s = p.search();
         return "CP-SAT " + Words.status(p.status()) + ", objective " + String.format(Locale.ROOT, "%.4f", p.objective())

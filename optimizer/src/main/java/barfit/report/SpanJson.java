@@ -18,8 +18,8 @@ import java.util.Locale;
 import java.util.Map;
 
 /** The JSON of one whole span in {@code barfit design}. */
-public final class BeamJson {
-    private BeamJson() {
+public final class SpanJson {
+    private SpanJson() {
     }
 
     /** A size at which the span designs ({@code null} when none was found). */
@@ -57,7 +57,7 @@ public final class BeamJson {
             return b;
         }
         ArrayNode warnings = b.putArray("warnings");
-        BeamText.warnings(p).forEach(warnings::add);
+        SpanText.warnings(p).forEach(warnings::add);
         design(b, o.best(), p, u, trail);
         ArrayNode bind = b.putArray("binding");
         o.binding().forEach(x -> {

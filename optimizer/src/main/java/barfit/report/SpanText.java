@@ -16,12 +16,12 @@ import java.util.Locale;
 import java.util.Map;
 
 /** The terminal block of one whole span in {@code barfit design}. */
-public final class BeamText {
+public final class SpanText {
     /** The warning a span without shears gets: its stirrups are the minimum, its shear strength unchecked. */
     public static final String NO_SHEARS = "no shears given: minimum stirrups (Av,min at the widest spacing allowed) in "
             + "every zone; shear strength not checked (give shear: {left, right})";
 
-    private BeamText() {
+    private SpanText() {
     }
 
     /** Warnings about what a designed span leaves unchecked: none, or the missing shears. */

@@ -27,12 +27,12 @@ import java.util.Random;
  * Whole spans (supports, mid-span and shear): the optimizer on the default search space, and the
  * optimizer against exhaustive enumeration on a reduced space where enumeration finishes.
  */
-public final class BeamBench {
+public final class SpanBench {
     public record Figures(int instances, double optimizerMsMedian, double optimizerMsMax, int compared,
             double reducedOptimizerMsMedian, double exhaustiveMsMedian, double speedup, boolean equalOptimum) {
     }
 
-    private BeamBench() {
+    private SpanBench() {
     }
 
     static SearchSpace reducedSpace() {
