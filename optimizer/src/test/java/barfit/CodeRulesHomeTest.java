@@ -113,8 +113,8 @@ class CodeRulesHomeTest {
             new Allowed("barfit/cli/SweepCommand.java", "25", null,
                     "the sweep's step when the search has one depth (the range then holds one cap)"),
             // cost data and invented bench data
-            new Allowed("barfit/input/SearchReader.java", null, "GRADE_FACTORS",
-                    "invented concrete price factors by grade: cost data"),
+            new Allowed("barfit/input/SearchReader.java", null, "GRADE_MPA = {",
+                    "the grades (MPa) of the invented concrete price factors: cost data"),
             new Allowed("barfit/bench/SpanBench.java", null, null, "invented spans for the timing bench: data"),
             new Allowed("barfit/bench/SectionBench.java", null, null, "invented sections for the timing bench: data"),
             new Allowed("barfit/bench/LineBench.java", null, null, "an invented line for the timing bench: data"),

@@ -253,14 +253,14 @@ public final class SearchReader {
         }
     }
 
-    /** Invented relative prices of concrete by grade (MPa -> factor on 28 MPa), for trying the tool only. */
-    private static final double[][] GRADE_FACTORS = {{17, 0.90}, {21, 0.94}, {25, 0.97}, {28, 1.00}, {32, 1.04},
-        {35, 1.08}, {40, 1.15}, {45, 1.22}, {50, 1.30}, {55, 1.38}, {60, 1.46}, {70, 1.62}, {80, 1.80}};
+    /** Invented relative prices of concrete by grade (MPa -> percent of 28 MPa's), for trying the tool only. */
+    private static final double[] GRADE_MPA = {17, 21, 25, 28, 32, 35, 40, 45, 50, 55, 60, 70, 80};
+    private static final int[] GRADE_FACTORS = {90, 94, 97, 100, 104, 108, 115, 122, 130, 138, 146, 162, 180};
 
     private static java.util.NavigableMap<Double, Double> defaultByFc(double fc, double rate) {
         java.util.TreeMap<Double, Double> rel = new java.util.TreeMap<>();
-        for (double[] g : GRADE_FACTORS) {
-            rel.put(g[0], g[1]);
+        for (int i = 0; i < GRADE_MPA.length; i++) {
+            rel.put(GRADE_MPA[i], GRADE_FACTORS[i] / 100.0);
         }
         var lo = rel.floorEntry(fc);
         var hi = rel.ceilingEntry(fc);
