@@ -72,53 +72,90 @@ class CodeRulesHomeTest {
     /** 4/3 (9.6.1.3, 25.2.1). */
     private static final Pattern FOUR_THIRDS = Pattern.compile("(?<![\\w.])4(?:\\.0)?\\s*/\\s*3(?:\\.0)?(?![\\w.])");
     /** n db: bend diameters and hook extensions (Tables 25.3.1, 25.3.2), development lengths. */
-    private static final Pattern DIAMETERS = Pattern.compile(
-            "(?<![\\w.])(?:4|6|8|10|12)(?:\\.0)?\\s*\\*\\s*([A-Za-z_][\\w.]*(?:\\(\\))?)");
-    private static final Pattern NUMBER = Pattern.compile(
-            "(?<![\\w.])(\\d[\\d_]*(?:\\.\\d+)?(?:[eE][+-]?\\d+)?)[dDfFlL]?(?![\\w.])");
+    private static final Pattern DIAMETERS =
+            Pattern.compile("(?<![\\w.])(?:4|6|8|10|12)(?:\\.0)?\\s*\\*\\s*([A-Za-z_][\\w.]*(?:\\(\\))?)");
+
+    private static final Pattern NUMBER =
+            Pattern.compile("(?<![\\w.])(\\d[\\d_]*(?:\\.\\d+)?(?:[eE][+-]?\\d+)?)[dDfFlL]?(?![\\w.])");
 
     /**
      * A literal that only looks like a code constant: in {@code file} (relative to src/main/java), the value
      * {@code literal} on a line containing {@code snippet} (any line when null).
      */
-    private record Allowed(String file, String literal, String snippet, String why) {
-    }
+    private record Allowed(String file, String literal, String snippet, String why) {}
 
     private static final List<Allowed> ALLOWED = List.of(
             // drawing geometry and styling
-            new Allowed("barfit/report/html/SectionDrawing.java", "75", "Math.max(75, 0.25 * s.width())",
+            new Allowed(
+                    "barfit/report/html/SectionDrawing.java",
+                    "75",
+                    "Math.max(75, 0.25 * s.width())",
                     "the length of slab drawn beside the web, mm: a drawing choice"),
             new Allowed("barfit/report/html/SectionDrawing.java", "0.35", "dy * 0.35", "the break line's zigzag"),
             new Allowed("barfit/report/html/SectionDrawing.java", "0.65", "dy * 0.65", "the break line's zigzag"),
-            new Allowed("barfit/report/html/SectionDrawing.java", "0.75", "0.75 * Math.PI",
+            new Allowed(
+                    "barfit/report/html/SectionDrawing.java",
+                    "0.75",
+                    "0.75 * Math.PI",
                     "a 135-degree bend is 0.75 π radians: geometry"),
             new Allowed("barfit/report/html/StrainStressDiagram.java", "1.4", null, "stroke width, px"),
-            new Allowed("barfit/report/html/StrainStressDiagram.java", "0.9", null, "stroke widths and arrow length, px"),
+            new Allowed(
+                    "barfit/report/html/StrainStressDiagram.java", "0.9", null, "stroke widths and arrow length, px"),
             // input defaults and range checks of the input
-            new Allowed("barfit/input/SearchReader.java", "25", "range(400, 800, 25)",
+            new Allowed(
+                    "barfit/input/SearchReader.java",
+                    "25",
+                    "range(400, 800, 25)",
                     "the default depth grid (a search range, not a code limit)"),
-            new Allowed("barfit/input/SearchReader.java", "75", "range(75, 600, 25)",
+            new Allowed(
+                    "barfit/input/SearchReader.java",
+                    "75",
+                    "range(75, 600, 25)",
                     "the default stirrup-spacing grid (a search range; 9.7.6.2.2 is checked by the section model)"),
             new Allowed("barfit/input/SearchReader.java", "25", "range(75, 600, 25)", "the same grid's step"),
-            new Allowed("barfit/input/SettingsReader.java", "0.75", "0.75 * 25.4",
+            new Allowed(
+                    "barfit/input/SettingsReader.java",
+                    "0.75",
+                    "0.75 * 25.4",
                     "the default aggregate size, 3/4 in: an input default, no clause"),
-            new Allowed("barfit/input/SettingsReader.java", "280", "fyMin",
+            new Allowed(
+                    "barfit/input/SettingsReader.java",
+                    "280",
+                    "fyMin",
                     "the lowest bar grade accepted (Grade 280 / 40): a range check of the input, no clause"),
-            new Allowed("barfit/cli/BenchCommand.java", "100000", "make > 100_000",
+            new Allowed(
+                    "barfit/cli/BenchCommand.java",
+                    "100000",
+                    "make > 100_000",
                     "the most beams the bench writes: a limit of the tool"),
-            new Allowed("barfit/design/span/SpanDiagnoser.java", "25", "SI_DEPTH_STEP = 25.0",
+            new Allowed(
+                    "barfit/design/span/SpanDiagnoser.java",
+                    "25",
+                    "SI_DEPTH_STEP = 25.0",
                     "the depth step of a one-depth search (1 in in inch-pound input): a grid, not a code rule"),
-            new Allowed("barfit/design/section/SectionDiagnoser.java", "25", "SI_DEPTH_STEP = 25.0",
+            new Allowed(
+                    "barfit/design/section/SectionDiagnoser.java",
+                    "25",
+                    "SI_DEPTH_STEP = 25.0",
                     "the depth step of a one-depth search (1 in in inch-pound input): a grid, not a code rule"),
-            new Allowed("barfit/cli/SweepCommand.java", "25", null,
+            new Allowed(
+                    "barfit/cli/SweepCommand.java",
+                    "25",
+                    null,
                     "the sweep's step when the search has one depth (the range then holds one cap)"),
             // cost data and invented bench data
-            new Allowed("barfit/input/SearchReader.java", null, "GRADE_MPA = {",
+            new Allowed(
+                    "barfit/input/SearchReader.java",
+                    null,
+                    "GRADE_MPA = {",
                     "the grades (MPa) of the invented concrete price factors: cost data"),
             new Allowed("barfit/bench/SpanBench.java", null, null, "invented spans for the timing bench: data"),
             new Allowed("barfit/bench/SectionBench.java", null, null, "invented sections for the timing bench: data"),
             new Allowed("barfit/bench/LineBench.java", null, null, "an invented line for the timing bench: data"),
-            new Allowed("barfit/bench/ScheduleGenerator.java", "0.9", "0.9 + 0.05 * r.nextInt(5)",
+            new Allowed(
+                    "barfit/bench/ScheduleGenerator.java",
+                    "0.9",
+                    "0.9 + 0.05 * r.nextInt(5)",
                     "invented span lengths: data"));
 
     @Test
@@ -153,8 +190,9 @@ class CodeRulesHomeTest {
                 while (d.find()) {
                     String id = d.group(1).toLowerCase(Locale.ROOT);
                     if (id.endsWith("db") || id.endsWith("ds") || id.endsWith("diameter()")) {
-                        hits.add(new String[] {d.group().replaceAll("\\s+", " "),
-                            "a multiple of a bar diameter (Tables 25.3.1, 25.3.2)"});
+                        hits.add(new String[] {
+                            d.group().replaceAll("\\s+", " "), "a multiple of a bar diameter (Tables 25.3.1, 25.3.2)"
+                        });
                     }
                 }
                 for (String[] h : hits) {
@@ -172,8 +210,9 @@ class CodeRulesHomeTest {
                 found.add("allowance no longer used: " + ALLOWED.get(i));
             }
         }
-        assertTrue(found.isEmpty(), "code rules outside the section model (move them to barfit.section):\n"
-                + String.join("\n", found));
+        assertTrue(
+                found.isEmpty(),
+                "code rules outside the section model (move them to barfit.section):\n" + String.join("\n", found));
     }
 
     @Test
@@ -187,8 +226,12 @@ class CodeRulesHomeTest {
         while (m.find()) {
             values.add(key(Double.parseDouble(m.group(1))));
         }
-        assertTrue(values.contains("0.85") && values.contains("75") && !values.contains("0.003")
-                && !values.contains("0.75"), values.toString());
+        assertTrue(
+                values.contains("0.85")
+                        && values.contains("75")
+                        && !values.contains("0.003")
+                        && !values.contains("0.75"),
+                values.toString());
         Matcher t = FOUR_THIRDS.matcher(stripped);
         assertTrue(t.find() && !t.find(), "the 4/3 in code is found once, not the one in the comment");
         Matcher d = DIAMETERS.matcher(stripped);
@@ -198,7 +241,8 @@ class CodeRulesHomeTest {
     private static int allowance(String file, String literal, String line) {
         for (int i = 0; i < ALLOWED.size(); i++) {
             Allowed a = ALLOWED.get(i);
-            if (a.file().equals(file) && (a.literal() == null || a.literal().equals(literal))
+            if (a.file().equals(file)
+                    && (a.literal() == null || a.literal().equals(literal))
                     && (a.snippet() == null || line.contains(a.snippet()))) {
                 return i;
             }

@@ -35,49 +35,60 @@ class PackageDirectionTest {
             .importPackages("barfit");
 
     /** Packages outside the section model and the catalogs: the optimizer module. */
-    private static final List<String> OPTIMIZER = List.of("barfit.design", "barfit.input", "barfit.report", "barfit.cli",
-            "barfit.schedule", "barfit.study", "barfit.bench", "barfit.units");
+    private static final List<String> OPTIMIZER = List.of(
+            "barfit.design",
+            "barfit.input",
+            "barfit.report",
+            "barfit.cli",
+            "barfit.schedule",
+            "barfit.study",
+            "barfit.bench",
+            "barfit.units");
+
     private static final String SOLVER = "com.google.ortools";
 
     /**
      * A rule: no class in {@code from} (packages with their subpackages) uses a class in {@code forbidden}.
      * {@code frozen}: the top-level classes that broke it when it was written (may only shrink).
      */
-    record Rule(String says, List<String> from, List<String> forbidden, Set<String> frozen) {
-    }
+    record Rule(String says, List<String> from, List<String> forbidden, Set<String> frozen) {}
 
     static final List<Rule> RULES = List.of(
-            new Rule("the section model knows no solver, search, input, report or command line, and does no I/O",
+            new Rule(
+                    "the section model knows no solver, search, input, report or command line, and does no I/O",
                     List.of("barfit.section", "barfit.analysis"),
                     concat(OPTIMIZER, List.of(SOLVER, "barfit.catalogs.yaml", "java.io", "java.nio.file", "java.net")),
                     Set.of()),
-            new Rule("the catalogs hold data and its loader: no section model, search or solver",
+            new Rule(
+                    "the catalogs hold data and its loader: no section model, search or solver",
                     List.of("barfit.catalogs"),
                     concat(OPTIMIZER, List.of(SOLVER, "barfit.section", "barfit.analysis")),
                     Set.of()),
-            new Rule("a study designs; it does not write reports or read the command line",
+            new Rule(
+                    "a study designs; it does not write reports or read the command line",
                     List.of("barfit.study"),
                     List.of("barfit.report", "barfit.cli"),
                     Set.of()),
-            new Rule("the searches and the schedule do not write reports or read the command line",
+            new Rule(
+                    "the searches and the schedule do not write reports or read the command line",
                     List.of("barfit.design", "barfit.schedule"),
                     List.of("barfit.report", "barfit.cli"),
                     Set.of()),
-            new Rule("the single-section search knows no span or line: a span is built from sections, not the "
-                    + "other way round",
+            new Rule(
+                    "the single-section search knows no span or line: a span is built from sections, not the "
+                            + "other way round",
                     List.of("barfit.design.section"),
                     List.of("barfit.design.span", "barfit.design.line"),
                     Set.of()),
-            new Rule("the whole-span search knows no line: a line is built from spans",
+            new Rule(
+                    "the whole-span search knows no line: a line is built from spans",
                     List.of("barfit.design.span"),
                     List.of("barfit.design.line"),
                     Set.of()),
-            new Rule("the reports do not reach into the solver",
-                    List.of("barfit.report"),
-                    List.of(SOLVER),
-                    Set.of()),
-            new Rule("the searches, the schedule and the studies work in SI: units are converted by the input "
-                    + "readers and the reports",
+            new Rule("the reports do not reach into the solver", List.of("barfit.report"), List.of(SOLVER), Set.of()),
+            new Rule(
+                    "the searches, the schedule and the studies work in SI: units are converted by the input "
+                            + "readers and the reports",
                     List.of("barfit.design", "barfit.schedule", "barfit.study"),
                     List.of("barfit.units"),
                     Set.of()));
@@ -92,7 +103,8 @@ class PackageDirectionTest {
     void everyPackageTheRulesNameHasClasses() {
         for (Rule r : RULES) {
             for (String p : r.from()) {
-                assertFalse(MAIN.stream().noneMatch(c -> within(c.getPackageName(), p)),
+                assertFalse(
+                        MAIN.stream().noneMatch(c -> within(c.getPackageName(), p)),
                         "no main class in " + p + " (" + r.says() + ")");
             }
         }
@@ -114,8 +126,8 @@ class PackageDirectionTest {
         List<String> problems = new ArrayList<>();
         broken.forEach((cls, uses) -> {
             if (!r.frozen().contains(cls)) {
-                problems.add(cls + " breaks it: " + uses.get(0) + (uses.size() > 1 ? " (and " + (uses.size() - 1)
-                        + " more)" : ""));
+                problems.add(cls + " breaks it: " + uses.get(0)
+                        + (uses.size() > 1 ? " (and " + (uses.size() - 1) + " more)" : ""));
             }
         });
         for (String cls : new TreeSet<>(r.frozen())) {

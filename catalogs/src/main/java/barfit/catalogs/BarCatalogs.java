@@ -26,6 +26,7 @@ public final class BarCatalogs {
 
     /** Density of steel, kg/m³ (common practice, no source: the value used for bar unit masses). */
     public static final double STEEL_DENSITY = 7850.0;
+
     static final double TOLERANCE = 0.02;
     private static final double MM_PER_IN = 25.4;
     private static final double KG_PER_LB = 0.45359237;
@@ -33,8 +34,7 @@ public final class BarCatalogs {
 
     private static final Map<String, BarCatalog> CACHE = new ConcurrentHashMap<>();
 
-    private BarCatalogs() {
-    }
+    private BarCatalogs() {}
 
     /** A built-in catalog by id. */
     public static Optional<BarCatalog> builtIn(String id) {
@@ -64,8 +64,8 @@ public final class BarCatalogs {
 
     /** Parses and validates a catalog document. */
     public static BarCatalog parse(YNode root) {
-        YFields doc = YFields.of(root, "", "a bar catalog").allowOnly("id", "title", "source", "units", "label",
-                "bars");
+        YFields doc =
+                YFields.of(root, "", "a bar catalog").allowOnly("id", "title", "source", "units", "label", "bars");
         String id = doc.text("id", "the catalog's id");
         String title = doc.optText("title", "a title").orElse(id);
         String source = doc.optText("source", "where the data come from").orElse("");
@@ -76,9 +76,11 @@ public final class BarCatalogs {
         } else if (units.equals("US")) {
             us = true;
         } else {
-            throw doc.error("units", "expected SI (mm, mm2, kg/m) or US (in, in2, lb/ft), got \"" + Echo.cut(units) + "\"");
+            throw doc.error(
+                    "units", "expected SI (mm, mm2, kg/m) or US (in, in2, lb/ft), got \"" + Echo.cut(units) + "\"");
         }
-        String labelPattern = doc.optText("label", "a label pattern such as \"#{size}\"").orElse("{size}");
+        String labelPattern =
+                doc.optText("label", "a label pattern such as \"#{size}\"").orElse("{size}");
         if (!labelPattern.contains("{size}")) {
             throw doc.error("label", "expected a pattern containing {size}, such as \"#{size}\"");
         }
@@ -104,9 +106,16 @@ public final class BarCatalogs {
                 areaMm2 = us ? a * MM_PER_IN * MM_PER_IN : a;
                 double dev = Math.abs(areaMm2 - areaFromD) / areaFromD;
                 if (dev > TOLERANCE) {
-                    throw entryError(e, "area", size, String.format(java.util.Locale.ROOT,
-                            "area %s differs from pi d^2/4 = %s by %.1f %%; expected within 2 %%",
-                            trim(a), trim(us ? areaFromD / (MM_PER_IN * MM_PER_IN) : areaFromD), 100 * dev));
+                    throw entryError(
+                            e,
+                            "area",
+                            size,
+                            String.format(
+                                    java.util.Locale.ROOT,
+                                    "area %s differs from pi d^2/4 = %s by %.1f %%; expected within 2 %%",
+                                    trim(a),
+                                    trim(us ? areaFromD / (MM_PER_IN * MM_PER_IN) : areaFromD),
+                                    100 * dev));
                 }
             } else {
                 areaMm2 = areaFromD;
@@ -119,9 +128,16 @@ public final class BarCatalogs {
                 double dev = Math.abs(massKgM - massFromArea) / massFromArea;
                 if (dev > TOLERANCE) {
                     double expect = us ? massFromArea * M_PER_FT / KG_PER_LB : massFromArea;
-                    throw entryError(e, "mass", size, String.format(java.util.Locale.ROOT,
-                            "mass %s differs from area x 7850 kg/m3 = %s by %.1f %%; expected within 2 %%",
-                            trim(m), trim(expect), 100 * dev));
+                    throw entryError(
+                            e,
+                            "mass",
+                            size,
+                            String.format(
+                                    java.util.Locale.ROOT,
+                                    "mass %s differs from area x 7850 kg/m3 = %s by %.1f %%; expected within 2 %%",
+                                    trim(m),
+                                    trim(expect),
+                                    100 * dev));
                 }
             } else {
                 massKgM = massFromArea;
@@ -130,8 +146,10 @@ public final class BarCatalogs {
         }
         for (int i = 1; i < bars.size(); i++) {
             if (bars.get(i).diameter() <= bars.get(i - 1).diameter()) {
-                throw new InputError(entries.get(i).location(), "bars: size \"" + bars.get(i).designation()
-                        + "\" is not larger than the one before; expected sizes from smallest to largest");
+                throw new InputError(
+                        entries.get(i).location(),
+                        "bars: size \"" + bars.get(i).designation()
+                                + "\" is not larger than the one before; expected sizes from smallest to largest");
             }
         }
         return new BarCatalog(id, title, source, bars);

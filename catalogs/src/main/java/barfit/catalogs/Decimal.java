@@ -7,8 +7,7 @@ package barfit.catalogs;
  * backtracks over such a run in quadratic time).
  */
 public final class Decimal {
-    private Decimal() {
-    }
+    private Decimal() {}
 
     /** Whether {@code s}, exactly, is a plain decimal number. */
     public static boolean isPlain(CharSequence s) {

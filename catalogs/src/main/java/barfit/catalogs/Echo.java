@@ -8,8 +8,7 @@ public final class Echo {
     /** Characters of a value quoted in full; a longer one is cut here and marked with "…". */
     public static final int MAX = 60;
 
-    private Echo() {
-    }
+    private Echo() {}
 
     /** {@code text} itself, or its first {@link #MAX} characters, "…" and its length. */
     public static String cut(String text) {

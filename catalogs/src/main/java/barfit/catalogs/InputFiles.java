@@ -28,10 +28,10 @@ public final class InputFiles {
     public static final long YAML_MAX_BYTES = 4L * 1024 * 1024;
     /** The largest beams CSV barfit reads: 8 MB holds some 80 000 rows. */
     public static final long CSV_MAX_BYTES = 8L * 1024 * 1024;
+
     private static final long MB = 1024 * 1024;
 
-    private InputFiles() {
-    }
+    private InputFiles() {}
 
     /**
      * The whole text of {@code path}, at most {@code maxBytes} long; {@code kind} names the file expected
@@ -193,8 +193,11 @@ public final class InputFiles {
             throw new InputError(at, "is a folder, not a file; expected " + kind);
         }
         if (Files.isSymbolicLink(path) && !Files.exists(path)) {
-            throw new InputError(at, linkLoop(path) ? "is a symbolic link that leads back to itself (a link loop); "
-                    + "expected " + kind : "is a symbolic link to a file that does not exist; expected " + kind);
+            throw new InputError(
+                    at,
+                    linkLoop(path)
+                            ? "is a symbolic link that leads back to itself (a link loop); " + "expected " + kind
+                            : "is a symbolic link to a file that does not exist; expected " + kind);
         }
         if (Files.isRegularFile(path)) {
             try {
@@ -218,7 +221,9 @@ public final class InputFiles {
             try {
                 Path target = Files.readSymbolicLink(p);
                 Path parent = p.getParent();
-                p = (parent == null ? target : parent.resolve(target)).toAbsolutePath().normalize();
+                p = (parent == null ? target : parent.resolve(target))
+                        .toAbsolutePath()
+                        .normalize();
             } catch (IOException e) {
                 return false;
             }
@@ -242,18 +247,28 @@ public final class InputFiles {
             return new InputError(at, "is a symbolic link that leads back to itself (a link loop); expected " + kind);
         }
         String reason = e instanceof FileSystemException f && f.getReason() != null ? f.getReason() : e.getMessage();
-        return new InputError(at, "cannot be read" + (reason == null || reason.isBlank() ? ""
-                : " (" + Echo.cut(reason.strip()).toLowerCase(Locale.ROOT) + ")") + "; expected " + kind
-                + " barfit may read");
+        return new InputError(
+                at,
+                "cannot be read"
+                        + (reason == null || reason.isBlank()
+                                ? ""
+                                : " (" + Echo.cut(reason.strip()).toLowerCase(Locale.ROOT) + ")")
+                        + "; expected " + kind
+                        + " barfit may read");
     }
 
     private static InputError tooLarge(Path path, long size, long maxBytes, String kind, String advice) {
-        String limit = maxBytes >= MB ? String.format(Locale.ROOT, "%d MB (%,d bytes)", maxBytes / MB, maxBytes)
+        String limit = maxBytes >= MB
+                ? String.format(Locale.ROOT, "%d MB (%,d bytes)", maxBytes / MB, maxBytes)
                 : String.format(Locale.ROOT, "%,d bytes", maxBytes);
-        String is = size < 0 ? "is more than" : (size >= MB ? String.format(Locale.ROOT, "is %.1f MB", size / (double) MB)
-                : String.format(Locale.ROOT, "is %,d bytes", size)) + ", more than";
-        return new InputError(Location.ofFile(path.toString()), is + " the " + limit + " barfit reads from " + kind
-                + "; " + advice);
+        String is = size < 0
+                ? "is more than"
+                : (size >= MB
+                                ? String.format(Locale.ROOT, "is %.1f MB", size / (double) MB)
+                                : String.format(Locale.ROOT, "is %,d bytes", size))
+                        + ", more than";
+        return new InputError(
+                Location.ofFile(path.toString()), is + " the " + limit + " barfit reads from " + kind + "; " + advice);
     }
 
     private static InputError notUtf8(Path path, byte[] bytes, int from, int bad, int firstLine, String kind) {
@@ -264,8 +279,8 @@ public final class InputFiles {
      * Where the first byte that is not UTF-8 sits: {@code bytes[from..]} starts line {@code firstLine} at
      * file offset {@code base}; the byte at {@code bad} is the culprit.
      */
-    private static InputError notUtf8(Path path, byte[] bytes, int from, int bad, int firstLine, long base,
-            String kind) {
+    private static InputError notUtf8(
+            Path path, byte[] bytes, int from, int bad, int firstLine, long base, String kind) {
         int line = firstLine;
         int lineStart = from;
         for (int i = from; i < bad; i++) {
@@ -276,13 +291,20 @@ public final class InputFiles {
         }
         String before = new String(bytes, lineStart, bad - lineStart, StandardCharsets.UTF_8);
         int column = before.codePointCount(0, before.length()) + 1;
-        return new InputError(new Location(path.toString(), line, column), String.format(Locale.ROOT,
-                "not valid UTF-8 text (byte 0x%02X, byte %,d of the file); expected %s saved as UTF-8",
-                bytes[bad] & 0xff, base + bad + 1, kind));
+        return new InputError(
+                new Location(path.toString(), line, column),
+                String.format(
+                        Locale.ROOT,
+                        "not valid UTF-8 text (byte 0x%02X, byte %,d of the file); expected %s saved as UTF-8",
+                        bytes[bad] & 0xff,
+                        base + bad + 1,
+                        kind));
     }
 
     private static CharsetDecoder strictDecoder() {
-        return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+        return StandardCharsets.UTF_8
+                .newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT)
                 .onUnmappableCharacter(CodingErrorAction.REPORT);
     }
 }

@@ -97,7 +97,11 @@ class BarCatalogsTest {
         for (int i = 0; i < A615M_TABLE_1.length; i++) {
             BarSize m = si.bars().get(i);
             BarSize p = us.bars().get(i);
-            assertEquals(m.diameter(), p.diameter(), 0.05 + 1e-9, m + " and " + p + ": diameter"); // 0.750 in = 19.05 mm: 19.1
+            assertEquals(
+                    m.diameter(),
+                    p.diameter(),
+                    0.05 + 1e-9,
+                    m + " and " + p + ": diameter"); // 0.750 in = 19.05 mm: 19.1
             assertEquals(m.area(), p.area(), 0.005 * 645.16, m + " and " + p + ": area");
             double lastDigit = m.massPerMetre() >= 10 ? 0.01 : 0.001;
             assertEquals(m.massPerMetre(), p.massPerMetre(), lastDigit / 2 + 1e-9, m + " and " + p + ": mass");

@@ -16,8 +16,25 @@ class DecimalTest {
         for (String ok : new String[] {"0", "12", "-0.5", "+3", ".25", "7.", "3e4", "2.5E-3", "1e+2"}) {
             assertTrue(Decimal.isPlain(ok), ok);
         }
-        for (String bad : new String[] {"", "-", ".", "e5", "1e", "1e+", "1.2.3", "0x1p3", "6.0f", "1d", "Infinity",
-            "NaN", " 1", "1 ", "1,5", "1_000", "--1"}) {
+        for (String bad : new String[] {
+            "",
+            "-",
+            ".",
+            "e5",
+            "1e",
+            "1e+",
+            "1.2.3",
+            "0x1p3",
+            "6.0f",
+            "1d",
+            "Infinity",
+            "NaN",
+            " 1",
+            "1 ",
+            "1,5",
+            "1_000",
+            "--1"
+        }) {
             assertFalse(Decimal.isPlain(bad), bad);
         }
         assertEquals(-0.0025, Decimal.parse("-2.5e-3"), 0);

@@ -25,9 +25,10 @@ class InputFilesTest {
         Path f = dir.resolve("beams.yaml");
         InputError denied = InputFiles.cannotRead(f, new AccessDeniedException(f.toString()), "a YAML file");
         assertEquals(f + ": no permission to read it; expected a YAML file barfit may read", denied.oneLine());
-        InputError other = InputFiles.cannotRead(f, new FileSystemException(f.toString(), null, "Input/output error"),
-                "a YAML file");
-        assertEquals(f + ": cannot be read (input/output error); expected a YAML file barfit may read", other.oneLine());
+        InputError other = InputFiles.cannotRead(
+                f, new FileSystemException(f.toString(), null, "Input/output error"), "a YAML file");
+        assertEquals(
+                f + ": cannot be read (input/output error); expected a YAML file barfit may read", other.oneLine());
         InputError bare = InputFiles.cannotRead(f, new IOException(), "a CSV file");
         assertFalse(bare.oneLine().contains("Exception"), bare.oneLine());
     }
@@ -58,11 +59,15 @@ class InputFilesTest {
                 }
             }
         });
-        assertEquals(bad + ":2:4: not valid UTF-8 text (byte 0xE9, byte 7 of the file); expected a CSV file saved "
-                + "as UTF-8", e.oneLine());
+        assertEquals(
+                bad + ":2:4: not valid UTF-8 text (byte 0xE9, byte 7 of the file); expected a CSV file saved "
+                        + "as UTF-8",
+                e.oneLine());
         InputError whole = assertThrows(InputError.class, () -> InputFiles.readText(bad, "a YAML file", 100, ""));
-        assertEquals(bad + ":2:4: not valid UTF-8 text (byte 0xE9, byte 7 of the file); expected a YAML file saved "
-                + "as UTF-8", whole.oneLine());
+        assertEquals(
+                bad + ":2:4: not valid UTF-8 text (byte 0xE9, byte 7 of the file); expected a YAML file saved "
+                        + "as UTF-8",
+                whole.oneLine());
     }
 
     @Test

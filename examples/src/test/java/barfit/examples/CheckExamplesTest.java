@@ -50,7 +50,8 @@ class CheckExamplesTest {
         JsonNode root = new ObjectMapper().readTree(json.out());
         assertTrue(root.get("beams").size() > 0);
         for (JsonNode b : root.get("beams")) {
-            for (String key : new String[] {"id", "ok", "phi_Mn", "Mn", "phi", "eps_t", "c", "a", "d", "layers", "checks"}) {
+            for (String key :
+                    new String[] {"id", "ok", "phi_Mn", "Mn", "phi", "eps_t", "c", "a", "d", "layers", "checks"}) {
                 assertTrue(b.has(key), "beam JSON has " + key);
             }
             for (JsonNode l : b.get("layers")) {

@@ -55,8 +55,21 @@ class DesignExamplesTest {
                 continue;
             }
             assertEquals("optimal", status);
-            for (String key : new String[] {"width", "height", "tension", "compression", "phi_Mn", "Mu", "eps_t", "phi",
-                "stirrups", "cost", "binding", "alternatives", "proof"}) {
+            for (String key : new String[] {
+                "width",
+                "height",
+                "tension",
+                "compression",
+                "phi_Mn",
+                "Mu",
+                "eps_t",
+                "phi",
+                "stirrups",
+                "cost",
+                "binding",
+                "alternatives",
+                "proof"
+            }) {
                 assertTrue(b.has(key), "beam JSON has " + key);
             }
             if (b.get("kind").asText().equals("span")) {
@@ -64,7 +77,8 @@ class DesignExamplesTest {
                     assertTrue(b.has(key), "span JSON has " + key);
                 }
                 for (JsonNode s : b.get("sections")) {
-                    for (String key : new String[] {"at", "tension", "compression", "phi_Mn", "Mu", "eps_t", "phi", "checks"}) {
+                    for (String key :
+                            new String[] {"at", "tension", "compression", "phi_Mn", "Mu", "eps_t", "phi", "checks"}) {
                         assertTrue(s.has(key), "section JSON has " + key);
                     }
                 }
@@ -79,10 +93,14 @@ class DesignExamplesTest {
                     }
                 }
             }
-            for (String key : new String[] {"total", "concrete", "main_bars", "stirrups", "formwork", "depth_premium"}) {
+            for (String key :
+                    new String[] {"total", "concrete", "main_bars", "stirrups", "formwork", "depth_premium"}) {
                 assertTrue(b.get("cost").has(key), "cost has " + key);
             }
-            assertEquals(b.get("proof").get("objective").asDouble(), b.get("proof").get("bound").asDouble(), 1e-9);
+            assertEquals(
+                    b.get("proof").get("objective").asDouble(),
+                    b.get("proof").get("bound").asDouble(),
+                    1e-9);
         }
         assertEquals(anyInfeasible ? 1 : 0, text.exit());
     }

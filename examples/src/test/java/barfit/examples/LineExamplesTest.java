@@ -35,8 +35,9 @@ class LineExamplesTest {
                 assertTrue(l.has(k), k);
             }
             for (JsonNode s : l.get("spans")) {
-                for (String k : new String[] {"index", "M_left_face", "M_span_max", "M_right_face", "V_left_d",
-                    "V_right_d", "inflection"}) {
+                for (String k : new String[] {
+                    "index", "M_left_face", "M_span_max", "M_right_face", "V_left_d", "V_right_d", "inflection"
+                }) {
                     assertTrue(s.has(k), k);
                 }
             }
@@ -44,15 +45,18 @@ class LineExamplesTest {
         // the committed plot is the one the command draws
         Cli plot = Cli.run("analyse", FILE, "--line", "L1-B", "--plot", dir.toString());
         assertEquals(0, plot.exit(), plot.err());
-        assertEquals(Files.readString(Path.of("lines/L1-B-envelope.svg")),
-                Files.readString(dir.resolve("L1-B-envelope.svg")), "regenerate with ./barfit analyse " + FILE
-                        + " --line L1-B --plot examples/lines --force");
+        assertEquals(
+                Files.readString(Path.of("lines/L1-B-envelope.svg")),
+                Files.readString(dir.resolve("L1-B-envelope.svg")),
+                "regenerate with ./barfit analyse " + FILE + " --line L1-B --plot examples/lines --force");
         Cli design = Cli.run("design", FILE);
         assertEquals(0, design.exit(), design.err());
         assertTrue(design.out().contains("Line L1-B: one section for the whole line"));
         assertTrue(design.out().contains("Line L1-4: designed span by span from its analysis"));
         Golden.check("lines/ashgrove-depot-lines-si.design.txt", design.out());
-        Golden.check("lines/ashgrove-depot-lines-si.design.json", Cli.run("design", FILE, "--format", "json").out());
+        Golden.check(
+                "lines/ashgrove-depot-lines-si.design.json",
+                Cli.run("design", FILE, "--format", "json").out());
         Cli compare = Cli.run("compare", FILE, "--beam", "L1-B/span 2");
         assertEquals(0, compare.exit(), compare.err());
         assertTrue(compare.out().contains("Beam L1-B/span 2"));

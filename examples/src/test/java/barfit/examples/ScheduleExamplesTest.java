@@ -57,13 +57,22 @@ class ScheduleExamplesTest {
 
     /** The library on two threads, written once and looked at by several tests. */
     static Path library;
+
     static Cli libraryRun;
 
     @BeforeAll
     static void runLibrary() {
         library = tmp.resolve("library");
-        libraryRun = Cli.run("schedule", LIBRARY.toString(), "--beams", LIBRARY_BEAMS.toString(), "--out",
-                library.toString(), "--quiet", "--threads", "2");
+        libraryRun = Cli.run(
+                "schedule",
+                LIBRARY.toString(),
+                "--beams",
+                LIBRARY_BEAMS.toString(),
+                "--out",
+                library.toString(),
+                "--quiet",
+                "--threads",
+                "2");
     }
 
     @Test
@@ -84,7 +93,8 @@ class ScheduleExamplesTest {
         Cli r = Cli.run("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet");
         assertEquals(0, r.exit(), r.err());
         assertEquals("", r.err());
-        JsonNode beams = new ObjectMapper(new YAMLFactory()).readTree(OFFICE.toFile()).get("beams");
+        JsonNode beams =
+                new ObjectMapper(new YAMLFactory()).readTree(OFFICE.toFile()).get("beams");
         List<String> ids = new ArrayList<>();
         Map<String, String> groups = new LinkedHashMap<>();
         for (JsonNode b : beams) {
@@ -116,8 +126,15 @@ class ScheduleExamplesTest {
     }
 
     /** Checks a rationalised schedule written into {@code out}; returns its schedule.json. */
-    static JsonNode checkSchedule(Cli run, Path out, List<String> ids, Map<String, String> groups, int maxSections,
-            int maxBars, double formworkSet) throws IOException {
+    static JsonNode checkSchedule(
+            Cli run,
+            Path out,
+            List<String> ids,
+            Map<String, String> groups,
+            int maxSections,
+            int maxBars,
+            double formworkSet)
+            throws IOException {
         for (String f : OUTPUTS) {
             assertTrue(Files.isRegularFile(out.resolve(f)), f + " written");
         }
@@ -125,7 +142,8 @@ class ScheduleExamplesTest {
         assertTrue(run.out().contains("proof: OPTIMAL"), "the text summary gives the proof's status");
 
         List<String> csv = Files.readAllLines(out.resolve("schedule.csv"), StandardCharsets.UTF_8).stream()
-                .filter(l -> !l.isBlank()).toList();
+                .filter(l -> !l.isBlank())
+                .toList();
         assertTrue(csv.get(0).startsWith("id,"), csv.get(0));
         assertEquals(ids.size(), csv.size() - 1, "one schedule.csv row per beam");
         for (int i = 0; i < ids.size(); i++) {
@@ -164,11 +182,16 @@ class ScheduleExamplesTest {
                     barSizes.add(m.get("bar").asText());
                 }
             }
-            assertEquals(groups.get(b.get("id").asText()), b.get("group").isNull() ? null : b.get("group").asText());
+            assertEquals(
+                    groups.get(b.get("id").asText()),
+                    b.get("group").isNull() ? null : b.get("group").asText());
         }
         JsonNode sum = root.get("summary");
         assertEquals(beamsCost, sum.get("beams_cost").asDouble(), 0.01, "beams_cost is the sum of the beams");
-        assertEquals(beamsCost + formworkSet * sections.size(), sum.get("total_cost").asDouble(), 0.01,
+        assertEquals(
+                beamsCost + formworkSet * sections.size(),
+                sum.get("total_cost").asDouble(),
+                0.01,
                 "total = beams + one formwork set per section size");
         assertEquals(proof.get("objective").asDouble(), sum.get("total_cost").asDouble(), 0.01);
         assertTrue(sections.size() <= maxSections, "section sizes " + sections);
@@ -179,7 +202,8 @@ class ScheduleExamplesTest {
         assertEquals(barSizes, summaryBars);
 
         Map<String, Set<String>> byGroup = new HashMap<>();
-        groups.forEach((id, g) -> byGroup.computeIfAbsent(g, k -> new HashSet<>()).add(sectionOf.get(id)));
+        groups.forEach(
+                (id, g) -> byGroup.computeIfAbsent(g, k -> new HashSet<>()).add(sectionOf.get(id)));
         assertFalse(byGroup.isEmpty());
         byGroup.forEach((g, s) -> assertEquals(1, s.size(), "group " + g + " shares one b x h: " + s));
         return root;
@@ -200,9 +224,13 @@ class ScheduleExamplesTest {
         Path out = dir.resolve("out");
         Cli r = Cli.run("schedule", yaml.toString(), "--out", out.toString(), "--quiet", "--threads", "2");
         assertEquals(0, r.exit(), r.err());
-        ObjectNode fromCsv = (ObjectNode) JSON.readTree(library.resolve("schedule.json").toFile());
-        ObjectNode fromYaml = (ObjectNode) JSON.readTree(out.resolve("schedule.json").toFile());
-        assertEquals("[\"library-si.yaml\",\"library-beams.csv\"]", fromCsv.remove("sources").toString());
+        ObjectNode fromCsv =
+                (ObjectNode) JSON.readTree(library.resolve("schedule.json").toFile());
+        ObjectNode fromYaml =
+                (ObjectNode) JSON.readTree(out.resolve("schedule.json").toFile());
+        assertEquals(
+                "[\"library-si.yaml\",\"library-beams.csv\"]",
+                fromCsv.remove("sources").toString());
         assertEquals("[\"library-si.yaml\"]", fromYaml.remove("sources").toString());
         assertEquals(rows.size(), fromYaml.get("beams").size());
         assertEquals(fromCsv, fromYaml, "the same beams from CSV and from YAML give the same schedule");
@@ -214,7 +242,9 @@ class ScheduleExamplesTest {
         b.append("  - id: \"").append(r.get("id")).append("\"\n");
         b.append("    span: ").append(r.get("span")).append('\n');
         b.append("    ends: ").append(r.get("ends")).append('\n');
-        b.append("    moments: {").append(keys(r, "left", "m_left", "mid", "m_mid", "right", "m_right")).append("}\n");
+        b.append("    moments: {")
+                .append(keys(r, "left", "m_left", "mid", "m_mid", "right", "m_right"))
+                .append("}\n");
         String shear = keys(r, "left", "v_left", "right", "v_right");
         if (!shear.isEmpty()) {
             b.append("    shear: {").append(shear).append("}\n");
@@ -224,8 +254,18 @@ class ScheduleExamplesTest {
             b.append("    service: {").append(service).append("}\n");
         }
         if (!r.get("flange_width").isEmpty()) {
-            b.append("    flange: {").append(keys(r, "width", "flange_width", "thickness", "flange_thickness", "type",
-                    "flange_type", "clear_to_next_web", "flange_clear_to_next_web")).append("}\n");
+            b.append("    flange: {")
+                    .append(keys(
+                            r,
+                            "width",
+                            "flange_width",
+                            "thickness",
+                            "flange_thickness",
+                            "type",
+                            "flange_type",
+                            "clear_to_next_web",
+                            "flange_clear_to_next_web"))
+                    .append("}\n");
         }
         for (String k : new String[] {"max_depth", "width"}) {
             if (!r.get(k).isEmpty()) {
@@ -254,14 +294,25 @@ class ScheduleExamplesTest {
     void repeatableWhateverTheThreads() throws IOException {
         assertEquals(0, libraryRun.exit(), libraryRun.err());
         Path again = tmp.resolve("library-one-thread");
-        Cli r = Cli.run("schedule", LIBRARY.toString(), "--beams", LIBRARY_BEAMS.toString(), "--out", again.toString(),
-                "--quiet", "--threads", "1");
+        Cli r = Cli.run(
+                "schedule",
+                LIBRARY.toString(),
+                "--beams",
+                LIBRARY_BEAMS.toString(),
+                "--out",
+                again.toString(),
+                "--quiet",
+                "--threads",
+                "1");
         assertEquals(0, r.exit(), r.err());
         for (String f : OUTPUTS) {
-            assertArrayEquals(Files.readAllBytes(library.resolve(f)), Files.readAllBytes(again.resolve(f)),
+            assertArrayEquals(
+                    Files.readAllBytes(library.resolve(f)),
+                    Files.readAllBytes(again.resolve(f)),
                     f + ": two threads and one give the same bytes");
         }
-        assertEquals(libraryRun.out().replace(library.toString(), "DIR"), r.out().replace(again.toString(), "DIR"));
+        assertEquals(
+                libraryRun.out().replace(library.toString(), "DIR"), r.out().replace(again.toString(), "DIR"));
     }
 
     @Test
@@ -285,7 +336,9 @@ class ScheduleExamplesTest {
         Cli forced = Cli.run("schedule", OFFICE.toString(), "--out", out.toString(), "--quiet", "--force");
         assertEquals(0, forced.exit(), forced.err());
         String csv = Files.readString(existing);
-        assertTrue(csv.startsWith("id,group,status,"), "replaced by the schedule: " + csv.lines().findFirst());
+        assertTrue(
+                csv.startsWith("id,group,status,"),
+                "replaced by the schedule: " + csv.lines().findFirst());
         for (String f : OUTPUTS) {
             assertTrue(Files.isRegularFile(out.resolve(f)), f);
         }
@@ -297,7 +350,8 @@ class ScheduleExamplesTest {
     /** The data rows of a CSV without quoted cells, by column name; lines starting with # are comments. */
     static List<Map<String, String>> csvRows(Path file) throws IOException {
         List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8).stream()
-                .filter(l -> !l.isBlank() && !l.startsWith("#")).toList();
+                .filter(l -> !l.isBlank() && !l.startsWith("#"))
+                .toList();
         assertFalse(String.join("\n", lines).contains("\""), "this reader takes no quoted cells");
         String[] header = lines.get(0).split(",", -1);
         List<Map<String, String>> rows = new ArrayList<>();

@@ -32,8 +32,19 @@ class StudyExamplesTest {
         java.util.Set<String> kinds = new java.util.HashSet<>();
         for (JsonNode o : beam.get("options")) {
             kinds.add(o.get("kind").asText());
-            for (String key : new String[] {"kind", "feasible", "height", "width", "cost", "compression_steel_needed",
-                "tension", "compression", "phi_Mn", "eps_t", "phi"}) {
+            for (String key : new String[] {
+                "kind",
+                "feasible",
+                "height",
+                "width",
+                "cost",
+                "compression_steel_needed",
+                "tension",
+                "compression",
+                "phi_Mn",
+                "eps_t",
+                "phi"
+            }) {
                 assertTrue(o.has(key), o.get("kind") + " has " + key);
             }
         }

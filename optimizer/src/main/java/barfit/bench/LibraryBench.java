@@ -19,8 +19,8 @@ public final class LibraryBench {
      * Median wall seconds and process CPU seconds (every thread, what a busy machine does not inflate) of
      * each form, and the runs.
      */
-    public record Figures(int runs, double linesSeconds, double csvSeconds, double linesCpuSeconds,
-            double csvCpuSeconds) {
+    public record Figures(
+            int runs, double linesSeconds, double csvSeconds, double linesCpuSeconds, double csvCpuSeconds) {
         public double ratio() {
             return linesSeconds / csvSeconds;
         }
@@ -30,8 +30,7 @@ public final class LibraryBench {
         }
     }
 
-    private LibraryBench() {
-    }
+    private LibraryBench() {}
 
     /** The example's files under {@code dir}, or null when one is missing. */
     public static String[][] commands(Path dir, int threads) {
@@ -44,7 +43,8 @@ public final class LibraryBench {
         String t = String.valueOf(threads);
         return new String[][] {
             {"schedule", lines.toString(), "--quiet", "--threads", t},
-            {"schedule", settings.toString(), "--beams", csv.toString(), "--quiet", "--threads", t}};
+            {"schedule", settings.toString(), "--beams", csv.toString(), "--quiet", "--threads", t}
+        };
     }
 
     public static Figures run(String[][] commands, int runs) {
@@ -86,7 +86,8 @@ public final class LibraryBench {
 
     private static void check(int code, String[] command) {
         if (code != Main.OK) {
-            throw new IllegalStateException("the bench's schedule " + String.join(" ", command) + " ended with " + code);
+            throw new IllegalStateException(
+                    "the bench's schedule " + String.join(" ", command) + " ended with " + code);
         }
     }
 }

@@ -4,9 +4,9 @@ import barfit.analysis.Column;
 import barfit.analysis.Line;
 import barfit.analysis.LineAnalysis;
 import barfit.analysis.Load;
+import barfit.analysis.Stiffness;
 import barfit.analysis.Support;
 import barfit.analysis.SupportKind;
-import barfit.analysis.Stiffness;
 import barfit.section.SectionShape;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -19,11 +19,10 @@ import java.util.List;
  */
 public final class LineBench {
     /** Wall-clock and thread CPU time per analysis (CPU time is what a loaded machine does not inflate). */
-    public record Figures(int runs, double msMedian, double msMax, double cpuMsMedian, int arrangements, int stations) {
-    }
+    public record Figures(
+            int runs, double msMedian, double msMax, double cpuMsMedian, int arrangements, int stations) {}
 
-    private LineBench() {
-    }
+    private LineBench() {}
 
     public static Line sixSpans() {
         List<Double> spans = List.of(7200.0, 8400.0, 7200.0, 8400.0, 7200.0, 6000.0);
@@ -40,10 +39,19 @@ public final class LineBench {
         double m = 1000;
         loads.add(Load.point(2, 3 * m, 60 * kN, 30 * kN));
         loads.add(Load.uniform(5, 0, 2.5 * m, 10, 0));
-        double ec = barfit.section.Deflection.ec(new barfit.section.Materials(30, 420, 420, 20, 1.0),
-                barfit.section.CodeEquations.SI);
-        return new Line("bench", spans, 0, 2200, sup, loads, Stiffness.beamEI(ec, SectionShape.rectangular(300, 600)), ec,
-                540, null);
+        double ec = barfit.section.Deflection.ec(
+                new barfit.section.Materials(30, 420, 420, 20, 1.0), barfit.section.CodeEquations.SI);
+        return new Line(
+                "bench",
+                spans,
+                0,
+                2200,
+                sup,
+                loads,
+                Stiffness.beamEI(ec, SectionShape.rectangular(300, 600)),
+                ec,
+                540,
+                null);
     }
 
     public static Figures run(int runs) {

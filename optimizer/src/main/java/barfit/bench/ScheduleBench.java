@@ -23,9 +23,19 @@ import java.util.Locale;
  * the proof and the peak heap.
  */
 public final class ScheduleBench {
-    public record Figures(int beams, double seconds, int rationalisedBeams, int k, int m, double provenSeconds,
-            double rationalisedSeconds, String status, double gap, double peakHeapMb, double peakLiveMb, int threads) {
-    }
+    public record Figures(
+            int beams,
+            double seconds,
+            int rationalisedBeams,
+            int k,
+            int m,
+            double provenSeconds,
+            double rationalisedSeconds,
+            String status,
+            double gap,
+            double peakHeapMb,
+            double peakLiveMb,
+            int threads) {}
 
     /** The most heap still in use just after any collection: what the run really holds, garbage aside. */
     private static final class LiveHeap implements javax.management.NotificationListener {
@@ -53,7 +63,8 @@ public final class ScheduleBench {
 
         @Override
         public void handleNotification(javax.management.Notification n, Object handback) {
-            if (!n.getType().equals(com.sun.management.GarbageCollectionNotificationInfo.GARBAGE_COLLECTION_NOTIFICATION)) {
+            if (!n.getType()
+                    .equals(com.sun.management.GarbageCollectionNotificationInfo.GARBAGE_COLLECTION_NOTIFICATION)) {
                 return;
             }
             var info = com.sun.management.GarbageCollectionNotificationInfo.from(
@@ -66,15 +77,15 @@ public final class ScheduleBench {
         }
     }
 
-    private ScheduleBench() {
-    }
+    private ScheduleBench() {}
 
     /** Writes an invented schedule: {@code settings.yaml} and {@code beams.csv} in {@code dir}. */
     public static void write(Path dir, int beams, long seed, String rationalise) {
         try {
             Files.createDirectories(dir);
-            Files.writeString(dir.resolve("settings.yaml"), ScheduleGenerator.settings(
-                    "Invented schedule of " + beams + " beams, seed " + seed, rationalise));
+            Files.writeString(
+                    dir.resolve("settings.yaml"),
+                    ScheduleGenerator.settings("Invented schedule of " + beams + " beams, seed " + seed, rationalise));
             Files.writeString(dir.resolve("beams.csv"), ScheduleGenerator.csv(beams, seed));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
@@ -98,9 +109,17 @@ public final class ScheduleBench {
             long t0 = System.nanoTime();
             ScheduleResult plain = solve(dir.resolve("plain"), beams, seed, null, threads);
             double plainS = (System.nanoTime() - t0) / 1e9;
-            long feasible = plain.beams().stream().filter(ScheduleResult.Beam::feasible).count();
-            out.printf(Locale.ROOT, "%d beams, each its own optimum, %d threads: %.2f s wall (%.1f ms a beam); "
-                    + "%d with a design; total %.0f%n", beams, threads, plainS, 1000 * plainS / beams, feasible,
+            long feasible =
+                    plain.beams().stream().filter(ScheduleResult.Beam::feasible).count();
+            out.printf(
+                    Locale.ROOT,
+                    "%d beams, each its own optimum, %d threads: %.2f s wall (%.1f ms a beam); "
+                            + "%d with a design; total %.0f%n",
+                    beams,
+                    threads,
+                    plainS,
+                    1000 * plainS / beams,
+                    feasible,
                     plain.totalCost());
             String rationalise = "rationalise: {max_section_sizes: " + k + ", max_bar_sizes: " + m + "}\n";
             Path rdir = dir.resolve("rationalised");
@@ -111,21 +130,41 @@ public final class ScheduleBench {
             double ratS = (System.nanoTime() - t0) / 1e9;
             double mainS = (clock.curveStart - t0) / 1e9;
             var p = r.proof();
-            out.printf(Locale.ROOT, "%d beams rationalised to K = %d sizes, M = %d bar sizes, %d threads: proven in %.2f s "
-                    + "wall, %.2f s with the price of standardisation; "
-                    + "%s, objective %.2f, bound %.2f, gap %.3f %%; %d of %d bar-size sets solved, %d pruned; "
-                    + "%d (beam, size) pairs priced; own optima %.2f (+%.2f %%); price of standardisation for "
-                    + "K = 1..%d%n", ratBeams, k, m, threads, mainS, ratS, p.status(), p.objective(), p.bound(), 100 * p.gap(),
-                    p.search().barSetsSolved(), p.search().barSetsTotal(), p.search().barSetsPruned(),
-                    p.search().pairsEvaluated(), r.unconstrainedCost(),
-                    100 * (r.totalCost() - r.unconstrainedCost()) / r.unconstrainedCost(), r.standardisation().size());
+            out.printf(
+                    Locale.ROOT,
+                    "%d beams rationalised to K = %d sizes, M = %d bar sizes, %d threads: proven in %.2f s "
+                            + "wall, %.2f s with the price of standardisation; "
+                            + "%s, objective %.2f, bound %.2f, gap %.3f %%; %d of %d bar-size sets solved, %d pruned; "
+                            + "%d (beam, size) pairs priced; own optima %.2f (+%.2f %%); price of standardisation for "
+                            + "K = 1..%d%n",
+                    ratBeams,
+                    k,
+                    m,
+                    threads,
+                    mainS,
+                    ratS,
+                    p.status(),
+                    p.objective(),
+                    p.bound(),
+                    100 * p.gap(),
+                    p.search().barSetsSolved(),
+                    p.search().barSetsTotal(),
+                    p.search().barSetsPruned(),
+                    p.search().pairsEvaluated(),
+                    r.unconstrainedCost(),
+                    100 * (r.totalCost() - r.unconstrainedCost()) / r.unconstrainedCost(),
+                    r.standardisation().size());
             double peak = peakHeapMb();
             double liveMb = live.peak / 1048576.0;
-            out.printf(Locale.ROOT, "heap: at most %.0f MB in use after a collection (what the runs hold); peak %.0f MB "
-                    + "including garbage not yet collected (of %.0f MB allowed)%n", liveMb, peak,
+            out.printf(
+                    Locale.ROOT,
+                    "heap: at most %.0f MB in use after a collection (what the runs hold); peak %.0f MB "
+                            + "including garbage not yet collected (of %.0f MB allowed)%n",
+                    liveMb,
+                    peak,
                     Runtime.getRuntime().maxMemory() / 1048576.0);
-            return new Figures(beams, plainS, ratBeams, k, m, mainS, ratS, p.status().name(), p.gap(), peak, liveMb,
-                    threads);
+            return new Figures(
+                    beams, plainS, ratBeams, k, m, mainS, ratS, p.status().name(), p.gap(), peak, liveMb, threads);
         } finally {
             live.unwatch();
             delete(dir);
@@ -141,7 +180,8 @@ public final class ScheduleBench {
             if (curveStart == 0 && phase.step() == barfit.schedule.Progress.Step.STANDARDISATION) {
                 curveStart = System.nanoTime();
             }
-            if (curveStart == 0 && phase.step() == barfit.schedule.Progress.Step.BAR_SIZE_SETS
+            if (curveStart == 0
+                    && phase.step() == barfit.schedule.Progress.Step.BAR_SIZE_SETS
                     && phase.maxSizes() == barfit.schedule.Progress.Phase.ANY_NUMBER) {
                 curveStart = System.nanoTime(); // the curve starts with the schedule without a size limit
             }
@@ -152,13 +192,16 @@ public final class ScheduleBench {
         return solve(dir, beams, seed, rationalise, threads, barfit.schedule.Progress.NONE);
     }
 
-    private static ScheduleResult solve(Path dir, int beams, long seed, String rationalise, int threads,
-            barfit.schedule.Progress progress) {
+    private static ScheduleResult solve(
+            Path dir, int beams, long seed, String rationalise, int threads, barfit.schedule.Progress progress) {
         if (!Files.exists(dir.resolve("beams.csv"))) {
             write(dir, beams, seed, rationalise);
         }
         ScheduleInput in = ScheduleInputReader.read(dir.resolve("settings.yaml"), dir.resolve("beams.csv"));
-        CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().units().code());
+        CostModel cost = new CostModel(
+                in.rates(),
+                in.settings().detailing().cover(),
+                in.settings().units().code());
         return new ScheduleSolver(cost, new SolverOptions(60, 1, 1), threads, progress).solve(in);
     }
 

@@ -15,8 +15,7 @@ import java.util.Random;
  * kN/m). The data are invented for benchmarks and demonstrations only.
  */
 public final class ScheduleGenerator {
-    private ScheduleGenerator() {
-    }
+    private ScheduleGenerator() {}
 
     public static final String HEADER = "id,span,ends,m_left,m_mid,m_right,v_left,v_right,max_depth,group,"
             + "flange_width,flange_thickness,dead,live";
@@ -48,8 +47,7 @@ public final class ScheduleGenerator {
     }
 
     /** One beam line of the typical floor: its spans, whether interior (flanged), its cap and cantilever. */
-    private record Line(double[] spans, boolean interior, double tributary, Double cap, Double cantilever) {
-    }
+    private record Line(double[] spans, boolean interior, double tributary, Double cap, Double cantilever) {}
 
     /**
      * {@code count} beams as CSV rows after the header. The building has typical floors of eight beam lines
@@ -118,15 +116,43 @@ public final class ScheduleGenerator {
                     vl = Math.max(0, vl - wu * d);
                     vr = Math.max(0, vr - wu * d);
                     String id = "F" + floor + "-L" + (li + 1) + "-S" + s;
-                    row(out, id, ln, ends, ml, mm, mr, vl, vr, line.cap(), groupBase + "-S" + s, line.interior(), dead,
-                            live, ln);
+                    row(
+                            out,
+                            id,
+                            ln,
+                            ends,
+                            ml,
+                            mm,
+                            mr,
+                            vl,
+                            vr,
+                            line.cap(),
+                            groupBase + "-S" + s,
+                            line.interior(),
+                            dead,
+                            live,
+                            ln);
                     made++;
                 }
                 if (line.cantilever() != null && made < count) {
                     double ln = line.cantilever();
                     String id = "F" + floor + "-L" + (li + 1) + "-C";
-                    row(out, id, ln, "cantilever", -wu * ln * ln / 2, null, null, Math.max(0, wu * (ln - 0.45)), null,
-                            null, groupBase + "-C", false, dead, live, ln);
+                    row(
+                            out,
+                            id,
+                            ln,
+                            "cantilever",
+                            -wu * ln * ln / 2,
+                            null,
+                            null,
+                            Math.max(0, wu * (ln - 0.45)),
+                            null,
+                            null,
+                            groupBase + "-C",
+                            false,
+                            dead,
+                            live,
+                            ln);
                     made++;
                 }
             }
@@ -134,12 +160,42 @@ public final class ScheduleGenerator {
         return out.toString();
     }
 
-    private static void row(StringBuilder out, String id, double span, String ends, Double ml, Double mm, Double mr,
-            Double vl, Double vr, Double cap, String group, boolean flange, double dead, double live, double ln) {
-        out.append(id).append(',').append(f(span, 2)).append(',').append(ends).append(',')
-                .append(f(ml, 1)).append(',').append(f(mm, 1)).append(',').append(f(mr, 1)).append(',')
-                .append(f(vl, 1)).append(',').append(f(vr, 1)).append(',').append(f(cap, 0)).append(',')
-                .append(group == null ? "" : group).append(',');
+    private static void row(
+            StringBuilder out,
+            String id,
+            double span,
+            String ends,
+            Double ml,
+            Double mm,
+            Double mr,
+            Double vl,
+            Double vr,
+            Double cap,
+            String group,
+            boolean flange,
+            double dead,
+            double live,
+            double ln) {
+        out.append(id)
+                .append(',')
+                .append(f(span, 2))
+                .append(',')
+                .append(ends)
+                .append(',')
+                .append(f(ml, 1))
+                .append(',')
+                .append(f(mm, 1))
+                .append(',')
+                .append(f(mr, 1))
+                .append(',')
+                .append(f(vl, 1))
+                .append(',')
+                .append(f(vr, 1))
+                .append(',')
+                .append(f(cap, 0))
+                .append(',')
+                .append(group == null ? "" : group)
+                .append(',');
         if (flange) {
             double bf = Math.min(ln * 1000 / 4, 300 + 16 * 150); // 6.3.2.1, with a 300 mm web assumed
             out.append(f(Math.floor(bf / 50) * 50, 0)).append(",150,");

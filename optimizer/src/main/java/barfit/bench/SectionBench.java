@@ -5,17 +5,16 @@ import barfit.catalogs.BarCatalogs;
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
-import barfit.design.section.DesignOutcome;
-import barfit.design.section.SectionExhaustive;
 import barfit.design.SearchSpace;
-import barfit.design.section.SectionDesigner;
-import barfit.design.section.SectionProblem;
 import barfit.design.SolverOptions;
+import barfit.design.section.DesignOutcome;
+import barfit.design.section.SectionDesigner;
+import barfit.design.section.SectionExhaustive;
+import barfit.design.section.SectionProblem;
 import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.Exposure;
 import barfit.section.Materials;
-import barfit.units.UnitSystem;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -29,17 +28,22 @@ import java.util.Random;
  * enumeration on the same seeded instances in one process.
  */
 public final class SectionBench {
-    public record Figures(int instances, double optimizerMsMedian, double optimizerMsMax, double exhaustiveMsMedian,
-            double speedup, boolean equalOptimum, long layoutsChecked) {
-    }
+    public record Figures(
+            int instances,
+            double optimizerMsMedian,
+            double optimizerMsMax,
+            double exhaustiveMsMedian,
+            double speedup,
+            boolean equalOptimum,
+            long layoutsChecked) {}
 
-    private SectionBench() {
-    }
+    private SectionBench() {}
 
     static SearchSpace defaultSpace() {
         BarCatalog c = BarCatalogs.builtIn("astm-a615m").orElseThrow();
         List<BarSize> bars = List.of("16", "19", "22", "25", "29", "32", "36").stream()
-                .map(s -> c.find(s).orElseThrow()).toList();
+                .map(s -> c.find(s).orElseThrow())
+                .toList();
         List<Double> depths = new ArrayList<>();
         for (int h = 400; h <= 800; h += 25) {
             depths.add((double) h);
@@ -48,8 +52,15 @@ public final class SectionBench {
         for (int s = 75; s <= 600; s += 25) {
             spacings.add((double) s);
         }
-        return new SearchSpace(List.of(250.0, 300.0, 350.0, 400.0), depths, bars, bars, 2,
-                List.of(c.find("10").orElseThrow()), List.of(2, 4), spacings);
+        return new SearchSpace(
+                List.of(250.0, 300.0, 350.0, 400.0),
+                depths,
+                bars,
+                bars,
+                2,
+                List.of(c.find("10").orElseThrow()),
+                List.of(2, 4),
+                spacings);
     }
 
     static List<SectionProblem> instances(int n, long seed) {
@@ -63,7 +74,8 @@ public final class SectionBench {
             double mu = (60 + r.nextDouble() * 740) * 1e6 * (r.nextInt(4) == 0 ? -1 : 1);
             Double vu = r.nextInt(4) == 0 ? null : (60 + r.nextDouble() * 360) * 1e3;
             Double cap = r.nextInt(3) == 0 ? 450.0 + 25 * r.nextInt(10) : null;
-            out.add(new SectionProblem("S" + (i + 1), m, det, CodeEquations.SI, space, mu, vu, null, cap, null, null, 1.0));
+            out.add(new SectionProblem(
+                    "S" + (i + 1), m, det, CodeEquations.SI, space, mu, vu, null, cap, null, null, 1.0));
         }
         return out;
     }
@@ -81,7 +93,8 @@ public final class SectionBench {
         List<Double> exh = new ArrayList<>();
         boolean equal = true;
         long checked = 0;
-        out.printf(Locale.ROOT, "%-5s %10s %12s %12s %14s%n", "beam", "optimizer", "exhaustive", "cost", "equal optimum");
+        out.printf(
+                Locale.ROOT, "%-5s %10s %12s %12s %14s%n", "beam", "optimizer", "exhaustive", "cost", "equal optimum");
         for (int i = 0; i < n; i++) {
             SectionProblem p = problems.get(i);
             long t0 = System.nanoTime();
@@ -95,20 +108,23 @@ public final class SectionBench {
                 double ms = (System.nanoTime() - t1) / 1e6;
                 exh.add(ms);
                 checked += ref.layoutsChecked();
-                long units = o.feasible() ? CostModel.units(o.best().costPerMetre().total()) : -1;
+                long units =
+                        o.feasible() ? CostModel.units(o.best().costPerMetre().total()) : -1;
                 boolean same = units == ref.units();
                 equal &= same;
                 ex = String.format(Locale.ROOT, "%.0f ms", ms);
                 eq = same ? "yes" : "NO";
             }
-            String costText = o.feasible() ? String.format(Locale.ROOT, "%.2f", o.best().costPerMetre().total()) : "none";
+            String costText = o.feasible()
+                    ? String.format(Locale.ROOT, "%.2f", o.best().costPerMetre().total())
+                    : "none";
             out.printf(Locale.ROOT, "%-5s %8.2f ms %12s %12s %14s%n", p.id(), opt[i], ex, costText, eq);
             out.flush();
         }
         double optMedian = median(opt);
         double exMedian = median(exh.stream().mapToDouble(Double::doubleValue).toArray());
-        return new Figures(n, optMedian, Arrays.stream(opt).max().orElse(0), exMedian, exMedian / optMedian, equal,
-                checked);
+        return new Figures(
+                n, optMedian, Arrays.stream(opt).max().orElse(0), exMedian, exMedian / optMedian, equal, checked);
     }
 
     static double median(double[] v) {

@@ -16,7 +16,6 @@ import barfit.section.EndCondition;
 import barfit.section.Exposure;
 import barfit.section.Materials;
 import barfit.section.SpanChecks;
-import barfit.units.UnitSystem;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
@@ -28,18 +27,32 @@ import java.util.Random;
  * optimizer against exhaustive enumeration on a reduced space where enumeration finishes.
  */
 public final class SpanBench {
-    public record Figures(int instances, double optimizerMsMedian, double optimizerMsMax, int compared,
-            double reducedOptimizerMsMedian, double exhaustiveMsMedian, double speedup, boolean equalOptimum) {
-    }
+    public record Figures(
+            int instances,
+            double optimizerMsMedian,
+            double optimizerMsMax,
+            int compared,
+            double reducedOptimizerMsMedian,
+            double exhaustiveMsMedian,
+            double speedup,
+            boolean equalOptimum) {}
 
-    private SpanBench() {
-    }
+    private SpanBench() {}
 
     static SearchSpace reducedSpace() {
         BarCatalog c = BarCatalogs.builtIn("astm-a615m").orElseThrow();
-        List<BarSize> bars = List.of("19", "22", "25").stream().map(s -> c.find(s).orElseThrow()).toList();
-        return new SearchSpace(List.of(300.0, 350.0), List.of(500.0, 550.0, 600.0), bars, bars, 1,
-                List.of(c.find("10").orElseThrow()), List.of(2, 4), List.of(100.0, 150.0, 200.0, 250.0, 300.0));
+        List<BarSize> bars = List.of("19", "22", "25").stream()
+                .map(s -> c.find(s).orElseThrow())
+                .toList();
+        return new SearchSpace(
+                List.of(300.0, 350.0),
+                List.of(500.0, 550.0, 600.0),
+                bars,
+                bars,
+                1,
+                List.of(c.find("10").orElseThrow()),
+                List.of(2, 4),
+                List.of(100.0, 150.0, 200.0, 250.0, 300.0));
     }
 
     static List<SpanProblem> instances(int n, long seed, SearchSpace space) {
@@ -55,12 +68,30 @@ public final class SpanBench {
             double mr = -base * (0.9 + 0.3 * r.nextDouble()) * 1e6;
             double mm = base * (0.5 + 0.3 * r.nextDouble()) * 1e6;
             double v = (90 + r.nextDouble() * 160) * 1e3;
-            SpanChecks.ServiceLoads service = new SpanChecks.ServiceLoads(10 + 10 * r.nextDouble(), 5 + 8 * r.nextDouble(),
-                    0.25);
+            SpanChecks.ServiceLoads service =
+                    new SpanChecks.ServiceLoads(10 + 10 * r.nextDouble(), 5 + 8 * r.nextDouble(), 0.25);
             Double cap = r.nextInt(4) == 0 ? 450.0 + 50 * r.nextInt(3) : null;
-            out.add(new SpanProblem("S" + (i + 1), m, det, CodeEquations.SI, space, span, EndCondition.BOTH_ENDS_CONTINUOUS,
-                    ml, mm, mr, v, v * (0.85 + 0.3 * r.nextDouble()), service, SpanChecks.Limits.DEFAULT, cap, null, null,
-                    false, 2, 4));
+            out.add(new SpanProblem(
+                    "S" + (i + 1),
+                    m,
+                    det,
+                    CodeEquations.SI,
+                    space,
+                    span,
+                    EndCondition.BOTH_ENDS_CONTINUOUS,
+                    ml,
+                    mm,
+                    mr,
+                    v,
+                    v * (0.85 + 0.3 * r.nextDouble()),
+                    service,
+                    SpanChecks.Limits.DEFAULT,
+                    cap,
+                    null,
+                    null,
+                    false,
+                    2,
+                    4));
         }
         return out;
     }
@@ -79,8 +110,14 @@ public final class SpanBench {
             long t0 = System.nanoTime();
             var o = designer.design(problems.get(i), 0);
             opt[i] = (System.nanoTime() - t0) / 1e6;
-            out.printf(Locale.ROOT, "%-5s %8.2f ms %12s%n", problems.get(i).id(), opt[i],
-                    o.feasible() ? String.format(Locale.ROOT, "%.2f", o.best().cost().total()) : "none");
+            out.printf(
+                    Locale.ROOT,
+                    "%-5s %8.2f ms %12s%n",
+                    problems.get(i).id(),
+                    opt[i],
+                    o.feasible()
+                            ? String.format(Locale.ROOT, "%.2f", o.best().cost().total())
+                            : "none");
             out.flush();
         }
         out.println("reduced space (2 widths, 3 depths, No. 19/22/25, one layer) against exhaustive enumeration:");
@@ -103,13 +140,26 @@ public final class SpanBench {
             long mine = o.feasible() ? CostModel.units(o.best().cost().total()) : -1;
             boolean same = mine == ref.units();
             equal &= same;
-            out.printf(Locale.ROOT, "%-5s optimizer %8.2f ms   exhaustive %9.0f ms over %d combinations   equal: %s%n",
-                    p.id(), ro[i], ex[i], ref.combinations(), same ? "yes" : "NO");
+            out.printf(
+                    Locale.ROOT,
+                    "%-5s optimizer %8.2f ms   exhaustive %9.0f ms over %d combinations   equal: %s%n",
+                    p.id(),
+                    ro[i],
+                    ex[i],
+                    ref.combinations(),
+                    same ? "yes" : "NO");
             out.flush();
         }
         double roMed = SectionBench.median(ro);
         double exMed = SectionBench.median(ex);
-        return new Figures(n, SectionBench.median(opt), java.util.Arrays.stream(opt).max().orElse(0), compare, roMed,
-                exMed, exMed / roMed, equal);
+        return new Figures(
+                n,
+                SectionBench.median(opt),
+                java.util.Arrays.stream(opt).max().orElse(0),
+                compare,
+                roMed,
+                exMed,
+                exMed / roMed,
+                equal);
     }
 }

@@ -21,7 +21,8 @@ public final class StartupBench {
     /** Every run's wall time in seconds, in the order run. */
     public record Figures(String command, List<Double> seconds) {
         public double median() {
-            return SectionBench.median(seconds.stream().mapToDouble(Double::doubleValue).toArray());
+            return SectionBench.median(
+                    seconds.stream().mapToDouble(Double::doubleValue).toArray());
         }
 
         public double min() {
@@ -42,8 +43,7 @@ public final class StartupBench {
         }
     }
 
-    private StartupBench() {
-    }
+    private StartupBench() {}
 
     /** The launcher named by {@value #LAUNCHER_ENV}, or why there is none. */
     public static Path launcher() throws NotMeasured {
@@ -76,7 +76,8 @@ public final class StartupBench {
 
     /** One run's wall time in seconds; a run that fails stops the measurement. */
     static double once(List<String> command) throws NotMeasured {
-        ProcessBuilder pb = new ProcessBuilder(command).redirectOutput(ProcessBuilder.Redirect.DISCARD)
+        ProcessBuilder pb = new ProcessBuilder(command)
+                .redirectOutput(ProcessBuilder.Redirect.DISCARD)
                 .redirectError(ProcessBuilder.Redirect.PIPE);
         long t0 = System.nanoTime();
         try {
@@ -88,8 +89,12 @@ public final class StartupBench {
             int code = p.waitFor();
             double s = (System.nanoTime() - t0) / 1e9;
             if (code != 0) {
-                String first = new String(err, java.nio.charset.StandardCharsets.UTF_8).lines().findFirst().orElse("");
-                throw new NotMeasured("the design ended with exit code " + code + (first.isEmpty() ? "" : ": " + first));
+                String first = new String(err, java.nio.charset.StandardCharsets.UTF_8)
+                        .lines()
+                        .findFirst()
+                        .orElse("");
+                throw new NotMeasured(
+                        "the design ended with exit code " + code + (first.isEmpty() ? "" : ": " + first));
             }
             return s;
         } catch (IOException e) {

@@ -29,7 +29,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-@Command(name = "analyse", mixinStandardHelpOptions = true,
+@Command(
+        name = "analyse",
+        mixinStandardHelpOptions = true,
         description = "Gravity analysis of the beam lines in FILE (lines: spans, supports, service loads): reactions, "
                 + "the factored moment and shear envelopes with the pattern that governs, moments at the support faces "
                 + "and shears at d for design, inflection points, service moments; optionally SVG plots.%n"
@@ -47,8 +49,11 @@ final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
-    @Option(names = "--plot", paramLabel = "DIR", description = "also write one SVG per line (<id>-envelope.svg) into "
-            + "DIR (created if missing; existing plots are kept unless --force)")
+    @Option(
+            names = "--plot",
+            paramLabel = "DIR",
+            description = "also write one SVG per line (<id>-envelope.svg) into "
+                    + "DIR (created if missing; existing plots are kept unless --force)")
     Path plot;
 
     @Option(names = "--force", description = "replace plot files that exist")
@@ -63,14 +68,19 @@ final class AnalyseCommand implements Callable<Integer> {
         Settings settings = SettingsReader.read(doc, file);
         List<LineInput> lines = LinesReader.read(doc, settings);
         if (lines.isEmpty()) {
-            throw new InputError(Location.ofFile(file.toString()), "has no lines:; expected beam lines given by spans, "
-                    + "supports and loads (see examples/lines/)");
+            throw new InputError(
+                    Location.ofFile(file.toString()),
+                    "has no lines:; expected beam lines given by spans, " + "supports and loads (see examples/lines/)");
         }
         if (line != null) {
-            List<LineInput> only = lines.stream().filter(l -> l.id().equals(line)).toList();
+            List<LineInput> only =
+                    lines.stream().filter(l -> l.id().equals(line)).toList();
             if (only.isEmpty()) {
-                throw OptionError.of("--line", "no line " + Echo.cut(line) + " in " + file + "; "
-                        + "expected one of: " + String.join(", ", lines.stream().map(LineInput::id).toList()));
+                throw OptionError.of(
+                        "--line",
+                        "no line " + Echo.cut(line) + " in " + file + "; " + "expected one of: "
+                                + String.join(
+                                        ", ", lines.stream().map(LineInput::id).toList()));
             }
             lines = only;
         }
@@ -84,8 +94,9 @@ final class AnalyseCommand implements Callable<Integer> {
                 try {
                     out.add(new AnalysisText.Analysed(in, sw, null, Coefficients.analyse(analysable)));
                 } catch (Coefficients.NotApplicable e) {
-                    throw new InputError(in.location(), "line " + in.id() + ": method: coefficients cannot be used: "
-                            + e.getMessage());
+                    throw new InputError(
+                            in.location(),
+                            "line " + in.id() + ": method: coefficients cannot be used: " + e.getMessage());
                 }
             } else {
                 LineResult r;
@@ -100,7 +111,8 @@ final class AnalyseCommand implements Callable<Integer> {
         if (plot != null) {
             writePlots(out, settings);
         }
-        String text = format == OutputFormat.json ? AnalysisJson.render(settings, out) : AnalysisText.render(settings, out);
+        String text =
+                format == OutputFormat.json ? AnalysisJson.render(settings, out) : AnalysisText.render(settings, out);
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();
         return Main.OK;
@@ -123,8 +135,9 @@ final class AnalyseCommand implements Callable<Integer> {
             }
             Path p = plot.resolve(a.input().id().replaceAll("[^A-Za-z0-9._-]", "_") + "-envelope.svg");
             if (Files.exists(p) && !force) {
-                throw new InputError(Location.ofFile(p.toString()), "exists; expected a new folder, or --force to "
-                        + "replace the plots");
+                throw new InputError(
+                        Location.ofFile(p.toString()),
+                        "exists; expected a new folder, or --force to " + "replace the plots");
             }
             targets.add(p);
         }
@@ -134,7 +147,9 @@ final class AnalyseCommand implements Callable<Integer> {
             if (a.result() == null) {
                 continue;
             }
-            Files.writeString(targets.get(k++), EnvelopePlot.svg(a.result(), a.input().id(), settings.units()),
+            Files.writeString(
+                    targets.get(k++),
+                    EnvelopePlot.svg(a.result(), a.input().id(), settings.units()),
                     StandardCharsets.UTF_8);
         }
     }

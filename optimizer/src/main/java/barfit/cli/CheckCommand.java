@@ -14,12 +14,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
-@Command(name = "check", mixinStandardHelpOptions = true,
+@Command(
+        name = "check",
+        mixinStandardHelpOptions = true,
         description = "Verify the given sections and bars of every beam in FILE against ACI 318-19: strength, "
                 + "ductility, detailing and shear, each with its clause, and a calculation trail.%n"
                 + "Exit code 0 when every beam passes, 1 when a check fails, 2 for bad input.")
@@ -33,7 +35,11 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
-    @Option(names = "--trail", negatable = true, defaultValue = "true", fallbackValue = "true",
+    @Option(
+            names = "--trail",
+            negatable = true,
+            defaultValue = "true",
+            fallbackValue = "true",
             description = "include the calculation trail (default: on; --no-trail to leave it out)")
     boolean trail;
 
@@ -47,8 +53,14 @@ final class CheckCommand implements Callable<Integer> {
         if (beam != null) {
             beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
             if (beams.isEmpty()) {
-                throw OptionError.of("--beam", "no beam " + Echo.cut(beam) + " in " + file + "; expected one of: "
-                        + String.join(", ", input.beams().stream().map(CheckBeam::id).toList()));
+                throw OptionError.of(
+                        "--beam",
+                        "no beam " + Echo.cut(beam) + " in " + file + "; expected one of: "
+                                + String.join(
+                                        ", ",
+                                        input.beams().stream()
+                                                .map(CheckBeam::id)
+                                                .toList()));
             }
         }
         List<CheckReport> reports = new ArrayList<>();

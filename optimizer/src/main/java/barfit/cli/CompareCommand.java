@@ -4,7 +4,6 @@ import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.SolverOptions;
 import barfit.input.DesignInput;
-import barfit.input.DesignInputReader;
 import barfit.report.StudyJson;
 import barfit.report.StudySay;
 import barfit.report.StudyText;
@@ -23,7 +22,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-@Command(name = "compare", mixinStandardHelpOptions = true,
+@Command(
+        name = "compare",
+        mixinStandardHelpOptions = true,
         description = "Price 'deepen or add compression steel' for each beam under its headroom cap: the cheapest "
                 + "design at the cap, with the cap lifted, at the shallowest depth needing no compression steel, wider, "
                 + "and with stronger concrete, side by side, with a recommendation.%n"
@@ -41,20 +42,28 @@ final class CompareCommand implements Callable<Integer> {
     @Option(names = "--beam", paramLabel = "ID", description = "study only this beam")
     String beam;
 
-    @Option(names = "--cap", paramLabel = "DEPTH", description = "headroom cap to study (mm or in; default: the beam's max_depth)")
+    @Option(
+            names = "--cap",
+            paramLabel = "DEPTH",
+            description = "headroom cap to study (mm or in; default: the beam's max_depth)")
     Double cap;
 
-    @Option(names = "--max-width", paramLabel = "WIDTH", description = "widest web for the widen option, from one "
-            + "width step beyond the search's widest to 5 times it (default: two width steps beyond)")
+    @Option(
+            names = "--max-width",
+            paramLabel = "WIDTH",
+            description = "widest web for the widen option, from one "
+                    + "width step beyond the search's widest to 5 times it (default: two width steps beyond)")
     Double maxWidth;
 
-    @Option(names = "--fc", paramLabel = "FC", split = ",", description = "concrete strengths to try (MPa or psi), e.g. 35,40")
+    @Option(
+            names = "--fc",
+            paramLabel = "FC",
+            split = ",",
+            description = "concrete strengths to try (MPa or psi), e.g. 35,40")
     List<Double> fcs;
 
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
-
-
 
     @Override
     public Integer call() {
@@ -68,45 +77,60 @@ final class CompareCommand implements Callable<Integer> {
         double maxW = maxWidth == null ? widest + 2 * step : u.toSI(maxWidth, Dim.LENGTH);
         double widestAllowed = 5 * widest;
         if (maxWidth != null && !(maxW >= widest + step - 1e-6 && maxW <= widestAllowed + 1e-6)) {
-            throw OptionError.of("--max-width", "expected a width from "
-                    + u.compact(widest + step, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (one width step of " + u.compact(step, Dim.LENGTH)
-                    + " beyond the search's widest, " + u.compact(widest, Dim.LENGTH) + ") to "
-                    + u.compact(widestAllowed, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (5 times the widest), got "
-                    + Studies.fmt(maxWidth));
+            throw OptionError.of(
+                    "--max-width",
+                    "expected a width from "
+                            + u.compact(widest + step, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + " (one width step of "
+                            + u.compact(step, Dim.LENGTH)
+                            + " beyond the search's widest, " + u.compact(widest, Dim.LENGTH) + ") to "
+                            + u.compact(widestAllowed, Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
+                            + " (5 times the widest), got "
+                            + Studies.fmt(maxWidth));
         }
         List<Double> fcMpa = new ArrayList<>();
         List<Double> asked = fcs;
         if (asked == null) {
             asked = new ArrayList<>();
-            double[] grades = u == barfit.units.UnitSystem.US ? new double[] {5000, 6000, 8000} : new double[] {35, 40, 50};
+            double[] grades =
+                    u == barfit.units.UnitSystem.US ? new double[] {5000, 6000, 8000} : new double[] {35, 40, 50};
             for (double g : grades) {
                 if (u.toSI(g, Dim.STRESS) > in.settings().materials().fc() + 1e-6) {
                     asked.add(g);
                 }
             }
         }
-        String byKey = "costs." + (u == barfit.units.UnitSystem.US ? "concrete_per_yd3_by_fc" : "concrete_per_m3_by_fc");
+        String byKey =
+                "costs." + (u == barfit.units.UnitSystem.US ? "concrete_per_yd3_by_fc" : "concrete_per_m3_by_fc");
         for (double v : asked) {
             double mpa = u.toSI(v, Dim.STRESS);
             double lo = u.limit(barfit.section.MaterialLimits.fcMin(u.code()), Dim.STRESS);
             double hi = u.limit(barfit.section.MaterialLimits.fcMax(u.code()), Dim.STRESS);
             if (!(v >= lo && v <= hi)) {
-                throw OptionError.of("--fc", "expected f'c between " + Studies.fmt(lo) + " and "
-                        + Studies.fmt(hi) + " " + u.unit(Dim.STRESS) + ", got " + Studies.fmt(v));
+                throw OptionError.of(
+                        "--fc",
+                        "expected f'c between " + Studies.fmt(lo) + " and " + Studies.fmt(hi) + " " + u.unit(Dim.STRESS)
+                                + ", got " + Studies.fmt(v));
             }
             if (Double.isNaN(in.costs().concreteAt(mpa))) {
                 String grade = Studies.fmt(v) + " " + u.unit(Dim.STRESS);
                 if (fcs != null) {
-                    throw OptionError.of("--fc", "no concrete rate for f'c = " + grade
-                            + "; expected it within the grades of " + byKey);
+                    throw OptionError.of(
+                            "--fc",
+                            "no concrete rate for f'c = " + grade + "; expected it within the grades of " + byKey);
                 }
                 // the grade is one compare tries by default: the rate table in the file does not reach it
-                Location at = in.costs().concreteByFcAt() != null ? in.costs().concreteByFcAt()
+                Location at = in.costs().concreteByFcAt() != null
+                        ? in.costs().concreteByFcAt()
                         : Location.ofFile(file.toString());
-                throw new InputError(at, byKey + ": no rate for f'c = " + grade + ", a grade compare tries by default "
-                        + "(those of " + String.join(", ", asked.stream().map(Studies::fmt).toList()) + " "
-                        + u.unit(Dim.STRESS) + " above the file's f'c); expected a rate for it, or --fc with grades "
-                        + "the table covers");
+                throw new InputError(
+                        at,
+                        byKey + ": no rate for f'c = " + grade + ", a grade compare tries by default "
+                                + "(those of "
+                                + String.join(
+                                        ", ", asked.stream().map(Studies::fmt).toList()) + " "
+                                + u.unit(Dim.STRESS)
+                                + " above the file's f'c); expected a rate for it, or --fc with grades "
+                                + "the table covers");
             }
             fcMpa.add(mpa);
         }
@@ -115,10 +139,12 @@ final class CompareCommand implements Callable<Integer> {
         List<Compare.Result> results = new ArrayList<>();
         List<Boolean> perBeam = new ArrayList<>();
         for (Target t : targets) {
-            results.add(Compare.run(t, capMm, maxW, step, fcMpa, Studies.cost(in), fc -> Studies.costAtFc(in, fc), say));
+            results.add(
+                    Compare.run(t, capMm, maxW, step, fcMpa, Studies.cost(in), fc -> Studies.costAtFc(in, fc), say));
             perBeam.add(t.costPerBeam());
         }
-        String text = format == OutputFormat.json ? StudyJson.compare(in.settings(), results, perBeam)
+        String text = format == OutputFormat.json
+                ? StudyJson.compare(in.settings(), results, perBeam)
                 : StudyText.compare(in.settings(), results, perBeam, in.currency());
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();

@@ -4,21 +4,20 @@ import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
-import barfit.design.section.DesignOutcome;
+import barfit.design.SolverOptions;
+import barfit.design.line.LineSpans;
 import barfit.design.section.SectionDesigner;
 import barfit.design.section.SectionProblem;
-import barfit.design.SolverOptions;
+import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.input.LineInput;
 import barfit.input.LinesReader;
-import barfit.design.line.LineSpans;
-import barfit.report.DesignJson;
 import barfit.report.DesignItem;
+import barfit.report.DesignJson;
 import barfit.report.DesignText;
-import barfit.design.span.SpanDesigner;
-import barfit.design.span.SpanProblem;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -30,7 +29,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-@Command(name = "design", mixinStandardHelpOptions = true,
+@Command(
+        name = "design",
+        mixinStandardHelpOptions = true,
         description = "Find, for every beam in FILE, the cheapest layout in the search space that passes every "
                 + "check of the section model, with CP-SAT's proof, what binds and the cost broken down.%n"
                 + "Exit code 0 when every beam has a passing layout, 1 when one has none, 2 for bad input.")
@@ -50,14 +51,17 @@ final class DesignCommand implements Callable<Integer> {
     @Option(names = "--beam", paramLabel = "ID", description = "design only this beam")
     String beam;
 
-    @Option(names = "--alternatives", paramLabel = "N", defaultValue = "0",
+    @Option(
+            names = "--alternatives",
+            paramLabel = "N",
+            defaultValue = "0",
             description = "also show the N next-cheapest distinct designs (default: ${DEFAULT-VALUE})")
     int alternatives;
 
-
-
-
-    @Option(names = "--trail", negatable = true, defaultValue = "false",
+    @Option(
+            names = "--trail",
+            negatable = true,
+            defaultValue = "false",
             description = "add the checks table and calculation trail of each chosen layout")
     boolean trail;
 
@@ -70,39 +74,61 @@ final class DesignCommand implements Callable<Integer> {
         DesignInput input = DesignInputReader.read(file, false);
         List<LineInput> lines = LinesReader.read(DesignInputReader.document(file), input.settings());
         if (input.beams().isEmpty() && lines.isEmpty()) {
-            throw new InputError(Location.ofFile(file.toString()), "has no beams: and no lines:; expected at least one");
+            throw new InputError(
+                    Location.ofFile(file.toString()), "has no beams: and no lines:; expected at least one");
         }
         List<DesignBeam> beams = input.beams();
         if (beam != null) {
             beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
             lines = lines.stream().filter(l -> l.id().equals(beam)).toList();
             if (beams.isEmpty() && lines.isEmpty()) {
-                List<String> ids = new ArrayList<>(input.beams().stream().map(DesignBeam::id).toList());
-                LinesReader.read(DesignInputReader.document(file), input.settings()).forEach(l -> ids.add(l.id()));
-                throw OptionError.of("--beam", "no beam or line " + Echo.cut(beam) + " in " + file + "; expected one of: "
-                        + String.join(", ", ids));
+                List<String> ids = new ArrayList<>(
+                        input.beams().stream().map(DesignBeam::id).toList());
+                LinesReader.read(DesignInputReader.document(file), input.settings())
+                        .forEach(l -> ids.add(l.id()));
+                throw OptionError.of(
+                        "--beam",
+                        "no beam or line " + Echo.cut(beam) + " in " + file + "; expected one of: "
+                                + String.join(", ", ids));
             }
         }
         var settings = input.settings();
-        CostModel cost = new CostModel(input.rates(), settings.detailing().cover(), settings.units().code());
+        CostModel cost = new CostModel(
+                input.rates(), settings.detailing().cover(), settings.units().code());
         SectionDesigner designer = new SectionDesigner(cost, options);
         SpanDesigner spans = new SpanDesigner(cost, options);
         List<DesignItem> outcomes = new ArrayList<>();
         for (DesignBeam b : beams) {
-            outcomes.add(b.isWhole() ? DesignItem.of(spans.design(span(input, b), alternatives))
-                    : DesignItem.of(designer.design(problem(input, b), alternatives)));
+            outcomes.add(
+                    b.isWhole()
+                            ? DesignItem.of(spans.design(span(input, b), alternatives))
+                            : DesignItem.of(designer.design(problem(input, b), alternatives)));
         }
-        LineSpans byLine = new LineSpans(settings, input.space(), spans, input.maxBarSizesPerBeam(),
-                input.barsPerTwoLegs());
+        LineSpans byLine =
+                new LineSpans(settings, input.space(), spans, input.maxBarSizesPerBeam(), input.barsPerTwoLegs());
         for (LineInput l : lines) {
             LineSpans.Result r = byLine.design(l, alternatives);
-            List<String> undesigned = r.parts().stream().filter(pt -> !pt.outcome().feasible())
-                    .map(LineSpans.Part::name).toList();
+            List<String> undesigned = r.parts().stream()
+                    .filter(pt -> !pt.outcome().feasible())
+                    .map(LineSpans.Part::name)
+                    .toList();
             for (int i = 0; i < r.parts().size(); i++) {
                 LineSpans.Part part = r.parts().get(i);
-                outcomes.add(DesignItem.of(part.outcome(), new DesignItem.LinePart(l.id(), part.name(), i == 0,
-                        l.spans().size(), r.rounds(), r.settled(), l.redistribution(), r.redistribution(), r.epsT(),
-                        undesigned, !r.held().isEmpty(), r.oneSection())));
+                outcomes.add(DesignItem.of(
+                        part.outcome(),
+                        new DesignItem.LinePart(
+                                l.id(),
+                                part.name(),
+                                i == 0,
+                                l.spans().size(),
+                                r.rounds(),
+                                r.settled(),
+                                l.redistribution(),
+                                r.redistribution(),
+                                r.epsT(),
+                                undesigned,
+                                !r.held().isEmpty(),
+                                r.oneSection())));
             }
         }
         String text = format == OutputFormat.json
@@ -120,7 +146,18 @@ final class DesignCommand implements Callable<Integer> {
     static SectionProblem problem(DesignInput in, DesignBeam b) {
         var s = in.settings();
         double length = b.span() == null ? 1.0 : b.span().length() / 1000.0;
-        return new SectionProblem(b.id(), s.materials(), s.detailing(), s.code(), in.space(), b.mu(), b.vu(), b.span(),
-                b.maxDepth(), b.width(), b.flange(), length);
+        return new SectionProblem(
+                b.id(),
+                s.materials(),
+                s.detailing(),
+                s.code(),
+                in.space(),
+                b.mu(),
+                b.vu(),
+                b.span(),
+                b.maxDepth(),
+                b.width(),
+                b.flange(),
+                length);
     }
 }

@@ -18,7 +18,10 @@ import picocli.CommandLine.Command;
  * The {@code barfit} command line. Exit codes: 0 all pass, 1 a check fails, 2 bad input or usage, 3 an
  * internal error (a bug in barfit, or a machine that cannot run the solver or is out of memory).
  */
-@Command(name = "barfit", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+@Command(
+        name = "barfit",
+        mixinStandardHelpOptions = true,
+        versionProvider = Main.Version.class,
         description = "Cheapest passing reinforced-concrete beam layouts to ACI 318-19, searched and proven.%n"
                 + "Results must be checked by a licensed professional engineer against the governing local code.")
 public final class Main implements Runnable {
@@ -49,6 +52,7 @@ public final class Main implements Runnable {
 
     /** The commands that run the solver: only these load its native library. */
     static final java.util.Set<String> SOLVING = java.util.Set.of("design", "schedule", "compare", "sweep", "bench");
+
     static final String OUT_OF_MEMORY = "barfit: out of memory; give the JVM more heap through the launcher, e.g. "
             + "BARFIT_JAVA_OPTS=-Xmx4g ./barfit ...";
 
@@ -57,7 +61,8 @@ public final class Main implements Runnable {
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed: check, design, schedule, compare, sweep or bench");
+        throw new CommandLine.ParameterException(
+                spec.commandLine(), "a command is needed: check, design, schedule, compare, sweep or bench");
     }
 
     public static void main(String[] args) {
@@ -143,8 +148,10 @@ public final class Main implements Runnable {
             CommandLine.Model.ArgSpec arg = ex.getArgSpec();
             String name = arg instanceof CommandLine.Model.OptionSpec o ? o.longestName() : arg.paramLabel();
             Class<?> type = arg.auxiliaryTypes().length > 0 ? arg.auxiliaryTypes()[0] : arg.type();
-            boolean decimal = type == Double.class || type == double.class || type == Float.class || type == float.class;
-            String expected = arg.isMultiValue() ? (decimal ? "numbers" : "whole numbers") + " separated by commas"
+            boolean decimal =
+                    type == Double.class || type == double.class || type == Float.class || type == float.class;
+            String expected = arg.isMultiValue()
+                    ? (decimal ? "numbers" : "whole numbers") + " separated by commas"
                     : decimal ? "a number" : "a whole number";
             String value = ex.getValue() == null ? "" : ex.getValue();
             return name + ": expected " + expected + ", got '" + barfit.catalogs.Echo.cut(value) + "'";

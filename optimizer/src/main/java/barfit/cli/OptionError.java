@@ -7,8 +7,7 @@ import barfit.catalogs.InputError;
  * were a place in a file.
  */
 final class OptionError {
-    private OptionError() {
-    }
+    private OptionError() {}
 
     static InputError of(String option, String message) {
         return new InputError(null, option + ": " + message);

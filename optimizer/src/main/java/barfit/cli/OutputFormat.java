@@ -2,5 +2,6 @@ package barfit.cli;
 
 /** How a command prints its answer. */
 public enum OutputFormat {
-    text, json
+    text,
+    json
 }

@@ -38,9 +38,11 @@ final class ProgressBar implements Progress {
             case DESIGNING_BEAMS -> "designing beams";
             case BOUNDING_SIZES -> "bounding sizes";
             case PRICING_SIZES -> "pricing sizes";
-            case BAR_SIZE_SETS -> phase.maxSizes() == Phase.ANY_NUMBER
-                    ? "rationalising: bar-size sets, any number of sizes"
-                    : "rationalising: bar-size sets for " + phase.maxSizes() + (phase.maxSizes() == 1 ? " size" : " sizes");
+            case BAR_SIZE_SETS ->
+                phase.maxSizes() == Phase.ANY_NUMBER
+                        ? "rationalising: bar-size sets, any number of sizes"
+                        : "rationalising: bar-size sets for " + phase.maxSizes()
+                                + (phase.maxSizes() == 1 ? " size" : " sizes");
             case STANDARDISATION -> "price of standardisation";
             case DESIGNING_IN_CHOSEN_SIZES -> "designing in the chosen sizes";
         };
@@ -58,8 +60,14 @@ final class ProgressBar implements Progress {
         lastDraw = now;
         int filled = total <= 0 ? WIDTH : (int) Math.round(WIDTH * (double) done / total);
         String bar = "#".repeat(filled) + ".".repeat(WIDTH - filled);
-        String line = String.format(Locale.ROOT, "[%s] %3d%% %s %d/%d", bar, total <= 0 ? 100 : 100 * done / total,
-                words(phase), done, total);
+        String line = String.format(
+                Locale.ROOT,
+                "[%s] %3d%% %s %d/%d",
+                bar,
+                total <= 0 ? 100 : 100 * done / total,
+                words(phase),
+                done,
+                total);
         err.print("\r" + line + " ".repeat(Math.max(0, width - line.length())));
         width = Math.max(width, line.length());
         err.flush();

@@ -29,7 +29,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-@Command(name = "schedule", mixinStandardHelpOptions = true,
+@Command(
+        name = "schedule",
+        mixinStandardHelpOptions = true,
         description = "Design every beam of a floor or building: each at its proven optimum, or rationalised to a few "
                 + "section and bar sizes (rationalise: in FILE) with the proof of the whole schedule's optimum.%n"
                 + "With --out DIR writes schedule.csv, schedule.json, report.html and (with rationalise:) standardisation.svg there.%n"
@@ -40,8 +42,11 @@ final class ScheduleCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "YAML: settings, search, costs, rationalise and "
-            + "(unless --beams) beams (see examples/schedule/)")
+    @Parameters(
+            index = "0",
+            paramLabel = "FILE",
+            description = "YAML: settings, search, costs, rationalise and "
+                    + "(unless --beams) beams (see examples/schedule/)")
     Path file;
 
     @CommandLine.Mixin
@@ -59,20 +64,24 @@ final class ScheduleCommand implements Callable<Integer> {
     @Option(names = "--quiet", description = "no progress bar")
     boolean quiet;
 
-    @Option(names = "--format", defaultValue = "text", description = "what to print: text or json (default: ${DEFAULT-VALUE})")
+    @Option(
+            names = "--format",
+            defaultValue = "text",
+            description = "what to print: text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
-    @Option(names = "--threads", paramLabel = "N", description = "beams designed in parallel (default: the number of cores)")
+    @Option(
+            names = "--threads",
+            paramLabel = "N",
+            description = "beams designed in parallel (default: the number of cores)")
     Integer threads;
-
-
-
 
     @Override
     public Integer call() {
         if (force && out == null) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--force: replaces the schedule files in --out "
-                    + "DIR; expected --out DIR with it");
+            throw new CommandLine.ParameterException(
+                    spec.commandLine(),
+                    "--force: replaces the schedule files in --out " + "DIR; expected --out DIR with it");
         }
         int cores = Runtime.getRuntime().availableProcessors();
         int nThreads = threads == null ? cores : threads;
@@ -85,7 +94,9 @@ final class ScheduleCommand implements Callable<Integer> {
         }
         ScheduleInput input = ScheduleInputReader.read(file, beams, options, nThreads);
         ProgressBar bar = new ProgressBar(spec.commandLine().getErr(), !quiet && ProgressBar.stderrIsTerminal());
-        CostModel cost = new CostModel(input.rates(), input.settings().detailing().cover(),
+        CostModel cost = new CostModel(
+                input.rates(),
+                input.settings().detailing().cover(),
                 input.settings().units().code());
         ScheduleResult result;
         try {
@@ -97,9 +108,17 @@ final class ScheduleCommand implements Callable<Integer> {
         if (out != null) {
             List<String> written = write(result);
             if (format == OutputFormat.text) {
-                text += "\nwrote " + String.join(", ", written.stream().map(f -> out.resolve(f).toString()).toList())
-                        + (written.contains("standardisation.svg") ? "" : " (no standardisation.svg: its curve is "
-                        + "computed only for a schedule with a rationalise: block)") + "\n";
+                text += "\nwrote "
+                        + String.join(
+                                ", ",
+                                written.stream()
+                                        .map(f -> out.resolve(f).toString())
+                                        .toList())
+                        + (written.contains("standardisation.svg")
+                                ? ""
+                                : " (no standardisation.svg: its curve is "
+                                        + "computed only for a schedule with a rationalise: block)")
+                        + "\n";
             }
         }
         spec.commandLine().getOut().print(text);
@@ -118,8 +137,9 @@ final class ScheduleCommand implements Callable<Integer> {
                 throw OptionError.of("--out", target + " would replace an input file; expected another directory");
             }
             if (Files.exists(target) && !force) {
-                throw new InputError(Location.ofFile(target.toString()), "already exists; expected a new directory, "
-                        + "or --force to replace the schedule files");
+                throw new InputError(
+                        Location.ofFile(target.toString()),
+                        "already exists; expected a new directory, " + "or --force to replace the schedule files");
             }
         }
     }
@@ -156,13 +176,18 @@ final class ScheduleCommand implements Callable<Integer> {
             for (String name : files.keySet()) {
                 Path tmp = temps.get(i++);
                 try {
-                    Files.move(tmp, out.resolve(name), StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+                    Files.move(
+                            tmp,
+                            out.resolve(name),
+                            StandardCopyOption.REPLACE_EXISTING,
+                            StandardCopyOption.ATOMIC_MOVE);
                 } catch (AtomicMoveNotSupportedException e) {
                     Files.move(tmp, out.resolve(name), StandardCopyOption.REPLACE_EXISTING);
                 }
             }
             if (!files.containsKey("standardisation.svg")) {
-                Files.deleteIfExists(out.resolve("standardisation.svg")); // an earlier run's curve (--force) would mislead
+                Files.deleteIfExists(
+                        out.resolve("standardisation.svg")); // an earlier run's curve (--force) would mislead
             }
             return new ArrayList<>(files.keySet());
         } catch (IOException e) {
@@ -173,8 +198,10 @@ final class ScheduleCommand implements Callable<Integer> {
                     // best effort: the error below is what matters
                 }
             }
-            throw new InputError(Location.ofFile(out.toString()), "cannot write the schedule ("
-                    + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()) + ")");
+            throw new InputError(
+                    Location.ofFile(out.toString()),
+                    "cannot write the schedule ("
+                            + (e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage()) + ")");
         }
     }
 }

@@ -5,15 +5,25 @@ import picocli.CommandLine.Option;
 
 /** The CP-SAT options every solving command takes, checked in one place. */
 final class SolverFlags {
-    @Option(names = "--time-limit", paramLabel = "SECONDS", defaultValue = "60",
+    @Option(
+            names = "--time-limit",
+            paramLabel = "SECONDS",
+            defaultValue = "60",
             description = "CP-SAT time limit per solve (default: ${DEFAULT-VALUE})")
     double timeLimit;
 
-    @Option(names = "--workers", paramLabel = "N", defaultValue = "1",
+    @Option(
+            names = "--workers",
+            paramLabel = "N",
+            defaultValue = "1",
             description = "CP-SAT workers per solve (default: ${DEFAULT-VALUE}; 1 gives repeatable answers)")
     int workers;
 
-    @Option(names = "--seed", paramLabel = "N", defaultValue = "1", description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
+    @Option(
+            names = "--seed",
+            paramLabel = "N",
+            defaultValue = "1",
+            description = "CP-SAT random seed (default: ${DEFAULT-VALUE})")
     int seed;
 
     SolverOptions options() {

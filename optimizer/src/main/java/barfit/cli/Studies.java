@@ -6,13 +6,13 @@ import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SolverOptions;
+import barfit.design.line.LineSpans;
+import barfit.design.span.SpanDesigner;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.input.LineInput;
 import barfit.input.LinesReader;
-import barfit.design.span.SpanDesigner;
-import barfit.design.line.LineSpans;
 import barfit.section.trail.Dim;
 import barfit.study.Say;
 import barfit.study.SectionTarget;
@@ -24,14 +24,16 @@ import java.util.List;
 
 /** What compare and sweep share: the beams of a design file as study targets, and option checks. */
 final class Studies {
-    private Studies() {
-    }
+    private Studies() {}
 
     /** A design file whose beams: may be left out when it gives lines: instead. */
     static DesignInput input(Path file) {
         DesignInput in = DesignInputReader.read(file, false);
-        if (in.beams().isEmpty() && LinesReader.read(DesignInputReader.document(file), in.settings()).isEmpty()) {
-            throw new InputError(Location.ofFile(file.toString()), "has no beams: and no lines:; expected at least one");
+        if (in.beams().isEmpty()
+                && LinesReader.read(DesignInputReader.document(file), in.settings())
+                        .isEmpty()) {
+            throw new InputError(
+                    Location.ofFile(file.toString()), "has no beams: and no lines:; expected at least one");
         }
         return in;
     }
@@ -49,14 +51,16 @@ final class Studies {
             if (beam != null && !b.id().equals(beam)) {
                 continue;
             }
-            out.add(b.isWhole() ? new SpanTarget(DesignCommand.span(in, b), options, say)
-                    : new SectionTarget(DesignCommand.problem(in, b), options, say));
+            out.add(
+                    b.isWhole()
+                            ? new SpanTarget(DesignCommand.span(in, b), options, say)
+                            : new SectionTarget(DesignCommand.problem(in, b), options, say));
         }
         List<LineInput> lines = LinesReader.read(DesignInputReader.document(file), in.settings());
         if (!lines.isEmpty()) {
             SpanDesigner spans = new SpanDesigner(cost(in), options);
-            LineSpans byLine = new LineSpans(in.settings(), in.space(), spans, in.maxBarSizesPerBeam(),
-                    in.barsPerTwoLegs());
+            LineSpans byLine =
+                    new LineSpans(in.settings(), in.space(), spans, in.maxBarSizesPerBeam(), in.barsPerTwoLegs());
             for (LineInput l : lines) {
                 ids.add(l.id());
                 boolean whole = beam == null || beam.equals(l.id());
@@ -66,29 +70,42 @@ final class Studies {
                 for (LineSpans.Part part : byLine.design(l, 0).parts()) {
                     if (whole || part.problem().id().equals(beam)) {
                         // studied free of the section the line was designed at, with that section's envelope
-                        out.add(new SpanTarget(part.problem().withSpace(in.space()).withFixedWidth(null), options,
-                                say));
+                        out.add(new SpanTarget(
+                                part.problem().withSpace(in.space()).withFixedWidth(null), options, say));
                     }
                 }
             }
         }
         if (out.isEmpty()) {
-            throw OptionError.of("--beam", "no beam, line or line part (LINE/span N) " + Echo.cut(beam) + " in " + file
-                    + "; expected one of: " + String.join(", ", ids));
+            throw OptionError.of(
+                    "--beam",
+                    "no beam, line or line part (LINE/span N) " + Echo.cut(beam) + " in " + file + "; expected one of: "
+                            + String.join(", ", ids));
         }
         return out;
     }
 
     static CostModel cost(DesignInput in) {
-        return new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().units().code());
+        return new CostModel(
+                in.rates(),
+                in.settings().detailing().cover(),
+                in.settings().units().code());
     }
 
     /** The cost model with the concrete rate for another f'c (MPa). */
     static CostModel costAtFc(DesignInput in, double fc) {
         double rate = in.costs().concreteAt(fc);
         CostRates r = in.rates();
-        return new CostModel(new CostRates(rate, r.mainBarsPerKg(), r.stirrupsPerKg(), r.formworkPerM2(),
-                r.depthPremiumPerM(), r.lapFactor()), in.settings().detailing().cover(), in.settings().units().code());
+        return new CostModel(
+                new CostRates(
+                        rate,
+                        r.mainBarsPerKg(),
+                        r.stirrupsPerKg(),
+                        r.formworkPerM2(),
+                        r.depthPremiumPerM(),
+                        r.lapFactor()),
+                in.settings().detailing().cover(),
+                in.settings().units().code());
     }
 
     /** A length option in the user's units, checked to lie within the search's depths. */
@@ -99,14 +116,19 @@ final class Studies {
         double lo = depths.get(0);
         double hi = depths.get(depths.size() - 1);
         if (!(mm >= lo - 1e-6 && mm <= hi + 1e-6)) {
-            throw OptionError.of(option, "expected a depth within the search range "
-                    + u.compact(lo, Dim.LENGTH) + " to " + u.compact(hi, Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ", got "
-                    + fmt(userValue));
+            throw OptionError.of(
+                    option,
+                    "expected a depth within the search range "
+                            + u.compact(lo, Dim.LENGTH) + " to " + u.compact(hi, Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
+                            + ", got "
+                            + fmt(userValue));
         }
         return mm;
     }
 
     static String fmt(double v) {
-        return Double.isFinite(v) && v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
+        return Double.isFinite(v) && v == Math.rint(v) && Math.abs(v) < 1e15
+                ? String.valueOf((long) v)
+                : String.valueOf(v);
     }
 }

@@ -4,7 +4,6 @@ import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.SolverOptions;
 import barfit.input.DesignInput;
-import barfit.input.DesignInputReader;
 import barfit.report.StudyJson;
 import barfit.report.StudySay;
 import barfit.report.StudyText;
@@ -26,7 +25,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-@Command(name = "sweep", mixinStandardHelpOptions = true,
+@Command(
+        name = "sweep",
+        mixinStandardHelpOptions = true,
         description = "The cheapest design at every depth cap in a range: the cost–depth frontier, the shallowest cap "
                 + "that works, and the cap below which compression steel is needed. A table, CSV, JSON or an SVG plot.%n"
                 + "Exit code 0 when some cap in the range works, 1 when none does, 2 for bad input.")
@@ -43,7 +44,10 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--beam", paramLabel = "ID", description = "sweep only this beam")
     String beam;
 
-    @Option(names = "--from", paramLabel = "DEPTH", description = "shallowest cap (default: the search's shallowest depth)")
+    @Option(
+            names = "--from",
+            paramLabel = "DEPTH",
+            description = "shallowest cap (default: the search's shallowest depth)")
     Double from;
 
     @Option(names = "--to", paramLabel = "DEPTH", description = "deepest cap (default: the search's deepest depth)")
@@ -58,13 +62,14 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
-    @Option(names = "--plot", paramLabel = "FILE.svg", description = "also draw cost against depth cap into an SVG file")
+    @Option(
+            names = "--plot",
+            paramLabel = "FILE.svg",
+            description = "also draw cost against depth cap into an SVG file")
     Path plot;
 
     @Option(names = "--force", description = "with --plot: overwrite the plot file if it exists")
     boolean force;
-
-
 
     /** The plot must go to a new (or, with --force, an existing) file in an existing, writable directory. */
     private void checkPlotFile() {
@@ -92,8 +97,8 @@ final class SweepCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (force && plot == null) {
-            throw new CommandLine.ParameterException(spec.commandLine(), "--force: overwrites the --plot file; expected "
-                    + "--plot FILE.svg with it");
+            throw new CommandLine.ParameterException(
+                    spec.commandLine(), "--force: overwrites the --plot file; expected " + "--plot FILE.svg with it");
         }
         DesignInput in = Studies.input(file);
         var u = in.settings().units();
@@ -111,8 +116,7 @@ final class SweepCommand implements Callable<Integer> {
             throw OptionError.of("--step", "the range gives more than 400 caps; expected a larger step");
         }
         if (csv && format == OutputFormat.json) {
-            throw OptionError.of("--csv", "--csv and --format json ask for two outputs; expected one of "
-                    + "them");
+            throw OptionError.of("--csv", "--csv and --format json ask for two outputs; expected one of " + "them");
         }
         if (plot != null) {
             checkPlotFile();
@@ -127,8 +131,10 @@ final class SweepCommand implements Callable<Integer> {
         SolverOptions options = solver.options();
         List<Target> targets = Studies.targets(in, beam, file, options, new StudySay(u));
         if (plot != null && targets.size() != 1) {
-            throw OptionError.of("--plot", "a plot shows one beam; expected --beam ID with --plot (the "
-                    + "file has " + targets.size() + " beams)");
+            throw OptionError.of(
+                    "--plot",
+                    "a plot shows one beam; expected --beam ID with --plot (the " + "file has " + targets.size()
+                            + " beams)");
         }
         List<Sweep.Result> results = new ArrayList<>();
         List<Boolean> perBeam = new ArrayList<>();
@@ -136,16 +142,20 @@ final class SweepCommand implements Callable<Integer> {
             results.add(Sweep.run(t, caps, Studies.cost(in)));
             perBeam.add(t.costPerBeam());
         }
-        String text = format == OutputFormat.json ? StudyJson.sweep(in.settings(), results, perBeam)
-                : csv ? StudyText.sweepCsv(results, u, perBeam)
-                : StudyText.sweep(in.settings(), results, perBeam, in.currency());
+        String text = format == OutputFormat.json
+                ? StudyJson.sweep(in.settings(), results, perBeam)
+                : csv
+                        ? StudyText.sweepCsv(results, u, perBeam)
+                        : StudyText.sweep(in.settings(), results, perBeam, in.currency());
         if (plot != null) {
             try {
-                Files.writeString(plot, SweepPlot.svg(results.get(0), u, in.currency(), perBeam.get(0)),
-                        StandardCharsets.UTF_8);
+                Files.writeString(
+                        plot, SweepPlot.svg(results.get(0), u, in.currency(), perBeam.get(0)), StandardCharsets.UTF_8);
             } catch (IOException ex) {
-                throw new InputError(Location.ofFile(plot.toString()), "cannot write the plot ("
-                        + ex.getClass().getSimpleName() + "); expected a writable file in an existing directory");
+                throw new InputError(
+                        Location.ofFile(plot.toString()),
+                        "cannot write the plot (" + ex.getClass().getSimpleName()
+                                + "); expected a writable file in an existing directory");
             }
         }
         spec.commandLine().getOut().print(text);

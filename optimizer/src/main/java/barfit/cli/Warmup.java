@@ -13,8 +13,7 @@ import java.util.List;
  * those commands load. Exit code 0 when every command line ran (whatever it answered), 3 otherwise.
  */
 public final class Warmup {
-    private Warmup() {
-    }
+    private Warmup() {}
 
     public static void main(String[] args) {
         PrintStream none = new PrintStream(OutputStream.nullOutputStream(), true, StandardCharsets.UTF_8);

@@ -9,8 +9,12 @@ public record CostBreakdown(double concrete, double mainBars, double stirrups, d
     }
 
     public CostBreakdown plus(CostBreakdown o) {
-        return new CostBreakdown(concrete + o.concrete, mainBars + o.mainBars, stirrups + o.stirrups,
-                formwork + o.formwork, depthPremium + o.depthPremium);
+        return new CostBreakdown(
+                concrete + o.concrete,
+                mainBars + o.mainBars,
+                stirrups + o.stirrups,
+                formwork + o.formwork,
+                depthPremium + o.depthPremium);
     }
 
     public CostBreakdown times(double k) {

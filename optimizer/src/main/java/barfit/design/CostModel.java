@@ -131,13 +131,17 @@ public final class CostModel {
     /** Stirrups, per metre of beam. */
     public double stirrups(double b, double h, Stirrups s) {
         double setsPerMetre = 1000.0 / s.spacing();
-        double kgPerSet = stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0 * s.bar().massPerMetre();
+        double kgPerSet =
+                stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0 * s.bar().massPerMetre();
         return rates.stirrupsPerKg() * kgPerSet * setsPerMetre;
     }
 
     /** {@code sets} stirrup sets (a zone's stirrups). */
     public double stirrupSets(double b, double h, Stirrups s, int sets) {
-        return rates.stirrupsPerKg() * s.bar().massPerMetre() * sets * stirrupSetLength(b, h, s.bar(), s.legs())
+        return rates.stirrupsPerKg()
+                * s.bar().massPerMetre()
+                * sets
+                * stirrupSetLength(b, h, s.bar(), s.legs())
                 / 1000.0;
     }
 

@@ -12,39 +12,39 @@ import barfit.section.CheckResult;
  * tension bars that would do (null where one more does not). {@code maxDepth} and {@code fixedWidth} are the
  * beam's own (null where it has none).
  */
-public record Diagnosis(String limit, Cause cause, SectionLayout strongest, double strongestPhiMn, Fix deeper, Fix wider,
-        Integer moreLayers, Double maxDepth, Double fixedWidth) {
+public record Diagnosis(
+        String limit,
+        Cause cause,
+        SectionLayout strongest,
+        double strongestPhiMn,
+        Fix deeper,
+        Fix wider,
+        Integer moreLayers,
+        Double maxDepth,
+        Double fixedWidth) {
 
     /** What stops the section, as facts. */
-    public sealed interface Cause permits BelowShallowest, FrameCheckFails, NoLayoutFits, FlexureFails, ShearFails,
-            DetailingFails {
-    }
+    public sealed interface Cause
+            permits BelowShallowest, FrameCheckFails, NoLayoutFits, FlexureFails, ShearFails, DetailingFails {}
 
     /** {@code max_depth} is below the shallowest depth searched, {@code shallowest}. */
-    public record BelowShallowest(double shallowest) implements Cause {
-    }
+    public record BelowShallowest(double shallowest) implements Cause {}
 
     /** A check of the frame alone (minimum depth, cover...) fails on the largest frame, {@code deepest} deep. */
-    public record FrameCheckFails(CheckResult check, double deepest) implements Cause {
-    }
+    public record FrameCheckFails(CheckResult check, double deepest) implements Cause {}
 
     /** No bar layout fits the web at the widest width allowed. */
-    public record NoLayoutFits(double width) implements Cause {
-    }
+    public record NoLayoutFits(double width) implements Cause {}
 
     /** The strongest ductile layout on the largest frame ({@code strongestPhiMn}) is below Mu. */
-    public record FlexureFails(double width, double height, double mu) implements Cause {
-    }
+    public record FlexureFails(double width, double height, double mu) implements Cause {}
 
     /** Flexure can be met, but no stirrup option carries {@code vu}. */
-    public record ShearFails(double vu) implements Cause {
-    }
+    public record ShearFails(double vu) implements Cause {}
 
     /** Strength can be met but no layout passes every detailing check. */
-    public record DetailingFails() implements Cause {
-    }
+    public record DetailingFails() implements Cause {}
 
     /** A size at which the section designs. */
-    public record Fix(double width, double height) {
-    }
+    public record Fix(double width, double height) {}
 }

@@ -16,19 +16,19 @@ import java.util.List;
  * frame is.
  */
 public final class FrameEnumerator {
-    private FrameEnumerator() {
-    }
+    private FrameEnumerator() {}
 
     /** One cell of the width × height × stirrup size grid, with the detailing its stirrup bar sets. */
-    public record Cell(double width, double height, BarSize stirrupBar, Detailing detailing) {
-    }
+    public record Cell(double width, double height, BarSize stirrupBar, Detailing detailing) {}
 
     /**
      * @param detailing the input's cover, layer gap and exposure; each cell takes its own stirrup bar
      */
-    public static List<Cell> cells(List<Double> widths, List<Double> depths, Flange flange, SearchSpace space,
-            Detailing detailing) {
-        BarSize smallest = space.barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
+    public static List<Cell> cells(
+            List<Double> widths, List<Double> depths, Flange flange, SearchSpace space, Detailing detailing) {
+        BarSize smallest = space.barSizes().stream()
+                .min(Comparator.comparingDouble(BarSize::diameter))
+                .orElseThrow();
         List<Cell> out = new ArrayList<>();
         for (double width : widths) {
             for (double height : depths) {
@@ -36,8 +36,8 @@ public final class FrameEnumerator {
                     continue;
                 }
                 for (BarSize stirrupBar : space.stirrupSizes()) {
-                    Detailing det = new Detailing(detailing.cover(), stirrupBar, detailing.layerGap(),
-                            detailing.exposure());
+                    Detailing det =
+                            new Detailing(detailing.cover(), stirrupBar, detailing.layerGap(), detailing.exposure());
                     if (BarSpacing.roomFor(width, det, smallest)) {
                         out.add(new Cell(width, height, stirrupBar, det));
                     }

@@ -32,10 +32,10 @@ public final class OrTools {
     public static final String CACHE_PROPERTY = "barfit.native";
     /** Written last into a complete unpacked folder. */
     static final String COMPLETE = "complete";
+
     private static volatile boolean loaded;
 
-    private OrTools() {
-    }
+    private OrTools() {}
 
     /**
      * When the library is already unpacked in the folder of {@value #CACHE_PROPERTY}, starts loading it
@@ -48,16 +48,18 @@ public final class OrTools {
         if (loaded || cache == null || cache.isBlank()) {
             return;
         }
-        Thread t = new Thread(() -> {
-            try {
-                // finding the folder scans the class path: here, not on the thread that reads the input
-                if (Files.isRegularFile(cacheFolder(Path.of(cache)).resolve(COMPLETE))) {
-                    load();
-                }
-            } catch (IOException | RuntimeException | LinkageError e) {
-                // load() on the solving thread tries again and reports it
-            }
-        }, "barfit-native-load");
+        Thread t = new Thread(
+                () -> {
+                    try {
+                        // finding the folder scans the class path: here, not on the thread that reads the input
+                        if (Files.isRegularFile(cacheFolder(Path.of(cache)).resolve(COMPLETE))) {
+                            load();
+                        }
+                    } catch (IOException | RuntimeException | LinkageError e) {
+                        // load() on the solving thread tries again and reports it
+                    }
+                },
+                "barfit-native-load");
         t.setDaemon(true);
         t.start();
     }
@@ -108,7 +110,9 @@ public final class OrTools {
             if (!Files.isRegularFile(dir.resolve(COMPLETE))) {
                 unpack(jarOf(platformResource()), prefix(), base, dir);
             }
-            System.load(dir.resolve(System.mapLibraryName("jniortools")).toAbsolutePath().toString());
+            System.load(dir.resolve(System.mapLibraryName("jniortools"))
+                    .toAbsolutePath()
+                    .toString());
             return true;
         } catch (IOException | UnsatisfiedLinkError | RuntimeException e) {
             return false;
@@ -126,7 +130,8 @@ public final class OrTools {
 
     private static Path jarOf(URL url) throws IOException {
         try {
-            return Path.of(((JarURLConnection) url.openConnection()).getJarFileURL().toURI());
+            return Path.of(
+                    ((JarURLConnection) url.openConnection()).getJarFileURL().toURI());
         } catch (URISyntaxException | IllegalArgumentException e) {
             throw new IOException(e);
         }
@@ -142,12 +147,13 @@ public final class OrTools {
         Path tmp = Files.createTempDirectory(base, ".unpacking-");
         try {
             try {
-                Files.setPosixFilePermissions(tmp, PosixFilePermissions.fromString("rwxr-xr-x")); // as the jar beside it
+                Files.setPosixFilePermissions(
+                        tmp, PosixFilePermissions.fromString("rwxr-xr-x")); // as the jar beside it
             } catch (UnsupportedOperationException e) {
                 // not a POSIX file system: its defaults will do
             }
             try (JarFile jf = new JarFile(jar.toFile())) {
-                for (Enumeration<JarEntry> e = jf.entries(); e.hasMoreElements();) {
+                for (Enumeration<JarEntry> e = jf.entries(); e.hasMoreElements(); ) {
                     JarEntry entry = e.nextElement();
                     String name = entry.getName();
                     if (entry.isDirectory() || !name.startsWith(prefix)) {
@@ -198,8 +204,11 @@ public final class OrTools {
     public static CpSolver solver(SolverOptions o) {
         load();
         CpSolver solver = new CpSolver();
-        solver.getParameters().setNumWorkers(Math.max(1, o.workers())).setRandomSeed(o.seed())
-                .setMaxTimeInSeconds(o.timeLimitSeconds()).setLogSearchProgress(false);
+        solver.getParameters()
+                .setNumWorkers(Math.max(1, o.workers()))
+                .setRandomSeed(o.seed())
+                .setMaxTimeInSeconds(o.timeLimitSeconds())
+                .setLogSearchProgress(false);
         return solver;
     }
 

@@ -6,8 +6,15 @@ package barfit.design;
  * reports of the solve that gave the answer, the solver's workers and seed, and the counts of the search
  * that built the model ({@code S}: the section generator's, the span designer's, the schedule's).
  */
-public record Proof<S>(Status status, double objective, double bound, double gap, SolverStats solver, S search,
-        int workers, int seed) {
+public record Proof<S>(
+        Status status,
+        double objective,
+        double bound,
+        double gap,
+        SolverStats solver,
+        S search,
+        int workers,
+        int seed) {
 
     /** What the searches tell apart. A model CP-SAT finds invalid is a bug, never a status: {@link OrTools#status}. */
     public enum Status {
@@ -35,21 +42,48 @@ public record Proof<S>(Status status, double objective, double bound, double gap
     }
 
     /** A solved answer: objective and bound in whole units of {@code scale}, given in currency. */
-    public static <S> Proof<S> solved(Status status, long objective, long bound, CostModel.Scale scale,
-            SolverStats solver, S search, SolverOptions options) {
-        return new Proof<>(status, scale.currency(objective), scale.currency(bound), gap(objective, bound), solver,
-                search, options.workers(), options.seed());
+    public static <S> Proof<S> solved(
+            Status status,
+            long objective,
+            long bound,
+            CostModel.Scale scale,
+            SolverStats solver,
+            S search,
+            SolverOptions options) {
+        return new Proof<>(
+                status,
+                scale.currency(objective),
+                scale.currency(bound),
+                gap(objective, bound),
+                solver,
+                search,
+                options.workers(),
+                options.seed());
     }
 
     /** A design found but not proven ({@link Status#UNPROVEN}): its cost, no bound. */
     public static <S> Proof<S> unproven(long objective, CostModel.Scale scale, S search, SolverOptions options) {
-        return new Proof<>(Status.UNPROVEN, scale.currency(objective), Double.NaN, Double.NaN, SolverStats.NONE,
-                search, options.workers(), options.seed());
+        return new Proof<>(
+                Status.UNPROVEN,
+                scale.currency(objective),
+                Double.NaN,
+                Double.NaN,
+                SolverStats.NONE,
+                search,
+                options.workers(),
+                options.seed());
     }
 
     /** No answer ({@link Status#INFEASIBLE}, {@link Status#OUT_OF_TIME}): nothing to bound. */
     public static <S> Proof<S> none(Status status, S search, SolverOptions options) {
-        return new Proof<>(status, Double.NaN, Double.NaN, Double.NaN, SolverStats.NONE, search, options.workers(),
+        return new Proof<>(
+                status,
+                Double.NaN,
+                Double.NaN,
+                Double.NaN,
+                SolverStats.NONE,
+                search,
+                options.workers(),
                 options.seed());
     }
 

@@ -26,24 +26,65 @@ public record SearchSpace(
      */
     public static final int DEFAULT_BARS_PER_TWO_LEGS = 0;
 
-    public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
-            int maxLayers, List<BarSize> stirrupSizes, List<Integer> stirrupLegs, List<Double> stirrupSpacings,
-            boolean hangersOnly, BarSize fixedSkinBar) {
-        this(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
-                hangersOnly, fixedSkinBar, DEFAULT_BARS_PER_TWO_LEGS);
+    public SearchSpace(
+            List<Double> widths,
+            List<Double> depths,
+            List<BarSize> barSizes,
+            List<BarSize> compressionSizes,
+            int maxLayers,
+            List<BarSize> stirrupSizes,
+            List<Integer> stirrupLegs,
+            List<Double> stirrupSpacings,
+            boolean hangersOnly,
+            BarSize fixedSkinBar) {
+        this(
+                widths,
+                depths,
+                barSizes,
+                compressionSizes,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                fixedSkinBar,
+                DEFAULT_BARS_PER_TWO_LEGS);
     }
 
     /** A space with skin bars of its smallest bar size. */
-    public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
-            int maxLayers, List<BarSize> stirrupSizes, List<Integer> stirrupLegs, List<Double> stirrupSpacings,
+    public SearchSpace(
+            List<Double> widths,
+            List<Double> depths,
+            List<BarSize> barSizes,
+            List<BarSize> compressionSizes,
+            int maxLayers,
+            List<BarSize> stirrupSizes,
+            List<Integer> stirrupLegs,
+            List<Double> stirrupSpacings,
             boolean hangersOnly) {
-        this(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
-                hangersOnly, null);
+        this(
+                widths,
+                depths,
+                barSizes,
+                compressionSizes,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                null);
     }
 
     /** A space whose compression layer may be anything from the compression sizes. */
-    public SearchSpace(List<Double> widths, List<Double> depths, List<BarSize> barSizes, List<BarSize> compressionSizes,
-            int maxLayers, List<BarSize> stirrupSizes, List<Integer> stirrupLegs, List<Double> stirrupSpacings) {
+    public SearchSpace(
+            List<Double> widths,
+            List<Double> depths,
+            List<BarSize> barSizes,
+            List<BarSize> compressionSizes,
+            int maxLayers,
+            List<BarSize> stirrupSizes,
+            List<Integer> stirrupLegs,
+            List<Double> stirrupSpacings) {
         this(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings, false);
     }
 
@@ -58,23 +99,63 @@ public record SearchSpace(
     }
 
     public SearchSpace withWidths(List<Double> w) {
-        return new SearchSpace(w, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly, fixedSkinBar, barsPerTwoLegs);
+        return new SearchSpace(
+                w,
+                depths,
+                barSizes,
+                compressionSizes,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                fixedSkinBar,
+                barsPerTwoLegs);
     }
 
     public SearchSpace withDepths(List<Double> d) {
-        return new SearchSpace(widths, d, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly, fixedSkinBar, barsPerTwoLegs);
+        return new SearchSpace(
+                widths,
+                d,
+                barSizes,
+                compressionSizes,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                fixedSkinBar,
+                barsPerTwoLegs);
     }
 
     public SearchSpace withBarSizes(List<BarSize> bars, List<BarSize> comp) {
-        return new SearchSpace(widths, depths, bars, comp, maxLayers, stirrupSizes, stirrupLegs, stirrupSpacings,
-                hangersOnly, fixedSkinBar, barsPerTwoLegs);
+        return new SearchSpace(
+                widths,
+                depths,
+                bars,
+                comp,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                fixedSkinBar,
+                barsPerTwoLegs);
     }
 
     public SearchSpace withMaxLayers(int layers) {
-        return new SearchSpace(widths, depths, barSizes, compressionSizes, layers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly, fixedSkinBar, barsPerTwoLegs);
+        return new SearchSpace(
+                widths,
+                depths,
+                barSizes,
+                compressionSizes,
+                layers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                fixedSkinBar,
+                barsPerTwoLegs);
     }
 
     /**
@@ -83,8 +164,18 @@ public record SearchSpace(
      * compression steel beyond the hangers.
      */
     public SearchSpace withHangersOnly() {
-        return new SearchSpace(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, true, fixedSkinBar, barsPerTwoLegs);
+        return new SearchSpace(
+                widths,
+                depths,
+                barSizes,
+                compressionSizes,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                true,
+                fixedSkinBar,
+                barsPerTwoLegs);
     }
 
     /**
@@ -93,8 +184,18 @@ public record SearchSpace(
      */
     public SearchSpace withMainBars(List<BarSize> bars) {
         List<BarSize> comp = compressionSizes.stream().filter(bars::contains).toList();
-        return new SearchSpace(widths, depths, bars, comp.isEmpty() ? bars : comp, maxLayers, stirrupSizes,
-                stirrupLegs, stirrupSpacings, hangersOnly, skinBar(), barsPerTwoLegs);
+        return new SearchSpace(
+                widths,
+                depths,
+                bars,
+                comp.isEmpty() ? bars : comp,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                skinBar(),
+                barsPerTwoLegs);
     }
 
     /** The size of skin bars (9.7.2.3): the smallest bar size searched unless fixed. */
@@ -102,7 +203,9 @@ public record SearchSpace(
         if (fixedSkinBar != null) {
             return fixedSkinBar;
         }
-        return barSizes.stream().min(java.util.Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
+        return barSizes.stream()
+                .min(java.util.Comparator.comparingDouble(BarSize::diameter))
+                .orElseThrow();
     }
 
     /** Number of (width, depth, stirrup size) frames before any cap. */
@@ -112,8 +215,18 @@ public record SearchSpace(
 
     /** The same space with another legs rule: two legs hold up to {@code n} bars in a layer. */
     public SearchSpace withBarsPerTwoLegs(int n) {
-        return new SearchSpace(widths, depths, barSizes, compressionSizes, maxLayers, stirrupSizes, stirrupLegs,
-                stirrupSpacings, hangersOnly, fixedSkinBar, n);
+        return new SearchSpace(
+                widths,
+                depths,
+                barSizes,
+                compressionSizes,
+                maxLayers,
+                stirrupSizes,
+                stirrupLegs,
+                stirrupSpacings,
+                hangersOnly,
+                fixedSkinBar,
+                n);
     }
 
     /** The office's legs rule, or null when only the code's rules apply. */

@@ -48,14 +48,21 @@ public final class StirrupChooser {
      * Cheapest over a zone of the given length (whole sets, one per spacing started), or per metre when
      * {@code zoneLength} is 0.
      */
-    public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
-            double zoneLength) {
+    public Stirrups cheapest(
+            SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs, double zoneLength) {
         return cheapest(shape, det, d, as, vu, minLegs, Integer.MAX_VALUE, zoneLength);
     }
 
     /** As above with at most {@code maxLegs} legs (each leg's bend must hold a bar of each face). */
-    public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
-            int maxLegs, double zoneLength) {
+    public Stirrups cheapest(
+            SectionShape shape,
+            Detailing det,
+            double d,
+            double as,
+            Double vu,
+            int minLegs,
+            int maxLegs,
+            double zoneLength) {
         return cheapest(shape, det, d, as, vu, minLegs, maxLegs, Double.POSITIVE_INFINITY, zoneLength);
     }
 
@@ -63,11 +70,21 @@ public final class StirrupChooser {
      * As above with the spacing at most {@code maxSpacing} (the ties round compression steel that is relied
      * on, 9.7.6.4.3), or null when no spacing of the space is that close.
      */
-    public Stirrups cheapest(SectionShape shape, Detailing det, double d, double as, Double vu, int minLegs,
-            int maxLegs, double maxSpacing, double zoneLength) {
+    public Stirrups cheapest(
+            SectionShape shape,
+            Detailing det,
+            double d,
+            double as,
+            Double vu,
+            int minLegs,
+            int maxLegs,
+            double maxSpacing,
+            double zoneLength) {
         List<Double> spacings = space.stirrupSpacings();
         if (maxSpacing < spacings.get(spacings.size() - 1)) {
-            spacings = spacings.stream().filter(sp -> CheckResult.within(sp, maxSpacing)).toList();
+            spacings = spacings.stream()
+                    .filter(sp -> CheckResult.within(sp, maxSpacing))
+                    .toList();
             if (spacings.isEmpty()) {
                 return null;
             }
@@ -112,7 +129,8 @@ public final class StirrupChooser {
     private double cost(SectionShape shape, Stirrups st, double zoneLength) {
         return zoneLength > 0
                 ? Math.max(1, Math.ceil(zoneLength / st.spacing() - 1e-9))
-                        * cost.stirrupSetLength(shape.width(), shape.height(), st.bar(), st.legs()) * st.bar().massPerMetre()
+                        * cost.stirrupSetLength(shape.width(), shape.height(), st.bar(), st.legs())
+                        * st.bar().massPerMetre()
                 : cost.stirrups(shape.width(), shape.height(), st);
     }
 

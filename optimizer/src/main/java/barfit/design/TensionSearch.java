@@ -19,8 +19,7 @@ import java.util.List;
  */
 public final class TensionSearch {
     /** The outcome of trying every split of one count. */
-    public record Split(int[] counts, boolean anyDuctile) {
-    }
+    public record Split(int[] counts, boolean anyDuctile) {}
 
     private final SectionProbe probe;
     private final double mu;

@@ -6,5 +6,4 @@ import barfit.section.Demand;
 import barfit.section.Span;
 
 /** A beam of a {@code check} file: a given section and layout under a given demand. */
-public record CheckBeam(String id, Location location, BeamSection section, Demand demand, Span span) {
-}
+public record CheckBeam(String id, Location location, BeamSection section, Demand demand, Span span) {}

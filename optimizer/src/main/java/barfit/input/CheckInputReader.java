@@ -22,10 +22,10 @@ import java.util.Map;
 
 /** Reads a {@code check} file: settings plus beams with their sections, bars and demands. */
 public final class CheckInputReader {
-    static final String[] BEAM_KEYS = {"id", "section", "bottom", "top", "Mu", "Vu", "stirrups", "skin", "span", "ends"};
+    static final String[] BEAM_KEYS = {"id", "section", "bottom", "top", "Mu", "Vu", "stirrups", "skin", "span", "ends"
+    };
 
-    private CheckInputReader() {
-    }
+    private CheckInputReader() {}
 
     public static CheckInput read(Path file) {
         YFields doc = SettingsReader.root(YamlReader.read(file));
@@ -43,16 +43,22 @@ public final class CheckInputReader {
             String id = SettingsReader.id(b);
             Integer first = ids.putIfAbsent(id, b.location().line());
             if (first != null) {
-                throw b.error("id", "beam id \"" + Echo.cut(id) + "\" is used twice (first at line " + first + "); expected unique ids");
+                throw b.error(
+                        "id",
+                        "beam id \"" + Echo.cut(id) + "\" is used twice (first at line " + first
+                                + "); expected unique ids");
             }
             // a beam's own stirrup bar sets where its bars sit (cover + stirrup + db/2), so it is read first
-            Stirrups stirrups = b.has("stirrups") ? common.stirrups(b.map("stirrups", "stirrups: {bar, legs, spacing}")) : null;
+            Stirrups stirrups =
+                    b.has("stirrups") ? common.stirrups(b.map("stirrups", "stirrups: {bar, legs, spacing}")) : null;
             SectionReader sr = stirrups == null ? common : new SectionReader(settings.withStirrupBar(stirrups.bar()));
             Span span = sr.span(b); // the flange's effective width depends on it
             SectionShape shape = sr.shape(b.map("section", "the section: {width, height}"), span);
             if (!b.has("bottom") && !b.has("top")) {
-                throw new InputError(b.location(), b.path() + ": beam " + id
-                        + " has no bars; expected bottom: [{bar, count}] and/or top: [{bar, count}]");
+                throw new InputError(
+                        b.location(),
+                        b.path() + ": beam " + id
+                                + " has no bars; expected bottom: [{bar, count}] and/or top: [{bar, count}]");
             }
             List<BarLayer> bottom = b.has("bottom") ? sr.layers(b, "bottom", Face.BOTTOM, shape) : List.of();
             List<BarLayer> top = b.has("top") ? sr.layers(b, "top", Face.TOP, shape) : List.of();
@@ -60,7 +66,8 @@ public final class CheckInputReader {
             List<BarLayer> layers = new ArrayList<>(bottom);
             layers.addAll(top);
             Double mu = b.optNumber("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)")
-                    .map(v -> u.toSI(InputLimits.require(b, "Mu", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
+                    .map(v -> u.toSI(InputLimits.require(b, "Mu", InputLimits.MOMENT, u, v), Dim.MOMENT))
+                    .orElse(null);
             Double vu = null;
             if (b.has("Vu")) {
                 double v = b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE));

@@ -34,9 +34,26 @@ import java.util.Map;
  */
 public final class CsvBeamsReader {
     static final List<String> REQUIRED = List.of("id", "span", "ends");
-    static final List<String> KNOWN = List.of("id", "span", "ends", "m_left", "m_mid", "m_right", "vu", "v_left",
-            "v_right", "max_depth", "group", "flange_width", "flange_thickness", "flange_type",
-            "flange_clear_to_next_web", "dead", "live", "sustained_live", "width");
+    static final List<String> KNOWN = List.of(
+            "id",
+            "span",
+            "ends",
+            "m_left",
+            "m_mid",
+            "m_right",
+            "vu",
+            "v_left",
+            "v_right",
+            "max_depth",
+            "group",
+            "flange_width",
+            "flange_thickness",
+            "flange_type",
+            "flange_clear_to_next_web",
+            "dead",
+            "live",
+            "sustained_live",
+            "width");
 
     private final Path file;
     private final Settings settings;
@@ -51,20 +68,18 @@ public final class CsvBeamsReader {
     }
 
     /** One cell: its text and where it starts. */
-    private record Cell(String text, int line, int column) {
-    }
+    private record Cell(String text, int line, int column) {}
 
     /** One data row by column name. */
-    private record Row(int line, Map<String, Cell> cells) {
-    }
+    private record Row(int line, Map<String, Cell> cells) {}
 
     public static List<DesignBeam> read(Path file, Settings settings, double widestWeb) {
         return new CsvBeamsReader(file, settings, widestWeb).read();
     }
 
     /** What to do with a CSV over {@link InputFiles#CSV_MAX_BYTES}. */
-    static final String TOO_LARGE_ADVICE = "expected a smaller file: split the beams into several schedules "
-            + "(by level or by beam line)";
+    static final String TOO_LARGE_ADVICE =
+            "expected a smaller file: split the beams into several schedules " + "(by level or by beam line)";
 
     /**
      * Reads and checks the file row by row as it streams in: the first bad cell stops the reading, so a
@@ -75,7 +90,8 @@ public final class CsvBeamsReader {
         int headerLine = 0;
         List<DesignBeam> out = new ArrayList<>();
         Map<String, Integer> ids = new HashMap<>();
-        try (InputFiles.Lines lines = InputFiles.lines(file, "a CSV file", InputFiles.CSV_MAX_BYTES, TOO_LARGE_ADVICE)) {
+        try (InputFiles.Lines lines =
+                InputFiles.lines(file, "a CSV file", InputFiles.CSV_MAX_BYTES, TOO_LARGE_ADVICE)) {
             String line;
             while ((line = lines.next()) != null) {
                 int no = lines.lineNumber();
@@ -93,9 +109,14 @@ public final class CsvBeamsReader {
                 }
                 if (cells.size() != header.size()) {
                     Cell at = cells.size() > header.size() ? cells.get(header.size()) : cells.get(cells.size() - 1);
-                    throw error(at, "this row has " + cells.size() + " cells but the header (line " + headerLine
-                            + ") has " + header.size() + (separatorHint(line).isEmpty() ? "; expected one cell per "
-                            + "column (leave a cell empty when it does not apply)" : separatorHint(line)));
+                    throw error(
+                            at,
+                            "this row has " + cells.size() + " cells but the header (line " + headerLine
+                                    + ") has " + header.size()
+                                    + (separatorHint(line).isEmpty()
+                                            ? "; expected one cell per "
+                                                    + "column (leave a cell empty when it does not apply)"
+                                            : separatorHint(line)));
                 }
                 Map<String, Cell> byName = new LinkedHashMap<>();
                 for (int c = 0; c < cells.size(); c++) {
@@ -105,18 +126,22 @@ public final class CsvBeamsReader {
                 DesignBeam b = beam(r);
                 Integer first = ids.putIfAbsent(b.id(), r.line());
                 if (first != null) {
-                    throw error(r.cells().get("id"), "beam id \"" + Echo.cut(b.id()) + "\" is used twice (first at line "
-                            + first + "); expected unique ids");
+                    throw error(
+                            r.cells().get("id"),
+                            "beam id \"" + Echo.cut(b.id()) + "\" is used twice (first at line " + first
+                                    + "); expected unique ids");
                 }
                 out.add(b);
             }
         }
         if (header == null) {
-            throw new InputError(new Location(file.toString(), 1, 1), "empty; expected a header row and one row per beam");
+            throw new InputError(
+                    new Location(file.toString(), 1, 1), "empty; expected a header row and one row per beam");
         }
         if (out.isEmpty()) {
-            throw new InputError(new Location(file.toString(), headerLine, 1), "no beams after the header; expected one "
-                    + "row per beam");
+            throw new InputError(
+                    new Location(file.toString(), headerLine, 1),
+                    "no beams after the header; expected one " + "row per beam");
         }
         return out;
     }
@@ -128,8 +153,12 @@ public final class CsvBeamsReader {
             String name = c.text().strip().toLowerCase(Locale.ROOT);
             if (!KNOWN.contains(name)) {
                 String separator = separatorHint(c.text());
-                throw error(c, "unknown column '" + Echo.cut(c.text().strip()) + "'" + (separator.isEmpty()
-                        ? "; expected columns from: " + String.join(", ", KNOWN) : separator));
+                throw error(
+                        c,
+                        "unknown column '" + Echo.cut(c.text().strip()) + "'"
+                                + (separator.isEmpty()
+                                        ? "; expected columns from: " + String.join(", ", KNOWN)
+                                        : separator));
             }
             if (header.contains(name)) {
                 throw error(c, "column '" + Echo.cut(name) + "' appears twice");
@@ -138,8 +167,9 @@ public final class CsvBeamsReader {
         }
         for (String r : REQUIRED) {
             if (!header.contains(r)) {
-                throw new InputError(new Location(file.toString(), no, 1), "the header has no '" + r
-                        + "' column; expected at least: " + String.join(", ", REQUIRED));
+                throw new InputError(
+                        new Location(file.toString(), no, 1),
+                        "the header has no '" + r + "' column; expected at least: " + String.join(", ", REQUIRED));
             }
         }
         if (header.contains("vu") && (header.contains("v_left") || header.contains("v_right"))) {
@@ -190,15 +220,17 @@ public final class CsvBeamsReader {
                     j++;
                 }
                 if (!closed) {
-                    throw new InputError(new Location(file.toString(), no, start + 1), "a quoted cell is not closed; "
-                            + "expected a closing \"");
+                    throw new InputError(
+                            new Location(file.toString(), no, start + 1),
+                            "a quoted cell is not closed; " + "expected a closing \"");
                 }
                 while (j < n && line.charAt(j) == ' ') {
                     j++;
                 }
                 if (j < n && line.charAt(j) != ',') {
-                    throw new InputError(new Location(file.toString(), no, j + 1), "text after a quoted cell; expected "
-                            + "a comma");
+                    throw new InputError(
+                            new Location(file.toString(), no, j + 1),
+                            "text after a quoted cell; expected " + "a comma");
                 }
             } else {
                 while (j < n && line.charAt(j) != ',') {
@@ -234,8 +266,10 @@ public final class CsvBeamsReader {
             throw error(c, column + ": expected a number (" + what + "), got \"" + Echo.cut(c.text()) + "\"");
         }
         if (Double.isInfinite(v)) {
-            throw error(c, column + ": expected a number (" + what + "), got \"" + Echo.cut(c.text())
-                    + "\", too large a number");
+            throw error(
+                    c,
+                    column + ": expected a number (" + what + "), got \"" + Echo.cut(c.text())
+                            + "\", too large a number");
         }
         return v;
     }
@@ -254,8 +288,9 @@ public final class CsvBeamsReader {
     private Double positive(Row r, String column, String what, Dim dim, InputLimits.Range range) {
         Double v = number(r, column, what);
         if (v != null && v <= 0) {
-            throw error(r.cells().get(column), column + ": expected a positive number (" + what + "), got "
-                    + SettingsReader.fmt(v));
+            throw error(
+                    r.cells().get(column),
+                    column + ": expected a positive number (" + what + "), got " + SettingsReader.fmt(v));
         }
         inRange(r, column, v, range);
         return v == null ? null : u.toSI(v, dim);
@@ -264,8 +299,9 @@ public final class CsvBeamsReader {
     private Double nonNegative(Row r, String column, String what, Dim dim, InputLimits.Range range) {
         Double v = number(r, column, what);
         if (v != null && v < 0) {
-            throw error(r.cells().get(column), column + ": expected zero or more (" + what + "), got "
-                    + SettingsReader.fmt(v));
+            throw error(
+                    r.cells().get(column),
+                    column + ": expected zero or more (" + what + "), got " + SettingsReader.fmt(v));
         }
         inRange(r, column, v, range);
         return v == null ? null : u.toSI(v, dim);
@@ -286,8 +322,10 @@ public final class CsvBeamsReader {
         Cell endsCell = r.cells().get("ends");
         EndCondition ends = empty(endsCell) ? null : EndCondition.byKey(endsCell.text());
         if (ends == null) {
-            throw error(endsCell, "ends: expected simple, one-end-continuous, both-ends-continuous or cantilever, got \""
-                    + endsCell.text() + "\"");
+            throw error(
+                    endsCell,
+                    "ends: expected simple, one-end-continuous, both-ends-continuous or cantilever, got \""
+                            + endsCell.text() + "\"");
         }
         String moment = "factored moment, " + u.unit(Dim.MOMENT);
         Double ml = siOrNull(inRange(r, "m_left", number(r, "m_left", moment), InputLimits.MOMENT), Dim.MOMENT);
@@ -303,8 +341,10 @@ public final class CsvBeamsReader {
                 need(r, "m_mid", mm, "a span continuous at one end needs m_mid and m_left or m_right");
                 if ((ml == null) == (mr == null)) {
                     Cell at = r.cells().get(ml == null ? "m_left" : "m_right");
-                    throw error(at == null ? endsCell : at, "one-end-continuous: expected exactly one support moment, "
-                            + "m_left or m_right (the continuous end)");
+                    throw error(
+                            at == null ? endsCell : at,
+                            "one-end-continuous: expected exactly one support moment, "
+                                    + "m_left or m_right (the continuous end)");
                 }
             }
             case BOTH_ENDS_CONTINUOUS -> {
@@ -319,12 +359,14 @@ public final class CsvBeamsReader {
             }
         }
         if (ml != null && ml > 0) {
-            throw error(r.cells().get("m_left"), "m_left: a support moment is hogging; expected a negative value "
-                    + "(top in tension)");
+            throw error(
+                    r.cells().get("m_left"),
+                    "m_left: a support moment is hogging; expected a negative value " + "(top in tension)");
         }
         if (mr != null && mr > 0) {
-            throw error(r.cells().get("m_right"), "m_right: a support moment is hogging; expected a negative value "
-                    + "(top in tension)");
+            throw error(
+                    r.cells().get("m_right"),
+                    "m_right: a support moment is hogging; expected a negative value " + "(top in tension)");
         }
         if (mm != null && mm < 0) {
             throw error(r.cells().get("m_mid"), "m_mid: the mid-span moment is sagging; expected a positive value");
@@ -345,27 +387,41 @@ public final class CsvBeamsReader {
             vl = nonNegative(r, "v_left", shear, Dim.FORCE, InputLimits.SHEAR);
             vr = nonNegative(r, "v_right", shear, Dim.FORCE, InputLimits.SHEAR);
             if (ends == EndCondition.CANTILEVER && vr != null) {
-                throw error(r.cells().get("v_right"), "v_right: a cantilever has its shear at the fixed (left) end "
-                        + "only; leave v_right empty");
+                throw error(
+                        r.cells().get("v_right"),
+                        "v_right: a cantilever has its shear at the fixed (left) end " + "only; leave v_right empty");
             }
         }
-        Double cap = positive(r, "max_depth", "the headroom cap on the total height, " + u.unit(Dim.LENGTH), Dim.LENGTH,
+        Double cap = positive(
+                r,
+                "max_depth",
+                "the headroom cap on the total height, " + u.unit(Dim.LENGTH),
+                Dim.LENGTH,
                 InputLimits.HEIGHT);
-        Double width = positive(r, "width", "the fixed web width, " + u.unit(Dim.LENGTH), Dim.LENGTH,
-                InputLimits.WEB_WIDTH);
+        Double width =
+                positive(r, "width", "the fixed web width, " + u.unit(Dim.LENGTH), Dim.LENGTH, InputLimits.WEB_WIDTH);
         Cell groupCell = r.cells().get("group");
         String group = empty(groupCell) ? null : groupCell.text();
-        Double bf = positive(r, "flange_width", "the flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH,
-                InputLimits.FLANGE_WIDTH);
-        Double hf = positive(r, "flange_thickness", "the slab thickness, " + u.unit(Dim.LENGTH), Dim.LENGTH,
+        Double bf = positive(
+                r, "flange_width", "the flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH, InputLimits.FLANGE_WIDTH);
+        Double hf = positive(
+                r,
+                "flange_thickness",
+                "the slab thickness, " + u.unit(Dim.LENGTH),
+                Dim.LENGTH,
                 InputLimits.FLANGE_THICKNESS);
-        Double sw = positive(r, "flange_clear_to_next_web", "the clear distance from the web to the next web, "
-                + u.unit(Dim.LENGTH), Dim.LENGTH, InputLimits.WEB_GAP);
+        Double sw = positive(
+                r,
+                "flange_clear_to_next_web",
+                "the clear distance from the web to the next web, " + u.unit(Dim.LENGTH),
+                Dim.LENGTH,
+                InputLimits.WEB_GAP);
         Flange flange = null;
         if ((bf == null) != (hf == null)) {
             String missing = bf == null ? "flange_width" : "flange_thickness";
             Cell at = r.cells().get(missing);
-            throw error(at == null ? r.cells().get(bf == null ? "flange_thickness" : "flange_width") : at,
+            throw error(
+                    at == null ? r.cells().get(bf == null ? "flange_thickness" : "flange_width") : at,
                     missing + ": a flange needs both flange_width and flange_thickness");
         }
         if (bf != null) {
@@ -373,9 +429,12 @@ public final class CsvBeamsReader {
             // the report says what 24.3.4 asks of the top bars, as for a support of any span
             double web = width != null ? width : widestWeb;
             if (bf < web) {
-                throw error(r.cells().get("flange_width"), "flange_width: the flange (" + u.compact(bf, Dim.LENGTH)
-                        + " " + u.unit(Dim.LENGTH) + ") is narrower than the web (" + u.compact(web, Dim.LENGTH) + " "
-                        + u.unit(Dim.LENGTH) + "); expected flange width >= web width");
+                throw error(
+                        r.cells().get("flange_width"),
+                        "flange_width: the flange (" + u.compact(bf, Dim.LENGTH)
+                                + " " + u.unit(Dim.LENGTH) + ") is narrower than the web (" + u.compact(web, Dim.LENGTH)
+                                + " "
+                                + u.unit(Dim.LENGTH) + "); expected flange width >= web width");
             }
             Cell type = r.cells().get("flange_type");
             boolean oneSided = false;
@@ -383,41 +442,47 @@ public final class CsvBeamsReader {
                 if (type.text().equals("L")) {
                     oneSided = true;
                 } else if (!type.text().equals("T")) {
-                    throw error(type, "flange_type: expected T (slab on both sides) or L (one side), got \""
-                            + type.text() + "\"");
+                    throw error(
+                            type,
+                            "flange_type: expected T (slab on both sides) or L (one side), got \"" + type.text()
+                                    + "\"");
                 }
             }
             flange = Flange.given(bf, hf, oneSided, sw, span);
         } else if (!empty(r.cells().get("flange_type"))) {
             throw error(r.cells().get("flange_type"), "flange_type: given without flange_width and flange_thickness");
         } else if (sw != null) {
-            throw error(r.cells().get("flange_clear_to_next_web"),
+            throw error(
+                    r.cells().get("flange_clear_to_next_web"),
                     "flange_clear_to_next_web: given without flange_width and flange_thickness");
         }
         String load = "service load, " + u.unit(Dim.LINE_LOAD);
-        Double dead = positive(r, "dead", "the service dead load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD,
-                InputLimits.LINE_LOAD);
-        Double live = nonNegative(r, "live", "the service live load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD,
-                InputLimits.LINE_LOAD);
+        Double dead = positive(
+                r, "dead", "the service dead load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD, InputLimits.LINE_LOAD);
+        Double live = nonNegative(
+                r, "live", "the service live load, " + u.unit(Dim.LINE_LOAD), Dim.LINE_LOAD, InputLimits.LINE_LOAD);
         Double sustained = number(r, "sustained_live", "the sustained part of the live load, 0 to 1");
         SpanChecks.ServiceLoads service = null;
         if (dead != null || live != null) {
             if (dead == null || live == null) {
                 String missing = dead == null ? "dead" : "live";
                 Cell at = r.cells().get(missing);
-                throw error(at == null ? r.cells().get(dead == null ? "live" : "dead") : at, missing
-                        + ": service loads need both dead and live (" + load + ")");
+                throw error(
+                        at == null ? r.cells().get(dead == null ? "live" : "dead") : at,
+                        missing + ": service loads need both dead and live (" + load + ")");
             }
             if (sustained != null && (sustained < 0 || sustained > 1)) {
-                throw error(r.cells().get("sustained_live"), "sustained_live: expected the sustained part of the live "
-                        + "load from 0 to 1, got " + SettingsReader.fmt(sustained));
+                throw error(
+                        r.cells().get("sustained_live"),
+                        "sustained_live: expected the sustained part of the live " + "load from 0 to 1, got "
+                                + SettingsReader.fmt(sustained));
             }
             service = new SpanChecks.ServiceLoads(dead, live, sustained == null ? 0 : sustained);
         } else if (sustained != null) {
             throw error(r.cells().get("sustained_live"), "sustained_live: given without dead and live loads");
         }
-        DesignBeam.WholeSpan whole = new DesignBeam.WholeSpan(ml, mm, mr, vl, vr, service, SpanChecks.Limits.DEFAULT,
-                false);
+        DesignBeam.WholeSpan whole =
+                new DesignBeam.WholeSpan(ml, mm, mr, vl, vr, service, SpanChecks.Limits.DEFAULT, false);
         return new DesignBeam(id, where, 0, null, cap, width, flange, new Span(span, ends), whole, group);
     }
 
@@ -429,8 +494,8 @@ public final class CsvBeamsReader {
         if (v == null) {
             Cell at = r.cells().get(column);
             if (at == null) {
-                throw new InputError(new Location(file.toString(), r.line(), 1), "missing column '" + column + "'; "
-                        + message);
+                throw new InputError(
+                        new Location(file.toString(), r.line(), 1), "missing column '" + column + "'; " + message);
             }
             throw error(at, column + ": empty; " + message);
         }

@@ -11,17 +11,32 @@ import barfit.section.SpanChecks;
  * the flange, and the span (for the cost over the length and, with ends, the depth rule). {@code group}
  * names beams a schedule may make share one section size (null: none).
  */
-public record DesignBeam(String id, Location location, double mu, Double vu, Double maxDepth, Double width,
-        Flange flange, Span span, WholeSpan whole, String group) {
+public record DesignBeam(
+        String id,
+        Location location,
+        double mu,
+        Double vu,
+        Double maxDepth,
+        Double width,
+        Flange flange,
+        Span span,
+        WholeSpan whole,
+        String group) {
 
     /**
      * The parts of a whole span: moments at the left support, mid-span and right support (N·mm, null
      * where absent), shears at d from each face (N, null where absent), service loads (or null),
      * deflection limits, and whether the bottom bars are anchored at the supports.
      */
-    public record WholeSpan(Double mLeft, Double mMid, Double mRight, Double vLeft, Double vRight,
-            SpanChecks.ServiceLoads service, SpanChecks.Limits limits, boolean bottomAnchored) {
-    }
+    public record WholeSpan(
+            Double mLeft,
+            Double mMid,
+            Double mRight,
+            Double vLeft,
+            Double vRight,
+            SpanChecks.ServiceLoads service,
+            SpanChecks.Limits limits,
+            boolean bottomAnchored) {}
 
     public boolean isWhole() {
         return whole != null;

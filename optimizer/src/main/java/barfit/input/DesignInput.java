@@ -5,8 +5,15 @@ import barfit.design.SearchSpace;
 import java.util.List;
 
 /** A whole {@code design} file: settings, the search space, the cost rates and the beams. */
-public record DesignInput(Settings settings, SearchSpace space, CostRates rates, String currency,
-        List<DesignBeam> beams, int maxBarSizesPerBeam, int barsPerTwoLegs, SearchReader.Costs costs) {
+public record DesignInput(
+        Settings settings,
+        SearchSpace space,
+        CostRates rates,
+        String currency,
+        List<DesignBeam> beams,
+        int maxBarSizesPerBeam,
+        int barsPerTwoLegs,
+        SearchReader.Costs costs) {
     public DesignInput {
         beams = List.copyOf(beams);
     }

@@ -22,11 +22,24 @@ import java.util.Map;
  * section) or {@code moments} (a whole span with its supports).
  */
 public final class DesignInputReader {
-    static final String[] BEAM_KEYS = {"id", "Mu", "Vu", "max_depth", "width", "flange", "span", "ends", "moments",
-        "shear", "service", "deflection_limits", "bottom_anchored_at_supports", "group"};
+    static final String[] BEAM_KEYS = {
+        "id",
+        "Mu",
+        "Vu",
+        "max_depth",
+        "width",
+        "flange",
+        "span",
+        "ends",
+        "moments",
+        "shear",
+        "service",
+        "deflection_limits",
+        "bottom_anchored_at_supports",
+        "group"
+    };
 
-    private DesignInputReader() {
-    }
+    private DesignInputReader() {}
 
     public static DesignInput read(Path file) {
         return read(file, true);
@@ -58,17 +71,23 @@ public final class DesignInputReader {
             String id = SettingsReader.id(b);
             Integer first = ids.putIfAbsent(id, b.location().line());
             if (first != null) {
-                throw b.error("id", "beam id \"" + Echo.cut(id) + "\" is used twice (first at line " + first + "); expected unique ids");
+                throw b.error(
+                        "id",
+                        "beam id \"" + Echo.cut(id) + "\" is used twice (first at line " + first
+                                + "); expected unique ids");
             }
             String group = b.has("group") ? b.text("group", "the group of beams that may share a section size") : null;
             Double cap = sr.optLength(b, "max_depth", "the headroom cap on the total height", InputLimits.HEIGHT)
                     .orElse(null);
-            Double width = sr.optLength(b, "width", "the fixed web width", InputLimits.WEB_WIDTH).orElse(null);
+            Double width = sr.optLength(b, "width", "the fixed web width", InputLimits.WEB_WIDTH)
+                    .orElse(null);
             Span span = sr.span(b); // the flange's effective width depends on it
             Flange flange = null;
             if (b.has("flange")) {
                 YFields ff = b.map("flange", "the flange: {width, thickness}");
-                double minWeb = width != null ? width : space.widths().get(space.widths().size() - 1);
+                double minWeb = width != null
+                        ? width
+                        : space.widths().get(space.widths().size() - 1);
                 flange = sr.flange(ff, minWeb, span);
             }
             boolean whole = b.has("moments");
@@ -78,17 +97,36 @@ public final class DesignInputReader {
             if (!whole) {
                 for (String k : new String[] {"shear", "service", "deflection_limits", "bottom_anchored_at_supports"}) {
                     if (b.has(k)) {
-                        throw b.error(k, "'" + k + "' belongs to a whole span; expected moments: {left, mid, right} with it");
+                        throw b.error(
+                                k, "'" + k + "' belongs to a whole span; expected moments: {left, mid, right} with it");
                     }
                 }
                 if (!b.has("Mu")) {
-                    throw new InputError(b.location(), b.path() + ": missing key 'Mu'; expected the factored moment, "
-                            + u.unit(Dim.MOMENT) + " (one section), or moments: {left, mid, right} (a whole span)");
+                    throw new InputError(
+                            b.location(),
+                            b.path() + ": missing key 'Mu'; expected the factored moment, " + u.unit(Dim.MOMENT)
+                                    + " (one section), or moments: {left, mid, right} (a whole span)");
                 }
-                double mu = u.toSI(InputLimits.require(b, "Mu", InputLimits.MOMENT, u,
-                        b.number("Mu", "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)")), Dim.MOMENT);
-                Double vu = b.has("Vu") ? u.toSI(InputLimits.require(b, "Vu", InputLimits.SHEAR, u,
-                        b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE))), Dim.FORCE) : null;
+                double mu = u.toSI(
+                        InputLimits.require(
+                                b,
+                                "Mu",
+                                InputLimits.MOMENT,
+                                u,
+                                b.number(
+                                        "Mu",
+                                        "the factored moment, " + u.unit(Dim.MOMENT) + " (+ sagging, − hogging)")),
+                        Dim.MOMENT);
+                Double vu = b.has("Vu")
+                        ? u.toSI(
+                                InputLimits.require(
+                                        b,
+                                        "Vu",
+                                        InputLimits.SHEAR,
+                                        u,
+                                        b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE))),
+                                Dim.FORCE)
+                        : null;
                 out.add(new DesignBeam(id, b.location(), mu, vu, cap, width, flange, span, null, group));
                 continue;
             }
@@ -96,10 +134,13 @@ public final class DesignInputReader {
                 throw b.error("Vu", "a whole span gives its shears as shear: {left, right}, not Vu");
             }
             if (span == null || span.ends() == null) {
-                throw new InputError(b.location(), b.path() + ": a whole span needs span: <clear span, "
-                        + u.unit(Dim.SPAN) + "> and ends: simple | one-end-continuous | both-ends-continuous | cantilever");
+                throw new InputError(
+                        b.location(),
+                        b.path() + ": a whole span needs span: <clear span, " + u.unit(Dim.SPAN)
+                                + "> and ends: simple | one-end-continuous | both-ends-continuous | cantilever");
             }
-            out.add(new DesignBeam(id, b.location(), 0, null, cap, width, flange, span, whole(b, span.ends(), u), group));
+            out.add(new DesignBeam(
+                    id, b.location(), 0, null, cap, width, flange, span, whole(b, span.ends(), u), group));
         }
         return new DesignInput(settings, space, costs.rates(), costs.currency(), out, maxSizes, barsPerTwoLegs, costs);
     }
@@ -108,11 +149,14 @@ public final class DesignInputReader {
         YFields m = b.map("moments", "the factored moments {left, mid, right}").allowOnly("left", "mid", "right");
         String unit = u.unit(Dim.MOMENT);
         Double left = m.optNumber("left", "the factored moment at the left support, " + unit)
-                .map(v -> u.toSI(InputLimits.require(m, "left", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
+                .map(v -> u.toSI(InputLimits.require(m, "left", InputLimits.MOMENT, u, v), Dim.MOMENT))
+                .orElse(null);
         Double mid = m.optNumber("mid", "the factored moment at mid-span, " + unit)
-                .map(v -> u.toSI(InputLimits.require(m, "mid", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
+                .map(v -> u.toSI(InputLimits.require(m, "mid", InputLimits.MOMENT, u, v), Dim.MOMENT))
+                .orElse(null);
         Double right = m.optNumber("right", "the factored moment at the right support, " + unit)
-                .map(v -> u.toSI(InputLimits.require(m, "right", InputLimits.MOMENT, u, v), Dim.MOMENT)).orElse(null);
+                .map(v -> u.toSI(InputLimits.require(m, "right", InputLimits.MOMENT, u, v), Dim.MOMENT))
+                .orElse(null);
         switch (ends) {
             case SIMPLE -> {
                 need(m, mid, "mid", "a simple span needs moments: {mid}");
@@ -122,8 +166,10 @@ public final class DesignInputReader {
             case ONE_END_CONTINUOUS -> {
                 need(m, mid, "mid", "a span continuous at one end needs moments: {mid} and left or right");
                 if ((left == null) == (right == null)) {
-                    throw m.error(left == null ? "left" : "right", "one-end-continuous: expected exactly one support "
-                            + "moment, left or right (the continuous end)");
+                    throw m.error(
+                            left == null ? "left" : "right",
+                            "one-end-continuous: expected exactly one support "
+                                    + "moment, left or right (the continuous end)");
                 }
             }
             case BOTH_ENDS_CONTINUOUS -> {
@@ -155,11 +201,29 @@ public final class DesignInputReader {
         Double vl = null;
         Double vr = null;
         if (b.has("shear")) {
-            YFields v = b.map("shear", "the factored shears at d from the faces {left, right}").allowOnly("left", "right");
-            vl = v.has("left") ? u.toSI(InputLimits.require(v, "left", InputLimits.SHEAR, u,
-                    v.nonNegative("left", "the factored shear at the left end, " + u.unit(Dim.FORCE))), Dim.FORCE) : null;
-            vr = v.has("right") ? u.toSI(InputLimits.require(v, "right", InputLimits.SHEAR, u,
-                    v.nonNegative("right", "the factored shear at the right end, " + u.unit(Dim.FORCE))), Dim.FORCE) : null;
+            YFields v = b.map("shear", "the factored shears at d from the faces {left, right}")
+                    .allowOnly("left", "right");
+            vl = v.has("left")
+                    ? u.toSI(
+                            InputLimits.require(
+                                    v,
+                                    "left",
+                                    InputLimits.SHEAR,
+                                    u,
+                                    v.nonNegative("left", "the factored shear at the left end, " + u.unit(Dim.FORCE))),
+                            Dim.FORCE)
+                    : null;
+            vr = v.has("right")
+                    ? u.toSI(
+                            InputLimits.require(
+                                    v,
+                                    "right",
+                                    InputLimits.SHEAR,
+                                    u,
+                                    v.nonNegative(
+                                            "right", "the factored shear at the right end, " + u.unit(Dim.FORCE))),
+                            Dim.FORCE)
+                    : null;
             if (ends == EndCondition.CANTILEVER && vr != null) {
                 throw v.error("right", "a cantilever has its shear at the fixed (left) end only");
             }
@@ -167,14 +231,28 @@ public final class DesignInputReader {
         SpanChecks.ServiceLoads service = null;
         if (b.has("service")) {
             YFields s = b.map("service", "service loads {dead, live}").allowOnly("dead", "live", "sustained_live");
-            double dead = u.toSI(InputLimits.require(s, "dead", InputLimits.LINE_LOAD, u,
-                    s.positive("dead", "service dead load, " + u.unit(Dim.LINE_LOAD))), Dim.LINE_LOAD);
-            double live = u.toSI(InputLimits.require(s, "live", InputLimits.LINE_LOAD, u,
-                    s.nonNegative("live", "service live load, " + u.unit(Dim.LINE_LOAD))), Dim.LINE_LOAD);
-            double sus = s.optNumber("sustained_live", "the sustained part of the live load, 0 to 1").orElse(0.0);
+            double dead = u.toSI(
+                    InputLimits.require(
+                            s,
+                            "dead",
+                            InputLimits.LINE_LOAD,
+                            u,
+                            s.positive("dead", "service dead load, " + u.unit(Dim.LINE_LOAD))),
+                    Dim.LINE_LOAD);
+            double live = u.toSI(
+                    InputLimits.require(
+                            s,
+                            "live",
+                            InputLimits.LINE_LOAD,
+                            u,
+                            s.nonNegative("live", "service live load, " + u.unit(Dim.LINE_LOAD))),
+                    Dim.LINE_LOAD);
+            double sus = s.optNumber("sustained_live", "the sustained part of the live load, 0 to 1")
+                    .orElse(0.0);
             if (sus < 0 || sus > 1) {
-                throw s.error("sustained_live", "expected the sustained part of the live load from 0 to 1, got "
-                        + SettingsReader.fmt(sus));
+                throw s.error(
+                        "sustained_live",
+                        "expected the sustained part of the live load from 0 to 1, got " + SettingsReader.fmt(sus));
             }
             service = new SpanChecks.ServiceLoads(dead, live, sus);
         }
@@ -182,10 +260,13 @@ public final class DesignInputReader {
         if (b.has("deflection_limits")) {
             YFields d = b.map("deflection_limits", "deflection limits as span divisors {live, total}")
                     .allowOnly("live", "total");
-            limits = new SpanChecks.Limits(d.optPositive("live", "span divisor for live-load deflection, e.g. 360")
-                    .map(x -> InputLimits.require(d, "live", InputLimits.SPAN_DIVISOR, u, x)).orElse(360.0),
+            limits = new SpanChecks.Limits(
+                    d.optPositive("live", "span divisor for live-load deflection, e.g. 360")
+                            .map(x -> InputLimits.require(d, "live", InputLimits.SPAN_DIVISOR, u, x))
+                            .orElse(360.0),
                     d.optPositive("total", "span divisor for long-term deflection, e.g. 240")
-                    .map(x -> InputLimits.require(d, "total", InputLimits.SPAN_DIVISOR, u, x)).orElse(240.0));
+                            .map(x -> InputLimits.require(d, "total", InputLimits.SPAN_DIVISOR, u, x))
+                            .orElse(240.0));
         }
         boolean anchored = b.optBool("bottom_anchored_at_supports").orElse(false);
         return new DesignBeam.WholeSpan(left, mid, right, vl, vr, service, limits, anchored);

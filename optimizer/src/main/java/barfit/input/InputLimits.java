@@ -21,8 +21,8 @@ public final class InputLimits {
      * units, per unit system. A lower bound of 0 means "above zero" (the reader has already asked for a
      * positive number). {@code magnitude} ranges bound the absolute value (moments: + sagging, − hogging).
      */
-    public record Range(String what, Dim dim, double siMin, double siMax, double usMin, double usMax,
-            boolean magnitude) {
+    public record Range(
+            String what, Dim dim, double siMin, double siMax, double usMin, double usMax, boolean magnitude) {
 
         public double min(UnitSystem u) {
             return u == UnitSystem.US ? usMin : siMin;
@@ -97,10 +97,10 @@ public final class InputLimits {
     public static final Range WEB_WIDTH = new Range("a web width", Dim.LENGTH, 100, 3000, 4, 120, false);
     public static final Range HEIGHT = new Range("a total height", Dim.LENGTH, 150, 5000, 6, 200, false);
     public static final Range FLANGE_WIDTH = new Range("a flange width", Dim.LENGTH, 100, 30_000, 4, 1200, false);
-    public static final Range FLANGE_THICKNESS = new Range("a flange (slab) thickness", Dim.LENGTH, 40, 1500, 1.5, 60,
-            false);
-    public static final Range WEB_GAP = new Range("a clear distance to the next web", Dim.LENGTH, 50, 30_000, 2, 1200,
-            false);
+    public static final Range FLANGE_THICKNESS =
+            new Range("a flange (slab) thickness", Dim.LENGTH, 40, 1500, 1.5, 60, false);
+    public static final Range WEB_GAP =
+            new Range("a clear distance to the next web", Dim.LENGTH, 50, 30_000, 2, 1200, false);
     // ---- detailing ----
     public static final Range COVER = new Range("a clear cover", Dim.LENGTH, 10, 150, 0.375, 6, false);
     public static final Range AGGREGATE = new Range("a maximum aggregate size", Dim.LENGTH, 5, 100, 0.2, 4, false);
@@ -117,11 +117,10 @@ public final class InputLimits {
     public static final Range SPAN_DIVISOR = new Range("a span divisor", Dim.NUMBER, 100, 2000, 100, 2000, false);
     // ---- costs (any currency; above these a rate is taken for a typing mistake) ----
     public static final Range RATE = new Range("a rate", Dim.NUMBER, 0, 10_000_000, 0, 10_000_000, false);
-    public static final Range SET_COST = new Range("a cost per set of forms", Dim.NUMBER, 0, 1_000_000_000, 0,
-            1_000_000_000, false);
+    public static final Range SET_COST =
+            new Range("a cost per set of forms", Dim.NUMBER, 0, 1_000_000_000, 0, 1_000_000_000, false);
 
-    private InputLimits() {
-    }
+    private InputLimits() {}
 
     /** Refuses {@code v} (in the file's units), the value of {@code key} in {@code f}, when out of {@code r}. */
     public static double require(YFields f, String key, Range r, UnitSystem u, double v) {

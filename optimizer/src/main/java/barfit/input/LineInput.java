@@ -17,16 +17,52 @@ import java.util.List;
  * one set of forms ({@code oneSection}: one b x h throughout, the default) or each span its own section.
  * Segment 0 is the left overhang, 1..n the spans, n + 1 the right overhang.
  */
-public record LineInput(String id, Location location, List<Double> spans, double overhangLeft, double overhangRight,
-        List<Support> supports, List<Load> loads, SectionShape section, double sustainedLive, boolean coefficients,
-        List<Double> redistribution, double unitWeight, Double maxDepth, boolean oneSection) {
+public record LineInput(
+        String id,
+        Location location,
+        List<Double> spans,
+        double overhangLeft,
+        double overhangRight,
+        List<Support> supports,
+        List<Load> loads,
+        SectionShape section,
+        double sustainedLive,
+        boolean coefficients,
+        List<Double> redistribution,
+        double unitWeight,
+        Double maxDepth,
+        boolean oneSection) {
 
     /** As given before the forms were a choice: each span its own section. */
-    public LineInput(String id, Location location, List<Double> spans, double overhangLeft, double overhangRight,
-            List<Support> supports, List<Load> loads, SectionShape section, double sustainedLive, boolean coefficients,
-            List<Double> redistribution, double unitWeight, Double maxDepth) {
-        this(id, location, spans, overhangLeft, overhangRight, supports, loads, section, sustainedLive, coefficients,
-                redistribution, unitWeight, maxDepth, false);
+    public LineInput(
+            String id,
+            Location location,
+            List<Double> spans,
+            double overhangLeft,
+            double overhangRight,
+            List<Support> supports,
+            List<Load> loads,
+            SectionShape section,
+            double sustainedLive,
+            boolean coefficients,
+            List<Double> redistribution,
+            double unitWeight,
+            Double maxDepth) {
+        this(
+                id,
+                location,
+                spans,
+                overhangLeft,
+                overhangRight,
+                supports,
+                loads,
+                section,
+                sustainedLive,
+                coefficients,
+                redistribution,
+                unitWeight,
+                maxDepth,
+                false);
     }
 
     public LineInput {
@@ -72,7 +108,16 @@ public record LineInput(String id, Location location, List<Double> spans, double
                 ei.add(Stiffness.beamEI(ec, shapes.get(s)));
             }
         }
-        return new Line(id, spans, overhangLeft, overhangRight, supports, all, ei, ec, d,
+        return new Line(
+                id,
+                spans,
+                overhangLeft,
+                overhangRight,
+                supports,
+                all,
+                ei,
+                ec,
+                d,
                 coefficients ? null : redistributionUsed);
     }
 }

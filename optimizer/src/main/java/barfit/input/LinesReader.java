@@ -21,19 +21,31 @@ import java.util.Map;
  * line in m (ft), section and support sizes in mm (in), loads in kN/m and kN (kip/ft, kip).
  */
 public final class LinesReader {
-    static final String[] LINE_KEYS = {"id", "spans", "overhangs", "supports", "loads", "sustained_live", "section",
-        "flange", "method", "redistribution", "max_depth", "forms"};
+    static final String[] LINE_KEYS = {
+        "id",
+        "spans",
+        "overhangs",
+        "supports",
+        "loads",
+        "sustained_live",
+        "section",
+        "flange",
+        "method",
+        "redistribution",
+        "max_depth",
+        "forms"
+    };
 
     /** Default unit weight of reinforced concrete: 24 kN/m³ (150 lb/ft³), common practice. */
     static final double UNIT_WEIGHT_SI = 24e3 / 1e9;
+
     static final double UNIT_WEIGHT_US_PCF = 150;
 
     /** A support's width along the line: 0 (a knife edge) to 5 m (200 in). */
-    static final InputLimits.Range SUPPORT_WIDTH = new InputLimits.Range("a support width", Dim.LENGTH, 0, 5000, 0, 200,
-            false);
+    static final InputLimits.Range SUPPORT_WIDTH =
+            new InputLimits.Range("a support width", Dim.LENGTH, 0, 5000, 0, 200, false);
 
-    private LinesReader() {
-    }
+    private LinesReader() {}
 
     /** The lines of a file, or an empty list when it has none. */
     public static List<LineInput> read(YFields doc, Settings settings) {
@@ -57,8 +69,9 @@ public final class LinesReader {
             }
             Integer first = ids.putIfAbsent(id, f.location().line());
             if (first != null) {
-                throw f.error("id", "line id \"" + id + "\" is used twice (first at line " + first
-                        + "); expected unique ids");
+                throw f.error(
+                        "id",
+                        "line id \"" + id + "\" is used twice (first at line " + first + "); expected unique ids");
             }
             out.add(line(f, id, settings, sr, u, unitWeight));
         }
@@ -78,8 +91,10 @@ public final class LinesReader {
         double lo = u == UnitSystem.US ? 60 : 10;
         double hi = u == UnitSystem.US ? 200 : 30;
         if (v < lo || v > hi) {
-            throw c.error("density", "expected the unit weight of reinforced concrete, " + lo + " to " + hi + " " + unit
-                    + ", got " + SettingsReader.fmt(v));
+            throw c.error(
+                    "density",
+                    "expected the unit weight of reinforced concrete, " + lo + " to " + hi + " " + unit + ", got "
+                            + SettingsReader.fmt(v));
         }
         return u == UnitSystem.US ? pcf(v) : v * 1e3 / 1e9;
     }
@@ -89,8 +104,8 @@ public final class LinesReader {
         return v * 4.4482216152605 / Math.pow(304.8, 3);
     }
 
-    private static LineInput line(YFields f, String id, Settings settings, SectionReader sr, UnitSystem u,
-            double unitWeight) {
+    private static LineInput line(
+            YFields f, String id, Settings settings, SectionReader sr, UnitSystem u, double unitWeight) {
         YList spanList = f.list("spans", "the spans centre to centre of supports, " + u.unit(Dim.SPAN));
         if (spanList.size() == 0) {
             throw f.error("spans", "expected at least one span");
@@ -112,10 +127,14 @@ public final class LinesReader {
         double or = 0;
         if (f.has("overhangs")) {
             YFields o = f.map("overhangs", "the overhangs {left, right}").allowOnly("left", "right");
-            ol = u.toSI(o.optNumber("left", "the left overhang past the support's centre line, " + u.unit(Dim.SPAN))
-                    .orElse(0.0), Dim.SPAN);
-            or = u.toSI(o.optNumber("right", "the right overhang past the support's centre line, " + u.unit(Dim.SPAN))
-                    .orElse(0.0), Dim.SPAN);
+            ol = u.toSI(
+                    o.optNumber("left", "the left overhang past the support's centre line, " + u.unit(Dim.SPAN))
+                            .orElse(0.0),
+                    Dim.SPAN);
+            or = u.toSI(
+                    o.optNumber("right", "the right overhang past the support's centre line, " + u.unit(Dim.SPAN))
+                            .orElse(0.0),
+                    Dim.SPAN);
             if (ol < 0) {
                 throw o.error("left", "expected an overhang of zero or more");
             }
@@ -128,17 +147,24 @@ public final class LinesReader {
             double oh = side == 0 ? ol : or;
             Support s = supports.get(side == 0 ? 0 : n);
             if (oh > 0 && oh <= s.width() / 2) {
-                throw f.error("overhangs", "the " + (side == 0 ? "left" : "right") + " overhang ends inside its support ("
-                        + sr.fmt(s.width() / 2, Dim.LENGTH) + " from the centre line to the face); expected a longer"
-                        + " overhang or none");
+                throw f.error(
+                        "overhangs",
+                        "the " + (side == 0 ? "left" : "right") + " overhang ends inside its support ("
+                                + sr.fmt(s.width() / 2, Dim.LENGTH)
+                                + " from the centre line to the face); expected a longer"
+                                + " overhang or none");
             }
         }
         for (int i = 0; i < n; i++) {
-            double clear = spans.get(i) - supports.get(i).width() / 2 - supports.get(i + 1).width() / 2;
+            double clear = spans.get(i)
+                    - supports.get(i).width() / 2
+                    - supports.get(i + 1).width() / 2;
             if (clear <= 0) {
-                throw f.error("spans", "span " + (i + 1) + " (" + sr.fmt(spans.get(i), Dim.SPAN) + ") is no longer than"
-                        + " the half widths of its supports; expected spans centre to centre of supports, "
-                        + u.unit(Dim.SPAN));
+                throw f.error(
+                        "spans",
+                        "span " + (i + 1) + " (" + sr.fmt(spans.get(i), Dim.SPAN) + ") is no longer than"
+                                + " the half widths of its supports; expected spans centre to centre of supports, "
+                                + u.unit(Dim.SPAN));
             }
         }
         YFields sec = f.map("section", "the section analysed: {width, height}").allowOnly("width", "height");
@@ -147,16 +173,19 @@ public final class LinesReader {
         barfit.section.Flange flange = null;
         if (f.has("flange")) {
             // its effective width for the line's stiffness and weight: on the shortest span (the least width)
-            double shortest = spans.stream().mapToDouble(Double::doubleValue).min().orElseThrow();
-            flange = sr.flange(f.map("flange", "the flange: {width, thickness}"), b,
-                    new barfit.section.Span(shortest, null));
+            double shortest =
+                    spans.stream().mapToDouble(Double::doubleValue).min().orElseThrow();
+            flange = sr.flange(
+                    f.map("flange", "the flange: {width, thickness}"), b, new barfit.section.Span(shortest, null));
         }
         SectionShape shape = new SectionShape(b, h, flange);
         List<Load> loads = loads(f, spans, ol, or, u, sr);
-        double sus = f.optNumber("sustained_live", "the sustained part of the live load, 0 to 1").orElse(0.0);
+        double sus = f.optNumber("sustained_live", "the sustained part of the live load, 0 to 1")
+                .orElse(0.0);
         if (sus < 0 || sus > 1) {
-            throw f.error("sustained_live", "expected the sustained part of the live load from 0 to 1, got "
-                    + SettingsReader.fmt(sus));
+            throw f.error(
+                    "sustained_live",
+                    "expected the sustained part of the live load from 0 to 1, got " + SettingsReader.fmt(sus));
         }
         boolean coefficients = false;
         if (f.has("method")) {
@@ -164,31 +193,50 @@ public final class LinesReader {
             if (m.equals("coefficients")) {
                 coefficients = true;
             } else if (!m.equals("stiffness")) {
-                throw f.error("method", "expected stiffness (the analysis) or coefficients (ACI 318-19 6.5), got \"" + m
-                        + "\"");
+                throw f.error(
+                        "method",
+                        "expected stiffness (the analysis) or coefficients (ACI 318-19 6.5), got \"" + m + "\"");
             }
         }
         List<Double> redistribution = redistribution(f, n, coefficients);
-        Double cap = sr.optLength(f, "max_depth", "the headroom cap on the total height", InputLimits.HEIGHT).orElse(null);
+        Double cap = sr.optLength(f, "max_depth", "the headroom cap on the total height", InputLimits.HEIGHT)
+                .orElse(null);
         boolean oneSection = true;
         if (f.has("forms")) {
             String forms = f.text("forms", "line or per-span");
             if (forms.equals("per-span")) {
                 oneSection = false;
             } else if (!forms.equals("line")) {
-                throw f.error("forms", "expected line (one b × h for the whole line) or per-span (each span its own "
-                        + "section), got \"" + forms + "\"");
+                throw f.error(
+                        "forms",
+                        "expected line (one b × h for the whole line) or per-span (each span its own "
+                                + "section), got \"" + forms + "\"");
             }
         }
-        return new LineInput(id, f.location(), spans, ol, or, supports, loads, shape, sus, coefficients, redistribution,
-                unitWeight, cap, oneSection);
+        return new LineInput(
+                id,
+                f.location(),
+                spans,
+                ol,
+                or,
+                supports,
+                loads,
+                shape,
+                sus,
+                coefficients,
+                redistribution,
+                unitWeight,
+                cap,
+                oneSection);
     }
 
     private static List<Support> supports(YFields f, int spans, SectionReader sr, UnitSystem u) {
         List<YFields> items = f.listOfMaps("supports", "supports {width, kind, below, above}");
         if (items.size() != 1 && items.size() != spans + 1) {
-            throw f.error("supports", spans + " span" + (spans == 1 ? "" : "s") + " need " + (spans + 1)
-                    + " supports, got " + items.size() + "; expected one per support, left to right, or one for all");
+            throw f.error(
+                    "supports",
+                    spans + " span" + (spans == 1 ? "" : "s") + " need " + (spans + 1) + " supports, got "
+                            + items.size() + "; expected one per support, left to right, or one for all");
         }
         List<Support> out = new ArrayList<>();
         for (int j = 0; j <= spans; j++) {
@@ -216,15 +264,18 @@ public final class LinesReader {
         } else if (below != null || above != null) {
             kind = SupportKind.COLUMN;
         } else {
-            throw new InputError(s.location(), s.path() + ": expected kind: knife-edge | wall | fixed, or the columns"
-                    + " below: {b, h, height} and/or above: {...}");
+            throw new InputError(
+                    s.location(),
+                    s.path() + ": expected kind: knife-edge | wall | fixed, or the columns"
+                            + " below: {b, h, height} and/or above: {...}");
         }
         if (kind == SupportKind.COLUMN && below == null && above == null) {
             throw s.error("kind", "a column support needs below: {b, h, height} and/or above: {b, h, height}");
         }
         if (kind != SupportKind.COLUMN && (below != null || above != null)) {
-            throw s.error(below != null ? "below" : "above", "columns belong to kind: column; expected no columns on a "
-                    + kind.word() + " support");
+            throw s.error(
+                    below != null ? "below" : "above",
+                    "columns belong to kind: column; expected no columns on a " + kind.word() + " support");
         }
         return new Support(width, kind, below, above);
     }
@@ -234,28 +285,44 @@ public final class LinesReader {
         double b = sr.length(c, "b", "the column's width across the line", InputLimits.WEB_WIDTH);
         double h = sr.length(c, "h", "the column's depth along the line", InputLimits.HEIGHT);
         if (!c.has("height")) {
-            throw new InputError(c.location(), c.path() + ": missing key 'height'; expected the storey height of the "
-                    + "column, " + u.unit(Dim.SPAN));
+            throw new InputError(
+                    c.location(),
+                    c.path() + ": missing key 'height'; expected the storey height of the " + "column, "
+                            + u.unit(Dim.SPAN));
         }
         double height = u.toSI(c.positive("height", "the column's storey height, " + u.unit(Dim.SPAN)), Dim.SPAN);
         return new Column(b, h, height);
     }
 
-    private static List<Load> loads(YFields f, List<Double> spans, double ol, double or, UnitSystem u,
-            SectionReader sr) {
+    private static List<Load> loads(
+            YFields f, List<Double> spans, double ol, double or, UnitSystem u, SectionReader sr) {
         int n = spans.size();
         List<Load> out = new ArrayList<>();
         if (!f.has("loads")) {
-            throw new InputError(f.location(), f.path() + ": missing key 'loads'; expected the service loads {dead, live}"
-                    + " in " + u.unit(Dim.LINE_LOAD) + " (the web's own weight is added by barfit)");
+            throw new InputError(
+                    f.location(),
+                    f.path() + ": missing key 'loads'; expected the service loads {dead, live}" + " in "
+                            + u.unit(Dim.LINE_LOAD) + " (the web's own weight is added by barfit)");
         }
         YFields l = f.map("loads", "the service loads {dead, live, spans, overhangs, points, partial}")
                 .allowOnly("dead", "live", "spans", "overhangs", "points", "partial");
         String lineLoad = u.unit(Dim.LINE_LOAD);
-        double dead = u.toSI(l.has("dead") ? InputLimits.require(l, "dead", InputLimits.LINE_LOAD, u,
-                l.nonNegative("dead", "superimposed dead load, " + lineLoad)) : 0, Dim.LINE_LOAD);
-        double live = u.toSI(l.has("live") ? InputLimits.require(l, "live", InputLimits.LINE_LOAD, u,
-                l.nonNegative("live", "live load, " + lineLoad)) : 0, Dim.LINE_LOAD);
+        double dead = u.toSI(
+                l.has("dead")
+                        ? InputLimits.require(
+                                l,
+                                "dead",
+                                InputLimits.LINE_LOAD,
+                                u,
+                                l.nonNegative("dead", "superimposed dead load, " + lineLoad))
+                        : 0,
+                Dim.LINE_LOAD);
+        double live = u.toSI(
+                l.has("live")
+                        ? InputLimits.require(
+                                l, "live", InputLimits.LINE_LOAD, u, l.nonNegative("live", "live load, " + lineLoad))
+                        : 0,
+                Dim.LINE_LOAD);
         double[] d = new double[n + 2];
         double[] lv = new double[n + 2];
         java.util.Arrays.fill(d, dead);
@@ -279,11 +346,14 @@ public final class LinesReader {
                 if (!o.has(side)) {
                     continue;
                 }
-                YFields x = o.map(side, "the " + side + " overhang's loads {dead, live}").allowOnly("dead", "live");
+                YFields x = o.map(side, "the " + side + " overhang's loads {dead, live}")
+                        .allowOnly("dead", "live");
                 int i = side.equals("left") ? 0 : n + 1;
                 if ((i == 0 ? ol : or) == 0) {
-                    throw o.error(side, "the line has no " + side + " overhang; expected loads only on overhangs given "
-                            + "under overhangs:");
+                    throw o.error(
+                            side,
+                            "the line has no " + side + " overhang; expected loads only on overhangs given "
+                                    + "under overhangs:");
                 }
                 if (x.has("dead")) {
                     d[i] = u.toSI(x.nonNegative("dead", "superimposed dead load, " + lineLoad), Dim.LINE_LOAD);
@@ -305,11 +375,15 @@ public final class LinesReader {
                 p.allowOnly("span", "at", "dead", "live");
                 int i = spanIndex(p, n);
                 double len = spans.get(i - 1);
-                double at = u.toSI(p.nonNegative("at", "the distance from the span's left support centre line, "
-                        + u.unit(Dim.SPAN)), Dim.SPAN);
+                double at = u.toSI(
+                        p.nonNegative(
+                                "at", "the distance from the span's left support centre line, " + u.unit(Dim.SPAN)),
+                        Dim.SPAN);
                 if (at > len) {
-                    throw p.error("at", "the point load is at " + sr.fmt(at, Dim.SPAN) + " in a span of "
-                            + sr.fmt(len, Dim.SPAN) + "; expected a distance within the span");
+                    throw p.error(
+                            "at",
+                            "the point load is at " + sr.fmt(at, Dim.SPAN) + " in a span of " + sr.fmt(len, Dim.SPAN)
+                                    + "; expected a distance within the span");
                 }
                 double pd = u.toSI(p.has("dead") ? p.nonNegative("dead", "its dead part, " + force) : 0, Dim.FORCE);
                 double pl = u.toSI(p.has("live") ? p.nonNegative("live", "its live part, " + force) : 0, Dim.FORCE);
@@ -321,20 +395,25 @@ public final class LinesReader {
                 p.allowOnly("span", "from", "to", "dead", "live");
                 int i = spanIndex(p, n);
                 double len = spans.get(i - 1);
-                double a = u.toSI(p.nonNegative("from", "where it starts, from the span's left support centre line, "
-                        + u.unit(Dim.SPAN)), Dim.SPAN);
+                double a = u.toSI(
+                        p.nonNegative(
+                                "from",
+                                "where it starts, from the span's left support centre line, " + u.unit(Dim.SPAN)),
+                        Dim.SPAN);
                 double b = u.toSI(p.nonNegative("to", "where it ends, " + u.unit(Dim.SPAN)), Dim.SPAN);
                 if (b <= a) {
                     throw p.error("to", "the load ends at or before it starts; expected to > from");
                 }
                 if (b > len) {
-                    throw p.error("to", "the load runs to " + sr.fmt(b, Dim.SPAN) + " in a span of " + sr.fmt(len, Dim.SPAN)
-                            + "; expected it within the span");
+                    throw p.error(
+                            "to",
+                            "the load runs to " + sr.fmt(b, Dim.SPAN) + " in a span of " + sr.fmt(len, Dim.SPAN)
+                                    + "; expected it within the span");
                 }
-                double pd = u.toSI(p.has("dead") ? p.nonNegative("dead", "its dead part, " + lineLoad) : 0,
-                        Dim.LINE_LOAD);
-                double pl = u.toSI(p.has("live") ? p.nonNegative("live", "its live part, " + lineLoad) : 0,
-                        Dim.LINE_LOAD);
+                double pd =
+                        u.toSI(p.has("dead") ? p.nonNegative("dead", "its dead part, " + lineLoad) : 0, Dim.LINE_LOAD);
+                double pl =
+                        u.toSI(p.has("live") ? p.nonNegative("live", "its live part, " + lineLoad) : 0, Dim.LINE_LOAD);
                 out.add(Load.uniform(i, a, b, pd, pl));
             }
         }
@@ -343,7 +422,8 @@ public final class LinesReader {
 
     private static int spanIndex(YFields s, int n) {
         if (!s.has("span")) {
-            throw new InputError(s.location(), s.path() + ": missing key 'span'; expected the span it is on, 1 to " + n);
+            throw new InputError(
+                    s.location(), s.path() + ": missing key 'span'; expected the span it is on, 1 to " + n);
         }
         double v = s.number("span", "the span it is on, 1 to " + n);
         if (v != Math.rint(v) || v < 1 || v > n) {
@@ -361,14 +441,16 @@ public final class LinesReader {
             return out;
         }
         if (coefficients) {
-            throw f.error("redistribution", "6.6.5.1 does not allow redistributing moments from the 6.5 coefficients;"
-                    + " expected method: stiffness with redistribution");
+            throw f.error(
+                    "redistribution",
+                    "6.6.5.1 does not allow redistributing moments from the 6.5 coefficients;"
+                            + " expected method: stiffness with redistribution");
         }
         YNode node = f.node("redistribution");
         if (node instanceof YList list) {
             if (list.size() != n + 1) {
-                throw f.error("redistribution", "expected one percentage per support (" + (n + 1) + "), got "
-                        + list.size());
+                throw f.error(
+                        "redistribution", "expected one percentage per support (" + (n + 1) + "), got " + list.size());
             }
             for (int j = 0; j <= n; j++) {
                 String path = f.child("redistribution") + "[" + (j + 1) + "]";
@@ -388,8 +470,10 @@ public final class LinesReader {
 
     private static void check(YNode node, String path, double v) {
         if (v < 0 || v > 20) {
-            throw new InputError(node.location(), path + ": expected a percentage from 0 to 20 (6.6.5.3: at most"
-                    + " 1000 εt percent and 20 percent), got " + SettingsReader.fmt(v));
+            throw new InputError(
+                    node.location(),
+                    path + ": expected a percentage from 0 to 20 (6.6.5.3: at most"
+                            + " 1000 εt percent and 20 percent), got " + SettingsReader.fmt(v));
         }
     }
 }

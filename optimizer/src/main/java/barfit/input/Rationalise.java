@@ -6,6 +6,5 @@ package barfit.input;
  * {@code groupsSameSection} makes beams of one group share b x h; {@code formworkSetCost} is paid once per
  * distinct section size (the forms bought or made for it).
  */
-public record Rationalise(Integer maxSectionSizes, Integer maxBarSizes, boolean groupsSameSection,
-        double formworkSetCost) {
-}
+public record Rationalise(
+        Integer maxSectionSizes, Integer maxBarSizes, boolean groupsSameSection, double formworkSetCost) {}

@@ -8,7 +8,6 @@ import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YList;
 import barfit.catalogs.yaml.YNode;
 import barfit.catalogs.yaml.YScalar;
-import barfit.catalogs.yaml.YMap;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
 import barfit.section.MaterialLimits;
@@ -21,8 +20,7 @@ import java.util.TreeSet;
 
 /** Reads {@code search:} and {@code costs:}, with defaults for each unit system and catalog. */
 public final class SearchReader {
-    private SearchReader() {
-    }
+    private SearchReader() {}
 
     /** Default search space (stated in the README). */
     static SearchSpace defaults(Settings s) {
@@ -63,7 +61,9 @@ public final class SearchReader {
         if (!names.isEmpty()) {
             return names.stream().map(n -> c.find(n).orElseThrow()).toList();
         }
-        return c.bars().stream().filter(b -> b.diameter() >= 12 && b.diameter() <= 40).toList();
+        return c.bars().stream()
+                .filter(b -> b.diameter() >= 12 && b.diameter() <= 40)
+                .toList();
     }
 
     public static SearchSpace read(YFields doc, Settings s) {
@@ -73,8 +73,16 @@ public final class SearchReader {
         }
         UnitSystem u = s.units();
         String len = u.unit(Dim.LENGTH);
-        YFields f = doc.map("search", "the search space").allowOnly("widths", "depth", "bar_sizes",
-                "compression_sizes", "max_layers", "stirrups", "max_bar_sizes_per_beam", "layer_gap"); // layer_gap: SettingsReader
+        YFields f = doc.map("search", "the search space")
+                .allowOnly(
+                        "widths",
+                        "depth",
+                        "bar_sizes",
+                        "compression_sizes",
+                        "max_layers",
+                        "stirrups",
+                        "max_bar_sizes_per_beam",
+                        "layer_gap"); // layer_gap: SettingsReader
         List<Double> widths = d.widths();
         if (f.has("widths")) {
             widths = sortedLengths(f, "widths", "web widths, " + len, u, InputLimits.WEB_WIDTH);
@@ -85,7 +93,8 @@ public final class SearchReader {
             depths = lengthRange(r, u, "total heights, " + len, 2000, InputLimits.HEIGHT);
         }
         List<BarSize> bars = f.has("bar_sizes") ? barList(f, "bar_sizes", s.catalog()) : d.barSizes();
-        List<BarSize> comp = f.has("compression_sizes") ? barList(f, "compression_sizes", s.catalog())
+        List<BarSize> comp = f.has("compression_sizes")
+                ? barList(f, "compression_sizes", s.catalog())
                 : (f.has("bar_sizes") ? bars : d.compressionSizes());
         int layers = d.maxLayers();
         if (f.has("max_layers")) {
@@ -98,8 +107,8 @@ public final class SearchReader {
         List<Integer> legs = d.stirrupLegs();
         List<Double> spacings = d.stirrupSpacings();
         if (f.has("stirrups")) {
-            YFields st = f.map("stirrups", "stirrup options {sizes, legs, spacing}").allowOnly("sizes", "legs", "spacing",
-                    "bars_per_two_legs");
+            YFields st = f.map("stirrups", "stirrup options {sizes, legs, spacing}")
+                    .allowOnly("sizes", "legs", "spacing", "bars_per_two_legs");
             if (st.has("sizes")) {
                 stirrupSizes = barList(st, "sizes", s.catalog());
             }
@@ -107,11 +116,15 @@ public final class SearchReader {
                 YList l = st.list("legs", "numbers of legs");
                 TreeSet<Integer> set = new TreeSet<>();
                 for (int i = 0; i < l.size(); i++) {
-                    double v = YFields.numberOf(l.get(i), st.child("legs") + "[" + (i + 1) + "]", "a whole number of legs >= 2");
+                    double v = YFields.numberOf(
+                            l.get(i), st.child("legs") + "[" + (i + 1) + "]", "a whole number of legs >= 2");
                     if (v != Math.rint(v) || v < 2 || v > InputLimits.MAX_LEGS) {
-                        throw new InputError(l.get(i).location(), st.child("legs") + "[" + (i + 1)
-                                + "]: expected a whole number of legs from 2 to " + InputLimits.MAX_LEGS + ", got "
-                                + Echo.cut(((YScalar) l.get(i)).text()));
+                        throw new InputError(
+                                l.get(i).location(),
+                                st.child("legs") + "[" + (i + 1)
+                                        + "]: expected a whole number of legs from 2 to " + InputLimits.MAX_LEGS
+                                        + ", got "
+                                        + Echo.cut(((YScalar) l.get(i)).text()));
                     }
                     set.add((int) v);
                 }
@@ -121,7 +134,8 @@ public final class SearchReader {
                 legs = List.copyOf(set);
             }
             if (st.has("spacing")) {
-                YFields r = st.map("spacing", "the spacing range {min, max, step}").allowOnly("min", "max", "step");
+                YFields r =
+                        st.map("spacing", "the spacing range {min, max, step}").allowOnly("min", "max", "step");
                 spacings = lengthRange(r, u, "stirrup spacings, " + len, 200, InputLimits.STIRRUP_SPACING);
             }
         }
@@ -129,8 +143,8 @@ public final class SearchReader {
                 .withBarsPerTwoLegs(barsPerTwoLegs(doc));
     }
 
-    private static List<Double> sortedLengths(YFields f, String key, String what, UnitSystem u,
-            InputLimits.Range range) {
+    private static List<Double> sortedLengths(
+            YFields f, String key, String what, UnitSystem u, InputLimits.Range range) {
         YList l = f.list(key, what);
         TreeSet<Double> set = new TreeSet<>();
         for (int i = 0; i < l.size(); i++) {
@@ -150,13 +164,14 @@ public final class SearchReader {
         return List.copyOf(set);
     }
 
-    private static List<Double> lengthRange(YFields r, UnitSystem u, String what, int maxCount,
-            InputLimits.Range range) {
+    private static List<Double> lengthRange(
+            YFields r, UnitSystem u, String what, int maxCount, InputLimits.Range range) {
         double min = InputLimits.require(r, "min", range, u, r.positive("min", "smallest of the " + what));
         double max = InputLimits.require(r, "max", range, u, r.positive("max", "largest of the " + what));
         double step = r.positive("step", "step between " + what);
         if (max < min) {
-            throw r.error("max", "expected max >= min (" + SettingsReader.fmt(min) + "), got " + SettingsReader.fmt(max));
+            throw r.error(
+                    "max", "expected max >= min (" + SettingsReader.fmt(min) + "), got " + SettingsReader.fmt(max));
         }
         if ((max - min) / step + 1 > maxCount) {
             throw r.error("step", "the range gives more than " + maxCount + " values; expected a larger step");
@@ -193,8 +208,9 @@ public final class SearchReader {
         }
         int v = f.positiveInt("max_bar_sizes_per_beam", "longitudinal bar sizes in one beam, 1 or 2");
         if (v > 2) {
-            throw f.error("max_bar_sizes_per_beam", "expected 1 or 2 (a beam's top bars share one size, its bottom "
-                    + "bars another), got " + v);
+            throw f.error(
+                    "max_bar_sizes_per_beam",
+                    "expected 1 or 2 (a beam's top bars share one size, its bottom " + "bars another), got " + v);
         }
         return v;
     }
@@ -224,6 +240,7 @@ public final class SearchReader {
 
     /** Rate conversions from US units to the SI rates the cost model holds. */
     private static final double YD3_PER_M3 = 1.0 / 0.764554857984;
+
     private static final double LB_PER_KG = 1.0 / 0.45359237;
     private static final double FT2_PER_M2 = 1.0 / (0.3048 * 0.3048);
 
@@ -232,9 +249,16 @@ public final class SearchReader {
      * stronger concrete: the user's {@code concrete_per_m3_by_fc} (per yd³ by psi in US input), or an
      * invented default table scaled to the file's rate at the file's f'c.
      */
-    public record Costs(CostRates rates, String currency, java.util.NavigableMap<Double, Double> concreteByFc,
-            boolean concreteByFcGiven, barfit.catalogs.yaml.Location concreteByFcAt) {
-        public Costs(CostRates rates, String currency, java.util.NavigableMap<Double, Double> concreteByFc,
+    public record Costs(
+            CostRates rates,
+            String currency,
+            java.util.NavigableMap<Double, Double> concreteByFc,
+            boolean concreteByFcGiven,
+            barfit.catalogs.yaml.Location concreteByFcAt) {
+        public Costs(
+                CostRates rates,
+                String currency,
+                java.util.NavigableMap<Double, Double> concreteByFc,
                 boolean concreteByFcGiven) {
             this(rates, currency, concreteByFc, concreteByFcGiven, null);
         }
@@ -255,6 +279,7 @@ public final class SearchReader {
 
     /** Invented relative prices of concrete by grade (MPa -> percent of 28 MPa's), for trying the tool only. */
     private static final double[] GRADE_MPA = {17, 21, 25, 28, 32, 35, 40, 45, 50, 55, 60, 70, 80};
+
     private static final int[] GRADE_FACTORS = {90, 94, 97, 100, 104, 108, 115, 122, 130, 138, 146, 162, 180};
 
     private static java.util.NavigableMap<Double, Double> defaultByFc(double fc, double rate) {
@@ -264,8 +289,16 @@ public final class SearchReader {
         }
         var lo = rel.floorEntry(fc);
         var hi = rel.ceilingEntry(fc);
-        double at = lo == null ? hi.getValue() : hi == null ? lo.getValue() : hi.getKey().equals(lo.getKey())
-                ? lo.getValue() : lo.getValue() + (hi.getValue() - lo.getValue()) * (fc - lo.getKey()) / (hi.getKey() - lo.getKey());
+        double at = lo == null
+                ? hi.getValue()
+                : hi == null
+                        ? lo.getValue()
+                        : hi.getKey().equals(lo.getKey())
+                                ? lo.getValue()
+                                : lo.getValue()
+                                        + (hi.getValue() - lo.getValue())
+                                                * (fc - lo.getKey())
+                                                / (hi.getKey() - lo.getKey());
         java.util.TreeMap<Double, Double> out = new java.util.TreeMap<>();
         for (var e : rel.entrySet()) {
             out.put(e.getKey(), rate * e.getValue() / at);
@@ -280,50 +313,82 @@ public final class SearchReader {
             return new Costs(d, "", defaultByFc(s.materials().fc(), d.concretePerM3()), false);
         }
         String[] keys = us
-                ? new String[] {"concrete_per_yd3", "main_bars_per_lb", "stirrups_per_lb", "formwork_per_ft2",
-                    "depth_premium_per_ft", "lap_factor", "currency", "concrete_per_yd3_by_fc"}
-                : new String[] {"concrete_per_m3", "main_bars_per_kg", "stirrups_per_kg", "formwork_per_m2",
-                    "depth_premium_per_m", "lap_factor", "currency", "concrete_per_m3_by_fc"};
+                ? new String[] {
+                    "concrete_per_yd3",
+                    "main_bars_per_lb",
+                    "stirrups_per_lb",
+                    "formwork_per_ft2",
+                    "depth_premium_per_ft",
+                    "lap_factor",
+                    "currency",
+                    "concrete_per_yd3_by_fc"
+                }
+                : new String[] {
+                    "concrete_per_m3",
+                    "main_bars_per_kg",
+                    "stirrups_per_kg",
+                    "formwork_per_m2",
+                    "depth_premium_per_m",
+                    "lap_factor",
+                    "currency",
+                    "concrete_per_m3_by_fc"
+                };
         YFields f = doc.map("costs", "the cost rates").allowOnly(keys);
-        double concrete = rate(f, keys[0], "concrete, per " + (us ? "yd³" : "m³")).map(v -> v * (us ? YD3_PER_M3 : 1.0))
+        double concrete = rate(f, keys[0], "concrete, per " + (us ? "yd³" : "m³"))
+                .map(v -> v * (us ? YD3_PER_M3 : 1.0))
                 .orElse(d.concretePerM3());
-        double bars = rate(f, keys[1], "main bars, per " + (us ? "lb" : "kg")).map(v -> v * (us ? LB_PER_KG : 1.0))
+        double bars = rate(f, keys[1], "main bars, per " + (us ? "lb" : "kg"))
+                .map(v -> v * (us ? LB_PER_KG : 1.0))
                 .orElse(d.mainBarsPerKg());
-        double stirrups = rate(f, keys[2], "stirrups, per " + (us ? "lb" : "kg")).map(v -> v * (us ? LB_PER_KG : 1.0))
+        double stirrups = rate(f, keys[2], "stirrups, per " + (us ? "lb" : "kg"))
+                .map(v -> v * (us ? LB_PER_KG : 1.0))
                 .orElse(d.stirrupsPerKg());
-        double formwork = rate(f, keys[3], "formwork, per " + (us ? "ft²" : "m²")).map(v -> v * (us ? FT2_PER_M2 : 1.0))
+        double formwork = rate(f, keys[3], "formwork, per " + (us ? "ft²" : "m²"))
+                .map(v -> v * (us ? FT2_PER_M2 : 1.0))
                 .orElse(d.formworkPerM2());
-        double premium = rate(f, keys[4], "depth premium, per " + (us ? "ft of depth per ft of beam" : "m of depth per m of beam"))
-                .map(v -> v * (us ? FT2_PER_M2 : 1.0)).orElse(d.depthPremiumPerM());
-        double lap = f.optNumber("lap_factor", "the lap and waste factor, 1.0 or more").orElse(d.lapFactor());
+        double premium = rate(
+                        f,
+                        keys[4],
+                        "depth premium, per " + (us ? "ft of depth per ft of beam" : "m of depth per m of beam"))
+                .map(v -> v * (us ? FT2_PER_M2 : 1.0))
+                .orElse(d.depthPremiumPerM());
+        double lap = f.optNumber("lap_factor", "the lap and waste factor, 1.0 or more")
+                .orElse(d.lapFactor());
         if (lap < 1.0 || lap > 2.0) {
-            throw f.error("lap_factor", "expected a lap and waste factor from 1.0 to 2.0, got " + SettingsReader.fmt(lap));
+            throw f.error(
+                    "lap_factor", "expected a lap and waste factor from 1.0 to 2.0, got " + SettingsReader.fmt(lap));
         }
         String currency = f.optText("currency", "a currency label such as EUR").orElse("");
         String byKey = keys[7];
         java.util.NavigableMap<Double, Double> byFc;
         boolean given = f.has(byKey);
         if (given) {
-            YFields g = f.map(byKey, "concrete rates by f'c: {" + (us ? "4000: 120, 5000: 128" : "28: 150, 35: 162") + "}");
+            YFields g =
+                    f.map(byKey, "concrete rates by f'c: {" + (us ? "4000: 120, 5000: 128" : "28: 150, 35: 162") + "}");
             java.util.TreeMap<Double, Double> m = new java.util.TreeMap<>();
             for (var e : g.map().entries()) {
                 double grade;
                 try {
                     grade = Double.parseDouble(e.key());
                 } catch (NumberFormatException ex) {
-                    throw new InputError(e.keyLocation(), g.path() + ": expected f'c values as keys, in "
-                            + s.units().unit(Dim.STRESS) + ", got '" + Echo.cut(e.key()) + "'");
+                    throw new InputError(
+                            e.keyLocation(),
+                            g.path() + ": expected f'c values as keys, in "
+                                    + s.units().unit(Dim.STRESS) + ", got '" + Echo.cut(e.key()) + "'");
                 }
                 double price = YFields.numberOf(e.value(), g.child(e.key()), "a rate >= 0");
                 if (price < 0 || grade <= 0) {
-                    throw new InputError(e.value().location(), g.child(e.key()) + ": expected a positive f'c and a rate >= 0");
+                    throw new InputError(
+                            e.value().location(), g.child(e.key()) + ": expected a positive f'c and a rate >= 0");
                 }
                 double fcLo = s.units().limit(MaterialLimits.fcMin(s.units().code()), Dim.STRESS);
                 double fcHi = s.units().limit(MaterialLimits.fcMax(s.units().code()), Dim.STRESS);
                 if (!(grade >= fcLo * (1 - 1e-9) && grade <= fcHi * (1 + 1e-9))) {
-                    throw new InputError(e.keyLocation(), g.child(Echo.cut(e.key())) + ": expected f'c between "
-                            + SettingsReader.fmt(fcLo) + " and " + SettingsReader.fmt(fcHi) + " "
-                            + s.units().unit(Dim.STRESS) + ", got " + SettingsReader.fmt(grade));
+                    throw new InputError(
+                            e.keyLocation(),
+                            g.child(Echo.cut(e.key())) + ": expected f'c between "
+                                    + SettingsReader.fmt(fcLo) + " and " + SettingsReader.fmt(fcHi) + " "
+                                    + s.units().unit(Dim.STRESS) + ", got " + SettingsReader.fmt(grade));
                 }
                 String problem = InputLimits.RATE.problem(s.units(), price);
                 if (problem != null) {
@@ -338,7 +403,11 @@ public final class SearchReader {
         } else {
             byFc = defaultByFc(s.materials().fc(), concrete);
         }
-        return new Costs(new CostRates(concrete, bars, stirrups, formwork, premium, lap), currency, byFc, given,
+        return new Costs(
+                new CostRates(concrete, bars, stirrups, formwork, premium, lap),
+                currency,
+                byFc,
+                given,
                 given ? f.map().entry(byKey).keyLocation() : null);
     }
 
@@ -346,7 +415,7 @@ public final class SearchReader {
         if (!f.has(key)) {
             return Optional.empty();
         }
-        return Optional.of(InputLimits.require(f, key, InputLimits.RATE, UnitSystem.SI,
-                f.nonNegative(key, "a rate >= 0 (" + what + ")")));
+        return Optional.of(InputLimits.require(
+                f, key, InputLimits.RATE, UnitSystem.SI, f.nonNegative(key, "a rate >= 0 (" + what + ")")));
     }
 }

@@ -54,8 +54,9 @@ public final class SectionReader {
         f.allowOnly("width", "thickness", "type", "clear_to_next_web");
         double bf = length(f, "width", "flange width", InputLimits.FLANGE_WIDTH);
         double hf = length(f, "thickness", "flange (slab) thickness", InputLimits.FLANGE_THICKNESS);
-        Double sw = optLength(f, "clear_to_next_web", "the clear distance from the web to the next web",
-                InputLimits.WEB_GAP).orElse(null);
+        Double sw = optLength(
+                        f, "clear_to_next_web", "the clear distance from the web to the next web", InputLimits.WEB_GAP)
+                .orElse(null);
         boolean oneSided = false;
         if (f.has("type")) {
             String t = f.text("type", "T or L");
@@ -66,8 +67,10 @@ public final class SectionReader {
             }
         }
         if (bf < webWidth) {
-            throw f.error("width", "the flange (" + fmt(bf, Dim.LENGTH) + ") is narrower than the web ("
-                    + fmt(webWidth, Dim.LENGTH) + "); expected flange width >= web width");
+            throw f.error(
+                    "width",
+                    "the flange (" + fmt(bf, Dim.LENGTH) + ") is narrower than the web (" + fmt(webWidth, Dim.LENGTH)
+                            + "); expected flange width >= web width");
         }
         return Flange.given(bf, hf, oneSided, sw, span == null ? null : span.length());
     }
@@ -85,14 +88,19 @@ public final class SectionReader {
                 throw f.error("thickness", "the flange is as thick as the whole section; expected thickness < height");
             }
         }
-        double minSide = 2 * (settings.detailing().cover() + settings.stirrupBar().diameter());
+        double minSide =
+                2 * (settings.detailing().cover() + settings.stirrupBar().diameter());
         if (b <= minSide) {
-            throw sec.error("width", "a web of " + fmt(b, Dim.LENGTH) + " leaves no room inside cover and stirrups ("
-                    + fmt(minSide, Dim.LENGTH) + "); expected a wider web");
+            throw sec.error(
+                    "width",
+                    "a web of " + fmt(b, Dim.LENGTH) + " leaves no room inside cover and stirrups ("
+                            + fmt(minSide, Dim.LENGTH) + "); expected a wider web");
         }
         if (h <= minSide) {
-            throw sec.error("height", "a height of " + fmt(h, Dim.LENGTH) + " leaves no room inside cover and stirrups ("
-                    + fmt(minSide, Dim.LENGTH) + "); expected a deeper section");
+            throw sec.error(
+                    "height",
+                    "a height of " + fmt(h, Dim.LENGTH) + " leaves no room inside cover and stirrups ("
+                            + fmt(minSide, Dim.LENGTH) + "); expected a deeper section");
         }
         return new SectionShape(b, h, flange);
     }
@@ -115,24 +123,35 @@ public final class SectionReader {
                 y = length(l, "depth", "distance from the " + face.word() + " face to the layer's centroid", null);
                 double least = det.firstLayerCentroid(db);
                 if (y < least - 1e-6) {
-                    throw l.error("depth", "a depth of " + fmt(y, Dim.LENGTH) + " puts the bars inside the cover; expected at least cover + stirrup + db/2 = "
-                            + fmt(least, Dim.LENGTH));
+                    throw l.error(
+                            "depth",
+                            "a depth of " + fmt(y, Dim.LENGTH)
+                                    + " puts the bars inside the cover; expected at least cover + stirrup + db/2 = "
+                                    + fmt(least, Dim.LENGTH));
                 }
                 if (i > 0 && y <= prevCentroid) {
-                    throw l.error("depth", "layers are listed from the " + face.word()
-                            + " face inward; expected a depth greater than the layer before (" + fmt(prevCentroid, Dim.LENGTH) + ")");
+                    throw l.error(
+                            "depth",
+                            "layers are listed from the " + face.word()
+                                    + " face inward; expected a depth greater than the layer before ("
+                                    + fmt(prevCentroid, Dim.LENGTH) + ")");
                 }
             }
             double inner = BarSpacing.innerWidth(shape.width(), det);
             if (count * db > inner + 1e-9) {
-                throw new InputError(l.location(), l.path() + ": " + count + " " + bar.label() + " bars need "
-                        + fmt(count * db, Dim.LENGTH) + " side by side but only " + fmt(inner, Dim.LENGTH)
-                        + " lies between the stirrup legs; expected fewer or smaller bars, or a wider web");
+                throw new InputError(
+                        l.location(),
+                        l.path() + ": " + count + " " + bar.label() + " bars need "
+                                + fmt(count * db, Dim.LENGTH) + " side by side but only " + fmt(inner, Dim.LENGTH)
+                                + " lies between the stirrup legs; expected fewer or smaller bars, or a wider web");
             }
             if (y + db / 2 > shape.height() - det.cover() - det.stirrupBar().diameter() + 1e-9) {
-                throw new InputError(l.location(), l.path() + ": the layer at " + fmt(y, Dim.LENGTH) + " from the "
-                        + face.word() + " face falls outside the section's height " + fmt(shape.height(), Dim.LENGTH)
-                        + "; expected fewer layers or a deeper section");
+                throw new InputError(
+                        l.location(),
+                        l.path() + ": the layer at " + fmt(y, Dim.LENGTH) + " from the "
+                                + face.word() + " face falls outside the section's height "
+                                + fmt(shape.height(), Dim.LENGTH)
+                                + "; expected fewer layers or a deeper section");
             }
             out.add(new BarLayer(face, bar, count, y));
             prevCentroid = y;
@@ -148,10 +167,12 @@ public final class SectionReader {
                 double yb = h - b.fromFace();
                 double yt = t.fromFace();
                 if (yb - yt < (b.bar().diameter() + t.bar().diameter()) / 2 + 1e-9) {
-                    throw new InputError(beam.locationOf("top"), beam.path() + ": the bottom layer at "
-                            + fmt(b.fromFace(), Dim.LENGTH) + " from the bottom and the top layer at "
-                            + fmt(t.fromFace(), Dim.LENGTH) + " from the top overlap in a section "
-                            + fmt(h, Dim.LENGTH) + " high; expected fewer layers or a deeper section");
+                    throw new InputError(
+                            beam.locationOf("top"),
+                            beam.path() + ": the bottom layer at "
+                                    + fmt(b.fromFace(), Dim.LENGTH) + " from the bottom and the top layer at "
+                                    + fmt(t.fromFace(), Dim.LENGTH) + " from the top overlap in a section "
+                                    + fmt(h, Dim.LENGTH) + " high; expected fewer layers or a deeper section");
                 }
             }
         }
@@ -173,21 +194,26 @@ public final class SectionReader {
 
     public SkinBars skin(YFields s) {
         s.allowOnly("bar", "spacing");
-        return new SkinBars(bar(s, "bar"), length(s, "spacing", "vertical spacing of skin bars", InputLimits.SKIN_SPACING));
+        return new SkinBars(
+                bar(s, "bar"), length(s, "spacing", "vertical spacing of skin bars", InputLimits.SKIN_SPACING));
     }
 
     public EndCondition ends(YFields beam) {
         String e = beam.text("ends", "simple, one-end-continuous, both-ends-continuous or cantilever");
         EndCondition ec = EndCondition.byKey(e);
         if (ec == null) {
-            throw beam.error("ends", "expected simple, one-end-continuous, both-ends-continuous or cantilever, got \"" + Echo.cut(e) + "\"");
+            throw beam.error(
+                    "ends",
+                    "expected simple, one-end-continuous, both-ends-continuous or cantilever, got \"" + Echo.cut(e)
+                            + "\"");
         }
         return ec;
     }
 
     public Span span(YFields beam) {
         Double len = beam.optPositive("span", "span length, " + u.unit(Dim.SPAN))
-                .map(v -> u.toSI(InputLimits.require(beam, "span", InputLimits.SPAN, u, v), Dim.SPAN)).orElse(null);
+                .map(v -> u.toSI(InputLimits.require(beam, "span", InputLimits.SPAN, u, v), Dim.SPAN))
+                .orElse(null);
         EndCondition ends = beam.has("ends") ? ends(beam) : null;
         if (ends != null && len == null) {
             throw beam.error("ends", "ends given without a span; expected span: <length in " + u.unit(Dim.SPAN) + ">");
@@ -196,7 +222,8 @@ public final class SectionReader {
     }
 
     public BarSize bar(YFields f, String key) {
-        String name = f.text(key, "a bar size from catalog " + settings.catalog().id());
+        String name =
+                f.text(key, "a bar size from catalog " + settings.catalog().id());
         return SettingsReader.bar(settings.catalog(), name, f.locationOf(key), f.child(key));
     }
 
@@ -209,6 +236,7 @@ public final class SectionReader {
     }
 
     public BeamSection section(SectionShape shape, List<BarLayer> layers, Stirrups stirrups, SkinBars skin) {
-        return new BeamSection(shape, settings.materials(), settings.detailing(), layers, stirrups, skin, settings.code());
+        return new BeamSection(
+                shape, settings.materials(), settings.detailing(), layers, stirrups, skin, settings.code());
     }
 }

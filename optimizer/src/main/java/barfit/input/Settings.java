@@ -27,7 +27,14 @@ public record Settings(
 
     /** The same settings with another stirrup bar: a beam's own stirrups place its bars. */
     public Settings withStirrupBar(BarSize bar) {
-        return bar.equals(detailing.stirrupBar()) ? this : new Settings(file, units, materials, catalog,
-                new Detailing(detailing.cover(), bar, detailing.layerGap(), detailing.exposure()), location);
+        return bar.equals(detailing.stirrupBar())
+                ? this
+                : new Settings(
+                        file,
+                        units,
+                        materials,
+                        catalog,
+                        new Detailing(detailing.cover(), bar, detailing.layerGap(), detailing.exposure()),
+                        location);
     }
 }

@@ -23,11 +23,25 @@ import java.util.Locale;
 /** Reads the project-wide keys every command shares. */
 public final class SettingsReader {
     /** Top-level keys any command accepts; each command reads the ones it needs. */
-    private static final String[] TOP_KEYS = {"units", "code", "concrete", "steel", "bars", "cover", "stirrup",
-            "layer_gap", "exposure", "beams", "lines", "search", "costs", "rationalise", "project"};
+    private static final String[] TOP_KEYS = {
+        "units",
+        "code",
+        "concrete",
+        "steel",
+        "bars",
+        "cover",
+        "stirrup",
+        "layer_gap",
+        "exposure",
+        "beams",
+        "lines",
+        "search",
+        "costs",
+        "rationalise",
+        "project"
+    };
 
-    private SettingsReader() {
-    }
+    private SettingsReader() {}
 
     public static Settings read(YFields doc, Path file) {
         doc.allowOnly(TOP_KEYS);
@@ -36,36 +50,47 @@ public final class SettingsReader {
         switch (unitsText.toUpperCase(Locale.ROOT)) {
             case "SI" -> units = UnitSystem.SI;
             case "US" -> units = UnitSystem.US;
-            default -> throw doc.error("units", "expected SI (mm, MPa, kN, kN·m, m) or US (in, psi, kip, kip·ft, ft), got \""
-                    + Echo.cut(unitsText) + "\"");
+            default ->
+                throw doc.error(
+                        "units",
+                        "expected SI (mm, MPa, kN, kN·m, m) or US (in, psi, kip, kip·ft, ft), got \""
+                                + Echo.cut(unitsText) + "\"");
         }
         if (doc.has("code")) {
             String code = doc.text("code", "ACI 318-19");
             if (!code.replace(" ", "").equalsIgnoreCase("ACI318-19")) {
-                throw doc.error("code", "expected ACI 318-19 (the only code barfit checks), got \"" + Echo.cut(code) + "\"");
+                throw doc.error(
+                        "code", "expected ACI 318-19 (the only code barfit checks), got \"" + Echo.cut(code) + "\"");
             }
         }
         CodeEquations code = units.code();
         boolean us = units == UnitSystem.US;
 
-        YFields concrete = doc.map("concrete", "the concrete: {fc, aggregate}").allowOnly("fc", "aggregate", "lambda", "density");
+        YFields concrete =
+                doc.map("concrete", "the concrete: {fc, aggregate}").allowOnly("fc", "aggregate", "lambda", "density");
         double fc = toSI(units, concrete.positive("fc", "f'c, " + units.unit(Dim.STRESS)), Dim.STRESS);
         double fcMin = units.limit(MaterialLimits.fcMin(code), Dim.STRESS);
         double fcMax = units.limit(MaterialLimits.fcMax(code), Dim.STRESS);
         double fcUser = units.fromSI(fc, Dim.STRESS);
         if (fcUser < fcMin * (1 - 1e-9) || fcUser > fcMax) {
-            throw concrete.error("fc", "expected f'c between " + fmt(fcMin) + " and " + fmt(fcMax) + " "
-                    + units.unit(Dim.STRESS) + " (Table 19.2.1.1 sets the minimum), got " + fmt(fcUser)
-                    + stressHint(units, fcUser, fcMin, fcMax));
+            throw concrete.error(
+                    "fc",
+                    "expected f'c between " + fmt(fcMin) + " and " + fmt(fcMax) + " "
+                            + units.unit(Dim.STRESS) + " (Table 19.2.1.1 sets the minimum), got " + fmt(fcUser)
+                            + stressHint(units, fcUser, fcMin, fcMax));
         }
         double agg = concrete.optPositive("aggregate", "maximum aggregate size, " + units.unit(Dim.LENGTH))
-                .map(v -> toSI(units, InputLimits.require(concrete, "aggregate", InputLimits.AGGREGATE, units, v),
-                        Dim.LENGTH)).orElse(us ? 0.75 * 25.4 : 20.0);
+                .map(v -> toSI(
+                        units, InputLimits.require(concrete, "aggregate", InputLimits.AGGREGATE, units, v), Dim.LENGTH))
+                .orElse(us ? 0.75 * 25.4 : 20.0);
         String lambdaRange = MaterialLimits.LAMBDA_MIN + " to " + MaterialLimits.LAMBDA_MAX;
-        double lambda = concrete.optPositive("lambda", "lightweight factor, " + lambdaRange).orElse(MaterialLimits.LAMBDA_MAX);
+        double lambda = concrete.optPositive("lambda", "lightweight factor, " + lambdaRange)
+                .orElse(MaterialLimits.LAMBDA_MAX);
         if (lambda < MaterialLimits.LAMBDA_MIN || lambda > MaterialLimits.LAMBDA_MAX) {
-            throw concrete.error("lambda", "expected the lightweight factor λ between " + MaterialLimits.LAMBDA_MIN
-                    + " and " + MaterialLimits.LAMBDA_MAX + " (19.2.4), got " + fmt(lambda));
+            throw concrete.error(
+                    "lambda",
+                    "expected the lightweight factor λ between " + MaterialLimits.LAMBDA_MIN + " and "
+                            + MaterialLimits.LAMBDA_MAX + " (19.2.4), got " + fmt(lambda));
         }
 
         YFields steel = doc.map("steel", "the reinforcement: {fy}").allowOnly("fy", "fyt");
@@ -74,17 +99,23 @@ public final class SettingsReader {
         double fyMin = us ? 40000 : 280;
         double fyMax = units.limit(code.fyMax(), Dim.STRESS);
         if (fyUser < fyMin * (1 - 1e-9) || fyUser > fyMax * (1 + 1e-9)) {
-            throw steel.error("fy", "expected fy between " + fmt(fyMin) + " and " + fmt(fyMax) + " "
-                    + units.unit(Dim.STRESS) + " (Table 20.2.2.4(a) limits flexural bars to " + fmt(fyMax) + "), got "
-                    + fmt(fyUser) + stressHint(units, fyUser, fyMin, fyMax));
+            throw steel.error(
+                    "fy",
+                    "expected fy between " + fmt(fyMin) + " and " + fmt(fyMax) + " "
+                            + units.unit(Dim.STRESS) + " (Table 20.2.2.4(a) limits flexural bars to " + fmt(fyMax)
+                            + "), got "
+                            + fmt(fyUser) + stressHint(units, fyUser, fyMin, fyMax));
         }
         double fyt = steel.optPositive("fyt", "stirrup fyt, " + units.unit(Dim.STRESS))
-                .map(v -> toSI(units, v, Dim.STRESS)).orElse(fy);
+                .map(v -> toSI(units, v, Dim.STRESS))
+                .orElse(fy);
         double fytUser = units.fromSI(fyt, Dim.STRESS);
         double fytMax = units.limit(MaterialLimits.fytMax(code), Dim.STRESS);
         if (fytUser < fyMin * (1 - 1e-9) || fytUser > fytMax * (1 + 1e-9)) {
-            throw steel.error("fyt", "expected fyt between " + fmt(fyMin) + " and " + fmt(fytMax) + " "
-                    + units.unit(Dim.STRESS) + ", got " + fmt(fytUser) + stressHint(units, fytUser, fyMin, fytMax));
+            throw steel.error(
+                    "fyt",
+                    "expected fyt between " + fmt(fyMin) + " and " + fmt(fytMax) + " " + units.unit(Dim.STRESS)
+                            + ", got " + fmt(fytUser) + stressHint(units, fytUser, fyMin, fytMax));
         }
 
         BarCatalog catalog = catalog(doc, file, units);
@@ -99,25 +130,33 @@ public final class SettingsReader {
             YFields search = doc.map("search", "the search space");
             if (search.has("layer_gap")) {
                 if (doc.has("layer_gap")) {
-                    throw search.error("layer_gap", "layer_gap is given twice (also at line "
-                            + doc.locationOf("layer_gap").line() + "); expected it once");
+                    throw search.error(
+                            "layer_gap",
+                            "layer_gap is given twice (also at line "
+                                    + doc.locationOf("layer_gap").line() + "); expected it once");
                 }
                 gapAt = search;
             }
         }
         double gap = gapAt.optPositive("layer_gap", "clear gap between bar layers, " + units.unit(Dim.LENGTH))
-                .map(v -> toSI(units, v, Dim.LENGTH)).orElse(code.minLayerGap());
+                .map(v -> toSI(units, v, Dim.LENGTH))
+                .orElse(code.minLayerGap());
         if (gap < code.minLayerGap() - 1e-9) {
-            throw gapAt.error("layer_gap", "a clear gap of " + fmt(units.fromSI(gap, Dim.LENGTH)) + " "
-                    + units.unit(Dim.LENGTH) + " between layers is below 25.2.2; expected at least "
-                    + fmt(units.fromSI(code.minLayerGap(), Dim.LENGTH)) + " " + units.unit(Dim.LENGTH));
+            throw gapAt.error(
+                    "layer_gap",
+                    "a clear gap of " + fmt(units.fromSI(gap, Dim.LENGTH)) + " "
+                            + units.unit(Dim.LENGTH) + " between layers is below 25.2.2; expected at least "
+                            + fmt(units.fromSI(code.minLayerGap(), Dim.LENGTH)) + " " + units.unit(Dim.LENGTH));
         }
         InputLimits.require(gapAt, "layer_gap", InputLimits.LAYER_GAP, units, units.fromSI(gap, Dim.LENGTH));
         Exposure exposure = Exposure.INTERIOR;
         if (doc.has("exposure")) {
             String e = doc.text("exposure", "interior, weather or ground");
-            exposure = Arrays.stream(Exposure.values()).filter(x -> x.key().equals(e)).findFirst()
-                    .orElseThrow(() -> doc.error("exposure", "expected interior, weather or ground, got \"" + Echo.cut(e) + "\""));
+            exposure = Arrays.stream(Exposure.values())
+                    .filter(x -> x.key().equals(e))
+                    .findFirst()
+                    .orElseThrow(() ->
+                            doc.error("exposure", "expected interior, weather or ground, got \"" + Echo.cut(e) + "\""));
         }
         Materials materials = new Materials(fc, fy, fyt, agg, lambda);
         Detailing detailing = new Detailing(cover, stirrup, gap, exposure);
@@ -134,8 +173,10 @@ public final class SettingsReader {
         Path base = file.toAbsolutePath().getParent();
         Path p = base == null ? Path.of(id) : base.resolve(id);
         if (!Files.exists(p)) {
-            throw doc.error("bars", "expected one of " + String.join(", ", BarCatalogs.BUILT_IN)
-                    + " or the path of a catalog file, got \"" + Echo.cut(id) + "\" (no such file)");
+            throw doc.error(
+                    "bars",
+                    "expected one of " + String.join(", ", BarCatalogs.BUILT_IN)
+                            + " or the path of a catalog file, got \"" + Echo.cut(id) + "\" (no such file)");
         }
         return BarCatalogs.load(Path.of(id).isAbsolute() ? p : relativeToCwd(p));
     }
@@ -150,9 +191,12 @@ public final class SettingsReader {
 
     /** Looks a bar size up, or fails at {@code where} listing the sizes the catalog has. */
     public static BarSize bar(BarCatalog catalog, String name, Location at, String path) {
-        return catalog.find(name).orElseThrow(() -> new InputError(at, path + ": bar size \"" + Echo.cut(name)
-                + "\" is not in catalog " + catalog.id() + "; expected one of: "
-                + String.join(", ", catalog.designations())));
+        return catalog.find(name)
+                .orElseThrow(() -> new InputError(
+                        at,
+                        path + ": bar size \"" + Echo.cut(name)
+                                + "\" is not in catalog " + catalog.id() + "; expected one of: "
+                                + String.join(", ", catalog.designations())));
     }
 
     static double toSI(UnitSystem u, double v, Dim d) {

@@ -17,8 +17,7 @@ import java.util.List;
  * and {@code overhang} "left" or "right".
  */
 public final class AnalysisJson {
-    private AnalysisJson() {
-    }
+    private AnalysisJson() {}
 
     public static String render(Settings settings, List<AnalysisText.Analysed> lines) {
         UnitSystem u = settings.units();

@@ -14,17 +14,19 @@ import java.util.Locale;
 
 /** The terminal report of {@code barfit analyse}: per line the reactions, what design takes, and the envelope. */
 public final class AnalysisText {
-    private AnalysisText() {
-    }
+    private AnalysisText() {}
 
     /** One line's answer: the analysis, or the 6.5 coefficients. */
-    public record Analysed(LineInput input, double selfWeight, LineResult result, List<Coefficients.SpanValues> coefficients) {
-    }
+    public record Analysed(
+            LineInput input, double selfWeight, LineResult result, List<Coefficients.SpanValues> coefficients) {}
 
     public static String render(Settings settings, List<Analysed> lines) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
-        out.append("barfit analyse — ").append(settings.file()).append(" — ").append(settings.code().edition())
+        out.append("barfit analyse — ")
+                .append(settings.file())
+                .append(" — ")
+                .append(settings.code().edition())
                 .append('\n');
         out.append(Caution.text()).append('\n');
         out.append("The analysis covers gravity loads only (dead and live, ACI 318-19 5.3.1a and b): no lateral loads, "
@@ -38,30 +40,51 @@ public final class AnalysisText {
 
     private static void line(Analysed a, UnitSystem u, StringBuilder out) {
         LineInput in = a.input();
-        out.append("Line ").append(in.id()).append("   ").append(spans(in, u)).append("   section ")
-                .append(Words.shape(in.section(), u)).append('\n');
-        out.append("  own weight ").append(u.withUnit(a.selfWeight(), Dim.LINE_LOAD))
-                .append(" added to the dead load; sustained live ").append(u.compact(in.sustainedLive(), Dim.NUMBER))
+        out.append("Line ")
+                .append(in.id())
+                .append("   ")
+                .append(spans(in, u))
+                .append("   section ")
+                .append(Words.shape(in.section(), u))
+                .append('\n');
+        out.append("  own weight ")
+                .append(u.withUnit(a.selfWeight(), Dim.LINE_LOAD))
+                .append(" added to the dead load; sustained live ")
+                .append(u.compact(in.sustainedLive(), Dim.NUMBER))
                 .append(" of L\n");
         if (a.coefficients() != null) {
             out.append("  method: the approximate moments and shears of ACI 318-19 6.5 (6.5.1's conditions met); "
                     + "moments at the support faces, shears at the faces\n");
             TextTable t = new TextTable(false, true, true, true, true, true, true);
-            t.row("span", "ln " + u.unit(Dim.SPAN), "wu " + u.unit(Dim.LINE_LOAD), "M left face", "M+ span",
-                    "M right face", "V left / right " + u.unit(Dim.FORCE));
+            t.row(
+                    "span",
+                    "ln " + u.unit(Dim.SPAN),
+                    "wu " + u.unit(Dim.LINE_LOAD),
+                    "M left face",
+                    "M+ span",
+                    "M right face",
+                    "V left / right " + u.unit(Dim.FORCE));
             for (Coefficients.SpanValues s : a.coefficients()) {
-                t.row(String.valueOf(s.index()), u.number(s.clear(), Dim.SPAN), u.number(s.wu(), Dim.LINE_LOAD),
-                        u.number(s.mLeftFace(), Dim.MOMENT), u.number(s.mSpan(), Dim.MOMENT),
-                        u.number(s.mRightFace(), Dim.MOMENT), u.number(s.vLeftFace(), Dim.FORCE) + " / "
-                                + u.number(s.vRightFace(), Dim.FORCE));
+                t.row(
+                        String.valueOf(s.index()),
+                        u.number(s.clear(), Dim.SPAN),
+                        u.number(s.wu(), Dim.LINE_LOAD),
+                        u.number(s.mLeftFace(), Dim.MOMENT),
+                        u.number(s.mSpan(), Dim.MOMENT),
+                        u.number(s.mRightFace(), Dim.MOMENT),
+                        u.number(s.vLeftFace(), Dim.FORCE) + " / " + u.number(s.vRightFace(), Dim.FORCE));
             }
             out.append("  moments in ").append(u.unit(Dim.MOMENT)).append(" (− hogging)\n");
             t.write("  ", out);
             return;
         }
         LineResult r = a.result();
-        out.append("  stiffness method: beam EI = Ec × ").append(Stiffness.BEAM_FACTOR).append(" Ig, columns Ec × ")
-                .append(Stiffness.COLUMN_FACTOR).append(" Ig (Table 6.6.3.1.1); ").append(r.arrangements().size())
+        out.append("  stiffness method: beam EI = Ec × ")
+                .append(Stiffness.BEAM_FACTOR)
+                .append(" Ig, columns Ec × ")
+                .append(Stiffness.COLUMN_FACTOR)
+                .append(" Ig (Table 6.6.3.1.1); ")
+                .append(r.arrangements().size())
                 .append(" load arrangements (5.3.1 with the live load arranged as 6.4.2 permits, and on either half of"
                         + " each span)\n");
         boolean anyRedistribution = false;
@@ -69,55 +92,93 @@ public final class AnalysisText {
         for (int j = 0; j < in.redistribution().size(); j++) {
             if (in.redistribution().get(j) > 0) {
                 anyRedistribution = true;
-                red.append(red.length() == 0 ? "" : ", ").append("support ").append(j + 1).append(' ')
-                        .append(u.compact(in.redistribution().get(j), Dim.NUMBER)).append(" %");
+                red.append(red.length() == 0 ? "" : ", ")
+                        .append("support ")
+                        .append(j + 1)
+                        .append(' ')
+                        .append(u.compact(in.redistribution().get(j), Dim.NUMBER))
+                        .append(" %");
             }
         }
         if (anyRedistribution) {
-            out.append("  redistribution (6.6.5) applied: ").append(red).append(" — provisional: it is allowed only "
-                    + "where the designed section there has εt ≥ 0.0075 and at most 1000 εt percent, which a design must"
-                    + " confirm\n");
+            out.append("  redistribution (6.6.5) applied: ")
+                    .append(red)
+                    .append(" — provisional: it is allowed only "
+                            + "where the designed section there has εt ≥ 0.0075 and at most 1000 εt percent, which a design must"
+                            + " confirm\n");
         }
         StringBuilder re = new StringBuilder();
         for (LineResult.Reaction x : r.reactions()) {
-            re.append(re.length() == 0 ? "" : ";  ").append(x.support()).append(": ")
+            re.append(re.length() == 0 ? "" : ";  ")
+                    .append(x.support())
+                    .append(": ")
                     .append(u.number(x.max(), Dim.FORCE));
             if (x.min() < x.max() - 1) {
                 re.append(" (least ").append(u.number(x.min(), Dim.FORCE)).append(')');
             }
         }
-        out.append("  reactions, factored (").append(u.unit(Dim.FORCE)).append(", support: largest): ").append(re)
+        out.append("  reactions, factored (")
+                .append(u.unit(Dim.FORCE))
+                .append(", support: largest): ")
+                .append(re)
                 .append('\n');
-        out.append("  for design (moments ").append(u.unit(Dim.MOMENT)).append(", − hogging; shears ")
-                .append(u.unit(Dim.FORCE)).append("; faces of columns and fixed supports, centre lines of knife edges"
-                        + " and walls (9.4.2.1); shear at d = ").append(u.withUnit(r.line().d(), Dim.LENGTH))
+        out.append("  for design (moments ")
+                .append(u.unit(Dim.MOMENT))
+                .append(", − hogging; shears ")
+                .append(u.unit(Dim.FORCE))
+                .append("; faces of columns and fixed supports, centre lines of knife edges"
+                        + " and walls (9.4.2.1); shear at d = ")
+                .append(u.withUnit(r.line().d(), Dim.LENGTH))
                 .append(" from the faces where 9.4.3.2 allows)\n");
         TextTable t = new TextTable(false, true, true, true, true, true, true, false);
-        t.row("span", "ln " + u.unit(Dim.SPAN), "M left", "M+ max", "M right", "V left", "V right",
+        t.row(
+                "span",
+                "ln " + u.unit(Dim.SPAN),
+                "M left",
+                "M+ max",
+                "M right",
+                "V left",
+                "V right",
                 "negative moment ends at x (" + u.unit(Dim.SPAN) + ")");
         for (LineResult.SpanValues s : r.spans()) {
             List<String> xs = new ArrayList<>();
             s.inflection().forEach(x -> xs.add(u.number(x, Dim.SPAN)));
-            t.row(String.valueOf(s.index()), u.number(s.clear(), Dim.SPAN), u.number(s.mLeftFace(), Dim.MOMENT),
+            t.row(
+                    String.valueOf(s.index()),
+                    u.number(s.clear(), Dim.SPAN),
+                    u.number(s.mLeftFace(), Dim.MOMENT),
                     u.number(s.mSpanMax(), Dim.MOMENT) + " at " + u.number(s.xMax(), Dim.SPAN),
-                    u.number(s.mRightFace(), Dim.MOMENT), u.number(s.vLeftD(), Dim.FORCE) + (s.vLeftAtFace() ? " (face)" : ""),
+                    u.number(s.mRightFace(), Dim.MOMENT),
+                    u.number(s.vLeftD(), Dim.FORCE) + (s.vLeftAtFace() ? " (face)" : ""),
                     u.number(s.vRightD(), Dim.FORCE) + (s.vRightAtFace() ? " (face)" : ""),
                     xs.isEmpty() ? "—" : String.join(", ", xs));
         }
         t.write("  ", out);
         for (LineResult.OverhangValues o : r.overhangs()) {
-            out.append("  ").append(o.side()).append(" overhang ").append(u.withUnit(o.clear(), Dim.SPAN))
-                    .append(" past the face: M at the face ").append(u.withUnit(o.mFace(), Dim.MOMENT))
-                    .append(", V at d ").append(u.withUnit(o.vD(), Dim.FORCE)).append('\n');
+            out.append("  ")
+                    .append(o.side())
+                    .append(" overhang ")
+                    .append(u.withUnit(o.clear(), Dim.SPAN))
+                    .append(" past the face: M at the face ")
+                    .append(u.withUnit(o.mFace(), Dim.MOMENT))
+                    .append(", V at d ")
+                    .append(u.withUnit(o.vD(), Dim.FORCE))
+                    .append('\n');
         }
-        out.append("  service moments for deflection (").append(u.unit(Dim.MOMENT))
+        out.append("  service moments for deflection (")
+                .append(u.unit(Dim.MOMENT))
                 .append("): dead load alone, and the envelope of dead plus live\n");
         TextTable sv = new TextTable(false, true, true, true, true, true, true);
         sv.row("span", "D left", "D span", "D right", "D+L left", "D+L span", "D+L right");
         for (LineResult.SpanValues s : r.spans()) {
-            sv.row(String.valueOf(s.index()), u.number(s.deadLeft(), Dim.MOMENT), u.number(s.deadMid(), Dim.MOMENT),
-                    u.number(s.deadRight(), Dim.MOMENT), u.number(s.totalLeft(), Dim.MOMENT),
-                    u.number(s.totalMid(), Dim.MOMENT), u.number(s.totalRight(), Dim.MOMENT));
+            sv.row(
+                    String.valueOf(s.index()),
+                    u.number(s.deadLeft(), Dim.MOMENT),
+                    u.number(s.deadMid(), Dim.MOMENT),
+                    u.number(s.deadRight(), Dim.MOMENT),
+                    u.number(s.totalLeft(), Dim.MOMENT),
+                    u.number(s.totalMid(), Dim.MOMENT),
+                    u.number(s.totalRight(), Dim.MOMENT));
         }
         sv.write("  ", out);
         out.append("  envelope, factored (every tenth of each span, the faces and point loads; all stations in the "
@@ -125,9 +186,15 @@ public final class AnalysisText {
         TextTable e = new TextTable(true, false, true, true, true, true, false, false);
         e.row("x " + u.unit(Dim.SPAN), "where", "M max", "M min", "V max", "V min", "M max from", "M min from");
         for (LineResult.StationValues st : shown(r)) {
-            e.row(u.number(st.x(), Dim.SPAN), where(r, st), u.number(st.mMax(), Dim.MOMENT),
-                    u.number(st.mMin(), Dim.MOMENT), u.number(st.vMax(), Dim.FORCE), u.number(st.vMin(), Dim.FORCE),
-                    st.mMaxBy(), st.mMinBy());
+            e.row(
+                    u.number(st.x(), Dim.SPAN),
+                    where(r, st),
+                    u.number(st.mMax(), Dim.MOMENT),
+                    u.number(st.mMin(), Dim.MOMENT),
+                    u.number(st.vMax(), Dim.FORCE),
+                    u.number(st.vMin(), Dim.FORCE),
+                    st.mMaxBy(),
+                    st.mMinBy());
         }
         e.write("  ", out);
     }
@@ -145,8 +212,8 @@ public final class AnalysisText {
                 Support b = r.line().supports().get(st.segment());
                 face = Math.abs(st.local() - a.width() / 2) < 1e-6 || Math.abs(len - st.local() - b.width() / 2) < 1e-6;
             }
-            boolean point = r.line().loads().stream().anyMatch(l -> l.point() && l.segment() == st.segment()
-                    && Math.abs(l.from() - st.local()) < 1e-6);
+            boolean point = r.line().loads().stream()
+                    .anyMatch(l -> l.point() && l.segment() == st.segment() && Math.abs(l.from() - st.local()) < 1e-6);
             if (tenth || face || point) {
                 out.add(st);
             }

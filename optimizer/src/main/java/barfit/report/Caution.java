@@ -15,8 +15,7 @@ public final class Caution {
             "seismic provisions, bar development and splices, deflection (unless reported), fire resistance,",
             "durability beyond cover, or constructability beyond bar spacing.");
 
-    private Caution() {
-    }
+    private Caution() {}
 
     public static String text() {
         return String.join("\n", LINES);

@@ -15,8 +15,7 @@ import java.util.List;
 
 /** The JSON report of {@code barfit check}. */
 public final class CheckJson {
-    private CheckJson() {
-    }
+    private CheckJson() {}
 
     public static String render(Settings settings, List<CheckBeam> beams, List<CheckReport> reports, boolean trail) {
         UnitSystem u = settings.units();

@@ -17,13 +17,16 @@ public final class CheckText {
     /** What a beam without a factored shear is told: its shear is not checked at all. */
     public static final String SHEAR_NOT_CHECKED = "shear not checked (no Vu)";
 
-    private CheckText() {
-    }
+    private CheckText() {}
 
     public static String render(Settings settings, List<CheckBeam> beams, List<CheckReport> reports, boolean trail) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
-        out.append("barfit check — ").append(settings.file()).append(" — ").append(settings.code().edition()).append('\n');
+        out.append("barfit check — ")
+                .append(settings.file())
+                .append(" — ")
+                .append(settings.code().edition())
+                .append('\n');
         out.append(Caution.text()).append("\n\n");
         out.append(materials(settings)).append("\n");
         int failed = 0;
@@ -34,8 +37,13 @@ public final class CheckText {
                 failed++;
             }
         }
-        out.append('\n').append(beams.size()).append(beams.size() == 1 ? " beam checked: " : " beams checked: ")
-                .append(beams.size() - failed).append(" pass, ").append(failed).append(" fail.\n");
+        out.append('\n')
+                .append(beams.size())
+                .append(beams.size() == 1 ? " beam checked: " : " beams checked: ")
+                .append(beams.size() - failed)
+                .append(" pass, ")
+                .append(failed)
+                .append(" fail.\n");
         return out.toString();
     }
 
@@ -46,7 +54,8 @@ public final class CheckText {
         return "Materials: f'c = " + u.withUnit(m.fc(), Dim.STRESS) + ", fy = " + u.withUnit(m.fy(), Dim.STRESS)
                 + ", fyt = " + u.withUnit(m.fyt(), Dim.STRESS) + ", λ = " + u.compact(m.lambda(), Dim.NUMBER)
                 + ", aggregate " + u.withUnit(m.aggregate(), Dim.LENGTH) + "\n"
-                + "Detailing: cover " + u.withUnit(d.cover(), Dim.LENGTH) + " to stirrups (" + d.exposure().key()
+                + "Detailing: cover " + u.withUnit(d.cover(), Dim.LENGTH) + " to stirrups ("
+                + d.exposure().key()
                 + "), stirrup " + d.stirrupBar().label() + ", layer gap " + u.withUnit(d.layerGap(), Dim.LENGTH)
                 + ", bars " + s.catalog().id();
     }
@@ -59,7 +68,8 @@ public final class CheckText {
             var fx = r.check("flexure");
             var vs = r.check("shear_strength");
             if (fx.isPresent() || vs.isPresent()) {
-                verdict += " (" + fx.map(c -> "Mu/φMn = " + Words.ratio(c.ratio())).orElse("")
+                verdict += " ("
+                        + fx.map(c -> "Mu/φMn = " + Words.ratio(c.ratio())).orElse("")
                         + (fx.isPresent() && vs.isPresent() ? ", " : "")
                         + vs.map(c -> "Vu/φVn = " + Words.ratio(c.ratio())).orElse("") + ")";
             }
@@ -77,64 +87,118 @@ public final class CheckText {
             }
             verdict = sb.toString();
         }
-        out.append("Beam ").append(b.id()).append("  ").append(Words.shape(b.section().shape(), u)).append("  ")
-                .append(verdict).append('\n');
-        out.append("  bottom: ").append(Words.layers(b.section().layersOn(Face.BOTTOM)))
-                .append("   top: ").append(Words.layers(b.section().layersOn(Face.TOP)))
-                .append("   stirrups: ").append(Words.stirrups(b.section().stirrups(), u)).append('\n');
+        out.append("Beam ")
+                .append(b.id())
+                .append("  ")
+                .append(Words.shape(b.section().shape(), u))
+                .append("  ")
+                .append(verdict)
+                .append('\n');
+        out.append("  bottom: ")
+                .append(Words.layers(b.section().layersOn(Face.BOTTOM)))
+                .append("   top: ")
+                .append(Words.layers(b.section().layersOn(Face.TOP)))
+                .append("   stirrups: ")
+                .append(Words.stirrups(b.section().stirrups(), u))
+                .append('\n');
         StringBuilder line = new StringBuilder("  ");
         if (r.demand().mu() != null) {
-            line.append("Mu = ").append(u.withUnit(Math.abs(r.demand().mu()), Dim.MOMENT)).append(' ')
-                    .append(f.bending().word()).append("   ");
+            line.append("Mu = ")
+                    .append(u.withUnit(Math.abs(r.demand().mu()), Dim.MOMENT))
+                    .append(' ')
+                    .append(f.bending().word())
+                    .append("   ");
         } else {
             line.append("no Mu given: capacity in ").append(f.bending().word()).append("   ");
         }
-        line.append("φMn = ").append(u.withUnit(f.phiMn(), Dim.MOMENT)).append("   φ = ").append(Words.phi(f.phi()))
-                .append(" (").append(f.strainClass()).append(")   εt = ").append(Words.fixed(f.epsT(), 5));
+        line.append("φMn = ")
+                .append(u.withUnit(f.phiMn(), Dim.MOMENT))
+                .append("   φ = ")
+                .append(Words.phi(f.phi()))
+                .append(" (")
+                .append(f.strainClass())
+                .append(")   εt = ")
+                .append(Words.fixed(f.epsT(), 5));
         out.append(line).append('\n');
-        out.append("  c = ").append(u.withUnit(f.c(), Dim.LENGTH)).append("   a = ").append(u.withUnit(f.a(), Dim.LENGTH))
-                .append("   d = ").append(u.withUnit(f.d(), Dim.LENGTH)).append("   dt = ")
-                .append(u.withUnit(f.dt(), Dim.LENGTH)).append('\n');
+        out.append("  c = ")
+                .append(u.withUnit(f.c(), Dim.LENGTH))
+                .append("   a = ")
+                .append(u.withUnit(f.a(), Dim.LENGTH))
+                .append("   d = ")
+                .append(u.withUnit(f.d(), Dim.LENGTH))
+                .append("   dt = ")
+                .append(u.withUnit(f.dt(), Dim.LENGTH))
+                .append('\n');
         if (b.span() != null && b.span().ends() == null) {
             out.append("  minimum depth (Table 9.3.1.1) not checked: the span is given without its ends\n");
         }
         ShearResult sh = r.shear();
         if (sh != null) {
-            out.append("  Vu = ").append(u.withUnit(sh.vu(), Dim.FORCE)).append("   φVn = φ (Vc + Vs) = ")
-                    .append(u.withUnit(sh.phiVn(), Dim.FORCE)).append("   Vc = ").append(u.withUnit(sh.vc(), Dim.FORCE))
-                    .append(" (row ").append(sh.vcRow()).append(")   Vs = ").append(u.withUnit(sh.vs(), Dim.FORCE));
+            out.append("  Vu = ")
+                    .append(u.withUnit(sh.vu(), Dim.FORCE))
+                    .append("   φVn = φ (Vc + Vs) = ")
+                    .append(u.withUnit(sh.phiVn(), Dim.FORCE))
+                    .append("   Vc = ")
+                    .append(u.withUnit(sh.vc(), Dim.FORCE))
+                    .append(" (row ")
+                    .append(sh.vcRow())
+                    .append(")   Vs = ")
+                    .append(u.withUnit(sh.vs(), Dim.FORCE));
             if (sh.vsStirrups() > sh.vs()) {
-                out.append(" (the stirrups give ").append(u.withUnit(sh.vsStirrups(), Dim.FORCE))
-                        .append("; Vs is limited to Vs,max = ").append(r.section().code().vsMax().shown())
+                out.append(" (the stirrups give ")
+                        .append(u.withUnit(sh.vsStirrups(), Dim.FORCE))
+                        .append("; Vs is limited to Vs,max = ")
+                        .append(r.section().code().vsMax().shown())
                         .append(" √f'c bw d, 22.5.1.2)");
             }
             out.append('\n');
         } else {
-            out.append("  ").append(SHEAR_NOT_CHECKED).append(": give Vu to check shear strength, minimum stirrups "
-                    + "and their spacing\n");
+            out.append("  ")
+                    .append(SHEAR_NOT_CHECKED)
+                    .append(": give Vu to check shear strength, minimum stirrups " + "and their spacing\n");
         }
         out.append('\n');
         TextTable layers = new TextTable(false, false, true, true, true, true);
-        layers.row("layer", "bars", "d (" + u.unit(Dim.LENGTH) + ")", "strain", "stress (" + u.unit(Dim.STRESS) + ")",
+        layers.row(
+                "layer",
+                "bars",
+                "d (" + u.unit(Dim.LENGTH) + ")",
+                "strain",
+                "stress (" + u.unit(Dim.STRESS) + ")",
                 "force (" + u.unit(Dim.FORCE) + ")");
         for (LayerResult l : f.layers()) {
             String name = l.layer().face().word() + " @ " + u.number(l.layer().fromFace(), Dim.LENGTH);
-            layers.row(name, l.layer().count() + " " + l.layer().bar().label(), u.number(l.d(), Dim.LENGTH),
-                    Words.fixed(l.strain(), 5), u.number(l.stress(), Dim.STRESS), u.number(l.force(), Dim.FORCE));
+            layers.row(
+                    name,
+                    l.layer().count() + " " + l.layer().bar().label(),
+                    u.number(l.d(), Dim.LENGTH),
+                    Words.fixed(l.strain(), 5),
+                    u.number(l.stress(), Dim.STRESS),
+                    u.number(l.force(), Dim.FORCE));
         }
         layers.write("  ", out);
         out.append("  (strain and stress: + tension, − compression)\n\n");
         TextTable t = new TextTable(false, false, true, false, true, true, false);
         t.row("check", "clause", "value", "", "limit", "ratio", "result");
         for (CheckResult c : r.checks()) {
-            t.row(c.title(), c.clause(), Words.value(c.demand(), u), c.sense().equals("<=") ? "≤" : "≥",
-                    Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
+            t.row(
+                    c.title(),
+                    c.clause(),
+                    Words.value(c.demand(), u),
+                    c.sense().equals("<=") ? "≤" : "≥",
+                    Words.value(c.limit(), u),
+                    Words.ratio(c.ratio()),
+                    c.pass() ? "ok" : "FAIL");
         }
         t.write("  ", out);
         for (CheckResult c : r.checks()) {
             // the flange's note says which width the analysis took and what is left to the engineer
             if (c.note() != null && (!c.pass() || c.id().equals("flange_width"))) {
-                out.append("  note, ").append(c.id()).append(": ").append(c.note()).append('\n');
+                out.append("  note, ")
+                        .append(c.id())
+                        .append(": ")
+                        .append(c.note())
+                        .append('\n');
             }
         }
         if (trail && r.trail().isOn()) {

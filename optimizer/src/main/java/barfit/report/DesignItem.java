@@ -14,10 +14,19 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
      * of their sections); {@code held} when the sections alternated and every part was held at the largest;
      * {@code oneSection} how a line of one set of forms was designed (null for span by span).
      */
-    public record LinePart(String line, String part, boolean first, int spans, int rounds, boolean settled,
-            java.util.List<Double> asked, java.util.List<Double> used, java.util.List<Double> epsT,
-            java.util.List<String> undesigned, boolean held, barfit.design.line.LineSpans.OneSection oneSection) {
-    }
+    public record LinePart(
+            String line,
+            String part,
+            boolean first,
+            int spans,
+            int rounds,
+            boolean settled,
+            java.util.List<Double> asked,
+            java.util.List<Double> used,
+            java.util.List<Double> epsT,
+            java.util.List<String> undesigned,
+            boolean held,
+            barfit.design.line.LineSpans.OneSection oneSection) {}
 
     public boolean feasible() {
         return section != null ? section.feasible() : whole.feasible();

@@ -1,13 +1,13 @@
 package barfit.report;
 
 import barfit.design.Binding;
-import barfit.design.section.SectionGenerator;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
+import barfit.design.Proof;
 import barfit.design.section.Design;
 import barfit.design.section.DesignOutcome;
+import barfit.design.section.SectionGenerator;
 import barfit.design.section.SectionLayout;
-import barfit.design.Proof;
 import barfit.input.Settings;
 import barfit.section.CheckResult;
 import barfit.section.trail.Dim;
@@ -18,8 +18,7 @@ import java.util.List;
 
 /** The JSON report of {@code barfit design}. */
 public final class DesignJson {
-    private DesignJson() {
-    }
+    private DesignJson() {}
 
     public static String render(Settings settings, List<DesignItem> outcomes, String currency, boolean trail) {
         UnitSystem u = settings.units();

@@ -1,12 +1,12 @@
 package barfit.report;
 
 import barfit.design.Binding;
-import barfit.design.section.SectionGenerator;
+import barfit.design.Diagnosis;
+import barfit.design.Proof;
 import barfit.design.section.Design;
 import barfit.design.section.DesignOutcome;
-import barfit.design.Diagnosis;
+import barfit.design.section.SectionGenerator;
 import barfit.design.section.SectionLayout;
-import barfit.design.Proof;
 import barfit.input.Settings;
 import barfit.section.CheckReport;
 import barfit.section.trail.Dim;
@@ -18,13 +18,16 @@ import java.util.Map;
 
 /** The terminal report of {@code barfit design}. */
 public final class DesignText {
-    private DesignText() {
-    }
+    private DesignText() {}
 
     public static String render(Settings settings, List<DesignItem> outcomes, String currency, boolean trail) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
-        out.append("barfit design — ").append(settings.file()).append(" — ").append(settings.code().edition()).append('\n');
+        out.append("barfit design — ")
+                .append(settings.file())
+                .append(" — ")
+                .append(settings.code().edition())
+                .append('\n');
         out.append(Caution.text()).append('\n');
         out.append("Costs use the rates in the file (or barfit's invented defaults when none are given); ")
                 .append("compare them with your own before relying on a price.\n\n");
@@ -37,47 +40,73 @@ public final class DesignText {
                 var l = o.whole().best() == null ? null : o.whole().best().layout();
                 out.append("Line ").append(o.line().line()).append(": one section for the whole line");
                 if (l != null) {
-                    out.append(", ").append(len(l.width(), u)).append(" × ").append(len(l.height(), u)).append(' ')
+                    out.append(", ")
+                            .append(len(l.width(), u))
+                            .append(" × ")
+                            .append(len(l.height(), u))
+                            .append(' ')
                             .append(u.unit(Dim.LENGTH));
                 }
-                out.append(", the cheapest of ").append(one.sections()).append(" analysed each with its own weight and "
-                        + "stiffness (").append(one.designed()).append(" designed before the cost bound stopped the "
-                        + "search)");
+                out.append(", the cheapest of ")
+                        .append(one.sections())
+                        .append(" analysed each with its own weight and " + "stiffness (")
+                        .append(one.designed())
+                        .append(" designed before the cost bound stopped the " + "search)");
                 if (o.line().rounds() > 1) {
-                    out.append("; analysed again ").append(o.line().rounds() - 1)
-                            .append(o.line().rounds() == 2 ? " time" : " times").append(" for the redistribution the "
-                            + "support sections allow");
+                    out.append("; analysed again ")
+                            .append(o.line().rounds() - 1)
+                            .append(o.line().rounds() == 2 ? " time" : " times")
+                            .append(" for the redistribution the " + "support sections allow");
                 }
                 out.append('\n');
             } else if (o.line() != null && o.line().first()) {
                 if (one != null) {
-                    out.append("Line ").append(o.line().line()).append(": no one section of the search space carries "
-                            + "every part; each span takes its own\n");
+                    out.append("Line ")
+                            .append(o.line().line())
+                            .append(": no one section of the search space carries "
+                                    + "every part; each span takes its own\n");
                 }
-                out.append("Line ").append(o.line().line()).append(": designed span by span from its analysis, ")
-                        .append(o.line().rounds()).append(o.line().rounds() == 1 ? " round" : " rounds")
-                        .append(" of analysis and design").append(!o.line().undesigned().isEmpty()
-                                ? " (no design for " + String.join(", ", o.line().undesigned()) + ": the analysis "
-                                        + "took the first estimate of the section there, so the envelope holds only "
-                                        + "once every part is designed)"
-                                : o.line().settled() && o.line().held()
-                                ? " (the sections alternated from round to round: every part is held at the largest "
-                                        + "of them, with its bars designed for the envelope of exactly those sections)"
-                                : o.line().settled()
-                                ? " (the sections designed are those analysed)"
-                                : " (the sections still changed in the last round: check the envelope by hand)")
+                out.append("Line ")
+                        .append(o.line().line())
+                        .append(": designed span by span from its analysis, ")
+                        .append(o.line().rounds())
+                        .append(o.line().rounds() == 1 ? " round" : " rounds")
+                        .append(" of analysis and design")
+                        .append(
+                                !o.line().undesigned().isEmpty()
+                                        ? " (no design for "
+                                                + String.join(", ", o.line().undesigned()) + ": the analysis "
+                                                + "took the first estimate of the section there, so the envelope holds only "
+                                                + "once every part is designed)"
+                                        : o.line().settled() && o.line().held()
+                                                ? " (the sections alternated from round to round: every part is held at the largest "
+                                                        + "of them, with its bars designed for the envelope of exactly those sections)"
+                                                : o.line().settled()
+                                                        ? " (the sections designed are those analysed)"
+                                                        : " (the sections still changed in the last round: check the envelope by hand)")
                         .append('\n');
             }
             if (o.line() != null && o.line().first()) {
                 var lp = o.line();
                 for (int j = 0; j < lp.asked().size(); j++) {
                     if (lp.asked().get(j) > 0) {
-                        out.append("  redistribution at support ").append(j + 1).append(" (6.6.5): asked ")
-                                .append(u.compact(lp.asked().get(j), Dim.NUMBER)).append(" %, used ")
-                                .append(u.compact(lp.used().get(j), Dim.NUMBER)).append(" %")
-                                .append(Double.isNaN(lp.epsT().get(j)) ? "" : " (εt = " + String.format(Locale.ROOT,
-                                        "%.5f", lp.epsT().get(j)) + " beside it; allowed where εt ≥ 0.0075, at most "
-                                        + "1000 εt percent and 20 %)")
+                        out.append("  redistribution at support ")
+                                .append(j + 1)
+                                .append(" (6.6.5): asked ")
+                                .append(u.compact(lp.asked().get(j), Dim.NUMBER))
+                                .append(" %, used ")
+                                .append(u.compact(lp.used().get(j), Dim.NUMBER))
+                                .append(" %")
+                                .append(
+                                        Double.isNaN(lp.epsT().get(j))
+                                                ? ""
+                                                : " (εt = "
+                                                        + String.format(
+                                                                Locale.ROOT,
+                                                                "%.5f",
+                                                                lp.epsT().get(j))
+                                                        + " beside it; allowed where εt ≥ 0.0075, at most "
+                                                        + "1000 εt percent and 20 %)")
                                 .append('\n');
                     }
                 }
@@ -91,8 +120,12 @@ public final class DesignText {
                 infeasible++;
             }
         }
-        out.append('\n').append(outcomes.size()).append(outcomes.size() == 1 ? " beam designed: " : " beams designed: ")
-                .append(outcomes.size() - infeasible).append(" with a passing layout, ").append(infeasible)
+        out.append('\n')
+                .append(outcomes.size())
+                .append(outcomes.size() == 1 ? " beam designed: " : " beams designed: ")
+                .append(outcomes.size() - infeasible)
+                .append(" with a passing layout, ")
+                .append(infeasible)
                 .append(" with none in the search space.\n");
         return out.toString();
     }
@@ -100,7 +133,8 @@ public final class DesignText {
     /** Whether the compression layer is just the two lightest bars the search allows. */
     static boolean hangersOnly(SectionLayout l, barfit.design.SearchSpace space) {
         var lightest = space.compressionSizes().stream()
-                .min(java.util.Comparator.comparingDouble(barfit.catalogs.BarSize::massPerMetre)).orElseThrow();
+                .min(java.util.Comparator.comparingDouble(barfit.catalogs.BarSize::massPerMetre))
+                .orElseThrow();
         return l.compressionCount() == 2 && l.compressionBar().equals(lightest);
     }
 
@@ -109,14 +143,16 @@ public final class DesignText {
     }
 
     public static String describe(SectionLayout l, UnitSystem u) {
-        return len(l.width(), u) + " × " + len(l.height(), u) + "  " + l.bending().tensionFace().word() + " "
+        return len(l.width(), u) + " × " + len(l.height(), u) + "  "
+                + l.bending().tensionFace().word() + " "
                 + bars(l) + "  " + l.bending().compressionFace().word() + " " + l.compressionCount() + " "
                 + l.compressionBar().label() + "  stirrups " + Words.stirrups(l.stirrups(), u);
     }
 
     /** Size and longitudinal bars only. */
     public static String describeBars(SectionLayout l, UnitSystem u) {
-        return len(l.width(), u) + " × " + len(l.height(), u) + "  " + l.bending().tensionFace().word() + " "
+        return len(l.width(), u) + " × " + len(l.height(), u) + "  "
+                + l.bending().tensionFace().word() + " "
                 + bars(l) + "  " + l.bending().compressionFace().word() + " " + l.compressionCount() + " "
                 + l.compressionBar().label();
     }
@@ -124,15 +160,22 @@ public final class DesignText {
     public static String bars(SectionLayout l) {
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < l.tensionCounts().size(); i++) {
-            sb.append(i == 0 ? "" : " + ").append(l.tensionCounts().get(i)).append(' ').append(l.tensionBar().label());
+            sb.append(i == 0 ? "" : " + ")
+                    .append(l.tensionCounts().get(i))
+                    .append(' ')
+                    .append(l.tensionBar().label());
         }
         return sb.toString();
     }
 
     static void beam(DesignOutcome o, UnitSystem u, String currency, boolean trail, StringBuilder out) {
         var p = o.problem();
-        StringBuilder head = new StringBuilder("Beam ").append(p.id()).append("   Mu = ")
-                .append(u.withUnit(Math.abs(p.mu()), Dim.MOMENT)).append(' ').append(p.bending().word());
+        StringBuilder head = new StringBuilder("Beam ")
+                .append(p.id())
+                .append("   Mu = ")
+                .append(u.withUnit(Math.abs(p.mu()), Dim.MOMENT))
+                .append(' ')
+                .append(p.bending().word());
         if (p.vu() != null) {
             head.append("   Vu = ").append(u.withUnit(p.vu(), Dim.FORCE));
         }
@@ -153,22 +196,37 @@ public final class DesignText {
         CheckReport r = d.report();
         TextTable t = new TextTable(false, false);
         t.row("section", Words.shape(l.shape(), u));
-        t.row(l.bending().tensionFace().word(), bars(l) + "  (tension, " + l.tensionCounts().size()
-                + (l.tensionCounts().size() == 1 ? " layer)" : " layers)"));
-        t.row(l.bending().compressionFace().word(), l.compressionCount() + " " + l.compressionBar().label()
-                + (hangersOnly(l, p.space()) ? "  (hangers, counted in strength)" : "  (compression steel beyond the minimum hangers)"));
-        t.row("stirrups", Words.stirrups(l.stirrups(), u) + (p.vu() == null ? "  (minimum stirrups; " + CheckText.SHEAR_NOT_CHECKED + ")" : ""));
+        t.row(
+                l.bending().tensionFace().word(),
+                bars(l) + "  (tension, " + l.tensionCounts().size()
+                        + (l.tensionCounts().size() == 1 ? " layer)" : " layers)"));
+        t.row(
+                l.bending().compressionFace().word(),
+                l.compressionCount() + " " + l.compressionBar().label()
+                        + (hangersOnly(l, p.space())
+                                ? "  (hangers, counted in strength)"
+                                : "  (compression steel beyond the minimum hangers)"));
+        t.row(
+                "stirrups",
+                Words.stirrups(l.stirrups(), u)
+                        + (p.vu() == null ? "  (minimum stirrups; " + CheckText.SHEAR_NOT_CHECKED + ")" : ""));
         if (l.skin() != null) {
-            t.row("skin bars", l.skin().bar().label() + " @ " + u.withUnit(l.skin().spacing(), Dim.LENGTH)
-                    + " on both side faces (9.7.2.3)");
+            t.row(
+                    "skin bars",
+                    l.skin().bar().label() + " @ " + u.withUnit(l.skin().spacing(), Dim.LENGTH)
+                            + " on both side faces (9.7.2.3)");
         }
         var f = r.flexure();
-        t.row("strength", "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + "   Mu/φMn = "
-                + Words.ratio(Math.abs(p.mu()) / f.phiMn()) + "   εt = " + Words.fixed(f.epsT(), 5) + "   φ = "
-                + Words.phi(f.phi()) + " (" + f.strainClass() + ")");
+        t.row(
+                "strength",
+                "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + "   Mu/φMn = "
+                        + Words.ratio(Math.abs(p.mu()) / f.phiMn()) + "   εt = " + Words.fixed(f.epsT(), 5) + "   φ = "
+                        + Words.phi(f.phi()) + " (" + f.strainClass() + ")");
         if (r.shear() != null) {
-            t.row("shear", "φVn = " + u.withUnit(r.shear().phiVn(), Dim.FORCE) + "   Vu/φVn = "
-                    + Words.ratio(r.shear().vu() / r.shear().phiVn()));
+            t.row(
+                    "shear",
+                    "φVn = " + u.withUnit(r.shear().phiVn(), Dim.FORCE) + "   Vu/φVn = "
+                            + Words.ratio(r.shear().vu() / r.shear().phiVn()));
         }
         t.row("binding", binding(o.binding(), u));
         if (p.span() != null && p.span().ends() == null) {
@@ -177,8 +235,10 @@ public final class DesignText {
         String cur = currency.isEmpty() ? "" : " (" + currency + ")";
         t.row("cost " + Money.perLengthLabel(u) + cur, Money.breakdown(Money.scaled(d.costPerMetre(), u)));
         if (p.span() != null) {
-            t.row("cost of the beam" + cur, Money.breakdown(d.cost()) + "  over " + u.compact(p.span().length(), Dim.SPAN)
-                    + " " + u.unit(Dim.SPAN));
+            t.row(
+                    "cost of the beam" + cur,
+                    Money.breakdown(d.cost()) + "  over " + u.compact(p.span().length(), Dim.SPAN) + " "
+                            + u.unit(Dim.SPAN));
         }
         t.row("proof", proof(o.proof(), u));
         t.write("  ", out);
@@ -189,8 +249,13 @@ public final class DesignText {
             int k = 1;
             for (Design alt : o.alternatives()) {
                 double c = alt.cost().total();
-                a.row("#" + k++, describe(alt.layout(), u),
-                        Money.amount(p.span() != null ? c : Money.perLength(alt.costPerMetre().total(), u)),
+                a.row(
+                        "#" + k++,
+                        describe(alt.layout(), u),
+                        Money.amount(
+                                p.span() != null
+                                        ? c
+                                        : Money.perLength(alt.costPerMetre().total(), u)),
                         String.format(Locale.ROOT, "+%.1f %%", 100 * (c - bestCost) / bestCost));
             }
             a.write("    ", out);
@@ -199,8 +264,14 @@ public final class DesignText {
             out.append("\n  Checks of the chosen layout (section model)\n");
             TextTable ct = new TextTable(false, false, true, false, true, true, false);
             for (var c : r.checks()) {
-                ct.row(c.title(), c.clause(), Words.value(c.demand(), u), c.sense().equals("<=") ? "≤" : "≥",
-                        Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
+                ct.row(
+                        c.title(),
+                        c.clause(),
+                        Words.value(c.demand(), u),
+                        c.sense().equals("<=") ? "≤" : "≥",
+                        Words.value(c.limit(), u),
+                        Words.ratio(c.ratio()),
+                        c.pass() ? "ok" : "FAIL");
             }
             ct.write("    ", out);
             out.append("\n  Calculation trail\n");
@@ -215,13 +286,18 @@ public final class DesignText {
         }
         Map<String, List<String>> byWhen = new LinkedHashMap<>();
         for (Binding b : bs) {
-            byWhen.computeIfAbsent(Words.when(b, u), k -> new java.util.ArrayList<>()).add(
-                    b.limit().startsWith("stirrup_legs_bars") ? b.limit() + " (the office's legs rule, not the code)"
-                            : b.limit());
+            byWhen.computeIfAbsent(Words.when(b, u), k -> new java.util.ArrayList<>())
+                    .add(
+                            b.limit().startsWith("stirrup_legs_bars")
+                                    ? b.limit() + " (the office's legs rule, not the code)"
+                                    : b.limit());
         }
         StringBuilder sb = new StringBuilder();
         for (var e : byWhen.entrySet()) {
-            sb.append(sb.length() == 0 ? "" : "; ").append(e.getKey()).append(" → ").append(String.join(", ", e.getValue()));
+            sb.append(sb.length() == 0 ? "" : "; ")
+                    .append(e.getKey())
+                    .append(" → ")
+                    .append(String.join(", ", e.getValue()));
         }
         return sb.toString();
     }
@@ -238,23 +314,33 @@ public final class DesignText {
         return "CP-SAT " + Words.status(p.status()) + " over " + s.candidates()
                 + (s.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + ", bound " + bound + " "
                 + Money.perLengthLabel(u) + ", gap "
-                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %); " + s.framesEvaluated() + " of " + s.frames()
+                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %); " + s.framesEvaluated() + " of "
+                + s.frames()
                 + " frames evaluated, " + s.framesPrunedByBound() + " skipped by the cost bound; " + p.workers()
                 + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
     }
 
     static void diagnosis(Diagnosis d, UnitSystem u, StringBuilder out) {
         out.append("  no layout in the search space passes.\n");
-        out.append("  binding limit: ").append(d.limit()).append(" — ").append(DiagnosisWords.summary(d, u)).append('\n');
+        out.append("  binding limit: ")
+                .append(d.limit())
+                .append(" — ")
+                .append(DiagnosisWords.summary(d, u))
+                .append('\n');
         if (d.strongest() != null) {
-            out.append("  strongest ductile layout: ").append(describeBars(d.strongest(), u)).append("  φMn = ")
-                    .append(u.withUnit(d.strongestPhiMn(), Dim.MOMENT)).append('\n');
+            out.append("  strongest ductile layout: ")
+                    .append(describeBars(d.strongest(), u))
+                    .append("  φMn = ")
+                    .append(u.withUnit(d.strongestPhiMn(), Dim.MOMENT))
+                    .append('\n');
         }
         List<String> fixes = DiagnosisWords.fixes(d, u);
         if (fixes.isEmpty()) {
             out.append("  no single relaxed limit (depth, width, one more layer) gives a passing layout\n");
         } else {
-            out.append("  what would work (one limit at a time): ").append(Words.alternatives(fixes)).append('\n');
+            out.append("  what would work (one limit at a time): ")
+                    .append(Words.alternatives(fixes))
+                    .append('\n');
         }
     }
 }

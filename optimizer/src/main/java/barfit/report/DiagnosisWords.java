@@ -14,8 +14,7 @@ import java.util.List;
  * changes that would give one (its fixes). The searches give the facts; every report words them here.
  */
 public final class DiagnosisWords {
-    private DiagnosisWords() {
-    }
+    private DiagnosisWords() {}
 
     // ---------------------------------------------------------------- single sections
 
@@ -29,10 +28,12 @@ public final class DiagnosisWords {
         if (cause instanceof Diagnosis.FrameCheckFails c) {
             CheckResult r = c.check();
             return switch (r.id()) {
-                case "min_depth" -> "Table 9.3.1.1 needs h ≥ " + say(u, r.limit().value(), Dim.LENGTH) + " for this span, "
-                        + "but the deepest depth allowed is " + say(u, c.deepest(), Dim.LENGTH)
-                        + " (deflection is not computed for single sections)";
-                case "cover" -> "the cover is below Table 20.5.1.3.1 (" + say(u, r.limit().value(), Dim.LENGTH) + ")";
+                case "min_depth" ->
+                    "Table 9.3.1.1 needs h ≥ " + say(u, r.limit().value(), Dim.LENGTH) + " for this span, "
+                            + "but the deepest depth allowed is " + say(u, c.deepest(), Dim.LENGTH)
+                            + " (deflection is not computed for single sections)";
+                case "cover" ->
+                    "the cover is below Table 20.5.1.3.1 (" + say(u, r.limit().value(), Dim.LENGTH) + ")";
                 default -> r.title() + " fails (" + r.clause() + ")";
             };
         }
@@ -40,8 +41,9 @@ public final class DiagnosisWords {
             return "no bar layout fits the web at b = " + say(u, c.width(), Dim.LENGTH);
         }
         if (cause instanceof Diagnosis.FlexureFails c) {
-            return "the strongest ductile layout at " + say(u, c.width(), Dim.LENGTH) + " × " + say(u, c.height(), Dim.LENGTH)
-                    + " gives φMn = " + say(u, d.strongestPhiMn(), Dim.MOMENT) + " < Mu = " + say(u, c.mu(), Dim.MOMENT);
+            return "the strongest ductile layout at " + say(u, c.width(), Dim.LENGTH) + " × "
+                    + say(u, c.height(), Dim.LENGTH) + " gives φMn = " + say(u, d.strongestPhiMn(), Dim.MOMENT)
+                    + " < Mu = " + say(u, c.mu(), Dim.MOMENT);
         }
         if (cause instanceof Diagnosis.ShearFails c) {
             return "flexure can be met, but no stirrup option in the search carries Vu = " + say(u, c.vu(), Dim.FORCE)
@@ -53,12 +55,13 @@ public final class DiagnosisWords {
     public static List<String> fixes(Diagnosis d, UnitSystem u) {
         List<String> out = new ArrayList<>();
         if (d.deeper() != null) {
-            out.add("needs h ≥ " + say(u, d.deeper().height(), Dim.LENGTH) + " at b = " + say(u, d.deeper().width(), Dim.LENGTH)
+            out.add("needs h ≥ " + say(u, d.deeper().height(), Dim.LENGTH) + " at b = "
+                    + say(u, d.deeper().width(), Dim.LENGTH)
                     + (d.maxDepth() != null ? " (max_depth is " + say(u, d.maxDepth(), Dim.LENGTH) + ")" : ""));
         }
         if (d.wider() != null) {
-            out.add("b ≥ " + say(u, d.wider().width(), Dim.LENGTH) + " at h = " + say(u, d.wider().height(), Dim.LENGTH)
-                    + (d.fixedWidth() != null ? " (the beam fixes b)" : ""));
+            out.add("b ≥ " + say(u, d.wider().width(), Dim.LENGTH) + " at h = "
+                    + say(u, d.wider().height(), Dim.LENGTH) + (d.fixedWidth() != null ? " (the beam fixes b)" : ""));
         }
         if (d.moreLayers() != null) {
             out.add("allow " + d.moreLayers() + " layers of tension bars (max_layers)");
@@ -81,7 +84,8 @@ public final class DiagnosisWords {
             return deflection(c, d.atCap(), u);
         }
         if (cause instanceof SpanDesigner.Diagnosis.ShearFails c) {
-            return "the moments can be carried within the cap" + (c.deflectionSetAside() ? " (deflection set aside)" : "")
+            return "the moments can be carried within the cap"
+                    + (c.deflectionSetAside() ? " (deflection set aside)" : "")
                     + ", but no stirrups in the search carry the factored shears (or the web is too small for them, "
                     + "22.5.1.2)";
         }
@@ -98,7 +102,8 @@ public final class DiagnosisWords {
                     + "the factored moments with every flexure, ductility, minimum steel, spacing and detailing check met";
         }
         if (cause instanceof SpanDesigner.Diagnosis.TimeLimit c) {
-            return "the time limit (" + c.seconds() + " s) ended the search before a design passing every check was found";
+            return "the time limit (" + c.seconds()
+                    + " s) ended the search before a design passing every check was found";
         }
         if (cause instanceof GroupClash c) {
             List<String> optima = new ArrayList<>();
@@ -128,8 +133,11 @@ public final class DiagnosisWords {
                 + "meets them, " + say(u, c.width()) + " × " + say(u, c.height()) + ", deflects");
         String sep = " ";
         for (CheckResult r : atCap) {
-            sb.append(sep).append(say(u, r.demand().value())).append(r.id().equals("deflection_live")
-                    ? " under live load" : " long-term plus live").append(" against ").append(say(u, r.limit().value()));
+            sb.append(sep)
+                    .append(say(u, r.demand().value()))
+                    .append(r.id().equals("deflection_live") ? " under live load" : " long-term plus live")
+                    .append(" against ")
+                    .append(say(u, r.limit().value()));
             sep = " and ";
         }
         return sb.toString();
@@ -146,7 +154,8 @@ public final class DiagnosisWords {
         SpanDesigner.Fix deeper = d.deeper();
         if (deeper != null) {
             out.add("needs h ≥ " + say(u, deeper.height()) + ": the span designs at " + say(u, deeper.width()) + " × "
-                    + say(u, deeper.height()) + (d.maxDepth() != null ? " (max_depth is " + say(u, d.maxDepth()) + ")" : ""));
+                    + say(u, deeper.height())
+                    + (d.maxDepth() != null ? " (max_depth is " + say(u, d.maxDepth()) + ")" : ""));
         }
         SpanDesigner.Fix wider = d.wider();
         if (wider != null) {

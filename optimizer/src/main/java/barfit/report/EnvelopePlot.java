@@ -28,8 +28,7 @@ public final class EnvelopePlot {
     private static final Color MIN = new Color(0xb0, 0x3a, 0x2e);
     private static final Color SUPPORT = new Color(0x88, 0x88, 0x88);
 
-    private EnvelopePlot() {
-    }
+    private EnvelopePlot() {}
 
     public static String svg(LineResult r, String id, UnitSystem u) {
         System.setProperty("java.awt.headless", "true");
@@ -49,21 +48,24 @@ public final class EnvelopePlot {
         for (int j = 0; j <= r.line().spanCount(); j++) {
             double x = u.fromSI(r.line().supportX(j), Dim.SPAN);
             for (XYPlot p : new XYPlot[] {moments, shears}) {
-                ValueMarker m = new ValueMarker(x, SUPPORT, new BasicStroke(1f, BasicStroke.CAP_BUTT,
-                        BasicStroke.JOIN_MITER, 1f, new float[] {4f, 4f}, 0f));
+                ValueMarker m = new ValueMarker(
+                        x,
+                        SUPPORT,
+                        new BasicStroke(
+                                1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {4f, 4f}, 0f));
                 p.addDomainMarker(m);
             }
         }
-        NumberAxis x = new NumberAxis("x along the line from the first support's centre line (" + u.unit(Dim.SPAN)
-                + ")");
+        NumberAxis x =
+                new NumberAxis("x along the line from the first support's centre line (" + u.unit(Dim.SPAN) + ")");
         x.setAutoRangeIncludesZero(false);
         CombinedDomainXYPlot combined = new CombinedDomainXYPlot(x);
         combined.setGap(12);
         combined.add(moments, 3);
         combined.add(shears, 2);
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), combined, true);
-        chart.setTitle(new TextTitle("Line " + id + ": factored moment and shear envelopes",
-                new Font(Font.SANS_SERIF, Font.BOLD, 14)));
+        chart.setTitle(new TextTitle(
+                "Line " + id + ": factored moment and shear envelopes", new Font(Font.SANS_SERIF, Font.BOLD, 14)));
         chart.setBackgroundPaint(Color.WHITE);
         chart.setAntiAlias(true);
         SVGGraphics2D g = new SVGGraphics2D(900, 640);

@@ -1,8 +1,8 @@
 package barfit.report;
 
+import barfit.section.trail.Dim;
 import barfit.section.trail.Q;
 import barfit.section.trail.Trail;
-import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
@@ -16,8 +16,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 public final class Json {
     public static final ObjectMapper MAPPER = new ObjectMapper();
 
-    private Json() {
-    }
+    private Json() {}
 
     public static ObjectNode object() {
         return MAPPER.createObjectNode();
@@ -46,7 +45,11 @@ public final class Json {
 
     public static void putRatio(ObjectNode o, String key, double r) {
         if (Double.isFinite(r)) {
-            o.put(key, new java.math.BigDecimal(r).round(new java.math.MathContext(4)).doubleValue());
+            o.put(
+                    key,
+                    new java.math.BigDecimal(r)
+                            .round(new java.math.MathContext(4))
+                            .doubleValue());
         } else {
             o.putNull(key);
         }

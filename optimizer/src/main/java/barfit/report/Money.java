@@ -6,8 +6,7 @@ import java.util.Locale;
 
 /** Costs for reports: per metre (SI) or per foot (US) of beam, or per beam when a span is given. */
 public final class Money {
-    private Money() {
-    }
+    private Money() {}
 
     /** Per-metre cost to the user's per-length basis. */
     public static double perLength(double perMetre, UnitSystem u) {

@@ -11,17 +11,34 @@ import java.util.Locale;
 
 /** {@code schedule.csv}: one row per beam, in the input's units. */
 public final class ScheduleCsv {
-    private ScheduleCsv() {
-    }
+    private ScheduleCsv() {}
 
     public static String render(ScheduleResult r) {
         UnitSystem u = r.input().settings().units();
         String len = u.unit(Dim.LENGTH);
         String mom = u.unit(Dim.MOMENT);
         StringBuilder out = new StringBuilder();
-        out.append(String.join(",", "id", "group", "status", "width_" + len, "height_" + len, "bottom", "top_continuous",
-                "top_left", "top_right", "stirrups", "phiMn_left_" + mom, "Mu_left_" + mom, "phiMn_mid_" + mom,
-                "Mu_mid_" + mom, "phiMn_right_" + mom, "Mu_right_" + mom, "cost", "own_optimum_cost", "bar_marks"))
+        out.append(String.join(
+                        ",",
+                        "id",
+                        "group",
+                        "status",
+                        "width_" + len,
+                        "height_" + len,
+                        "bottom",
+                        "top_continuous",
+                        "top_left",
+                        "top_right",
+                        "stirrups",
+                        "phiMn_left_" + mom,
+                        "Mu_left_" + mom,
+                        "phiMn_mid_" + mom,
+                        "Mu_mid_" + mom,
+                        "phiMn_right_" + mom,
+                        "Mu_right_" + mom,
+                        "cost",
+                        "own_optimum_cost",
+                        "bar_marks"))
                 .append('\n');
         for (ScheduleRows.Row schedule : ScheduleRows.rows(r)) {
             ScheduleResult.Beam b = schedule.entry();

@@ -1,6 +1,5 @@
 package barfit.report;
 
-import barfit.design.Proof;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -9,8 +8,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 
 /** {@code schedule.json}: the schedule, its proof and price of standardisation, and every beam in full. */
 public final class ScheduleJson {
-    private ScheduleJson() {
-    }
+    private ScheduleJson() {}
 
     public static String render(ScheduleResult r) {
         UnitSystem u = r.input().settings().units();
@@ -42,7 +40,9 @@ public final class ScheduleJson {
         }
         ObjectNode sum = root.putObject("summary");
         sum.put("beams", r.beams().size());
-        sum.put("beams_without_design", r.beams().stream().filter(b -> !b.feasible()).count());
+        sum.put(
+                "beams_without_design",
+                r.beams().stream().filter(b -> !b.feasible()).count());
         sum.put("beams_cost", round(r.beamsCost()));
         sum.put("formwork_sets_cost", round(r.formworkSetsCost()));
         sum.put("total_cost", round(r.totalCost()));
@@ -109,7 +109,10 @@ public final class ScheduleJson {
             }
             if (b.feasible()) {
                 for (var m : bo.withArray("bars")) {
-                    ((ObjectNode) m).put("schedule_mark", b.beam().id() + "/" + m.get("mark").asText());
+                    ((ObjectNode) m)
+                            .put(
+                                    "schedule_mark",
+                                    b.beam().id() + "/" + m.get("mark").asText());
                 }
             }
             beams.add(bo);

@@ -19,8 +19,7 @@ import java.util.Map;
  * word them with the phrases below; the HTML report words the same rows its own way.
  */
 public final class ScheduleRows {
-    private ScheduleRows() {
-    }
+    private ScheduleRows() {}
 
     /**
      * One beam's row. Where the beam has no design, {@code design} and everything drawn from it are null
@@ -33,8 +32,17 @@ public final class ScheduleRows {
      * @param right          the same at the right support
      * @param strengths      phi Mn and Mu at each section the span has, in the design's order
      */
-    public record Row(ScheduleResult.Beam entry, SpanProblem problem, SpanDesigner.Design design, SpanLayout layout,
-            String bottom, String top, double topPastSupport, SupportTop left, SupportTop right, List<ZoneStirrups> zones,
+    public record Row(
+            ScheduleResult.Beam entry,
+            SpanProblem problem,
+            SpanDesigner.Design design,
+            SpanLayout layout,
+            String bottom,
+            String top,
+            double topPastSupport,
+            SupportTop left,
+            SupportTop right,
+            List<ZoneStirrups> zones,
             List<Strength> strengths) {
         public boolean feasible() {
             return design != null;
@@ -46,16 +54,13 @@ public final class ScheduleRows {
     }
 
     /** Top bars at a continuous support: per layer, with {@code extra} of them run {@code extension} (mm) past the face. */
-    public record SupportTop(String bars, int extra, double extension) {
-    }
+    public record SupportTop(String bars, int extra, double extension) {}
 
     /** A stirrup zone: its name, its extent from the left face (mm) and its stirrups. */
-    public record ZoneStirrups(String name, double from, double to, Stirrups stirrups) {
-    }
+    public record ZoneStirrups(String name, double from, double to, Stirrups stirrups) {}
 
     /** phi Mn and |Mu| (N·mm) at a section of the span. */
-    public record Strength(SpanProblem.Place place, double phiMn, double mu) {
-    }
+    public record Strength(SpanProblem.Place place, double phiMn, double mu) {}
 
     public static List<Row> rows(ScheduleResult r) {
         List<Row> out = new ArrayList<>();
@@ -72,19 +77,35 @@ public final class ScheduleRows {
         }
         SpanDesigner.Design d = b.outcome().best();
         SpanLayout l = d.layout();
-        String top = p.cantilever() ? bars(l.topLeft(), l.top()) : l.topContinuous() + " " + l.top().label();
+        String top = p.cantilever()
+                ? bars(l.topLeft(), l.top())
+                : l.topContinuous() + " " + l.top().label();
         double past = p.cantilever() ? l.extLeft() - p.span() : Double.NaN;
         List<ZoneStirrups> zones = new ArrayList<>();
         for (int i = 0; i < p.zones().size(); i++) {
             SpanProblem.Zone z = p.zones().get(i);
-            zones.add(new ZoneStirrups(z.name(), z.from(), z.to(), l.zoneStirrups().get(i)));
+            zones.add(new ZoneStirrups(
+                    z.name(), z.from(), z.to(), l.zoneStirrups().get(i)));
         }
         List<Strength> strengths = new ArrayList<>();
         for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
-            strengths.add(new Strength(e.getKey(), e.getValue().flexure().phiMn(), Math.abs(e.getValue().demand().mu())));
+            strengths.add(new Strength(
+                    e.getKey(),
+                    e.getValue().flexure().phiMn(),
+                    Math.abs(e.getValue().demand().mu())));
         }
-        return new Row(b, p, d, l, bars(l.bottomCounts(), l.bottom()), top, past,
-                supportTop(p, l, SpanProblem.Place.LEFT), supportTop(p, l, SpanProblem.Place.RIGHT), zones, strengths);
+        return new Row(
+                b,
+                p,
+                d,
+                l,
+                bars(l.bottomCounts(), l.bottom()),
+                top,
+                past,
+                supportTop(p, l, SpanProblem.Place.LEFT),
+                supportTop(p, l, SpanProblem.Place.RIGHT),
+                zones,
+                strengths);
     }
 
     private static SupportTop supportTop(SpanProblem p, SpanLayout l, SpanProblem.Place place) {
@@ -92,7 +113,9 @@ public final class ScheduleRows {
             return null;
         }
         List<Integer> counts = place == SpanProblem.Place.LEFT ? l.topLeft() : l.topRight();
-        return new SupportTop(bars(counts, l.top()), SpanLayout.sum(counts) - l.topContinuous(),
+        return new SupportTop(
+                bars(counts, l.top()),
+                SpanLayout.sum(counts) - l.topContinuous(),
                 place == SpanProblem.Place.LEFT ? l.extLeft() : l.extRight());
     }
 
@@ -108,17 +131,20 @@ public final class ScheduleRows {
     // ---------------------------------------------------------------- the text's and the CSV's words
 
     public static String size(Row row, UnitSystem u) {
-        return u.compact(row.layout().width(), Dim.LENGTH) + " × " + u.compact(row.layout().height(), Dim.LENGTH);
+        return u.compact(row.layout().width(), Dim.LENGTH) + " × "
+                + u.compact(row.layout().height(), Dim.LENGTH);
     }
 
     public static String topContinuous(Row row, UnitSystem u) {
-        return row.cantilever() ? row.top() + " (full length + " + u.withUnit(row.topPastSupport(), Dim.SPAN)
-                + " past the support)" : row.top();
+        return row.cantilever()
+                ? row.top() + " (full length + " + u.withUnit(row.topPastSupport(), Dim.SPAN) + " past the support)"
+                : row.top();
     }
 
     /** As {@link #topContinuous}, shorter for the terminal. */
     public static String topContinuousShort(Row row, UnitSystem u) {
-        return row.cantilever() ? row.top() + " (+ " + u.withUnit(row.topPastSupport(), Dim.SPAN) + " past support)"
+        return row.cantilever()
+                ? row.top() + " (+ " + u.withUnit(row.topPastSupport(), Dim.SPAN) + " past support)"
                 : row.top();
     }
 
@@ -127,8 +153,8 @@ public final class ScheduleRows {
         if (at == null) {
             return "";
         }
-        return at.bars() + (at.extra() > 0 ? " (" + at.extra() + " extra × " + u.withUnit(at.extension(), Dim.SPAN) + ")"
-                : "");
+        return at.bars()
+                + (at.extra() > 0 ? " (" + at.extra() + " extra × " + u.withUnit(at.extension(), Dim.SPAN) + ")" : "");
     }
 
     /**
@@ -184,7 +210,8 @@ public final class ScheduleRows {
     public static List<String> marks(String id, SpanDesigner.Design d, UnitSystem u) {
         List<String> out = new ArrayList<>();
         for (SpanLayout.BarMark m : d.bars()) {
-            out.add(id + "/" + m.mark() + ": " + m.count() + " " + m.bar().label() + " × " + u.withUnit(m.length(), Dim.SPAN));
+            out.add(id + "/" + m.mark() + ": " + m.count() + " " + m.bar().label() + " × "
+                    + u.withUnit(m.length(), Dim.SPAN));
         }
         return out;
     }

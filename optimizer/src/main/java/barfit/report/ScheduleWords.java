@@ -7,8 +7,7 @@ import barfit.schedule.ScheduleResult;
 public final class ScheduleWords {
     private static final String LAZY = "; sizes priced lazily against bar-free bounds";
 
-    private ScheduleWords() {
-    }
+    private ScheduleWords() {}
 
     /** The proof's method, or for an INFEASIBLE proof why no schedule meets the limits. */
     public static String method(ScheduleResult r) {
@@ -27,12 +26,20 @@ public final class ScheduleWords {
     /** "at most 2 section sizes with 1 bar size cannot hold every beam; at least 3 section sizes are needed". */
     private static String limitsTooTight(ScheduleResult r) {
         Rationalise limits = r.input().rationalise();
-        int fewest = r.standardisation().stream().filter(pt -> !Double.isNaN(pt.cost()))
-                .mapToInt(ScheduleResult.StandardisationPoint::sizes).min().orElse(-1);
-        return (limits.maxSectionSizes() == null ? "the bar sizes allowed" : "at most " + limits.maxSectionSizes()
-                + (limits.maxSectionSizes() == 1 ? " section size" : " section sizes")
-                + (limits.maxBarSizes() == null ? "" : " with " + limits.maxBarSizes()
-                + (limits.maxBarSizes() == 1 ? " bar size" : " bar sizes"))) + " cannot hold every beam"
+        int fewest = r.standardisation().stream()
+                .filter(pt -> !Double.isNaN(pt.cost()))
+                .mapToInt(ScheduleResult.StandardisationPoint::sizes)
+                .min()
+                .orElse(-1);
+        return (limits.maxSectionSizes() == null
+                        ? "the bar sizes allowed"
+                        : "at most " + limits.maxSectionSizes()
+                                + (limits.maxSectionSizes() == 1 ? " section size" : " section sizes")
+                                + (limits.maxBarSizes() == null
+                                        ? ""
+                                        : " with " + limits.maxBarSizes()
+                                                + (limits.maxBarSizes() == 1 ? " bar size" : " bar sizes")))
+                + " cannot hold every beam"
                 + (fewest > 0 ? "; at least " + fewest + " section sizes are needed" : "");
     }
 }

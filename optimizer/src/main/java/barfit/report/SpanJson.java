@@ -19,8 +19,7 @@ import java.util.Map;
 
 /** The JSON of one whole span in {@code barfit design}. */
 public final class SpanJson {
-    private SpanJson() {
-    }
+    private SpanJson() {}
 
     /** A size at which the span designs ({@code null} when none was found). */
     private static void fix(ObjectNode dn, String key, SpanDesigner.Fix f, UnitSystem u) {

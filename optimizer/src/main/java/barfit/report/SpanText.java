@@ -7,8 +7,8 @@ import barfit.design.span.SpanProblem;
 import barfit.section.CheckReport;
 import barfit.section.CheckResult;
 import barfit.section.FlexureResult;
-import barfit.section.SpanChecks;
 import barfit.section.SectionChecks;
+import barfit.section.SpanChecks;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import java.util.List;
@@ -18,11 +18,11 @@ import java.util.Map;
 /** The terminal block of one whole span in {@code barfit design}. */
 public final class SpanText {
     /** The warning a span without shears gets: its stirrups are the minimum, its shear strength unchecked. */
-    public static final String NO_SHEARS = "no shears given: minimum stirrups (Av,min at the widest spacing allowed) in "
-            + "every zone; shear strength not checked (give shear: {left, right})";
+    public static final String NO_SHEARS =
+            "no shears given: minimum stirrups (Av,min at the widest spacing allowed) in "
+                    + "every zone; shear strength not checked (give shear: {left, right})";
 
-    private SpanText() {
-    }
+    private SpanText() {}
 
     /** Warnings about what a designed span leaves unchecked: none, or the missing shears. */
     public static List<String> warnings(SpanProblem p) {
@@ -55,7 +55,11 @@ public final class SpanText {
 
     public static void render(SpanDesigner.Outcome o, UnitSystem u, String currency, boolean trail, StringBuilder out) {
         SpanProblem p = o.problem();
-        out.append("Beam ").append(p.id()).append("   span ").append(span(p.span(), u)).append(", ")
+        out.append("Beam ")
+                .append(p.id())
+                .append("   span ")
+                .append(span(p.span(), u))
+                .append(", ")
                 .append(p.ends().words());
         if (p.maxDepth() != null) {
             out.append("   max depth ").append(len(p.maxDepth(), u));
@@ -64,15 +68,24 @@ public final class SpanText {
         if (!o.feasible()) {
             var d = o.diagnosis();
             if (o.status().equals("unknown")) {
-                out.append("  ").append(DiagnosisWords.summary(d, u)).append("; ")
-                        .append(Words.alternatives(DiagnosisWords.fixes(d, u))).append('\n');
+                out.append("  ")
+                        .append(DiagnosisWords.summary(d, u))
+                        .append("; ")
+                        .append(Words.alternatives(DiagnosisWords.fixes(d, u)))
+                        .append('\n');
                 return;
             }
             out.append("  no layout in the search space passes.\n");
-            out.append("  binding limit: ").append(d.limit()).append(" — ").append(DiagnosisWords.summary(d, u)).append('\n');
+            out.append("  binding limit: ")
+                    .append(d.limit())
+                    .append(" — ")
+                    .append(DiagnosisWords.summary(d, u))
+                    .append('\n');
             List<String> fixes = DiagnosisWords.fixes(d, u);
-            out.append(fixes.isEmpty() ? "  no single relaxed limit (depth, width) gives a passing layout\n"
-                    : "  what would work (one limit at a time): " + Words.alternatives(fixes) + "\n");
+            out.append(
+                    fixes.isEmpty()
+                            ? "  no single relaxed limit (depth, width) gives a passing layout\n"
+                            : "  what would work (one limit at a time): " + Words.alternatives(fixes) + "\n");
             return;
         }
         SpanDesigner.Design d = o.best();
@@ -82,18 +95,30 @@ public final class SpanText {
         }
         TextTable t = new TextTable(false, false);
         t.row("demand", demand(p, u));
-        t.row("section", Words.shape(l.shape(), u) + (l.flange() == null ? ""
-                : p.cantilever() ? " (flange in tension at the fixed end: not counted in strength)"
-                : " (flange counted at mid-span)"));
+        t.row(
+                "section",
+                Words.shape(l.shape(), u)
+                        + (l.flange() == null
+                                ? ""
+                                : p.cantilever()
+                                        ? " (flange in tension at the fixed end: not counted in strength)"
+                                        : " (flange counted at mid-span)"));
         if (l.flange() != null && (p.leftSupport() || p.rightSupport())) {
-            t.row("flange", (p.cantilever() ? "in tension at the fixed end: " : "in tension over the supports: ")
-                    + SectionChecks.tensionFlangeNote(l.shape().flange(), u.code()).replace("tension bars", "top bars"));
+            t.row(
+                    "flange",
+                    (p.cantilever() ? "in tension at the fixed end: " : "in tension over the supports: ")
+                            + SectionChecks.tensionFlangeNote(l.shape().flange(), u.code())
+                                    .replace("tension bars", "top bars"));
         }
-        t.row("bottom", counts(l.bottomCounts(), l.bottom().label()) + ", full span"
-                + (p.bottomAnchored() ? ", anchored at the supports" + bottomAtSupports(p, d) : ""));
+        t.row(
+                "bottom",
+                counts(l.bottomCounts(), l.bottom().label()) + ", full span"
+                        + (p.bottomAnchored() ? ", anchored at the supports" + bottomAtSupports(p, d) : ""));
         if (p.cantilever()) {
-            t.row("top", counts(l.topLeft(), l.top().label()) + ", full length and " + span(l.extLeft() - p.span(), u)
-                    + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
+            t.row(
+                    "top",
+                    counts(l.topLeft(), l.top().label()) + ", full length and " + span(l.extLeft() - p.span(), u)
+                            + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
             t.row("top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + topAtMid(d, u));
             if (p.leftSupport()) {
@@ -107,18 +132,26 @@ public final class SpanText {
         for (int i = 0; i < zones.size(); i++) {
             SpanProblem.Zone z = zones.get(i);
             var s = l.zoneStirrups().get(i);
-            t.row(i == 0 ? "stirrups" : "", z.name() + " zone " + span(z.from(), u) + "–" + span(z.to(), u) + ": "
-                    + Words.stirrups(s, u) + " (" + sets(SpanLayout.stirrupSets(z.length(), s.spacing()))
-                    + (d.report().zoneShears().get(i) == null ? ", minimum"
-                            : ", Vu = " + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE)) + ")");
+            t.row(
+                    i == 0 ? "stirrups" : "",
+                    z.name() + " zone " + span(z.from(), u) + "–" + span(z.to(), u) + ": "
+                            + Words.stirrups(s, u) + " (" + sets(SpanLayout.stirrupSets(z.length(), s.spacing()))
+                            + (d.report().zoneShears().get(i) == null
+                                    ? ", minimum"
+                                    : ", Vu = "
+                                            + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE))
+                            + ")");
         }
         boolean firstSection = true;
         for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             FlexureResult f = e.getValue().flexure();
             double mu = e.getValue().demand().mu();
-            t.row(firstSection ? "sections" : "", where(e.getKey()) + ": Mu = " + u.withUnit(Math.abs(mu), Dim.MOMENT)
-                    + ", φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " (ratio " + Words.ratio(Math.abs(mu) / f.phiMn())
-                    + "), εt = " + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
+            t.row(
+                    firstSection ? "sections" : "",
+                    where(e.getKey()) + ": Mu = " + u.withUnit(Math.abs(mu), Dim.MOMENT)
+                            + ", φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " (ratio "
+                            + Words.ratio(Math.abs(mu) / f.phiMn())
+                            + "), εt = " + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
             firstSection = false;
         }
         t.row("deflection", deflection(d.report().span(), p, u));
@@ -131,7 +164,12 @@ public final class SpanText {
         TextTable bars = new TextTable(false, false, true, false, true);
         bars.row("mark", "role", "count", "bar", "length (" + u.unit(Dim.SPAN) + ")");
         for (SpanLayout.BarMark b : d.bars()) {
-            bars.row(b.mark(), Words.role(b), String.valueOf(b.count()), b.bar().label(), u.number(b.length(), Dim.SPAN));
+            bars.row(
+                    b.mark(),
+                    Words.role(b),
+                    String.valueOf(b.count()),
+                    b.bar().label(),
+                    u.number(b.length(), Dim.SPAN));
         }
         bars.write("    ", out);
         if (!o.alternatives().isEmpty()) {
@@ -140,33 +178,63 @@ public final class SpanText {
             int k = 1;
             for (SpanDesigner.Design alt : o.alternatives()) {
                 SpanLayout al = alt.layout();
-                a.row("#" + k++, u.compact(al.width(), Dim.LENGTH) + " × " + u.compact(al.height(), Dim.LENGTH)
-                        + "  bottom " + counts(al.bottomCounts(), al.bottom().label()) + "  top " + al.top().label(),
+                a.row(
+                        "#" + k++,
+                        u.compact(al.width(), Dim.LENGTH) + " × " + u.compact(al.height(), Dim.LENGTH) + "  bottom "
+                                + counts(al.bottomCounts(), al.bottom().label()) + "  top "
+                                + al.top().label(),
                         Money.amount(alt.cost().total()),
-                        String.format(Locale.ROOT, "+%.1f %%", 100 * (alt.cost().total() - d.cost().total()) / d.cost().total()));
+                        String.format(
+                                Locale.ROOT,
+                                "+%.1f %%",
+                                100
+                                        * (alt.cost().total() - d.cost().total())
+                                        / d.cost().total()));
             }
             a.write("    ", out);
         }
         if (trail) {
             out.append("\n  Checks of the chosen span (section model)\n");
             TextTable ct = new TextTable(false, false, false, true, false, true, true, false);
-            for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            for (Map.Entry<SpanProblem.Place, CheckReport> e :
+                    d.report().sections().entrySet()) {
                 for (CheckResult c : e.getValue().checks()) {
-                    ct.row(where(e.getKey()), c.title(), c.clause(), Words.value(c.demand(), u),
-                            c.sense().equals("<=") ? "≤" : "≥", Words.value(c.limit(), u), Words.ratio(c.ratio()),
+                    ct.row(
+                            where(e.getKey()),
+                            c.title(),
+                            c.clause(),
+                            Words.value(c.demand(), u),
+                            c.sense().equals("<=") ? "≤" : "≥",
+                            Words.value(c.limit(), u),
+                            Words.ratio(c.ratio()),
                             c.pass() ? "ok" : "FAIL");
                 }
             }
             for (CheckResult c : d.report().zoneChecks()) {
-                ct.row("zones", c.title(), c.clause(), Words.value(c.demand(), u), c.sense().equals("<=") ? "≤" : "≥",
-                        Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
+                ct.row(
+                        "zones",
+                        c.title(),
+                        c.clause(),
+                        Words.value(c.demand(), u),
+                        c.sense().equals("<=") ? "≤" : "≥",
+                        Words.value(c.limit(), u),
+                        Words.ratio(c.ratio()),
+                        c.pass() ? "ok" : "FAIL");
             }
             for (CheckResult c : d.report().span().checks()) {
-                ct.row("span", c.title(), c.clause(), Words.value(c.demand(), u), c.sense().equals("<=") ? "≤" : "≥",
-                        Words.value(c.limit(), u), Words.ratio(c.ratio()), c.pass() ? "ok" : "FAIL");
+                ct.row(
+                        "span",
+                        c.title(),
+                        c.clause(),
+                        Words.value(c.demand(), u),
+                        c.sense().equals("<=") ? "≤" : "≥",
+                        Words.value(c.limit(), u),
+                        Words.ratio(c.ratio()),
+                        c.pass() ? "ok" : "FAIL");
             }
             ct.write("    ", out);
-            for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
+            for (Map.Entry<SpanProblem.Place, CheckReport> e :
+                    d.report().sections().entrySet()) {
                 out.append("\n  Calculation trail, ").append(where(e.getKey())).append('\n');
                 TrailText.write(e.getValue().trail(), u, "    ", out);
             }
@@ -186,8 +254,16 @@ public final class SpanText {
         if (Double.isNaN(strain)) {
             return "";
         }
-        String c = "c = " + u.withUnit(d.report().sections().get(SpanProblem.Place.MID).flexure().c(), Dim.LENGTH);
-        return strain < 0 ? " (compression steel at mid-span: above the neutral axis, " + c + ")"
+        String c = "c = "
+                + u.withUnit(
+                        d.report()
+                                .sections()
+                                .get(SpanProblem.Place.MID)
+                                .flexure()
+                                .c(),
+                        Dim.LENGTH);
+        return strain < 0
+                ? " (compression steel at mid-span: above the neutral axis, " + c + ")"
                 : " (in tension at mid-span: below the neutral axis, " + c + ", so not compression steel there)";
     }
 
@@ -214,8 +290,10 @@ public final class SpanText {
                 tension.add(where(place));
             }
         }
-        return tension.isEmpty() ? " (compression steel there)" : " (counted, but in tension at the "
-                + String.join(" and ", tension) + ": below the neutral axis, so not compression steel there)";
+        return tension.isEmpty()
+                ? " (compression steel there)"
+                : " (counted, but in tension at the " + String.join(" and ", tension)
+                        + ": below the neutral axis, so not compression steel there)";
     }
 
     static String binding(List<barfit.design.Binding> bs, UnitSystem u) {
@@ -224,14 +302,19 @@ public final class SpanText {
         }
         StringBuilder sb = new StringBuilder();
         for (var b : bs) {
-            sb.append(sb.length() == 0 ? "" : ", ").append(b.limit()).append(" (").append(Words.when(b, u)).append(')');
+            sb.append(sb.length() == 0 ? "" : ", ")
+                    .append(b.limit())
+                    .append(" (")
+                    .append(Words.when(b, u))
+                    .append(')');
         }
         return sb.toString();
     }
 
     static String extensionRule(SpanProblem p, SpanLayout l) {
         var det = l.detailing(p.detailing());
-        return Words.extension(barfit.design.span.Extension.of(p, l.width(), l.height(), det, l.top()).governs());
+        return Words.extension(barfit.design.span.Extension.of(p, l.width(), l.height(), det, l.top())
+                .governs());
     }
 
     static String demand(SpanProblem p, UnitSystem u) {
@@ -255,7 +338,9 @@ public final class SpanText {
             }
         }
         if (p.service() != null) {
-            sb.append(";  service D ").append(u.withUnit(p.service().dead(), Dim.LINE_LOAD)).append(", L ")
+            sb.append(";  service D ")
+                    .append(u.withUnit(p.service().dead(), Dim.LINE_LOAD))
+                    .append(", L ")
                     .append(u.withUnit(p.service().live(), Dim.LINE_LOAD));
         }
         return sb.toString();
@@ -266,8 +351,10 @@ public final class SpanText {
             return "not computed: h ≥ h,min = " + len(r.hMin(), u) + " of Table 9.3.1.1";
         }
         return "computed (h < h,min = " + len(r.hMin(), u) + "): live " + u.withUnit(r.liveDeflection(), Dim.LENGTH)
-                + " ≤ ℓ/" + fmt(p.limits().live()) + " = " + u.withUnit(p.span() / p.limits().live(), Dim.LENGTH)
-                + "; long-term + live " + u.withUnit(r.longTermDeflection(), Dim.LENGTH) + " ≤ ℓ/" + fmt(p.limits().total())
+                + " ≤ ℓ/" + fmt(p.limits().live()) + " = "
+                + u.withUnit(p.span() / p.limits().live(), Dim.LENGTH)
+                + "; long-term + live " + u.withUnit(r.longTermDeflection(), Dim.LENGTH) + " ≤ ℓ/"
+                + fmt(p.limits().total())
                 + " = " + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
     }
 
@@ -300,7 +387,8 @@ public final class SpanText {
         var s = p.search();
         return "CP-SAT " + Words.status(p.status()) + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective())
                 + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound()) + ", gap "
-                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over " + p.solver().booleans() + " booleans; "
+                + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over "
+                + p.solver().booleans() + " booleans; "
                 + s.generator().framesEvaluated() + " of " + s.generator().frames() + " frames evaluated, "
                 + s.generator().framesSkipped() + " skipped by the cost bound; " + s.solves()
                 + (s.solves() == 1 ? " solve" : " solves")

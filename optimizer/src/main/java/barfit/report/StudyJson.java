@@ -12,8 +12,7 @@ import java.util.List;
 
 /** JSON of {@code compare} and {@code sweep}. */
 public final class StudyJson {
-    private StudyJson() {
-    }
+    private StudyJson() {}
 
     static ObjectNode root(Settings s) {
         ObjectNode root = Json.object();
@@ -155,14 +154,19 @@ public final class StudyJson {
             }
             // which a null compression_needed_below means: needed at every cap of the range, or at none
             b.put("compression_needed_everywhere", r.compression().equals("everywhere"));
-            b.put("compression_note", switch (r.compression()) {
-                case "below" -> "needed below compression_needed_below";
-                case "everywhere" -> "needed at every cap in the range: the minimum hangers alone work at no depth up to "
-                        + "the last cap";
-                default -> r.shallowestFeasible() == null ? "nothing passes in the range"
-                        : "not needed within the range: at every cap with a passing design the minimum hangers alone "
-                        + "can work";
-            });
+            b.put(
+                    "compression_note",
+                    switch (r.compression()) {
+                        case "below" -> "needed below compression_needed_below";
+                        case "everywhere" ->
+                            "needed at every cap in the range: the minimum hangers alone work at no depth up to "
+                                    + "the last cap";
+                        default ->
+                            r.shallowestFeasible() == null
+                                    ? "nothing passes in the range"
+                                    : "not needed within the range: at every cap with a passing design the minimum hangers alone "
+                                            + "can work";
+                    });
             Json.put(b, "first_cap", r.firstCap(), Dim.LENGTH, u);
             Json.put(b, "last_cap", r.lastCap(), Dim.LENGTH, u);
             ObjectNode chosen = b.putObject("design");

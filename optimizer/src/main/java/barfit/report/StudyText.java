@@ -11,8 +11,7 @@ import java.util.Locale;
 
 /** Terminal reports of {@code compare} and {@code sweep}. */
 public final class StudyText {
-    private StudyText() {
-    }
+    private StudyText() {}
 
     static String head(String command, Settings s) {
         return "barfit " + command + " — " + s.file() + " — " + s.code().edition() + "\n" + Caution.text() + "\n"
@@ -34,8 +33,11 @@ public final class StudyText {
      * hangers alone passes within the limits too) or by choice (not relied on).
      */
     static String compression(Summary s) {
-        return s.compressionRequired() ? "more, needed" : s.compressionNeeded() ? "more, for cost"
-                : s.compressionUsed() ? "more, by choice" : "minimum hangers";
+        return s.compressionRequired()
+                ? "more, needed"
+                : s.compressionNeeded()
+                        ? "more, for cost"
+                        : s.compressionUsed() ? "more, by choice" : "minimum hangers";
     }
 
     /** The legend of the compression-layer words, for those that appear, one to a line. */
@@ -53,25 +55,43 @@ public final class StudyText {
         }
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < parts.size(); i++) {
-            sb.append(i == 0 ? "  compression layer — " : "                      ").append(parts.get(i)).append('\n');
+            sb.append(i == 0 ? "  compression layer — " : "                      ")
+                    .append(parts.get(i))
+                    .append('\n');
         }
         return sb.toString();
     }
 
-    public static String compare(Settings settings, List<Compare.Result> results, List<Boolean> perBeam, String currency) {
+    public static String compare(
+            Settings settings, List<Compare.Result> results, List<Boolean> perBeam, String currency) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder(head("compare", settings));
         for (int i = 0; i < results.size(); i++) {
             Compare.Result r = results.get(i);
             boolean pb = perBeam.get(i);
-            out.append("\nBeam ").append(r.id()).append("   cap ").append(u.compact(r.cap(), Dim.LENGTH)).append(' ')
-                    .append(u.unit(Dim.LENGTH)).append(r.capGiven() ? "" : " (no cap given: the deepest searched)")
+            out.append("\nBeam ")
+                    .append(r.id())
+                    .append("   cap ")
+                    .append(u.compact(r.cap(), Dim.LENGTH))
+                    .append(' ')
+                    .append(u.unit(Dim.LENGTH))
+                    .append(r.capGiven() ? "" : " (no cap given: the deepest searched)")
                     .append('\n');
             TextTable t = new TextTable(false, false, false, false, true, true, false, false, true, true, true);
             String money = (pb ? "of the beam" : Money.perLengthLabel(u)) + (currency.isEmpty() ? "" : " " + currency);
             // over a whole span the top bars are compression steel at mid-span but tension steel at the supports
-            t.row("option", "b × h", r.wholeSpan() ? "bottom" : "tension", r.wholeSpan() ? "top" : "compression",
-                    "Mu/φMn", "εt", "φ", "compression layer", "bars/layers", "cost " + money, "vs recommended");
+            t.row(
+                    "option",
+                    "b × h",
+                    r.wholeSpan() ? "bottom" : "tension",
+                    r.wholeSpan() ? "top" : "compression",
+                    "Mu/φMn",
+                    "εt",
+                    "φ",
+                    "compression layer",
+                    "bars/layers",
+                    "cost " + money,
+                    "vs recommended");
             TextTable terms = new TextTable(false, false, true, true, true, true, true, true);
             terms.row("option", "stirrups", "concrete", "main bars", "stirrups", "formwork", "depth premium", "total");
             // against the recommended option (◀): a cheaper stronger grade not worth its change shows below it
@@ -81,34 +101,60 @@ public final class StudyText {
                 Summary s = o.summary();
                 if (!s.feasible()) {
                     t.row(o.label(), "none", "", "", "", "", "", "", "", "", "");
-                    none.computeIfAbsent(s.proof(), k -> new java.util.ArrayList<>()).add("'" + o.label() + "'");
+                    none.computeIfAbsent(s.proof(), k -> new java.util.ArrayList<>())
+                            .add("'" + o.label() + "'");
                     continue;
                 }
-                t.row(o.label() + (o == r.best() ? "  ◀" : ""), size(s, u), s.tension(), s.compression(),
-                        Words.ratio(s.mu() / s.phiMn()), Words.fixed(s.epsT(), 5),
+                t.row(
+                        o.label() + (o == r.best() ? "  ◀" : ""),
+                        size(s, u),
+                        s.tension(),
+                        s.compression(),
+                        Words.ratio(s.mu() / s.phiMn()),
+                        Words.fixed(s.epsT(), 5),
                         Words.phi(s.phi()) + (s.strainClass().equals("transition") ? " transition" : ""),
-                        compression(s), s.longitudinalBars() + " / " + s.layers(), cost(s, u, pb),
+                        compression(s),
+                        s.longitudinalBars() + " / " + s.layers(),
+                        cost(s, u, pb),
                         String.format(Locale.ROOT, "%+.1f %%", 100 * (s.total() - best) / best));
                 var c = pb ? s.cost() : Money.scaled(s.cost(), u);
-                terms.row(o.label(), s.stirrups(), Money.amount(c.concrete()), Money.amount(c.mainBars()),
-                        Money.amount(c.stirrups()), Money.amount(c.formwork()), Money.amount(c.depthPremium()),
+                terms.row(
+                        o.label(),
+                        s.stirrups(),
+                        Money.amount(c.concrete()),
+                        Money.amount(c.mainBars()),
+                        Money.amount(c.stirrups()),
+                        Money.amount(c.formwork()),
+                        Money.amount(c.depthPremium()),
                         Money.amount(c.total()));
             }
             t.write("  ", out);
-            out.append(compressionLegend(r.options().stream().map(Compare.Option::summary)
-                    .filter(Summary::feasible).toList()));
+            out.append(compressionLegend(r.options().stream()
+                    .map(Compare.Option::summary)
+                    .filter(Summary::feasible)
+                    .toList()));
             if (r.wholeSpan()) {
-                out.append("  top: the continuous bars run the full span, the compression layer at mid-span (compression "
-                        + "steel there only where they lie above the neutral axis); the bars added at the supports are "
-                        + "tension steel there\n");
+                out.append(
+                        "  top: the continuous bars run the full span, the compression layer at mid-span (compression "
+                                + "steel there only where they lie above the neutral axis); the bars added at the supports are "
+                                + "tension steel there\n");
             }
-            out.append("\n  stirrups, and the cost term by term (").append(money).append("; depth premium: the storey "
-                    + "height a deeper beam costs)\n");
+            out.append("\n  stirrups, and the cost term by term (")
+                    .append(money)
+                    .append("; depth premium: the storey " + "height a deeper beam costs)\n");
             terms.write("  ", out);
-            none.forEach((why, labels) -> out.append("  none for ").append(String.join(", ", labels)).append(": ")
-                    .append(why).append('\n'));
-            out.append("  recommended: ").append(r.best() == null ? "none" : r.best().label() + " (b × h = "
-                    + size(r.best().summary(), u) + " " + u.unit(Dim.LENGTH) + ")").append('\n');
+            none.forEach((why, labels) -> out.append("  none for ")
+                    .append(String.join(", ", labels))
+                    .append(": ")
+                    .append(why)
+                    .append('\n'));
+            out.append("  recommended: ")
+                    .append(
+                            r.best() == null
+                                    ? "none"
+                                    : r.best().label() + " (b × h = "
+                                            + size(r.best().summary(), u) + " " + u.unit(Dim.LENGTH) + ")")
+                    .append('\n');
             for (String reason : r.reasons()) {
                 out.append("  · ").append(reason).append('\n');
             }
@@ -124,38 +170,67 @@ public final class StudyText {
             boolean pb = perBeam.get(i);
             out.append("\nBeam ").append(r.id()).append('\n');
             TextTable t = new TextTable(true, false, true, false, false, false, true);
-            t.row("cap (" + u.unit(Dim.LENGTH) + ")", "feasible", "cost " + (pb ? "of the beam" : Money.perLengthLabel(u))
-                    + (currency.isEmpty() ? "" : " " + currency), "b × h", "tension", "compression layer", "εt");
+            t.row(
+                    "cap (" + u.unit(Dim.LENGTH) + ")",
+                    "feasible",
+                    "cost " + (pb ? "of the beam" : Money.perLengthLabel(u))
+                            + (currency.isEmpty() ? "" : " " + currency),
+                    "b × h",
+                    "tension",
+                    "compression layer",
+                    "εt");
             for (Sweep.Point p : r.points()) {
                 Summary s = p.summary();
-                t.row(u.compact(p.cap(), Dim.LENGTH), s.feasible() ? "yes" : "no", s.feasible() ? cost(s, u, pb) : "",
-                        s.feasible() ? size(s, u) : "", s.feasible() ? s.tension() : "",
-                        s.feasible() ? compression(s) : "", s.feasible() ? Words.fixed(s.epsT(), 5) : "");
+                t.row(
+                        u.compact(p.cap(), Dim.LENGTH),
+                        s.feasible() ? "yes" : "no",
+                        s.feasible() ? cost(s, u, pb) : "",
+                        s.feasible() ? size(s, u) : "",
+                        s.feasible() ? s.tension() : "",
+                        s.feasible() ? compression(s) : "",
+                        s.feasible() ? Words.fixed(s.epsT(), 5) : "");
             }
             t.write("  ", out);
-            out.append(compressionLegend(r.points().stream().map(Sweep.Point::summary).filter(Summary::feasible)
+            out.append(compressionLegend(r.points().stream()
+                    .map(Sweep.Point::summary)
+                    .filter(Summary::feasible)
                     .toList()));
             String range = u.compact(r.firstCap(), Dim.LENGTH) + " to " + u.compact(r.lastCap(), Dim.LENGTH) + " "
                     + u.unit(Dim.LENGTH);
-            out.append("  shallowest cap with a passing design: ").append(r.shallowestFeasible() == null
-                    ? "not within the range (no cap from " + range + " passes)"
-                    : u.compact(r.shallowestFeasible(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)).append('\n');
+            out.append("  shallowest cap with a passing design: ")
+                    .append(
+                            r.shallowestFeasible() == null
+                                    ? "not within the range (no cap from " + range + " passes)"
+                                    : u.compact(r.shallowestFeasible(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH))
+                    .append('\n');
             if (r.shallowestFeasible() == null) {
                 out.append("  compression steel: nothing passes in the range, with or without it\n");
             } else {
-                out.append("  compression steel is necessary below: ").append(switch (r.compression()) {
-                    case "below" -> u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
-                            + " (under it, every passing layout needs compression steel beyond the minimum hangers)";
-                    case "everywhere" -> "every cap in the range (the minimum hangers alone work at no depth up to "
-                            + u.compact(r.lastCap(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ")";
-                    default -> "no cap in the range (at every cap from " + range + " with a passing design, the minimum "
-                            + "hangers alone can work)";
-                }).append('\n');
+                out.append("  compression steel is necessary below: ")
+                        .append(
+                                switch (r.compression()) {
+                                    case "below" ->
+                                        u.compact(r.compressionNeededBelow(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH)
+                                                + " (under it, every passing layout needs compression steel beyond the minimum hangers)";
+                                    case "everywhere" ->
+                                        "every cap in the range (the minimum hangers alone work at no depth up to "
+                                                + u.compact(r.lastCap(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH) + ")";
+                                    default ->
+                                        "no cap in the range (at every cap from " + range
+                                                + " with a passing design, the minimum " + "hangers alone can work)";
+                                })
+                        .append('\n');
             }
             if (r.chosen().feasible()) {
-                out.append("  design (cap ").append(u.compact(r.chosenCap(), Dim.LENGTH)).append(' ')
-                        .append(u.unit(Dim.LENGTH)).append(") chooses ").append(size(r.chosen(), u)).append(" at ")
-                        .append(cost(r.chosen(), u, pb)).append('\n');
+                out.append("  design (cap ")
+                        .append(u.compact(r.chosenCap(), Dim.LENGTH))
+                        .append(' ')
+                        .append(u.unit(Dim.LENGTH))
+                        .append(") chooses ")
+                        .append(size(r.chosen(), u))
+                        .append(" at ")
+                        .append(cost(r.chosen(), u, pb))
+                        .append('\n');
             }
         }
         return out.toString();
@@ -167,14 +242,24 @@ public final class StudyText {
         for (int i = 0; i < results.size(); i++) {
             for (Sweep.Point p : results.get(i).points()) {
                 Summary s = p.summary();
-                sb.append(csv(results.get(i).id())).append(',').append(u.compact(p.cap(), Dim.LENGTH)).append(',')
-                        .append(s.feasible()).append(',')
-                        .append(s.feasible() ? cost(s, u, perBeam.get(i)) : "").append(',')
-                        .append(s.feasible() ? u.compact(s.width(), Dim.LENGTH) : "").append(',')
-                        .append(s.feasible() ? u.compact(s.height(), Dim.LENGTH) : "").append(',')
-                        .append(s.feasible() ? csv(s.tension()) : "").append(',')
-                        .append(s.feasible() ? s.compressionRequired() : "").append(',')
-                        .append(s.feasible() ? Words.fixed(s.epsT(), 5) : "").append('\n');
+                sb.append(csv(results.get(i).id()))
+                        .append(',')
+                        .append(u.compact(p.cap(), Dim.LENGTH))
+                        .append(',')
+                        .append(s.feasible())
+                        .append(',')
+                        .append(s.feasible() ? cost(s, u, perBeam.get(i)) : "")
+                        .append(',')
+                        .append(s.feasible() ? u.compact(s.width(), Dim.LENGTH) : "")
+                        .append(',')
+                        .append(s.feasible() ? u.compact(s.height(), Dim.LENGTH) : "")
+                        .append(',')
+                        .append(s.feasible() ? csv(s.tension()) : "")
+                        .append(',')
+                        .append(s.feasible() ? s.compressionRequired() : "")
+                        .append(',')
+                        .append(s.feasible() ? Words.fixed(s.epsT(), 5) : "")
+                        .append('\n');
             }
         }
         return sb.toString();

@@ -36,8 +36,7 @@ public final class SweepPlot {
     private static final Color CHOSEN = new Color(0xb0, 0x3a, 0x2e);
     private static final Color CLEAR = new Color(255, 255, 255, 0);
 
-    private SweepPlot() {
-    }
+    private SweepPlot() {}
 
     public static String svg(Sweep.Result r, UnitSystem u, String currency, boolean perBeam) {
         System.setProperty("java.awt.headless", "true");
@@ -64,7 +63,8 @@ public final class SweepPlot {
         String len = u.unit(Dim.LENGTH);
         NumberAxis x = new NumberAxis("depth cap (" + len + ")");
         x.setAutoRangeIncludesZero(false);
-        x.setRange(u.fromSI(r.points().get(0).cap(), Dim.LENGTH) - 5 * (u == UnitSystem.US ? 0.2 : 1),
+        x.setRange(
+                u.fromSI(r.points().get(0).cap(), Dim.LENGTH) - 5 * (u == UnitSystem.US ? 0.2 : 1),
                 u.fromSI(r.points().get(r.points().size() - 1).cap(), Dim.LENGTH) + 5 * (u == UnitSystem.US ? 0.2 : 1));
         NumberAxis y = new NumberAxis("cost " + (perBeam ? "of the beam" : Money.perLengthLabel(u))
                 + (currency.isEmpty() ? "" : " (" + currency + ")"));
@@ -108,8 +108,10 @@ public final class SweepPlot {
         } else {
             boolean everywhere = r.compression().equals("everywhere");
             IntervalMarker whole = new IntervalMarker(first, last, everywhere ? DOUBLY : SINGLY);
-            whole.setLabel(everywhere ? "compression steel needed at every cap" : "the minimum hangers can suffice "
-                    + "wherever a design passes");
+            whole.setLabel(
+                    everywhere
+                            ? "compression steel needed at every cap"
+                            : "the minimum hangers can suffice " + "wherever a design passes");
             whole.setLabelBackgroundColor(CLEAR);
             whole.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
             whole.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
@@ -117,7 +119,9 @@ public final class SweepPlot {
             plot.addDomainMarker(whole, Layer.BACKGROUND);
         }
         if (r.shallowestFeasible() != null) {
-            ValueMarker shallow = new ValueMarker(u.fromSI(r.shallowestFeasible(), Dim.LENGTH), Color.GRAY,
+            ValueMarker shallow = new ValueMarker(
+                    u.fromSI(r.shallowestFeasible(), Dim.LENGTH),
+                    Color.GRAY,
                     new BasicStroke(1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {4f, 4f}, 0f));
             shallow.setLabel("shallowest feasible");
             shallow.setLabelBackgroundColor(CLEAR);
@@ -148,16 +152,22 @@ public final class SweepPlot {
             boolean below = cy >= (lo + hi) / 2;
             double dx = 0.012 * Math.max(last - first, 1e-9) * (right ? 1 : -1);
             double dy = 0.03 * Math.max(hi - lo, Math.abs(cy) * 1e-3 + 1e-9) * (below ? -1 : 1);
-            XYTextAnnotation note = new XYTextAnnotation("design: " + u.compact(r.chosen().width(), Dim.LENGTH) + " × "
-                    + u.compact(r.chosen().height(), Dim.LENGTH), cx + dx, cy + dy);
+            XYTextAnnotation note = new XYTextAnnotation(
+                    "design: " + u.compact(r.chosen().width(), Dim.LENGTH) + " × "
+                            + u.compact(r.chosen().height(), Dim.LENGTH),
+                    cx + dx,
+                    cy + dy);
             note.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 11));
             note.setPaint(CHOSEN);
-            note.setTextAnchor(below ? (right ? TextAnchor.TOP_LEFT : TextAnchor.TOP_RIGHT)
-                    : (right ? TextAnchor.BOTTOM_LEFT : TextAnchor.BOTTOM_RIGHT));
+            note.setTextAnchor(
+                    below
+                            ? (right ? TextAnchor.TOP_LEFT : TextAnchor.TOP_RIGHT)
+                            : (right ? TextAnchor.BOTTOM_LEFT : TextAnchor.BOTTOM_RIGHT));
             plot.addAnnotation(note);
         }
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), plot, true);
-        chart.setTitle(new TextTitle("Beam " + r.id() + ": cheapest design against the depth cap",
+        chart.setTitle(new TextTitle(
+                "Beam " + r.id() + ": cheapest design against the depth cap",
                 new Font(Font.SANS_SERIF, Font.BOLD, 14)));
         chart.setBackgroundPaint(Color.WHITE);
         chart.setAntiAlias(true);

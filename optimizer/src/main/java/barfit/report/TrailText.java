@@ -7,8 +7,7 @@ import java.util.List;
 
 /** Writes a calculation trail as lines of text in the user's units. */
 public final class TrailText {
-    private TrailText() {
-    }
+    private TrailText() {}
 
     public static String substitute(String template, List<Q> args, UnitSystem u) {
         if (template == null) {
@@ -38,9 +37,11 @@ public final class TrailText {
             sb.append(" = ").append(s.formula());
         }
         String sub = substitute(s.substitution(), s.args(), u);
-        if (sub != null && u == UnitSystem.US && s.result().dim() == barfit.section.trail.Dim.MOMENT
+        if (sub != null
+                && u == UnitSystem.US
+                && s.result().dim() == barfit.section.trail.Dim.MOMENT
                 && s.args().stream().noneMatch(q -> q.dim() == barfit.section.trail.Dim.MOMENT)) {
-            sub = "[" + sub + "] / 12";  // kip·in to kip·ft
+            sub = "[" + sub + "] / 12"; // kip·in to kip·ft
         }
         if (sub != null) {
             sb.append(" = ").append(sub);
@@ -55,7 +56,11 @@ public final class TrailText {
     public static void write(Trail trail, UnitSystem u, String indent, StringBuilder out) {
         for (Trail.Entry e : trail.entries()) {
             if (e instanceof Trail.Heading h) {
-                out.append(indent).append(h.title()).append("   [").append(h.clause()).append("]\n");
+                out.append(indent)
+                        .append(h.title())
+                        .append("   [")
+                        .append(h.clause())
+                        .append("]\n");
             } else if (e instanceof Trail.Step s) {
                 out.append(indent).append("  ").append(step(s, u)).append('\n');
             } else if (e instanceof Trail.Note n) {

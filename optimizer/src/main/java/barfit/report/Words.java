@@ -2,10 +2,9 @@ package barfit.report;
 
 import barfit.design.Binding;
 import barfit.design.Proof;
-import barfit.design.span.SpanLayout;
 import barfit.design.span.Extension;
+import barfit.design.span.SpanLayout;
 import barfit.section.BarLayer;
-import barfit.section.CheckResult;
 import barfit.section.CodeTables;
 import barfit.section.SectionShape;
 import barfit.section.Stirrups;
@@ -16,8 +15,7 @@ import java.util.Locale;
 
 /** Short phrases shared by the reports. */
 public final class Words {
-    private Words() {
-    }
+    private Words() {}
 
     /**
      * A section's or span's proof status as its text and JSON say it: a design found but not proven reads
@@ -53,10 +51,12 @@ public final class Words {
         return switch (governs) {
             case CANTILEVER -> "full length of the cantilever and ld of 25.4.2.4 past the support face";
             case THREE_TENTHS_OF_SPAN -> "0.3 × span governs over ld of 25.4.2.4";
-            case LD_BEYOND_SPAN -> "ld of 25.4.2.4 exceeds the span: the extra bars run through it and past the far face "
-                    + "until developed";
-            case LD_PAST_MID_SPAN -> "ld of 25.4.2.4 governs, past mid-span: the extra bars of the two supports overlap "
-                    + "over the middle";
+            case LD_BEYOND_SPAN ->
+                "ld of 25.4.2.4 exceeds the span: the extra bars run through it and past the far face "
+                        + "until developed";
+            case LD_PAST_MID_SPAN ->
+                "ld of 25.4.2.4 governs, past mid-span: the extra bars of the two supports overlap "
+                        + "over the middle";
             case LD -> "ld of 25.4.2.4 governs over 0.3 × span";
         };
     }
@@ -70,21 +70,25 @@ public final class Words {
             case TOP_EXTRA_LEFT -> "top extra at left support";
             case TOP_EXTRA_RIGHT -> "top extra at right support";
             case SKIN -> "skin bars, both faces";
-            case HOOPS -> "stirrup hoops, " + m.zone() + " zone" + (m.legs() > 2 ? " (2 of " + m.legs() + " legs)"
-                    : ", 2 legs");
+            case HOOPS ->
+                "stirrup hoops, " + m.zone() + " zone" + (m.legs() > 2 ? " (2 of " + m.legs() + " legs)" : ", 2 legs");
             case CROSSTIES -> "crossties, " + m.zone() + " zone (" + (m.legs() - 2) + " per hoop)";
         };
     }
 
     public static String shape(SectionShape s, UnitSystem u) {
-        String bh = u.compact(s.width(), Dim.LENGTH) + " × " + u.compact(s.height(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+        String bh =
+                u.compact(s.width(), Dim.LENGTH) + " × " + u.compact(s.height(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
         if (s.flange() == null) {
             return bh + " rectangular";
         }
-        return bh + (s.flange().oneSided() ? " L" : " T") + ", flange " + u.compact(s.flange().width(), Dim.LENGTH)
-                + " × " + u.compact(s.flange().thickness(), Dim.LENGTH) + (s.flange().reduced()
+        return bh + (s.flange().oneSided() ? " L" : " T") + ", flange "
+                + u.compact(s.flange().width(), Dim.LENGTH)
+                + " × " + u.compact(s.flange().thickness(), Dim.LENGTH)
+                + (s.flange().reduced()
                         ? " (given " + u.compact(s.flange().given(), Dim.LENGTH) + ", taken at its effective width, "
-                                + "Table 6.3.2.1)" : "");
+                                + "Table 6.3.2.1)"
+                        : "");
     }
 
     public static String layers(List<BarLayer> layers) {
@@ -105,7 +109,8 @@ public final class Words {
         if (s == null) {
             return "none";
         }
-        return s.bar().label() + " × " + s.legs() + " legs @ " + u.compact(s.spacing(), Dim.LENGTH) + " " + u.unit(Dim.LENGTH);
+        return s.bar().label() + " × " + s.legs() + " legs @ " + u.compact(s.spacing(), Dim.LENGTH) + " "
+                + u.unit(Dim.LENGTH);
     }
 
     /** Alternatives, one limit relaxed at a time, as one sentence: "a", "a; or b", "a; or b; or c". */
@@ -139,7 +144,8 @@ public final class Words {
     public static String phi(double phi) {
         String three = fixed(phi, 3);
         boolean atLimit = three.equals("0.900") || three.equals("0.650");
-        boolean inside = phi < CodeTables.PHI_TENSION_CONTROLLED - 1e-12 && phi > CodeTables.PHI_COMPRESSION_CONTROLLED + 1e-12;
+        boolean inside =
+                phi < CodeTables.PHI_TENSION_CONTROLLED - 1e-12 && phi > CodeTables.PHI_COMPRESSION_CONTROLLED + 1e-12;
         return atLimit && inside ? fixed(phi, 4) : three;
     }
 }

@@ -17,9 +17,8 @@ import java.util.List;
  */
 final class BarSetSearch {
     /** The best schedule for at most k sizes over every allowed bar-size set; {@code result} null when none fits. */
-    record Solved(int k, boolean[] bars, KMedian.Result result, long bound, int setsTotal, int setsSolved,
-            int setsPruned) {
-    }
+    record Solved(
+            int k, boolean[] bars, KMedian.Result result, long bound, int setsTotal, int setsSolved, int setsPruned) {}
 
     private final Rationalise limits;
     private final int barSizeCount;
@@ -28,7 +27,12 @@ final class BarSetSearch {
     private final SolverOptions options;
     private final Progress progress;
 
-    BarSetSearch(Rationalise limits, int barSizeCount, BeamGroups groups, SizePrices prices, SolverOptions options,
+    BarSetSearch(
+            Rationalise limits,
+            int barSizeCount,
+            BeamGroups groups,
+            SizePrices prices,
+            SolverOptions options,
             Progress progress) {
         this.limits = limits;
         this.barSizeCount = barSizeCount;
@@ -67,8 +71,8 @@ final class BarSetSearch {
                 }
             }
         }
-        Progress.Phase phase = new Progress.Phase(Progress.Step.BAR_SIZE_SETS,
-                k >= prices.sizeCount() ? Progress.Phase.ANY_NUMBER : k);
+        Progress.Phase phase = new Progress.Phase(
+                Progress.Step.BAR_SIZE_SETS, k >= prices.sizeCount() ? Progress.Phase.ANY_NUMBER : k);
         long incumbent = KMedian.NONE;
         int bestSet = -1;
         KMedian.Result best = null;
@@ -226,11 +230,12 @@ final class BarSetSearch {
                         missing = used;
                     } else {
                         final KMedian.Lagrangian at = lagrangian;
-                        missing.sort(Comparator.comparingDouble((SizePrices.BeamSize pair) -> kmedian.reducedCost(at,
-                                groups.groupOf(pair.beam()), pair.size())).thenComparingInt(SizePrices.BeamSize::beam)
+                        missing.sort(Comparator.comparingDouble((SizePrices.BeamSize pair) ->
+                                        kmedian.reducedCost(at, groups.groupOf(pair.beam()), pair.size()))
+                                .thenComparingInt(SizePrices.BeamSize::beam)
                                 .thenComparingInt(SizePrices.BeamSize::size));
-                        missing = new ArrayList<>(missing.subList(0, Math.min(missing.size(),
-                                Math.max(64, groups.count()))));
+                        missing = new ArrayList<>(
+                                missing.subList(0, Math.min(missing.size(), Math.max(64, groups.count()))));
                     }
                 }
                 if (missing.isEmpty()) {

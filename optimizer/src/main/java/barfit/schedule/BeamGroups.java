@@ -92,8 +92,8 @@ final class BeamGroups {
         return beams.stream().allMatch(i -> Double.isFinite(prices.price(i, size, bars)));
     }
 
-    private static SpanDesigner.Diagnosis clash(ScheduleInput in, List<SpanDesigner.Outcome> own, String name,
-            List<Integer> beams) {
+    private static SpanDesigner.Diagnosis clash(
+            ScheduleInput in, List<SpanDesigner.Outcome> own, String name, List<Integer> beams) {
         List<GroupClash.Member> members = new ArrayList<>();
         for (int i : beams) {
             SpanProblem p = in.beams().get(i).problem();

@@ -13,6 +13,5 @@ public record GroupClash(String group, List<Member> members) implements SpanDesi
     }
 
     /** A beam of the group: its mark, its own optimum's b x h, its max_depth and fixed width. */
-    public record Member(String id, double width, double height, Double maxDepth, Double fixedWidth) {
-    }
+    public record Member(String id, double width, double height, Double maxDepth, Double fixedWidth) {}
 }

@@ -36,8 +36,15 @@ final class KMedian {
      * ({@code cpSatStatus}: CP-SAT's status where it stopped short, else null; no method when there is no
      * answer).
      */
-    record Result(String status, long objective, long bound, int[] assignment, ProofMethod method,
-            String cpSatStatus, int variables, int variablesKept) {
+    record Result(
+            String status,
+            long objective,
+            long bound,
+            int[] assignment,
+            ProofMethod method,
+            String cpSatStatus,
+            int variables,
+            int variablesKept) {
         boolean feasible() {
             return assignment != null;
         }
@@ -303,8 +310,15 @@ final class KMedian {
         }
         if (lp.integral != null && total(lp.integral) <= ub) {
             long obj = total(lp.integral);
-            return new Result("OPTIMAL", obj, obj, assign(lp.integral), ProofMethod.LINEAR_RELAXATION_INTEGRAL, null,
-                    lp.variables, lp.variables);
+            return new Result(
+                    "OPTIMAL",
+                    obj,
+                    obj,
+                    assign(lp.integral),
+                    ProofMethod.LINEAR_RELAXATION_INTEGRAL,
+                    null,
+                    lp.variables,
+                    lp.variables);
         }
         if (bound >= ub) {
             return new Result("OPTIMAL", ub, ub, assign(start), ProofMethod.RELAXATION_BOUND, null, lp.variables, 0);
@@ -514,9 +528,14 @@ final class KMedian {
     // ------------------------------------------------------------------ relaxation
 
     /** The relaxation: its bound (units, rounded down), an integral solution if it found one, reduced costs. */
-    private record Relaxation(long bound, int[] integral, double[][] xReduced, double[] yReduced, double value,
-            int variables, double[] duals) {
-    }
+    private record Relaxation(
+            long bound,
+            int[] integral,
+            double[][] xReduced,
+            double[] yReduced,
+            double value,
+            int variables,
+            double[] duals) {}
 
     /**
      * The relaxation over the solutions no dearer than {@code ub}: a group's size whose cost exceeds the
@@ -682,8 +701,8 @@ final class KMedian {
         OrTools.status(st, solver, "the schedule's k-median model"); // MODEL_INVALID stops here, as a bug
         if (st != CpSolverStatus.OPTIMAL && st != CpSolverStatus.FEASIBLE) {
             // nothing better within the time: the local-search solution with the relaxation's bound
-            return new Result("FEASIBLE", ub, lp.bound, assign(start), ProofMethod.CP_SAT_STOPPED, st.name(),
-                    lp.variables, kept);
+            return new Result(
+                    "FEASIBLE", ub, lp.bound, assign(start), ProofMethod.CP_SAT_STOPPED, st.name(), lp.variables, kept);
         }
         List<Integer> chosen = new ArrayList<>();
         for (int s = 0; s < m; s++) {
@@ -699,7 +718,7 @@ final class KMedian {
             obj = ub;
         }
         String status = st == CpSolverStatus.OPTIMAL || bound >= obj ? "OPTIMAL" : "FEASIBLE";
-        return new Result(status, obj, Math.min(bound, obj), assign(openSizes), ProofMethod.CP_SAT, null,
-                lp.variables, kept);
+        return new Result(
+                status, obj, Math.min(bound, obj), assign(openSizes), ProofMethod.CP_SAT, null, lp.variables, kept);
     }
 }

@@ -6,7 +6,7 @@ package barfit.schedule;
  */
 @FunctionalInterface
 public interface Progress {
-    Progress NONE = (phase, done, total) -> { };
+    Progress NONE = (phase, done, total) -> {};
 
     void update(Phase phase, int done, int total);
 

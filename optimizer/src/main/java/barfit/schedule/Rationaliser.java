@@ -22,9 +22,12 @@ import java.util.Set;
  */
 final class Rationaliser {
     /** What the rationalisation gives the schedule: its beams, formwork, the own-optima total, proof and curve. */
-    record Rationalised(List<ScheduleResult.Beam> beams, double formworkSets, double unconstrained,
-            Proof<ScheduleResult.Search> proof, List<ScheduleResult.StandardisationPoint> curve) {
-    }
+    record Rationalised(
+            List<ScheduleResult.Beam> beams,
+            double formworkSets,
+            double unconstrained,
+            Proof<ScheduleResult.Search> proof,
+            List<ScheduleResult.StandardisationPoint> curve) {}
 
     private final ScheduleInput in;
     private final Rationalise limits;
@@ -36,8 +39,14 @@ final class Rationaliser {
     private final Progress progress;
     private final List<BarSize> barSizes;
 
-    Rationaliser(ScheduleInput in, List<SpanDesigner.Outcome> own, SpanDesigner designer, CostModel cost,
-            SolverOptions options, Parallel pool, Progress progress) {
+    Rationaliser(
+            ScheduleInput in,
+            List<SpanDesigner.Outcome> own,
+            SpanDesigner designer,
+            CostModel cost,
+            SolverOptions options,
+            Parallel pool,
+            Progress progress) {
         this.in = in;
         this.limits = in.rationalise();
         this.own = own;
@@ -64,12 +73,13 @@ final class Rationaliser {
     }
 
     /** The least total for K = 1, 2, ... up to the sizes the schedule uses with no limit on them. */
-    private List<ScheduleResult.StandardisationPoint> standardisation(BarSetSearch.Solved chosen, BarSetSearch search,
-            BeamGroups groups, int sizeCount) {
+    private List<ScheduleResult.StandardisationPoint> standardisation(
+            BarSetSearch.Solved chosen, BarSetSearch search, BeamGroups groups, int sizeCount) {
         if (groups.isEmpty()) {
             return List.of();
         }
-        BarSetSearch.Solved free = limits.maxSectionSizes() == null ? chosen : search.solve(sizeCount, null, chosen.bars());
+        BarSetSearch.Solved free =
+                limits.maxSectionSizes() == null ? chosen : search.solve(sizeCount, null, chosen.bars());
         if (free.result() == null) {
             return List.of();
         }
@@ -79,9 +89,11 @@ final class Rationaliser {
         int[] hint = null;
         boolean[] bars = chosen.bars() != null ? chosen.bars() : free.bars();
         for (int k = 1; k <= most; k++) {
-            BarSetSearch.Solved solved = k == most ? free
-                    : limits.maxSectionSizes() != null && k == limits.maxSectionSizes() ? chosen
-                    : search.solve(k, hint, bars);
+            BarSetSearch.Solved solved = k == most
+                    ? free
+                    : limits.maxSectionSizes() != null && k == limits.maxSectionSizes()
+                            ? chosen
+                            : search.solve(k, hint, bars);
             if (solved.result() != null) {
                 hint = solved.result().assignment();
                 bars = solved.bars();
@@ -90,7 +102,9 @@ final class Rationaliser {
             if (solved.result() == null) {
                 out.add(new ScheduleResult.StandardisationPoint(k, Double.NaN, Proof.Status.INFEASIBLE, List.of()));
             } else {
-                out.add(new ScheduleResult.StandardisationPoint(k, CostModel.currency(solved.result().objective()),
+                out.add(new ScheduleResult.StandardisationPoint(
+                        k,
+                        CostModel.currency(solved.result().objective()),
                         solved.bound() >= solved.result().objective() ? Proof.Status.OPTIMAL : Proof.Status.FEASIBLE,
                         designations(solved.bars())));
             }
@@ -113,8 +127,8 @@ final class Rationaliser {
     }
 
     /** Each beam designed afresh in its size with the schedule's bar sizes; its cost must equal its price. */
-    private List<SpanDesigner.Outcome> designInChosenSizes(BarSetSearch.Solved best, BeamGroups groups,
-            SizePrices prices) {
+    private List<SpanDesigner.Outcome> designInChosenSizes(
+            BarSetSearch.Solved best, BeamGroups groups, SizePrices prices) {
         List<ScheduleBeam> beams = in.beams();
         int[] sizeOf = new int[beams.size()];
         Arrays.fill(sizeOf, -1);
@@ -136,52 +150,80 @@ final class Rationaliser {
         return pool.map(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_IN_CHOSEN_SIZES), i -> {
             if (groups.failure(i) != null) {
                 SpanDesigner.Outcome mine = own.get(i);
-                return new SpanDesigner.Outcome(mine.problem(), "infeasible", null, List.of(), mine.proof(),
-                        List.of(), groups.failure(i));
+                return new SpanDesigner.Outcome(
+                        mine.problem(), "infeasible", null, List.of(), mine.proof(), List.of(), groups.failure(i));
             }
             if (sizeOf[i] < 0) {
                 return own.get(i);
             }
             SizePrices.Size size = prices.sizes().get(sizeOf[i]);
             SpanProblem given = beams.get(i).problem();
-            SpanProblem restricted = given.withFixedWidth(size.width()).withSpace(given.space()
-                    .withDepths(List.of(size.height())).withMainBars(allowed));
+            SpanProblem restricted = given.withFixedWidth(size.width())
+                    .withSpace(given.space().withDepths(List.of(size.height())).withMainBars(allowed));
             SpanDesigner.Outcome o = designer.design(restricted, 0);
             double price = prices.exactPrice(i, sizeOf[i], best.bars());
             if (!o.feasible() || Math.abs(o.best().cost().total() - price) > 1e-3) {
                 throw new IllegalStateException("beam " + given.id() + " in " + size.width() + " x " + size.height()
-                        + " was priced at " + price + " but designs at " + (o.feasible() ? o.best().cost().total()
-                        : "nothing") + "; this is a bug in the schedule search");
+                        + " was priced at " + price + " but designs at "
+                        + (o.feasible() ? o.best().cost().total() : "nothing")
+                        + "; this is a bug in the schedule search");
             }
             // reported against the beam as given (its own width and depth limits), designed in its size
-            return new SpanDesigner.Outcome(given, o.status(), o.best(), o.alternatives(), o.proof(), o.binding(),
-                    o.diagnosis());
+            return new SpanDesigner.Outcome(
+                    given, o.status(), o.best(), o.alternatives(), o.proof(), o.binding(), o.diagnosis());
         });
     }
 
-    private Rationalised assemble(BarSetSearch.Solved best, List<SpanDesigner.Outcome> outcomes,
-            List<ScheduleResult.StandardisationPoint> curve, BeamGroups groups, int pricedForProof, long proofMillis) {
+    private Rationalised assemble(
+            BarSetSearch.Solved best,
+            List<SpanDesigner.Outcome> outcomes,
+            List<ScheduleResult.StandardisationPoint> curve,
+            BeamGroups groups,
+            int pricedForProof,
+            long proofMillis) {
         List<ScheduleBeam> beams = in.beams();
         List<ScheduleResult.Beam> out = new ArrayList<>();
         for (int i = 0; i < beams.size(); i++) {
-            out.add(new ScheduleResult.Beam(beams.get(i), outcomes.get(i),
+            out.add(new ScheduleResult.Beam(
+                    beams.get(i),
+                    outcomes.get(i),
                     own.get(i).feasible() ? own.get(i).best().cost().total() : Double.NaN));
         }
         double formwork = 0;
         Proof<ScheduleResult.Search> proof;
         if (best.result() == null) {
             ProofMethod why = groups.isEmpty() ? ProofMethod.NO_BEAM_LEFT : ProofMethod.LIMITS_TOO_TIGHT;
-            proof = Proof.none(Proof.Status.INFEASIBLE, new ScheduleResult.Search(why, null, best.setsTotal(),
-                    best.setsSolved(), best.setsPruned(), pricedForProof, proofMillis), options);
+            proof = Proof.none(
+                    Proof.Status.INFEASIBLE,
+                    new ScheduleResult.Search(
+                            why,
+                            null,
+                            best.setsTotal(),
+                            best.setsSolved(),
+                            best.setsPruned(),
+                            pricedForProof,
+                            proofMillis),
+                    options);
         } else {
             int used = distinct(best.result().assignment());
             formwork = used * limits.formworkSetCost();
-            Proof.Status status = best.bound() >= best.result().objective() ? Proof.Status.OPTIMAL
-                    : Proof.Status.FEASIBLE;
-            proof = Proof.solved(status, best.result().objective(), best.bound(), CostModel.UNITS,
-                    Proof.SolverStats.NONE, new ScheduleResult.Search(best.result().method(),
-                    best.result().cpSatStatus(), best.setsTotal(), best.setsSolved(), best.setsPruned(),
-                    pricedForProof, proofMillis), options);
+            Proof.Status status =
+                    best.bound() >= best.result().objective() ? Proof.Status.OPTIMAL : Proof.Status.FEASIBLE;
+            proof = Proof.solved(
+                    status,
+                    best.result().objective(),
+                    best.bound(),
+                    CostModel.UNITS,
+                    Proof.SolverStats.NONE,
+                    new ScheduleResult.Search(
+                            best.result().method(),
+                            best.result().cpSatStatus(),
+                            best.setsTotal(),
+                            best.setsSolved(),
+                            best.setsPruned(),
+                            pricedForProof,
+                            proofMillis),
+                    options);
         }
         // every beam at its own optimum, for comparison: the beams designed here, each in its own best
         // size, with a set of forms for each distinct size

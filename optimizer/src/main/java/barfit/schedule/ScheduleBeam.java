@@ -11,14 +11,19 @@ import barfit.design.span.SpanProblem;
  * line), else null; {@code sameSection} when its group shares b x h whatever the rationalisation's
  * setting (the parts of a line of one set of forms).
  */
-public record ScheduleBeam(String id, String group, Location location, SpanProblem problem,
-        SpanDesigner.Outcome designed, boolean sameSection) {
+public record ScheduleBeam(
+        String id,
+        String group,
+        Location location,
+        SpanProblem problem,
+        SpanDesigner.Outcome designed,
+        boolean sameSection) {
     public ScheduleBeam(String id, String group, Location location, SpanProblem problem) {
         this(id, group, location, problem, null, false);
     }
 
-    public ScheduleBeam(String id, String group, Location location, SpanProblem problem,
-            SpanDesigner.Outcome designed) {
+    public ScheduleBeam(
+            String id, String group, Location location, SpanProblem problem, SpanDesigner.Outcome designed) {
         this(id, group, location, problem, designed, false);
     }
 }

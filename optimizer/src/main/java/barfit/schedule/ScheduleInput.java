@@ -12,9 +12,17 @@ import java.util.List;
  * {@code beams:} of a YAML file or the rows of a CSV file), and the rationalisation (null: each beam its
  * own optimum). {@code sources} names the files it was read from, for the report.
  */
-public record ScheduleInput(List<String> sources, Settings settings, SearchSpace space, CostRates rates,
-        String currency, SearchReader.Costs costs, int maxBarSizesPerBeam, int barsPerTwoLegs,
-        List<ScheduleBeam> beams, Rationalise rationalise) {
+public record ScheduleInput(
+        List<String> sources,
+        Settings settings,
+        SearchSpace space,
+        CostRates rates,
+        String currency,
+        SearchReader.Costs costs,
+        int maxBarSizesPerBeam,
+        int barsPerTwoLegs,
+        List<ScheduleBeam> beams,
+        Rationalise rationalise) {
     public ScheduleInput {
         sources = List.copyOf(sources);
         beams = List.copyOf(beams);

@@ -13,8 +13,7 @@ import java.util.List;
  * solve: each beam a whole span, and each line's spans and overhangs with their envelopes.
  */
 public final class ScheduleInputReader {
-    private ScheduleInputReader() {
-    }
+    private ScheduleInputReader() {}
 
     public static ScheduleInput read(Path file, Path csv) {
         return read(file, csv, new barfit.design.SolverOptions(30, 1, 1));
@@ -39,14 +38,22 @@ public final class ScheduleInputReader {
         }
         List<LineInput> lines = read.lines();
         if (!lines.isEmpty()) {
-            var cost = new barfit.design.CostModel(design.rates(), design.settings().detailing().cover(),
+            var cost = new barfit.design.CostModel(
+                    design.rates(),
+                    design.settings().detailing().cover(),
                     design.settings().code());
-            var byLine = new barfit.design.line.LineSpans(design.settings(), design.space(),
-                    new barfit.design.span.SpanDesigner(cost, options), design.maxBarSizesPerBeam(),
+            var byLine = new barfit.design.line.LineSpans(
+                    design.settings(),
+                    design.space(),
+                    new barfit.design.span.SpanDesigner(cost, options),
+                    design.maxBarSizesPerBeam(),
                     design.barsPerTwoLegs());
-            List<barfit.design.line.LineSpans.Result> results = new Parallel(Math.min(threads, lines.size()),
-                    Progress.NONE).map(lines.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
-                    i -> byLine.design(lines.get(i), 0));
+            List<barfit.design.line.LineSpans.Result> results = new Parallel(
+                            Math.min(threads, lines.size()), Progress.NONE)
+                    .map(
+                            lines.size(),
+                            Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
+                            i -> byLine.design(lines.get(i), 0));
             for (int i = 0; i < lines.size(); i++) {
                 var one = results.get(i).oneSection();
                 boolean standardised = read.rationalise() != null;
@@ -54,19 +61,32 @@ public final class ScheduleInputReader {
                     if (one != null && !one.fellBack() && standardised) {
                         // one set of forms: the line's parts are a group sharing b x h, free to take another
                         // section where the schedule standardises (with the envelope of the line's own)
-                        out.add(new ScheduleBeam(part.problem().id(), "line " + lines.get(i).id(),
-                                lines.get(i).location(), part.problem().withSpace(design.space()).withFixedWidth(null),
-                                null, true));
+                        out.add(new ScheduleBeam(
+                                part.problem().id(),
+                                "line " + lines.get(i).id(),
+                                lines.get(i).location(),
+                                part.problem().withSpace(design.space()).withFixedWidth(null),
+                                null,
+                                true));
                     } else {
                         // designed with its line for this very problem: its own optimum (a line of one set
                         // of forms holds each part at the line's section)
-                        out.add(new ScheduleBeam(part.problem().id(), null, lines.get(i).location(),
-                                part.problem(), part.outcome()));
+                        out.add(new ScheduleBeam(
+                                part.problem().id(), null, lines.get(i).location(), part.problem(), part.outcome()));
                     }
                 }
             }
         }
-        return new ScheduleInput(read.sources(), design.settings(), design.space(), design.rates(), design.currency(),
-                design.costs(), design.maxBarSizesPerBeam(), design.barsPerTwoLegs(), out, read.rationalise());
+        return new ScheduleInput(
+                read.sources(),
+                design.settings(),
+                design.space(),
+                design.rates(),
+                design.currency(),
+                design.costs(),
+                design.maxBarSizesPerBeam(),
+                design.barsPerTwoLegs(),
+                out,
+                read.rationalise());
     }
 }

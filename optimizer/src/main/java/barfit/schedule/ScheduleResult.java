@@ -9,9 +9,18 @@ import java.util.List;
  * total cost, the cost with every beam at its own optimum, the rationalisation's proof (null when not
  * rationalised) and the price of standardisation (empty when not rationalised).
  */
-public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<SectionSize> sizes, List<String> barSizes,
-        double beamsCost, double formworkSetsCost, double unconstrainedCost, Proof<Search> proof,
-        List<StandardisationPoint> standardisation, int threads, long millis) {
+public record ScheduleResult(
+        ScheduleInput input,
+        List<Beam> beams,
+        List<SectionSize> sizes,
+        List<String> barSizes,
+        double beamsCost,
+        double formworkSetsCost,
+        double unconstrainedCost,
+        Proof<Search> proof,
+        List<StandardisationPoint> standardisation,
+        int threads,
+        long millis) {
 
     public ScheduleResult {
         beams = List.copyOf(beams);
@@ -44,9 +53,14 @@ public record ScheduleResult(ScheduleInput input, List<Beam> beams, List<Section
      * it stopped short (else null), the bar-size sets considered, solved and pruned by bound, the
      * (beam, size) pairs evaluated exactly, and the time to the proof (ms).
      */
-    public record Search(ProofMethod method, String cpSatStatus, int barSetsTotal, int barSetsSolved,
-            int barSetsPruned, int pairsEvaluated, long millis) {
-    }
+    public record Search(
+            ProofMethod method,
+            String cpSatStatus,
+            int barSetsTotal,
+            int barSetsSolved,
+            int barSetsPruned,
+            int pairsEvaluated,
+            long millis) {}
 
     /** The least total cost with at most {@code sizes} section sizes (NaN when none is feasible). */
     public record StandardisationPoint(int sizes, double cost, Proof.Status status, List<String> barSizes) {

@@ -34,8 +34,11 @@ public final class ScheduleSolver {
         long started = System.nanoTime();
         List<ScheduleBeam> beams = in.beams();
         SpanDesigner designer = new SpanDesigner(cost, options);
-        List<SpanDesigner.Outcome> own = pool.map(beams.size(), Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
-                i -> beams.get(i).designed() != null ? beams.get(i).designed()
+        List<SpanDesigner.Outcome> own = pool.map(
+                beams.size(),
+                Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
+                i -> beams.get(i).designed() != null
+                        ? beams.get(i).designed()
                         : designer.design(beams.get(i).problem(), 0));
         if (in.rationalise() == null) {
             double unconstrained = 0;
@@ -55,11 +58,16 @@ public final class ScheduleSolver {
     }
 
     /** The schedule's section sizes (each with its beams) and bar sizes, in size order, and its total. */
-    private ScheduleResult finish(ScheduleInput in, List<ScheduleResult.Beam> beams, double formworkSets,
-            double unconstrained, Proof<ScheduleResult.Search> proof, List<ScheduleResult.StandardisationPoint> curve,
+    private ScheduleResult finish(
+            ScheduleInput in,
+            List<ScheduleResult.Beam> beams,
+            double formworkSets,
+            double unconstrained,
+            Proof<ScheduleResult.Search> proof,
+            List<ScheduleResult.StandardisationPoint> curve,
             long started) {
-        Map<List<Double>, List<String>> beamsBySize = new TreeMap<>(Comparator.<List<Double>>comparingDouble(
-                size -> size.get(0)).thenComparingDouble(size -> size.get(1)));
+        Map<List<Double>, List<String>> beamsBySize = new TreeMap<>(
+                Comparator.<List<Double>>comparingDouble(size -> size.get(0)).thenComparingDouble(size -> size.get(1)));
         Map<String, BarSize> bars = new TreeMap<>();
         double total = 0;
         for (ScheduleResult.Beam b : beams) {
@@ -67,7 +75,8 @@ public final class ScheduleSolver {
                 continue;
             }
             var layout = b.outcome().best().layout();
-            beamsBySize.computeIfAbsent(List.of(layout.width(), layout.height()), k -> new ArrayList<>())
+            beamsBySize
+                    .computeIfAbsent(List.of(layout.width(), layout.height()), k -> new ArrayList<>())
                     .add(b.beam().id());
             bars.put(byDiameter(layout.top()), layout.top());
             bars.put(byDiameter(layout.bottom()), layout.bottom());
@@ -76,8 +85,18 @@ public final class ScheduleSolver {
         List<ScheduleResult.SectionSize> used = new ArrayList<>();
         beamsBySize.forEach((size, ids) -> used.add(new ScheduleResult.SectionSize(size.get(0), size.get(1), ids)));
         List<String> barNames = bars.values().stream().map(BarSize::designation).toList();
-        return new ScheduleResult(in, beams, used, barNames, total, formworkSets, unconstrained, proof, curve,
-                pool.threads(), (System.nanoTime() - started) / 1_000_000);
+        return new ScheduleResult(
+                in,
+                beams,
+                used,
+                barNames,
+                total,
+                formworkSets,
+                unconstrained,
+                proof,
+                curve,
+                pool.threads(),
+                (System.nanoTime() - started) / 1_000_000);
     }
 
     /** A key that sorts bar sizes by diameter. */

@@ -1,9 +1,9 @@
 package barfit.schedule;
 
 import barfit.design.CostModel;
-import barfit.design.span.SpanDesigner;
 import barfit.design.span.PairTable;
 import barfit.design.span.PairTables;
+import barfit.design.span.SpanDesigner;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -21,8 +21,7 @@ import java.util.TreeSet;
  */
 final class SizePrices {
     /** A section size b x h (mm). */
-    record Size(double width, double height) {
-    }
+    record Size(double width, double height) {}
 
     private final List<ScheduleBeam> beams;
     private final Parallel pool;
@@ -34,6 +33,7 @@ final class SizePrices {
     private final List<double[][][]> lower;
     /** {@code exact.get(i)[s]}: beam i priced exactly in size s, once asked for. */
     private final List<PairTable[]> exact = new ArrayList<>();
+
     private int pricedPairs;
 
     /** Bounds every beam with a design of its own ({@code own}) in every size, beam by beam in parallel. */
@@ -45,7 +45,9 @@ final class SizePrices {
             generators.add(own.get(i).feasible() ? new PairTables(beams.get(i).problem(), cost) : null);
             exact.add(new PairTable[sizes.size()]);
         }
-        this.lower = pool.map(beams.size(), Progress.Phase.of(Progress.Step.BOUNDING_SIZES),
+        this.lower = pool.map(
+                beams.size(),
+                Progress.Phase.of(Progress.Step.BOUNDING_SIZES),
                 beam -> lowerBoundsOf(beam, own.get(beam)));
     }
 
@@ -81,7 +83,8 @@ final class SizePrices {
         }
         double floor = own.best().cost().total();
         for (int s = 0; s < sizes.size(); s++) {
-            double[][] bound = generator.lowerBounds(sizes.get(s).width(), sizes.get(s).height());
+            double[][] bound =
+                    generator.lowerBounds(sizes.get(s).width(), sizes.get(s).height());
             if (bound != null) {
                 for (double[] row : bound) {
                     for (int j = 0; j < row.length; j++) {
@@ -146,15 +149,20 @@ final class SizePrices {
             }
         }
         List<Integer> beamsToPrice = new ArrayList<>(sizesByBeam.keySet());
-        List<PairTable[]> tables = pool.map(beamsToPrice.size(),
-                Progress.Phase.of(Progress.Step.PRICING_SIZES), j -> {
+        List<PairTable[]> tables = pool.map(
+                beamsToPrice.size(),
+                Progress.Phase.of(Progress.Step.PRICING_SIZES),
+                j -> {
                     int beam = beamsToPrice.get(j);
                     PairTable[] row = new PairTable[sizes.size()];
                     for (int s : sizesByBeam.get(beam)) {
-                        row[s] = generators.get(beam).exact(sizes.get(s).width(), sizes.get(s).height());
+                        row[s] = generators
+                                .get(beam)
+                                .exact(sizes.get(s).width(), sizes.get(s).height());
                     }
                     return row;
-                }, Progress.NONE);
+                },
+                Progress.NONE);
         for (int j = 0; j < beamsToPrice.size(); j++) {
             int beam = beamsToPrice.get(j);
             PairTable[] row = tables.get(j);
@@ -174,7 +182,8 @@ final class SizePrices {
         for (int top = 0; top < bound.length; top++) {
             for (int bottom = 0; bottom < bound.length; bottom++) {
                 if (table.cost()[top][bottom] < bound[top][bottom] - 1e-6) {
-                    throw new IllegalStateException("beam " + beams.get(beam).id() + " in " + sizes.get(size).width()
+                    throw new IllegalStateException("beam " + beams.get(beam).id() + " in "
+                            + sizes.get(size).width()
                             + " x " + sizes.get(size).height() + ": bar pair " + top + "/" + bottom + " priced at "
                             + table.cost()[top][bottom] + " below its bound " + bound[top][bottom]
                             + "; this is a bug in the bounds");
@@ -184,6 +193,5 @@ final class SizePrices {
     }
 
     /** A beam (its index in the schedule) in a section size (its index in {@link #sizes()}). */
-    record BeamSize(int beam, int size) {
-    }
+    record BeamSize(int beam, int size) {}
 }

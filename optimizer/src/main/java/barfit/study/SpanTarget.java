@@ -58,10 +58,28 @@ public final class SpanTarget implements Target {
 
     @Override
     public Summary design(Double cap, SearchSpace space, Materials m, CostModel cost, boolean freeWidth) {
-        SpanProblem q = new SpanProblem(p.id(), m, p.detailing(), p.code(), space, p.span(), p.ends(), p.mLeft(),
-                p.mMid(), p.mRight(), p.vLeft(), p.vRight(), p.service(), p.limits(), cap, freeWidth ? null : p.fixedWidth(), p.flange(),
-                p.bottomAnchored(), p.maxBarSizes(), p.barsPerTwoLegs()).withAnalysis(p.analysedService(),
-                        p.shearDiagram());
+        SpanProblem q = new SpanProblem(
+                        p.id(),
+                        m,
+                        p.detailing(),
+                        p.code(),
+                        space,
+                        p.span(),
+                        p.ends(),
+                        p.mLeft(),
+                        p.mMid(),
+                        p.mRight(),
+                        p.vLeft(),
+                        p.vRight(),
+                        p.service(),
+                        p.limits(),
+                        cap,
+                        freeWidth ? null : p.fixedWidth(),
+                        p.flange(),
+                        p.bottomAnchored(),
+                        p.maxBarSizes(),
+                        p.barsPerTwoLegs())
+                .withAnalysis(p.analysedService(), p.shearDiagram());
         SpanDesigner.Outcome o = new SpanDesigner(cost, options).design(q, 0);
         if (!o.feasible()) {
             return Summary.none(say.why(o.diagnosis()), o.diagnosis().limit());
@@ -69,8 +87,10 @@ public final class SpanTarget implements Target {
         SpanLayout l = o.best().layout();
         CheckReport governing = null;
         for (CheckReport r : o.best().report().sections().values()) {
-            if (governing == null || Math.abs(r.demand().mu()) / r.flexure().phiMn()
-                    > Math.abs(governing.demand().mu()) / governing.flexure().phiMn()) {
+            if (governing == null
+                    || Math.abs(r.demand().mu()) / r.flexure().phiMn()
+                            > Math.abs(governing.demand().mu())
+                                    / governing.flexure().phiMn()) {
                 governing = r;
             }
         }
@@ -78,8 +98,21 @@ public final class SpanTarget implements Target {
         boolean needed = false;
         String fails = "";
         if (used) {
-            SpanLayout hangers = new SpanLayout(l.width(), l.height(), l.flange(), l.stirrupBar(), l.skin(), l.top(), 2,
-                    l.topLeft(), l.topRight(), l.bottom(), l.bottomCounts(), l.zoneStirrups(), l.extLeft(), l.extRight());
+            SpanLayout hangers = new SpanLayout(
+                    l.width(),
+                    l.height(),
+                    l.flange(),
+                    l.stirrupBar(),
+                    l.skin(),
+                    l.top(),
+                    2,
+                    l.topLeft(),
+                    l.topRight(),
+                    l.bottom(),
+                    l.bottomCounts(),
+                    l.zoneStirrups(),
+                    l.extLeft(),
+                    l.extRight());
             var r = SpanVerifier.verify(q, hangers, false);
             needed = !r.ok();
             fails = Summary.checks(r.failures());
@@ -91,20 +124,47 @@ public final class SpanTarget implements Target {
         if (l.topRight() != null) {
             top = Math.max(top, SpanLayout.sum(l.topRight()));
         }
-        int layers = l.bottomCounts().size() + Math.max(l.topLeft() == null ? 1 : l.topLeft().size(),
-                l.topRight() == null ? 1 : l.topRight().size());
+        int layers = l.bottomCounts().size()
+                + Math.max(
+                        l.topLeft() == null ? 1 : l.topLeft().size(),
+                        l.topRight() == null ? 1 : l.topRight().size());
         var f = governing.flexure();
         String bottom = "bottom " + Summary.bars(l.bottomCounts(), l.bottom().label());
         String topText = "top " + l.topContinuous() + " " + l.top().label() + " continuous"
-                + (l.topLeft() != null ? ", " + Summary.bars(l.topLeft(), l.top().label()) + " at left" : "")
-                + (l.topRight() != null ? ", " + Summary.bars(l.topRight(), l.top().label()) + " at right" : "");
+                + (l.topLeft() != null
+                        ? ", " + Summary.bars(l.topLeft(), l.top().label()) + " at left"
+                        : "")
+                + (l.topRight() != null
+                        ? ", " + Summary.bars(l.topRight(), l.top().label()) + " at right"
+                        : "");
         List<String> zones = l.zoneStirrups().stream().map(say::stirrups).toList();
         String st = zones.stream().distinct().count() == 1 ? zones.get(0) + " throughout" : String.join(" / ", zones);
-        return new Summary(true, l.width(), l.height(), bottom, topText, st, "bottom", l.bottomCounts(),
-                l.bottom().designation(), "top", l.topContinuous(), l.top().designation(), f.phiMn(),
-                Math.abs(governing.demand().mu()), f.epsT(), f.phi(), f.strainClass(), used, needed,
-                l.bottomCount() + top, layers, o.best().cost(), o.status() + " over "
-                        + o.proof().solver().booleans() + " booleans",
-                fails, null, false);
+        return new Summary(
+                true,
+                l.width(),
+                l.height(),
+                bottom,
+                topText,
+                st,
+                "bottom",
+                l.bottomCounts(),
+                l.bottom().designation(),
+                "top",
+                l.topContinuous(),
+                l.top().designation(),
+                f.phiMn(),
+                Math.abs(governing.demand().mu()),
+                f.epsT(),
+                f.phi(),
+                f.strainClass(),
+                used,
+                needed,
+                l.bottomCount() + top,
+                layers,
+                o.best().cost(),
+                o.status() + " over " + o.proof().solver().booleans() + " booleans",
+                fails,
+                null,
+                false);
     }
 }

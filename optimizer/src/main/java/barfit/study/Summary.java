@@ -45,15 +45,64 @@ public record Summary(
     }
 
     public static Summary none(String proof, String limit) {
-        return new Summary(false, 0, 0, "", "", "", "", java.util.List.of(), "", "", 0, "", 0, 0, 0, 0, "", false, false,
-                0, 0, null, proof, "", limit, false);
+        return new Summary(
+                false,
+                0,
+                0,
+                "",
+                "",
+                "",
+                "",
+                java.util.List.of(),
+                "",
+                "",
+                0,
+                "",
+                0,
+                0,
+                0,
+                0,
+                "",
+                false,
+                false,
+                0,
+                0,
+                null,
+                proof,
+                "",
+                limit,
+                false);
     }
 
     /** The same design, knowing whether a layout with the minimum hangers alone passes within its limits. */
     public Summary withAvoidable(boolean avoidable) {
-        return new Summary(feasible, width, height, tension, compression, stirrups, tensionFace, tensionCounts,
-                tensionBar, compressionFace, compressionCount, compressionBar, phiMn, mu, epsT, phi, strainClass,
-                compressionUsed, compressionNeeded, longitudinalBars, layers, cost, proof, hangersFail, limit, avoidable);
+        return new Summary(
+                feasible,
+                width,
+                height,
+                tension,
+                compression,
+                stirrups,
+                tensionFace,
+                tensionCounts,
+                tensionBar,
+                compressionFace,
+                compressionCount,
+                compressionBar,
+                phiMn,
+                mu,
+                epsT,
+                phi,
+                strainClass,
+                compressionUsed,
+                compressionNeeded,
+                longitudinalBars,
+                layers,
+                cost,
+                proof,
+                hangersFail,
+                limit,
+                avoidable);
     }
 
     /** Compression steel beyond the hangers that nothing within the limits can do without. */

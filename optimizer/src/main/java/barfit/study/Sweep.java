@@ -13,8 +13,7 @@ import java.util.Map;
  * answer is the cheapest over the depths it allows, so a cap reuses every shallower depth's work.
  */
 public final class Sweep {
-    public record Point(double cap, Summary summary, double depthUsed) {
-    }
+    public record Point(double cap, Summary summary, double depthUsed) {}
 
     /**
      * Everything is reported within the range of caps asked: {@code shallowestFeasible} is the first cap
@@ -24,11 +23,18 @@ public final class Sweep {
      * and it is within the range (null otherwise, {@link #compression()} says which: where the shallowest
      * passing cap is that depth, every passing design can do without compression steel).
      */
-    public record Result(String id, List<Point> points, Double shallowestFeasible, Double compressionNeededBelow,
-            Summary chosen, double chosenCap, Double hangersFrom) {
+    public record Result(
+            String id,
+            List<Point> points,
+            Double shallowestFeasible,
+            Double compressionNeededBelow,
+            Summary chosen,
+            double chosenCap,
+            Double hangersFrom) {
         /** Where compression steel beyond the hangers is needed within the range: "below", "nowhere" or "everywhere". */
         public String compression() {
-            return compressionNeededBelow != null ? "below"
+            return compressionNeededBelow != null
+                    ? "below"
                     : hangersFrom == null && shallowestFeasible != null ? "everywhere" : "nowhere";
         }
 
@@ -41,8 +47,7 @@ public final class Sweep {
         }
     }
 
-    private Sweep() {
-    }
+    private Sweep() {}
 
     public static Result run(Target t, List<Double> caps, CostModel cost) {
         SearchSpace space = t.space();
@@ -60,7 +65,8 @@ public final class Sweep {
             double d = e.getKey();
             Summary s = e.getValue();
             boolean ok = s.feasible() && !s.compressionUsed()
-                    || t.design(null, space.withDepths(List.of(d)).withHangersOnly(), t.materials(), cost, false).feasible();
+                    || t.design(null, space.withDepths(List.of(d)).withHangersOnly(), t.materials(), cost, false)
+                            .feasible();
             if (ok) {
                 singly = d;
                 break;
@@ -82,8 +88,10 @@ public final class Sweep {
             }
             // within a cap at or above the depth where the hangers alone work, compression steel is a matter of cost
             boolean avoidable = singly != null && cap >= singly - 1e-9;
-            points.add(new Point(cap, best == null ? Summary.none("nothing passes with h ≤ cap")
-                    : best.withAvoidable(avoidable), used));
+            points.add(new Point(
+                    cap,
+                    best == null ? Summary.none("nothing passes with h ≤ cap") : best.withAvoidable(avoidable),
+                    used));
         }
         Double shallowest = null;
         for (Point p : points) {
@@ -95,12 +103,15 @@ public final class Sweep {
         // compression steel is necessary below the hangers' first depth only if some cap below it has a design:
         // where nothing passes at all, it is not compression steel that is missing
         Double below = singly != null && shallowest != null && shallowest < singly - 1e-9 && singly <= top + 1e-9
-                ? singly : null;
-        double chosenCap = t.cap() != null ? t.cap() : space.depths().get(space.depths().size() - 1);
+                ? singly
+                : null;
+        double chosenCap =
+                t.cap() != null ? t.cap() : space.depths().get(space.depths().size() - 1);
         Summary chosen = t.design(t.cap(), space, t.materials(), cost, false);
         if (chosen.feasible() && chosen.compressionNeeded()) {
             chosen = chosen.withAvoidable(singly != null && chosenCap >= singly - 1e-9
-                    || t.design(t.cap(), space.withHangersOnly(), t.materials(), cost, false).feasible());
+                    || t.design(t.cap(), space.withHangersOnly(), t.materials(), cost, false)
+                            .feasible());
         }
         return new Result(t.id(), points, shallowest, below, chosen, chosenCap, singly);
     }

@@ -73,7 +73,12 @@ class AnalyseCommandTest {
         Path plots = dir.resolve("plots");
         Cli r = Cli.run("analyse", f.toString(), "--format", "json", "--plot", plots.toString());
         assertEquals(0, r.exit(), r.err());
-        JsonNode span = new ObjectMapper().readTree(r.out()).get("lines").get(0).get("spans").get(0);
+        JsonNode span = new ObjectMapper()
+                .readTree(r.out())
+                .get("lines")
+                .get(0)
+                .get("spans")
+                .get(0);
         assertEquals(158.0, span.get("M_span_max").asDouble(), 0.05);
         String svg = Files.readString(plots.resolve("R-1-envelope.svg"));
         assertTrue(svg.startsWith("<?xml") || svg.startsWith("<svg"), svg.substring(0, 40));

@@ -50,11 +50,15 @@ class BadCsvTest {
     static Stream<Path> corpus() throws IOException {
         List<Path> files;
         try (Stream<Path> s = Files.list(CORPUS)) {
-            files = s.filter(p -> !p.getFileName().toString().startsWith("_")).sorted().toList();
+            files = s.filter(p -> !p.getFileName().toString().startsWith("_"))
+                    .sorted()
+                    .toList();
         }
         long csv = files.stream().filter(p -> p.toString().endsWith(".csv")).count();
-        long yaml = files.stream().filter(p -> p.getFileName().toString().startsWith("yaml-")
-                && p.toString().endsWith(".yaml")).count();
+        long yaml = files.stream()
+                .filter(p -> p.getFileName().toString().startsWith("yaml-")
+                        && p.toString().endsWith(".yaml"))
+                .count();
         assertTrue(csv >= 15, "at least 15 CSV cases, found " + csv);
         assertTrue(yaml >= 5, "at least 5 YAML cases, found " + yaml);
         assertEquals(files.size(), csv + yaml, "every corpus file is a .csv or a yaml-*.yaml case: " + files);
@@ -63,8 +67,14 @@ class BadCsvTest {
 
     @Test
     void fixturesAreValid(@TempDir Path tmp) {
-        Cli r = Cli.run("schedule", SETTINGS.toString(), "--beams", BEAMS.toString(), "--out", tmp.resolve("out")
-                .toString(), "--quiet");
+        Cli r = Cli.run(
+                "schedule",
+                SETTINGS.toString(),
+                "--beams",
+                BEAMS.toString(),
+                "--out",
+                tmp.resolve("out").toString(),
+                "--quiet");
         assertEquals(0, r.exit(), r.err());
         assertEquals("", r.err());
     }
@@ -123,7 +133,8 @@ class BadCsvTest {
             if (problems.isEmpty()) {
                 fail("this open case now gives the expected line: remove its '# open:' line");
             }
-            Assumptions.abort("open: " + open.group(1) + " (printed: " + err.lines().findFirst().orElse("") + ")");
+            Assumptions.abort("open: " + open.group(1) + " (printed: "
+                    + err.lines().findFirst().orElse("") + ")");
         }
         if (!problems.isEmpty()) {
             fail(String.join("; ", problems) + "; stderr: " + r.err());

@@ -46,8 +46,9 @@ class BadInputTest {
         String text = m.group(2);
         String before = Files.readString(file);
         String name = file.getFileName().toString();
-        String command = name.startsWith("design-") ? "design" : name.startsWith("compare-") ? "compare"
-                : name.startsWith("analyse-") ? "analyse" : "check";
+        String command = name.startsWith("design-")
+                ? "design"
+                : name.startsWith("compare-") ? "compare" : name.startsWith("analyse-") ? "analyse" : "check";
         {
             Cli r = Cli.run(command, file.toString());
             assertEquals(2, r.exit(), "exit code; stderr: " + r.err());
@@ -66,31 +67,66 @@ class BadInputTest {
     /** Each case: the arguments, then what the one line must start with after "barfit: ", then what it expects. */
     static Stream<Arguments> badOptions() {
         return Stream.of(
-                Arguments.of(List.of("compare", STUDY, "--max-width", "Infinity"), "--max-width:", "expected a width from"),
+                Arguments.of(
+                        List.of("compare", STUDY, "--max-width", "Infinity"), "--max-width:", "expected a width from"),
                 Arguments.of(List.of("compare", STUDY, "--max-width", "NaN"), "--max-width:", "got NaN"),
                 Arguments.of(List.of("compare", STUDY, "--max-width", "1e12"), "--max-width:", "5 times the widest"),
                 Arguments.of(List.of("compare", STUDY, "--fc", "NaN"), "--fc:", "expected f'c between"),
-                Arguments.of(List.of("sweep", STUDY, "--plot", "no-such-dir/x.svg"),
-                        "no-such-dir/x.svg:", "expected --plot in an existing directory"),
+                Arguments.of(
+                        List.of("sweep", STUDY, "--plot", "no-such-dir/x.svg"),
+                        "no-such-dir/x.svg:",
+                        "expected --plot in an existing directory"),
                 Arguments.of(List.of("sweep", STUDY, "--csv", "--format", "json"), "--csv:", "expected one of them"),
                 Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"),
                 // a number the parser cannot read, in words (not "'abc' is not a double")
-                Arguments.of(List.of("compare", STUDY, "--fc", "abc"), "--fc:",
+                Arguments.of(
+                        List.of("compare", STUDY, "--fc", "abc"),
+                        "--fc:",
                         "expected numbers separated by commas, got 'abc'"),
-                Arguments.of(List.of("design", STUDY, "--workers", "two"), "--workers:", "expected a whole number, got 'two'"),
+                Arguments.of(
+                        List.of("design", STUDY, "--workers", "two"),
+                        "--workers:",
+                        "expected a whole number, got 'two'"),
                 // --force says what to replace: alone it is a usage error, not silently ignored
                 Arguments.of(List.of("sweep", STUDY, "--force"), "--force:", "expected --plot FILE.svg with it"),
-                Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
-                        "--force"), "--force:", "expected --out DIR with it"),
+                Arguments.of(
+                        List.of(
+                                "schedule",
+                                BadCsvTest.SETTINGS.toString(),
+                                "--beams",
+                                BadCsvTest.BEAMS.toString(),
+                                "--force"),
+                        "--force:",
+                        "expected --out DIR with it"),
                 // an option's error names the option, not the input file as if the option were in it
-                Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
-                        "--threads", "0"), "--threads:", "expected 1 to 256, got 0"),
-                Arguments.of(List.of("design", STUDY, "--beam", "NO-SUCH"), "--beam:",
+                Arguments.of(
+                        List.of(
+                                "schedule",
+                                BadCsvTest.SETTINGS.toString(),
+                                "--beams",
+                                BadCsvTest.BEAMS.toString(),
+                                "--threads",
+                                "0"),
+                        "--threads:",
+                        "expected 1 to 256, got 0"),
+                Arguments.of(
+                        List.of("design", STUDY, "--beam", "NO-SUCH"),
+                        "--beam:",
                         "no beam or line NO-SUCH in " + STUDY + "; expected one of:"),
-                Arguments.of(List.of("compare", STUDY, "--beam", "NO-SUCH"), "--beam:",
+                Arguments.of(
+                        List.of("compare", STUDY, "--beam", "NO-SUCH"),
+                        "--beam:",
                         "no beam, line or line part (LINE/span N) NO-SUCH in " + STUDY + "; expected one of:"),
-                Arguments.of(List.of("schedule", BadCsvTest.SETTINGS.toString(), "--beams", BadCsvTest.BEAMS.toString(),
-                        "--out", BadCsvTest.BEAMS.toString()), "--out:", BadCsvTest.BEAMS + " is a file; expected a directory"));
+                Arguments.of(
+                        List.of(
+                                "schedule",
+                                BadCsvTest.SETTINGS.toString(),
+                                "--beams",
+                                BadCsvTest.BEAMS.toString(),
+                                "--out",
+                                BadCsvTest.BEAMS.toString()),
+                        "--out:",
+                        BadCsvTest.BEAMS + " is a file; expected a directory"));
     }
 
     @ParameterizedTest(name = "{0}")

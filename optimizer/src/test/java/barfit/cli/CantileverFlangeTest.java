@@ -48,7 +48,10 @@ class CantileverFlangeTest {
     private static String strength(JsonNode root) {
         StringBuilder sb = new StringBuilder();
         for (JsonNode s : root.get("beams").get(0).get("sections")) {
-            sb.append(s.get("at")).append(s.get("tension")).append(s.get("compression")).append(s.get("phi_Mn"))
+            sb.append(s.get("at"))
+                    .append(s.get("tension"))
+                    .append(s.get("compression"))
+                    .append(s.get("phi_Mn"))
                     .append('\n');
         }
         return sb.toString();
@@ -57,8 +60,8 @@ class CantileverFlangeTest {
     @Test
     void inlineTheFlangeIsLeftOutOfStrengthAndTheReportSays2434() throws IOException {
         Path plain = write("plain.yaml", SETTINGS + "beams:\n" + CANTILEVER);
-        Path flanged = write("flanged.yaml", SETTINGS + "beams:\n" + CANTILEVER
-                + "    flange: {width: 1200, thickness: 150}\n");
+        Path flanged = write(
+                "flanged.yaml", SETTINGS + "beams:\n" + CANTILEVER + "    flange: {width: 1200, thickness: 150}\n");
         Cli a = Cli.run("design", plain.toString(), "--format", "json");
         Cli b = Cli.run("design", flanged.toString(), "--format", "json");
         assertEquals(0, a.exit(), a.err());
@@ -71,24 +74,33 @@ class CantileverFlangeTest {
         assertEquals(0, text.exit(), text.err());
         assertTrue(text.out().contains("(flange in tension at the fixed end: not counted in strength)"), text.out());
         // ln/10 = 3000 / 10 = 300 mm < the effective width (24.3.4)
-        assertTrue(text.out().contains("flange      in tension at the fixed end: 24.3.4 asks part of the top bars to be "
-                + "spread over min(bf, ln/10) = 300 mm, with more bars in the outer flange"), text.out());
+        assertTrue(
+                text.out()
+                        .contains("flange      in tension at the fixed end: 24.3.4 asks part of the top bars to be "
+                                + "spread over min(bf, ln/10) = 300 mm, with more bars in the outer flange"),
+                text.out());
         assertTrue(!text.out().contains("counted at mid-span"), "a cantilever has no mid-span: " + text.out());
     }
 
     @Test
     void aCsvScheduleTakesItAsTheYamlDoes(@TempDir Path out) throws IOException {
         Path settings = write("settings.yaml", SETTINGS);
-        Path csv = write("beams.csv", "id,span,ends,m_left,v_left,flange_width,flange_thickness\n"
-                + "C1,3.0,cantilever,-250,160,1200,150\n");
-        Path yaml = write("inline.yaml", SETTINGS + "beams:\n" + CANTILEVER + "    flange: {width: 1200, thickness: 150}\n");
+        Path csv = write(
+                "beams.csv",
+                "id,span,ends,m_left,v_left,flange_width,flange_thickness\n" + "C1,3.0,cantilever,-250,160,1200,150\n");
+        Path yaml = write(
+                "inline.yaml", SETTINGS + "beams:\n" + CANTILEVER + "    flange: {width: 1200, thickness: 150}\n");
         // the CSV path refused this beam as bad input
-        Cli fromCsv = Cli.run("schedule", settings.toString(), "--beams", csv.toString(), "--format", "json", "--quiet");
+        Cli fromCsv =
+                Cli.run("schedule", settings.toString(), "--beams", csv.toString(), "--format", "json", "--quiet");
         Cli inline = Cli.run("schedule", yaml.toString(), "--format", "json", "--quiet");
         assertEquals(0, fromCsv.exit(), fromCsv.err());
         assertEquals(0, inline.exit(), inline.err());
         assertEquals(strength(JSON.readTree(inline.out())), strength(JSON.readTree(fromCsv.out())));
-        assertTrue(fromCsv.out().contains("flange in tension: 24.3.4 asks part of the tension bars to be spread over "
-                + "min(bf, ln/10) = 300 mm"), fromCsv.out());
+        assertTrue(
+                fromCsv.out()
+                        .contains("flange in tension: 24.3.4 asks part of the tension bars to be spread over "
+                                + "min(bf, ln/10) = 300 mm"),
+                fromCsv.out());
     }
 }

@@ -16,9 +16,13 @@ class CommandsTest {
     void everyNameIsItsCommandsOwn() {
         Main.COMMANDS.forEach((name, make) -> {
             Object command = make.get();
-            assertEquals(name, command.getClass().getAnnotation(Command.class).name(), command.getClass().getName());
+            assertEquals(
+                    name,
+                    command.getClass().getAnnotation(Command.class).name(),
+                    command.getClass().getName());
         });
-        assertEquals(List.of("check", "analyse", "design", "schedule", "compare", "sweep", "bench", "help"),
+        assertEquals(
+                List.of("check", "analyse", "design", "schedule", "compare", "sweep", "bench", "help"),
                 List.copyOf(Main.COMMANDS.keySet()));
     }
 

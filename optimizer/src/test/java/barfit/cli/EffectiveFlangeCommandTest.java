@@ -41,7 +41,10 @@ class EffectiveFlangeCommandTest {
     private static String strength(JsonNode beam) {
         StringBuilder sb = new StringBuilder();
         for (JsonNode s : beam.get("sections")) {
-            sb.append(s.get("at")).append(s.get("tension")).append(s.get("compression")).append(s.get("phi_Mn"))
+            sb.append(s.get("at"))
+                    .append(s.get("tension"))
+                    .append(s.get("compression"))
+                    .append(s.get("phi_Mn"))
                     .append('\n');
         }
         return sb.toString();
@@ -68,9 +71,12 @@ class EffectiveFlangeCommandTest {
                     span: 6
                     ends: simple
                 """;
-        Path f = write("tees.yaml", "units: SI\nconcrete: {fc: 28}\nsteel: {fy: 420}\nbeams:\n"
-                + beam.formatted("WIDE", 2400, "") + beam.formatted("EXACT", 1800, "")
-                + beam.formatted("NEAR", 2400, ", clear_to_next_web: 1000") + beam.formatted("NEAR-EXACT", 1300, ""));
+        Path f = write(
+                "tees.yaml",
+                "units: SI\nconcrete: {fc: 28}\nsteel: {fy: 420}\nbeams:\n"
+                        + beam.formatted("WIDE", 2400, "") + beam.formatted("EXACT", 1800, "")
+                        + beam.formatted("NEAR", 2400, ", clear_to_next_web: 1000")
+                        + beam.formatted("NEAR-EXACT", 1300, ""));
         Cli json = Cli.run("check", f.toString(), "--format", "json");
         assertEquals(0, json.exit(), json.out() + json.err());
         JsonNode root = JSON.readTree(json.out());
@@ -81,14 +87,21 @@ class EffectiveFlangeCommandTest {
         assertEquals(exact.get("c").asDouble(), wide.get("c").asDouble(), 1e-9);
         JsonNode fw = check(wide, "flange_width");
         assertTrue(fw.get("ok").asBoolean());
-        assertTrue(fw.get("note").asText().contains("flange given 2400 mm, taken at its effective width 1800 mm"),
+        assertTrue(
+                fw.get("note").asText().contains("flange given 2400 mm, taken at its effective width 1800 mm"),
                 fw.toString());
-        assertEquals(beam(root, "NEAR-EXACT").get("phi_Mn").asDouble(), beam(root, "NEAR").get("phi_Mn").asDouble(), 1e-9);
-        assertTrue(!check(beam(root, "NEAR"), "flange_width").get("note").asText().contains("sw/2 limit not checked"));
+        assertEquals(
+                beam(root, "NEAR-EXACT").get("phi_Mn").asDouble(),
+                beam(root, "NEAR").get("phi_Mn").asDouble(),
+                1e-9);
+        assertTrue(
+                !check(beam(root, "NEAR"), "flange_width").get("note").asText().contains("sw/2 limit not checked"));
         Cli text = Cli.run("check", f.toString());
-        assertTrue(text.out().contains("flange 1800 × 120 (given 2400, taken at its effective width, Table 6.3.2.1)"),
+        assertTrue(
+                text.out().contains("flange 1800 × 120 (given 2400, taken at its effective width, Table 6.3.2.1)"),
                 text.out());
-        assertTrue(text.out().contains("note, flange_width: flange given 2400 mm, taken at its effective width 1800 mm"),
+        assertTrue(
+                text.out().contains("note, flange_width: flange given 2400 mm, taken at its effective width 1800 mm"),
                 text.out());
     }
 
@@ -111,7 +124,8 @@ class EffectiveFlangeCommandTest {
         assertEquals(0, json.exit(), json.out() + json.err());
         JsonNode fw = check(beam(JSON.readTree(json.out()), "U"), "flange_width");
         assertEquals(72, fw.get("demand").asDouble(), 1e-9);
-        assertTrue(fw.get("note").asText().contains("flange given 96 in, taken at its effective width 72 in"),
+        assertTrue(
+                fw.get("note").asText().contains("flange given 96 in, taken at its effective width 72 in"),
                 fw.toString());
     }
 
@@ -146,7 +160,10 @@ class EffectiveFlangeCommandTest {
         JsonNode wide = beam(root, "WIDE");
         JsonNode exact = beam(root, "EXACT");
         assertEquals("optimal", wide.get("status").asText(), "a wide flange no longer makes the beam fail");
-        assertEquals(exact.get("cost").get("total").asDouble(), wide.get("cost").get("total").asDouble(), 1e-9);
+        assertEquals(
+                exact.get("cost").get("total").asDouble(),
+                wide.get("cost").get("total").asDouble(),
+                1e-9);
         assertEquals(exact.get("phi_Mn").asDouble(), wide.get("phi_Mn").asDouble(), 1e-9);
         assertEquals(exact.get("tension").toString(), wide.get("tension").toString());
     }
@@ -166,9 +183,13 @@ class EffectiveFlangeCommandTest {
                     width: 400
                     flange: {width: %d, thickness: 150%s}
                 """;
-        Path f = write("span.yaml", DESIGN_SETTINGS + beam.formatted("WIDE", 3600, "")
-                + beam.formatted("EXACT", 2800, "") + beam.formatted("NEAR", 3600, ", clear_to_next_web: 2000")
-                + beam.formatted("NEAR-EXACT", 2400, ""));
+        Path f = write(
+                "span.yaml",
+                DESIGN_SETTINGS
+                        + beam.formatted("WIDE", 3600, "")
+                        + beam.formatted("EXACT", 2800, "")
+                        + beam.formatted("NEAR", 3600, ", clear_to_next_web: 2000")
+                        + beam.formatted("NEAR-EXACT", 2400, ""));
         Cli run = Cli.run("design", f.toString(), "--format", "json");
         assertEquals(0, run.exit(), run.out() + run.err());
         JsonNode root = JSON.readTree(run.out());
@@ -176,14 +197,20 @@ class EffectiveFlangeCommandTest {
             JsonNode given = beam(root, pair[0]);
             JsonNode exact = beam(root, pair[1]);
             assertEquals("optimal", given.get("status").asText());
-            assertEquals(exact.get("cost").get("total").asDouble(), given.get("cost").get("total").asDouble(), 1e-9);
+            assertEquals(
+                    exact.get("cost").get("total").asDouble(),
+                    given.get("cost").get("total").asDouble(),
+                    1e-9);
             assertTrue(given.get("deflection").get("computed").asBoolean());
-            assertEquals(exact.get("deflection").get("long_term").asDouble(),
-                    given.get("deflection").get("long_term").asDouble(), 1e-9);
+            assertEquals(
+                    exact.get("deflection").get("long_term").asDouble(),
+                    given.get("deflection").get("long_term").asDouble(),
+                    1e-9);
             assertEquals(strength(exact), strength(given));
         }
         Cli text = Cli.run("design", f.toString(), "--beam", "WIDE");
-        assertTrue(text.out().contains("flange 2800 × 150 (given 3600, taken at its effective width, Table 6.3.2.1)"),
+        assertTrue(
+                text.out().contains("flange 2800 × 150 (given 3600, taken at its effective width, Table 6.3.2.1)"),
                 text.out());
         assertTrue(text.out().contains("24.3.4"), "the flange over the supports is in tension: " + text.out());
     }
@@ -205,7 +232,10 @@ class EffectiveFlangeCommandTest {
         for (String[] pair : new String[][] {{"WIDE", "EXACT"}, {"NEAR", "NEAR-EXACT"}}) {
             JsonNode given = beam(root, pair[0]);
             JsonNode exact = beam(root, pair[1]);
-            assertEquals(exact.get("cost").get("total").asDouble(), given.get("cost").get("total").asDouble(), 1e-9);
+            assertEquals(
+                    exact.get("cost").get("total").asDouble(),
+                    given.get("cost").get("total").asDouble(),
+                    1e-9);
             assertEquals(strength(exact), strength(given));
         }
     }

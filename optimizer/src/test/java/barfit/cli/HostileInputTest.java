@@ -66,8 +66,8 @@ class HostileInputTest {
     }
 
     private static Cli schedule(Path csv, Path out) {
-        return Cli.run("schedule", CSV_SETTINGS.toString(), "--beams", csv.toString(), "--out", out.toString(),
-                "--quiet");
+        return Cli.run(
+                "schedule", CSV_SETTINGS.toString(), "--beams", csv.toString(), "--out", out.toString(), "--quiet");
     }
 
     @Test
@@ -79,7 +79,10 @@ class HostileInputTest {
         Path quoted = write("digits-quoted.yaml", CHECK.formatted("\"" + digits + "\"", "6"));
         Path csv = write("digits.csv", "id,span,ends,m_mid\nB1,6.0,simple," + digits + "x\n");
         assertTimeout(Duration.ofSeconds(10), () -> {
-            String err = rejected(Cli.run("check", notANumber.toString()), notANumber, ":9:9",
+            String err = rejected(
+                    Cli.run("check", notANumber.toString()),
+                    notANumber,
+                    ":9:9",
                     "beams[1].Mu: expected the factored moment");
             assertTrue(err.length() < 400, "the value is quoted cut, not whole: " + err.length() + " characters");
             rejected(Cli.run("check", tooLarge.toString()), tooLarge, ":9:9", "too large a number");
@@ -95,9 +98,14 @@ class HostileInputTest {
         try (RandomAccessFile f = new RandomAccessFile(csv.toFile(), "rw")) {
             f.setLength(50L * 1024 * 1024); // 50 MB, sparse: its last row would be bad
         }
-        assertTimeout(Duration.ofSeconds(10), () -> rejected(schedule(csv, dir.resolve("out")), csv, "",
-                "is 50.0 MB, more than the 8 MB (8,388,608 bytes) barfit reads from a CSV file; expected a smaller "
-                        + "file: split the beams into several schedules"));
+        assertTimeout(
+                Duration.ofSeconds(10),
+                () -> rejected(
+                        schedule(csv, dir.resolve("out")),
+                        csv,
+                        "",
+                        "is 50.0 MB, more than the 8 MB (8,388,608 bytes) barfit reads from a CSV file; expected a smaller "
+                                + "file: split the beams into several schedules"));
         assertFalse(Files.exists(dir.resolve("out")), "nothing written");
     }
 
@@ -113,8 +121,13 @@ class HostileInputTest {
             w.write("LAST,6.0,one-end-continuous,,120,-160,90,110,18,x\n");
         }
         assertTrue(Files.size(csv) < InputFiles.CSV_MAX_BYTES, "within the limit, so every row is read");
-        assertTimeout(Duration.ofSeconds(20), () -> rejected(schedule(csv, dir.resolve("out")), csv,
-                ":" + (rows + 2) + ":49", "live: expected a number (the service live load"));
+        assertTimeout(
+                Duration.ofSeconds(20),
+                () -> rejected(
+                        schedule(csv, dir.resolve("out")),
+                        csv,
+                        ":" + (rows + 2) + ":49",
+                        "live: expected a number (the service live load"));
     }
 
     @Test
@@ -126,9 +139,13 @@ class HostileInputTest {
         }
         Path f = write("huge.yaml", sb.toString());
         // it was reported as a syntax error ("check indentation") at the 3 MB the parser stops at
-        rejected(Cli.run("check", f.toString()), f, "", "more than the 4 MB (4,194,304 bytes) barfit reads from a "
-                + "YAML file; expected a smaller file: split the beams over several files, or give a schedule's "
-                + "beams in a CSV file (--beams)");
+        rejected(
+                Cli.run("check", f.toString()),
+                f,
+                "",
+                "more than the 4 MB (4,194,304 bytes) barfit reads from a "
+                        + "YAML file; expected a smaller file: split the beams over several files, or give a schedule's "
+                        + "beams in a CSV file (--beams)");
     }
 
     @Test
@@ -136,8 +153,12 @@ class HostileInputTest {
         Path folder = Files.createDirectory(dir.resolve("beams.yaml"));
         rejected(Cli.run("check", folder.toString()), folder, "", "is a folder, not a file; expected a YAML file");
         Path csvFolder = Files.createDirectory(dir.resolve("beams.csv"));
-        rejected(schedule(csvFolder, dir.resolve("out")), csvFolder, "", "is a folder, not a file; expected a CSV file");
-        rejected(Cli.run("check", dir.resolve("none.yaml").toString()), dir.resolve("none.yaml"), "",
+        rejected(
+                schedule(csvFolder, dir.resolve("out")), csvFolder, "", "is a folder, not a file; expected a CSV file");
+        rejected(
+                Cli.run("check", dir.resolve("none.yaml").toString()),
+                dir.resolve("none.yaml"),
+                "",
                 "no such file; expected a YAML file");
 
         Path a = dir.resolve("a.yaml");
@@ -151,7 +172,11 @@ class HostileInputTest {
         rejected(Cli.run("check", a.toString()), a, "", "is a symbolic link that leads back to itself (a link loop)");
         Path dangling = dir.resolve("gone.yaml");
         Files.createSymbolicLink(dangling, dir.resolve("never-written.yaml"));
-        rejected(Cli.run("check", dangling.toString()), dangling, "", "is a symbolic link to a file that does not exist");
+        rejected(
+                Cli.run("check", dangling.toString()),
+                dangling,
+                "",
+                "is a symbolic link to a file that does not exist");
     }
 
     @Test
@@ -163,7 +188,11 @@ class HostileInputTest {
             Assumptions.abort("no POSIX permissions here");
         }
         Assumptions.assumeFalse(Files.isReadable(f), "this user reads any file (root): nothing to refuse");
-        rejected(Cli.run("check", f.toString()), f, "", "no permission to read it; expected a YAML file barfit may read");
+        rejected(
+                Cli.run("check", f.toString()),
+                f,
+                "",
+                "no permission to read it; expected a YAML file barfit may read");
     }
 
     @Test

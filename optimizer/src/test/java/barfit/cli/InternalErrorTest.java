@@ -29,8 +29,8 @@ class InternalErrorTest {
         IntVar x = model.newIntVar(0, 10, "x");
         model.addLessOrEqual(LinearExpr.term(x, Long.MAX_VALUE / 2), 1);
         CpSolver solver = OrTools.solver(new SolverOptions(10, 1, 1));
-        InvalidModelError bug = assertThrows(InvalidModelError.class,
-                () -> OrTools.status(solver.solve(model), solver, "a hand-made model"));
+        InvalidModelError bug = assertThrows(
+                InvalidModelError.class, () -> OrTools.status(solver.solve(model), solver, "a hand-made model"));
         // as thrown, and wrapped as a thread pool's failure is
         for (Exception thrown : new Exception[] {bug, new IllegalStateException(bug)}) {
             StringWriter err = new StringWriter();
@@ -39,9 +39,11 @@ class InternalErrorTest {
             assertEquals(3, code);
             assertNotEquals(Main.BAD_INPUT, code);
             String said = err.toString();
-            assertTrue(said.startsWith("barfit: internal error: CP-SAT found a hand-made model invalid (MODEL_INVALID"),
+            assertTrue(
+                    said.startsWith("barfit: internal error: CP-SAT found a hand-made model invalid (MODEL_INVALID"),
                     said);
-            assertTrue(said.contains("this is a bug in barfit, not in the input: please report it with the input file"),
+            assertTrue(
+                    said.contains("this is a bug in barfit, not in the input: please report it with the input file"),
                     said);
             assertEquals(1, said.lines().count(), "one line: " + said);
         }

@@ -59,14 +59,18 @@ class OutputWordsTest {
                 """);
         Cli text = Cli.run("check", f.toString(), "--no-trail");
         assertEquals(0, text.exit(), text.err());
-        String a1 = text.out().substring(text.out().indexOf("Beam A1"), text.out().indexOf("Beam A2"));
+        String a1 =
+                text.out().substring(text.out().indexOf("Beam A1"), text.out().indexOf("Beam A2"));
         String a2 = text.out().substring(text.out().indexOf("Beam A2"));
         String verdict = a1.lines().findFirst().orElseThrow();
         assertTrue(verdict.contains("PASS") && verdict.contains("shear not checked (no Vu)"), verdict);
         assertFalse(a2.contains("shear not checked"), a2);
-        JsonNode beams = json(Cli.run("check", f.toString(), "--format", "json")).get("beams");
+        JsonNode beams =
+                json(Cli.run("check", f.toString(), "--format", "json")).get("beams");
         assertFalse(beams.get(0).get("shear").get("checked").asBoolean());
-        assertEquals("shear not checked (no Vu)", beams.get(0).get("shear").get("note").asText());
+        assertEquals(
+                "shear not checked (no Vu)",
+                beams.get(0).get("shear").get("note").asText());
         assertTrue(beams.get(1).get("shear").get("checked").asBoolean());
     }
 
@@ -92,11 +96,19 @@ class OutputWordsTest {
         assertEquals(vsMax, sh.get("Vs").asDouble(), 0.01);
         assertEquals(516 * 420 * 530 / 75.0 / 1000, sh.get("Vs_stirrups").asDouble(), 0.5);
         assertTrue(sh.get("Vs_limited").asBoolean());
-        assertEquals(0.75 * (sh.get("Vc").asDouble() + vsMax), sh.get("phi_Vn").asDouble(), 0.01,
+        assertEquals(
+                0.75 * (sh.get("Vc").asDouble() + vsMax),
+                sh.get("phi_Vn").asDouble(),
+                0.01,
                 "φVn = 0.75 (Vc + Vs,max): what the section can carry (22.5.1.1, 22.5.1.2)");
         Cli text = Cli.run("check", f.toString(), "--no-trail");
-        String line = text.out().lines().filter(l -> l.strip().startsWith("Vu = ")).findFirst().orElseThrow();
-        assertTrue(line.contains("Vs = 555.3 kN") && line.contains("the stirrups give 1531.") && line.contains("22.5.1.2"),
+        String line = text.out()
+                .lines()
+                .filter(l -> l.strip().startsWith("Vu = "))
+                .findFirst()
+                .orElseThrow();
+        assertTrue(
+                line.contains("Vs = 555.3 kN") && line.contains("the stirrups give 1531.") && line.contains("22.5.1.2"),
                 line);
     }
 
@@ -125,22 +137,29 @@ class OutputWordsTest {
                 """);
         Cli text = Cli.run("design", f.toString());
         assertEquals(0, text.exit(), text.err());
-        String ns = text.out().substring(text.out().indexOf("Beam NS"), text.out().indexOf("Beam WS"));
+        String ns =
+                text.out().substring(text.out().indexOf("Beam NS"), text.out().indexOf("Beam WS"));
         String ws = text.out().substring(text.out().indexOf("Beam WS"));
         assertTrue(ns.contains("WARNING: no shears given: minimum stirrups"), ns);
         assertTrue(ns.contains("shear strength not checked"), ns);
         assertFalse(ws.contains("WARNING"), ws);
-        JsonNode beams = json(Cli.run("design", f.toString(), "--format", "json")).get("beams");
+        JsonNode beams =
+                json(Cli.run("design", f.toString(), "--format", "json")).get("beams");
         assertEquals(1, beams.get(0).get("warnings").size());
         assertEquals(0, beams.get(1).get("warnings").size());
         Path out = dir.resolve("out");
         Cli schedule = Cli.run("schedule", f.toString(), "--quiet", "--out", out.toString());
         assertEquals(0, schedule.exit(), schedule.err());
-        String warning = schedule.out().lines().filter(l -> l.startsWith("WARNING")).findFirst().orElseThrow();
+        String warning = schedule.out()
+                .lines()
+                .filter(l -> l.startsWith("WARNING"))
+                .findFirst()
+                .orElseThrow();
         assertTrue(warning.contains("no shears given for NS:") && !warning.contains("WS"), warning);
         String html = Files.readString(out.resolve("report.html"));
         String block = html.substring(html.indexOf("id=\"beam-NS\""), html.indexOf("id=\"beam-WS\""));
-        assertTrue(block.contains("<p class=\"warn\">Warning: no shears given"), "the report warns in the beam's block");
+        assertTrue(
+                block.contains("<p class=\"warn\">Warning: no shears given"), "the report warns in the beam's block");
         assertFalse(html.substring(html.indexOf("id=\"beam-WS\"")).contains("no shears given"));
     }
 
@@ -174,7 +193,8 @@ class OutputWordsTest {
                     shear: {left: 150, right: 150}
                     max_depth: 400
                 """);
-        JsonNode beams = json(Cli.run("design", f.toString(), "--format", "json")).get("beams");
+        JsonNode beams =
+                json(Cli.run("design", f.toString(), "--format", "json")).get("beams");
         for (int i = 0; i < 2; i++) {
             JsonNode b = beams.get(i);
             double as = 0;
@@ -206,7 +226,10 @@ class OutputWordsTest {
 
     private static String topRow(String out, String id) {
         String block = out.substring(out.indexOf("Beam " + id + " "));
-        return block.lines().filter(l -> l.strip().startsWith("top continuous")).findFirst().orElseThrow();
+        return block.lines()
+                .filter(l -> l.strip().startsWith("top continuous"))
+                .findFirst()
+                .orElseThrow();
     }
 
     @Test
@@ -225,7 +248,9 @@ class OutputWordsTest {
                     moments: {mid: 420}
                     shear: {left: 330, right: 330}
                 """);
-        JsonNode b = json(Cli.run("design", f.toString(), "--format", "json")).get("beams").get(0);
+        JsonNode b = json(Cli.run("design", f.toString(), "--format", "json"))
+                .get("beams")
+                .get(0);
         // cover 40 mm, No. 10 (9.5 mm): the hoop's centre line is 350 − 89.5 = 260.5 wide, 600 − 89.5 = 510.5
         // high; each 135° hook runs max(6 × 9.5, 75) = 75 mm (Table 25.3.2); by hand, hoop 2 × 260.5 + 2 × 510.5
         // + 2 × 75 = 1692 mm, crosstie 510.5 + 2 × 75 = 660.5 mm
@@ -256,8 +281,10 @@ class OutputWordsTest {
             for (JsonNode z : zones) {
                 if (z.get("zone").asText().equals(zone)) {
                     assertEquals(4, z.get("legs").asInt());
-                    JsonNode hoop = hoops.stream().filter(h -> h.get("role").asText().contains(zone + " zone"))
-                            .findFirst().orElseThrow();
+                    JsonNode hoop = hoops.stream()
+                            .filter(h -> h.get("role").asText().contains(zone + " zone"))
+                            .findFirst()
+                            .orElseThrow();
                     assertEquals(2 * hoop.get("count").asInt(), t.get("count").asInt(), "two crossties per hoop");
                 }
             }
@@ -287,7 +314,9 @@ class OutputWordsTest {
     void compareRecommendsAStrongerGradeOnlyForMoreThanTheMargin() throws IOException {
         // f'c = 35 MPa saves 0.1 % on this corridor beam (invented rates): less than the 2 % margin
         Path f = write("corridor.yaml", CORRIDOR);
-        JsonNode b = json(Cli.run("compare", f.toString(), "--fc", "29,35,40", "--format", "json")).get("beams").get(0);
+        JsonNode b = json(Cli.run("compare", f.toString(), "--fc", "29,35,40", "--format", "json"))
+                .get("beams")
+                .get(0);
         double cheapest = Double.POSITIVE_INFINITY;
         double cheapestSameGrade = Double.POSITIVE_INFINITY;
         for (JsonNode o : b.get("options")) {
@@ -299,13 +328,15 @@ class OutputWordsTest {
         }
         assertTrue(cheapest < cheapestSameGrade, "a stronger grade is the cheapest here");
         assertTrue(cheapestSameGrade - cheapest <= 0.02 * cheapestSameGrade, "and saves no more than 2 %");
-        assertFalse(b.get("recommended").asText().equals("fc"), b.get("recommended").toString());
+        assertFalse(
+                b.get("recommended").asText().equals("fc"), b.get("recommended").toString());
         assertTrue(b.get("recommended_fc").isNull());
         Cli text = Cli.run("compare", f.toString(), "--fc", "29,35,40");
         String out = text.out();
         assertTrue(out.contains("would save only 0.1 %") && out.contains("more than 2 %"), out);
         assertFalse(Pattern.compile("\\bfc\\b").matcher(out).find(), "no internal word in the text: " + out);
-        assertFalse(out.contains("keeping the cap") || out.contains("within the cap") || out.contains("At the cap"),
+        assertFalse(
+                out.contains("keeping the cap") || out.contains("within the cap") || out.contains("At the cap"),
                 "no cap was given: " + out);
         // "the same design" only for the same cost; the same layout at another cost is said to be dearer
         JsonNode options = b.get("options");
@@ -333,7 +364,9 @@ class OutputWordsTest {
     void compareSaysNarrowingWhenAFixedWidthIsLetGo() throws IOException {
         // the corridor beam with its web fixed at 400 mm: with the width free the cheapest web is narrower
         Path f = write("fixed.yaml", CORRIDOR.replace("    span: 6.0\n", "    span: 6.0\n    width: 400\n"));
-        JsonNode b = json(Cli.run("compare", f.toString(), "--format", "json")).get("beams").get(0);
+        JsonNode b = json(Cli.run("compare", f.toString(), "--format", "json"))
+                .get("beams")
+                .get(0);
         JsonNode widen = null;
         for (JsonNode o : b.get("options")) {
             if (o.get("kind").asText().equals("widen")) {
@@ -345,7 +378,9 @@ class OutputWordsTest {
         assertFalse(out.contains("Widening to b = " + (int) widen.get("width").asDouble()), out);
         assertFalse(out.contains("widths up to"), "the option lets the fixed width go, narrower too: " + out);
         if (b.get("recommended").asText().equals("widen")) {
-            assertTrue(out.contains("Narrowing to b = " + (int) widen.get("width").asDouble() + " mm from the fixed 400 mm"),
+            assertTrue(
+                    out.contains(
+                            "Narrowing to b = " + (int) widen.get("width").asDouble() + " mm from the fixed 400 mm"),
                     out);
         }
     }
@@ -360,9 +395,12 @@ class OutputWordsTest {
         assertEquals("at_cap", atCap.get("kind").asText());
         assertTrue(atCap.get("compression_steel_relied_on").asBoolean(), atCap.toString());
         assertFalse(atCap.get("compression_steel_needed").asBoolean(), atCap.toString());
-        String out = Cli.run("compare", "src/test/resources/studies/span-capped-si.yaml").out();
-        String row = out.lines().filter(l -> l.strip().startsWith("at the cap, h ≤ 400 mm") && l.contains(" × "))
-                .findFirst().orElseThrow();
+        String out = Cli.run("compare", "src/test/resources/studies/span-capped-si.yaml")
+                .out();
+        String row = out.lines()
+                .filter(l -> l.strip().startsWith("at the cap, h ≤ 400 mm") && l.contains(" × "))
+                .findFirst()
+                .orElseThrow();
         assertTrue(row.contains("more, for cost") && !row.contains("needed"), row);
         assertTrue(out.contains("matter of cost"), out);
     }
@@ -399,7 +437,9 @@ class OutputWordsTest {
         assertTrue(b.get("compression_needed_below").isNull(), b.toString());
         assertFalse(b.get("compression_needed_everywhere").asBoolean(), b.toString());
         String text = Cli.run("sweep", f.toString()).out();
-        String line = text.lines().filter(l -> l.contains("compression steel is necessary below")).findFirst()
+        String line = text.lines()
+                .filter(l -> l.contains("compression steel is necessary below"))
+                .findFirst()
                 .orElseThrow();
         assertTrue(line.contains("no cap in the range"), line);
     }
@@ -422,17 +462,30 @@ class OutputWordsTest {
         Cli r = Cli.run("schedule", "../examples/schedule/office-us.yaml", "--quiet", "--out", out.toString());
         assertEquals(0, r.exit(), r.err());
         List<String> lines = r.out().lines().toList();
-        int start = lines.indexOf(lines.stream().filter(l -> l.strip().startsWith("beam ")).findFirst().orElseThrow());
+        int start = lines.indexOf(lines.stream()
+                .filter(l -> l.strip().startsWith("beam "))
+                .findFirst()
+                .orElseThrow());
         for (int i = start; i < lines.size() && !lines.get(i).isBlank(); i++) {
-            assertTrue(lines.get(i).length() <= 160, "table line " + i + " is " + lines.get(i).length() + " wide: "
-                    + lines.get(i));
+            assertTrue(
+                    lines.get(i).length() <= 160,
+                    "table line " + i + " is " + lines.get(i).length() + " wide: " + lines.get(i));
         }
         // stirrups with their units, zone ends to the span's fixed decimals (ft, two decimals)
-        String stirrups = lines.stream().filter(l -> l.strip().startsWith("stirrups ")).findFirst().orElseThrow();
-        assertTrue(Pattern.compile("#3 × \\d legs @ \\d+(\\.\\d+)? in").matcher(stirrups).find(), stirrups);
+        String stirrups = lines.stream()
+                .filter(l -> l.strip().startsWith("stirrups "))
+                .findFirst()
+                .orElseThrow();
+        assertTrue(
+                Pattern.compile("#3 × \\d legs @ \\d+(\\.\\d+)? in")
+                        .matcher(stirrups)
+                        .find(),
+                stirrups);
         String csv = Files.readString(out.resolve("schedule.csv"));
-        Matcher zone = Pattern.compile("(left|middle|right|support|outer) (\\d+\\.\\d+)–(\\d+\\.\\d+) ft: #3 × \\d legs @ "
-                + "\\d+(\\.\\d+)? in").matcher(csv);
+        Matcher zone = Pattern.compile(
+                        "(left|middle|right|support|outer) (\\d+\\.\\d+)–(\\d+\\.\\d+) ft: #3 × \\d legs @ "
+                                + "\\d+(\\.\\d+)? in")
+                .matcher(csv);
         int zones = 0;
         while (zone.find()) {
             assertEquals(2, zone.group(2).length() - zone.group(2).indexOf('.') - 1, zone.group());
@@ -455,7 +508,8 @@ class OutputWordsTest {
         Path out2 = dir.resolve("out2");
         Cli p = Cli.run("schedule", plain.toString(), "--quiet", "--out", out2.toString());
         assertEquals(0, p.exit(), p.err());
-        String wrote = p.out().lines().filter(l -> l.startsWith("wrote ")).findFirst().orElseThrow();
+        String wrote =
+                p.out().lines().filter(l -> l.startsWith("wrote ")).findFirst().orElseThrow();
         assertFalse(wrote.contains(out2.resolve("standardisation.svg").toString()), wrote);
         assertFalse(Files.exists(out2.resolve("standardisation.svg")));
         for (String name : List.of("schedule.csv", "schedule.json", "report.html")) {
@@ -478,15 +532,25 @@ class OutputWordsTest {
                 """);
         Cli s = Cli.run("schedule", f.toString(), "--quiet");
         assertEquals(1, s.exit(), s.err());
-        String line = s.out().lines().filter(l -> l.strip().startsWith("N-1:")).findFirst().orElseThrow();
+        String line = s.out()
+                .lines()
+                .filter(l -> l.strip().startsWith("N-1:"))
+                .findFirst()
+                .orElseThrow();
         assertFalse(line.contains("; or "), line);
         assertTrue(line.contains("what would work (one limit at a time): b ≥ "), line);
-        JsonNode d = json(Cli.run("design", f.toString(), "--format", "json")).get("beams").get(0).get("diagnosis");
+        JsonNode d = json(Cli.run("design", f.toString(), "--format", "json"))
+                .get("beams")
+                .get(0)
+                .get("diagnosis");
         for (JsonNode fix : d.get("fixes")) {
             assertFalse(fix.asText().startsWith("or "), fix.asText());
         }
         String design = Cli.run("design", f.toString()).out();
-        String what = design.lines().filter(l -> l.contains("what would work")).findFirst().orElseThrow();
+        String what = design.lines()
+                .filter(l -> l.contains("what would work"))
+                .findFirst()
+                .orElseThrow();
         assertTrue(what.contains("time): b ≥ "), what);
     }
 }

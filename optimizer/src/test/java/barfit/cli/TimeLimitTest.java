@@ -28,9 +28,13 @@ class TimeLimitTest {
     private static void check(String file, String words) throws Exception {
         Cli text = Cli.run("design", file, "--time-limit", NANOSECOND);
         assertEquals(0, text.exit(), text.err());
-        long proofs = text.out().lines().filter(l -> l.strip().startsWith("proof")).count();
-        long unproven = text.out().lines().filter(l -> l.contains("not proven: the time limit ended CP-SAT before it "
-                + "had a solution; " + words)).count();
+        long proofs =
+                text.out().lines().filter(l -> l.strip().startsWith("proof")).count();
+        long unproven = text.out()
+                .lines()
+                .filter(l ->
+                        l.contains("not proven: the time limit ended CP-SAT before it " + "had a solution; " + words))
+                .count();
         assertTrue(proofs > 0 && proofs == unproven, text.out());
         Cli json = Cli.run("design", file, "--time-limit", NANOSECOND, "--format", "json");
         assertEquals(0, json.exit(), json.err());
@@ -43,7 +47,11 @@ class TimeLimitTest {
             assertTrue(p.get("objective").isNumber() && p.get("objective").asDouble() > 0, p.toString());
             assertTrue(p.get("bound").isNull() && p.get("gap").isNull(), p.toString());
             if (p.get("basis").asText().equals("per span")) { // the span's proof is in the currency of its cost
-                assertEquals(b.get("cost").get("total").asDouble(), p.get("objective").asDouble(), 1e-4, p.toString());
+                assertEquals(
+                        b.get("cost").get("total").asDouble(),
+                        p.get("objective").asDouble(),
+                        1e-4,
+                        p.toString());
             }
         }
     }

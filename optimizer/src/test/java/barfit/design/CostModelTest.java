@@ -23,8 +23,10 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class CostModelTest {
     private static final double IN = 25.4;
-    private static final BarSize NO10 = BarCatalogs.builtIn("astm-a615m").orElseThrow().find("10").orElseThrow();
-    private static final BarSize NO25 = BarCatalogs.builtIn("astm-a615m").orElseThrow().find("25").orElseThrow();
+    private static final BarSize NO10 =
+            BarCatalogs.builtIn("astm-a615m").orElseThrow().find("10").orElseThrow();
+    private static final BarSize NO25 =
+            BarCatalogs.builtIn("astm-a615m").orElseThrow().find("25").orElseThrow();
 
     @Test
     void stirrupSetIsItsHoopPlusHooksAndCrossties() {

@@ -1,10 +1,10 @@
 package barfit.design;
 
-import barfit.design.section.SectionSelection;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import barfit.design.section.SectionSelection;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -35,12 +35,13 @@ class InvalidModelTest {
         overflow(model);
         CpSolver solver = OrTools.solver(OPTIONS);
         CpSolverStatus raw = solver.solve(model);
-        assertEquals(CpSolverStatus.MODEL_INVALID, raw, "the hand-made model must be invalid for the test to mean anything");
-        InvalidModelError e = assertThrows(InvalidModelError.class,
-                () -> OrTools.status(raw, solver, "a hand-made model"));
+        assertEquals(
+                CpSolverStatus.MODEL_INVALID, raw, "the hand-made model must be invalid for the test to mean anything");
+        InvalidModelError e =
+                assertThrows(InvalidModelError.class, () -> OrTools.status(raw, solver, "a hand-made model"));
         assertTrue(e.getMessage().startsWith("CP-SAT found a hand-made model invalid (MODEL_INVALID"), e.getMessage());
-        assertTrue(e.getMessage().contains("this is a bug in barfit, not in the input: please report it"),
-                e.getMessage());
+        assertTrue(
+                e.getMessage().contains("this is a bug in barfit, not in the input: please report it"), e.getMessage());
         assertTrue(!e.getMessage().contains("\n"), "one line: " + e.getMessage());
     }
 

@@ -26,7 +26,8 @@ class OrToolsCacheTest {
     void unpacksEveryLibraryOnceIntoAFolderNamedAfterItsJar() throws IOException {
         var url = OrTools.class.getClassLoader().getResource(OrTools.prefix());
         assertTrue(url != null && url.getProtocol().equals("jar"), "this platform's libraries come in a jar: " + url);
-        Path jar = Path.of(java.net.URI.create(((JarURLConnection) url.openConnection()).getJarFileURL().toString()));
+        Path jar = Path.of(java.net.URI.create(
+                ((JarURLConnection) url.openConnection()).getJarFileURL().toString()));
         Path dir = OrTools.cacheFolder(base);
         assertEquals(base.resolve(jar.getFileName().toString().replace(".jar", "")), dir);
 
@@ -34,12 +35,13 @@ class OrToolsCacheTest {
         assertTrue(Files.isRegularFile(dir.resolve(OrTools.COMPLETE)));
         int libraries = 0;
         try (JarFile jf = new JarFile(jar.toFile())) {
-            for (var e = jf.entries(); e.hasMoreElements();) {
+            for (var e = jf.entries(); e.hasMoreElements(); ) {
                 var entry = e.nextElement();
                 if (entry.isDirectory() || !entry.getName().startsWith(OrTools.prefix())) {
                     continue;
                 }
-                Path file = dir.resolve(entry.getName().substring(OrTools.prefix().length()));
+                Path file =
+                        dir.resolve(entry.getName().substring(OrTools.prefix().length()));
                 assertEquals(entry.getSize(), Files.size(file), file.toString());
                 libraries++;
             }
@@ -52,7 +54,10 @@ class OrToolsCacheTest {
 
         long written = Files.getLastModifiedTime(dir.resolve(OrTools.COMPLETE)).toMillis();
         OrTools.unpack(jar, OrTools.prefix(), base, dir); // as a second run racing the first would
-        assertEquals(written, Files.getLastModifiedTime(dir.resolve(OrTools.COMPLETE)).toMillis(), "the first is kept");
+        assertEquals(
+                written,
+                Files.getLastModifiedTime(dir.resolve(OrTools.COMPLETE)).toMillis(),
+                "the first is kept");
         try (Stream<Path> s = Files.list(base)) {
             assertEquals(List.of(dir), s.toList(), "no half-unpacked folder left behind");
         }

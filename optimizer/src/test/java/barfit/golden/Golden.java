@@ -22,11 +22,11 @@ import java.util.List;
 public final class Golden {
     /** Paths are relative to the module the tests run in (Maven runs each module's tests in its folder). */
     public static final Path DIR = Path.of("src/test/resources/golden");
+
     static final Path ACTUAL = Path.of("target/golden-actual");
     static final String UPDATE_PROPERTY = "golden.update";
 
-    private Golden() {
-    }
+    private Golden() {}
 
     /** What to do when the output changed, naming the module the tests run in. */
     static String howToUpdate() {
@@ -52,13 +52,14 @@ public final class Golden {
         }
         if (!Files.isRegularFile(golden)) {
             keepActual(golden, actual);
-            fail("no golden file " + shown(golden) + "; the output is in " + shown(kept(golden)) + "; " + howToUpdate());
+            fail("no golden file " + shown(golden) + "; the output is in " + shown(kept(golden)) + "; "
+                    + howToUpdate());
         }
         byte[] expected = read(golden);
         if (!java.util.Arrays.equals(expected, actual)) {
             Path kept = keepActual(golden, actual);
-            fail(shown(golden) + " differs from the output (" + firstDifference(expected, actual) + "); the output is in "
-                    + shown(kept) + "; " + howToUpdate());
+            fail(shown(golden) + " differs from the output (" + firstDifference(expected, actual)
+                    + "); the output is in " + shown(kept) + "; " + howToUpdate());
         }
     }
 
@@ -69,7 +70,9 @@ public final class Golden {
     public static void checkDigest(String name, byte[] actual) {
         Path golden = DIR.resolve(name + ".sha256");
         String line = sha256(actual) + "  " + Path.of(name).getFileName() + "\n";
-        if (!updating() && Files.isRegularFile(golden) && !new String(read(golden), StandardCharsets.UTF_8).equals(line)) {
+        if (!updating()
+                && Files.isRegularFile(golden)
+                && !new String(read(golden), StandardCharsets.UTF_8).equals(line)) {
             Path kept = keepActual(DIR.resolve(name), actual);
             fail(name + " differs from the output whose SHA-256 is in " + shown(golden) + "; the output is in "
                     + shown(kept) + "; " + howToUpdate());

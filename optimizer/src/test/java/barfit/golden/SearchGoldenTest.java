@@ -2,18 +2,18 @@ package barfit.golden;
 
 import barfit.design.CostModel;
 import barfit.design.CostRates;
+import barfit.design.SolverOptions;
 import barfit.design.section.DesignOutcome;
 import barfit.design.section.RandomProblems;
 import barfit.design.section.SectionDesigner;
 import barfit.design.section.SectionProblem;
-import barfit.design.SolverOptions;
+import barfit.design.span.RandomSpans;
 import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanProblem;
-import barfit.design.span.RandomSpans;
-import barfit.report.SpanJson;
 import barfit.report.DesignJson;
 import barfit.report.DesignText;
 import barfit.report.Json;
+import barfit.report.SpanJson;
 import barfit.section.CodeEquations;
 import barfit.units.UnitSystem;
 import java.nio.charset.StandardCharsets;
@@ -40,10 +40,20 @@ class SearchGoldenTest {
             SectionProblem p = i % 3 == 2 ? RandomProblems.medium(rnd) : RandomProblems.small(rnd);
             DesignOutcome o = sections.design(p, i % 5 == 0 ? 2 : 0);
             String json = Json.write(DesignJson.beam(o, UnitSystem.SI, i % 7 == 0));
-            out.append("section ").append(i).append(' ').append(o.status()).append(' ')
-                    .append(o.feasible() ? CostModel.units(o.best().costPerMetre().total()) : -1).append(' ')
-                    .append(o.feasible() ? DesignText.describe(o.best().layout(), UnitSystem.SI) : "-").append(' ')
-                    .append(hash(json)).append('\n');
+            out.append("section ")
+                    .append(i)
+                    .append(' ')
+                    .append(o.status())
+                    .append(' ')
+                    .append(
+                            o.feasible()
+                                    ? CostModel.units(o.best().costPerMetre().total())
+                                    : -1)
+                    .append(' ')
+                    .append(o.feasible() ? DesignText.describe(o.best().layout(), UnitSystem.SI) : "-")
+                    .append(' ')
+                    .append(hash(json))
+                    .append('\n');
         }
         SpanDesigner spans = new SpanDesigner(COST, new SolverOptions(30, 1, 1));
         Random beams = new Random(2_026_13L);
@@ -51,9 +61,15 @@ class SearchGoldenTest {
             SpanProblem p = RandomSpans.small(beams);
             SpanDesigner.Outcome o = spans.design(p, i % 6 == 0 ? 1 : 0);
             String json = Json.write(SpanJson.beam(o, UnitSystem.SI, i % 7 == 0));
-            out.append("span ").append(i).append(' ').append(o.status()).append(' ')
-                    .append(o.feasible() ? CostModel.units(o.best().cost().total()) : -1).append(' ')
-                    .append(hash(json)).append('\n');
+            out.append("span ")
+                    .append(i)
+                    .append(' ')
+                    .append(o.status())
+                    .append(' ')
+                    .append(o.feasible() ? CostModel.units(o.best().cost().total()) : -1)
+                    .append(' ')
+                    .append(hash(json))
+                    .append('\n');
         }
         Golden.check("search-answers.txt", out.toString().replace("\r", ""));
     }

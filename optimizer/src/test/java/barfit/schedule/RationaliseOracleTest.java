@@ -61,41 +61,63 @@ class RationaliseOracleTest {
             ScheduleInput in = schedule(r, i);
             ScheduleResult got = new ScheduleSolver(COST, new SolverOptions(30, 1, 1), 2, Progress.NONE).solve(in);
             long[][][] prices = prices(in);
-            Brute ref = bruteForce(in, prices, in.rationalise().maxSectionSizes() == null ? Integer.MAX_VALUE
-                    : in.rationalise().maxSectionSizes());
-            String where = "schedule " + i + " " + in.rationalise() + ", " + in.beams().size() + " beams";
+            Brute ref = bruteForce(
+                    in,
+                    prices,
+                    in.rationalise().maxSectionSizes() == null
+                            ? Integer.MAX_VALUE
+                            : in.rationalise().maxSectionSizes());
+            String where =
+                    "schedule " + i + " " + in.rationalise() + ", " + in.beams().size() + " beams";
             if (ref.total == Long.MAX_VALUE) {
-                assertTrue(!got.allFeasible(), "brute force finds nothing; the schedule claims " + got.totalCost()
-                        + " — " + where);
+                assertTrue(
+                        !got.allFeasible(),
+                        "brute force finds nothing; the schedule claims " + got.totalCost() + " — " + where);
                 continue;
             }
             if (Boolean.getBoolean("schedule.debug")) {
-                System.out.println(where + " brute " + ref + " got " + got.totalCost() + " formwork " + got.formworkSetsCost()
-                        + " proof " + got.proof());
+                System.out.println(where + " brute " + ref + " got " + got.totalCost() + " formwork "
+                        + got.formworkSetsCost() + " proof " + got.proof());
                 for (ScheduleResult.Beam b : got.beams()) {
-                    System.out.println("  " + b.beam().id() + " group " + b.beam().group() + " " + (b.feasible()
-                            ? b.outcome().best().layout().width() + "x" + b.outcome().best().layout().height() + " "
-                            + b.outcome().best().cost().total() + " top " + b.outcome().best().layout().top() + " bottom "
-                            + b.outcome().best().layout().bottom() : "none " + b.outcome().diagnosis()) + " own " + b.ownOptimum());
+                    System.out.println("  " + b.beam().id() + " group "
+                            + b.beam().group() + " "
+                            + (b.feasible()
+                                    ? b.outcome().best().layout().width() + "x"
+                                            + b.outcome().best().layout().height() + " "
+                                            + b.outcome().best().cost().total() + " top "
+                                            + b.outcome().best().layout().top() + " bottom "
+                                            + b.outcome().best().layout().bottom()
+                                    : "none " + b.outcome().diagnosis())
+                            + " own " + b.ownOptimum());
                 }
             }
-            assertTrue(got.proof() != null && got.proof().status() == Proof.Status.OPTIMAL, "proof " + got.proof() + " — "
-                    + where);
-            assertEquals(ref.total, CostModel.units(got.totalCost()), in.beams().size() + 1.0,
+            assertTrue(
+                    got.proof() != null && got.proof().status() == Proof.Status.OPTIMAL,
+                    "proof " + got.proof() + " — " + where);
+            assertEquals(
+                    ref.total,
+                    CostModel.units(got.totalCost()),
+                    in.beams().size() + 1.0,
                     "total against brute force " + ref + " — " + where);
             checkLimits(in, got, where);
-            double own = got.beams().stream().filter(ScheduleResult.Beam::feasible)
-                    .mapToDouble(ScheduleResult.Beam::ownOptimum).sum();
+            double own = got.beams().stream()
+                    .filter(ScheduleResult.Beam::feasible)
+                    .mapToDouble(ScheduleResult.Beam::ownOptimum)
+                    .sum();
             assertTrue(got.beamsCost() >= own - 1e-6, "beams priced below their own optima — " + where);
             // the price of standardisation, point by point
             for (ScheduleResult.StandardisationPoint pt : got.standardisation()) {
                 Brute b = bruteForce(in, prices, pt.sizes());
                 if (b.total() == Long.MAX_VALUE) {
-                    assertTrue(Double.isNaN(pt.cost()), "K = " + pt.sizes() + " has no schedule, got " + pt.cost() + " — "
-                            + where);
+                    assertTrue(
+                            Double.isNaN(pt.cost()),
+                            "K = " + pt.sizes() + " has no schedule, got " + pt.cost() + " — " + where);
                 } else {
-                    assertEquals(b.total(), CostModel.units(pt.cost()), in.beams().size() + 1.0, "K = " + pt.sizes()
-                            + " — " + where);
+                    assertEquals(
+                            b.total(),
+                            CostModel.units(pt.cost()),
+                            in.beams().size() + 1.0,
+                            "K = " + pt.sizes() + " — " + where);
                 }
             }
             proven++;
@@ -121,7 +143,8 @@ class RationaliseOracleTest {
             bars.add(l.bottom().designation());
             if (in.rationalise().groupsSameSection() && b.beam().group() != null) {
                 String first = groupSize.putIfAbsent(b.beam().group(), size);
-                assertTrue(first == null || first.equals(size), "group " + b.beam().group() + " shares b x h — " + where);
+                assertTrue(
+                        first == null || first.equals(size), "group " + b.beam().group() + " shares b x h — " + where);
             }
         }
         if (in.rationalise().maxSectionSizes() != null) {
@@ -134,8 +157,7 @@ class RationaliseOracleTest {
 
     // ------------------------------------------------------------------ brute force
 
-    record Brute(long total, List<Integer> sizes, List<String> bars) {
-    }
+    record Brute(long total, List<Integer> sizes, List<String> bars) {}
 
     /** Each beam's price by enumeration: [bar-size set as a bit mask][beam][size], MAX where nothing passes. */
     static long[][][] prices(ScheduleInput in) {
@@ -147,7 +169,9 @@ class RationaliseOracleTest {
             }
         }
         int nb = space.barSizes().size();
-        int take = in.rationalise().maxBarSizes() == null ? nb : Math.min(in.rationalise().maxBarSizes(), nb);
+        int take = in.rationalise().maxBarSizes() == null
+                ? nb
+                : Math.min(in.rationalise().maxBarSizes(), nb);
         SpanExhaustive oracle = new SpanExhaustive(COST);
         int n = in.beams().size();
         // beams with no design at all, and groups with no common size, are left out as the schedule does
@@ -165,8 +189,10 @@ class RationaliseOracleTest {
             for (int i = 0; i < n; i++) {
                 SpanProblem p = in.beams().get(i).problem();
                 for (int s = 0; s < sizes.size(); s++) {
-                    SpanProblem q = p.withFixedWidth(sizes.get(s)[0]).withSpace(p.space()
-                            .withDepths(List.of(sizes.get(s)[1])).withMainBars(allowed));
+                    SpanProblem q = p.withFixedWidth(sizes.get(s)[0])
+                            .withSpace(p.space()
+                                    .withDepths(List.of(sizes.get(s)[1]))
+                                    .withMainBars(allowed));
                     boolean widthOk = p.fixedWidth() == null || p.fixedWidth() == sizes.get(s)[0];
                     SpanExhaustive.Result e = widthOk ? oracle.solve(q) : null;
                     price[set][i][s] = e == null || e.best() == null ? Long.MAX_VALUE : e.units();
@@ -187,13 +213,16 @@ class RationaliseOracleTest {
             }
         }
         int nb = space.barSizes().size();
-        int take = in.rationalise().maxBarSizes() == null ? nb : Math.min(in.rationalise().maxBarSizes(), nb);
+        int take = in.rationalise().maxBarSizes() == null
+                ? nb
+                : Math.min(in.rationalise().maxBarSizes(), nb);
         long fixed = CostModel.units(in.rationalise().formworkSetCost());
         int n = in.beams().size();
         int all = (1 << nb) - 1;
         if (Boolean.getBoolean("schedule.debug") && sizeCount > 0) {
             for (int i = 0; i < n; i++) {
-                System.out.println("  brute " + in.beams().get(i).id() + " " + java.util.Arrays.toString(price[all][i]));
+                System.out.println(
+                        "  brute " + in.beams().get(i).id() + " " + java.util.Arrays.toString(price[all][i]));
             }
         }
         List<List<Integer>> groups = new ArrayList<>();
@@ -282,8 +311,15 @@ class RationaliseOracleTest {
         Materials m = new Materials(28, 420, 420, 20, 1.0);
         Detailing det = new Detailing(40, bar("10"), 25, Exposure.INTERIOR);
         List<BarSize> sizes = List.of(bar("16"), bar("19"), bar("22"));
-        SearchSpace space = new SearchSpace(List.of(250.0, 300.0), List.of(400.0, 500.0, 600.0), sizes, sizes, 1,
-                List.of(bar("10")), List.of(2, 4), List.of(100.0, 150.0, 200.0, 250.0));
+        SearchSpace space = new SearchSpace(
+                List.of(250.0, 300.0),
+                List.of(400.0, 500.0, 600.0),
+                sizes,
+                sizes,
+                1,
+                List.of(bar("10")),
+                List.of(2, 4),
+                List.of(100.0, 150.0, 200.0, 250.0));
         Settings settings = new Settings("oracle-" + index, UnitSystem.SI, m, BARS, det, Location.ofFile("oracle"));
         int n = 3 + r.nextInt(3);
         List<ScheduleBeam> beams = new ArrayList<>();
@@ -308,12 +344,33 @@ class RationaliseOracleTest {
                 }
             }
             double v = w * l / 2 * 1e3;
-            SpanChecks.ServiceLoads service = r.nextBoolean()
-                    ? new SpanChecks.ServiceLoads(w / 1.5 * 0.6, w / 1.5 * 0.4, 0.25) : null;
+            SpanChecks.ServiceLoads service =
+                    r.nextBoolean() ? new SpanChecks.ServiceLoads(w / 1.5 * 0.6, w / 1.5 * 0.4, 0.25) : null;
             Double cap = r.nextInt(4) == 0 ? 500.0 : null;
-            Flange flange = ends != EndCondition.SIMPLE && r.nextInt(3) == 0 ? Flange.given(1000, 120, false, null, span) : null;
-            SpanProblem p = new SpanProblem("S" + index + "-" + (i + 1), m, det, CodeEquations.SI, space, span, ends, ml,
-                    mm, mr, v, v, service, SpanChecks.Limits.DEFAULT, cap, null, flange, false, 2, 4);
+            Flange flange = ends != EndCondition.SIMPLE && r.nextInt(3) == 0
+                    ? Flange.given(1000, 120, false, null, span)
+                    : null;
+            SpanProblem p = new SpanProblem(
+                    "S" + index + "-" + (i + 1),
+                    m,
+                    det,
+                    CodeEquations.SI,
+                    space,
+                    span,
+                    ends,
+                    ml,
+                    mm,
+                    mr,
+                    v,
+                    v,
+                    service,
+                    SpanChecks.Limits.DEFAULT,
+                    cap,
+                    null,
+                    flange,
+                    false,
+                    2,
+                    4);
             String group = r.nextInt(3) == 0 ? "G" + r.nextInt(2) : null;
             beams.add(new ScheduleBeam(p.id(), group, Location.ofFile("oracle"), p));
         }
@@ -321,7 +378,7 @@ class RationaliseOracleTest {
         Integer mBars = r.nextInt(4) == 0 ? null : 1 + r.nextInt(2);
         Rationalise rat = new Rationalise(k, mBars, r.nextBoolean(), r.nextBoolean() ? 0 : 40 + r.nextInt(60));
         SearchReader.Costs costs = new SearchReader.Costs(CostRates.DEFAULTS, "", new java.util.TreeMap<>(), false);
-        return new ScheduleInput(List.of("oracle-" + index), settings, space, CostRates.DEFAULTS, "", costs, 2, 4,
-                beams, rat);
+        return new ScheduleInput(
+                List.of("oracle-" + index), settings, space, CostRates.DEFAULTS, "", costs, 2, 4, beams, rat);
     }
 }

@@ -7,10 +7,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import barfit.cli.Cli;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
-import barfit.design.section.SectionExhaustive;
-import barfit.design.section.SectionDesigner;
-import barfit.design.section.SectionProblem;
 import barfit.design.SolverOptions;
+import barfit.design.section.SectionDesigner;
+import barfit.design.section.SectionExhaustive;
+import barfit.design.section.SectionProblem;
 import barfit.section.CodeEquations;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -24,8 +24,19 @@ class StudyTest {
     static final SolverOptions OPTIONS = new SolverOptions(30, 1, 1);
 
     private static SectionProblem perMetre(SectionProblem p, Double cap) {
-        return new SectionProblem(p.id(), p.materials(), p.detailing(), p.code(), p.space(), p.mu(), p.vu(), null, cap,
-                p.fixedWidth(), p.flange(), 1.0);
+        return new SectionProblem(
+                p.id(),
+                p.materials(),
+                p.detailing(),
+                p.code(),
+                p.space(),
+                p.mu(),
+                p.vu(),
+                null,
+                cap,
+                p.fixedWidth(),
+                p.flange(),
+                1.0);
     }
 
     private static final Say SAY = new Say() {
@@ -65,16 +76,21 @@ class StudyTest {
             List<Double> depths = p.space().depths();
             double cap = depths.get(depths.size() / 2);
             SectionProblem q = perMetre(p, cap);
-            Compare.Result c = Compare.run(new SectionTarget(q, OPTIONS, SAY), cap, 600, List.of(), COST,
-                    fc -> COST, SAY);
+            Compare.Result c =
+                    Compare.run(new SectionTarget(q, OPTIONS, SAY), cap, 600, List.of(), COST, fc -> COST, SAY);
             var atCap = oracle.solve(q);
             var lifted = oracle.solve(perMetre(p, null));
             Summary a = c.options().get(0).summary();
             // with the cap at the deepest depth there is nothing to lift: compare leaves the option out
-            Summary d = c.options().stream().filter(o -> o.kind().equals("deepen")).map(Compare.Option::summary)
-                    .findFirst().orElse(a);
-            assertEquals(cap >= depths.get(depths.size() - 1), c.options().stream().noneMatch(o -> o.kind()
-                    .equals("deepen")), "deepen is left out exactly when the cap is the deepest depth");
+            Summary d = c.options().stream()
+                    .filter(o -> o.kind().equals("deepen"))
+                    .map(Compare.Option::summary)
+                    .findFirst()
+                    .orElse(a);
+            assertEquals(
+                    cap >= depths.get(depths.size() - 1),
+                    c.options().stream().noneMatch(o -> o.kind().equals("deepen")),
+                    "deepen is left out exactly when the cap is the deepest depth");
             assertEquals(atCap.best() != null, a.feasible(), "at cap feasibility, " + q);
             assertEquals(lifted.best() != null, d.feasible(), "deepen feasibility, " + q);
             if (a.feasible()) {
@@ -107,7 +123,9 @@ class StudyTest {
                 previous = pt.summary().total();
                 var fresh = designer.design(p.withMaxDepth(pt.cap()), 0);
                 assertTrue(fresh.feasible());
-                assertEquals(CostModel.units(fresh.best().cost().total()), CostModel.units(pt.summary().total()),
+                assertEquals(
+                        CostModel.units(fresh.best().cost().total()),
+                        CostModel.units(pt.summary().total()),
                         "sweep point at " + pt.cap() + " equals a fresh design");
             }
         }
@@ -118,8 +136,8 @@ class StudyTest {
         // McCormac & Brown 9th ed., Example 5.9: at b = 15 in and d = 28 in, Mu = 1030 ft-k needs compression
         // steel (the book adds 3 #8 to 8 #10). Through compare: at the 31 in cap the chosen layout needs its
         // compression steel, and the shallowest depth that works with the hangers alone is deeper than 31 in.
-        Cli out = Cli.run("compare", "src/test/resources/studies/doubly-textbook-us.yaml", "--format", "json", "--fc",
-                "5000");
+        Cli out = Cli.run(
+                "compare", "src/test/resources/studies/doubly-textbook-us.yaml", "--format", "json", "--fc", "5000");
         assertEquals(0, out.exit(), out.err());
         JsonNode beam = new ObjectMapper().readTree(out.out()).get("beams").get(0);
         JsonNode atCap = beam.get("options").get(0);
@@ -179,10 +197,13 @@ class StudyTest {
         assertTrue(marked.get(0).contains("f'c = 50 MPa"), marked.get(0));
         assertTrue(text.out().contains("recommended: f'c = 50 MPa, h ≤ 650 mm"), text.out());
         assertTrue(text.out().contains("depth premium"), "the cost is shown term by term: " + text.out());
-        Cli other = Cli.run("compare", "src/test/resources/studies/doubly-textbook-us.yaml", "--format", "json", "--fc",
-                "5000");
+        Cli other = Cli.run(
+                "compare", "src/test/resources/studies/doubly-textbook-us.yaml", "--format", "json", "--fc", "5000");
         JsonNode b2 = new ObjectMapper().readTree(other.out()).get("beams").get(0);
-        assertTrue(b2.get("recommended_fc").isNull() || b2.get("recommended").asText().equals("fc"), b2.toString());
+        assertTrue(
+                b2.get("recommended_fc").isNull()
+                        || b2.get("recommended").asText().equals("fc"),
+                b2.toString());
     }
 
     @Test
@@ -191,7 +212,11 @@ class StudyTest {
         // the 400 mm cap; without service loads deflection (24.2) cannot be computed, whatever the width or f'c.
         Cli r = Cli.run("compare", "src/test/resources/studies/span-capped-no-service-si.yaml");
         assertEquals(0, r.exit(), r.err());
-        String capLine = r.out().lines().filter(l -> l.contains("Nothing passes at the cap")).findFirst().orElseThrow();
+        String capLine = r.out()
+                .lines()
+                .filter(l -> l.contains("Nothing passes at the cap"))
+                .findFirst()
+                .orElseThrow();
         assertTrue(capLine.contains("service"), capLine);
         assertTrue(capLine.contains("cannot help"), capLine);
         assertFalse(r.out().contains("widened or made stronger"), r.out());
@@ -204,10 +229,15 @@ class StudyTest {
         Cli r = Cli.run("compare", "src/test/resources/studies/span-capped-si.yaml");
         assertEquals(0, r.exit(), r.err());
         String out = r.out();
-        String atCap = out.lines().filter(l -> l.contains("At the cap the beam is")).findFirst().orElseThrow();
+        String atCap = out.lines()
+                .filter(l -> l.contains("At the cap the beam is"))
+                .findFirst()
+                .orElseThrow();
         assertFalse(atCap.contains("without it the section fails"), atCap);
         assertTrue(atCap.contains("deflection") && atCap.contains("matter of cost"), atCap);
-        String header = out.lines().filter(l -> l.strip().startsWith("option ") && l.contains("b × h")).findFirst()
+        String header = out.lines()
+                .filter(l -> l.strip().startsWith("option ") && l.contains("b × h"))
+                .findFirst()
                 .orElseThrow();
         assertTrue(header.contains(" bottom ") && header.contains(" top "), header);
         assertFalse(header.contains("compression  "), header);
@@ -228,7 +258,8 @@ class StudyTest {
         assertTrue(b.get("compression_needed_below").isNull());
         assertTrue(b.get("compression_needed_everywhere").asBoolean(), b.toString());
         Cli lowText = Cli.run("sweep", f, "--from", "612", "--to", "700");
-        assertTrue(lowText.out().contains("every cap in the range (the minimum hangers alone work at no depth up to 700"),
+        assertTrue(
+                lowText.out().contains("every cap in the range (the minimum hangers alone work at no depth up to 700"),
                 lowText.out());
         Cli high = Cli.run("sweep", f, "--from", "750", "--to", "800", "--format", "json");
         JsonNode h = new ObjectMapper().readTree(high.out()).get("beams").get(0);

@@ -16,31 +16,31 @@ class UnitSystemTest {
 
     @Test
     void siInputIsMillimetresNewtonsAndMegapascalsInside() {
-        assertEquals(363e6, SI.toSI(363, Dim.MOMENT), 1e-6);   // 363 kN·m = 363 x 10^6 N·mm
-        assertEquals(210e3, SI.toSI(210, Dim.FORCE), 1e-9);    // 210 kN = 210 000 N
-        assertEquals(7200, SI.toSI(7.2, Dim.SPAN), 1e-9);      // 7.2 m = 7200 mm
-        assertEquals(28, SI.toSI(28, Dim.STRESS), 0);          // MPa = N/mm²
-        assertEquals(28, SI.toSI(28, Dim.LINE_LOAD), 0);       // 28 kN/m = 28 N/mm
+        assertEquals(363e6, SI.toSI(363, Dim.MOMENT), 1e-6); // 363 kN·m = 363 x 10^6 N·mm
+        assertEquals(210e3, SI.toSI(210, Dim.FORCE), 1e-9); // 210 kN = 210 000 N
+        assertEquals(7200, SI.toSI(7.2, Dim.SPAN), 1e-9); // 7.2 m = 7200 mm
+        assertEquals(28, SI.toSI(28, Dim.STRESS), 0); // MPa = N/mm²
+        assertEquals(28, SI.toSI(28, Dim.LINE_LOAD), 0); // 28 kN/m = 28 N/mm
         assertEquals(300, SI.toSI(300, Dim.LENGTH), 0);
         assertEquals(7.2, SI.fromSI(7200, Dim.SPAN), 1e-12);
     }
 
     @Test
     void inchPoundLengthsAreasAndSecondMoments() {
-        assertEquals(609.6, US.toSI(24, Dim.LENGTH), 1e-9);             // 24 in x 25.4
-        assertEquals(645.16, US.toSI(1, Dim.AREA), 1e-9);               // 1 in² = 25.4²
-        assertEquals(416_231.4256, US.toSI(1, Dim.INERTIA), 1e-6);      // 1 in⁴ = 25.4⁴
-        assertEquals(12_801.6, US.toSI(42, Dim.SPAN), 1e-9);            // 42 ft x 304.8 mm
-        assertEquals(25.4, US.toSI(1, Dim.AREA_PER_LENGTH), 1e-12);     // in²/in -> mm²/mm
+        assertEquals(609.6, US.toSI(24, Dim.LENGTH), 1e-9); // 24 in x 25.4
+        assertEquals(645.16, US.toSI(1, Dim.AREA), 1e-9); // 1 in² = 25.4²
+        assertEquals(416_231.4256, US.toSI(1, Dim.INERTIA), 1e-6); // 1 in⁴ = 25.4⁴
+        assertEquals(12_801.6, US.toSI(42, Dim.SPAN), 1e-9); // 42 ft x 304.8 mm
+        assertEquals(25.4, US.toSI(1, Dim.AREA_PER_LENGTH), 1e-12); // in²/in -> mm²/mm
         assertEquals(1.4881639, US.toSI(1, Dim.MASS_PER_LENGTH), 1e-7); // 0.45359237 kg / 0.3048 m
         assertEquals(3.400, US.fromSI(5.0598, Dim.MASS_PER_LENGTH), 1e-4); // #9: 5.060 kg/m is 3.400 lb/ft
     }
 
     @Test
     void inchPoundForcesMomentsAndStresses() {
-        assertEquals(422_581.05, US.toSI(95, Dim.FORCE), 0.01);           // 95 kip x 4448.2216 N
-        assertEquals(827.0489e6, US.toSI(610, Dim.MOMENT), 1e3);          // 610 kip·ft x 1.3558179 x 10^6 N·mm
-        assertEquals(14.5939029, US.toSI(1, Dim.LINE_LOAD), 1e-7);        // 4448.2216 N / 304.8 mm
+        assertEquals(422_581.05, US.toSI(95, Dim.FORCE), 0.01); // 95 kip x 4448.2216 N
+        assertEquals(827.0489e6, US.toSI(610, Dim.MOMENT), 1e3); // 610 kip·ft x 1.3558179 x 10^6 N·mm
+        assertEquals(14.5939029, US.toSI(1, Dim.LINE_LOAD), 1e-7); // 4448.2216 N / 304.8 mm
         // 1 psi = 4.4482216152605 N / 645.16 mm² = 6.894757 x 10^-3 MPa
         assertEquals(34.473786, US.toSI(5000, Dim.STRESS), 1e-6);
         assertEquals(413.685438, US.toSI(60_000, Dim.STRESS), 1e-6);
@@ -75,7 +75,7 @@ class UnitSystemTest {
         assertEquals("0.0021", SI.compact(0.0021, Dim.STRAIN));
         assertEquals("28", SI.compact(28, Dim.STRESS));
         assertEquals("0.1234", SI.compact(0.12341, Dim.NUMBER));
-        assertEquals("1.128", US.compact(28.6512, Dim.LENGTH));  // #9: 1.128 in x 25.4 = 28.6512 mm
+        assertEquals("1.128", US.compact(28.6512, Dim.LENGTH)); // #9: 1.128 in x 25.4 = 28.6512 mm
     }
 
     @Test

@@ -19,13 +19,18 @@ import java.util.List;
  * clear spans beside it.
  */
 public final class Coefficients {
-    private Coefficients() {
-    }
+    private Coefficients() {}
 
     /** One span's moments at its faces and in the span, and shears at its faces (N, mm; hogging negative). */
-    public record SpanValues(int index, double wu, double clear, double mLeftFace, double mSpan, double mRightFace,
-            double vLeftFace, double vRightFace) {
-    }
+    public record SpanValues(
+            int index,
+            double wu,
+            double clear,
+            double mLeftFace,
+            double mSpan,
+            double mRightFace,
+            double vLeftFace,
+            double vRightFace) {}
 
     /** Thrown with the 6.5.1 condition that fails, in words. */
     public static final class NotApplicable extends IllegalArgumentException {
@@ -65,7 +70,9 @@ public final class Coefficients {
             if (live[s] > 3 * dead[s] + 1e-9) {
                 throw new NotApplicable("6.5.1(c): L ≤ 3D is not met on span " + s);
             }
-            clear[s] = line.length(s) - line.supports().get(s - 1).width() / 2 - line.supports().get(s).width() / 2;
+            clear[s] = line.length(s)
+                    - line.supports().get(s - 1).width() / 2
+                    - line.supports().get(s).width() / 2;
         }
         for (int s = 1; s < n; s++) {
             double a = line.length(s);
@@ -81,7 +88,8 @@ public final class Coefficients {
             double ln = clear[s];
             boolean first = s == 1;
             boolean last = s == n;
-            Support ext = first ? line.supports().get(0) : last ? line.supports().get(n) : null;
+            Support ext =
+                    first ? line.supports().get(0) : last ? line.supports().get(n) : null;
             boolean integral = ext != null && ext.kind().integral();
             double pos = first || last ? (integral ? 1.0 / 14 : 1.0 / 11) : 1.0 / 16;
             double mLeft;

@@ -9,14 +9,41 @@ import java.util.List;
  * for the columns (MPa), an effective depth d for the shears at d (mm), and redistribution of the
  * negative moment at each support (percent, 0 for none; see {@link LineAnalysis}).
  */
-public record Line(String id, List<Double> spans, double overhangLeft, double overhangRight, List<Support> supports,
-        List<Load> loads, List<Double> spanEI, double ec, double d, List<Double> redistribution) {
+public record Line(
+        String id,
+        List<Double> spans,
+        double overhangLeft,
+        double overhangRight,
+        List<Support> supports,
+        List<Load> loads,
+        List<Double> spanEI,
+        double ec,
+        double d,
+        List<Double> redistribution) {
 
     /** A line of one section throughout: the same EI on every span. */
-    public Line(String id, List<Double> spans, double overhangLeft, double overhangRight, List<Support> supports,
-            List<Load> loads, double beamEI, double ec, double d, List<Double> redistribution) {
-        this(id, spans, overhangLeft, overhangRight, supports, loads, java.util.Collections.nCopies(spans.size(), beamEI),
-                ec, d, redistribution);
+    public Line(
+            String id,
+            List<Double> spans,
+            double overhangLeft,
+            double overhangRight,
+            List<Support> supports,
+            List<Load> loads,
+            double beamEI,
+            double ec,
+            double d,
+            List<Double> redistribution) {
+        this(
+                id,
+                spans,
+                overhangLeft,
+                overhangRight,
+                supports,
+                loads,
+                java.util.Collections.nCopies(spans.size(), beamEI),
+                ec,
+                d,
+                redistribution);
     }
 
     public Line {
@@ -29,8 +56,8 @@ public record Line(String id, List<Double> spans, double overhangLeft, double ov
             throw new IllegalArgumentException("a line needs at least one span between two supports");
         }
         if (supports.size() != spans.size() + 1) {
-            throw new IllegalArgumentException("a line of " + spans.size() + " spans needs " + (spans.size() + 1)
-                    + " supports");
+            throw new IllegalArgumentException(
+                    "a line of " + spans.size() + " spans needs " + (spans.size() + 1) + " supports");
         }
         for (double l : spans) {
             if (!(l > 0)) {

@@ -28,18 +28,15 @@ public final class LineAnalysis {
     /** Stations along every span at least (the code asks enough to find every maximum). */
     public static final int MIN_STATIONS_PER_SPAN = 20;
 
-    private LineAnalysis() {
-    }
+    private LineAnalysis() {}
 
     // ------------------------------------------------------------------ basic cases
 
     /** A basic load case: loads with factor 1 (their dead or live part only). */
-    record Case(String name, List<Load> loads) {
-    }
+    record Case(String name, List<Load> loads) {}
 
     /** Bending moments at the two ends of every segment for a case (sagging positive), N·mm. */
-    record EndMoments(double[] left, double[] right) {
-    }
+    record EndMoments(double[] left, double[] right) {}
 
     /** A factored combination of basic cases; {@code nz} the cases it takes (non-zero factors), in order. */
     record Combo(String name, double[] coef, int[] nz) {
@@ -532,8 +529,7 @@ public final class LineAnalysis {
     // ------------------------------------------------------------------ stations
 
     /** A place where the envelope is taken: segment, position in it (mm) and along the line. */
-    public record Station(int segment, double local, double x) {
-    }
+    public record Station(int segment, double local, double x) {}
 
     /**
      * Stations: {@code per} equal steps over every span and proportionally many over the overhangs, plus
@@ -548,7 +544,9 @@ public final class LineAnalysis {
                 continue;
             }
             TreeSet<Double> xs = new TreeSet<>();
-            int steps = s >= 1 && s <= n ? per : Math.max(4, (int) Math.ceil(per * len / line.spans().get(0)));
+            int steps = s >= 1 && s <= n
+                    ? per
+                    : Math.max(4, (int) Math.ceil(per * len / line.spans().get(0)));
             for (int i = 0; i <= steps; i++) {
                 xs.add(round(len * i / steps));
             }

@@ -10,13 +10,27 @@ import java.util.List;
  * ends) with the service moments for deflection; per overhang its moment at the face and shear at d.
  * N, mm; moments sagging positive; x along the line from the first support's centre line.
  */
-public record LineResult(Line line, List<StationValues> stations, List<SpanValues> spans, List<OverhangValues> overhangs,
-        List<Reaction> reactions, List<String> arrangements) {
+public record LineResult(
+        Line line,
+        List<StationValues> stations,
+        List<SpanValues> spans,
+        List<OverhangValues> overhangs,
+        List<Reaction> reactions,
+        List<String> arrangements) {
 
     /** The envelope at one station. */
-    public record StationValues(int segment, double local, double x, double mMax, double mMin, double vMax, double vMin,
-            String mMaxBy, String mMinBy, String vMaxBy, String vMinBy) {
-    }
+    public record StationValues(
+            int segment,
+            double local,
+            double x,
+            double mMax,
+            double mMin,
+            double vMax,
+            double vMin,
+            String mMaxBy,
+            String mMinBy,
+            String vMaxBy,
+            String vMinBy) {}
 
     /**
      * One span: moments at the faces of integral supports (9.4.2.1; at the centre line of knife edges and
@@ -27,25 +41,47 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
      * deflection, dead plus live in the one arrangement that gives the largest sagging moment in the span
      * ({@code deflectionBy}), at the faces and in the span.
      */
-    public record SpanValues(int index, double length, double clear, double mLeftFace, double mSpanMax,
-            double mRightFace, double vLeftD, double vRightD, boolean vLeftAtFace, boolean vRightAtFace,
-            List<Double> inflection, double deadLeft, double deadMid, double deadRight, double totalLeft,
-            double totalMid, double totalRight, double xMax, double deflectionLeft, double deflectionMid,
-            double deflectionRight, String deflectionBy) {
-    }
+    public record SpanValues(
+            int index,
+            double length,
+            double clear,
+            double mLeftFace,
+            double mSpanMax,
+            double mRightFace,
+            double vLeftD,
+            double vRightD,
+            boolean vLeftAtFace,
+            boolean vRightAtFace,
+            List<Double> inflection,
+            double deadLeft,
+            double deadMid,
+            double deadRight,
+            double totalLeft,
+            double totalMid,
+            double totalRight,
+            double xMax,
+            double deflectionLeft,
+            double deflectionMid,
+            double deflectionRight,
+            String deflectionBy) {}
 
     /** An overhang: its length past the support's centre line, moment at the face and shear at d from it. */
-    public record OverhangValues(String side, double length, double clear, double mFace, double vD,
-            double deadFace, double totalFace) {
-    }
+    public record OverhangValues(
+            String side, double length, double clear, double mFace, double vD, double deadFace, double totalFace) {}
 
     /** Factored reaction of a support: the largest and the least over the arrangements (N, upward). */
-    public record Reaction(int support, double max, double min) {
-    }
+    public record Reaction(int support, double max, double min) {}
 
-    static LineResult build(Line line, List<LineAnalysis.Case> cases, LineAnalysis.EndMoments[] caseEnds,
-            List<LineAnalysis.Station> stations, double[][] m, double[][] vl, double[][] vr,
-            List<LineAnalysis.Combo> combos, List<LineAnalysis.Combo> service) {
+    static LineResult build(
+            Line line,
+            List<LineAnalysis.Case> cases,
+            LineAnalysis.EndMoments[] caseEnds,
+            List<LineAnalysis.Station> stations,
+            double[][] m,
+            double[][] vl,
+            double[][] vr,
+            List<LineAnalysis.Combo> combos,
+            List<LineAnalysis.Combo> service) {
         Evaluator ev = new Evaluator(line, cases, caseEnds);
         ev.stations(stations, m);
         int ns = stations.size();
@@ -145,8 +181,15 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         return segment >= 1 && segment <= line.spanCount();
     }
 
-    private static SpanValues span(Line line, Evaluator ev, List<StationValues> sv, List<LineAnalysis.Combo> combos,
-            List<LineAnalysis.Combo> service, double[][] serviceM, List<Reaction> reactions, int s) {
+    private static SpanValues span(
+            Line line,
+            Evaluator ev,
+            List<StationValues> sv,
+            List<LineAnalysis.Combo> combos,
+            List<LineAnalysis.Combo> service,
+            double[][] serviceM,
+            List<Reaction> reactions,
+            int s) {
         double len = line.length(s);
         Support ls = line.supports().get(s - 1);
         Support rs = line.supports().get(s);
@@ -170,8 +213,10 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         // support always in compression; loads taken as applied at the top), else at the face
         double fl = ls.width() / 2;
         double fr = len - rs.width() / 2;
-        boolean leftAtFace = pointLoadWithin(line, s, fl, fl + line.d()) || reactions.get(s - 1).min() <= 0;
-        boolean rightAtFace = pointLoadWithin(line, s, fr - line.d(), fr) || reactions.get(s).min() <= 0;
+        boolean leftAtFace = pointLoadWithin(line, s, fl, fl + line.d())
+                || reactions.get(s - 1).min() <= 0;
+        boolean rightAtFace =
+                pointLoadWithin(line, s, fr - line.d(), fr) || reactions.get(s).min() <= 0;
         double xvl = leftAtFace ? fl : Math.min(fl + line.d(), len / 2);
         double xvr = rightAtFace ? fr : Math.max(fr - line.d(), len / 2);
         double vLeft = 0;
@@ -240,13 +285,33 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             }
         }
         double clear = len - ls.width() / 2 - rs.width() / 2;
-        return new SpanValues(s, len, clear, mLeft, mMax, mRight, vLeft, vRight, leftAtFace, rightAtFace, inflection,
-                dl, dm, dr, tl, tm, tr, xMax, ev.moment(deflectionBy, s, xl), deflectionMid,
-                ev.moment(deflectionBy, s, xr), deflectionBy.name());
+        return new SpanValues(
+                s,
+                len,
+                clear,
+                mLeft,
+                mMax,
+                mRight,
+                vLeft,
+                vRight,
+                leftAtFace,
+                rightAtFace,
+                inflection,
+                dl,
+                dm,
+                dr,
+                tl,
+                tm,
+                tr,
+                xMax,
+                ev.moment(deflectionBy, s, xl),
+                deflectionMid,
+                ev.moment(deflectionBy, s, xr),
+                deflectionBy.name());
     }
 
-    private static OverhangValues overhang(Line line, Evaluator ev, List<LineAnalysis.Combo> combos,
-            List<LineAnalysis.Combo> service, int segment) {
+    private static OverhangValues overhang(
+            Line line, Evaluator ev, List<LineAnalysis.Combo> combos, List<LineAnalysis.Combo> service, int segment) {
         boolean left = segment == 0;
         double len = line.length(segment);
         Support sup = line.supports().get(left ? 0 : line.spanCount());
@@ -263,8 +328,8 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
         for (LineAnalysis.Combo co : service) {
             total = Math.min(total, ev.moment(co, segment, face));
         }
-        return new OverhangValues(left ? "left" : "right", len, len - half, m, v, ev.moment(service.get(0), segment, face),
-                total);
+        return new OverhangValues(
+                left ? "left" : "right", len, len - half, m, v, ev.moment(service.get(0), segment, face), total);
     }
 
     private static boolean pointLoadWithin(Line line, int segment, double a, double b) {
@@ -393,8 +458,9 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             double mo = 0;
             for (int i = 0; i < co.coef().length; i++) {
                 if (co.coef()[i] != 0) {
-                    mo += co.coef()[i] * LineAnalysis.staticMoment(line, segment,
-                            bySegment.get(i).get(segment), x);
+                    mo += co.coef()[i]
+                            * LineAnalysis.staticMoment(
+                                    line, segment, bySegment.get(i).get(segment), x);
                 }
             }
             if (isSpan(line, segment)) {
@@ -409,8 +475,9 @@ public record LineResult(Line line, List<StationValues> stations, List<SpanValue
             double v = 0;
             for (int i = 0; i < co.coef().length; i++) {
                 if (co.coef()[i] != 0) {
-                    v += co.coef()[i] * LineAnalysis.staticShear(line, segment,
-                            bySegment.get(i).get(segment), x, rightLimit);
+                    v += co.coef()[i]
+                            * LineAnalysis.staticShear(
+                                    line, segment, bySegment.get(i).get(segment), x, rightLimit);
                 }
             }
             if (isSpan(line, segment)) {

@@ -10,8 +10,7 @@ public final class RedistributionLimit {
     /** 6.6.5.3: the most, in percent. */
     public static final double MAX_PERCENT = 20;
 
-    private RedistributionLimit() {
-    }
+    private RedistributionLimit() {}
 
     /** The largest redistribution allowed at a section of net tensile strain εt, percent (0 when NaN). */
     public static double percent(double epsT) {

@@ -13,8 +13,7 @@ public final class Stiffness {
     /** Table 6.6.3.1.1: columns. */
     public static final double COLUMN_FACTOR = 0.70;
 
-    private Stiffness() {
-    }
+    private Stiffness() {}
 
     /** Ig of a gross section (web and effective flange), mm⁴, about its own centroid. */
     public static double grossInertia(SectionShape shape) {
@@ -24,7 +23,9 @@ public final class Stiffness {
         double hf = shape.flanged() ? shape.flange().thickness() : 0;
         double area = bw * h + (bf - bw) * hf;
         double yc = (bw * h * h / 2 + (bf - bw) * hf * hf / 2) / area;
-        return bw * h * h * h / 12 + bw * h * sq(h / 2 - yc) + (bf - bw) * hf * hf * hf / 12
+        return bw * h * h * h / 12
+                + bw * h * sq(h / 2 - yc)
+                + (bf - bw) * hf * hf * hf / 12
                 + (bf - bw) * hf * sq(hf / 2 - yc);
     }
 

@@ -6,7 +6,10 @@ package barfit.analysis;
  * fixed support fully; a knife edge and a wall let the beam rotate freely.
  */
 public enum SupportKind {
-    COLUMN("column"), KNIFE_EDGE("knife-edge"), WALL("wall"), FIXED("fixed");
+    COLUMN("column"),
+    KNIFE_EDGE("knife-edge"),
+    WALL("wall"),
+    FIXED("fixed");
 
     private final String word;
 

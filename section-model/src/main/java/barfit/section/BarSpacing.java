@@ -8,8 +8,7 @@ import barfit.catalogs.BarSize;
  * are cover + stirrup diameter from the side faces.
  */
 public final class BarSpacing {
-    private BarSpacing() {
-    }
+    private BarSpacing() {}
 
     /** Width between the inner faces of the stirrup legs, where a layer's bars must fit. */
     public static double innerWidth(double bw, Detailing det) {

@@ -53,8 +53,7 @@ public record BeamSection(
     }
 
     /** A bar size and count, before it has a position. */
-    public record BarGroup(BarSize bar, int count) {
-    }
+    public record BarGroup(BarSize bar, int count) {}
 
     /**
      * Default layer positions on one face: the first layer's centroid at cover + stirrup + db/2, each
@@ -67,7 +66,9 @@ public record BeamSection(
         for (int i = 0; i < groups.size(); i++) {
             BarGroup g = groups.get(i);
             double db = g.bar().diameter();
-            double y = i == 0 ? detailing.firstLayerCentroid(db) : prevCentroid + prevDb / 2 + detailing.layerGap() + db / 2;
+            double y = i == 0
+                    ? detailing.firstLayerCentroid(db)
+                    : prevCentroid + prevDb / 2 + detailing.layerGap() + db / 2;
             out.add(new BarLayer(face, g.bar(), g.count(), y));
             prevCentroid = y;
             prevDb = db;

@@ -2,7 +2,8 @@ package barfit.section;
 
 /** Sagging: bottom face in tension (positive Mu). Hogging: top face in tension (negative Mu). */
 public enum Bending {
-    SAGGING, HOGGING;
+    SAGGING,
+    HOGGING;
 
     public static Bending of(double mu) {
         return mu < 0 ? HOGGING : SAGGING;

@@ -5,8 +5,13 @@ import java.util.List;
 import java.util.Optional;
 
 /** Everything the section model says about one section under one demand. */
-public record CheckReport(BeamSection section, Demand demand, FlexureResult flexure, ShearResult shear,
-        List<CheckResult> checks, Trail trail) {
+public record CheckReport(
+        BeamSection section,
+        Demand demand,
+        FlexureResult flexure,
+        ShearResult shear,
+        List<CheckResult> checks,
+        Trail trail) {
 
     public CheckReport {
         checks = List.copyOf(checks);

@@ -55,79 +55,107 @@ public record CodeEquations(
 
     /** psi per MPa (exact: 1 psi = 6.894757293 kPa). */
     public static final double PSI_PER_MPA = 145.037737730;
+
     public static final double MM_PER_IN = 25.4;
 
     private static final double ROOT_PSI = Math.sqrt(PSI_PER_MPA);
 
     /** ACI 318M-19, the SI edition. */
     public static final CodeEquations SI = new CodeEquations(
-            "ACI 318M-19 (SI units)", false,
-            200_000.0,                      // 20.2.2.2
-            25.0, 25.0,                     // 25.2.1, 25.2.2
-            28.0, 7.0, 55.0,                // Table 22.2.2.4.3
-            new Coef(0.17, "0.17"),         // Table 22.5.5.1 (a)
-            new Coef(0.66, "0.66"),         // Table 22.5.5.1 (b), (c)
-            new Coef(0.42, "0.42"),         // 22.5.5.1.1
-            new Coef(0.33, "0.33"),         // 9.7.6.2.2
-            new Coef(0.66, "0.66"),         // 22.5.1.2
-            new Coef(0.083, "0.083"),       // 9.6.3.1
-            new Coef(0.062, "0.062"), 0.35, // Table 9.6.3.4
-            new Coef(0.25, "0.25"), 1.4,    // 9.6.1.2
-            8.3,                            // 22.5.3.1
-            250.0,                          // 22.5.5.1.3: 1 + 0.004 d = 1 + d/250
-            600.0, 300.0,                   // Table 9.7.6.2.2
-            380.0, 300.0, 280.0,            // 24.3.2
-            900.0,                          // 9.7.2.3
-            420.0, 700.0,                   // Table 9.3.1.1 note
-            420.0,                          // Table 20.2.2.4(a), shear
-            550.0,                          // Table 20.2.2.4(a), flexure
-            40.0, 50.0, 75.0,               // Table 20.5.1.3.1
-            new Coef(4700.0, "4700"),       // 19.2.2.1(b)
-            new Coef(0.62, "0.62"),         // 19.2.3.1
-            new Coef(2.1, "2.1"),           // Table 25.4.2.3, No. 19 and smaller, spacing and cover met
-            new Coef(1.7, "1.7"),           // Table 25.4.2.3, No. 22 and larger, spacing and cover met
-            new Coef(1.4, "1.4"),           // Table 25.4.2.3, other cases
+            "ACI 318M-19 (SI units)",
+            false,
+            200_000.0, // 20.2.2.2
+            25.0,
+            25.0, // 25.2.1, 25.2.2
+            28.0,
+            7.0,
+            55.0, // Table 22.2.2.4.3
+            new Coef(0.17, "0.17"), // Table 22.5.5.1 (a)
+            new Coef(0.66, "0.66"), // Table 22.5.5.1 (b), (c)
+            new Coef(0.42, "0.42"), // 22.5.5.1.1
+            new Coef(0.33, "0.33"), // 9.7.6.2.2
+            new Coef(0.66, "0.66"), // 22.5.1.2
+            new Coef(0.083, "0.083"), // 9.6.3.1
+            new Coef(0.062, "0.062"),
+            0.35, // Table 9.6.3.4
+            new Coef(0.25, "0.25"),
+            1.4, // 9.6.1.2
+            8.3, // 22.5.3.1
+            250.0, // 22.5.5.1.3: 1 + 0.004 d = 1 + d/250
+            600.0,
+            300.0, // Table 9.7.6.2.2
+            380.0,
+            300.0,
+            280.0, // 24.3.2
+            900.0, // 9.7.2.3
+            420.0,
+            700.0, // Table 9.3.1.1 note
+            420.0, // Table 20.2.2.4(a), shear
+            550.0, // Table 20.2.2.4(a), flexure
+            40.0,
+            50.0,
+            75.0, // Table 20.5.1.3.1
+            new Coef(4700.0, "4700"), // 19.2.2.1(b)
+            new Coef(0.62, "0.62"), // 19.2.3.1
+            new Coef(2.1, "2.1"), // Table 25.4.2.3, No. 19 and smaller, spacing and cover met
+            new Coef(1.7, "1.7"), // Table 25.4.2.3, No. 22 and larger, spacing and cover met
+            new Coef(1.4, "1.4"), // Table 25.4.2.3, other cases
             new Coef(1.1, "1.1"),
-            new Coef(1.1, "1.1"),           // 25.4.2.4(a)
-            300.0,                          // 25.4.2.1(b)
-            300.0,                          // Table 25.4.2.5, top bars
-            20.0,                           // "No. 19 and smaller" (db 19.1 mm)
-            420.0, 550.0);                  // Table 25.4.2.5, psi_g
+            new Coef(1.1, "1.1"), // 25.4.2.4(a)
+            300.0, // 25.4.2.1(b)
+            300.0, // Table 25.4.2.5, top bars
+            20.0, // "No. 19 and smaller" (db 19.1 mm)
+            420.0,
+            550.0); // Table 25.4.2.5, psi_g
 
     /** ACI 318-19, the inch-pound edition, with every constant converted exactly to N, mm, MPa. */
     public static final CodeEquations INCH_POUND = new CodeEquations(
-            "ACI 318-19 (inch-pound units)", true,
+            "ACI 318-19 (inch-pound units)",
+            true,
             29_000_000.0 / PSI_PER_MPA,
-            MM_PER_IN, MM_PER_IN,
-            4000.0 / PSI_PER_MPA, 1000.0 / PSI_PER_MPA, 8000.0 / PSI_PER_MPA,
+            MM_PER_IN,
+            MM_PER_IN,
+            4000.0 / PSI_PER_MPA,
+            1000.0 / PSI_PER_MPA,
+            8000.0 / PSI_PER_MPA,
             new Coef(2.0 / ROOT_PSI, "2"),
             new Coef(8.0 / ROOT_PSI, "8"),
             new Coef(5.0 / ROOT_PSI, "5"),
             new Coef(4.0 / ROOT_PSI, "4"),
             new Coef(8.0 / ROOT_PSI, "8"),
             new Coef(1.0 / ROOT_PSI, "1"),
-            new Coef(0.75 / ROOT_PSI, "0.75"), 50.0 / PSI_PER_MPA,
-            new Coef(3.0 / ROOT_PSI, "3"), 200.0 / PSI_PER_MPA,
+            new Coef(0.75 / ROOT_PSI, "0.75"),
+            50.0 / PSI_PER_MPA,
+            new Coef(3.0 / ROOT_PSI, "3"),
+            200.0 / PSI_PER_MPA,
             100.0 / ROOT_PSI,
             10.0 * MM_PER_IN,
-            24.0 * MM_PER_IN, 12.0 * MM_PER_IN,
-            15.0 * MM_PER_IN, 12.0 * MM_PER_IN, 40_000.0 / PSI_PER_MPA,
+            24.0 * MM_PER_IN,
+            12.0 * MM_PER_IN,
+            15.0 * MM_PER_IN,
+            12.0 * MM_PER_IN,
+            40_000.0 / PSI_PER_MPA,
             36.0 * MM_PER_IN,
-            60_000.0 / PSI_PER_MPA, 100_000.0 / PSI_PER_MPA,
+            60_000.0 / PSI_PER_MPA,
+            100_000.0 / PSI_PER_MPA,
             60_000.0 / PSI_PER_MPA,
             80_000.0 / PSI_PER_MPA,
-            1.5 * MM_PER_IN, 2.0 * MM_PER_IN, 3.0 * MM_PER_IN,
+            1.5 * MM_PER_IN,
+            2.0 * MM_PER_IN,
+            3.0 * MM_PER_IN,
             new Coef(57_000.0 / ROOT_PSI, "57000"),
             new Coef(7.5 / ROOT_PSI, "7.5"),
-            new Coef(25.0 / ROOT_PSI, "25"),       // Table 25.4.2.3 (inch-pound): fy psi_t psi_e psi_g / (25 lambda sqrt(f'c))
+            new Coef(
+                    25.0 / ROOT_PSI, "25"), // Table 25.4.2.3 (inch-pound): fy psi_t psi_e psi_g / (25 lambda sqrt(f'c))
             new Coef(20.0 / ROOT_PSI, "20"),
             new Coef(50.0 / 3.0 / ROOT_PSI, "50/3"),
             new Coef(40.0 / 3.0 / ROOT_PSI, "40/3"),
             new Coef(40.0 / 3.0 / ROOT_PSI, "40/3"), // 25.4.2.4(a): (3/40) fy / (lambda sqrt(f'c)) ...
             12.0 * MM_PER_IN,
             12.0 * MM_PER_IN,
-            20.0,                                   // "#6 and smaller" (db 0.75 in)
-            60_000.0 / PSI_PER_MPA, 80_000.0 / PSI_PER_MPA);
+            20.0, // "#6 and smaller" (db 0.75 in)
+            60_000.0 / PSI_PER_MPA,
+            80_000.0 / PSI_PER_MPA);
 
     /** √f'c in √MPa, capped per 22.5.3.1 (8.3 MPa, or 100 psi). */
     public double rootFcForShear(double fc) {

@@ -15,8 +15,7 @@ public final class CodeTables {
     /** φ for moment, compression-controlled with other (tied) transverse reinforcement (Table 21.2.2). */
     public static final double PHI_COMPRESSION_CONTROLLED = 0.65;
 
-    private CodeTables() {
-    }
+    private CodeTables() {}
 
     /** beta1 of Table 22.2.2.4.3, with the breakpoints of the user's edition. */
     public static double beta1(double fc, CodeEquations code) {

@@ -7,11 +7,9 @@ package barfit.section;
  */
 public final class Deflection {
     /** Stiffness data of one section for one direction of bending. */
-    public record Stiffness(double ig, double yt, double mcr, double icr, double kd, double n, double ec) {
-    }
+    public record Stiffness(double ig, double yt, double mcr, double icr, double kd, double n, double ec) {}
 
-    private Deflection() {
-    }
+    private Deflection() {}
 
     /**
      * Ec = 4700 √f'c (19.2.2.1(b), normal-weight concrete; 57 000 √f'c in psi). For lightweight concrete
@@ -44,8 +42,8 @@ public final class Deflection {
      * @param depth each bar layer's depth from the extreme compression fibre of this bending, mm
      * @param area  each bar layer's area, mm²
      */
-    public static Stiffness stiffness(SectionShape shape, Bending bending, Materials m, CodeEquations code,
-            double[] depth, double[] area) {
+    public static Stiffness stiffness(
+            SectionShape shape, Bending bending, Materials m, CodeEquations code, double[] depth, double[] area) {
         if (depth.length != area.length) {
             throw new IllegalArgumentException("one area per layer depth");
         }
@@ -60,7 +58,9 @@ public final class Deflection {
         double grossArea = bw * h + (bf - bw) * hf;
         double firstMoment = bw * h * h / 2 + (bf - bw) * hf * hf / 2;
         double yc = firstMoment / grossArea;
-        double ig = bw * h * h * h / 12 + bw * h * sq(h / 2 - yc) + (bf - bw) * hf * hf * hf / 12
+        double ig = bw * h * h * h / 12
+                + bw * h * sq(h / 2 - yc)
+                + (bf - bw) * hf * hf * hf / 12
                 + (bf - bw) * hf * sq(hf / 2 - yc);
         double yt = h - yc;
         double mcr = fr(m, code) * ig / yt;
@@ -104,8 +104,7 @@ public final class Deflection {
      * grows with the axis depth (its derivative is the transformed area above the axis plus that below),
      * is negative at the compression face and positive at the deepest bar, so the root is unique.
      */
-    private static double crackedNeutralAxis(double bf, double hf, double bw, double n, double[] depth,
-            double[] area) {
+    private static double crackedNeutralAxis(double bf, double hf, double bw, double n, double[] depth, double[] area) {
         double lo = 0;
         double hi = 0;
         for (double d : depth) {
@@ -147,8 +146,8 @@ public final class Deflection {
      * simple span 5 M L² / (48 Ec Ie); continuous spans 5 L² / (48 Ec Ie) (Mmid − 0.1 (Mleft + Mright));
      * cantilever (tip) M L² / (4 Ec Ie). (Common practice for uniformly loaded spans, no clause.)
      */
-    public static double spanDeflection(EndCondition ends, double length, double ec, double ie, double mLeft,
-            double mMid, double mRight) {
+    public static double spanDeflection(
+            EndCondition ends, double length, double ec, double ie, double mLeft, double mMid, double mRight) {
         double l2 = length * length;
         return switch (ends) {
             case SIMPLE -> 5 * mMid * l2 / (48 * ec * ie);

@@ -12,11 +12,9 @@ import barfit.section.trail.Trail;
  */
 public final class Development {
     /** The result with its factors, mm. */
-    public record Result(double ld, double psiT, double psiS, double psiG, double confinement, double ktr, double cb) {
-    }
+    public record Result(double ld, double psiT, double psiS, double psiG, double confinement, double ktr, double cb) {}
 
-    private Development() {
-    }
+    private Development() {}
 
     /** psi_g of Table 25.4.2.5 from fy. */
     public static double psiG(double fy, CodeEquations code) {
@@ -34,8 +32,16 @@ public final class Development {
      * @param s      stirrup spacing, mm
      * @param n      number of bars being developed along the splitting plane
      */
-    public static Result general(BarSize bar, Materials m, CodeEquations code, boolean topBar, double cb, double atr,
-            double s, int n, Trail t) {
+    public static Result general(
+            BarSize bar,
+            Materials m,
+            CodeEquations code,
+            boolean topBar,
+            double cb,
+            double atr,
+            double s,
+            int n,
+            Trail t) {
         double db = bar.diameter();
         double psiT = topBar ? 1.3 : 1.0;
         double psiE = 1.0;
@@ -50,12 +56,27 @@ public final class Development {
         if (t.isOn()) {
             t.heading("Development length of " + bar.label() + (topBar ? " top bars" : " bars"), "25.4.2.4");
             t.step("Ktr", "40 Atr / (s n)", "40 × {} / ({} × {})", Q.length(ktr), Q.area(atr), Q.length(s), Q.count(n));
-            t.step("(cb + Ktr)/db", "≤ 2.5", "min(({} + {}) / {}, 2.5)", Q.number(conf), Q.length(cb), Q.length(ktr),
+            t.step(
+                    "(cb + Ktr)/db",
+                    "≤ 2.5",
+                    "min(({} + {}) / {}, 2.5)",
+                    Q.number(conf),
+                    Q.length(cb),
+                    Q.length(ktr),
                     Q.length(db));
-            t.step("ld", "fy / (" + code.ldGeneral().shown() + " λ √f'c) × ψt ψe ψs ψg / ((cb + Ktr)/db) × db",
-                    "{} / (" + code.ldGeneral().shown() + " × {} × √{}) × {} × 1.0 × {} × {} / {} × {}", Q.length(ld),
-                    Q.stress(m.fy()), Q.number(m.lambda()), Q.stress(rootFc * rootFc), Q.number(psiT), Q.number(psiS),
-                    Q.number(psiG), Q.number(conf), Q.length(db));
+            t.step(
+                    "ld",
+                    "fy / (" + code.ldGeneral().shown() + " λ √f'c) × ψt ψe ψs ψg / ((cb + Ktr)/db) × db",
+                    "{} / (" + code.ldGeneral().shown() + " × {} × √{}) × {} × 1.0 × {} × {} / {} × {}",
+                    Q.length(ld),
+                    Q.stress(m.fy()),
+                    Q.number(m.lambda()),
+                    Q.stress(rootFc * rootFc),
+                    Q.number(psiT),
+                    Q.number(psiS),
+                    Q.number(psiG),
+                    Q.number(conf),
+                    Q.length(db));
             if (out > ld) {
                 t.note("ld raised to the minimum of 25.4.2.1(b).");
             }
@@ -71,7 +92,8 @@ public final class Development {
     public static double simplified(BarSize bar, Materials m, CodeEquations code, boolean topBar, boolean spacingMet) {
         double db = bar.diameter();
         boolean small = db < code.smallBarLimit();
-        Coef k = spacingMet ? (small ? code.ldSimpleSmall() : code.ldSimpleLarge())
+        Coef k = spacingMet
+                ? (small ? code.ldSimpleSmall() : code.ldSimpleLarge())
                 : (small ? code.ldOtherSmall() : code.ldOtherLarge());
         double psi = Math.min((topBar ? 1.3 : 1.0) * 1.0, 1.7) * psiG(m.fy(), code);
         double rootFc = Math.min(Math.sqrt(m.fc()), code.rootFcMax());

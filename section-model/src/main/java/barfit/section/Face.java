@@ -2,7 +2,8 @@ package barfit.section;
 
 /** A face of the beam. Layers are counted from their face inward. */
 public enum Face {
-    TOP, BOTTOM;
+    TOP,
+    BOTTOM;
 
     public Face opposite() {
         return this == TOP ? BOTTOM : TOP;

@@ -9,15 +9,16 @@ package barfit.section;
  * {@code clearSpan} (ln, the beam's clear span) bound the overhangs; each is NaN when not known, and that
  * limit is then not applied.
  */
-public record Flange(double width, double thickness, boolean oneSided, double given, double clearToNextWeb,
-        double clearSpan) {
+public record Flange(
+        double width, double thickness, boolean oneSided, double given, double clearToNextWeb, double clearSpan) {
 
     public Flange {
         if (!(thickness > 0) || !(given > 0) || !(width > 0) || width > given) {
             throw new IllegalArgumentException("a flange needs a positive thickness and a width no wider than given");
         }
         if (clearToNextWeb <= 0 || clearSpan <= 0) {
-            throw new IllegalArgumentException("the clear distance to the next web and the clear span must be positive");
+            throw new IllegalArgumentException(
+                    "the clear distance to the next web and the clear span must be positive");
         }
     }
 
@@ -27,9 +28,14 @@ public record Flange(double width, double thickness, boolean oneSided, double gi
     }
 
     /** A flange as the input gives it; {@code clearToNextWeb} and {@code clearSpan} may be null (not known). */
-    public static Flange given(double width, double thickness, boolean oneSided, Double clearToNextWeb,
-            Double clearSpan) {
-        return new Flange(width, thickness, oneSided, width, clearToNextWeb == null ? Double.NaN : clearToNextWeb,
+    public static Flange given(
+            double width, double thickness, boolean oneSided, Double clearToNextWeb, Double clearSpan) {
+        return new Flange(
+                width,
+                thickness,
+                oneSided,
+                width,
+                clearToNextWeb == null ? Double.NaN : clearToNextWeb,
                 clearSpan == null ? Double.NaN : clearSpan);
     }
 

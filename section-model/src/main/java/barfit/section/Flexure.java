@@ -7,8 +7,7 @@ import java.util.List;
 
 /** Nominal moment strength of a {@link BeamSection} (22.2) with phi (21.2.2), and its trail. */
 public final class Flexure {
-    private Flexure() {
-    }
+    private Flexure() {}
 
     public static FlexureResult analyse(BeamSection s, Bending bending) {
         return analyse(s, bending, Trail.off());
@@ -54,8 +53,22 @@ public final class Flexure {
         double c = solver.c();
         double epsT = CodeTables.EPS_CU * (dt - c) / c;
         double phi = CodeTables.phiFlexure(epsT, epsTy);
-        FlexureResult r = new FlexureResult(bending, c, solver.a(), beta1, solver.concreteForce(),
-                solver.concreteCentroid(), out, dt, d, tensionArea, epsT, epsTy, phi, solver.mn(), solver.residual());
+        FlexureResult r = new FlexureResult(
+                bending,
+                c,
+                solver.a(),
+                beta1,
+                solver.concreteForce(),
+                solver.concreteCentroid(),
+                out,
+                dt,
+                d,
+                tensionArea,
+                epsT,
+                epsTy,
+                phi,
+                solver.mn(),
+                solver.residual());
         if (trail.isOn()) {
             explain(s, r, trail);
         }
@@ -76,18 +89,27 @@ public final class Flexure {
     private static void explain(BeamSection s, FlexureResult r, Trail t) {
         Materials m = s.materials();
         CodeEquations code = s.code();
-        t.heading("Flexural strength, " + r.bending().word() + " (" + r.bending().tensionFace().word()
-                + " face in tension)", "22.2, 21.2.2");
+        t.heading(
+                "Flexural strength, " + r.bending().word() + " ("
+                        + r.bending().tensionFace().word() + " face in tension)",
+                "22.2, 21.2.2");
         if (m.fc() <= code.beta1FcLow()) {
-            t.value("β1", Q.number(r.beta1()), "f'c ≤ " + (code.inchPound() ? "4000 psi" : "28 MPa")
-                    + ", Table 22.2.2.4.3");
+            t.value(
+                    "β1",
+                    Q.number(r.beta1()),
+                    "f'c ≤ " + (code.inchPound() ? "4000 psi" : "28 MPa") + ", Table 22.2.2.4.3");
         } else if (m.fc() >= code.beta1FcHigh()) {
-            t.value("β1", Q.number(r.beta1()), "f'c ≥ " + (code.inchPound() ? "8000 psi" : "55 MPa")
-                    + ", Table 22.2.2.4.3");
+            t.value(
+                    "β1",
+                    Q.number(r.beta1()),
+                    "f'c ≥ " + (code.inchPound() ? "8000 psi" : "55 MPa") + ", Table 22.2.2.4.3");
         } else {
-            t.step("β1", code.inchPound() ? "0.85 − 0.05 (f'c − 4000)/1000" : "0.85 − 0.05 (f'c − 28)/7",
+            t.step(
+                    "β1",
+                    code.inchPound() ? "0.85 − 0.05 (f'c − 4000)/1000" : "0.85 − 0.05 (f'c − 28)/7",
                     code.inchPound() ? "0.85 − 0.05 ({} − 4000)/1000" : "0.85 − 0.05 ({} − 28)/7",
-                    Q.number(r.beta1()), Q.stress(m.fc()));
+                    Q.number(r.beta1()),
+                    Q.stress(m.fc()));
         }
         t.step("εty", "fy / Es", "{} / {}", Q.strain(r.epsTy()), Q.stress(m.fy()), Q.stress(code.es()));
         Flange f = s.shape().flange();
@@ -105,13 +127,27 @@ public final class Flexure {
             BarLayer bl = l.layer();
             String name = bl.face().word() + " " + bl.count() + " " + bl.bar().label();
             t.step("d (" + name + ")", null, null, Q.length(l.d()));
-            t.step("εs", "0.003 (d − c)/c  (+ tension)", "0.003 × ({} − {}) / {}", Q.strain(l.strain()),
-                    Q.length(l.d()), Q.length(r.c()), Q.length(r.c()));
+            t.step(
+                    "εs",
+                    "0.003 (d − c)/c  (+ tension)",
+                    "0.003 × ({} − {}) / {}",
+                    Q.strain(l.strain()),
+                    Q.length(l.d()),
+                    Q.length(r.c()),
+                    Q.length(r.c()));
             if (l.yielded(m.fy())) {
-                t.step("fs", l.stress() > 0 ? "fy (yielded in tension)" : "−fy (yielded in compression)", null,
+                t.step(
+                        "fs",
+                        l.stress() > 0 ? "fy (yielded in tension)" : "−fy (yielded in compression)",
+                        null,
                         Q.stress(l.stress()));
             } else {
-                t.step("fs", "Es εs (elastic)", "{} × {}", Q.stress(l.stress()), Q.stress(code.es()),
+                t.step(
+                        "fs",
+                        "Es εs (elastic)",
+                        "{} × {}",
+                        Q.stress(l.stress()),
+                        Q.stress(code.es()),
                         Q.strain(l.strain()));
             }
             t.step("T", "As fs", "{} × {}", Q.force(l.force()), Q.area(bl.area()), Q.stress(l.stress()));
@@ -135,15 +171,31 @@ public final class Flexure {
             args[k++] = Q.length(r.concreteCentroid());
         }
         t.step("Mn", "Σ T (d − ȳc)", sub.toString(), Q.moment(r.mn()), args);
-        t.step("εt", "0.003 (dt − c)/c", "0.003 × ({} − {}) / {}", Q.strain(r.epsT()), Q.length(r.dt()),
-                Q.length(r.c()), Q.length(r.c()));
+        t.step(
+                "εt",
+                "0.003 (dt − c)/c",
+                "0.003 × ({} − {}) / {}",
+                Q.strain(r.epsT()),
+                Q.length(r.dt()),
+                Q.length(r.c()),
+                Q.length(r.c()));
         String cls = r.strainClass();
         if (cls.equals("transition")) {
-            t.step("φ", "0.65 + 0.25 (εt − εty)/0.003 (transition)", "0.65 + 0.25 × ({} − {}) / 0.003",
-                    Q.number(r.phi()), Q.strain(r.epsT()), Q.strain(r.epsTy()));
+            t.step(
+                    "φ",
+                    "0.65 + 0.25 (εt − εty)/0.003 (transition)",
+                    "0.65 + 0.25 × ({} − {}) / 0.003",
+                    Q.number(r.phi()),
+                    Q.strain(r.epsT()),
+                    Q.strain(r.epsTy()));
         } else {
-            t.step("φ", cls.equals("tension-controlled") ? "0.90 (εt ≥ εty + 0.003, tension-controlled)"
-                    : "0.65 (εt ≤ εty, compression-controlled)", null, Q.number(r.phi()));
+            t.step(
+                    "φ",
+                    cls.equals("tension-controlled")
+                            ? "0.90 (εt ≥ εty + 0.003, tension-controlled)"
+                            : "0.65 (εt ≤ εty, compression-controlled)",
+                    null,
+                    Q.number(r.phi()));
         }
         t.step("φMn", "φ × Mn", "{} × {}", Q.moment(r.phiMn()), Q.number(r.phi()), Q.moment(r.mn()));
     }

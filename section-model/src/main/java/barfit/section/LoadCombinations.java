@@ -2,8 +2,7 @@ package barfit.section;
 
 /** Factored line loads of the basic strength combinations of 5.3.1 for dead and live load alone. */
 public final class LoadCombinations {
-    private LoadCombinations() {
-    }
+    private LoadCombinations() {}
 
     /** 5.3.1a: U = 1.4 D. */
     public static final double DEAD_ALONE = 1.4;

@@ -8,10 +8,10 @@ package barfit.section;
 public final class MaterialLimits {
     /** λ of 19.2.4: 0.75 (all-lightweight concrete) to 1.0 (normal weight). */
     public static final double LAMBDA_MIN = 0.75;
+
     public static final double LAMBDA_MAX = 1.0;
 
-    private MaterialLimits() {
-    }
+    private MaterialLimits() {}
 
     /** The least specified compressive strength, Table 19.2.1.1: 17 MPa (ACI 318M-19), 2500 psi (ACI 318-19). */
     public static double fcMin(CodeEquations code) {

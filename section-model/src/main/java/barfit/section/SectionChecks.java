@@ -12,8 +12,7 @@ import java.util.List;
  * its ACI 318-19 clause; with a recording trail, each also writes its working.
  */
 public final class SectionChecks {
-    private SectionChecks() {
-    }
+    private SectionChecks() {}
 
     /**
      * Runs all checks that apply. {@code span} may be null (then the depth limit is skipped). A flange
@@ -35,7 +34,12 @@ public final class SectionChecks {
      * As above, with an office's stricter stirrup-legs rule checked too ({@code practice} null: the code's
      * rules only).
      */
-    public static CheckReport run(BeamSection s, Demand demand, Span span, Trail trail, boolean withMinimumDepth,
+    public static CheckReport run(
+            BeamSection s,
+            Demand demand,
+            Span span,
+            Trail trail,
+            boolean withMinimumDepth,
             StirrupRules.Practice practice) {
         requireSameSpan(s, span);
         List<CheckResult> out = new ArrayList<>();
@@ -71,21 +75,31 @@ public final class SectionChecks {
     private static void flexure(BeamSection s, Demand demand, FlexureResult fr, List<CheckResult> out, Trail t) {
         if (demand.mu() != null) {
             double mu = Math.abs(demand.mu());
-            out.add(CheckResult.atMost("flexure", "Flexural strength φMn ≥ Mu", "9.5.1.1, 22.2", Q.moment(mu),
-                    Q.moment(fr.phiMn()), fr.bending().word() + ", φ = " + round3(fr.phi()) + " (" + fr.strainClass()
-                            + ")"));
+            out.add(CheckResult.atMost(
+                    "flexure",
+                    "Flexural strength φMn ≥ Mu",
+                    "9.5.1.1, 22.2",
+                    Q.moment(mu),
+                    Q.moment(fr.phiMn()),
+                    fr.bending().word() + ", φ = " + round3(fr.phi()) + " (" + fr.strainClass() + ")"));
         }
-        out.add(CheckResult.atLeast("ductility", "Net tensile strain εt ≥ 0.004", "9.3.3.1", Q.strain(fr.epsT()),
-                Q.strain(CodeTables.EPS_T_MIN_BEAM), null));
+        out.add(CheckResult.atLeast(
+                "ductility",
+                "Net tensile strain εt ≥ 0.004",
+                "9.3.3.1",
+                Q.strain(fr.epsT()),
+                Q.strain(CodeTables.EPS_T_MIN_BEAM),
+                null));
     }
 
-    private static void minimumSteel(BeamSection s, Demand demand, Span span, FlexureResult fr,
-            List<CheckResult> out, Trail t) {
+    private static void minimumSteel(
+            BeamSection s, Demand demand, Span span, FlexureResult fr, List<CheckResult> out, Trail t) {
         Materials m = s.materials();
         CodeEquations code = s.code();
         double bw = minSteelWidth(s.shape(), fr.bending(), span);
         String bwNote = bw != s.shape().width()
-                ? "statically determinate with the flange in tension: bw taken as min(bf, 2 bw)" : null;
+                ? "statically determinate with the flange in tension: bw taken as min(bf, 2 bw)"
+                : null;
         double d = fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
         double asMin = asMin(s.shape(), fr.bending(), span, m, code, d);
         double as = fr.tensionSteelArea();
@@ -94,15 +108,23 @@ public final class SectionChecks {
             if (bwNote != null) {
                 t.note(bwNote + " (9.6.1.2).");
             }
-            t.step("As,min", "max(" + code.asMinRoot().shown() + " √f'c / fy, " + (code.inchPound() ? "200" : "1.4")
-                    + " / fy) bw d", "max(" + code.asMinRoot().shown() + " × √{} / {}, {} / {}) × {} × {}",
-                    Q.area(asMin), Q.stress(m.fc()), Q.stress(m.fy()), Q.stress(code.asMinFlat()), Q.stress(m.fy()),
-                    Q.length(bw), Q.length(d));
+            t.step(
+                    "As,min",
+                    "max(" + code.asMinRoot().shown() + " √f'c / fy, " + (code.inchPound() ? "200" : "1.4")
+                            + " / fy) bw d",
+                    "max(" + code.asMinRoot().shown() + " × √{} / {}, {} / {}) × {} × {}",
+                    Q.area(asMin),
+                    Q.stress(m.fc()),
+                    Q.stress(m.fy()),
+                    Q.stress(code.asMinFlat()),
+                    Q.stress(m.fy()),
+                    Q.length(bw),
+                    Q.length(d));
             t.value("As", Q.area(as), "tension-face bars provided");
         }
         if (as >= asMin || demand.mu() == null) {
-            out.add(CheckResult.atLeast("min_steel", "Minimum flexural steel As ≥ As,min", "9.6.1.2", Q.area(as),
-                    Q.area(asMin), bwNote));
+            out.add(CheckResult.atLeast(
+                    "min_steel", "Minimum flexural steel As ≥ As,min", "9.6.1.2", Q.area(as), Q.area(asMin), bwNote));
             return;
         }
         // 9.6.1.3: As,min need not apply where As provided is at least 4/3 of the As required by analysis
@@ -113,11 +135,21 @@ public final class SectionChecks {
             t.step("4/3 As,req", "9.6.1.3 alternative", "4/3 × {}", Q.area(alt), Q.area(asReq));
         }
         if (as >= alt) {
-            out.add(CheckResult.atLeast("min_steel", "Minimum flexural steel As ≥ 4/3 As,req", "9.6.1.3", Q.area(as),
-                    Q.area(alt), "As < As,min = " + Math.round(asMin) + " mm², but 9.6.1.3 is met"));
+            out.add(CheckResult.atLeast(
+                    "min_steel",
+                    "Minimum flexural steel As ≥ 4/3 As,req",
+                    "9.6.1.3",
+                    Q.area(as),
+                    Q.area(alt),
+                    "As < As,min = " + Math.round(asMin) + " mm², but 9.6.1.3 is met"));
         } else {
-            out.add(CheckResult.atLeast("min_steel", "Minimum flexural steel As ≥ As,min", "9.6.1.2, 9.6.1.3",
-                    Q.area(as), Q.area(asMin), "neither As,min nor 4/3 As,req (" + Math.round(alt) + " mm²) is met"));
+            out.add(CheckResult.atLeast(
+                    "min_steel",
+                    "Minimum flexural steel As ≥ As,min",
+                    "9.6.1.2, 9.6.1.3",
+                    Q.area(as),
+                    Q.area(asMin),
+                    "neither As,min nor 4/3 As,req (" + Math.round(alt) + " mm²) is met"));
         }
     }
 
@@ -125,14 +157,18 @@ public final class SectionChecks {
     static double minSteelWidth(SectionShape shape, Bending bending, Span span) {
         Flange f = shape.flange();
         boolean flangeInTension = f != null && bending == Bending.HOGGING;
-        if (flangeInTension && span != null && span.ends() != null && span.ends().determinate()) {
+        if (flangeInTension
+                && span != null
+                && span.ends() != null
+                && span.ends().determinate()) {
             return Math.min(f.width(), 2 * shape.width());
         }
         return shape.width();
     }
 
     /** As,min of 9.6.1.2: max(0.25 √f'c / fy, 1.4 / fy) bw d. */
-    public static double asMin(SectionShape shape, Bending bending, Span span, Materials m, CodeEquations code, double d) {
+    public static double asMin(
+            SectionShape shape, Bending bending, Span span, Materials m, CodeEquations code, double d) {
         double bw = minSteelWidth(shape, bending, span);
         return Math.max(code.asMinRoot().si() * Math.sqrt(m.fc()) / m.fy(), code.asMinFlat() / m.fy()) * bw * d;
     }
@@ -198,8 +234,14 @@ public final class SectionChecks {
         double bw = s.shape().width();
         if (t.isOn()) {
             t.heading("Bar spacing", "25.2.1, 25.2.2, 24.3.2");
-            t.step("b,inner", "bw − 2 (cover + ds)", "{} − 2 × ({} + {})", Q.length(BarSpacing.innerWidth(bw, det)),
-                    Q.length(bw), Q.length(det.cover()), Q.length(det.stirrupBar().diameter()));
+            t.step(
+                    "b,inner",
+                    "bw − 2 (cover + ds)",
+                    "{} − 2 × ({} + {})",
+                    Q.length(BarSpacing.innerWidth(bw, det)),
+                    Q.length(bw),
+                    Q.length(det.cover()),
+                    Q.length(det.stirrupBar().diameter()));
         }
         for (Face face : Face.values()) {
             List<BarLayer> layers = s.layersOn(face);
@@ -209,23 +251,40 @@ public final class SectionChecks {
                 double smin = BarSpacing.minClear(l.bar(), m, code);
                 double clear = BarSpacing.clear(bw, det, db, l.count());
                 String id = "spacing." + face.word() + "." + (i + 1);
-                String where = face.word() + " layer " + (i + 1) + " (" + l.count() + " " + l.bar().label() + ")";
+                String where = face.word() + " layer " + (i + 1) + " (" + l.count() + " "
+                        + l.bar().label() + ")";
                 if (t.isOn()) {
                     if (l.count() > 1) {
-                        t.step("s,clear " + where, "(b,inner − n db) / (n − 1)", "({} − {} × {}) / ({} − 1)",
-                                Q.length(clear), Q.length(BarSpacing.innerWidth(bw, det)), Q.count(l.count()),
-                                Q.length(db), Q.count(l.count()));
+                        t.step(
+                                "s,clear " + where,
+                                "(b,inner − n db) / (n − 1)",
+                                "({} − {} × {}) / ({} − 1)",
+                                Q.length(clear),
+                                Q.length(BarSpacing.innerWidth(bw, det)),
+                                Q.count(l.count()),
+                                Q.length(db),
+                                Q.count(l.count()));
                     }
-                    t.step("s,min", "max(" + (code.inchPound() ? "1 in" : "25 mm") + ", db, 4/3 dagg)",
-                            "max({}, {}, 4/3 × {})", Q.length(smin), Q.length(code.minClearSpacing()), Q.length(db),
+                    t.step(
+                            "s,min",
+                            "max(" + (code.inchPound() ? "1 in" : "25 mm") + ", db, 4/3 dagg)",
+                            "max({}, {}, 4/3 × {})",
+                            Q.length(smin),
+                            Q.length(code.minClearSpacing()),
+                            Q.length(db),
                             Q.length(m.aggregate()));
                 }
                 if (l.count() == 1) {
-                    out.add(CheckResult.atLeast(id, "Bar fits between stirrup legs, " + where, "25.2.1",
-                            Q.length(BarSpacing.innerWidth(bw, det)), Q.length(db), null));
+                    out.add(CheckResult.atLeast(
+                            id,
+                            "Bar fits between stirrup legs, " + where,
+                            "25.2.1",
+                            Q.length(BarSpacing.innerWidth(bw, det)),
+                            Q.length(db),
+                            null));
                 } else {
-                    out.add(CheckResult.atLeast(id, "Clear spacing in layer, " + where, "25.2.1", Q.length(clear),
-                            Q.length(smin), null));
+                    out.add(CheckResult.atLeast(
+                            id, "Clear spacing in layer, " + where, "25.2.1", Q.length(clear), Q.length(smin), null));
                 }
                 if (i > 0) {
                     out.add(layerGap(layers.get(i - 1), l, face, i, code, t));
@@ -242,18 +301,33 @@ public final class SectionChecks {
             double sc = BarSpacing.centreSpacing(bw, det, l.bar().diameter(), l.count());
             if (t.isOn()) {
                 t.step("fs", "2/3 fy  (24.3.2.1)", "2/3 × {}", Q.stress(fs), Q.stress(m.fy()));
-                t.step("cc", "cover + ds", "{} + {}", Q.length(cc), Q.length(det.cover()),
+                t.step(
+                        "cc",
+                        "cover + ds",
+                        "{} + {}",
+                        Q.length(cc),
+                        Q.length(det.cover()),
                         Q.length(det.stirrupBar().diameter()));
                 String a = code.inchPound() ? "15" : "380";
                 String b = code.inchPound() ? "12" : "300";
                 String ref = code.inchPound() ? "40000" : "280";
-                t.step("s,max", "min(" + a + " (" + ref + "/fs) − 2.5 cc, " + b + " (" + ref + "/fs))",
+                t.step(
+                        "s,max",
+                        "min(" + a + " (" + ref + "/fs) − 2.5 cc, " + b + " (" + ref + "/fs))",
                         "min(" + a + " × (" + ref + " / {}) − 2.5 × {}, " + b + " × (" + ref + " / {}))",
-                        Q.length(limit), Q.stress(fs), Q.length(cc), Q.stress(fs));
+                        Q.length(limit),
+                        Q.stress(fs),
+                        Q.length(cc),
+                        Q.stress(fs));
                 t.step("s", l.count() > 1 ? "(b,inner − db) / (n − 1)" : "bw (a single bar)", null, Q.length(sc));
             }
-            out.add(CheckResult.atMost("crack_control", "Crack control spacing, " + bending.tensionFace().word()
-                    + " layer 1", "24.3.2", Q.length(sc), Q.length(limit), null));
+            out.add(CheckResult.atMost(
+                    "crack_control",
+                    "Crack control spacing, " + bending.tensionFace().word() + " layer 1",
+                    "24.3.2",
+                    Q.length(sc),
+                    Q.length(limit),
+                    null));
         }
     }
 
@@ -262,14 +336,25 @@ public final class SectionChecks {
         double db = l.bar().diameter();
         double gap = l.fromFace() - prev.fromFace() - (db + prev.bar().diameter()) / 2;
         if (t.isOn()) {
-            t.step("clear between " + face.word() + " layers " + i + "–" + (i + 1), "Δy − (db1 + db2)/2",
-                    "{} − {} − ({} + {}) / 2", Q.length(gap), Q.length(l.fromFace()), Q.length(prev.fromFace()),
-                    Q.length(db), Q.length(prev.bar().diameter()));
+            t.step(
+                    "clear between " + face.word() + " layers " + i + "–" + (i + 1),
+                    "Δy − (db1 + db2)/2",
+                    "{} − {} − ({} + {}) / 2",
+                    Q.length(gap),
+                    Q.length(l.fromFace()),
+                    Q.length(prev.fromFace()),
+                    Q.length(db),
+                    Q.length(prev.bar().diameter()));
         }
-        return CheckResult.atLeast("layer_gap." + face.word() + "." + i + "-" + (i + 1),
-                "Clear distance between " + face.word() + " layers " + i + " and " + (i + 1), "25.2.2",
-                Q.length(gap), Q.length(code.minLayerGap()), l.count() > prev.count()
-                        ? "upper layer has more bars than the one below; they cannot all sit directly above" : null);
+        return CheckResult.atLeast(
+                "layer_gap." + face.word() + "." + i + "-" + (i + 1),
+                "Clear distance between " + face.word() + " layers " + i + " and " + (i + 1),
+                "25.2.2",
+                Q.length(gap),
+                Q.length(code.minLayerGap()),
+                l.count() > prev.count()
+                        ? "upper layer has more bars than the one below; they cannot all sit directly above"
+                        : null);
     }
 
     /** The 25.2.2 checks alone, for every face with more than one layer. */
@@ -302,8 +387,9 @@ public final class SectionChecks {
                 }
                 // No. 19 (#6) and larger need the larger cover, measured to those bars
                 boolean large = largest >= 19.0;
-                if (large && det.cover() + det.stirrupBar().diameter() - code.coverWeatherLarge()
-                        < det.cover() - code.coverInterior()) {
+                if (large
+                        && det.cover() + det.stirrupBar().diameter() - code.coverWeatherLarge()
+                                < det.cover() - code.coverInterior()) {
                     required = code.coverWeatherLarge();
                     provided = det.cover() + det.stirrupBar().diameter();
                     note = "exposed to weather: cover to the No. 19 and larger main bars";
@@ -322,23 +408,33 @@ public final class SectionChecks {
             t.value("cover", Q.length(provided), note);
             t.value("cover,min", Q.length(required), "Table 20.5.1.3.1");
         }
-        out.add(CheckResult.atLeast("cover", "Specified concrete cover", "Table 20.5.1.3.1", Q.length(provided),
-                Q.length(required), note));
+        out.add(CheckResult.atLeast(
+                "cover", "Specified concrete cover", "Table 20.5.1.3.1", Q.length(provided), Q.length(required), note));
     }
 
     private static void skin(BeamSection s, List<CheckResult> out, Trail t) {
         CodeEquations code = s.code();
         double h = s.shape().height();
         if (h <= code.skinDepthLimit()) {
-            out.add(CheckResult.atMost("skin", "Skin reinforcement not required (h ≤ "
-                    + (code.inchPound() ? "36 in" : "900 mm") + ")", "9.7.2.3", Q.length(h),
-                    Q.length(code.skinDepthLimit()), null));
+            out.add(CheckResult.atMost(
+                    "skin",
+                    "Skin reinforcement not required (h ≤ " + (code.inchPound() ? "36 in" : "900 mm") + ")",
+                    "9.7.2.3",
+                    Q.length(h),
+                    Q.length(code.skinDepthLimit()),
+                    null));
             return;
         }
         SkinBars skin = s.skin();
         if (skin == null) {
-            out.add(CheckResult.rule("skin", "Skin reinforcement required (h > " + (code.inchPound() ? "36 in" : "900 mm")
-                    + ")", "9.7.2.3", false, Q.length(h), Q.length(code.skinDepthLimit()), "<=",
+            out.add(CheckResult.rule(
+                    "skin",
+                    "Skin reinforcement required (h > " + (code.inchPound() ? "36 in" : "900 mm") + ")",
+                    "9.7.2.3",
+                    false,
+                    Q.length(h),
+                    Q.length(code.skinDepthLimit()),
+                    "<=",
                     "give skin: {bar, spacing} along both side faces over h/2 from the tension face"));
             return;
         }
@@ -349,8 +445,13 @@ public final class SectionChecks {
             t.value("s,skin", Q.length(skin.spacing()), skin.bar().label() + " each side face");
             t.value("s,max", Q.length(limit), "24.3.2 with cc to the skin bars");
         }
-        out.add(CheckResult.atMost("skin", "Skin reinforcement spacing", "9.7.2.3, 24.3.2", Q.length(skin.spacing()),
-                Q.length(limit), skin.bar().label() + " on both side faces over h/2 from the tension face"));
+        out.add(CheckResult.atMost(
+                "skin",
+                "Skin reinforcement spacing",
+                "9.7.2.3, 24.3.2",
+                Q.length(skin.spacing()),
+                Q.length(limit),
+                skin.bar().label() + " on both side faces over h/2 from the tension face"));
     }
 
     /**
@@ -377,14 +478,15 @@ public final class SectionChecks {
             terms.add("{} / " + (f.oneSided() ? "12" : "8"));
             args.add(Q.length(f.clearSpan()));
         }
-        String overhang = (f.oneSided() ? "6 hf" : "8 hf") + (f.webGapKnown() ? ", sw/2" : "")
+        String overhang = (f.oneSided() ? "6 hf" : "8 hf")
+                + (f.webGapKnown() ? ", sw/2" : "")
                 + (f.spanKnown() ? (f.oneSided() ? ", ln/12" : ", ln/8") : "");
         String formula = "bw + " + (f.oneSided() ? "" : "2 ") + "min(" + overhang + ")";
         String sub = "{} + " + (f.oneSided() ? "" : "2 × ") + "min(" + String.join(", ", terms) + ")";
         List<String> notes = new ArrayList<>();
         if (f.reduced()) {
-            notes.add("flange given " + length(f.given(), code) + ", taken at its effective width " + length(f.width(), code)
-                    + " (Table 6.3.2.1)");
+            notes.add("flange given " + length(f.given(), code) + ", taken at its effective width "
+                    + length(f.width(), code) + " (Table 6.3.2.1)");
         }
         if (!f.webGapKnown()) {
             notes.add("sw/2 limit not checked (give the flange's clear_to_next_web)");
@@ -400,7 +502,12 @@ public final class SectionChecks {
             t.heading("Effective flange width", "6.3.2.1");
             t.step("bf,max", formula, sub, Q.length(limit), args.toArray(new Q[0]));
             if (f.reduced()) {
-                t.step("bf", "min(bf,given, bf,max)", "min({}, {})", Q.length(f.width()), Q.length(f.given()),
+                t.step(
+                        "bf",
+                        "min(bf,given, bf,max)",
+                        "min({}, {})",
+                        Q.length(f.width()),
+                        Q.length(f.given()),
                         Q.length(limit));
                 t.note("The flange given is wider than Table 6.3.2.1 allows: it is taken at its effective width in "
                         + "every calculation of this section (strength, minimum steel, stiffness).");
@@ -422,13 +529,22 @@ public final class SectionChecks {
                         + "bars be provided in the outer portions of the flange. barfit places the tension bars in "
                         + "the web only: distribute them and add the slab bars by hand.");
                 if (f.spanKnown()) {
-                    t.step("b,distribute", "min(bf, ln/10)", "min({}, {} / 10)", Q.length(f.tensionBarsWidth()),
-                            Q.length(f.width()), Q.length(f.clearSpan()));
+                    t.step(
+                            "b,distribute",
+                            "min(bf, ln/10)",
+                            "min({}, {} / 10)",
+                            Q.length(f.tensionBarsWidth()),
+                            Q.length(f.width()),
+                            Q.length(f.clearSpan()));
                 }
             }
         }
-        out.add(CheckResult.atMost("flange_width", f.reduced() ? "Flange taken at its effective width"
-                : "Effective flange width", "Table 6.3.2.1", Q.length(f.width()), Q.length(limit),
+        out.add(CheckResult.atMost(
+                "flange_width",
+                f.reduced() ? "Flange taken at its effective width" : "Effective flange width",
+                "Table 6.3.2.1",
+                Q.length(f.width()),
+                Q.length(limit),
                 String.join("; ", notes)));
     }
 
@@ -438,7 +554,8 @@ public final class SectionChecks {
      */
     public static String tensionFlangeNote(Flange f, CodeEquations code) {
         return "24.3.4 asks part of the tension bars to be spread over "
-                + (f.spanKnown() ? "min(bf, ln/10) = " + length(f.tensionBarsWidth(), code)
+                + (f.spanKnown()
+                        ? "min(bf, ln/10) = " + length(f.tensionBarsWidth(), code)
                         : "the effective width, at most ln/10")
                 + (f.outerFlangeBars() ? ", with more bars in the outer flange" : "") + " (not placed by barfit)";
     }
@@ -460,8 +577,8 @@ public final class SectionChecks {
             return;
         }
         if (!f.spanKnown() || Math.abs(f.clearSpan() - span.length()) > 1e-6) {
-            throw new IllegalArgumentException("the flange's clear span (" + f.clearSpan() + " mm) is not the span checked ("
-                    + span.length() + " mm); build the flange with the beam's span");
+            throw new IllegalArgumentException("the flange's clear span (" + f.clearSpan()
+                    + " mm) is not the span checked (" + span.length() + " mm); build the flange with the beam's span");
         }
     }
 
@@ -481,8 +598,16 @@ public final class SectionChecks {
         shearChecks(s, sh, out);
         List<CheckResult> named = new ArrayList<>();
         for (CheckResult c : out) {
-            named.add(new CheckResult(c.id() + "." + zone, c.title() + " (" + zone + " zone)", c.clause(), c.demand(),
-                    c.sense(), c.limit(), c.ratio(), c.pass(), c.note()));
+            named.add(new CheckResult(
+                    c.id() + "." + zone,
+                    c.title() + " (" + zone + " zone)",
+                    c.clause(),
+                    c.demand(),
+                    c.sense(),
+                    c.limit(),
+                    c.ratio(),
+                    c.pass(),
+                    c.note()));
         }
         return named;
     }
@@ -530,7 +655,10 @@ public final class SectionChecks {
             return new ShearVerdict(true, true, false, false, false);
         }
         ShearResult sh = Shear.analyse(s, 0, d, tensionArea, Trail.off());
-        return new ShearVerdict(true, true, CheckResult.reaches(sh.av(), sh.avMin()),
+        return new ShearVerdict(
+                true,
+                true,
+                CheckResult.reaches(sh.av(), sh.avMin()),
                 CheckResult.within(st.spacing(), sh.sMaxAlong()),
                 CheckResult.within(Shear.legSpacing(s), sh.sMaxAcross()));
     }
@@ -564,28 +692,64 @@ public final class SectionChecks {
 
     private static void shearChecks(BeamSection s, ShearResult sh, List<CheckResult> out) {
         Stirrups st = s.stirrups();
-        out.add(CheckResult.atMost("shear_section", "Section size for shear Vu ≤ φ(Vc + Vs,max)", "22.5.1.2",
-                Q.force(sh.vu()), Q.force(sh.vnLimit()), null));
-        out.add(CheckResult.atMost("shear_strength", "Shear strength φVn ≥ Vu", "9.5.1.1, 22.5", Q.force(sh.vu()),
-                Q.force(sh.phiVn()), "Vc from Table 22.5.5.1 row " + sh.vcRow()));
+        out.add(CheckResult.atMost(
+                "shear_section",
+                "Section size for shear Vu ≤ φ(Vc + Vs,max)",
+                "22.5.1.2",
+                Q.force(sh.vu()),
+                Q.force(sh.vnLimit()),
+                null));
+        out.add(CheckResult.atMost(
+                "shear_strength",
+                "Shear strength φVn ≥ Vu",
+                "9.5.1.1, 22.5",
+                Q.force(sh.vu()),
+                Q.force(sh.phiVn()),
+                "Vc from Table 22.5.5.1 row " + sh.vcRow()));
         boolean needMin = sh.vu() > sh.minShearTrigger();
         if (st == null) {
-            out.add(CheckResult.rule("shear_min", needMin ? "Stirrups required (Vu > φ 0.083 λ √f'c bw d)"
-                    : "Stirrups not required by 9.6.3.1", "9.6.3.1", !needMin, Q.force(sh.vu()),
-                    Q.force(sh.minShearTrigger()), "<=", needMin ? "give stirrups: {bar, legs, spacing}" : null));
+            out.add(CheckResult.rule(
+                    "shear_min",
+                    needMin ? "Stirrups required (Vu > φ 0.083 λ √f'c bw d)" : "Stirrups not required by 9.6.3.1",
+                    "9.6.3.1",
+                    !needMin,
+                    Q.force(sh.vu()),
+                    Q.force(sh.minShearTrigger()),
+                    "<=",
+                    needMin ? "give stirrups: {bar, legs, spacing}" : null));
             return;
         }
-        out.add(needMin
-                ? CheckResult.atLeast("shear_min", "Minimum shear reinforcement Av ≥ Av,min", "9.6.3.1, 9.6.3.4",
-                        Q.area(sh.av()), Q.area(sh.avMin()), null)
-                : CheckResult.atLeast("shear_min", "Minimum shear reinforcement (not required, Vu ≤ φ 0.083 λ √f'c bw d)",
-                        "9.6.3.1", Q.force(sh.minShearTrigger()), Q.force(sh.vu()), "provided stirrups exceed the need"));
-        out.add(CheckResult.atMost("stirrup_spacing", "Stirrup spacing along the beam", "9.7.6.2.2",
-                Q.length(st.spacing()), Q.length(sh.sMaxAlong()), sh.highShear() ? "required Vs > " + s.code().vsSplit().shown() + " √f'c bw d: halved limits"
-                        : null));
+        out.add(
+                needMin
+                        ? CheckResult.atLeast(
+                                "shear_min",
+                                "Minimum shear reinforcement Av ≥ Av,min",
+                                "9.6.3.1, 9.6.3.4",
+                                Q.area(sh.av()),
+                                Q.area(sh.avMin()),
+                                null)
+                        : CheckResult.atLeast(
+                                "shear_min",
+                                "Minimum shear reinforcement (not required, Vu ≤ φ 0.083 λ √f'c bw d)",
+                                "9.6.3.1",
+                                Q.force(sh.minShearTrigger()),
+                                Q.force(sh.vu()),
+                                "provided stirrups exceed the need"));
+        out.add(CheckResult.atMost(
+                "stirrup_spacing",
+                "Stirrup spacing along the beam",
+                "9.7.6.2.2",
+                Q.length(st.spacing()),
+                Q.length(sh.sMaxAlong()),
+                sh.highShear() ? "required Vs > " + s.code().vsSplit().shown() + " √f'c bw d: halved limits" : null));
         double across = Shear.legSpacing(s);
-        out.add(CheckResult.atMost("stirrup_legs", "Stirrup leg spacing across the width", "9.7.6.2.2",
-                Q.length(across), Q.length(sh.sMaxAcross()), st.legs() + " legs"));
+        out.add(CheckResult.atMost(
+                "stirrup_legs",
+                "Stirrup leg spacing across the width",
+                "9.7.6.2.2",
+                Q.length(across),
+                Q.length(sh.sMaxAcross()),
+                st.legs() + " legs"));
     }
 
     private static void minimumDepth(BeamSection s, Span span, List<CheckResult> out, Trail t) {
@@ -596,17 +760,25 @@ public final class SectionChecks {
             t.heading("Minimum depth", "Table 9.3.1.1");
             String div = fmtDivisor(span.ends().minDepthDivisor());
             String lw = s.materials().lambda() < 1 ? " × 1.218" : "";
-            t.step("h,min", "ℓ / " + div + " × (0.4 + fy / " + (code.inchPound() ? "100000" : "700") + ")" + lw,
-                    "{} / " + div + " × (0.4 + {} / " + (code.inchPound() ? "100000" : "700") + ")" + lw, Q.length(hmin),
-                    Q.length(span.length()), Q.stress(fy));
+            t.step(
+                    "h,min",
+                    "ℓ / " + div + " × (0.4 + fy / " + (code.inchPound() ? "100000" : "700") + ")" + lw,
+                    "{} / " + div + " × (0.4 + {} / " + (code.inchPound() ? "100000" : "700") + ")" + lw,
+                    Q.length(hmin),
+                    Q.length(span.length()),
+                    Q.stress(fy));
             if (s.materials().lambda() < 1) {
                 t.note("Lightweight concrete (λ < 1): 9.3.1.1.2's factor at wc = 1440 kg/m³, the largest.");
             }
         }
         double h = s.shape().height();
-        out.add(CheckResult.atLeast("min_depth", "Minimum depth (" + span.ends().words() + ")", "Table 9.3.1.1",
-                Q.length(h), Q.length(hmin), h < hmin
-                        ? "below Table 9.3.1.1: deflections must be calculated (9.3.2, 24.2)" : null));
+        out.add(CheckResult.atLeast(
+                "min_depth",
+                "Minimum depth (" + span.ends().words() + ")",
+                "Table 9.3.1.1",
+                Q.length(h),
+                Q.length(hmin),
+                h < hmin ? "below Table 9.3.1.1: deflections must be calculated (9.3.2, 24.2)" : null));
     }
 
     private static String fmtDivisor(double d) {

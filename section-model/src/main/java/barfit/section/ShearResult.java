@@ -7,7 +7,21 @@ package barfit.section;
  * 22.5.1.2); {@code vsStirrups} is Av fyt d / s of the stirrups, which may exceed it; {@code phiVn} is
  * φ (Vc + vs), what the section can really carry.
  */
-public record ShearResult(double vu, double bw, double d, double rhoW, double lambdaS, double vc, String vcRow,
-        double vs, double vsStirrups, double phiVn, double vnLimit, double avMin, double av, double minShearTrigger,
-        double sMaxAlong, double sMaxAcross, boolean highShear) {
-}
+public record ShearResult(
+        double vu,
+        double bw,
+        double d,
+        double rhoW,
+        double lambdaS,
+        double vc,
+        String vcRow,
+        double vs,
+        double vsStirrups,
+        double phiVn,
+        double vnLimit,
+        double avMin,
+        double av,
+        double minShearTrigger,
+        double sMaxAlong,
+        double sMaxAcross,
+        boolean highShear) {}

@@ -5,8 +5,8 @@ package barfit.section;
  * minimum reinforcement, 9.7.6.2.2 spacing along and across), decided once and shared by the check
  * report and by the search.
  */
-public record ShearVerdict(boolean sectionOk, boolean strengthOk, boolean minimumOk, boolean spacingOk,
-        boolean legsOk) {
+public record ShearVerdict(
+        boolean sectionOk, boolean strengthOk, boolean minimumOk, boolean spacingOk, boolean legsOk) {
 
     public boolean all() {
         return sectionOk && strengthOk && minimumOk && spacingOk && legsOk;

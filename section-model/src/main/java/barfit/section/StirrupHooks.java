@@ -19,10 +19,10 @@ public final class StirrupHooks {
     private static final double NO_36 = 36.0;
     /** Least straight extension of a 135-degree hook, mm: 75 mm (ACI 318M-19), 3 in (ACI 318-19). */
     private static final double MIN_135_SI = 75.0;
+
     private static final double MIN_135_INCH_POUND = 3 * CodeEquations.MM_PER_IN;
 
-    private StirrupHooks() {
-    }
+    private StirrupHooks() {}
 
     private static boolean upTo(BarSize bar, double limit) {
         return bar.diameter() <= limit + 1e-6;
@@ -54,8 +54,8 @@ public final class StirrupHooks {
     /** Straight extension of a 90-degree hook, mm: 6 db to No. 16, 12 db for No. 19 to No. 25 (Table 25.3.2). */
     public static double extension90(BarSize bar) {
         if (!upTo(bar, NO_25)) {
-            throw new IllegalArgumentException("Table 25.3.2 gives no 90-degree stirrup hook for " + bar.designation()
-                    + " (larger than No. 25)");
+            throw new IllegalArgumentException(
+                    "Table 25.3.2 gives no 90-degree stirrup hook for " + bar.designation() + " (larger than No. 25)");
         }
         return (upTo(bar, NO_16) ? 6 : 12) * bar.diameter();
     }

@@ -16,8 +16,7 @@ import java.util.List;
  * hook round one bar at the top and one at the bottom, so it laterally supports L bars of each face.
  */
 public final class StirrupRules {
-    private StirrupRules() {
-    }
+    private StirrupRules() {}
 
     /** An office's stricter legs rule: two legs hold at most {@code barsPerTwoLegs} bars of a layer. */
     public record Practice(int barsPerTwoLegs) {
@@ -137,8 +136,14 @@ public final class StirrupRules {
      * same place with every bar that is there (the bars the legs can hold); {@code suffix} names a stirrup
      * zone ("" for a single section).
      */
-    public static List<CheckResult> checks(BeamSection s, BeamSection physical, Bending bending, Double mu,
-            Practice practice, String suffix, Trail t) {
+    public static List<CheckResult> checks(
+            BeamSection s,
+            BeamSection physical,
+            Bending bending,
+            Double mu,
+            Practice practice,
+            String suffix,
+            Trail t) {
         List<CheckResult> out = new ArrayList<>();
         Stirrups st = s.stirrups();
         if (st == null) {
@@ -147,16 +152,24 @@ public final class StirrupRules {
         String zone = suffix.isEmpty() ? "" : " (" + suffix + " zone)";
         String id = suffix.isEmpty() ? "" : "." + suffix;
         int held = legsHeld(physical);
-        out.add(CheckResult.atMost("stirrup_legs_held" + id, "Stirrup legs held by bars at both faces" + zone,
-                "25.7.1.2, 25.7.1.3", Q.count(st.legs()), Q.count(held),
+        out.add(CheckResult.atMost(
+                "stirrup_legs_held" + id,
+                "Stirrup legs held by bars at both faces" + zone,
+                "25.7.1.2, 25.7.1.3",
+                Q.count(st.legs()),
+                Q.count(held),
                 "each leg's bend holds a bar of the outer layer of each face"));
         if (practice != null) {
             int busiest = 0;
             for (BarLayer l : physical.layers()) {
                 busiest = Math.max(busiest, l.count());
             }
-            out.add(CheckResult.atLeast("stirrup_legs_bars" + id, "Stirrup legs for the bars per layer" + zone,
-                    "office practice", Q.count(st.legs()), Q.count(practice.legsFor(busiest)),
+            out.add(CheckResult.atLeast(
+                    "stirrup_legs_bars" + id,
+                    "Stirrup legs for the bars per layer" + zone,
+                    "office practice",
+                    Q.count(st.legs()),
+                    Q.count(practice.legsFor(busiest)),
                     "two legs hold up to " + practice.barsPerTwoLegs() + " bars a layer"));
         }
         TieDemand td = ties(s, bending, mu);
@@ -167,27 +180,48 @@ public final class StirrupRules {
                 t.note("Compression steel relied on for " + td.reason() + " (without it the section fails): 9.7.6.4 "
                         + "asks for ties round it.");
                 BarLayer outer = s.layersOn(bending.compressionFace()).get(0);
-                t.step("s,max ties", "min(16 db, 48 dtie, least dimension)  (9.7.6.4.3)", "min(16 × {}, 48 × {}, {})",
-                        Q.length(td.maxSpacing()), Q.length(outer.bar().diameter()),
+                t.step(
+                        "s,max ties",
+                        "min(16 db, 48 dtie, least dimension)  (9.7.6.4.3)",
+                        "min(16 × {}, 48 × {}, {})",
+                        Q.length(td.maxSpacing()),
+                        Q.length(outer.bar().diameter()),
                         Q.length(s.detailing().stirrupBar().diameter()),
                         Q.length(Math.min(s.shape().width(), s.shape().height())));
-                t.value("bars held", Q.count(td.minLegs()), "every corner and alternate bar, none farther than "
-                        + (s.code().inchPound() ? "6 in" : "150 mm") + " clear from a held bar (25.7.2.3)");
+                t.value(
+                        "bars held",
+                        Q.count(td.minLegs()),
+                        "every corner and alternate bar, none farther than "
+                                + (s.code().inchPound() ? "6 in" : "150 mm") + " clear from a held bar (25.7.2.3)");
             } else {
                 t.note("Compression steel not relied on: 9.7.6.4's ties are not required.");
             }
         }
         if (td.required()) {
             String why = "compression steel relied on for " + td.reason();
-            out.add(CheckResult.atMost("compression_ties" + id, "Tie spacing round compression steel" + zone,
-                    "9.7.6.4.3", Q.length(st.spacing()), Q.length(td.maxSpacing()), why));
-            out.add(CheckResult.atLeast("compression_ties_legs" + id, "Compression bars held by ties" + zone,
-                    "25.7.2.3", Q.count(Math.min(st.legs(), held)), Q.count(td.minLegs()),
+            out.add(CheckResult.atMost(
+                    "compression_ties" + id,
+                    "Tie spacing round compression steel" + zone,
+                    "9.7.6.4.3",
+                    Q.length(st.spacing()),
+                    Q.length(td.maxSpacing()),
+                    why));
+            out.add(CheckResult.atLeast(
+                    "compression_ties_legs" + id,
+                    "Compression bars held by ties" + zone,
+                    "25.7.2.3",
+                    Q.count(Math.min(st.legs(), held)),
+                    Q.count(td.minLegs()),
                     "every corner and alternate bar, none farther than "
                             + (s.code().inchPound() ? "6 in" : "150 mm") + " clear from a held bar"));
-            out.add(CheckResult.atLeast("compression_ties_size" + id, "Tie bar size round compression steel" + zone,
-                    "25.7.2.2", Q.length(s.detailing().stirrupBar().diameter()), Q.length(td.minTieDiameter()),
-                    s.code().inchPound() ? "#3 up to #10 bars, #4 for #11 and larger"
+            out.add(CheckResult.atLeast(
+                    "compression_ties_size" + id,
+                    "Tie bar size round compression steel" + zone,
+                    "25.7.2.2",
+                    Q.length(s.detailing().stirrupBar().diameter()),
+                    Q.length(td.minTieDiameter()),
+                    s.code().inchPound()
+                            ? "#3 up to #10 bars, #4 for #11 and larger"
                             : "No. 10 up to No. 32 bars, No. 13 for No. 36 and larger"));
         }
         return out;

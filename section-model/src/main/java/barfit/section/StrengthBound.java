@@ -17,12 +17,18 @@ package barfit.section;
  * deeper one in tension) are outside it: StrengthBoundTest found a three-layer face reaching 0.2 % more.
  */
 public final class StrengthBound {
-    private StrengthBound() {
-    }
+    private StrengthBound() {}
 
     /** The largest Mn any layout with tension-face area {@code as} could reach. */
-    public static double maxMn(double as, double dMax, double compressionArea, double dPrimeMin, double dPrimeMax,
-            double widest, double fc, double fy) {
+    public static double maxMn(
+            double as,
+            double dMax,
+            double compressionArea,
+            double dPrimeMin,
+            double dPrimeMax,
+            double widest,
+            double fc,
+            double fy) {
         double k = CodeTables.BLOCK_STRESS * fc * widest;
         double t = as * fy;
         // (i) compression bars in compression: choose their force to minimise the compression moment
@@ -50,8 +56,15 @@ public final class StrengthBound {
      * The least tension-face area for which φ x {@link #maxMn} reaches Mu, φ at most 0.90 (Table 21.2.2);
      * infinite if no area up to the {@link #ceiling} does.
      */
-    public static double minTensionArea(double mu, double dMax, double compressionArea, double dPrimeMin,
-            double dPrimeMax, double widest, double fc, double fy) {
+    public static double minTensionArea(
+            double mu,
+            double dMax,
+            double compressionArea,
+            double dPrimeMin,
+            double dPrimeMax,
+            double widest,
+            double fc,
+            double fy) {
         double ceiling = ceiling(dMax, compressionArea, widest, fc, fy);
         double target = Math.abs(mu) / CodeTables.PHI_TENSION_CONTROLLED;
         if (maxMn(ceiling, dMax, compressionArea, dPrimeMin, dPrimeMax, widest, fc, fy) < target) {

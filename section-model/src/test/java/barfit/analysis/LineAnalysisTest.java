@@ -44,12 +44,18 @@ class LineAnalysisTest {
     }
 
     private static double envelopeMinAt(LineResult r, double x) {
-        return r.stations().stream().filter(s -> Math.abs(s.x() - x) < 1e-6).mapToDouble(LineResult.StationValues::mMin)
-                .min().orElseThrow();
+        return r.stations().stream()
+                .filter(s -> Math.abs(s.x() - x) < 1e-6)
+                .mapToDouble(LineResult.StationValues::mMin)
+                .min()
+                .orElseThrow();
     }
 
     private static double spanMax(LineResult r, int span) {
-        return r.stations().stream().filter(s -> s.segment() == span).mapToDouble(LineResult.StationValues::mMax).max()
+        return r.stations().stream()
+                .filter(s -> s.segment() == span)
+                .mapToDouble(LineResult.StationValues::mMax)
+                .max()
                 .orElseThrow();
     }
 
@@ -98,15 +104,33 @@ class LineAnalysisTest {
     void singleSpansInClosedForm() {
         double wl2 = W * L * L;
         // fixed at both ends: -wL²/12 at the ends, +wL²/24 at mid-span (statics and compatibility)
-        Line ff = new Line("F", List.of(L), 0, 0, List.of(fixed(), fixed()), List.of(Load.uniform(1, 0, L, W, 0)), EI,
-                25000, 500, null);
+        Line ff = new Line(
+                "F",
+                List.of(L),
+                0,
+                0,
+                List.of(fixed(), fixed()),
+                List.of(Load.uniform(1, 0, L, W, 0)),
+                EI,
+                25000,
+                500,
+                null);
         LineResult r = LineAnalysis.analyse(ff);
         assertEquals(-wl2 / 12 * 1.4, envelopeMinAt(r, 0), 1e-6 * wl2);
         assertEquals(wl2 / 24 * 1.4, spanMax(r, 1), 1e-6 * wl2);
         // propped cantilever (fixed left, knife edge right): -wL²/8 at the fixed end, 9wL²/128 at 5L/8
         // from it, reactions 5wL/8 and 3wL/8
-        Line pc = new Line("P", List.of(L), 0, 0, List.of(fixed(), knife()), List.of(Load.uniform(1, 0, L, W, 0)), EI,
-                25000, 500, null);
+        Line pc = new Line(
+                "P",
+                List.of(L),
+                0,
+                0,
+                List.of(fixed(), knife()),
+                List.of(Load.uniform(1, 0, L, W, 0)),
+                EI,
+                25000,
+                500,
+                null);
         LineResult p = LineAnalysis.analyse(pc);
         assertEquals(-wl2 / 8 * 1.4, envelopeMinAt(p, 0), 1e-6 * wl2);
         assertEquals(9 * wl2 / 128 * 1.4, spanMax(p, 1), 1e-4 * wl2);
@@ -114,18 +138,45 @@ class LineAnalysisTest {
         assertEquals(3 * W * L / 8 * 1.4, p.reactions().get(1).max(), 1e-6 * W * L);
         // point load at mid-span: simply supported PL/4; both ends fixed -PL/8 at the ends and +PL/8 mid-span
         double pl = 100e3;
-        Line ss = new Line("S", List.of(L), 0, 0, List.of(knife(), knife()), List.of(Load.point(1, L / 2, pl, 0)), EI,
-                25000, 500, null);
+        Line ss = new Line(
+                "S",
+                List.of(L),
+                0,
+                0,
+                List.of(knife(), knife()),
+                List.of(Load.point(1, L / 2, pl, 0)),
+                EI,
+                25000,
+                500,
+                null);
         assertEquals(pl * L / 4 * 1.4, spanMax(LineAnalysis.analyse(ss), 1), 1e-6 * pl * L);
-        Line fp = new Line("FP", List.of(L), 0, 0, List.of(fixed(), fixed()), List.of(Load.point(1, L / 2, pl, 0)), EI,
-                25000, 500, null);
+        Line fp = new Line(
+                "FP",
+                List.of(L),
+                0,
+                0,
+                List.of(fixed(), fixed()),
+                List.of(Load.point(1, L / 2, pl, 0)),
+                EI,
+                25000,
+                500,
+                null);
         LineResult fr = LineAnalysis.analyse(fp);
         assertEquals(-pl * L / 8 * 1.4, envelopeMinAt(fr, 0), 1e-6 * pl * L);
         assertEquals(pl * L / 8 * 1.4, spanMax(fr, 1), 1e-6 * pl * L);
         // an overhang of 2 m with 20 N/mm: -w a²/2 at the support (statics)
         double a = 2000;
-        Line oh = new Line("O", List.of(L), 0, a, List.of(knife(), knife()), List.of(Load.uniform(2, 0, a, W, 0)), EI,
-                25000, 500, null);
+        Line oh = new Line(
+                "O",
+                List.of(L),
+                0,
+                a,
+                List.of(knife(), knife()),
+                List.of(Load.uniform(2, 0, a, W, 0)),
+                EI,
+                25000,
+                500,
+                null);
         LineResult o = LineAnalysis.analyse(oh);
         assertEquals(-W * a * a / 2 * 1.4, envelopeMinAt(o, L), 1e-6 * W * a * a);
         assertEquals(-W * a * a / 2 * 1.4, o.overhangs().get(0).mFace(), 1e-6 * W * a * a);
@@ -147,8 +198,8 @@ class LineAnalysisTest {
                 double load = 0;
                 for (int i = 0; i < co.coef().length; i++) {
                     for (Load l : cases.get(i).loads()) {
-                        load += co.coef()[i] * (l.point() ? l.dead() + l.live()
-                                : (l.dead() + l.live()) * (l.to() - l.from()));
+                        load += co.coef()[i]
+                                * (l.point() ? l.dead() + l.live() : (l.dead() + l.live()) * (l.to() - l.from()));
                     }
                 }
                 double sum = 0;
@@ -203,7 +254,8 @@ class LineAnalysisTest {
                 loads.add(Load.uniform(i, 0, spans.get(i - 1), w[i], 0));
             }
             Line line = new Line("R", spans, 0, 0, sup, loads, EI, 25000, 500, null);
-            LineAnalysis.EndMoments e = LineAnalysis.solve(line, LineAnalysis.cases(line).get(0).loads());
+            LineAnalysis.EndMoments e =
+                    LineAnalysis.solve(line, LineAnalysis.cases(line).get(0).loads());
             double[] m = threeMoment(spans, w);
             for (int j = 1; j < n; j++) {
                 assertEquals(m[j], e.right()[j], 1e-6 * Math.abs(m[j]), "support " + j + " of line " + t);
@@ -257,8 +309,8 @@ class LineAnalysisTest {
         // 6.6.5: 10 % off the negative moment at the interior support of two equal spans; by equilibrium the
         // span moment at every x rises by 0.10 x |M_B| x / L
         Line base = equalSpans(2, W, 0);
-        Line red = new Line("T", base.spans(), 0, 0, base.supports(), base.loads(), EI, 25000, 500,
-                List.of(0.0, 10.0, 0.0));
+        Line red = new Line(
+                "T", base.spans(), 0, 0, base.supports(), base.loads(), EI, 25000, 500, List.of(0.0, 10.0, 0.0));
         LineResult a = LineAnalysis.analyse(base);
         LineResult b = LineAnalysis.analyse(red);
         assertEquals(0.9 * envelopeMinAt(a, L), envelopeMinAt(b, L), 1e-6 * W * L * L);
@@ -269,13 +321,23 @@ class LineAnalysisTest {
     void columnsTakeMomentAtAnEndSupport() {
         // an end span built into a column gets a negative moment at that end, and less than a fixed end's
         Column col = new Column(400, 400, 3500);
-        Line line = new Line("C", List.of(L), 0, 0, List.of(new Support(400, SupportKind.COLUMN, col, col), knife()),
-                List.of(Load.uniform(1, 0, L, W, 0)), EI, 25000, 500, null);
+        Line line = new Line(
+                "C",
+                List.of(L),
+                0,
+                0,
+                List.of(new Support(400, SupportKind.COLUMN, col, col), knife()),
+                List.of(Load.uniform(1, 0, L, W, 0)),
+                EI,
+                25000,
+                500,
+                null);
         LineResult r = LineAnalysis.analyse(line);
         double atFace = r.spans().get(0).mLeftFace();
         assertTrue(atFace < 0 && atFace > -W * L * L / 8 * 1.4, "end moment " + atFace);
-        assertThrows(IllegalArgumentException.class, () -> new Line("X", List.of(), 0, 0, List.of(knife()), List.of(),
-                EI, 25000, 500, null));
+        assertThrows(
+                IllegalArgumentException.class,
+                () -> new Line("X", List.of(), 0, 0, List.of(knife()), List.of(), EI, 25000, 500, null));
     }
 
     static Line randomLine(Random rnd, boolean withColumns) {
@@ -286,12 +348,13 @@ class LineAnalysisTest {
         for (int j = 0; j <= n; j++) {
             int kind = rnd.nextInt(withColumns ? 4 : 2);
             Column c = new Column(300 + 50 * rnd.nextInt(4), 300 + 50 * rnd.nextInt(4), 3000 + 500 * rnd.nextInt(3));
-            sup.add(switch (kind) {
-                case 0 -> knife();
-                case 1 -> new Support(200, SupportKind.WALL, null, null);
-                case 2 -> new Support(c.h(), SupportKind.COLUMN, c, rnd.nextBoolean() ? c : null);
-                default -> fixed();
-            });
+            sup.add(
+                    switch (kind) {
+                        case 0 -> knife();
+                        case 1 -> new Support(200, SupportKind.WALL, null, null);
+                        case 2 -> new Support(c.h(), SupportKind.COLUMN, c, rnd.nextBoolean() ? c : null);
+                        default -> fixed();
+                    });
         }
         double ol = rnd.nextInt(3) == 0 ? 1000 + 500 * rnd.nextInt(3) : 0;
         double or = rnd.nextInt(3) == 0 ? 1000 + 500 * rnd.nextInt(3) : 0;
@@ -350,14 +413,29 @@ class LineAnalysisTest {
         String[] what = {"end span +", "interior span +", "first interior support −", "exterior column −"};
         for (int i = 0; i < pairs.length; i++) {
             double ratio = pairs[i][0] / pairs[i][1];
-            System.out.printf(java.util.Locale.ROOT, "6.5 against the analysis, %s: %.1f / %.1f kN·m = %.2f%n",
-                    what[i], pairs[i][0] / 1e6, pairs[i][1] / 1e6, ratio);
+            System.out.printf(
+                    java.util.Locale.ROOT,
+                    "6.5 against the analysis, %s: %.1f / %.1f kN·m = %.2f%n",
+                    what[i],
+                    pairs[i][0] / 1e6,
+                    pairs[i][1] / 1e6,
+                    ratio);
             assertTrue(ratio > 0.65 && ratio < 1.5, what[i] + ": " + ratio);
         }
         // a line that does not meet 6.5.1 is refused with the condition
-        Line unequal = new Line("U", List.of(L, 1.5 * L), 0, 0, sup.subList(0, 3),
-                List.of(Load.uniform(1, 0, L, 20, 10), Load.uniform(2, 0, 1.5 * L, 20, 10)), 8e13, 25000, 500, null);
-        Coefficients.NotApplicable e = assertThrows(Coefficients.NotApplicable.class, () -> Coefficients.analyse(unequal));
+        Line unequal = new Line(
+                "U",
+                List.of(L, 1.5 * L),
+                0,
+                0,
+                sup.subList(0, 3),
+                List.of(Load.uniform(1, 0, L, 20, 10), Load.uniform(2, 0, 1.5 * L, 20, 10)),
+                8e13,
+                25000,
+                500,
+                null);
+        Coefficients.NotApplicable e =
+                assertThrows(Coefficients.NotApplicable.class, () -> Coefficients.analyse(unequal));
         assertTrue(e.getMessage().startsWith("6.5.1(e)"), e.getMessage());
     }
 }

@@ -27,8 +27,13 @@ class CrackedSectionTest {
         //     = 885.61e6 + 1365.24e6 + 657.43e6 = 2908.29e6 mm⁴
         // (the layers lumped at their centroid d = 520 give the same kd but Icr = 2895.98e6 mm⁴: short by
         // n Σ As,i (di − d)² = 8.0418 × (1530 × 20² + 1020 × 30²) = 12.30e6 mm⁴)
-        BeamSection s = Sections.section(SectionShape.rectangular(300, 600), M, DET, CodeEquations.SI,
-                Sections.bottomAtDepth(Sections.si("25"), 3, 600, 540), Sections.bottomAtDepth(Sections.si("25"), 2, 600, 490));
+        BeamSection s = Sections.section(
+                SectionShape.rectangular(300, 600),
+                M,
+                DET,
+                CodeEquations.SI,
+                Sections.bottomAtDepth(Sections.si("25"), 3, 600, 540),
+                Sections.bottomAtDepth(Sections.si("25"), 2, 600, 490));
         Deflection.Stiffness st = SpanChecks.stiffnessOf(s, Bending.SAGGING);
         assertEquals(8.0418, st.n(), 1e-4);
         assertEquals(206.89, st.kd(), 0.01);
@@ -43,8 +48,13 @@ class CrackedSectionTest {
         //   1800 kd² / 2 = n [398 (540 − kd) + 568 (60 − kd)]  ->  kd = 43.05 mm (< hf and < d')
         // Icr = 1800 kd³ / 3 + n [398 (540 − kd)² + 568 (kd − 60)²] = 47.87e6 + 790.43e6 + 1.31e6 = 839.61e6 mm⁴
         SectionShape tee = new SectionShape(300, 600, new Flange(1800, 120, false));
-        BeamSection s = Sections.section(tee, M, DET, CodeEquations.SI,
-                Sections.bottomAtDepth(Sections.si("16"), 2, 600, 540), Sections.topAt(Sections.si("19"), 2, 60));
+        BeamSection s = Sections.section(
+                tee,
+                M,
+                DET,
+                CodeEquations.SI,
+                Sections.bottomAtDepth(Sections.si("16"), 2, 600, 540),
+                Sections.topAt(Sections.si("19"), 2, 60));
         Deflection.Stiffness st = SpanChecks.stiffnessOf(s, Bending.SAGGING);
         assertEquals(43.05, st.kd(), 0.01);
         assertEquals(839.61e6, st.icr(), 0.01e6);
@@ -65,19 +75,22 @@ class CrackedSectionTest {
         for (int k = 0; k < 2000; k++) {
             double h = 350 + 50 * r.nextInt(14);
             double b = 200 + 50 * r.nextInt(8);
-            Flange f = r.nextInt(3) == 0 ? new Flange(b + 100 * (1 + r.nextInt(20)), 80 + 10 * r.nextInt(10), false) : null;
+            Flange f = r.nextInt(3) == 0
+                    ? new Flange(b + 100 * (1 + r.nextInt(20)), 80 + 10 * r.nextInt(10), false)
+                    : null;
             SectionShape shape = new SectionShape(b, h, f);
             List<BarLayer> layers = new ArrayList<>();
             int nb = 1 + r.nextInt(4);
             for (int i = 0; i < nb; i++) {
-                layers.add(new BarLayer(Face.BOTTOM, Sections.si(pick(r)), 2 + r.nextInt(5), 60 + 55 * i + r.nextInt(10)));
+                layers.add(
+                        new BarLayer(Face.BOTTOM, Sections.si(pick(r)), 2 + r.nextInt(5), 60 + 55 * i + r.nextInt(10)));
             }
             int nt = r.nextInt(4);
             for (int i = 0; i < nt; i++) {
                 layers.add(new BarLayer(Face.TOP, Sections.si(pick(r)), 2 + r.nextInt(4), 60 + 55 * i + r.nextInt(10)));
             }
-            BeamSection s = new BeamSection(shape, Sections.materials(20 + 5 * r.nextInt(8), 420), DET, layers, null,
-                    null, CodeEquations.SI);
+            BeamSection s = new BeamSection(
+                    shape, Sections.materials(20 + 5 * r.nextInt(8), 420), DET, layers, null, null, CodeEquations.SI);
             for (Bending bending : Bending.values()) {
                 double icr = SpanChecks.stiffnessOf(s, bending).icr();
                 double lumped = lumped(s, bending).icr();
@@ -107,7 +120,11 @@ class CrackedSectionTest {
                 area.add(a);
             }
         }
-        return Deflection.stiffness(s.shape(), bending, s.materials(), s.code(),
+        return Deflection.stiffness(
+                s.shape(),
+                bending,
+                s.materials(),
+                s.code(),
                 depth.stream().mapToDouble(Double::doubleValue).toArray(),
                 area.stream().mapToDouble(Double::doubleValue).toArray());
     }

@@ -21,11 +21,22 @@ class DeflectionTrailTest {
     /** A 300 × 500 mm simple span of 8 m, 3 No. 25 at d = 440 mm, below Table 9.3.1.1's l/16 = 500 mm. */
     private static SpanChecks.Result simple(Trail t) {
         double h = 450;
-        BeamSection s = Sections.section(SectionShape.rectangular(300, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI,
+        BeamSection s = Sections.section(
+                SectionShape.rectangular(300, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
                 Sections.bottomAtDepth(Sections.si("25"), 3, h, 390));
-        return SpanChecks.run(8000, EndCondition.SIMPLE, new SpanChecks.Sections(null, s, null), null, 250 * KNM, null,
-                new SpanChecks.ServiceLoads(15, 10, 0), SpanChecks.Limits.DEFAULT, t);
+        return SpanChecks.run(
+                8000,
+                EndCondition.SIMPLE,
+                new SpanChecks.Sections(null, s, null),
+                null,
+                250 * KNM,
+                null,
+                new SpanChecks.ServiceLoads(15, 10, 0),
+                SpanChecks.Limits.DEFAULT,
+                t);
     }
 
     @Test
@@ -56,11 +67,23 @@ class DeflectionTrailTest {
         assertEquals(r.immediate()[2] - r.immediate()[0], r.liveDeflection(), 1e-9, "Δ(L) = Δ(D + L) − Δ(D)");
         assertEquals(2.0, r.lambdaDelta(), 1e-12, "no compression steel: λΔ = 2.0 / (1 + 0) (24.2.4.1)");
 
-        Map<String, Trail.Step> steps = t.entries().stream().filter(e -> e instanceof Trail.Step)
-                .map(e -> (Trail.Step) e).collect(Collectors.toMap(Trail.Step::symbol, x -> x, (a, b) -> a));
-        for (String sym : List.of("Ig (mid-span)", "Icr (mid-span)", "Mcr (mid-span)", "Ma (mid-span, D)",
-                "Ma (mid-span, D + sustained L)", "Ma (mid-span, D + L)", "Ie (mid-span, D)", "Ie (mid-span, D + L)",
-                "Ie (span, D + L)", "Δ(D)", "Δ(D + sustained L)", "Δ(D + L)")) {
+        Map<String, Trail.Step> steps = t.entries().stream()
+                .filter(e -> e instanceof Trail.Step)
+                .map(e -> (Trail.Step) e)
+                .collect(Collectors.toMap(Trail.Step::symbol, x -> x, (a, b) -> a));
+        for (String sym : List.of(
+                "Ig (mid-span)",
+                "Icr (mid-span)",
+                "Mcr (mid-span)",
+                "Ma (mid-span, D)",
+                "Ma (mid-span, D + sustained L)",
+                "Ma (mid-span, D + L)",
+                "Ie (mid-span, D)",
+                "Ie (mid-span, D + L)",
+                "Ie (span, D + L)",
+                "Δ(D)",
+                "Δ(D + sustained L)",
+                "Δ(D + L)")) {
             assertTrue(steps.containsKey(sym), "the trail gives " + sym + ": " + steps.keySet());
         }
         assertEquals(mid.ie()[2], steps.get("Ie (mid-span, D + L)").result().value(), 1e-6);
@@ -71,21 +94,39 @@ class DeflectionTrailTest {
     @Test
     void aContinuousSpanAveragesItsSections() {
         double h = 400;
-        BeamSection mid = Sections.section(SectionShape.rectangular(300, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI,
+        BeamSection mid = Sections.section(
+                SectionShape.rectangular(300, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
                 Sections.bottomAtDepth(Sections.si("25"), 3, h, 340));
-        BeamSection support = Sections.section(SectionShape.rectangular(300, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI, Sections.topAt(Sections.si("25"), 4, 60));
-        SpanChecks.Result r = SpanChecks.run(9000, EndCondition.BOTH_ENDS_CONTINUOUS,
-                new SpanChecks.Sections(support, mid, support), -200 * KNM, 150 * KNM, -200 * KNM,
-                new SpanChecks.ServiceLoads(15, 8, 0.5), SpanChecks.Limits.DEFAULT, Trail.off());
+        BeamSection support = Sections.section(
+                SectionShape.rectangular(300, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
+                Sections.topAt(Sections.si("25"), 4, 60));
+        SpanChecks.Result r = SpanChecks.run(
+                9000,
+                EndCondition.BOTH_ENDS_CONTINUOUS,
+                new SpanChecks.Sections(support, mid, support),
+                -200 * KNM,
+                150 * KNM,
+                -200 * KNM,
+                new SpanChecks.ServiceLoads(15, 8, 0.5),
+                SpanChecks.Limits.DEFAULT,
+                Trail.off());
         assertNotNull(r.liveDeflection(), "h = 400 mm < l/21 = 429 mm (Table 9.3.1.1)");
-        assertEquals(List.of("left support", "mid-span", "right support"),
+        assertEquals(
+                List.of("left support", "mid-span", "right support"),
                 r.sections().stream().map(SpanChecks.SectionStiffness::at).toList());
         for (int i = 0; i < 3; i++) {
             // 24.2.3.6: the average of the mid-span Ie and the mean of the two support Ie
-            double expect = 0.5 * (r.sections().get(1).ie()[i] + 0.5 * (r.sections().get(0).ie()[i]
-                    + r.sections().get(2).ie()[i]));
+            double expect = 0.5
+                    * (r.sections().get(1).ie()[i]
+                            + 0.5
+                                    * (r.sections().get(0).ie()[i]
+                                            + r.sections().get(2).ie()[i]));
             assertEquals(expect, r.ieSpan()[i], 1e-3);
         }
     }
@@ -93,31 +134,76 @@ class DeflectionTrailTest {
     @Test
     void analysedServiceMomentsTakeThePlaceOfScaledOnes() {
         double h = 400;
-        BeamSection mid = Sections.section(SectionShape.rectangular(300, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI,
+        BeamSection mid = Sections.section(
+                SectionShape.rectangular(300, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
                 Sections.bottomAtDepth(Sections.si("25"), 3, h, 340));
-        BeamSection support = Sections.section(SectionShape.rectangular(300, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI, Sections.topAt(Sections.si("25"), 4, 60));
+        BeamSection support = Sections.section(
+                SectionShape.rectangular(300, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
+                Sections.topAt(Sections.si("25"), 4, 60));
         SpanChecks.Sections ss = new SpanChecks.Sections(support, mid, support);
         SpanChecks.ServiceLoads loads = new SpanChecks.ServiceLoads(15, 8, 0.5);
-        SpanChecks.Result scaled = SpanChecks.run(9000, EndCondition.BOTH_ENDS_CONTINUOUS, ss, -200 * KNM, 150 * KNM,
-                -200 * KNM, loads, SpanChecks.Limits.DEFAULT, Trail.off());
+        SpanChecks.Result scaled = SpanChecks.run(
+                9000,
+                EndCondition.BOTH_ENDS_CONTINUOUS,
+                ss,
+                -200 * KNM,
+                150 * KNM,
+                -200 * KNM,
+                loads,
+                SpanChecks.Limits.DEFAULT,
+                Trail.off());
         // the same moments given as an analysis would: D alone and D + L, in the same proportion as the loads
         // (wu = 1.2 x 15 + 1.6 x 8 = 30.8 N/mm, load combination 5.3.1b)
         double dead = 15 / 30.8;
         double total = 23 / 30.8;
-        SpanChecks.ServiceMoments given = SpanChecks.ServiceMoments.analysed(-200 * KNM * dead, 150 * KNM * dead,
-                -200 * KNM * dead, -200 * KNM * total, 150 * KNM * total, -200 * KNM * total, 0.5);
-        SpanChecks.Result analysed = SpanChecks.run(9000, EndCondition.BOTH_ENDS_CONTINUOUS, ss, -200 * KNM,
-                150 * KNM, -200 * KNM, loads, given, SpanChecks.Limits.DEFAULT, Trail.off());
+        SpanChecks.ServiceMoments given = SpanChecks.ServiceMoments.analysed(
+                -200 * KNM * dead,
+                150 * KNM * dead,
+                -200 * KNM * dead,
+                -200 * KNM * total,
+                150 * KNM * total,
+                -200 * KNM * total,
+                0.5);
+        SpanChecks.Result analysed = SpanChecks.run(
+                9000,
+                EndCondition.BOTH_ENDS_CONTINUOUS,
+                ss,
+                -200 * KNM,
+                150 * KNM,
+                -200 * KNM,
+                loads,
+                given,
+                SpanChecks.Limits.DEFAULT,
+                Trail.off());
         assertEquals(scaled.liveDeflection(), analysed.liveDeflection(), 1e-9);
         assertEquals(scaled.longTermDeflection(), analysed.longTermDeflection(), 1e-9);
         // smaller support moments at the same mid-span moment (an arrangement with the next span unloaded)
         // leave more of the span's sagging unrelieved: Δ = 5 l² (Mm − 0.1 (Ma + Mb)) / (48 Ec Ie), 24.2
-        SpanChecks.ServiceMoments lighter = SpanChecks.ServiceMoments.analysed(-200 * KNM * dead, 150 * KNM * dead,
-                -200 * KNM * dead, -150 * KNM * total, 150 * KNM * total, -150 * KNM * total, 0.5);
-        SpanChecks.Result more = SpanChecks.run(9000, EndCondition.BOTH_ENDS_CONTINUOUS, ss, -200 * KNM, 150 * KNM,
-                -200 * KNM, loads, lighter, SpanChecks.Limits.DEFAULT, Trail.recording());
+        SpanChecks.ServiceMoments lighter = SpanChecks.ServiceMoments.analysed(
+                -200 * KNM * dead,
+                150 * KNM * dead,
+                -200 * KNM * dead,
+                -150 * KNM * total,
+                150 * KNM * total,
+                -150 * KNM * total,
+                0.5);
+        SpanChecks.Result more = SpanChecks.run(
+                9000,
+                EndCondition.BOTH_ENDS_CONTINUOUS,
+                ss,
+                -200 * KNM,
+                150 * KNM,
+                -200 * KNM,
+                loads,
+                lighter,
+                SpanChecks.Limits.DEFAULT,
+                Trail.recording());
         assertTrue(more.liveDeflection() > scaled.liveDeflection());
     }
 }

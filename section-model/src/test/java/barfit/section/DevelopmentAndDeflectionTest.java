@@ -67,8 +67,13 @@ class DevelopmentAndDeflectionTest {
         // The book rounds n to 9 (Icr = 4067 in⁴); ACI 318-19 n = Es/Ec = 29,000/3122 = 9.29, and the hand
         // evaluation gives kd = 6.861 in and Icr = 12(6.861)³/3 + 9.29(3)(17 - 6.861)² = 4157 in⁴.
         Materials m = usMaterials(3000, 1.0);
-        var s = Deflection.stiffness(SectionShape.rectangular(12 * IN, 20 * IN), Bending.SAGGING, m, US,
-                new double[] {17 * IN}, new double[] {3.00 * IN2});
+        var s = Deflection.stiffness(
+                SectionShape.rectangular(12 * IN, 20 * IN),
+                Bending.SAGGING,
+                m,
+                US,
+                new double[] {17 * IN},
+                new double[] {3.00 * IN2});
         double in4 = Math.pow(IN, 4);
         assertEquals(8000, s.ig() / in4, 1e-6);
         assertEquals(10, s.yt() / IN, 1e-9);
@@ -95,18 +100,25 @@ class DevelopmentAndDeflectionTest {
         double mc = 10 * 2000.0 * 2000.0 / 2;
         assertEquals(0.4, Deflection.spanDeflection(EndCondition.CANTILEVER, 2000, 25_000, 2e9, mc, 0, 0), 1e-9);
     }
+
     @Test
     void rhoPrimeTakesTheCompressionFaceWidth() {
         // ACI 318-19 24.2.4.1.1 with Chapter 2's notation (b = width of the compression face): under sagging
         // a top flange is the compression face, so rho' = As' / (bf d); under hogging the web's width.
         BarSize bar = Sections.si("25");
         SectionShape tee = new SectionShape(300, 500, new Flange(1200, 120, false));
-        BeamSection s = Sections.section(tee, Sections.materials(28, 420), Sections.detailing(40, Sections.si("10")),
-                CodeEquations.SI, Sections.bottomAtDepth(bar, 4, 500, 440), Sections.topAt(bar, 2, 60));
+        BeamSection s = Sections.section(
+                tee,
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
+                Sections.bottomAtDepth(bar, 4, 500, 440),
+                Sections.topAt(bar, 2, 60));
         double as = bar.area();
         assertEquals(2 * as / (1200 * 440), SpanChecks.rhoPrime(s, Bending.SAGGING), 1e-12);
         assertEquals(4 * as / (300 * (500 - 60)), SpanChecks.rhoPrime(s, Bending.HOGGING), 1e-12);
     }
+
     @Test
     void lightweightConcreteRaisesMinimumDepthAndLowersEc() {
         // ACI 318-19 9.3.1.1.2: factor max(1.65 - 0.0003 wc, 1.09); at wc = 1440 kg/m3 it is 1.218.

@@ -19,8 +19,11 @@ class EffectiveFlangeTest {
     private static final Span SPAN = new Span(6000, EndCondition.SIMPLE);
 
     private static BeamSection tee(Flange f) {
-        return Sections.section(new SectionShape(300, H, f), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI,
+        return Sections.section(
+                new SectionShape(300, H, f),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
                 Sections.bottomAtDepth(Sections.si("29"), 4, H, D));
     }
 
@@ -39,17 +42,20 @@ class EffectiveFlangeTest {
 
         Trail trail = Trail.recording();
         CheckReport wide = SectionChecks.run(tee(given), new Demand(300e6, null), SPAN, trail);
-        CheckReport exact = SectionChecks.run(tee(Flange.given(1800, 120, false, null, 6000.0)), new Demand(300e6, null),
-                SPAN, Trail.off());
+        CheckReport exact = SectionChecks.run(
+                tee(Flange.given(1800, 120, false, null, 6000.0)), new Demand(300e6, null), SPAN, Trail.off());
         CheckResult fw = wide.check("flange_width").orElseThrow();
         assertTrue(fw.pass(), "a wider flange no longer fails the beam");
         assertEquals(1800, fw.demand().value(), 1e-9);
         assertEquals(1800, fw.limit().value(), 1e-9);
-        assertTrue(fw.note().contains("flange given 2400 mm, taken at its effective width 1800 mm (Table 6.3.2.1)"),
+        assertTrue(
+                fw.note().contains("flange given 2400 mm, taken at its effective width 1800 mm (Table 6.3.2.1)"),
                 fw.note());
         assertTrue(fw.note().contains("sw/2 limit not checked"), fw.note());
-        assertTrue(trail.entries().stream().anyMatch(e -> e instanceof Trail.Note n
-                && n.text().contains("taken at its effective width")), "the trail says so too");
+        assertTrue(
+                trail.entries().stream()
+                        .anyMatch(e -> e instanceof Trail.Note n && n.text().contains("taken at its effective width")),
+                "the trail says so too");
         // flexure with the flange at 1800 mm equals a section given 1800 mm directly
         assertEquals(exact.flexure().phiMn(), wide.flexure().phiMn(), 1e-6);
         assertEquals(exact.flexure().c(), wide.flexure().c(), 1e-9);
@@ -71,8 +77,8 @@ class EffectiveFlangeTest {
         assertTrue(fw.pass());
         assertEquals(1300, fw.demand().value(), 1e-9);
         assertFalse(fw.note().contains("sw/2 limit not checked"), fw.note());
-        CheckReport exact = SectionChecks.run(tee(new Flange(1300, 120, false)), new Demand(300e6, null), null,
-                Trail.off());
+        CheckReport exact =
+                SectionChecks.run(tee(new Flange(1300, 120, false)), new Demand(300e6, null), null, Trail.off());
         assertEquals(exact.flexure().phiMn(), r.flexure().phiMn(), 1e-6);
     }
 
@@ -84,7 +90,10 @@ class EffectiveFlangeTest {
         assertEquals(600, Flange.given(1500, 120, true, 600.0, 6000.0).limit(300), 1e-9);
         // without a span only the slab limit applies: 300 + 6 × 120 = 1020 mm
         assertEquals(1020, new Flange(1500, 120, true).limit(300), 1e-9);
-        assertEquals(1020, new SectionShape(300, H, new Flange(1500, 120, true)).flange().width(), 1e-9);
+        assertEquals(
+                1020,
+                new SectionShape(300, H, new Flange(1500, 120, true)).flange().width(),
+                1e-9);
     }
 
     @Test
@@ -96,7 +105,12 @@ class EffectiveFlangeTest {
         // the limit follows the web: the same flange on a narrower web may be cut, on a wider one not
         Flange f = Flange.given(1800, 120, false, null, 6000.0);
         assertEquals(1750, new SectionShape(250, H, f).flange().width(), 1e-9);
-        assertEquals(1800, new SectionShape(350, H, new SectionShape(250, H, f).flange()).flange().width(), 1e-9,
+        assertEquals(
+                1800,
+                new SectionShape(350, H, new SectionShape(250, H, f).flange())
+                        .flange()
+                        .width(),
+                1e-9,
                 "the given width is kept, so a shape built from another's flange limits it afresh");
     }
 
@@ -111,9 +125,13 @@ class EffectiveFlangeTest {
         assertEquals(b.ig(), a.ig(), 1e-3);
         assertEquals(b.icr(), a.icr(), 1e-3);
         // ρ' of 24.2.4.1 with b the compression face's (effective) width: 2 No. 19 / (1800 × 440)
-        BeamSection withTop = Sections.section(new SectionShape(300, H, wide), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI,
-                Sections.bottomAtDepth(Sections.si("29"), 4, H, D), Sections.topAt(Sections.si("19"), 2, 60));
+        BeamSection withTop = Sections.section(
+                new SectionShape(300, H, wide),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
+                Sections.bottomAtDepth(Sections.si("29"), 4, H, D),
+                Sections.topAt(Sections.si("19"), 2, 60));
         assertEquals(2 * 284 / (1800.0 * D), SpanChecks.rhoPrime(withTop, Bending.SAGGING), 1e-12);
         // 9.6.1.2, statically determinate with the flange in tension: bw taken as min(bf, 2 bw). An L flange
         // given 1500 on a 400 web, hf = 100, sw = 300, ln = 6000 has the effective width
@@ -128,16 +146,25 @@ class EffectiveFlangeTest {
         // 24.3.4: part of the tension bars over min(effective width, ln/10); ln/10 = 600 < 1800, so bars are
         // also wanted in the outer flange
         Flange f = Flange.given(2400, 120, false, null, 6000.0);
-        BeamSection s = Sections.section(new SectionShape(300, H, f), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI, Sections.topAt(Sections.si("25"), 4, 60),
+        BeamSection s = Sections.section(
+                new SectionShape(300, H, f),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
+                Sections.topAt(Sections.si("25"), 4, 60),
                 Sections.bottomAtDepth(Sections.si("19"), 2, H, D));
         Trail t = Trail.recording();
-        CheckReport r = SectionChecks.run(s, new Demand(-150e6, null), new Span(6000, EndCondition.BOTH_ENDS_CONTINUOUS), t);
+        CheckReport r =
+                SectionChecks.run(s, new Demand(-150e6, null), new Span(6000, EndCondition.BOTH_ENDS_CONTINUOUS), t);
         CheckResult fw = r.check("flange_width").orElseThrow();
         assertTrue(fw.pass());
-        assertTrue(fw.note().contains("24.3.4") && fw.note().contains("min(bf, ln/10) = 600 mm")
-                && fw.note().contains("outer flange"), fw.note());
-        assertTrue(t.entries().stream().anyMatch(e -> e instanceof Trail.Heading h && h.clause().equals("24.3.4")));
+        assertTrue(
+                fw.note().contains("24.3.4")
+                        && fw.note().contains("min(bf, ln/10) = 600 mm")
+                        && fw.note().contains("outer flange"),
+                fw.note());
+        assertTrue(t.entries().stream()
+                .anyMatch(e -> e instanceof Trail.Heading h && h.clause().equals("24.3.4")));
         // in sagging the flange is in compression: no such note
         CheckReport sag = SectionChecks.run(tee(f), new Demand(100e6, null), SPAN, Trail.off());
         assertFalse(sag.check("flange_width").orElseThrow().note().contains("24.3.4"));
@@ -147,7 +174,7 @@ class EffectiveFlangeTest {
     void theFlangeSpanMustBeTheSpanChecked() {
         // the flange's own ln sets its width, so a different span given to the checks is a caller's bug
         BeamSection s = tee(Flange.given(1800, 120, false, null, 5000.0));
-        assertThrows(IllegalArgumentException.class,
-                () -> SectionChecks.run(s, new Demand(100e6, null), SPAN, Trail.off()));
+        assertThrows(
+                IllegalArgumentException.class, () -> SectionChecks.run(s, new Demand(100e6, null), SPAN, Trail.off()));
     }
 }

@@ -15,12 +15,15 @@ import org.junit.jupiter.api.Test;
  */
 class FibreCrossCheckTest {
     private static final BarSize[] BARS = {
-        Sections.si("10"), Sections.si("16"), Sections.si("19"), Sections.si("25"), Sections.si("29"),
+        Sections.si("10"),
+        Sections.si("16"),
+        Sections.si("19"),
+        Sections.si("25"),
+        Sections.si("29"),
         Sections.bar("No. 36", 35.8, 1006)
     };
 
-    record Case(BeamSection section, Bending bending) {
-    }
+    record Case(BeamSection section, Bending bending) {}
 
     static Case random(Random rnd) {
         double b = 200 + 50 * rnd.nextInt(9);
@@ -87,8 +90,9 @@ class FibreCrossCheckTest {
             db[i] = l.bar().diameter();
         }
         Materials m = s.materials();
-        return new FibreSection(profile, d, as, db, m.fc(), m.fy(), s.code().es(),
-                CodeTables.beta1(m.fc(), s.code()), 3000).solve();
+        return new FibreSection(
+                        profile, d, as, db, m.fc(), m.fy(), s.code().es(), CodeTables.beta1(m.fc(), s.code()), 3000)
+                .solve();
     }
 
     @Test
@@ -100,12 +104,15 @@ class FibreCrossCheckTest {
             Case k = random(rnd);
             FlexureResult r = Flexure.analyse(k.section(), k.bending());
             FibreSection fib = fibre(k.section(), k.bending());
-            double phiFib = CodeTables.phiFlexure(fib.epsT, k.section().materials().fy() / k.section().code().es());
+            double phiFib = CodeTables.phiFlexure(
+                    fib.epsT, k.section().materials().fy() / k.section().code().es());
             double phiMnFib = phiFib * fib.mn;
             double rel = Math.abs(r.phiMn() - phiMnFib) / Math.abs(phiMnFib);
             worst = Math.max(worst, rel);
-            assertTrue(rel < 1e-3, "case " + i + ": closed form " + r.phiMn() + " vs fibre " + phiMnFib + " ("
-                    + k.section() + ", " + k.bending() + ")");
+            assertTrue(
+                    rel < 1e-3,
+                    "case " + i + ": closed form " + r.phiMn() + " vs fibre " + phiMnFib + " (" + k.section() + ", "
+                            + k.bending() + ")");
             assertEquals(fib.c, r.c(), 2e-3 * fib.c + 0.05, "neutral axis, case " + i);
         }
         assertTrue(worst < 1e-3);

@@ -25,8 +25,16 @@ final class FibreSection {
      * @param profile widths as pairs {x from the compression face, width} starting at x = 0 with the
      *                last pair {h, 0}
      */
-    FibreSection(double[][] profile, double[] d, double[] as, double[] db, double fc, double fy, double es,
-            double beta1, int fibresPerPart) {
+    FibreSection(
+            double[][] profile,
+            double[] d,
+            double[] as,
+            double[] db,
+            double fc,
+            double fy,
+            double es,
+            double beta1,
+            int fibresPerPart) {
         int parts = profile.length - 1;
         top = new double[parts * fibresPerPart + 1];
         width = new double[parts * fibresPerPart];

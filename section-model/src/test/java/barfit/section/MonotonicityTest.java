@@ -31,20 +31,22 @@ class MonotonicityTest {
         for (int n = 1; n <= 2 * max; n++) {
             int n1 = Math.min(n, max);
             int n2 = n - n1;
-            List<BeamSection.BarGroup> groups = n2 == 0 ? List.of(new BeamSection.BarGroup(bar, n1))
+            List<BeamSection.BarGroup> groups = n2 == 0
+                    ? List.of(new BeamSection.BarGroup(bar, n1))
                     : List.of(new BeamSection.BarGroup(bar, n1), new BeamSection.BarGroup(bar, n2));
             var layers = new java.util.ArrayList<>(BeamSection.stack(Face.BOTTOM, groups, det));
             if (hangers > 0) {
-                layers.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(Sections.si("16"),
-                        Math.min(hangers + 1, 4))), det));
+                layers.addAll(BeamSection.stack(
+                        Face.TOP, List.of(new BeamSection.BarGroup(Sections.si("16"), Math.min(hangers + 1, 4))), det));
             }
             BeamSection s = new BeamSection(shape, m, det, layers, null, null, CodeEquations.SI);
             FlexureResult r = Flexure.analyse(s, Bending.SAGGING);
             if (r.epsT() < CodeTables.EPS_T_MIN_BEAM) {
                 break;
             }
-            assertTrue(r.phiMn() >= previous * (1 - 1e-12), "phi Mn fell from " + previous + " to " + r.phiMn()
-                    + " at " + n + " bars");
+            assertTrue(
+                    r.phiMn() >= previous * (1 - 1e-12),
+                    "phi Mn fell from " + previous + " to " + r.phiMn() + " at " + n + " bars");
             previous = r.phiMn();
         }
     }

@@ -18,8 +18,14 @@ class SectionChecksTest {
     private static final CodeEquations US = CodeEquations.INCH_POUND;
 
     private static BeamSection siBeam(double b, double h, List<BarLayer> layers, Stirrups st) {
-        return new BeamSection(SectionShape.rectangular(b, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), layers, st, null, SI);
+        return new BeamSection(
+                SectionShape.rectangular(b, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                layers,
+                st,
+                null,
+                SI);
     }
 
     // ---- shear ----
@@ -29,9 +35,14 @@ class SectionChecksTest {
         double h = 26.5 * IN;
         double fc = 3000 / CodeEquations.PSI_PER_MPA;
         // 3 #9 (3.00 in²): rho_w = 0.0089, so row (a) of Table 22.5.5.1 governs over (b) as in the book
-        return new BeamSection(SectionShape.rectangular(14 * IN, h), new Materials(fc, 60 * KSI, 60 * KSI, 19.05, 1.0),
+        return new BeamSection(
+                SectionShape.rectangular(14 * IN, h),
+                new Materials(fc, 60 * KSI, 60 * KSI, 19.05, 1.0),
                 Sections.detailing(1.5 * IN, Sections.us("3")),
-                List.of(Sections.bottomAtDepth(Sections.us("9"), 3, h, 24 * IN)), st, null, US);
+                List.of(Sections.bottomAtDepth(Sections.us("9"), 3, h, 24 * IN)),
+                st,
+                null,
+                US);
     }
 
     @Test
@@ -65,17 +76,24 @@ class SectionChecksTest {
         // Four #3 legs (Av = 0.44 in²) at 3 in give Av fyt d / s = 0.44 x 60,000 x 24 / 3 = 211,200 lb by hand,
         // more than ACI 318-19 22.5.1.2 lets the section carry: phi Vn = 0.75 (36,807 + 147,228) = 138,026 lb.
         Stirrups dense = new Stirrups(Sections.us("3"), 4, 3 * IN);
-        ShearResult sh = SectionChecks.run(example82(dense), new Demand(null, 100 * KIP), null, Trail.off()).shear();
+        ShearResult sh = SectionChecks.run(example82(dense), new Demand(null, 100 * KIP), null, Trail.off())
+                .shear();
         assertEquals(211_200, sh.vsStirrups() / KIP * 1000, 5, "Av fyt d / s, lb");
         assertEquals(147_228, sh.vs() / KIP * 1000, 5, "Vs taken at Vs,max, lb");
         assertEquals(138_026, sh.phiVn() / KIP * 1000, 10, "phi (Vc + Vs,max), lb");
         // at 7.33 in (the book's spacing) the stirrups stay below the limit and count in full
-        ShearResult open = SectionChecks.run(example82(new Stirrups(Sections.us("3"), 2, 7.33 * IN)),
-                new Demand(null, 60 * KIP), null, Trail.off()).shear();
+        ShearResult open = SectionChecks.run(
+                        example82(new Stirrups(Sections.us("3"), 2, 7.33 * IN)),
+                        new Demand(null, 60 * KIP),
+                        null,
+                        Trail.off())
+                .shear();
         assertEquals(open.vsStirrups(), open.vs(), 1e-9);
         Trail t = Trail.recording();
         SectionChecks.run(example82(dense), new Demand(null, 100 * KIP), null, t);
-        assertTrue(t.entries().stream().anyMatch(e -> e instanceof Trail.Step st && st.symbol().equals("Vs,max")),
+        assertTrue(
+                t.entries().stream()
+                        .anyMatch(e -> e instanceof Trail.Step st && st.symbol().equals("Vs,max")),
                 "the trail shows the limit it applied");
     }
 
@@ -109,8 +127,12 @@ class SectionChecksTest {
         assertFalse(lo.highShear());
         assertEquals(250, lo.sMaxAlong(), 1e-9);
         // Vu = 400 kN: Vs,req = 533.3 - 135.3 = 398 kN > 261.9 kN: halved, s,max = d/4 = 125 mm
-        ShearResult hi = SectionChecks.run(siBeam(300, h, bars, new Stirrups(Sections.si("10"), 4, 100)),
-                new Demand(null, 400e3), null, Trail.off()).shear();
+        ShearResult hi = SectionChecks.run(
+                        siBeam(300, h, bars, new Stirrups(Sections.si("10"), 4, 100)),
+                        new Demand(null, 400e3),
+                        null,
+                        Trail.off())
+                .shear();
         assertTrue(hi.highShear());
         assertEquals(125, hi.sMaxAlong(), 1e-9);
     }
@@ -123,8 +145,11 @@ class SectionChecksTest {
         // s,max = d/2 = 125 mm and the stirrups pass (hand calculation from the clause).
         double h = 300;
         List<BarLayer> bars = List.of(Sections.bottomAtDepth(Sections.si("16"), 3, h, 250));
-        CheckReport r = SectionChecks.run(siBeam(300, h, bars, new Stirrups(Sections.si("10"), 2, 100)),
-                new Demand(null, 14.6e3), null, Trail.off());
+        CheckReport r = SectionChecks.run(
+                siBeam(300, h, bars, new Stirrups(Sections.si("10"), 2, 100)),
+                new Demand(null, 14.6e3),
+                null,
+                Trail.off());
         assertFalse(r.shear().highShear());
         assertEquals(125, r.shear().sMaxAlong(), 1e-9);
         assertTrue(r.check("stirrup_spacing").orElseThrow().pass());
@@ -137,10 +162,14 @@ class SectionChecksTest {
         // McCormac & Brown 9th ed., Example 5.1: bw = 10 in, d = 24 in, f'c = 4000 psi, fy = 60 ksi ->
         // As,min = 200 bw d / fy = 0.80 in² (3 sqrt(f'c) bw d / fy = 0.76 in²)
         double h = 27 * IN;
-        BeamSection s = new BeamSection(SectionShape.rectangular(10 * IN, h),
+        BeamSection s = new BeamSection(
+                SectionShape.rectangular(10 * IN, h),
                 Sections.materials(4000 / CodeEquations.PSI_PER_MPA, 60 * KSI),
                 Sections.detailing(1.5 * IN, Sections.us("3")),
-                List.of(Sections.bottomAtDepth(Sections.bar("As", 1.0 * IN, 0.6 * IN2), 1, h, 24 * IN)), null, null, US);
+                List.of(Sections.bottomAtDepth(Sections.bar("As", 1.0 * IN, 0.6 * IN2), 1, h, 24 * IN)),
+                null,
+                null,
+                US);
         CheckReport r = SectionChecks.run(s, new Demand(null, null), null, Trail.off());
         CheckResult c = r.check("min_steel").orElseThrow();
         assertEquals(0.80, c.limit().value() / IN2, 0.002);
@@ -153,8 +182,14 @@ class SectionChecksTest {
         // 300 x 700 mm, d about 640 mm: As,min = 1.4/420 x 300 x 640 = 640 mm². Two No. 16 (398 mm²)
         // carry phi Mn of about 95 kN·m; for Mu = 40 kN·m As,req is about 165 mm² and 4/3 of it about 220.
         double h = 700;
-        BeamSection s = siBeam(300, h, BeamSection.stack(Face.BOTTOM,
-                List.of(new BeamSection.BarGroup(Sections.si("16"), 2)), Sections.detailing(40, Sections.si("10"))), null);
+        BeamSection s = siBeam(
+                300,
+                h,
+                BeamSection.stack(
+                        Face.BOTTOM,
+                        List.of(new BeamSection.BarGroup(Sections.si("16"), 2)),
+                        Sections.detailing(40, Sections.si("10"))),
+                null);
         CheckReport light = SectionChecks.run(s, new Demand(40e6, null), null, Trail.off());
         CheckResult c = light.check("min_steel").orElseThrow();
         assertTrue(c.pass(), c.toString());
@@ -162,8 +197,15 @@ class SectionChecksTest {
         CheckReport heavy = SectionChecks.run(s, new Demand(80e6, null), null, Trail.off());
         assertFalse(heavy.check("min_steel").orElseThrow().pass());
         double req = SectionChecks.requiredTensionArea(s, Bending.SAGGING, 40e6);
-        BeamSection scaled = siBeam(300, h, List.of(new BarLayer(Face.BOTTOM, Sections.bar("x", 15.9, req / 2), 2,
-                s.layers().get(0).fromFace())), null);
+        BeamSection scaled = siBeam(
+                300,
+                h,
+                List.of(new BarLayer(
+                        Face.BOTTOM,
+                        Sections.bar("x", 15.9, req / 2),
+                        2,
+                        s.layers().get(0).fromFace())),
+                null);
         assertEquals(40e6, Flexure.analyse(scaled, Bending.SAGGING).phiMn(), 40e6 * 1e-6);
     }
 
@@ -208,14 +250,18 @@ class SectionChecksTest {
         double h = 350;
         List<BarLayer> bars = List.of(Sections.bottomAtDepth(Sections.si("19"), 3, h, 290));
         BeamSection s420 = siBeam(300, h, bars, null);
-        CheckResult c = SectionChecks.run(s420, new Demand(50e6, null), new Span(6000, EndCondition.SIMPLE),
-                Trail.off()).check("min_depth").orElseThrow();
+        CheckResult c = SectionChecks.run(
+                        s420, new Demand(50e6, null), new Span(6000, EndCondition.SIMPLE), Trail.off())
+                .check("min_depth")
+                .orElseThrow();
         assertEquals(375, c.limit().value(), 1e-9);
         assertFalse(c.pass());
-        BeamSection s280 = new BeamSection(s420.shape(), Sections.materials(28, 280), s420.detailing(), bars, null,
-                null, SI);
-        CheckResult c2 = SectionChecks.run(s280, new Demand(50e6, null), new Span(6000, EndCondition.SIMPLE),
-                Trail.off()).check("min_depth").orElseThrow();
+        BeamSection s280 =
+                new BeamSection(s420.shape(), Sections.materials(28, 280), s420.detailing(), bars, null, null, SI);
+        CheckResult c2 = SectionChecks.run(
+                        s280, new Demand(50e6, null), new Span(6000, EndCondition.SIMPLE), Trail.off())
+                .check("min_depth")
+                .orElseThrow();
         assertEquals(300, c2.limit().value(), 1e-9);
         assertTrue(c2.pass());
     }
@@ -227,9 +273,17 @@ class SectionChecksTest {
         List<BarLayer> bars = List.of(Sections.bottomAtDepth(Sections.si("29"), 4, h, 930));
         CheckReport r = SectionChecks.run(siBeam(400, h, bars, null), new Demand(500e6, null), null, Trail.off());
         assertFalse(r.check("skin").orElseThrow().pass());
-        BeamSection withSkin = new BeamSection(SectionShape.rectangular(400, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), bars, null, new SkinBars(Sections.si("13x"), 200), SI);
-        assertTrue(SectionChecks.run(withSkin, new Demand(500e6, null), null, Trail.off()).check("skin").orElseThrow()
+        BeamSection withSkin = new BeamSection(
+                SectionShape.rectangular(400, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                bars,
+                null,
+                new SkinBars(Sections.si("13x"), 200),
+                SI);
+        assertTrue(SectionChecks.run(withSkin, new Demand(500e6, null), null, Trail.off())
+                .check("skin")
+                .orElseThrow()
                 .pass());
     }
 
@@ -237,18 +291,22 @@ class SectionChecksTest {
     void trailRecordsEveryCheckWithNumbers() {
         double h = 600;
         Detailing det = Sections.detailing(40, Sections.si("10"));
-        List<BarLayer> bars = new java.util.ArrayList<>(BeamSection.stack(Face.BOTTOM,
-                List.of(new BeamSection.BarGroup(Sections.si("25"), 4)), det));
+        List<BarLayer> bars = new java.util.ArrayList<>(
+                BeamSection.stack(Face.BOTTOM, List.of(new BeamSection.BarGroup(Sections.si("25"), 4)), det));
         // two hangers: each stirrup leg's bend holds a bar at the top as well (25.7.1.3)
         bars.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(Sections.si("13x"), 2)), det));
         BeamSection s = siBeam(300, h, bars, new Stirrups(Sections.si("10"), 2, 200));
         Trail t = Trail.recording();
         CheckReport r = SectionChecks.run(s, new Demand(250e6, 150e3), new Span(6000, EndCondition.SIMPLE), t);
-        long headings = t.entries().stream().filter(e -> e instanceof Trail.Heading).count();
+        long headings =
+                t.entries().stream().filter(e -> e instanceof Trail.Heading).count();
         assertTrue(headings >= 6, "flexure, minimum steel, spacing, cover, shear, depth: " + headings);
         assertTrue(r.ok(), r.failures().toString());
-        Trail.Step phiMn = t.entries().stream().filter(e -> e instanceof Trail.Step s2 && s2.symbol().equals("φMn"))
-                .map(e -> (Trail.Step) e).findFirst().orElseThrow();
+        Trail.Step phiMn = t.entries().stream()
+                .filter(e -> e instanceof Trail.Step s2 && s2.symbol().equals("φMn"))
+                .map(e -> (Trail.Step) e)
+                .findFirst()
+                .orElseThrow();
         assertEquals(r.flexure().phiMn(), phiMn.result().value(), 1e-6);
     }
 }

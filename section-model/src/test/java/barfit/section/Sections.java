@@ -12,8 +12,7 @@ final class Sections {
     static final double KIP_FT = 4448.2216152605 * 304.8;
     static final double KIP = 4448.2216152605;
 
-    private Sections() {
-    }
+    private Sections() {}
 
     /** A bar of the given designation and size; area need not match pi d²/4 (textbooks give areas). */
     static BarSize bar(String name, double dbMm, double areaMm2) {

@@ -28,7 +28,7 @@ class StirrupHooksTest {
     @Test
     void hook135ExtendsSixDiametersButAtLeast75mmOr3in() {
         // Table 25.3.2 (ACI 318M-19): 135-degree hook, No. 10 to No. 25: 6 db >= 75 mm
-        assertEquals(75.0, StirrupHooks.extension135(si("10"), CodeEquations.SI), 1e-9);   // 6 x 9.5 = 57 mm < 75
+        assertEquals(75.0, StirrupHooks.extension135(si("10"), CodeEquations.SI), 1e-9); // 6 x 9.5 = 57 mm < 75
         assertEquals(6 * 12.7, StirrupHooks.extension135(si("13"), CodeEquations.SI), 1e-9); // 76.2 mm > 75
         assertEquals(6 * 15.9, StirrupHooks.extension135(si("16"), CodeEquations.SI), 1e-9);
         // Table 25.3.2 (inch-pound): 6 db >= 3 in

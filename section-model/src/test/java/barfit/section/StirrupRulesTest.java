@@ -17,8 +17,8 @@ import org.junit.jupiter.api.Test;
 class StirrupRulesTest {
     private static final Detailing DET = Sections.detailing(40, Sections.si("10"));
 
-    private static BeamSection beam(double b, double h, BarSize bottom, List<Integer> bottomCounts, BarSize top,
-            int topCount, Stirrups st) {
+    private static BeamSection beam(
+            double b, double h, BarSize bottom, List<Integer> bottomCounts, BarSize top, int topCount, Stirrups st) {
         List<BeamSection.BarGroup> g = new ArrayList<>();
         for (int c : bottomCounts) {
             g.add(new BeamSection.BarGroup(bottom, c));
@@ -27,8 +27,8 @@ class StirrupRulesTest {
         if (topCount > 0) {
             layers.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(top, topCount)), DET));
         }
-        return new BeamSection(SectionShape.rectangular(b, h), Sections.materials(28, 420), DET, layers, st, null,
-                CodeEquations.SI);
+        return new BeamSection(
+                SectionShape.rectangular(b, h), Sections.materials(28, 420), DET, layers, st, null, CodeEquations.SI);
     }
 
     @Test
@@ -38,7 +38,10 @@ class StirrupRulesTest {
         Stirrups four = new Stirrups(Sections.si("10"), 4, 150);
         BeamSection three = beam(400, 600, Sections.si("25"), List.of(3), Sections.si("16"), 4, four);
         List<CheckResult> r = StirrupRules.checks(three, three, Bending.SAGGING, 100e6, null, "", Trail.off());
-        CheckResult held = r.stream().filter(c -> c.id().equals("stirrup_legs_held")).findFirst().orElseThrow();
+        CheckResult held = r.stream()
+                .filter(c -> c.id().equals("stirrup_legs_held"))
+                .findFirst()
+                .orElseThrow();
         assertFalse(held.pass());
         assertEquals(3, held.limit().value(), 0);
         BeamSection fourBars = beam(400, 600, Sections.si("25"), List.of(4), Sections.si("16"), 4, four);
@@ -54,9 +57,11 @@ class StirrupRulesTest {
         BeamSection s = beam(400, 600, Sections.si("25"), List.of(5), Sections.si("16"), 2, two);
         assertTrue(StirrupRules.checks(s, s, Bending.SAGGING, 100e6, null, "", Trail.off()).stream()
                 .allMatch(CheckResult::pass));
-        List<CheckResult> withPractice = StirrupRules.checks(s, s, Bending.SAGGING, 100e6,
-                new StirrupRules.Practice(4), "", Trail.off());
-        CheckResult practice = withPractice.stream().filter(c -> c.id().equals("stirrup_legs_bars")).findFirst()
+        List<CheckResult> withPractice =
+                StirrupRules.checks(s, s, Bending.SAGGING, 100e6, new StirrupRules.Practice(4), "", Trail.off());
+        CheckResult practice = withPractice.stream()
+                .filter(c -> c.id().equals("stirrup_legs_bars"))
+                .findFirst()
                 .orElseThrow();
         assertFalse(practice.pass());
         assertEquals(4, practice.limit().value(), 0);
@@ -79,7 +84,11 @@ class StirrupRulesTest {
         assertTrue(td.sizeOk(9.5));
         BeamSection wide = s.withStirrups(new Stirrups(Sections.si("10"), 2, 350));
         List<CheckResult> r = StirrupRules.checks(wide, wide, Bending.SAGGING, null, null, "", Trail.off());
-        assertFalse(r.stream().filter(c -> c.id().equals("compression_ties")).findFirst().orElseThrow().pass());
+        assertFalse(r.stream()
+                .filter(c -> c.id().equals("compression_ties"))
+                .findFirst()
+                .orElseThrow()
+                .pass());
         BeamSection close = s.withStirrups(new Stirrups(Sections.si("10"), 2, 300));
         assertTrue(StirrupRules.checks(close, close, Bending.SAGGING, null, null, "", Trail.off()).stream()
                 .allMatch(CheckResult::pass));
@@ -105,14 +114,23 @@ class StirrupRulesTest {
     @Test
     void largeCompressionBarsNeedNo13Ties() {
         // 25.7.2.2: No. 13 ties round No. 36 and larger bars; No. 10 stirrups fail.
-        BeamSection s = beam(400, 500, Sections.si("29"), List.of(4, 4), Sections.si("36"), 2,
+        BeamSection s = beam(
+                400,
+                500,
+                Sections.si("29"),
+                List.of(4, 4),
+                Sections.si("36"),
+                2,
                 new Stirrups(Sections.si("10"), 2, 200));
         StirrupRules.TieDemand td = StirrupRules.ties(s, Bending.SAGGING, null);
         assertTrue(td.required());
         assertFalse(td.sizeOk(9.5));
         assertTrue(td.sizeOk(12.7));
         assertFalse(StirrupRules.checks(s, s, Bending.SAGGING, null, null, "", Trail.off()).stream()
-                .filter(c -> c.id().equals("compression_ties_size")).findFirst().orElseThrow().pass());
+                .filter(c -> c.id().equals("compression_ties_size"))
+                .findFirst()
+                .orElseThrow()
+                .pass());
     }
 
     @Test
@@ -136,11 +154,17 @@ class StirrupRulesTest {
         // (0.85 x 28 x 2200) = 12.3 mm, c = 14.5 mm, while the two No. 16 top bars sit 57.45 mm down: they are
         // below the neutral axis, in tension, and add to Mn. Taking them away lowers phi Mn below an Mu set at
         // the full section's strength, yet there is no compression steel for 9.7.6.4 to enclose.
-        List<BarLayer> layers = new ArrayList<>(BeamSection.stack(Face.BOTTOM,
-                List.of(new BeamSection.BarGroup(Sections.si("25"), 3)), DET));
+        List<BarLayer> layers = new ArrayList<>(
+                BeamSection.stack(Face.BOTTOM, List.of(new BeamSection.BarGroup(Sections.si("25"), 3)), DET));
         layers.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(Sections.si("16"), 2)), DET));
-        BeamSection s = new BeamSection(new SectionShape(350, 525, new Flange(2200, 200, false)),
-                Sections.materials(28, 420), DET, layers, null, null, CodeEquations.SI);
+        BeamSection s = new BeamSection(
+                new SectionShape(350, 525, new Flange(2200, 200, false)),
+                Sections.materials(28, 420),
+                DET,
+                layers,
+                null,
+                null,
+                CodeEquations.SI);
         FlexureResult full = Flexure.analyse(s, Bending.SAGGING);
         assertTrue(full.c() < 57.45, "neutral axis above the top bars: c = " + full.c());
         assertEquals(null, StirrupRules.compressionReliedOn(s, Bending.SAGGING, full.phiMn()));

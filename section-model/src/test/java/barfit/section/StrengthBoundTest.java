@@ -72,7 +72,8 @@ class StrengthBoundTest {
             assertTrue(StrengthBound.maxMn(k * ceiling, 540, 568, 60, 60, 300, fc, fy) <= top * (1 + 1e-12));
         }
         // a moment above what the ceiling reaches, even at phi = 0.90 (Table 21.2.2), needs an unbounded area
-        assertEquals(Double.POSITIVE_INFINITY,
+        assertEquals(
+                Double.POSITIVE_INFINITY,
                 StrengthBound.minTensionArea(0.9 * top * 1.01, 540, 568, 60, 60, 300, fc, fy));
         assertTrue(StrengthBound.minTensionArea(0.9 * top * 0.99, 540, 568, 60, 60, 300, fc, fy) < ceiling);
     }

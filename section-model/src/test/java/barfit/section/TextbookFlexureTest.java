@@ -30,7 +30,11 @@ class TextbookFlexureTest {
     private static BeamSection singly(double bIn, double dIn, double asIn2, double dbIn, double fc) {
         double h = (dIn + 2.5) * IN;
         BarSize lump = Sections.bar("As", dbIn * IN, asIn2 * IN2);
-        return Sections.section(SectionShape.rectangular(bIn * IN, h), Sections.materials(fc, FY60), DET, US,
+        return Sections.section(
+                SectionShape.rectangular(bIn * IN, h),
+                Sections.materials(fc, FY60),
+                DET,
+                US,
                 Sections.bottomAtDepth(lump, 1, h, dIn * IN));
     }
 
@@ -102,8 +106,12 @@ class TextbookFlexureTest {
         // eps_t = 0.00634, Mn = 1349 ft-k, phi Mn = 1214 ft-k
         double h = 33 * IN;
         BarSize lump = Sections.bar("As", 1.27 * IN, 10.12 * IN2);
-        BeamSection s = Sections.section(new SectionShape(14 * IN, h, new Flange(30 * IN, 4 * IN, false)),
-                Sections.materials(FC4000, FY60), DET, US, Sections.bottomAtDepth(lump, 1, h, 30 * IN));
+        BeamSection s = Sections.section(
+                new SectionShape(14 * IN, h, new Flange(30 * IN, 4 * IN, false)),
+                Sections.materials(FC4000, FY60),
+                DET,
+                US,
+                Sections.bottomAtDepth(lump, 1, h, 30 * IN));
         FlexureResult r = Flexure.analyse(s, Bending.SAGGING);
         near(8.19, r.a() / IN, 0.002, "a");
         near(9.64, r.c() / IN, 0.002, "c");
@@ -121,10 +129,18 @@ class TextbookFlexureTest {
         double h = 26.5 * IN;
         BarSize tension = Sections.bar("As", 1.27 * IN, 5.06 * IN2);
         BarSize compression = Sections.bar("As'", 0.875 * IN, 1.20 * IN2);
-        BeamSection s = Sections.section(SectionShape.rectangular(14 * IN, h), Sections.materials(FC4000, FY60), DET,
-                US, Sections.bottomAtDepth(tension, 1, h, 24 * IN), Sections.topAt(compression, 1, 2.5 * IN));
+        BeamSection s = Sections.section(
+                SectionShape.rectangular(14 * IN, h),
+                Sections.materials(FC4000, FY60),
+                DET,
+                US,
+                Sections.bottomAtDepth(tension, 1, h, 24 * IN),
+                Sections.topAt(compression, 1, 2.5 * IN));
         FlexureResult r = Flexure.analyse(s, Bending.SAGGING);
-        LayerResult comp = r.layers().stream().filter(l -> l.layer().face() == Face.TOP).findFirst().orElseThrow();
+        LayerResult comp = r.layers().stream()
+                .filter(l -> l.layer().face() == Face.TOP)
+                .findFirst()
+                .orElseThrow();
         assertFalse(comp.yielded(FY60), "compression steel must stay elastic");
         assertTrue(comp.stress() < 0, "compression steel in compression");
         near(6.00, r.c() / IN, 0.02, "c");
@@ -140,8 +156,11 @@ class TextbookFlexureTest {
         // 4.71 in²). Checked here as a hogging section: it must pass, and As,req must come out near 4.24 in².
         double h = 26.5 * IN;
         BarSize lump = Sections.bar("6 #8", 1.0 * IN, 4.71 * IN2);
-        BeamSection s = Sections.section(SectionShape.rectangular(14 * IN, h),
-                Sections.materials(3000 / CodeEquations.PSI_PER_MPA, FY60), DET, US,
+        BeamSection s = Sections.section(
+                SectionShape.rectangular(14 * IN, h),
+                Sections.materials(3000 / CodeEquations.PSI_PER_MPA, FY60),
+                DET,
+                US,
                 Sections.topAt(lump, 1, 2.5 * IN));
         double mu = -390 * KIP_FT;
         CheckReport r = SectionChecks.run(s, new Demand(mu, null), null, barfit.section.trail.Trail.off());
@@ -158,8 +177,11 @@ class TextbookFlexureTest {
         // Mn = 812.7 kN x (500 - 56.91) mm = 360.1 kN·m; eps_t = 0.003 (500 - 133.9)/133.9 = 0.0082;
         // phi = 0.90; phi Mn = 324.1 kN·m.
         double h = 560;
-        BeamSection s = Sections.section(SectionShape.rectangular(300, h), Sections.materials(28, 420),
-                Sections.detailing(40, Sections.si("10")), CodeEquations.SI,
+        BeamSection s = Sections.section(
+                SectionShape.rectangular(300, h),
+                Sections.materials(28, 420),
+                Sections.detailing(40, Sections.si("10")),
+                CodeEquations.SI,
                 Sections.bottomAtDepth(Sections.si("29"), 3, h, 500));
         FlexureResult r = Flexure.analyse(s, Bending.SAGGING);
         near(113.82, r.a(), 1e-4, "a");

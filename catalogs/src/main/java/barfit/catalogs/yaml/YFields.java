@@ -26,8 +26,8 @@ public final class YFields {
     /** Wraps {@code node}, which must be a map; {@code what} says what the map is for. */
     public static YFields of(YNode node, String path, String what) {
         if (!(node instanceof YMap m)) {
-            throw new InputError(node.location(), label(path) + "expected " + what + " (a map of keys), got "
-                    + node.kind());
+            throw new InputError(
+                    node.location(), label(path) + "expected " + what + " (a map of keys), got " + node.kind());
         }
         return new YFields(m, path);
     }
@@ -57,8 +57,10 @@ public final class YFields {
         Set<String> ok = new LinkedHashSet<>(Arrays.asList(allowed));
         for (YMap.Entry e : map.entries()) {
             if (!ok.contains(e.key())) {
-                throw new InputError(e.keyLocation(), label(path) + "unknown key '" + Echo.cut(e.key())
-                        + "'; expected one of: " + String.join(", ", ok));
+                throw new InputError(
+                        e.keyLocation(),
+                        label(path) + "unknown key '" + Echo.cut(e.key()) + "'; expected one of: "
+                                + String.join(", ", ok));
             }
         }
         return this;
@@ -72,8 +74,7 @@ public final class YFields {
     public YNode node(String key) {
         YNode n = map.get(key);
         if (n == null || (n instanceof YScalar s && s.nul())) {
-            throw new InputError(n == null ? map.location() : n.location(), label(path)
-                    + "missing key '" + key + "'");
+            throw new InputError(n == null ? map.location() : n.location(), label(path) + "missing key '" + key + "'");
         }
         return n;
     }
@@ -92,8 +93,9 @@ public final class YFields {
     public double number(String key, String expected) {
         YNode n = map.get(key);
         if (n == null || (n instanceof YScalar s && s.nul())) {
-            throw new InputError(n == null ? map.location() : n.location(), label(path) + "missing key '" + key
-                    + "'; expected " + expected);
+            throw new InputError(
+                    n == null ? map.location() : n.location(),
+                    label(path) + "missing key '" + key + "'; expected " + expected);
         }
         return numberOf(n, child(key), expected);
     }
@@ -118,8 +120,9 @@ public final class YFields {
     public double nonNegative(String key, String expected) {
         double v = number(key, "a number >= 0 (" + expected + ")");
         if (v < 0) {
-            throw new InputError(map.get(key).location(), child(key) + ": expected a number >= 0 (" + expected
-                    + "), got " + text(map.get(key)));
+            throw new InputError(
+                    map.get(key).location(),
+                    child(key) + ": expected a number >= 0 (" + expected + "), got " + text(map.get(key)));
         }
         return v;
     }
@@ -128,8 +131,8 @@ public final class YFields {
         double v = number(key, "a whole number >= 1 (" + expected + ")");
         YNode n = map.get(key);
         if (v != Math.rint(v) || v < 1 || v > 1_000_000) {
-            throw new InputError(n.location(), child(key) + ": expected a whole number >= 1 (" + expected
-                    + "), got " + text(n));
+            throw new InputError(
+                    n.location(), child(key) + ": expected a whole number >= 1 (" + expected + "), got " + text(n));
         }
         return (int) v;
     }
@@ -137,8 +140,9 @@ public final class YFields {
     public String text(String key, String expected) {
         YNode n = map.get(key);
         if (n == null || (n instanceof YScalar s && s.nul())) {
-            throw new InputError(n == null ? map.location() : n.location(), label(path) + "missing key '" + key
-                    + "'; expected " + expected);
+            throw new InputError(
+                    n == null ? map.location() : n.location(),
+                    label(path) + "missing key '" + key + "'; expected " + expected);
         }
         return textOf(n, child(key), expected);
     }
@@ -198,8 +202,8 @@ public final class YFields {
             throw new InputError(n.location(), path + ": expected " + expected + ", got " + n.kind());
         }
         if (Double.isInfinite(v)) {
-            throw new InputError(n.location(), path + ": expected " + expected + ", got " + n.kind()
-                    + ", too large a number");
+            throw new InputError(
+                    n.location(), path + ": expected " + expected + ", got " + n.kind() + ", too large a number");
         }
         return v;
     }
@@ -218,8 +222,8 @@ public final class YFields {
 
     public static void requirePositive(YNode n, String path, double v, String expected) {
         if (!(v > 0)) {
-            throw new InputError(n.location(), path + ": expected a positive number (" + expected + "), got "
-                    + text(n));
+            throw new InputError(
+                    n.location(), path + ": expected a positive number (" + expected + "), got " + text(n));
         }
     }
 

@@ -8,8 +8,7 @@ import java.util.Set;
 /** A YAML mapping in the order written; each key keeps where it was written. */
 public final class YMap implements YNode {
     /** A key with its value and where the key itself stands. */
-    public record Entry(String key, Location keyLocation, YNode value) {
-    }
+    public record Entry(String key, Location keyLocation, YNode value) {}
 
     private final Map<String, Entry> entries;
     private final Location location;

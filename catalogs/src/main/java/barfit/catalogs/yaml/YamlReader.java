@@ -30,6 +30,7 @@ public final class YamlReader {
     public static final int MAX_NESTING = 50;
     /** YAML's own limit on an implicit key, in characters (YAML 1.1, 7.4.2 "simple keys"). */
     private static final int SIMPLE_KEY_MAX = 1024;
+
     static final String TOO_LARGE_ADVICE = "expected a smaller file: split the beams over several files, or give a "
             + "schedule's beams in a CSV file (--beams)";
     private static final YAMLFactory FACTORY;
@@ -41,8 +42,7 @@ public final class YamlReader {
         FACTORY = YAMLFactory.builder().loaderOptions(options).build();
     }
 
-    private YamlReader() {
-    }
+    private YamlReader() {}
 
     public static YNode read(Path path) {
         String text = InputFiles.readText(path, "a YAML file", InputFiles.YAML_MAX_BYTES, TOO_LARGE_ADVICE);
@@ -60,18 +60,24 @@ public final class YamlReader {
             if (p.nextToken() != null) {
                 Location next = locationOf(p, fileName);
                 int marker = documentMarkerBefore(text, next.line());
-                throw new InputError(marker > 0 ? new Location(fileName, marker, 1) : next, "a second YAML document "
-                        + "after the first; expected one document per file (remove the '---' or '...' line and what "
-                        + "follows, or merge it into the first)");
+                throw new InputError(
+                        marker > 0 ? new Location(fileName, marker, 1) : next,
+                        "a second YAML document "
+                                + "after the first; expected one document per file (remove the '---' or '...' line and what "
+                                + "follows, or merge it into the first)");
             }
             return root;
         } catch (StreamConstraintsException e) {
-            throw new InputError(Location.ofFile(fileName), "the YAML is nested too deeply or holds too long a value "
-                    + "for the reader; expected a barfit input (maps and lists at most " + MAX_NESTING + " deep)");
+            throw new InputError(
+                    Location.ofFile(fileName),
+                    "the YAML is nested too deeply or holds too long a value "
+                            + "for the reader; expected a barfit input (maps and lists at most " + MAX_NESTING
+                            + " deep)");
         } catch (JsonProcessingException e) {
             throw syntaxError(e, text, fileName);
         } catch (IOException e) {
-            throw new InputError(Location.ofFile(fileName), "cannot be read: " + Echo.cut(String.valueOf(e.getMessage())));
+            throw new InputError(
+                    Location.ofFile(fileName), "cannot be read: " + Echo.cut(String.valueOf(e.getMessage())));
         }
     }
 
@@ -79,8 +85,10 @@ public final class YamlReader {
         Location here = locationOf(p, file);
         JsonToken t = p.currentToken();
         if ((t == JsonToken.START_OBJECT || t == JsonToken.START_ARRAY) && depth > MAX_NESTING) {
-            throw new InputError(here, "maps and lists nested more than " + MAX_NESTING + " deep; expected a barfit "
-                    + "input (it needs five levels at most)");
+            throw new InputError(
+                    here,
+                    "maps and lists nested more than " + MAX_NESTING + " deep; expected a barfit "
+                            + "input (it needs five levels at most)");
         }
         switch (t) {
             case START_OBJECT: {
@@ -89,8 +97,10 @@ public final class YamlReader {
                     String key = p.currentName();
                     Location keyLoc = locationOf(p, file);
                     if (entries.containsKey(key)) {
-                        throw new InputError(keyLoc, "key '" + Echo.cut(key) + "' is given twice (first at line "
-                                + entries.get(key).keyLocation().line() + "); expected each key once");
+                        throw new InputError(
+                                keyLoc,
+                                "key '" + Echo.cut(key) + "' is given twice (first at line "
+                                        + entries.get(key).keyLocation().line() + "); expected each key once");
                     }
                     p.nextToken();
                     entries.put(key, new YMap.Entry(key, keyLoc, readValue(p, file, depth + 1)));
@@ -133,10 +143,13 @@ public final class YamlReader {
         }
         if (marked == null) {
             JsonLocation loc = e.getLocation();
-            Location where = loc == null ? Location.ofFile(file)
+            Location where = loc == null
+                    ? Location.ofFile(file)
                     : new Location(file, Math.max(loc.getLineNr(), 1), Math.max(loc.getColumnNr(), 0));
-            return new InputError(where, "YAML syntax error: " + firstSentence(e.getOriginalMessage())
-                    + "; expected valid YAML (check indentation, colons and quotes)");
+            return new InputError(
+                    where,
+                    "YAML syntax error: " + firstSentence(e.getOriginalMessage())
+                            + "; expected valid YAML (check indentation, colons and quotes)");
         }
         String problem = marked.getProblem() == null ? "" : marked.getProblem();
         String context = marked.getContext() == null ? "" : marked.getContext();
@@ -144,32 +157,49 @@ public final class YamlReader {
         Mark cm = marked.getContextMark();
         Location atProblem = pm != null ? at(file, pm) : cm != null ? at(file, cm) : Location.ofFile(file);
         if (problem.contains("(TAB)")) {
-            return new InputError(atProblem, "YAML syntax error: a tab character; expected spaces (YAML indents with spaces only)");
+            return new InputError(
+                    atProblem, "YAML syntax error: a tab character; expected spaces (YAML indents with spaces only)");
         }
         if (context.contains("simple key") && cm != null) {
             Location atKey = at(file, cm);
             if (keyRunsPastLimit(text, cm.getIndex())) {
-                return new InputError(atKey, "YAML syntax error: a key longer than " + SIMPLE_KEY_MAX + " characters; expected a "
-                        + "shorter key (YAML allows keys of at most " + SIMPLE_KEY_MAX + ")");
+                return new InputError(
+                        atKey,
+                        "YAML syntax error: a key longer than " + SIMPLE_KEY_MAX + " characters; expected a "
+                                + "shorter key (YAML allows keys of at most " + SIMPLE_KEY_MAX + ")");
             }
-            return new InputError(atKey, "YAML syntax error: a key without ':' after it; expected 'key: value' (a colon and a space "
-                    + "after the key)");
+            return new InputError(
+                    atKey,
+                    "YAML syntax error: a key without ':' after it; expected 'key: value' (a colon and a space "
+                            + "after the key)");
         }
         boolean list = context.contains("flow sequence");
         if ((list || context.contains("flow mapping")) && cm != null && problem.startsWith("expected ','")) {
-            String found = problem.contains("but got ") ? problem.substring(problem.indexOf("but got ") + 8).strip() : "";
-            return new InputError(at(file, cm), "YAML syntax error: a " + (list ? "list opened with '['" : "map opened with '{'")
-                    + " here is not closed" + (pm == null ? "" : " before line " + (pm.getLine() + 1) + ", column "
-                    + (pm.getColumn() + 1) + (found.isEmpty() ? "" : ", found '" + Echo.cut(found) + "'")) + "; expected "
-                    + (list ? "']'" : "'}'") + " at its end and ',' between its items");
+            String found = problem.contains("but got ")
+                    ? problem.substring(problem.indexOf("but got ") + 8).strip()
+                    : "";
+            return new InputError(
+                    at(file, cm),
+                    "YAML syntax error: a " + (list ? "list opened with '['" : "map opened with '{'")
+                            + " here is not closed"
+                            + (pm == null
+                                    ? ""
+                                    : " before line " + (pm.getLine() + 1) + ", column " + (pm.getColumn() + 1)
+                                            + (found.isEmpty() ? "" : ", found '" + Echo.cut(found) + "'"))
+                            + "; expected "
+                            + (list ? "']'" : "'}'") + " at its end and ',' between its items");
         }
         if (problem.contains("expected '<document start>'")) {
-            return new InputError(atProblem, "YAML syntax error: text after the end of the YAML document ('...'); expected nothing "
-                    + "after it (one document per file)");
+            return new InputError(
+                    atProblem,
+                    "YAML syntax error: text after the end of the YAML document ('...'); expected nothing "
+                            + "after it (one document per file)");
         }
         String what = problem.isBlank() ? e.getOriginalMessage() : (context.isBlank() ? "" : context + ": ") + problem;
-        return new InputError(atProblem, "YAML syntax error: " + firstSentence(what)
-                + "; expected valid YAML (check indentation, colons and quotes)");
+        return new InputError(
+                atProblem,
+                "YAML syntax error: " + firstSentence(what)
+                        + "; expected valid YAML (check indentation, colons and quotes)");
     }
 
     private static Location at(String file, Mark m) {
@@ -210,12 +240,16 @@ public final class YamlReader {
     private static void requirePrintable(String text, String file) {
         int line = 1;
         int column = 1;
-        for (int i = 0; i < text.length();) {
+        for (int i = 0; i < text.length(); ) {
             int c = text.codePointAt(i);
             if (!printable(c)) {
-                throw new InputError(new Location(file, line, column), String.format("a control character (U+%04X) "
-                        + "that YAML does not allow; expected printable text (tabs, line breaks and visible "
-                        + "characters)", c));
+                throw new InputError(
+                        new Location(file, line, column),
+                        String.format(
+                                "a control character (U+%04X) "
+                                        + "that YAML does not allow; expected printable text (tabs, line breaks and visible "
+                                        + "characters)",
+                                c));
             }
             i += Character.charCount(c);
             boolean crlf = c == '\r' && i < text.length() && text.charAt(i) == '\n';
@@ -229,8 +263,14 @@ public final class YamlReader {
     }
 
     private static boolean printable(int c) {
-        return c == 0x9 || c == 0xA || c == 0xD || (c >= 0x20 && c <= 0x7E) || c == 0x85 || (c >= 0xA0 && c <= 0xD7FF)
-                || (c >= 0xE000 && c <= 0xFFFD) || (c >= 0x10000 && c <= 0x10FFFF);
+        return c == 0x9
+                || c == 0xA
+                || c == 0xD
+                || (c >= 0x20 && c <= 0x7E)
+                || c == 0x85
+                || (c >= 0xA0 && c <= 0xD7FF)
+                || (c >= 0xE000 && c <= 0xFFFD)
+                || (c >= 0x10000 && c <= 0x10FFFF);
     }
 
     private static Location locationOf(JsonParser p, String file) {

@@ -6,10 +6,10 @@ import barfit.analysis.LineAnalysis;
 import barfit.analysis.LineResult;
 import barfit.analysis.Load;
 import barfit.design.SearchSpace;
+import barfit.design.span.ShearDiagram;
 import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
-import barfit.design.span.ShearDiagram;
 import barfit.input.LineInput;
 import barfit.input.Settings;
 import barfit.section.Deflection;
@@ -47,22 +47,27 @@ public final class LineSpans {
      * where the sections designed beside the support do not allow it (6.6.5.3: εt ≥ 0.0075 and at most
      * 1000 εt percent); {@code epsT} the least εt of those sections (NaN where none was asked).
      */
-    public record Result(LineInput line, List<Part> parts, int rounds, boolean settled, LineResult analysis,
-            List<Coefficients.SpanValues> coefficients, List<Double> redistribution, List<Double> epsT,
-            List<String> held, OneSection oneSection) {
-    }
+    public record Result(
+            LineInput line,
+            List<Part> parts,
+            int rounds,
+            boolean settled,
+            LineResult analysis,
+            List<Coefficients.SpanValues> coefficients,
+            List<Double> redistribution,
+            List<Double> epsT,
+            List<String> held,
+            OneSection oneSection) {}
 
     /**
      * How a line of one set of forms was designed: the sections analysed (each with its own weight and
      * stiffness) and how many of them were designed before the cost bound stopped the search; or, where
      * no one section carries every part, that the line fell back to span-by-span design.
      */
-    public record OneSection(int sections, int designed, boolean fellBack) {
-    }
+    public record OneSection(int sections, int designed, boolean fellBack) {}
 
     /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
-    public record Part(int segment, String name, SpanProblem problem, SpanDesigner.Outcome outcome) {
-    }
+    public record Part(int segment, String name, SpanProblem problem, SpanDesigner.Outcome outcome) {}
 
     private final Settings settings;
     private final SearchSpace space;
@@ -85,8 +90,16 @@ public final class LineSpans {
                 return one;
             }
             Result bySpan = bySpan(in, alternatives);
-            return new Result(in, bySpan.parts(), bySpan.rounds(), bySpan.settled(), bySpan.analysis(),
-                    bySpan.coefficients(), bySpan.redistribution(), bySpan.epsT(), bySpan.held(),
+            return new Result(
+                    in,
+                    bySpan.parts(),
+                    bySpan.rounds(),
+                    bySpan.settled(),
+                    bySpan.analysis(),
+                    bySpan.coefficients(),
+                    bySpan.redistribution(),
+                    bySpan.epsT(),
+                    bySpan.held(),
                     new OneSection(0, 0, true));
         }
         return bySpan(in, alternatives);
@@ -135,13 +148,22 @@ public final class LineSpans {
         if (alternatives > 0) {
             best = evaluate(in, best.trial(), ec, Double.POSITIVE_INFINITY, alternatives);
         }
-        return new Result(in, best.parts(), best.rounds(), true, best.trial().analysis(), best.trial().coefficients(),
-                best.trial().redistribution(), best.epsT(), List.of(), new OneSection(trials.size(), designed, false));
+        return new Result(
+                in,
+                best.parts(),
+                best.rounds(),
+                true,
+                best.trial().analysis(),
+                best.trial().coefficients(),
+                best.trial().redistribution(),
+                best.epsT(),
+                List.of(),
+                new OneSection(trials.size(), designed, false));
     }
 
     /** One analysis of the line (by stiffness or by the 6.5 coefficients) and the part problems from it. */
-    private record Analysed(List<SpanProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {
-    }
+    private record Analysed(
+            List<SpanProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {}
 
     private Analysed analyse(LineInput in, List<SectionShape> shapes, double ec, List<Double> red) {
         Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
@@ -154,13 +176,16 @@ public final class LineSpans {
     }
 
     /** A section tried for the whole line: its analysis, the parts' problems held at it, and its bound. */
-    private record Trial(SectionShape shape, List<SpanProblem> problems, LineResult analysis,
-            List<Coefficients.SpanValues> coefficients, List<Double> redistribution, double bound) {
-    }
+    private record Trial(
+            SectionShape shape,
+            List<SpanProblem> problems,
+            LineResult analysis,
+            List<Coefficients.SpanValues> coefficients,
+            List<Double> redistribution,
+            double bound) {}
 
     /** The parts designed at a trial's section, their total cost, the rounds redistribution took. */
-    private record Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {
-    }
+    private record Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {}
 
     private Trial trial(LineInput in, SectionShape shape, double ec, List<Double> red) {
         int n = in.spans().size();
@@ -200,7 +225,8 @@ public final class LineSpans {
             for (SpanProblem p : current.problems()) {
                 rest -= designer.leastCost(p);
                 // only a design that leaves room for the rest's bounds under the total to beat can matter
-                SpanDesigner.Outcome o = Double.isInfinite(beat) ? designer.design(p, alternatives)
+                SpanDesigner.Outcome o = Double.isInfinite(beat)
+                        ? designer.design(p, alternatives)
                         : designer.designUnder(p, beat - total - rest);
                 if (o == null || !o.feasible()) {
                     return null;
@@ -260,7 +286,9 @@ public final class LineSpans {
                 next.add(new Part(seg, partName(seg, n), p, o));
                 if (o.feasible()) {
                     var l = o.best().layout();
-                    chosen.set(seg, new SectionShape(l.width(), l.height(), in.section().flange()));
+                    chosen.set(
+                            seg,
+                            new SectionShape(l.width(), l.height(), in.section().flange()));
                 }
             }
             parts = next;
@@ -360,7 +388,9 @@ public final class LineSpans {
             var left = sections.get(SpanProblem.Place.LEFT);
             var right = sections.get(SpanProblem.Place.RIGHT);
             if (left != null) {
-                out.set(p.segment() - 1, least(out.get(p.segment() - 1), left.flexure().epsT()));
+                out.set(
+                        p.segment() - 1,
+                        least(out.get(p.segment() - 1), left.flexure().epsT()));
             }
             if (right != null) {
                 out.set(p.segment(), least(out.get(p.segment()), right.flexure().epsT()));
@@ -416,17 +446,21 @@ public final class LineSpans {
             Double ml = s.mLeftFace() < -NEGLIGIBLE * big ? s.mLeftFace() : null;
             Double mr = s.mRightFace() < -NEGLIGIBLE * big ? s.mRightFace() : null;
             Double mm = s.mSpanMax() > NEGLIGIBLE * big ? s.mSpanMax() : null;
-            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(ml == null ? null : s.deadLeft(),
-                    mm == null ? null : s.deadMid(), mr == null ? null : s.deadRight(),
-                    ml == null ? null : s.deflectionLeft(), mm == null ? null : s.deflectionMid(),
-                    mr == null ? null : s.deflectionRight(), in.sustainedLive());
+            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(
+                    ml == null ? null : s.deadLeft(),
+                    mm == null ? null : s.deadMid(),
+                    mr == null ? null : s.deadRight(),
+                    ml == null ? null : s.deflectionLeft(),
+                    mm == null ? null : s.deflectionMid(),
+                    mr == null ? null : s.deflectionRight(),
+                    in.sustainedLive());
             out.add(problem(in, line, s.index(), n, s.clear(), ml, mm, mr, s.vLeftD(), s.vRightD())
                     .withAnalysis(service, spanShear(line, r, s)));
         }
         for (LineResult.OverhangValues o : r.overhangs()) {
             int seg = o.side().equals("left") ? 0 : n + 1;
-            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(o.deadFace(), null, null,
-                    o.totalFace(), null, null, in.sustainedLive());
+            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(
+                    o.deadFace(), null, null, o.totalFace(), null, null, in.sustainedLive());
             out.add(cantilever(in, line, seg, n, o.clear(), o.mFace(), o.vD())
                     .withAnalysis(service, overhangShear(line, r, seg)));
         }
@@ -438,27 +472,82 @@ public final class LineSpans {
         int n = in.spans().size();
         for (Coefficients.SpanValues s : c) {
             // Table 6.5.4 gives the shear at the face; taken there (the section at d would need 9.4.3.2)
-            out.add(problem(in, line, s.index(), n, s.clear(), s.mLeftFace() < 0 ? s.mLeftFace() : null, s.mSpan(),
-                    s.mRightFace() < 0 ? s.mRightFace() : null, s.vLeftFace(), s.vRightFace()));
+            out.add(problem(
+                    in,
+                    line,
+                    s.index(),
+                    n,
+                    s.clear(),
+                    s.mLeftFace() < 0 ? s.mLeftFace() : null,
+                    s.mSpan(),
+                    s.mRightFace() < 0 ? s.mRightFace() : null,
+                    s.vLeftFace(),
+                    s.vRightFace()));
         }
         return out;
     }
 
-    private SpanProblem problem(LineInput in, Line line, int s, int n, double clear, Double ml, Double mm, Double mr,
-            double vl, double vr) {
+    private SpanProblem problem(
+            LineInput in,
+            Line line,
+            int s,
+            int n,
+            double clear,
+            Double ml,
+            Double mm,
+            Double mr,
+            double vl,
+            double vr) {
         // Table 9.3.1.1's end conditions: a span is continuous over an interior support
         int continuous = (s > 1 ? 1 : 0) + (s < n ? 1 : 0);
-        EndCondition ends = continuous == 0 ? EndCondition.SIMPLE : continuous == 1 ? EndCondition.ONE_END_CONTINUOUS
-                : EndCondition.BOTH_ENDS_CONTINUOUS;
-        return new SpanProblem(in.id() + "/span " + s, settings.materials(), settings.detailing(), settings.code(), space,
-                clear, ends, ml, mm, mr, vl, vr, service(in, line, s), SpanChecks.Limits.DEFAULT, in.maxDepth(), null,
-                flange(in, clear), false, maxBarSizes, barsPerTwoLegs);
+        EndCondition ends = continuous == 0
+                ? EndCondition.SIMPLE
+                : continuous == 1 ? EndCondition.ONE_END_CONTINUOUS : EndCondition.BOTH_ENDS_CONTINUOUS;
+        return new SpanProblem(
+                in.id() + "/span " + s,
+                settings.materials(),
+                settings.detailing(),
+                settings.code(),
+                space,
+                clear,
+                ends,
+                ml,
+                mm,
+                mr,
+                vl,
+                vr,
+                service(in, line, s),
+                SpanChecks.Limits.DEFAULT,
+                in.maxDepth(),
+                null,
+                flange(in, clear),
+                false,
+                maxBarSizes,
+                barsPerTwoLegs);
     }
 
     private SpanProblem cantilever(LineInput in, Line line, int seg, int n, double clear, double m, double v) {
-        return new SpanProblem(in.id() + "/" + partName(seg, n), settings.materials(), settings.detailing(),
-                settings.code(), space, clear, EndCondition.CANTILEVER, m, null, null, v, null, service(in, line, seg),
-                SpanChecks.Limits.DEFAULT, in.maxDepth(), null, null, false, maxBarSizes, barsPerTwoLegs);
+        return new SpanProblem(
+                in.id() + "/" + partName(seg, n),
+                settings.materials(),
+                settings.detailing(),
+                settings.code(),
+                space,
+                clear,
+                EndCondition.CANTILEVER,
+                m,
+                null,
+                null,
+                v,
+                null,
+                service(in, line, seg),
+                SpanChecks.Limits.DEFAULT,
+                in.maxDepth(),
+                null,
+                null,
+                false,
+                maxBarSizes,
+                barsPerTwoLegs);
     }
 
     /**
@@ -517,8 +606,12 @@ public final class LineSpans {
         if (f == null) {
             return null;
         }
-        return Flange.given(f.given(), f.thickness(), f.oneSided(),
-                Double.isNaN(f.clearToNextWeb()) ? null : f.clearToNextWeb(), clear);
+        return Flange.given(
+                f.given(),
+                f.thickness(),
+                f.oneSided(),
+                Double.isNaN(f.clearToNextWeb()) ? null : f.clearToNextWeb(),
+                clear);
     }
 
     /** Equivalent uniform service loads of a segment: its whole dead and live load over its length. */

@@ -9,8 +9,14 @@ import java.util.List;
  * The answer for one beam: optimal, feasible (time limit) or infeasible with a diagnosis; the proof's
  * search counts are the candidate generator's.
  */
-public record DesignOutcome(SectionProblem problem, String status, Design best, List<Design> alternatives,
-        Proof<SectionGenerator.Stats> proof, List<Binding> binding, Diagnosis diagnosis) {
+public record DesignOutcome(
+        SectionProblem problem,
+        String status,
+        Design best,
+        List<Design> alternatives,
+        Proof<SectionGenerator.Stats> proof,
+        List<Binding> binding,
+        Diagnosis diagnosis) {
 
     public DesignOutcome {
         alternatives = List.copyOf(alternatives);

@@ -1,11 +1,11 @@
 package barfit.design.section;
 
+import barfit.catalogs.BarSize;
 import barfit.design.Binding;
 import barfit.design.CostModel;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.design.TensionSearch;
-import barfit.catalogs.BarSize;
 import barfit.section.BarSpacing;
 import barfit.section.BeamSection;
 import barfit.section.CheckReport;
@@ -13,7 +13,6 @@ import barfit.section.CheckResult;
 import barfit.section.Demand;
 import barfit.section.SectionChecks;
 import barfit.section.Stirrups;
-import barfit.section.trail.Q;
 import barfit.section.trail.Trail;
 import java.util.ArrayList;
 import java.util.List;
@@ -37,7 +36,8 @@ public final class SectionDesigner {
         List<Candidate> cands = gen.candidates();
         if (cands.isEmpty()) {
             var proof = Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options);
-            return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), SectionDiagnoser.diagnose(p, cost));
+            return new DesignOutcome(
+                    p, "infeasible", null, List.of(), proof, List.of(), SectionDiagnoser.diagnose(p, cost));
         }
         SectionSelection sel = new SectionSelection();
         List<Integer> all = new ArrayList<>();
@@ -73,8 +73,8 @@ public final class SectionDesigner {
             sel.exclude(i);
         }
         String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
-        var proof = Proof.solved(first.status(), first.objective(), first.bound(), CostModel.UNITS, first.stats(),
-                gen.stats(), options);
+        var proof = Proof.solved(
+                first.status(), first.objective(), first.bound(), CostModel.UNITS, first.stats(), gen.stats(), options);
         return new DesignOutcome(p, status, best, alts, proof, binding(p, best.layout()), null);
     }
 
@@ -108,7 +108,8 @@ public final class SectionDesigner {
     /** The section model's checks of a layout, with the office's legs rule when the search has one. */
     static CheckReport check(SectionProblem p, SectionLayout l, Trail trail) {
         BeamSection s = l.section(p.materials(), p.detailing(), p.code());
-        return SectionChecks.run(s, new Demand(p.mu(), p.vu()), p.span(), trail, true, p.space().practice());
+        return SectionChecks.run(
+                s, new Demand(p.mu(), p.vu()), p.span(), trail, true, p.space().practice());
     }
 
     private static List<String> failingIds(SectionProblem p, SectionLayout l) {
@@ -137,8 +138,17 @@ public final class SectionDesigner {
             for (int c : fewer) {
                 counts.add(c);
             }
-            SectionLayout lean = new SectionLayout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, counts,
-                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            SectionLayout lean = new SectionLayout(
+                    l.width(),
+                    l.height(),
+                    l.flange(),
+                    l.bending(),
+                    tensionBar,
+                    counts,
+                    l.compressionBar(),
+                    l.compressionCount(),
+                    l.stirrups(),
+                    l.skin());
             add(out, failingIds(p, lean), Binding.Leaner.ONE_BAR_FEWER, tensionBars - 1, tensionBar);
         }
         // one depth step shallower, same bars
@@ -146,8 +156,17 @@ public final class SectionDesigner {
         int depthIndex = depths.indexOf(l.height());
         if (depthIndex > 0) {
             double shallower = depths.get(depthIndex - 1);
-            SectionLayout lean = new SectionLayout(l.width(), shallower, l.flange(), l.bending(), tensionBar, l.tensionCounts(),
-                    l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            SectionLayout lean = new SectionLayout(
+                    l.width(),
+                    shallower,
+                    l.flange(),
+                    l.bending(),
+                    tensionBar,
+                    l.tensionCounts(),
+                    l.compressionBar(),
+                    l.compressionCount(),
+                    l.stirrups(),
+                    l.skin());
             add(out, failingIds(p, lean), Binding.Leaner.SHALLOWER, shallower, null);
         }
         if (p.maxDepth() != null && l.height() >= p.maxDepth() - 1e-9) {
@@ -157,8 +176,17 @@ public final class SectionDesigner {
         List<Double> widths = p.widths();
         int widthIndex = widths.indexOf(l.width());
         if (widthIndex > 0) {
-            SectionLayout lean = new SectionLayout(widths.get(widthIndex - 1), l.height(), l.flange(), l.bending(), tensionBar,
-                    l.tensionCounts(), l.compressionBar(), l.compressionCount(), l.stirrups(), l.skin());
+            SectionLayout lean = new SectionLayout(
+                    widths.get(widthIndex - 1),
+                    l.height(),
+                    l.flange(),
+                    l.bending(),
+                    tensionBar,
+                    l.tensionCounts(),
+                    l.compressionBar(),
+                    l.compressionCount(),
+                    l.stirrups(),
+                    l.skin());
             add(out, failingIds(p, lean), Binding.Leaner.NARROWER, widths.get(widthIndex - 1), null);
         }
         // stirrups one spacing step wider
@@ -166,17 +194,36 @@ public final class SectionDesigner {
         int spacingIndex = spacings.indexOf(l.stirrups().spacing());
         if (spacingIndex >= 0 && spacingIndex < spacings.size() - 1) {
             Stirrups wider = new Stirrups(l.stirrups().bar(), l.stirrups().legs(), spacings.get(spacingIndex + 1));
-            SectionLayout lean = new SectionLayout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, l.tensionCounts(),
-                    l.compressionBar(), l.compressionCount(), wider, l.skin());
+            SectionLayout lean = new SectionLayout(
+                    l.width(),
+                    l.height(),
+                    l.flange(),
+                    l.bending(),
+                    tensionBar,
+                    l.tensionCounts(),
+                    l.compressionBar(),
+                    l.compressionCount(),
+                    wider,
+                    l.skin());
             add(out, failingIds(p, lean), Binding.Leaner.STIRRUPS_WIDER_APART, spacings.get(spacingIndex + 1), null);
         }
         // fewer stirrup legs, same spacing: says when the office's legs rule (or the code's) decided them
         List<Integer> legs = p.space().stirrupLegs();
         int legsIndex = legs.indexOf(l.stirrups().legs());
         if (legsIndex > 0) {
-            Stirrups fewerLegs = new Stirrups(l.stirrups().bar(), legs.get(legsIndex - 1), l.stirrups().spacing());
-            SectionLayout lean = new SectionLayout(l.width(), l.height(), l.flange(), l.bending(), tensionBar, l.tensionCounts(),
-                    l.compressionBar(), l.compressionCount(), fewerLegs, l.skin());
+            Stirrups fewerLegs = new Stirrups(
+                    l.stirrups().bar(), legs.get(legsIndex - 1), l.stirrups().spacing());
+            SectionLayout lean = new SectionLayout(
+                    l.width(),
+                    l.height(),
+                    l.flange(),
+                    l.bending(),
+                    tensionBar,
+                    l.tensionCounts(),
+                    l.compressionBar(),
+                    l.compressionCount(),
+                    fewerLegs,
+                    l.skin());
             add(out, failingIds(p, lean), Binding.Leaner.FEWER_LEGS, legs.get(legsIndex - 1), null);
         }
         return out;

@@ -1,16 +1,16 @@
 package barfit.design.section;
 
+import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.FrameEnumerator;
-import barfit.catalogs.BarSize;
 import barfit.section.BarSpacing;
 import barfit.section.BeamSection;
 import barfit.section.CheckReport;
 import barfit.section.Demand;
 import barfit.section.Detailing;
 import barfit.section.SectionChecks;
-import barfit.section.StirrupRules;
 import barfit.section.SkinBars;
+import barfit.section.StirrupRules;
 import barfit.section.Stirrups;
 import barfit.section.trail.Trail;
 import java.util.ArrayList;
@@ -46,8 +46,8 @@ public final class SectionExhaustive {
         long checked = 0;
         java.util.Map<String, Long> perKey = new java.util.HashMap<>();
         Demand demand = new Demand(p.mu(), p.vu());
-        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(),
-                p.detailing())) {
+        for (FrameEnumerator.Cell cell :
+                FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(), p.detailing())) {
             double b = cell.width();
             double h = cell.height();
             BarSize ds = cell.stirrupBar();
@@ -57,7 +57,8 @@ public final class SectionExhaustive {
                 int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
                 for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
                     for (List<Integer> counts : countVectors(layers, nmax)) {
-                        // the cheapest stirrups per range of legs the bars allow (at least what the busiest layer needs, at most
+                        // the cheapest stirrups per range of legs the bars allow (at least what the busiest layer
+                        // needs, at most
                         // one per bar of the outer tension layer and of the compression layer)
                         java.util.Map<String, java.util.Optional<Stirrups>> byLegs = new java.util.HashMap<>();
                         for (BarSize c : p.space().compressionSizes()) {
@@ -67,8 +68,20 @@ public final class SectionExhaustive {
                             }
                             for (int m = 2; m <= compressionFit; m++) {
                                 // the ties of 9.7.6.4 where these compression bars are relied on
-                                SectionLayout bars = new SectionLayout(b, h, p.flange(), p.bending(), t, counts, c, m,
-                                        new Stirrups(ds, 2, p.space().stirrupSpacings().get(0)), skin);
+                                SectionLayout bars = new SectionLayout(
+                                        b,
+                                        h,
+                                        p.flange(),
+                                        p.bending(),
+                                        t,
+                                        counts,
+                                        c,
+                                        m,
+                                        new Stirrups(
+                                                ds,
+                                                2,
+                                                p.space().stirrupSpacings().get(0)),
+                                        skin);
                                 StirrupRules.TieDemand ties = StirrupRules.ties(
                                         bars.section(p.materials(), p.detailing(), p.code()), p.bending(), p.mu());
                                 if (!ties.sizeOk(ds.diameter())) {
@@ -78,15 +91,25 @@ public final class SectionExhaustive {
                                 int most = Math.min(counts.get(0), m);
                                 double maxSpacing = ties.maxSpacing();
                                 final BarSize compressionBar = c;
-                                Stirrups st = byLegs.computeIfAbsent(need + "/" + most + "/" + maxSpacing,
-                                        k -> java.util.Optional.ofNullable(
-                                                cheapestStirrups(p, b, h, det, t, counts, compressionBar, need, most,
+                                Stirrups st = byLegs.computeIfAbsent(
+                                                need + "/" + most + "/" + maxSpacing,
+                                                k -> java.util.Optional.ofNullable(cheapestStirrups(
+                                                        p,
+                                                        b,
+                                                        h,
+                                                        det,
+                                                        t,
+                                                        counts,
+                                                        compressionBar,
+                                                        need,
+                                                        most,
                                                         maxSpacing)))
                                         .orElse(null);
                                 if (st == null) {
                                     continue;
                                 }
-                                SectionLayout lay = new SectionLayout(b, h, p.flange(), p.bending(), t, counts, c, m, st, skin);
+                                SectionLayout lay =
+                                        new SectionLayout(b, h, p.flange(), p.bending(), t, counts, c, m, st, skin);
                                 BeamSection s = lay.section(p.materials(), p.detailing(), p.code());
                                 checked++;
                                 CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
@@ -127,8 +150,17 @@ public final class SectionExhaustive {
     }
 
     /** The cheapest stirrup option whose shear checks pass for these tension bars (any hangers). */
-    private Stirrups cheapestStirrups(SectionProblem p, double b, double h, Detailing det, BarSize t,
-            List<Integer> counts, BarSize c, int minLegs, int maxLegs, double maxSpacing) {
+    private Stirrups cheapestStirrups(
+            SectionProblem p,
+            double b,
+            double h,
+            Detailing det,
+            BarSize t,
+            List<Integer> counts,
+            BarSize c,
+            int minLegs,
+            int maxLegs,
+            double maxSpacing) {
         Stirrups best = null;
         double bestCost = Double.POSITIVE_INFINITY;
         for (int legs : p.space().stirrupLegs()) {
@@ -143,7 +175,8 @@ public final class SectionExhaustive {
                 SectionLayout lay = new SectionLayout(b, h, p.flange(), p.bending(), t, counts, c, 2, st, null);
                 BeamSection sec = lay.section(p.materials(), p.detailing(), p.code());
                 var fr = barfit.section.Flexure.analyse(sec, p.bending());
-                boolean ok = p.vu() == null ? SectionChecks.minimumStirrupsPass(sec, fr.d(), fr.tensionSteelArea())
+                boolean ok = p.vu() == null
+                        ? SectionChecks.minimumStirrupsPass(sec, fr.d(), fr.tensionSteelArea())
                         : SectionChecks.shearPasses(sec, p.vu(), fr.d(), fr.tensionSteelArea());
                 double sc = cost.stirrups(b, h, st);
                 if (ok && sc < bestCost - 1e-12) {

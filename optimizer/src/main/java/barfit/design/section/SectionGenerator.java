@@ -1,11 +1,11 @@
 package barfit.design.section;
 
+import barfit.catalogs.BarSize;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
 import barfit.design.FrameEnumerator;
 import barfit.design.StirrupChooser;
 import barfit.design.TensionSearch;
-import barfit.catalogs.BarSize;
 import barfit.section.BarLayer;
 import barfit.section.BarSpacing;
 import barfit.section.BeamSection;
@@ -13,12 +13,12 @@ import barfit.section.Bending;
 import barfit.section.CheckResult;
 import barfit.section.Detailing;
 import barfit.section.SectionChecks;
-import barfit.section.StirrupRules;
 import barfit.section.SectionProbe;
 import barfit.section.SectionShape;
-import barfit.section.StrengthBound;
 import barfit.section.SkinBars;
+import barfit.section.StirrupRules;
 import barfit.section.Stirrups;
+import barfit.section.StrengthBound;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -44,12 +44,17 @@ import java.util.Map;
  */
 public final class SectionGenerator {
     /** What the generation did, for the proof statement and the benchmark. */
-    public record Stats(int frames, int framesEvaluated, int framesPrunedByBound, int framesFailingFrameChecks,
-            int flexureSolves, int shearEvaluations, int candidates, long nanos) {
-    }
+    public record Stats(
+            int frames,
+            int framesEvaluated,
+            int framesPrunedByBound,
+            int framesFailingFrameChecks,
+            int flexureSolves,
+            int shearEvaluations,
+            int candidates,
+            long nanos) {}
 
-    public record Output(List<Candidate> candidates, Stats stats) {
-    }
+    public record Output(List<Candidate> candidates, Stats stats) {}
 
     private final SectionProblem p;
     private final CostModel cost;
@@ -63,6 +68,7 @@ public final class SectionGenerator {
 
     /** Best candidate per distinct key, in discovery order. */
     private final Map<String, Candidate> best = new LinkedHashMap<>();
+
     private int keep;
     private double cachedBound = Double.POSITIVE_INFINITY;
     private boolean boundDirty = true;
@@ -80,18 +86,29 @@ public final class SectionGenerator {
         List<BarSize> comp = new ArrayList<>(problem.space().compressionSizes());
         comp.sort(Comparator.comparingDouble(BarSize::massPerMetre));
         this.compressionSizes = comp;
-        this.smallestTension = tensionSizes.stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
+        this.smallestTension = tensionSizes.stream()
+                .min(Comparator.comparingDouble(BarSize::diameter))
+                .orElseThrow();
     }
 
     /** A concrete frame: width, height and the stirrup bar that positions the main bars. */
-    private record Frame(double b, double h, BarSize stirrupBar, Detailing det, CostBreakdown frameCost,
-            SkinBars skin, double skinCost, double lowerBound, double tensionAreaLb, double cheapestStirrups,
+    private record Frame(
+            double b,
+            double h,
+            BarSize stirrupBar,
+            Detailing det,
+            CostBreakdown frameCost,
+            SkinBars skin,
+            double skinCost,
+            double lowerBound,
+            double tensionAreaLb,
+            double cheapestStirrups,
             double[] stirrupLb) {
         /** The stirrup lower bound, made tight (one shear search) only when the frame is reached. */
         double stirrupLb(SectionGenerator g) {
             if (Double.isNaN(stirrupLb[0])) {
-                Stirrups s = g.cheapestStirrups(b, h, det, h - det.firstLayerCentroid(g.smallestTension.diameter()),
-                        g.maxTensionArea(b, det));
+                Stirrups s = g.cheapestStirrups(
+                        b, h, det, h - det.firstLayerCentroid(g.smallestTension.diameter()), g.maxTensionArea(b, det));
                 stirrupLb[0] = s == null ? Double.POSITIVE_INFINITY : g.cost.stirrups(b, h, s);
             }
             return stirrupLb[0];
@@ -125,9 +142,19 @@ public final class SectionGenerator {
             }
         }
         List<Candidate> out = new ArrayList<>(best.values());
-        out.sort(Comparator.comparingLong(Candidate::units).thenComparing(c -> c.layout().distinctKey()));
-        return new Output(out, new Stats(frames.size(), evaluated, pruned, frameFails, probe.solves(),
-                chooser.evaluations(), out.size(), System.nanoTime() - t0));
+        out.sort(Comparator.comparingLong(Candidate::units)
+                .thenComparing(c -> c.layout().distinctKey()));
+        return new Output(
+                out,
+                new Stats(
+                        frames.size(),
+                        evaluated,
+                        pruned,
+                        frameFails,
+                        probe.solves(),
+                        chooser.evaluations(),
+                        out.size(),
+                        System.nanoTime() - t0));
     }
 
     /** The keep-th cheapest distinct cost found so far (infinite until there are that many). */
@@ -161,19 +188,22 @@ public final class SectionGenerator {
         for (BarSize bs : compressionSizes) {
             massPerArea = Math.min(massPerArea, bs.massPerMetre() / bs.area());
         }
-        double minPair = 2 * tensionSizes.stream().mapToDouble(BarSize::area).min().orElse(0)
+        double minPair = 2
+                        * tensionSizes.stream().mapToDouble(BarSize::area).min().orElse(0)
                 + 2 * compressionSizes.stream().mapToDouble(BarSize::area).min().orElse(0);
-        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(),
-                p.detailing())) {
+        for (FrameEnumerator.Cell cell :
+                FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(), p.detailing())) {
             double b = cell.width();
             double h = cell.height();
             BarSize ds = cell.stirrupBar();
             Detailing det = cell.detailing();
             CostBreakdown frameCost = cost.frame(b, h, p.flange());
             SkinBars skin = SectionLayout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-            double skinCost = skin == null ? 0 : cost.bars(skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()));
+            double skinCost =
+                    skin == null ? 0 : cost.bars(skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()));
             double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
-            double steelLb = cost.mainBarPricePerKg() * massPerArea
+            double steelLb = cost.mainBarPricePerKg()
+                    * massPerArea
                     * Math.max(areaLb + 2 * compressionSizes.get(0).area(), minPair);
             double cheapestStirrups = Double.POSITIVE_INFINITY;
             for (int legs : p.space().stirrupLegs()) {
@@ -182,11 +212,13 @@ public final class SectionGenerator {
                 }
             }
             double lb = frameCost.total() + skinCost + steelLb + cheapestStirrups;
-            out.add(new Frame(b, h, ds, det, frameCost, skin, skinCost, lb, areaLb, cheapestStirrups,
-                    new double[] {Double.NaN}));
+            out.add(new Frame(
+                    b, h, ds, det, frameCost, skin, skinCost, lb, areaLb, cheapestStirrups, new double[] {Double.NaN}));
         }
-        out.sort(Comparator.comparingDouble(Frame::lowerBound).thenComparingDouble(Frame::b)
-                .thenComparingDouble(Frame::h).thenComparingDouble(f -> f.stirrupBar().diameter()));
+        out.sort(Comparator.comparingDouble(Frame::lowerBound)
+                .thenComparingDouble(Frame::b)
+                .thenComparingDouble(Frame::h)
+                .thenComparingDouble(f -> f.stirrupBar().diameter()));
         return out;
     }
 
@@ -213,7 +245,8 @@ public final class SectionGenerator {
         double dMax = h - det.firstLayerCentroid(dbMin);
         double widest = p.flange() != null ? p.flange().on(b).width() : b; // at its effective width on this web
         double fy = p.materials().fy();
-        return StrengthBound.minTensionArea(p.mu(), dMax, compArea, dpMin, dpMax, widest, p.materials().fc(), fy);
+        return StrengthBound.minTensionArea(
+                p.mu(), dMax, compArea, dpMin, dpMax, widest, p.materials().fc(), fy);
     }
 
     /** The most tension steel any layout of this width can hold: the largest Vc any layout could have. */
@@ -231,8 +264,7 @@ public final class SectionGenerator {
     }
 
     /** A compression layer option: bar size and count, with its cost per metre. */
-    private record Comp(BarSize bar, int count, double cost) {
-    }
+    private record Comp(BarSize bar, int count, double cost) {}
 
     /** Evaluates one frame; false when its frame-level checks rule it out entirely. */
     private boolean evaluateFrame(Frame f) {
@@ -258,16 +290,21 @@ public final class SectionGenerator {
                 break; // the lightest size only
             }
         }
-        comps.sort(Comparator.comparingDouble(Comp::cost).thenComparingDouble(x -> x.bar().diameter())
+        comps.sort(Comparator.comparingDouble(Comp::cost)
+                .thenComparingDouble(x -> x.bar().diameter())
                 .thenComparingInt(Comp::count));
         if (comps.isEmpty()) {
             return false;
         }
         double cheapestComp = comps.get(0).cost();
-        int maxLegs = p.space().stirrupLegs().stream().mapToInt(Integer::intValue).max().orElse(2);
+        int maxLegs = p.space().stirrupLegs().stream()
+                .mapToInt(Integer::intValue)
+                .max()
+                .orElse(2);
         for (BarSize t : tensionSizes) {
             int nmax = BarSpacing.maxBars(f.b(), f.det(), t, p.materials(), p.code());
-            int ncr = BarSpacing.minBarsForCrackControl(f.b(), f.det(), t, p.materials().fy(), p.code());
+            int ncr = BarSpacing.minBarsForCrackControl(
+                    f.b(), f.det(), t, p.materials().fy(), p.code());
             int first = Math.max(2, ncr);
             if (nmax < first) {
                 continue;
@@ -310,14 +347,15 @@ public final class SectionGenerator {
                     }
                     int nMin = Arrays.stream(counts).sum();
                     tiesRelied = false;
-                    boolean ductilityStopped = scanUpward(f, shape, key, t, nmax, ncr, counts, c, m,
-                            base + cm.cost(), stirLb, stirrupCache);
+                    boolean ductilityStopped = scanUpward(
+                            f, shape, key, t, nmax, ncr, counts, c, m, base + cm.cost(), stirLb, stirrupCache);
                     // later compression layers cost more; they cannot save a bar or make more bars ductile, and
                     // when this one leaves the stirrup legs free (it holds as many as any, needs no more than the
                     // tension bars do, and no more even split of them needs fewer) they cannot allow cheaper
                     // stirrups either
                     int layersUsed = counts.length;
-                    boolean legsFree = m >= maxLegs && p.space().legsFor(m) <= p.space().legsFor(counts[0])
+                    boolean legsFree = m >= maxLegs
+                            && p.space().legsFor(m) <= p.space().legsFor(counts[0])
                             && p.space().legsFor(counts[0]) == p.space().legsFor((nMin + layersUsed - 1) / layersUsed);
                     // ties round compression steel that is relied on ask more of the stirrups as the layer
                     // grows, so a later compression layer may then need fewer legs: keep trying
@@ -333,7 +371,8 @@ public final class SectionGenerator {
     /** Nothing costing this much or more can be among the answers for this key. */
     private double cut(String key) {
         Candidate kb = best.get(key);
-        return Math.min(bound(), kb == null ? Double.POSITIVE_INFINITY : kb.cost().total());
+        return Math.min(
+                bound(), kb == null ? Double.POSITIVE_INFINITY : kb.cost().total());
     }
 
     /**
@@ -342,15 +381,27 @@ public final class SectionGenerator {
      * the section is no longer ductile; returns true in the second case (more compression steel might
      * then allow more bars).
      */
-    private boolean scanUpward(Frame f, SectionShape shape, String key, BarSize t, int nmax, int ncr, int[] counts,
-            BarSize c, int m, double fixed, double stirLb, Map<String, Stirrups> cache) {
+    private boolean scanUpward(
+            Frame f,
+            SectionShape shape,
+            String key,
+            BarSize t,
+            int nmax,
+            int ncr,
+            int[] counts,
+            BarSize c,
+            int m,
+            double fixed,
+            double stirLb,
+            Map<String, Stirrups> cache) {
         int layers = counts.length;
         int first = Math.max(2, ncr);
         int[] split = counts;
         int n = Arrays.stream(counts).sum();
         while (true) {
             Candidate kb0 = best.get(key);
-            double cut0 = Math.min(bound(), kb0 == null ? Double.POSITIVE_INFINITY : kb0.cost().total());
+            double cut0 = Math.min(
+                    bound(), kb0 == null ? Double.POSITIVE_INFINITY : kb0.cost().total());
             if (fixed + cost.bars(t, n) + stirLb >= cut0) {
                 return false;
             }
@@ -371,7 +422,8 @@ public final class SectionGenerator {
                 return false;
             }
             Candidate kb = best.get(key);
-            double cut = Math.min(bound(), kb == null ? Double.POSITIVE_INFINITY : kb.cost().total());
+            double cut = Math.min(
+                    bound(), kb == null ? Double.POSITIVE_INFINITY : kb.cost().total());
             if (fixed + cost.bars(t, n) + stirLb >= cut) {
                 return false;
             }
@@ -413,13 +465,29 @@ public final class SectionGenerator {
     }
 
     /** The layout of the bars just placed in the probe, with its cheapest stirrups, kept if the cheapest for its key. */
-    private void offer(Frame f, SectionShape shape, String key, BarSize t, int[] split, BarSize c, int m,
+    private void offer(
+            Frame f,
+            SectionShape shape,
+            String key,
+            BarSize t,
+            int[] split,
+            BarSize c,
+            int m,
             Map<String, Stirrups> cache) {
         // the ties 9.7.6.4 asks round compression steel relied on, judged on these bars by the section model
-        SectionLayout bars = new SectionLayout(f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m,
-                new Stirrups(f.stirrupBar(), 2, p.space().stirrupSpacings().get(0)), f.skin());
-        StirrupRules.TieDemand ties = StirrupRules.ties(bars.section(p.materials(), p.detailing(), p.code()), bending,
-                p.mu());
+        SectionLayout bars = new SectionLayout(
+                f.b(),
+                f.h(),
+                p.flange(),
+                bending,
+                t,
+                TensionSearch.toList(split),
+                c,
+                m,
+                new Stirrups(f.stirrupBar(), 2, p.space().stirrupSpacings().get(0)),
+                f.skin());
+        StirrupRules.TieDemand ties =
+                StirrupRules.ties(bars.section(p.materials(), p.detailing(), p.code()), bending, p.mu());
         if (ties.required()) {
             tiesRelied = true;
             if (!ties.sizeOk(f.stirrupBar().diameter())) {
@@ -431,7 +499,8 @@ public final class SectionGenerator {
         if (st == null) {
             return;
         }
-        SectionLayout lay = new SectionLayout(f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m, st, f.skin());
+        SectionLayout lay = new SectionLayout(
+                f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m, st, f.skin());
         Candidate cand = new Candidate(lay, lay.cost(cost));
         Candidate kb = best.get(key);
         if (kb == null || cand.units() < kb.units()) {
@@ -445,14 +514,28 @@ public final class SectionGenerator {
      * (the legs the bars per layer and the ties need), at most {@code maxLegs} and at most {@code maxSpacing}
      * apart, cached per frame.
      */
-    private Stirrups stirrups(Frame f, BarSize t, int[] counts, int minLegs, int maxLegs, double maxSpacing,
+    private Stirrups stirrups(
+            Frame f,
+            BarSize t,
+            int[] counts,
+            int minLegs,
+            int maxLegs,
+            double maxSpacing,
             Map<String, Stirrups> cache) {
         String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs + "/" + maxSpacing;
         if (cache.containsKey(key)) {
             return cache.get(key);
         }
-        Stirrups chosen = chooser.cheapest(new SectionShape(f.b(), f.h(), p.flange()), f.det(), probe.d(),
-                probe.tensionArea(), p.vu(), minLegs, maxLegs, maxSpacing, 0);
+        Stirrups chosen = chooser.cheapest(
+                new SectionShape(f.b(), f.h(), p.flange()),
+                f.det(),
+                probe.d(),
+                probe.tensionArea(),
+                p.vu(),
+                minLegs,
+                maxLegs,
+                maxSpacing,
+                0);
         cache.put(key, chosen);
         return chosen;
     }

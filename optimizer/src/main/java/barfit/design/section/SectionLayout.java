@@ -1,8 +1,8 @@
 package barfit.design.section;
 
+import barfit.catalogs.BarSize;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
-import barfit.catalogs.BarSize;
 import barfit.section.BarLayer;
 import barfit.section.BarSpacing;
 import barfit.section.BeamSection;
@@ -66,8 +66,8 @@ public record SectionLayout(
             t.add(new BeamSection.BarGroup(tensionBar, c));
         }
         List<BarLayer> layers = new ArrayList<>(BeamSection.stack(bending.tensionFace(), t, det));
-        layers.addAll(BeamSection.stack(bending.compressionFace(),
-                List.of(new BeamSection.BarGroup(compressionBar, compressionCount)), det));
+        layers.addAll(BeamSection.stack(
+                bending.compressionFace(), List.of(new BeamSection.BarGroup(compressionBar, compressionCount)), det));
         return new BeamSection(shape(), m, det, layers, stirrups, skin, code);
     }
 

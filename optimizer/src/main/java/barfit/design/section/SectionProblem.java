@@ -32,28 +32,27 @@ public record SectionProblem(
     }
 
     public SectionProblem withSpace(SearchSpace s) {
-        return new SectionProblem(id, materials, detailing, code, s, mu, vu, span, maxDepth, fixedWidth, flange,
-                costLength);
+        return new SectionProblem(
+                id, materials, detailing, code, s, mu, vu, span, maxDepth, fixedWidth, flange, costLength);
     }
 
     public SectionProblem withMaxDepth(Double cap) {
-        return new SectionProblem(id, materials, detailing, code, space, mu, vu, span, cap, fixedWidth, flange,
-                costLength);
+        return new SectionProblem(
+                id, materials, detailing, code, space, mu, vu, span, cap, fixedWidth, flange, costLength);
     }
 
     public SectionProblem withFixedWidth(Double w) {
-        return new SectionProblem(id, materials, detailing, code, space, mu, vu, span, maxDepth, w, flange,
-                costLength);
+        return new SectionProblem(id, materials, detailing, code, space, mu, vu, span, maxDepth, w, flange, costLength);
     }
 
     public SectionProblem withMoment(double m) {
-        return new SectionProblem(id, materials, detailing, code, space, m, vu, span, maxDepth, fixedWidth, flange,
-                costLength);
+        return new SectionProblem(
+                id, materials, detailing, code, space, m, vu, span, maxDepth, fixedWidth, flange, costLength);
     }
 
     public SectionProblem withShear(Double v) {
-        return new SectionProblem(id, materials, detailing, code, space, mu, v, span, maxDepth, fixedWidth, flange,
-                costLength);
+        return new SectionProblem(
+                id, materials, detailing, code, space, mu, v, span, maxDepth, fixedWidth, flange, costLength);
     }
 
     /** Widths the search may use. */

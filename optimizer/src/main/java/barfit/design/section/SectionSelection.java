@@ -18,8 +18,7 @@ import java.util.List;
  */
 public final class SectionSelection {
     /** {@code chosen}, {@code objective} and {@code bound} only when the status is OPTIMAL or FEASIBLE. */
-    public record Result(Proof.Status status, boolean[] chosen, long objective, long bound, Proof.SolverStats stats) {
-    }
+    public record Result(Proof.Status status, boolean[] chosen, long objective, long bound, Proof.SolverStats stats) {}
 
     private final CpModel model = new CpModel();
     private final List<Literal> vars = new ArrayList<>();
@@ -77,7 +76,11 @@ public final class SectionSelection {
             obj = Math.round(solver.objectiveValue());
             bound = Math.round(solver.bestObjectiveBound());
         }
-        return new Result(status, chosen, obj, bound, new Proof.SolverStats(v.length, solver.numConflicts(),
-                solver.numBranches(), solver.wallTime()));
+        return new Result(
+                status,
+                chosen,
+                obj,
+                bound,
+                new Proof.SolverStats(v.length, solver.numConflicts(), solver.numBranches(), solver.wallTime()));
     }
 }

@@ -19,8 +19,7 @@ import java.util.Objects;
  */
 final class Combinations {
     /** A mid-span option with its cheapest compatible supports (null where there is no support), and the total. */
-    record Cheapest(MidOption mid, SupportOption left, SupportOption right, double cost) {
-    }
+    record Cheapest(MidOption mid, SupportOption left, SupportOption right, double cost) {}
 
     private final SpanProblem p;
     private final List<SpanProblem.Zone> zones;
@@ -49,8 +48,13 @@ final class Combinations {
      * The support options compatible with a mid-span option, cheapest first ({@code bySize} from
      * {@link #bySize}); a single null where the span has no such support.
      */
-    static List<SupportOption> compatible(Map<BarSize, List<SupportOption>> bySize, BarSize bar, int continuous,
-            MidOption m, BottomBars bottom, boolean present) {
+    static List<SupportOption> compatible(
+            Map<BarSize, List<SupportOption>> bySize,
+            BarSize bar,
+            int continuous,
+            MidOption m,
+            BottomBars bottom,
+            boolean present) {
         List<SupportOption> out = new ArrayList<>();
         if (!present) {
             out.add(null);
@@ -64,8 +68,8 @@ final class Combinations {
         return out;
     }
 
-    private static SupportOption cheapestIn(Map<BarSize, List<SupportOption>> bySize, BarSize bar, int continuous,
-            MidOption m, BottomBars bottom) {
+    private static SupportOption cheapestIn(
+            Map<BarSize, List<SupportOption>> bySize, BarSize bar, int continuous, MidOption m, BottomBars bottom) {
         for (SupportOption s : bySize.getOrDefault(bar, List.of())) {
             if (fits(s, continuous, m, bottom)) {
                 return s;
@@ -102,7 +106,10 @@ final class Combinations {
      * A mid-span option with the cheapest support options compatible with it, and what the frame, top
      * option, mid-span option and supports cost together; null where no combination is allowed.
      */
-    Cheapest cheapestWith(SpanFrame f, MidOption m, Map<BarSize, List<SupportOption>> lefts,
+    Cheapest cheapestWith(
+            SpanFrame f,
+            MidOption m,
+            Map<BarSize, List<SupportOption>> lefts,
             Map<BarSize, List<SupportOption>> rights) {
         TopOption t = m.top();
         if (!sizesAllowed(m)) {
@@ -139,7 +146,8 @@ final class Combinations {
             Cheapest c = cheapestWith(fs.frame(), m, lefts, rights);
             if (c != null && c.cost() < best - 1e-9) {
                 SpanLayout layout = layout(fs.frame(), m, c.left(), c.right());
-                if (fs.frame().deflection() && !SpanVerifier.verify(p, layout, false).ok()) {
+                if (fs.frame().deflection()
+                        && !SpanVerifier.verify(p, layout, false).ok()) {
                     continue;
                 }
                 best = c.cost();
@@ -165,7 +173,9 @@ final class Combinations {
         Map<String, Double> cheapestMidPlusTop = new HashMap<>();
         for (MidOption m : fs.mids()) {
             String topSize = m.top().bar().designation();
-            double least = frame + m.top().cost() + m.cost()
+            double least = frame
+                    + m.top().cost()
+                    + m.cost()
                     + (p.leftSupport() ? cheapestLeft.getOrDefault(topSize, 1e300) : 0)
                     + (p.rightSupport() ? cheapestRight.getOrDefault(topSize, 1e300) : 0);
             if (least <= incumbent + 1e-9) {
@@ -173,11 +183,15 @@ final class Combinations {
                 cheapestMidPlusTop.merge(topSize, m.top().cost() + m.cost(), Math::min);
             }
         }
-        List<TopOption> tops = fs.tops().stream().filter(t -> mids.stream().anyMatch(m -> m.top().equals(t))).toList();
+        List<TopOption> tops = fs.tops().stream()
+                .filter(t -> mids.stream().anyMatch(m -> m.top().equals(t)))
+                .toList();
         List<SupportOption> lefts = new ArrayList<>();
         for (SupportOption s : fs.lefts()) {
             String topSize = s.bar().designation();
-            double least = frame + cheapestMidPlusTop.getOrDefault(topSize, 1e300) + s.cost()
+            double least = frame
+                    + cheapestMidPlusTop.getOrDefault(topSize, 1e300)
+                    + s.cost()
                     + (p.rightSupport() ? cheapestRight.getOrDefault(topSize, 1e300) : 0);
             if (least <= incumbent + 1e-9) {
                 lefts.add(s);
@@ -186,7 +200,9 @@ final class Combinations {
         List<SupportOption> rights = new ArrayList<>();
         for (SupportOption s : fs.rights()) {
             String topSize = s.bar().designation();
-            double least = frame + cheapestMidPlusTop.getOrDefault(topSize, 1e300) + s.cost()
+            double least = frame
+                    + cheapestMidPlusTop.getOrDefault(topSize, 1e300)
+                    + s.cost()
                     + (p.leftSupport() ? cheapestLeft.getOrDefault(topSize, 1e300) : 0);
             if (least <= incumbent + 1e-9) {
                 rights.add(s);
@@ -208,10 +224,26 @@ final class Combinations {
             }
             stirrups.add(s);
         }
-        double extLeft = left == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
-        double extRight = right == null ? 0 : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
-        return new SpanLayout(f.b(), f.h(), p.flange(), f.stirrupBar(), f.skin(), m.top().bar(), m.top().continuous(),
-                left == null ? null : left.counts(), right == null ? null : right.counts(), m.bar(), m.counts(),
-                stirrups, extLeft, extRight);
+        double extLeft = left == null
+                ? 0
+                : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
+        double extRight = right == null
+                ? 0
+                : Extension.of(p, f.b(), f.h(), f.det(), m.top().bar()).length();
+        return new SpanLayout(
+                f.b(),
+                f.h(),
+                p.flange(),
+                f.stirrupBar(),
+                f.skin(),
+                m.top().bar(),
+                m.top().continuous(),
+                left == null ? null : left.counts(),
+                right == null ? null : right.counts(),
+                m.bar(),
+                m.counts(),
+                stirrups,
+                extLeft,
+                extRight);
     }
 }

@@ -26,8 +26,14 @@ final class DeflectionScreen {
     private final List<SupportOption> lefts = new ArrayList<>();
     private final List<SupportOption> rights = new ArrayList<>();
 
-    DeflectionScreen(SpanProblem problem, SpanSections sections, SpanFrame f, SectionShape shape,
-            List<MidOption> allMids, List<SupportOption> allLefts, List<SupportOption> allRights) {
+    DeflectionScreen(
+            SpanProblem problem,
+            SpanSections sections,
+            SpanFrame f,
+            SectionShape shape,
+            List<MidOption> allMids,
+            List<SupportOption> allLefts,
+            List<SupportOption> allRights) {
         this.p = problem;
         SpanChecks.ServiceMoments service = p.serviceMoments();
         double ec = Deflection.ec(p.materials(), p.code());
@@ -89,7 +95,12 @@ final class DeflectionScreen {
         }
         for (SupportOption r : allRights) {
             String topSize = r.bar().designation();
-            if (passes(ec, service, stiffestLeft.get(topSize), stiffestMidIe.get(topSize), rightIe.get(r),
+            if (passes(
+                    ec,
+                    service,
+                    stiffestLeft.get(topSize),
+                    stiffestMidIe.get(topSize),
+                    rightIe.get(r),
                     mostMidRho.get(topSize))) {
                 rights.add(r);
             }
@@ -105,14 +116,22 @@ final class DeflectionScreen {
     }
 
     /** Whether the span passes its deflection limits with these sections' Ie (null: none found) and ρ'. */
-    private boolean passes(double ec, SpanChecks.ServiceMoments service, double[] left, double[] mid, double[] right,
-            double rho) {
-        if ((p.leftSupport() && left == null) || (p.rightSupport() && right == null)
+    private boolean passes(
+            double ec, SpanChecks.ServiceMoments service, double[] left, double[] mid, double[] right, double rho) {
+        if ((p.leftSupport() && left == null)
+                || (p.rightSupport() && right == null)
                 || (p.midSection() && mid == null)) {
             return false;
         }
-        double[] deflections = SpanChecks.deflections(p.span(), p.ends(), ec, service, p.leftSupport() ? left : null,
-                mid, p.rightSupport() ? right : null, rho);
+        double[] deflections = SpanChecks.deflections(
+                p.span(),
+                p.ends(),
+                ec,
+                service,
+                p.leftSupport() ? left : null,
+                mid,
+                p.rightSupport() ? right : null,
+                rho);
         return SpanChecks.within(p.span(), p.limits(), deflections);
     }
 

@@ -2,10 +2,10 @@ package barfit.design.span;
 
 import barfit.catalogs.BarSize;
 import barfit.section.BarSpacing;
+import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.Development;
 import barfit.section.Materials;
-import barfit.section.CodeEquations;
 import barfit.section.trail.Trail;
 
 /**
@@ -61,6 +61,7 @@ public record Extension(double length, double ld, Governs governs) {
         double halfSpacing = firstLayer > 1 ? BarSpacing.centreSpacing(b, det, db, firstLayer) / 2 : coverToCentre;
         double cb = Math.min(coverToCentre, halfSpacing);
         boolean topBar = h - coverToCentre - db / 2 > code.topBarConcreteBelow();
-        return Development.general(top, m, code, topBar, cb, 0, 0, 0, Trail.off()).ld();
+        return Development.general(top, m, code, topBar, cb, 0, 0, 0, Trail.off())
+                .ld();
     }
 }

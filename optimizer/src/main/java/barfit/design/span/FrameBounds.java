@@ -29,6 +29,7 @@ final class FrameBounds {
     private double[][][] bottomBars = new double[16][][];
     /** As,min of 9.6.1.2 per mm of d (NaN until asked). */
     private double asMinSagging = Double.NaN;
+
     private double asMinHogging = Double.NaN;
     /** The fewest bars crack control allows in a first layer, per bar size (-1 until asked). */
     private final int[] crackBars;
@@ -82,8 +83,11 @@ final class FrameBounds {
         double compressionArea = 0;
         if (p.bottomAnchored()) {
             for (BarSize bottom : sizes) {
-                compressionArea = Math.max(compressionArea, BarSpacing.maxBars(f.b(), f.det(), bottom,
-                        p.materials(), p.code()) * bottom.area() * p.space().maxLayers());
+                compressionArea = Math.max(
+                        compressionArea,
+                        BarSpacing.maxBars(f.b(), f.det(), bottom, p.materials(), p.code())
+                                * bottom.area()
+                                * p.space().maxLayers());
             }
         }
         for (int i = 0; i < n; i++) {
@@ -107,7 +111,8 @@ final class FrameBounds {
             double dp = f.det().firstLayerCentroid(sizes.get(0).diameter());
             double supports = 0;
             for (SpanProblem.Place place : new SpanProblem.Place[] {SpanProblem.Place.LEFT, SpanProblem.Place.RIGHT}) {
-                Double mu = place == SpanProblem.Place.LEFT ? (p.leftSupport() ? p.mLeft() : null)
+                Double mu = place == SpanProblem.Place.LEFT
+                        ? (p.leftSupport() ? p.mLeft() : null)
                         : (p.rightSupport() ? p.mRight() : null);
                 if (mu == null) {
                     continue;
@@ -118,8 +123,10 @@ final class FrameBounds {
                     break;
                 }
                 // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need
-                double dMin = f.h() - f.det().firstLayerCentroid(top.diameter())
-                        - (p.space().maxLayers() - 1) * (top.diameter() + f.det().layerGap());
+                double dMin = f.h()
+                        - f.det().firstLayerCentroid(top.diameter())
+                        - (p.space().maxLayers() - 1)
+                                * (top.diameter() + f.det().layerGap());
                 double asMin = asMinPerDepth(Bending.HOGGING) * dMin;
                 area = StrengthBound.withMinimumSteel(area, asMin);
                 int bars = Math.max(Math.max(2, crackControlled), (int) Math.ceil(area / top.area() - 1e-9));
@@ -219,7 +226,8 @@ final class FrameBounds {
             return Double.POSITIVE_INFINITY;
         }
         // minimum steel (9.6.1.2) at the shallowest d the layers could give, or 4/3 of the strength need (9.6.1.3)
-        double dMin = f.h() - f.det().firstLayerCentroid(bottom.diameter())
+        double dMin = f.h()
+                - f.det().firstLayerCentroid(bottom.diameter())
                 - (p.space().maxLayers() - 1) * (bottom.diameter() + f.det().layerGap());
         double asMin = asMinPerDepth(Bending.SAGGING) * dMin; // As,min is proportional to d
         area = StrengthBound.withMinimumSteel(area, asMin);
@@ -243,7 +251,8 @@ final class FrameBounds {
     private int crackBars(BarSize bar) {
         int i = ctx.index(bar);
         if (crackBars[i] < 0) {
-            crackBars[i] = BarSpacing.minBarsForCrackControl(f.b(), f.det(), bar, p.materials().fy(), p.code());
+            crackBars[i] = BarSpacing.minBarsForCrackControl(
+                    f.b(), f.det(), bar, p.materials().fy(), p.code());
         }
         return crackBars[i];
     }
@@ -270,8 +279,15 @@ final class FrameBounds {
         double total = 0;
         for (int zi : ctx.zonesAt(place)) {
             SpanProblem.Zone z = ctx.zones().get(zi);
-            Stirrups st = ctx.chooser().cheapest(shape, f.det(), dMax, asBig, z.vuLeast(),
-                    p.space().stirrupLegs().get(0), z.length());
+            Stirrups st = ctx.chooser()
+                    .cheapest(
+                            shape,
+                            f.det(),
+                            dMax,
+                            asBig,
+                            z.vuLeast(),
+                            p.space().stirrupLegs().get(0),
+                            z.length());
             if (st == null) {
                 total = Double.POSITIVE_INFINITY;
                 break;
@@ -285,7 +301,8 @@ final class FrameBounds {
     /** More than any choice of stirrups over the whole span could cost (the most legs, the closest spacing). */
     double stirrupCeiling() {
         int legs = p.space().stirrupLegs().get(p.space().stirrupLegs().size() - 1);
-        Stirrups dense = new Stirrups(f.stirrupBar(), legs, p.space().stirrupSpacings().get(0));
+        Stirrups dense =
+                new Stirrups(f.stirrupBar(), legs, p.space().stirrupSpacings().get(0));
         double total = 0;
         for (SpanProblem.Zone z : ctx.zones()) {
             total += ctx.stirrupCost(f.b(), f.h(), dense, z);

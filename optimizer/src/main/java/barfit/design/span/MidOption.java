@@ -11,8 +11,14 @@ import java.util.Map;
  * use it (by zone index), their cost with the bottom bars', and the fewest stirrup legs the office's rule
  * asks of the supports' zones too for these bottom bars.
  */
-public record MidOption(TopOption top, BarSize bar, List<Integer> counts, double d, Map<Integer, Stirrups> zones,
-        double cost, int legsNeeded) {
+public record MidOption(
+        TopOption top,
+        BarSize bar,
+        List<Integer> counts,
+        double d,
+        Map<Integer, Stirrups> zones,
+        double cost,
+        int legsNeeded) {
     /** Its bottom bars, which a support option counts as compression steel where they are anchored. */
     public BottomBars bottom() {
         return new BottomBars(bar, counts);

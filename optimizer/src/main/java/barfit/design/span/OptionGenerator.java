@@ -1,9 +1,9 @@
 package barfit.design.span;
 
 import barfit.catalogs.BarSize;
+import barfit.design.TensionSearch;
 import barfit.design.section.SectionExhaustive;
 import barfit.design.section.SectionLayout;
-import barfit.design.TensionSearch;
 import barfit.section.BarLayer;
 import barfit.section.BarSpacing;
 import barfit.section.BeamSection;
@@ -98,8 +98,12 @@ final class OptionGenerator {
         for (BarSize bar : p.space().barSizes()) {
             int fit = BarSpacing.maxBars(f.b(), f.det(), bar, p.materials(), p.code());
             int mostContinuous = p.cantilever() || p.space().hangersOnly() ? Math.min(2, fit) : fit;
-            double extLeft = p.leftSupport() ? Extension.of(p, f.b(), f.h(), f.det(), bar).length() : 0;
-            double extRight = p.rightSupport() ? Extension.of(p, f.b(), f.h(), f.det(), bar).length() : 0;
+            double extLeft = p.leftSupport()
+                    ? Extension.of(p, f.b(), f.h(), f.det(), bar).length()
+                    : 0;
+            double extRight = p.rightSupport()
+                    ? Extension.of(p, f.b(), f.h(), f.det(), bar).length()
+                    : 0;
             // a continuous bar is priced over the span less the stretches the support options price it over;
             // where the extras' ld makes those overlap, that is negative: a continuous bar then costs less
             // than the two extras it replaces, and the sum still prices it at the full span
@@ -136,8 +140,8 @@ final class OptionGenerator {
                 // the cheapest option found so far for each number of legs it asks of the supports
                 Map<Integer, Double> cheapestByLegs = new HashMap<>();
                 int fit = BarSpacing.maxBars(f.b(), f.det(), bottom, p.materials(), p.code());
-                int crackControlled = BarSpacing.minBarsForCrackControl(f.b(), f.det(), bottom, p.materials().fy(),
-                        p.code());
+                int crackControlled = BarSpacing.minBarsForCrackControl(
+                        f.b(), f.det(), bottom, p.materials().fy(), p.code());
                 int first = Math.max(2, crackControlled);
                 if (fit < first || !framePasses(bottom, top.bar(), 1)) {
                     continue;
@@ -161,7 +165,8 @@ final class OptionGenerator {
                         }
                         List<int[]> splits = search.passingSplits(bottom, n, layers, fit, first);
                         if (splits.isEmpty()) {
-                            if (!search.passingSplit(bottom, n, layers, fit, first).anyDuctile()) {
+                            if (!search.passingSplit(bottom, n, layers, fit, first)
+                                    .anyDuctile()) {
                                 break; // more bars only lower eps_t
                             }
                             continue;
@@ -172,25 +177,36 @@ final class OptionGenerator {
                             double as = search.tensionArea();
                             // legs: the office's rule, the ties round top bars relied on (9.7.6.4), and no more
                             // than the outer bottom layer and the continuous top bars hold (25.7.1.2, 25.7.1.3)
-                            StirrupRules.TieDemand ties = midZones.isEmpty() ? StirrupRules.TieDemand.NONE
-                                    : StirrupRules.ties(ctx.sections().mid(f, shape, top, bottom, split),
-                                            Bending.SAGGING, p.mMid());
+                            StirrupRules.TieDemand ties = midZones.isEmpty()
+                                    ? StirrupRules.TieDemand.NONE
+                                    : StirrupRules.ties(
+                                            ctx.sections().mid(f, shape, top, bottom, split),
+                                            Bending.SAGGING,
+                                            p.mMid());
                             if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
                             int legs = Math.max(p.legsFor(Math.max(split[0], top.continuous())), ties.minLegs());
                             int legsHeld = Math.min(split[0], top.continuous());
-                            ZoneStirrups.Choice stirrups = zoneStirrups.cheapest(midZones, legs, legsHeld,
-                                    ties.maxSpacing(), d, as);
+                            ZoneStirrups.Choice stirrups =
+                                    zoneStirrups.cheapest(midZones, legs, legsHeld, ties.maxSpacing(), d, as);
                             if (stirrups != null) {
                                 double stirrupCost = stirrups.cost();
-                                out.add(new MidOption(top, bottom, TensionSearch.toList(split), d, stirrups.stirrups(),
-                                        ctx.barCost(bottom, n, p.span()) + stirrupCost, p.legsFor(split[0])));
+                                out.add(new MidOption(
+                                        top,
+                                        bottom,
+                                        TensionSearch.toList(split),
+                                        d,
+                                        stirrups.stirrups(),
+                                        ctx.barCost(bottom, n, p.span()) + stirrupCost,
+                                        p.legsFor(split[0])));
                                 // only an option whose bottom bars hold every legs count the supports may use
                                 // can stand for the dearer options with more bars below
                                 if (split[0] >= mostLegs) {
-                                    cheapestByLegs.merge(p.legsFor(split[0]),
-                                            ctx.barCost(bottom, n, p.span()) + stirrupCost, Math::min);
+                                    cheapestByLegs.merge(
+                                            p.legsFor(split[0]),
+                                            ctx.barCost(bottom, n, p.span()) + stirrupCost,
+                                            Math::min);
                                 }
                                 if (Double.isNaN(firstStirrups)) {
                                     firstStirrups = stirrupCost;
@@ -199,7 +215,8 @@ final class OptionGenerator {
                         }
                         // more bars only pay through cheaper stirrups (rho_w, fewer legs) or, below Table 9.3.1.1,
                         // stiffness: stop once one more bar costs more than all the stirrups could
-                        if (!f.deflection() && !Double.isNaN(firstStirrups)
+                        if (!f.deflection()
+                                && !Double.isNaN(firstStirrups)
                                 && ctx.barCost(bottom, n + 1 - fewest, p.span()) >= bounds.stirrupCeiling()) {
                             break;
                         }
@@ -207,8 +224,11 @@ final class OptionGenerator {
                         // n + 1 or more bars costs at least its bars and the leanest stirrups, and asks for
                         // at least the legs of its fullest possible first layer; one found already that is
                         // no dearer and asks no more legs of the supports is as good in every combination
-                        if (!f.deflection() && !p.bottomAnchored()
-                                && dominated(cheapestByLegs, p.legsFor((n + layers) / layers),
+                        if (!f.deflection()
+                                && !p.bottomAnchored()
+                                && dominated(
+                                        cheapestByLegs,
+                                        p.legsFor((n + layers) / layers),
                                         ctx.barCost(bottom, n + 1, p.span()) + bounds.leanMid())) {
                             break;
                         }
@@ -234,8 +254,13 @@ final class OptionGenerator {
                         break;
                     }
                     for (List<Integer> counts : SectionExhaustive.countVectors(layers, fit)) {
-                        out.add(new MidOption(top, bottom, counts, f.det().firstLayerCentroid(bottom.diameter()),
-                                Map.of(), ctx.barCost(bottom, SpanLayout.sum(counts), p.span()),
+                        out.add(new MidOption(
+                                top,
+                                bottom,
+                                counts,
+                                f.det().firstLayerCentroid(bottom.diameter()),
+                                Map.of(),
+                                ctx.barCost(bottom, SpanLayout.sum(counts), p.span()),
                                 p.legsFor(counts.get(0))));
                     }
                 }
@@ -259,8 +284,8 @@ final class OptionGenerator {
      * null: none). {@code limit} gives, per top bar size, the cost at or above which an option cannot be
      * part of anything cheaper than the incumbent; the bar count stops rising there.
      */
-    List<SupportOption> supports(SpanProblem.Place place, double mu, ToDoubleFunction<BarSize> limit,
-            List<BottomBars> bottoms) {
+    List<SupportOption> supports(
+            SpanProblem.Place place, double mu, ToDoubleFunction<BarSize> limit, List<BottomBars> bottoms) {
         List<SupportOption> out = new ArrayList<>();
         List<Integer> zonesHere = ctx.zonesAt(place);
         double leanZones = bounds.leanStirrups(place);
@@ -269,7 +294,8 @@ final class OptionGenerator {
         TensionSearch search = new TensionSearch(probe, mu).frame(f.det());
         for (BarSize top : p.space().barSizes()) {
             int fit = BarSpacing.maxBars(f.b(), f.det(), top, p.materials(), p.code());
-            int crackControlled = BarSpacing.minBarsForCrackControl(f.b(), f.det(), top, p.materials().fy(), p.code());
+            int crackControlled = BarSpacing.minBarsForCrackControl(
+                    f.b(), f.det(), top, p.materials().fy(), p.code());
             int first = Math.max(2, crackControlled);
             if (fit < first) {
                 continue;
@@ -301,8 +327,17 @@ final class OptionGenerator {
                         }
                         for (int[] split : splits) {
                             search.place(top, split);
-                            out.addAll(supportOptions(place, mu, top, split, search.d(), search.tensionArea(),
-                                    ctx.barCost(top, n, ext), bottom, bottomGroups, zonesHere));
+                            out.addAll(supportOptions(
+                                    place,
+                                    mu,
+                                    top,
+                                    split,
+                                    search.d(),
+                                    search.tensionArea(),
+                                    ctx.barCost(top, n, ext),
+                                    bottom,
+                                    bottomGroups,
+                                    zonesHere));
                         }
                     }
                 }
@@ -312,16 +347,24 @@ final class OptionGenerator {
     }
 
     /** The options of one split of top bars at a support: one per set of zone stirrups its legs allow. */
-    private List<SupportOption> supportOptions(SpanProblem.Place place, double mu, BarSize top, int[] split, double d,
-            double as, double bars, BottomBars bottom, List<BeamSection.BarGroup> bottomGroups,
+    private List<SupportOption> supportOptions(
+            SpanProblem.Place place,
+            double mu,
+            BarSize top,
+            int[] split,
+            double d,
+            double as,
+            double bars,
+            BottomBars bottom,
+            List<BeamSection.BarGroup> bottomGroups,
             List<Integer> zonesHere) {
         if (zonesHere.isEmpty()) {
-            return List.of(new SupportOption(top, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX, Map.of(),
-                    bars, bottom));
+            return List.of(new SupportOption(
+                    top, TensionSearch.toList(split), d, NO_ZONES, NO_ZONES_MAX, Map.of(), bars, bottom));
         }
         // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
-        StirrupRules.TieDemand ties = StirrupRules.ties(ctx.sections().support(f, shape, top, split, bottomGroups),
-                Bending.HOGGING, mu);
+        StirrupRules.TieDemand ties =
+                StirrupRules.ties(ctx.sections().support(f, shape, top, split, bottomGroups), Bending.HOGGING, mu);
         if (!ties.sizeOk(f.stirrupBar().diameter())) {
             return List.of();
         }
@@ -338,8 +381,8 @@ final class OptionGenerator {
                 if (mostLegs < fewestLegs || mostLegs > split[0]) {
                     continue;
                 }
-                ZoneStirrups.Choice stirrups = zoneStirrups.cheapest(zonesHere, fewestLegs, mostLegs,
-                        ties.maxSpacing(), d, as);
+                ZoneStirrups.Choice stirrups =
+                        zoneStirrups.cheapest(zonesHere, fewestLegs, mostLegs, ties.maxSpacing(), d, as);
                 if (stirrups == null || !seen.add(stirrups.stirrups())) {
                     continue;
                 }
@@ -349,8 +392,15 @@ final class OptionGenerator {
                     fewestUsed = Math.min(fewestUsed, st.legs());
                     mostUsed = Math.max(mostUsed, st.legs());
                 }
-                out.add(new SupportOption(top, TensionSearch.toList(split), d, fewestUsed, mostUsed,
-                        stirrups.stirrups(), bars + stirrups.cost(), bottom));
+                out.add(new SupportOption(
+                        top,
+                        TensionSearch.toList(split),
+                        d,
+                        fewestUsed,
+                        mostUsed,
+                        stirrups.stirrups(),
+                        bars + stirrups.cost(),
+                        bottom));
             }
         }
         return out;

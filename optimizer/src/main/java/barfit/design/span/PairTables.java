@@ -145,15 +145,17 @@ public final class PairTables {
                 int j = ctx.index(m.bar());
                 BottomBars bottom = combinations.anchored(m);
                 double base = fs.frame().cost() + t.cost() + m.cost();
-                List<SupportOption> leftOptions = Combinations.compatible(lefts, t.bar(),
-                        p.cantilever() ? 2 : t.continuous(), m, bottom, p.leftSupport());
-                List<SupportOption> rightOptions = Combinations.compatible(rights, t.bar(), t.continuous(), m, bottom,
-                        p.rightSupport());
+                List<SupportOption> leftOptions = Combinations.compatible(
+                        lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, bottom, p.leftSupport());
+                List<SupportOption> rightOptions =
+                        Combinations.compatible(rights, t.bar(), t.continuous(), m, bottom, p.rightSupport());
                 if (leftOptions.isEmpty() || rightOptions.isEmpty()) {
                     continue;
                 }
-                double cheapestRight = rightOptions.get(0) == null ? 0 : rightOptions.get(0).cost();
-                double cheapestLeft = leftOptions.get(0) == null ? 0 : leftOptions.get(0).cost();
+                double cheapestRight =
+                        rightOptions.get(0) == null ? 0 : rightOptions.get(0).cost();
+                double cheapestLeft =
+                        leftOptions.get(0) == null ? 0 : leftOptions.get(0).cost();
                 if (base + cheapestLeft + cheapestRight >= cost[i][j] - 1e-9) {
                     continue;
                 }

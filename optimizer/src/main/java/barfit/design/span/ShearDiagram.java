@@ -100,8 +100,12 @@ public record ShearDiagram(double clear, double[] x, double[] v, boolean leftAtF
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof ShearDiagram s && s.clear == clear && Arrays.equals(s.x, x) && Arrays.equals(s.v, v)
-                && s.leftAtFace == leftAtFace && s.rightAtFace == rightAtFace;
+        return o instanceof ShearDiagram s
+                && s.clear == clear
+                && Arrays.equals(s.x, x)
+                && Arrays.equals(s.v, v)
+                && s.leftAtFace == leftAtFace
+                && s.rightAtFace == rightAtFace;
     }
 
     @Override

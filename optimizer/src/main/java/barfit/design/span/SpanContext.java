@@ -29,6 +29,7 @@ final class SpanContext {
     private final BarSize smallest;
     /** The span's stirrup zones ({@link SpanProblem#zones} builds them afresh on each call). */
     private final List<SpanProblem.Zone> zones;
+
     private final Map<SpanProblem.Place, List<Integer>> zonesAt = new EnumMap<>(SpanProblem.Place.class);
     /** Each bar size's place in the space's list, found once per size object. */
     private final Map<BarSize, Integer> barIndex = new IdentityHashMap<>();
@@ -41,7 +42,9 @@ final class SpanContext {
         this.midSearch = new TensionSearch(midProbe, p.mMid() == null ? 0 : p.mMid());
         this.chooser = new StirrupChooser(p.materials(), p.code(), p.space(), cost);
         this.sections = new SpanSections(p);
-        this.smallest = p.space().barSizes().stream().min(Comparator.comparingDouble(BarSize::diameter)).orElseThrow();
+        this.smallest = p.space().barSizes().stream()
+                .min(Comparator.comparingDouble(BarSize::diameter))
+                .orElseThrow();
         this.zones = p.zones();
         for (SpanProblem.Place place : SpanProblem.Place.values()) {
             List<Integer> at = new ArrayList<>();

@@ -16,15 +16,13 @@ import java.util.List;
  */
 public final class SpanDesigner {
     /** A chosen span with its cost and full verification. */
-    public record Design(SpanLayout layout, CostBreakdown cost, SpanReport report, List<SpanLayout.BarMark> bars) {
-    }
+    public record Design(SpanLayout layout, CostBreakdown cost, SpanReport report, List<SpanLayout.BarMark> bars) {}
 
     /**
      * A span's search, for its proof: the generator's counts, the CP-SAT solves and the deflection cuts
      * added between them.
      */
-    public record Search(SpanGenerator.Stats generator, int solves, int deflectionCuts) {
-    }
+    public record Search(SpanGenerator.Stats generator, int solves, int deflectionCuts) {}
 
     /**
      * Why a span has no design, as data the reports put in words: {@code limit} names what fails at the cap
@@ -35,8 +33,15 @@ public final class SpanDesigner {
      * {@code wider} the changes that work, each found by designing the span and verified (null when none was
      * found); {@code maxDepth} and {@code fixedWidth} are the span's own (null where it has none).
      */
-    public record Diagnosis(String limit, String clause, Cause cause, List<CheckResult> atCap, Fix deeper, Fix wider,
-            Double maxDepth, Double fixedWidth) {
+    public record Diagnosis(
+            String limit,
+            String clause,
+            Cause cause,
+            List<CheckResult> atCap,
+            Fix deeper,
+            Fix wider,
+            Double maxDepth,
+            Double fixedWidth) {
         public Diagnosis {
             atCap = List.copyOf(atCap);
         }
@@ -47,48 +52,58 @@ public final class SpanDesigner {
         }
 
         /** What stops the span, as facts: one of the records here, or a later stage's own (a schedule's group). */
-        public interface Cause {
-        }
+        public interface Cause {}
 
         /** {@code max_depth} is below the shallowest depth searched. */
-        public record BelowShallowest() implements Cause {
-        }
+        public record BelowShallowest() implements Cause {}
 
         /** Every allowed depth is below Table 9.3.1.1's {@code hMin} and no service loads are given to compute deflection. */
-        public record DeflectionUnchecked(double hMin) implements Cause {
-        }
+        public record DeflectionUnchecked(double hMin) implements Cause {}
 
         /** Which deflection limits no layout within the cap meets: one, each alone but not both, or neither. */
-        public enum Deflections { LIVE, TOTAL, EACH_BUT_NOT_BOTH, NEITHER }
+        public enum Deflections {
+            LIVE,
+            TOTAL,
+            EACH_BUT_NOT_BOTH,
+            NEITHER
+        }
 
         /**
          * Deflection, computed below Table 9.3.1.1's {@code hMin}, fails at every depth up to {@code tallest},
          * though the cheapest layout meeting every other check is {@code width} x {@code height}; the limits as
          * span divisors.
          */
-        public record DeflectionFails(Deflections which, double hMin, double tallest, double liveDivisor,
-                double totalDivisor, double width, double height) implements Cause {
-        }
+        public record DeflectionFails(
+                Deflections which,
+                double hMin,
+                double tallest,
+                double liveDivisor,
+                double totalDivisor,
+                double width,
+                double height)
+                implements Cause {}
 
         /** The moments can be carried within the cap (deflection set aside where it is computed), not the shears. */
-        public record ShearFails(boolean deflectionSetAside) implements Cause {
-        }
+        public record ShearFails(boolean deflectionSetAside) implements Cause {}
 
         /** No layout carries the moments, even with deflection set aside and the shears taken as zero where given. */
-        public record StrengthFails(boolean deflectionSetAside, boolean shearsTakenAsZero) implements Cause {
-        }
+        public record StrengthFails(boolean deflectionSetAside, boolean shearsTakenAsZero) implements Cause {}
 
         /** The time limit ({@code seconds} per solve) ended the search before a design passing every check was found. */
-        public record TimeLimit(double seconds) implements Cause {
-        }
+        public record TimeLimit(double seconds) implements Cause {}
     }
 
     /** A size at which the span designs, with the cheapest layout found there (it passes SpanVerifier). */
-    public record Fix(double width, double height, SpanLayout layout) {
-    }
+    public record Fix(double width, double height, SpanLayout layout) {}
 
-    public record Outcome(SpanProblem problem, String status, Design best, List<Design> alternatives,
-            Proof<Search> proof, List<Binding> binding, Diagnosis diagnosis) {
+    public record Outcome(
+            SpanProblem problem,
+            String status,
+            Design best,
+            List<Design> alternatives,
+            Proof<Search> proof,
+            List<Binding> binding,
+            Diagnosis diagnosis) {
         public boolean feasible() {
             return best != null;
         }
@@ -141,7 +156,9 @@ public final class SpanDesigner {
 
     /** The hint's cost, a hair above so that rounding never cuts the hint itself; infinite when unusable. */
     private double ceiling(SpanProblem p, SpanLayout hint) {
-        if (hint == null || !p.widths().contains(hint.width()) || !p.depths().contains(hint.height())
+        if (hint == null
+                || !p.widths().contains(hint.width())
+                || !p.depths().contains(hint.height())
                 || !SpanVerifier.verify(p, hint, false).ok()) {
             return Double.POSITIVE_INFINITY;
         }
@@ -199,7 +216,8 @@ public final class SpanDesigner {
                     continue;
                 }
                 StringBuilder sb = new StringBuilder();
-                report.failures().forEach(f -> sb.append(sb.length() == 0 ? "" : ", ").append(f.id()));
+                report.failures()
+                        .forEach(f -> sb.append(sb.length() == 0 ? "" : ", ").append(f.id()));
                 throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
                         + " fail on the chosen layout); this is a bug in the search");
             }
@@ -219,17 +237,32 @@ public final class SpanDesigner {
             Search search = new Search(stats, solves, cuts);
             if (!report.ok()) {
                 var proof = Proof.none(Proof.Status.OUT_OF_TIME, search, options);
-                return new Outcome(p, "unknown", null, List.of(), proof, List.of(), new Diagnosis("time limit",
-                        new Diagnosis.TimeLimit(options.timeLimitSeconds())));
+                return new Outcome(
+                        p,
+                        "unknown",
+                        null,
+                        List.of(),
+                        proof,
+                        List.of(),
+                        new Diagnosis("time limit", new Diagnosis.TimeLimit(options.timeLimitSeconds())));
             }
-            Design d = new Design(out.incumbentLayout(), out.incumbentLayout().cost(p, cost), report,
+            Design d = new Design(
+                    out.incumbentLayout(),
+                    out.incumbentLayout().cost(p, cost),
+                    report,
                     out.incumbentLayout().bars(p, cost));
-            var proof = Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search,
-                    options);
+            var proof =
+                    Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search, options);
             return new Outcome(p, "feasible", d, List.of(), proof, binding(p, d), null);
         }
-        var proof = Proof.solved(first.status(), first.objective(), first.bound(), CostModel.SPAN_UNITS, first.stats(),
-                new Search(stats, solves, cuts), options);
+        var proof = Proof.solved(
+                first.status(),
+                first.objective(),
+                first.bound(),
+                CostModel.SPAN_UNITS,
+                first.stats(),
+                new Search(stats, solves, cuts),
+                options);
         String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
         return new Outcome(p, status, best, alts, proof, binding(p, best), null);
     }
@@ -260,15 +293,20 @@ public final class SpanDesigner {
             }
         }
         if (p.maxDepth() != null && d.layout().height() >= p.maxDepth() - 1e-9) {
-            out.add(new Binding("headroom", Binding.Leaner.AT_MAX_DEPTH, d.layout().height()));
+            out.add(new Binding(
+                    "headroom", Binding.Leaner.AT_MAX_DEPTH, d.layout().height()));
         }
         return out;
     }
 
     private static boolean tight(CheckResult c) {
         // a flange at its Table 6.3.2.1 width is not a limit the design works against
-        return c.pass() && Double.isFinite(c.ratio()) && c.ratio() >= 0.95 && !c.id().startsWith("cover")
-                && !c.id().startsWith("layer_gap") && !c.id().startsWith("stirrup_legs_bars")
+        return c.pass()
+                && Double.isFinite(c.ratio())
+                && c.ratio() >= 0.95
+                && !c.id().startsWith("cover")
+                && !c.id().startsWith("layer_gap")
+                && !c.id().startsWith("stirrup_legs_bars")
                 && !c.id().equals("flange_width");
     }
 }

@@ -18,6 +18,7 @@ import java.util.List;
 final class SpanDiagnoser {
     /** Steps of a search with a single depth or width (in inch-pound input, 1 in and 2 in): a grid, no clause. */
     private static final double SI_DEPTH_STEP = 25.0;
+
     private static final double SI_WIDTH_STEP = 50.0;
 
     /** Deflection limits that allow any deflection (a span divisor of 0: the limit ℓ/0 is infinite). */
@@ -36,8 +37,8 @@ final class SpanDiagnoser {
         }
         SpanLayout l = new SpanGenerator(q, cost).generate().incumbentLayout();
         if (l != null && !SpanVerifier.verify(q, l, false).ok()) {
-            throw new IllegalStateException("the layout found for beam " + q.id() + " at " + l.width() + " x " + l.height()
-                    + " fails re-verification; this is a bug in the search");
+            throw new IllegalStateException("the layout found for beam " + q.id() + " at " + l.width() + " x "
+                    + l.height() + " fails re-verification; this is a bug in the search");
         }
         return l;
     }
@@ -64,7 +65,8 @@ final class SpanDiagnoser {
             cause = new Diagnosis.DeflectionUnchecked(hMin);
         } else {
             boolean shears = p.vLeft() != null || p.vRight() != null;
-            SpanProblem noDeflection = p.service() == null ? p : p.withLimits(new SpanChecks.Limits(NO_LIMIT, NO_LIMIT));
+            SpanProblem noDeflection =
+                    p.service() == null ? p : p.withLimits(new SpanChecks.Limits(NO_LIMIT, NO_LIMIT));
             SpanLayout free = p.service() == null ? null : cheapest(noDeflection);
             if (free != null) {
                 // every other check can be met within the cap: deflection fails at every allowed depth
@@ -86,9 +88,11 @@ final class SpanDiagnoser {
                     which = Diagnosis.Deflections.TOTAL;
                 }
                 clause = "9.3.2, 24.2, Table 24.2.2";
-                atCap = SpanVerifier.verify(p, free, false).span().checks().stream().filter(c -> !c.pass()).toList();
-                cause = new Diagnosis.DeflectionFails(which, hMin, tallest, limits.live(), limits.total(), free.width(),
-                        free.height());
+                atCap = SpanVerifier.verify(p, free, false).span().checks().stream()
+                        .filter(c -> !c.pass())
+                        .toList();
+                cause = new Diagnosis.DeflectionFails(
+                        which, hMin, tallest, limits.live(), limits.total(), free.width(), free.height());
             } else if (shears && feasible(noDeflection.scaled(1.0, 0.0))) {
                 limit = "shear";
                 clause = "22.5, 9.6.3, 9.7.6.2.2";
@@ -113,7 +117,8 @@ final class SpanDiagnoser {
     private Fix deeper(SpanProblem p, double tallest) {
         List<Double> grid = p.space().depths();
         double deepest = grid.get(grid.size() - 1);
-        double step = grid.size() > 1 ? grid.get(grid.size() - 1) - grid.get(grid.size() - 2)
+        double step = grid.size() > 1
+                ? grid.get(grid.size() - 1) - grid.get(grid.size() - 2)
                 : p.code().inchPound() ? CodeEquations.MM_PER_IN : SI_DEPTH_STEP;
         List<Double> tries = new ArrayList<>();
         for (double h : grid) {
@@ -139,12 +144,15 @@ final class SpanDiagnoser {
         List<Double> widths = p.widths();
         double widest = widths.get(widths.size() - 1);
         List<Double> grid = p.space().widths();
-        double step = widths.size() > 1 ? widths.get(widths.size() - 1) - widths.get(widths.size() - 2)
-                : grid.size() > 1 ? grid.get(grid.size() - 1) - grid.get(grid.size() - 2)
-                : p.code().inchPound() ? 2 * CodeEquations.MM_PER_IN : SI_WIDTH_STEP;
+        double step = widths.size() > 1
+                ? widths.get(widths.size() - 1) - widths.get(widths.size() - 2)
+                : grid.size() > 1
+                        ? grid.get(grid.size() - 1) - grid.get(grid.size() - 2)
+                        : p.code().inchPound() ? 2 * CodeEquations.MM_PER_IN : SI_WIDTH_STEP;
         for (int k = 1; widest + k * step <= 2.5 * widest + 1e-9; k++) {
             double w = Math.round((widest + k * step) * 1e6) / 1e6;
-            SpanLayout l = cheapest(p.withSpace(p.space().withDepths(List.of(h))).withFixedWidth(w));
+            SpanLayout l =
+                    cheapest(p.withSpace(p.space().withDepths(List.of(h))).withFixedWidth(w));
             if (l != null) {
                 return new Fix(w, h, l);
             }

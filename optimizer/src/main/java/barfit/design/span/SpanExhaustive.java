@@ -2,8 +2,8 @@ package barfit.design.span;
 
 import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
-import barfit.design.section.SectionExhaustive;
 import barfit.design.FrameEnumerator;
+import barfit.design.section.SectionExhaustive;
 import barfit.design.section.SectionLayout;
 import barfit.section.BarSpacing;
 import barfit.section.CheckResult;
@@ -23,8 +23,7 @@ import java.util.Map;
  * the bars in it. Results of sections already seen are remembered, which changes no answer.
  */
 public final class SpanExhaustive {
-    public record Result(SpanLayout best, long units, long combinations) {
-    }
+    public record Result(SpanLayout best, long units, long combinations) {}
 
     private final CostModel cost;
 
@@ -37,8 +36,8 @@ public final class SpanExhaustive {
         long bestUnits = Long.MAX_VALUE;
         long combos = 0;
         List<SpanProblem.Zone> zones = p.zones();
-        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(),
-                p.detailing())) {
+        for (FrameEnumerator.Cell cell :
+                FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(), p.detailing())) {
             double b = cell.width();
             double h = cell.height();
             BarSize stirrupBar = cell.stirrupBar();
@@ -56,25 +55,38 @@ public final class SpanExhaustive {
                     for (List<Integer> bottom : vectors(p.space().maxLayers(), bottomFit)) {
                         int mostContinuous = p.cantilever() ? 2 : topFit;
                         for (int continuous = 2; continuous <= mostContinuous; continuous++) {
-                            for (List<Integer> left : p.leftSupport() ? vectors(p.space().maxLayers(), topFit)
-                                    : singletonNull()) {
+                            for (List<Integer> left :
+                                    p.leftSupport() ? vectors(p.space().maxLayers(), topFit) : singletonNull()) {
                                 if (left != null && left.get(0) < continuous) {
                                     continue;
                                 }
-                                for (List<Integer> right : p.rightSupport()
-                                        ? vectors(p.space().maxLayers(), topFit) : singletonNull()) {
+                                for (List<Integer> right :
+                                        p.rightSupport() ? vectors(p.space().maxLayers(), topFit) : singletonNull()) {
                                     if (right != null && right.get(0) < continuous) {
                                         continue;
                                     }
-                                    double extL = left == null ? 0
+                                    double extL = left == null
+                                            ? 0
                                             : Extension.of(p, b, h, det, topBar).length();
-                                    double extR = right == null ? 0
+                                    double extR = right == null
+                                            ? 0
                                             : Extension.of(p, b, h, det, topBar).length();
                                     // stirrups: the cheapest passing option per zone for these bars
-                                    SpanLayout trial = new SpanLayout(b, h, p.flange(), stirrupBar, skin, topBar,
-                                            continuous, left, right, bottomBar, bottom,
+                                    SpanLayout trial = new SpanLayout(
+                                            b,
+                                            h,
+                                            p.flange(),
+                                            stirrupBar,
+                                            skin,
+                                            topBar,
+                                            continuous,
+                                            left,
+                                            right,
+                                            bottomBar,
+                                            bottom,
                                             fill(zones.size(), new Stirrups(stirrupBar, 2, 100)),
-                                            extL, extR);
+                                            extL,
+                                            extR);
                                     List<Stirrups> st = new ArrayList<>();
                                     for (int z = 0; z < zones.size(); z++) {
                                         Stirrups s = zoneStirrups(p, trial, z, zoneMemo);
@@ -86,8 +98,21 @@ public final class SpanExhaustive {
                                     if (st.size() < zones.size()) {
                                         continue;
                                     }
-                                    SpanLayout lay = new SpanLayout(b, h, p.flange(), stirrupBar, skin, topBar,
-                                            continuous, left, right, bottomBar, bottom, st, extL, extR);
+                                    SpanLayout lay = new SpanLayout(
+                                            b,
+                                            h,
+                                            p.flange(),
+                                            stirrupBar,
+                                            skin,
+                                            topBar,
+                                            continuous,
+                                            left,
+                                            right,
+                                            bottomBar,
+                                            bottom,
+                                            st,
+                                            extL,
+                                            extR);
                                     combos++;
                                     if (!sectionsOk(p, lay, sectionOk)) {
                                         continue;
@@ -95,7 +120,8 @@ public final class SpanExhaustive {
                                     if (!SpanVerifier.verify(p, lay, false).ok()) {
                                         continue;
                                     }
-                                    long units = CostModel.units(lay.cost(p, cost).total());
+                                    long units =
+                                            CostModel.units(lay.cost(p, cost).total());
                                     if (units < bestUnits) {
                                         bestUnits = units;
                                         best = lay;
@@ -113,7 +139,8 @@ public final class SpanExhaustive {
     /** The flexural sections alone, remembered by their bars (a failing one fails every combination). */
     private boolean sectionsOk(SpanProblem p, SpanLayout l, Map<String, Boolean> memo) {
         for (SpanProblem.Place place : SpanProblem.Place.values()) {
-            boolean present = place == SpanProblem.Place.LEFT ? p.leftSupport()
+            boolean present = place == SpanProblem.Place.LEFT
+                    ? p.leftSupport()
                     : place == SpanProblem.Place.RIGHT ? p.rightSupport() : p.midSection();
             if (!present) {
                 continue;
@@ -122,10 +149,16 @@ public final class SpanExhaustive {
                     + l.topContinuous();
             Boolean ok = memo.get(key);
             if (ok == null) {
-                Double mu = place == SpanProblem.Place.LEFT ? p.mLeft() : place == SpanProblem.Place.RIGHT ? p.mRight()
-                        : p.mMid();
-                ok = barfit.section.SectionChecks.run(l.section(p, place, null), new barfit.section.Demand(mu, null),
-                        new barfit.section.Span(p.span(), p.ends()), Trail.off(), false).ok();
+                Double mu = place == SpanProblem.Place.LEFT
+                        ? p.mLeft()
+                        : place == SpanProblem.Place.RIGHT ? p.mRight() : p.mMid();
+                ok = barfit.section.SectionChecks.run(
+                                l.section(p, place, null),
+                                new barfit.section.Demand(mu, null),
+                                new barfit.section.Span(p.span(), p.ends()),
+                                Trail.off(),
+                                false)
+                        .ok();
                 memo.put(key, ok);
             }
             if (!ok) {
@@ -152,25 +185,33 @@ public final class SpanExhaustive {
                     continue;
                 }
                 // the legs held by bars and the ties round compression steel relied on, as the section model has them
-                boolean held = barfit.section.StirrupRules.checks(l.section(p, zone.section(), st),
-                        l.physicalSection(p, zone.section(), st), SpanLayout.bending(p, zone.section()),
-                        SpanLayout.momentAt(p, zone.section()), null, zone.name(), Trail.off()).stream()
+                boolean held = barfit.section.StirrupRules.checks(
+                                l.section(p, zone.section(), st),
+                                l.physicalSection(p, zone.section(), st),
+                                SpanLayout.bending(p, zone.section()),
+                                SpanLayout.momentAt(p, zone.section()),
+                                null,
+                                zone.name(),
+                                Trail.off())
+                        .stream()
                         .allMatch(CheckResult::pass);
                 if (!held) {
                     continue;
                 }
                 var trial = l.section(p, zone.section(), st);
-                Double vu = zone.vu(barfit.section.SectionChecks.shearDepth(trial, SpanLayout.bending(p, zone.section())));
-                var checks = barfit.section.SectionChecks.shearZone(trial, SpanLayout.bending(p, zone.section()),
-                        vu == null ? 0 : vu, zone.name(), Trail.off());
+                Double vu =
+                        zone.vu(barfit.section.SectionChecks.shearDepth(trial, SpanLayout.bending(p, zone.section())));
+                var checks = barfit.section.SectionChecks.shearZone(
+                        trial, SpanLayout.bending(p, zone.section()), vu == null ? 0 : vu, zone.name(), Trail.off());
                 boolean ok = checks.stream().allMatch(CheckResult::pass);
                 if (vu == null && ok) {
                     var s2 = l.section(p, zone.section(), st);
                     var fr = barfit.section.Flexure.analyse(s2, SpanLayout.bending(p, zone.section()));
                     ok = barfit.section.SectionChecks.minimumStirrupsPass(s2, fr.d(), fr.tensionSteelArea());
                 }
-                double c = SpanLayout.stirrupSets(zone.length(), s) * cost.stirrupSetLength(l.width(), l.height(),
-                        st.bar(), legs) * st.bar().massPerMetre();
+                double c = SpanLayout.stirrupSets(zone.length(), s)
+                        * cost.stirrupSetLength(l.width(), l.height(), st.bar(), legs)
+                        * st.bar().massPerMetre();
                 if (ok && c < bestCost - 1e-12) {
                     bestCost = c;
                     best = st;

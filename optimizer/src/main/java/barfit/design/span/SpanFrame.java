@@ -10,6 +10,14 @@ import barfit.section.SkinBars;
  * Table 9.3.1.1's depth so deflection must be computed, and how far top bars of the smallest size extend
  * past each support's face (0 where there is no support).
  */
-public record SpanFrame(double b, double h, BarSize stirrupBar, Detailing det, SkinBars skin, double cost,
-        double lowerBound, boolean deflection, double extLeft, double extRight) {
-}
+public record SpanFrame(
+        double b,
+        double h,
+        BarSize stirrupBar,
+        Detailing det,
+        SkinBars skin,
+        double cost,
+        double lowerBound,
+        boolean deflection,
+        double extLeft,
+        double extRight) {}

@@ -20,8 +20,7 @@ import java.util.List;
  * section model's strength bound on the steel, the leanest stirrups), cheapest bound first.
  */
 final class SpanFrames {
-    private SpanFrames() {
-    }
+    private SpanFrames() {}
 
     static List<SpanFrame> of(SpanContext ctx) {
         SpanProblem p = ctx.problem();
@@ -34,8 +33,8 @@ final class SpanFrames {
         }
         double steelRate = cost.mainBarPricePerKg() * massPerArea;
         List<SpanFrame> out = new ArrayList<>();
-        for (FrameEnumerator.Cell cell : FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(),
-                p.detailing())) {
+        for (FrameEnumerator.Cell cell :
+                FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(), p.detailing())) {
             double b = cell.width();
             double h = cell.height();
             Detailing det = cell.detailing();
@@ -44,17 +43,24 @@ final class SpanFrames {
                 continue; // below Table 9.3.1.1 and nothing to compute deflection from
             }
             SkinBars skin = SectionLayout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-            double frameCost = cost.frame(b, h, p.flange()).total() * spanMetres + (skin == null ? 0
-                    : ctx.barCost(skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()), p.span()));
-            double extLeft = p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-            double extRight = p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-            double lowerBound = frameCost + steelLowerBound(p, b, h, det, smallest, steelRate)
+            double frameCost = cost.frame(b, h, p.flange()).total() * spanMetres
+                    + (skin == null
+                            ? 0
+                            : ctx.barCost(skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()), p.span()));
+            double extLeft =
+                    p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
+            double extRight =
+                    p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
+            double lowerBound = frameCost
+                    + steelLowerBound(p, b, h, det, smallest, steelRate)
                     + stirrupLowerBound(ctx, b, h, cell.stirrupBar());
-            out.add(new SpanFrame(b, h, cell.stirrupBar(), det, skin, frameCost, lowerBound, deflection, extLeft,
-                    extRight));
+            out.add(new SpanFrame(
+                    b, h, cell.stirrupBar(), det, skin, frameCost, lowerBound, deflection, extLeft, extRight));
         }
-        out.sort(Comparator.comparingDouble(SpanFrame::lowerBound).thenComparingDouble(SpanFrame::b)
-                .thenComparingDouble(SpanFrame::h).thenComparingDouble(f -> f.stirrupBar().diameter()));
+        out.sort(Comparator.comparingDouble(SpanFrame::lowerBound)
+                .thenComparingDouble(SpanFrame::b)
+                .thenComparingDouble(SpanFrame::h)
+                .thenComparingDouble(f -> f.stirrupBar().diameter()));
         return out;
     }
 
@@ -62,14 +68,15 @@ final class SpanFrames {
      * The least bar cost any layout of the frame could have, from the section model's strength bound
      * ({@code steelRate}: the price of a mm² of the cheapest steel per metre).
      */
-    private static double steelLowerBound(SpanProblem p, double b, double h, Detailing det, BarSize smallest,
-            double steelRate) {
+    private static double steelLowerBound(
+            SpanProblem p, double b, double h, Detailing det, BarSize smallest, double steelRate) {
         double minPair = 2 * smallest.area();
         double compressionArea = 0;
         for (BarSize s : p.space().barSizes()) {
             int n = BarSpacing.maxBars(b, det, s, p.materials(), p.code());
             if (n >= 2) {
-                compressionArea = Math.max(compressionArea, n * s.area() * p.space().maxLayers());
+                compressionArea =
+                        Math.max(compressionArea, n * s.area() * p.space().maxLayers());
             }
         }
         double dMax = h - det.firstLayerCentroid(smallest.diameter());
@@ -83,9 +90,11 @@ final class SpanFrames {
                 : minPair;
         double area = Math.max(bottom, minPair) * l;
         double supportL = p.leftSupport()
-                ? StrengthBound.minTensionArea(p.mLeft(), dMax, compressionArea, dp, dp + 60, b, fc, fy) : 0;
+                ? StrengthBound.minTensionArea(p.mLeft(), dMax, compressionArea, dp, dp + 60, b, fc, fy)
+                : 0;
         double supportR = p.rightSupport()
-                ? StrengthBound.minTensionArea(p.mRight(), dMax, compressionArea, dp, dp + 60, b, fc, fy) : 0;
+                ? StrengthBound.minTensionArea(p.mRight(), dMax, compressionArea, dp, dp + 60, b, fc, fy)
+                : 0;
         if (Double.isInfinite(bottom) || Double.isInfinite(supportL) || Double.isInfinite(supportR)) {
             return Double.POSITIVE_INFINITY;
         }
@@ -102,7 +111,8 @@ final class SpanFrames {
     private static double stirrupLowerBound(SpanContext ctx, double b, double h, BarSize stirrupBar) {
         SpanProblem p = ctx.problem();
         double total = 0;
-        double widest = p.space().stirrupSpacings().get(p.space().stirrupSpacings().size() - 1);
+        double widest =
+                p.space().stirrupSpacings().get(p.space().stirrupSpacings().size() - 1);
         int fewestLegs = p.space().stirrupLegs().get(0);
         for (SpanProblem.Zone z : ctx.zones()) {
             total += ctx.stirrupCost(b, h, new Stirrups(stirrupBar, fewestLegs, widest), z);

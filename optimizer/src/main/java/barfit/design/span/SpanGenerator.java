@@ -23,12 +23,10 @@ public final class SpanGenerator {
     /** Support options designed with no bottom bars counted at the support: one pass, without them. */
     private static final List<BottomBars> NO_BOTTOM_BARS = Collections.singletonList(null);
 
-    public record Stats(int frames, int framesEvaluated, int framesSkipped, int flexureSolves, int shearEvaluations,
-            long nanos) {
-    }
+    public record Stats(
+            int frames, int framesEvaluated, int framesSkipped, int flexureSolves, int shearEvaluations, long nanos) {}
 
-    public record Output(List<FrameOptions> sets, double incumbent, SpanLayout incumbentLayout, Stats stats) {
-    }
+    public record Output(List<FrameOptions> sets, double incumbent, SpanLayout incumbentLayout, Stats stats) {}
 
     /**
      * What a frame's options must beat to be worth searching, and what evaluating a frame lowers: for a
@@ -221,8 +219,17 @@ public final class SpanGenerator {
                 kept.add(combinations.prune(fs, toBeat));
             }
         }
-        return new Output(kept, incumbent, incumbentLayout, new Stats(frames.size(), evaluated, skipped,
-                ctx.flexureSolves(), ctx.shearEvaluations(), System.nanoTime() - t0));
+        return new Output(
+                kept,
+                incumbent,
+                incumbentLayout,
+                new Stats(
+                        frames.size(),
+                        evaluated,
+                        skipped,
+                        ctx.flexureSolves(),
+                        ctx.shearEvaluations(),
+                        System.nanoTime() - t0));
     }
 
     private static double loose(double incumbent, double slack) {
@@ -247,16 +254,19 @@ public final class SpanGenerator {
         // continuous bars, then more continuous bars only where a bound says they could pay
         ToDoubleFunction<BarSize> supportLimit = supportLimit(frameBounds, tops, toBeat);
         List<SupportOption> lefts = p.leftSupport()
-                ? options.supports(SpanProblem.Place.LEFT, p.mLeft(), supportLimit, NO_BOTTOM_BARS) : List.of();
+                ? options.supports(SpanProblem.Place.LEFT, p.mLeft(), supportLimit, NO_BOTTOM_BARS)
+                : List.of();
         List<SupportOption> rights = p.rightSupport()
-                ? options.supports(SpanProblem.Place.RIGHT, p.mRight(), supportLimit, NO_BOTTOM_BARS) : List.of();
-        List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
+                ? options.supports(SpanProblem.Place.RIGHT, p.mRight(), supportLimit, NO_BOTTOM_BARS)
+                : List.of();
+        List<TopOption> twoContinuous =
+                tops.stream().filter(t -> t.continuous() == 2).toList();
         List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, toBeat, lefts, rights)));
-        toBeat.lower(combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY,
-                null)));
+        toBeat.lower(
+                combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null)));
         addMoreContinuous(options, frameBounds, tops, mids, toBeat, lefts, rights);
-        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
-                Double.POSITIVE_INFINITY, null));
+        FrameOptions out =
+                combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         toBeat.lower(out);
         return out;
     }
@@ -265,10 +275,11 @@ public final class SpanGenerator {
      * Per top bar size, the cost at or above which a support option cannot be part of anything that pays:
      * what must be beaten less the least the rest of a combination costs (no limit without one cost to beat).
      */
-    private static ToDoubleFunction<BarSize> supportLimit(FrameBounds frameBounds, List<TopOption> tops,
-            CostToBeat toBeat) {
+    private static ToDoubleFunction<BarSize> supportLimit(
+            FrameBounds frameBounds, List<TopOption> tops, CostToBeat toBeat) {
         double common = toBeat.common();
-        return Double.isInfinite(common) ? t -> Double.POSITIVE_INFINITY
+        return Double.isInfinite(common)
+                ? t -> Double.POSITIVE_INFINITY
                 : t -> common - frameBounds.besideSupports(tops, t);
     }
 
@@ -277,9 +288,11 @@ public final class SpanGenerator {
      * and the cheapest support options that could go with it ({@code lefts} or {@code rights} null: not
      * known yet, counted as nothing).
      */
-    private OptionGenerator.MidLimit midLimit(SpanFrame f, CostToBeat toBeat, List<SupportOption> lefts,
-            List<SupportOption> rights) {
-        return (top, bottom) -> toBeat.limit(top.bar(), bottom) - f.cost() - top.cost()
+    private OptionGenerator.MidLimit midLimit(
+            SpanFrame f, CostToBeat toBeat, List<SupportOption> lefts, List<SupportOption> rights) {
+        return (top, bottom) -> toBeat.limit(top.bar(), bottom)
+                - f.cost()
+                - top.cost()
                 - (lefts == null ? 0 : Combinations.cheapestAbove(lefts, top, p.leftSupport()))
                 - (rights == null ? 0 : Combinations.cheapestAbove(rights, top, p.rightSupport()));
     }
@@ -288,15 +301,23 @@ public final class SpanGenerator {
      * Adds the mid-span options of the top options with more than two continuous bars whose least cost
      * (the frame's bounds, the cheapest supports) could still pay; whether it added any.
      */
-    private boolean addMoreContinuous(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
-            List<MidOption> mids, CostToBeat toBeat, List<SupportOption> lefts, List<SupportOption> rights) {
+    private boolean addMoreContinuous(
+            OptionGenerator options,
+            FrameBounds frameBounds,
+            List<TopOption> tops,
+            List<MidOption> mids,
+            CostToBeat toBeat,
+            List<SupportOption> lefts,
+            List<SupportOption> rights) {
         SpanFrame f = frameBounds.frame();
         boolean added = false;
         for (TopOption t : tops) {
             if (t.continuous() == 2) {
                 continue;
             }
-            double least = f.cost() + t.cost() + frameBounds.midSpan(t)
+            double least = f.cost()
+                    + t.cost()
+                    + frameBounds.midSpan(t)
                     + Combinations.cheapestAbove(lefts, t, p.leftSupport())
                     + Combinations.cheapestAbove(rights, t, p.rightSupport());
             if (least < toBeat.limitForTop(t.bar())) {
@@ -308,8 +329,8 @@ public final class SpanGenerator {
     }
 
     /** All options at once (anchored bottom bars, or below Table 9.3.1.1 where more steel can pay). */
-    private FrameOptions everything(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
-            CostToBeat toBeat) {
+    private FrameOptions everything(
+            OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops, CostToBeat toBeat) {
         SpanFrame f = frameBounds.frame();
         // deflection and anchorage only add demands: what cannot beat the cost on cost alone is not searched
         ToDoubleFunction<BarSize> limit = supportLimit(frameBounds, tops, toBeat);
@@ -319,9 +340,11 @@ public final class SpanGenerator {
         List<SupportOption> knownRight = null;
         if (!p.bottomAnchored()) {
             knownLeft = p.leftSupport()
-                    ? options.supports(SpanProblem.Place.LEFT, p.mLeft(), limit, NO_BOTTOM_BARS) : List.of();
+                    ? options.supports(SpanProblem.Place.LEFT, p.mLeft(), limit, NO_BOTTOM_BARS)
+                    : List.of();
             knownRight = p.rightSupport()
-                    ? options.supports(SpanProblem.Place.RIGHT, p.mRight(), limit, NO_BOTTOM_BARS) : List.of();
+                    ? options.supports(SpanProblem.Place.RIGHT, p.mRight(), limit, NO_BOTTOM_BARS)
+                    : List.of();
         }
         if (f.deflection() && !p.bottomAnchored()) {
             return belowMinimumDepth(options, frameBounds, tops, toBeat, knownLeft, knownRight);
@@ -337,10 +360,12 @@ public final class SpanGenerator {
         } else {
             bottoms = NO_BOTTOM_BARS;
         }
-        List<SupportOption> lefts = knownLeft != null ? knownLeft : p.leftSupport()
-                ? options.supports(SpanProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
-        List<SupportOption> rights = knownRight != null ? knownRight : p.rightSupport()
-                ? options.supports(SpanProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
+        List<SupportOption> lefts = knownLeft != null
+                ? knownLeft
+                : p.leftSupport() ? options.supports(SpanProblem.Place.LEFT, p.mLeft(), limit, bottoms) : List.of();
+        List<SupportOption> rights = knownRight != null
+                ? knownRight
+                : p.rightSupport() ? options.supports(SpanProblem.Place.RIGHT, p.mRight(), limit, bottoms) : List.of();
         return screened(options, f, tops, mids, lefts, rights, toBeat);
     }
 
@@ -349,10 +374,16 @@ public final class SpanGenerator {
      * their best passing combination then bounds which top options with more continuous bars (stiffer,
      * dearer) are searched.
      */
-    private FrameOptions belowMinimumDepth(OptionGenerator options, FrameBounds frameBounds, List<TopOption> tops,
-            CostToBeat toBeat, List<SupportOption> lefts, List<SupportOption> rights) {
+    private FrameOptions belowMinimumDepth(
+            OptionGenerator options,
+            FrameBounds frameBounds,
+            List<TopOption> tops,
+            CostToBeat toBeat,
+            List<SupportOption> lefts,
+            List<SupportOption> rights) {
         SpanFrame f = frameBounds.frame();
-        List<TopOption> twoContinuous = tops.stream().filter(t -> t.continuous() == 2).toList();
+        List<TopOption> twoContinuous =
+                tops.stream().filter(t -> t.continuous() == 2).toList();
         List<MidOption> mids = new ArrayList<>(options.mids(twoContinuous, midLimit(f, toBeat, lefts, rights)));
         FrameOptions first = screened(options, f, tops, new ArrayList<>(mids), lefts, rights, toBeat);
         boolean more = addMoreContinuous(options, frameBounds, tops, mids, toBeat, lefts, rights);
@@ -360,16 +391,22 @@ public final class SpanGenerator {
     }
 
     /** The frame's options after the deflection screen (below Table 9.3.1.1), enumerated; the cost lowered. */
-    private FrameOptions screened(OptionGenerator options, SpanFrame f, List<TopOption> tops, List<MidOption> mids,
-            List<SupportOption> lefts, List<SupportOption> rights, CostToBeat toBeat) {
+    private FrameOptions screened(
+            OptionGenerator options,
+            SpanFrame f,
+            List<TopOption> tops,
+            List<MidOption> mids,
+            List<SupportOption> lefts,
+            List<SupportOption> rights,
+            CostToBeat toBeat) {
         if (f.deflection()) {
             DeflectionScreen screen = new DeflectionScreen(p, ctx.sections(), f, options.shape(), mids, lefts, rights);
             mids = screen.mids();
             lefts = screen.lefts();
             rights = screen.rights();
         }
-        FrameOptions out = combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights,
-                Double.POSITIVE_INFINITY, null));
+        FrameOptions out =
+                combinations.enumerate(new FrameOptions(f, tops, mids, lefts, rights, Double.POSITIVE_INFINITY, null));
         toBeat.lower(out);
         return out;
     }

@@ -184,7 +184,8 @@ public record SpanLayout(
             }
         }
         if (skin != null) {
-            out.add(new BarMark("K1", Role.SKIN, skin.bar(), 2 * SectionLayout.skinBarsPerFace(height, skin.spacing()), l));
+            out.add(new BarMark(
+                    "K1", Role.SKIN, skin.bar(), 2 * SectionLayout.skinBarsPerFace(height, skin.spacing()), l));
         }
         // a stirrup set is a closed hoop and, for each leg beyond two, a crosstie: separate bars, separate marks
         List<SpanProblem.Zone> zones = p.zones();
@@ -193,12 +194,18 @@ public record SpanLayout(
             Stirrups st = zoneStirrups.get(i);
             int sets = stirrupSets(zones.get(i).length(), st.spacing());
             String zone = zones.get(i).name();
-            out.add(new BarMark("S" + s++, Role.HOOPS, st.bar(), sets, cost.hoopLength(width, height, st.bar()), zone,
-                    st.legs()));
+            out.add(new BarMark(
+                    "S" + s++, Role.HOOPS, st.bar(), sets, cost.hoopLength(width, height, st.bar()), zone, st.legs()));
             if (st.legs() > 2) {
                 int ties = st.legs() - 2;
-                out.add(new BarMark("S" + s++, Role.CROSSTIES, st.bar(), sets * ties, cost.crosstieLength(height,
-                        st.bar()), zone, st.legs()));
+                out.add(new BarMark(
+                        "S" + s++,
+                        Role.CROSSTIES,
+                        st.bar(),
+                        sets * ties,
+                        cost.crosstieLength(height, st.bar()),
+                        zone,
+                        st.legs()));
             }
         }
         return out;

@@ -41,18 +41,76 @@ public record SpanProblem(
         ShearDiagram shearDiagram) {
 
     /** A span whose demand is given as moments and shears at its critical sections (no analysis of its own). */
-    public SpanProblem(String id, Materials materials, Detailing detailing, CodeEquations code, SearchSpace space,
-            double span, EndCondition ends, Double mLeft, Double mMid, Double mRight, Double vLeft, Double vRight,
-            SpanChecks.ServiceLoads service, SpanChecks.Limits limits, Double maxDepth, Double fixedWidth, Flange flange,
-            boolean bottomAnchored, int maxBarSizes, int barsPerTwoLegs) {
-        this(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight, service, limits,
-                maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, null, null);
+    public SpanProblem(
+            String id,
+            Materials materials,
+            Detailing detailing,
+            CodeEquations code,
+            SearchSpace space,
+            double span,
+            EndCondition ends,
+            Double mLeft,
+            Double mMid,
+            Double mRight,
+            Double vLeft,
+            Double vRight,
+            SpanChecks.ServiceLoads service,
+            SpanChecks.Limits limits,
+            Double maxDepth,
+            Double fixedWidth,
+            Flange flange,
+            boolean bottomAnchored,
+            int maxBarSizes,
+            int barsPerTwoLegs) {
+        this(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                null,
+                null);
     }
 
     /** The same span with the service moments and the shear diagram of an analysis of its line. */
     public SpanProblem withAnalysis(SpanChecks.ServiceMoments analysed, ShearDiagram diagram) {
-        return new SpanProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, limits, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysed,
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysed,
                 diagram);
     }
 
@@ -64,11 +122,17 @@ public record SpanProblem(
         if (service == null) {
             return null;
         }
-        return analysedService != null ? analysedService : SpanChecks.ServiceMoments.scaled(mLeft, mMid, mRight, service);
+        return analysedService != null
+                ? analysedService
+                : SpanChecks.ServiceMoments.scaled(mLeft, mMid, mRight, service);
     }
 
     /** Where a section or zone is. */
-    public enum Place { LEFT, MID, RIGHT }
+    public enum Place {
+        LEFT,
+        MID,
+        RIGHT
+    }
 
     /**
      * A stirrup zone: its place in the span (mm from the left face), the section it uses and its design
@@ -171,8 +235,10 @@ public record SpanProblem(
         if (cantilever()) {
             Double v = vLeft;
             out.add(new Zone("support", 0, l / 2, v, Place.LEFT));
-            out.add(v == null ? new Zone("outer", l / 2, l, null, Place.LEFT)
-                    : new Zone("outer", l / 2, l, null, Place.LEFT, new ShearLine(l, v, 0, true), 0));
+            out.add(
+                    v == null
+                            ? new Zone("outer", l / 2, l, null, Place.LEFT)
+                            : new Zone("outer", l / 2, l, null, Place.LEFT, new ShearLine(l, v, 0, true), 0));
             return out;
         }
         if (vLeft == null && vRight == null) {
@@ -244,33 +310,131 @@ public record SpanProblem(
     }
 
     public SpanProblem withMaxDepth(Double cap) {
-        return new SpanProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, limits, cap, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                cap,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
                 shearDiagram);
     }
 
     public SpanProblem withSpace(SearchSpace s) {
-        return new SpanProblem(id, materials, detailing, code, s, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, limits, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                s,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
                 shearDiagram);
     }
 
     public SpanProblem withFixedWidth(Double w) {
-        return new SpanProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, limits, maxDepth, w, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                w,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
                 shearDiagram);
     }
 
     public SpanProblem withLimits(SpanChecks.Limits l) {
-        return new SpanProblem(id, materials, detailing, code, space, span, ends, mLeft, mMid, mRight, vLeft, vRight,
-                service, l, maxDepth, fixedWidth, flange, bottomAnchored, maxBarSizes, barsPerTwoLegs, analysedService,
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                l,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
                 shearDiagram);
     }
 
     public SpanProblem scaled(double moments, double shears) {
-        return new SpanProblem(id, materials, detailing, code, space, span, ends, mul(mLeft, moments), mul(mMid, moments),
-                mul(mRight, moments), mul(vLeft, shears), mul(vRight, shears), service, limits, maxDepth, fixedWidth,
-                flange, bottomAnchored, maxBarSizes, barsPerTwoLegs,
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mul(mLeft, moments),
+                mul(mMid, moments),
+                mul(mRight, moments),
+                mul(vLeft, shears),
+                mul(vRight, shears),
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
                 analysedService == null ? null : analysedService.times(moments),
                 shearDiagram == null ? null : shearDiagram.times(shears));
     }

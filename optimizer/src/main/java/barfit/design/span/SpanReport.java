@@ -11,9 +11,12 @@ import java.util.Map;
  * The full verification of a span: each flexural section, each stirrup zone (with the design shear it was
  * checked for, null for minimum stirrups), and the span checks.
  */
-public record SpanReport(Map<SpanProblem.Place, CheckReport> sections, List<CheckResult> zoneChecks,
+public record SpanReport(
+        Map<SpanProblem.Place, CheckReport> sections,
+        List<CheckResult> zoneChecks,
         List<Double> zoneShears,
-        SpanChecks.Result span, barfit.section.trail.Trail zoneTrail,
+        SpanChecks.Result span,
+        barfit.section.trail.Trail zoneTrail,
         barfit.section.trail.Trail spanTrail) {
 
     public List<CheckResult> all() {

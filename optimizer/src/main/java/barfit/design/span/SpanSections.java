@@ -36,14 +36,19 @@ final class SpanSections {
 
     private BeamSection mid(SpanFrame f, SectionShape shape, TopOption top, BarSize bottom, List<Integer> counts) {
         List<BarLayer> layers = new ArrayList<>(BeamSection.stack(Face.BOTTOM, groups(bottom, counts), f.det()));
-        layers.addAll(BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(top.bar(), top.continuous())),
-                f.det()));
+        layers.addAll(
+                BeamSection.stack(Face.TOP, List.of(new BeamSection.BarGroup(top.bar(), top.continuous())), f.det()));
         return new BeamSection(shape, p.materials(), f.det(), layers, null, f.skin(), p.code());
     }
 
     /** A support option's section, with the bottom bars it was designed with. */
     BeamSection support(SpanFrame f, SectionShape shape, SupportOption s) {
-        return support(f, shape, s.bar(), s.counts(), s.bottom() == null ? List.of() : s.bottom().groups());
+        return support(
+                f,
+                shape,
+                s.bar(),
+                s.counts(),
+                s.bottom() == null ? List.of() : s.bottom().groups());
     }
 
     /** A support section of top bars split over layers, the bottom bars counted there below (for its ties). */
@@ -51,8 +56,8 @@ final class SpanSections {
         return support(f, shape, top, TensionSearch.toList(split), bottom);
     }
 
-    private BeamSection support(SpanFrame f, SectionShape shape, BarSize top, List<Integer> counts,
-            List<BeamSection.BarGroup> bottom) {
+    private BeamSection support(
+            SpanFrame f, SectionShape shape, BarSize top, List<Integer> counts, List<BeamSection.BarGroup> bottom) {
         List<BarLayer> layers = new ArrayList<>(BeamSection.stack(Face.TOP, groups(top, counts), f.det()));
         if (!bottom.isEmpty()) {
             layers.addAll(BeamSection.stack(Face.BOTTOM, bottom, f.det()));
@@ -88,8 +93,12 @@ final class SpanSections {
      */
     double[] deflectionStiffness(SpanFrame f, SupportOption o, SpanProblem.Place place) {
         BeamSection s = support(f, new SectionShape(f.b(), f.h(), p.flange()), o);
-        double[] ie = SpanChecks.ieLevels(s, Bending.HOGGING,
-                place == SpanProblem.Place.LEFT ? p.serviceMoments().left() : p.serviceMoments().right());
+        double[] ie = SpanChecks.ieLevels(
+                s,
+                Bending.HOGGING,
+                place == SpanProblem.Place.LEFT
+                        ? p.serviceMoments().left()
+                        : p.serviceMoments().right());
         return p.cantilever() ? append(ie, SpanChecks.rhoPrime(s, Bending.HOGGING)) : ie;
     }
 

@@ -25,13 +25,10 @@ import java.util.Map;
  */
 public final class SpanSelection {
     /** The chosen combination and the solver's proof. */
-    public record Choice(FrameOptions set, MidOption mid, SupportOption left,
-            SupportOption right) {
-    }
+    public record Choice(FrameOptions set, MidOption mid, SupportOption left, SupportOption right) {}
 
     /** {@code choice}, {@code objective} and {@code bound} (in {@link CostModel#SPAN_UNITS}) only when solved. */
-    public record Result(Proof.Status status, Choice choice, long objective, long bound, Proof.SolverStats stats) {
-    }
+    public record Result(Proof.Status status, Choice choice, long objective, long bound, Proof.SolverStats stats) {}
 
     private final CpModel model = new CpModel();
     private final List<FrameOptions> sets;
@@ -45,6 +42,7 @@ public final class SpanSelection {
     private int booleans;
     /** Each option's stiffness for the deflection cuts, computed once (options are compared by identity). */
     private final Map<Object, double[]> stiffness = new java.util.IdentityHashMap<>();
+
     private static final double[] NO_PART = new double[0];
 
     public SpanSelection(SpanProblem problem, List<FrameOptions> sets) {
@@ -106,8 +104,14 @@ public final class SpanSelection {
         model.minimize(LinearExpr.weightedSum(all.toArray(new Literal[0]), c));
     }
 
-    private List<Literal> supports(int fi, String side, FrameOptions fs, List<SupportOption> opts,
-            List<Literal> topVars, List<Literal> midLiterals, boolean present) {
+    private List<Literal> supports(
+            int fi,
+            String side,
+            FrameOptions fs,
+            List<SupportOption> opts,
+            List<Literal> topVars,
+            List<Literal> midLiterals,
+            boolean present) {
         List<Literal> supportLiterals = new ArrayList<>();
         if (!present) {
             return supportLiterals;
@@ -168,12 +172,16 @@ public final class SpanSelection {
         if (p.bottomAnchored()) {
             Map<BottomBars, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
             for (int i = 0; i < opts.size(); i++) {
-                byKey.computeIfAbsent(opts.get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
-                    LinearExpr.newBuilder()})[0].add(supportLiterals.get(i));
+                byKey
+                        .computeIfAbsent(opts.get(i).bottom(), k ->
+                                new LinearExprBuilder[] {LinearExpr.newBuilder(), LinearExpr.newBuilder()})[0]
+                        .add(supportLiterals.get(i));
             }
             for (int i = 0; i < fs.mids().size(); i++) {
-                byKey.computeIfAbsent(fs.mids().get(i).bottom(), k -> new LinearExprBuilder[] {LinearExpr.newBuilder(),
-                    LinearExpr.newBuilder()})[1].add(midLiterals.get(i));
+                byKey
+                        .computeIfAbsent(fs.mids().get(i).bottom(), k ->
+                                new LinearExprBuilder[] {LinearExpr.newBuilder(), LinearExpr.newBuilder()})[1]
+                        .add(midLiterals.get(i));
             }
             for (LinearExprBuilder[] pair : byKey.values()) {
                 model.addEquality(pair[0], pair[1]);
@@ -205,15 +213,29 @@ public final class SpanSelection {
                 weaker.add(midVars.get(fi).get(i));
             }
         }
-        parts += weakerSupports(weaker, fs.lefts(), leftVars.get(fi), c.left(), known,
+        parts += weakerSupports(
+                weaker,
+                fs.lefts(),
+                leftVars.get(fi),
+                c.left(),
+                known,
                 o -> sections.deflectionStiffness(f, o, SpanProblem.Place.LEFT));
-        parts += weakerSupports(weaker, fs.rights(), rightVars.get(fi), c.right(), known,
+        parts += weakerSupports(
+                weaker,
+                fs.rights(),
+                rightVars.get(fi),
+                c.right(),
+                known,
                 o -> sections.deflectionStiffness(f, o, SpanProblem.Place.RIGHT));
         model.addLessOrEqual(weaker, parts - 1);
     }
 
-    private int weakerSupports(LinearExprBuilder weaker, List<SupportOption> opts, List<Literal> vars,
-            SupportOption s0, boolean known,
+    private int weakerSupports(
+            LinearExprBuilder weaker,
+            List<SupportOption> opts,
+            List<Literal> vars,
+            SupportOption s0,
+            boolean known,
             java.util.function.Function<SupportOption, double[]> of) {
         if (s0 == null) {
             return 0;
@@ -252,7 +274,8 @@ public final class SpanSelection {
         LinearExprBuilder same = LinearExpr.newBuilder();
         for (int i = 0; i < c.set().mids().size(); i++) {
             MidOption m = c.set().mids().get(i);
-            if (m.bar().equals(c.mid().bar()) && m.top().bar().equals(c.mid().top().bar())) {
+            if (m.bar().equals(c.mid().bar())
+                    && m.top().bar().equals(c.mid().top().bar())) {
                 same.add(midVars.get(fi).get(i));
             }
         }
@@ -262,8 +285,8 @@ public final class SpanSelection {
     public Result solve(SolverOptions o) {
         CpSolver solver = OrTools.solver(o);
         Proof.Status status = OrTools.status(solver.solve(model), solver, "the span selection model of beam " + p.id());
-        Proof.SolverStats stats = new Proof.SolverStats(booleans, solver.numConflicts(), solver.numBranches(),
-                solver.wallTime());
+        Proof.SolverStats stats =
+                new Proof.SolverStats(booleans, solver.numConflicts(), solver.numBranches(), solver.wallTime());
         if (status != Proof.Status.OPTIMAL && status != Proof.Status.FEASIBLE) {
             return new Result(status, null, 0, 0, stats);
         }
@@ -275,8 +298,12 @@ public final class SpanSelection {
             MidOption mid = pick(solver, midVars.get(fi), fs.mids());
             SupportOption left = pick(solver, leftVars.get(fi), fs.lefts());
             SupportOption right = pick(solver, rightVars.get(fi), fs.rights());
-            return new Result(status, new Choice(fs, mid, left, right), Math.round(solver.objectiveValue()),
-                    Math.round(solver.bestObjectiveBound()), stats);
+            return new Result(
+                    status,
+                    new Choice(fs, mid, left, right),
+                    Math.round(solver.objectiveValue()),
+                    Math.round(solver.bestObjectiveBound()),
+                    stats);
         }
         throw new IllegalStateException("the solver chose no frame");
     }

@@ -19,8 +19,7 @@ import java.util.Map;
 
 /** Checks a designed span with the section model: sections, stirrup zones, span (depth, deflection). */
 public final class SpanVerifier {
-    private SpanVerifier() {
-    }
+    private SpanVerifier() {}
 
     public static SpanReport verify(SpanProblem p, SpanLayout l, boolean withTrail) {
         Span span = new Span(p.span(), p.ends()); // depth and deflection: SpanChecks, once for the span
@@ -47,19 +46,35 @@ public final class SpanVerifier {
             Double vu = z.vu(SectionChecks.shearDepth(s, bending));
             zoneShears.add(vu);
             zoneChecks.addAll(SectionChecks.shearZone(s, bending, vu == null ? 0 : vu, z.name(), zt));
-            zoneChecks.addAll(StirrupRules.checks(s, l.physicalSection(p, z.section(), st), bending,
-                    SpanLayout.momentAt(p, z.section()), p.practice(), z.name(), zt));
+            zoneChecks.addAll(StirrupRules.checks(
+                    s,
+                    l.physicalSection(p, z.section(), st),
+                    bending,
+                    SpanLayout.momentAt(p, z.section()),
+                    p.practice(),
+                    z.name(),
+                    zt));
         }
         // extra top bars are developed past the support face (25.4.2.1): never cut short of ld
         if (!p.cantilever()) {
             double ld = Extension.developmentLength(p, l.width(), l.height(), l.detailing(p.detailing()), l.top());
             if (p.leftSupport() && SpanLayout.sum(l.topLeft()) > l.topContinuous()) {
-                zoneChecks.add(CheckResult.atLeast("top_extension.left", "Extra top bars at the left support run ld "
-                        + "past the face", "25.4.2.1, 25.4.2.4", Q.length(l.extLeft()), Q.length(ld), null));
+                zoneChecks.add(CheckResult.atLeast(
+                        "top_extension.left",
+                        "Extra top bars at the left support run ld " + "past the face",
+                        "25.4.2.1, 25.4.2.4",
+                        Q.length(l.extLeft()),
+                        Q.length(ld),
+                        null));
             }
             if (p.rightSupport() && SpanLayout.sum(l.topRight()) > l.topContinuous()) {
-                zoneChecks.add(CheckResult.atLeast("top_extension.right", "Extra top bars at the right support run ld "
-                        + "past the face", "25.4.2.1, 25.4.2.4", Q.length(l.extRight()), Q.length(ld), null));
+                zoneChecks.add(CheckResult.atLeast(
+                        "top_extension.right",
+                        "Extra top bars at the right support run ld " + "past the face",
+                        "25.4.2.1, 25.4.2.4",
+                        Q.length(l.extRight()),
+                        Q.length(ld),
+                        null));
             }
         }
         SpanChecks.Sections ss = new SpanChecks.Sections(
@@ -67,8 +82,17 @@ public final class SpanVerifier {
                 p.midSection() ? l.section(p, SpanProblem.Place.MID, null) : null,
                 p.rightSupport() ? l.section(p, SpanProblem.Place.RIGHT, null) : null);
         Trail st = withTrail ? Trail.recording() : Trail.off();
-        SpanChecks.Result spanResult = SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(),
-                p.service(), p.serviceMoments(), p.limits(), st);
+        SpanChecks.Result spanResult = SpanChecks.run(
+                p.span(),
+                p.ends(),
+                ss,
+                p.mLeft(),
+                p.mMid(),
+                p.mRight(),
+                p.service(),
+                p.serviceMoments(),
+                p.limits(),
+                st);
         return new SpanReport(sections, zoneChecks, zoneShears, spanResult, zt, st);
     }
 
@@ -78,12 +102,22 @@ public final class SpanVerifier {
                 p.leftSupport() ? l.section(p, SpanProblem.Place.LEFT, null) : null,
                 p.midSection() ? l.section(p, SpanProblem.Place.MID, null) : null,
                 p.rightSupport() ? l.section(p, SpanProblem.Place.RIGHT, null) : null);
-        return SpanChecks.run(p.span(), p.ends(), ss, p.mLeft(), p.mMid(), p.mRight(), p.service(),
-                p.serviceMoments(), p.limits(), Trail.off()).ok();
+        return SpanChecks.run(
+                        p.span(),
+                        p.ends(),
+                        ss,
+                        p.mLeft(),
+                        p.mMid(),
+                        p.mRight(),
+                        p.service(),
+                        p.serviceMoments(),
+                        p.limits(),
+                        Trail.off())
+                .ok();
     }
 
-    private static CheckReport check(SpanProblem p, SpanLayout l, SpanProblem.Place place, Double mu, Span span,
-            boolean withTrail) {
+    private static CheckReport check(
+            SpanProblem p, SpanLayout l, SpanProblem.Place place, Double mu, Span span, boolean withTrail) {
         BeamSection s = l.section(p, place, null);
         return SectionChecks.run(s, new Demand(mu, null), span, withTrail ? Trail.recording() : Trail.off(), false);
     }

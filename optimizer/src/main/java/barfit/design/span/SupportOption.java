@@ -12,8 +12,15 @@ import java.util.Map;
  * most: the bottom bars must ask no more than the first and hold the second. {@code bottom} is the bottom
  * bars it was designed with as compression steel (anchored bottom bars), null for none.
  */
-public record SupportOption(BarSize bar, List<Integer> counts, double d, int legs, int legsMax,
-        Map<Integer, Stirrups> zones, double cost, BottomBars bottom) {
+public record SupportOption(
+        BarSize bar,
+        List<Integer> counts,
+        double d,
+        int legs,
+        int legsMax,
+        Map<Integer, Stirrups> zones,
+        double cost,
+        BottomBars bottom) {
     /**
      * Whether its stirrups suit a mid-span option's bottom bars: enough legs for the office's rule
      * and no more legs than the bottom bars' outer layer can hold (25.7.1.2, 25.7.1.3).

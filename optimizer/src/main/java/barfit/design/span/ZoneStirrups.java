@@ -14,11 +14,9 @@ import java.util.Map;
  */
 final class ZoneStirrups {
     /** The cheapest stirrups of some zones for one set of tension bars (by zone index), and their cost. */
-    record Choice(Map<Integer, Stirrups> stirrups, double cost) {
-    }
+    record Choice(Map<Integer, Stirrups> stirrups, double cost) {}
 
-    private record Key(int zone, double d, double as, int legs, int mostLegs, double maxSpacing) {
-    }
+    private record Key(int zone, double d, double as, int legs, int mostLegs, double maxSpacing) {}
 
     private final SpanContext ctx;
     private final SpanFrame f;

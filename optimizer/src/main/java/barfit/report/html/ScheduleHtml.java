@@ -4,18 +4,18 @@ import barfit.catalogs.BarSize;
 import barfit.design.CostRates;
 import barfit.design.Proof;
 import barfit.design.SearchSpace;
+import barfit.design.span.Extension;
 import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
-import barfit.design.span.Extension;
 import barfit.input.Rationalise;
 import barfit.input.Settings;
-import barfit.report.SpanText;
 import barfit.report.Caution;
 import barfit.report.DiagnosisWords;
 import barfit.report.Money;
 import barfit.report.ScheduleRows;
 import barfit.report.ScheduleWords;
+import barfit.report.SpanText;
 import barfit.report.TrailText;
 import barfit.report.Words;
 import barfit.schedule.ScheduleInput;
@@ -42,8 +42,7 @@ import java.util.Set;
  * gives the same bytes: fixed formatting, input order, no times or dates.
  */
 public final class ScheduleHtml {
-    private ScheduleHtml() {
-    }
+    private ScheduleHtml() {}
 
     public static String render(ScheduleResult r) {
         ScheduleInput in = r.input();
@@ -55,9 +54,18 @@ public final class ScheduleHtml {
         String title = "Beam schedule: " + String.join(", ", in.sources());
         out.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n");
         out.append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n");
-        out.append("<title>").append(Svg.esc(title)).append("</title>\n<style>\n").append(CSS).append("</style>\n</head>\n<body>\n");
-        out.append("<header>\n<h1>").append(Svg.esc(title)).append("</h1>\n<p class=\"sub\">barfit schedule report · ")
-                .append(Svg.esc(s.code().edition())).append(" · ").append(unitsWords(u)).append("</p>\n</header>\n");
+        out.append("<title>")
+                .append(Svg.esc(title))
+                .append("</title>\n<style>\n")
+                .append(CSS)
+                .append("</style>\n</head>\n<body>\n");
+        out.append("<header>\n<h1>")
+                .append(Svg.esc(title))
+                .append("</h1>\n<p class=\"sub\">barfit schedule report · ")
+                .append(Svg.esc(s.code().edition()))
+                .append(" · ")
+                .append(unitsWords(u))
+                .append("</p>\n</header>\n");
         caution(out);
         contents(r, out);
         project(r, out);
@@ -95,7 +103,8 @@ public final class ScheduleHtml {
 
     private static void caution(StringBuilder out) {
         List<String> lines = Caution.LINES;
-        out.append("<aside class=\"caution\" role=\"note\">\n<p><strong>").append(Svg.esc(lines.get(0)))
+        out.append("<aside class=\"caution\" role=\"note\">\n<p><strong>")
+                .append(Svg.esc(lines.get(0)))
                 .append("</strong></p>\n<p>");
         for (int i = 1; i < lines.size(); i++) {
             out.append(i == 1 ? "" : "\n").append(Svg.esc(lines.get(i)));
@@ -129,19 +138,35 @@ public final class ScheduleHtml {
         out.append("<table class=\"kv\">\n<caption>Code, materials, detailing</caption>\n");
         kv(out, "code", settings.code().edition() + ", nonprestressed beams");
         kv(out, "units", unitsWords(u));
-        kv(out, "concrete", "f'c = " + u.withUnit(materials.fc(), Dim.STRESS) + ", λ = "
-                + u.compact(materials.lambda(), Dim.NUMBER)
-                + ", aggregate " + len(materials.aggregate(), u));
-        kv(out, "steel", "fy = " + u.withUnit(materials.fy(), Dim.STRESS) + " (longitudinal), fyt = "
-                + u.withUnit(materials.fyt(), Dim.STRESS)
-                + " (stirrups), Es = " + u.compact(settings.code().es(), Dim.STRESS) + " " + u.unit(Dim.STRESS));
-        kv(out, "bar catalog", settings.catalog().id() + ": " + settings.catalog().title() + " ("
-                + settings.catalog().source() + ")");
-        kv(out, "cover", len(detailing.cover(), u) + " clear to the stirrups, exposure " + detailing.exposure().key()
-                + " (20.5.1.3)");
+        kv(
+                out,
+                "concrete",
+                "f'c = " + u.withUnit(materials.fc(), Dim.STRESS) + ", λ = "
+                        + u.compact(materials.lambda(), Dim.NUMBER)
+                        + ", aggregate " + len(materials.aggregate(), u));
+        kv(
+                out,
+                "steel",
+                "fy = " + u.withUnit(materials.fy(), Dim.STRESS) + " (longitudinal), fyt = "
+                        + u.withUnit(materials.fyt(), Dim.STRESS)
+                        + " (stirrups), Es = " + u.compact(settings.code().es(), Dim.STRESS) + " "
+                        + u.unit(Dim.STRESS));
+        kv(
+                out,
+                "bar catalog",
+                settings.catalog().id() + ": " + settings.catalog().title() + " ("
+                        + settings.catalog().source() + ")");
+        kv(
+                out,
+                "cover",
+                len(detailing.cover(), u) + " clear to the stirrups, exposure "
+                        + detailing.exposure().key() + " (20.5.1.3)");
         kv(out, "layer gap", len(detailing.layerGap(), u) + " clear between layers (25.2.2)");
-        kv(out, "stirrups", "sizes " + labels(space.stirrupSizes()) + "; legs " + joinInts(space.stirrupLegs()) + "; spacing "
-                + range(space.stirrupSpacings(), u));
+        kv(
+                out,
+                "stirrups",
+                "sizes " + labels(space.stirrupSizes()) + "; legs " + joinInts(space.stirrupLegs()) + "; spacing "
+                        + range(space.stirrupSpacings(), u));
         out.append("</table>\n");
         out.append("<table class=\"kv\">\n<caption>Search space</caption>\n");
         kv(out, "widths", lengths(space.widths(), u));
@@ -151,36 +176,56 @@ public final class ScheduleHtml {
         kv(out, "layers of bars", "1 to " + space.maxLayers() + " on the tension face");
         kv(out, "bar sizes per beam", "at most " + input.maxBarSizesPerBeam());
         out.append("</table>\n");
-        out.append("<table class=\"kv\">\n<caption>Cost rates").append(input.currency().isEmpty() ? ""
-                : " (" + Svg.esc(input.currency()) + ")").append("</caption>\n");
+        out.append("<table class=\"kv\">\n<caption>Cost rates")
+                .append(input.currency().isEmpty() ? "" : " (" + Svg.esc(input.currency()) + ")")
+                .append("</caption>\n");
         rates(input.rates(), u, out);
         out.append("</table>\n</div>\n");
 
         out.append("<h3>Rules of thumb the design uses</h3>\n<ul class=\"rules\">\n");
-        li(out, "Stirrup legs: no more legs than bars in the outer layer of either face, so that every leg's bend "
-                + "holds a bar (25.7.1.2, 25.7.1.3); legs beyond two are crossties; where compression bars are relied "
-                + "on, ties round them as 9.7.6.4 and 25.7.2 ask"
-                + (input.barsPerTwoLegs() > 0 ? "; and, the office's own rule, two legs hold up to " + input.barsPerTwoLegs()
-                        + " bars in a layer, four legs up to " + 2 * input.barsPerTwoLegs() + ", and so on (no clause)"
-                        : "") + ".");
-        li(out, "Stirrup zones: from the shear line of a uniformly loaded span through the given shears at d from "
-                + "the faces; the middle zone takes the line's largest shear over its length (and at least "
-                + "1.6 wL ℓ / 8 where service loads are given).");
-        li(out, "Top bars: two or more bars run the full span; the extra bars at a continuous support run past the "
-                + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0), "
-                + "never cut short of it.");
-        li(out, "At most " + input.maxBarSizesPerBeam() + " longitudinal bar sizes per beam; bottom bars of one size run the "
-                + "full span.");
-        li(out, "Main-bar mass is multiplied by the lap factor " + u.compact(input.rates().lapFactor(), Dim.NUMBER)
-                + " for laps and waste.");
-        li(out, "Skin bars of the smallest bar size at the 24.3.2 spacing where h > " + (u == UnitSystem.US ? "36 in"
-                : "900 mm") + " (9.7.2.3), priced as main bars.");
-        li(out, "Stirrup zones follow the shear envelope of a uniformly loaded span: each support zone runs to where "
-                + "the shear has fallen to half its end value.");
+        li(
+                out,
+                "Stirrup legs: no more legs than bars in the outer layer of either face, so that every leg's bend "
+                        + "holds a bar (25.7.1.2, 25.7.1.3); legs beyond two are crossties; where compression bars are relied "
+                        + "on, ties round them as 9.7.6.4 and 25.7.2 ask"
+                        + (input.barsPerTwoLegs() > 0
+                                ? "; and, the office's own rule, two legs hold up to " + input.barsPerTwoLegs()
+                                        + " bars in a layer, four legs up to " + 2 * input.barsPerTwoLegs()
+                                        + ", and so on (no clause)"
+                                : "")
+                        + ".");
+        li(
+                out,
+                "Stirrup zones: from the shear line of a uniformly loaded span through the given shears at d from "
+                        + "the faces; the middle zone takes the line's largest shear over its length (and at least "
+                        + "1.6 wL ℓ / 8 where service loads are given).");
+        li(
+                out,
+                "Top bars: two or more bars run the full span; the extra bars at a continuous support run past the "
+                        + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0), "
+                        + "never cut short of it.");
+        li(
+                out,
+                "At most " + input.maxBarSizesPerBeam()
+                        + " longitudinal bar sizes per beam; bottom bars of one size run the " + "full span.");
+        li(
+                out,
+                "Main-bar mass is multiplied by the lap factor "
+                        + u.compact(input.rates().lapFactor(), Dim.NUMBER) + " for laps and waste.");
+        li(
+                out,
+                "Skin bars of the smallest bar size at the 24.3.2 spacing where h > "
+                        + (u == UnitSystem.US ? "36 in" : "900 mm") + " (9.7.2.3), priced as main bars.");
+        li(
+                out,
+                "Stirrup zones follow the shear envelope of a uniformly loaded span: each support zone runs to where "
+                        + "the shear has fallen to half its end value.");
         li(out, "Deflection is computed (24.2) only where h is below the minimum of Table 9.3.1.1.");
-        li(out, "Bars are drawn where the checks place them: corner bars at cover + stirrup + d_b/2 from each face, "
-                + "the rest evenly between. Where the stirrup's bend radius (Table 25.3.2) is larger than the bar's, a "
-                + "real corner bar nests slightly further in, and the drawing shows it touching the bend.");
+        li(
+                out,
+                "Bars are drawn where the checks place them: corner bars at cover + stirrup + d_b/2 from each face, "
+                        + "the rest evenly between. Where the stirrup's bend radius (Table 25.3.2) is larger than the bar's, a "
+                        + "real corner bar nests slightly further in, and the drawing shows it touching the bend.");
         out.append("</ul>\n");
 
         Rationalise rationalise = input.rationalise();
@@ -189,14 +234,29 @@ public final class ScheduleHtml {
             out.append("<p>None: each beam is designed at its own optimum.</p>\n");
         } else {
             out.append("<table class=\"kv\">\n");
-            kv(out, "section sizes", rationalise.maxSectionSizes() == null ? "no limit" : "at most "
-                    + rationalise.maxSectionSizes()
-                    + " distinct b × h over the schedule");
-            kv(out, "bar sizes", rationalise.maxBarSizes() == null ? "no limit" : "at most " + rationalise.maxBarSizes()
-                    + " distinct longitudinal bar sizes over the schedule");
-            kv(out, "groups", rationalise.groupsSameSection() ? "beams of one group share b × h"
-                    : "groups do not constrain b × h");
-            kv(out, "formwork set", money(rationalise.formworkSetCost(), input.currency()) + " per distinct section size");
+            kv(
+                    out,
+                    "section sizes",
+                    rationalise.maxSectionSizes() == null
+                            ? "no limit"
+                            : "at most " + rationalise.maxSectionSizes() + " distinct b × h over the schedule");
+            kv(
+                    out,
+                    "bar sizes",
+                    rationalise.maxBarSizes() == null
+                            ? "no limit"
+                            : "at most " + rationalise.maxBarSizes()
+                                    + " distinct longitudinal bar sizes over the schedule");
+            kv(
+                    out,
+                    "groups",
+                    rationalise.groupsSameSection()
+                            ? "beams of one group share b × h"
+                            : "groups do not constrain b × h");
+            kv(
+                    out,
+                    "formwork set",
+                    money(rationalise.formworkSetCost(), input.currency()) + " per distinct section size");
             out.append("</table>\n");
         }
         out.append("</section>\n");
@@ -208,16 +268,31 @@ public final class ScheduleHtml {
         double m3PerCubicYard = 0.764554857984;
         double kgPerPound = 0.45359237;
         double m2PerSquareFoot = 0.3048 * 0.3048;
-        kv(out, "concrete", amount(inchPound ? rates.concretePerM3() * m3PerCubicYard : rates.concretePerM3())
-                + (inchPound ? " per yd³" : " per m³"));
-        kv(out, "main bars", amount(inchPound ? rates.mainBarsPerKg() * kgPerPound : rates.mainBarsPerKg())
-                + (inchPound ? " per lb" : " per kg"));
-        kv(out, "stirrups", amount(inchPound ? rates.stirrupsPerKg() * kgPerPound : rates.stirrupsPerKg())
-                + (inchPound ? " per lb" : " per kg"));
-        kv(out, "formwork", amount(inchPound ? rates.formworkPerM2() * m2PerSquareFoot : rates.formworkPerM2())
-                + (inchPound ? " per ft²" : " per m²") + " of contact");
-        kv(out, "depth premium", amount(inchPound ? rates.depthPremiumPerM() * m2PerSquareFoot : rates.depthPremiumPerM())
-                + (inchPound ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
+        kv(
+                out,
+                "concrete",
+                amount(inchPound ? rates.concretePerM3() * m3PerCubicYard : rates.concretePerM3())
+                        + (inchPound ? " per yd³" : " per m³"));
+        kv(
+                out,
+                "main bars",
+                amount(inchPound ? rates.mainBarsPerKg() * kgPerPound : rates.mainBarsPerKg())
+                        + (inchPound ? " per lb" : " per kg"));
+        kv(
+                out,
+                "stirrups",
+                amount(inchPound ? rates.stirrupsPerKg() * kgPerPound : rates.stirrupsPerKg())
+                        + (inchPound ? " per lb" : " per kg"));
+        kv(
+                out,
+                "formwork",
+                amount(inchPound ? rates.formworkPerM2() * m2PerSquareFoot : rates.formworkPerM2())
+                        + (inchPound ? " per ft²" : " per m²") + " of contact");
+        kv(
+                out,
+                "depth premium",
+                amount(inchPound ? rates.depthPremiumPerM() * m2PerSquareFoot : rates.depthPremiumPerM())
+                        + (inchPound ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
         kv(out, "lap factor", u.compact(rates.lapFactor(), Dim.NUMBER) + " on main-bar mass");
     }
 
@@ -227,12 +302,19 @@ public final class ScheduleHtml {
         UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
         boolean own = r.proof() != null;
-        out.append("<section id=\"schedule\">\n<h2>Beam schedule</h2>\n<div class=\"wide\">\n<table class=\"grid schedule\">\n");
-        out.append("<thead><tr><th>mark</th><th>group</th><th>span (").append(u.unit(Dim.SPAN)).append(")</th><th>b × h (")
-                .append(u.unit(Dim.LENGTH)).append(")</th><th>bottom, full span</th><th>top continuous</th>")
+        out.append(
+                "<section id=\"schedule\">\n<h2>Beam schedule</h2>\n<div class=\"wide\">\n<table class=\"grid schedule\">\n");
+        out.append("<thead><tr><th>mark</th><th>group</th><th>span (")
+                .append(u.unit(Dim.SPAN))
+                .append(")</th><th>b × h (")
+                .append(u.unit(Dim.LENGTH))
+                .append(")</th><th>bottom, full span</th><th>top continuous</th>")
                 .append("<th>top at left support</th><th>top at right support</th><th>stirrups by zone</th>")
-                .append("<th>φMn / Mu (").append(u.unit(Dim.MOMENT)).append(")</th><th>cost")
-                .append(cur.isEmpty() ? "" : " (" + Svg.esc(cur) + ")").append("</th>");
+                .append("<th>φMn / Mu (")
+                .append(u.unit(Dim.MOMENT))
+                .append(")</th><th>cost")
+                .append(cur.isEmpty() ? "" : " (" + Svg.esc(cur) + ")")
+                .append("</th>");
         if (own) {
             out.append("<th>own optimum</th>");
         }
@@ -240,71 +322,107 @@ public final class ScheduleHtml {
         for (int i = 0; i < rows.size(); i++) {
             ScheduleRows.Row row = rows.get(i);
             ScheduleResult.Beam b = row.entry();
-            out.append("<tr").append(row.feasible() ? "" : " class=\"infeasible\"").append("><td class=\"mark\"><a href=\"#")
-                    .append(Svg.esc(ids.get(i))).append("\">").append(Svg.esc(b.beam().id())).append("</a></td><td>")
-                    .append(Svg.esc(b.beam().group() == null ? "—" : b.beam().group())).append("</td><td class=\"num\">")
-                    .append(u.number(row.problem().span(), Dim.SPAN)).append("</td>");
+            out.append("<tr")
+                    .append(row.feasible() ? "" : " class=\"infeasible\"")
+                    .append("><td class=\"mark\"><a href=\"#")
+                    .append(Svg.esc(ids.get(i)))
+                    .append("\">")
+                    .append(Svg.esc(b.beam().id()))
+                    .append("</a></td><td>")
+                    .append(Svg.esc(b.beam().group() == null ? "—" : b.beam().group()))
+                    .append("</td><td class=\"num\">")
+                    .append(u.number(row.problem().span(), Dim.SPAN))
+                    .append("</td>");
             if (!row.feasible()) {
                 SpanDesigner.Diagnosis d = b.outcome().diagnosis();
-                out.append("<td colspan=\"").append(own ? 9 : 8).append("\">").append(Svg.esc(headline(d)))
-                        .append(" — ").append(Svg.esc(diagnosis(d, u))).append("</td></tr>\n");
+                out.append("<td colspan=\"")
+                        .append(own ? 9 : 8)
+                        .append("\">")
+                        .append(Svg.esc(headline(d)))
+                        .append(" — ")
+                        .append(Svg.esc(diagnosis(d, u)))
+                        .append("</td></tr>\n");
                 continue;
             }
             SpanLayout l = row.layout();
-            out.append("<td class=\"num\">").append(u.compact(l.width(), Dim.LENGTH)).append(" × ")
-                    .append(u.compact(l.height(), Dim.LENGTH)).append(l.flange() != null ? (l.flange().oneSided() ? " L" : " T") : "")
+            out.append("<td class=\"num\">")
+                    .append(u.compact(l.width(), Dim.LENGTH))
+                    .append(" × ")
+                    .append(u.compact(l.height(), Dim.LENGTH))
+                    .append(l.flange() != null ? (l.flange().oneSided() ? " L" : " T") : "")
                     .append("</td>");
             out.append("<td>").append(Svg.esc(row.bottom())).append("</td>");
             if (row.cantilever()) {
-                out.append("<td>").append(Svg.esc(row.top())).append(", full length + ")
-                        .append(Svg.esc(u.compact(row.topPastSupport(), Dim.SPAN))).append(' ')
-                        .append(Svg.esc(u.unit(Dim.SPAN))).append(" past the support</td><td>—</td><td>—</td>");
+                out.append("<td>")
+                        .append(Svg.esc(row.top()))
+                        .append(", full length + ")
+                        .append(Svg.esc(u.compact(row.topPastSupport(), Dim.SPAN)))
+                        .append(' ')
+                        .append(Svg.esc(u.unit(Dim.SPAN)))
+                        .append(" past the support</td><td>—</td><td>—</td>");
             } else {
                 out.append("<td>").append(Svg.esc(row.top())).append("</td>");
-                out.append("<td>").append(row.left() != null ? Svg.esc(topAtSupport(row.left(), u)) : "—").append("</td>");
-                out.append("<td>").append(row.right() != null ? Svg.esc(topAtSupport(row.right(), u)) : "—").append("</td>");
+                out.append("<td>")
+                        .append(row.left() != null ? Svg.esc(topAtSupport(row.left(), u)) : "—")
+                        .append("</td>");
+                out.append("<td>")
+                        .append(row.right() != null ? Svg.esc(topAtSupport(row.right(), u)) : "—")
+                        .append("</td>");
             }
             out.append("<td class=\"lines\">");
             for (int z = 0; z < row.zones().size(); z++) {
                 ScheduleRows.ZoneStirrups zone = row.zones().get(z);
-                out.append(z == 0 ? "" : "<br>").append(Svg.esc(zone.name())).append(": ")
+                out.append(z == 0 ? "" : "<br>")
+                        .append(Svg.esc(zone.name()))
+                        .append(": ")
                         .append(Svg.esc(Words.stirrups(zone.stirrups(), u)));
             }
             out.append("</td><td class=\"lines\">");
             for (int k = 0; k < row.strengths().size(); k++) {
                 ScheduleRows.Strength st = row.strengths().get(k);
-                out.append(k == 0 ? "" : "<br>").append(ScheduleRows.place(st.place())).append(": ")
-                        .append(u.number(st.phiMn(), Dim.MOMENT)).append(" / ").append(u.number(st.mu(), Dim.MOMENT));
+                out.append(k == 0 ? "" : "<br>")
+                        .append(ScheduleRows.place(st.place()))
+                        .append(": ")
+                        .append(u.number(st.phiMn(), Dim.MOMENT))
+                        .append(" / ")
+                        .append(u.number(st.mu(), Dim.MOMENT));
             }
-            out.append("</td><td class=\"num\">").append(Money.amount(row.design().cost().total())).append("</td>");
+            out.append("</td><td class=\"num\">")
+                    .append(Money.amount(row.design().cost().total()))
+                    .append("</td>");
             if (own) {
-                out.append("<td class=\"num\">").append(Double.isFinite(b.ownOptimum()) ? Money.amount(b.ownOptimum()) : "—")
+                out.append("<td class=\"num\">")
+                        .append(Double.isFinite(b.ownOptimum()) ? Money.amount(b.ownOptimum()) : "—")
                         .append("</td>");
             }
             out.append("</tr>\n");
         }
-        out.append("</tbody>\n</table>\n</div>\n<p class=\"note\">Bars per layer from the face inward (\"3+2\": three in "
-                + "the outer layer, two in the next). At a support the count includes the continuous top bars; the "
-                + "extras run the length given past the face. Stirrups: size × legs @ spacing, by zone (each zone's extent "
-                + "is in the beam's own section below).</p>\n</section>\n");
+        out.append(
+                "</tbody>\n</table>\n</div>\n<p class=\"note\">Bars per layer from the face inward (\"3+2\": three in "
+                        + "the outer layer, two in the next). At a support the count includes the continuous top bars; the "
+                        + "extras run the length given past the face. Stirrups: size × legs @ spacing, by zone (each zone's extent "
+                        + "is in the beam's own section below).</p>\n</section>\n");
     }
 
     /** The HTML's words for the top bars at a support: "4 No. 25; 2 extra, 2.100 m past the face". */
     private static String topAtSupport(ScheduleRows.SupportTop at, UnitSystem u) {
-        return at.bars() + (at.extra() > 0 ? "; " + at.extra() + " extra, " + span(at.extension(), u) + " past the face" : "");
+        return at.bars()
+                + (at.extra() > 0 ? "; " + at.extra() + " extra, " + span(at.extension(), u) + " past the face" : "");
     }
 
     /** What failed: the beam on its own, or its group's need to share one section size. */
     private static String headline(SpanDesigner.Diagnosis d) {
-        return d.limit().equals("group") ? "No section size fits every beam of its group"
+        return d.limit().equals("group")
+                ? "No section size fits every beam of its group"
                 : "No layout in the search space passes";
     }
 
     private static String diagnosis(SpanDesigner.Diagnosis d, UnitSystem u) {
         List<String> fixes = DiagnosisWords.fixes(d, u);
-        return "binding limit: " + d.limit() + " (" + DiagnosisWords.summary(d, u) + ")" + (fixes.isEmpty()
-                ? "; no single relaxed limit (depth, width) gives a passing layout"
-                : "; what would work, one limit at a time: " + Words.alternatives(fixes));
+        return "binding limit: " + d.limit() + " (" + DiagnosisWords.summary(d, u) + ")"
+                + (fixes.isEmpty()
+                        ? "; no single relaxed limit (depth, width) gives a passing layout"
+                        : "; what would work, one limit at a time: " + Words.alternatives(fixes));
     }
 
     // ---------------------------------------------------------------- rationalisation proof
@@ -322,22 +440,30 @@ public final class ScheduleHtml {
         kv(out, "objective", noSchedule ? "— (no schedule meets the limits)" : money(proof.objective(), currency));
         kv(out, "best bound", noSchedule ? "—" : money(proof.bound(), currency));
         kv(out, "gap", noSchedule ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * proof.gap()));
-        kv(out, "bar-size sets", search.barSetsTotal() + " considered, " + search.barSetsSolved() + " solved, "
-                + search.barSetsPruned() + " pruned by the cost bound");
+        kv(
+                out,
+                "bar-size sets",
+                search.barSetsTotal() + " considered, " + search.barSetsSolved() + " solved, " + search.barSetsPruned()
+                        + " pruned by the cost bound");
         kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly");
         // measured times are left out so that the same result always gives the same page
         kv(out, "CP-SAT", proof.workers() + (proof.workers() == 1 ? " worker" : " workers") + ", seed " + proof.seed());
         out.append("</table>\n");
         out.append("<table class=\"grid\">\n<caption>Section sizes used</caption>\n<thead><tr><th>b × h (")
-                .append(u.unit(Dim.LENGTH)).append(")</th><th>beams</th></tr></thead>\n<tbody>\n");
+                .append(u.unit(Dim.LENGTH))
+                .append(")</th><th>beams</th></tr></thead>\n<tbody>\n");
         for (ScheduleResult.SectionSize size : r.sizes()) {
-            out.append("<tr><td class=\"num\">").append(u.compact(size.width(), Dim.LENGTH)).append(" × ")
-                    .append(u.compact(size.height(), Dim.LENGTH)).append("</td><td>")
-                            .append(Svg.esc(String.join(", ", size.beams())))
+            out.append("<tr><td class=\"num\">")
+                    .append(u.compact(size.width(), Dim.LENGTH))
+                    .append(" × ")
+                    .append(u.compact(size.height(), Dim.LENGTH))
+                    .append("</td><td>")
+                    .append(Svg.esc(String.join(", ", size.beams())))
                     .append("</td></tr>\n");
         }
-        out.append("</tbody>\n</table>\n</div>\n<p>Bar sizes used: ").append(Svg.esc(r.barSizes().isEmpty() ? "none"
-                : labels(r, r.barSizes()))).append(".</p>\n</section>\n");
+        out.append("</tbody>\n</table>\n</div>\n<p>Bar sizes used: ")
+                .append(Svg.esc(r.barSizes().isEmpty() ? "none" : labels(r, r.barSizes())))
+                .append(".</p>\n</section>\n");
     }
 
     // ---------------------------------------------------------------- costs
@@ -346,25 +472,32 @@ public final class ScheduleHtml {
         String currency = r.input().currency();
         out.append("<section id=\"costs\">\n<h2>Cost summary</h2>\n<table class=\"kv money\">\n");
         kv(out, "beams", money(r.beamsCost(), currency));
-        String sets = r.input().rationalise() == null ? "" : " (" + r.sizes().size() + " section "
-                + (r.sizes().size() == 1 ? "size" : "sizes") + ")";
+        String sets = r.input().rationalise() == null
+                ? ""
+                : " (" + r.sizes().size() + " section " + (r.sizes().size() == 1 ? "size" : "sizes") + ")";
         kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), currency));
         kvStrong(out, "total", money(r.totalCost(), currency));
-        boolean formsPerSize = r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
+        boolean formsPerSize =
+                r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
         if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
         } else {
-            kv(out, "every beam at its own optimum" + (formsPerSize ? " (a set of forms per size)" : ""),
+            kv(
+                    out,
+                    "every beam at its own optimum" + (formsPerSize ? " (a set of forms per size)" : ""),
                     money(r.unconstrainedCost(), currency));
             double difference = r.totalCost() - r.unconstrainedCost();
-            String percent = r.unconstrainedCost() > 0 ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * difference
-                    / r.unconstrainedCost()) : "";
+            String percent = r.unconstrainedCost() > 0
+                    ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * difference / r.unconstrainedCost())
+                    : "";
             kv(out, "difference", (difference >= 0 ? "+" : "") + money(difference, currency) + percent);
         }
         out.append("</table>\n");
         long withoutDesign = r.beams().stream().filter(b -> !b.feasible()).count();
         if (withoutDesign > 0) {
-            out.append("<p class=\"warn\">").append(withoutDesign).append(withoutDesign == 1 ? " beam has" : " beams have")
+            out.append("<p class=\"warn\">")
+                    .append(withoutDesign)
+                    .append(withoutDesign == 1 ? " beam has" : " beams have")
                     .append(" no passing layout: the costs cover only the beams that have one.</p>\n");
         }
         out.append("</section>\n");
@@ -376,22 +509,32 @@ public final class ScheduleHtml {
         String currency = r.input().currency();
         List<ScheduleResult.StandardisationPoint> points = new ArrayList<>(r.standardisation());
         points.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
-        out.append("<section id=\"standardisation\">\n<h2>Price of standardisation</h2>\n<table class=\"grid\">\n<thead><tr>")
-                .append("<th>most section sizes K</th><th>total cost").append(currency.isEmpty() ? "" : " ("
-                        + Svg.esc(currency) + ")")
-                .append("</th><th>saving of one more size</th><th>status</th><th>bar sizes allowed</th></tr></thead>\n<tbody>\n");
+        out.append(
+                        "<section id=\"standardisation\">\n<h2>Price of standardisation</h2>\n<table class=\"grid\">\n<thead><tr>")
+                .append("<th>most section sizes K</th><th>total cost")
+                .append(currency.isEmpty() ? "" : " (" + Svg.esc(currency) + ")")
+                .append(
+                        "</th><th>saving of one more size</th><th>status</th><th>bar sizes allowed</th></tr></thead>\n<tbody>\n");
         double previous = Double.NaN;
         for (ScheduleResult.StandardisationPoint point : points) {
             String saving = Double.isFinite(previous) && Double.isFinite(point.cost())
-                    ? Money.amount(previous - point.cost()) : "—";
-            out.append("<tr><td class=\"num\">").append(point.sizes()).append("</td><td class=\"num\">")
+                    ? Money.amount(previous - point.cost())
+                    : "—";
+            out.append("<tr><td class=\"num\">")
+                    .append(point.sizes())
+                    .append("</td><td class=\"num\">")
                     .append(Double.isFinite(point.cost()) ? Money.amount(point.cost()) : "none feasible")
                     .append("</td><td class=\"num\">")
-                    .append(saving).append("</td><td>").append(Svg.esc(point.status().name())).append("</td><td>")
-                    .append(Svg.esc(labels(r, point.barSizes()))).append("</td></tr>\n");
+                    .append(saving)
+                    .append("</td><td>")
+                    .append(Svg.esc(point.status().name()))
+                    .append("</td><td>")
+                    .append(Svg.esc(labels(r, point.barSizes())))
+                    .append("</td></tr>\n");
             previous = point.cost();
         }
-        out.append("</tbody>\n</table>\n<figure class=\"plot\">\n").append(StandardisationPlot.svg(r))
+        out.append("</tbody>\n</table>\n<figure class=\"plot\">\n")
+                .append(StandardisationPlot.svg(r))
                 .append("</figure>\n</section>\n");
     }
 
@@ -403,9 +546,15 @@ public final class ScheduleHtml {
         String cur = r.input().currency();
         SpanDesigner.Outcome o = b.outcome();
         SpanProblem p = o.problem();
-        out.append("<section class=\"beam\" id=\"").append(Svg.esc(id)).append("\">\n<h3>Beam ").append(Svg.esc(b.beam().id()))
-                .append(" <span class=\"status ").append(o.feasible() ? "ok" : "none").append("\">")
-                .append(Svg.esc(o.status().toUpperCase(Locale.ROOT))).append("</span></h3>\n");
+        out.append("<section class=\"beam\" id=\"")
+                .append(Svg.esc(id))
+                .append("\">\n<h3>Beam ")
+                .append(Svg.esc(b.beam().id()))
+                .append(" <span class=\"status ")
+                .append(o.feasible() ? "ok" : "none")
+                .append("\">")
+                .append(Svg.esc(o.status().toUpperCase(Locale.ROOT)))
+                .append("</span></h3>\n");
         out.append("<div class=\"cols\">\n<table class=\"kv\">\n<caption>Data</caption>\n");
         if (b.beam().group() != null) {
             kv(out, "group", b.beam().group());
@@ -418,34 +567,59 @@ public final class ScheduleHtml {
             kv(out, "width", "fixed at " + len(p.fixedWidth(), u));
         }
         if (p.flange() != null) {
-            kv(out, "flange", "b_f = " + len(p.flange().given(), u) + " given, h_f = " + len(p.flange().thickness(), u)
-                    + (p.flange().oneSided() ? " (one side)" : "")
-                    + (p.flange().webGapKnown() ? ", clear to the next web " + len(p.flange().clearToNextWeb(), u)
-                            : ", clear distance to the next web not given (sw/2 limit not checked)")
-                    + "; taken at most at the effective width of Table 6.3.2.1, "
-                    + (p.cantilever() ? "in tension at the fixed end, so not counted in strength (24.3.4: see the "
-                            + "checks)" : "counted at mid-span only"));
+            kv(
+                    out,
+                    "flange",
+                    "b_f = " + len(p.flange().given(), u) + " given, h_f = "
+                            + len(p.flange().thickness(), u)
+                            + (p.flange().oneSided() ? " (one side)" : "")
+                            + (p.flange().webGapKnown()
+                                    ? ", clear to the next web "
+                                            + len(p.flange().clearToNextWeb(), u)
+                                    : ", clear distance to the next web not given (sw/2 limit not checked)")
+                            + "; taken at most at the effective width of Table 6.3.2.1, "
+                            + (p.cantilever()
+                                    ? "in tension at the fixed end, so not counted in strength (24.3.4: see the "
+                                            + "checks)"
+                                    : "counted at mid-span only"));
         }
         kv(out, "Mu", moments(p, u));
         kv(out, "Vu at d from the faces", shears(p, u));
         if (p.service() != null) {
-            kv(out, "service loads", "D = " + u.withUnit(p.service().dead(), Dim.LINE_LOAD) + ", L = "
-                    + u.withUnit(p.service().live(), Dim.LINE_LOAD) + (p.service().sustainedLive() > 0
-                    ? ", sustained " + u.compact(p.service().sustainedLive(), Dim.NUMBER) + " of L" : ""));
-            kv(out, "deflection limits", "live ℓ/" + plain(p.limits().live()) + ", long-term + live ℓ/"
-                    + plain(p.limits().total()));
+            kv(
+                    out,
+                    "service loads",
+                    "D = " + u.withUnit(p.service().dead(), Dim.LINE_LOAD) + ", L = "
+                            + u.withUnit(p.service().live(), Dim.LINE_LOAD)
+                            + (p.service().sustainedLive() > 0
+                                    ? ", sustained " + u.compact(p.service().sustainedLive(), Dim.NUMBER) + " of L"
+                                    : ""));
+            kv(
+                    out,
+                    "deflection limits",
+                    "live ℓ/" + plain(p.limits().live()) + ", long-term + live ℓ/"
+                            + plain(p.limits().total()));
         }
-        kv(out, "bottom bars at supports", p.bottomAnchored() ? "anchored: compression steel there"
-                : "not anchored: not counted there");
+        kv(
+                out,
+                "bottom bars at supports",
+                p.bottomAnchored() ? "anchored: compression steel there" : "not anchored: not counted there");
         out.append("</table>\n");
         if (!o.feasible()) {
             SpanDesigner.Diagnosis d = o.diagnosis();
-            out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>").append(Svg.esc(headline(d)))
+            out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>")
+                    .append(Svg.esc(headline(d)))
                     .append(".</strong></p>\n")
-                    .append("<p>Binding limit: ").append(Svg.esc(d.limit())).append(" — ").append(Svg.esc(DiagnosisWords.summary(d, u)))
-                    .append("</p>\n<p>").append(Svg.esc(DiagnosisWords.fixes(d, u).isEmpty()
-                            ? "No single relaxed limit (depth, width) gives a passing layout."
-                            : "What would work, one limit at a time: " + Words.alternatives(DiagnosisWords.fixes(d, u))))
+                    .append("<p>Binding limit: ")
+                    .append(Svg.esc(d.limit()))
+                    .append(" — ")
+                    .append(Svg.esc(DiagnosisWords.summary(d, u)))
+                    .append("</p>\n<p>")
+                    .append(Svg.esc(
+                            DiagnosisWords.fixes(d, u).isEmpty()
+                                    ? "No single relaxed limit (depth, width) gives a passing layout."
+                                    : "What would work, one limit at a time: "
+                                            + Words.alternatives(DiagnosisWords.fixes(d, u))))
                     .append("</p>\n</div>\n")
                     .append("</section>\n");
             return;
@@ -456,12 +630,21 @@ public final class ScheduleHtml {
         kv(out, "section", Words.shape(l.shape(), u));
         kv(out, "bottom", ScheduleRows.bars(l.bottomCounts(), l.bottom()) + ", full span");
         if (p.cantilever()) {
-            kv(out, "top", ScheduleRows.bars(l.topLeft(), l.top()) + ", full length and " + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
-                    + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
+            kv(
+                    out,
+                    "top",
+                    ScheduleRows.bars(l.topLeft(), l.top()) + ", full length and "
+                            + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
+                            + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
-            kv(out, "top continuous", l.topContinuous() + " " + l.top().label() + ", full span" + SpanText.topAtMid(d, u));
-            String rule = " (" + Words.extension(Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()),
-                    l.top()).governs()) + ")";
+            kv(
+                    out,
+                    "top continuous",
+                    l.topContinuous() + " " + l.top().label() + ", full span" + SpanText.topAtMid(d, u));
+            String rule = " ("
+                    + Words.extension(Extension.of(p, l.width(), l.height(), l.detailing(p.detailing()), l.top())
+                            .governs())
+                    + ")";
             if (p.leftSupport()) {
                 boolean extra = SpanLayout.sum(l.topLeft()) > l.topContinuous();
                 kv(out, "top at left support", topAtSupport(row.left(), u) + (extra ? rule : ""));
@@ -472,23 +655,35 @@ public final class ScheduleHtml {
             }
         }
         if (l.skin() != null) {
-            kv(out, "skin bars", l.skin().bar().label() + " @ " + len(l.skin().spacing(), u) + " each side face (9.7.2.3)");
+            kv(
+                    out,
+                    "skin bars",
+                    l.skin().bar().label() + " @ " + len(l.skin().spacing(), u) + " each side face (9.7.2.3)");
         }
         List<SpanProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
             SpanProblem.Zone z = zones.get(i);
             var st = l.zoneStirrups().get(i);
-            kv(out, "stirrups, " + z.name() + " zone", span(z.from(), u) + " to " + span(z.to(), u) + ": "
-                    + Words.stirrups(st, u) + ", " + SpanText.sets(SpanLayout.stirrupSets(z.length(), st.spacing()))
-                    + (d.report().zoneShears().get(i) == null ? " (minimum)"
-                            : " (Vu = " + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE) + ")"));
+            kv(
+                    out,
+                    "stirrups, " + z.name() + " zone",
+                    span(z.from(), u) + " to " + span(z.to(), u) + ": "
+                            + Words.stirrups(st, u) + ", "
+                            + SpanText.sets(SpanLayout.stirrupSets(z.length(), st.spacing()))
+                            + (d.report().zoneShears().get(i) == null
+                                    ? " (minimum)"
+                                    : " (Vu = "
+                                            + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE) + ")"));
         }
         for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             FlexureResult f = e.getValue().flexure();
             double mu = Math.abs(e.getValue().demand().mu());
-            kv(out, place(p, e.getKey()), "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " for Mu = "
-                    + u.withUnit(mu, Dim.MOMENT) + " (Mu/φMn " + Words.ratio(mu / f.phiMn()) + "), ε_t = "
-                    + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
+            kv(
+                    out,
+                    place(p, e.getKey()),
+                    "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " for Mu = "
+                            + u.withUnit(mu, Dim.MOMENT) + " (Mu/φMn " + Words.ratio(mu / f.phiMn()) + "), ε_t = "
+                            + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
         }
         kv(out, "deflection", deflection(d.report().span(), p, u));
         kv(out, "binding", binding(o.binding(), u));
@@ -499,12 +694,23 @@ public final class ScheduleHtml {
             out.append("<p class=\"warn\">Warning: ").append(Svg.esc(w)).append(".</p>\n");
         }
 
-        out.append("<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
-                .append("<th>bar</th><th>length (").append(u.unit(Dim.SPAN)).append(")</th></tr></thead>\n<tbody>\n");
+        out.append(
+                        "<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
+                .append("<th>bar</th><th>length (")
+                .append(u.unit(Dim.SPAN))
+                .append(")</th></tr></thead>\n<tbody>\n");
         for (SpanLayout.BarMark m : d.bars()) {
-            out.append("<tr><td>").append(Svg.esc(m.mark())).append("</td><td>").append(Svg.esc(Words.role(m)))
-                    .append("</td><td class=\"num\">").append(m.count()).append("</td><td>").append(Svg.esc(m.bar().label()))
-                    .append("</td><td class=\"num\">").append(u.number(m.length(), Dim.SPAN)).append("</td></tr>\n");
+            out.append("<tr><td>")
+                    .append(Svg.esc(m.mark()))
+                    .append("</td><td>")
+                    .append(Svg.esc(Words.role(m)))
+                    .append("</td><td class=\"num\">")
+                    .append(m.count())
+                    .append("</td><td>")
+                    .append(Svg.esc(m.bar().label()))
+                    .append("</td><td class=\"num\">")
+                    .append(u.number(m.length(), Dim.SPAN))
+                    .append("</td></tr>\n");
         }
         out.append("</tbody>\n</table>\n");
 
@@ -519,15 +725,23 @@ public final class ScheduleHtml {
             String subtitle = "Mu = " + u.withUnit(mu, Dim.MOMENT) + ", φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT)
                     + " (Mu/φMn " + Words.ratio(Math.abs(mu) / f.phiMn()) + ")";
             SectionDrawing.View view = SectionDrawing.of(p, l, where, f.d(), title, subtitle);
-            out.append("<figure class=\"section-pair\" id=\"").append(Svg.esc(id)).append('-')
-                    .append(where.name().toLowerCase(Locale.ROOT)).append("\" data-place=\"").append(where.name())
-                    .append("\">\n<div class=\"pair\">\n").append(SectionDrawing.svg(view, scale, u))
-                    .append(StrainStressDiagram.svg(f, l.height(), p.materials(), scale, u)).append("</div>\n</figure>\n");
+            out.append("<figure class=\"section-pair\" id=\"")
+                    .append(Svg.esc(id))
+                    .append('-')
+                    .append(where.name().toLowerCase(Locale.ROOT))
+                    .append("\" data-place=\"")
+                    .append(where.name())
+                    .append("\">\n<div class=\"pair\">\n")
+                    .append(SectionDrawing.svg(view, scale, u))
+                    .append(StrainStressDiagram.svg(f, l.height(), p.materials(), scale, u))
+                    .append("</div>\n</figure>\n");
         }
         zoneDrawings(p, l, d, id, scale, u, out);
 
-        out.append("<h4>Checks</h4>\n<div class=\"wide\">\n<table class=\"grid checks\">\n<thead><tr><th>where</th><th>id</th>")
-                .append("<th>check</th><th>clause</th><th>demand</th><th></th><th>limit</th><th>ratio</th><th>result</th>")
+        out.append(
+                        "<h4>Checks</h4>\n<div class=\"wide\">\n<table class=\"grid checks\">\n<thead><tr><th>where</th><th>id</th>")
+                .append(
+                        "<th>check</th><th>clause</th><th>demand</th><th></th><th>limit</th><th>ratio</th><th>result</th>")
                 .append("<th>note</th></tr></thead>\n<tbody>\n");
         for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             for (CheckResult c : e.getValue().checks()) {
@@ -556,8 +770,14 @@ public final class ScheduleHtml {
      * away from the sections drawn, or one with its own legs (four legs at an end, two in the middle...),
      * drawn on the section the zone is designed with.
      */
-    private static void zoneDrawings(SpanProblem p, SpanLayout l, SpanDesigner.Design d, String id, double scale,
-            UnitSystem u, StringBuilder out) {
+    private static void zoneDrawings(
+            SpanProblem p,
+            SpanLayout l,
+            SpanDesigner.Design d,
+            String id,
+            double scale,
+            UnitSystem u,
+            StringBuilder out) {
         Set<String> shown = new HashSet<>();
         for (SpanProblem.Place where : d.report().sections().keySet()) {
             shown.add(arrangement(where, SectionDrawing.stirrupsAt(p, l, where)));
@@ -578,18 +798,30 @@ public final class ScheduleHtml {
             List<String> where = new ArrayList<>();
             for (int i : group) {
                 names.add(zones.get(i).name());
-                where.add(u.number(zones.get(i).from(), Dim.SPAN) + "–" + span(zones.get(i).to(), u));
+                where.add(u.number(zones.get(i).from(), Dim.SPAN) + "–"
+                        + span(zones.get(i).to(), u));
             }
-            String title = "Stirrups, " + String.join(" and ", names) + (names.size() == 1 ? " zone" : " zones")
-                    + " (" + String.join(", ", where) + ")";
+            String title = "Stirrups, " + String.join(" and ", names) + (names.size() == 1 ? " zone" : " zones") + " ("
+                    + String.join(", ", where) + ")";
             String subtitle = Words.stirrups(l.zoneStirrups().get(first), u) + "; bars as at "
-                    + (z.section() == SpanProblem.Place.MID ? "mid-span" : "the " + place(p, z.section())
-                    .toLowerCase(Locale.ROOT));
-            SectionDrawing.View view = SectionDrawing.ofZone(p, l, first,
-                    d.report().sections().get(z.section()).flexure().d(), title, subtitle);
-            out.append("<figure class=\"zone-section\" id=\"").append(Svg.esc(id)).append("-zone-")
-                    .append(Svg.esc(String.join("-", names))).append("\" data-zones=\"")
-                    .append(Svg.esc(String.join(" ", names))).append("\">\n").append(SectionDrawing.svg(view, scale, u))
+                    + (z.section() == SpanProblem.Place.MID
+                            ? "mid-span"
+                            : "the " + place(p, z.section()).toLowerCase(Locale.ROOT));
+            SectionDrawing.View view = SectionDrawing.ofZone(
+                    p,
+                    l,
+                    first,
+                    d.report().sections().get(z.section()).flexure().d(),
+                    title,
+                    subtitle);
+            out.append("<figure class=\"zone-section\" id=\"")
+                    .append(Svg.esc(id))
+                    .append("-zone-")
+                    .append(Svg.esc(String.join("-", names)))
+                    .append("\" data-zones=\"")
+                    .append(Svg.esc(String.join(" ", names)))
+                    .append("\">\n")
+                    .append(SectionDrawing.svg(view, scale, u))
                     .append("</figure>\n");
         }
     }
@@ -599,19 +831,39 @@ public final class ScheduleHtml {
     }
 
     private static void check(StringBuilder out, String where, CheckResult c, UnitSystem u) {
-        out.append("<tr").append(c.pass() ? "" : " class=\"fail\"").append("><td>").append(Svg.esc(where)).append("</td><td>")
-                .append(Svg.esc(c.id())).append("</td><td>").append(Svg.esc(c.title())).append("</td><td>")
-                .append(Svg.esc(c.clause())).append("</td><td class=\"num\">").append(Svg.esc(Words.value(c.demand(), u)))
-                .append("</td><td>").append(c.sense().equals("<=") ? "≤" : "≥").append("</td><td class=\"num\">")
-                .append(Svg.esc(Words.value(c.limit(), u))).append("</td><td class=\"num\">").append(Words.ratio(c.ratio()))
-                .append("</td><td>").append(c.pass() ? "pass" : "FAIL").append("</td><td>")
-                .append(Svg.esc(c.note() == null ? "" : c.note())).append("</td></tr>\n");
+        out.append("<tr")
+                .append(c.pass() ? "" : " class=\"fail\"")
+                .append("><td>")
+                .append(Svg.esc(where))
+                .append("</td><td>")
+                .append(Svg.esc(c.id()))
+                .append("</td><td>")
+                .append(Svg.esc(c.title()))
+                .append("</td><td>")
+                .append(Svg.esc(c.clause()))
+                .append("</td><td class=\"num\">")
+                .append(Svg.esc(Words.value(c.demand(), u)))
+                .append("</td><td>")
+                .append(c.sense().equals("<=") ? "≤" : "≥")
+                .append("</td><td class=\"num\">")
+                .append(Svg.esc(Words.value(c.limit(), u)))
+                .append("</td><td class=\"num\">")
+                .append(Words.ratio(c.ratio()))
+                .append("</td><td>")
+                .append(c.pass() ? "pass" : "FAIL")
+                .append("</td><td>")
+                .append(Svg.esc(c.note() == null ? "" : c.note()))
+                .append("</td></tr>\n");
     }
 
     private static void trail(StringBuilder out, String where, barfit.section.trail.Trail t, UnitSystem u) {
         StringBuilder text = new StringBuilder();
         TrailText.write(t, u, "", text);
-        out.append("<h5>").append(Svg.esc(where)).append("</h5>\n<pre>").append(Svg.esc(text.toString())).append("</pre>\n");
+        out.append("<h5>")
+                .append(Svg.esc(where))
+                .append("</h5>\n<pre>")
+                .append(Svg.esc(text.toString()))
+                .append("</pre>\n");
     }
 
     // ---------------------------------------------------------------- words
@@ -661,9 +913,11 @@ public final class ScheduleHtml {
             return "not computed: h ≥ h,min = " + len(r.hMin(), u) + " of Table 9.3.1.1";
         }
         return "computed (h < h,min = " + len(r.hMin(), u) + "): live " + u.withUnit(r.liveDeflection(), Dim.LENGTH)
-                + " ≤ ℓ/" + plain(p.limits().live()) + " = " + u.withUnit(p.span() / p.limits().live(), Dim.LENGTH)
+                + " ≤ ℓ/" + plain(p.limits().live()) + " = "
+                + u.withUnit(p.span() / p.limits().live(), Dim.LENGTH)
                 + "; long-term + live " + u.withUnit(r.longTermDeflection(), Dim.LENGTH) + " ≤ ℓ/"
-                + plain(p.limits().total()) + " = " + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
+                + plain(p.limits().total()) + " = "
+                + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
     }
 
     private static String binding(List<barfit.design.Binding> bs, UnitSystem u) {
@@ -684,7 +938,8 @@ public final class ScheduleHtml {
         var s = p.search();
         return "CP-SAT " + Words.status(p.status()) + ", objective " + String.format(Locale.ROOT, "%.4f", p.objective())
                 + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound()) + ", gap "
-                + String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()) + "; " + s.generator().framesEvaluated() + " of "
+                + String.format(Locale.ROOT, "%.2f %%", 100 * p.gap()) + "; "
+                + s.generator().framesEvaluated() + " of "
                 + s.generator().frames() + " frames evaluated, " + s.generator().framesSkipped()
                 + " skipped by the cost bound; " + s.solves() + (s.solves() == 1 ? " solve" : " solves")
                 + (s.deflectionCuts() > 0 ? ", " + s.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
@@ -692,7 +947,8 @@ public final class ScheduleHtml {
     }
 
     private static String unitsWords(UnitSystem u) {
-        return u == UnitSystem.US ? "inch-pound units: in, psi, kip, kip·ft; spans and bar lengths in ft"
+        return u == UnitSystem.US
+                ? "inch-pound units: in, psi, kip, kip·ft; spans and bar lengths in ft"
                 : "SI units: mm, MPa, kN, kN·m; spans and bar lengths in m";
     }
 
@@ -732,8 +988,11 @@ public final class ScheduleHtml {
     private static String labels(ScheduleResult r, List<String> designations) {
         List<String> parts = new ArrayList<>();
         for (String d : designations) {
-            parts.add(r.input().space().barSizes().stream().filter(b -> b.designation().equals(d))
-                    .map(BarSize::label).findFirst().orElse(d));
+            parts.add(r.input().space().barSizes().stream()
+                    .filter(b -> b.designation().equals(d))
+                    .map(BarSize::label)
+                    .findFirst()
+                    .orElse(d));
         }
         return String.join(", ", parts);
     }
@@ -767,11 +1026,18 @@ public final class ScheduleHtml {
     }
 
     private static void kv(StringBuilder out, String key, String value) {
-        out.append("<tr><th>").append(Svg.esc(key)).append("</th><td>").append(Svg.esc(value)).append("</td></tr>\n");
+        out.append("<tr><th>")
+                .append(Svg.esc(key))
+                .append("</th><td>")
+                .append(Svg.esc(value))
+                .append("</td></tr>\n");
     }
 
     private static void kvStrong(StringBuilder out, String key, String value) {
-        out.append("<tr class=\"total\"><th>").append(Svg.esc(key)).append("</th><td>").append(Svg.esc(value))
+        out.append("<tr class=\"total\"><th>")
+                .append(Svg.esc(key))
+                .append("</th><td>")
+                .append(Svg.esc(value))
                 .append("</td></tr>\n");
     }
 

@@ -33,6 +33,7 @@ public final class SectionDrawing {
     static final double TOP = 58;
     /** px below the bottom face: b dimension, scale bar and the legend lines. */
     static final double BELOW = 126;
+
     private static final double LEFT = 60;
     private static final double LABELS = 130;
     private static final double MAX_HEIGHT_PX = 340;
@@ -46,12 +47,10 @@ public final class SectionDrawing {
     private static final String OFF = "#a3a3a3";
     private static final String DIM = "#6b6b6b";
 
-    private SectionDrawing() {
-    }
+    private SectionDrawing() {}
 
     /** A layer of bars as drawn, and whether the section model counts it at this section. */
-    public record DrawnLayer(BarLayer layer, boolean counted) {
-    }
+    public record DrawnLayer(BarLayer layer, boolean counted) {}
 
     /**
      * What one drawing shows: a title, the concrete outline, the detailing (cover, stirrup bar, layer
@@ -59,8 +58,17 @@ public final class SectionDrawing {
      * sits in, skin bars (or null), d from the section's flexure (or null) and the code edition (for the
      * inch-pound minimum hook extension).
      */
-    public record View(String title, String subtitle, SectionShape shape, Detailing detailing, Bending bending,
-            List<DrawnLayer> layers, Stirrups stirrups, SkinBars skin, Double d, CodeEquations code) {
+    public record View(
+            String title,
+            String subtitle,
+            SectionShape shape,
+            Detailing detailing,
+            Bending bending,
+            List<DrawnLayer> layers,
+            Stirrups stirrups,
+            SkinBars skin,
+            Double d,
+            CodeEquations code) {
         public View {
             layers = List.copyOf(layers);
         }
@@ -71,8 +79,8 @@ public final class SectionDrawing {
      * the full-span bottom bars at a hogging support when they are not anchored (present, not counted),
      * and the stirrups of the zone at that section.
      */
-    public static View of(SpanProblem p, SpanLayout l, SpanProblem.Place place, Double d, String title,
-            String subtitle) {
+    public static View of(
+            SpanProblem p, SpanLayout l, SpanProblem.Place place, Double d, String title, String subtitle) {
         return of(p, l, place, stirrupsAt(p, l, place), d, title, subtitle);
     }
 
@@ -81,7 +89,13 @@ public final class SectionDrawing {
         return of(p, l, p.zones().get(zone).section(), l.zoneStirrups().get(zone), d, title, subtitle);
     }
 
-    private static View of(SpanProblem p, SpanLayout l, SpanProblem.Place place, Stirrups st, Double d, String title,
+    private static View of(
+            SpanProblem p,
+            SpanLayout l,
+            SpanProblem.Place place,
+            Stirrups st,
+            Double d,
+            String title,
             String subtitle) {
         BeamSection s = l.section(p, place, st);
         List<DrawnLayer> layers = new ArrayList<>();
@@ -142,7 +156,8 @@ public final class SectionDrawing {
      * cleanly: the height fits {@value #MAX_HEIGHT_PX} px and the drawn width {@value #MAX_WIDTH_PX} px.
      */
     public static double scaleFor(SectionShape shape) {
-        double drawnWidth = shape.width() + stub(shape) * (shape.flange() != null && !shape.flange().oneSided() ? 2 : 1);
+        double drawnWidth = shape.width()
+                + stub(shape) * (shape.flange() != null && !shape.flange().oneSided() ? 2 : 1);
         double s = Math.min(MAX_HEIGHT_PX / shape.height(), MAX_WIDTH_PX / drawnWidth);
         s = Math.min(1.5, Math.floor(s * 20 + 1e-9) / 20);
         return Math.max(0.05, s);
@@ -180,15 +195,16 @@ public final class SectionDrawing {
     }
 
     /** A bar layer placed: its layer, whether counted, and the centres (mm from the web's top-left corner). */
-    record Placed(DrawnLayer drawn, double y, double[] x) {
-    }
+    record Placed(DrawnLayer drawn, double y, double[] x) {}
 
     static List<Placed> place(View v) {
         List<Placed> out = new ArrayList<>();
         double h = v.shape().height();
         for (Face face : Face.values()) {
-            List<DrawnLayer> onFace = v.layers().stream().filter(l -> l.layer().face() == face)
-                    .sorted(Comparator.comparingDouble(l -> l.layer().fromFace())).toList();
+            List<DrawnLayer> onFace = v.layers().stream()
+                    .filter(l -> l.layer().face() == face)
+                    .sorted(Comparator.comparingDouble(l -> l.layer().fromFace()))
+                    .toList();
             for (DrawnLayer dl : onFace) {
                 BarLayer bl = dl.layer();
                 double[] x = xs(v.shape().width(), v.detailing(), bl);
@@ -214,7 +230,8 @@ public final class SectionDrawing {
         double height = svgHeight(shape, scale);
         Mm m = new Mm(ox, oy, scale);
         StringBuilder out = new StringBuilder();
-        out.append("<text x=\"4\" y=\"16\" font-size=\"13\" font-weight=\"bold\">").append(Svg.esc(v.title()))
+        out.append("<text x=\"4\" y=\"16\" font-size=\"13\" font-weight=\"bold\">")
+                .append(Svg.esc(v.title()))
                 .append("</text>\n");
         if (v.subtitle() != null) {
             Svg.text(out, 4, 32, "start", null, v.subtitle());
@@ -223,9 +240,16 @@ public final class SectionDrawing {
         concrete(out, v, m, leftStub, rightStub);
         // clear cover: the outside face of the stirrup, dashed
         double c = v.detailing().cover();
-        out.append("<rect class=\"cover\" x=\"").append(Svg.px(m.x(c))).append("\" y=\"").append(Svg.px(m.y(c)))
-                .append("\" width=\"").append(Svg.px((b - 2 * c) * scale)).append("\" height=\"")
-                .append(Svg.px((h - 2 * c) * scale)).append("\" fill=\"none\" stroke=\"").append(DIM)
+        out.append("<rect class=\"cover\" x=\"")
+                .append(Svg.px(m.x(c)))
+                .append("\" y=\"")
+                .append(Svg.px(m.y(c)))
+                .append("\" width=\"")
+                .append(Svg.px((b - 2 * c) * scale))
+                .append("\" height=\"")
+                .append(Svg.px((h - 2 * c) * scale))
+                .append("\" fill=\"none\" stroke=\"")
+                .append(DIM)
                 .append("\" stroke-width=\"0.8\" stroke-dasharray=\"4 3\"/>\n");
         List<Placed> placed = place(v);
         boolean shortTails = stirrup(out, v, m, placed);
@@ -235,14 +259,36 @@ public final class SectionDrawing {
         labels(out, v, m, placed, right + 40);
         double legendRight = legend(out, v, m, u, shortTails);
         // wide enough for the legend's longest line and the titles (11 px text: about 6.3 px a character)
-        width = Math.max(width, Math.max(legendRight, Math.max(4 + 8 * v.title().length(),
-                v.subtitle() == null ? 0 : 4 + TEXT_PX * v.subtitle().length())) + 8);
+        width = Math.max(
+                width,
+                Math.max(
+                                legendRight,
+                                Math.max(
+                                        4 + 8 * v.title().length(),
+                                        v.subtitle() == null
+                                                ? 0
+                                                : 4 + TEXT_PX * v.subtitle().length()))
+                        + 8);
         StringBuilder svg = new StringBuilder(out.length() + 512);
-        svg.append("<svg xmlns=\"").append(Svg.NS).append("\" class=\"section-drawing\" width=\"").append(Svg.px(width))
-                .append("\" height=\"").append(Svg.px(height)).append("\" viewBox=\"0 0 ").append(Svg.px(width)).append(' ')
-                .append(Svg.px(height)).append("\" data-px-per-mm=\"").append(Svg.px(scale)).append("\" data-origin-x=\"")
-                .append(Svg.px(ox)).append("\" data-origin-y=\"").append(Svg.px(oy)).append("\" role=\"img\" aria-label=\"")
-                .append(Svg.esc(v.title())).append("\">\n");
+        svg.append("<svg xmlns=\"")
+                .append(Svg.NS)
+                .append("\" class=\"section-drawing\" width=\"")
+                .append(Svg.px(width))
+                .append("\" height=\"")
+                .append(Svg.px(height))
+                .append("\" viewBox=\"0 0 ")
+                .append(Svg.px(width))
+                .append(' ')
+                .append(Svg.px(height))
+                .append("\" data-px-per-mm=\"")
+                .append(Svg.px(scale))
+                .append("\" data-origin-x=\"")
+                .append(Svg.px(ox))
+                .append("\" data-origin-y=\"")
+                .append(Svg.px(oy))
+                .append("\" role=\"img\" aria-label=\"")
+                .append(Svg.esc(v.title()))
+                .append("\">\n");
         svg.append("<g font-family=\"sans-serif\" font-size=\"11\" fill=\"#222\">\n");
         svg.append(out);
         svg.append("</g>\n</svg>\n");
@@ -266,9 +312,19 @@ public final class SectionDrawing {
         double h = shape.height();
         Flange f = shape.flange();
         if (f == null) {
-            out.append("<rect class=\"concrete\" x=\"").append(Svg.px(m.x(0))).append("\" y=\"").append(Svg.px(m.y(0)))
-                    .append("\" width=\"").append(Svg.px(b * m.s())).append("\" height=\"").append(Svg.px(h * m.s()))
-                    .append("\" fill=\"").append(CONCRETE).append("\" stroke=\"").append(EDGE).append("\" stroke-width=\"1.2\"/>\n");
+            out.append("<rect class=\"concrete\" x=\"")
+                    .append(Svg.px(m.x(0)))
+                    .append("\" y=\"")
+                    .append(Svg.px(m.y(0)))
+                    .append("\" width=\"")
+                    .append(Svg.px(b * m.s()))
+                    .append("\" height=\"")
+                    .append(Svg.px(h * m.s()))
+                    .append("\" fill=\"")
+                    .append(CONCRETE)
+                    .append("\" stroke=\"")
+                    .append(EDGE)
+                    .append("\" stroke-width=\"1.2\"/>\n");
             return;
         }
         double hf = f.thickness();
@@ -286,30 +342,54 @@ public final class SectionDrawing {
             d.append(" L").append(p(m, b + rightStub, 0));
             breakLine(d, m, b + rightStub, 0, hf, cut, -1);
             d.append(" L").append(p(m, b, hf)).append(" L").append(p(m, b, h)).append(" Z");
-            out.append("<path class=\"concrete\" d=\"").append(d).append("\" fill=\"").append(CONCRETE)
-                    .append("\" stroke=\"").append(EDGE).append("\" stroke-width=\"1.2\"/>\n");
+            out.append("<path class=\"concrete\" d=\"")
+                    .append(d)
+                    .append("\" fill=\"")
+                    .append(CONCRETE)
+                    .append("\" stroke=\"")
+                    .append(EDGE)
+                    .append("\" stroke-width=\"1.2\"/>\n");
             return;
         }
         // hogging: the slab is on the tension side and the section model does not count it; drawn pale
         // and dashed beside the web
-        String slabStyle = "fill=\"" + SLAB_OFF + "\" stroke=\"" + OFF + "\" stroke-width=\"1\" stroke-dasharray=\"5 3\"";
+        String slabStyle =
+                "fill=\"" + SLAB_OFF + "\" stroke=\"" + OFF + "\" stroke-width=\"1\" stroke-dasharray=\"5 3\"";
         if (leftStub > 0) {
             StringBuilder d = new StringBuilder();
             d.append('M').append(p(m, 0, 0)).append(" L").append(p(m, -leftStub, 0));
             breakLine(d, m, -leftStub, 0, hf, cut, 1);
             d.append(" L").append(p(m, 0, hf));
-            out.append("<path class=\"slab not-counted\" d=\"").append(d).append("\" ").append(slabStyle).append("/>\n");
+            out.append("<path class=\"slab not-counted\" d=\"")
+                    .append(d)
+                    .append("\" ")
+                    .append(slabStyle)
+                    .append("/>\n");
         }
         if (rightStub > 0) {
             StringBuilder d = new StringBuilder();
             d.append('M').append(p(m, b, 0)).append(" L").append(p(m, b + rightStub, 0));
             breakLine(d, m, b + rightStub, 0, hf, cut, -1);
             d.append(" L").append(p(m, b, hf));
-            out.append("<path class=\"slab not-counted\" d=\"").append(d).append("\" ").append(slabStyle).append("/>\n");
+            out.append("<path class=\"slab not-counted\" d=\"")
+                    .append(d)
+                    .append("\" ")
+                    .append(slabStyle)
+                    .append("/>\n");
         }
-        out.append("<rect class=\"concrete\" x=\"").append(Svg.px(m.x(0))).append("\" y=\"").append(Svg.px(m.y(0)))
-                .append("\" width=\"").append(Svg.px(b * m.s())).append("\" height=\"").append(Svg.px(h * m.s()))
-                .append("\" fill=\"").append(CONCRETE).append("\" stroke=\"").append(EDGE).append("\" stroke-width=\"1.2\"/>\n");
+        out.append("<rect class=\"concrete\" x=\"")
+                .append(Svg.px(m.x(0)))
+                .append("\" y=\"")
+                .append(Svg.px(m.y(0)))
+                .append("\" width=\"")
+                .append(Svg.px(b * m.s()))
+                .append("\" height=\"")
+                .append(Svg.px(h * m.s()))
+                .append("\" fill=\"")
+                .append(CONCRETE)
+                .append("\" stroke=\"")
+                .append(EDGE)
+                .append("\" stroke-width=\"1.2\"/>\n");
     }
 
     /**
@@ -358,7 +438,10 @@ public final class SectionDrawing {
         d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, e, h - e - r));
         d.append(" L").append(p(m, e, e + r));
         d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, e + r, e));
-        out.append("<path class=\"stirrup\" d=\"").append(d).append("\" ").append(stroke)
+        out.append("<path class=\"stirrup\" d=\"")
+                .append(d)
+                .append("\" ")
+                .append(stroke)
                 .append(" stroke-linejoin=\"round\"/>\n");
         // the two hook ends close the hoop at one corner: each turns 135 degrees round the corner and runs into
         // the core along the diagonal; the corner is the first (top-left, top-right, bottom-left, bottom-right)
@@ -381,8 +464,13 @@ public final class SectionDrawing {
         }
         StringBuilder hooks = new StringBuilder();
         corner.path(hooks, m, rr);
-        out.append("<path class=\"stirrup hook\" data-corner=\"").append(corner.name()).append("\" d=\"").append(hooks)
-                .append("\" ").append(stroke).append(" stroke-linecap=\"butt\"/>\n");
+        out.append("<path class=\"stirrup hook\" data-corner=\"")
+                .append(corner.name())
+                .append("\" d=\"")
+                .append(hooks)
+                .append("\" ")
+                .append(stroke)
+                .append(" stroke-linecap=\"butt\"/>\n");
         boolean shortened = corner.shortest() < ext - 1e-6;
         for (int i = 0; i < legs.size(); i++) {
             TieLeg leg = legs.get(i);
@@ -392,9 +480,11 @@ public final class SectionDrawing {
             // a tail stops halfway to the next leg so two tails never meet
             double leftLimit = (i == 0 ? e : (legs.get(i - 1).x() + leg.x()) / 2);
             double rightLimit = (i == legs.size() - 1 ? b - e : (legs.get(i + 1).x() + leg.x()) / 2);
-            double tTop = Math.min(tail(top.ex(), top.ey(), top.ux(), top.uy(), ext, rt, circles),
+            double tTop = Math.min(
+                    tail(top.ex(), top.ey(), top.ux(), top.uy(), ext, rt, circles),
                     reach(top, leftLimit, rightLimit, rt));
-            double tBottom = Math.min(tail(bottom.ex(), bottom.ey(), bottom.ux(), bottom.uy(), ext, rt, circles),
+            double tBottom = Math.min(
+                    tail(bottom.ex(), bottom.ey(), bottom.ux(), bottom.uy(), ext, rt, circles),
                     reach(bottom, leftLimit, rightLimit, rt));
             shortened |= Math.min(tTop, tBottom) < ext - 1e-6;
             String rTop = Svg.px(top.radius() * m.s());
@@ -402,13 +492,28 @@ public final class SectionDrawing {
             StringBuilder t = new StringBuilder();
             t.append('M').append(p(m, top.ex() + tTop * top.ux(), top.ey() + tTop * top.uy()));
             t.append(" L").append(p(m, top.ex(), top.ey()));
-            t.append(" A").append(rTop).append(',').append(rTop).append(" 0 0 ").append(top.side() > 0 ? 0 : 1).append(' ')
+            t.append(" A")
+                    .append(rTop)
+                    .append(',')
+                    .append(rTop)
+                    .append(" 0 0 ")
+                    .append(top.side() > 0 ? 0 : 1)
+                    .append(' ')
                     .append(p(m, leg.x(), top.y()));
             t.append(" L").append(p(m, leg.x(), bottom.y()));
-            t.append(" A").append(rBottom).append(',').append(rBottom).append(" 0 0 ").append(bottom.side() > 0 ? 0 : 1)
-                    .append(' ').append(p(m, bottom.ex(), bottom.ey()));
+            t.append(" A")
+                    .append(rBottom)
+                    .append(',')
+                    .append(rBottom)
+                    .append(" 0 0 ")
+                    .append(bottom.side() > 0 ? 0 : 1)
+                    .append(' ')
+                    .append(p(m, bottom.ex(), bottom.ey()));
             t.append(" L").append(p(m, bottom.ex() + tBottom * bottom.ux(), bottom.ey() + tBottom * bottom.uy()));
-            out.append("<path class=\"stirrup tie\" d=\"").append(t).append("\" ").append(stroke)
+            out.append("<path class=\"stirrup tie\" d=\"")
+                    .append(t)
+                    .append("\" ")
+                    .append(stroke)
                     .append(" stroke-linecap=\"butt\"/>\n");
         }
         return shortened;
@@ -428,10 +533,32 @@ public final class SectionDrawing {
      * radius; the hook from the side leg ends its bend at (ax, ay), the one from the top or bottom leg at
      * (bx, by), and both tails run along (ux, uy) into the core, {@code ta} and {@code tb} long.
      */
-    record Corner(int sx, int sy, double cx, double cy, double r, double ax, double ay, double bx, double by,
-            double ux, double uy, double ta, double tb) {
-        static Corner of(int sx, int sy, double b, double h, double e, double r, double ext, double rt,
-                List<Circle> circles, List<Double> legXs, double ds) {
+    record Corner(
+            int sx,
+            int sy,
+            double cx,
+            double cy,
+            double r,
+            double ax,
+            double ay,
+            double bx,
+            double by,
+            double ux,
+            double uy,
+            double ta,
+            double tb) {
+        static Corner of(
+                int sx,
+                int sy,
+                double b,
+                double h,
+                double e,
+                double r,
+                double ext,
+                double rt,
+                List<Circle> circles,
+                List<Double> legXs,
+                double ds) {
             double k = Math.sqrt(0.5);
             double cx = sx < 0 ? e + r : b - e - r;
             double cy = sy < 0 ? e + r : h - e - r;
@@ -472,10 +599,29 @@ public final class SectionDrawing {
         void path(StringBuilder d, Mm m, String rr) {
             // mirrored corners turn the other way: the sweep flag follows the number of mirrors
             int flip = sx * sy > 0 ? 0 : 1;
-            d.append('M').append(p(m, cx + sx * r, cy)).append(" A").append(rr).append(',').append(rr).append(" 0 0 ")
-                    .append(flip).append(' ').append(p(m, ax, ay)).append(" L").append(p(m, ax + ta * ux, ay + ta * uy));
-            d.append(" M").append(p(m, cx, cy + sy * r)).append(" A").append(rr).append(',').append(rr).append(" 0 0 ")
-                    .append(1 - flip).append(' ').append(p(m, bx, by)).append(" L")
+            d.append('M')
+                    .append(p(m, cx + sx * r, cy))
+                    .append(" A")
+                    .append(rr)
+                    .append(',')
+                    .append(rr)
+                    .append(" 0 0 ")
+                    .append(flip)
+                    .append(' ')
+                    .append(p(m, ax, ay))
+                    .append(" L")
+                    .append(p(m, ax + ta * ux, ay + ta * uy));
+            d.append(" M")
+                    .append(p(m, cx, cy + sy * r))
+                    .append(" A")
+                    .append(rr)
+                    .append(',')
+                    .append(rr)
+                    .append(" 0 0 ")
+                    .append(1 - flip)
+                    .append(' ')
+                    .append(p(m, bx, by))
+                    .append(" L")
                     .append(p(m, bx + tb * ux, by + tb * uy));
         }
     }
@@ -487,8 +633,7 @@ public final class SectionDrawing {
     }
 
     /** A circle in the section, mm: a bar's centre and radius. */
-    record Circle(double x, double y, double r) {
-    }
+    record Circle(double x, double y, double r) {}
 
     /** Every longitudinal bar and skin bar drawn. */
     static List<Circle> circles(View v, List<Placed> placed) {
@@ -539,8 +684,7 @@ public final class SectionDrawing {
      * One end of a crosstie: the leg stops at y, bends 135 degrees towards {@code side} (+1 right) with
      * centreline radius {@code radius} and leaves at (ex, ey) along (ux, uy).
      */
-    record HookEnd(double y, double side, double radius, double ex, double ey, double ux, double uy) {
-    }
+    record HookEnd(double y, double side, double radius, double ex, double ey, double ux, double uy) {}
 
     /**
      * A crosstie leg: the x of its centreline (mm) and the bar each end wraps, or null where no bar of
@@ -635,7 +779,8 @@ public final class SectionDrawing {
             TieLeg leg = new TieLeg(x, touching(x, topOuter, rt), touching(x, bottomOuter, rt));
             HookEnd t = leg.end(true, v, e, hoopR, all);
             HookEnd d = leg.end(false, v, e, hoopR, all);
-            return Math.min(tail(t.ex(), t.ey(), t.ux(), t.uy(), ext, keep, all),
+            return Math.min(
+                    tail(t.ex(), t.ey(), t.ux(), t.uy(), ext, keep, all),
                     tail(d.ex(), d.ey(), d.ux(), d.uy(), ext, keep, all));
         };
         List<Double> xs = new ArrayList<>();
@@ -676,7 +821,8 @@ public final class SectionDrawing {
         Placed best = null;
         for (Placed pl : placed) {
             BarLayer bl = pl.drawn().layer();
-            if (bl.face() == face && (best == null || bl.fromFace() < best.drawn().layer().fromFace())) {
+            if (bl.face() == face
+                    && (best == null || bl.fromFace() < best.drawn().layer().fromFace())) {
                 best = pl;
             }
         }
@@ -725,8 +871,17 @@ public final class SectionDrawing {
      * else the one where the shorter runs furthest; between equals, one that also touches a bar of the other
      * face first, then the one nearer the side face (so the hook's tail turns into the core).
      */
-    private static Double pick(double target, List<Circle> bars, List<Circle> otherFace, List<Circle> all,
-            List<Circle> used, double lo, double hi, double b, double rt, java.util.function.DoubleUnaryOperator tails,
+    private static Double pick(
+            double target,
+            List<Circle> bars,
+            List<Circle> otherFace,
+            List<Circle> all,
+            List<Circle> used,
+            double lo,
+            double hi,
+            double b,
+            double rt,
+            java.util.function.DoubleUnaryOperator tails,
             double ext) {
         List<Circle> order = new ArrayList<>(bars);
         order.sort(Comparator.comparingDouble(c -> Math.abs(c.x() - target)));
@@ -788,10 +943,21 @@ public final class SectionDrawing {
             String fill = pl.drawn().counted() ? STEEL : OFF;
             String cls = pl.drawn().counted() ? "bar" : "bar not-counted";
             for (double x : pl.x()) {
-                out.append("<circle class=\"").append(cls).append("\" data-face=\"").append(bl.face().word())
-                        .append("\" data-bar=\"").append(Svg.esc(bl.bar().label())).append("\" cx=\"")
-                        .append(Svg.px(m.x(x))).append("\" cy=\"").append(Svg.px(m.y(pl.y()))).append("\" r=\"")
-                        .append(Svg.px(r)).append("\" fill=\"").append(fill).append("\"/>\n");
+                out.append("<circle class=\"")
+                        .append(cls)
+                        .append("\" data-face=\"")
+                        .append(bl.face().word())
+                        .append("\" data-bar=\"")
+                        .append(Svg.esc(bl.bar().label()))
+                        .append("\" cx=\"")
+                        .append(Svg.px(m.x(x)))
+                        .append("\" cy=\"")
+                        .append(Svg.px(m.y(pl.y())))
+                        .append("\" r=\"")
+                        .append(Svg.px(r))
+                        .append("\" fill=\"")
+                        .append(fill)
+                        .append("\"/>\n");
             }
         }
     }
@@ -809,7 +975,8 @@ public final class SectionDrawing {
         double h = v.shape().height();
         int n = SectionLayout.skinBarsPerFace(h, skin.spacing());
         Face tension = v.bending().tensionFace();
-        double y0 = tension == Face.BOTTOM ? h - v.detailing().firstLayerCentroid(skin.bar().diameter())
+        double y0 = tension == Face.BOTTOM
+                ? h - v.detailing().firstLayerCentroid(skin.bar().diameter())
                 : v.detailing().firstLayerCentroid(skin.bar().diameter());
         for (Placed pl : placed) {
             if (pl.drawn().layer().face() == tension) {
@@ -817,7 +984,9 @@ public final class SectionDrawing {
                 break;
             }
         }
-        double edge = v.detailing().cover() + v.detailing().stirrupBar().diameter() + skin.bar().diameter() / 2;
+        double edge = v.detailing().cover()
+                + v.detailing().stirrupBar().diameter()
+                + skin.bar().diameter() / 2;
         double sign = tension == Face.BOTTOM ? -1 : 1;
         for (int k = 1; k <= n; k++) {
             double y = y0 + sign * k * skin.spacing();
@@ -833,8 +1002,13 @@ public final class SectionDrawing {
         }
         double r = v.skin().bar().diameter() / 2 * m.s();
         for (double[] c : skinCentres(v, placed)) {
-            out.append("<circle class=\"skin\" cx=\"").append(Svg.px(m.x(c[0]))).append("\" cy=\"").append(Svg.px(m.y(c[1])))
-                    .append("\" r=\"").append(Svg.px(r)).append("\" fill=\"#5b5b5b\"/>\n");
+            out.append("<circle class=\"skin\" cx=\"")
+                    .append(Svg.px(m.x(c[0])))
+                    .append("\" cy=\"")
+                    .append(Svg.px(m.y(c[1])))
+                    .append("\" r=\"")
+                    .append(Svg.px(r))
+                    .append("\" fill=\"#5b5b5b\"/>\n");
         }
     }
 
@@ -858,8 +1032,16 @@ public final class SectionDrawing {
             dimLine(out, xd, m.y(top), xd, m.y(bottom), false, -1);
             rotated(out, xd + 12, (m.y(top) + m.y(bottom)) / 2, "d = " + len(v.d(), u));
             double yc = m.y(v.bending() == Bending.SAGGING ? v.d() : h - v.d());
-            out.append("<line x1=\"").append(Svg.px(m.x(b) - 4)).append("\" y1=\"").append(Svg.px(yc)).append("\" x2=\"")
-                    .append(Svg.px(xd + 3)).append("\" y2=\"").append(Svg.px(yc)).append("\" stroke=\"").append(DIM)
+            out.append("<line x1=\"")
+                    .append(Svg.px(m.x(b) - 4))
+                    .append("\" y1=\"")
+                    .append(Svg.px(yc))
+                    .append("\" x2=\"")
+                    .append(Svg.px(xd + 3))
+                    .append("\" y2=\"")
+                    .append(Svg.px(yc))
+                    .append("\" stroke=\"")
+                    .append(DIM)
                     .append("\" stroke-width=\"0.6\" stroke-dasharray=\"2 2\"/>\n");
         }
         Flange f = shape.flange();
@@ -879,12 +1061,23 @@ public final class SectionDrawing {
         double y = m.y(h) + 50;
         // a scale bar of 100 mm (4 in)
         double barMm = u == UnitSystem.US ? 101.6 : 100;
-        double x0 = m.x(0) - (v.shape().flange() != null && !v.shape().flange().oneSided() ? stub(v.shape()) * m.s() : 0);
+        double x0 =
+                m.x(0) - (v.shape().flange() != null && !v.shape().flange().oneSided() ? stub(v.shape()) * m.s() : 0);
         double x1 = x0 + barMm * m.s();
-        out.append("<rect x=\"").append(Svg.px(x0)).append("\" y=\"").append(Svg.px(y - 4)).append("\" width=\"")
-                .append(Svg.px(barMm * m.s() / 2)).append("\" height=\"4\" fill=\"#333\"/>\n");
-        out.append("<rect x=\"").append(Svg.px((x0 + x1) / 2)).append("\" y=\"").append(Svg.px(y - 4)).append("\" width=\"")
-                .append(Svg.px(barMm * m.s() / 2)).append("\" height=\"4\" fill=\"#fff\" stroke=\"#333\" stroke-width=\"0.8\"/>\n");
+        out.append("<rect x=\"")
+                .append(Svg.px(x0))
+                .append("\" y=\"")
+                .append(Svg.px(y - 4))
+                .append("\" width=\"")
+                .append(Svg.px(barMm * m.s() / 2))
+                .append("\" height=\"4\" fill=\"#333\"/>\n");
+        out.append("<rect x=\"")
+                .append(Svg.px((x0 + x1) / 2))
+                .append("\" y=\"")
+                .append(Svg.px(y - 4))
+                .append("\" width=\"")
+                .append(Svg.px(barMm * m.s() / 2))
+                .append("\" height=\"4\" fill=\"#fff\" stroke=\"#333\" stroke-width=\"0.8\"/>\n");
         // the bar, not a ratio, states the scale: it stays true when the page is zoomed or printed
         String scaleText = (u == UnitSystem.US ? "4 in" : "100 mm") + "   (section drawn to scale)";
         Svg.text(out, x1 + 6, y, "start", null, scaleText);
@@ -893,7 +1086,8 @@ public final class SectionDrawing {
         lines.add("cover " + len(v.detailing().cover(), u) + " to the stirrup (dashed)");
         if (v.stirrups() != null) {
             Stirrups s = v.stirrups();
-            String bend = Math.round(StirrupHooks.insideBendDiameter(s.bar()) / s.bar().diameter()) + " d_b";
+            String bend = Math.round(
+                            StirrupHooks.insideBendDiameter(s.bar()) / s.bar().diameter()) + " d_b";
             lines.add("stirrup " + s.bar().label() + ", " + s.legs() + " legs @ " + len(s.spacing(), u) + "; bends "
                     + bend + " inside, 135° hooks + " + len(StirrupHooks.extension135(s.bar(), v.code()), u));
             if (shortTails) {
@@ -939,7 +1133,9 @@ public final class SectionDrawing {
                 while (at < rows.size() && rows.get(at)[0] < m.y(yMid)) {
                     at++;
                 }
-                rows.add(at, new double[] {m.y(yMid), m.x(last[0] + v.skin().bar().diameter() / 2), m.y(yMid)});
+                rows.add(at, new double[] {
+                    m.y(yMid), m.x(last[0] + v.skin().bar().diameter() / 2), m.y(yMid)
+                });
                 texts.add(at, "skin " + sk.size() / 2 + " " + v.skin().bar().label() + " each face");
                 counted.add(at, true);
             }
@@ -955,39 +1151,87 @@ public final class SectionDrawing {
         }
         for (int i = 0; i < rows.size(); i++) {
             double[] r = rows.get(i);
-            out.append("<polyline fill=\"none\" stroke=\"").append(DIM).append("\" stroke-width=\"0.6\" points=\"")
-                    .append(Svg.px(r[1] + 2)).append(',').append(Svg.px(r[2])).append(' ').append(Svg.px(x - 10)).append(',')
-                    .append(Svg.px(r[0] - 4)).append(' ').append(Svg.px(x - 3)).append(',').append(Svg.px(r[0] - 4))
+            out.append("<polyline fill=\"none\" stroke=\"")
+                    .append(DIM)
+                    .append("\" stroke-width=\"0.6\" points=\"")
+                    .append(Svg.px(r[1] + 2))
+                    .append(',')
+                    .append(Svg.px(r[2]))
+                    .append(' ')
+                    .append(Svg.px(x - 10))
+                    .append(',')
+                    .append(Svg.px(r[0] - 4))
+                    .append(' ')
+                    .append(Svg.px(x - 3))
+                    .append(',')
+                    .append(Svg.px(r[0] - 4))
                     .append("\"/>\n");
             Svg.text(out, x, r[0], "start", counted.get(i) ? "bar-label" : "bar-label not-counted", texts.get(i));
         }
     }
 
     /** A dimension line with oblique ticks; {@code towards} (+1 or -1) is the side of the object, for the extension lines. */
-    private static void dimLine(StringBuilder out, double x1, double y1, double x2, double y2, boolean horizontal,
-            int towards) {
+    private static void dimLine(
+            StringBuilder out, double x1, double y1, double x2, double y2, boolean horizontal, int towards) {
         out.append("<g stroke=\"").append(DIM).append("\" stroke-width=\"0.8\">");
-        out.append("<line x1=\"").append(Svg.px(x1)).append("\" y1=\"").append(Svg.px(y1)).append("\" x2=\"")
-                .append(Svg.px(x2)).append("\" y2=\"").append(Svg.px(y2)).append("\"/>");
+        out.append("<line x1=\"")
+                .append(Svg.px(x1))
+                .append("\" y1=\"")
+                .append(Svg.px(y1))
+                .append("\" x2=\"")
+                .append(Svg.px(x2))
+                .append("\" y2=\"")
+                .append(Svg.px(y2))
+                .append("\"/>");
         // oblique ticks at both ends, and short extension lines back to the object
         for (double[] pt : new double[][] {{x1, y1}, {x2, y2}}) {
-            out.append("<line x1=\"").append(Svg.px(pt[0] - 4)).append("\" y1=\"").append(Svg.px(pt[1] + 4))
-                    .append("\" x2=\"").append(Svg.px(pt[0] + 4)).append("\" y2=\"").append(Svg.px(pt[1] - 4)).append("\"/>");
+            out.append("<line x1=\"")
+                    .append(Svg.px(pt[0] - 4))
+                    .append("\" y1=\"")
+                    .append(Svg.px(pt[1] + 4))
+                    .append("\" x2=\"")
+                    .append(Svg.px(pt[0] + 4))
+                    .append("\" y2=\"")
+                    .append(Svg.px(pt[1] - 4))
+                    .append("\"/>");
             if (horizontal) {
-                out.append("<line x1=\"").append(Svg.px(pt[0])).append("\" y1=\"").append(Svg.px(pt[1] + towards * 14))
-                        .append("\" x2=\"").append(Svg.px(pt[0])).append("\" y2=\"").append(Svg.px(pt[1] - towards * 3)).append("\"/>");
+                out.append("<line x1=\"")
+                        .append(Svg.px(pt[0]))
+                        .append("\" y1=\"")
+                        .append(Svg.px(pt[1] + towards * 14))
+                        .append("\" x2=\"")
+                        .append(Svg.px(pt[0]))
+                        .append("\" y2=\"")
+                        .append(Svg.px(pt[1] - towards * 3))
+                        .append("\"/>");
             } else {
-                out.append("<line x1=\"").append(Svg.px(pt[0] - towards * 3)).append("\" y1=\"").append(Svg.px(pt[1]))
-                        .append("\" x2=\"").append(Svg.px(pt[0] + towards * 14)).append("\" y2=\"").append(Svg.px(pt[1])).append("\"/>");
+                out.append("<line x1=\"")
+                        .append(Svg.px(pt[0] - towards * 3))
+                        .append("\" y1=\"")
+                        .append(Svg.px(pt[1]))
+                        .append("\" x2=\"")
+                        .append(Svg.px(pt[0] + towards * 14))
+                        .append("\" y2=\"")
+                        .append(Svg.px(pt[1]))
+                        .append("\"/>");
             }
         }
         out.append("</g>\n");
     }
 
     private static void rotated(StringBuilder out, double x, double y, String text) {
-        out.append("<text x=\"").append(Svg.px(x)).append("\" y=\"").append(Svg.px(y)).append("\" text-anchor=\"middle\"")
-                .append(" transform=\"rotate(-90 ").append(Svg.px(x)).append(' ').append(Svg.px(y)).append(")\">")
-                .append(Svg.esc(text)).append("</text>\n");
+        out.append("<text x=\"")
+                .append(Svg.px(x))
+                .append("\" y=\"")
+                .append(Svg.px(y))
+                .append("\" text-anchor=\"middle\"")
+                .append(" transform=\"rotate(-90 ")
+                .append(Svg.px(x))
+                .append(' ')
+                .append(Svg.px(y))
+                .append(")\">")
+                .append(Svg.esc(text))
+                .append("</text>\n");
     }
 
     static String len(double mm, UnitSystem u) {

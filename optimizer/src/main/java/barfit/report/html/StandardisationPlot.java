@@ -37,8 +37,7 @@ public final class StandardisationPlot {
     private static final Color LINE = new Color(0x1f, 0x4e, 0x79);
     private static final Color MARK = new Color(0xb0, 0x3a, 0x2e);
 
-    private StandardisationPlot() {
-    }
+    private StandardisationPlot() {}
 
     public static String svg(List<ScheduleResult.StandardisationPoint> points, UnitSystem u, String currency) {
         return svg(points, u, currency, -1, null);
@@ -47,7 +46,11 @@ public final class StandardisationPlot {
     /** The schedule's plot: its chosen number of sizes marked, and what the curve leaves out said in a subtitle. */
     public static String svg(ScheduleResult r) {
         var rat = r.input().rationalise();
-        return svg(r.standardisation(), r.input().settings().units(), r.input().currency(), r.sizes().size(),
+        return svg(
+                r.standardisation(),
+                r.input().settings().units(),
+                r.input().currency(),
+                r.sizes().size(),
                 rat == null ? null : rat.maxSectionSizes());
     }
 
@@ -55,7 +58,11 @@ public final class StandardisationPlot {
      * {@code chosen}: the number of sizes of the schedule (marked; -1 for none); {@code limit}: the user's
      * max_section_sizes, so a curve that stops short of it can say why.
      */
-    public static String svg(List<ScheduleResult.StandardisationPoint> points, UnitSystem u, String currency, int chosen,
+    public static String svg(
+            List<ScheduleResult.StandardisationPoint> points,
+            UnitSystem u,
+            String currency,
+            int chosen,
             Integer limit) {
         System.setProperty("java.awt.headless", "true");
         XYSeries cost = new XYSeries("least total cost");
@@ -115,20 +122,27 @@ public final class StandardisationPlot {
             plot.addAnnotation(note);
         }
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), plot, false);
-        chart.setTitle(new TextTitle("Price of standardisation: least total cost against the number of section sizes",
+        chart.setTitle(new TextTitle(
+                "Price of standardisation: least total cost against the number of section sizes",
                 new Font(Font.SANS_SERIF, Font.BOLD, 14)));
         List<String> notes = new java.util.ArrayList<>();
-        int lastInfeasible = points.stream().filter(p -> !Double.isFinite(p.cost()))
-                .mapToInt(ScheduleResult.StandardisationPoint::sizes).max().orElse(0);
+        int lastInfeasible = points.stream()
+                .filter(p -> !Double.isFinite(p.cost()))
+                .mapToInt(ScheduleResult.StandardisationPoint::sizes)
+                .max()
+                .orElse(0);
         if (lastInfeasible > 0) {
-            notes.add(lastInfeasible == 1 ? "no schedule fits in one section size"
-                    : "no schedule fits in " + lastInfeasible + " or fewer section sizes");
+            notes.add(
+                    lastInfeasible == 1
+                            ? "no schedule fits in one section size"
+                            : "no schedule fits in " + lastInfeasible + " or fewer section sizes");
         }
         if (chosen > 0) {
             notes.add("red: the schedule (" + chosen + (chosen == 1 ? " size)" : " sizes)"));
         }
         if (limit != null && kMax < limit && !points.isEmpty()) {
-            notes.add("with no limit the cheapest schedule uses " + kMax + " sizes: another would not pay for its forms");
+            notes.add(
+                    "with no limit the cheapest schedule uses " + kMax + " sizes: another would not pay for its forms");
         }
         for (String note : notes) {
             chart.addSubtitle(new TextTitle(note, new Font(Font.SANS_SERIF, Font.PLAIN, 11)));

@@ -6,8 +6,7 @@ import java.util.Locale;
 final class Svg {
     static final String NS = "http://www.w3.org/2000/svg";
 
-    private Svg() {
-    }
+    private Svg() {}
 
     /** A coordinate in px with three decimals, trailing zeros dropped (stable text, fine enough for 0.01 px). */
     static String px(double v) {
@@ -51,11 +50,31 @@ final class Svg {
     }
 
     /** A line with its stroke colour and width, dashed when {@code dash} is not null. */
-    static void line(StringBuilder out, double x1, double y1, double x2, double y2, String cls, String colour,
-            double width, String dash) {
-        out.append("<line x1=\"").append(px(x1)).append("\" y1=\"").append(px(y1)).append("\" x2=\"").append(px(x2))
-                .append("\" y2=\"").append(px(y2)).append("\" class=\"").append(cls).append("\" stroke=\"").append(colour)
-                .append("\" stroke-width=\"").append(px(width)).append('"');
+    static void line(
+            StringBuilder out,
+            double x1,
+            double y1,
+            double x2,
+            double y2,
+            String cls,
+            String colour,
+            double width,
+            String dash) {
+        out.append("<line x1=\"")
+                .append(px(x1))
+                .append("\" y1=\"")
+                .append(px(y1))
+                .append("\" x2=\"")
+                .append(px(x2))
+                .append("\" y2=\"")
+                .append(px(y2))
+                .append("\" class=\"")
+                .append(cls)
+                .append("\" stroke=\"")
+                .append(colour)
+                .append("\" stroke-width=\"")
+                .append(px(width))
+                .append('"');
         if (dash != null) {
             out.append(" stroke-dasharray=\"").append(dash).append('"');
         }

@@ -9,8 +9,8 @@ import barfit.analysis.LineResult;
 import barfit.analysis.Load;
 import barfit.analysis.Support;
 import barfit.analysis.SupportKind;
-import barfit.design.span.SpanProblem;
 import barfit.design.span.ShearDiagram;
+import barfit.design.span.SpanProblem;
 import barfit.section.SpanChecks;
 import java.util.List;
 import java.util.Random;
@@ -22,16 +22,25 @@ import org.junit.jupiter.api.Test;
  */
 class LineShearTest {
     private static final double L = 8000; // mm
-    private static final double WD = 20;  // N/mm, dead
-    private static final double WL = 12;  // N/mm, live
+    private static final double WD = 20; // N/mm, dead
+    private static final double WL = 12; // N/mm, live
 
     private static Support knife() {
         return new Support(0, SupportKind.KNIFE_EDGE, null, null);
     }
 
     private static LineResult simpleSpan() {
-        Line line = new Line("S", List.of(L), 0, 0, List.of(knife(), knife()), List.of(Load.uniform(1, 0, L, WD, WL)),
-                1e14, 25000, 500, null);
+        Line line = new Line(
+                "S",
+                List.of(L),
+                0,
+                0,
+                List.of(knife(), knife()),
+                List.of(Load.uniform(1, 0, L, WD, WL)),
+                1e14,
+                25000,
+                500,
+                null);
         return LineAnalysis.analyse(line, 50);
     }
 
@@ -76,8 +85,27 @@ class LineShearTest {
     void zonesTakeTheEnvelopeAndTheBoundNeverExceedsIt() {
         LineResult r = simpleSpan();
         ShearDiagram v = LineSpans.spanShear(r.line(), r, r.spans().get(0));
-        SpanProblem p = new SpanProblem("S", null, null, null, null, L, barfit.section.EndCondition.SIMPLE, null,
-                1e8, null, v.at(0, 500), v.at(L, 500), null, null, null, null, null, false, 2, 0)
+        SpanProblem p = new SpanProblem(
+                        "S",
+                        null,
+                        null,
+                        null,
+                        null,
+                        L,
+                        barfit.section.EndCondition.SIMPLE,
+                        null,
+                        1e8,
+                        null,
+                        v.at(0, 500),
+                        v.at(L, 500),
+                        null,
+                        null,
+                        null,
+                        null,
+                        null,
+                        false,
+                        2,
+                        0)
                 .withAnalysis(null, v);
         List<SpanProblem.Zone> zones = p.zones();
         assertEquals(3, zones.size());
@@ -101,16 +129,25 @@ class LineShearTest {
         // two equal knife-edge spans, uniform D + L: the largest sagging moment in span 1 comes with live
         // load on span 1 only; then the interior support moment is −(wD + wL/2) l² / 16... by the
         // three-moment equation with w1 = wD + wL, w2 = wD: M = −(w1 + w2) l² / 16.
-        Line line = new Line("T", List.of(L, L), 0, 0, List.of(knife(), knife(), knife()),
-                List.of(Load.uniform(1, 0, L, WD, WL), Load.uniform(2, 0, L, WD, WL)), 1e14, 25000, 500, null);
+        Line line = new Line(
+                "T",
+                List.of(L, L),
+                0,
+                0,
+                List.of(knife(), knife(), knife()),
+                List.of(Load.uniform(1, 0, L, WD, WL), Load.uniform(2, 0, L, WD, WL)),
+                1e14,
+                25000,
+                500,
+                null);
         LineResult r = LineAnalysis.analyse(line, 50);
         LineResult.SpanValues s = r.spans().get(0);
         double m = -((WD + WL) + WD) * L * L / 16;
         assertEquals(m, s.deflectionRight(), 1e-6 * Math.abs(m), "three-moment equation");
         assertEquals(-2 * WD * L * L / 16, s.deadRight(), 1e-6 * Math.abs(m), "dead: −wD l² / 8");
         // the sustained level: D + s (D+L − D) at the support, s = 0.25
-        SpanChecks.ServiceMoments sm = SpanChecks.ServiceMoments.analysed(null, s.deadMid(), s.deadRight(), null,
-                s.deflectionMid(), s.deflectionRight(), 0.25);
+        SpanChecks.ServiceMoments sm = SpanChecks.ServiceMoments.analysed(
+                null, s.deadMid(), s.deadRight(), null, s.deflectionMid(), s.deflectionRight(), 0.25);
         assertEquals(-s.deadRight() + 0.25 * (s.deadRight() - s.deflectionRight()), sm.right()[1], 1e-6);
         assertEquals(-s.deflectionRight(), sm.right()[2], 1e-6, "magnitudes, hogging at the support");
         // the envelope's support moment (both spans loaded) is larger than the arrangement's

@@ -64,10 +64,12 @@ class LineSpansTest {
         DesignInput in = DesignInputReader.read(f, false);
         YFields doc = DesignInputReader.document(f);
         LineInput line = LinesReader.read(doc, in.settings()).get(0);
-        CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
+        CostModel cost = new CostModel(
+                in.rates(), in.settings().detailing().cover(), in.settings().code());
         SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
-        LineSpans.Result r = new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(),
-                in.barsPerTwoLegs()).design(line, 0);
+        LineSpans.Result r = new LineSpans(
+                        in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs())
+                .design(line, 0);
         assertTrue(r.settled(), "settled in " + r.rounds() + " rounds");
         int n = line.spans().size();
         List<SectionShape> shapes = new ArrayList<>();
@@ -82,7 +84,10 @@ class LineSpansTest {
         // the envelope of the designed sections, computed afresh
         double ec = Deflection.ec(in.settings().materials(), in.settings().code());
         double minH = shapes.stream().mapToDouble(SectionShape::height).min().orElseThrow();
-        double d = minH - in.settings().detailing().cover() - in.settings().stirrupBar().diameter() - 12.7;
+        double d = minH
+                - in.settings().detailing().cover()
+                - in.settings().stirrupBar().diameter()
+                - 12.7;
         Line fresh = line.toLine(shapes, ec, d);
         LineResult a = LineAnalysis.analyse(fresh);
         for (LineSpans.Part p : r.parts()) {
@@ -101,7 +106,10 @@ class LineSpansTest {
                 LineResult.OverhangValues o = a.overhangs().get(0);
                 assertEquals(o.mFace(), prob.mLeft(), 1e-6 * Math.abs(o.mFace()), p.name());
             }
-            assertTrue(SpanVerifier.verify(prob, p.outcome().best().layout(), false).ok(), p.name());
+            assertTrue(
+                    SpanVerifier.verify(prob, p.outcome().best().layout(), false)
+                            .ok(),
+                    p.name());
             if (p.segment() >= 1 && p.segment() <= n) {
                 zonesCarryTheFreshEnvelope(fresh, a, p);
             }
@@ -138,8 +146,10 @@ class LineSpansTest {
                     continue;
                 }
                 double v = Math.max(st.vMax(), -st.vMin());
-                assertTrue(designed >= v - 1e-6 * v, p.name() + " zone " + zone.name() + " at " + x + " mm: designed "
-                        + designed + " N, envelope " + v + " N");
+                assertTrue(
+                        designed >= v - 1e-6 * v,
+                        p.name() + " zone " + zone.name() + " at " + x + " mm: designed " + designed + " N, envelope "
+                                + v + " N");
             }
         }
     }
@@ -179,16 +189,25 @@ class LineSpansTest {
                           points: [{span: 1, at: %s, dead: 25, live: 10}]
                         section: {width: 300, height: 500}
                         forms: %s
-                    """.formatted(a, b, i % 2 == 0 ? "0" : "1.2", dead, live, 0.4 + 0.2 * rnd.nextInt(5),
-                    i < 2 ? "per-span" : "line");
+                    """.formatted(
+                            a,
+                            b,
+                            i % 2 == 0 ? "0" : "1.2",
+                            dead,
+                            live,
+                            0.4 + 0.2 * rnd.nextInt(5),
+                            i < 2 ? "per-span" : "line");
             Path f = dir.resolve("o" + i + ".yaml");
             Files.writeString(f, yaml);
             DesignInput in = DesignInputReader.read(f, false);
-            LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
-            CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
+            LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings())
+                    .get(0);
+            CostModel cost = new CostModel(
+                    in.rates(), in.settings().detailing().cover(), in.settings().code());
             SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
-            LineSpans.Result r = new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(),
-                    in.barsPerTwoLegs()).design(line, 0);
+            LineSpans.Result r = new LineSpans(
+                            in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs())
+                    .design(line, 0);
             barfit.design.span.SpanExhaustive oracle = new barfit.design.span.SpanExhaustive(cost);
             for (LineSpans.Part p : r.parts()) {
                 var ref = oracle.solve(p.problem());
@@ -197,8 +216,11 @@ class LineSpansTest {
                     assertTrue(!p.outcome().feasible(), "the oracle finds nothing — " + where);
                     continue;
                 }
-                assertTrue(p.outcome().feasible(), "the optimizer finds nothing, the oracle " + ref.best() + " — " + where);
-                assertEquals(ref.units(), CostModel.units(p.outcome().best().cost().total()), "cost — " + where);
+                assertTrue(
+                        p.outcome().feasible(),
+                        "the optimizer finds nothing, the oracle " + ref.best() + " — " + where);
+                assertEquals(
+                        ref.units(), CostModel.units(p.outcome().best().cost().total()), "cost — " + where);
                 feasible++;
             }
         }
@@ -265,8 +287,10 @@ class LineSpansTest {
         Path f = dir.resolve("r.yaml");
         Files.writeString(f, yaml);
         DesignInput in = DesignInputReader.read(f, false);
-        LineInput line = LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
-        CostModel cost = new CostModel(in.rates(), in.settings().detailing().cover(), in.settings().code());
+        LineInput line =
+                LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
+        CostModel cost = new CostModel(
+                in.rates(), in.settings().detailing().cover(), in.settings().code());
         SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
         return new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs())
                 .design(line, 0);

@@ -8,7 +8,6 @@ import barfit.design.CostModel;
 import barfit.design.SearchSpace;
 import barfit.design.SolverOptions;
 import barfit.section.CheckResult;
-import barfit.units.UnitSystem;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -56,13 +55,32 @@ class LegsRuleTest {
         for (double s = 75; s <= 600; s += 25) {
             spacings.add(s);
         }
-        java.util.List<barfit.catalogs.BarSize> sizes = java.util.stream.Stream.of("16", "19", "22", "25", "29", "32",
-                "36").map(RandomProblems::bar).toList();
-        SearchSpace space = new SearchSpace(java.util.List.of(250.0, 300.0, 350.0, 400.0), depths, sizes, sizes, 2,
-                java.util.List.of(RandomProblems.bar("10")), java.util.List.of(2, 4), spacings);
-        SectionProblem p = new SectionProblem("P1", new barfit.section.Materials(28, 420, 420, 20, 1.0),
+        java.util.List<barfit.catalogs.BarSize> sizes = java.util.stream.Stream.of(
+                        "16", "19", "22", "25", "29", "32", "36")
+                .map(RandomProblems::bar)
+                .toList();
+        SearchSpace space = new SearchSpace(
+                java.util.List.of(250.0, 300.0, 350.0, 400.0),
+                depths,
+                sizes,
+                sizes,
+                2,
+                java.util.List.of(RandomProblems.bar("10")),
+                java.util.List.of(2, 4),
+                spacings);
+        SectionProblem p = new SectionProblem(
+                "P1",
+                new barfit.section.Materials(28, 420, 420, 20, 1.0),
                 new barfit.section.Detailing(40, RandomProblems.bar("10"), 25, barfit.section.Exposure.INTERIOR),
-                barfit.section.CodeEquations.SI, space, 700e6, 300e3, null, 600.0, null, null, 1.0);
+                barfit.section.CodeEquations.SI,
+                space,
+                700e6,
+                300e3,
+                null,
+                600.0,
+                null,
+                null,
+                1.0);
         DesignOutcome code = designer.design(p, 0);
         DesignOutcome office = designer.design(p.withSpace(space.withBarsPerTwoLegs(4)), 0);
         SectionLayout l = code.best().layout();

@@ -1,9 +1,9 @@
 package barfit.design.section;
 
-import barfit.design.SearchSpace;
 import barfit.catalogs.BarCatalog;
 import barfit.catalogs.BarCatalogs;
 import barfit.catalogs.BarSize;
+import barfit.design.SearchSpace;
 import barfit.section.CodeEquations;
 import barfit.section.Detailing;
 import barfit.section.EndCondition;
@@ -23,8 +23,7 @@ import java.util.TreeSet;
 public final class RandomProblems {
     static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615m").orElseThrow();
 
-    private RandomProblems() {
-    }
+    private RandomProblems() {}
 
     public static BarSize bar(String s) {
         return BARS.find(s).orElseThrow();
@@ -58,15 +57,35 @@ public final class RandomProblems {
         SectionProblem p = small(r);
         List<Double> widths = pick(r, 200, 500, 50, 2 + r.nextInt(3));
         List<Double> depths = pick(r, 300, 1000, 50, 3 + r.nextInt(5));
-        List<BarSize> tension = bars(r, new String[] {"13", "16", "19", "22", "25", "29", "32", "36", "43"}, 2 + r.nextInt(3));
+        List<BarSize> tension =
+                bars(r, new String[] {"13", "16", "19", "22", "25", "29", "32", "36", "43"}, 2 + r.nextInt(3));
         List<BarSize> comp = bars(r, new String[] {"10", "13", "16", "19", "22", "25"}, 1 + r.nextInt(3));
         SearchSpace base = p.space();
-        SearchSpace space = new SearchSpace(widths, depths, tension, comp, 1 + r.nextInt(3), base.stirrupSizes(),
-                base.stirrupLegs(), base.stirrupSpacings()).withBarsPerTwoLegs(base.barsPerTwoLegs());
+        SearchSpace space = new SearchSpace(
+                        widths,
+                        depths,
+                        tension,
+                        comp,
+                        1 + r.nextInt(3),
+                        base.stirrupSizes(),
+                        base.stirrupLegs(),
+                        base.stirrupSpacings())
+                .withBarsPerTwoLegs(base.barsPerTwoLegs());
         CodeEquations code = r.nextInt(3) == 0 ? CodeEquations.INCH_POUND : CodeEquations.SI;
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
-        return new SectionProblem("M", p.materials(), p.detailing(), code, space, p.mu() * (0.5 + 1.5 * r.nextDouble()),
-                p.vu(), p.span(), cap, null, p.flange(), p.costLength());
+        return new SectionProblem(
+                "M",
+                p.materials(),
+                p.detailing(),
+                code,
+                space,
+                p.mu() * (0.5 + 1.5 * r.nextDouble()),
+                p.vu(),
+                p.span(),
+                cap,
+                null,
+                p.flange(),
+                p.costLength());
     }
 
     public static SectionProblem small(Random r) {
@@ -77,7 +96,8 @@ public final class RandomProblems {
         Detailing det = new Detailing(40, bar("10"), 25, exposure);
         List<Double> widths = pick(r, 200, 450, 50, 1 + r.nextInt(2));
         List<Double> depths = pick(r, 300, 950, 50, 2 + r.nextInt(3));
-        List<BarSize> tension = bars(r, new String[] {"13", "16", "19", "22", "25", "29", "32", "36"}, 1 + r.nextInt(3));
+        List<BarSize> tension =
+                bars(r, new String[] {"13", "16", "19", "22", "25", "29", "32", "36"}, 1 + r.nextInt(3));
         List<BarSize> comp = bars(r, new String[] {"13", "16", "19", "25"}, 1 + r.nextInt(2));
         int layers = 1 + r.nextInt(2);
         List<BarSize> stirrupSizes = r.nextInt(4) == 0 ? List.of(bar("10"), bar("13")) : List.of(bar("10"));
@@ -101,7 +121,18 @@ public final class RandomProblems {
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
         // the code's legs rules alone, or with an office's rule of two legs per four bars
         space = space.withBarsPerTwoLegs(r.nextBoolean() ? 0 : 4);
-        return new SectionProblem("R", m, det, CodeEquations.SI, space, mu, vu, span, cap, null, flange,
+        return new SectionProblem(
+                "R",
+                m,
+                det,
+                CodeEquations.SI,
+                space,
+                mu,
+                vu,
+                span,
+                cap,
+                null,
+                flange,
                 span == null ? 1.0 : span.length() / 1000);
     }
 }

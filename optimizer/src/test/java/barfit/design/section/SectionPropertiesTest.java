@@ -1,11 +1,10 @@
 package barfit.design.section;
 
-import barfit.design.CostModel;
-import barfit.design.SolverOptions;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import barfit.units.UnitSystem;
+import barfit.design.CostModel;
+import barfit.design.SolverOptions;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;

@@ -7,7 +7,6 @@ import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SolverOptions;
-import barfit.units.UnitSystem;
 import barfit.section.CodeEquations;
 import java.util.ArrayList;
 import java.util.List;
@@ -45,8 +44,8 @@ class PairTableTest {
                             if (y != x) {
                                 only.add(sizes.get(y));
                             }
-                            SpanProblem q = p.withFixedWidth(b).withSpace(p.space().withDepths(List.of(h))
-                                    .withMainBars(only));
+                            SpanProblem q = p.withFixedWidth(b)
+                                    .withSpace(p.space().withDepths(List.of(h)).withMainBars(only));
                             SpanDesigner.Outcome o = designer.design(q, 0);
                             double table = t.best(allowed);
                             String where = "beam " + i + " " + b + "x" + h + " " + only + ": " + p;
@@ -57,7 +56,10 @@ class PairTableTest {
                             }
                             finite++;
                             // the two sum the same terms in another order: equal to the last unit of 1e-4
-                            assertEquals(o.best().cost().total(), table, 1.5e-4,
+                            assertEquals(
+                                    o.best().cost().total(),
+                                    table,
+                                    1.5e-4,
                                     "table against design " + o.best().layout() + " — " + where);
                         }
                     }

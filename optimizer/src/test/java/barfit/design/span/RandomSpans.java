@@ -18,8 +18,7 @@ import java.util.Random;
 
 /** Seeded random small spans (invented data, for cross-checks only). */
 public final class RandomSpans {
-    private RandomSpans() {
-    }
+    private RandomSpans() {}
 
     public static SpanProblem small(Random r) {
         double fc = new double[] {25, 28, 35}[r.nextInt(3)];
@@ -28,8 +27,15 @@ public final class RandomSpans {
         List<Double> widths = pick(r, 250, 400, 50, 1 + r.nextInt(2));
         List<Double> depths = pick(r, 350, 750, 50, 2 + r.nextInt(2));
         List<BarSize> sizes = bars(r, new String[] {"16", "19", "22", "25", "29"}, 1 + r.nextInt(2));
-        SearchSpace space = new SearchSpace(widths, depths, sizes, sizes, 1 + r.nextInt(2), List.of(bar("10")),
-                r.nextBoolean() ? List.of(2) : List.of(2, 4), pick(r, 100, 300, 50, 2 + r.nextInt(2)));
+        SearchSpace space = new SearchSpace(
+                widths,
+                depths,
+                sizes,
+                sizes,
+                1 + r.nextInt(2),
+                List.of(bar("10")),
+                r.nextBoolean() ? List.of(2) : List.of(2, 4),
+                pick(r, 100, 300, 50, 2 + r.nextInt(2)));
         EndCondition ends = EndCondition.values()[r.nextInt(4)];
         double span = (ends == EndCondition.CANTILEVER ? 1500 + 500 * r.nextInt(4) : 4000 + 1000 * r.nextInt(5));
         double base = 40 + r.nextDouble() * 260;
@@ -59,10 +65,31 @@ public final class RandomSpans {
                 ? new SpanChecks.ServiceLoads(8 + r.nextDouble() * 20, 4 + r.nextDouble() * 15, 0.25 * r.nextInt(2))
                 : null;
         Flange flange = ends != EndCondition.CANTILEVER && r.nextInt(4) == 0
-                ? Flange.given(widths.get(widths.size() - 1) + 500, 120, false, null, span) : null;
+                ? Flange.given(widths.get(widths.size() - 1) + 500, 120, false, null, span)
+                : null;
         Double cap = r.nextInt(3) == 0 ? depths.get(r.nextInt(depths.size())) : null;
-        return new SpanProblem("R", m, det, CodeEquations.SI, space, span, ends, ml, mm, mr, vl, vr, service,
-                SpanChecks.Limits.DEFAULT, cap, null, flange, r.nextInt(3) == 0, r.nextInt(4) == 0 ? 1 : 2,
-                r.nextBoolean() ? 0 : 4); // the code's legs rules alone, or with the office rule of two legs per four bars
+        return new SpanProblem(
+                "R",
+                m,
+                det,
+                CodeEquations.SI,
+                space,
+                span,
+                ends,
+                ml,
+                mm,
+                mr,
+                vl,
+                vr,
+                service,
+                SpanChecks.Limits.DEFAULT,
+                cap,
+                null,
+                flange,
+                r.nextInt(3) == 0,
+                r.nextInt(4) == 0 ? 1 : 2,
+                r.nextBoolean()
+                        ? 0
+                        : 4); // the code's legs rules alone, or with the office rule of two legs per four bars
     }
 }

@@ -33,8 +33,8 @@ import org.junit.jupiter.api.Test;
 class SpanDiagnosisTest {
     private static final UnitSystem US = UnitSystem.US;
     private static final BarCatalog BARS = BarCatalogs.builtIn("astm-a615").orElseThrow();
-    private static final CostModel COST = new CostModel(CostRates.DEFAULTS, US.toSI(1.5, Dim.LENGTH),
-            CodeEquations.INCH_POUND);
+    private static final CostModel COST =
+            new CostModel(CostRates.DEFAULTS, US.toSI(1.5, Dim.LENGTH), CodeEquations.INCH_POUND);
     private final SpanDesigner designer = new SpanDesigner(COST, new SolverOptions(30, 1, 1));
 
     private static BarSize bar(String s) {
@@ -61,25 +61,51 @@ class SpanDiagnosisTest {
      * Table 9.3.1.1 asks for ℓ/16 = 21 in here, so below it deflection is computed from the service loads.
      */
     private static SpanProblem roofBeam(double capIn, double muKipFt) {
-        Materials m = new Materials(US.toSI(4000, Dim.STRESS), US.toSI(60000, Dim.STRESS), US.toSI(60000, Dim.STRESS),
-                in(0.75), 1.0);
+        Materials m = new Materials(
+                US.toSI(4000, Dim.STRESS), US.toSI(60000, Dim.STRESS), US.toSI(60000, Dim.STRESS), in(0.75), 1.0);
         Detailing det = new Detailing(in(1.5), bar("3"), CodeEquations.INCH_POUND.minLayerGap(), Exposure.INTERIOR);
         List<BarSize> sizes = List.of(bar("5"), bar("6"), bar("7"), bar("8"), bar("9"));
-        SearchSpace space = new SearchSpace(inches(12, 16, 2), inches(14, 30, 1), sizes, sizes, 2, List.of(bar("3")),
-                List.of(2, 4), inches(4, 12, 1));
-        SpanChecks.ServiceLoads service = new SpanChecks.ServiceLoads(US.toSI(0.9, Dim.LINE_LOAD),
-                US.toSI(0.9, Dim.LINE_LOAD), 0.5);
+        SearchSpace space = new SearchSpace(
+                inches(12, 16, 2),
+                inches(14, 30, 1),
+                sizes,
+                sizes,
+                2,
+                List.of(bar("3")),
+                List.of(2, 4),
+                inches(4, 12, 1));
+        SpanChecks.ServiceLoads service =
+                new SpanChecks.ServiceLoads(US.toSI(0.9, Dim.LINE_LOAD), US.toSI(0.9, Dim.LINE_LOAD), 0.5);
         double v = US.toSI(22, Dim.FORCE);
-        return new SpanProblem("R-1", m, det, CodeEquations.INCH_POUND, space, US.toSI(28, Dim.SPAN), EndCondition.SIMPLE,
-                null, US.toSI(muKipFt, Dim.MOMENT), null, v, v, service, SpanChecks.Limits.DEFAULT, in(capIn), null, null,
-                false, 2, SearchSpace.DEFAULT_BARS_PER_TWO_LEGS);
+        return new SpanProblem(
+                "R-1",
+                m,
+                det,
+                CodeEquations.INCH_POUND,
+                space,
+                US.toSI(28, Dim.SPAN),
+                EndCondition.SIMPLE,
+                null,
+                US.toSI(muKipFt, Dim.MOMENT),
+                null,
+                v,
+                v,
+                service,
+                SpanChecks.Limits.DEFAULT,
+                in(capIn),
+                null,
+                null,
+                false,
+                2,
+                SearchSpace.DEFAULT_BARS_PER_TWO_LEGS);
     }
 
     /** Whether the span designs with the cap at h, the design passing the section model's every check. */
     private boolean designsAt(SpanProblem p, double h) {
         SpanDesigner.Outcome o = designer.design(p.withMaxDepth(h), 0);
         if (o.feasible()) {
-            assertTrue(SpanVerifier.verify(p.withMaxDepth(h), o.best().layout(), false).ok());
+            assertTrue(SpanVerifier.verify(p.withMaxDepth(h), o.best().layout(), false)
+                    .ok());
         }
         return o.feasible();
     }
@@ -105,7 +131,8 @@ class SpanDiagnosisTest {
         String fix = DiagnosisWords.fixes(d, US).get(0);
         assertTrue(fix.contains(US.compact(deeper.height(), Dim.LENGTH) + " in"), fix);
         assertTrue(deeper.height() > p.maxDepth());
-        assertTrue(SpanVerifier.verify(p.withMaxDepth(deeper.height()), deeper.layout(), false).ok());
+        assertTrue(SpanVerifier.verify(p.withMaxDepth(deeper.height()), deeper.layout(), false)
+                .ok());
         assertTrue(designsAt(p, deeper.height()), "the quoted depth designs");
         assertFalse(designsAt(p, deeper.height() - STEP), "one step below the quoted depth does not");
     }
@@ -114,7 +141,8 @@ class SpanDiagnosisTest {
     void strengthThatFailsIsNotCalledDeflection() {
         // a moment no section within the cap carries, with deflection set aside or not
         SpanProblem p = roofBeam(22, 800);
-        assertFalse(designer.design(p.withLimits(new SpanChecks.Limits(0, 0)), 0).feasible());
+        assertFalse(
+                designer.design(p.withLimits(new SpanChecks.Limits(0, 0)), 0).feasible());
         SpanDesigner.Outcome o = designer.design(p, 0);
         assertFalse(o.feasible());
         SpanDesigner.Diagnosis d = o.diagnosis();
@@ -129,7 +157,8 @@ class SpanDiagnosisTest {
         assertEquals(p.maxDepth(), wider.height(), 1e-9);
         SpanProblem at = p.withSpace(p.space().withDepths(List.of(wider.height())));
         assertTrue(designer.design(at.withFixedWidth(wider.width()), 0).feasible(), "the quoted width designs");
-        assertFalse(designer.design(at.withFixedWidth(wider.width() - in(2)), 0).feasible(),
+        assertFalse(
+                designer.design(at.withFixedWidth(wider.width() - in(2)), 0).feasible(),
                 "one width step narrower does not");
     }
 }

@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SolverOptions;
-import barfit.units.UnitSystem;
 import barfit.section.CodeEquations;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
@@ -31,14 +30,18 @@ class SpanOracleTest {
             SpanDesigner.Outcome got = designer.design(p, 0);
             String where = "beam " + i + ": " + p;
             if (ref.best() == null) {
-                assertTrue(!got.feasible(), "oracle finds nothing, optimizer found "
-                        + (got.best() == null ? "" : got.best().layout()) + " — " + where);
+                assertTrue(
+                        !got.feasible(),
+                        "oracle finds nothing, optimizer found "
+                                + (got.best() == null ? "" : got.best().layout()) + " — " + where);
                 continue;
             }
             feasible++;
             assertTrue(got.feasible(), "optimizer finds nothing, oracle " + ref.best() + " — " + where);
-            assertEquals(ref.units(), CostModel.units(got.best().cost().total()), "cost; oracle " + ref.best()
-                    + " optimizer " + got.best().layout() + " — " + where);
+            assertEquals(
+                    ref.units(),
+                    CostModel.units(got.best().cost().total()),
+                    "cost; oracle " + ref.best() + " optimizer " + got.best().layout() + " — " + where);
         }
         assertTrue(feasible >= instances / 2, "enough feasible beams: " + feasible);
     }

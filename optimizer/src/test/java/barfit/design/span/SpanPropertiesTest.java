@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import barfit.design.CostModel;
 import barfit.design.SolverOptions;
-import barfit.units.UnitSystem;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
 
@@ -62,7 +61,8 @@ class SpanPropertiesTest {
                     main += m.count() * m.length() / 1000 * m.bar().massPerMetre();
                 }
             }
-            double rates = SpanOracleTest.COST.rates().mainBarsPerKg() * SpanOracleTest.COST.rates().lapFactor();
+            double rates = SpanOracleTest.COST.rates().mainBarsPerKg()
+                    * SpanOracleTest.COST.rates().lapFactor();
             assertEquals(o.best().cost().mainBars(), main * rates, 1e-6);
             // and of the stirrups: hoops and crossties, each set as the cost model prices it
             double stirrupKg = 0;
@@ -70,8 +70,10 @@ class SpanPropertiesTest {
             var zones = p.zones();
             for (int z = 0; z < zones.size(); z++) {
                 var st = o.best().layout().zoneStirrups().get(z);
-                setKg += SpanLayout.stirrupSets(zones.get(z).length(), st.spacing()) * SpanOracleTest.COST.stirrupSetLength(
-                        o.best().layout().width(), o.best().layout().height(), st.bar(), st.legs()) / 1000
+                setKg += SpanLayout.stirrupSets(zones.get(z).length(), st.spacing())
+                        * SpanOracleTest.COST.stirrupSetLength(
+                                o.best().layout().width(), o.best().layout().height(), st.bar(), st.legs())
+                        / 1000
                         * st.bar().massPerMetre();
             }
             for (var m : o.best().bars()) {
@@ -80,7 +82,10 @@ class SpanPropertiesTest {
                 }
             }
             assertEquals(setKg, stirrupKg, 1e-6, "the bar list's hoops and crossties weigh what is priced");
-            assertEquals(o.best().cost().stirrups(), stirrupKg * SpanOracleTest.COST.rates().stirrupsPerKg(), 1e-6);
+            assertEquals(
+                    o.best().cost().stirrups(),
+                    stirrupKg * SpanOracleTest.COST.rates().stirrupsPerKg(),
+                    1e-6);
         }
         assertTrue(seen > 20);
         // two were asked of every span; a small space may hold fewer distinct designs, but not across the board

@@ -4,8 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import barfit.catalogs.BarSize;
-import barfit.design.section.RandomProblems;
 import barfit.design.SolverOptions;
+import barfit.design.section.RandomProblems;
 import barfit.section.BeamSection;
 import barfit.section.Bending;
 import barfit.section.CodeEquations;
@@ -19,7 +19,6 @@ import barfit.section.Shear;
 import barfit.section.SpanChecks;
 import barfit.section.Stirrups;
 import barfit.section.trail.Trail;
-import barfit.units.UnitSystem;
 import java.util.List;
 import java.util.Random;
 import org.junit.jupiter.api.Test;
@@ -35,14 +34,41 @@ class SpanRulesTest {
     private static final Materials M = new Materials(28, 420, 420, 20, 1.0);
     private static final Detailing DET = new Detailing(40, RandomProblems.bar("10"), 25, Exposure.INTERIOR);
 
-    private static SpanProblem span(double l, EndCondition ends, Double vl, Double vr, SpanChecks.ServiceLoads service) {
-        var space = new barfit.design.SearchSpace(List.of(300.0), List.of(500.0), List.of(RandomProblems.bar("25")),
-                List.of(RandomProblems.bar("25")), 1, List.of(RandomProblems.bar("10")), List.of(2), List.of(100.0, 200.0));
+    private static SpanProblem span(
+            double l, EndCondition ends, Double vl, Double vr, SpanChecks.ServiceLoads service) {
+        var space = new barfit.design.SearchSpace(
+                List.of(300.0),
+                List.of(500.0),
+                List.of(RandomProblems.bar("25")),
+                List.of(RandomProblems.bar("25")),
+                1,
+                List.of(RandomProblems.bar("10")),
+                List.of(2),
+                List.of(100.0, 200.0));
         Double ml = ends == EndCondition.CANTILEVER || ends == EndCondition.BOTH_ENDS_CONTINUOUS ? -100e6 : null;
         Double mr = ends == EndCondition.BOTH_ENDS_CONTINUOUS ? -100e6 : null;
         Double mm = ends == EndCondition.CANTILEVER ? null : 80e6;
-        return new SpanProblem("Z", M, DET, CodeEquations.SI, space, l, ends, ml, mm, mr, vl, vr, service,
-                SpanChecks.Limits.DEFAULT, null, null, null, false, 2, 0);
+        return new SpanProblem(
+                "Z",
+                M,
+                DET,
+                CodeEquations.SI,
+                space,
+                l,
+                ends,
+                ml,
+                mm,
+                mr,
+                vl,
+                vr,
+                service,
+                SpanChecks.Limits.DEFAULT,
+                null,
+                null,
+                null,
+                false,
+                2,
+                0);
     }
 
     @Test
@@ -68,7 +94,8 @@ class SpanRulesTest {
         // Common practice, no clause: live load on half the span gives 1.6 wL ln / 8 at mid-span, which a
         // full-span line misses. wL = 20 kN/m, ln = 6 m: 1.6 x 20 x 6 / 8 = 24 kN. With Vu = 30 kN at d = 500
         // from each face the line gives only 30 - 60 x 1000 / 5000 = 18 kN at the zone's ends.
-        SpanProblem p = span(6000, EndCondition.BOTH_ENDS_CONTINUOUS, 30e3, 30e3, new SpanChecks.ServiceLoads(15, 20, 0));
+        SpanProblem p =
+                span(6000, EndCondition.BOTH_ENDS_CONTINUOUS, 30e3, 30e3, new SpanChecks.ServiceLoads(15, 20, 0));
         assertEquals(24e3, p.zones().get(1).vu(500), 1e-6);
     }
 
@@ -144,41 +171,51 @@ class SpanRulesTest {
                 demand = Math.max(Math.max(a, b), floor);
             }
             if (demand != null) {
-                double phiVn = Shear.analyse(s, demand, d, fr.tensionSteelArea(), Trail.off()).phiVn();
-                assertTrue(phiVn >= demand * (1 - 1e-9), what + " zone " + z.name() + ": phi Vn " + phiVn + " < " + demand);
+                double phiVn = Shear.analyse(s, demand, d, fr.tensionSteelArea(), Trail.off())
+                        .phiVn();
+                assertTrue(
+                        phiVn >= demand * (1 - 1e-9),
+                        what + " zone " + z.name() + ": phi Vn " + phiVn + " < " + demand);
             }
             // every leg's bend holds a bar of the outer layer of each face (every bar present, counted or not)
             int top = l.topAt(p, z.section()).get(0);
             int bottom = l.bottomCounts().get(0);
-            assertTrue(st.legs() <= Math.min(top, bottom), what + " zone " + z.name() + ": " + st.legs()
-                    + " legs over " + top + " top and " + bottom + " bottom bars");
+            assertTrue(
+                    st.legs() <= Math.min(top, bottom),
+                    what + " zone " + z.name() + ": " + st.legs() + " legs over " + top + " top and " + bottom
+                            + " bottom bars");
             // ties where the compression bars are relied on
             List<barfit.section.BarLayer> tension = s.layers().stream()
-                    .filter(x -> x.face() == bending.tensionFace()).toList();
+                    .filter(x -> x.face() == bending.tensionFace())
+                    .toList();
             List<barfit.section.BarLayer> comp = s.layers().stream()
-                    .filter(x -> x.face() == bending.compressionFace()).toList();
+                    .filter(x -> x.face() == bending.compressionFace())
+                    .toList();
             if (comp.isEmpty()) {
                 continue;
             }
             FlexureResult without = Flexure.analyse(s.withLayers(tension), bending);
             Double mu = SpanLayout.momentAt(p, z.section());
             // compression steel: some of those bars above the neutral axis, and the section failing without them
-            boolean compressed = fr.layers().stream()
-                    .anyMatch(x -> x.layer().face() == bending.compressionFace() && x.strain() < 0);
-            boolean relied = compressed && (without.epsT() < 0.004 * (1 - 1e-9)
-                    || mu != null && Math.abs(mu) > without.phiMn() * (1 + 1e-9));
+            boolean compressed =
+                    fr.layers().stream().anyMatch(x -> x.layer().face() == bending.compressionFace() && x.strain() < 0);
+            boolean relied = compressed
+                    && (without.epsT() < 0.004 * (1 - 1e-9)
+                            || mu != null && Math.abs(mu) > without.phiMn() * (1 + 1e-9));
             if (relied) {
                 ties++;
                 BarSize cb = comp.get(0).bar();
                 int n = comp.get(0).count();
-                double sMax = Math.min(16 * cb.diameter(), Math.min(48 * st.bar().diameter(), Math.min(l.width(),
-                        l.height())));
-                assertTrue(st.spacing() <= sMax + 1e-9, what + " zone " + z.name() + ": ties @ " + st.spacing()
-                        + " > " + sMax);
+                double sMax = Math.min(
+                        16 * cb.diameter(), Math.min(48 * st.bar().diameter(), Math.min(l.width(), l.height())));
+                assertTrue(
+                        st.spacing() <= sMax + 1e-9,
+                        what + " zone " + z.name() + ": ties @ " + st.spacing() + " > " + sMax);
                 double inner = l.width() - 2 * (p.detailing().cover() + st.bar().diameter());
                 double clear = (inner - n * cb.diameter()) / (n - 1);
                 int heldNeeded = clear > 150 ? n : n / 2 + 1;
-                assertTrue(Math.min(st.legs(), n) >= Math.min(heldNeeded, n) && st.legs() >= heldNeeded,
+                assertTrue(
+                        Math.min(st.legs(), n) >= Math.min(heldNeeded, n) && st.legs() >= heldNeeded,
                         what + " zone " + z.name() + ": " + st.legs() + " legs hold " + n + " compression bars");
             }
         }

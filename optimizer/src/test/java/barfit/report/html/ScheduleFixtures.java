@@ -31,8 +31,7 @@ final class ScheduleFixtures {
 
     private static final Map<String, ScheduleResult> CACHE = new LinkedHashMap<>();
 
-    private ScheduleFixtures() {
-    }
+    private ScheduleFixtures() {}
 
     static synchronized ScheduleResult designed(String exampleFile) {
         return CACHE.computeIfAbsent(exampleFile, f -> design(EXAMPLES.resolve(f)));
@@ -51,10 +50,22 @@ final class ScheduleFixtures {
                 beams.add(new ScheduleBeam(b.id(), null, b.location(), Spans.problem(in, b)));
             }
         }
-        ScheduleInput input = new ScheduleInput(List.of(file.getFileName().toString()), in.settings(), in.space(),
-                in.rates(), in.currency(), in.costs(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs(), beams, null);
-        SpanDesigner designer = new SpanDesigner(new CostModel(in.rates(), in.settings().detailing().cover(),
-                in.settings().units().code()),
+        ScheduleInput input = new ScheduleInput(
+                List.of(file.getFileName().toString()),
+                in.settings(),
+                in.space(),
+                in.rates(),
+                in.currency(),
+                in.costs(),
+                in.maxBarSizesPerBeam(),
+                in.barsPerTwoLegs(),
+                beams,
+                null);
+        SpanDesigner designer = new SpanDesigner(
+                new CostModel(
+                        in.rates(),
+                        in.settings().detailing().cover(),
+                        in.settings().units().code()),
                 new SolverOptions(60, 1, 1));
         List<ScheduleResult.Beam> out = new ArrayList<>();
         Map<String, List<String>> sizes = new LinkedHashMap<>();
@@ -67,7 +78,8 @@ final class ScheduleFixtures {
             if (o.feasible()) {
                 SpanLayout l = o.best().layout();
                 total += cost;
-                sizes.computeIfAbsent(l.width() + "x" + l.height(), k -> new ArrayList<>()).add(b.id());
+                sizes.computeIfAbsent(l.width() + "x" + l.height(), k -> new ArrayList<>())
+                        .add(b.id());
                 bars.add(l.bottom().label());
                 bars.add(l.top().label());
             }
@@ -75,8 +87,8 @@ final class ScheduleFixtures {
         List<ScheduleResult.SectionSize> sectionSizes = new ArrayList<>();
         for (var e : sizes.entrySet()) {
             String[] bh = e.getKey().split("x");
-            sectionSizes.add(new ScheduleResult.SectionSize(Double.parseDouble(bh[0]), Double.parseDouble(bh[1]),
-                    e.getValue()));
+            sectionSizes.add(
+                    new ScheduleResult.SectionSize(Double.parseDouble(bh[0]), Double.parseDouble(bh[1]), e.getValue()));
         }
         return new ScheduleResult(input, out, sectionSizes, List.copyOf(bars), total, 0, total, null, List.of(), 1, 0);
     }
@@ -87,14 +99,30 @@ final class ScheduleFixtures {
      */
     static ScheduleResult withRenderingFixtures(ScheduleResult r) {
         double t = r.totalCost();
-        Proof<ScheduleResult.Search> proof = new Proof<>(Proof.Status.OPTIMAL, t, t, 0, Proof.SolverStats.NONE,
+        Proof<ScheduleResult.Search> proof = new Proof<>(
+                Proof.Status.OPTIMAL,
+                t,
+                t,
+                0,
+                Proof.SolverStats.NONE,
                 new ScheduleResult.Search(barfit.schedule.ProofMethod.LINEAR_RELAXATION_INTEGRAL, null, 4, 3, 1, 9, 0),
-                1, 1);
+                1,
+                1);
         List<ScheduleResult.StandardisationPoint> points = List.of(
                 new ScheduleResult.StandardisationPoint(1, t * 1.08, Proof.Status.OPTIMAL, r.barSizes()),
                 new ScheduleResult.StandardisationPoint(2, t * 1.02, Proof.Status.OPTIMAL, r.barSizes()),
                 new ScheduleResult.StandardisationPoint(3, t, Proof.Status.OPTIMAL, r.barSizes()));
-        return new ScheduleResult(r.input(), r.beams(), r.sizes(), r.barSizes(), r.beamsCost(), r.formworkSetsCost(),
-                r.unconstrainedCost(), proof, points, r.threads(), r.millis());
+        return new ScheduleResult(
+                r.input(),
+                r.beams(),
+                r.sizes(),
+                r.barSizes(),
+                r.beamsCost(),
+                r.formworkSetsCost(),
+                r.unconstrainedCost(),
+                proof,
+                points,
+                r.threads(),
+                r.millis());
     }
 }

@@ -82,7 +82,8 @@ class ScheduleHtmlBrowserTest {
         String html = ScheduleHtml.render(r);
         int body = html.indexOf("<body>") + "<body>".length();
         Path page = dir.resolve("report.html");
-        Files.writeString(page, html.substring(0, body) + "\n" + CHECKER + html.substring(body), StandardCharsets.UTF_8);
+        Files.writeString(
+                page, html.substring(0, body) + "\n" + CHECKER + html.substring(body), StandardCharsets.UTF_8);
 
         JsonNode out = new ObjectMapper().readTree(dump(chromium, dir, page));
         assertEquals(0, out.get("errors").size(), "no script error: " + out.get("errors"));
@@ -97,12 +98,16 @@ class ScheduleHtmlBrowserTest {
             assertEquals("beam-" + b.beam().id(), rendered.get("id").asText());
             SpanProblem p = b.outcome().problem();
             SpanLayout l = b.outcome().best().layout();
-            List<SpanProblem.Place> places = new ArrayList<>(b.outcome().best().report().sections().keySet());
-            assertEquals(places.size(), rendered.get("drawings").size(), b.beam().id() + ": one drawing per section");
+            List<SpanProblem.Place> places =
+                    new ArrayList<>(b.outcome().best().report().sections().keySet());
+            assertEquals(
+                    places.size(), rendered.get("drawings").size(), b.beam().id() + ": one drawing per section");
             for (int k = 0; k < places.size(); k++) {
                 JsonNode d = rendered.get("drawings").get(k);
                 assertEquals(places.get(k).name(), d.get("place").asText());
-                assertEquals(SpanLayout.sum(l.topAt(p, places.get(k))) + l.bottomCount(), d.get("bars").asInt(),
+                assertEquals(
+                        SpanLayout.sum(l.topAt(p, places.get(k))) + l.bottomCount(),
+                        d.get("bars").asInt(),
                         b.beam().id() + " " + places.get(k) + ": every bar rendered");
                 assertEquals(1, d.get("diagram").asInt());
                 sections++;
@@ -116,10 +121,20 @@ class ScheduleHtmlBrowserTest {
     private static String dump(Path chromium, Path dir, Path page) throws Exception {
         Path stdout = dir.resolve("dom.html");
         Path stderr = dir.resolve("chromium.log");
-        ProcessBuilder pb = new ProcessBuilder(chromium.toString(), "--headless", "--no-sandbox", "--disable-gpu",
-                "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update",
-                "--disable-sync", "--user-data-dir=" + dir.resolve("profile"), "--virtual-time-budget=5000",
-                "--dump-dom", page.toUri().toString());
+        ProcessBuilder pb = new ProcessBuilder(
+                chromium.toString(),
+                "--headless",
+                "--no-sandbox",
+                "--disable-gpu",
+                "--disable-quic",
+                "--no-first-run",
+                "--disable-background-networking",
+                "--disable-component-update",
+                "--disable-sync",
+                "--user-data-dir=" + dir.resolve("profile"),
+                "--virtual-time-budget=5000",
+                "--dump-dom",
+                page.toUri().toString());
         pb.redirectOutput(stdout.toFile());
         pb.redirectError(stderr.toFile());
         Process proc = pb.start();
@@ -129,10 +144,20 @@ class ScheduleHtmlBrowserTest {
             fail("chromium did not finish within " + TIMEOUT_SECONDS + " s");
         }
         String dom = Files.readString(stdout, StandardCharsets.UTF_8);
-        Matcher m = Pattern.compile("<pre id=\"render-check\">(.*?)</pre>", Pattern.DOTALL).matcher(dom);
-        assertTrue(m.find(), "the checker wrote its result (exit " + proc.exitValue() + "): "
-                + Files.readString(stderr, StandardCharsets.UTF_8).lines().limit(5).toList());
-        return m.group(1).replace("&lt;", "<").replace("&gt;", ">").replace("&quot;", "\"").replace("&amp;", "&");
+        Matcher m = Pattern.compile("<pre id=\"render-check\">(.*?)</pre>", Pattern.DOTALL)
+                .matcher(dom);
+        assertTrue(
+                m.find(),
+                "the checker wrote its result (exit " + proc.exitValue() + "): "
+                        + Files.readString(stderr, StandardCharsets.UTF_8)
+                                .lines()
+                                .limit(5)
+                                .toList());
+        return m.group(1)
+                .replace("&lt;", "<")
+                .replace("&gt;", ">")
+                .replace("&quot;", "\"")
+                .replace("&amp;", "&");
     }
 
     private static Path onPath(String name) {

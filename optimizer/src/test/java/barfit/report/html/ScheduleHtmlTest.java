@@ -63,9 +63,13 @@ class ScheduleHtmlTest {
             SpanProblem p = b.outcome().problem();
             SpanLayout l = b.outcome().best().layout();
             Set<String> scales = new HashSet<>();
-            for (SpanProblem.Place place : b.outcome().best().report().sections().keySet()) {
-                String fig = element(block, "<figure class=\"section-pair\" id=\"" + id + "-"
-                        + place.name().toLowerCase(java.util.Locale.ROOT) + "\"", "</figure>");
+            for (SpanProblem.Place place :
+                    b.outcome().best().report().sections().keySet()) {
+                String fig = element(
+                        block,
+                        "<figure class=\"section-pair\" id=\"" + id + "-"
+                                + place.name().toLowerCase(java.util.Locale.ROOT) + "\"",
+                        "</figure>");
                 Element svg = svg(fig, "section-drawing");
                 double scale = Double.parseDouble(svg.getAttribute("data-px-per-mm"));
                 scales.add(svg.getAttribute("data-px-per-mm"));
@@ -76,13 +80,19 @@ class ScheduleHtmlTest {
                 for (Element c : circles) {
                     BarSize bar = bars.get(c.getAttribute("data-bar"));
                     assertNotNull(bar, "circle names a catalog bar: " + c.getAttribute("data-bar"));
-                    assertEquals(bar.diameter() / 2 * scale, Double.parseDouble(c.getAttribute("r")), 0.001,
+                    assertEquals(
+                            bar.diameter() / 2 * scale,
+                            Double.parseDouble(c.getAttribute("r")),
+                            0.001,
                             "radius is db/2 at the drawing scale");
                 }
                 assertNotNull(svg(fig, "strain-stress"), "the strain and stress diagram sits beside the drawing");
             }
             assertEquals(1, scales.size(), id + ": all sections of a beam share one scale");
-            assertEquals(SectionDrawing.scaleFor(l.shape()), Double.parseDouble(scales.iterator().next()), 1e-9);
+            assertEquals(
+                    SectionDrawing.scaleFor(l.shape()),
+                    Double.parseDouble(scales.iterator().next()),
+                    1e-9);
             int rows = count(element(block, "<table class=\"grid checks\">", "</table>"), "<tr><td>")
                     + count(element(block, "<table class=\"grid checks\">", "</table>"), "<tr class=\"fail\"><td>");
             assertEquals(b.outcome().best().report().all().size(), rows, "every check of the span is listed");
@@ -96,18 +106,24 @@ class ScheduleHtmlTest {
      */
     @Test
     void everyZoneArrangementIsDrawn() throws Exception {
-        ScheduleResult r = ScheduleFixtures.designed(java.nio.file.Path.of("src/test/resources/drawings/end-zone-legs-si.yaml"));
+        ScheduleResult r =
+                ScheduleFixtures.designed(java.nio.file.Path.of("src/test/resources/drawings/end-zone-legs-si.yaml"));
         String page = ScheduleHtml.render(r);
         ScheduleResult.Beam b = r.beams().get(0);
-        List<Integer> legs = b.outcome().best().layout().zoneStirrups().stream().map(s -> s.legs()).toList();
+        List<Integer> legs = b.outcome().best().layout().zoneStirrups().stream()
+                .map(s -> s.legs())
+                .toList();
         assertEquals(List.of(4, 2, 4), legs, "the example's zones: four legs at the ends, two in the middle");
         String mid = element(page, "<figure class=\"section-pair\" id=\"beam-SS-1-mid\"", "</figure>");
         assertEquals(0, ties(svg(mid, "section-drawing")), "mid-span shows the middle zone's two legs");
         String ends = element(page, "<figure class=\"zone-section\" id=\"beam-SS-1-zone-left-right\"", "</figure>");
         Element svg = svg(ends, "section-drawing");
         assertEquals(2, ties(svg), "the end zones' four legs: the hoop and two crossties");
-        assertEquals(b.outcome().best().layout().bottomCount() + b.outcome().best().layout().topContinuous(),
-                circles(svg, "bar").size(), "drawn on the mid-span section's bars");
+        assertEquals(
+                b.outcome().best().layout().bottomCount()
+                        + b.outcome().best().layout().topContinuous(),
+                circles(svg, "bar").size(),
+                "drawn on the mid-span section's bars");
         assertTrue(ends.contains("left and right zones"), ends);
         assertEquals(1, count(page, "<figure class=\"zone-section\""), "the middle zone is not drawn twice");
     }
@@ -126,14 +142,15 @@ class ScheduleHtmlTest {
         for (String line : Caution.LINES) {
             assertTrue(html.contains(Svg.esc(line)), "caution line present: " + line);
         }
-        assertTrue(html.indexOf(Svg.esc(Caution.LINES.get(0))) < html.indexOf("id=\"project\""),
+        assertTrue(
+                html.indexOf(Svg.esc(Caution.LINES.get(0))) < html.indexOf("id=\"project\""),
                 "the caution comes before the data");
     }
 
     @Test
     void fetchesNothing() {
-        Set<String> allowed = Set.of("http://www.w3.org/2000/svg", "http://www.w3.org/1999/xlink",
-                "http://www.w3.org/1999/xhtml");
+        Set<String> allowed =
+                Set.of("http://www.w3.org/2000/svg", "http://www.w3.org/1999/xlink", "http://www.w3.org/1999/xhtml");
         Matcher m = Pattern.compile("https?://[^\"'\\s<>)]*").matcher(html);
         while (m.find()) {
             assertTrue(allowed.contains(m.group()), "only namespace URIs, found " + m.group());
@@ -192,7 +209,9 @@ class ScheduleHtmlTest {
             if (!c.getAttribute("data-face").equals("top")) {
                 continue;
             }
-            if (corner == null || cx(c) < cx(corner) - 1e-9 || Math.abs(cx(c) - cx(corner)) < 1e-9 && cy(c) < cy(corner)) {
+            if (corner == null
+                    || cx(c) < cx(corner) - 1e-9
+                    || Math.abs(cx(c) - cx(corner)) < 1e-9 && cy(c) < cy(corner)) {
                 corner = c;
             }
         }
@@ -200,8 +219,11 @@ class ScheduleHtmlTest {
         assertEquals(ox + inside * s, cx(corner), 0.01, "corner bar x");
         assertEquals(oy + inside * s, cy(corner), 0.01, "corner bar y");
         double right = l.width() - inside;
-        assertTrue(circles(svg, "bar").stream().anyMatch(c -> Math.abs(cx(c) - (ox + right * s)) < 0.01
-                && Math.abs(cy(c) - (oy + inside * s)) < 0.01), "the other corner bar, mirrored");
+        assertTrue(
+                circles(svg, "bar").stream()
+                        .anyMatch(c -> Math.abs(cx(c) - (ox + right * s)) < 0.01
+                                && Math.abs(cy(c) - (oy + inside * s)) < 0.01),
+                "the other corner bar, mirrored");
 
         // the stirrup: a bar of its own diameter along a centreline cover + ds/2 inside the faces
         Element hoop = null;
@@ -217,8 +239,11 @@ class ScheduleHtmlTest {
         // inside bend radius: diameter 4 db for No. 10 to No. 16 stirrups, ACI 318-19 Table 25.3.2 (from memory)
         double inner = 2 * ds;
         double r = inner + ds / 2;
-        assertTrue(hoop.getAttribute("d").startsWith("M" + Svg.px(ox + (cover + ds / 2 + r) * s) + ","
-                + Svg.px(oy + (cover + ds / 2) * s)), "hoop starts where its top-left bend ends: " + hoop.getAttribute("d"));
+        assertTrue(
+                hoop.getAttribute("d")
+                        .startsWith(
+                                "M" + Svg.px(ox + (cover + ds / 2 + r) * s) + "," + Svg.px(oy + (cover + ds / 2) * s)),
+                "hoop starts where its top-left bend ends: " + hoop.getAttribute("d"));
 
         // the second layer sits directly under bars of the first
         List<Double> firstLayerX = new ArrayList<>();
@@ -230,7 +255,8 @@ class ScheduleHtmlTest {
         }
         assertEquals(l.topRight().get(0), firstLayerX.size());
         for (double x : innerLayerX) {
-            assertTrue(firstLayerX.stream().anyMatch(f -> Math.abs(f - x) < 0.01), "inner-layer bar under an outer one");
+            assertTrue(
+                    firstLayerX.stream().anyMatch(f -> Math.abs(f - x) < 0.01), "inner-layer bar under an outer one");
         }
     }
 
@@ -246,28 +272,38 @@ class ScheduleHtmlTest {
         SpanLayout l = o.best().layout();
         SpanReport report = SpanVerifier.verify(harder, l, true);
         assertFalse(report.ok(), "the layout cannot carry 1.5 times its moments");
-        SpanDesigner.Design d = new SpanDesigner.Design(l, o.best().cost(), report, o.best().bars());
-        SpanDesigner.Outcome failing = new SpanDesigner.Outcome(harder, "checked", d, List.of(), o.proof(), List.of(), null);
+        SpanDesigner.Design d =
+                new SpanDesigner.Design(l, o.best().cost(), report, o.best().bars());
+        SpanDesigner.Outcome failing =
+                new SpanDesigner.Outcome(harder, "checked", d, List.of(), o.proof(), List.of(), null);
 
         ScheduleResult.Beam second = result.beams().get(1);
         SpanProblem capped = second.outcome().problem().withMaxDepth(300.0);
-        var designer = new SpanDesigner(new barfit.design.CostModel(result.input().rates(),
-                result.input().settings().detailing().cover(), result.input().settings().units().code()),
+        var designer = new SpanDesigner(
+                new barfit.design.CostModel(
+                        result.input().rates(),
+                        result.input().settings().detailing().cover(),
+                        result.input().settings().units().code()),
                 new barfit.design.SolverOptions(60, 1, 1));
         SpanDesigner.Outcome none = designer.design(capped, 0);
         assertFalse(none.feasible(), "nothing fits under a 300 mm cap when the search starts at 400 mm");
 
         List<ScheduleResult.Beam> beams = List.of(
-                new ScheduleResult.Beam(new ScheduleBeam("F-1", null, first.beam().location(), harder), failing, Double.NaN),
-                new ScheduleResult.Beam(new ScheduleBeam("N-1", "line C", second.beam().location(), capped), none, Double.NaN));
-        ScheduleResult r = new ScheduleResult(result.input(), beams, List.of(), List.of(), 0, 0, 0, null, List.of(), 1, 0);
+                new ScheduleResult.Beam(
+                        new ScheduleBeam("F-1", null, first.beam().location(), harder), failing, Double.NaN),
+                new ScheduleResult.Beam(
+                        new ScheduleBeam("N-1", "line C", second.beam().location(), capped), none, Double.NaN));
+        ScheduleResult r =
+                new ScheduleResult(result.input(), beams, List.of(), List.of(), 0, 0, 0, null, List.of(), 1, 0);
         String page = ScheduleHtml.render(r);
 
         String fails = element(page, "<section class=\"beam\" id=\"beam-F-1\">", "</section>");
         assertEquals(report.failures().size(), count(fails, "<tr class=\"fail\">"), "every failing check is marked");
         String noLayout = element(page, "<section class=\"beam\" id=\"beam-N-1\">", "</section>");
-        assertTrue(noLayout.contains(Svg.esc(barfit.report.DiagnosisWords.summary(none.diagnosis(),
-                result.input().settings().units()))), "the diagnosis is shown");
+        assertTrue(
+                noLayout.contains(Svg.esc(barfit.report.DiagnosisWords.summary(
+                        none.diagnosis(), result.input().settings().units()))),
+                "the diagnosis is shown");
         assertFalse(noLayout.contains("section-drawing"), "no drawing without a design");
         String row = element(page, "<tr class=\"infeasible\">", "</tr>");
         assertTrue(row.contains("No layout in the search space passes"), row);
@@ -289,7 +325,8 @@ class ScheduleHtmlTest {
     static Element svg(String fragment, String cls) throws Exception {
         Matcher m = Pattern.compile("<svg[^>]*>.*?</svg>", Pattern.DOTALL).matcher(fragment);
         while (m.find()) {
-            if (cls == null || m.group().startsWith("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"" + cls + "\"")) {
+            if (cls == null
+                    || m.group().startsWith("<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"" + cls + "\"")) {
                 DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
                 Document doc = f.newDocumentBuilder().parse(new InputSource(new StringReader(m.group())));
                 return doc.getDocumentElement();

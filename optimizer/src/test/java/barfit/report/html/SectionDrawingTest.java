@@ -45,8 +45,7 @@ class SectionDrawingTest {
     /** px: coordinates are written to 0.001 px. */
     private static final double TOL = 0.01;
 
-    private record Bar(String face, double x, double y, double r) {
-    }
+    private record Bar(String face, double x, double y, double r) {}
 
     private record Seg(double x1, double y1, double x2, double y2) {
         /** A leg, not a tail cut to nothing. */
@@ -63,8 +62,7 @@ class SectionDrawingTest {
         }
     }
 
-    private record Drawn(double originX, double scale, List<Bar> bars, List<Seg> legs, List<Seg> tails, double rt) {
-    }
+    private record Drawn(double originX, double scale, List<Bar> bars, List<Seg> legs, List<Seg> tails, double rt) {}
 
     /**
      * Layouts with 4-leg stirrups: 4 + 3 bottom bars at mid-span, 6 + 5 top bars at a support (with the
@@ -74,15 +72,39 @@ class SectionDrawingTest {
     private static List<SectionDrawing.View> views() {
         List<SectionDrawing.View> out = new ArrayList<>();
         Detailing si = new Detailing(40, NO10, 25, Exposure.INTERIOR);
-        out.add(view(SectionShape.rectangular(300, 500), si, Bending.SAGGING,
-                layers(Face.BOTTOM, si, NO16, 4, 3), layers(Face.TOP, si, NO19, 2), false, NO10));
-        out.add(view(SectionShape.rectangular(350, 525), si, Bending.HOGGING,
-                layers(Face.TOP, si, NO19, 6, 5), layers(Face.BOTTOM, si, NO25, 4), true, NO10));
+        out.add(view(
+                SectionShape.rectangular(300, 500),
+                si,
+                Bending.SAGGING,
+                layers(Face.BOTTOM, si, NO16, 4, 3),
+                layers(Face.TOP, si, NO19, 2),
+                false,
+                NO10));
+        out.add(view(
+                SectionShape.rectangular(350, 525),
+                si,
+                Bending.HOGGING,
+                layers(Face.TOP, si, NO19, 6, 5),
+                layers(Face.BOTTOM, si, NO25, 4),
+                true,
+                NO10));
         Detailing us = new Detailing(38.1, NO3, 25.4, Exposure.INTERIOR);
-        out.add(view(SectionShape.rectangular(304.8, 609.6), us, Bending.HOGGING,
-                layers(Face.TOP, us, NO6, 5, 5), layers(Face.BOTTOM, us, NO8, 4), true, NO3));
-        out.add(view(SectionShape.rectangular(304.8, 609.6), us, Bending.SAGGING,
-                layers(Face.BOTTOM, us, NO8, 4), layers(Face.TOP, us, NO6, 5, 4), false, NO3));
+        out.add(view(
+                SectionShape.rectangular(304.8, 609.6),
+                us,
+                Bending.HOGGING,
+                layers(Face.TOP, us, NO6, 5, 5),
+                layers(Face.BOTTOM, us, NO8, 4),
+                true,
+                NO3));
+        out.add(view(
+                SectionShape.rectangular(304.8, 609.6),
+                us,
+                Bending.SAGGING,
+                layers(Face.BOTTOM, us, NO8, 4),
+                layers(Face.TOP, us, NO6, 5, 4),
+                false,
+                NO3));
         return out;
     }
 
@@ -94,21 +116,26 @@ class SectionDrawingTest {
         return BeamSection.stack(face, groups, d);
     }
 
-    private static SectionDrawing.View view(SectionShape shape, Detailing d, Bending bending,
-            List<barfit.section.BarLayer> tension, List<barfit.section.BarLayer> compression, boolean otherUncounted,
+    private static SectionDrawing.View view(
+            SectionShape shape,
+            Detailing d,
+            Bending bending,
+            List<barfit.section.BarLayer> tension,
+            List<barfit.section.BarLayer> compression,
+            boolean otherUncounted,
             BarSize stirrup) {
         List<SectionDrawing.DrawnLayer> drawn = new ArrayList<>();
         tension.forEach(l -> drawn.add(new SectionDrawing.DrawnLayer(l, true)));
         compression.forEach(l -> drawn.add(new SectionDrawing.DrawnLayer(l, !otherUncounted)));
-        return new SectionDrawing.View("test", null, shape, d, bending, drawn, new Stirrups(stirrup, 4, 200), null,
-                null, CodeEquations.SI);
+        return new SectionDrawing.View(
+                "test", null, shape, d, bending, drawn, new Stirrups(stirrup, 4, 200), null, null, CodeEquations.SI);
     }
 
     private static Drawn draw(SectionDrawing.View v) throws Exception {
         double scale = SectionDrawing.scaleFor(v.shape());
         String svg = SectionDrawing.svg(v, scale, UnitSystem.SI);
-        Document doc = DocumentBuilderFactory.newInstance().newDocumentBuilder()
-                .parse(new InputSource(new StringReader(svg)));
+        Document doc =
+                DocumentBuilderFactory.newInstance().newDocumentBuilder().parse(new InputSource(new StringReader(svg)));
         Element root = doc.getDocumentElement();
         List<Bar> bars = new ArrayList<>();
         NodeList circles = doc.getElementsByTagName("circle");
@@ -152,7 +179,7 @@ class SectionDrawingTest {
         }
         double x = 0;
         double y = 0;
-        for (int i = 0; i < t.size();) {
+        for (int i = 0; i < t.size(); ) {
             String c = t.get(i);
             if (c.equals("M")) {
                 x = Double.parseDouble(t.get(i + 1));
@@ -187,7 +214,8 @@ class SectionDrawingTest {
             double centre = dr.originX() + v.shape().width() * dr.scale() / 2;
             Map<String, List<Double>> rows = new TreeMap<>();
             for (Bar b : dr.bars()) {
-                rows.computeIfAbsent(b.face() + "@" + b.y(), k -> new ArrayList<>()).add(b.x());
+                rows.computeIfAbsent(b.face() + "@" + b.y(), k -> new ArrayList<>())
+                        .add(b.x());
             }
             assertEquals(v.layers().size(), rows.size(), "one row of circles per layer");
             for (Map.Entry<String, List<Double>> row : rows.entrySet()) {
@@ -197,7 +225,10 @@ class SectionDrawingTest {
                 double step = (xs.get(n - 1) - xs.get(0)) / (n - 1);
                 for (int i = 0; i < n; i++) {
                     assertEquals(xs.get(0) + i * step, xs.get(i), TOL, row.getKey() + ": bar " + i + " evenly spaced");
-                    assertEquals(centre - xs.get(i), xs.get(n - 1 - i) - centre, TOL,
+                    assertEquals(
+                            centre - xs.get(i),
+                            xs.get(n - 1 - i) - centre,
+                            TOL,
                             row.getKey() + ": bar " + i + " mirrored about the centre line");
                 }
             }
@@ -215,22 +246,34 @@ class SectionDrawingTest {
             Drawn dr = draw(v);
             assertEquals(2, dr.legs().size(), "a 4-leg stirrup has two crosstie legs");
             String top = Face.TOP.word();
-            double topOuter = dr.bars().stream().filter(b -> b.face().equals(top)).mapToDouble(Bar::y).min().orElseThrow();
-            double bottomOuter = dr.bars().stream().filter(b -> !b.face().equals(top)).mapToDouble(Bar::y).max()
+            double topOuter = dr.bars().stream()
+                    .filter(b -> b.face().equals(top))
+                    .mapToDouble(Bar::y)
+                    .min()
+                    .orElseThrow();
+            double bottomOuter = dr.bars().stream()
+                    .filter(b -> !b.face().equals(top))
+                    .mapToDouble(Bar::y)
+                    .max()
                     .orElseThrow();
             for (Seg leg : dr.legs()) {
                 boolean wraps = false;
                 for (Bar b : dr.bars()) {
                     double dist = leg.distance(b.x(), b.y());
-                    assertTrue(dist >= b.r() + dr.rt() - TOL, "leg at x = " + leg.x1() + " overlaps the bar at "
-                            + b.x() + "," + b.y() + " (distance " + dist + ")");
+                    assertTrue(
+                            dist >= b.r() + dr.rt() - TOL,
+                            "leg at x = " + leg.x1() + " overlaps the bar at " + b.x() + "," + b.y() + " (distance "
+                                    + dist + ")");
                     boolean outer = Math.abs(b.y() - (b.face().equals(top) ? topOuter : bottomOuter)) < TOL;
                     wraps |= outer && Math.abs(dist - (b.r() + dr.rt())) < TOL;
                 }
                 assertTrue(wraps, "leg at x = " + leg.x1() + " touches a bar of an outer layer");
             }
             double centre = dr.originX() + v.shape().width() * dr.scale() / 2;
-            assertEquals(centre - dr.legs().get(0).x1(), dr.legs().get(1).x1() - centre, TOL,
+            assertEquals(
+                    centre - dr.legs().get(0).x1(),
+                    dr.legs().get(1).x1() - centre,
+                    TOL,
                     "the two legs mirror each other");
         }
     }
@@ -254,11 +297,14 @@ class SectionDrawingTest {
                     double d = s.distance(b.x(), b.y());
                     assertTrue(d >= b.r() + dr.rt() - TOL, "tail " + s + " cuts the bar at " + b.x() + "," + b.y());
                     // the tail's own bar: one end of the straight piece leaves it (a path may draw either way)
-                    boolean wrapped = Math.min(Math.hypot(s.x1() - b.x(), s.y1() - b.y()),
-                            Math.hypot(s.x2() - b.x(), s.y2() - b.y())) <= b.r() + dr.rt() + TOL;
+                    boolean wrapped = Math.min(
+                                    Math.hypot(s.x1() - b.x(), s.y1() - b.y()),
+                                    Math.hypot(s.x2() - b.x(), s.y2() - b.y()))
+                            <= b.r() + dr.rt() + TOL;
                     boolean runs = Math.hypot(s.x2() - s.x1(), s.y2() - s.y1()) > TOL;
-                    assertTrue(wrapped || !runs || d >= b.r() + dr.rt() + gap - TOL, "tail " + s + " touches the bar at "
-                            + b.x() + "," + b.y() + " (distance " + d + ")");
+                    assertTrue(
+                            wrapped || !runs || d >= b.r() + dr.rt() + gap - TOL,
+                            "tail " + s + " touches the bar at " + b.x() + "," + b.y() + " (distance " + d + ")");
                 }
             }
         }
@@ -274,7 +320,8 @@ class SectionDrawingTest {
     void theHoopClosesWhereItsHooksRunTheirFullLength() throws Exception {
         SectionDrawing.View v = hoggingTwoLayers(2);
         String svg = SectionDrawing.svg(v, SectionDrawing.scaleFor(v.shape()), UnitSystem.SI);
-        Matcher m = Pattern.compile("<path class=\"stirrup hook\" data-corner=\"([a-z-]+)\"").matcher(svg);
+        Matcher m = Pattern.compile("<path class=\"stirrup hook\" data-corner=\"([a-z-]+)\"")
+                .matcher(svg);
         assertTrue(m.find(), "the hoop's hooks are drawn");
         assertTrue(m.group(1).startsWith("bottom"), "closed at " + m.group(1));
         Drawn dr = draw(v);
@@ -290,7 +337,16 @@ class SectionDrawingTest {
         List<SectionDrawing.DrawnLayer> drawn = new ArrayList<>();
         layers(Face.TOP, si, NO16, 6, 6).forEach(l -> drawn.add(new SectionDrawing.DrawnLayer(l, true)));
         layers(Face.BOTTOM, si, NO25, 3).forEach(l -> drawn.add(new SectionDrawing.DrawnLayer(l, false)));
-        return new SectionDrawing.View("test", null, SectionShape.rectangular(350, 525), si, Bending.HOGGING, drawn,
-                new Stirrups(NO10, legs, 150), null, null, CodeEquations.SI);
+        return new SectionDrawing.View(
+                "test",
+                null,
+                SectionShape.rectangular(350, 525),
+                si,
+                Bending.HOGGING,
+                drawn,
+                new Stirrups(NO10, legs, 150),
+                null,
+                null,
+                CodeEquations.SI);
     }
 }

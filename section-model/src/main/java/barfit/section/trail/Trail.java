@@ -12,11 +12,9 @@ import java.util.List;
  */
 public final class Trail {
     /** One entry of the trail. */
-    public sealed interface Entry permits Heading, Step, Note {
-    }
+    public sealed interface Entry permits Heading, Step, Note {}
 
-    public record Heading(String title, String clause) implements Entry {
-    }
+    public record Heading(String title, String clause) implements Entry {}
 
     /**
      * {@code symbol = formula = substitution = result}; {@code args} fill the {@code {}} of the
@@ -29,8 +27,7 @@ public final class Trail {
         }
     }
 
-    public record Note(String text) implements Entry {
-    }
+    public record Note(String text) implements Entry {}
 
     private static final Trail OFF = new Trail(false);
 
