@@ -1,6 +1,5 @@
 package barfit.report.html;
 
-import barfit.catalogs.BarSize;
 import barfit.design.CostRates;
 import barfit.design.Proof;
 import barfit.design.SearchSpace;
@@ -57,14 +56,14 @@ public final class ScheduleHtml {
         out.append("<title>")
                 .append(Svg.esc(title))
                 .append("</title>\n<style>\n")
-                .append(CSS)
+                .append(Html.CSS)
                 .append("</style>\n</head>\n<body>\n");
         out.append("<header>\n<h1>")
                 .append(Svg.esc(title))
                 .append("</h1>\n<p class=\"sub\">barfit schedule report · ")
                 .append(Svg.esc(s.code().edition()))
                 .append(" · ")
-                .append(unitsWords(u))
+                .append(Html.unitsWords(u))
                 .append("</p>\n</header>\n");
         caution(out);
         contents(r, out);
@@ -136,45 +135,45 @@ public final class ScheduleHtml {
         SearchSpace space = input.space();
         out.append("<section id=\"project\">\n<h2>Project data and assumptions</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Code, materials, detailing</caption>\n");
-        kv(out, "code", settings.code().edition() + ", nonprestressed beams");
-        kv(out, "units", unitsWords(u));
-        kv(
+        Html.kv(out, "code", settings.code().edition() + ", nonprestressed beams");
+        Html.kv(out, "units", Html.unitsWords(u));
+        Html.kv(
                 out,
                 "concrete",
                 "f'c = " + u.withUnit(materials.fc(), Dim.STRESS) + ", λ = "
                         + u.compact(materials.lambda(), Dim.NUMBER)
-                        + ", aggregate " + len(materials.aggregate(), u));
-        kv(
+                        + ", aggregate " + Html.len(materials.aggregate(), u));
+        Html.kv(
                 out,
                 "steel",
                 "fy = " + u.withUnit(materials.fy(), Dim.STRESS) + " (longitudinal), fyt = "
                         + u.withUnit(materials.fyt(), Dim.STRESS)
                         + " (stirrups), Es = " + u.compact(settings.code().es(), Dim.STRESS) + " "
                         + u.unit(Dim.STRESS));
-        kv(
+        Html.kv(
                 out,
                 "bar catalog",
                 settings.catalog().id() + ": " + settings.catalog().title() + " ("
                         + settings.catalog().source() + ")");
-        kv(
+        Html.kv(
                 out,
                 "cover",
-                len(detailing.cover(), u) + " clear to the stirrups, exposure "
+                Html.len(detailing.cover(), u) + " clear to the stirrups, exposure "
                         + detailing.exposure().key() + " (20.5.1.3)");
-        kv(out, "layer gap", len(detailing.layerGap(), u) + " clear between layers (25.2.2)");
-        kv(
+        Html.kv(out, "layer gap", Html.len(detailing.layerGap(), u) + " clear between layers (25.2.2)");
+        Html.kv(
                 out,
                 "stirrups",
-                "sizes " + labels(space.stirrupSizes()) + "; legs " + joinInts(space.stirrupLegs()) + "; spacing "
-                        + range(space.stirrupSpacings(), u));
+                "sizes " + Html.labels(space.stirrupSizes()) + "; legs " + Html.joinInts(space.stirrupLegs())
+                        + "; spacing " + Html.range(space.stirrupSpacings(), u));
         out.append("</table>\n");
         out.append("<table class=\"kv\">\n<caption>Search space</caption>\n");
-        kv(out, "widths", lengths(space.widths(), u));
-        kv(out, "depths", range(space.depths(), u));
-        kv(out, "bar sizes", labels(space.barSizes()));
-        kv(out, "compression bar sizes", labels(space.compressionSizes()));
-        kv(out, "layers of bars", "1 to " + space.maxLayers() + " on the tension face");
-        kv(out, "bar sizes per beam", "at most " + input.maxBarSizesPerBeam());
+        Html.kv(out, "widths", Html.lengths(space.widths(), u));
+        Html.kv(out, "depths", Html.range(space.depths(), u));
+        Html.kv(out, "bar sizes", Html.labels(space.barSizes()));
+        Html.kv(out, "compression bar sizes", Html.labels(space.compressionSizes()));
+        Html.kv(out, "layers of bars", "1 to " + space.maxLayers() + " on the tension face");
+        Html.kv(out, "bar sizes per beam", "at most " + input.maxBarSizesPerBeam());
         out.append("</table>\n");
         out.append("<table class=\"kv\">\n<caption>Cost rates")
                 .append(input.currency().isEmpty() ? "" : " (" + Svg.esc(input.currency()) + ")")
@@ -183,7 +182,7 @@ public final class ScheduleHtml {
         out.append("</table>\n</div>\n");
 
         out.append("<h3>Rules of thumb the design uses</h3>\n<ul class=\"rules\">\n");
-        li(
+        Html.li(
                 out,
                 "Stirrup legs: no more legs than bars in the outer layer of either face, so that every leg's bend "
                         + "holds a bar (25.7.1.2, 25.7.1.3); legs beyond two are crossties; where compression bars are relied "
@@ -194,34 +193,34 @@ public final class ScheduleHtml {
                                         + ", and so on (no clause)"
                                 : "")
                         + ".");
-        li(
+        Html.li(
                 out,
                 "Stirrup zones: from the shear line of a uniformly loaded span through the given shears at d from "
                         + "the faces; the middle zone takes the line's largest shear over its length (and at least "
                         + "1.6 wL ℓ / 8 where service loads are given).");
-        li(
+        Html.li(
                 out,
                 "Top bars: two or more bars run the full span; the extra bars at a continuous support run past the "
                         + "face the larger of 0.3 × span and the development length of 25.4.2.4 (top bars, Ktr = 0), "
                         + "never cut short of it.");
-        li(
+        Html.li(
                 out,
                 "At most " + input.maxBarSizesPerBeam()
                         + " longitudinal bar sizes per beam; bottom bars of one size run the " + "full span.");
-        li(
+        Html.li(
                 out,
                 "Main-bar mass is multiplied by the lap factor "
                         + u.compact(input.rates().lapFactor(), Dim.NUMBER) + " for laps and waste.");
-        li(
+        Html.li(
                 out,
                 "Skin bars of the smallest bar size at the 24.3.2 spacing where h > "
                         + (u == UnitSystem.US ? "36 in" : "900 mm") + " (9.7.2.3), priced as main bars.");
-        li(
+        Html.li(
                 out,
                 "Stirrup zones follow the shear envelope of a uniformly loaded span: each support zone runs to where "
                         + "the shear has fallen to half its end value.");
-        li(out, "Deflection is computed (24.2) only where h is below the minimum of Table 9.3.1.1.");
-        li(
+        Html.li(out, "Deflection is computed (24.2) only where h is below the minimum of Table 9.3.1.1.");
+        Html.li(
                 out,
                 "Bars are drawn where the checks place them: corner bars at cover + stirrup + d_b/2 from each face, "
                         + "the rest evenly between. Where the stirrup's bend radius (Table 25.3.2) is larger than the bar's, a "
@@ -234,29 +233,29 @@ public final class ScheduleHtml {
             out.append("<p>None: each beam is designed at its own optimum.</p>\n");
         } else {
             out.append("<table class=\"kv\">\n");
-            kv(
+            Html.kv(
                     out,
                     "section sizes",
                     rationalise.maxSectionSizes() == null
                             ? "no limit"
                             : "at most " + rationalise.maxSectionSizes() + " distinct b × h over the schedule");
-            kv(
+            Html.kv(
                     out,
                     "bar sizes",
                     rationalise.maxBarSizes() == null
                             ? "no limit"
                             : "at most " + rationalise.maxBarSizes()
                                     + " distinct longitudinal bar sizes over the schedule");
-            kv(
+            Html.kv(
                     out,
                     "groups",
                     rationalise.groupsSameSection()
                             ? "beams of one group share b × h"
                             : "groups do not constrain b × h");
-            kv(
+            Html.kv(
                     out,
                     "formwork set",
-                    money(rationalise.formworkSetCost(), input.currency()) + " per distinct section size");
+                    Html.money(rationalise.formworkSetCost(), input.currency()) + " per distinct section size");
             out.append("</table>\n");
         }
         out.append("</section>\n");
@@ -268,32 +267,32 @@ public final class ScheduleHtml {
         double m3PerCubicYard = 0.764554857984;
         double kgPerPound = 0.45359237;
         double m2PerSquareFoot = 0.3048 * 0.3048;
-        kv(
+        Html.kv(
                 out,
                 "concrete",
-                amount(inchPound ? rates.concretePerM3() * m3PerCubicYard : rates.concretePerM3())
+                Html.amount(inchPound ? rates.concretePerM3() * m3PerCubicYard : rates.concretePerM3())
                         + (inchPound ? " per yd³" : " per m³"));
-        kv(
+        Html.kv(
                 out,
                 "main bars",
-                amount(inchPound ? rates.mainBarsPerKg() * kgPerPound : rates.mainBarsPerKg())
+                Html.amount(inchPound ? rates.mainBarsPerKg() * kgPerPound : rates.mainBarsPerKg())
                         + (inchPound ? " per lb" : " per kg"));
-        kv(
+        Html.kv(
                 out,
                 "stirrups",
-                amount(inchPound ? rates.stirrupsPerKg() * kgPerPound : rates.stirrupsPerKg())
+                Html.amount(inchPound ? rates.stirrupsPerKg() * kgPerPound : rates.stirrupsPerKg())
                         + (inchPound ? " per lb" : " per kg"));
-        kv(
+        Html.kv(
                 out,
                 "formwork",
-                amount(inchPound ? rates.formworkPerM2() * m2PerSquareFoot : rates.formworkPerM2())
+                Html.amount(inchPound ? rates.formworkPerM2() * m2PerSquareFoot : rates.formworkPerM2())
                         + (inchPound ? " per ft²" : " per m²") + " of contact");
-        kv(
+        Html.kv(
                 out,
                 "depth premium",
-                amount(inchPound ? rates.depthPremiumPerM() * m2PerSquareFoot : rates.depthPremiumPerM())
+                Html.amount(inchPound ? rates.depthPremiumPerM() * m2PerSquareFoot : rates.depthPremiumPerM())
                         + (inchPound ? " per ft of depth per ft of beam" : " per m of depth per m of beam"));
-        kv(out, "lap factor", u.compact(rates.lapFactor(), Dim.NUMBER) + " on main-bar mass");
+        Html.kv(out, "lap factor", u.compact(rates.lapFactor(), Dim.NUMBER) + " on main-bar mass");
     }
 
     // ---------------------------------------------------------------- schedule table
@@ -338,7 +337,7 @@ public final class ScheduleHtml {
                 out.append("<td colspan=\"")
                         .append(own ? 9 : 8)
                         .append("\">")
-                        .append(Svg.esc(headline(d)))
+                        .append(Svg.esc(Html.headline(d)))
                         .append(" — ")
                         .append(Svg.esc(diagnosis(d, u)))
                         .append("</td></tr>\n");
@@ -363,10 +362,10 @@ public final class ScheduleHtml {
             } else {
                 out.append("<td>").append(Svg.esc(row.top())).append("</td>");
                 out.append("<td>")
-                        .append(row.left() != null ? Svg.esc(topAtSupport(row.left(), u)) : "—")
+                        .append(row.left() != null ? Svg.esc(Html.topAtSupport(row.left(), u)) : "—")
                         .append("</td>");
                 out.append("<td>")
-                        .append(row.right() != null ? Svg.esc(topAtSupport(row.right(), u)) : "—")
+                        .append(row.right() != null ? Svg.esc(Html.topAtSupport(row.right(), u)) : "—")
                         .append("</td>");
             }
             out.append("<td class=\"lines\">");
@@ -404,19 +403,6 @@ public final class ScheduleHtml {
                         + "is in the beam's own section below).</p>\n</section>\n");
     }
 
-    /** The HTML's words for the top bars at a support: "4 No. 25; 2 extra, 2.100 m past the face". */
-    private static String topAtSupport(ScheduleRows.SupportTop at, UnitSystem u) {
-        return at.bars()
-                + (at.extra() > 0 ? "; " + at.extra() + " extra, " + span(at.extension(), u) + " past the face" : "");
-    }
-
-    /** What failed: the beam on its own, or its group's need to share one section size. */
-    private static String headline(SpanDesigner.Diagnosis d) {
-        return d.limit().equals("group")
-                ? "No section size fits every beam of its group"
-                : "No layout in the search space passes";
-    }
-
     private static String diagnosis(SpanDesigner.Diagnosis d, UnitSystem u) {
         List<String> fixes = DiagnosisWords.fixes(d, u);
         return "binding limit: " + d.limit() + " (" + DiagnosisWords.summary(d, u) + ")"
@@ -434,20 +420,26 @@ public final class ScheduleHtml {
         String currency = r.input().currency();
         out.append("<section id=\"rationalisation\">\n<h2>Rationalisation and its proof</h2>\n<div class=\"cols\">\n");
         out.append("<table class=\"kv\">\n<caption>Proof</caption>\n");
-        kv(out, "method", ScheduleWords.method(r));
-        kv(out, "status", proof.status().name());
+        Html.kv(out, "method", ScheduleWords.method(r));
+        Html.kv(out, "status", proof.status().name());
         boolean noSchedule = !proof.bounded();
-        kv(out, "objective", noSchedule ? "— (no schedule meets the limits)" : money(proof.objective(), currency));
-        kv(out, "best bound", noSchedule ? "—" : money(proof.bound(), currency));
-        kv(out, "gap", noSchedule ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * proof.gap()));
-        kv(
+        Html.kv(
+                out,
+                "objective",
+                noSchedule ? "— (no schedule meets the limits)" : Html.money(proof.objective(), currency));
+        Html.kv(out, "best bound", noSchedule ? "—" : Html.money(proof.bound(), currency));
+        Html.kv(out, "gap", noSchedule ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * proof.gap()));
+        Html.kv(
                 out,
                 "bar-size sets",
                 search.barSetsTotal() + " considered, " + search.barSetsSolved() + " solved, " + search.barSetsPruned()
                         + " pruned by the cost bound");
-        kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly");
+        Html.kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly");
         // measured times are left out so that the same result always gives the same page
-        kv(out, "CP-SAT", proof.workers() + (proof.workers() == 1 ? " worker" : " workers") + ", seed " + proof.seed());
+        Html.kv(
+                out,
+                "CP-SAT",
+                proof.workers() + (proof.workers() == 1 ? " worker" : " workers") + ", seed " + proof.seed());
         out.append("</table>\n");
         out.append("<table class=\"grid\">\n<caption>Section sizes used</caption>\n<thead><tr><th>b × h (")
                 .append(u.unit(Dim.LENGTH))
@@ -462,7 +454,7 @@ public final class ScheduleHtml {
                     .append("</td></tr>\n");
         }
         out.append("</tbody>\n</table>\n</div>\n<p>Bar sizes used: ")
-                .append(Svg.esc(r.barSizes().isEmpty() ? "none" : labels(r, r.barSizes())))
+                .append(Svg.esc(r.barSizes().isEmpty() ? "none" : Html.labels(r, r.barSizes())))
                 .append(".</p>\n</section>\n");
     }
 
@@ -471,26 +463,26 @@ public final class ScheduleHtml {
     private static void costs(ScheduleResult r, StringBuilder out) {
         String currency = r.input().currency();
         out.append("<section id=\"costs\">\n<h2>Cost summary</h2>\n<table class=\"kv money\">\n");
-        kv(out, "beams", money(r.beamsCost(), currency));
+        Html.kv(out, "beams", Html.money(r.beamsCost(), currency));
         String sets = r.input().rationalise() == null
                 ? ""
                 : " (" + r.sizes().size() + " section " + (r.sizes().size() == 1 ? "size" : "sizes") + ")";
-        kv(out, "formwork sets" + sets, money(r.formworkSetsCost(), currency));
-        kvStrong(out, "total", money(r.totalCost(), currency));
+        Html.kv(out, "formwork sets" + sets, Html.money(r.formworkSetsCost(), currency));
+        Html.kvStrong(out, "total", Html.money(r.totalCost(), currency));
         boolean formsPerSize =
                 r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
         if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
-            kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
+            Html.kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
         } else {
-            kv(
+            Html.kv(
                     out,
                     "every beam at its own optimum" + (formsPerSize ? " (a set of forms per size)" : ""),
-                    money(r.unconstrainedCost(), currency));
+                    Html.money(r.unconstrainedCost(), currency));
             double difference = r.totalCost() - r.unconstrainedCost();
             String percent = r.unconstrainedCost() > 0
                     ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * difference / r.unconstrainedCost())
                     : "";
-            kv(out, "difference", (difference >= 0 ? "+" : "") + money(difference, currency) + percent);
+            Html.kv(out, "difference", (difference >= 0 ? "+" : "") + Html.money(difference, currency) + percent);
         }
         out.append("</table>\n");
         long withoutDesign = r.beams().stream().filter(b -> !b.feasible()).count();
@@ -529,7 +521,7 @@ public final class ScheduleHtml {
                     .append("</td><td>")
                     .append(Svg.esc(point.status().name()))
                     .append("</td><td>")
-                    .append(Svg.esc(labels(r, point.barSizes())))
+                    .append(Svg.esc(Html.labels(r, point.barSizes())))
                     .append("</td></tr>\n");
             previous = point.cost();
         }
@@ -557,25 +549,25 @@ public final class ScheduleHtml {
                 .append("</span></h3>\n");
         out.append("<div class=\"cols\">\n<table class=\"kv\">\n<caption>Data</caption>\n");
         if (b.beam().group() != null) {
-            kv(out, "group", b.beam().group());
+            Html.kv(out, "group", b.beam().group());
         }
-        kv(out, "span", span(p.span(), u) + " clear, " + p.ends().words());
+        Html.kv(out, "span", Html.span(p.span(), u) + " clear, " + p.ends().words());
         if (p.maxDepth() != null) {
-            kv(out, "headroom cap", "h ≤ " + len(p.maxDepth(), u));
+            Html.kv(out, "headroom cap", "h ≤ " + Html.len(p.maxDepth(), u));
         }
         if (p.fixedWidth() != null) {
-            kv(out, "width", "fixed at " + len(p.fixedWidth(), u));
+            Html.kv(out, "width", "fixed at " + Html.len(p.fixedWidth(), u));
         }
         if (p.flange() != null) {
-            kv(
+            Html.kv(
                     out,
                     "flange",
-                    "b_f = " + len(p.flange().given(), u) + " given, h_f = "
-                            + len(p.flange().thickness(), u)
+                    "b_f = " + Html.len(p.flange().given(), u) + " given, h_f = "
+                            + Html.len(p.flange().thickness(), u)
                             + (p.flange().oneSided() ? " (one side)" : "")
                             + (p.flange().webGapKnown()
                                     ? ", clear to the next web "
-                                            + len(p.flange().clearToNextWeb(), u)
+                                            + Html.len(p.flange().clearToNextWeb(), u)
                                     : ", clear distance to the next web not given (sw/2 limit not checked)")
                             + "; taken at most at the effective width of Table 6.3.2.1, "
                             + (p.cantilever()
@@ -583,10 +575,10 @@ public final class ScheduleHtml {
                                             + "checks)"
                                     : "counted at mid-span only"));
         }
-        kv(out, "Mu", moments(p, u));
-        kv(out, "Vu at d from the faces", shears(p, u));
+        Html.kv(out, "Mu", moments(p, u));
+        Html.kv(out, "Vu at d from the faces", shears(p, u));
         if (p.service() != null) {
-            kv(
+            Html.kv(
                     out,
                     "service loads",
                     "D = " + u.withUnit(p.service().dead(), Dim.LINE_LOAD) + ", L = "
@@ -594,13 +586,13 @@ public final class ScheduleHtml {
                             + (p.service().sustainedLive() > 0
                                     ? ", sustained " + u.compact(p.service().sustainedLive(), Dim.NUMBER) + " of L"
                                     : ""));
-            kv(
+            Html.kv(
                     out,
                     "deflection limits",
-                    "live ℓ/" + plain(p.limits().live()) + ", long-term + live ℓ/"
-                            + plain(p.limits().total()));
+                    "live ℓ/" + Html.plain(p.limits().live()) + ", long-term + live ℓ/"
+                            + Html.plain(p.limits().total()));
         }
-        kv(
+        Html.kv(
                 out,
                 "bottom bars at supports",
                 p.bottomAnchored() ? "anchored: compression steel there" : "not anchored: not counted there");
@@ -608,7 +600,7 @@ public final class ScheduleHtml {
         if (!o.feasible()) {
             SpanDesigner.Diagnosis d = o.diagnosis();
             out.append("</div>\n<div class=\"diagnosis\">\n<p><strong>")
-                    .append(Svg.esc(headline(d)))
+                    .append(Svg.esc(Html.headline(d)))
                     .append(".</strong></p>\n")
                     .append("<p>Binding limit: ")
                     .append(Svg.esc(d.limit()))
@@ -627,17 +619,17 @@ public final class ScheduleHtml {
         SpanDesigner.Design d = o.best();
         SpanLayout l = d.layout();
         out.append("<table class=\"kv\">\n<caption>Design</caption>\n");
-        kv(out, "section", Words.shape(l.shape(), u));
-        kv(out, "bottom", ScheduleRows.bars(l.bottomCounts(), l.bottom()) + ", full span");
+        Html.kv(out, "section", Words.shape(l.shape(), u));
+        Html.kv(out, "bottom", ScheduleRows.bars(l.bottomCounts(), l.bottom()) + ", full span");
         if (p.cantilever()) {
-            kv(
+            Html.kv(
                     out,
                     "top",
                     ScheduleRows.bars(l.topLeft(), l.top()) + ", full length and "
                             + u.withUnit(l.extLeft() - p.span(), Dim.SPAN)
                             + " past the support face (ld of 25.4.2.4, anchorage into the back span)");
         } else {
-            kv(
+            Html.kv(
                     out,
                     "top continuous",
                     l.topContinuous() + " " + l.top().label() + ", full span" + SpanText.topAtMid(d, u));
@@ -647,27 +639,27 @@ public final class ScheduleHtml {
                     + ")";
             if (p.leftSupport()) {
                 boolean extra = SpanLayout.sum(l.topLeft()) > l.topContinuous();
-                kv(out, "top at left support", topAtSupport(row.left(), u) + (extra ? rule : ""));
+                Html.kv(out, "top at left support", Html.topAtSupport(row.left(), u) + (extra ? rule : ""));
             }
             if (p.rightSupport()) {
                 boolean extra = SpanLayout.sum(l.topRight()) > l.topContinuous();
-                kv(out, "top at right support", topAtSupport(row.right(), u) + (extra ? rule : ""));
+                Html.kv(out, "top at right support", Html.topAtSupport(row.right(), u) + (extra ? rule : ""));
             }
         }
         if (l.skin() != null) {
-            kv(
+            Html.kv(
                     out,
                     "skin bars",
-                    l.skin().bar().label() + " @ " + len(l.skin().spacing(), u) + " each side face (9.7.2.3)");
+                    l.skin().bar().label() + " @ " + Html.len(l.skin().spacing(), u) + " each side face (9.7.2.3)");
         }
         List<SpanProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
             SpanProblem.Zone z = zones.get(i);
             var st = l.zoneStirrups().get(i);
-            kv(
+            Html.kv(
                     out,
                     "stirrups, " + z.name() + " zone",
-                    span(z.from(), u) + " to " + span(z.to(), u) + ": "
+                    Html.span(z.from(), u) + " to " + Html.span(z.to(), u) + ": "
                             + Words.stirrups(st, u) + ", "
                             + SpanText.sets(SpanLayout.stirrupSets(z.length(), st.spacing()))
                             + (d.report().zoneShears().get(i) == null
@@ -678,17 +670,17 @@ public final class ScheduleHtml {
         for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             FlexureResult f = e.getValue().flexure();
             double mu = Math.abs(e.getValue().demand().mu());
-            kv(
+            Html.kv(
                     out,
                     place(p, e.getKey()),
                     "φMn = " + u.withUnit(f.phiMn(), Dim.MOMENT) + " for Mu = "
                             + u.withUnit(mu, Dim.MOMENT) + " (Mu/φMn " + Words.ratio(mu / f.phiMn()) + "), ε_t = "
                             + Words.fixed(f.epsT(), 5) + ", φ = " + Words.phi(f.phi()));
         }
-        kv(out, "deflection", deflection(d.report().span(), p, u));
-        kv(out, "binding", binding(o.binding(), u));
-        kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
-        kv(out, "proof", proofWords(o.proof()));
+        Html.kv(out, "deflection", deflection(d.report().span(), p, u));
+        Html.kv(out, "binding", binding(o.binding(), u));
+        Html.kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
+        Html.kv(out, "proof", proofWords(o.proof()));
         out.append("</table>\n</div>\n");
         for (String w : SpanText.warnings(p)) {
             out.append("<p class=\"warn\">Warning: ").append(Svg.esc(w)).append(".</p>\n");
@@ -799,7 +791,7 @@ public final class ScheduleHtml {
             for (int i : group) {
                 names.add(zones.get(i).name());
                 where.add(u.number(zones.get(i).from(), Dim.SPAN) + "–"
-                        + span(zones.get(i).to(), u));
+                        + Html.span(zones.get(i).to(), u));
             }
             String title = "Stirrups, " + String.join(" and ", names) + (names.size() == 1 ? " zone" : " zones") + " ("
                     + String.join(", ", where) + ")";
@@ -866,8 +858,6 @@ public final class ScheduleHtml {
                 .append("</pre>\n");
     }
 
-    // ---------------------------------------------------------------- words
-
     /** Where a section is; a cantilever's only section is its fixed end. */
     static String place(SpanProblem problem, SpanProblem.Place p) {
         if (problem.cantilever() && p == SpanProblem.Place.LEFT) {
@@ -910,13 +900,14 @@ public final class ScheduleHtml {
 
     private static String deflection(SpanChecks.Result r, SpanProblem p, UnitSystem u) {
         if (r.liveDeflection() == null) {
-            return "not computed: h ≥ h,min = " + len(r.hMin(), u) + " of Table 9.3.1.1";
+            return "not computed: h ≥ h,min = " + Html.len(r.hMin(), u) + " of Table 9.3.1.1";
         }
-        return "computed (h < h,min = " + len(r.hMin(), u) + "): live " + u.withUnit(r.liveDeflection(), Dim.LENGTH)
-                + " ≤ ℓ/" + plain(p.limits().live()) + " = "
+        return "computed (h < h,min = " + Html.len(r.hMin(), u) + "): live "
+                + u.withUnit(r.liveDeflection(), Dim.LENGTH)
+                + " ≤ ℓ/" + Html.plain(p.limits().live()) + " = "
                 + u.withUnit(p.span() / p.limits().live(), Dim.LENGTH)
                 + "; long-term + live " + u.withUnit(r.longTermDeflection(), Dim.LENGTH) + " ≤ ℓ/"
-                + plain(p.limits().total()) + " = "
+                + Html.plain(p.limits().total()) + " = "
                 + u.withUnit(p.span() / p.limits().total(), Dim.LENGTH);
     }
 
@@ -945,161 +936,4 @@ public final class ScheduleHtml {
                 + (s.deflectionCuts() > 0 ? ", " + s.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
                 + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
     }
-
-    private static String unitsWords(UnitSystem u) {
-        return u == UnitSystem.US
-                ? "inch-pound units: in, psi, kip, kip·ft; spans and bar lengths in ft"
-                : "SI units: mm, MPa, kN, kN·m; spans and bar lengths in m";
-    }
-
-    static String len(double mm, UnitSystem u) {
-        return SectionDrawing.len(mm, u);
-    }
-
-    private static String span(double mm, UnitSystem u) {
-        return u.number(mm, Dim.SPAN) + " " + u.unit(Dim.SPAN);
-    }
-
-    private static String lengths(List<Double> mm, UnitSystem u) {
-        List<String> parts = new ArrayList<>();
-        for (double v : mm) {
-            parts.add(u.compact(v, Dim.LENGTH));
-        }
-        return String.join(", ", parts) + " " + u.unit(Dim.LENGTH);
-    }
-
-    /** "400 to 750 mm in steps of 25 mm" for an even range, else the list. */
-    private static String range(List<Double> mm, UnitSystem u) {
-        if (mm.size() >= 3) {
-            double step = mm.get(1) - mm.get(0);
-            boolean even = true;
-            for (int i = 2; i < mm.size(); i++) {
-                even &= Math.abs(mm.get(i) - mm.get(i - 1) - step) < 1e-6;
-            }
-            if (even) {
-                return u.compact(mm.get(0), Dim.LENGTH) + " to " + len(mm.get(mm.size() - 1), u) + " in steps of "
-                        + len(step, u);
-            }
-        }
-        return lengths(mm, u);
-    }
-
-    /** Bar designations as the catalog labels them ("No. 25"). */
-    private static String labels(ScheduleResult r, List<String> designations) {
-        List<String> parts = new ArrayList<>();
-        for (String d : designations) {
-            parts.add(r.input().space().barSizes().stream()
-                    .filter(b -> b.designation().equals(d))
-                    .map(BarSize::label)
-                    .findFirst()
-                    .orElse(d));
-        }
-        return String.join(", ", parts);
-    }
-
-    private static String labels(List<BarSize> bars) {
-        List<String> parts = new ArrayList<>();
-        for (BarSize b : bars) {
-            parts.add(b.label());
-        }
-        return String.join(", ", parts);
-    }
-
-    private static String joinInts(List<Integer> v) {
-        List<String> parts = new ArrayList<>();
-        for (int i : v) {
-            parts.add(String.valueOf(i));
-        }
-        return String.join(", ", parts);
-    }
-
-    private static String plain(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
-    }
-
-    private static String amount(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
-    }
-
-    private static String money(double v, String currency) {
-        return Money.amount(v) + (currency.isEmpty() ? "" : " " + currency);
-    }
-
-    private static void kv(StringBuilder out, String key, String value) {
-        out.append("<tr><th>")
-                .append(Svg.esc(key))
-                .append("</th><td>")
-                .append(Svg.esc(value))
-                .append("</td></tr>\n");
-    }
-
-    private static void kvStrong(StringBuilder out, String key, String value) {
-        out.append("<tr class=\"total\"><th>")
-                .append(Svg.esc(key))
-                .append("</th><td>")
-                .append(Svg.esc(value))
-                .append("</td></tr>\n");
-    }
-
-    private static void li(StringBuilder out, String text) {
-        out.append("<li>").append(Svg.esc(text)).append("</li>\n");
-    }
-
-    private static final String CSS = """
-            :root { color-scheme: light; }
-            body { font-family: sans-serif; font-size: 14px; line-height: 1.4; color: #1e1e1e; margin: 0 auto;
-                   padding: 16px 24px 40px; max-width: 1400px; background: #fff; }
-            h1 { font-size: 22px; margin: 0 0 4px; }
-            h2 { font-size: 18px; border-bottom: 2px solid #2b4a66; padding-bottom: 3px; margin-top: 32px; }
-            h3 { font-size: 16px; margin: 20px 0 8px; }
-            h4 { font-size: 14px; margin: 18px 0 6px; }
-            h5 { font-size: 13px; margin: 12px 0 4px; }
-            .sub { color: #555; margin: 0; }
-            nav { margin: 10px 0; }
-            a { color: #1f4e79; }
-            .caution { border: 2px solid #a8321e; background: #fbeee9; padding: 8px 14px; margin: 14px 0; }
-            .caution p { margin: 4px 0; }
-            .cols { display: flex; flex-wrap: wrap; gap: 18px; align-items: flex-start; }
-            .wide { overflow-x: auto; }
-            table { border-collapse: collapse; margin: 6px 0; }
-            caption { text-align: left; font-weight: bold; padding: 2px 0 4px; }
-            .kv th { text-align: left; font-weight: normal; color: #444; padding: 2px 12px 2px 0; vertical-align: top;
-                     white-space: nowrap; }
-            .kv td { padding: 2px 0; vertical-align: top; max-width: 640px; }
-            .kv tr.total th, .kv tr.total td { font-weight: bold; border-top: 1px solid #888; }
-            .grid th, .grid td { border: 1px solid #c8c8c8; padding: 3px 6px; vertical-align: top; }
-            .grid th { background: #eef2f6; text-align: left; }
-            td.mark, td.lines, .checks td:first-child { white-space: nowrap; }
-            .num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
-            tr.fail td { background: #f8d7d0; color: #7a1a0c; font-weight: bold; }
-            tr.infeasible td { background: #fbeee9; }
-            .status { font-size: 12px; padding: 1px 6px; border-radius: 3px; vertical-align: middle; }
-            .status.ok { background: #dcead5; color: #22501a; }
-            .status.none { background: #f8d7d0; color: #7a1a0c; }
-            .diagnosis { border-left: 4px solid #a8321e; padding: 4px 12px; background: #fbeee9; }
-            .warn { color: #7a1a0c; }
-            .note { color: #555; font-size: 13px; }
-            .rules li { margin: 2px 0; }
-            section.beam { border-top: 1px solid #bbb; margin-top: 28px; padding-top: 4px; }
-            figure { margin: 10px 0; }
-            .pair { display: flex; gap: 8px; align-items: flex-start; }
-            /* both drawings shrink by the same factor when the page is narrow, so their heights still line up */
-            .pair svg { flex: 0 1 auto; min-width: 0; height: auto; border: 1px solid #e2e2e2; background: #fff; }
-            .zone-section svg { max-width: 100%; height: auto; border: 1px solid #e2e2e2; background: #fff; }
-            .plot svg { max-width: 100%; height: auto; }
-            details.trail { margin: 10px 0; }
-            details.trail summary { cursor: pointer; font-weight: bold; }
-            pre { font-size: 12px; background: #f7f7f5; padding: 6px 10px; white-space: pre-wrap; }
-            footer { margin-top: 36px; color: #555; border-top: 1px solid #ccc; }
-            @page { size: A4 landscape; margin: 12mm; }
-            @media print {
-              body { max-width: none; padding: 0; font-size: 12px; }
-              .wide { overflow: visible; }
-              .grid { font-size: 11px; }
-              section.beam { break-before: page; border-top: none; }
-              figure, tr, .kv { break-inside: avoid; }
-              h2, h3, h4, h5, caption { break-after: avoid; }
-              nav { display: none; }
-            }
-            """;
 }
