@@ -128,7 +128,8 @@ final class DesignCommand implements Callable<Integer> {
                                 r.epsT(),
                                 undesigned,
                                 !r.held().isEmpty(),
-                                r.oneSection())));
+                                r.oneSection(),
+                                r.supports())));
             }
         }
         String text = format == OutputFormat.json

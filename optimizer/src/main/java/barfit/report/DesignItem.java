@@ -12,7 +12,8 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
      * Where a whole span came from: its line, which part, and how many rounds of analysis and design it took;
      * {@code undesigned} names the line's parts that have no design (the analysis kept its first estimate
      * of their sections); {@code held} when the sections alternated and every part was held at the largest;
-     * {@code oneSection} how a line of one set of forms was designed (null for span by span).
+     * {@code oneSection} how a line of one set of forms was designed (null for span by span); {@code supports}
+     * the top bars over each support (null where none).
      */
     public record LinePart(
             String line,
@@ -26,7 +27,8 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
             java.util.List<Double> epsT,
             java.util.List<String> undesigned,
             boolean held,
-            barfit.design.line.LineSpans.OneSection oneSection) {}
+            barfit.design.line.LineSpans.OneSection oneSection,
+            java.util.List<barfit.design.line.LineSpans.SupportBars> supports) {}
 
     public boolean feasible() {
         return section != null ? section.feasible() : whole.feasible();

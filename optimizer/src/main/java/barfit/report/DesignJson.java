@@ -66,6 +66,10 @@ public final class DesignJson {
             }
             arr.add(b);
         }
+        ArrayNode lines = LineJson.lines(outcomes, u);
+        if (!lines.isEmpty()) {
+            root.set("lines", lines);
+        }
         return Json.write(root);
     }
 

@@ -87,6 +87,9 @@ public final class DesignText {
                         .append('\n');
             }
             if (o.line() != null && o.line().first()) {
+                supports(o.line(), u, out);
+            }
+            if (o.line() != null && o.line().first()) {
                 var lp = o.line();
                 for (int j = 0; j < lp.asked().size(); j++) {
                     if (lp.asked().get(j) > 0) {
@@ -342,5 +345,73 @@ public final class DesignText {
                     .append(Words.alternatives(fixes))
                     .append('\n');
         }
+    }
+
+    /**
+     * The top bars over each support, once per support: one group where the parts on both sides share them,
+     * with the length of one extra bar from end to end; else each side's own.
+     */
+    static void supports(DesignItem.LinePart lp, UnitSystem u, StringBuilder out) {
+        for (var sb : lp.supports()) {
+            if (sb == null) {
+                continue;
+            }
+            out.append("  top bars over support ").append(sb.index()).append(": ");
+            if (sb.shared() || sb.left() == null || sb.right() == null) {
+                var side = sb.either();
+                out.append(bars(side, u));
+                int extra = barfit.design.span.SpanLayout.sum(side.counts()) - side.continuous();
+                if (extra > 0) {
+                    out.append(", ")
+                            .append(extra)
+                            .append(extra == 1 ? " extra bar " : " extra bars ")
+                            .append(SpanText.span(sb.extraBarLength(), u))
+                            .append(" long (");
+                    double intoLeft = sb.extraBarLength() - sb.width() - intoRight(sb);
+                    if (intoLeft > 0) {
+                        out.append(SpanText.span(intoLeft, u))
+                                .append(" into ")
+                                .append(sb.left() != null ? sb.left().part() : "the back span")
+                                .append(", ");
+                    }
+                    out.append(SpanText.span(sb.width(), u)).append(" over the support");
+                    if (intoRight(sb) > 0) {
+                        out.append(", ")
+                                .append(SpanText.span(intoRight(sb), u))
+                                .append(" into ")
+                                .append(sb.right() != null ? sb.right().part() : "the back span");
+                    }
+                    out.append(')');
+                }
+                out.append(sb.left() != null && sb.right() != null ? ", one group for both sides" : "");
+            } else {
+                out.append(bars(sb.left(), u))
+                        .append(" from ")
+                        .append(sb.left().part())
+                        .append("; ")
+                        .append(bars(sb.right(), u))
+                        .append(" from ")
+                        .append(sb.right().part())
+                        .append(" (each span designed alone)");
+            }
+            out.append('\n');
+        }
+    }
+
+    private static double intoRight(barfit.design.line.LineSpans.SupportBars sb) {
+        return Math.max(
+                sb.right() == null ? 0 : sb.right().extension(),
+                sb.left() == null ? 0 : sb.left().anchorage());
+    }
+
+    private static String bars(barfit.design.line.LineSpans.Side side, UnitSystem u) {
+        StringBuilder sb = new StringBuilder();
+        for (int n : side.counts()) {
+            sb.append(sb.length() == 0 ? "" : " + ")
+                    .append(n)
+                    .append(' ')
+                    .append(side.bar().label());
+        }
+        return sb.toString();
     }
 }

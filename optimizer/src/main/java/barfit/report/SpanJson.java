@@ -70,9 +70,10 @@ public final class SpanJson {
         }
         var pr = o.proof();
         ObjectNode proof = b.putObject("proof");
-        proof.put("solver", "CP-SAT");
+        boolean withLine = pr.search().withLine();
+        proof.put("solver", withLine ? "dynamic programming along the line" : "CP-SAT");
         proof.put("status", Words.status(pr.status()));
-        proof.put("basis", "per span");
+        proof.put("basis", withLine ? "with its line (shared support bars)" : "per span");
         if (pr.bounded()) {
             proof.put("objective", pr.objective());
             proof.put("bound", pr.bound());
@@ -99,7 +100,7 @@ public final class SpanJson {
         return b;
     }
 
-    private static ObjectNode layers(String face, barfit.catalogs.BarSize bar, List<Integer> counts) {
+    static ObjectNode layers(String face, barfit.catalogs.BarSize bar, List<Integer> counts) {
         ObjectNode t = Json.object();
         t.put("face", face);
         ArrayNode arr = t.putArray("layers");

@@ -385,6 +385,14 @@ public final class SpanText {
                     + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
         }
         var s = p.search();
+        if (s.withLine()) {
+            return "chosen with the line's other parts (they share the top bars over each support): "
+                    + Words.status(p.status()) + " for the line by dynamic programming along it over every part's "
+                    + "options; " + s.generator().framesEvaluated() + " of "
+                    + s.generator().frames()
+                    + " frames of this part searched, " + s.generator().framesSkipped() + " skipped by the cost "
+                    + "bound";
+        }
         return "CP-SAT " + Words.status(p.status()) + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective())
                 + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound()) + ", gap "
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over "

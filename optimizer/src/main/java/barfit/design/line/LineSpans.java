@@ -5,9 +5,12 @@ import barfit.analysis.Line;
 import barfit.analysis.LineAnalysis;
 import barfit.analysis.LineResult;
 import barfit.analysis.Load;
+import barfit.design.CostModel;
+import barfit.design.Proof;
 import barfit.design.SearchSpace;
 import barfit.design.span.ShearDiagram;
 import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanGenerator;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
 import barfit.input.LineInput;
@@ -57,7 +60,106 @@ public final class LineSpans {
             List<Double> redistribution,
             List<Double> epsT,
             List<String> held,
-            OneSection oneSection) {}
+            OneSection oneSection) {
+
+        /**
+         * Per support (left to right), the top bars over it as the parts beside it were designed: null where
+         * no part has bars over it. In a line of one section they are one group; span by span each side
+         * has its own.
+         */
+        public List<SupportBars> supports() {
+            int n = line.spans().size();
+            List<SupportBars> out = new ArrayList<>();
+            for (int j = 0; j <= n; j++) {
+                Side left = null; // the part on the support's left, its right end
+                Side right = null;
+                for (Part pt : parts) {
+                    if (!pt.outcome().feasible()) {
+                        continue;
+                    }
+                    int seg = pt.segment();
+                    boolean overhang = seg == 0 || seg == n + 1;
+                    var design = pt.outcome().best();
+                    var l = design.layout();
+                    var sections = design.report().sections();
+                    if (seg == j && !overhang && l.topRight() != null) {
+                        left = side(pt, l.topRight(), l.extRight(), 0, sections.get(SpanProblem.Place.RIGHT));
+                    }
+                    if (seg == j + 1 && !overhang && l.topLeft() != null) {
+                        right = side(pt, l.topLeft(), l.extLeft(), 0, sections.get(SpanProblem.Place.LEFT));
+                    }
+                    if (overhang && (seg == 0 ? j == 0 : j == n) && l.topLeft() != null) {
+                        // a cantilever's bars run its length and are anchored past the face into the back span
+                        double length = pt.problem().span();
+                        Side c = side(
+                                pt, l.topLeft(), length, l.extLeft() - length, sections.get(SpanProblem.Place.LEFT));
+                        if (seg == 0) {
+                            left = c;
+                        } else {
+                            right = c;
+                        }
+                    }
+                }
+                if (left == null && right == null) {
+                    out.add(null);
+                    continue;
+                }
+                out.add(new SupportBars(j + 1, line.supports().get(j).width(), left, right));
+            }
+            return out;
+        }
+    }
+
+    /**
+     * One side of a support's top bars: the part it belongs to, the bars (per layer from the top face),
+     * how far the bars beyond the continuous ones run into the part past the face (a cantilever's: its
+     * length), how far they must run past the face into the part across the support ({@code anchorage}, a
+     * cantilever's anchorage into its back span; 0 for a span), and that section's check.
+     */
+    public record Side(
+            String part,
+            barfit.catalogs.BarSize bar,
+            int continuous,
+            List<Integer> counts,
+            double extension,
+            double anchorage,
+            barfit.section.CheckReport section) {}
+
+    private static Side side(
+            Part pt, List<Integer> counts, double extension, double anchorage, barfit.section.CheckReport section) {
+        var l = pt.outcome().best().layout();
+        return new Side(pt.name(), l.top(), l.topContinuous(), counts, extension, anchorage, section);
+    }
+
+    /**
+     * The top bars over one support (1-based {@code index}): their size and continuous count, the
+     * support's width, and each side as designed (null where that side carries no negative moment).
+     * {@link #shared} when both sides take the same bars: one group, cut from bars that run over the
+     * support into both parts.
+     */
+    public record SupportBars(int index, double width, Side left, Side right) {
+        public boolean shared() {
+            return left != null
+                    && right != null
+                    && left.bar().equals(right.bar())
+                    && left.counts().equals(right.counts());
+        }
+
+        /** A side with bars: the left one where both have. */
+        public Side either() {
+            return left != null ? left : right;
+        }
+
+        /**
+         * The length of one extra bar of a shared group: into the left part, over the support, into the
+         * right; on each side the longer of that side's own need and the anchorage the other side asks.
+         */
+        public double extraBarLength() {
+            double intoLeft = Math.max(left == null ? 0 : left.extension(), right == null ? 0 : right.anchorage());
+            double intoRight = Math.max(right == null ? 0 : right.extension(), left == null ? 0 : left.anchorage());
+            return intoLeft + width + intoRight;
+        }
+    }
 
     /**
      * How a line of one set of forms was designed: the sections analysed (each with its own weight and
@@ -161,6 +263,15 @@ public final class LineSpans {
                 new OneSection(trials.size(), designed, false));
     }
 
+    /**
+     * The parts' problems with the whole line at one section, analysed with that section's own weight and
+     * stiffness and the redistribution asked: what a line of one section designs against (for its oracle).
+     */
+    List<SpanProblem> problemsAt(LineInput in, SectionShape shape) {
+        double ec = Deflection.ec(settings.materials(), settings.code());
+        return trial(in, shape, ec, new ArrayList<>(in.redistribution())).problems();
+    }
+
     /** One analysis of the line (by stiffness or by the 6.5 coefficients) and the part problems from it. */
     private record Analysed(
             List<SpanProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {}
@@ -238,6 +349,17 @@ public final class LineSpans {
                 int seg = segmentOf(p, n);
                 parts.add(new Part(seg, partName(seg, n), p, o));
             }
+            if (alternatives == 0) {
+                // the parts' own optima bound the line from below; now the support bars they share
+                parts = share(n, parts, total, beat);
+                if (parts == null) {
+                    return null;
+                }
+                total = 0;
+                for (Part pt : parts) {
+                    total += pt.outcome().best().cost().total();
+                }
+            }
             List<Double> epsT = supportStrains(in, parts);
             List<Double> red = new ArrayList<>(current.redistribution());
             boolean lowered = lowerToAllowed(red, epsT);
@@ -246,6 +368,61 @@ public final class LineSpans {
             }
             current = trial(in, current.shape(), ec, red);
         }
+    }
+
+    /** How far above the parts' own optima the shared search first looks, then wider, then everywhere. */
+    private static final double[] SHARE_MARGINS = {0.05, 0.2, 0.8, 3.2, Double.POSITIVE_INFINITY};
+
+    /**
+     * The parts designed together at their one section, each support's top bars one arrangement for the
+     * parts on both sides ({@link SharedSupports}); null when no such line costs less than {@code beat}.
+     * {@code own}: each part's own optimum, whose sum bounds the line from below. Exact: a line costing T
+     * has no part dearer than T less the other parts' own optima, so the options under that limit hold
+     * every line cheaper than the one found once it lies within the margin searched.
+     */
+    private List<Part> share(int n, List<Part> own, double ownTotal, double beat) {
+        List<Part> ordered = new ArrayList<>(own);
+        ordered.sort(java.util.Comparator.comparingInt(Part::segment));
+        for (double margin : SHARE_MARGINS) {
+            double ceiling = Math.min(beat, ownTotal * (1 + margin));
+            List<SharedSupports.PartOptions> options = new ArrayList<>();
+            List<SpanGenerator.Stats> stats = new ArrayList<>();
+            for (Part pt : ordered) {
+                SpanProblem p = pt.problem();
+                double limit = ceiling - (ownTotal - pt.outcome().best().cost().total());
+                SpanGenerator g = designer.generator(p);
+                SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
+                stats.add(out.stats());
+                int seg = pt.segment();
+                int left = !p.leftSupport() ? -1 : seg == 0 ? 0 : seg == n + 1 ? n : seg - 1;
+                int right = p.rightSupport() ? seg : -1;
+                options.add(new SharedSupports.PartOptions(seg, p, g, out.sets(), left, right));
+            }
+            SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
+            if (s != null && s.total() <= ceiling * (1 + 1e-9)) {
+                List<Part> out = new ArrayList<>();
+                for (int i = 0; i < ordered.size(); i++) {
+                    Part pt = ordered.get(i);
+                    SpanLayout layout = s.picks().get(i).layout(options.get(i).generator());
+                    double c = layout.cost(pt.problem(), designer.costModel()).total();
+                    var proof = Proof.solved(
+                            Proof.Status.OPTIMAL,
+                            CostModel.SPAN_UNITS.units(c),
+                            CostModel.SPAN_UNITS.units(c),
+                            CostModel.SPAN_UNITS,
+                            Proof.SolverStats.NONE,
+                            new SpanDesigner.Search(stats.get(i), 0, 0, true),
+                            designer.options());
+                    out.add(new Part(
+                            pt.segment(), pt.name(), pt.problem(), designer.adopt(pt.problem(), layout, proof)));
+                }
+                return out;
+            }
+            if (ceiling >= beat) {
+                return null;
+            }
+        }
+        return null;
     }
 
     /** Span by span: each part its own section, the line analysed again until the sections settle. */
@@ -427,7 +604,7 @@ public final class LineSpans {
         return seg == 0 ? "left overhang" : seg == n + 1 ? "right overhang" : "span " + seg;
     }
 
-    private static int segmentOf(SpanProblem p, int n) {
+    static int segmentOf(SpanProblem p, int n) {
         String id = p.id();
         if (id.endsWith("/left overhang")) {
             return 0;

@@ -20,9 +20,14 @@ public final class SpanDesigner {
 
     /**
      * A span's search, for its proof: the generator's counts, the CP-SAT solves and the deflection cuts
-     * added between them.
+     * added between them; {@code withLine} where the span was chosen with the other parts of its line (they
+     * share support bars), exactly, by the line's search over every part's options, with no solve of its own.
      */
-    public record Search(SpanGenerator.Stats generator, int solves, int deflectionCuts) {}
+    public record Search(SpanGenerator.Stats generator, int solves, int deflectionCuts, boolean withLine) {
+        public Search(SpanGenerator.Stats generator, int solves, int deflectionCuts) {
+            this(generator, solves, deflectionCuts, false);
+        }
+    }
 
     /**
      * Why a span has no design, as data the reports put in words: {@code limit} names what fails at the cap
@@ -265,6 +270,38 @@ public final class SpanDesigner {
                 options);
         String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
         return new Outcome(p, status, best, alts, proof, binding(p, best), null);
+    }
+
+    /**
+     * A layout chosen for this span by a larger search (a line's, whose parts share their support bars),
+     * verified here with its trail and given that search's proof. A layout that fails a check is a bug in
+     * that search, never an answer.
+     */
+    public Outcome adopt(SpanProblem p, SpanLayout layout, Proof<Search> proof) {
+        SpanReport report = SpanVerifier.verify(p, layout, true);
+        if (!report.ok()) {
+            StringBuilder sb = new StringBuilder();
+            report.failures()
+                    .forEach(f -> sb.append(sb.length() == 0 ? "" : ", ").append(f.id()));
+            throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
+                    + " fail on the chosen layout); this is a bug in the search");
+        }
+        Design d = new Design(layout, layout.cost(p, cost), report, layout.bars(p, cost));
+        String status = proof.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
+        return new Outcome(p, status, d, List.of(), proof, binding(p, d), null);
+    }
+
+    /** The span generator of a problem, with this designer's cost model. */
+    public SpanGenerator generator(SpanProblem p) {
+        return new SpanGenerator(p, cost);
+    }
+
+    public CostModel costModel() {
+        return cost;
+    }
+
+    public SolverOptions options() {
+        return options;
     }
 
     /** The checks working hardest in the chosen span, and the headroom cap when the height sits at it. */

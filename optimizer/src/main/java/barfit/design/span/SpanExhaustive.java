@@ -32,8 +32,36 @@ public final class SpanExhaustive {
     }
 
     public Result solve(SpanProblem p) {
-        SpanLayout best = null;
-        long bestUnits = Long.MAX_VALUE;
+        SpanLayout[] best = {null};
+        long[] bestUnits = {Long.MAX_VALUE};
+        long combos = forEachPassing(p, (lay, units) -> {
+            if (units < bestUnits[0]) {
+                bestUnits[0] = units;
+                best[0] = lay;
+            }
+        });
+        return new Result(best[0], best[0] == null ? -1 : bestUnits[0], combos);
+    }
+
+    /**
+     * The cheapest passing layout per key (the first found among equals), for an oracle over several spans
+     * that constrains how they fit together (a line's shared support bars): keyed, say, by the top bars
+     * over each support.
+     */
+    public <K> java.util.Map<K, Result> cheapestBy(SpanProblem p, java.util.function.Function<SpanLayout, K> key) {
+        java.util.Map<K, Result> out = new java.util.LinkedHashMap<>();
+        forEachPassing(p, (lay, units) -> {
+            K k = key.apply(lay);
+            Result old = out.get(k);
+            if (old == null || units < old.units()) {
+                out.put(k, new Result(lay, units, 0));
+            }
+        });
+        return out;
+    }
+
+    /** Every layout of the space that passes every check, with its cost in units; returns the count tried. */
+    private long forEachPassing(SpanProblem p, java.util.function.ObjLongConsumer<SpanLayout> passing) {
         long combos = 0;
         List<SpanProblem.Zone> zones = p.zones();
         for (FrameEnumerator.Cell cell :
@@ -120,12 +148,9 @@ public final class SpanExhaustive {
                                     if (!SpanVerifier.verify(p, lay, false).ok()) {
                                         continue;
                                     }
-                                    long units =
-                                            CostModel.units(lay.cost(p, cost).total());
-                                    if (units < bestUnits) {
-                                        bestUnits = units;
-                                        best = lay;
-                                    }
+                                    passing.accept(
+                                            lay,
+                                            CostModel.units(lay.cost(p, cost).total()));
                                 }
                             }
                         }
@@ -133,7 +158,7 @@ public final class SpanExhaustive {
                 }
             }
         }
-        return new Result(best, best == null ? -1 : bestUnits, combos);
+        return combos;
     }
 
     /** The flexural sections alone, remembered by their bars (a failing one fails every combination). */

@@ -76,6 +76,30 @@ public final class SpanGenerator {
         }
     }
 
+    /**
+     * A cost that evaluating frames does not lower: for a part of a line, whose parts share their support
+     * bars and so cannot each take their own cheapest combination.
+     */
+    private record Fixed(double cost) implements CostToBeat {
+        @Override
+        public double limit(BarSize top, BarSize bottom) {
+            return cost;
+        }
+
+        @Override
+        public double limitForTop(BarSize top) {
+            return cost;
+        }
+
+        @Override
+        public double common() {
+            return cost;
+        }
+
+        @Override
+        public void lower(FrameOptions evaluated) {}
+    }
+
     private final SpanProblem p;
     private final SpanContext ctx;
     private final Combinations combinations;
@@ -230,6 +254,56 @@ public final class SpanGenerator {
                         ctx.flexureSolves(),
                         ctx.shearEvaluations(),
                         System.nanoTime() - t0));
+    }
+
+    /**
+     * Every frame's options that could be part of a combination costing less than {@code limit}: none
+     * cheaper is left out, whatever the other options it is combined with (a line's parts take the
+     * support bars they share, not each its own cheapest). The incumbent is not searched for.
+     */
+    public Output optionsUnder(double limit) {
+        long t0 = System.nanoTime();
+        List<FrameOptions> sets = new ArrayList<>();
+        int evaluated = 0;
+        int skipped = 0;
+        List<SpanFrame> frames = frames();
+        for (int i = 0; i < frames.size(); i++) {
+            SpanFrame f = frames.get(i);
+            if (!(f.lowerBound() < limit)) {
+                skipped = frames.size() - i;
+                break;
+            }
+            evaluated++;
+            FrameOptions fs = evaluate(f, new Fixed(limit));
+            if (fs != null) {
+                sets.add(combinations.prune(fs, limit));
+            }
+        }
+        return new Output(
+                sets,
+                Double.POSITIVE_INFINITY,
+                null,
+                new Stats(
+                        frames.size(),
+                        evaluated,
+                        skipped,
+                        ctx.flexureSolves(),
+                        ctx.shearEvaluations(),
+                        System.nanoTime() - t0));
+    }
+
+    /**
+     * Whether a support option may go with a mid-span option in a combination: the size of its top bars,
+     * its first layer holding their continuous bars (two hangers on a cantilever), stirrup legs suiting the
+     * bottom bars, the same anchored bottom bars.
+     */
+    public boolean fits(SupportOption s, MidOption m, SpanProblem.Place side) {
+        int continuous =
+                side == SpanProblem.Place.LEFT && p.cantilever() ? 2 : m.top().continuous();
+        return s.bar().equals(m.top().bar())
+                && s.counts().get(0) >= continuous
+                && s.holds(m)
+                && java.util.Objects.equals(s.bottom(), combinations.anchored(m));
     }
 
     private static double loose(double incumbent, double slack) {
