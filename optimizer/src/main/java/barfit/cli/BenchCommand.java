@@ -243,6 +243,22 @@ final class BenchCommand implements Callable<Integer> {
                 ", \"line_analysis_ms_median\": %.3f, \"line_analysis_cpu_ms_median\": %.3f",
                 la.msMedian(),
                 la.cpuMsMedian());
+        var ld = barfit.bench.LineDesignBench.run(5, "20");
+        out.printf(
+                Locale.ROOT,
+                "line design (four spans on columns, one section, default space, redistribution up to 20 %%): "
+                        + "median %.0f ms (max %.0f ms; CPU %.0f ms) over %d runs; cost %.2f; every part optimal: %s%n",
+                ld.msMedian(),
+                ld.msMax(),
+                ld.cpuMsMedian(),
+                ld.runs(),
+                ld.cost(),
+                ld.optimal());
+        beamJson += String.format(
+                Locale.ROOT,
+                ", \"line_design_ms_median\": %.1f, \"line_design_cpu_ms_median\": %.1f",
+                ld.msMedian(),
+                ld.cpuMsMedian());
         out.printf(
                 Locale.ROOT,
                 "{\"instances\": %d, \"optimizer_ms_median\": %.3f, \"exhaustive_ms_median\": %s, "

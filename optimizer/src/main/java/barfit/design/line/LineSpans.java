@@ -191,7 +191,7 @@ public final class LineSpans {
             if (one != null) {
                 return one;
             }
-            Result bySpan = bySpan(in, alternatives);
+            Result bySpan = sameWidth(in, alternatives);
             return new Result(
                     in,
                     bySpan.parts(),
@@ -204,7 +204,29 @@ public final class LineSpans {
                     bySpan.held(),
                     new OneSection(0, 0, true));
         }
-        return bySpan(in, alternatives);
+        return sameWidth(in, alternatives);
+    }
+
+    /**
+     * Span by span with one width along the line (each span its own depth): the line designed at each width
+     * of the search space, the cheapest whose every part has a design; where no width carries every part,
+     * each part takes its own width.
+     */
+    private Result sameWidth(LineInput in, int alternatives) {
+        Result best = null;
+        double bestTotal = Double.POSITIVE_INFINITY;
+        for (double b : space.widths()) {
+            Result r = bySpan(in, alternatives, b);
+            double total = 0;
+            for (Part pt : r.parts()) {
+                total += pt.outcome().feasible() ? pt.outcome().best().cost().total() : Double.POSITIVE_INFINITY;
+            }
+            if (total < bestTotal - 1e-9) {
+                best = r;
+                bestTotal = total;
+            }
+        }
+        return best != null ? best : bySpan(in, alternatives, null);
     }
 
     /**
@@ -426,7 +448,7 @@ public final class LineSpans {
     }
 
     /** Span by span: each part its own section, the line analysed again until the sections settle. */
-    private Result bySpan(LineInput in, int alternatives) {
+    private Result bySpan(LineInput in, int alternatives, Double width) {
         int n = in.spans().size();
         List<SectionShape> shapes = new ArrayList<>();
         for (int s = 0; s < n + 2; s++) {
@@ -458,6 +480,8 @@ public final class LineSpans {
                 int seg = segmentOf(p, n);
                 if (held != null) {
                     p = heldAt(p, held.get(seg));
+                } else if (width != null) {
+                    p = p.withFixedWidth(width);
                 }
                 SpanDesigner.Outcome o = designer.design(p, alternatives, previous(parts, seg));
                 next.add(new Part(seg, partName(seg, n), p, o));
@@ -504,7 +528,7 @@ public final class LineSpans {
     }
 
     /** The part restricted to the one section it is held at. */
-    private static SpanProblem heldAt(SpanProblem p, SectionShape shape) {
+    static SpanProblem heldAt(SpanProblem p, SectionShape shape) {
         return p.withFixedWidth(shape.width()).withSpace(p.space().withDepths(List.of(shape.height())));
     }
 

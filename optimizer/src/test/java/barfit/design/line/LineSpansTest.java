@@ -324,4 +324,103 @@ class LineSpansTest {
         }
         assertTrue(l.epsT().get(1) >= 0.0075, "a light line is ductile enough to redistribute: " + l.epsT());
     }
+
+    @Test
+    void redistributionThatTheSectionsAllowLowersTheCost() throws IOException {
+        // ACI 318-19 6.6.5: a lightly loaded line whose support sections reach εt >= 0.0075 keeps 10 % of
+        // its support moments redistributed, and costs less than with none (invented line)
+        String light = """
+                units: SI
+                concrete: {fc: 30}
+                steel: {fy: 420}
+                lines:
+                  - id: L
+                    spans: [7.0, 7.0, 7.0]
+                    supports: [{width: 400, kind: wall}]
+                    loads: {dead: 8, live: 4}
+                    section: {width: 300, height: 600}
+                    redistribution: 10
+                """;
+        LineSpans.Result with = designLine(light);
+        LineSpans.Result without = designLine(light.replace("redistribution: 10\n", ""));
+        assertTrue(with.redistribution().get(1) > 0, "redistributed: " + with.redistribution());
+        assertTrue(
+                total(with) < total(without) - 0.01,
+                "redistribution pays: " + total(with) + " against " + total(without) + " with none");
+    }
+
+    @Test
+    void ownWeightMovesTheSectionAGuessWouldChoose() throws IOException {
+        // invented long-span line with little load besides its own weight: analysed with the guessed
+        // 200 x 300 section's weight for every trial, the cheapest section is shallower than the one found
+        // when each trial carries its own weight, and that shallower section fails under its own weight
+        String yaml = """
+                units: SI
+                concrete: {fc: 30}
+                steel: {fy: 420}
+                search:
+                  widths: [250, 300]
+                  depth: {min: 500, max: 1000, step: 50}
+                lines:
+                  - id: W
+                    spans: [12.0, 12.0]
+                    supports: [{width: 300, kind: wall}]
+                    loads: {dead: 2, live: 3}
+                    section: {width: 200, height: 300}
+                """;
+        Path f = dir.resolve("w.yaml");
+        Files.writeString(f, yaml);
+        DesignInput in = DesignInputReader.read(f, false);
+        LineInput line =
+                LinesReader.read(DesignInputReader.document(f), in.settings()).get(0);
+        CostModel cost = new CostModel(
+                in.rates(), in.settings().detailing().cover(), in.settings().code());
+        SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
+        LineSpans lines =
+                new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs());
+        LineSpans.Result real = lines.design(line, 0);
+        var chosen = real.parts().get(0).outcome().best().layout();
+        // the guess: every trial section designed against the envelope of the 250 x 400 section
+        List<barfit.design.span.SpanProblem> guessed = lines.problemsAt(line, new SectionShape(200, 300, null));
+        double best = Double.POSITIVE_INFINITY;
+        SectionShape bestShape = null;
+        for (double b : in.space().widths()) {
+            for (double h : in.space().depths()) {
+                SectionShape shape = new SectionShape(b, h, null);
+                double sum = 0;
+                for (var p : guessed) {
+                    var o = designer.design(LineSpans.heldAt(p, shape), 0);
+                    sum += o.feasible() ? o.best().cost().total() : Double.POSITIVE_INFINITY;
+                }
+                if (sum < best - 1e-9) {
+                    best = sum;
+                    bestShape = shape;
+                }
+            }
+        }
+        assertTrue(bestShape != null, "the guess finds a section");
+        assertTrue(
+                bestShape.height() < chosen.height(),
+                "the guess chooses " + bestShape.height() + " mm, its own weight " + chosen.height() + " mm");
+        // at the guessed section, under its own weight, the guess's bars no longer carry the line
+        boolean guessCarries = true;
+        List<barfit.design.span.SpanProblem> own = lines.problemsAt(line, bestShape);
+        for (var p : guessed) {
+            var o = designer.design(LineSpans.heldAt(p, bestShape), 0);
+            var ownProblem =
+                    own.stream().filter(q -> q.id().equals(p.id())).findFirst().orElseThrow();
+            guessCarries &= SpanVerifier.verify(
+                            LineSpans.heldAt(ownProblem, bestShape), o.best().layout(), false)
+                    .ok();
+        }
+        assertTrue(!guessCarries, "the guess's design fails under its own section's weight");
+    }
+
+    private static double total(LineSpans.Result r) {
+        double t = 0;
+        for (LineSpans.Part p : r.parts()) {
+            t += p.outcome().best().cost().total();
+        }
+        return t;
+    }
 }
