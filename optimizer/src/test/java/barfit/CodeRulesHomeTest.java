@@ -152,7 +152,6 @@ class CodeRulesHomeTest {
             new Allowed("barfit/bench/SpanBench.java", null, null, "invented spans for the timing bench: data"),
             new Allowed("barfit/bench/SectionBench.java", null, null, "invented sections for the timing bench: data"),
             new Allowed("barfit/bench/LineBench.java", null, null, "an invented line for the timing bench: data"),
-            new Allowed("barfit/bench/LineDesignBench.java", null, null, "an invented line for the timing bench: data"),
             new Allowed(
                     "barfit/bench/ScheduleGenerator.java",
                     "0.9",
