@@ -41,8 +41,8 @@ public final class LineDesignBench {
                       live: 12
                       points: [{span: 2, at: 3.0, dead: 40, live: 20}]
                     section: {width: 300, height: 600}
-                    redistribution: %s
-                """.formatted(redistribution);
+                    redistribution: REDISTRIBUTION
+                """.replace("REDISTRIBUTION", redistribution);
     }
 
     public static Figures run(int runs, String redistribution) {

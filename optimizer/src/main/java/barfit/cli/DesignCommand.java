@@ -129,7 +129,8 @@ final class DesignCommand implements Callable<Integer> {
                                 undesigned,
                                 !r.held().isEmpty(),
                                 r.oneSection(),
-                                r.supports())));
+                                r.supports(),
+                                r.withoutRedistribution())));
             }
         }
         String text = format == OutputFormat.json

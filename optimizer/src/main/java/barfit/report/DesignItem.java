@@ -13,7 +13,9 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
      * {@code undesigned} names the line's parts that have no design (the analysis kept its first estimate
      * of their sections); {@code held} when the sections alternated and every part was held at the largest;
      * {@code oneSection} how a line of one set of forms was designed (null for span by span); {@code supports}
-     * the top bars over each support (null where none).
+     * the top bars over each support (null where none); {@code withoutRedistribution} what the line
+     * costs with none where the search chose the redistribution (infinite where it has no design with none),
+     * else NaN.
      */
     public record LinePart(
             String line,
@@ -28,7 +30,13 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
             java.util.List<String> undesigned,
             boolean held,
             barfit.design.line.LineSpans.OneSection oneSection,
-            java.util.List<barfit.design.line.LineSpans.SupportBars> supports) {}
+            java.util.List<barfit.design.line.LineSpans.SupportBars> supports,
+            double withoutRedistribution) {
+        /** Whether the search chose the redistribution at each support (else it was lowered to what is allowed). */
+        public boolean chosen() {
+            return !Double.isNaN(withoutRedistribution);
+        }
+    }
 
     public boolean feasible() {
         return section != null ? section.feasible() : whole.feasible();

@@ -95,11 +95,16 @@ public final class DesignText {
                     if (lp.asked().get(j) > 0) {
                         out.append("  redistribution at support ")
                                 .append(j + 1)
-                                .append(" (6.6.5): asked ")
-                                .append(u.compact(lp.asked().get(j), Dim.NUMBER))
-                                .append(" %, used ")
-                                .append(u.compact(lp.used().get(j), Dim.NUMBER))
-                                .append(" %")
+                                .append(" (6.6.5): ")
+                                .append(
+                                        lp.chosen()
+                                                ? u.compact(lp.used().get(j), Dim.NUMBER) + " % chosen of 0 to "
+                                                        + u.compact(lp.asked().get(j), Dim.NUMBER) + " % in steps of "
+                                                        + u.compact(barfit.design.line.LineSpans.STEP, Dim.NUMBER)
+                                                        + " %"
+                                                : "asked "
+                                                        + u.compact(lp.asked().get(j), Dim.NUMBER) + " %, used "
+                                                        + u.compact(lp.used().get(j), Dim.NUMBER) + " %")
                                 .append(
                                         Double.isNaN(lp.epsT().get(j))
                                                 ? ""
@@ -112,6 +117,14 @@ public final class DesignText {
                                                         + "1000 εt percent and 20 %)")
                                 .append('\n');
                     }
+                }
+                if (lp.chosen()) {
+                    out.append("  with no redistribution the line would cost, at this section, ")
+                            .append(
+                                    Double.isInfinite(lp.withoutRedistribution())
+                                            ? "nothing: it has no design at this section"
+                                            : String.format(Locale.ROOT, "%.2f", lp.withoutRedistribution()))
+                            .append('\n');
                 }
             }
             if (o.section() != null) {

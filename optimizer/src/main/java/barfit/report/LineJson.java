@@ -166,6 +166,14 @@ final class LineJson {
             }
         }
         o.set("cost", DesignJson.cost(cost));
+        if (lp.chosen()) {
+            // what the search compared the chosen redistribution against
+            if (Double.isFinite(lp.withoutRedistribution())) {
+                o.put("cost_without_redistribution", lp.withoutRedistribution());
+            } else {
+                o.putNull("cost_without_redistribution");
+            }
+        }
         ObjectNode proof = o.putObject("proof");
         boolean shared =
                 all && parts.stream().allMatch(p -> p.whole().proof().search().withLine());

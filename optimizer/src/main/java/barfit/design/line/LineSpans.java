@@ -60,7 +60,8 @@ public final class LineSpans {
             List<Double> redistribution,
             List<Double> epsT,
             List<String> held,
-            OneSection oneSection) {
+            OneSection oneSection,
+            double withoutRedistribution) {
 
         /**
          * Per support (left to right), the top bars over it as the parts beside it were designed: null where
@@ -202,7 +203,8 @@ public final class LineSpans {
                     bySpan.redistribution(),
                     bySpan.epsT(),
                     bySpan.held(),
-                    new OneSection(0, 0, true));
+                    new OneSection(0, 0, true),
+                    Double.NaN);
         }
         return sameWidth(in, alternatives);
     }
@@ -269,20 +271,28 @@ public final class LineSpans {
         if (best == null) {
             return null;
         }
-        if (alternatives > 0) {
-            best = evaluate(in, best.trial(), ec, Double.POSITIVE_INFINITY, alternatives);
+        // the parts share their support bars: no part has alternatives of its own
+        LineResult analysis = best.trial().analysis();
+        if (choosing(in)) {
+            // the envelope of the redistribution chosen, for the report
+            List<SectionShape> shapes = new ArrayList<>();
+            for (int s = 0; s < in.spans().size() + 2; s++) {
+                shapes.add(best.trial().shape());
+            }
+            analysis = analyse(in, shapes, ec, best.trial().redistribution()).analysis();
         }
         return new Result(
                 in,
                 best.parts(),
                 best.rounds(),
                 true,
-                best.trial().analysis(),
+                analysis,
                 best.trial().coefficients(),
                 best.trial().redistribution(),
                 best.epsT(),
                 List.of(),
-                new OneSection(trials.size(), designed, false));
+                new OneSection(trials.size(), designed, false),
+                best.withoutRedistribution());
     }
 
     /**
@@ -292,6 +302,20 @@ public final class LineSpans {
     List<SpanProblem> problemsAt(LineInput in, SectionShape shape) {
         double ec = Deflection.ec(settings.materials(), settings.code());
         return trial(in, shape, ec, new ArrayList<>(in.redistribution())).problems();
+    }
+
+    /** As above, with the percentages redistributed at each support given. */
+    List<SpanProblem> problemsAt(LineInput in, SectionShape shape, List<Double> redistribution) {
+        double ec = Deflection.ec(settings.materials(), settings.code());
+        List<SectionShape> shapes = new ArrayList<>();
+        for (int s = 0; s < in.spans().size() + 2; s++) {
+            shapes.add(shape);
+        }
+        List<SpanProblem> out = new ArrayList<>();
+        for (SpanProblem p : analyse(in, shapes, ec, redistribution).problems()) {
+            out.add(heldAt(p, shape));
+        }
+        return out;
     }
 
     /** One analysis of the line (by stiffness or by the 6.5 coefficients) and the part problems from it. */
@@ -309,16 +333,29 @@ public final class LineSpans {
     }
 
     /** A section tried for the whole line: its analysis, the parts' problems held at it, and its bound. */
+    /**
+     * {@code lowerBounds}: per part (in the order of {@code problems}), a lower bound on its cost whatever
+     * the redistribution chosen; {@code bound} their sum.
+     */
     private record Trial(
             SectionShape shape,
             List<SpanProblem> problems,
             LineResult analysis,
             List<Coefficients.SpanValues> coefficients,
             List<Double> redistribution,
-            double bound) {}
+            double bound,
+            List<Double> lowerBounds) {}
 
-    /** The parts designed at a trial's section, their total cost, the rounds redistribution took. */
-    private record Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {}
+    /**
+     * The parts designed at a trial's section, their total cost, the rounds redistribution took, and where
+     * the search chose the redistribution what the line would cost with none (NaN otherwise).
+     */
+    private record Evaluated(
+            Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT, double withoutRedistribution) {
+        Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {
+            this(trial, parts, total, rounds, epsT, Double.NaN);
+        }
+    }
 
     private Trial trial(LineInput in, SectionShape shape, double ec, List<Double> red) {
         int n = in.spans().size();
@@ -326,18 +363,31 @@ public final class LineSpans {
         for (int s = 0; s < n + 2; s++) {
             shapes.add(shape);
         }
-        Analysed a = analyse(in, shapes, ec, red);
+        boolean choosing = choosing(in);
+        // choosing: the line with none, and a bound that holds whatever is chosen (a support's moment
+        // falls and the span's rises with the percentage, and the bound rises with each)
+        Analysed a = analyse(in, shapes, ec, choosing ? none(in) : red);
+        Analysed most = choosing ? analyse(in, shapes, ec, most(in)) : null;
         List<SpanProblem> problems = a.problems();
         LineResult analysis = a.analysis();
         List<Coefficients.SpanValues> coefficients = a.coefficients();
         List<SpanProblem> held = new ArrayList<>();
+        List<Double> lower = new ArrayList<>();
         double bound = 0;
-        for (SpanProblem p : problems) {
-            SpanProblem q = heldAt(p, shape);
+        for (int k = 0; k < problems.size(); k++) {
+            SpanProblem q = heldAt(problems.get(k), shape);
             held.add(q);
-            bound += designer.leastCost(q);
+            SpanProblem least = q;
+            if (most != null) {
+                SpanProblem m = most.problems().get(k);
+                least = q.withSupportMoments(m.mLeft(), m.mRight());
+            }
+            double lb = designer.leastCost(least);
+            lower.add(lb);
+            bound += lb;
         }
-        return new Trial(shape, held, analysis, coefficients, List.copyOf(red), bound);
+        return new Trial(
+                shape, held, analysis, coefficients, List.copyOf(choosing ? none(in) : red), bound, List.copyOf(lower));
     }
 
     /**
@@ -347,6 +397,9 @@ public final class LineSpans {
      * no design at this section or the total cannot beat {@code beat}.
      */
     private Evaluated evaluate(LineInput in, Trial t, double ec, double beat, int alternatives) {
+        if (choosing(in) && alternatives == 0) {
+            return evaluateChoosing(in, t, ec, beat);
+        }
         int n = in.spans().size();
         int rounds = 0;
         Trial current = t;
@@ -416,16 +469,18 @@ public final class LineSpans {
                 SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
                 stats.add(out.stats());
                 int seg = pt.segment();
-                int left = !p.leftSupport() ? -1 : seg == 0 ? 0 : seg == n + 1 ? n : seg - 1;
-                int right = p.rightSupport() ? seg : -1;
-                options.add(new SharedSupports.PartOptions(seg, p, g, out.sets(), left, right));
+                options.add(new SharedSupports.PartOptions(
+                        seg,
+                        leftSupportOf(seg, n),
+                        rightSupportOf(seg, n),
+                        List.of(new SharedSupports.Variant(0, 0, p, g, out.sets(), out.stats()))));
             }
             SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
             if (s != null && s.total() <= ceiling * (1 + 1e-9)) {
                 List<Part> out = new ArrayList<>();
                 for (int i = 0; i < ordered.size(); i++) {
                     Part pt = ordered.get(i);
-                    SpanLayout layout = s.picks().get(i).layout(options.get(i).generator());
+                    SpanLayout layout = s.picks().get(i).layout();
                     double c = layout.cost(pt.problem(), designer.costModel()).total();
                     var proof = Proof.solved(
                             Proof.Status.OPTIMAL,
@@ -445,6 +500,184 @@ public final class LineSpans {
             }
         }
         return null;
+    }
+
+    /** The support at a part's left end (0..n): a span's left support, an overhang's root. */
+    static int leftSupportOf(int seg, int n) {
+        return seg == 0 ? 0 : seg == n + 1 ? n : seg - 1;
+    }
+
+    /** The support at a part's right end, -1 for an overhang (its tip). */
+    static int rightSupportOf(int seg, int n) {
+        return seg == 0 || seg == n + 1 ? -1 : seg;
+    }
+
+    /** The steps of redistribution tried at a support (6.6.5), percent. */
+    public static final double STEP = 5;
+
+    /** Whether the search chooses the redistribution: the line asks for some, analysed by stiffness. */
+    private static boolean choosing(LineInput in) {
+        return !in.coefficients() && in.redistribution().stream().anyMatch(r -> r > 0);
+    }
+
+    /** Per support, the percentages tried: 0 up to what the line allows there, in steps of {@link #STEP}. */
+    private static List<List<Double>> steps(LineInput in) {
+        List<List<Double>> out = new ArrayList<>();
+        for (double asked : in.redistribution()) {
+            List<Double> s = new ArrayList<>();
+            for (int k = 0; k * STEP <= asked + 1e-9; k++) {
+                s.add(k * STEP);
+            }
+            if (asked > s.get(s.size() - 1) + 1e-9) {
+                s.add(asked);
+            }
+            out.add(s);
+        }
+        return out;
+    }
+
+    private static List<Double> most(LineInput in) {
+        return new ArrayList<>(in.redistribution());
+    }
+
+    private static List<Double> none(LineInput in) {
+        List<Double> out = new ArrayList<>();
+        in.redistribution().forEach(r -> out.add(0.0));
+        return out;
+    }
+
+    /**
+     * The line at a trial's section with the redistribution at each support chosen with the bars (6.6.5):
+     * first the line with none (each part's own optimum, then the support bars shared), which bounds the
+     * rest; then every part analysed for every pair of percentages at its two supports, its options under
+     * its share of that bound, and the line chosen by {@link SharedSupports} with a percentage per support
+     * that the support sections as built allow. Null when no line beats {@code beat}.
+     */
+    private Evaluated evaluateChoosing(LineInput in, Trial t, double ec, double beat) {
+        int n = in.spans().size();
+        List<Part> own = new ArrayList<>();
+        double ownTotal = 0;
+        for (SpanProblem p : t.problems()) {
+            SpanDesigner.Outcome o = designer.designUnder(p, Double.POSITIVE_INFINITY);
+            if (o == null || !o.feasible()) {
+                own = null;
+                break;
+            }
+            int seg = segmentOf(p, n);
+            own.add(new Part(seg, partName(seg, n), p, o));
+            ownTotal += o.best().cost().total();
+        }
+        List<Part> without = own == null ? null : share(n, own, ownTotal, Double.POSITIVE_INFINITY);
+        double withoutTotal = without == null ? Double.POSITIVE_INFINITY : total(without);
+        double ceiling = Math.min(beat, withoutTotal);
+        // every part for every pair of percentages at its supports: alternating percentages along the line
+        // give every span each pair at its two supports
+        List<List<Double>> steps = steps(in);
+        int len = steps.stream().mapToInt(List::size).max().orElse(1);
+        List<SectionShape> shapes = new ArrayList<>();
+        for (int s = 0; s < n + 2; s++) {
+            shapes.add(t.shape());
+        }
+        java.util.Map<Integer, java.util.Map<List<Double>, SpanProblem>> variants = new java.util.TreeMap<>();
+        for (int a = 0; a < len; a++) {
+            for (int b = 0; b < len; b++) {
+                List<Double> v = new ArrayList<>();
+                for (int j = 0; j <= n; j++) {
+                    List<Double> sj = steps.get(j);
+                    v.add(sj.get(Math.min(j % 2 != 0 ? a : b, sj.size() - 1)));
+                }
+                for (SpanProblem p : analyse(in, shapes, ec, v).problems()) {
+                    int seg = segmentOf(p, n);
+                    int right = rightSupportOf(seg, n);
+                    double rRight = right < 0 ? 0.0 : v.get(right);
+                    List<Double> key = List.of(v.get(leftSupportOf(seg, n)), rRight);
+                    variants.computeIfAbsent(seg, k -> new java.util.LinkedHashMap<>())
+                            .putIfAbsent(key, heldAt(p, t.shape()));
+                }
+            }
+        }
+        double boundSum = 0;
+        for (double lb : t.lowerBounds()) {
+            boundSum += lb;
+        }
+        List<SharedSupports.PartOptions> options = new ArrayList<>();
+        for (var e : variants.entrySet()) {
+            int seg = e.getKey();
+            double limit = ceiling - (boundSum - t.lowerBounds().get(indexOf(t.problems(), seg, n)));
+            List<SharedSupports.Variant> vs = new ArrayList<>();
+            for (var v : e.getValue().entrySet()) {
+                SpanProblem p = v.getValue();
+                if (Double.isFinite(limit) && designer.leastCost(p) >= limit) {
+                    continue;
+                }
+                SpanGenerator g = designer.generator(p);
+                SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
+                vs.add(new SharedSupports.Variant(v.getKey().get(0), v.getKey().get(1), p, g, out.sets(), out.stats()));
+            }
+            options.add(new SharedSupports.PartOptions(seg, leftSupportOf(seg, n), rightSupportOf(seg, n), vs));
+        }
+        SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
+        List<Part> parts;
+        List<Double> chosen = none(in);
+        if (s != null && s.total() < withoutTotal - 1e-6 && s.total() <= ceiling * (1 + 1e-9)) {
+            parts = new ArrayList<>();
+            for (int k = 0; k < options.size(); k++) {
+                var pick = s.picks().get(k);
+                SpanProblem p = pick.variant().problem();
+                int seg = options.get(k).segment();
+                SpanLayout layout = pick.layout();
+                double c = layout.cost(p, designer.costModel()).total();
+                var proof = Proof.solved(
+                        Proof.Status.OPTIMAL,
+                        CostModel.SPAN_UNITS.units(c),
+                        CostModel.SPAN_UNITS.units(c),
+                        CostModel.SPAN_UNITS,
+                        Proof.SolverStats.NONE,
+                        new SpanDesigner.Search(pick.variant().stats(), 0, 0, true),
+                        designer.options());
+                parts.add(new Part(seg, partName(seg, n), p, designer.adopt(p, layout, proof)));
+                chosen.set(
+                        leftSupportOf(seg, n),
+                        Math.max(
+                                chosen.get(leftSupportOf(seg, n)),
+                                pick.variant().rLeft()));
+                if (rightSupportOf(seg, n) >= 0) {
+                    chosen.set(
+                            rightSupportOf(seg, n),
+                            Math.max(
+                                    chosen.get(rightSupportOf(seg, n)),
+                                    pick.variant().rRight()));
+                }
+            }
+        } else if (without != null && withoutTotal < beat - 1e-9) {
+            parts = without;
+        } else {
+            return null;
+        }
+        double total = total(parts);
+        if (total >= beat - 1e-9) {
+            return null;
+        }
+        Trial used =
+                new Trial(t.shape(), t.problems(), t.analysis(), t.coefficients(), chosen, t.bound(), t.lowerBounds());
+        return new Evaluated(used, parts, total, 1, supportStrains(in, parts), withoutTotal);
+    }
+
+    private static int indexOf(List<SpanProblem> problems, int seg, int n) {
+        for (int k = 0; k < problems.size(); k++) {
+            if (segmentOf(problems.get(k), n) == seg) {
+                return k;
+            }
+        }
+        throw new IllegalStateException("no part " + seg);
+    }
+
+    private static double total(List<Part> parts) {
+        double t = 0;
+        for (Part pt : parts) {
+            t += pt.outcome().best().cost().total();
+        }
+        return t;
     }
 
     /** Span by span: each part its own section, the line analysed again until the sections settle. */
@@ -514,7 +747,7 @@ public final class LineSpans {
         if (held != null) {
             parts.forEach(pt -> heldParts.add(pt.name()));
         }
-        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT, heldParts, null);
+        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT, heldParts, null, Double.NaN);
     }
 
     /** The segment's design in the previous round: a layout that may pass again, to bound the next search. */

@@ -1,5 +1,6 @@
 package barfit.design.line;
 
+import barfit.analysis.RedistributionLimit;
 import barfit.catalogs.BarSize;
 import barfit.design.span.FrameOptions;
 import barfit.design.span.MidOption;
@@ -8,6 +9,8 @@ import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
 import barfit.design.span.SpanVerifier;
 import barfit.design.span.SupportOption;
+import barfit.section.Flexure;
+import barfit.section.Stirrups;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -36,17 +39,38 @@ final class SharedSupports {
     static final List<Integer> NONE = List.of();
 
     /**
-     * One part's options at the line's section. {@code left} and {@code right}: the support (0..n, left to
-     * right) under the problem's left and right support sections, -1 where it has none.
+     * One part at the line's section. {@code left} and {@code right}: the support (0..n, left to right) at
+     * the part's left and right end, -1 where there is none (an overhang's tip). {@code variants}: the part's
+     * problem and options for each redistribution at its two end supports.
      */
-    record PartOptions(
-            int segment, SpanProblem problem, SpanGenerator generator, List<FrameOptions> sets, int left, int right) {}
+    record PartOptions(int segment, int left, int right, List<Variant> variants) {}
 
-    /** A part's combination: its frame's options, the mid-span option and its support options (or null). */
-    record Pick(FrameOptions set, MidOption mid, SupportOption left, SupportOption right, double cost) {
-        SpanLayout layout(SpanGenerator g) {
-            return g.layout(set.frame(), mid, left, right);
+    /**
+     * The part designed for the percentages redistributed at its left and right supports (6.6.5): its
+     * problem from that analysis, its generator and its frames' options.
+     */
+    record Variant(
+            double rLeft,
+            double rRight,
+            SpanProblem problem,
+            SpanGenerator generator,
+            List<FrameOptions> sets,
+            SpanGenerator.Stats stats) {}
+
+    /**
+     * A part's combination: its variant (the redistribution it was designed for), its frame's options, the
+     * mid-span option and its support options (or null).
+     */
+    record Pick(
+            Variant variant, FrameOptions set, MidOption mid, SupportOption left, SupportOption right, double cost) {
+        SpanLayout layout() {
+            return variant.generator().layout(set.frame(), mid, left, right);
         }
+    }
+
+    /** What is fixed at a support: its top bars ({@link #NONE} for none asked, null not yet) and percentage. */
+    private record Slot(List<Integer> bars, Double percent) {
+        static final Slot OPEN = new Slot(null, null);
     }
 
     /** The cheapest line: a pick per part (in the order given), the top bar size and the total. */
@@ -58,7 +82,8 @@ final class SharedSupports {
         Set<BarSize> bottoms = new LinkedHashSet<>();
         Set<Integer> continuous = new LinkedHashSet<>();
         for (PartOptions po : parts) {
-            for (FrameOptions fs : po.sets()) {
+            for (FrameOptions fs :
+                    po.variants().stream().flatMap(v -> v.sets().stream()).toList()) {
                 for (MidOption m : fs.mids()) {
                     tops.add(m.top().bar());
                     bottoms.add(m.bar());
@@ -66,11 +91,20 @@ final class SharedSupports {
                 }
             }
         }
+        // every part's cheapest combination per slots, by top size, continuous bars and bottom size, in one pass
+        List<Map<List<Object>, Map<Slot, Map<Slot, Pick>>>> byKind = new ArrayList<>();
+        for (PartOptions po : parts) {
+            byKind.add(tables(po));
+        }
         Solution best = null;
         for (BarSize top : tops) {
             for (int c : continuous) {
                 for (Predicate<BarSize> bottomOk : bottomRules(top, bottoms, maxBarSizes)) {
-                    Solution s = solve(parts, supports, top, c, bottomOk);
+                    List<Map<Slot, Map<Slot, Pick>>> tables = new ArrayList<>();
+                    for (int i = 0; i < parts.size(); i++) {
+                        tables.add(merged(byKind.get(i), top, c, bottomOk));
+                    }
+                    Solution s = solve(parts, supports, top, tables);
                     if (s != null && (best == null || s.total() < best.total() - 1e-9)) {
                         best = s;
                     }
@@ -78,6 +112,36 @@ final class SharedSupports {
             }
         }
         return best;
+    }
+
+    /**
+     * A part's table for one top size, continuous count (a cantilever's own count is free) and the bottom
+     * sizes allowed: per pair of slots the cheapest over the kinds that qualify, in a fixed order.
+     */
+    private static Map<Slot, Map<Slot, Pick>> merged(
+            Map<List<Object>, Map<Slot, Map<Slot, Pick>>> byKind,
+            BarSize top,
+            int continuous,
+            Predicate<BarSize> bottomOk) {
+        Map<Slot, Map<Slot, Pick>> out = new LinkedHashMap<>();
+        for (var kind : byKind.entrySet()) {
+            List<Object> k = kind.getKey();
+            int c = (Integer) k.get(1);
+            if (!k.get(0).equals(top) || c >= 0 && c != continuous || !bottomOk.test((BarSize) k.get(2))) {
+                continue;
+            }
+            for (var byLeft : kind.getValue().entrySet()) {
+                Map<Slot, Pick> row = out.computeIfAbsent(byLeft.getKey(), x -> new LinkedHashMap<>());
+                for (var e : byLeft.getValue().entrySet()) {
+                    Pick old = row.get(e.getKey());
+                    if (old == null || e.getValue().cost() < old.cost() - 1e-9) {
+                        row.put(e.getKey(), e.getValue());
+                    }
+                }
+            }
+        }
+        out.values().removeIf(Map::isEmpty);
+        return out;
     }
 
     /**
@@ -102,42 +166,39 @@ final class SharedSupports {
     }
 
     private static Solution solve(
-            List<PartOptions> parts, int supports, BarSize top, int continuous, Predicate<BarSize> bottomOk) {
-        List<Map<List<Integer>, Map<List<Integer>, Pick>>> tables = new ArrayList<>();
-        for (PartOptions po : parts) {
-            var t = table(po, top, continuous, bottomOk);
+            List<PartOptions> parts, int supports, BarSize top, List<Map<Slot, Map<Slot, Pick>>> tables) {
+        for (var t : tables) {
             if (t.isEmpty()) {
                 return null;
             }
-            tables.add(t);
         }
-        // what each support's arrangement must be: every part beside it asks for the same (NONE asks nothing)
-        // state: the arrangement over each support fixed so far, as the cheapest cost to reach it
-        Map<List<List<Integer>>, Double> costs = new LinkedHashMap<>();
-        Map<List<List<Integer>>, List<Pick>> picks = new HashMap<>();
-        List<List<Integer>> start = new ArrayList<>();
+        // the state: what is fixed over each support still touched by a later part, with the cheapest
+        // cost of the parts so far that reaches it
+        Map<List<Slot>, Double> costs = new LinkedHashMap<>();
+        Map<List<Slot>, List<Pick>> picks = new HashMap<>();
+        List<Slot> start = new ArrayList<>();
         for (int j = 0; j < supports; j++) {
-            start.add(null);
+            start.add(Slot.OPEN);
         }
         costs.put(start, 0.0);
         picks.put(start, List.of());
         for (int i = 0; i < parts.size(); i++) {
             PartOptions po = parts.get(i);
-            Map<List<List<Integer>>, Double> nextCosts = new LinkedHashMap<>();
-            Map<List<List<Integer>>, List<Pick>> nextPicks = new HashMap<>();
+            Map<List<Slot>, Double> nextCosts = new LinkedHashMap<>();
+            Map<List<Slot>, List<Pick>> nextPicks = new HashMap<>();
             for (var state : costs.entrySet()) {
                 for (var byLeft : tables.get(i).entrySet()) {
-                    List<List<Integer>> s1 = assign(state.getKey(), po.left(), byLeft.getKey());
+                    List<Slot> s1 = assign(state.getKey(), po.left(), byLeft.getKey());
                     if (s1 == null) {
                         continue;
                     }
                     for (var byRight : byLeft.getValue().entrySet()) {
-                        List<List<Integer>> s2 = assign(s1, po.right(), byRight.getKey());
+                        List<Slot> s2 = assign(s1, po.right(), byRight.getKey());
                         if (s2 == null) {
                             continue;
                         }
                         // supports no later part touches are settled: forget them, so states merge
-                        List<List<Integer>> key = forget(s2, parts, i + 1);
+                        List<Slot> key = forget(s2, parts, i + 1);
                         double c = state.getValue() + byRight.getValue().cost();
                         Double old = nextCosts.get(key);
                         if (old == null || c < old - 1e-9) {
@@ -155,7 +216,7 @@ final class SharedSupports {
                 return null;
             }
         }
-        List<List<Integer>> bestKey = null;
+        List<Slot> bestKey = null;
         for (var e : costs.entrySet()) {
             if (bestKey == null || e.getValue() < costs.get(bestKey) - 1e-9) {
                 bestKey = e.getKey();
@@ -165,81 +226,137 @@ final class SharedSupports {
     }
 
     /**
-     * The state with support {@code j} given {@code arrangement}: unchanged where the part has no support
-     * option there ({@code j} = -1 or NONE), null where a part beside it already fixed another.
+     * The state with support {@code j} given a part's slot there: the percentage must match what a part
+     * beside it fixed, and the bars too where both ask for bars (NONE asks for none); null where they clash.
      */
-    private static List<List<Integer>> assign(List<List<Integer>> state, int j, List<Integer> arrangement) {
-        if (j < 0 || arrangement == NONE) {
+    private static List<Slot> assign(List<Slot> state, int j, Slot slot) {
+        if (j < 0) {
             return state;
         }
-        List<Integer> fixed = state.get(j);
-        if (fixed != null) {
-            return fixed.equals(arrangement) ? state : null;
+        Slot fixed = state.get(j);
+        if (fixed.percent() != null && !fixed.percent().equals(slot.percent())) {
+            return null;
         }
-        List<List<Integer>> out = new ArrayList<>(state);
-        out.set(j, arrangement);
+        List<Integer> bars = fixed.bars();
+        if (slot.bars() != NONE) {
+            if (bars != null && bars != NONE && !bars.equals(slot.bars())) {
+                return null;
+            }
+            bars = slot.bars();
+        } else if (bars == null) {
+            bars = NONE;
+        }
+        Slot merged = new Slot(bars, slot.percent());
+        if (merged.equals(fixed)) {
+            return state;
+        }
+        List<Slot> out = new ArrayList<>(state);
+        out.set(j, merged);
         return out;
     }
 
-    /** The state with the supports that no part from {@code from} on touches set back to unknown. */
-    private static List<List<Integer>> forget(List<List<Integer>> state, List<PartOptions> parts, int from) {
-        List<List<Integer>> out = new ArrayList<>(state);
+    /** The state with the supports that no part from {@code from} on touches opened again. */
+    private static List<Slot> forget(List<Slot> state, List<PartOptions> parts, int from) {
+        List<Slot> out = new ArrayList<>(state);
         for (int j = 0; j < out.size(); j++) {
             boolean touched = false;
             for (int k = from; k < parts.size() && !touched; k++) {
                 touched = parts.get(k).left() == j || parts.get(k).right() == j;
             }
             if (!touched) {
-                out.set(j, null);
+                out.set(j, Slot.OPEN);
             }
         }
         return out;
     }
 
     /**
-     * A part's cheapest combination for each pair of arrangements over its left and right supports (NONE
-     * where it has no support option), with the top size and continuous bars given (a cantilever's own
-     * continuous bars are its own), bottom bars of an allowed size, and deflection computed where the
-     * frame is below Table 9.3.1.1.
+     * A part's cheapest combination for each pair of slots at its left and right supports (bars, NONE where
+     * it has no support option, and the percentage redistributed), per kind (top size, continuous bars, -1
+     * for a cantilever's own, bottom size), with deflection computed where the frame is below Table
+     * 9.3.1.1 and a redistribution only where the support section it lowers allows it (6.6.5: εt ≥ 0.0075,
+     * at most 1000 εt percent).
      */
-    private static Map<List<Integer>, Map<List<Integer>, Pick>> table(
-            PartOptions po, BarSize top, int continuous, Predicate<BarSize> bottomOk) {
-        SpanProblem p = po.problem();
-        SpanGenerator g = po.generator();
-        Map<List<Integer>, Map<List<Integer>, Pick>> out = new LinkedHashMap<>();
-        for (FrameOptions fs : po.sets()) {
-            for (MidOption m : fs.mids()) {
-                if (!m.top().bar().equals(top)
-                        || !p.cantilever() && m.top().continuous() != continuous
-                        || !bottomOk.test(m.bar())) {
-                    continue;
-                }
-                Map<List<Integer>, SupportOption> lefts =
-                        p.leftSupport() ? cheapestByArrangement(g, fs.lefts(), m, SpanProblem.Place.LEFT) : none();
-                Map<List<Integer>, SupportOption> rights =
-                        p.rightSupport() ? cheapestByArrangement(g, fs.rights(), m, SpanProblem.Place.RIGHT) : none();
-                double base = fs.frame().cost() + m.top().cost() + m.cost();
-                for (var l : lefts.entrySet()) {
-                    for (var r : rights.entrySet()) {
-                        double c = base
-                                + (l.getValue() == null ? 0 : l.getValue().cost())
-                                + (r.getValue() == null ? 0 : r.getValue().cost());
-                        Pick old = out.computeIfAbsent(l.getKey(), k -> new LinkedHashMap<>())
-                                .get(r.getKey());
-                        if (old != null && c >= old.cost() - 1e-9) {
-                            continue;
+    private static Map<List<Object>, Map<Slot, Map<Slot, Pick>>> tables(PartOptions po) {
+        Map<List<Object>, Map<Slot, Map<Slot, Pick>>> out = new LinkedHashMap<>();
+        for (Variant v : po.variants()) {
+            SpanProblem p = v.problem();
+            SpanGenerator g = v.generator();
+            Map<Object, Double> strains = new HashMap<>();
+            for (FrameOptions fs : v.sets()) {
+                Map<List<Object>, Map<List<Integer>, SupportOption>> leftMemo = new HashMap<>();
+                Map<List<Object>, Map<List<Integer>, SupportOption>> rightMemo = new HashMap<>();
+                for (MidOption m : fs.mids()) {
+                    List<Object> kind =
+                            List.of(m.top().bar(), p.cantilever() ? -1 : m.top().continuous(), m.bar());
+                    Map<Slot, Map<Slot, Pick>> table = out.computeIfAbsent(kind, k -> new LinkedHashMap<>());
+                    // the support options that fit depend on the mid-span option only through these
+                    List<Object> fit = java.util.Arrays.asList(
+                            m.top().bar(),
+                            m.top().continuous(),
+                            m.legsNeeded(),
+                            m.counts().get(0),
+                            p.bottomAnchored() ? m.bottom() : null);
+                    Map<List<Integer>, SupportOption> lefts = p.leftSupport()
+                            ? leftMemo.computeIfAbsent(
+                                    fit, k -> cheapestByArrangement(g, fs.lefts(), m, SpanProblem.Place.LEFT))
+                            : none();
+                    Map<List<Integer>, SupportOption> rights = p.rightSupport()
+                            ? rightMemo.computeIfAbsent(
+                                    fit, k -> cheapestByArrangement(g, fs.rights(), m, SpanProblem.Place.RIGHT))
+                            : none();
+                    double base = fs.frame().cost() + m.top().cost() + m.cost();
+                    for (var l : lefts.entrySet()) {
+                        Slot ls = new Slot(l.getKey(), v.rLeft());
+                        Map<Slot, Pick> row = table.computeIfAbsent(ls, k -> new LinkedHashMap<>());
+                        for (var r : rights.entrySet()) {
+                            Slot rs = new Slot(r.getKey(), v.rRight());
+                            double c = base
+                                    + (l.getValue() == null ? 0 : l.getValue().cost())
+                                    + (r.getValue() == null ? 0 : r.getValue().cost());
+                            Pick old = row.get(rs);
+                            if (old != null && c >= old.cost() - 1e-9) {
+                                continue;
+                            }
+                            Pick pick = new Pick(v, fs, m, l.getValue(), r.getValue(), c);
+                            if (!redistributionAllowed(pick, SpanProblem.Place.LEFT, v.rLeft(), strains)
+                                    || !redistributionAllowed(pick, SpanProblem.Place.RIGHT, v.rRight(), strains)) {
+                                continue;
+                            }
+                            if (fs.frame().deflection() && !SpanVerifier.deflectionOk(p, pick.layout())) {
+                                continue;
+                            }
+                            row.put(rs, pick);
                         }
-                        Pick pick = new Pick(fs, m, l.getValue(), r.getValue(), c);
-                        if (fs.frame().deflection() && !SpanVerifier.deflectionOk(p, pick.layout(g))) {
-                            continue;
-                        }
-                        out.get(l.getKey()).put(r.getKey(), pick);
                     }
                 }
             }
         }
-        out.values().removeIf(Map::isEmpty);
+        for (var t : out.values()) {
+            t.values().removeIf(Map::isEmpty);
+        }
         return out;
+    }
+
+    /**
+     * Whether the support section at {@code side} allows {@code percent} redistributed there (6.6.5):
+     * always for none, or where the part has no support bars there (no negative moment to lower); else its
+     * εt, from the section model's flexure of the section as built, remembered per frame and bars.
+     */
+    private static boolean redistributionAllowed(
+            Pick pick, SpanProblem.Place side, double percent, Map<Object, Double> strains) {
+        SupportOption s = side == SpanProblem.Place.LEFT ? pick.left() : pick.right();
+        if (percent == 0 || s == null) {
+            return true;
+        }
+        SpanProblem p = pick.variant().problem();
+        double epsT = strains.computeIfAbsent(List.of(pick.set().frame(), side, s.bar(), s.counts()), k -> {
+            SpanLayout l = pick.layout();
+            Stirrups any = l.zoneStirrups().get(0);
+            return Flexure.analyse(l.section(p, side, any), SpanLayout.bending(p, side))
+                    .epsT();
+        });
+        return percent <= RedistributionLimit.percent(epsT) + 1e-9;
     }
 
     private static Map<List<Integer>, SupportOption> none() {

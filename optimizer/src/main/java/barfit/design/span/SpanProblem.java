@@ -361,6 +361,36 @@ public record SpanProblem(
                 shearDiagram);
     }
 
+    /**
+     * The span with other moments at its support faces (a bound over several analyses, say): each null
+     * where the span has no support section there.
+     */
+    public SpanProblem withSupportMoments(Double left, Double right) {
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft == null ? null : left,
+                mMid,
+                mRight == null ? null : right,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
+                shearDiagram);
+    }
+
     public SpanProblem withFixedWidth(Double w) {
         return new SpanProblem(
                 id,

@@ -294,8 +294,8 @@ class LineSpansTest {
     @Test
     void redistributionOnlyWhereTheSupportSectionsAllowIt() throws IOException {
         // ACI 318-19 6.6.5.1 and 6.6.5.3: redistribution only where εt >= 0.0075 at the section, at most
-        // 1000 εt percent and 20 %. A heavily loaded line: its support sections end near εt = 0.0054, so the
-        // 20 % asked is not used; a lightly loaded one keeps min(asked, 1000 εt).
+        // 1000 εt percent and 20 %. A heavily loaded line: its support sections end near εt = 0.0054, so none
+        // of the 20 % allowed is used; a lightly loaded one chooses at most min(asked, 1000 εt).
         String heavy = """
                 units: SI
                 concrete: {fc: 30}
@@ -319,8 +319,9 @@ class LineSpansTest {
         assertTrue(l.settled());
         for (int j = 1; j <= 2; j++) {
             double e = l.epsT().get(j);
-            double expected = e < 0.0075 ? 0 : Math.min(10, 1000 * e);
-            assertEquals(expected, l.redistribution().get(j), 1e-9, "εt " + e);
+            // chosen by the search, within what the sections as built allow
+            double allowed = e < 0.0075 ? 0 : Math.min(10, 1000 * e);
+            assertTrue(l.redistribution().get(j) <= allowed + 1e-9, "εt " + e + ": " + l.redistribution());
         }
         assertTrue(l.epsT().get(1) >= 0.0075, "a light line is ductile enough to redistribute: " + l.epsT());
     }

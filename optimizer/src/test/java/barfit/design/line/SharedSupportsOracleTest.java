@@ -128,6 +128,14 @@ class SharedSupportsOracleTest {
      * bar sizes along the line. Each part's table comes from plain enumeration of its space.
      */
     private long cheapestCombination(List<SpanProblem> problems, int n, int maxSizes) {
+        return cheapestCombination(problems, n, maxSizes, (p, l) -> true);
+    }
+
+    private long cheapestCombination(
+            List<SpanProblem> problems,
+            int n,
+            int maxSizes,
+            java.util.function.BiPredicate<SpanProblem, SpanLayout> allowed) {
         SpanExhaustive oracle = new SpanExhaustive(costModel);
         List<SpanProblem> parts = new ArrayList<>(problems);
         parts.sort(java.util.Comparator.comparingInt(p -> LineSpans.segmentOf(p, n)));
@@ -135,7 +143,11 @@ class SharedSupportsOracleTest {
         List<Map<Key, Long>> tables = new ArrayList<>();
         for (SpanProblem p : parts) {
             Map<Key, Long> t = new HashMap<>();
-            oracle.cheapestBy(p, SharedSupportsOracleTest::key).forEach((k, r) -> t.put(k, r.units()));
+            oracle.cheapestBy(p, SharedSupportsOracleTest::key).forEach((k, r) -> {
+                if (allowed.test(p, r.best())) {
+                    t.put(k, r.units());
+                }
+            });
             if (t.isEmpty()) {
                 return Long.MAX_VALUE; // this part has no passing layout at this section
             }
@@ -145,6 +157,92 @@ class SharedSupportsOracleTest {
         long[] best = {Long.MAX_VALUE};
         choose(segments, tables, 0, new ArrayList<>(), n, maxSizes, best);
         return best[0];
+    }
+
+    @Test
+    void redistributionChosenWithTheBarsIsTheCheapestByPlainEnumeration() throws IOException {
+        // two-span invented lines asking up to 10 %: the oracle analyses the line at each section for each
+        // percentage at the middle support (0, 5, 10), keeps the layouts whose support sections allow it
+        // (6.6.5: εt >= 0.0075 and at most 1000 εt percent, from the section model's flexure of the section
+        // as built) and combines them as above; the line's design must cost the cheapest of all
+        int instances = Integer.getInteger("line.redistribution.instances", 8);
+        Random rnd = new Random(Long.getLong("line.seed", 1407) + 1);
+        int compared = 0;
+        int redistributed = 0;
+        for (int i = 0; i < instances; i++) {
+            double a = 5.0 + 0.5 * rnd.nextInt(5);
+            double b = 5.0 + 0.5 * rnd.nextInt(5);
+            String yaml = """
+                    units: SI
+                    concrete: {fc: 28}
+                    steel: {fy: 420}
+                    search:
+                      widths: [300]
+                      depth: {min: 400, max: 550, step: 50}
+                      bar_sizes: ["16", "19", "22"]
+                      max_layers: 1
+                      stirrups: {sizes: ["10"], legs: [2], spacing: {min: 100, max: 300, step: 50}}
+                    lines:
+                      - id: Q
+                        spans: [%s, %s]
+                        supports: [{width: 300, kind: wall}]
+                        loads: {dead: %d, live: %d}
+                        section: {width: 300, height: 450}
+                        redistribution: [0, 10, 0]
+                    """.formatted(a, b, 8 + rnd.nextInt(16), 4 + rnd.nextInt(10));
+            LineSpans.Result line = design(yaml);
+            long oracle = Long.MAX_VALUE;
+            for (int h = 400; h <= 550; h += 50) {
+                SectionShape shape = new SectionShape(300, h, null);
+                for (double r : new double[] {0, 5, 10}) {
+                    var problems = lines.problemsAt(input, shape, List.of(0.0, r, 0.0));
+                    oracle = Math.min(oracle, cheapestCombination(problems, 2, 2, (p, l) -> supportAllows(p, l, r)));
+                }
+            }
+            String where = "line " + i + ": " + yaml;
+            if (oracle == Long.MAX_VALUE) {
+                assertTrue(line.oneSection() == null || line.oneSection().fellBack(), "no line — " + where);
+                continue;
+            }
+            long total = 0;
+            for (LineSpans.Part p : line.parts()) {
+                total += CostModel.units(p.outcome().best().cost().total());
+            }
+            assertEquals(oracle, total, "line cost — " + where);
+            if (line.redistribution().get(1) > 0) {
+                redistributed++;
+                assertTrue(line.withoutRedistribution() > sum(line), "it pays — " + where);
+            }
+            compared++;
+        }
+        System.out.println("redistribution oracle: " + compared + " lines compared, " + redistributed
+                + " with some redistribution chosen");
+        assertTrue(compared >= instances / 2, "enough lines with a design: " + compared);
+    }
+
+    private static double sum(LineSpans.Result r) {
+        double t = 0;
+        for (LineSpans.Part p : r.parts()) {
+            t += p.outcome().best().cost().total();
+        }
+        return t;
+    }
+
+    /** Whether the part's support sections beside the middle support allow {@code percent} there (6.6.5). */
+    private static boolean supportAllows(SpanProblem p, SpanLayout l, double percent) {
+        if (percent == 0) {
+            return true;
+        }
+        // the middle support is span 1's right end and span 2's left end
+        SpanProblem.Place side = p.id().endsWith("/span 1") ? SpanProblem.Place.RIGHT : SpanProblem.Place.LEFT;
+        if (side == SpanProblem.Place.RIGHT ? !p.rightSupport() : !p.leftSupport()) {
+            return true;
+        }
+        double epsT = barfit.section.Flexure.analyse(
+                        l.section(p, side, l.zoneStirrups().get(0)), SpanLayout.bending(p, side))
+                .epsT();
+        // 6.6.5.1 and 6.6.5.3, ACI 318-19: at least 0.0075, and at most 1000 εt percent
+        return epsT >= 0.0075 && percent <= 1000 * epsT + 1e-9;
     }
 
     private static Key key(SpanLayout l) {
