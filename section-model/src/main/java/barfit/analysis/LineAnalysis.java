@@ -21,8 +21,9 @@ import org.apache.commons.math3.linear.RealMatrix;
  * arranged as 6.4.2 permits for beams: on all spans, on alternate spans (both sets), on the two spans
  * beside each interior support, on each span alone, and on either half of each span alone (which gives
  * the shear near mid-span that full-span arrangements miss); each overhang loaded or not. Redistribution
- * (6.6.5) reduces the negative moment at a support by its percentage in each arrangement before the
- * envelope is taken, the span moments and shears following by equilibrium.
+ * (6.6.5) reduces the negative moment at a support by its percentage in each factored arrangement before
+ * the envelope is taken, the span moments and shears following by equilibrium; the service arrangements
+ * (deflection) keep their elastic moments.
  */
 public final class LineAnalysis {
     /** Stations along every span at least (the code asks enough to find every maximum). */
@@ -39,9 +40,18 @@ public final class LineAnalysis {
     record EndMoments(double[] left, double[] right) {}
 
     /** A factored combination of basic cases; {@code nz} the cases it takes (non-zero factors), in order. */
-    record Combo(String name, double[] coef, int[] nz) {
+    /**
+     * A combination of the basic cases: its name, factor per case and the cases with a factor; {@code
+     * factored} for the strength combinations of 5.3.1, false for the service arrangements, to which
+     * redistribution (6.6.5, a strength provision) does not apply: deflection takes the elastic moments.
+     */
+    record Combo(String name, double[] coef, int[] nz, boolean factored) {
         Combo(String name, double[] coef) {
-            this(name, coef, nonZero(coef));
+            this(name, coef, nonZero(coef), true);
+        }
+
+        Combo(String name, double[] coef, boolean factored) {
+            this(name, coef, nonZero(coef), factored);
         }
 
         private static int[] nonZero(double[] coef) {
@@ -250,7 +260,7 @@ public final class LineAnalysis {
                 k[i] = c.coef()[i] == 0 ? 0 : 1;
             }
             String name = c.name().equals("1.4D") ? "D" : c.name().replace("1.2D+1.6L", "D+L");
-            out.add(new Combo(name, k));
+            out.add(new Combo(name, k, false));
         }
         return out;
     }

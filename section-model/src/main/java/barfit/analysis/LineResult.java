@@ -369,8 +369,9 @@ public record LineResult(
         }
 
         /**
-         * A span's end moments in an arrangement, after redistribution (6.6.5): a negative moment at a
-         * support is reduced by that support's percentage; the span follows by equilibrium.
+         * A span's end moments in an arrangement, after redistribution (6.6.5) in a factored one: a negative
+         * moment at a support is reduced by that support's percentage; the span follows by equilibrium. The
+         * service arrangements keep their elastic moments (deflection, 24.2).
          */
         private final java.util.Map<LineAnalysis.Combo, double[][]> endsMemo = new java.util.IdentityHashMap<>();
 
@@ -389,7 +390,7 @@ public record LineResult(
                 left += co.coef()[i] * ends[i].left()[segment];
                 right += co.coef()[i] * ends[i].right()[segment];
             }
-            if (isSpan(line, segment)) {
+            if (co.factored() && isSpan(line, segment)) {
                 double pl = line.redistributionAt(segment - 1) / 100;
                 double pr = line.redistributionAt(segment) / 100;
                 if (left < 0) {

@@ -315,6 +315,12 @@ class LineAnalysisTest {
         LineResult b = LineAnalysis.analyse(red);
         assertEquals(0.9 * envelopeMinAt(a, L), envelopeMinAt(b, L), 1e-6 * W * L * L);
         assertTrue(spanMax(b, 1) > spanMax(a, 1));
+        // 6.6.5 is a strength provision: the service moments that deflection (24.2) reads stay elastic
+        var sa = a.spans().get(0);
+        var sb = b.spans().get(0);
+        assertEquals(sa.deadRight(), sb.deadRight(), 1e-9 * W * L * L);
+        assertEquals(sa.deflectionRight(), sb.deflectionRight(), 1e-9 * W * L * L);
+        assertEquals(sa.deflectionMid(), sb.deflectionMid(), 1e-9 * W * L * L);
     }
 
     @Test
