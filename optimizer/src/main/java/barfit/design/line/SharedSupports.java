@@ -96,19 +96,41 @@ final class SharedSupports {
         for (PartOptions po : parts) {
             byKind.add(tables(po));
         }
-        Solution best = null;
+        // each choice of sizes and hangers with its tables and a bound (every part at its cheapest entry),
+        // searched cheapest bound first so that the rest stop at the first bound past the best line found
+        record Choice(BarSize top, List<Map<Slot, Map<Slot, Pick>>> tables, double bound, int order) {}
+        List<Choice> choices = new ArrayList<>();
         for (BarSize top : tops) {
             for (int c : continuous) {
                 for (Predicate<BarSize> bottomOk : bottomRules(top, bottoms, maxBarSizes)) {
                     List<Map<Slot, Map<Slot, Pick>>> tables = new ArrayList<>();
+                    double bound = 0;
                     for (int i = 0; i < parts.size(); i++) {
-                        tables.add(merged(byKind.get(i), top, c, bottomOk));
+                        var t = merged(byKind.get(i), top, c, bottomOk);
+                        tables.add(t);
+                        double least = Double.POSITIVE_INFINITY;
+                        for (var row : t.values()) {
+                            for (Pick p : row.values()) {
+                                least = Math.min(least, p.cost());
+                            }
+                        }
+                        bound += least;
                     }
-                    Solution s = solve(parts, supports, top, tables);
-                    if (s != null && (best == null || s.total() < best.total() - 1e-9)) {
-                        best = s;
+                    if (Double.isFinite(bound)) {
+                        choices.add(new Choice(top, tables, bound, choices.size()));
                     }
                 }
+            }
+        }
+        choices.sort(java.util.Comparator.comparingDouble(Choice::bound).thenComparingInt(Choice::order));
+        Solution best = null;
+        for (Choice ch : choices) {
+            if (best != null && ch.bound() >= best.total() - 1e-9) {
+                break;
+            }
+            Solution s = solve(parts, supports, ch.top(), ch.tables());
+            if (s != null && (best == null || s.total() < best.total() - 1e-9)) {
+                best = s;
             }
         }
         return best;
