@@ -243,10 +243,22 @@ final class BenchCommand implements Callable<Integer> {
                 ", \"line_analysis_ms_median\": %.3f, \"line_analysis_cpu_ms_median\": %.3f",
                 la.msMedian(),
                 la.cpuMsMedian());
+        var l0 = barfit.bench.LineDesignBench.run(5, "0");
+        out.printf(
+                Locale.ROOT,
+                "line design (four spans on columns, one section, default space, no redistribution): "
+                        + "median %.0f ms (max %.0f ms; CPU %.0f ms) over %d runs; cost %.2f; every part optimal: %s%n",
+                l0.msMedian(),
+                l0.msMax(),
+                l0.cpuMsMedian(),
+                l0.runs(),
+                l0.cost(),
+                l0.optimal());
+        beamJson += String.format(Locale.ROOT, ", \"line_design_no_redistribution_ms_median\": %.1f", l0.msMedian());
         var ld = barfit.bench.LineDesignBench.run(5, "20");
         out.printf(
                 Locale.ROOT,
-                "line design (four spans on columns, one section, default space, redistribution up to 20 %%): "
+                "line design (the same, redistribution chosen at each support, 0 to 20 %%): "
                         + "median %.0f ms (max %.0f ms; CPU %.0f ms) over %d runs; cost %.2f; every part optimal: %s%n",
                 ld.msMedian(),
                 ld.msMax(),

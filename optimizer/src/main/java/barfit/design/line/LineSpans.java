@@ -555,21 +555,6 @@ public final class LineSpans {
      */
     private Evaluated evaluateChoosing(LineInput in, Trial t, double ec, double beat) {
         int n = in.spans().size();
-        List<Part> own = new ArrayList<>();
-        double ownTotal = 0;
-        for (SpanProblem p : t.problems()) {
-            SpanDesigner.Outcome o = designer.designUnder(p, Double.POSITIVE_INFINITY);
-            if (o == null || !o.feasible()) {
-                own = null;
-                break;
-            }
-            int seg = segmentOf(p, n);
-            own.add(new Part(seg, partName(seg, n), p, o));
-            ownTotal += o.best().cost().total();
-        }
-        List<Part> without = own == null ? null : share(n, own, ownTotal, Double.POSITIVE_INFINITY);
-        double withoutTotal = without == null ? Double.POSITIVE_INFINITY : total(without);
-        double ceiling = Math.min(beat, withoutTotal);
         // every part for every pair of percentages at its supports: alternating percentages along the line
         // give every span each pair at its two supports
         List<List<Double>> steps = steps(in);
@@ -596,23 +581,59 @@ public final class LineSpans {
                 }
             }
         }
+        // per variant the generator's sharper bound; per part the least over its variants holds whatever
+        // is chosen, and the frame is searched only where their sum could beat what is known
+        java.util.Map<Integer, java.util.Map<List<Double>, SpanGenerator>> generators = new java.util.TreeMap<>();
+        java.util.Map<Integer, java.util.Map<List<Double>, Double>> bounds = new java.util.TreeMap<>();
+        java.util.Map<Integer, Double> least = new java.util.TreeMap<>();
         double boundSum = 0;
-        for (double lb : t.lowerBounds()) {
+        for (var e : variants.entrySet()) {
+            double lb = Double.POSITIVE_INFINITY;
+            for (var v : e.getValue().entrySet()) {
+                SpanGenerator g = designer.generator(v.getValue());
+                double b = g.sharpLeastCost();
+                generators
+                        .computeIfAbsent(e.getKey(), k -> new java.util.LinkedHashMap<>())
+                        .put(v.getKey(), g);
+                bounds.computeIfAbsent(e.getKey(), k -> new java.util.LinkedHashMap<>())
+                        .put(v.getKey(), b);
+                lb = Math.min(lb, b);
+            }
+            least.put(e.getKey(), lb);
             boundSum += lb;
         }
+        if (boundSum >= beat - 1e-9) {
+            return null;
+        }
+        // the line with no redistribution: each part's own optimum, then the support bars shared
+        List<Part> own = new ArrayList<>();
+        double ownTotal = 0;
+        for (SpanProblem p : t.problems()) {
+            SpanDesigner.Outcome o = designer.designUnder(p, Double.POSITIVE_INFINITY);
+            if (o == null || !o.feasible()) {
+                own = null;
+                break;
+            }
+            int seg = segmentOf(p, n);
+            own.add(new Part(seg, partName(seg, n), p, o));
+            ownTotal += o.best().cost().total();
+        }
+        List<Part> without = own == null ? null : share(n, own, ownTotal, Double.POSITIVE_INFINITY);
+        double withoutTotal = without == null ? Double.POSITIVE_INFINITY : total(without);
+        double ceiling = Math.min(beat, withoutTotal);
         List<SharedSupports.PartOptions> options = new ArrayList<>();
         for (var e : variants.entrySet()) {
             int seg = e.getKey();
-            double limit = ceiling - (boundSum - t.lowerBounds().get(indexOf(t.problems(), seg, n)));
+            double limit = ceiling - (boundSum - least.get(seg));
             List<SharedSupports.Variant> vs = new ArrayList<>();
             for (var v : e.getValue().entrySet()) {
-                SpanProblem p = v.getValue();
-                if (Double.isFinite(limit) && designer.leastCost(p) >= limit) {
+                if (Double.isFinite(limit) && bounds.get(seg).get(v.getKey()) >= limit) {
                     continue;
                 }
-                SpanGenerator g = designer.generator(p);
+                SpanGenerator g = generators.get(seg).get(v.getKey());
                 SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
-                vs.add(new SharedSupports.Variant(v.getKey().get(0), v.getKey().get(1), p, g, out.sets(), out.stats()));
+                vs.add(new SharedSupports.Variant(
+                        v.getKey().get(0), v.getKey().get(1), v.getValue(), g, out.sets(), out.stats()));
             }
             options.add(new SharedSupports.PartOptions(seg, leftSupportOf(seg, n), rightSupportOf(seg, n), vs));
         }

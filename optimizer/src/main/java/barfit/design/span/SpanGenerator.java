@@ -148,6 +148,22 @@ public final class SpanGenerator {
     }
 
     /**
+     * A tighter lower bound on any design of the span than {@link #leastCost}, still without searching
+     * bars: per frame the greater of its first bound and its bounds per pair of bar sizes
+     * ({@link FrameBounds#least}), the least over the frames.
+     */
+    public double sharpLeastCost() {
+        double least = Double.POSITIVE_INFINITY;
+        for (SpanFrame f : frames()) {
+            if (!(f.lowerBound() < least)) {
+                continue;
+            }
+            least = Math.min(least, Math.max(f.lowerBound(), bounds(f).least(OptionGenerator.tops(ctx, f))));
+        }
+        return least;
+    }
+
+    /**
      * A frame's bounds; those of the last frame asked about are kept, so that a frame bounded and then
      * evaluated computes them once.
      */
