@@ -119,11 +119,11 @@ public final class DesignText {
                     }
                 }
                 if (lp.chosen()) {
-                    out.append("  with no redistribution the line would cost, at this section, ")
+                    out.append("  with no redistribution the cheapest line ")
                             .append(
                                     Double.isInfinite(lp.withoutRedistribution())
-                                            ? "nothing: it has no design at this section"
-                                            : String.format(Locale.ROOT, "%.2f", lp.withoutRedistribution()))
+                                            ? "does not exist: no section carries it"
+                                            : "costs " + String.format(Locale.ROOT, "%.2f", lp.withoutRedistribution()))
                             .append('\n');
                 }
             }

@@ -257,15 +257,23 @@ public final class LineSpans {
         }
         trials.sort(java.util.Comparator.comparingDouble(Trial::bound));
         Evaluated best = null;
-        int designed = 0;
-        for (Trial t : trials) {
-            if (best != null && t.bound() >= best.total() - 1e-9) {
-                break;
+        java.util.Set<SectionShape> designedShapes = new java.util.HashSet<>();
+        double without = Double.NaN;
+        // choosing the redistribution: the line with none first, whose best bounds every section after
+        for (boolean choose : choosing(in) ? new boolean[] {false, true} : new boolean[] {false}) {
+            if (choose) {
+                without = best == null ? Double.POSITIVE_INFINITY : best.total();
             }
-            designed++;
-            Evaluated e = evaluate(in, t, ec, best == null ? Double.POSITIVE_INFINITY : best.total(), 0);
-            if (e != null && (best == null || e.total() < best.total() - 1e-9)) {
-                best = e;
+            for (Trial t : trials) {
+                if (best != null && t.bound() >= best.total() - 1e-9) {
+                    break;
+                }
+                designedShapes.add(t.shape());
+                double beat = best == null ? Double.POSITIVE_INFINITY : best.total();
+                Evaluated e = choose ? evaluateChoosing(in, t, ec, beat) : evaluate(in, t, ec, beat, 0);
+                if (e != null && (best == null || e.total() < best.total() - 1e-9)) {
+                    best = e;
+                }
             }
         }
         if (best == null) {
@@ -291,8 +299,8 @@ public final class LineSpans {
                 best.trial().redistribution(),
                 best.epsT(),
                 List.of(),
-                new OneSection(trials.size(), designed, false),
-                best.withoutRedistribution());
+                new OneSection(trials.size(), designedShapes.size(), false),
+                without);
     }
 
     /**
@@ -346,16 +354,8 @@ public final class LineSpans {
             double bound,
             List<Double> lowerBounds) {}
 
-    /**
-     * The parts designed at a trial's section, their total cost, the rounds redistribution took, and where
-     * the search chose the redistribution what the line would cost with none (NaN otherwise).
-     */
-    private record Evaluated(
-            Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT, double withoutRedistribution) {
-        Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {
-            this(trial, parts, total, rounds, epsT, Double.NaN);
-        }
-    }
+    /** The parts designed at a trial's section, their total cost, the rounds redistribution took. */
+    private record Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {}
 
     private Trial trial(LineInput in, SectionShape shape, double ec, List<Double> red) {
         int n = in.spans().size();
@@ -397,9 +397,6 @@ public final class LineSpans {
      * no design at this section or the total cannot beat {@code beat}.
      */
     private Evaluated evaluate(LineInput in, Trial t, double ec, double beat, int alternatives) {
-        if (choosing(in) && alternatives == 0) {
-            return evaluateChoosing(in, t, ec, beat);
-        }
         int n = in.spans().size();
         int rounds = 0;
         Trial current = t;
@@ -605,26 +602,12 @@ public final class LineSpans {
         if (boundSum >= beat - 1e-9) {
             return null;
         }
-        // the line with no redistribution: each part's own optimum, then the support bars shared
-        List<Part> own = new ArrayList<>();
-        double ownTotal = 0;
-        for (SpanProblem p : t.problems()) {
-            SpanDesigner.Outcome o = designer.designUnder(p, Double.POSITIVE_INFINITY);
-            if (o == null || !o.feasible()) {
-                own = null;
-                break;
-            }
-            int seg = segmentOf(p, n);
-            own.add(new Part(seg, partName(seg, n), p, o));
-            ownTotal += o.best().cost().total();
-        }
-        List<Part> without = own == null ? null : share(n, own, ownTotal, Double.POSITIVE_INFINITY);
-        double withoutTotal = without == null ? Double.POSITIVE_INFINITY : total(without);
-        double ceiling = Math.min(beat, withoutTotal);
+        // beat: the cheapest line found, at least the cheapest with no redistribution (searched first); a
+        // line under it leaves every part under its share, so the options under those shares hold it
         List<SharedSupports.PartOptions> options = new ArrayList<>();
         for (var e : variants.entrySet()) {
             int seg = e.getKey();
-            double limit = ceiling - (boundSum - least.get(seg));
+            double limit = beat - (boundSum - least.get(seg));
             List<SharedSupports.Variant> vs = new ArrayList<>();
             for (var v : e.getValue().entrySet()) {
                 if (Double.isFinite(limit) && bounds.get(seg).get(v.getKey()) >= limit) {
@@ -640,7 +623,7 @@ public final class LineSpans {
         SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
         List<Part> parts;
         List<Double> chosen = none(in);
-        if (s != null && s.total() < withoutTotal - 1e-6 && s.total() <= ceiling * (1 + 1e-9)) {
+        if (s != null && s.total() < beat - 1e-6) {
             parts = new ArrayList<>();
             for (int k = 0; k < options.size(); k++) {
                 var pick = s.picks().get(k);
@@ -670,8 +653,6 @@ public final class LineSpans {
                                     pick.variant().rRight()));
                 }
             }
-        } else if (without != null && withoutTotal < beat - 1e-9) {
-            parts = without;
         } else {
             return null;
         }
@@ -681,7 +662,7 @@ public final class LineSpans {
         }
         Trial used =
                 new Trial(t.shape(), t.problems(), t.analysis(), t.coefficients(), chosen, t.bound(), t.lowerBounds());
-        return new Evaluated(used, parts, total, 1, supportStrains(in, parts), withoutTotal);
+        return new Evaluated(used, parts, total, 1, supportStrains(in, parts));
     }
 
     private static int indexOf(List<SpanProblem> problems, int seg, int n) {
