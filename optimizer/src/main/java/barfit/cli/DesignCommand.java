@@ -5,6 +5,7 @@ import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
 import barfit.design.SolverOptions;
+import barfit.design.line.LineCapacity;
 import barfit.design.line.LineSpans;
 import barfit.design.section.SectionDesigner;
 import barfit.design.section.SectionProblem;
@@ -18,6 +19,9 @@ import barfit.input.LinesReader;
 import barfit.report.DesignItem;
 import barfit.report.DesignJson;
 import barfit.report.DesignText;
+import barfit.report.EnvelopePlot;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -65,10 +69,23 @@ final class DesignCommand implements Callable<Integer> {
             description = "add the checks table and calculation trail of each chosen layout")
     boolean trail;
 
+    @Option(
+            names = "--plot",
+            paramLabel = "DIR",
+            description = "write each line's moment envelope with the φMn of its bars as designed "
+                    + "(<id>-capacity.svg) into DIR (created if missing; existing plots are kept unless --force)")
+    Path plot;
+
+    @Option(names = "--force", description = "replace plot files that exist")
+    boolean force;
+
     @Override
-    public Integer call() {
+    public Integer call() throws java.io.IOException {
         if (alternatives < 0 || alternatives > 20) {
             throw OptionError.of("--alternatives", "expected 0 to 20, got " + alternatives);
+        }
+        if (force && plot == null) {
+            throw OptionError.of("--force", "has nothing to replace without --plot DIR");
         }
         SolverOptions options = solver.options();
         DesignInput input = DesignInputReader.read(file, false);
@@ -93,6 +110,7 @@ final class DesignCommand implements Callable<Integer> {
             }
         }
         var settings = input.settings();
+        List<Path> plots = plotTargets(lines);
         CostModel cost = new CostModel(
                 input.rates(), settings.detailing().cover(), settings.units().code());
         SectionDesigner designer = new SectionDesigner(cost, options);
@@ -106,8 +124,20 @@ final class DesignCommand implements Callable<Integer> {
         }
         LineSpans byLine =
                 new LineSpans(settings, input.space(), spans, input.maxBarSizesPerBeam(), input.barsPerTwoLegs());
+        int k = 0;
         for (LineInput l : lines) {
             LineSpans.Result r = byLine.design(l, alternatives);
+            if (plot != null) {
+                var capacity = LineCapacity.of(r);
+                if (capacity != null) {
+                    Files.createDirectories(plot);
+                    Files.writeString(
+                            plots.get(k),
+                            EnvelopePlot.capacitySvg(r.analysis(), capacity, l.id(), settings.units()),
+                            StandardCharsets.UTF_8);
+                }
+                k++;
+            }
             List<String> undesigned = r.parts().stream()
                     .filter(pt -> !pt.outcome().feasible())
                     .map(LineSpans.Part::name)
@@ -161,5 +191,26 @@ final class DesignCommand implements Callable<Integer> {
                 b.width(),
                 b.flange(),
                 length);
+    }
+
+    /** Where each line's plot goes; refused before any design where one exists and --force is not given. */
+    private List<Path> plotTargets(List<LineInput> lines) {
+        List<Path> out = new ArrayList<>();
+        if (plot == null) {
+            return out;
+        }
+        if (Files.exists(plot) && !Files.isDirectory(plot)) {
+            throw new InputError(Location.ofFile(plot.toString()), "is a file; expected a folder for the plots");
+        }
+        for (LineInput l : lines) {
+            Path p = plot.resolve(l.id().replaceAll("[^A-Za-z0-9._-]", "_") + "-capacity.svg");
+            if (Files.exists(p) && !force) {
+                throw new InputError(
+                        Location.ofFile(p.toString()),
+                        "exists; expected a new folder, or --force to replace the plots");
+            }
+            out.add(p);
+        }
+        return out;
     }
 }
