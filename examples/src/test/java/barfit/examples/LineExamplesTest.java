@@ -49,8 +49,13 @@ class LineExamplesTest {
                 Files.readString(Path.of("lines/L1-B-envelope.svg")),
                 Files.readString(dir.resolve("L1-B-envelope.svg")),
                 "regenerate with ./barfit analyse " + FILE + " --line L1-B --plot examples/lines --force");
-        Cli design = Cli.run("design", FILE);
+        Path designPlots = dir.resolve("design");
+        Cli design = Cli.run("design", FILE, "--plot", designPlots.toString());
         assertEquals(0, design.exit(), design.err());
+        assertEquals(
+                Files.readString(Path.of("lines/L1-B-capacity.svg")),
+                Files.readString(designPlots.resolve("L1-B-capacity.svg")),
+                "regenerate with ./barfit design " + FILE + " --plot DIR and copy L1-B-capacity.svg");
         assertTrue(design.out().contains("Line L1-B: one section for the whole line"));
         assertTrue(design.out().contains("Line L1-4: designed span by span from its analysis"));
         Golden.check("lines/ashgrove-depot-lines-si.design.txt", design.out());
