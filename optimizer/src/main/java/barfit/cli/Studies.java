@@ -14,6 +14,7 @@ import barfit.input.DesignInputReader;
 import barfit.input.LineInput;
 import barfit.input.LinesReader;
 import barfit.section.trail.Dim;
+import barfit.study.LineTarget;
 import barfit.study.Say;
 import barfit.study.SectionTarget;
 import barfit.study.SpanTarget;
@@ -65,6 +66,12 @@ final class Studies {
                 ids.add(l.id());
                 boolean whole = beam == null || beam.equals(l.id());
                 if (!whole && !beam.startsWith(l.id() + "/")) {
+                    continue;
+                }
+                if (whole && l.oneSection()) {
+                    // one set of forms: the line is studied as one object, the cap on its whole depth
+                    out.add(new LineTarget(
+                            l, in.settings(), in.space(), in.maxBarSizesPerBeam(), in.barsPerTwoLegs(), options));
                     continue;
                 }
                 for (LineSpans.Part part : byLine.design(l, 0).parts()) {

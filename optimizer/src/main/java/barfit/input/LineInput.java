@@ -72,6 +72,25 @@ public record LineInput(
         redistribution = List.copyOf(redistribution);
     }
 
+    /** The line under another headroom cap for its whole depth (null for none). */
+    public LineInput withMaxDepth(Double cap) {
+        return new LineInput(
+                id,
+                location,
+                spans,
+                overhangLeft,
+                overhangRight,
+                supports,
+                loads,
+                section,
+                sustainedLive,
+                coefficients,
+                redistribution,
+                unitWeight,
+                cap,
+                oneSection);
+    }
+
     /** The web's own weight per length, N/mm (gross concrete section, flange counted as given in the section). */
     public double selfWeight(SectionShape shape) {
         return unitWeight * shape.grossArea();

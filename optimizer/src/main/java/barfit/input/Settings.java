@@ -26,6 +26,11 @@ public record Settings(
     }
 
     /** The same settings with another stirrup bar: a beam's own stirrups place its bars. */
+    /** The same settings with other materials (a study's f'c). */
+    public Settings withMaterials(Materials m) {
+        return new Settings(file, units, m, catalog, detailing, location);
+    }
+
     public Settings withStirrupBar(BarSize bar) {
         return bar.equals(detailing.stirrupBar())
                 ? this

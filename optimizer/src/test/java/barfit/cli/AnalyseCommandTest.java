@@ -87,37 +87,4 @@ class AnalyseCommandTest {
         assertEquals(2, again.exit());
         assertTrue(again.err().contains("--force"), again.err());
     }
-
-    @Test
-    void designPlotsEachLinesStrengthOverItsEnvelope() throws IOException {
-        // invented two-span line: design --plot writes the capacity plot, keeps it on a second run
-        // (exit 2, no stack trace) and replaces it with --force
-        Path f = write("two.yaml", """
-                units: SI
-                concrete: {fc: 30}
-                steel: {fy: 420}
-                search:
-                  widths: [300]
-                  depth: {min: 500, max: 600, step: 50}
-                lines:
-                  - id: D-2
-                    spans: [6.0, 6.0]
-                    supports: [{width: 300, kind: wall}]
-                    loads: {dead: 15, live: 8}
-                    section: {width: 300, height: 550}
-                """);
-        Path plots = dir.resolve("design-plots");
-        Cli r = Cli.run("design", f.toString(), "--plot", plots.toString());
-        assertEquals(0, r.exit(), r.err());
-        Path svg = plots.resolve("D-2-capacity.svg");
-        String text = Files.readString(svg);
-        assertTrue(text.contains("φMn"), "the strength is drawn");
-        Cli again = Cli.run("design", f.toString(), "--plot", plots.toString());
-        assertEquals(2, again.exit());
-        assertTrue(again.err().contains("D-2-capacity.svg") && again.err().contains("--force"), again.err());
-        assertEquals(text, Files.readString(svg), "kept as it was");
-        Cli forced = Cli.run("design", f.toString(), "--plot", plots.toString(), "--force");
-        assertEquals(0, forced.exit(), forced.err());
-        assertEquals(text, Files.readString(svg), "the same plot again, byte for byte");
-    }
 }
