@@ -46,6 +46,11 @@ public record Line(
                 redistribution);
     }
 
+    /** The same line with other percentages of redistribution at its supports (null for none). */
+    public Line withRedistribution(List<Double> percent) {
+        return new Line(id, spans, overhangLeft, overhangRight, supports, loads, spanEI, ec, d, percent);
+    }
+
     public Line {
         spans = List.copyOf(spans);
         spanEI = List.copyOf(spanEI);

@@ -77,6 +77,16 @@ public final class LineAnalysis {
     }
 
     public static LineResult analyse(Line line, int stationsPerSpan) {
+        return analyseEach(line, java.util.Collections.singletonList(line.redistribution()), stationsPerSpan)
+                .get(0);
+    }
+
+    /**
+     * The line analysed once and its envelope taken for each redistribution given (percent per support,
+     * null for none): the basic cases, their solution and the statics at the stations do not depend on it,
+     * so they are shared; each result is what {@link #analyse(Line, int)} gives for that redistribution.
+     */
+    public static List<LineResult> analyseEach(Line line, List<List<Double>> redistributions, int stationsPerSpan) {
         int per = Math.max(MIN_STATIONS_PER_SPAN, stationsPerSpan);
         List<Case> cases = cases(line);
         EndMoments[] ends = new EndMoments[cases.size()];
@@ -108,7 +118,11 @@ public final class LineAnalysis {
         }
         List<Combo> combos = combos(line, cases);
         List<Combo> service = serviceCombos(line, cases);
-        return LineResult.build(line, cases, ends, stations, m, vl, vr, combos, service);
+        List<LineResult> out = new ArrayList<>();
+        for (List<Double> r : redistributions) {
+            out.add(LineResult.build(line.withRedistribution(r), cases, ends, stations, m, vl, vr, combos, service));
+        }
+        return out;
     }
 
     /** The basic cases: D, then L per segment, then L on each half of each span. */

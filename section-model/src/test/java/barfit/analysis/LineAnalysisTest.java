@@ -324,6 +324,43 @@ class LineAnalysisTest {
     }
 
     @Test
+    void oneAnalysisForManyRedistributionsGivesWhatEachAloneGives() {
+        // the shared basic cases must not leak one redistribution into the next: every result equals a
+        // fresh analysis with that redistribution alone (the same arithmetic, so exactly)
+        Random rnd = new Random(66);
+        for (int i = 0; i < 12; i++) {
+            Line line = randomLine(rnd, true);
+            int n = line.spanCount();
+            List<List<Double>> each = new ArrayList<>();
+            for (double r : new double[] {0, 10, 20}) {
+                List<Double> v = new ArrayList<>();
+                for (int j = 0; j <= n; j++) {
+                    v.add(j == 0 || j == n ? 0 : r);
+                }
+                each.add(v);
+            }
+            List<LineResult> shared = LineAnalysis.analyseEach(line, each, 50);
+            for (int k = 0; k < each.size(); k++) {
+                LineResult alone = LineAnalysis.analyse(line.withRedistribution(each.get(k)), 50);
+                for (int st = 0; st < alone.stations().size(); st++) {
+                    assertEquals(
+                            alone.stations().get(st).mMin(),
+                            shared.get(k).stations().get(st).mMin());
+                    assertEquals(
+                            alone.stations().get(st).mMax(),
+                            shared.get(k).stations().get(st).mMax());
+                    assertEquals(
+                            alone.stations().get(st).vMax(),
+                            shared.get(k).stations().get(st).vMax());
+                }
+                for (int s = 0; s < alone.spans().size(); s++) {
+                    assertEquals(alone.spans().get(s), shared.get(k).spans().get(s));
+                }
+            }
+        }
+    }
+
+    @Test
     void columnsTakeMomentAtAnEndSupport() {
         // an end span built into a column gets a negative moment at that end, and less than a fixed end's
         Column col = new Column(400, 400, 3500);
