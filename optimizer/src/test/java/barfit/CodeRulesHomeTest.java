@@ -87,7 +87,7 @@ class CodeRulesHomeTest {
     private static final List<Allowed> ALLOWED = List.of(
             // drawing geometry and styling
             new Allowed(
-                    "barfit/report/html/SectionDrawing.java",
+                    "barfit/report/html/SectionGeometry.java",
                     "75",
                     "Math.max(75, 0.25 * s.width())",
                     "the length of slab drawn beside the web, mm: a drawing choice"),

@@ -1,9 +1,11 @@
 package barfit.report.html;
 
 import barfit.catalogs.BarSize;
-import barfit.design.section.SectionLayout;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
+import barfit.report.html.SectionGeometry.Circle;
+import barfit.report.html.SectionGeometry.Mm;
+import barfit.report.html.SectionGeometry.Placed;
 import barfit.section.BarLayer;
 import barfit.section.BeamSection;
 import barfit.section.Bending;
@@ -131,33 +133,14 @@ public final class SectionDrawing {
         return l.zoneStirrups().get(0);
     }
 
-    /** The length of slab drawn beyond a web face (mm): the slab is cut so the web stays large enough to read. */
-    static double stub(SectionShape s) {
-        Flange f = s.flange();
-        if (f == null) {
-            return 0;
-        }
-        double overhang = f.oneSided() ? f.width() - s.width() : (f.width() - s.width()) / 2;
-        return Math.max(0, Math.min(overhang, Math.max(75, 0.25 * s.width())));
-    }
-
-    /** Whether the drawn slab is shorter than the effective flange (a break line is drawn). */
-    static boolean slabCut(SectionShape s) {
-        Flange f = s.flange();
-        if (f == null) {
-            return false;
-        }
-        double overhang = f.oneSided() ? f.width() - s.width() : (f.width() - s.width()) / 2;
-        return overhang > stub(s) + 1e-9;
-    }
-
     /**
      * One scale for every section of a beam (px per mm), a multiple of 0.05 so the scale note reads
      * cleanly: the height fits {@value #MAX_HEIGHT_PX} px and the drawn width {@value #MAX_WIDTH_PX} px.
      */
     public static double scaleFor(SectionShape shape) {
         double drawnWidth = shape.width()
-                + stub(shape) * (shape.flange() != null && !shape.flange().oneSided() ? 2 : 1);
+                + SectionGeometry.stub(shape)
+                        * (shape.flange() != null && !shape.flange().oneSided() ? 2 : 1);
         double s = Math.min(MAX_HEIGHT_PX / shape.height(), MAX_WIDTH_PX / drawnWidth);
         s = Math.min(1.5, Math.floor(s * 20 + 1e-9) / 20);
         return Math.max(0.05, s);
@@ -166,53 +149,12 @@ public final class SectionDrawing {
     /** px from the left of the SVG to the web's left face. */
     static double originX(SectionShape shape, double scale) {
         boolean slabLeft = shape.flange() != null && !shape.flange().oneSided();
-        return LEFT + (slabLeft ? stub(shape) * scale : 0);
+        return LEFT + (slabLeft ? SectionGeometry.stub(shape) * scale : 0);
     }
 
     /** Total SVG height for a section of height h at this scale (the strain diagram matches it). */
     static double svgHeight(SectionShape shape, double scale) {
         return TOP + shape.height() * scale + BELOW;
-    }
-
-    /**
-     * Centres of the bars of one layer across the web, mm from the left face. The outer bars sit inside
-     * the stirrup (cover + stirrup + db/2 from each side face, where the section model places them); the
-     * rest are spread evenly between, as the clear-spacing check of 25.2.1 assumes for every layer.
-     */
-    static double[] xs(double width, Detailing det, BarLayer layer) {
-        int n = layer.count();
-        double db = layer.bar().diameter();
-        double edge = det.cover() + det.stirrupBar().diameter() + db / 2;
-        double[] x = new double[n];
-        if (n == 1) {
-            x[0] = width / 2;
-            return x;
-        }
-        for (int i = 0; i < n; i++) {
-            x[i] = edge + i * (width - 2 * edge) / (n - 1);
-        }
-        return x;
-    }
-
-    /** A bar layer placed: its layer, whether counted, and the centres (mm from the web's top-left corner). */
-    record Placed(DrawnLayer drawn, double y, double[] x) {}
-
-    static List<Placed> place(View v) {
-        List<Placed> out = new ArrayList<>();
-        double h = v.shape().height();
-        for (Face face : Face.values()) {
-            List<DrawnLayer> onFace = v.layers().stream()
-                    .filter(l -> l.layer().face() == face)
-                    .sorted(Comparator.comparingDouble(l -> l.layer().fromFace()))
-                    .toList();
-            for (DrawnLayer dl : onFace) {
-                BarLayer bl = dl.layer();
-                double[] x = xs(v.shape().width(), v.detailing(), bl);
-                double y = face == Face.TOP ? bl.fromFace() : h - bl.fromFace();
-                out.add(new Placed(dl, y, x));
-            }
-        }
-        return out;
     }
 
     public static String svg(View v, double scale, UnitSystem u) {
@@ -222,7 +164,7 @@ public final class SectionDrawing {
         double ox = originX(shape, scale);
         double oy = TOP;
         Flange f = shape.flange();
-        double stub = stub(shape);
+        double stub = SectionGeometry.stub(shape);
         double leftStub = f != null && !f.oneSided() ? stub : 0;
         double rightStub = f != null ? stub : 0;
         double right = ox + (b + rightStub) * scale;
@@ -251,7 +193,7 @@ public final class SectionDrawing {
                 .append("\" fill=\"none\" stroke=\"")
                 .append(DIM)
                 .append("\" stroke-width=\"0.8\" stroke-dasharray=\"4 3\"/>\n");
-        List<Placed> placed = place(v);
+        List<Placed> placed = SectionGeometry.place(v);
         boolean shortTails = stirrup(out, v, m, placed);
         bars(out, v, m, placed);
         skin(out, v, m, placed);
@@ -295,17 +237,6 @@ public final class SectionDrawing {
         return svg.toString();
     }
 
-    /** mm in the section (from the web's top-left corner) to px in the SVG. */
-    record Mm(double ox, double oy, double s) {
-        double x(double mm) {
-            return ox + mm * s;
-        }
-
-        double y(double mm) {
-            return oy + mm * s;
-        }
-    }
-
     private static void concrete(StringBuilder out, View v, Mm m, double leftStub, double rightStub) {
         SectionShape shape = v.shape();
         double b = shape.width();
@@ -328,20 +259,20 @@ public final class SectionDrawing {
             return;
         }
         double hf = f.thickness();
-        boolean cut = slabCut(shape);
+        boolean cut = SectionGeometry.slabCut(shape);
         if (v.bending() == Bending.SAGGING) {
             // the compression flange and the web are one piece: one outline
             StringBuilder d = new StringBuilder();
-            d.append('M').append(p(m, 0, h)).append(" L").append(p(m, 0, hf));
+            d.append('M').append(m.p(0, h)).append(" L").append(m.p(0, hf));
             if (leftStub > 0) {
-                d.append(" L").append(p(m, -leftStub, hf));
+                d.append(" L").append(m.p(-leftStub, hf));
                 breakLine(d, m, -leftStub, hf, 0, cut, 1);
             } else {
-                d.append(" L").append(p(m, 0, 0));
+                d.append(" L").append(m.p(0, 0));
             }
-            d.append(" L").append(p(m, b + rightStub, 0));
+            d.append(" L").append(m.p(b + rightStub, 0));
             breakLine(d, m, b + rightStub, 0, hf, cut, -1);
-            d.append(" L").append(p(m, b, hf)).append(" L").append(p(m, b, h)).append(" Z");
+            d.append(" L").append(m.p(b, hf)).append(" L").append(m.p(b, h)).append(" Z");
             out.append("<path class=\"concrete\" d=\"")
                     .append(d)
                     .append("\" fill=\"")
@@ -357,9 +288,9 @@ public final class SectionDrawing {
                 "fill=\"" + SLAB_OFF + "\" stroke=\"" + OFF + "\" stroke-width=\"1\" stroke-dasharray=\"5 3\"";
         if (leftStub > 0) {
             StringBuilder d = new StringBuilder();
-            d.append('M').append(p(m, 0, 0)).append(" L").append(p(m, -leftStub, 0));
+            d.append('M').append(m.p(0, 0)).append(" L").append(m.p(-leftStub, 0));
             breakLine(d, m, -leftStub, 0, hf, cut, 1);
-            d.append(" L").append(p(m, 0, hf));
+            d.append(" L").append(m.p(0, hf));
             out.append("<path class=\"slab not-counted\" d=\"")
                     .append(d)
                     .append("\" ")
@@ -368,9 +299,9 @@ public final class SectionDrawing {
         }
         if (rightStub > 0) {
             StringBuilder d = new StringBuilder();
-            d.append('M').append(p(m, b, 0)).append(" L").append(p(m, b + rightStub, 0));
+            d.append('M').append(m.p(b, 0)).append(" L").append(m.p(b + rightStub, 0));
             breakLine(d, m, b + rightStub, 0, hf, cut, -1);
-            d.append(" L").append(p(m, b, hf));
+            d.append(" L").append(m.p(b, hf));
             out.append("<path class=\"slab not-counted\" d=\"")
                     .append(d)
                     .append("\" ")
@@ -400,12 +331,12 @@ public final class SectionDrawing {
         if (cut) {
             double zig = 6 / m.s();
             double dy = y1 - y0;
-            d.append(" L").append(p(m, x, y0 + dy * 0.35));
-            d.append(" L").append(p(m, x - towardsWeb * zig, y0 + dy * 0.45));
-            d.append(" L").append(p(m, x + towardsWeb * zig, y0 + dy * 0.55));
-            d.append(" L").append(p(m, x, y0 + dy * 0.65));
+            d.append(" L").append(m.p(x, y0 + dy * 0.35));
+            d.append(" L").append(m.p(x - towardsWeb * zig, y0 + dy * 0.45));
+            d.append(" L").append(m.p(x + towardsWeb * zig, y0 + dy * 0.55));
+            d.append(" L").append(m.p(x, y0 + dy * 0.65));
         }
-        d.append(" L").append(p(m, x, y1));
+        d.append(" L").append(m.p(x, y1));
     }
 
     /**
@@ -429,15 +360,15 @@ public final class SectionDrawing {
         String stroke = "fill=\"none\" stroke=\"" + STIRRUP + "\" stroke-width=\"" + Svg.px(ds * m.s()) + "\"";
         String rr = Svg.px(r * m.s());
         StringBuilder d = new StringBuilder();
-        d.append('M').append(p(m, e + r, e));
-        d.append(" L").append(p(m, b - e - r, e));
-        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, b - e, e + r));
-        d.append(" L").append(p(m, b - e, h - e - r));
-        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, b - e - r, h - e));
-        d.append(" L").append(p(m, e + r, h - e));
-        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, e, h - e - r));
-        d.append(" L").append(p(m, e, e + r));
-        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(p(m, e + r, e));
+        d.append('M').append(m.p(e + r, e));
+        d.append(" L").append(m.p(b - e - r, e));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(m.p(b - e, e + r));
+        d.append(" L").append(m.p(b - e, h - e - r));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(m.p(b - e - r, h - e));
+        d.append(" L").append(m.p(e + r, h - e));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(m.p(e, h - e - r));
+        d.append(" L").append(m.p(e, e + r));
+        d.append(" A").append(rr).append(',').append(rr).append(" 0 0 1 ").append(m.p(e + r, e));
         out.append("<path class=\"stirrup\" d=\"")
                 .append(d)
                 .append("\" ")
@@ -447,8 +378,8 @@ public final class SectionDrawing {
         // the core along the diagonal; the corner is the first (top-left, top-right, bottom-left, bottom-right)
         // where both tails run their full extension clear of every bar (a second layer close under a corner
         // bar is in the way of the tails there), else the one where the shorter tail runs furthest
-        List<Circle> circles = circles(v, placed);
-        double rt = ds / 2 + clearance(bar);
+        List<Circle> circles = SectionGeometry.circles(v, placed);
+        double rt = ds / 2 + SectionGeometry.clearance(bar);
         List<TieLeg> legs = tieLegs(v, placed, e);
         List<Double> legXs = legs.stream().map(TieLeg::x).toList();
         Corner corner = null;
@@ -481,17 +412,17 @@ public final class SectionDrawing {
             double leftLimit = (i == 0 ? e : (legs.get(i - 1).x() + leg.x()) / 2);
             double rightLimit = (i == legs.size() - 1 ? b - e : (legs.get(i + 1).x() + leg.x()) / 2);
             double tTop = Math.min(
-                    tail(top.ex(), top.ey(), top.ux(), top.uy(), ext, rt, circles),
+                    SectionGeometry.tail(top.ex(), top.ey(), top.ux(), top.uy(), ext, rt, circles),
                     reach(top, leftLimit, rightLimit, rt));
             double tBottom = Math.min(
-                    tail(bottom.ex(), bottom.ey(), bottom.ux(), bottom.uy(), ext, rt, circles),
+                    SectionGeometry.tail(bottom.ex(), bottom.ey(), bottom.ux(), bottom.uy(), ext, rt, circles),
                     reach(bottom, leftLimit, rightLimit, rt));
             shortened |= Math.min(tTop, tBottom) < ext - 1e-6;
             String rTop = Svg.px(top.radius() * m.s());
             String rBottom = Svg.px(bottom.radius() * m.s());
             StringBuilder t = new StringBuilder();
-            t.append('M').append(p(m, top.ex() + tTop * top.ux(), top.ey() + tTop * top.uy()));
-            t.append(" L").append(p(m, top.ex(), top.ey()));
+            t.append('M').append(m.p(top.ex() + tTop * top.ux(), top.ey() + tTop * top.uy()));
+            t.append(" L").append(m.p(top.ex(), top.ey()));
             t.append(" A")
                     .append(rTop)
                     .append(',')
@@ -499,8 +430,8 @@ public final class SectionDrawing {
                     .append(" 0 0 ")
                     .append(top.side() > 0 ? 0 : 1)
                     .append(' ')
-                    .append(p(m, leg.x(), top.y()));
-            t.append(" L").append(p(m, leg.x(), bottom.y()));
+                    .append(m.p(leg.x(), top.y()));
+            t.append(" L").append(m.p(leg.x(), bottom.y()));
             t.append(" A")
                     .append(rBottom)
                     .append(',')
@@ -508,8 +439,8 @@ public final class SectionDrawing {
                     .append(" 0 0 ")
                     .append(bottom.side() > 0 ? 0 : 1)
                     .append(' ')
-                    .append(p(m, bottom.ex(), bottom.ey()));
-            t.append(" L").append(p(m, bottom.ex() + tBottom * bottom.ux(), bottom.ey() + tBottom * bottom.uy()));
+                    .append(m.p(bottom.ex(), bottom.ey()));
+            t.append(" L").append(m.p(bottom.ex() + tBottom * bottom.ux(), bottom.ey() + tBottom * bottom.uy()));
             out.append("<path class=\"stirrup tie\" d=\"")
                     .append(t)
                     .append("\" ")
@@ -517,14 +448,6 @@ public final class SectionDrawing {
                     .append(" stroke-linecap=\"butt\"/>\n");
         }
         return shortened;
-    }
-
-    /**
-     * The clear gap a drawn hook tail keeps from a bar it does not wrap, mm: half the stirrup's diameter, so
-     * that a tail stopped by a bar reads as stopped short of it, not as touching it (drawing only).
-     */
-    static double clearance(BarSize stirrup) {
-        return stirrup.diameter() / 2;
     }
 
     /**
@@ -570,8 +493,10 @@ public final class SectionDrawing {
             double bx = cx - sx * r * k;
             double by = cy + sy * r * k;
             // a tail also stops short of a crosstie's leg, a bar of the stirrup's own diameter
-            double ta = Math.min(tail(ax, ay, ux, uy, ext, rt, circles), beforeLegs(ax, ux, rt + ds / 2, legXs));
-            double tb = Math.min(tail(bx, by, ux, uy, ext, rt, circles), beforeLegs(bx, ux, rt + ds / 2, legXs));
+            double ta = Math.min(
+                    SectionGeometry.tail(ax, ay, ux, uy, ext, rt, circles), beforeLegs(ax, ux, rt + ds / 2, legXs));
+            double tb = Math.min(
+                    SectionGeometry.tail(bx, by, ux, uy, ext, rt, circles), beforeLegs(bx, ux, rt + ds / 2, legXs));
             return new Corner(sx, sy, cx, cy, r, ax, ay, bx, by, ux, uy, ta, tb);
         }
 
@@ -600,7 +525,7 @@ public final class SectionDrawing {
             // mirrored corners turn the other way: the sweep flag follows the number of mirrors
             int flip = sx * sy > 0 ? 0 : 1;
             d.append('M')
-                    .append(p(m, cx + sx * r, cy))
+                    .append(m.p(cx + sx * r, cy))
                     .append(" A")
                     .append(rr)
                     .append(',')
@@ -608,11 +533,11 @@ public final class SectionDrawing {
                     .append(" 0 0 ")
                     .append(flip)
                     .append(' ')
-                    .append(p(m, ax, ay))
+                    .append(m.p(ax, ay))
                     .append(" L")
-                    .append(p(m, ax + ta * ux, ay + ta * uy));
+                    .append(m.p(ax + ta * ux, ay + ta * uy));
             d.append(" M")
-                    .append(p(m, cx, cy + sy * r))
+                    .append(m.p(cx, cy + sy * r))
                     .append(" A")
                     .append(rr)
                     .append(',')
@@ -620,9 +545,9 @@ public final class SectionDrawing {
                     .append(" 0 0 ")
                     .append(1 - flip)
                     .append(' ')
-                    .append(p(m, bx, by))
+                    .append(m.p(bx, by))
                     .append(" L")
-                    .append(p(m, bx + tb * ux, by + tb * uy));
+                    .append(m.p(bx + tb * ux, by + tb * uy));
         }
     }
 
@@ -630,54 +555,6 @@ public final class SectionDrawing {
     private static double reach(HookEnd hk, double left, double right, double rt) {
         double limit = hk.ux() > 0 ? right - rt - hk.ex() : hk.ex() - rt - left;
         return Math.max(0, limit / Math.abs(hk.ux()));
-    }
-
-    /** A circle in the section, mm: a bar's centre and radius. */
-    record Circle(double x, double y, double r) {}
-
-    /** Every longitudinal bar and skin bar drawn. */
-    static List<Circle> circles(View v, List<Placed> placed) {
-        List<Circle> out = new ArrayList<>();
-        for (Placed pl : placed) {
-            double rb = pl.drawn().layer().bar().diameter() / 2;
-            for (double x : pl.x()) {
-                out.add(new Circle(x, pl.y(), rb));
-            }
-        }
-        if (v.skin() != null) {
-            for (double[] c : skinCentres(v, placed)) {
-                out.add(new Circle(c[0], c[1], v.skin().bar().diameter() / 2));
-            }
-        }
-        return out;
-    }
-
-    /**
-     * How far a hook's tail may run from (x, y) along the unit vector (ux, uy), at most {@code ext}, before
-     * its centreline comes within {@code rt} of a circle (rt: half the tail's thickness plus the clearance it
-     * keeps). A circle the tail starts against and leaves is the bar the hook wraps.
-     */
-    static double tail(double x, double y, double ux, double uy, double ext, double rt, List<Circle> circles) {
-        double len = ext;
-        for (Circle c : circles) {
-            double reach = c.r() + rt - 1e-6;
-            double wx = x - c.x();
-            double wy = y - c.y();
-            double along = wx * ux + wy * uy;
-            double gap = wx * wx + wy * wy - reach * reach;
-            if (gap < 0) {
-                if (along < -1e-6) {
-                    len = 0;
-                }
-                continue;
-            }
-            double disc = along * along - gap;
-            if (disc < 0 || along >= 0) {
-                continue;
-            }
-            len = Math.min(len, Math.max(0, -along - Math.sqrt(disc)));
-        }
-        return len;
     }
 
     /**
@@ -703,7 +580,7 @@ public final class SectionDrawing {
             // over the hoop: turned towards the core, or away from it, or bent tighter, whichever first
             // keeps the drawing's clearance from the bars beside the leg; failing all, the one that keeps furthest
             double in = x < b / 2 ? 1 : -1;
-            double keep = clearance(v.stirrups().bar());
+            double keep = SectionGeometry.clearance(v.stirrups().bar());
             HookEnd best = null;
             double bestMargin = Double.NEGATIVE_INFINITY;
             for (double rad = hoopRadius; rad >= ds - 1e-9; rad -= ds / 4) {
@@ -762,7 +639,7 @@ public final class SectionDrawing {
         }
         double b = v.shape().width();
         double rt = v.stirrups().bar().diameter() / 2;
-        List<Circle> all = circles(v, placed);
+        List<Circle> all = SectionGeometry.circles(v, placed);
         Face tension = v.bending().tensionFace();
         Face other = tension == Face.TOP ? Face.BOTTOM : Face.TOP;
         List<Circle> first = interior(outerLayer(placed, tension));
@@ -774,14 +651,14 @@ public final class SectionDrawing {
         BarSize bar = v.stirrups().bar();
         double hoopR = StirrupHooks.insideBendDiameter(bar) / 2 + rt;
         double ext = StirrupHooks.extension135(bar, v.code());
-        double keep = rt + clearance(bar);
+        double keep = rt + SectionGeometry.clearance(bar);
         java.util.function.DoubleUnaryOperator tails = x -> {
             TieLeg leg = new TieLeg(x, touching(x, topOuter, rt), touching(x, bottomOuter, rt));
             HookEnd t = leg.end(true, v, e, hoopR, all);
             HookEnd d = leg.end(false, v, e, hoopR, all);
             return Math.min(
-                    tail(t.ex(), t.ey(), t.ux(), t.uy(), ext, keep, all),
-                    tail(d.ex(), d.ey(), d.ux(), d.uy(), ext, keep, all));
+                    SectionGeometry.tail(t.ex(), t.ey(), t.ux(), t.uy(), ext, keep, all),
+                    SectionGeometry.tail(d.ex(), d.ey(), d.ux(), d.uy(), ext, keep, all));
         };
         List<Double> xs = new ArrayList<>();
         List<Circle> used = new ArrayList<>();
@@ -932,10 +809,6 @@ public final class SectionDrawing {
         return best;
     }
 
-    private static String p(Mm m, double x, double y) {
-        return Svg.px(m.x(x)) + "," + Svg.px(m.y(y));
-    }
-
     private static void bars(StringBuilder out, View v, Mm m, List<Placed> placed) {
         for (Placed pl : placed) {
             BarLayer bl = pl.drawn().layer();
@@ -962,46 +835,12 @@ public final class SectionDrawing {
         }
     }
 
-    /**
-     * Skin bars (9.7.2.3) on both side faces, inside the stirrup legs, at their spacing from the layer
-     * nearest the tension face over h/2, as the design rule places them.
-     */
-    static List<double[]> skinCentres(View v, List<Placed> placed) {
-        List<double[]> out = new ArrayList<>();
-        SkinBars skin = v.skin();
-        if (skin == null) {
-            return out;
-        }
-        double h = v.shape().height();
-        int n = SectionLayout.skinBarsPerFace(h, skin.spacing());
-        Face tension = v.bending().tensionFace();
-        double y0 = tension == Face.BOTTOM
-                ? h - v.detailing().firstLayerCentroid(skin.bar().diameter())
-                : v.detailing().firstLayerCentroid(skin.bar().diameter());
-        for (Placed pl : placed) {
-            if (pl.drawn().layer().face() == tension) {
-                y0 = pl.y();
-                break;
-            }
-        }
-        double edge = v.detailing().cover()
-                + v.detailing().stirrupBar().diameter()
-                + skin.bar().diameter() / 2;
-        double sign = tension == Face.BOTTOM ? -1 : 1;
-        for (int k = 1; k <= n; k++) {
-            double y = y0 + sign * k * skin.spacing();
-            out.add(new double[] {edge, y});
-            out.add(new double[] {v.shape().width() - edge, y});
-        }
-        return out;
-    }
-
     private static void skin(StringBuilder out, View v, Mm m, List<Placed> placed) {
         if (v.skin() == null) {
             return;
         }
         double r = v.skin().bar().diameter() / 2 * m.s();
-        for (double[] c : skinCentres(v, placed)) {
+        for (double[] c : SectionGeometry.skinCentres(v, placed)) {
             out.append("<circle class=\"skin\" cx=\"")
                     .append(Svg.px(m.x(c[0])))
                     .append("\" cy=\"")
@@ -1047,7 +886,7 @@ public final class SectionDrawing {
         Flange f = shape.flange();
         if (f != null) {
             String what = (f.oneSided() ? "L-beam: " : "T-beam: ") + "flange b_f = " + len(f.width(), u) + ", h_f = "
-                    + len(f.thickness(), u) + (slabCut(shape) ? " (slab cut)" : "");
+                    + len(f.thickness(), u) + (SectionGeometry.slabCut(shape) ? " (slab cut)" : "");
             Svg.text(out, m.x(-leftStub), m.y(0) - 6, "start", null, what);
         }
     }
@@ -1061,8 +900,10 @@ public final class SectionDrawing {
         double y = m.y(h) + 50;
         // a scale bar of 100 mm (4 in)
         double barMm = u == UnitSystem.US ? 101.6 : 100;
-        double x0 =
-                m.x(0) - (v.shape().flange() != null && !v.shape().flange().oneSided() ? stub(v.shape()) * m.s() : 0);
+        double x0 = m.x(0)
+                - (v.shape().flange() != null && !v.shape().flange().oneSided()
+                        ? SectionGeometry.stub(v.shape()) * m.s()
+                        : 0);
         double x1 = x0 + barMm * m.s();
         out.append("<rect x=\"")
                 .append(Svg.px(x0))
@@ -1121,7 +962,7 @@ public final class SectionDrawing {
             counted.add(pl.drawn().counted());
         }
         if (v.skin() != null) {
-            List<double[]> sk = skinCentres(v, placed);
+            List<double[]> sk = SectionGeometry.skinCentres(v, placed);
             if (!sk.isEmpty()) {
                 double yMid = 0;
                 for (double[] c : sk) {
@@ -1232,6 +1073,11 @@ public final class SectionDrawing {
                 .append(")\">")
                 .append(Svg.esc(text))
                 .append("</text>\n");
+    }
+
+    /** The clear gap a drawn hook tail keeps from a bar it does not wrap, mm (see {@link SectionGeometry}). */
+    static double clearance(BarSize stirrup) {
+        return SectionGeometry.clearance(stirrup);
     }
 
     static String len(double mm, UnitSystem u) {
