@@ -94,7 +94,7 @@ class CodeRulesHomeTest {
             new Allowed("barfit/report/html/SectionDrawing.java", "0.35", "dy * 0.35", "the break line's zigzag"),
             new Allowed("barfit/report/html/SectionDrawing.java", "0.65", "dy * 0.65", "the break line's zigzag"),
             new Allowed(
-                    "barfit/report/html/SectionDrawing.java",
+                    "barfit/report/html/CrosstieLegs.java",
                     "0.75",
                     "0.75 * Math.PI",
                     "a 135-degree bend is 0.75 π radians: geometry"),
