@@ -40,12 +40,8 @@ public final class SectionDrawing {
     private static final double MAX_HEIGHT_PX = 340;
     private static final double MAX_WIDTH_PX = 400;
 
-    private static final String CONCRETE = "#e9e6df";
-    private static final String EDGE = "#4a4a4a";
-    private static final String SLAB_OFF = "#f7f6f3";
-    private static final String STEEL = "#1d2b3a";
-    private static final String OFF = "#a3a3a3";
-    private static final String DIM = "#6b6b6b";
+    /** Dimension, cover and leader lines. */
+    static final String DIM = "#6b6b6b";
 
     private SectionDrawing() {}
 
@@ -158,7 +154,6 @@ public final class SectionDrawing {
     public static String svg(View v, double scale, UnitSystem u) {
         SectionShape shape = v.shape();
         double b = shape.width();
-        double h = shape.height();
         double ox = originX(shape, scale);
         double oy = TOP;
         Flange f = shape.flange();
@@ -177,24 +172,12 @@ public final class SectionDrawing {
             Svg.text(out, 4, 32, "start", null, v.subtitle());
         }
 
-        concrete(out, v, m, leftStub, rightStub);
-        // clear cover: the outside face of the stirrup, dashed
-        double c = v.detailing().cover();
-        out.append("<rect class=\"cover\" x=\"")
-                .append(Svg.px(m.x(c)))
-                .append("\" y=\"")
-                .append(Svg.px(m.y(c)))
-                .append("\" width=\"")
-                .append(Svg.px((b - 2 * c) * scale))
-                .append("\" height=\"")
-                .append(Svg.px((h - 2 * c) * scale))
-                .append("\" fill=\"none\" stroke=\"")
-                .append(DIM)
-                .append("\" stroke-width=\"0.8\" stroke-dasharray=\"4 3\"/>\n");
+        SectionBody.concrete(out, v, m, leftStub, rightStub);
+        SectionBody.cover(out, v, m);
         List<Placed> placed = SectionGeometry.place(v);
         boolean shortTails = StirrupDrawing.draw(out, v, m, placed);
-        bars(out, v, m, placed);
-        skin(out, v, m, placed);
+        SectionBody.bars(out, v, m, placed);
+        SectionBody.skin(out, v, m, placed);
         dimensions(out, v, m, u, leftStub, rightStub);
         labels(out, v, m, placed, right + 40);
         double legendRight = legend(out, v, m, u, shortTails);
@@ -233,150 +216,6 @@ public final class SectionDrawing {
         svg.append(out);
         svg.append("</g>\n</svg>\n");
         return svg.toString();
-    }
-
-    private static void concrete(StringBuilder out, View v, Mm m, double leftStub, double rightStub) {
-        SectionShape shape = v.shape();
-        double b = shape.width();
-        double h = shape.height();
-        Flange f = shape.flange();
-        if (f == null) {
-            out.append("<rect class=\"concrete\" x=\"")
-                    .append(Svg.px(m.x(0)))
-                    .append("\" y=\"")
-                    .append(Svg.px(m.y(0)))
-                    .append("\" width=\"")
-                    .append(Svg.px(b * m.s()))
-                    .append("\" height=\"")
-                    .append(Svg.px(h * m.s()))
-                    .append("\" fill=\"")
-                    .append(CONCRETE)
-                    .append("\" stroke=\"")
-                    .append(EDGE)
-                    .append("\" stroke-width=\"1.2\"/>\n");
-            return;
-        }
-        double hf = f.thickness();
-        boolean cut = SectionGeometry.slabCut(shape);
-        if (v.bending() == Bending.SAGGING) {
-            // the compression flange and the web are one piece: one outline
-            StringBuilder d = new StringBuilder();
-            d.append('M').append(m.p(0, h)).append(" L").append(m.p(0, hf));
-            if (leftStub > 0) {
-                d.append(" L").append(m.p(-leftStub, hf));
-                breakLine(d, m, -leftStub, hf, 0, cut, 1);
-            } else {
-                d.append(" L").append(m.p(0, 0));
-            }
-            d.append(" L").append(m.p(b + rightStub, 0));
-            breakLine(d, m, b + rightStub, 0, hf, cut, -1);
-            d.append(" L").append(m.p(b, hf)).append(" L").append(m.p(b, h)).append(" Z");
-            out.append("<path class=\"concrete\" d=\"")
-                    .append(d)
-                    .append("\" fill=\"")
-                    .append(CONCRETE)
-                    .append("\" stroke=\"")
-                    .append(EDGE)
-                    .append("\" stroke-width=\"1.2\"/>\n");
-            return;
-        }
-        // hogging: the slab is on the tension side and the section model does not count it; drawn pale
-        // and dashed beside the web
-        String slabStyle =
-                "fill=\"" + SLAB_OFF + "\" stroke=\"" + OFF + "\" stroke-width=\"1\" stroke-dasharray=\"5 3\"";
-        if (leftStub > 0) {
-            StringBuilder d = new StringBuilder();
-            d.append('M').append(m.p(0, 0)).append(" L").append(m.p(-leftStub, 0));
-            breakLine(d, m, -leftStub, 0, hf, cut, 1);
-            d.append(" L").append(m.p(0, hf));
-            out.append("<path class=\"slab not-counted\" d=\"")
-                    .append(d)
-                    .append("\" ")
-                    .append(slabStyle)
-                    .append("/>\n");
-        }
-        if (rightStub > 0) {
-            StringBuilder d = new StringBuilder();
-            d.append('M').append(m.p(b, 0)).append(" L").append(m.p(b + rightStub, 0));
-            breakLine(d, m, b + rightStub, 0, hf, cut, -1);
-            d.append(" L").append(m.p(b, hf));
-            out.append("<path class=\"slab not-counted\" d=\"")
-                    .append(d)
-                    .append("\" ")
-                    .append(slabStyle)
-                    .append("/>\n");
-        }
-        out.append("<rect class=\"concrete\" x=\"")
-                .append(Svg.px(m.x(0)))
-                .append("\" y=\"")
-                .append(Svg.px(m.y(0)))
-                .append("\" width=\"")
-                .append(Svg.px(b * m.s()))
-                .append("\" height=\"")
-                .append(Svg.px(h * m.s()))
-                .append("\" fill=\"")
-                .append(CONCRETE)
-                .append("\" stroke=\"")
-                .append(EDGE)
-                .append("\" stroke-width=\"1.2\"/>\n");
-    }
-
-    /**
-     * The free edge of a slab from y0 to y1 (mm) at x: a zigzag break line when the slab goes on beyond
-     * what is drawn, else straight; {@code towardsWeb} is +1 for a left free edge, -1 for a right one.
-     */
-    private static void breakLine(StringBuilder d, Mm m, double x, double y0, double y1, boolean cut, int towardsWeb) {
-        if (cut) {
-            double zig = 6 / m.s();
-            double dy = y1 - y0;
-            d.append(" L").append(m.p(x, y0 + dy * 0.35));
-            d.append(" L").append(m.p(x - towardsWeb * zig, y0 + dy * 0.45));
-            d.append(" L").append(m.p(x + towardsWeb * zig, y0 + dy * 0.55));
-            d.append(" L").append(m.p(x, y0 + dy * 0.65));
-        }
-        d.append(" L").append(m.p(x, y1));
-    }
-
-    private static void bars(StringBuilder out, View v, Mm m, List<Placed> placed) {
-        for (Placed pl : placed) {
-            BarLayer bl = pl.drawn().layer();
-            double r = bl.bar().diameter() / 2 * m.s();
-            String fill = pl.drawn().counted() ? STEEL : OFF;
-            String cls = pl.drawn().counted() ? "bar" : "bar not-counted";
-            for (double x : pl.x()) {
-                out.append("<circle class=\"")
-                        .append(cls)
-                        .append("\" data-face=\"")
-                        .append(bl.face().word())
-                        .append("\" data-bar=\"")
-                        .append(Svg.esc(bl.bar().label()))
-                        .append("\" cx=\"")
-                        .append(Svg.px(m.x(x)))
-                        .append("\" cy=\"")
-                        .append(Svg.px(m.y(pl.y())))
-                        .append("\" r=\"")
-                        .append(Svg.px(r))
-                        .append("\" fill=\"")
-                        .append(fill)
-                        .append("\"/>\n");
-            }
-        }
-    }
-
-    private static void skin(StringBuilder out, View v, Mm m, List<Placed> placed) {
-        if (v.skin() == null) {
-            return;
-        }
-        double r = v.skin().bar().diameter() / 2 * m.s();
-        for (double[] c : SectionGeometry.skinCentres(v, placed)) {
-            out.append("<circle class=\"skin\" cx=\"")
-                    .append(Svg.px(m.x(c[0])))
-                    .append("\" cy=\"")
-                    .append(Svg.px(m.y(c[1])))
-                    .append("\" r=\"")
-                    .append(Svg.px(r))
-                    .append("\" fill=\"#5b5b5b\"/>\n");
-        }
     }
 
     private static void dimensions(StringBuilder out, View v, Mm m, UnitSystem u, double leftStub, double rightStub) {
