@@ -44,8 +44,8 @@ public final class LineSpans {
     /** A moment smaller than this share of the span's largest is taken as none (a pinned end's rounding). */
     private static final double NEGLIGIBLE = 1e-6;
 
-    /** What the line's design gives: per segment designed, its problem and outcome; the rounds it took. */
     /**
+     * What the line's design gives: per segment designed, its problem and outcome; the rounds it took.
      * {@code redistribution} is what the last analysis used per support (percent): what was asked, lowered
      * where the sections designed beside the support do not allow it (6.6.5.3: εt ≥ 0.0075 and at most
      * 1000 εt percent); {@code epsT} the least εt of those sections (NaN where none was asked).
@@ -663,15 +663,6 @@ public final class LineSpans {
         Trial used =
                 new Trial(t.shape(), t.problems(), t.analysis(), t.coefficients(), chosen, t.bound(), t.lowerBounds());
         return new Evaluated(used, parts, total, 1, supportStrains(in, parts));
-    }
-
-    private static int indexOf(List<SpanProblem> problems, int seg, int n) {
-        for (int k = 0; k < problems.size(); k++) {
-            if (segmentOf(problems.get(k), n) == seg) {
-                return k;
-            }
-        }
-        throw new IllegalStateException("no part " + seg);
     }
 
     private static double total(List<Part> parts) {
