@@ -2,9 +2,7 @@ package barfit.design.line;
 
 import barfit.analysis.Coefficients;
 import barfit.analysis.Line;
-import barfit.analysis.LineAnalysis;
 import barfit.analysis.LineResult;
-import barfit.analysis.Load;
 import barfit.design.CostModel;
 import barfit.design.Proof;
 import barfit.design.SearchSpace;
@@ -16,10 +14,7 @@ import barfit.design.span.SpanProblem;
 import barfit.input.LineInput;
 import barfit.input.Settings;
 import barfit.section.Deflection;
-import barfit.section.EndCondition;
-import barfit.section.Flange;
 import barfit.section.SectionShape;
-import barfit.section.SpanChecks;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -40,9 +35,6 @@ import java.util.Objects;
  */
 public final class LineSpans {
     public static final int MAX_ROUNDS = 8;
-
-    /** A moment smaller than this share of the span's largest is taken as none (a pinned end's rounding). */
-    private static final double NEGLIGIBLE = 1e-6;
 
     /**
      * What the line's design gives: per segment designed, its problem and outcome; the rounds it took.
@@ -176,14 +168,14 @@ public final class LineSpans {
     private final SearchSpace space;
     private final SpanDesigner designer;
     private final int maxBarSizes;
-    private final int barsPerTwoLegs;
+    private final LineProblems lineProblems;
 
     public LineSpans(Settings settings, SearchSpace space, SpanDesigner designer, int maxBarSizes, int barsPerTwoLegs) {
         this.settings = settings;
         this.space = space;
         this.designer = designer;
         this.maxBarSizes = maxBarSizes;
-        this.barsPerTwoLegs = barsPerTwoLegs;
+        this.lineProblems = new LineProblems(settings, space, maxBarSizes, barsPerTwoLegs);
     }
 
     public Result design(LineInput in, int alternatives) {
@@ -287,7 +279,9 @@ public final class LineSpans {
             for (int s = 0; s < in.spans().size() + 2; s++) {
                 shapes.add(best.trial().shape());
             }
-            analysis = analyse(in, shapes, ec, best.trial().redistribution()).analysis();
+            analysis = lineProblems
+                    .analyse(in, shapes, ec, best.trial().redistribution())
+                    .analysis();
         }
         return new Result(
                 in,
@@ -314,30 +308,22 @@ public final class LineSpans {
 
     /** As above, with the percentages redistributed at each support given. */
     List<SpanProblem> problemsAt(LineInput in, SectionShape shape, List<Double> redistribution) {
-        double ec = Deflection.ec(settings.materials(), settings.code());
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < in.spans().size() + 2; s++) {
-            shapes.add(shape);
-        }
-        List<SpanProblem> out = new ArrayList<>();
-        for (SpanProblem p : analyse(in, shapes, ec, redistribution).problems()) {
-            out.add(heldAt(p, shape));
-        }
-        return out;
+        return lineProblems.problemsAt(in, shape, redistribution);
     }
 
-    /** One analysis of the line (by stiffness or by the 6.5 coefficients) and the part problems from it. */
-    private record Analysed(
-            List<SpanProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {}
+    /** The part restricted to the one section it is held at. */
+    static SpanProblem heldAt(SpanProblem p, SectionShape shape) {
+        return LineProblems.heldAt(p, shape);
+    }
 
-    private Analysed analyse(LineInput in, List<SectionShape> shapes, double ec, List<Double> red) {
-        Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
-        if (in.coefficients()) {
-            List<Coefficients.SpanValues> c = Coefficients.analyse(line);
-            return new Analysed(fromCoefficients(in, line, c), null, c);
-        }
-        LineResult r = LineAnalysis.analyse(line);
-        return new Analysed(fromAnalysis(in, line, r), r, null);
+    /** The segment of a part's problem ({@link LineProblems#segmentOf}). */
+    static int segmentOf(SpanProblem p, int n) {
+        return LineProblems.segmentOf(p, n);
+    }
+
+    /** A span's shear diagram handed to design ({@link LineProblems#spanShear}). */
+    static ShearDiagram spanShear(Line line, LineResult r, LineResult.SpanValues s) {
+        return LineProblems.spanShear(line, r, s);
     }
 
     /** A section tried for the whole line: its analysis, the parts' problems held at it, and its bound. */
@@ -366,8 +352,8 @@ public final class LineSpans {
         boolean choosing = choosing(in);
         // choosing: the line with none, and a bound that holds whatever is chosen (a support's moment
         // falls and the span's rises with the percentage, and the bound rises with each)
-        Analysed a = analyse(in, shapes, ec, choosing ? none(in) : red);
-        Analysed most = choosing ? analyse(in, shapes, ec, most(in)) : null;
+        LineProblems.Analysed a = lineProblems.analyse(in, shapes, ec, choosing ? none(in) : red);
+        LineProblems.Analysed most = choosing ? lineProblems.analyse(in, shapes, ec, most(in)) : null;
         List<SpanProblem> problems = a.problems();
         LineResult analysis = a.analysis();
         List<Coefficients.SpanValues> coefficients = a.coefficients();
@@ -375,7 +361,7 @@ public final class LineSpans {
         List<Double> lower = new ArrayList<>();
         double bound = 0;
         for (int k = 0; k < problems.size(); k++) {
-            SpanProblem q = heldAt(problems.get(k), shape);
+            SpanProblem q = LineProblems.heldAt(problems.get(k), shape);
             held.add(q);
             SpanProblem least = q;
             if (most != null) {
@@ -418,8 +404,8 @@ public final class LineSpans {
                 if (total + rest >= beat - 1e-9) {
                     return null;
                 }
-                int seg = segmentOf(p, n);
-                parts.add(new Part(seg, partName(seg, n), p, o));
+                int seg = LineProblems.segmentOf(p, n);
+                parts.add(new Part(seg, LineProblems.partName(seg, n), p, o));
             }
             if (alternatives == 0) {
                 // the parts' own optima bound the line from below; now the support bars they share
@@ -468,8 +454,8 @@ public final class LineSpans {
                 int seg = pt.segment();
                 options.add(new SharedSupports.PartOptions(
                         seg,
-                        leftSupportOf(seg, n),
-                        rightSupportOf(seg, n),
+                        LineProblems.leftSupportOf(seg, n),
+                        LineProblems.rightSupportOf(seg, n),
                         List.of(new SharedSupports.Variant(0, 0, p, g, out.sets(), out.stats()))));
             }
             SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
@@ -497,16 +483,6 @@ public final class LineSpans {
             }
         }
         return null;
-    }
-
-    /** The support at a part's left end (0..n): a span's left support, an overhang's root. */
-    static int leftSupportOf(int seg, int n) {
-        return seg == 0 ? 0 : seg == n + 1 ? n : seg - 1;
-    }
-
-    /** The support at a part's right end, -1 for an overhang (its tip). */
-    static int rightSupportOf(int seg, int n) {
-        return seg == 0 || seg == n + 1 ? -1 : seg;
     }
 
     /** The steps of redistribution tried at a support (6.6.5), percent. */
@@ -568,13 +544,13 @@ public final class LineSpans {
                     List<Double> sj = steps.get(j);
                     v.add(sj.get(Math.min(j % 2 != 0 ? a : b, sj.size() - 1)));
                 }
-                for (SpanProblem p : analyse(in, shapes, ec, v).problems()) {
-                    int seg = segmentOf(p, n);
-                    int right = rightSupportOf(seg, n);
+                for (SpanProblem p : lineProblems.analyse(in, shapes, ec, v).problems()) {
+                    int seg = LineProblems.segmentOf(p, n);
+                    int right = LineProblems.rightSupportOf(seg, n);
                     double rRight = right < 0 ? 0.0 : v.get(right);
-                    List<Double> key = List.of(v.get(leftSupportOf(seg, n)), rRight);
+                    List<Double> key = List.of(v.get(LineProblems.leftSupportOf(seg, n)), rRight);
                     variants.computeIfAbsent(seg, k -> new java.util.LinkedHashMap<>())
-                            .putIfAbsent(key, heldAt(p, t.shape()));
+                            .putIfAbsent(key, LineProblems.heldAt(p, t.shape()));
                 }
             }
         }
@@ -618,7 +594,8 @@ public final class LineSpans {
                 vs.add(new SharedSupports.Variant(
                         v.getKey().get(0), v.getKey().get(1), v.getValue(), g, out.sets(), out.stats()));
             }
-            options.add(new SharedSupports.PartOptions(seg, leftSupportOf(seg, n), rightSupportOf(seg, n), vs));
+            options.add(new SharedSupports.PartOptions(
+                    seg, LineProblems.leftSupportOf(seg, n), LineProblems.rightSupportOf(seg, n), vs));
         }
         SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
         List<Part> parts;
@@ -639,17 +616,17 @@ public final class LineSpans {
                         Proof.SolverStats.NONE,
                         new SpanDesigner.Search(pick.variant().stats(), 0, 0, true),
                         designer.options());
-                parts.add(new Part(seg, partName(seg, n), p, designer.adopt(p, layout, proof)));
+                parts.add(new Part(seg, LineProblems.partName(seg, n), p, designer.adopt(p, layout, proof)));
                 chosen.set(
-                        leftSupportOf(seg, n),
+                        LineProblems.leftSupportOf(seg, n),
                         Math.max(
-                                chosen.get(leftSupportOf(seg, n)),
+                                chosen.get(LineProblems.leftSupportOf(seg, n)),
                                 pick.variant().rLeft()));
-                if (rightSupportOf(seg, n) >= 0) {
+                if (LineProblems.rightSupportOf(seg, n) >= 0) {
                     chosen.set(
-                            rightSupportOf(seg, n),
+                            LineProblems.rightSupportOf(seg, n),
                             Math.max(
-                                    chosen.get(rightSupportOf(seg, n)),
+                                    chosen.get(LineProblems.rightSupportOf(seg, n)),
                                     pick.variant().rRight()));
                 }
             }
@@ -693,7 +670,7 @@ public final class LineSpans {
         while (round < MAX_ROUNDS) {
             seen.add(shapes);
             round++;
-            Analysed a = analyse(in, shapes, ec, red);
+            LineProblems.Analysed a = lineProblems.analyse(in, shapes, ec, red);
             List<SpanProblem> problems = a.problems();
             if (in.coefficients()) {
                 coefficients = a.coefficients();
@@ -703,14 +680,14 @@ public final class LineSpans {
             List<Part> next = new ArrayList<>();
             List<SectionShape> chosen = new ArrayList<>(shapes);
             for (SpanProblem p : problems) {
-                int seg = segmentOf(p, n);
+                int seg = LineProblems.segmentOf(p, n);
                 if (held != null) {
-                    p = heldAt(p, held.get(seg));
+                    p = LineProblems.heldAt(p, held.get(seg));
                 } else if (width != null) {
                     p = p.withFixedWidth(width);
                 }
                 SpanDesigner.Outcome o = designer.design(p, alternatives, previous(parts, seg));
-                next.add(new Part(seg, partName(seg, n), p, o));
+                next.add(new Part(seg, LineProblems.partName(seg, n), p, o));
                 if (o.feasible()) {
                     var l = o.best().layout();
                     chosen.set(
@@ -751,11 +728,6 @@ public final class LineSpans {
             }
         }
         return null;
-    }
-
-    /** The part restricted to the one section it is held at. */
-    static SpanProblem heldAt(SpanProblem p, SectionShape shape) {
-        return p.withFixedWidth(shape.width()).withSpace(p.space().withDepths(List.of(shape.height())));
     }
 
     private static int indexOfSections(List<List<SectionShape>> seen, List<SectionShape> shapes) {
@@ -839,221 +811,5 @@ public final class LineSpans {
             }
         }
         return true;
-    }
-
-    /** d for the shears at d: the shallowest section's height less cover, stirrup and half a 25 mm bar. */
-    private double effectiveDepth(List<SectionShape> shapes) {
-        double h = Double.POSITIVE_INFINITY;
-        for (SectionShape s : shapes) {
-            h = Math.min(h, s.height());
-        }
-        return h - settings.detailing().cover() - settings.stirrupBar().diameter() - 12.7;
-    }
-
-    private static String partName(int seg, int n) {
-        return seg == 0 ? "left overhang" : seg == n + 1 ? "right overhang" : "span " + seg;
-    }
-
-    static int segmentOf(SpanProblem p, int n) {
-        String id = p.id();
-        if (id.endsWith("/left overhang")) {
-            return 0;
-        }
-        if (id.endsWith("/right overhang")) {
-            return n + 1;
-        }
-        return Integer.parseInt(id.substring(id.lastIndexOf("/span ") + 6));
-    }
-
-    private List<SpanProblem> fromAnalysis(LineInput in, Line line, LineResult r) {
-        List<SpanProblem> out = new ArrayList<>();
-        int n = in.spans().size();
-        for (LineResult.SpanValues s : r.spans()) {
-            double big = Math.max(Math.abs(s.mSpanMax()), Math.max(Math.abs(s.mLeftFace()), Math.abs(s.mRightFace())));
-            Double ml = s.mLeftFace() < -NEGLIGIBLE * big ? s.mLeftFace() : null;
-            Double mr = s.mRightFace() < -NEGLIGIBLE * big ? s.mRightFace() : null;
-            Double mm = s.mSpanMax() > NEGLIGIBLE * big ? s.mSpanMax() : null;
-            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(
-                    ml == null ? null : s.deadLeft(),
-                    mm == null ? null : s.deadMid(),
-                    mr == null ? null : s.deadRight(),
-                    ml == null ? null : s.deflectionLeft(),
-                    mm == null ? null : s.deflectionMid(),
-                    mr == null ? null : s.deflectionRight(),
-                    in.sustainedLive());
-            out.add(problem(in, line, s.index(), n, s.clear(), ml, mm, mr, s.vLeftD(), s.vRightD())
-                    .withAnalysis(service, spanShear(line, r, s)));
-        }
-        for (LineResult.OverhangValues o : r.overhangs()) {
-            int seg = o.side().equals("left") ? 0 : n + 1;
-            SpanChecks.ServiceMoments service = SpanChecks.ServiceMoments.analysed(
-                    o.deadFace(), null, null, o.totalFace(), null, null, in.sustainedLive());
-            out.add(cantilever(in, line, seg, n, o.clear(), o.mFace(), o.vD())
-                    .withAnalysis(service, overhangShear(line, r, seg)));
-        }
-        return out;
-    }
-
-    private List<SpanProblem> fromCoefficients(LineInput in, Line line, List<Coefficients.SpanValues> c) {
-        List<SpanProblem> out = new ArrayList<>();
-        int n = in.spans().size();
-        for (Coefficients.SpanValues s : c) {
-            // Table 6.5.4 gives the shear at the face; taken there (the section at d would need 9.4.3.2)
-            out.add(problem(
-                    in,
-                    line,
-                    s.index(),
-                    n,
-                    s.clear(),
-                    s.mLeftFace() < 0 ? s.mLeftFace() : null,
-                    s.mSpan(),
-                    s.mRightFace() < 0 ? s.mRightFace() : null,
-                    s.vLeftFace(),
-                    s.vRightFace()));
-        }
-        return out;
-    }
-
-    private SpanProblem problem(
-            LineInput in,
-            Line line,
-            int s,
-            int n,
-            double clear,
-            Double ml,
-            Double mm,
-            Double mr,
-            double vl,
-            double vr) {
-        // Table 9.3.1.1's end conditions: a span is continuous over an interior support
-        int continuous = (s > 1 ? 1 : 0) + (s < n ? 1 : 0);
-        EndCondition ends = continuous == 0
-                ? EndCondition.SIMPLE
-                : continuous == 1 ? EndCondition.ONE_END_CONTINUOUS : EndCondition.BOTH_ENDS_CONTINUOUS;
-        return new SpanProblem(
-                in.id() + "/span " + s,
-                settings.materials(),
-                settings.detailing(),
-                settings.code(),
-                space,
-                clear,
-                ends,
-                ml,
-                mm,
-                mr,
-                vl,
-                vr,
-                service(in, line, s),
-                SpanChecks.Limits.DEFAULT,
-                in.maxDepth(),
-                null,
-                flange(in, clear),
-                false,
-                maxBarSizes,
-                barsPerTwoLegs);
-    }
-
-    private SpanProblem cantilever(LineInput in, Line line, int seg, int n, double clear, double m, double v) {
-        return new SpanProblem(
-                in.id() + "/" + partName(seg, n),
-                settings.materials(),
-                settings.detailing(),
-                settings.code(),
-                space,
-                clear,
-                EndCondition.CANTILEVER,
-                m,
-                null,
-                null,
-                v,
-                null,
-                service(in, line, seg),
-                SpanChecks.Limits.DEFAULT,
-                in.maxDepth(),
-                null,
-                null,
-                false,
-                maxBarSizes,
-                barsPerTwoLegs);
-    }
-
-    /**
-     * A span's shear diagram handed to design: the envelope of |V| at the analysis' stations between its
-     * faces (the faces are stations), measured from the left face.
-     */
-    static ShearDiagram spanShear(Line line, LineResult r, LineResult.SpanValues s) {
-        double faceLeft = line.supports().get(s.index() - 1).width() / 2;
-        double faceRight = faceLeft + s.clear();
-        List<double[]> points = new ArrayList<>();
-        for (LineResult.StationValues st : r.stations()) {
-            if (st.segment() == s.index() && st.local() >= faceLeft - 1e-6 && st.local() <= faceRight + 1e-6) {
-                points.add(new double[] {Math.min(Math.max(st.local() - faceLeft, 0), s.clear()), magnitude(st)});
-            }
-        }
-        return diagram(s.clear(), points, s.vLeftAtFace(), s.vRightAtFace());
-    }
-
-    /** An overhang's, from the face of its support (x = 0, fixed) to its tip. */
-    static ShearDiagram overhangShear(Line line, LineResult r, int seg) {
-        boolean left = seg == 0;
-        double len = line.length(seg);
-        double half = line.supports().get(left ? 0 : line.spanCount()).width() / 2;
-        double clear = len - half;
-        List<double[]> points = new ArrayList<>();
-        for (LineResult.StationValues st : r.stations()) {
-            if (st.segment() != seg) {
-                continue;
-            }
-            double x = left ? len - half - st.local() : st.local() - half;
-            if (x >= -1e-6 && x <= clear + 1e-6) {
-                points.add(new double[] {Math.min(Math.max(x, 0), clear), magnitude(st)});
-            }
-        }
-        points.sort((a, b) -> Double.compare(a[0], b[0]));
-        return diagram(clear, points, false, true);
-    }
-
-    private static double magnitude(LineResult.StationValues st) {
-        return Math.max(0, Math.max(st.vMax(), -st.vMin()));
-    }
-
-    private static ShearDiagram diagram(double clear, List<double[]> points, boolean leftAtFace, boolean rightAtFace) {
-        double[] x = new double[points.size()];
-        double[] v = new double[points.size()];
-        for (int i = 0; i < x.length; i++) {
-            x[i] = points.get(i)[0];
-            v[i] = points.get(i)[1];
-        }
-        return new ShearDiagram(clear, x, v, leftAtFace, rightAtFace);
-    }
-
-    /** The flange as given, bounded on each span by that span's clear length (Table 6.3.2.1). */
-    private static Flange flange(LineInput in, double clear) {
-        Flange f = in.section().flange();
-        if (f == null) {
-            return null;
-        }
-        return Flange.given(
-                f.given(),
-                f.thickness(),
-                f.oneSided(),
-                Double.isNaN(f.clearToNextWeb()) ? null : f.clearToNextWeb(),
-                clear);
-    }
-
-    /** Equivalent uniform service loads of a segment: its whole dead and live load over its length. */
-    private static SpanChecks.ServiceLoads service(LineInput in, Line line, int seg) {
-        double dead = 0;
-        double live = 0;
-        for (Load l : line.loads()) {
-            if (l.segment() != seg) {
-                continue;
-            }
-            double k = l.point() ? 1 : l.to() - l.from();
-            dead += l.dead() * k;
-            live += l.live() * k;
-        }
-        double len = line.length(seg);
-        return new SpanChecks.ServiceLoads(dead / len, live / len, in.sustainedLive());
     }
 }
