@@ -252,7 +252,7 @@ public final class LineSpans {
         java.util.Set<SectionShape> designedShapes = new java.util.HashSet<>();
         double without = Double.NaN;
         // choosing the redistribution: the line with none first, whose best bounds every section after
-        for (boolean choose : choosing(in) ? new boolean[] {false, true} : new boolean[] {false}) {
+        for (boolean choose : Redistribution.choosing(in) ? new boolean[] {false, true} : new boolean[] {false}) {
             if (choose) {
                 without = best == null ? Double.POSITIVE_INFINITY : best.total();
             }
@@ -273,7 +273,7 @@ public final class LineSpans {
         }
         // the parts share their support bars: no part has alternatives of its own
         LineResult analysis = best.trial().analysis();
-        if (choosing(in)) {
+        if (Redistribution.choosing(in)) {
             // the envelope of the redistribution chosen, for the report
             List<SectionShape> shapes = new ArrayList<>();
             for (int s = 0; s < in.spans().size() + 2; s++) {
@@ -349,11 +349,11 @@ public final class LineSpans {
         for (int s = 0; s < n + 2; s++) {
             shapes.add(shape);
         }
-        boolean choosing = choosing(in);
+        boolean choosing = Redistribution.choosing(in);
         // choosing: the line with none, and a bound that holds whatever is chosen (a support's moment
         // falls and the span's rises with the percentage, and the bound rises with each)
-        LineProblems.Analysed a = lineProblems.analyse(in, shapes, ec, choosing ? none(in) : red);
-        LineProblems.Analysed most = choosing ? lineProblems.analyse(in, shapes, ec, most(in)) : null;
+        LineProblems.Analysed a = lineProblems.analyse(in, shapes, ec, choosing ? Redistribution.none(in) : red);
+        LineProblems.Analysed most = choosing ? lineProblems.analyse(in, shapes, ec, Redistribution.most(in)) : null;
         List<SpanProblem> problems = a.problems();
         LineResult analysis = a.analysis();
         List<Coefficients.SpanValues> coefficients = a.coefficients();
@@ -373,7 +373,13 @@ public final class LineSpans {
             bound += lb;
         }
         return new Trial(
-                shape, held, analysis, coefficients, List.copyOf(choosing ? none(in) : red), bound, List.copyOf(lower));
+                shape,
+                held,
+                analysis,
+                coefficients,
+                List.copyOf(choosing ? Redistribution.none(in) : red),
+                bound,
+                List.copyOf(lower));
     }
 
     /**
@@ -418,9 +424,9 @@ public final class LineSpans {
                     total += pt.outcome().best().cost().total();
                 }
             }
-            List<Double> epsT = supportStrains(in, parts);
+            List<Double> epsT = Redistribution.supportStrains(in, parts);
             List<Double> red = new ArrayList<>(current.redistribution());
-            boolean lowered = lowerToAllowed(red, epsT);
+            boolean lowered = Redistribution.lowerToAllowed(red, epsT);
             if (!lowered || rounds >= MAX_ROUNDS) {
                 return new Evaluated(current, parts, total, rounds, epsT);
             }
@@ -488,37 +494,6 @@ public final class LineSpans {
     /** The steps of redistribution tried at a support (6.6.5), percent. */
     public static final double STEP = 5;
 
-    /** Whether the search chooses the redistribution: the line asks for some, analysed by stiffness. */
-    private static boolean choosing(LineInput in) {
-        return !in.coefficients() && in.redistribution().stream().anyMatch(r -> r > 0);
-    }
-
-    /** Per support, the percentages tried: 0 up to what the line allows there, in steps of {@link #STEP}. */
-    private static List<List<Double>> steps(LineInput in) {
-        List<List<Double>> out = new ArrayList<>();
-        for (double asked : in.redistribution()) {
-            List<Double> s = new ArrayList<>();
-            for (int k = 0; k * STEP <= asked + 1e-9; k++) {
-                s.add(k * STEP);
-            }
-            if (asked > s.get(s.size() - 1) + 1e-9) {
-                s.add(asked);
-            }
-            out.add(s);
-        }
-        return out;
-    }
-
-    private static List<Double> most(LineInput in) {
-        return new ArrayList<>(in.redistribution());
-    }
-
-    private static List<Double> none(LineInput in) {
-        List<Double> out = new ArrayList<>();
-        in.redistribution().forEach(r -> out.add(0.0));
-        return out;
-    }
-
     /**
      * The line at a trial's section with the redistribution at each support chosen with the bars (6.6.5):
      * first the line with none (each part's own optimum, then the support bars shared), which bounds the
@@ -530,7 +505,7 @@ public final class LineSpans {
         int n = in.spans().size();
         // every part for every pair of percentages at its supports: alternating percentages along the line
         // give every span each pair at its two supports
-        List<List<Double>> steps = steps(in);
+        List<List<Double>> steps = Redistribution.steps(in);
         int len = steps.stream().mapToInt(List::size).max().orElse(1);
         List<SectionShape> shapes = new ArrayList<>();
         for (int s = 0; s < n + 2; s++) {
@@ -599,7 +574,7 @@ public final class LineSpans {
         }
         SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
         List<Part> parts;
-        List<Double> chosen = none(in);
+        List<Double> chosen = Redistribution.none(in);
         if (s != null && s.total() < beat - 1e-6) {
             parts = new ArrayList<>();
             for (int k = 0; k < options.size(); k++) {
@@ -639,7 +614,7 @@ public final class LineSpans {
         }
         Trial used =
                 new Trial(t.shape(), t.problems(), t.analysis(), t.coefficients(), chosen, t.bound(), t.lowerBounds());
-        return new Evaluated(used, parts, total, 1, supportStrains(in, parts));
+        return new Evaluated(used, parts, total, 1, Redistribution.supportStrains(in, parts));
     }
 
     private static double total(List<Part> parts) {
@@ -697,8 +672,8 @@ public final class LineSpans {
             }
             parts = next;
             // 6.6.5: a support's redistribution stands only where the sections designed beside it allow it
-            epsT = supportStrains(in, parts);
-            boolean lowered = lowerToAllowed(red, epsT);
+            epsT = Redistribution.supportStrains(in, parts);
+            boolean lowered = Redistribution.lowerToAllowed(red, epsT);
             if (!lowered && sameSections(shapes, chosen)) {
                 settled = true;
                 break;
@@ -752,54 +727,6 @@ public final class LineSpans {
             }
         }
         return out;
-    }
-
-    /**
-     * Lowers each support's redistribution (percent, in place) to what the sections designed beside it
-     * allow (6.6.5: εt ≥ 0.0075, at most 1000 εt percent); true when any was lowered.
-     */
-    private static boolean lowerToAllowed(List<Double> red, List<Double> epsT) {
-        boolean lowered = false;
-        for (int j = 0; j < red.size(); j++) {
-            if (red.get(j) > 0) {
-                double allowed = barfit.analysis.RedistributionLimit.percent(epsT.get(j));
-                if (red.get(j) > allowed + 1e-9) {
-                    red.set(j, allowed);
-                    lowered = true;
-                }
-            }
-        }
-        return lowered;
-    }
-
-    /** The least εt of the designed support sections beside each support (NaN where none is designed). */
-    private static List<Double> supportStrains(LineInput in, List<Part> parts) {
-        int n = in.spans().size();
-        List<Double> out = new ArrayList<>();
-        for (int j = 0; j <= n; j++) {
-            out.add(Double.NaN);
-        }
-        for (Part p : parts) {
-            if (!p.outcome().feasible() || p.segment() < 1 || p.segment() > n) {
-                continue;
-            }
-            var sections = p.outcome().best().report().sections();
-            var left = sections.get(SpanProblem.Place.LEFT);
-            var right = sections.get(SpanProblem.Place.RIGHT);
-            if (left != null) {
-                out.set(
-                        p.segment() - 1,
-                        least(out.get(p.segment() - 1), left.flexure().epsT()));
-            }
-            if (right != null) {
-                out.set(p.segment(), least(out.get(p.segment()), right.flexure().epsT()));
-            }
-        }
-        return out;
-    }
-
-    private static double least(double a, double b) {
-        return Double.isNaN(a) ? b : Math.min(a, b);
     }
 
     private static boolean sameSections(List<SectionShape> a, List<SectionShape> b) {
