@@ -17,7 +17,6 @@ import barfit.section.Deflection;
 import barfit.section.SectionShape;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Objects;
 
 /**
  * Designs a beam line span by span from its analysis: each span becomes a whole-span problem with the
@@ -169,6 +168,7 @@ public final class LineSpans {
     private final SpanDesigner designer;
     private final int maxBarSizes;
     private final LineProblems lineProblems;
+    private final SpanBySpan spanBySpan;
 
     public LineSpans(Settings settings, SearchSpace space, SpanDesigner designer, int maxBarSizes, int barsPerTwoLegs) {
         this.settings = settings;
@@ -176,6 +176,7 @@ public final class LineSpans {
         this.designer = designer;
         this.maxBarSizes = maxBarSizes;
         this.lineProblems = new LineProblems(settings, space, maxBarSizes, barsPerTwoLegs);
+        this.spanBySpan = new SpanBySpan(settings, space, designer, lineProblems);
     }
 
     public Result design(LineInput in, int alternatives) {
@@ -184,7 +185,7 @@ public final class LineSpans {
             if (one != null) {
                 return one;
             }
-            Result bySpan = sameWidth(in, alternatives);
+            Result bySpan = spanBySpan.sameWidth(in, alternatives);
             return new Result(
                     in,
                     bySpan.parts(),
@@ -198,29 +199,7 @@ public final class LineSpans {
                     new OneSection(0, 0, true),
                     Double.NaN);
         }
-        return sameWidth(in, alternatives);
-    }
-
-    /**
-     * Span by span with one width along the line (each span its own depth): the line designed at each width
-     * of the search space, the cheapest whose every part has a design; where no width carries every part,
-     * each part takes its own width.
-     */
-    private Result sameWidth(LineInput in, int alternatives) {
-        Result best = null;
-        double bestTotal = Double.POSITIVE_INFINITY;
-        for (double b : space.widths()) {
-            Result r = bySpan(in, alternatives, b);
-            double total = 0;
-            for (Part pt : r.parts()) {
-                total += pt.outcome().feasible() ? pt.outcome().best().cost().total() : Double.POSITIVE_INFINITY;
-            }
-            if (total < bestTotal - 1e-9) {
-                best = r;
-                bestTotal = total;
-            }
-        }
-        return best != null ? best : bySpan(in, alternatives, null);
+        return spanBySpan.sameWidth(in, alternatives);
     }
 
     /**
@@ -623,120 +602,5 @@ public final class LineSpans {
             t += pt.outcome().best().cost().total();
         }
         return t;
-    }
-
-    /** Span by span: each part its own section, the line analysed again until the sections settle. */
-    private Result bySpan(LineInput in, int alternatives, Double width) {
-        int n = in.spans().size();
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < n + 2; s++) {
-            shapes.add(in.section());
-        }
-        double ec = Deflection.ec(settings.materials(), settings.code());
-        List<Part> parts = List.of();
-        LineResult analysis = null;
-        List<Coefficients.SpanValues> coefficients = null;
-        int round = 0;
-        boolean settled = false;
-        List<Double> red = new ArrayList<>(in.redistribution());
-        List<Double> epsT = new ArrayList<>();
-        List<List<SectionShape>> seen = new ArrayList<>();
-        List<SectionShape> held = null;
-        while (round < MAX_ROUNDS) {
-            seen.add(shapes);
-            round++;
-            LineProblems.Analysed a = lineProblems.analyse(in, shapes, ec, red);
-            List<SpanProblem> problems = a.problems();
-            if (in.coefficients()) {
-                coefficients = a.coefficients();
-            } else {
-                analysis = a.analysis();
-            }
-            List<Part> next = new ArrayList<>();
-            List<SectionShape> chosen = new ArrayList<>(shapes);
-            for (SpanProblem p : problems) {
-                int seg = LineProblems.segmentOf(p, n);
-                if (held != null) {
-                    p = LineProblems.heldAt(p, held.get(seg));
-                } else if (width != null) {
-                    p = p.withFixedWidth(width);
-                }
-                SpanDesigner.Outcome o = designer.design(p, alternatives, previous(parts, seg));
-                next.add(new Part(seg, LineProblems.partName(seg, n), p, o));
-                if (o.feasible()) {
-                    var l = o.best().layout();
-                    chosen.set(
-                            seg,
-                            new SectionShape(l.width(), l.height(), in.section().flange()));
-                }
-            }
-            parts = next;
-            // 6.6.5: a support's redistribution stands only where the sections designed beside it allow it
-            epsT = Redistribution.supportStrains(in, parts);
-            boolean lowered = Redistribution.lowerToAllowed(red, epsT);
-            if (!lowered && sameSections(shapes, chosen)) {
-                settled = true;
-                break;
-            }
-            int again = lowered || held != null ? -1 : indexOfSections(seen, chosen);
-            if (again >= 0) {
-                // the sections alternate: each span's own weight and stiffness move its neighbours' envelope
-                // back and forth. Hold every part at the largest section of the cycle and design its bars
-                // for the envelope of exactly those sections, which then settles.
-                held = largest(seen.subList(again, seen.size()));
-                chosen = held;
-            }
-            shapes = chosen;
-        }
-        List<String> heldParts = new ArrayList<>();
-        if (held != null) {
-            parts.forEach(pt -> heldParts.add(pt.name()));
-        }
-        return new Result(in, parts, round, settled, analysis, coefficients, red, epsT, heldParts, null, Double.NaN);
-    }
-
-    /** The segment's design in the previous round: a layout that may pass again, to bound the next search. */
-    private static SpanLayout previous(List<Part> parts, int seg) {
-        for (Part pt : parts) {
-            if (pt.segment() == seg && pt.outcome().feasible()) {
-                return pt.outcome().best().layout();
-            }
-        }
-        return null;
-    }
-
-    private static int indexOfSections(List<List<SectionShape>> seen, List<SectionShape> shapes) {
-        for (int i = 0; i < seen.size(); i++) {
-            if (sameSections(seen.get(i), shapes)) {
-                return i;
-            }
-        }
-        return -1;
-    }
-
-    /** Per segment, the deepest of the sections (the wider between equally deep ones). */
-    private static List<SectionShape> largest(List<List<SectionShape>> states) {
-        List<SectionShape> out = new ArrayList<>(states.get(0));
-        for (List<SectionShape> st : states) {
-            for (int i = 0; i < out.size(); i++) {
-                SectionShape a = out.get(i);
-                SectionShape b = st.get(i);
-                if (b.height() > a.height() || b.height() == a.height() && b.width() > a.width()) {
-                    out.set(i, b);
-                }
-            }
-        }
-        return out;
-    }
-
-    private static boolean sameSections(List<SectionShape> a, List<SectionShape> b) {
-        for (int i = 0; i < a.size(); i++) {
-            SectionShape x = a.get(i);
-            SectionShape y = b.get(i);
-            if (x.width() != y.width() || x.height() != y.height() || !Objects.equals(x.flange(), y.flange())) {
-                return false;
-            }
-        }
-        return true;
     }
 }
