@@ -24,6 +24,12 @@ import java.util.List;
  * from the envelope (or from the 6.5 coefficients); each overhang a cantilever. With the helpers about
  * a part's segment and the supports at its ends. Apart from the searches because both searches (one
  * section for the line, span by span) design against the same problems, built the same way.
+ *
+ * <p>Each span and overhang takes from the analysis its service moments for deflection (dead load, and
+ * dead plus live in the arrangement with the largest sagging moment in the span) and its whole shear
+ * diagram, so that each stirrup zone is designed for the shear at the d of the section design chooses.
+ * With the 6.5 coefficients, which give neither, the factored moments are scaled by the span's
+ * dead-to-live proportion and the shears run straight between the faces.
  */
 final class LineProblems {
     /** A moment smaller than this share of the span's largest is taken as none (a pinned end's rounding). */

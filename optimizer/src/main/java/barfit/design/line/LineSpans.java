@@ -3,37 +3,30 @@ package barfit.design.line;
 import barfit.analysis.Coefficients;
 import barfit.analysis.Line;
 import barfit.analysis.LineResult;
-import barfit.design.CostModel;
-import barfit.design.Proof;
 import barfit.design.SearchSpace;
 import barfit.design.span.ShearDiagram;
 import barfit.design.span.SpanDesigner;
-import barfit.design.span.SpanGenerator;
-import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
 import barfit.input.LineInput;
 import barfit.input.Settings;
-import barfit.section.Deflection;
 import barfit.section.SectionShape;
 import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Designs a beam line span by span from its analysis: each span becomes a whole-span problem with the
- * moments at its support faces, its largest sagging moment and its shears at d from the envelope; each
- * overhang a cantilever. Where design chooses sections other than those analysed, the line is analysed
- * again with the chosen sections (their own weight and stiffness) and every span designed afresh against
- * the new envelope, until the sections stop changing (at most {@link #MAX_ROUNDS} rounds). Each span's
- * design is proved and re-verified against the envelope of the last analysis.
- *
- * <p>Each span and overhang takes from the analysis its service moments for deflection (dead load, and
- * dead plus live in the arrangement with the largest sagging moment in the span) and its whole shear
- * diagram, so that each stirrup zone is designed for the shear at the d of the section design chooses.
- * With the 6.5 coefficients, which give neither, the factored moments are scaled by the span's
- * dead-to-live proportion and the shears run straight between the faces.
+ * Designs a beam line from its analysis, each span a whole-span problem and each overhang a cantilever
+ * ({@link LineProblems}). A line of one set of forms takes one section for every part ({@link
+ * OneSectionSearch}), or falls back to span by span where no one section carries every part; a line of
+ * per-span forms is designed span by span, analysed again with the sections chosen until they settle (at
+ * most {@link #MAX_ROUNDS} rounds, {@link SpanBySpan}). Each part's design is proved and re-verified
+ * against the envelope of the last analysis. This class holds what the rest of the program sees: the entry
+ * and the records of the result.
  */
 public final class LineSpans {
     public static final int MAX_ROUNDS = 8;
+
+    /** The steps of redistribution tried at a support (6.6.5), percent. */
+    public static final double STEP = 5;
 
     /**
      * What the line's design gives: per segment designed, its problem and outcome; the rounds it took.
@@ -163,25 +156,19 @@ public final class LineSpans {
     /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
     public record Part(int segment, String name, SpanProblem problem, SpanDesigner.Outcome outcome) {}
 
-    private final Settings settings;
-    private final SearchSpace space;
-    private final SpanDesigner designer;
-    private final int maxBarSizes;
     private final LineProblems lineProblems;
+    private final OneSectionSearch oneSectionSearch;
     private final SpanBySpan spanBySpan;
 
     public LineSpans(Settings settings, SearchSpace space, SpanDesigner designer, int maxBarSizes, int barsPerTwoLegs) {
-        this.settings = settings;
-        this.space = space;
-        this.designer = designer;
-        this.maxBarSizes = maxBarSizes;
         this.lineProblems = new LineProblems(settings, space, maxBarSizes, barsPerTwoLegs);
+        this.oneSectionSearch = new OneSectionSearch(settings, space, designer, maxBarSizes, lineProblems);
         this.spanBySpan = new SpanBySpan(settings, space, designer, lineProblems);
     }
 
     public Result design(LineInput in, int alternatives) {
         if (in.oneSection()) {
-            Result one = oneSection(in, alternatives);
+            Result one = oneSectionSearch.design(in, alternatives);
             if (one != null) {
                 return one;
             }
@@ -203,86 +190,11 @@ public final class LineSpans {
     }
 
     /**
-     * One b x h for the whole line: for each section of the search space (under the line's cap), the line
-     * analysed with that section's own weight and stiffness and every part designed at that section; the
-     * cheapest total wins. Sections are taken in order of the sum of the span generator's lower bounds of
-     * the parts (concrete, formwork and the section model's strength bound on the steel, for that
-     * section's own envelope), so the search stops at the first section whose bound reaches the cheapest
-     * total found. Exact for its model: every section is analysed as it is built.
-     * Null when no single section carries every part.
-     */
-    private Result oneSection(LineInput in, int alternatives) {
-        double ec = Deflection.ec(settings.materials(), settings.code());
-        List<SectionShape> frames = new ArrayList<>();
-        for (double b : space.widths()) {
-            for (double h : space.depths()) {
-                if (in.maxDepth() == null || h <= in.maxDepth() + 1e-9) {
-                    frames.add(new SectionShape(b, h, in.section().flange()));
-                }
-            }
-        }
-        // the bound of each frame from the parts of its own analysis (their lengths and flanges)
-        List<Trial> trials = new ArrayList<>();
-        for (SectionShape f : frames) {
-            trials.add(trial(in, f, ec, new ArrayList<>(in.redistribution())));
-        }
-        trials.sort(java.util.Comparator.comparingDouble(Trial::bound));
-        Evaluated best = null;
-        java.util.Set<SectionShape> designedShapes = new java.util.HashSet<>();
-        double without = Double.NaN;
-        // choosing the redistribution: the line with none first, whose best bounds every section after
-        for (boolean choose : Redistribution.choosing(in) ? new boolean[] {false, true} : new boolean[] {false}) {
-            if (choose) {
-                without = best == null ? Double.POSITIVE_INFINITY : best.total();
-            }
-            for (Trial t : trials) {
-                if (best != null && t.bound() >= best.total() - 1e-9) {
-                    break;
-                }
-                designedShapes.add(t.shape());
-                double beat = best == null ? Double.POSITIVE_INFINITY : best.total();
-                Evaluated e = choose ? evaluateChoosing(in, t, ec, beat) : evaluate(in, t, ec, beat, 0);
-                if (e != null && (best == null || e.total() < best.total() - 1e-9)) {
-                    best = e;
-                }
-            }
-        }
-        if (best == null) {
-            return null;
-        }
-        // the parts share their support bars: no part has alternatives of its own
-        LineResult analysis = best.trial().analysis();
-        if (Redistribution.choosing(in)) {
-            // the envelope of the redistribution chosen, for the report
-            List<SectionShape> shapes = new ArrayList<>();
-            for (int s = 0; s < in.spans().size() + 2; s++) {
-                shapes.add(best.trial().shape());
-            }
-            analysis = lineProblems
-                    .analyse(in, shapes, ec, best.trial().redistribution())
-                    .analysis();
-        }
-        return new Result(
-                in,
-                best.parts(),
-                best.rounds(),
-                true,
-                analysis,
-                best.trial().coefficients(),
-                best.trial().redistribution(),
-                best.epsT(),
-                List.of(),
-                new OneSection(trials.size(), designedShapes.size(), false),
-                without);
-    }
-
-    /**
      * The parts' problems with the whole line at one section, analysed with that section's own weight and
      * stiffness and the redistribution asked: what a line of one section designs against (for its oracle).
      */
     List<SpanProblem> problemsAt(LineInput in, SectionShape shape) {
-        double ec = Deflection.ec(settings.materials(), settings.code());
-        return trial(in, shape, ec, new ArrayList<>(in.redistribution())).problems();
+        return oneSectionSearch.problemsAt(in, shape);
     }
 
     /** As above, with the percentages redistributed at each support given. */
@@ -303,304 +215,5 @@ public final class LineSpans {
     /** A span's shear diagram handed to design ({@link LineProblems#spanShear}). */
     static ShearDiagram spanShear(Line line, LineResult r, LineResult.SpanValues s) {
         return LineProblems.spanShear(line, r, s);
-    }
-
-    /** A section tried for the whole line: its analysis, the parts' problems held at it, and its bound. */
-    /**
-     * {@code lowerBounds}: per part (in the order of {@code problems}), a lower bound on its cost whatever
-     * the redistribution chosen; {@code bound} their sum.
-     */
-    private record Trial(
-            SectionShape shape,
-            List<SpanProblem> problems,
-            LineResult analysis,
-            List<Coefficients.SpanValues> coefficients,
-            List<Double> redistribution,
-            double bound,
-            List<Double> lowerBounds) {}
-
-    /** The parts designed at a trial's section, their total cost, the rounds redistribution took. */
-    private record Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {}
-
-    private Trial trial(LineInput in, SectionShape shape, double ec, List<Double> red) {
-        int n = in.spans().size();
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < n + 2; s++) {
-            shapes.add(shape);
-        }
-        boolean choosing = Redistribution.choosing(in);
-        // choosing: the line with none, and a bound that holds whatever is chosen (a support's moment
-        // falls and the span's rises with the percentage, and the bound rises with each)
-        LineProblems.Analysed a = lineProblems.analyse(in, shapes, ec, choosing ? Redistribution.none(in) : red);
-        LineProblems.Analysed most = choosing ? lineProblems.analyse(in, shapes, ec, Redistribution.most(in)) : null;
-        List<SpanProblem> problems = a.problems();
-        LineResult analysis = a.analysis();
-        List<Coefficients.SpanValues> coefficients = a.coefficients();
-        List<SpanProblem> held = new ArrayList<>();
-        List<Double> lower = new ArrayList<>();
-        double bound = 0;
-        for (int k = 0; k < problems.size(); k++) {
-            SpanProblem q = LineProblems.heldAt(problems.get(k), shape);
-            held.add(q);
-            SpanProblem least = q;
-            if (most != null) {
-                SpanProblem m = most.problems().get(k);
-                least = q.withSupportMoments(m.mLeft(), m.mRight());
-            }
-            double lb = designer.leastCost(least);
-            lower.add(lb);
-            bound += lb;
-        }
-        return new Trial(
-                shape,
-                held,
-                analysis,
-                coefficients,
-                List.copyOf(choosing ? Redistribution.none(in) : red),
-                bound,
-                List.copyOf(lower));
-    }
-
-    /**
-     * Every part designed at the trial's section, stopping as soon as the parts so far and the bounds of
-     * the rest reach {@code beat}; where the support sections do not allow the redistribution asked
-     * (6.6.5), the line is analysed again at the same section with what they allow. Null when a part has
-     * no design at this section or the total cannot beat {@code beat}.
-     */
-    private Evaluated evaluate(LineInput in, Trial t, double ec, double beat, int alternatives) {
-        int n = in.spans().size();
-        int rounds = 0;
-        Trial current = t;
-        while (true) {
-            rounds++;
-            List<Part> parts = new ArrayList<>();
-            double total = 0;
-            double rest = current.bound();
-            for (SpanProblem p : current.problems()) {
-                rest -= designer.leastCost(p);
-                // only a design that leaves room for the rest's bounds under the total to beat can matter
-                SpanDesigner.Outcome o = Double.isInfinite(beat)
-                        ? designer.design(p, alternatives)
-                        : designer.designUnder(p, beat - total - rest);
-                if (o == null || !o.feasible()) {
-                    return null;
-                }
-                total += o.best().cost().total();
-                if (total + rest >= beat - 1e-9) {
-                    return null;
-                }
-                int seg = LineProblems.segmentOf(p, n);
-                parts.add(new Part(seg, LineProblems.partName(seg, n), p, o));
-            }
-            if (alternatives == 0) {
-                // the parts' own optima bound the line from below; now the support bars they share
-                parts = share(n, parts, total, beat);
-                if (parts == null) {
-                    return null;
-                }
-                total = 0;
-                for (Part pt : parts) {
-                    total += pt.outcome().best().cost().total();
-                }
-            }
-            List<Double> epsT = Redistribution.supportStrains(in, parts);
-            List<Double> red = new ArrayList<>(current.redistribution());
-            boolean lowered = Redistribution.lowerToAllowed(red, epsT);
-            if (!lowered || rounds >= MAX_ROUNDS) {
-                return new Evaluated(current, parts, total, rounds, epsT);
-            }
-            current = trial(in, current.shape(), ec, red);
-        }
-    }
-
-    /** How far above the parts' own optima the shared search first looks, then wider, then everywhere. */
-    private static final double[] SHARE_MARGINS = {0.05, 0.2, 0.8, 3.2, Double.POSITIVE_INFINITY};
-
-    /**
-     * The parts designed together at their one section, each support's top bars one arrangement for the
-     * parts on both sides ({@link SharedSupports}); null when no such line costs less than {@code beat}.
-     * {@code own}: each part's own optimum, whose sum bounds the line from below. Exact: a line costing T
-     * has no part dearer than T less the other parts' own optima, so the options under that limit hold
-     * every line cheaper than the one found once it lies within the margin searched.
-     */
-    private List<Part> share(int n, List<Part> own, double ownTotal, double beat) {
-        List<Part> ordered = new ArrayList<>(own);
-        ordered.sort(java.util.Comparator.comparingInt(Part::segment));
-        for (double margin : SHARE_MARGINS) {
-            double ceiling = Math.min(beat, ownTotal * (1 + margin));
-            List<SharedSupports.PartOptions> options = new ArrayList<>();
-            List<SpanGenerator.Stats> stats = new ArrayList<>();
-            for (Part pt : ordered) {
-                SpanProblem p = pt.problem();
-                double limit = ceiling - (ownTotal - pt.outcome().best().cost().total());
-                SpanGenerator g = designer.generator(p);
-                SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
-                stats.add(out.stats());
-                int seg = pt.segment();
-                options.add(new SharedSupports.PartOptions(
-                        seg,
-                        LineProblems.leftSupportOf(seg, n),
-                        LineProblems.rightSupportOf(seg, n),
-                        List.of(new SharedSupports.Variant(0, 0, p, g, out.sets(), out.stats()))));
-            }
-            SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
-            if (s != null && s.total() <= ceiling * (1 + 1e-9)) {
-                List<Part> out = new ArrayList<>();
-                for (int i = 0; i < ordered.size(); i++) {
-                    Part pt = ordered.get(i);
-                    SpanLayout layout = s.picks().get(i).layout();
-                    double c = layout.cost(pt.problem(), designer.costModel()).total();
-                    var proof = Proof.solved(
-                            Proof.Status.OPTIMAL,
-                            CostModel.SPAN_UNITS.units(c),
-                            CostModel.SPAN_UNITS.units(c),
-                            CostModel.SPAN_UNITS,
-                            Proof.SolverStats.NONE,
-                            new SpanDesigner.Search(stats.get(i), 0, 0, true),
-                            designer.options());
-                    out.add(new Part(
-                            pt.segment(), pt.name(), pt.problem(), designer.adopt(pt.problem(), layout, proof)));
-                }
-                return out;
-            }
-            if (ceiling >= beat) {
-                return null;
-            }
-        }
-        return null;
-    }
-
-    /** The steps of redistribution tried at a support (6.6.5), percent. */
-    public static final double STEP = 5;
-
-    /**
-     * The line at a trial's section with the redistribution at each support chosen with the bars (6.6.5):
-     * first the line with none (each part's own optimum, then the support bars shared), which bounds the
-     * rest; then every part analysed for every pair of percentages at its two supports, its options under
-     * its share of that bound, and the line chosen by {@link SharedSupports} with a percentage per support
-     * that the support sections as built allow. Null when no line beats {@code beat}.
-     */
-    private Evaluated evaluateChoosing(LineInput in, Trial t, double ec, double beat) {
-        int n = in.spans().size();
-        // every part for every pair of percentages at its supports: alternating percentages along the line
-        // give every span each pair at its two supports
-        List<List<Double>> steps = Redistribution.steps(in);
-        int len = steps.stream().mapToInt(List::size).max().orElse(1);
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < n + 2; s++) {
-            shapes.add(t.shape());
-        }
-        java.util.Map<Integer, java.util.Map<List<Double>, SpanProblem>> variants = new java.util.TreeMap<>();
-        for (int a = 0; a < len; a++) {
-            for (int b = 0; b < len; b++) {
-                List<Double> v = new ArrayList<>();
-                for (int j = 0; j <= n; j++) {
-                    List<Double> sj = steps.get(j);
-                    v.add(sj.get(Math.min(j % 2 != 0 ? a : b, sj.size() - 1)));
-                }
-                for (SpanProblem p : lineProblems.analyse(in, shapes, ec, v).problems()) {
-                    int seg = LineProblems.segmentOf(p, n);
-                    int right = LineProblems.rightSupportOf(seg, n);
-                    double rRight = right < 0 ? 0.0 : v.get(right);
-                    List<Double> key = List.of(v.get(LineProblems.leftSupportOf(seg, n)), rRight);
-                    variants.computeIfAbsent(seg, k -> new java.util.LinkedHashMap<>())
-                            .putIfAbsent(key, LineProblems.heldAt(p, t.shape()));
-                }
-            }
-        }
-        // per variant the generator's sharper bound; per part the least over its variants holds whatever
-        // is chosen, and the frame is searched only where their sum could beat what is known
-        java.util.Map<Integer, java.util.Map<List<Double>, SpanGenerator>> generators = new java.util.TreeMap<>();
-        java.util.Map<Integer, java.util.Map<List<Double>, Double>> bounds = new java.util.TreeMap<>();
-        java.util.Map<Integer, Double> least = new java.util.TreeMap<>();
-        double boundSum = 0;
-        for (var e : variants.entrySet()) {
-            double lb = Double.POSITIVE_INFINITY;
-            for (var v : e.getValue().entrySet()) {
-                SpanGenerator g = designer.generator(v.getValue());
-                double b = g.sharpLeastCost();
-                generators
-                        .computeIfAbsent(e.getKey(), k -> new java.util.LinkedHashMap<>())
-                        .put(v.getKey(), g);
-                bounds.computeIfAbsent(e.getKey(), k -> new java.util.LinkedHashMap<>())
-                        .put(v.getKey(), b);
-                lb = Math.min(lb, b);
-            }
-            least.put(e.getKey(), lb);
-            boundSum += lb;
-        }
-        if (boundSum >= beat - 1e-9) {
-            return null;
-        }
-        // beat: the cheapest line found, at least the cheapest with no redistribution (searched first); a
-        // line under it leaves every part under its share, so the options under those shares hold it
-        List<SharedSupports.PartOptions> options = new ArrayList<>();
-        for (var e : variants.entrySet()) {
-            int seg = e.getKey();
-            double limit = beat - (boundSum - least.get(seg));
-            List<SharedSupports.Variant> vs = new ArrayList<>();
-            for (var v : e.getValue().entrySet()) {
-                if (Double.isFinite(limit) && bounds.get(seg).get(v.getKey()) >= limit) {
-                    continue;
-                }
-                SpanGenerator g = generators.get(seg).get(v.getKey());
-                SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
-                vs.add(new SharedSupports.Variant(
-                        v.getKey().get(0), v.getKey().get(1), v.getValue(), g, out.sets(), out.stats()));
-            }
-            options.add(new SharedSupports.PartOptions(
-                    seg, LineProblems.leftSupportOf(seg, n), LineProblems.rightSupportOf(seg, n), vs));
-        }
-        SharedSupports.Solution s = SharedSupports.solve(options, n + 1, maxBarSizes);
-        List<Part> parts;
-        List<Double> chosen = Redistribution.none(in);
-        if (s != null && s.total() < beat - 1e-6) {
-            parts = new ArrayList<>();
-            for (int k = 0; k < options.size(); k++) {
-                var pick = s.picks().get(k);
-                SpanProblem p = pick.variant().problem();
-                int seg = options.get(k).segment();
-                SpanLayout layout = pick.layout();
-                double c = layout.cost(p, designer.costModel()).total();
-                var proof = Proof.solved(
-                        Proof.Status.OPTIMAL,
-                        CostModel.SPAN_UNITS.units(c),
-                        CostModel.SPAN_UNITS.units(c),
-                        CostModel.SPAN_UNITS,
-                        Proof.SolverStats.NONE,
-                        new SpanDesigner.Search(pick.variant().stats(), 0, 0, true),
-                        designer.options());
-                parts.add(new Part(seg, LineProblems.partName(seg, n), p, designer.adopt(p, layout, proof)));
-                chosen.set(
-                        LineProblems.leftSupportOf(seg, n),
-                        Math.max(
-                                chosen.get(LineProblems.leftSupportOf(seg, n)),
-                                pick.variant().rLeft()));
-                if (LineProblems.rightSupportOf(seg, n) >= 0) {
-                    chosen.set(
-                            LineProblems.rightSupportOf(seg, n),
-                            Math.max(
-                                    chosen.get(LineProblems.rightSupportOf(seg, n)),
-                                    pick.variant().rRight()));
-                }
-            }
-        } else {
-            return null;
-        }
-        double total = total(parts);
-        if (total >= beat - 1e-9) {
-            return null;
-        }
-        Trial used =
-                new Trial(t.shape(), t.problems(), t.analysis(), t.coefficients(), chosen, t.bound(), t.lowerBounds());
-        return new Evaluated(used, parts, total, 1, Redistribution.supportStrains(in, parts));
-    }
-
-    private static double total(List<Part> parts) {
-        double t = 0;
-        for (Part pt : parts) {
-            t += pt.outcome().best().cost().total();
-        }
-        return t;
     }
 }
