@@ -50,6 +50,21 @@ final class LineProblems {
     /** One analysis of the line (by stiffness or by the 6.5 coefficients) and the part problems from it. */
     record Analysed(List<SpanProblem> problems, LineResult analysis, List<Coefficients.SpanValues> coefficients) {}
 
+    /**
+     * As {@link #analyse}, for several redistributions at once (by stiffness): the line is solved once and
+     * its envelope taken for each, in the order given.
+     */
+    List<Analysed> analyseEach(LineInput in, List<SectionShape> shapes, double ec, List<List<Double>> reds) {
+        Line line = in.toLine(shapes, ec, effectiveDepth(shapes), reds.get(0));
+        List<LineResult> results = LineAnalysis.analyseEach(line, reds, 50);
+        List<Analysed> out = new ArrayList<>();
+        for (int i = 0; i < reds.size(); i++) {
+            Line li = line.withRedistribution(reds.get(i));
+            out.add(new Analysed(fromAnalysis(in, li, results.get(i)), results.get(i), null));
+        }
+        return out;
+    }
+
     Analysed analyse(LineInput in, List<SectionShape> shapes, double ec, List<Double> red) {
         Line line = in.toLine(shapes, ec, effectiveDepth(shapes), red);
         if (in.coefficients()) {

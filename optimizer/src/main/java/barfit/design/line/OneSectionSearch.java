@@ -151,8 +151,16 @@ final class OneSectionSearch {
         boolean choosing = Redistribution.choosing(in);
         // choosing: the line with none, and a bound that holds whatever is chosen (a support's moment
         // falls and the span's rises with the percentage, and the bound rises with each)
-        LineProblems.Analysed a = lineProblems.analyse(in, shapes, ec, choosing ? Redistribution.none(in) : red);
-        LineProblems.Analysed most = choosing ? lineProblems.analyse(in, shapes, ec, Redistribution.most(in)) : null;
+        LineProblems.Analysed a;
+        LineProblems.Analysed most = null;
+        if (choosing) {
+            var both =
+                    lineProblems.analyseEach(in, shapes, ec, List.of(Redistribution.none(in), Redistribution.most(in)));
+            a = both.get(0);
+            most = both.get(1);
+        } else {
+            a = lineProblems.analyse(in, shapes, ec, red);
+        }
         List<SpanProblem> problems = a.problems();
         LineResult analysis = a.analysis();
         List<Coefficients.SpanValues> coefficients = a.coefficients();
@@ -308,6 +316,7 @@ final class OneSectionSearch {
             shapes.add(t.shape());
         }
         java.util.Map<Integer, java.util.Map<List<Double>, SpanProblem>> variants = new java.util.TreeMap<>();
+        List<List<Double>> patterns = new ArrayList<>();
         for (int a = 0; a < len; a++) {
             for (int b = 0; b < len; b++) {
                 List<Double> v = new ArrayList<>();
@@ -315,14 +324,19 @@ final class OneSectionSearch {
                     List<Double> sj = steps.get(j);
                     v.add(sj.get(Math.min(j % 2 != 0 ? a : b, sj.size() - 1)));
                 }
-                for (SpanProblem p : lineProblems.analyse(in, shapes, ec, v).problems()) {
-                    int seg = LineProblems.segmentOf(p, n);
-                    int right = LineProblems.rightSupportOf(seg, n);
-                    double rRight = right < 0 ? 0.0 : v.get(right);
-                    List<Double> key = List.of(v.get(LineProblems.leftSupportOf(seg, n)), rRight);
-                    variants.computeIfAbsent(seg, k -> new java.util.LinkedHashMap<>())
-                            .putIfAbsent(key, LineProblems.heldAt(p, t.shape()));
-                }
+                patterns.add(v);
+            }
+        }
+        List<LineProblems.Analysed> analysed = lineProblems.analyseEach(in, shapes, ec, patterns);
+        for (int i = 0; i < patterns.size(); i++) {
+            List<Double> v = patterns.get(i);
+            for (SpanProblem p : analysed.get(i).problems()) {
+                int seg = LineProblems.segmentOf(p, n);
+                int right = LineProblems.rightSupportOf(seg, n);
+                double rRight = right < 0 ? 0.0 : v.get(right);
+                List<Double> key = List.of(v.get(LineProblems.leftSupportOf(seg, n)), rRight);
+                variants.computeIfAbsent(seg, k -> new java.util.LinkedHashMap<>())
+                        .putIfAbsent(key, LineProblems.heldAt(p, t.shape()));
             }
         }
         // per variant the generator's sharper bound; per part the least over its variants holds whatever
