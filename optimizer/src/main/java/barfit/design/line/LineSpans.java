@@ -191,7 +191,9 @@ public final class LineSpans {
 
     /**
      * The parts' problems with the whole line at one section, analysed with that section's own weight and
-     * stiffness and the redistribution asked: what a line of one section designs against (for its oracle).
+     * stiffness: with none redistributed where the search chooses the redistribution (the line asks for
+     * some, by stiffness), else with what is asked. What a line of one section designs against with no
+     * redistribution (for its oracle).
      */
     List<SpanProblem> problemsAt(LineInput in, SectionShape shape) {
         return oneSectionSearch.problemsAt(in, shape);
