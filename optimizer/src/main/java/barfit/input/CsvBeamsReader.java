@@ -29,7 +29,9 @@ import java.util.Map;
  * <pre>
  * id,span,ends,m_left,m_mid,m_right,v_left,v_right,max_depth,group,flange_width,flange_thickness,dead,live
  * </pre>
- * {@code vu} may stand for both end shears. Optional: {@code width} (fixes b), {@code flange_type} (T or L),
+ * {@code vu} may stand for both end shears. Optional: {@code line} (the row is a span of that line: the
+ * line's spans keep one b × h, one set of forms, in place of a {@code group}), {@code width} (fixes b),
+ * {@code flange_type} (T or L),
  * {@code flange_clear_to_next_web} (sw of Table 6.3.2.1), {@code sustained_live}.
  */
 public final class CsvBeamsReader {
@@ -46,6 +48,7 @@ public final class CsvBeamsReader {
             "v_right",
             "max_depth",
             "group",
+            "line",
             "flange_width",
             "flange_thickness",
             "flange_type",
@@ -402,6 +405,17 @@ public final class CsvBeamsReader {
                 positive(r, "width", "the fixed web width, " + u.unit(Dim.LENGTH), Dim.LENGTH, InputLimits.WEB_WIDTH);
         Cell groupCell = r.cells().get("group");
         String group = empty(groupCell) ? null : groupCell.text();
+        Cell lineCell = r.cells().get("line");
+        boolean ofLine = !empty(lineCell);
+        if (ofLine) {
+            if (group != null) {
+                throw error(
+                        lineCell,
+                        "line: a span of a line is grouped with the line's other spans; expected line or group, "
+                                + "not both");
+            }
+            group = "line " + lineCell.text();
+        }
         Double bf = positive(
                 r, "flange_width", "the flange width, " + u.unit(Dim.LENGTH), Dim.LENGTH, InputLimits.FLANGE_WIDTH);
         Double hf = positive(
@@ -483,7 +497,7 @@ public final class CsvBeamsReader {
         }
         DesignBeam.WholeSpan whole =
                 new DesignBeam.WholeSpan(ml, mm, mr, vl, vr, service, SpanChecks.Limits.DEFAULT, false);
-        return new DesignBeam(id, where, 0, null, cap, width, flange, new Span(span, ends), whole, group);
+        return new DesignBeam(id, where, 0, null, cap, width, flange, new Span(span, ends), whole, group, ofLine);
     }
 
     private Double siOrNull(Double v, Dim dim) {

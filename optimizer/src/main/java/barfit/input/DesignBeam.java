@@ -21,7 +21,26 @@ public record DesignBeam(
         Flange flange,
         Span span,
         WholeSpan whole,
-        String group) {
+        String group,
+        boolean sameSection) {
+
+    /**
+     * {@code sameSection}: the beam's group keeps one b × h whatever the rationalisation asks (the spans of a
+     * line given in a CSV's {@code line} column: one set of forms).
+     */
+    public DesignBeam(
+            String id,
+            Location location,
+            double mu,
+            Double vu,
+            Double maxDepth,
+            Double width,
+            Flange flange,
+            Span span,
+            WholeSpan whole,
+            String group) {
+        this(id, location, mu, vu, maxDepth, width, flange, span, whole, group, false);
+    }
 
     /**
      * The parts of a whole span: moments at the left support, mid-span and right support (N·mm, null

@@ -34,7 +34,7 @@ public final class ScheduleInputReader {
         DesignInput design = read.design();
         List<ScheduleBeam> out = new ArrayList<>();
         for (DesignBeam b : read.beams()) {
-            out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(design, b)));
+            out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(design, b), null, b.sameSection()));
         }
         List<LineInput> lines = read.lines();
         if (!lines.isEmpty()) {

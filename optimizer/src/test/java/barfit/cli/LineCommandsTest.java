@@ -94,4 +94,36 @@ class LineCommandsTest {
                 .get(0);
         assertEquals(design.get("cost").get("total").asDouble(), last, 1e-6);
     }
+
+    @Test
+    void aCsvLineColumnKeepsTheLinesSpansAtOneSection() throws IOException {
+        // invented schedule: two spans of line LA and the same two spans with no line, rationalised with room
+        // for every size; the spans of the line keep one b x h (one set of forms), the others each their own
+        Path settings = write("s.yaml", """
+                units: SI
+                concrete: {fc: 28}
+                steel: {fy: 420}
+                search:
+                  widths: [250, 300, 350, 400]
+                  depth: {min: 400, max: 700, step: 50}
+                rationalise: {max_section_sizes: 6, max_bar_sizes: 4}
+                """);
+        Path beams = write("b.csv", """
+                id,span,ends,m_left,m_mid,m_right,v_left,v_right,line
+                A1,7.0,one-end-continuous,,120,-180,95,120,LA
+                A2,7.0,one-end-continuous,-300,250,,190,160,LA
+                C1,7.0,one-end-continuous,,120,-180,95,120,
+                C2,7.0,one-end-continuous,-300,250,,190,160,
+                """);
+        Cli r = Cli.run("schedule", settings.toString(), "--beams", beams.toString(), "--format", "json", "--quiet");
+        assertEquals(0, r.exit(), r.err());
+        java.util.Map<String, String> size = new java.util.HashMap<>();
+        for (JsonNode b : new ObjectMapper().readTree(r.out()).get("beams")) {
+            size.put(
+                    b.get("id").asText(),
+                    b.get("width").asDouble() + " x " + b.get("height").asDouble());
+        }
+        assertEquals(size.get("A1"), size.get("A2"), "the line's spans share one section: " + size);
+        assertTrue(!size.get("C1").equals(size.get("C2")), "alone they would not: " + size);
+    }
 }
