@@ -276,18 +276,11 @@ final class OneSectionSearch {
                 List<Part> out = new ArrayList<>();
                 for (int i = 0; i < ordered.size(); i++) {
                     Part pt = ordered.get(i);
-                    SpanLayout layout = s.picks().get(i).layout();
-                    double c = layout.cost(pt.problem(), designer.costModel()).total();
-                    var proof = Proof.solved(
-                            Proof.Status.OPTIMAL,
-                            CostModel.SPAN_UNITS.units(c),
-                            CostModel.SPAN_UNITS.units(c),
-                            CostModel.SPAN_UNITS,
-                            Proof.SolverStats.NONE,
-                            new SpanDesigner.Search(stats.get(i), 0, 0, true),
-                            designer.options());
                     out.add(new Part(
-                            pt.segment(), pt.name(), pt.problem(), designer.adopt(pt.problem(), layout, proof)));
+                            pt.segment(),
+                            pt.name(),
+                            pt.problem(),
+                            adopted(pt.problem(), s.picks().get(i).layout(), stats.get(i))));
                 }
                 return out;
             }
@@ -391,17 +384,11 @@ final class OneSectionSearch {
                 var pick = s.picks().get(k);
                 SpanProblem p = pick.variant().problem();
                 int seg = options.get(k).segment();
-                SpanLayout layout = pick.layout();
-                double c = layout.cost(p, designer.costModel()).total();
-                var proof = Proof.solved(
-                        Proof.Status.OPTIMAL,
-                        CostModel.SPAN_UNITS.units(c),
-                        CostModel.SPAN_UNITS.units(c),
-                        CostModel.SPAN_UNITS,
-                        Proof.SolverStats.NONE,
-                        new SpanDesigner.Search(pick.variant().stats(), 0, 0, true),
-                        designer.options());
-                parts.add(new Part(seg, LineProblems.partName(seg, n), p, designer.adopt(p, layout, proof)));
+                parts.add(new Part(
+                        seg,
+                        LineProblems.partName(seg, n),
+                        p,
+                        adopted(p, pick.layout(), pick.variant().stats())));
                 chosen.set(
                         LineProblems.leftSupportOf(seg, n),
                         Math.max(
@@ -433,5 +420,24 @@ final class OneSectionSearch {
             t += pt.outcome().best().cost().total();
         }
         return t;
+    }
+
+    /**
+     * A part's layout as the line's search chose it, re-verified by the span designer and given the line's
+     * proof: optimal for the line (the dynamic programming is exhaustive over the options), with this
+     * part's own generator counts and no solve of its own.
+     */
+    private SpanDesigner.Outcome adopted(SpanProblem p, SpanLayout layout, SpanGenerator.Stats stats) {
+        long units =
+                CostModel.SPAN_UNITS.units(layout.cost(p, designer.costModel()).total());
+        var proof = Proof.solved(
+                Proof.Status.OPTIMAL,
+                units,
+                units,
+                CostModel.SPAN_UNITS,
+                Proof.SolverStats.NONE,
+                new SpanDesigner.Search(stats, 0, 0, true),
+                designer.options());
+        return designer.adopt(p, layout, proof);
     }
 }

@@ -47,12 +47,22 @@ public final class SpanGenerator {
         void lower(FrameOptions evaluated);
     }
 
-    /** The span's design: a combination pays only below the cheapest found (or the search's ceiling). */
+    /**
+     * The span's design: a combination pays only below the cheapest found (or the search's ceiling). Where
+     * it does not {@code lower}, the cost stays as given: a part of a line, whose parts share their
+     * support bars and so cannot each take their own cheapest combination.
+     */
     private static final class Cheapest implements CostToBeat {
         private double cost;
+        private final boolean lowers;
 
         Cheapest(double cost) {
+            this(cost, true);
+        }
+
+        Cheapest(double cost, boolean lowers) {
             this.cost = cost;
+            this.lowers = lowers;
         }
 
         @Override
@@ -72,32 +82,10 @@ public final class SpanGenerator {
 
         @Override
         public void lower(FrameOptions evaluated) {
-            cost = Math.min(cost, evaluated.best());
+            if (lowers) {
+                cost = Math.min(cost, evaluated.best());
+            }
         }
-    }
-
-    /**
-     * A cost that evaluating frames does not lower: for a part of a line, whose parts share their support
-     * bars and so cannot each take their own cheapest combination.
-     */
-    private record Fixed(double cost) implements CostToBeat {
-        @Override
-        public double limit(BarSize top, BarSize bottom) {
-            return cost;
-        }
-
-        @Override
-        public double limitForTop(BarSize top) {
-            return cost;
-        }
-
-        @Override
-        public double common() {
-            return cost;
-        }
-
-        @Override
-        public void lower(FrameOptions evaluated) {}
     }
 
     private final SpanProblem p;
@@ -290,7 +278,7 @@ public final class SpanGenerator {
                 break;
             }
             evaluated++;
-            FrameOptions fs = evaluate(f, new Fixed(limit));
+            FrameOptions fs = evaluate(f, new Cheapest(limit, false));
             if (fs != null) {
                 sets.add(combinations.prune(fs, limit));
             }
