@@ -142,6 +142,10 @@ final class DesignCommand implements Callable<Integer> {
                     .filter(pt -> !pt.outcome().feasible())
                     .map(LineSpans.Part::name)
                     .toList();
+            double lineCost = 0;
+            for (LineSpans.Part pt : r.parts()) {
+                lineCost += pt.outcome().feasible() ? pt.outcome().best().cost().total() : Double.NaN;
+            }
             for (int i = 0; i < r.parts().size(); i++) {
                 LineSpans.Part part = r.parts().get(i);
                 outcomes.add(DesignItem.of(
@@ -160,7 +164,8 @@ final class DesignCommand implements Callable<Integer> {
                                 !r.held().isEmpty(),
                                 r.oneSection(),
                                 r.supports(),
-                                r.withoutRedistribution())));
+                                r.withoutRedistribution(),
+                                lineCost)));
             }
         }
         String text = format == OutputFormat.json

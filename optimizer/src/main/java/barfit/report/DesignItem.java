@@ -15,7 +15,7 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
      * {@code oneSection} how a line of one set of forms was designed (null for span by span); {@code supports}
      * the top bars over each support (null where none); {@code withoutRedistribution} what the line
      * costs with none where the search chose the redistribution (infinite where it has no design with none),
-     * else NaN.
+     * else NaN; {@code lineCost} the sum of the parts' costs (NaN where a part has no design).
      */
     public record LinePart(
             String line,
@@ -31,7 +31,8 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
             boolean held,
             barfit.design.line.LineSpans.OneSection oneSection,
             java.util.List<barfit.design.line.LineSpans.SupportBars> supports,
-            double withoutRedistribution) {
+            double withoutRedistribution,
+            double lineCost) {
         /** Whether the search chose the redistribution at each support (else it was lowered to what is allowed). */
         public boolean chosen() {
             return !Double.isNaN(withoutRedistribution);

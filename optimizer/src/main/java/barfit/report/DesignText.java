@@ -88,6 +88,13 @@ public final class DesignText {
             }
             if (o.line() != null && o.line().first()) {
                 supports(o.line(), u, out);
+                if (one != null && !one.fellBack() && !Double.isNaN(o.line().lineCost())) {
+                    out.append("  line cost ")
+                            .append(String.format(Locale.ROOT, "%.2f", o.line().lineCost()))
+                            .append(currency == null || currency.isEmpty() ? "" : " " + currency)
+                            .append(" (its parts below): the cheapest line of the search space, proved by dynamic "
+                                    + "programming along it over every part's options\n");
+                }
             }
             if (o.line() != null && o.line().first()) {
                 var lp = o.line();
