@@ -91,4 +91,22 @@ public final class StrengthBound {
     public static double withMinimumSteel(double strengthArea, double asMin) {
         return Math.max(strengthArea, Math.min(asMin, 4.0 / 3.0 * strengthArea));
     }
+
+    /**
+     * The largest net tensile strain εt any layout with no compression steel could have while carrying
+     * Mu: the least area that can (φ at most 0.90) gives the shallowest block, c = As fy / (0.85 f'c b β1),
+     * and the deepest tension steel {@code dMax} the most strain, εt = 0.003 (dMax − c) / c (22.2.2.1,
+     * 22.2.2.4.1). More steel, a shallower layer or steel below yield only lower it. Infinite for no moment.
+     */
+    public static double maxEpsT(double mu, double dMax, double b, double fc, double fy, CodeEquations code) {
+        double as = minTensionArea(mu, dMax, 0, 0, 0, b, fc, fy);
+        if (as == 0) {
+            return Double.POSITIVE_INFINITY;
+        }
+        if (Double.isInfinite(as)) {
+            return 0;
+        }
+        double c = as * fy / (CodeTables.BLOCK_STRESS * fc * b * CodeTables.beta1(fc, code));
+        return CodeTables.EPS_CU * (dMax - c) / c;
+    }
 }

@@ -87,4 +87,20 @@ class StrengthBoundTest {
         // As,req = 700: 4/3 x 700 = 933.3 > As,min = 800, so As,min does
         assertEquals(800, StrengthBound.withMinimumSteel(700, 800), 1e-9);
     }
+
+    @Test
+    void maxEpsTByHand() {
+        // hand calculation from ACI 318-19 22.2.2 (Whitney block, 0.85 f'c, beta1 = 0.85 for 28 MPa, Table
+        // 22.2.2.4.3) and phi = 0.90 (Table 21.2.2): b = 300 mm, d = 500 mm, f'c = 28 MPa, fy = 420 MPa,
+        // Mu = 200 kN·m. Mn = 222.22 kN·m = T (d - T / (2 x 0.85 x 28 x 300)) gives T = 476.2 kN,
+        // a = 66.70 mm, c = a / 0.85 = 78.47 mm, eps_t = 0.003 (500 - 78.47) / 78.47 = 0.01612
+        double e = StrengthBound.maxEpsT(200e6, 500, 300, 28, 420, CodeEquations.SI);
+        assertEquals(0.01612, e, 0.00002);
+        // a larger moment needs more steel: a deeper block, less strain
+        assertTrue(StrengthBound.maxEpsT(400e6, 500, 300, 28, 420, CodeEquations.SI) < e);
+        // a layout with more steel than the least has less strain (hand calculation): 4 No. 22 at d = 500
+        // (As = 1548 mm²) gives c = 1548 x 420 / (0.85 x 28 x 300 x 0.85) = 107.1 mm, eps_t = 0.0110
+        assertEquals(0.0110, 0.003 * (500 - 107.1) / 107.1, 0.0001);
+        assertTrue(0.003 * (500 - 107.1) / 107.1 <= e);
+    }
 }

@@ -137,7 +137,8 @@ final class OneSectionSearch {
             List<Coefficients.SpanValues> coefficients,
             List<Double> redistribution,
             double bound,
-            List<Double> lowerBounds) {}
+            List<Double> lowerBounds,
+            List<SpanProblem> leastDemand) {}
 
     /** The parts designed at a trial's section, their total cost, the rounds redistribution took. */
     private record Evaluated(Trial trial, List<Part> parts, double total, int rounds, List<Double> epsT) {}
@@ -165,6 +166,7 @@ final class OneSectionSearch {
         LineResult analysis = a.analysis();
         List<Coefficients.SpanValues> coefficients = a.coefficients();
         List<SpanProblem> held = new ArrayList<>();
+        List<SpanProblem> leastDemand = new ArrayList<>();
         List<Double> lower = new ArrayList<>();
         double bound = 0;
         for (int k = 0; k < problems.size(); k++) {
@@ -175,6 +177,7 @@ final class OneSectionSearch {
                 SpanProblem m = most.problems().get(k);
                 least = q.withSupportMoments(m.mLeft(), m.mRight());
             }
+            leastDemand.add(least);
             double lb = designer.leastCost(least);
             lower.add(lb);
             bound += lb;
@@ -186,7 +189,8 @@ final class OneSectionSearch {
                 coefficients,
                 List.copyOf(choosing ? Redistribution.none(in) : red),
                 bound,
-                List.copyOf(lower));
+                List.copyOf(lower),
+                List.copyOf(leastDemand));
     }
 
     /**
@@ -302,7 +306,17 @@ final class OneSectionSearch {
         int n = in.spans().size();
         // every part for every pair of percentages at its supports: alternating percentages along the line
         // give every span each pair at its two supports
-        List<List<Double>> steps = Redistribution.steps(in);
+        // a support where a section beside it cannot reach εt >= 0.0075 even with the least steel carrying
+        // its most redistributed moment takes none (6.6.5); with none anywhere, the first pass has the answer
+        List<List<Double>> steps = new ArrayList<>(Redistribution.steps(in));
+        for (int j = 0; j <= n; j++) {
+            if (steps.get(j).size() > 1 && !mayRedistribute(t, j, n)) {
+                steps.set(j, List.of(0.0));
+            }
+        }
+        if (steps.stream().allMatch(sj -> sj.size() == 1)) {
+            return null;
+        }
         int len = steps.stream().mapToInt(List::size).max().orElse(1);
         List<SectionShape> shapes = new ArrayList<>();
         for (int s = 0; s < n + 2; s++) {
@@ -409,8 +423,15 @@ final class OneSectionSearch {
         if (total >= beat - 1e-9) {
             return null;
         }
-        Trial used =
-                new Trial(t.shape(), t.problems(), t.analysis(), t.coefficients(), chosen, t.bound(), t.lowerBounds());
+        Trial used = new Trial(
+                t.shape(),
+                t.problems(),
+                t.analysis(),
+                t.coefficients(),
+                chosen,
+                t.bound(),
+                t.lowerBounds(),
+                t.leastDemand());
         return new Evaluated(used, parts, total, 1, Redistribution.supportStrains(in, parts));
     }
 
@@ -439,5 +460,37 @@ final class OneSectionSearch {
                 new SpanDesigner.Search(stats, 0, 0, true),
                 designer.options());
         return designer.adopt(p, layout, proof);
+    }
+
+    /**
+     * Whether every support section beside support {@code j} could reach the strain 6.6.5 asks for any
+     * redistribution (the section model's bound on εt: the least steel carrying its moment at the most
+     * redistribution, as deep as the cover allows, no compression steel, as at a line's supports).
+     */
+    private static boolean mayRedistribute(Trial t, int j, int n) {
+        for (SpanProblem p : t.leastDemand()) {
+            int seg = LineProblems.segmentOf(p, n);
+            Double mu = null;
+            if (LineProblems.leftSupportOf(seg, n) == j && p.leftSupport()) {
+                mu = p.mLeft();
+            } else if (LineProblems.rightSupportOf(seg, n) == j && p.rightSupport()) {
+                mu = p.mRight();
+            }
+            if (mu == null) {
+                continue;
+            }
+            double dMax = t.shape().height() - p.detailing().cover();
+            double epsT = barfit.section.StrengthBound.maxEpsT(
+                    Math.abs(mu),
+                    dMax,
+                    t.shape().width(),
+                    p.materials().fc(),
+                    p.materials().fy(),
+                    p.code());
+            if (barfit.analysis.RedistributionLimit.percent(epsT) <= 0) {
+                return false;
+            }
+        }
+        return true;
     }
 }
