@@ -124,23 +124,13 @@ final class AnalyseCommand implements Callable<Integer> {
     }
 
     private void writePlots(List<AnalysisText.Analysed> out, Settings settings) throws IOException {
-        Location at = Location.ofFile(plot.toString());
-        if (Files.exists(plot) && !Files.isDirectory(plot)) {
-            throw new InputError(at, "is a file; expected a folder for the plots");
-        }
-        List<Path> targets = new ArrayList<>();
+        List<String> ids = new ArrayList<>();
         for (AnalysisText.Analysed a : out) {
-            if (a.result() == null) {
-                continue;
+            if (a.result() != null) {
+                ids.add(a.input().id());
             }
-            Path p = plot.resolve(a.input().id().replaceAll("[^A-Za-z0-9._-]", "_") + "-envelope.svg");
-            if (Files.exists(p) && !force) {
-                throw new InputError(
-                        Location.ofFile(p.toString()),
-                        "exists; expected a new folder, or --force to " + "replace the plots");
-            }
-            targets.add(p);
         }
+        List<Path> targets = PlotFolder.targets(plot, ids, "-envelope.svg", force);
         Files.createDirectories(plot);
         int k = 0;
         for (AnalysisText.Analysed a : out) {

@@ -110,7 +110,9 @@ final class DesignCommand implements Callable<Integer> {
             }
         }
         var settings = input.settings();
-        List<Path> plots = plotTargets(lines);
+        List<Path> plots = plot == null
+                ? List.of()
+                : PlotFolder.targets(plot, lines.stream().map(LineInput::id).toList(), "-capacity.svg", force);
         CostModel cost = new CostModel(
                 input.rates(), settings.detailing().cover(), settings.units().code());
         SectionDesigner designer = new SectionDesigner(cost, options);
@@ -196,26 +198,5 @@ final class DesignCommand implements Callable<Integer> {
                 b.width(),
                 b.flange(),
                 length);
-    }
-
-    /** Where each line's plot goes; refused before any design where one exists and --force is not given. */
-    private List<Path> plotTargets(List<LineInput> lines) {
-        List<Path> out = new ArrayList<>();
-        if (plot == null) {
-            return out;
-        }
-        if (Files.exists(plot) && !Files.isDirectory(plot)) {
-            throw new InputError(Location.ofFile(plot.toString()), "is a file; expected a folder for the plots");
-        }
-        for (LineInput l : lines) {
-            Path p = plot.resolve(l.id().replaceAll("[^A-Za-z0-9._-]", "_") + "-capacity.svg");
-            if (Files.exists(p) && !force) {
-                throw new InputError(
-                        Location.ofFile(p.toString()),
-                        "exists; expected a new folder, or --force to replace the plots");
-            }
-            out.add(p);
-        }
-        return out;
     }
 }

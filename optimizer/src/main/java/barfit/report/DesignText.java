@@ -387,17 +387,16 @@ public final class DesignText {
                             .append(extra == 1 ? " extra bar " : " extra bars ")
                             .append(SpanText.span(sb.extraBarLength(), u))
                             .append(" long (");
-                    double intoLeft = sb.extraBarLength() - sb.width() - intoRight(sb);
-                    if (intoLeft > 0) {
-                        out.append(SpanText.span(intoLeft, u))
+                    if (sb.intoLeft() > 0) {
+                        out.append(SpanText.span(sb.intoLeft(), u))
                                 .append(" into ")
                                 .append(sb.left() != null ? sb.left().part() : "the back span")
                                 .append(", ");
                     }
                     out.append(SpanText.span(sb.width(), u)).append(" over the support");
-                    if (intoRight(sb) > 0) {
+                    if (sb.intoRight() > 0) {
                         out.append(", ")
-                                .append(SpanText.span(intoRight(sb), u))
+                                .append(SpanText.span(sb.intoRight(), u))
                                 .append(" into ")
                                 .append(sb.right() != null ? sb.right().part() : "the back span");
                     }
@@ -416,12 +415,6 @@ public final class DesignText {
             }
             out.append('\n');
         }
-    }
-
-    private static double intoRight(barfit.design.line.LineSpans.SupportBars sb) {
-        return Math.max(
-                sb.right() == null ? 0 : sb.right().extension(),
-                sb.left() == null ? 0 : sb.left().anchorage());
     }
 
     private static String bars(barfit.design.line.LineSpans.Side side, UnitSystem u) {

@@ -43,35 +43,17 @@ public final class EnvelopePlot {
             vMax.add(x, u.fromSI(s.vMax(), Dim.FORCE));
             vMin.add(x, u.fromSI(s.vMin(), Dim.FORCE));
         }
-        XYPlot moments = plot(mMax, mMin, "M (" + u.unit(Dim.MOMENT) + "), + sagging");
-        XYPlot shears = plot(vMax, vMin, "V (" + u.unit(Dim.FORCE) + ")");
-        for (int j = 0; j <= r.line().spanCount(); j++) {
-            double x = u.fromSI(r.line().supportX(j), Dim.SPAN);
-            for (XYPlot p : new XYPlot[] {moments, shears}) {
-                ValueMarker m = new ValueMarker(
-                        x,
-                        SUPPORT,
-                        new BasicStroke(
-                                1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {4f, 4f}, 0f));
-                p.addDomainMarker(m);
-            }
-        }
-        NumberAxis x =
-                new NumberAxis("x along the line from the first support's centre line (" + u.unit(Dim.SPAN) + ")");
-        x.setAutoRangeIncludesZero(false);
-        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(x);
+        XYPlot moments = plot("M (" + u.unit(Dim.MOMENT) + "), + sagging", mMax, mMin);
+        XYPlot shears = plot("V (" + u.unit(Dim.FORCE) + ")", vMax, vMin);
+        markSupports(r, u, moments, shears);
+        CombinedDomainXYPlot combined = new CombinedDomainXYPlot(xAxis(u));
         combined.setGap(12);
         combined.add(moments, 3);
         combined.add(shears, 2);
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), combined, true);
         chart.setTitle(new TextTitle(
                 "Line " + id + ": factored moment and shear envelopes", new Font(Font.SANS_SERIF, Font.BOLD, 14)));
-        chart.setBackgroundPaint(Color.WHITE);
-        chart.setAntiAlias(true);
-        SVGGraphics2D g = new SVGGraphics2D(900, 640);
-        g.setDefsKeyPrefix("envelope-"); // a fixed prefix keeps the file the same from run to run
-        chart.draw(g, new Rectangle2D.Double(0, 0, 900, 640));
-        return g.getSVGDocument().replace("\r\n", "\n") + "\n";
+        return draw(chart, "envelope-", 640);
     }
 
     private static final Color CAPACITY = new Color(0x2e, 0x7d, 0x32);
@@ -91,40 +73,14 @@ public final class EnvelopePlot {
             mMax.add(x, u.fromSI(s.mMax(), Dim.MOMENT));
             mMin.add(x, u.fromSI(s.mMin(), Dim.MOMENT));
         }
-        XYSeries plus = steps("φMn, bottom bars", cap.sagging(), 1, u);
-        XYSeries minus = steps("−φMn, top bars", cap.hogging(), -1, u);
-        XYSeriesCollection data = new XYSeriesCollection();
-        data.addSeries(mMax);
-        data.addSeries(mMin);
-        data.addSeries(plus);
-        data.addSeries(minus);
-        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
-        renderer.setSeriesPaint(0, MAX);
-        renderer.setSeriesPaint(1, MIN);
-        renderer.setSeriesPaint(2, CAPACITY);
-        renderer.setSeriesPaint(3, CAPACITY);
-        renderer.setSeriesStroke(0, new BasicStroke(2f));
-        renderer.setSeriesStroke(1, new BasicStroke(2f));
-        BasicStroke dashed =
-                new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {7f, 4f}, 0f);
-        renderer.setSeriesStroke(2, dashed);
-        renderer.setSeriesStroke(3, dashed);
-        NumberAxis y = new NumberAxis("M and φMn (" + u.unit(Dim.MOMENT) + "), + sagging");
-        XYPlot p = new XYPlot(data, null, y, renderer);
-        p.setBackgroundPaint(Color.WHITE);
-        p.setDomainGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
-        p.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
-        p.addRangeMarker(new ValueMarker(0, Color.BLACK, new BasicStroke(0.8f)));
-        for (int j = 0; j <= r.line().spanCount(); j++) {
-            p.addDomainMarker(new ValueMarker(
-                    u.fromSI(r.line().supportX(j), Dim.SPAN),
-                    SUPPORT,
-                    new BasicStroke(1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {4f, 4f}, 0f)));
-        }
-        NumberAxis x =
-                new NumberAxis("x along the line from the first support's centre line (" + u.unit(Dim.SPAN) + ")");
-        x.setAutoRangeIncludesZero(false);
-        p.setDomainAxis(x);
+        XYPlot p = plot(
+                "M and φMn (" + u.unit(Dim.MOMENT) + "), + sagging",
+                mMax,
+                mMin,
+                steps("φMn, bottom bars", cap.sagging(), 1, u),
+                steps("−φMn, top bars", cap.hogging(), -1, u));
+        markSupports(r, u, p);
+        p.setDomainAxis(xAxis(u));
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), p, true);
         chart.setTitle(new TextTitle(
                 "Line " + id + ": factored moment envelope and the φMn of the bars as designed",
@@ -133,11 +89,37 @@ public final class EnvelopePlot {
                 "supports' centre lines dashed; sections at columns and fixed supports are designed at their faces"
                         + " (9.4.2.1), so over a support's width the envelope may pass the strength drawn",
                 new Font(Font.SANS_SERIF, Font.PLAIN, 11)));
+        return draw(chart, "capacity-", 520);
+    }
+
+    /** The supports' centre lines, dashed, on each plot. */
+    private static void markSupports(LineResult r, UnitSystem u, XYPlot... plots) {
+        for (int j = 0; j <= r.line().spanCount(); j++) {
+            double x = u.fromSI(r.line().supportX(j), Dim.SPAN);
+            for (XYPlot p : plots) {
+                p.addDomainMarker(new ValueMarker(
+                        x,
+                        SUPPORT,
+                        new BasicStroke(
+                                1f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {4f, 4f}, 0f)));
+            }
+        }
+    }
+
+    private static NumberAxis xAxis(UnitSystem u) {
+        NumberAxis x =
+                new NumberAxis("x along the line from the first support's centre line (" + u.unit(Dim.SPAN) + ")");
+        x.setAutoRangeIncludesZero(false);
+        return x;
+    }
+
+    /** The chart as SVG, 900 px wide; a fixed defs prefix keeps the file the same from run to run. */
+    private static String draw(JFreeChart chart, String prefix, int height) {
         chart.setBackgroundPaint(Color.WHITE);
         chart.setAntiAlias(true);
-        SVGGraphics2D g = new SVGGraphics2D(900, 520);
-        g.setDefsKeyPrefix("capacity-"); // a fixed prefix keeps the file the same from run to run
-        chart.draw(g, new Rectangle2D.Double(0, 0, 900, 520));
+        SVGGraphics2D g = new SVGGraphics2D(900, height);
+        g.setDefsKeyPrefix(prefix);
+        chart.draw(g, new Rectangle2D.Double(0, 0, 900, height));
         return g.getSVGDocument().replace("\r\n", "\n") + "\n";
     }
 
@@ -160,7 +142,11 @@ public final class EnvelopePlot {
         return out;
     }
 
-    private static XYPlot plot(XYSeries hi, XYSeries lo, String label) {
+    /**
+     * A plot of the largest and least values (solid) and any further series (the strength, dashed), with the
+     * zero line.
+     */
+    private static XYPlot plot(String label, XYSeries hi, XYSeries lo, XYSeries... more) {
         XYSeriesCollection data = new XYSeriesCollection();
         data.addSeries(hi);
         data.addSeries(lo);
@@ -169,6 +155,13 @@ public final class EnvelopePlot {
         renderer.setSeriesPaint(1, MIN);
         renderer.setSeriesStroke(0, new BasicStroke(2f));
         renderer.setSeriesStroke(1, new BasicStroke(2f));
+        BasicStroke dashed =
+                new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {7f, 4f}, 0f);
+        for (int i = 0; i < more.length; i++) {
+            data.addSeries(more[i]);
+            renderer.setSeriesPaint(2 + i, CAPACITY);
+            renderer.setSeriesStroke(2 + i, dashed);
+        }
         NumberAxis y = new NumberAxis(label);
         XYPlot p = new XYPlot(data, null, y, renderer);
         p.setBackgroundPaint(Color.WHITE);

@@ -98,21 +98,7 @@ public final class SpanTarget implements Target {
         boolean needed = false;
         String fails = "";
         if (used) {
-            SpanLayout hangers = new SpanLayout(
-                    l.width(),
-                    l.height(),
-                    l.flange(),
-                    l.stirrupBar(),
-                    l.skin(),
-                    l.top(),
-                    2,
-                    l.topLeft(),
-                    l.topRight(),
-                    l.bottom(),
-                    l.bottomCounts(),
-                    l.zoneStirrups(),
-                    l.extLeft(),
-                    l.extRight());
+            SpanLayout hangers = l.withTop(2, l.topLeft(), l.topRight());
             var r = SpanVerifier.verify(q, hangers, false);
             needed = !r.ok();
             fails = Summary.checks(r.failures());

@@ -86,21 +86,9 @@ public final class LineCapacity {
     private static double hangers(SpanProblem p, SpanLayout l, boolean atLeft) {
         SpanProblem.Place place = atLeft ? SpanProblem.Place.LEFT : SpanProblem.Place.RIGHT;
         List<Integer> onlyContinuous = List.of(l.topContinuous());
-        SpanLayout continuous = new SpanLayout(
-                l.width(),
-                l.height(),
-                l.flange(),
-                l.stirrupBar(),
-                l.skin(),
-                l.top(),
-                l.topContinuous(),
-                atLeft ? onlyContinuous : l.topLeft(),
-                atLeft ? l.topRight() : onlyContinuous,
-                l.bottom(),
-                l.bottomCounts(),
-                l.zoneStirrups(),
-                l.extLeft(),
-                l.extRight());
+        SpanLayout continuous = atLeft
+                ? l.withTop(l.topContinuous(), onlyContinuous, l.topRight())
+                : l.withTop(l.topContinuous(), l.topLeft(), onlyContinuous);
         Stirrups any = l.zoneStirrups().get(0);
         return Flexure.analyse(continuous.section(p, place, any), SpanLayout.bending(p, place))
                 .phiMn();

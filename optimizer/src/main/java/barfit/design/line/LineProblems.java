@@ -81,10 +81,7 @@ final class LineProblems {
      */
     List<SpanProblem> problemsAt(LineInput in, SectionShape shape, List<Double> redistribution) {
         double ec = Deflection.ec(settings.materials(), settings.code());
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < in.spans().size() + 2; s++) {
-            shapes.add(shape);
-        }
+        List<SectionShape> shapes = throughout(shape, in.spans().size());
         List<SpanProblem> out = new ArrayList<>();
         for (SpanProblem p : analyse(in, shapes, ec, redistribution).problems()) {
             out.add(heldAt(p, shape));
@@ -323,5 +320,10 @@ final class LineProblems {
     /** The support at a part's right end, -1 for an overhang (its tip). */
     static int rightSupportOf(int seg, int n) {
         return seg == 0 || seg == n + 1 ? -1 : seg;
+    }
+
+    /** One section for every segment of a line of n spans (the spans and both overhangs). */
+    static List<SectionShape> throughout(SectionShape shape, int n) {
+        return new ArrayList<>(java.util.Collections.nCopies(n + 2, shape));
     }
 }

@@ -136,13 +136,21 @@ public final class LineSpans {
         }
 
         /**
-         * The length of one extra bar of a shared group: into the left part, over the support, into the
-         * right; on each side the longer of that side's own need and the anchorage the other side asks.
+         * How far the extra bars run past the face into the left part: the longer of that side's own need
+         * and the anchorage the right side asks.
          */
+        public double intoLeft() {
+            return Math.max(left == null ? 0 : left.extension(), right == null ? 0 : right.anchorage());
+        }
+
+        /** How far they run past the face into the right part, likewise. */
+        public double intoRight() {
+            return Math.max(right == null ? 0 : right.extension(), left == null ? 0 : left.anchorage());
+        }
+
+        /** The length of one extra bar of a shared group: into the left part, over the support, into the right. */
         public double extraBarLength() {
-            double intoLeft = Math.max(left == null ? 0 : left.extension(), right == null ? 0 : right.anchorage());
-            double intoRight = Math.max(right == null ? 0 : right.extension(), left == null ? 0 : left.anchorage());
-            return intoLeft + width + intoRight;
+            return intoLeft() + width + intoRight();
         }
     }
 

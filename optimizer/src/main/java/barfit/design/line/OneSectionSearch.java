@@ -94,10 +94,8 @@ final class OneSectionSearch {
         LineResult analysis = best.trial().analysis();
         if (Redistribution.choosing(in)) {
             // the envelope of the redistribution chosen, for the report
-            List<SectionShape> shapes = new ArrayList<>();
-            for (int s = 0; s < in.spans().size() + 2; s++) {
-                shapes.add(best.trial().shape());
-            }
+            List<SectionShape> shapes =
+                    LineProblems.throughout(best.trial().shape(), in.spans().size());
             analysis = lineProblems
                     .analyse(in, shapes, ec, best.trial().redistribution())
                     .analysis();
@@ -145,10 +143,7 @@ final class OneSectionSearch {
 
     private Trial trial(LineInput in, SectionShape shape, double ec, List<Double> red) {
         int n = in.spans().size();
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < n + 2; s++) {
-            shapes.add(shape);
-        }
+        List<SectionShape> shapes = LineProblems.throughout(shape, n);
         boolean choosing = Redistribution.choosing(in);
         // choosing: the line with none, and a bound that holds whatever is chosen (a support's moment
         // falls and the span's rises with the percentage, and the bound rises with each)
@@ -318,10 +313,7 @@ final class OneSectionSearch {
             return null;
         }
         int len = steps.stream().mapToInt(List::size).max().orElse(1);
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < n + 2; s++) {
-            shapes.add(t.shape());
-        }
+        List<SectionShape> shapes = LineProblems.throughout(t.shape(), n);
         java.util.Map<Integer, java.util.Map<List<Double>, SpanProblem>> variants = new java.util.TreeMap<>();
         List<List<Double>> patterns = new ArrayList<>();
         for (int a = 0; a < len; a++) {

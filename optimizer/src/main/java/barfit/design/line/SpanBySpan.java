@@ -62,10 +62,7 @@ final class SpanBySpan {
     /** Span by span: each part its own section, the line analysed again until the sections settle. */
     private Result bySpan(LineInput in, int alternatives, Double width) {
         int n = in.spans().size();
-        List<SectionShape> shapes = new ArrayList<>();
-        for (int s = 0; s < n + 2; s++) {
-            shapes.add(in.section());
-        }
+        List<SectionShape> shapes = LineProblems.throughout(in.section(), n);
         double ec = Deflection.ec(settings.materials(), settings.code());
         List<Part> parts = List.of();
         LineResult analysis = null;

@@ -46,6 +46,25 @@ public record SpanLayout(
         zoneStirrups = List.copyOf(zoneStirrups);
     }
 
+    /** The same layout with other top bars: continuous count and the totals at each support (null: none). */
+    public SpanLayout withTop(int continuous, List<Integer> left, List<Integer> right) {
+        return new SpanLayout(
+                width,
+                height,
+                flange,
+                stirrupBar,
+                skin,
+                top,
+                continuous,
+                left,
+                right,
+                bottom,
+                bottomCounts,
+                zoneStirrups,
+                extLeft,
+                extRight);
+    }
+
     public SectionShape shape() {
         return new SectionShape(width, height, flange);
     }
