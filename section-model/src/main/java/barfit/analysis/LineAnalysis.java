@@ -118,9 +118,11 @@ public final class LineAnalysis {
         }
         List<Combo> combos = combos(line, cases);
         List<Combo> service = serviceCombos(line, cases);
+        double[][] serviceM = LineResult.serviceMoments(line, cases, ends, stations, m, service);
         List<LineResult> out = new ArrayList<>();
         for (List<Double> r : redistributions) {
-            out.add(LineResult.build(line.withRedistribution(r), cases, ends, stations, m, vl, vr, combos, service));
+            out.add(LineResult.build(
+                    line.withRedistribution(r), cases, ends, stations, m, vl, vr, combos, service, serviceM));
         }
         return out;
     }

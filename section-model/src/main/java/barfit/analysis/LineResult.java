@@ -81,7 +81,8 @@ public record LineResult(
             double[][] vl,
             double[][] vr,
             List<LineAnalysis.Combo> combos,
-            List<LineAnalysis.Combo> service) {
+            List<LineAnalysis.Combo> service,
+            double[][] serviceMoments) {
         Evaluator ev = new Evaluator(line, cases, caseEnds);
         ev.stations(stations, m);
         int ns = stations.size();
@@ -92,14 +93,9 @@ public record LineResult(
                 ends[ci][sg] = ev.ends(combos.get(ci), sg);
             }
         }
-        // the service arrangements' moments at every station (what deflection and the service table read)
-        double[][] serviceM = new double[service.size()][ns];
-        for (int ci = 0; ci < service.size(); ci++) {
-            for (int k = 0; k < ns; k++) {
-                LineAnalysis.Station st = stations.get(k);
-                serviceM[ci][k] = ev.moment(service.get(ci), st.segment(), st.local(), k);
-            }
-        }
+        // the service arrangements' moments at every station (what deflection and the service table read);
+        // elastic whatever the redistribution, so one line's several envelopes share them
+        double[][] serviceM = serviceMoments != null ? serviceMoments : serviceMoments(ev, service, stations);
         List<StationValues> sv = new ArrayList<>();
         for (int k = 0; k < ns; k++) {
             LineAnalysis.Station st = stations.get(k);
@@ -175,6 +171,32 @@ public record LineResult(
         List<String> names = new ArrayList<>();
         combos.forEach(co -> names.add(co.name()));
         return new LineResult(line, sv, spans, over, reactions, names);
+    }
+
+    /** The service arrangements' moments at every station. */
+    static double[][] serviceMoments(
+            Line line,
+            List<LineAnalysis.Case> cases,
+            LineAnalysis.EndMoments[] caseEnds,
+            List<LineAnalysis.Station> stations,
+            double[][] m,
+            List<LineAnalysis.Combo> service) {
+        Evaluator ev = new Evaluator(line, cases, caseEnds);
+        ev.stations(stations, m);
+        return serviceMoments(ev, service, stations);
+    }
+
+    private static double[][] serviceMoments(
+            Evaluator ev, List<LineAnalysis.Combo> service, List<LineAnalysis.Station> stations) {
+        int ns = stations.size();
+        double[][] out = new double[service.size()][ns];
+        for (int ci = 0; ci < service.size(); ci++) {
+            for (int k = 0; k < ns; k++) {
+                LineAnalysis.Station st = stations.get(k);
+                out[ci][k] = ev.moment(service.get(ci), st.segment(), st.local(), k);
+            }
+        }
+        return out;
     }
 
     private static boolean isSpan(Line line, int segment) {

@@ -62,10 +62,11 @@ final class OneSectionSearch {
             }
         }
         // the bound of each frame from the parts of its own analysis (their lengths and flanges)
-        List<Trial> trials = new ArrayList<>();
-        for (SectionShape f : frames) {
-            trials.add(trial(in, f, ec, new ArrayList<>(in.redistribution())));
-        }
+        // each frame analysed on its own: both cores, the list in the frames' order whatever the threads
+        List<Trial> trials = new ArrayList<>(java.util.stream.IntStream.range(0, frames.size())
+                .parallel()
+                .mapToObj(i -> trial(in, frames.get(i), ec, new ArrayList<>(in.redistribution())))
+                .toList());
         trials.sort(java.util.Comparator.comparingDouble(Trial::bound));
         Evaluated best = null;
         java.util.Set<SectionShape> designedShapes = new java.util.HashSet<>();
@@ -79,8 +80,13 @@ final class OneSectionSearch {
                 if (best != null && t.bound() >= best.total() - 1e-9) {
                     break;
                 }
-                designedShapes.add(t.shape());
                 double beat = best == null ? Double.POSITIVE_INFINITY : best.total();
+                // the generators' sharper bound (bars searched per size pair, none placed) skips a frame
+                // before its parts are designed; for the choice, with the support moments least
+                if (best != null && sharpBound(choose ? t.leastDemand() : t.problems()) >= beat - 1e-9) {
+                    continue;
+                }
+                designedShapes.add(t.shape());
                 Evaluated e = choose ? evaluateChoosing(in, t, ec, beat) : evaluate(in, t, ec, beat, 0);
                 if (e != null && (best == null || e.total() < best.total() - 1e-9)) {
                     best = e;
@@ -344,10 +350,17 @@ final class OneSectionSearch {
         java.util.Map<Integer, java.util.Map<List<Double>, Double>> bounds = new java.util.TreeMap<>();
         java.util.Map<Integer, Double> least = new java.util.TreeMap<>();
         double boundSum = 0;
+        // the variants' generators and sharp bounds on both cores, then read in order
+        java.util.Map<SpanProblem, SpanGenerator> made = parallelMap(
+                variants.values().stream().flatMap(m -> m.values().stream()).toList(), p -> {
+                    SpanGenerator g = designer.generator(p);
+                    g.sharpLeastCost();
+                    return g;
+                });
         for (var e : variants.entrySet()) {
             double lb = Double.POSITIVE_INFINITY;
             for (var v : e.getValue().entrySet()) {
-                SpanGenerator g = designer.generator(v.getValue());
+                SpanGenerator g = made.get(v.getValue());
                 double b = g.sharpLeastCost();
                 generators
                         .computeIfAbsent(e.getKey(), k -> new java.util.LinkedHashMap<>())
@@ -364,17 +377,30 @@ final class OneSectionSearch {
         }
         // beat: the cheapest line found, at least the cheapest with no redistribution (searched first); a
         // line under it leaves every part under its share, so the options under those shares hold it
-        List<SharedSupports.PartOptions> options = new ArrayList<>();
+        List<SpanProblem> wanted = new ArrayList<>();
+        java.util.Map<SpanProblem, Double> limits = new java.util.IdentityHashMap<>();
         for (var e : variants.entrySet()) {
             int seg = e.getKey();
             double limit = beat - (boundSum - least.get(seg));
+            for (var v : e.getValue().entrySet()) {
+                if (!(Double.isFinite(limit) && bounds.get(seg).get(v.getKey()) >= limit)) {
+                    wanted.add(v.getValue());
+                    limits.put(v.getValue(), limit);
+                }
+            }
+        }
+        java.util.Map<SpanProblem, SpanGenerator.Output> outputs =
+                parallelMap(wanted, p -> made.get(p).optionsUnder(limits.get(p) * (1 + 1e-9) + 1e-9));
+        List<SharedSupports.PartOptions> options = new ArrayList<>();
+        for (var e : variants.entrySet()) {
+            int seg = e.getKey();
             List<SharedSupports.Variant> vs = new ArrayList<>();
             for (var v : e.getValue().entrySet()) {
-                if (Double.isFinite(limit) && bounds.get(seg).get(v.getKey()) >= limit) {
+                if (!limits.containsKey(v.getValue())) {
                     continue;
                 }
                 SpanGenerator g = generators.get(seg).get(v.getKey());
-                SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
+                SpanGenerator.Output out = outputs.get(v.getValue());
                 vs.add(new SharedSupports.Variant(
                         v.getKey().get(0), v.getKey().get(1), v.getValue(), g, out.sets(), out.stats()));
             }
@@ -425,6 +451,26 @@ final class OneSectionSearch {
                 t.lowerBounds(),
                 t.leastDemand());
         return new Evaluated(used, parts, total, 1, Redistribution.supportStrains(in, parts));
+    }
+
+    /** The sum of the parts' sharp lower bounds ({@link SpanGenerator#sharpLeastCost}), on both cores. */
+    private double sharpBound(List<SpanProblem> parts) {
+        return parallelMap(parts, p -> designer.generator(p).sharpLeastCost()).values().stream()
+                .mapToDouble(Double::doubleValue)
+                .sum();
+    }
+
+    /** {@code f} of each item on both cores, keyed by the item itself (identity), the same whatever the threads. */
+    private static <K, V> java.util.Map<K, V> parallelMap(List<K> items, java.util.function.Function<K, V> f) {
+        List<V> values = java.util.stream.IntStream.range(0, items.size())
+                .parallel()
+                .mapToObj(i -> f.apply(items.get(i)))
+                .toList();
+        java.util.Map<K, V> out = new java.util.IdentityHashMap<>();
+        for (int i = 0; i < items.size(); i++) {
+            out.put(items.get(i), values.get(i));
+        }
+        return out;
     }
 
     private static double total(List<Part> parts) {
