@@ -94,6 +94,7 @@ public final class DesignText {
                             .append(currency == null || currency.isEmpty() ? "" : " " + currency)
                             .append(" (its parts below): the cheapest line of the search space, proved by dynamic "
                                     + "programming along it over every part's options\n");
+                    lineAlternatives(one, o.line().lineCost(), u, out);
                 }
             }
             if (o.line() != null && o.line().first()) {
@@ -426,5 +427,38 @@ public final class DesignText {
                     .append(side.bar().label());
         }
         return sb.toString();
+    }
+
+    /** The next cheapest sections for the whole line, each the cheapest line at that section. */
+    private static void lineAlternatives(
+            barfit.design.line.LineSpans.OneSection one, double cost, UnitSystem u, StringBuilder out) {
+        if (one.alternatives().isEmpty()) {
+            return;
+        }
+        out.append("  alternatives (the cheapest line at each of the next cheapest sections):\n");
+        TextTable a = new TextTable(false, false, true, true, false);
+        int k = 1;
+        for (var alt : one.alternatives()) {
+            boolean redistributed = alt.redistribution().stream().anyMatch(r -> r > 0);
+            StringBuilder r = new StringBuilder();
+            if (redistributed) {
+                r.append("redistribution");
+                for (int j = 0; j < alt.redistribution().size(); j++) {
+                    if (alt.redistribution().get(j) > 0) {
+                        r.append(" ")
+                                .append(u.compact(alt.redistribution().get(j), Dim.NUMBER))
+                                .append(" % at support ")
+                                .append(j + 1);
+                    }
+                }
+            }
+            a.row(
+                    "#" + k++,
+                    len(alt.width(), u) + " × " + len(alt.height(), u) + " " + u.unit(Dim.LENGTH),
+                    Money.amount(alt.cost()),
+                    String.format(Locale.ROOT, "+%.1f %%", 100 * (alt.cost() - cost) / cost),
+                    r.toString());
+        }
+        a.write("    ", out);
     }
 }

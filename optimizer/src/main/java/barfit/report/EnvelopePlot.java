@@ -57,6 +57,8 @@ public final class EnvelopePlot {
     }
 
     private static final Color CAPACITY = new Color(0x2e, 0x7d, 0x32);
+    /** The second strength series (the top bars'), told apart from the first by colour and dash. */
+    private static final Color CAPACITY_TOP = new Color(0x7b, 0x1f, 0xa2);
 
     /**
      * A designed line's moment envelope with the design strength its bars provide drawn over it on the
@@ -157,10 +159,12 @@ public final class EnvelopePlot {
         renderer.setSeriesStroke(1, new BasicStroke(2f));
         BasicStroke dashed =
                 new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {7f, 4f}, 0f);
+        BasicStroke dotDashed = new BasicStroke(
+                2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[] {10f, 3f, 2f, 3f}, 0f);
         for (int i = 0; i < more.length; i++) {
             data.addSeries(more[i]);
-            renderer.setSeriesPaint(2 + i, CAPACITY);
-            renderer.setSeriesStroke(2 + i, dashed);
+            renderer.setSeriesPaint(2 + i, i % 2 == 0 ? CAPACITY : CAPACITY_TOP);
+            renderer.setSeriesStroke(2 + i, i % 2 == 0 ? dashed : dotDashed);
         }
         NumberAxis y = new NumberAxis(label);
         XYPlot p = new XYPlot(data, null, y, renderer);

@@ -174,6 +174,18 @@ final class LineJson {
                 o.putNull("cost_without_redistribution");
             }
         }
+        if (oneSection && !one.alternatives().isEmpty()) {
+            // the cheapest line at each of the next cheapest sections
+            var alts = o.putArray("alternatives");
+            for (var alt : one.alternatives()) {
+                ObjectNode a = alts.addObject();
+                Json.put(a, "width", alt.width(), Dim.LENGTH, u);
+                Json.put(a, "height", alt.height(), Dim.LENGTH, u);
+                a.put("cost", alt.cost());
+                var red = a.putArray("redistribution");
+                alt.redistribution().forEach(red::add);
+            }
+        }
         ObjectNode proof = o.putObject("proof");
         boolean shared =
                 all && parts.stream().allMatch(p -> p.whole().proof().search().withLine());

@@ -157,9 +157,16 @@ public final class LineSpans {
     /**
      * How a line of one set of forms was designed: the sections analysed (each with its own weight and
      * stiffness) and how many of them were designed before the cost bound stopped the search; or, where
-     * no one section carries every part, that the line fell back to span-by-span design.
+     * no one section carries every part, that the line fell back to span-by-span design; and the next
+     * cheapest sections when alternatives were asked for.
      */
-    public record OneSection(int sections, int designed, boolean fellBack) {}
+    public record OneSection(int sections, int designed, boolean fellBack, List<Alternative> alternatives) {}
+
+    /**
+     * The cheapest line at another section, next after the chosen one (design's alternatives): its b x h,
+     * its cost and the redistribution per support it takes (percent).
+     */
+    public record Alternative(double width, double height, double cost, List<Double> redistribution) {}
 
     /** A span (index 1..n) or an overhang (0 left, n + 1 right) and its design. */
     public record Part(int segment, String name, SpanProblem problem, SpanDesigner.Outcome outcome) {}
@@ -191,7 +198,7 @@ public final class LineSpans {
                     bySpan.redistribution(),
                     bySpan.epsT(),
                     bySpan.held(),
-                    new OneSection(0, 0, true),
+                    new OneSection(0, 0, true, List.of()),
                     Double.NaN);
         }
         return spanBySpan.sameWidth(in, alternatives);

@@ -68,33 +68,62 @@ final class OneSectionSearch {
                 .mapToObj(i -> trial(in, frames.get(i), ec, new ArrayList<>(in.redistribution())))
                 .toList());
         trials.sort(java.util.Comparator.comparingDouble(Trial::bound));
-        Evaluated best = null;
+        // the cheapest line and, when asked, the next cheapest sections: a frame is searched while it could
+        // enter that list, so each kept line is the cheapest of its section and the list is exact
+        int keep = 1 + Math.max(0, alternatives);
+        List<Evaluated> kept = new ArrayList<>();
         java.util.Set<SectionShape> designedShapes = new java.util.HashSet<>();
         double without = Double.NaN;
         // choosing the redistribution: the line with none first, whose best bounds every section after
         for (boolean choose : Redistribution.choosing(in) ? new boolean[] {false, true} : new boolean[] {false}) {
             if (choose) {
-                without = best == null ? Double.POSITIVE_INFINITY : best.total();
+                without =
+                        kept.isEmpty() ? Double.POSITIVE_INFINITY : kept.get(0).total();
             }
             for (Trial t : trials) {
-                if (best != null && t.bound() >= best.total() - 1e-9) {
+                double beat = kept.size() < keep
+                        ? Double.POSITIVE_INFINITY
+                        : kept.get(keep - 1).total();
+                if (t.bound() >= beat - 1e-9) {
                     break;
                 }
-                double beat = best == null ? Double.POSITIVE_INFINITY : best.total();
                 // the generators' sharper bound (bars searched per size pair, none placed) skips a frame
                 // before its parts are designed; for the choice, with the support moments least
-                if (best != null && sharpBound(choose ? t.leastDemand() : t.problems()) >= beat - 1e-9) {
+                if (Double.isFinite(beat) && sharpBound(choose ? t.leastDemand() : t.problems()) >= beat - 1e-9) {
                     continue;
                 }
+                // a section already kept is searched again only to beat itself
+                Evaluated same = kept.stream()
+                        .filter(k -> k.trial().shape().equals(t.shape()))
+                        .findFirst()
+                        .orElse(null);
+                double toBeat = same == null ? beat : Math.min(beat, same.total());
                 designedShapes.add(t.shape());
-                Evaluated e = choose ? evaluateChoosing(in, t, ec, beat) : evaluate(in, t, ec, beat, 0);
-                if (e != null && (best == null || e.total() < best.total() - 1e-9)) {
-                    best = e;
+                Evaluated e = choose ? evaluateChoosing(in, t, ec, toBeat) : evaluate(in, t, ec, toBeat, 0);
+                if (e != null && e.total() < toBeat - 1e-9) {
+                    kept.remove(same);
+                    int at = 0;
+                    while (at < kept.size() && kept.get(at).total() <= e.total() + 1e-9) {
+                        at++;
+                    }
+                    kept.add(at, e);
+                    while (kept.size() > keep) {
+                        kept.remove(kept.size() - 1);
+                    }
                 }
             }
         }
-        if (best == null) {
+        if (kept.isEmpty()) {
             return null;
+        }
+        Evaluated best = kept.get(0);
+        List<LineSpans.Alternative> others = new ArrayList<>();
+        for (Evaluated e : kept.subList(1, kept.size())) {
+            others.add(new LineSpans.Alternative(
+                    e.trial().shape().width(),
+                    e.trial().shape().height(),
+                    e.total(),
+                    e.trial().redistribution()));
         }
         // the parts share their support bars: no part has alternatives of its own
         LineResult analysis = best.trial().analysis();
@@ -116,7 +145,7 @@ final class OneSectionSearch {
                 best.trial().redistribution(),
                 best.epsT(),
                 List.of(),
-                new OneSection(trials.size(), designedShapes.size(), false),
+                new OneSection(trials.size(), designedShapes.size(), false, List.copyOf(others)),
                 without);
     }
 

@@ -250,7 +250,7 @@ class LineSpansTest {
                   bar_sizes: ["16", "19", "22", "25"]
                   max_layers: 2
                 """;
-        LineSpans.Result all = designLine(head.formatted("[250, 300]", 450, 600) + line);
+        LineSpans.Result all = designLine(head.formatted("[250, 300]", 450, 600) + line, 3);
         assertTrue(all.oneSection() != null && !all.oneSection().fellBack(), "one section carries the line");
         var first = all.parts().get(0).outcome().best().layout();
         double total = 0;
@@ -261,6 +261,7 @@ class LineSpansTest {
             total += p.outcome().best().cost().total();
         }
         double cheapest = Double.POSITIVE_INFINITY;
+        List<double[]> bySection = new ArrayList<>();
         for (int b : new int[] {250, 300}) {
             for (int h = 450; h <= 600; h += 50) {
                 LineSpans.Result one = designLine(head.formatted("[" + b + "]", h, h) + line);
@@ -272,13 +273,30 @@ class LineSpansTest {
                     sum += p.outcome().best().cost().total();
                 }
                 cheapest = Math.min(cheapest, sum);
+                bySection.add(new double[] {sum, b, h});
             }
         }
         assertEquals(cheapest, total, 1e-6, "the cheapest section for the whole line");
+        // the alternatives: the next three sections in order of their own cheapest lines
+        bySection.sort(java.util.Comparator.comparingDouble(x -> x[0]));
+        var alternatives = all.oneSection().alternatives();
+        assertEquals(Math.min(3, bySection.size() - 1), alternatives.size());
+        for (int k = 0; k < alternatives.size(); k++) {
+            assertEquals(bySection.get(k + 1)[0], alternatives.get(k).cost(), 1e-6, "alternative " + (k + 1));
+            assertEquals(
+                    bySection.get(k + 1)[1] * 1e6 + bySection.get(k + 1)[2],
+                    alternatives.get(k).width() * 1e6 + alternatives.get(k).height(),
+                    1e-6,
+                    "alternative " + (k + 1) + "'s section");
+        }
         assertTrue(all.oneSection().designed() <= all.oneSection().sections());
     }
 
     private LineSpans.Result designLine(String yaml) throws IOException {
+        return designLine(yaml, 0);
+    }
+
+    private LineSpans.Result designLine(String yaml, int alternatives) throws IOException {
         Path f = dir.resolve("r.yaml");
         Files.writeString(f, yaml);
         DesignInput in = DesignInputReader.read(f, false);
@@ -288,7 +306,7 @@ class LineSpansTest {
                 in.rates(), in.settings().detailing().cover(), in.settings().code());
         SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(30, 1, 1));
         return new LineSpans(in.settings(), in.space(), designer, in.maxBarSizesPerBeam(), in.barsPerTwoLegs())
-                .design(line, 0);
+                .design(line, alternatives);
     }
 
     @Test
