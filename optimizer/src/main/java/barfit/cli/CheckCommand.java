@@ -66,7 +66,14 @@ final class CheckCommand implements Callable<Integer> {
         List<CheckReport> reports = new ArrayList<>();
         for (CheckBeam b : beams) {
             Trail t = trail ? Trail.recording() : Trail.off();
-            reports.add(SectionChecks.run(b.section(), b.demand(), b.span(), t));
+            CheckReport r = SectionChecks.run(b.section(), b.demand(), b.span(), t);
+            if (t.isOn()) {
+                // the development length of every layer as built, equation and numbers (25.4.2.4)
+                for (var l : r.flexure().layers()) {
+                    barfit.section.Development.ofLayer(b.section(), l.layer(), t);
+                }
+            }
+            reports.add(r);
         }
         String text = format == OutputFormat.json
                 ? CheckJson.render(input.settings(), beams, reports, trail)

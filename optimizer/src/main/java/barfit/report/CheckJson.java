@@ -62,6 +62,14 @@ public final class CheckJson {
             lo.put("strain", round(l.strain()));
             Json.put(lo, "stress", l.stress(), Dim.STRESS, u);
             Json.put(lo, "force", l.force(), Dim.FORCE, u);
+            // straight development length in tension of this layer as built (25.4.2.4)
+            Json.put(
+                    lo,
+                    "ld",
+                    barfit.section.Development.ofLayer(b.section(), l.layer(), barfit.section.trail.Trail.off())
+                            .ld(),
+                    Dim.LENGTH,
+                    u);
         }
         ShearResult sh = r.shear();
         if (sh != null) {

@@ -158,14 +158,15 @@ public final class CheckText {
                     .append(": give Vu to check shear strength, minimum stirrups " + "and their spacing\n");
         }
         out.append('\n');
-        TextTable layers = new TextTable(false, false, true, true, true, true);
+        TextTable layers = new TextTable(false, false, true, true, true, true, true);
         layers.row(
                 "layer",
                 "bars",
                 "d (" + u.unit(Dim.LENGTH) + ")",
                 "strain",
                 "stress (" + u.unit(Dim.STRESS) + ")",
-                "force (" + u.unit(Dim.FORCE) + ")");
+                "force (" + u.unit(Dim.FORCE) + ")",
+                "ld (" + u.unit(Dim.LENGTH) + ")");
         for (LayerResult l : f.layers()) {
             String name = l.layer().face().word() + " @ " + u.number(l.layer().fromFace(), Dim.LENGTH);
             layers.row(
@@ -174,10 +175,15 @@ public final class CheckText {
                     u.number(l.d(), Dim.LENGTH),
                     Words.fixed(l.strain(), 5),
                     u.number(l.stress(), Dim.STRESS),
-                    u.number(l.force(), Dim.FORCE));
+                    u.number(l.force(), Dim.FORCE),
+                    u.number(
+                            barfit.section.Development.ofLayer(r.section(), l.layer(), barfit.section.trail.Trail.off())
+                                    .ld(),
+                            Dim.LENGTH));
         }
         layers.write("  ", out);
-        out.append("  (strain and stress: + tension, − compression)\n\n");
+        out.append("  (strain and stress: + tension, − compression; ld: straight development length in tension "
+                + "of the layer as built, 25.4.2.4)\n\n");
         TextTable t = new TextTable(false, false, true, false, true, true, false);
         t.row("check", "clause", "value", "", "limit", "ratio", "result");
         for (CheckResult c : r.checks()) {

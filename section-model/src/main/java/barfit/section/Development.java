@@ -58,7 +58,7 @@ public final class Development {
             t.step("Ktr", "40 Atr / (s n)", "40 × {} / ({} × {})", Q.length(ktr), Q.area(atr), Q.length(s), Q.count(n));
             t.step(
                     "(cb + Ktr)/db",
-                    "≤ 2.5",
+                    "min((cb + Ktr) / db, 2.5)",
                     "min(({} + {}) / {}, 2.5)",
                     Q.number(conf),
                     Q.length(cb),
@@ -82,6 +82,27 @@ public final class Development {
             }
         }
         return new Result(out, psiT, psiS, psiG, conf, ktr, cb);
+    }
+
+    /**
+     * ld of one layer of a section by 25.4.2.4 as it is built: cb the least of the cover to the bar centre
+     * at the side face, the layer's distance from its face and half the centre spacing of its bars; Ktr
+     * from the section's stirrups (every leg crossing the splitting plane, spacing s, n the layer's bars);
+     * a top bar where more than 300 mm (12 in) of concrete is cast below it.
+     */
+    public static Result ofLayer(BeamSection s, BarLayer layer, Trail t) {
+        BarSize bar = layer.bar();
+        double db = bar.diameter();
+        Detailing det = s.detailing();
+        double side = det.cover() + det.stirrupBar().diameter() + db / 2;
+        double spacing = BarSpacing.centreSpacing(s.shape().width(), det, db, layer.count());
+        double cb = Math.min(Math.min(side, layer.fromFace()), layer.count() > 1 ? spacing / 2 : side);
+        double below = layer.face() == Face.TOP ? s.shape().height() - layer.fromFace() - db / 2 : 0;
+        boolean topBar = below > s.code().topBarConcreteBelow();
+        Stirrups st = s.stirrups();
+        double atr = st == null ? 0 : st.legs() * st.bar().area();
+        double sp = st == null ? 0 : st.spacing();
+        return general(bar, s.materials(), s.code(), topBar, cb, atr, sp, layer.count(), t);
     }
 
     /**
