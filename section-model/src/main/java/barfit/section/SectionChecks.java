@@ -8,8 +8,9 @@ import java.util.List;
 
 /**
  * Every check of one section under one demand: strength, ductility, minimum steel, bar spacing,
- * crack control, skin reinforcement, cover, flange width, shear and minimum depth. Each result names
- * its ACI 318-19 clause; with a recording trail, each also writes its working.
+ * crack control, skin reinforcement, cover, flange width, shear, torsion (when the demand has Tu) and
+ * minimum depth. Each result names its ACI 318-19 clause; with a recording trail, each also writes its
+ * working.
  */
 public final class SectionChecks {
     private SectionChecks() {}
@@ -58,6 +59,9 @@ public final class SectionChecks {
             double d = fr.tensionSteelArea() > 0 ? fr.d() : fr.dt();
             shear = Shear.analyse(s, Math.abs(demand.vu()), d, fr.tensionSteelArea(), trail);
             shearChecks(s, shear, out);
+        }
+        if (demand.hasTorsion()) {
+            out.addAll(TorsionChecks.run(s, demand, span, fr, shear, trail));
         }
         out.addAll(StirrupRules.checks(s, s, bending, demand.mu(), practice, "", trail));
         if (withMinimumDepth && span != null && span.ends() != null) {
@@ -561,7 +565,7 @@ public final class SectionChecks {
     }
 
     /** A length in the edition's unit, for notes (mm, or in for inch-pound input). */
-    private static String length(double mm, CodeEquations code) {
+    static String length(double mm, CodeEquations code) {
         long tenths = Math.round((code.inchPound() ? mm / 25.4 : mm) * 10);
         return (tenths % 10 == 0 ? String.valueOf(tenths / 10) : String.valueOf(tenths / 10.0))
                 + (code.inchPound() ? " in" : " mm");
