@@ -22,7 +22,8 @@ import java.util.Map;
 
 /** Reads a {@code check} file: settings plus beams with their sections, bars and demands. */
 public final class CheckInputReader {
-    static final String[] BEAM_KEYS = {"id", "section", "bottom", "top", "Mu", "Vu", "stirrups", "skin", "span", "ends"
+    static final String[] BEAM_KEYS = {
+        "id", "section", "bottom", "top", "Mu", "Vu", "Tu", "torsion", "stirrups", "skin", "span", "ends"
     };
 
     private CheckInputReader() {}
@@ -73,10 +74,37 @@ public final class CheckInputReader {
                 double v = b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE));
                 vu = u.toSI(InputLimits.require(b, "Vu", InputLimits.SHEAR, u, v), Dim.FORCE);
             }
+            Double tu = null;
+            if (b.has("Tu")) {
+                double v = b.nonNegative("Tu", "the factored torsion, " + u.unit(Dim.MOMENT));
+                tu = u.toSI(InputLimits.require(b, "Tu", InputLimits.TORSION, u, v), Dim.MOMENT);
+            }
+            boolean compatibility = compatibilityTorsion(b, tu != null);
             SkinBars skin = b.has("skin") ? sr.skin(b.map("skin", "skin bars: {bar, spacing}")) : null;
             BeamSection section = sr.section(shape, layers, stirrups, skin);
-            out.add(new CheckBeam(id, b.location(), section, new Demand(mu, vu), span));
+            out.add(new CheckBeam(id, b.location(), section, new Demand(mu, vu, tu, compatibility), span));
         }
         return new CheckInput(settings, out);
+    }
+
+    /**
+     * {@code torsion: compatibility} marks Tu as compatibility torsion, which 22.7.3.2 lets be reduced to φTcr
+     * in a statically indeterminate structure; {@code equilibrium} (the default) keeps it as given.
+     */
+    private static boolean compatibilityTorsion(YFields b, boolean hasTu) {
+        if (!b.has("torsion")) {
+            return false;
+        }
+        String kind = b.text("torsion", "compatibility or equilibrium");
+        boolean compatibility = switch (kind) {
+            case "compatibility" -> true;
+            case "equilibrium" -> false;
+            default ->
+                throw b.error("torsion", "expected compatibility or equilibrium, got \"" + Echo.cut(kind) + "\"");
+        };
+        if (!hasTu) {
+            throw b.error("torsion", "says what kind of torsion Tu is, but no Tu is given; expected Tu beside it");
+        }
+        return compatibility;
     }
 }

@@ -113,6 +113,7 @@ public final class InputLimits {
     public static final Range SPAN = new Range("a span", Dim.SPAN, 0.3, 60, 1, 200, false);
     public static final Range MOMENT = new Range("a factored moment", Dim.MOMENT, 0, 150_000, 0, 110_000, true);
     public static final Range SHEAR = new Range("a factored shear", Dim.FORCE, 0, 50_000, 0, 11_000, false);
+    public static final Range TORSION = new Range("a factored torsion", Dim.MOMENT, 0, 20_000, 0, 15_000, false);
     public static final Range LINE_LOAD = new Range("a service load", Dim.LINE_LOAD, 0, 2000, 0, 140, false);
     public static final Range SPAN_DIVISOR = new Range("a span divisor", Dim.NUMBER, 100, 2000, 100, 2000, false);
     // ---- costs (any currency; above these a rate is taken for a typing mistake) ----

@@ -42,6 +42,10 @@ public final class CheckJson {
         if (r.demand().mu() != null) {
             Json.put(o, "Mu", r.demand().mu(), Dim.MOMENT, u);
         }
+        if (r.demand().hasTorsion()) {
+            Json.put(o, "Tu", Math.abs(r.demand().tu()), Dim.MOMENT, u);
+            o.put("torsion", r.demand().compatibilityTorsion() ? "compatibility" : "equilibrium");
+        }
         Json.put(o, "phi_Mn", f.phiMn(), Dim.MOMENT, u);
         Json.put(o, "Mn", f.mn(), Dim.MOMENT, u);
         Json.putRatio(o, "phi", f.phi());

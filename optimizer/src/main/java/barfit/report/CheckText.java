@@ -11,11 +11,16 @@ import barfit.section.ShearResult;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
 import java.util.List;
+import java.util.Set;
 
 /** The terminal report of {@code barfit check}. */
 public final class CheckText {
     /** What a beam without a factored shear is told: its shear is not checked at all. */
     public static final String SHEAR_NOT_CHECKED = "shear not checked (no Vu)";
+
+    /** Checks whose note is printed even when they pass. */
+    private static final Set<String> ALWAYS_NOTED =
+            Set.of("flange_width", "torsion_compatibility", "torsion_longitudinal");
 
     private CheckText() {}
 
@@ -157,6 +162,12 @@ public final class CheckText {
                     .append(SHEAR_NOT_CHECKED)
                     .append(": give Vu to check shear strength, minimum stirrups " + "and their spacing\n");
         }
+        if (r.demand().hasTorsion()) {
+            out.append("  Tu = ")
+                    .append(u.withUnit(Math.abs(r.demand().tu()), Dim.MOMENT))
+                    .append(r.demand().compatibilityTorsion() ? " (compatibility torsion)" : " (equilibrium torsion)")
+                    .append('\n');
+        }
         out.append('\n');
         TextTable layers = new TextTable(false, false, true, true, true, true, true);
         layers.row(
@@ -198,8 +209,9 @@ public final class CheckText {
         }
         t.write("  ", out);
         for (CheckResult c : r.checks()) {
-            // the flange's note says which width the analysis took and what is left to the engineer
-            if (c.note() != null && (!c.pass() || c.id().equals("flange_width"))) {
+            // the flange's note says which width the analysis took and what is left to the engineer; a
+            // reduced compatibility torsion asks for the adjoining members, and Al says what it counted
+            if (c.note() != null && (!c.pass() || ALWAYS_NOTED.contains(c.id()))) {
                 out.append("  note, ")
                         .append(c.id())
                         .append(": ")
