@@ -161,4 +161,78 @@ public record CodeEquations(
     public double rootFcForShear(double fc) {
         return Math.min(Math.sqrt(fc), rootFcMax);
     }
+
+    /** The constants of hooks, development in compression, laps and bar cut-offs of this edition. */
+    public Anchorage anchorage() {
+        return inchPound ? Anchorage.INCH_POUND : Anchorage.SI;
+    }
+
+    /**
+     * The unit-dependent constants of anchorage and bar detailing (25.3.1, 25.4.3, 25.4.9, 25.5.2, 9.7.3),
+     * converted exactly from the edition the user works in, like the constants of {@link CodeEquations}.
+     *
+     * @param ldh          25.4.3.1(a): ldh = fy ψe ψr ψo ψc / (ldh λ √f'c) × db^1.5
+     * @param ldhMin       25.4.3.1(c): the least ldh
+     * @param hook180Min   Table 25.3.1: the least straight extension of a 180-degree hook
+     * @param psiCDivisor  Table 25.4.3.2: ψc = f'c / psiCDivisor + 0.6 below {@code psiCLimit}
+     * @param psiCLimit    Table 25.4.3.2: ψc = 1.0 from this f'c up
+     * @param hookCover    Table 25.4.3.2 (ψo) and 25.4.3.4: the side (and top) cover over a hook
+     * @param ldcRoot      25.4.9.2(a): ldc = ldcRoot fy ψr / (λ √f'c) × db
+     * @param ldcFlat      25.4.9.2(b): ldc = ldcFlat fy ψr × db
+     * @param ldcMin       25.4.9.1: the least ldc
+     * @param lapMin       Table 25.5.2.1: the least tension lap
+     * @param extraStirrup 9.7.3.5(c): the excess stirrup area at least extraStirrup bw s / fyt (a stress)
+     * @param intoSupport  9.7.3.8.1, 9.7.3.8.2: how far positive moment bars run into a support
+     */
+    public record Anchorage(
+            Coef ldh,
+            double ldhMin,
+            double hook180Min,
+            double psiCDivisor,
+            double psiCLimit,
+            double hookCover,
+            Coef ldcRoot,
+            Coef ldcFlat,
+            double ldcMin,
+            double lapMin,
+            Coef extraStirrup,
+            double intoSupport) {
+
+        /**
+         * ACI 318M-19. From memory: 23 in 25.4.3.1(a), f'c / 105 + 0.6 for ψc. The limit of ψc's first row is
+         * taken as 40 MPa: if the edition says 42 MPa (where f'c / 105 + 0.6 reaches 1.0), 40 errs on the
+         * long side between the two.
+         */
+        public static final Anchorage SI = new Anchorage(
+                new Coef(23.0, "23"),
+                150.0,
+                65.0,
+                105.0,
+                40.0,
+                65.0,
+                new Coef(0.24, "0.24"),
+                new Coef(0.043, "0.043"),
+                200.0,
+                300.0,
+                new Coef(0.41, "0.41"),
+                150.0);
+
+        /**
+         * ACI 318-19. 25.4.3.1(a) divides by 55 with f'c in psi and db in inches: in N and mm that is
+         * 55 √25.4 / √(psi per MPa) = 23.02 (db^1.5 keeps one √in).
+         */
+        public static final Anchorage INCH_POUND = new Anchorage(
+                new Coef(55.0 * Math.sqrt(MM_PER_IN) / ROOT_PSI, "55"),
+                6.0 * MM_PER_IN,
+                2.5 * MM_PER_IN,
+                15_000.0 / PSI_PER_MPA,
+                6000.0 / PSI_PER_MPA,
+                2.5 * MM_PER_IN,
+                new Coef(ROOT_PSI / 50.0, "1/50"),
+                new Coef(0.0003 * PSI_PER_MPA, "0.0003"),
+                8.0 * MM_PER_IN,
+                12.0 * MM_PER_IN,
+                new Coef(60.0 / PSI_PER_MPA, "60"),
+                6.0 * MM_PER_IN);
+    }
 }

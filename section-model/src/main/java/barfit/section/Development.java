@@ -11,8 +11,19 @@ import barfit.section.trail.Trail;
  * concrete below them.
  */
 public final class Development {
-    /** The result with its factors, mm. */
-    public record Result(double ld, double psiT, double psiS, double psiG, double confinement, double ktr, double cb) {}
+    /**
+     * The result with its factors, mm: {@code ld} never below 25.4.2.1(b)'s minimum; {@code ldEquation} the
+     * value of 25.4.2.4 alone, which 25.5.2.1 takes for lap splices (they have their own minimum).
+     */
+    public record Result(
+            double ld,
+            double psiT,
+            double psiS,
+            double psiG,
+            double confinement,
+            double ktr,
+            double cb,
+            double ldEquation) {}
 
     private Development() {}
 
@@ -81,7 +92,7 @@ public final class Development {
                 t.note("ld raised to the minimum of 25.4.2.1(b).");
             }
         }
-        return new Result(out, psiT, psiS, psiG, conf, ktr, cb);
+        return new Result(out, psiT, psiS, psiG, conf, ktr, cb, ld);
     }
 
     /**
