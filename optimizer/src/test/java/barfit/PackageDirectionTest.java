@@ -37,6 +37,7 @@ class PackageDirectionTest {
     /** Packages outside the section model and the catalogs: the optimizer module. */
     private static final List<String> OPTIMIZER = List.of(
             "barfit.design",
+            "barfit.detailing",
             "barfit.input",
             "barfit.report",
             "barfit.cli",
@@ -85,6 +86,13 @@ class PackageDirectionTest {
                     List.of("barfit.design.span"),
                     List.of("barfit.design.line"),
                     Set.of()),
+            new Rule(
+                    "detailing follows design: the searches do not detail, and detailing writes no report, reads no "
+                            + "command line and solves nothing",
+                    List.of("barfit.detailing"),
+                    List.of("barfit.report", "barfit.cli", "barfit.schedule", "barfit.study", SOLVER),
+                    Set.of()),
+            new Rule("the searches know no detailing", List.of("barfit.design"), List.of("barfit.detailing"), Set.of()),
             new Rule("the reports do not reach into the solver", List.of("barfit.report"), List.of(SOLVER), Set.of()),
             new Rule(
                     "the searches, the schedule and the studies work in SI: units are converted by the input "

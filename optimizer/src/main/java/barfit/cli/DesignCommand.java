@@ -11,6 +11,7 @@ import barfit.design.section.SectionDesigner;
 import barfit.design.section.SectionProblem;
 import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanProblem;
+import barfit.detailing.LineDetail;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
@@ -20,6 +21,7 @@ import barfit.report.DesignItem;
 import barfit.report.DesignJson;
 import barfit.report.DesignText;
 import barfit.report.EnvelopePlot;
+import barfit.section.trail.Trail;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -148,6 +150,15 @@ final class DesignCommand implements Callable<Integer> {
             for (LineSpans.Part pt : r.parts()) {
                 lineCost += pt.outcome().feasible() ? pt.outcome().best().cost().total() : Double.NaN;
             }
+            // detailed bar by bar: runs, laps, hooks, the bending schedule and the checks that place them
+            LineDetail detail = undesigned.isEmpty()
+                    ? LineDetail.of(
+                            r,
+                            settings,
+                            cost,
+                            LineDetail.defaultStock(settings),
+                            trail ? Trail.recording() : Trail.off())
+                    : null;
             for (int i = 0; i < r.parts().size(); i++) {
                 LineSpans.Part part = r.parts().get(i);
                 outcomes.add(DesignItem.of(
@@ -167,7 +178,8 @@ final class DesignCommand implements Callable<Integer> {
                                 r.oneSection(),
                                 r.supports(),
                                 r.withoutRedistribution(),
-                                lineCost)));
+                                lineCost,
+                                i == r.parts().size() - 1 ? detail : null)));
             }
         }
         String text = format == OutputFormat.json

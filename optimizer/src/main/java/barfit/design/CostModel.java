@@ -66,6 +66,11 @@ public final class CostModel {
         this.code = code;
     }
 
+    /** Clear cover to the stirrups, mm (the hoops' size). */
+    public double cover() {
+        return cover;
+    }
+
     public CostRates rates() {
         return rates;
     }

@@ -15,7 +15,8 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
      * {@code oneSection} how a line of one set of forms was designed (null for span by span); {@code supports}
      * the top bars over each support (null where none); {@code withoutRedistribution} what the line
      * costs with none where the search chose the redistribution (infinite where it has no design with none),
-     * else NaN; {@code lineCost} the sum of the parts' costs (NaN where a part has no design).
+     * else NaN; {@code lineCost} the sum of the parts' costs (NaN where a part has no design); {@code detail}
+     * the line detailed bar by bar, on its last part only (null elsewhere, or where it cannot be detailed).
      */
     public record LinePart(
             String line,
@@ -32,7 +33,8 @@ public record DesignItem(DesignOutcome section, SpanDesigner.Outcome whole, Line
             barfit.design.line.LineSpans.OneSection oneSection,
             java.util.List<barfit.design.line.LineSpans.SupportBars> supports,
             double withoutRedistribution,
-            double lineCost) {
+            double lineCost,
+            barfit.detailing.LineDetail detail) {
         /** Whether the search chose the redistribution at each support (else it was lowered to what is allowed). */
         public boolean chosen() {
             return !Double.isNaN(withoutRedistribution);

@@ -140,6 +140,9 @@ public final class DesignText {
             } else {
                 SpanText.render(o.whole(), u, currency, trail, out);
             }
+            if (o.line() != null && o.line().detail() != null) {
+                BendingScheduleText.render(o.line().detail(), u, currency, out);
+            }
             if (!o.feasible()) {
                 infeasible++;
             }

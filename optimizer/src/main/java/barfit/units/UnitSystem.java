@@ -48,6 +48,7 @@ public enum UnitSystem {
             case INERTIA -> IN * IN * IN * IN;
             case AREA_PER_LENGTH -> IN;
             case MASS_PER_LENGTH -> KG_PER_LB / 0.3048;
+            case MASS -> KG_PER_LB;
             case ROOT_STRESS -> 1.0 / Math.sqrt(PSI_PER_MPA);
             default -> 1.0;
         };
@@ -79,6 +80,7 @@ public enum UnitSystem {
                 case INERTIA -> "mm⁴";
                 case AREA_PER_LENGTH -> "mm²/mm";
                 case MASS_PER_LENGTH -> "kg/m";
+                case MASS -> "kg";
                 case ROOT_STRESS -> "√MPa";
                 default -> "";
             };
@@ -94,6 +96,7 @@ public enum UnitSystem {
             case INERTIA -> "in⁴";
             case AREA_PER_LENGTH -> "in²/in";
             case MASS_PER_LENGTH -> "lb/ft";
+            case MASS -> "lb";
             case ROOT_STRESS -> "√psi";
             default -> "";
         };
@@ -107,6 +110,7 @@ public enum UnitSystem {
                 case AREA, COUNT -> 0;
                 case SPAN -> 3;
                 case LINE_LOAD, MASS_PER_LENGTH, ROOT_STRESS -> 2;
+                case MASS -> 1;
                 case STRAIN -> 5;
                 case AREA_PER_LENGTH -> 3;
                 case NUMBER -> 3;
@@ -121,6 +125,7 @@ public enum UnitSystem {
             case SPAN, ROOT_STRESS -> 2;
             case STRAIN -> 5;
             case AREA_PER_LENGTH -> 4;
+            case MASS -> 1;
         };
     }
 

@@ -76,14 +76,14 @@ public final class LineCapacity {
                 hogging.add(new Stretch(to, cr, right.flexure().phiMn()));
             }
             if (to > from && (left != null || right != null)) {
-                hogging.add(new Stretch(from, to, hangers(p, l, left != null)));
+                hogging.add(new Stretch(from, to, hangersPhiMn(p, l, left != null)));
             }
         }
         return new Diagram(sagging, hogging);
     }
 
     /** φMn in hogging of the continuous top bars alone, at the support section the span has. */
-    private static double hangers(SpanProblem p, SpanLayout l, boolean atLeft) {
+    public static double hangersPhiMn(SpanProblem p, SpanLayout l, boolean atLeft) {
         SpanProblem.Place place = atLeft ? SpanProblem.Place.LEFT : SpanProblem.Place.RIGHT;
         List<Integer> onlyContinuous = List.of(l.topContinuous());
         SpanLayout continuous = atLeft

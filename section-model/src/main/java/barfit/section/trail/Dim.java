@@ -22,6 +22,8 @@ public enum Dim {
     AREA_PER_LENGTH,
     /** kg/m */
     MASS_PER_LENGTH,
+    /** kg (a bar mark's or a schedule's steel, shown in kg or lb) */
+    MASS,
     /** √MPa, the square root of a stress */
     ROOT_STRESS,
     /** mm/mm */

@@ -1,0 +1,511 @@
+package barfit.detailing;
+
+import barfit.analysis.Line;
+import barfit.analysis.LineResult;
+import barfit.analysis.Support;
+import barfit.catalogs.BarSize;
+import barfit.design.line.LineCapacity;
+import barfit.design.line.LineSpans;
+import barfit.design.span.SpanLayout;
+import barfit.design.span.SpanProblem;
+import barfit.input.Settings;
+import barfit.section.BeamSection;
+import barfit.section.CheckResult;
+import barfit.section.Development;
+import barfit.section.Face;
+import barfit.section.anchorage.CutOffs;
+import barfit.section.anchorage.Envelope;
+import barfit.section.anchorage.HookDevelopment;
+import barfit.section.anchorage.SupportBars;
+import barfit.section.anchorage.TensionZoneCut;
+import barfit.section.trail.Q;
+import barfit.section.trail.Trail;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * A designed line detailed bar by bar: where every group of longitudinal bars starts and ends, its hooks
+ * and laps, and the checks of Chapter 25 and 9.7.3 that decide them, all from the section model.
+ *
+ * <ul>
+ *   <li>The continuous top bars (hangers) run the whole line, end cover to end cover.
+ *   <li>The extra top bars over a support run as the design has them, or further where 9.7.3 asks: past
+ *       the point where the hangers alone suffice by max(d, 12 db) (9.7.3.3), ld past the face (9.7.3.2),
+ *       past the point of inflection by max(d, 12 db, ln/16) when the hangers are less than a third of
+ *       the support's steel (9.7.3.8.4), and not cut in a tension zone unless 9.7.3.5 allows it.
+ *   <li>Each span's bottom bars run into both supports: 150 mm (6 in) past the face of a continuous support
+ *       (9.7.3.8.2, all of them, more than the quarter asked), to the far face less cover at an end
+ *       support (9.7.3.8.1), where a column or fixed end takes them in a standard hook.
+ *   <li>At an end built into a column every top and bottom bar ends in a 90-degree standard hook, whose
+ *       ldh (25.4.3) must fit in the column (far cover deducted).
+ * </ul>
+ *
+ * x along the line from the first support's centre line, mm, as the analysis has it.
+ */
+public final class LineDetailer {
+    private final Settings settings;
+    private final Trail trail;
+
+    public LineDetailer(Settings settings, Trail trail) {
+        this.settings = settings;
+        this.trail = trail;
+    }
+
+    /** The runs and the checks that placed them; null for a line without an analysis of its own. */
+    public Placed place(LineSpans.Result r) {
+        if (r.analysis() == null
+                || r.parts().stream().anyMatch(p -> !p.outcome().feasible())) {
+            return null;
+        }
+        LineResult a = r.analysis();
+        Line line = a.line();
+        int n = line.spanCount();
+        Map<Integer, LineSpans.Part> bySegment = new TreeMap<>();
+        r.parts().forEach(p -> bySegment.put(p.segment(), p));
+        double cover = settings.detailing().cover();
+        double left = line.overhangLeft() > 0
+                ? -line.overhangLeft()
+                : -line.supports().get(0).width() / 2;
+        double right = line.overhangRight() > 0
+                ? line.supportX(n) + line.overhangRight()
+                : line.supportX(n) + line.supports().get(n).width() / 2;
+        boolean hookLeft =
+                line.overhangLeft() <= 0 && line.supports().get(0).kind().integral();
+        boolean hookRight =
+                line.overhangRight() <= 0 && line.supports().get(n).kind().integral();
+        double start = left + cover;
+        double end = right - cover;
+        List<BarRun> runs = new ArrayList<>();
+        List<CheckResult> checks = new ArrayList<>();
+
+        // hangers: one run when every part has the same, else each part's over its length and supports
+        SpanLayout first = bySegment.values().iterator().next().outcome().best().layout();
+        boolean sameHangers = bySegment.values().stream().allMatch(p -> {
+            SpanLayout l = p.outcome().best().layout();
+            return l.top().equals(first.top())
+                    && continuousOf(p, n) == continuousOf(bySegment.get(firstSpan(bySegment)), n);
+        });
+        int hangers = continuousOf(bySegment.get(firstSpan(bySegment)), n);
+        if (sameHangers && hangers > 0) {
+            runs.add(new BarRun(
+                    "top continuous",
+                    Face.TOP,
+                    first.top(),
+                    hangers,
+                    start,
+                    end,
+                    hookLeft,
+                    hookRight,
+                    List.of(),
+                    0,
+                    ""));
+        } else {
+            for (LineSpans.Part p : bySegment.values()) {
+                int c = continuousOf(p, n);
+                if (c > 0) {
+                    double[] ends = segmentEnds(line, p.segment(), start, end);
+                    runs.add(new BarRun(
+                            "top continuous, " + p.name(),
+                            Face.TOP,
+                            p.outcome().best().layout().top(),
+                            c,
+                            ends[0],
+                            ends[1],
+                            hookLeft && ends[0] <= start + 1e-6,
+                            hookRight && ends[1] >= end - 1e-6,
+                            List.of(),
+                            0,
+                            ""));
+                }
+            }
+        }
+
+        // the extra top bars over each support, checked against 9.7.3 and run further where it asks
+        List<LineSpans.SupportBars> supports = r.supports();
+        for (int j = 0; j <= n; j++) {
+            LineSpans.SupportBars sb = supports.get(j);
+            if (sb == null) {
+                continue;
+            }
+            LineSpans.Side side = sb.either();
+            int total = SpanLayout.sum(side.counts());
+            int extra = total - side.continuous();
+            if (extra <= 0 && !(sb.left() != null && sb.right() != null && !sb.shared())) {
+                continue;
+            }
+            double faceL = line.supportX(j) - sb.width() / 2;
+            double faceR = line.supportX(j) + sb.width() / 2;
+            double intoLeft = sb.intoLeft();
+            double intoRight = sb.intoRight();
+            String why = "";
+            double added = 0;
+            // the spans beside the support: what 9.7.3 asks of the bars' run into each
+            if (j >= 1 && sb.left() != null) {
+                Reach need = reach(a, bySegment.get(j), sb.left(), j, false, faceL, line);
+                checks.addAll(need.checks());
+                if (need.length() > intoLeft + 1) {
+                    added += need.length() - intoLeft;
+                    why = need.why();
+                    intoLeft = need.length();
+                }
+            }
+            if (j <= n - 1 && sb.right() != null) {
+                Reach need = reach(a, bySegment.get(j + 1), sb.right(), j, true, faceR, line);
+                checks.addAll(need.checks());
+                if (need.length() > intoRight + 1) {
+                    added += need.length() - intoRight;
+                    why = why.isEmpty() ? need.why() : why + "; " + need.why();
+                    intoRight = need.length();
+                }
+            }
+            double s = Math.max(start, faceL - intoLeft);
+            double e = Math.min(end, faceR + intoRight);
+            boolean hs = hookLeft && j == 0;
+            boolean he = hookRight && j == n;
+            if (hs) {
+                s = start;
+            }
+            if (he) {
+                e = end;
+            }
+            if (extra > 0) {
+                runs.add(new BarRun(
+                        "top extra, support " + (j + 1),
+                        Face.TOP,
+                        side.bar(),
+                        extra,
+                        s,
+                        e,
+                        hs,
+                        he,
+                        List.of(),
+                        added,
+                        why));
+            }
+        }
+
+        // bottom bars, span by span (and an overhang's, from its tip into the support)
+        for (LineSpans.Part p : bySegment.values()) {
+            SpanLayout l = p.outcome().best().layout();
+            int seg = p.segment();
+            double[] ends = bottomEnds(line, seg, start, end);
+            boolean hs = hookLeft && seg == 1;
+            boolean he = hookRight && seg == n;
+            runs.add(new BarRun(
+                    "bottom, " + p.name(),
+                    Face.BOTTOM,
+                    l.bottom(),
+                    l.bottomCount(),
+                    ends[0],
+                    ends[1],
+                    hs,
+                    he,
+                    List.of(),
+                    0,
+                    ""));
+            if (seg >= 1 && seg <= n) {
+                checks.addAll(bottomChecks(p, line, seg, ends, hs, he));
+            }
+            if (l.skin() != null) {
+                double[] faces = faces(line, seg);
+                runs.add(new BarRun(
+                        "skin, " + p.name(),
+                        Face.BOTTOM,
+                        l.skin().bar(),
+                        2
+                                * barfit.design.section.SectionLayout.skinBarsPerFace(
+                                        l.height(), l.skin().spacing()),
+                        faces[0],
+                        faces[1],
+                        false,
+                        false,
+                        List.of(),
+                        0,
+                        ""));
+            }
+        }
+        // hooks at the ends built into columns: ldh must fit
+        for (BarRun run : runs) {
+            if (run.hookStart()) {
+                checks.add(hookFit(run, line.supports().get(0), "support 1"));
+            }
+            if (run.hookEnd()) {
+                checks.add(hookFit(run, line.supports().get(n), "support " + (n + 1)));
+            }
+        }
+        return new Placed(line, runs, checks, start, end);
+    }
+
+    /** The runs along a line and the checks that placed them; the bars' first and last x (end covers). */
+    public record Placed(Line line, List<BarRun> runs, List<CheckResult> checks, double start, double end) {}
+
+    private static int firstSpan(Map<Integer, LineSpans.Part> bySegment) {
+        for (int seg : bySegment.keySet()) {
+            if (seg >= 1) {
+                return seg;
+            }
+        }
+        return bySegment.keySet().iterator().next();
+    }
+
+    /** A part's continuous top bars (an overhang's count as its own top bars' continuous share). */
+    private static int continuousOf(LineSpans.Part p, int n) {
+        SpanLayout l = p.outcome().best().layout();
+        return l.topContinuous();
+    }
+
+    /** A segment's two faces (an overhang: its free end and its support's face). */
+    private static double[] faces(Line line, int seg) {
+        int n = line.spanCount();
+        if (seg == 0) {
+            return new double[] {-line.overhangLeft(), -line.supports().get(0).width() / 2};
+        }
+        if (seg == n + 1) {
+            double x = line.supportX(n);
+            return new double[] {x + line.supports().get(n).width() / 2, x + line.overhangRight()};
+        }
+        return new double[] {
+            line.supportX(seg - 1) + line.supports().get(seg - 1).width() / 2,
+            line.supportX(seg) - line.supports().get(seg).width() / 2
+        };
+    }
+
+    /** A segment's bars from the centre line of one support to the next, clipped to the bars' ends. */
+    private static double[] segmentEnds(Line line, int seg, double start, double end) {
+        int n = line.spanCount();
+        double a = seg == 0 ? start : line.supportX(seg - 1);
+        double b = seg == n + 1 ? end : line.supportX(Math.min(seg, n));
+        return new double[] {Math.max(start, a), Math.min(end, b)};
+    }
+
+    /** Bottom bars: into a continuous support 150 mm (6 in) past its face, to the end cover at an end. */
+    private double[] bottomEnds(Line line, int seg, double start, double end) {
+        int n = line.spanCount();
+        double into = settings.code().anchorage().intoSupport();
+        double[] f = faces(line, seg);
+        double a;
+        double b;
+        if (seg == 0) {
+            a = start;
+            b = f[1] + into;
+        } else if (seg == n + 1) {
+            a = f[0] - into;
+            b = end;
+        } else {
+            boolean endLeft = seg == 1 && line.overhangLeft() <= 0;
+            boolean endRight = seg == n && line.overhangRight() <= 0;
+            a = endLeft
+                    ? start
+                    : f[0] - Math.min(into, line.supports().get(seg - 1).width());
+            b = endRight ? end : f[1] + Math.min(into, line.supports().get(seg).width());
+        }
+        return new double[] {a, b};
+    }
+
+    /** What 9.7.3 asks of the extra top bars' run past a face into a span, and the checks that say so. */
+    private record Reach(double length, String why, List<CheckResult> checks) {}
+
+    private Reach reach(
+            LineResult a,
+            LineSpans.Part part,
+            LineSpans.Side side,
+            int support,
+            boolean intoRight,
+            double face,
+            Line line) {
+        int span = part.segment();
+        SpanProblem p = part.problem();
+        SpanLayout l = part.outcome().best().layout();
+        double[] f = faces(line, span);
+        // this support's half of the span: from its face to the peak of the sagging envelope (mid-span
+        // where there is none), so the other support's negative moment is not read as this one's
+        double split = sagPeak(a, span, f);
+        Envelope hog = intoRight
+                ? Envelope.hogging(a, span).between(f[0], split)
+                : Envelope.hogging(a, span).between(split, f[1]);
+        BeamSection at = side.section().section();
+        double d = side.section().flexure().d();
+        BarSize bar = side.bar();
+        double ld = Development.ofLayer(at, at.layersOn(Face.TOP).get(0), trail).ld();
+        double hangers = LineCapacity.hangersPhiMn(p, l, !intoRight);
+        List<CheckResult> checks = new ArrayList<>();
+        double need = ld; // 9.7.3.2: developed past the face, the critical section
+        String why = "ld past the face (9.7.3.2)";
+        var needed = CutOffs.needed(hog, hangers, CutOffs.Interpolation.QUADRATIC);
+        double ext = CutOffs.extension(d, bar);
+        double cut;
+        if (needed.isPresent()) {
+            // the theoretical point nearest mid-span on this support's side, then 9.7.3.3
+            double theory = intoRight ? needed.get().to() : needed.get().from();
+            if (intoRight ? needed.get().toEnd() : needed.get().fromEnd()) {
+                theory = split; // needed all through this half: to the sagging peak
+            }
+            cut = intoRight ? theory + ext : theory - ext;
+            double byCut = Math.abs(cut - face);
+            if (byCut > need) {
+                need = byCut;
+                why = "past where the continuous bars suffice by max(d, 12 db) (9.7.3.3)";
+            }
+        }
+        // 9.7.3.8.4: a third of the negative steel past the point of inflection
+        double asNeg = SpanLayout.sum(side.counts()) * bar.area();
+        double asCont = side.continuous() * bar.area();
+        var zero = CutOffs.needed(hog, 0, CutOffs.Interpolation.QUADRATIC);
+        double inflection = Double.NaN;
+        if (zero.isPresent()) {
+            inflection = intoRight ? zero.get().to() : zero.get().from();
+            boolean runsToEnd = intoRight ? zero.get().toEnd() : zero.get().fromEnd(); // to the half's end
+            if (runsToEnd) {
+                inflection = Double.NaN; // hogging over the whole span: no point of inflection
+            }
+        }
+        if (!Double.isNaN(inflection) && asCont < asNeg / 3 - 1e-9) {
+            var past = SupportBars.negativePastInflection(asNeg, d, bar, f[1] - f[0], trail);
+            double byInflection = Math.abs(inflection - face) + past.length();
+            if (byInflection > need) {
+                need = byInflection;
+                why = "past the point of inflection by max(d, 12 db, ln/16) (9.7.3.8.4)";
+            }
+        }
+        // 9.7.3.5: a cut short of the point of inflection is in a tension zone
+        if (!Double.isNaN(inflection) && need < Math.abs(inflection - face) - 1e-6) {
+            double xCut = intoRight ? face + need : face - need;
+            SpanProblem.Zone zone = zoneAt(p, xCut - f[0]);
+            var st = l.zoneStirrups().get(p.zones().indexOf(zone));
+            double vu = zone.vu() == null ? 0 : Math.abs(zone.vu());
+            var stirrupSection = at.withStirrups(st);
+            var shear =
+                    barfit.section.Shear.analyse(stirrupSection, vu, d, side.continuous() * bar.area(), Trail.off());
+            var verdict = TensionZoneCut.check(
+                    new TensionZoneCut.AtCut(
+                            bar,
+                            true,
+                            vu,
+                            shear.phiVn(),
+                            asCont,
+                            Math.max(asCont, 1e-9),
+                            asNeg - asCont,
+                            at.shape().width(),
+                            d,
+                            null),
+                    settings.code(),
+                    trail);
+            checks.add(CheckResult.rule(
+                    "tension-zone-cut",
+                    "Top bars cut in a tension zone, support " + (support + 1),
+                    "9.7.3.5",
+                    true,
+                    Q.length(need),
+                    Q.length(Math.abs(inflection - face)),
+                    verdict.allowed() ? "<" : "→",
+                    verdict.allowed()
+                            ? "allowed by " + verdict.basis().name().toLowerCase(java.util.Locale.ROOT)
+                            : "not allowed: the bars run past the point of inflection instead"));
+            if (!verdict.allowed()) {
+                need = Math.abs(inflection - face) + ext;
+                why = "no cut in the tension zone (9.7.3.5): past the point of inflection by max(d, 12 db)";
+            }
+        }
+        return new Reach(need, why, checks);
+    }
+
+    /** x of the largest sagging moment between the faces, or mid-span where the span never sags. */
+    private static double sagPeak(LineResult a, int span, double[] f) {
+        double best = 0;
+        double x = (f[0] + f[1]) / 2;
+        for (LineResult.StationValues s : a.stations()) {
+            if (s.segment() == span && s.x() >= f[0] && s.x() <= f[1] && s.mMax() > best) {
+                best = s.mMax();
+                x = s.x();
+            }
+        }
+        return x;
+    }
+
+    private static SpanProblem.Zone zoneAt(SpanProblem p, double local) {
+        List<SpanProblem.Zone> zones = p.zones();
+        for (SpanProblem.Zone z : zones) {
+            if (local >= z.from() - 1e-6 && local <= z.to() + 1e-6) {
+                return z;
+            }
+        }
+        return local < zones.get(0).from() ? zones.get(0) : zones.get(zones.size() - 1);
+    }
+
+    /** 9.7.3.8.1 to 9.7.3.8.3 for one span's bottom bars at its two supports. */
+    private List<CheckResult> bottomChecks(
+            LineSpans.Part part, Line line, int seg, double[] ends, boolean hookStart, boolean hookEnd) {
+        SpanLayout l = part.outcome().best().layout();
+        SpanProblem p = part.problem();
+        List<CheckResult> out = new ArrayList<>();
+        double as = l.bottomCount() * l.bottom().area();
+        double[] f = faces(line, seg);
+        var mid = part.outcome().best().report().sections().get(SpanProblem.Place.MID);
+        for (int side = 0; side < 2; side++) {
+            int j = side == 0 ? seg - 1 : seg;
+            Support s = line.supports().get(j);
+            boolean end = j == 0 && line.overhangLeft() <= 0 || j == line.spanCount() && line.overhangRight() <= 0;
+            var kind = end ? SupportBars.End.SIMPLE : SupportBars.End.CONTINUOUS;
+            var need = SupportBars.positiveIntoSupport(kind, as, false, settings.code(), trail);
+            double embedment = side == 0 ? f[0] - ends[0] : ends[1] - f[1];
+            out.addAll(SupportBars.checkIntoSupport(need, as, embedment));
+            if (end && !s.kind().integral() && mid != null) {
+                // a simple support: ld against 1.3 Mn / Vu + la (9.7.3.8.3), la past the support's centre line
+                BeamSection sec = mid.section();
+                double ld = Development.ofLayer(sec, sec.layersOn(Face.BOTTOM).get(0), trail)
+                        .ld();
+                double vu = side == 0 ? p.vLeft() == null ? 0 : p.vLeft() : p.vRight() == null ? 0 : p.vRight();
+                double la = Math.max(0, embedment - s.width() / 2);
+                double mn = mid.flexure().mn();
+                out.add(SupportBars.atSimpleSupport(ld, mn, Math.abs(vu), la, true, false, trail)
+                        .check());
+            }
+        }
+        return out;
+    }
+
+    /** ldh of a hooked run's bars against the column it ends in (25.4.3.1, far cover deducted). */
+    private CheckResult hookFit(BarRun run, Support s, String where) {
+        double side =
+                settings.detailing().cover() + settings.detailing().stirrupBar().diameter();
+        var ldh = HookDevelopment.ldh(
+                run.bar(),
+                settings.materials(),
+                settings.code(),
+                HookDevelopment.Conditions.uncoated(side, true),
+                trail);
+        var fit = HookDevelopment.fit(ldh.ldh(), s.width(), settings.detailing().cover(), trail);
+        String note = run.count() + " " + run.bar().label() + " " + run.what() + " hooked into " + where;
+        if (!fit.fits()) {
+            // what would make it fit: a wider column, or the column's ties confining the hooks (ψr = 1.0)
+            var confined = HookDevelopment.ldh(
+                    run.bar(),
+                    settings.materials(),
+                    settings.code(),
+                    new HookDevelopment.Conditions(
+                            false,
+                            Double.POSITIVE_INFINITY,
+                            run.count() * run.bar().area(),
+                            0,
+                            side,
+                            true,
+                            Double.POSITIVE_INFINITY,
+                            false),
+                    Trail.off());
+            note += String.format(
+                    java.util.Locale.ROOT,
+                    ": ldh %.0f mm needs a support %.0f mm wide (cover included)%s",
+                    ldh.ldh(),
+                    ldh.ldh() + settings.detailing().cover(),
+                    confined.ldh() <= fit.available()
+                            ? String.format(
+                                    java.util.Locale.ROOT,
+                                    ", or ties confining the hooks (ψr = 1.0, Table 25.4.3.2) giving ldh %.0f mm, which fits",
+                                    confined.ldh())
+                            : "");
+        }
+        return fit.check().withNote(note);
+    }
+}
