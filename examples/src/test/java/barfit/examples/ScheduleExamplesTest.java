@@ -49,7 +49,8 @@ class ScheduleExamplesTest {
     static final Path LIBRARY = Path.of("schedule/library-si.yaml");
     static final Path LIBRARY_BEAMS = Path.of("schedule/library-beams.csv");
     static final Path OFFICE = Path.of("schedule/office-us.yaml");
-    static final List<String> OUTPUTS = List.of("schedule.csv", "schedule.json", "report.html", "standardisation.svg");
+    static final List<String> OUTPUTS =
+            List.of("schedule.csv", "bending-schedule.csv", "schedule.json", "report.html", "standardisation.svg");
     static final ObjectMapper JSON = new ObjectMapper();
 
     @TempDir

@@ -34,10 +34,11 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         description = "Design every beam of a floor or building: each at its proven optimum, or rationalised to a few "
                 + "section and bar sizes (rationalise: in FILE) with the proof of the whole schedule's optimum.%n"
-                + "With --out DIR writes schedule.csv, schedule.json, report.html and (with rationalise:) standardisation.svg there.%n"
+                + "With --out DIR writes schedule.csv, bending-schedule.csv, schedule.json, report.html and (with rationalise:) standardisation.svg there.%n"
                 + "Exit code 0 when every beam has a passing design, 1 when one has none, 2 for bad input.")
 final class ScheduleCommand implements Callable<Integer> {
-    static final List<String> OUTPUTS = List.of("schedule.csv", "schedule.json", "report.html", "standardisation.svg");
+    static final List<String> OUTPUTS =
+            List.of("schedule.csv", "bending-schedule.csv", "schedule.json", "report.html", "standardisation.svg");
 
     @Spec
     CommandSpec spec;
@@ -159,6 +160,7 @@ final class ScheduleCommand implements Callable<Integer> {
     private List<String> write(ScheduleResult r) {
         Map<String, String> files = new LinkedHashMap<>();
         files.put("schedule.csv", ScheduleCsv.render(r));
+        files.put("bending-schedule.csv", barfit.report.BendingScheduleCsv.render(r));
         files.put("schedule.json", ScheduleJson.render(r));
         files.put("report.html", barfit.report.html.ScheduleHtml.render(r));
         if (!r.standardisation().isEmpty()) { // the curve is computed only when the schedule is rationalised

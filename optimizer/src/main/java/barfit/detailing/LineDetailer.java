@@ -79,6 +79,7 @@ public final class LineDetailer {
         double end = right - cover;
         List<BarRun> runs = new ArrayList<>();
         List<CheckResult> checks = new ArrayList<>();
+        List<CutOff> cutOffs = new ArrayList<>();
 
         // hangers: one run when every part has the same, else each part's over its length and supports
         SpanLayout first = bySegment.values().iterator().next().outcome().best().layout();
@@ -145,6 +146,8 @@ public final class LineDetailer {
             if (j >= 1 && sb.left() != null) {
                 Reach need = reach(a, bySegment.get(j), sb.left(), j, false, faceL, line);
                 checks.addAll(need.checks());
+                cutOffs.add(new CutOff(
+                        j + 1, false, need.theoretical(), need.inflection(), need.ld(), need.length(), intoLeft));
                 if (need.length() > intoLeft + 1) {
                     added += need.length() - intoLeft;
                     why = need.why();
@@ -154,6 +157,8 @@ public final class LineDetailer {
             if (j <= n - 1 && sb.right() != null) {
                 Reach need = reach(a, bySegment.get(j + 1), sb.right(), j, true, faceR, line);
                 checks.addAll(need.checks());
+                cutOffs.add(new CutOff(
+                        j + 1, true, need.theoretical(), need.inflection(), need.ld(), need.length(), intoRight));
                 if (need.length() > intoRight + 1) {
                     added += need.length() - intoRight;
                     why = why.isEmpty() ? need.why() : why + "; " + need.why();
@@ -235,11 +240,26 @@ public final class LineDetailer {
                 checks.add(hookFit(run, line.supports().get(n), "support " + (n + 1)));
             }
         }
-        return new Placed(line, runs, checks, start, end);
+        return new Placed(line, runs, checks, cutOffs, start, end);
     }
 
     /** The runs along a line and the checks that placed them; the bars' first and last x (end covers). */
-    public record Placed(Line line, List<BarRun> runs, List<CheckResult> checks, double start, double end) {}
+    public record Placed(
+            Line line, List<BarRun> runs, List<CheckResult> checks, List<CutOff> cutOffs, double start, double end) {}
+
+    /**
+     * What 9.7.3 asks of one support's extra top bars on one side: x where the continuous bars alone
+     * suffice (NaN where they suffice everywhere), the point of inflection (NaN where none), ld, the run past
+     * the face it asks and the run the design gave (mm).
+     */
+    public record CutOff(
+            int support,
+            boolean intoRight,
+            double theoretical,
+            double inflection,
+            double ld,
+            double required,
+            double designed) {}
 
     private static int firstSpan(Map<Integer, LineSpans.Part> bySegment) {
         for (int seg : bySegment.keySet()) {
@@ -305,7 +325,8 @@ public final class LineDetailer {
     }
 
     /** What 9.7.3 asks of the extra top bars' run past a face into a span, and the checks that say so. */
-    private record Reach(double length, String why, List<CheckResult> checks) {}
+    private record Reach(
+            double length, String why, List<CheckResult> checks, double theoretical, double inflection, double ld) {}
 
     private Reach reach(
             LineResult a,
@@ -329,7 +350,8 @@ public final class LineDetailer {
         double d = side.section().flexure().d();
         BarSize bar = side.bar();
         double ld = Development.ofLayer(at, at.layersOn(Face.TOP).get(0), trail).ld();
-        double hangers = LineCapacity.hangersPhiMn(p, l, !intoRight);
+        // the part's end at this support: its left end where the bars run into the part to the right
+        double hangers = LineCapacity.hangersPhiMn(p, l, intoRight);
         List<CheckResult> checks = new ArrayList<>();
         double need = ld; // 9.7.3.2: developed past the face, the critical section
         String why = "ld past the face (9.7.3.2)";
@@ -408,7 +430,20 @@ public final class LineDetailer {
                 why = "no cut in the tension zone (9.7.3.5): past the point of inflection by max(d, 12 db)";
             }
         }
-        return new Reach(need, why, checks);
+        return new Reach(
+                need,
+                why,
+                checks,
+                needed.isPresent() ? theoryOf(needed.get(), intoRight, split) : Double.NaN,
+                inflection,
+                ld);
+    }
+
+    private static double theoryOf(CutOffs.Needed n, boolean intoRight, double split) {
+        if (intoRight ? n.toEnd() : n.fromEnd()) {
+            return split;
+        }
+        return intoRight ? n.to() : n.from();
     }
 
     /** x of the largest sagging moment between the faces, or mid-span where the span never sags. */

@@ -186,6 +186,16 @@ final class LineJson {
                 alt.redistribution().forEach(red::add);
             }
         }
+        DesignItem last = parts.get(parts.size() - 1);
+        if (last.line().detail() != null) {
+            // the line detailed bar by bar: its bending schedule and how its bars were placed
+            o.set(
+                    "bending_schedule",
+                    BendingScheduleJson.rows(last.line().detail().schedule(), u));
+            o.set("detailing", BendingScheduleJson.detailing(last.line().detail(), u));
+        } else {
+            o.putArray("bending_schedule");
+        }
         ObjectNode proof = o.putObject("proof");
         boolean shared =
                 all && parts.stream().allMatch(p -> p.whole().proof().search().withLine());

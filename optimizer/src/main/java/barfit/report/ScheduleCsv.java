@@ -80,7 +80,7 @@ public final class ScheduleCsv {
         return String.format(Locale.ROOT, "%.1f", v);
     }
 
-    private static String line(List<String> cells) {
+    static String line(List<String> cells) {
         StringBuilder sb = new StringBuilder();
         for (String c : cells) {
             if (sb.length() > 0) {
