@@ -156,7 +156,7 @@ final class DesignCommand implements Callable<Integer> {
                             r,
                             settings,
                             cost,
-                            LineDetail.defaultStock(settings),
+                            l.stockLength() != null ? l.stockLength() : LineDetail.defaultStock(settings),
                             trail ? Trail.recording() : Trail.off())
                     : null;
             for (int i = 0; i < r.parts().size(); i++) {

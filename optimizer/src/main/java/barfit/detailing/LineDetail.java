@@ -71,10 +71,25 @@ public record LineDetail(
             }
         }
         List<BarRun> runs = new ArrayList<>();
+        List<CheckResult> stockChecks = new ArrayList<>();
         for (BarRun run : placed.runs()) {
             double ld = ld(run, settings);
             boolean top = run.face() == barfit.section.Face.TOP;
-            runs.add(CutLengths.lapped(run, stock, top ? midSpans : supports, ld, settings.code()));
+            try {
+                runs.add(CutLengths.lapped(run, stock, top ? midSpans : supports, ld, settings.code()));
+            } catch (IllegalArgumentException e) {
+                // a stock bar too short for two laps: the run is left whole and the check says why
+                runs.add(run);
+                stockChecks.add(CheckResult.rule(
+                        "stock_length",
+                        "Stock bars long enough for their laps",
+                        "25.5.2",
+                        false,
+                        barfit.section.trail.Q.span(stock),
+                        barfit.section.trail.Q.span(run.length()),
+                        "<",
+                        e.getMessage() + ": give a longer stock_length"));
+            }
         }
         List<ScheduleRow> rows = new ArrayList<>(CutLengths.rows(runs, settings.code(), settings.materials()));
         List<Zone> zones = new ArrayList<>();
@@ -97,6 +112,7 @@ public record LineDetail(
         }
         var coverage = DetailedCapacity.check(r, runs, settings);
         List<CheckResult> checks = new ArrayList<>(placed.checks());
+        checks.addAll(stockChecks);
         return new LineDetail(
                 r.line().id(),
                 line,

@@ -192,10 +192,11 @@ public final class LineDetailer {
         }
 
         // bottom bars, span by span (and an overhang's, from its tip into the support)
+        double[] bottomLaps = bottomLaps(line, bySegment);
         for (LineSpans.Part p : bySegment.values()) {
             SpanLayout l = p.outcome().best().layout();
             int seg = p.segment();
-            double[] ends = bottomEnds(line, seg, start, end);
+            double[] ends = bottomEnds(line, seg, start, end, bottomLaps);
             boolean hs = hookLeft && seg == 1;
             boolean he = hookRight && seg == n;
             runs.add(new BarRun(
@@ -231,6 +232,7 @@ public final class LineDetailer {
                         ""));
             }
         }
+        checks.addAll(integrity(r.line().perimeter(), bySegment, hangers, first.top()));
         // hooks at the ends built into columns: ldh must fit
         for (BarRun run : runs) {
             if (run.hookStart()) {
@@ -300,8 +302,12 @@ public final class LineDetailer {
         return new double[] {Math.max(start, a), Math.min(end, b)};
     }
 
-    /** Bottom bars: into a continuous support 150 mm (6 in) past its face, to the end cover at an end. */
-    private double[] bottomEnds(Line line, int seg, double start, double end) {
+    /**
+     * Bottom bars: lapped over each interior support (class B, centred on its centre line: continuous as
+     * 9.7.7.2 asks, spliced at the support as 9.7.7.5 allows), to the end cover at an end; an overhang's
+     * run 150 mm (6 in) past the face into its support (9.7.3.8.2).
+     */
+    private double[] bottomEnds(Line line, int seg, double start, double end, double[] laps) {
         int n = line.spanCount();
         double into = settings.code().anchorage().intoSupport();
         double[] f = faces(line, seg);
@@ -318,10 +324,89 @@ public final class LineDetailer {
             boolean endRight = seg == n && line.overhangRight() <= 0;
             a = endLeft
                     ? start
-                    : f[0] - Math.min(into, line.supports().get(seg - 1).width());
-            b = endRight ? end : f[1] + Math.min(into, line.supports().get(seg).width());
+                    : seg == 1 ? f[0] - into : line.supportX(seg - 1) - Math.max(laps[seg - 1], 2 * into) / 2;
+            b = endRight ? end : seg == n ? f[1] + into : line.supportX(seg) + Math.max(laps[seg], 2 * into) / 2;
         }
-        return new double[] {a, b};
+        return new double[] {Math.max(start, a), Math.min(end, b)};
+    }
+
+    /** Per support, the class B lap of the bottom bars of the spans either side (the longer), mm. */
+    private double[] bottomLaps(Line line, Map<Integer, LineSpans.Part> bySegment) {
+        int n = line.spanCount();
+        double[] out = new double[n + 1];
+        for (int j = 1; j < n; j++) {
+            double lap = 0;
+            for (int seg : new int[] {j, j + 1}) {
+                LineSpans.Part p = bySegment.get(seg);
+                if (p == null) {
+                    continue;
+                }
+                BarSize bar = p.outcome().best().layout().bottom();
+                double cb = settings.detailing().cover()
+                        + settings.detailing().stirrupBar().diameter()
+                        + bar.diameter() / 2;
+                double ld = Development.general(
+                                bar, settings.materials(), settings.code(), false, cb, 0, 0, 0, Trail.off())
+                        .ldEquation();
+                lap = Math.max(
+                        lap,
+                        barfit.section.anchorage.LapSplices.classB(bar, ld, settings.code(), trail)
+                                .length());
+            }
+            out[j] = lap;
+        }
+        return out;
+    }
+
+    /**
+     * Structural integrity (9.7.7): every span's bottom bars continuous through the interior supports by
+     * their laps, and on a perimeter line the continuous top bars against a sixth of the largest negative
+     * steel, two bars at least (9.7.7.1(b)); closed hoops along every span (9.7.7.1(c)).
+     */
+    private List<CheckResult> integrity(
+            boolean perimeter, Map<Integer, LineSpans.Part> bySegment, int hangers, BarSize top) {
+        double asPos = 0;
+        double asNeg = 0;
+        int fewestBottom = Integer.MAX_VALUE;
+        for (LineSpans.Part p : bySegment.values()) {
+            SpanLayout l = p.outcome().best().layout();
+            asPos = Math.max(asPos, l.bottomCount() * l.bottom().area());
+            fewestBottom = Math.min(fewestBottom, l.bottomCount());
+            for (List<Integer> c : java.util.Arrays.asList(l.topLeft(), l.topRight())) {
+                if (c != null) {
+                    asNeg = Math.max(asNeg, SpanLayout.sum(c) * l.top().area());
+                }
+            }
+        }
+        var need = barfit.section.anchorage.Integrity.of(perimeter, asPos, asNeg, trail);
+        List<CheckResult> out = new ArrayList<>();
+        String clause = perimeter ? "9.7.7.1" : "9.7.7.2";
+        out.add(CheckResult.rule(
+                "integrity_bottom",
+                "Continuous bottom bars (structural integrity)",
+                clause,
+                fewestBottom >= 2,
+                Q.count(fewestBottom),
+                Q.count(2),
+                "≥",
+                "every bottom bar runs on through the interior supports, lapped class B there (9.7.7.5)"));
+        if (perimeter) {
+            int needed = need.topBars(top);
+            out.add(CheckResult.rule(
+                    "integrity_top",
+                    "Continuous top bars of a perimeter beam",
+                    "9.7.7.1",
+                    hangers >= needed,
+                    Q.count(hangers),
+                    Q.count(needed),
+                    "≥",
+                    hangers >= needed
+                            ? "the continuous top bars, lapped class B near mid-span (9.7.7.5); closed hoops along"
+                                    + " every span (9.7.7.1(c))"
+                            : "needs " + needed + " continuous " + top.label() + " top bars (a sixth of the largest"
+                                    + " negative steel, two at least): design the line with more hangers"));
+        }
+        return out;
     }
 
     /** What 9.7.3 asks of the extra top bars' run past a face into a span, and the checks that say so. */

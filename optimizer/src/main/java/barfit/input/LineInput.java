@@ -14,7 +14,9 @@ import java.util.List;
  * per segment (N/mm, N), the section analysed (and whose own weight is added), the sustained part of
  * the live load, the method (stiffness analysis or the 6.5 coefficients), the redistribution asked at
  * each support (percent), the concrete's unit weight (N/mm³), the headroom cap, and whether the line is
- * one set of forms ({@code oneSection}: one b x h throughout, the default) or each span its own section.
+ * one set of forms ({@code oneSection}: one b x h throughout, the default) or each span its own section;
+ * for its detailing, whether it is a perimeter beam (9.7.7.1) and the stock bar length (mm, null for the
+ * default of 12 m / 40 ft).
  * Segment 0 is the left overhang, 1..n the spans, n + 1 the right overhang.
  */
 public record LineInput(
@@ -31,7 +33,9 @@ public record LineInput(
         List<Double> redistribution,
         double unitWeight,
         Double maxDepth,
-        boolean oneSection) {
+        boolean oneSection,
+        boolean perimeter,
+        Double stockLength) {
 
     /** As given before the forms were a choice: each span its own section. */
     public LineInput(
@@ -62,7 +66,9 @@ public record LineInput(
                 redistribution,
                 unitWeight,
                 maxDepth,
-                false);
+                false,
+                false,
+                null);
     }
 
     public LineInput {
@@ -88,7 +94,9 @@ public record LineInput(
                 redistribution,
                 unitWeight,
                 cap,
-                oneSection);
+                oneSection,
+                perimeter,
+                stockLength);
     }
 
     /** The web's own weight per length, N/mm (gross concrete section, flange counted as given in the section). */

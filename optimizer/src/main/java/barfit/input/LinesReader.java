@@ -33,7 +33,9 @@ public final class LinesReader {
         "method",
         "redistribution",
         "max_depth",
-        "forms"
+        "forms",
+        "perimeter",
+        "stock_length"
     };
 
     /** Default unit weight of reinforced concrete: 24 kN/m³ (150 lb/ft³), common practice. */
@@ -213,6 +215,17 @@ public final class LinesReader {
                                 + "section), got \"" + forms + "\"");
             }
         }
+        boolean perimeter = f.optBool("perimeter").orElse(false);
+        Double stock = null;
+        if (f.has("stock_length")) {
+            // a stock bar: 3 m to 30 m (10 ft to 100 ft)
+            double v = f.number("stock_length", "the stock bar length in " + u.unit(barfit.section.trail.Dim.SPAN));
+            double mm = u.toSI(v, barfit.section.trail.Dim.SPAN);
+            if (!(mm >= 3000 - 1e-6 && mm <= 30000 + 1e-6)) {
+                throw f.error("stock_length", "expected a stock bar length of 3 to 30 m (10 to 100 ft), got " + v);
+            }
+            stock = mm;
+        }
         return new LineInput(
                 id,
                 f.location(),
@@ -227,7 +240,9 @@ public final class LinesReader {
                 redistribution,
                 unitWeight,
                 cap,
-                oneSection);
+                oneSection,
+                perimeter,
+                stock);
     }
 
     private static List<Support> supports(YFields f, int spans, SectionReader sr, UnitSystem u) {

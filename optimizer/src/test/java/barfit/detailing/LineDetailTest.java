@@ -229,4 +229,29 @@ class LineDetailTest {
             assertTrue(det.runs().stream().anyMatch(r -> r.face() == Face.TOP));
         }
     }
+
+    @Test
+    void tooShortStockAndTooNarrowColumnAreDiagnosedNotPassed() throws IOException {
+        // invented line ending in a 300 mm column: a No. 22 hook needs more (ldh of 25.4.3.1 with psi_r = 1.6,
+        // no ties counted), and 1 m stock bars cannot hold two class B laps of No. 16 bars (25.5.2)
+        Designed d = design(HEAD + """
+                lines:
+                  - id: N
+                    spans: [7.0, 7.0]
+                    supports:
+                      - {width: 300, below: {b: 300, h: 300, height: 3.5}}
+                    loads: {dead: 25, live: 12}
+                    section: {width: 300, height: 600}
+                """);
+        LineDetail det = LineDetail.of(d.result(), d.in().settings(), d.cost(), 1000, Trail.off());
+        assertTrue(det.checks().stream().anyMatch(c -> c.id().equals("stock_length") && !c.pass()), "stock too short");
+        var hooks = det.checks().stream().filter(c -> c.id().equals("hook-fit")).toList();
+        assertTrue(!hooks.isEmpty(), "hooks checked at the columns at both ends");
+        for (var c : hooks) {
+            if (!c.pass()) {
+                assertTrue(c.note().contains("needs a support"), "says what would fit: " + c.note());
+            }
+        }
+        assertTrue(!det.ok(), "a detail that fails is never reported as passing");
+    }
 }
