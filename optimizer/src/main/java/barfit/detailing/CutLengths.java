@@ -18,7 +18,7 @@ import java.util.Map;
  * bars' near mid-span and the bottom bars' near the supports where a preferred point allows it, else as
  * far along as the stock reaches; a mechanical splice for bars larger than No. 36 / #11, 25.5.1.1), then
  * each piece's cut length: its straight length plus its hooks' developed length (Table 25.3.1), rounded
- * up to 10 mm (common practice, no source), and the pieces of the same size, shape and length under one
+ * up to 10 mm or 1 in (common practice, no source), and the pieces of the same size, shape and length under one
  * mark.
  */
 public final class CutLengths {
@@ -78,11 +78,13 @@ public final class CutLengths {
         double length = p.to() - p.from();
         StandardHooks.Hook hook = StandardHooks.of(bar, StandardHooks.Bend.DEG_90, code, Trail.off());
         int hooks = (p.hookStart() ? 1 : 0) + (p.hookEnd() ? 1 : 0);
-        return roundUp(length + hooks * (hook.developed() - hook.reach()));
+        return roundUp(length + hooks * (hook.developed() - hook.reach()), code);
     }
 
-    static double roundUp(double mm) {
-        return Math.ceil(mm / 10 - 1e-9) * 10;
+    /** Up to the next 10 mm, or the next inch in inch-pound work (common practice, no source). */
+    static double roundUp(double mm, CodeEquations code) {
+        double step = code.inchPound() ? CodeEquations.MM_PER_IN : 10;
+        return Math.ceil(mm / step - 1e-9) * step;
     }
 
     /** The schedule's rows for the longitudinal runs, marks B (bottom), T (top) and K (skin) in order. */
@@ -103,8 +105,8 @@ public final class CutLengths {
                     continue;
                 }
                 int k = next.merge(prefix, 1, Integer::sum);
-                double straight = roundUp(p.to() - p.from()); // out to out, a hook's outside included
-                double leg = shape == BarShape.STRAIGHT ? 0 : roundUp(hook.height());
+                double straight = roundUp(p.to() - p.from(), code); // out to out, a hook's outside included
+                double leg = shape == BarShape.STRAIGHT ? 0 : roundUp(hook.height(), code);
                 byKey.put(
                         key,
                         new ScheduleRow(

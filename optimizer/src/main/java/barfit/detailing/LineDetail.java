@@ -93,7 +93,7 @@ public record LineDetail(
         }
         List<ScheduleRow> rows = new ArrayList<>(CutLengths.rows(runs, settings.code(), settings.materials()));
         List<Zone> zones = new ArrayList<>();
-        rows.addAll(stirrups(r, line, cost, zones));
+        rows.addAll(stirrups(r, line, cost, zones, settings));
         Map<String, Double> bySize = new TreeMap<>();
         double main = 0;
         double stirrup = 0;
@@ -150,7 +150,8 @@ public record LineDetail(
     }
 
     /** Hoops and crossties per zone of every part; the same bar and length share a mark. */
-    private static List<ScheduleRow> stirrups(LineSpans.Result r, Line line, CostModel cost, List<Zone> zones) {
+    private static List<ScheduleRow> stirrups(
+            LineSpans.Result r, Line line, CostModel cost, List<Zone> zones, Settings settings) {
         Map<String, ScheduleRow> byKey = new LinkedHashMap<>();
         int k = 0;
         for (LineSpans.Part p : r.parts()) {
@@ -169,7 +170,7 @@ public record LineDetail(
                         ? -line.supports().get(0).width() / 2 - zs.get(i).from()
                         : origin + zs.get(i).to();
                 zones.add(new Zone(p.name(), a, b, st, sets));
-                double hoop = CutLengths.roundUp(cost.hoopLength(l.width(), l.height(), st.bar()));
+                double hoop = CutLengths.roundUp(cost.hoopLength(l.width(), l.height(), st.bar()), settings.code());
                 double cover = cost.cover();
                 String key = "H|" + st.bar().designation() + "|" + hoop;
                 ScheduleRow had = byKey.get(key);
@@ -185,13 +186,13 @@ public record LineDetail(
                                     sets,
                                     hoop,
                                     CutLengths.mass(st.bar(), sets, hoop),
-                                    CutLengths.roundUp(l.width() - 2 * cover),
-                                    CutLengths.roundUp(l.height() - 2 * cover),
+                                    CutLengths.roundUp(l.width() - 2 * cover, settings.code()),
+                                    CutLengths.roundUp(l.height() - 2 * cover, settings.code()),
                                     "stirrups"));
                 }
                 if (st.legs() > 2) {
                     int ties = sets * (st.legs() - 2);
-                    double tie = CutLengths.roundUp(cost.crosstieLength(l.height(), st.bar()));
+                    double tie = CutLengths.roundUp(cost.crosstieLength(l.height(), st.bar()), settings.code());
                     String tk = "C|" + st.bar().designation() + "|" + tie;
                     ScheduleRow t = byKey.get(tk);
                     if (t != null) {
@@ -206,7 +207,7 @@ public record LineDetail(
                                         ties,
                                         tie,
                                         CutLengths.mass(st.bar(), ties, tie),
-                                        CutLengths.roundUp(l.height() - 2 * cover),
+                                        CutLengths.roundUp(l.height() - 2 * cover, settings.code()),
                                         0,
                                         "crossties"));
                     }

@@ -13,13 +13,13 @@ import java.util.List;
 public final class SpanSchedule {
     private SpanSchedule() {}
 
-    public static List<ScheduleRow> of(List<SpanLayout.BarMark> bars) {
+    public static List<ScheduleRow> of(List<SpanLayout.BarMark> bars, barfit.section.CodeEquations code) {
         List<ScheduleRow> out = new ArrayList<>();
         for (SpanLayout.BarMark m : bars) {
             BarShape shape = m.role() == SpanLayout.Role.HOOPS
                     ? BarShape.HOOP
                     : m.role() == SpanLayout.Role.CROSSTIES ? BarShape.CROSSTIE : BarShape.STRAIGHT;
-            double cut = CutLengths.roundUp(m.length());
+            double cut = CutLengths.roundUp(m.length(), code);
             out.add(new ScheduleRow(
                     m.mark(),
                     shape,

@@ -38,7 +38,8 @@ public final class BendingScheduleCsv {
             if (!b.feasible()) {
                 continue;
             }
-            for (ScheduleRow row : SpanSchedule.of(schedule.design().bars())) {
+            for (ScheduleRow row : SpanSchedule.of(
+                    schedule.design().bars(), r.input().settings().code())) {
                 out.append(ScheduleCsv.line(List.of(
                                 b.beam().id(),
                                 row.mark(),

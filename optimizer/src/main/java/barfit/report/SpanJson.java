@@ -252,7 +252,7 @@ public final class SpanJson {
             x.put("count", m.count());
             Json.put(x, "length", m.length(), Dim.SPAN, u);
         }
-        o.set("bending_schedule", BendingScheduleJson.rows(barfit.detailing.SpanSchedule.of(d.bars()), u));
+        o.set("bending_schedule", BendingScheduleJson.rows(barfit.detailing.SpanSchedule.of(d.bars(), p.code()), u));
         o.set("cost", DesignJson.cost(d.cost()));
     }
 }

@@ -187,24 +187,42 @@ final class BeamSection {
             out.append("<p class=\"warn\">Warning: ").append(Svg.esc(w)).append(".</p>\n");
         }
 
-        out.append(
-                        "<h4>Bar list</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th><th>role</th><th>count</th>")
+        out.append("<h4>Bar list and bending schedule</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th>"
+                        + "<th>role</th><th>shape</th><th>count</th>")
                 .append("<th>bar</th><th>length (")
                 .append(u.unit(Dim.SPAN))
+                .append(")</th><th>cut length (")
+                .append(u.unit(Dim.SPAN))
+                .append(")</th><th>mass (")
+                .append(u.unit(Dim.MASS))
                 .append(")</th></tr></thead>\n<tbody>\n");
-        for (SpanLayout.BarMark m : d.bars()) {
+        var rows = barfit.detailing.SpanSchedule.of(d.bars(), p.code());
+        double mass = 0;
+        for (int i = 0; i < d.bars().size(); i++) {
+            SpanLayout.BarMark m = d.bars().get(i);
+            var cut = rows.get(i);
+            mass += cut.mass();
             out.append("<tr><td>")
                     .append(Svg.esc(m.mark()))
                     .append("</td><td>")
                     .append(Svg.esc(Words.role(m)))
+                    .append("</td><td>")
+                    .append(Svg.esc(cut.shape().words()))
                     .append("</td><td class=\"num\">")
                     .append(m.count())
                     .append("</td><td>")
                     .append(Svg.esc(m.bar().label()))
                     .append("</td><td class=\"num\">")
                     .append(u.number(m.length(), Dim.SPAN))
+                    .append("</td><td class=\"num\">")
+                    .append(u.number(cut.length(), Dim.SPAN))
+                    .append("</td><td class=\"num\">")
+                    .append(u.number(cut.mass(), Dim.MASS))
                     .append("</td></tr>\n");
         }
+        out.append("<tr><td colspan=\"7\">total</td><td class=\"num\">")
+                .append(u.number(mass, Dim.MASS))
+                .append("</td></tr>\n");
         out.append("</tbody>\n</table>\n");
 
         out.append("<h4>Sections</h4>\n");
