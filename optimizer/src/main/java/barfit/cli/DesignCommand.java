@@ -20,6 +20,7 @@ import barfit.input.LinesReader;
 import barfit.report.DesignItem;
 import barfit.report.DesignJson;
 import barfit.report.DesignText;
+import barfit.report.ElevationSvg;
 import barfit.report.EnvelopePlot;
 import barfit.section.trail.Trail;
 import java.nio.charset.StandardCharsets;
@@ -75,7 +76,8 @@ final class DesignCommand implements Callable<Integer> {
             names = "--plot",
             paramLabel = "DIR",
             description = "write each line's moment envelope with the φMn of its bars as designed "
-                    + "(<id>-capacity.svg) into DIR (created if missing; existing plots are kept unless --force)")
+                    + "(<id>-capacity.svg) and the elevation of its bars as detailed (<id>-elevation.svg) into DIR "
+                    + "(created if missing; existing plots are kept unless --force)")
     Path plot;
 
     @Option(names = "--force", description = "replace plot files that exist")
@@ -112,9 +114,9 @@ final class DesignCommand implements Callable<Integer> {
             }
         }
         var settings = input.settings();
-        List<Path> plots = plot == null
-                ? List.of()
-                : PlotFolder.targets(plot, lines.stream().map(LineInput::id).toList(), "-capacity.svg", force);
+        List<String> lineIds = lines.stream().map(LineInput::id).toList();
+        List<Path> plots = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-capacity.svg", force);
+        List<Path> elevations = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-elevation.svg", force);
         CostModel cost = new CostModel(
                 input.rates(), settings.detailing().cover(), settings.units().code());
         SectionDesigner designer = new SectionDesigner(cost, options);
@@ -140,7 +142,6 @@ final class DesignCommand implements Callable<Integer> {
                             EnvelopePlot.capacitySvg(r.analysis(), capacity, l.id(), settings.units()),
                             StandardCharsets.UTF_8);
                 }
-                k++;
             }
             List<String> undesigned = r.parts().stream()
                     .filter(pt -> !pt.outcome().feasible())
@@ -159,6 +160,14 @@ final class DesignCommand implements Callable<Integer> {
                             l.stockLength() != null ? l.stockLength() : LineDetail.defaultStock(settings),
                             trail ? Trail.recording() : Trail.off())
                     : null;
+            if (plot != null) {
+                if (detail != null) {
+                    Files.createDirectories(plot);
+                    Files.writeString(
+                            elevations.get(k), ElevationSvg.svg(detail, r, settings.units()), StandardCharsets.UTF_8);
+                }
+                k++;
+            }
             for (int i = 0; i < r.parts().size(); i++) {
                 LineSpans.Part part = r.parts().get(i);
                 outcomes.add(DesignItem.of(
