@@ -1,6 +1,7 @@
 package barfit.examples;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import barfit.cli.Cli;
@@ -56,6 +57,12 @@ class LineExamplesTest {
                 Files.readString(Path.of("lines/L1-B-capacity.svg")),
                 Files.readString(designPlots.resolve("L1-B-capacity.svg")),
                 "regenerate with ./barfit design " + FILE + " --plot DIR and copy L1-B-capacity.svg");
+        assertEquals(
+                Files.readString(Path.of("lines/L1-B-elevation.svg")),
+                Files.readString(designPlots.resolve("L1-B-elevation.svg")),
+                "regenerate with ./barfit design " + FILE + " --plot DIR and copy L1-B-elevation.svg");
+        // L1-4 is analysed by the coefficients of 6.5: no stations to detail it on, so no elevation
+        assertFalse(Files.exists(designPlots.resolve("L1-4-elevation.svg")));
         assertTrue(design.out().contains("Line L1-B: one section for the whole line"));
         assertTrue(design.out().contains("Line L1-4: designed span by span from its analysis"));
         Golden.check("lines/ashgrove-depot-lines-si.design.txt", design.out());
