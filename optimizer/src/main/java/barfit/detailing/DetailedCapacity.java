@@ -21,8 +21,9 @@ import java.util.Map;
  * The design strength of the bars as detailed along the line, against the envelope at every station of the
  * analysis: at each station the bars present on the tension face, each delivering only the force it has
  * built up from its ends (BarForce: in proportion over ld from a straight end, over ldh from the outside of
- * a hook), and φMn that of the section with those bars scaled by the force they can deliver over the force
- * at fy (conservative: a smaller steel force has a longer lever arm). Stations inside a support's width are
+ * a hook), and φMn that of the force they can deliver
+ * at fy taken as an area of the part's own bars, the section model's φMn of that area (between whole bar
+ * counts by straight interpolation, which errs low). Stations inside a support's width are
  * not looked at: sections there are designed at the faces (9.4.2.1).
  */
 public final class DetailedCapacity {
@@ -132,12 +133,21 @@ public final class DetailedCapacity {
                 area += b.area();
             }
         }
-        if (full <= 0) {
+        if (full <= 0 || area <= 0) {
             return 0;
         }
-        double developed = BarForce.total(bars, Math.min(Math.max(x, -1e12), 1e12));
-        double phiMn = sectionPhiMn(part, area, hogging, cache);
-        return phiMn * Math.min(1, developed / full);
+        // the bars' developed force as an area at fy, in the part's own bars (their layers), between whole
+        // counts by straight interpolation (φMn is concave in As, so this errs low)
+        double developed = BarForce.total(bars, x);
+        double fy = bars.get(0).fy();
+        SpanLayout l = part.outcome().best().layout();
+        double one = (hogging ? l.top() : l.bottom()).area();
+        double bars0 = developed / fy / one;
+        int n0 = (int) Math.floor(bars0 + 1e-9);
+        double frac = bars0 - n0;
+        double phi0 = n0 == 0 ? 0 : sectionPhiMn(part, n0 * one, hogging, cache);
+        double phi1 = frac <= 1e-9 ? phi0 : sectionPhiMn(part, (n0 + 1) * one, hogging, cache);
+        return phi0 + (phi1 - phi0) * frac;
     }
 
     /**

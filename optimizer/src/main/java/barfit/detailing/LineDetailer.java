@@ -106,7 +106,12 @@ public final class LineDetailer {
             for (LineSpans.Part p : bySegment.values()) {
                 int c = continuousOf(p, n);
                 if (c > 0) {
-                    double[] ends = segmentEnds(line, p.segment(), start, end);
+                    double[] ends = segmentEnds(
+                            line,
+                            p.segment(),
+                            start,
+                            end,
+                            p.outcome().best().layout().top());
                     runs.add(new BarRun(
                             "top continuous, " + p.name(),
                             Face.TOP,
@@ -126,68 +131,80 @@ public final class LineDetailer {
         // the extra top bars over each support, checked against 9.7.3 and run further where it asks
         List<LineSpans.SupportBars> supports = r.supports();
         for (int j = 0; j <= n; j++) {
-            LineSpans.SupportBars sb = supports.get(j);
-            if (sb == null) {
+            LineSpans.SupportBars whole = supports.get(j);
+            if (whole == null) {
                 continue;
             }
-            LineSpans.Side side = sb.either();
-            int total = SpanLayout.sum(side.counts());
-            int extra = total - side.continuous();
-            if (extra <= 0 && !(sb.left() != null && sb.right() != null && !sb.shared())) {
-                continue;
-            }
-            double faceL = line.supportX(j) - sb.width() / 2;
-            double faceR = line.supportX(j) + sb.width() / 2;
-            double intoLeft = sb.intoLeft();
-            double intoRight = sb.intoRight();
-            String why = "";
-            double added = 0;
-            // the spans beside the support: what 9.7.3 asks of the bars' run into each
-            if (j >= 1 && sb.left() != null) {
-                Reach need = reach(a, bySegment.get(j), sb.left(), j, false, faceL, line);
-                checks.addAll(need.checks());
-                cutOffs.add(new CutOff(
-                        j + 1, false, need.theoretical(), need.inflection(), need.ld(), need.length(), intoLeft));
-                if (need.length() > intoLeft + 1) {
-                    added += need.length() - intoLeft;
-                    why = need.why();
-                    intoLeft = need.length();
+            // a support whose two sides chose their own bars (span by span): each side's group on its own,
+            // developed ld past its own face across the support
+            List<LineSpans.SupportBars> groups = whole.left() != null && whole.right() != null && !whole.shared()
+                    ? List.of(
+                            new LineSpans.SupportBars(whole.index(), whole.width(), whole.left(), null),
+                            new LineSpans.SupportBars(whole.index(), whole.width(), null, whole.right()))
+                    : List.of(whole);
+            for (LineSpans.SupportBars sb : groups) {
+                LineSpans.Side side = sb.either();
+                int total = SpanLayout.sum(side.counts());
+                int extra = total - side.continuous();
+                if (extra <= 0) {
+                    continue;
                 }
-            }
-            if (j <= n - 1 && sb.right() != null) {
-                Reach need = reach(a, bySegment.get(j + 1), sb.right(), j, true, faceR, line);
-                checks.addAll(need.checks());
-                cutOffs.add(new CutOff(
-                        j + 1, true, need.theoretical(), need.inflection(), need.ld(), need.length(), intoRight));
-                if (need.length() > intoRight + 1) {
-                    added += need.length() - intoRight;
-                    why = why.isEmpty() ? need.why() : why + "; " + need.why();
-                    intoRight = need.length();
+                double faceL = line.supportX(j) - sb.width() / 2;
+                double faceR = line.supportX(j) + sb.width() / 2;
+                double intoLeft = sb.intoLeft();
+                double intoRight = sb.intoRight();
+                if (groups.size() == 2) {
+                    double ld = Development.ofLayer(
+                                    side.section().section(),
+                                    side.section().section().layersOn(Face.TOP).get(0),
+                                    Trail.off())
+                            .ld();
+                    if (sb.right() == null) {
+                        intoRight = Math.max(intoRight, ld - sb.width());
+                    } else {
+                        intoLeft = Math.max(intoLeft, ld - sb.width());
+                    }
                 }
-            }
-            double s = Math.max(start, faceL - intoLeft);
-            double e = Math.min(end, faceR + intoRight);
-            boolean hs = hookLeft && j == 0;
-            boolean he = hookRight && j == n;
-            if (hs) {
-                s = start;
-            }
-            if (he) {
-                e = end;
-            }
-            if (extra > 0) {
-                runs.add(new BarRun(
-                        "top extra, support " + (j + 1),
-                        Face.TOP,
-                        side.bar(),
-                        extra,
-                        s,
-                        e,
-                        hs,
-                        he,
-                        List.of(),
-                        added,
-                        why));
+                String why = "";
+                double added = 0;
+                // the spans beside the support: what 9.7.3 asks of the bars' run into each
+                if (j >= 1 && sb.left() != null) {
+                    Reach need = reach(a, bySegment.get(j), sb.left(), j, false, faceL, line);
+                    checks.addAll(need.checks());
+                    cutOffs.add(new CutOff(
+                            j + 1, false, need.theoretical(), need.inflection(), need.ld(), need.length(), intoLeft));
+                    if (need.length() > intoLeft + 1) {
+                        added += need.length() - intoLeft;
+                        why = need.why();
+                        intoLeft = need.length();
+                    }
+                }
+                if (j <= n - 1 && sb.right() != null) {
+                    Reach need = reach(a, bySegment.get(j + 1), sb.right(), j, true, faceR, line);
+                    checks.addAll(need.checks());
+                    cutOffs.add(new CutOff(
+                            j + 1, true, need.theoretical(), need.inflection(), need.ld(), need.length(), intoRight));
+                    if (need.length() > intoRight + 1) {
+                        added += need.length() - intoRight;
+                        why = why.isEmpty() ? need.why() : why + "; " + need.why();
+                        intoRight = need.length();
+                    }
+                }
+                double s = Math.max(start, faceL - intoLeft);
+                double e = Math.min(end, faceR + intoRight);
+                boolean hs = hookLeft && j == 0;
+                boolean he = hookRight && j == n;
+                if (hs) {
+                    s = start;
+                }
+                if (he) {
+                    e = end;
+                }
+                String what = "top extra, support " + (j + 1)
+                        + (groups.size() == 2
+                                ? ", from " + side.part().substring(side.part().indexOf('/') + 1)
+                                : "");
+                runs.add(new BarRun(what, Face.TOP, side.bar(), extra, s, e, hs, he, List.of(), added, why));
             }
         }
 
@@ -295,10 +312,24 @@ public final class LineDetailer {
     }
 
     /** A segment's bars from the centre line of one support to the next, clipped to the bars' ends. */
-    private static double[] segmentEnds(Line line, int seg, double start, double end) {
+    /**
+     * A part's own continuous top bars (parts with different ones): over its length and half a class B lap
+     * (25.5.2) past the centre line of each support it shares with a neighbour, so the neighbours' bars lap
+     * there; to the end cover where the line ends.
+     */
+    private double[] segmentEnds(Line line, int seg, double start, double end, BarSize bar) {
         int n = line.spanCount();
-        double a = seg == 0 ? start : line.supportX(seg - 1);
-        double b = seg == n + 1 ? end : line.supportX(Math.min(seg, n));
+        double cb =
+                settings.detailing().cover() + settings.detailing().stirrupBar().diameter() + bar.diameter() / 2;
+        double ld = Development.general(bar, settings.materials(), settings.code(), true, cb, 0, 0, 0, Trail.off())
+                .ldEquation();
+        double half = barfit.section.anchorage.LapSplices.classB(bar, ld, settings.code(), Trail.off())
+                        .length()
+                / 2;
+        boolean firstPart = seg == 0 || seg == 1 && line.overhangLeft() <= 0;
+        boolean lastPart = seg == n + 1 || seg == n && line.overhangRight() <= 0;
+        double a = firstPart ? start : line.supportX(seg - 1) - half;
+        double b = lastPart ? end : line.supportX(Math.min(seg, n)) + half;
         return new double[] {Math.max(start, a), Math.min(end, b)};
     }
 

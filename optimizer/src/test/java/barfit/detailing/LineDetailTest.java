@@ -254,4 +254,31 @@ class LineDetailTest {
         }
         assertTrue(!det.ok(), "a detail that fails is never reported as passing");
     }
+
+    @Test
+    void perSpanFormsWithAnOverhangAreCovered() throws IOException {
+        // invented line, each span its own section: the two sides of a support choose their own top bars,
+        // each group developed past its own face across the support; the parts' continuous bars lap over
+        // the supports; an overhang, a wall and a knife edge
+        Designed d = design(HEAD + """
+                lines:
+                  - id: PS
+                    spans: [6.0, 9.0, 5.0]
+                    overhangs: {left: 1.5}
+                    supports:
+                      - {width: 400, below: {b: 400, h: 400, height: 4.0}}
+                      - {width: 400, below: {b: 400, h: 400, height: 4.0}}
+                      - {width: 300, kind: knife-edge}
+                      - {width: 300, kind: wall}
+                    loads: {dead: 20, live: 12}
+                    section: {width: 300, height: 600}
+                    forms: per-span
+                """);
+        LineDetail det = LineDetail.of(d.result(), d.in().settings(), d.cost(), 12_000, Trail.off());
+        assertTrue(
+                det.coverage().covered(),
+                "worst Mu/φMn " + det.coverage().worstRatio() + " at x = "
+                        + det.coverage().worstX());
+        assertTrue(det.checks().stream().allMatch(c -> c.pass()), "every detailing check");
+    }
 }
