@@ -90,7 +90,48 @@ public final class TorsionChecks {
                                     + "torsion (22.7.3.3)"
                             : "Tu ≤ φTcr: designed for Tu as given"));
         }
-        out.add(CheckResult.atMost(
+        out.add(sectionSize(s, r, shear == null));
+        transverse(s, r, sh, out);
+        longitudinal(s, demand, span, d, r, out, t);
+        return out;
+    }
+
+    /**
+     * The torsion checks that the stirrups decide, for the searches: the section size (22.7.7.1(a), through
+     * Vc), the closed stirrups (22.7.6.1, 9.6.4.2, 9.7.6.3.3, 9.7.6.3.1) and the size their spacing asks of
+     * the corner and skin bars (9.7.5.2), each as {@link #run} reports it. Every one only gets easier as the
+     * stirrups close up or gain legs. Empty when the torsion is neglected. {@code d} and {@code tensionArea}
+     * are the section's as its flexure finds them; a demand without Vu takes Vu as 0.
+     */
+    public static List<CheckResult> stirrupChecks(BeamSection s, Demand demand, double d, double tensionArea) {
+        if (!demand.hasTorsion()) {
+            throw new IllegalArgumentException("no torsion in the demand");
+        }
+        double vu = demand.vu() == null ? 0 : Math.abs(demand.vu());
+        ShearResult sh = Shear.analyse(s, vu, d, tensionArea, Trail.off());
+        TorsionResult r = Torsion.analyse(s, demand.tu(), demand.compatibilityTorsion(), sh, Trail.off());
+        List<CheckResult> out = new ArrayList<>();
+        if (r.neglected()) {
+            return out;
+        }
+        out.add(sectionSize(s, r, demand.vu() == null));
+        transverse(s, r, sh, out);
+        out.add(barSize(s));
+        return out;
+    }
+
+    /** Whether every check of {@link #stirrupChecks} passes. */
+    public static boolean stirrupsPass(BeamSection s, Demand demand, double d, double tensionArea) {
+        for (CheckResult c : stirrupChecks(s, demand, d, tensionArea)) {
+            if (!c.pass()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static CheckResult sectionSize(BeamSection s, TorsionResult r, boolean noVu) {
+        return CheckResult.atMost(
                 "torsion_section",
                 "Section size for shear and torsion",
                 "22.7.7.1(a)",
@@ -98,10 +139,7 @@ public final class TorsionChecks {
                 Q.stress(r.sectionLimit()),
                 "√((Vu/(bw d))² + (Tu ph/(1.7 Aoh²))²) ≤ φ (Vc/(bw d) + "
                         + Torsion.of(s.code()).sectionLimit().shown() + " √f'c)"
-                        + (shear == null ? "; no Vu given, taken as 0" : "")));
-        transverse(s, r, sh, out);
-        longitudinal(s, demand, span, d, r, out, t);
-        return out;
+                        + (noVu ? "; no Vu given, taken as 0" : ""));
     }
 
     private static CheckResult neglected(String id, String title, String clause, Q tu, Q phiTth, String why) {
@@ -219,9 +257,8 @@ public final class TorsionChecks {
                 Q.length(largest),
                 Q.length(k.barSpacingMax()),
                 "across the outer layers and up the side faces (corner and skin bars)"));
-        double smallest = smallestTorsionBar(s);
         double spacing = s.stirrups() != null ? s.stirrups().spacing() : 0;
-        double least = Math.max(0.042 * spacing, k.minBarDiameter());
+        double least = leastBarDiameter(s);
         if (t.isOn()) {
             t.heading("Longitudinal bars for torsion", "9.7.5.1, 9.7.5.2");
             t.value("s,max bars", Q.length(largest), "largest centre spacing round the hoop");
@@ -233,13 +270,23 @@ public final class TorsionChecks {
                     Q.length(spacing),
                     Q.length(k.minBarDiameter()));
         }
-        out.add(CheckResult.atLeast(
+        out.add(barSize(s));
+    }
+
+    /** 9.7.5.2: db ≥ max(0.042 s, No. 10 or 3/8 in), s the stirrup spacing. */
+    private static double leastBarDiameter(BeamSection s) {
+        double spacing = s.stirrups() != null ? s.stirrups().spacing() : 0;
+        return Math.max(0.042 * spacing, Torsion.of(s.code()).minBarDiameter());
+    }
+
+    private static CheckResult barSize(BeamSection s) {
+        return CheckResult.atLeast(
                 "torsion_bar_size",
                 "Longitudinal bar size for torsion",
                 "9.7.5.2",
-                Q.length(smallest),
-                Q.length(least),
-                "the smallest corner or skin bar"));
+                Q.length(smallestTorsionBar(s)),
+                Q.length(leastBarDiameter(s)),
+                "the smallest corner or skin bar");
     }
 
     private static String counted(LongitudinalSteel ls, boolean skin, boolean minimumGoverns) {
