@@ -1,23 +1,39 @@
 package barfit.design;
 
+import barfit.section.BarLayer;
 import barfit.section.BeamSection;
 import barfit.section.CheckResult;
 import barfit.section.CodeEquations;
+import barfit.section.Demand;
 import barfit.section.Detailing;
 import barfit.section.Materials;
 import barfit.section.SectionChecks;
 import barfit.section.SectionShape;
 import barfit.section.ShearVerdict;
+import barfit.section.SkinBars;
 import barfit.section.Stirrups;
+import barfit.section.TorsionChecks;
 import java.util.List;
 
 /**
  * The cheapest stirrup option that passes the shear checks (or, without Vu, the minimum-stirrup rule)
  * for tension steel As at effective depth d. Per number of legs, strength and minimum area only get
  * easier as the spacing closes, so the widest spacing meeting them is found by bisection; the spacing
- * limits of 9.7.6.2.2 (which halve when Vs is high) are then settled by stepping down.
+ * limits of 9.7.6.2.2 (which halve when Vs is high) are then settled by stepping down. Under torsion the
+ * stirrups must pass the section model's torsion checks on them too ({@link TorsionChecks#stirrupChecks}),
+ * each of which also only gets easier as the spacing closes.
  */
 public final class StirrupChooser {
+    /**
+     * What torsion asks of the stirrups of one layout: the demand with its Tu, and the bars whose smallest
+     * corner or skin bar 9.7.5.2 weighs against the spacing.
+     */
+    public record Torsion(Demand demand, List<BarLayer> layers, SkinBars skin) {
+        public Torsion {
+            layers = List.copyOf(layers);
+        }
+    }
+
     private final Materials materials;
     private final CodeEquations code;
     private final SearchSpace space;
@@ -80,6 +96,21 @@ public final class StirrupChooser {
             int maxLegs,
             double maxSpacing,
             double zoneLength) {
+        return cheapest(shape, det, d, as, vu, minLegs, maxLegs, maxSpacing, zoneLength, null);
+    }
+
+    /** As above, the stirrups passing the torsion checks of {@code torsion} too (null: no torsion). */
+    public Stirrups cheapest(
+            SectionShape shape,
+            Detailing det,
+            double d,
+            double as,
+            Double vu,
+            int minLegs,
+            int maxLegs,
+            double maxSpacing,
+            double zoneLength,
+            Torsion torsion) {
         List<Double> spacings = space.stirrupSpacings();
         if (maxSpacing < spacings.get(spacings.size() - 1)) {
             spacings = spacings.stream()
@@ -103,8 +134,8 @@ public final class StirrupChooser {
             int hi = spacings.size() - 1;
             while (lo < hi) {
                 int mid = (lo + hi + 1) >>> 1;
-                if (verdict(shape, det, new Stirrups(det.stirrupBar(), legs, spacings.get(mid)), d, as, vu)
-                        .strengthAndMinimum()) {
+                if (verdict(shape, det, new Stirrups(det.stirrupBar(), legs, spacings.get(mid)), d, as, vu, torsion)
+                        .easing()) {
                     lo = mid;
                 } else {
                     hi = mid - 1;
@@ -116,7 +147,7 @@ public final class StirrupChooser {
                 if (c >= bestCost) {
                     break;
                 }
-                if (verdict(shape, det, st, d, as, vu).all()) {
+                if (verdict(shape, det, st, d, as, vu, torsion).all()) {
                     best = st;
                     bestCost = c;
                     break;
@@ -134,9 +165,18 @@ public final class StirrupChooser {
                 : cost.stirrups(shape.width(), shape.height(), st);
     }
 
-    private ShearVerdict verdict(SectionShape shape, Detailing det, Stirrups st, double d, double as, Double vu) {
-        BeamSection s = new BeamSection(shape, materials, det, List.of(), st, null, code);
+    /** {@code easing}: the checks that only get easier as the spacing closes; {@code all}: every check. */
+    private record Verdict(boolean easing, boolean all) {}
+
+    private Verdict verdict(
+            SectionShape shape, Detailing det, Stirrups st, double d, double as, Double vu, Torsion torsion) {
+        BeamSection s = torsion == null
+                ? new BeamSection(shape, materials, det, List.of(), st, null, code)
+                : new BeamSection(shape, materials, det, torsion.layers(), st, torsion.skin(), code);
         evaluations++;
-        return vu == null ? SectionChecks.minimumStirrupsVerdict(s, d, as) : SectionChecks.shearVerdict(s, vu, d, as);
+        ShearVerdict shear =
+                vu == null ? SectionChecks.minimumStirrupsVerdict(s, d, as) : SectionChecks.shearVerdict(s, vu, d, as);
+        boolean torsionOk = torsion == null || TorsionChecks.stirrupsPass(s, torsion.demand(), d, as);
+        return new Verdict(shear.strengthAndMinimum() && torsionOk, shear.all() && torsionOk);
     }
 }

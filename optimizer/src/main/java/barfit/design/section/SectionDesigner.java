@@ -10,7 +10,6 @@ import barfit.section.BarSpacing;
 import barfit.section.BeamSection;
 import barfit.section.CheckReport;
 import barfit.section.CheckResult;
-import barfit.section.Demand;
 import barfit.section.SectionChecks;
 import barfit.section.Stirrups;
 import barfit.section.trail.Trail;
@@ -108,8 +107,7 @@ public final class SectionDesigner {
     /** The section model's checks of a layout, with the office's legs rule when the search has one. */
     static CheckReport check(SectionProblem p, SectionLayout l, Trail trail) {
         BeamSection s = l.section(p.materials(), p.detailing(), p.code());
-        return SectionChecks.run(
-                s, new Demand(p.mu(), p.vu()), p.span(), trail, true, p.space().practice());
+        return SectionChecks.run(s, p.demand(), p.span(), trail, true, p.space().practice());
     }
 
     private static List<String> failingIds(SectionProblem p, SectionLayout l) {

@@ -12,6 +12,7 @@ import barfit.section.SectionChecks;
 import barfit.section.SkinBars;
 import barfit.section.StirrupRules;
 import barfit.section.Stirrups;
+import barfit.section.TorsionChecks;
 import barfit.section.trail.Trail;
 import java.util.ArrayList;
 import java.util.List;
@@ -23,7 +24,11 @@ import java.util.List;
  *
  * <p>Counts run over what the space allows (2 up to the bars that fit a layer by 25.2.1). The only
  * shortcut: stirrups are chosen per (frame, tension bars) as the cheapest option passing the shear
- * checks, which depend on nothing else; every combined layout is then checked whole.
+ * checks, which depend on nothing else; every combined layout is then checked whole. Under torsion every
+ * skin option of the frame ({@link SectionLayout#skinOptions}) is tried with every layout, and the stirrups are
+ * the cheapest passing the shear checks and the section model's torsion checks on stirrups
+ * ({@link TorsionChecks#stirrupChecks}) for those bars, compression bar size and skin; the whole layout is
+ * then checked under the demand with Tu.
  */
 public final class SectionExhaustive {
     /** The cheapest layout, its cost units, and the cheapest cost of every distinct (size, bar size) key. */
@@ -45,14 +50,17 @@ public final class SectionExhaustive {
         long bestUnits = Long.MAX_VALUE;
         long checked = 0;
         java.util.Map<String, Long> perKey = new java.util.HashMap<>();
-        Demand demand = new Demand(p.mu(), p.vu());
+        Demand demand = p.demand();
+        boolean torsion = p.hasTorsion();
         for (FrameEnumerator.Cell cell :
                 FrameEnumerator.cells(p.widths(), p.depths(), p.flange(), p.space(), p.detailing())) {
             double b = cell.width();
             double h = cell.height();
             BarSize ds = cell.stirrupBar();
             Detailing det = cell.detailing();
-            SkinBars skin = SectionLayout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
+            List<SkinBars> skins =
+                    SectionLayout.skinOptions(h, p.space().skinBar(), det, p.materials(), p.code(), torsion);
+            SkinBars skin = skins.get(0);
             for (BarSize t : p.space().barSizes()) {
                 int nmax = BarSpacing.maxBars(b, det, t, p.materials(), p.code());
                 for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
@@ -91,6 +99,38 @@ public final class SectionExhaustive {
                                 int most = Math.min(counts.get(0), m);
                                 double maxSpacing = ties.maxSpacing();
                                 final BarSize compressionBar = c;
+                                if (torsion) {
+                                    for (SkinBars sk : skins) {
+                                        Stirrups st = byLegs.computeIfAbsent(
+                                                        need + "/" + most + "/" + maxSpacing + "/"
+                                                                + compressionBar.designation() + "/" + sk,
+                                                        k -> java.util.Optional.ofNullable(cheapestUnderTorsion(
+                                                                p,
+                                                                b,
+                                                                h,
+                                                                det,
+                                                                t,
+                                                                counts,
+                                                                compressionBar,
+                                                                sk,
+                                                                need,
+                                                                most,
+                                                                maxSpacing)))
+                                                .orElse(null);
+                                        if (st == null) {
+                                            continue;
+                                        }
+                                        SectionLayout lay = new SectionLayout(
+                                                b, h, p.flange(), p.bending(), t, counts, c, m, st, sk);
+                                        checked++;
+                                        long units = keepIfPasses(p, demand, lay, perKey);
+                                        if (units >= 0 && units < bestUnits) {
+                                            bestUnits = units;
+                                            best = lay;
+                                        }
+                                    }
+                                    continue;
+                                }
                                 Stirrups st = byLegs.computeIfAbsent(
                                                 need + "/" + most + "/" + maxSpacing,
                                                 k -> java.util.Optional.ofNullable(cheapestStirrups(
@@ -110,16 +150,11 @@ public final class SectionExhaustive {
                                 }
                                 SectionLayout lay =
                                         new SectionLayout(b, h, p.flange(), p.bending(), t, counts, c, m, st, skin);
-                                BeamSection s = lay.section(p.materials(), p.detailing(), p.code());
                                 checked++;
-                                CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
-                                if (r.ok()) {
-                                    long units = CostModel.units(lay.cost(cost).total());
-                                    perKey.merge(lay.distinctKey(), units, Math::min);
-                                    if (units < bestUnits) {
-                                        bestUnits = units;
-                                        best = lay;
-                                    }
+                                long units = keepIfPasses(p, demand, lay, perKey);
+                                if (units >= 0 && units < bestUnits) {
+                                    bestUnits = units;
+                                    best = lay;
                                 }
                             }
                         }
@@ -128,6 +163,62 @@ public final class SectionExhaustive {
             }
         }
         return new Result(best, best == null ? -1 : bestUnits, checked, perKey);
+    }
+
+    /** The layout's cost units if the section model passes it whole (and its key's cheapest noted), else -1. */
+    private long keepIfPasses(SectionProblem p, Demand demand, SectionLayout lay, java.util.Map<String, Long> perKey) {
+        BeamSection s = lay.section(p.materials(), p.detailing(), p.code());
+        CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
+        if (!r.ok()) {
+            return -1;
+        }
+        long units = CostModel.units(lay.cost(cost).total());
+        perKey.merge(lay.distinctKey(), units, Math::min);
+        return units;
+    }
+
+    /**
+     * The cheapest stirrup option passing the shear checks and the torsion checks on stirrups for these
+     * tension bars, a compression layer of {@code c} and the skin bars {@code skin} (every legs and spacing).
+     */
+    private Stirrups cheapestUnderTorsion(
+            SectionProblem p,
+            double b,
+            double h,
+            Detailing det,
+            BarSize t,
+            List<Integer> counts,
+            BarSize c,
+            SkinBars skin,
+            int minLegs,
+            int maxLegs,
+            double maxSpacing) {
+        Stirrups best = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        for (int legs : p.space().stirrupLegs()) {
+            if (legs < minLegs || legs > maxLegs) {
+                continue;
+            }
+            for (double s : p.space().stirrupSpacings()) {
+                if (s > maxSpacing * (1 + 1e-9)) {
+                    continue;
+                }
+                Stirrups st = new Stirrups(det.stirrupBar(), legs, s);
+                SectionLayout lay = new SectionLayout(b, h, p.flange(), p.bending(), t, counts, c, 2, st, skin);
+                BeamSection sec = lay.section(p.materials(), p.detailing(), p.code());
+                var fr = barfit.section.Flexure.analyse(sec, p.bending());
+                boolean ok = (p.vu() == null
+                                ? SectionChecks.minimumStirrupsPass(sec, fr.d(), fr.tensionSteelArea())
+                                : SectionChecks.shearPasses(sec, p.vu(), fr.d(), fr.tensionSteelArea()))
+                        && TorsionChecks.stirrupsPass(sec, p.demand(), fr.d(), fr.tensionSteelArea());
+                double sc = cost.stirrups(b, h, st);
+                if (ok && sc < bestCost - 1e-12) {
+                    bestCost = sc;
+                    best = st;
+                }
+            }
+        }
+        return best;
     }
 
     /** All count vectors n1 >= n2 >= ... >= 2 with n1 <= nmax. */

@@ -19,6 +19,7 @@ import barfit.section.SkinBars;
 import barfit.section.StirrupRules;
 import barfit.section.Stirrups;
 import barfit.section.StrengthBound;
+import barfit.section.trail.Trail;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
@@ -41,6 +42,12 @@ import java.util.Map;
  * strongest, and the others are tried when it is not ductile enough;</li>
  * <li>any passing section needs sum(As) >= Mu / (0.9 fy d_max): a lower bound on its steel.</li>
  * </ul>
+ *
+ * <p>Under torsion the longitudinal steel for torsion can come from more tension bars, a heavier
+ * compression layer or side bars, so every split of every count and every compression layer within the
+ * cost bound is tried, with every skin option of the frame ({@link SectionLayout#skinOptions}); the stirrups
+ * must pass the torsion checks on them as well, and a layout is kept only when the full section model
+ * passes it under the torsion demand.
  */
 public final class SectionGenerator {
     /** What the generation did, for the proof statement and the benchmark. */
@@ -65,6 +72,7 @@ public final class SectionGenerator {
     private final List<BarSize> tensionSizes;
     private final List<BarSize> compressionSizes;
     private final BarSize smallestTension;
+    private final boolean torsion;
 
     /** Best candidate per distinct key, in discovery order. */
     private final Map<String, Candidate> best = new LinkedHashMap<>();
@@ -89,6 +97,7 @@ public final class SectionGenerator {
         this.smallestTension = tensionSizes.stream()
                 .min(Comparator.comparingDouble(BarSize::diameter))
                 .orElseThrow();
+        this.torsion = problem.hasTorsion();
     }
 
     /** A concrete frame: width, height and the stirrup bar that positions the main bars. */
@@ -100,6 +109,7 @@ public final class SectionGenerator {
             CostBreakdown frameCost,
             SkinBars skin,
             double skinCost,
+            List<SkinBars> skins,
             double lowerBound,
             double tensionAreaLb,
             double cheapestStirrups,
@@ -198,9 +208,11 @@ public final class SectionGenerator {
             BarSize ds = cell.stirrupBar();
             Detailing det = cell.detailing();
             CostBreakdown frameCost = cost.frame(b, h, p.flange());
-            SkinBars skin = SectionLayout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-            double skinCost =
-                    skin == null ? 0 : cost.bars(skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()));
+            List<SkinBars> skins = new ArrayList<>(
+                    SectionLayout.skinOptions(h, p.space().skinBar(), det, p.materials(), p.code(), torsion));
+            skins.sort(Comparator.comparingDouble(x -> skinCost(h, x)));
+            SkinBars skin = skins.get(0); // the design rule's, the cheapest
+            double skinCost = skinCost(h, skin);
             double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
             double steelLb = cost.mainBarPricePerKg()
                     * massPerArea
@@ -213,13 +225,19 @@ public final class SectionGenerator {
             }
             double lb = frameCost.total() + skinCost + steelLb + cheapestStirrups;
             out.add(new Frame(
-                    b, h, ds, det, frameCost, skin, skinCost, lb, areaLb, cheapestStirrups, new double[] {Double.NaN}));
+                    b, h, ds, det, frameCost, skin, skinCost, skins, lb, areaLb, cheapestStirrups, new double[] {
+                        Double.NaN
+                    }));
         }
         out.sort(Comparator.comparingDouble(Frame::lowerBound)
                 .thenComparingDouble(Frame::b)
                 .thenComparingDouble(Frame::h)
                 .thenComparingDouble(f -> f.stirrupBar().diameter()));
         return out;
+    }
+
+    private double skinCost(double h, SkinBars skin) {
+        return skin == null ? 0 : cost.bars(skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()));
     }
 
     /**
@@ -359,7 +377,8 @@ public final class SectionGenerator {
                             && p.space().legsFor(counts[0]) == p.space().legsFor((nMin + layersUsed - 1) / layersUsed);
                     // ties round compression steel that is relied on ask more of the stirrups as the layer
                     // grows, so a later compression layer may then need fewer legs: keep trying
-                    if (!ductilityStopped && nMin <= nFloor && legsFree && !tiesRelied) {
+                    // under torsion a heavier compression layer may count for Al or allow wider stirrups: go on
+                    if (!ductilityStopped && nMin <= nFloor && legsFree && !tiesRelied && !torsion) {
                         break;
                     }
                 }
@@ -405,11 +424,22 @@ public final class SectionGenerator {
             if (fixed + cost.bars(t, n) + stirLb >= cut0) {
                 return false;
             }
-            search.place(t, split);
-            offer(f, shape, key, t, split, c, m, cache);
+            if (torsion) {
+                // which split serves torsion best is not known in advance (d moves As,min and the need for
+                // flexure both ways): every split of these bars that passes flexure is tried
+                for (int[] alt : TensionSearch.splits(n, layers, nmax, first)) {
+                    search.place(t, alt);
+                    if (search.passesAll()) {
+                        offer(f, shape, key, t, alt, c, m, cache);
+                    }
+                }
+            } else {
+                search.place(t, split);
+                offer(f, shape, key, t, split, c, m, cache);
+            }
             // the legs rule: a more even split of the same bars may need fewer stirrup legs
             int legs = p.space().legsFor(Math.max(split[0], m));
-            if (legs > p.space().legsFor(Math.max((n + layers - 1) / layers, m))) {
+            if (!torsion && legs > p.space().legsFor(Math.max((n + layers - 1) / layers, m))) {
                 for (int[] alt : search.passingSplits(t, n, layers, nmax, first)) {
                     if (p.space().legsFor(Math.max(alt[0], m)) < legs) {
                         search.place(t, alt);
@@ -495,7 +525,11 @@ public final class SectionGenerator {
             }
         }
         int minLegs = Math.max(p.space().legsFor(Math.max(split[0], m)), ties.minLegs());
-        Stirrups st = stirrups(f, t, split, minLegs, Math.min(split[0], m), ties.maxSpacing(), cache);
+        if (torsion) {
+            offerUnderTorsion(f, key, bars, minLegs, Math.min(split[0], m), ties.maxSpacing(), cache);
+            return;
+        }
+        Stirrups st = stirrups(f, t, split, minLegs, Math.min(split[0], m), ties.maxSpacing(), null, cache);
         if (st == null) {
             return;
         }
@@ -506,6 +540,75 @@ public final class SectionGenerator {
         if (kb == null || cand.units() < kb.units()) {
             best.put(key, cand);
             boundDirty = true;
+        }
+    }
+
+    /**
+     * Under torsion: the bars just placed in the probe with each skin option of the frame (cheapest first,
+     * while it can still beat the best for its key), their cheapest stirrups passing shear and the torsion
+     * checks on them, and the layout kept only if the section model passes it whole under the torsion demand.
+     */
+    private void offerUnderTorsion(
+            Frame f,
+            String key,
+            SectionLayout bars,
+            int minLegs,
+            int maxLegs,
+            double maxSpacing,
+            Map<String, Stirrups> cache) {
+        int[] split = bars.tensionCounts().stream().mapToInt(Integer::intValue).toArray();
+        double barCost = f.frameCost().total()
+                + cost.bars(bars.tensionBar(), bars.tensionBarCount())
+                + cost.bars(bars.compressionBar(), bars.compressionCount());
+        for (SkinBars skin : f.skins()) {
+            if (barCost + skinCost(f.h(), skin) + f.stirrupLb(this) >= cut(key)) {
+                break; // the skin options come cheapest first
+            }
+            SectionLayout withSkin = new SectionLayout(
+                    f.b(),
+                    f.h(),
+                    p.flange(),
+                    bending,
+                    bars.tensionBar(),
+                    bars.tensionCounts(),
+                    bars.compressionBar(),
+                    bars.compressionCount(),
+                    bars.stirrups(),
+                    skin);
+            BeamSection s = withSkin.section(p.materials(), p.detailing(), p.code());
+            StirrupChooser.Torsion need = new StirrupChooser.Torsion(p.demand(), s.layers(), skin);
+            Stirrups st = stirrups(f, bars.tensionBar(), split, minLegs, maxLegs, maxSpacing, need, cache);
+            if (st == null) {
+                continue;
+            }
+            SectionLayout lay = new SectionLayout(
+                    f.b(),
+                    f.h(),
+                    p.flange(),
+                    bending,
+                    bars.tensionBar(),
+                    bars.tensionCounts(),
+                    bars.compressionBar(),
+                    bars.compressionCount(),
+                    st,
+                    skin);
+            Candidate cand = new Candidate(lay, lay.cost(cost));
+            Candidate kb = best.get(key);
+            if (kb != null && cand.units() >= kb.units()) {
+                continue;
+            }
+            BeamSection whole = lay.section(p.materials(), p.detailing(), p.code());
+            if (SectionChecks.run(
+                            whole,
+                            p.demand(),
+                            p.span(),
+                            Trail.off(),
+                            true,
+                            p.space().practice())
+                    .ok()) {
+                best.put(key, cand);
+                boundDirty = true;
+            }
         }
     }
 
@@ -521,8 +624,10 @@ public final class SectionGenerator {
             int minLegs,
             int maxLegs,
             double maxSpacing,
+            StirrupChooser.Torsion need,
             Map<String, Stirrups> cache) {
-        String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs + "/" + maxSpacing;
+        String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs + "/" + maxSpacing
+                + (need == null ? "" : "/" + need.layers() + "/" + need.skin());
         if (cache.containsKey(key)) {
             return cache.get(key);
         }
@@ -535,7 +640,8 @@ public final class SectionGenerator {
                 minLegs,
                 maxLegs,
                 maxSpacing,
-                0);
+                0,
+                need);
         cache.put(key, chosen);
         return chosen;
     }

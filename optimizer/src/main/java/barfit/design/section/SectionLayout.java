@@ -97,6 +97,44 @@ public record SectionLayout(
         return new SkinBars(smallest, Math.floor(limit / 5.0) * 5.0);
     }
 
+    /** Most side bars a face that a search under torsion tries (a bound on the space, not a code rule). */
+    public static final int MOST_SIDE_BARS = 4;
+
+    /**
+     * The skin bars a search may give a section {@code h} deep: those the design rule gives ({@link #skinFor},
+     * null where h needs none), and under torsion ({@code torsion}) also side bars of the same size, 1 to
+     * {@link #MOST_SIDE_BARS} a face, each count at the widest 5 mm spacing that gives it (so they spread up
+     * the face as far as they can: the longitudinal steel and its spacing round the hoop of 9.7.5.1) and keeps
+     * the clear spacing of 25.2.1 between them, at most the 24.3.2 spacing where skin bars are required. Null
+     * (none) comes first where allowed; no two options are the same.
+     */
+    public static List<SkinBars> skinOptions(
+            double h, BarSize bar, Detailing det, Materials m, CodeEquations code, boolean torsion) {
+        List<SkinBars> out = new ArrayList<>();
+        SkinBars rule = skinFor(h, bar, det, m, code);
+        out.add(rule);
+        if (!torsion) {
+            return out;
+        }
+        double most = rule == null ? Double.POSITIVE_INFINITY : rule.spacing();
+        double leastClear = BarSpacing.minClear(bar, m, code);
+        for (int n = 1; n <= MOST_SIDE_BARS; n++) {
+            double s = Math.floor((h / (2.0 * n) - 1e-6) / 5.0) * 5.0;
+            s = Math.min(s, most);
+            while (s > 0 && skinBarsPerFace(h, s) < n) {
+                s -= 5.0;
+            }
+            if (s <= 0 || skinBarsPerFace(h, s) != n || s - bar.diameter() < leastClear) {
+                continue;
+            }
+            SkinBars option = new SkinBars(bar, s);
+            if (!out.contains(option)) {
+                out.add(option);
+            }
+        }
+        return out;
+    }
+
     /** Per-metre cost of this layout. */
     public CostBreakdown cost(CostModel model) {
         CostBreakdown frame = model.frame(width, height, flange);

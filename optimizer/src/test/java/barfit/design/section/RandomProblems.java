@@ -88,6 +88,16 @@ public final class RandomProblems {
                 p.costLength());
     }
 
+    /**
+     * A small problem (as {@link #small}) that also carries a factored torsion from 1 to 60 kN·m, a quarter of
+     * them compatibility torsion; its draws follow the small problem's.
+     */
+    public static SectionProblem torsion(Random r) {
+        SectionProblem p = small(r);
+        double tu = (1 + 59 * r.nextDouble()) * 1e6;
+        return p.withTorsion(tu, r.nextInt(4) == 0);
+    }
+
     public static SectionProblem small(Random r) {
         double fc = new double[] {21, 25, 28, 35, 42}[r.nextInt(5)];
         double fy = new double[] {420, 420, 500}[r.nextInt(3)];
