@@ -52,19 +52,12 @@ class SectionTorsionOracleTest {
                     ref.units(),
                     units,
                     "cost; oracle " + ref.best() + " optimizer " + got.best().layout() + " — " + where);
-            if (got.best().report().check("torsion_threshold").orElseThrow().pass()
-                    && got.best()
-                            .report()
-                            .check("torsion_longitudinal")
-                            .orElseThrow()
-                            .title()
-                            .startsWith("Long")
-                    && !got.best()
-                            .report()
-                            .check("torsion_longitudinal")
-                            .orElseThrow()
-                            .title()
-                            .endsWith("(neglected)")) {
+            if (!got.best()
+                    .report()
+                    .check("torsion_transverse")
+                    .orElseThrow()
+                    .title()
+                    .endsWith("(neglected)")) {
                 designedForTorsion++;
             }
             if (i % 4 == 0) {
