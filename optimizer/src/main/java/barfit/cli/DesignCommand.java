@@ -218,6 +218,8 @@ final class DesignCommand implements Callable<Integer> {
                 b.maxDepth(),
                 b.width(),
                 b.flange(),
-                length);
+                length,
+                b.tu(),
+                b.compatibilityTorsion());
     }
 }

@@ -74,11 +74,7 @@ public final class CheckInputReader {
                 double v = b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE));
                 vu = u.toSI(InputLimits.require(b, "Vu", InputLimits.SHEAR, u, v), Dim.FORCE);
             }
-            Double tu = null;
-            if (b.has("Tu")) {
-                double v = b.nonNegative("Tu", "the factored torsion, " + u.unit(Dim.MOMENT));
-                tu = u.toSI(InputLimits.require(b, "Tu", InputLimits.TORSION, u, v), Dim.MOMENT);
-            }
+            Double tu = torsion(b, u);
             boolean compatibility = compatibilityTorsion(b, tu != null);
             SkinBars skin = b.has("skin") ? sr.skin(b.map("skin", "skin bars: {bar, spacing}")) : null;
             BeamSection section = sr.section(shape, layers, stirrups, skin);
@@ -87,11 +83,20 @@ public final class CheckInputReader {
         return new CheckInput(settings, out);
     }
 
+    /** The factored torsion {@code Tu} (N·mm), or null where none is given. */
+    static Double torsion(YFields b, UnitSystem u) {
+        if (!b.has("Tu")) {
+            return null;
+        }
+        double v = b.nonNegative("Tu", "the factored torsion, " + u.unit(Dim.MOMENT));
+        return u.toSI(InputLimits.require(b, "Tu", InputLimits.TORSION, u, v), Dim.MOMENT);
+    }
+
     /**
      * {@code torsion: compatibility} marks Tu as compatibility torsion, which 22.7.3.2 lets be reduced to φTcr
      * in a statically indeterminate structure; {@code equilibrium} (the default) keeps it as given.
      */
-    private static boolean compatibilityTorsion(YFields b, boolean hasTu) {
+    static boolean compatibilityTorsion(YFields b, boolean hasTu) {
         if (!b.has("torsion")) {
             return false;
         }

@@ -6,7 +6,8 @@ import barfit.section.Span;
 import barfit.section.SpanChecks;
 
 /**
- * A beam of a {@code design} file. A single section gives Mu in N·mm (+ sagging) and Vu in N or null;
+ * A beam of a {@code design} file. A single section gives Mu in N·mm (+ sagging), Vu in N or null and Tu in
+ * N·mm or null ({@code compatibilityTorsion}: Tu is compatibility torsion, 22.7.3.2);
  * a whole span gives {@code whole} instead. Both carry the headroom cap and fixed width in mm or null,
  * the flange, and the span (for the cost over the length and, with ends, the depth rule). {@code group}
  * names beams a schedule may make share one section size (null: none).
@@ -22,7 +23,25 @@ public record DesignBeam(
         Span span,
         WholeSpan whole,
         String group,
-        boolean sameSection) {
+        boolean sameSection,
+        Double tu,
+        boolean compatibilityTorsion) {
+
+    /** A beam without torsion. */
+    public DesignBeam(
+            String id,
+            Location location,
+            double mu,
+            Double vu,
+            Double maxDepth,
+            Double width,
+            Flange flange,
+            Span span,
+            WholeSpan whole,
+            String group,
+            boolean sameSection) {
+        this(id, location, mu, vu, maxDepth, width, flange, span, whole, group, sameSection, null, false);
+    }
 
     /**
      * {@code sameSection}: the beam's group keeps one b × h whatever the rationalisation asks (the spans of a

@@ -19,13 +19,16 @@ import java.util.Map;
 
 /**
  * Reads a {@code design} file: settings, search, costs and beams. A beam gives either {@code Mu} (one
- * section) or {@code moments} (a whole span with its supports).
+ * section, with {@code Vu} and {@code Tu} if it carries them) or {@code moments} (a whole span with its
+ * supports).
  */
 public final class DesignInputReader {
     static final String[] BEAM_KEYS = {
         "id",
         "Mu",
         "Vu",
+        "Tu",
+        "torsion",
         "max_depth",
         "width",
         "flange",
@@ -67,10 +70,6 @@ public final class DesignInputReader {
         List<DesignBeam> out = new ArrayList<>();
         Map<String, Integer> ids = new HashMap<>();
         for (YFields b : beams) {
-            if (b.has("Tu")) {
-                // torsion is checked by the section model, but no search chooses stirrups or bars for it yet
-                throw b.error("Tu", "torsion is not designed yet; check a chosen section under Tu with barfit check");
-            }
             b.allowOnly(BEAM_KEYS);
             String id = SettingsReader.id(b);
             Integer first = ids.putIfAbsent(id, b.location().line());
@@ -131,8 +130,18 @@ public final class DesignInputReader {
                                         b.nonNegative("Vu", "the factored shear, " + u.unit(Dim.FORCE))),
                                 Dim.FORCE)
                         : null;
-                out.add(new DesignBeam(id, b.location(), mu, vu, cap, width, flange, span, null, group));
+                Double tu = CheckInputReader.torsion(b, u);
+                boolean compatibility = CheckInputReader.compatibilityTorsion(b, tu != null);
+                out.add(new DesignBeam(
+                        id, b.location(), mu, vu, cap, width, flange, span, null, group, false, tu, compatibility));
                 continue;
+            }
+            if (b.has("Tu") || b.has("torsion")) {
+                // a whole span's torsion varies along it: its search does not design for it yet
+                throw b.error(
+                        b.has("Tu") ? "Tu" : "torsion",
+                        "torsion is designed for one section (Mu, Vu, Tu), not yet for a whole span; "
+                                + "check the span's sections under Tu with barfit check");
             }
             if (b.has("Vu")) {
                 throw b.error("Vu", "a whole span gives its shears as shear: {left, right}, not Vu");

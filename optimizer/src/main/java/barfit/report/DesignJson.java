@@ -83,6 +83,10 @@ public final class DesignJson {
         if (p.vu() != null) {
             Json.put(b, "Vu", p.vu(), Dim.FORCE, u);
         }
+        if (p.hasTorsion()) {
+            Json.put(b, "Tu", Math.abs(p.tu()), Dim.MOMENT, u);
+            b.put("torsion", p.compatibilityTorsion() ? "compatibility" : "equilibrium");
+        }
         if (p.maxDepth() != null) {
             Json.put(b, "max_depth", p.maxDepth(), Dim.LENGTH, u);
         }

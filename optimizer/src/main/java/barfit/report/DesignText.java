@@ -206,6 +206,9 @@ public final class DesignText {
         if (p.vu() != null) {
             head.append("   Vu = ").append(u.withUnit(p.vu(), Dim.FORCE));
         }
+        if (p.hasTorsion()) {
+            head.append("   Tu = ").append(u.withUnit(Math.abs(p.tu()), Dim.MOMENT));
+        }
         if (p.maxDepth() != null) {
             head.append("   max depth ").append(u.withUnit(p.maxDepth(), Dim.LENGTH));
         }
@@ -241,7 +244,10 @@ public final class DesignText {
             t.row(
                     "skin bars",
                     l.skin().bar().label() + " @ " + u.withUnit(l.skin().spacing(), Dim.LENGTH)
-                            + " on both side faces (9.7.2.3)");
+                            + " on both side faces "
+                            + (l.height() > p.code().skinDepthLimit()
+                                    ? p.hasTorsion() ? "(9.7.2.3, 9.7.5.1)" : "(9.7.2.3)"
+                                    : "(side bars for torsion, 9.7.5.1)"));
         }
         var f = r.flexure();
         t.row(
@@ -254,6 +260,10 @@ public final class DesignText {
                     "shear",
                     "φVn = " + u.withUnit(r.shear().phiVn(), Dim.FORCE) + "   Vu/φVn = "
                             + Words.ratio(r.shear().vu() / r.shear().phiVn()));
+        }
+        String torsion = TorsionWords.summary(r, u);
+        if (torsion != null) {
+            t.row("torsion", torsion);
         }
         t.row("binding", binding(o.binding(), u));
         if (p.span() != null && p.span().ends() == null) {

@@ -8,7 +8,6 @@ import barfit.design.section.DesignOutcome;
 import barfit.design.section.SectionDesigner;
 import barfit.design.section.SectionLayout;
 import barfit.design.section.SectionProblem;
-import barfit.section.Demand;
 import barfit.section.Materials;
 import barfit.section.SectionChecks;
 import barfit.section.trail.Trail;
@@ -74,7 +73,9 @@ public final class SectionTarget implements Target {
                 cap,
                 freeWidth ? null : p.fixedWidth(),
                 p.flange(),
-                p.costLength());
+                p.costLength(),
+                p.tu(),
+                p.compatibilityTorsion());
         DesignOutcome o = new SectionDesigner(cost, options).design(q, 0);
         if (!o.feasible()) {
             return Summary.none(say.why(o.diagnosis()), o.diagnosis().limit());
@@ -99,8 +100,7 @@ public final class SectionTarget implements Target {
                     2,
                     l.stirrups(),
                     l.skin());
-            var r = SectionChecks.run(
-                    hangers.section(m, q.detailing(), q.code()), new Demand(q.mu(), q.vu()), q.span(), Trail.off());
+            var r = SectionChecks.run(hangers.section(m, q.detailing(), q.code()), q.demand(), q.span(), Trail.off());
             needed = !r.ok();
             fails = Summary.checks(r.failures());
         }
