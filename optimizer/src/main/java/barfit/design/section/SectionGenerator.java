@@ -72,7 +72,6 @@ public final class SectionGenerator {
     private final List<BarSize> tensionSizes;
     private final List<BarSize> compressionSizes;
     private final BarSize smallestTension;
-    private final boolean torsion;
 
     /** Best candidate per distinct key, in discovery order. */
     private final Map<String, Candidate> best = new LinkedHashMap<>();
@@ -97,7 +96,6 @@ public final class SectionGenerator {
         this.smallestTension = tensionSizes.stream()
                 .min(Comparator.comparingDouble(BarSize::diameter))
                 .orElseThrow();
-        this.torsion = problem.hasTorsion();
     }
 
     /** A concrete frame: width, height and the stirrup bar that positions the main bars. */
@@ -109,16 +107,24 @@ public final class SectionGenerator {
             CostBreakdown frameCost,
             SkinBars skin,
             double skinCost,
-            List<SkinBars> skins,
+            FrameTorsion torsion,
             double lowerBound,
             double tensionAreaLb,
             double cheapestStirrups,
             double[] stirrupLb) {
-        /** The stirrup lower bound, made tight (one shear search) only when the frame is reached. */
+        /**
+         * The stirrup lower bound, made tight (one shear search, with the torsion checks on stirrups where the
+         * frame is designed for torsion) only when the frame is reached.
+         */
         double stirrupLb(SectionGenerator g) {
             if (Double.isNaN(stirrupLb[0])) {
                 Stirrups s = g.cheapestStirrups(
-                        b, h, det, h - det.firstLayerCentroid(g.smallestTension.diameter()), g.maxTensionArea(b, det));
+                        b,
+                        h,
+                        det,
+                        h - det.firstLayerCentroid(g.smallestTension.diameter()),
+                        g.maxTensionArea(b, det),
+                        torsion.designed());
                 stirrupLb[0] = s == null ? Double.POSITIVE_INFINITY : g.cost.stirrups(b, h, s);
             }
             return stirrupLb[0];
@@ -208,24 +214,42 @@ public final class SectionGenerator {
             BarSize ds = cell.stirrupBar();
             Detailing det = cell.detailing();
             CostBreakdown frameCost = cost.frame(b, h, p.flange());
-            List<SkinBars> skins = new ArrayList<>(
-                    SectionLayout.skinOptions(h, p.space().skinBar(), det, p.materials(), p.code(), torsion));
+            double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
+            FrameTorsion torsion =
+                    FrameTorsion.of(p, new SectionShape(b, h, p.flange()), det, h - det.firstLayerCentroid(dbMin));
+            List<SkinBars> skins = new ArrayList<>(torsion.skins());
             skins.sort(Comparator.comparingDouble(x -> skinCost(h, x)));
+            torsion = torsion.withSkins(skins);
             SkinBars skin = skins.get(0); // the design rule's, the cheapest
             double skinCost = skinCost(h, skin);
-            double areaLb = tensionAreaLowerBound(b, h, det, dbMin);
+            // the longitudinal steel beyond flexure's need counts for Al, and what counts may include the
+            // compression bars: with Al, at least As + max(Al, the least compression layer) in all
+            double perArea = torsion.designed()
+                    ? Math.min(
+                            massPerArea,
+                            p.space().skinBar().massPerMetre()
+                                    / p.space().skinBar().area())
+                    : massPerArea;
             double steelLb = cost.mainBarPricePerKg()
-                    * massPerArea
-                    * Math.max(areaLb + 2 * compressionSizes.get(0).area(), minPair);
+                    * perArea
+                    * Math.max(
+                            areaLb
+                                    + Math.max(
+                                            torsion.alRequired(),
+                                            2 * compressionSizes.get(0).area()),
+                            minPair);
             double cheapestStirrups = Double.POSITIVE_INFINITY;
             for (int legs : p.space().stirrupLegs()) {
                 for (double spacing : p.space().stirrupSpacings()) {
                     cheapestStirrups = Math.min(cheapestStirrups, cost.stirrups(b, h, new Stirrups(ds, legs, spacing)));
                 }
             }
-            double lb = frameCost.total() + skinCost + steelLb + cheapestStirrups;
+            // a frame too small for the torsion, or whose bars cannot be spaced round the hoop, has no layout
+            double lb = torsion.blocking() != null
+                    ? Double.POSITIVE_INFINITY
+                    : frameCost.total() + skinCost + steelLb + cheapestStirrups;
             out.add(new Frame(
-                    b, h, ds, det, frameCost, skin, skinCost, skins, lb, areaLb, cheapestStirrups, new double[] {
+                    b, h, ds, det, frameCost, skin, skinCost, torsion, lb, areaLb, cheapestStirrups, new double[] {
                         Double.NaN
                     }));
         }
@@ -277,8 +301,26 @@ public final class SectionGenerator {
         return asMax;
     }
 
-    private Stirrups cheapestStirrups(double b, double h, Detailing det, double d, double as) {
-        return chooser.cheapest(new SectionShape(b, h, p.flange()), det, d, as, p.vu(), 0);
+    /**
+     * The cheapest stirrups of the frame for d and As (its largest); {@code torsion}: with the torsion checks
+     * on stirrups but the section size, on the largest bars, so that it bounds every layout of the frame.
+     */
+    private Stirrups cheapestStirrups(double b, double h, Detailing det, double d, double as, boolean torsion) {
+        SectionShape shape = new SectionShape(b, h, p.flange());
+        if (!torsion) {
+            return chooser.cheapest(shape, det, d, as, p.vu(), 0);
+        }
+        BarSize t = tensionSizes.stream()
+                .max(Comparator.comparingDouble(BarSize::diameter))
+                .orElseThrow();
+        BarSize c = compressionSizes.stream()
+                .max(Comparator.comparingDouble(BarSize::diameter))
+                .orElseThrow();
+        List<BarLayer> largest =
+                new ArrayList<>(BeamSection.stack(bending.tensionFace(), List.of(new BeamSection.BarGroup(t, 2)), det));
+        largest.addAll(BeamSection.stack(bending.compressionFace(), List.of(new BeamSection.BarGroup(c, 2)), det));
+        StirrupChooser.Torsion bound = new StirrupChooser.Torsion(p.demand(), largest, null, false);
+        return chooser.cheapest(shape, det, d, as, p.vu(), 0, Integer.MAX_VALUE, Double.POSITIVE_INFINITY, 0, bound);
     }
 
     /** A compression layer option: bar size and count, with its cost per metre. */
@@ -378,7 +420,11 @@ public final class SectionGenerator {
                     // ties round compression steel that is relied on ask more of the stirrups as the layer
                     // grows, so a later compression layer may then need fewer legs: keep trying
                     // under torsion a heavier compression layer may count for Al or allow wider stirrups: go on
-                    if (!ductilityStopped && nMin <= nFloor && legsFree && !tiesRelied && !torsion) {
+                    if (!ductilityStopped
+                            && nMin <= nFloor
+                            && legsFree
+                            && !tiesRelied
+                            && !f.torsion().designed()) {
                         break;
                     }
                 }
@@ -424,7 +470,7 @@ public final class SectionGenerator {
             if (fixed + cost.bars(t, n) + stirLb >= cut0) {
                 return false;
             }
-            if (torsion) {
+            if (f.torsion().designed()) {
                 // which split serves torsion best is not known in advance (d moves As,min and the need for
                 // flexure both ways): every split of these bars that passes flexure is tried
                 for (int[] alt : TensionSearch.splits(n, layers, nmax, first)) {
@@ -439,7 +485,7 @@ public final class SectionGenerator {
             }
             // the legs rule: a more even split of the same bars may need fewer stirrup legs
             int legs = p.space().legsFor(Math.max(split[0], m));
-            if (!torsion && legs > p.space().legsFor(Math.max((n + layers - 1) / layers, m))) {
+            if (!f.torsion().designed() && legs > p.space().legsFor(Math.max((n + layers - 1) / layers, m))) {
                 for (int[] alt : search.passingSplits(t, n, layers, nmax, first)) {
                     if (p.space().legsFor(Math.max(alt[0], m)) < legs) {
                         search.place(t, alt);
@@ -525,7 +571,7 @@ public final class SectionGenerator {
             }
         }
         int minLegs = Math.max(p.space().legsFor(Math.max(split[0], m)), ties.minLegs());
-        if (torsion) {
+        if (f.torsion().designed()) {
             offerUnderTorsion(f, key, bars, minLegs, Math.min(split[0], m), ties.maxSpacing(), cache);
             return;
         }
@@ -560,7 +606,7 @@ public final class SectionGenerator {
         double barCost = f.frameCost().total()
                 + cost.bars(bars.tensionBar(), bars.tensionBarCount())
                 + cost.bars(bars.compressionBar(), bars.compressionCount());
-        for (SkinBars skin : f.skins()) {
+        for (SkinBars skin : f.torsion().skins()) {
             if (barCost + skinCost(f.h(), skin) + f.stirrupLb(this) >= cut(key)) {
                 break; // the skin options come cheapest first
             }
@@ -612,6 +658,19 @@ public final class SectionGenerator {
         }
     }
 
+    /** The sizes of the outer layer of each face and of the skin bars, which the torsion checks on stirrups see. */
+    private static String smallestBars(StirrupChooser.Torsion need) {
+        StringBuilder sb = new StringBuilder();
+        for (BarLayer l : need.layers()) {
+            sb.append(l.face())
+                    .append(l.bar().designation())
+                    .append(l.fromFace())
+                    .append(',');
+        }
+        return sb.append(need.skin() == null ? "-" : need.skin().bar().designation())
+                .toString();
+    }
+
     /**
      * The cheapest stirrups for the tension bars just placed in the probe with at least {@code minLegs} legs
      * (the legs the bars per layer and the ties need), at most {@code maxLegs} and at most {@code maxSpacing}
@@ -627,7 +686,8 @@ public final class SectionGenerator {
             StirrupChooser.Torsion need,
             Map<String, Stirrups> cache) {
         String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs + "/" + maxSpacing
-                + (need == null ? "" : "/" + need.layers() + "/" + need.skin());
+                // under torsion the bar size of 9.7.5.2 hangs on the smallest corner or skin bar
+                + (need == null ? "" : "/" + smallestBars(need));
         if (cache.containsKey(key)) {
             return cache.get(key);
         }
