@@ -25,7 +25,13 @@ public record Diagnosis(
 
     /** What stops the section, as facts. */
     public sealed interface Cause
-            permits BelowShallowest, FrameCheckFails, NoLayoutFits, FlexureFails, ShearFails, DetailingFails {}
+            permits BelowShallowest,
+                    FrameCheckFails,
+                    NoLayoutFits,
+                    FlexureFails,
+                    ShearFails,
+                    TorsionFails,
+                    DetailingFails {}
 
     /** {@code max_depth} is below the shallowest depth searched, {@code shallowest}. */
     public record BelowShallowest(double shallowest) implements Cause {}
@@ -41,6 +47,13 @@ public record Diagnosis(
 
     /** Flexure can be met, but no stirrup option carries {@code vu}. */
     public record ShearFails(double vu) implements Cause {}
+
+    /**
+     * Flexure can be met, but a torsion check ({@code check}: the section size of 22.7.7.1(a), the bar spacing
+     * round the hoop of 9.7.5.1, or another) fails at {@code width} × {@code height}, as it does on every frame
+     * searched where {@code everyFrame}.
+     */
+    public record TorsionFails(CheckResult check, double width, double height, boolean everyFrame) implements Cause {}
 
     /** Strength can be met but no layout passes every detailing check. */
     public record DetailingFails() implements Cause {}

@@ -49,7 +49,34 @@ public final class DiagnosisWords {
             return "flexure can be met, but no stirrup option in the search carries Vu = " + say(u, c.vu(), Dim.FORCE)
                     + " (or the section is too small for it, 22.5.1.2)";
         }
+        if (cause instanceof Diagnosis.TorsionFails c) {
+            return torsion(c, u);
+        }
         return "strength can be met but no layout passes every detailing check";
+    }
+
+    private static String torsion(Diagnosis.TorsionFails c, UnitSystem u) {
+        CheckResult r = c.check();
+        String at = say(u, c.width(), Dim.LENGTH) + " × " + say(u, c.height(), Dim.LENGTH);
+        String where = c.everyFrame() ? "at every size searched; at " + at : "at " + at;
+        return switch (r.id()) {
+            case "torsion_section" ->
+                "flexure can be met, but the section is too small for the torsion with the shear " + where + ", "
+                        + "√(v² + vt²) = " + say(u, r.demand().value(), Dim.STRESS) + " > "
+                        + say(u, r.limit().value(), Dim.STRESS) + " (22.7.7.1(a)); a wider or deeper section "
+                        + "lowers it";
+            case "torsion_bar_spacing" ->
+                "flexure can be met, but the longitudinal bars cannot be spaced round the hoop " + where
+                        + ": the largest gap is " + say(u, r.demand().value(), Dim.LENGTH) + " > "
+                        + say(u, r.limit().value(), Dim.LENGTH)
+                        + " (9.7.5.1; side bars stand over h/2 from the tension face)";
+            case "torsion_transverse", "torsion_transverse_min", "torsion_spacing" ->
+                "flexure can be met, but no stirrup option in the search carries the torsion with the shear " + where
+                        + " (" + r.clause() + "); larger stirrup bars, more legs or closer spacings would";
+            default ->
+                "flexure can be met, but the check " + r.id() + " (" + r.title() + ", " + r.clause() + ") fails "
+                        + where;
+        };
     }
 
     public static List<String> fixes(Diagnosis d, UnitSystem u) {

@@ -150,6 +150,12 @@ final class SectionDiagnoser {
             return diagnosis(
                     p, cost, "flexure", new Diagnosis.FlexureFails(b, h, Math.abs(p.mu())), strongest, bestPhiMn);
         }
+        if (p.hasTorsion()) {
+            Diagnosis.TorsionFails torsion = SectionTorsionDiagnosis.cause(p, strongest);
+            if (torsion != null) {
+                return diagnosis(p, cost, torsion.check().id(), torsion, strongest, bestPhiMn);
+            }
+        }
         if (p.vu() != null) {
             return diagnosis(p, cost, "shear", new Diagnosis.ShearFails(p.vu()), strongest, bestPhiMn);
         }
