@@ -93,7 +93,15 @@ public final class RandomProblems {
      * them compatibility torsion; its draws follow the small problem's.
      */
     public static SectionProblem torsion(Random r) {
-        SectionProblem p = small(r);
+        return torsion(r, small(r));
+    }
+
+    /** A medium problem (as {@link #medium}) with a torsion drawn as {@link #torsion(Random)} draws it. */
+    public static SectionProblem mediumTorsion(Random r) {
+        return torsion(r, medium(r));
+    }
+
+    private static SectionProblem torsion(Random r, SectionProblem p) {
         double tu = (1 + 59 * r.nextDouble()) * 1e6;
         return p.withTorsion(tu, r.nextInt(4) == 0);
     }

@@ -14,7 +14,8 @@ import org.junit.jupiter.api.Test;
  * The optimizer against plain enumeration on sections under torsion: on random small spaces each carrying a
  * factored torsion, its cost equals the exhaustive search's exactly (in cost units) and it finds a design
  * exactly when one exists. 200 instances in {@code mvn verify}; more with
- * {@code -Doracle.torsion.instances=N -Doracle.torsion.seed=S}.
+ * {@code -Doracle.torsion.instances=N -Doracle.torsion.seed=S}, wider spaces (more sizes, up to three layers,
+ * either edition's equations) with {@code -Doracle.torsion.medium=true}.
  */
 class SectionTorsionOracleTest {
     @Test
@@ -28,7 +29,9 @@ class SectionTorsionOracleTest {
         long oracleNanos = 0;
         long designNanos = 0;
         for (int i = 0; i < instances; i++) {
-            SectionProblem p = RandomProblems.torsion(rnd);
+            SectionProblem p = Boolean.getBoolean("oracle.torsion.medium")
+                    ? RandomProblems.mediumTorsion(rnd)
+                    : RandomProblems.torsion(rnd);
             long t0 = System.nanoTime();
             SectionExhaustive.Result ref = oracle.solve(p);
             long t1 = System.nanoTime();
