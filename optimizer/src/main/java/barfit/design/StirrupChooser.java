@@ -44,12 +44,7 @@ public final class StirrupChooser {
          * get easier as they grow, the section size need not.
          */
         boolean pass(BeamSection s, double d, double as) {
-            for (CheckResult c : TorsionChecks.stirrupChecks(s, demand, d, as)) {
-                if (!c.pass() && (withSectionSize || !c.id().equals("torsion_section"))) {
-                    return false;
-                }
-            }
-            return true;
+            return TorsionChecks.stirrupsPass(s, demand, d, as, withSectionSize);
         }
     }
 

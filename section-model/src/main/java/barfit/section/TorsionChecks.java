@@ -122,12 +122,51 @@ public final class TorsionChecks {
 
     /** Whether every check of {@link #stirrupChecks} passes. */
     public static boolean stirrupsPass(BeamSection s, Demand demand, double d, double tensionArea) {
-        for (CheckResult c : stirrupChecks(s, demand, d, tensionArea)) {
-            if (!c.pass()) {
-                return false;
-            }
+        return stirrupsPass(s, demand, d, tensionArea, true);
+    }
+
+    /**
+     * Whether the checks of {@link #stirrupChecks} pass, decided on the same numbers and comparisons without
+     * wording them (the searches ask this many times); {@code withSectionSize} false leaves out
+     * {@code torsion_section}, for a bound over sections whose d and As are not known yet.
+     */
+    public static boolean stirrupsPass(
+            BeamSection s, Demand demand, double d, double tensionArea, boolean withSectionSize) {
+        if (!demand.hasTorsion()) {
+            throw new IllegalArgumentException("no torsion in the demand");
         }
-        return true;
+        double vu = demand.vu() == null ? 0 : Math.abs(demand.vu());
+        ShearResult sh = Shear.analyse(s, vu, d, tensionArea, Trail.off());
+        TorsionResult r = Torsion.analyse(s, demand.tu(), demand.compatibilityTorsion(), sh, Trail.off());
+        if (r.neglected()) {
+            return true;
+        }
+        if (withSectionSize && !CheckResult.within(r.sectionStress(), r.sectionLimit())) {
+            return false;
+        }
+        Stirrups st = s.stirrups();
+        if (st == null) {
+            return false;
+        }
+        double provided = st.area() / st.spacing();
+        double perLeg = st.bar().area() / st.spacing();
+        boolean transverse = outerLegGoverns(st, r)
+                ? CheckResult.within(r.atPerS(), perLeg)
+                : CheckResult.within(r.transverseRequired(), provided);
+        return transverse
+                && CheckResult.reaches(provided, r.transverseMin())
+                && CheckResult.within(st.spacing(), r.sMax())
+                && CheckResult.reaches(smallestTorsionBar(s), leastBarDiameter(s));
+    }
+
+    /**
+     * With more than two legs the outer hoop's leg, not all the legs together, decides the transverse check
+     * when At/s takes a larger share of one leg than (Av + 2At)/s takes of all of them.
+     */
+    private static boolean outerLegGoverns(Stirrups st, TorsionResult r) {
+        double allLegs = r.transverseRequired() / (st.area() / st.spacing());
+        double outerLeg = r.atPerS() / (st.bar().area() / st.spacing());
+        return st.legs() > 2 && outerLeg > allLegs;
     }
 
     private static CheckResult sectionSize(BeamSection s, TorsionResult r, boolean noVu) {
@@ -180,7 +219,7 @@ public final class TorsionChecks {
         String shares = "(Av + 2At)/s takes " + fraction(allLegs) + " of the stirrups, At/s "
                 + fraction(outerLeg) + " of one leg of the outer hoop; " + vcFrom
                 + (st.legs() > 2 ? "; crossties and inner legs count for shear only" : "");
-        if (st.legs() > 2 && outerLeg > allLegs) {
+        if (outerLegGoverns(st, r)) {
             out.add(CheckResult.atMost(
                     "torsion_transverse",
                     "Outer hoop leg for torsion At/s",

@@ -45,12 +45,14 @@ class TorsionStirrupChecksTest {
 
     @Test
     void givesWhatTheFullChecksGive() {
+        java.util.Set<String> outcomes = new java.util.HashSet<>();
         for (double tu : new double[] {5, 30, 60, 120}) {
             for (Double vu : new Double[] {null, 80e3, 300e3}) {
                 for (int legs : new int[] {2, 3, 4}) {
-                    for (double s : new double[] {75, 100, 150, 200, 300}) {
+                    for (double s : new double[] {75, 100, 150, 200, 300, 500}) {
                         for (BarSize top : new BarSize[] {NO10, Sections.si("16")}) {
-                            BeamSection sec = section(NO13, new Stirrups(NO13, legs, s), top);
+                            BarSize bar = top == NO10 ? NO13 : NO10;
+                            BeamSection sec = section(bar, new Stirrups(bar, legs, s), top);
                             Demand demand = new Demand(200 * KNM, vu, tu * KNM);
                             CheckReport full = SectionChecks.run(sec, demand, null, Trail.off());
                             double d = full.flexure().tensionSteelArea() > 0
@@ -62,8 +64,10 @@ class TorsionStirrupChecksTest {
                                     .orElseThrow()
                                     .title()
                                     .contains("neglected");
+                            double as = full.flexure().tensionSteelArea();
                             if (neglected) {
                                 assertTrue(mine.isEmpty());
+                                assertTrue(TorsionChecks.stirrupsPass(sec, demand, d, as));
                                 continue;
                             }
                             assertEquals(IDS, mine.stream().map(CheckResult::id).toList());
@@ -72,13 +76,29 @@ class TorsionStirrupChecksTest {
                             }
                             assertEquals(
                                     mine.stream().allMatch(CheckResult::pass),
-                                    TorsionChecks.stirrupsPass(
-                                            sec, demand, d, full.flexure().tensionSteelArea()));
+                                    TorsionChecks.stirrupsPass(sec, demand, d, as));
+                            assertEquals(
+                                    mine.stream()
+                                            .filter(c -> !c.id().equals("torsion_section"))
+                                            .allMatch(CheckResult::pass),
+                                    TorsionChecks.stirrupsPass(sec, demand, d, as, false));
+                            outcomes.add(mine.stream()
+                                    .map(c -> c.id() + "=" + c.pass() + "/" + c.title())
+                                    .toList()
+                                    .toString());
                         }
                     }
                 }
             }
         }
+        // the cases reach both forms of the transverse check and each check passing and failing
+        for (String id : IDS) {
+            assertTrue(outcomes.stream().anyMatch(o -> o.contains(id + "=true")), id + " passes somewhere");
+            if (!id.equals("torsion_closed_stirrups")) {
+                assertTrue(outcomes.stream().anyMatch(o -> o.contains(id + "=false")), id + " fails somewhere");
+            }
+        }
+        assertTrue(outcomes.stream().anyMatch(o -> o.contains("Outer hoop leg")));
     }
 
     @Test

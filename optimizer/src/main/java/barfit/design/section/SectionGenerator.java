@@ -606,23 +606,13 @@ public final class SectionGenerator {
         double barCost = f.frameCost().total()
                 + cost.bars(bars.tensionBar(), bars.tensionBarCount())
                 + cost.bars(bars.compressionBar(), bars.compressionCount());
+        List<BarLayer> layers =
+                bars.section(p.materials(), p.detailing(), p.code()).layers();
         for (SkinBars skin : f.torsion().skins()) {
             if (barCost + skinCost(f.h(), skin) + f.stirrupLb(this) >= cut(key)) {
                 break; // the skin options come cheapest first
             }
-            SectionLayout withSkin = new SectionLayout(
-                    f.b(),
-                    f.h(),
-                    p.flange(),
-                    bending,
-                    bars.tensionBar(),
-                    bars.tensionCounts(),
-                    bars.compressionBar(),
-                    bars.compressionCount(),
-                    bars.stirrups(),
-                    skin);
-            BeamSection s = withSkin.section(p.materials(), p.detailing(), p.code());
-            StirrupChooser.Torsion need = new StirrupChooser.Torsion(p.demand(), s.layers(), skin);
+            StirrupChooser.Torsion need = new StirrupChooser.Torsion(p.demand(), layers, skin);
             Stirrups st = stirrups(f, bars.tensionBar(), split, minLegs, maxLegs, maxSpacing, need, cache);
             if (st == null) {
                 continue;
