@@ -288,7 +288,13 @@ public final class DesignText {
                 double c = alt.cost().total();
                 a.row(
                         "#" + k++,
-                        describe(alt.layout(), u),
+                        describe(alt.layout(), u)
+                                // under torsion the side bars are part of what the alternative is
+                                + (p.hasTorsion() && alt.layout().skin() != null
+                                        ? "  side bars "
+                                                + alt.layout().skin().bar().label() + " @ "
+                                                + u.withUnit(alt.layout().skin().spacing(), Dim.LENGTH)
+                                        : ""),
                         Money.amount(
                                 p.span() != null
                                         ? c

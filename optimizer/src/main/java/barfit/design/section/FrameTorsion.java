@@ -1,6 +1,7 @@
 package barfit.design.section;
 
 import barfit.catalogs.BarSize;
+import barfit.design.StirrupChooser;
 import barfit.section.BarLayer;
 import barfit.section.BeamSection;
 import barfit.section.Bending;
@@ -80,6 +81,21 @@ record FrameTorsion(boolean designed, double alRequired, List<SkinBars> skins, C
             blocking = spacingBlocks(p, shape, det, skins);
         }
         return new FrameTorsion(true, r.alRequired(), skins, blocking);
+    }
+
+    /**
+     * What the stirrup bound over a frame asks of torsion: the checks on stirrups but the section size (which
+     * the frame's largest d and As need not ease), on two bars of the largest size on each face (larger corner
+     * bars only ease 9.7.5.2).
+     */
+    static StirrupChooser.Torsion stirrupBound(SectionProblem p, Detailing det) {
+        BarSize t = largest(p.space().barSizes());
+        BarSize c = largest(p.space().compressionSizes());
+        Bending bending = p.bending();
+        List<BarLayer> bars =
+                new ArrayList<>(BeamSection.stack(bending.tensionFace(), List.of(new BeamSection.BarGroup(t, 2)), det));
+        bars.addAll(BeamSection.stack(bending.compressionFace(), List.of(new BeamSection.BarGroup(c, 2)), det));
+        return new StirrupChooser.Torsion(p.demand(), bars, null, false);
     }
 
     /** The most legs at the closest spacing of the space, in the frame's stirrup bar. */

@@ -310,16 +310,7 @@ public final class SectionGenerator {
         if (!torsion) {
             return chooser.cheapest(shape, det, d, as, p.vu(), 0);
         }
-        BarSize t = tensionSizes.stream()
-                .max(Comparator.comparingDouble(BarSize::diameter))
-                .orElseThrow();
-        BarSize c = compressionSizes.stream()
-                .max(Comparator.comparingDouble(BarSize::diameter))
-                .orElseThrow();
-        List<BarLayer> largest =
-                new ArrayList<>(BeamSection.stack(bending.tensionFace(), List.of(new BeamSection.BarGroup(t, 2)), det));
-        largest.addAll(BeamSection.stack(bending.compressionFace(), List.of(new BeamSection.BarGroup(c, 2)), det));
-        StirrupChooser.Torsion bound = new StirrupChooser.Torsion(p.demand(), largest, null, false);
+        StirrupChooser.Torsion bound = FrameTorsion.stirrupBound(p, det);
         return chooser.cheapest(shape, det, d, as, p.vu(), 0, Integer.MAX_VALUE, Double.POSITIVE_INFINITY, 0, bound);
     }
 
@@ -617,17 +608,7 @@ public final class SectionGenerator {
             if (st == null) {
                 continue;
             }
-            SectionLayout lay = new SectionLayout(
-                    f.b(),
-                    f.h(),
-                    p.flange(),
-                    bending,
-                    bars.tensionBar(),
-                    bars.tensionCounts(),
-                    bars.compressionBar(),
-                    bars.compressionCount(),
-                    st,
-                    skin);
+            SectionLayout lay = bars.withStirrups(st, skin);
             Candidate cand = new Candidate(lay, lay.cost(cost));
             Candidate kb = best.get(key);
             if (kb != null && cand.units() >= kb.units()) {

@@ -38,6 +38,21 @@ public record SectionLayout(
         tensionCounts = List.copyOf(tensionCounts);
     }
 
+    /** The same bars with these stirrups and skin bars. */
+    public SectionLayout withStirrups(Stirrups st, SkinBars skinBars) {
+        return new SectionLayout(
+                width,
+                height,
+                flange,
+                bending,
+                tensionBar,
+                tensionCounts,
+                compressionBar,
+                compressionCount,
+                st,
+                skinBars);
+    }
+
     public int tensionBarCount() {
         int n = 0;
         for (int c : tensionCounts) {
