@@ -6,11 +6,9 @@ import barfit.design.line.LineSpans;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
 import barfit.input.Settings;
-import barfit.section.Development;
 import barfit.section.Face;
 import barfit.section.Flexure;
 import barfit.section.anchorage.BarForce;
-import barfit.section.anchorage.HookDevelopment;
 import barfit.section.trail.Trail;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -92,27 +90,8 @@ public final class DetailedCapacity {
 
     /** A run as a bar that builds up its force from each end: over ld, or ldh from a hook's outside. */
     static BarForce.Bar bar(BarRun run, Settings settings) {
-        double cb = settings.detailing().cover()
-                + settings.detailing().stirrupBar().diameter()
-                + run.bar().diameter() / 2;
-        double ld = Development.general(
-                        run.bar(),
-                        settings.materials(),
-                        settings.code(),
-                        run.face() == Face.TOP,
-                        cb,
-                        0,
-                        0,
-                        0,
-                        Trail.off())
-                .ld();
-        double ldh = HookDevelopment.ldh(
-                        run.bar(),
-                        settings.materials(),
-                        settings.code(),
-                        HookDevelopment.Conditions.uncoated(cb - run.bar().diameter() / 2, true),
-                        Trail.off())
-                .ldh();
+        double ld = Anchorage.ld(run.bar(), run.face() == Face.TOP, settings);
+        double ldh = Anchorage.ldh(run.bar(), settings, Trail.off()).ldh();
         return new BarForce.Bar(
                 run.start(),
                 run.end(),

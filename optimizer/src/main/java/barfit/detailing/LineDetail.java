@@ -2,7 +2,6 @@ package barfit.detailing;
 
 import barfit.analysis.Line;
 import barfit.analysis.LineResult;
-import barfit.catalogs.BarSize;
 import barfit.design.CostModel;
 import barfit.design.line.LineSpans;
 import barfit.design.span.SpanLayout;
@@ -73,7 +72,7 @@ public record LineDetail(
         List<BarRun> runs = new ArrayList<>();
         List<CheckResult> stockChecks = new ArrayList<>();
         for (BarRun run : placed.runs()) {
-            double ld = ld(run, settings);
+            double ld = Anchorage.ldBeforeMinimum(run.bar(), run.face() == barfit.section.Face.TOP, settings);
             boolean top = run.face() == barfit.section.Face.TOP;
             try {
                 runs.add(CutLengths.lapped(run, stock, top ? midSpans : supports, ld, settings.code()));
@@ -129,24 +128,6 @@ public record LineDetail(
                 cost.rates().mainBarsPerKg() * main + cost.rates().stirrupsPerKg() * stirrup,
                 designSteel,
                 stock);
-    }
-
-    /** The bars' ld (a top bar's where the run is on top), for its laps: a bar spaced at least 2 db, no Ktr. */
-    private static double ld(BarRun run, Settings settings) {
-        BarSize bar = run.bar();
-        double cb =
-                settings.detailing().cover() + settings.detailing().stirrupBar().diameter() + bar.diameter() / 2;
-        return barfit.section.Development.general(
-                        bar,
-                        settings.materials(),
-                        settings.code(),
-                        run.face() == barfit.section.Face.TOP,
-                        cb,
-                        0,
-                        0,
-                        0,
-                        Trail.off())
-                .ld();
     }
 
     /** Hoops and crossties per zone of every part; the same bar and length share a mark. */

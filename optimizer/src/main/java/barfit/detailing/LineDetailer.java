@@ -319,13 +319,7 @@ public final class LineDetailer {
      */
     private double[] segmentEnds(Line line, int seg, double start, double end, BarSize bar) {
         int n = line.spanCount();
-        double cb =
-                settings.detailing().cover() + settings.detailing().stirrupBar().diameter() + bar.diameter() / 2;
-        double ld = Development.general(bar, settings.materials(), settings.code(), true, cb, 0, 0, 0, Trail.off())
-                .ldEquation();
-        double half = barfit.section.anchorage.LapSplices.classB(bar, ld, settings.code(), Trail.off())
-                        .length()
-                / 2;
+        double half = Anchorage.classBLap(bar, true, settings) / 2;
         boolean firstPart = seg == 0 || seg == 1 && line.overhangLeft() <= 0;
         boolean lastPart = seg == n + 1 || seg == n && line.overhangRight() <= 0;
         double a = firstPart ? start : line.supportX(seg - 1) - half;
@@ -373,16 +367,7 @@ public final class LineDetailer {
                     continue;
                 }
                 BarSize bar = p.outcome().best().layout().bottom();
-                double cb = settings.detailing().cover()
-                        + settings.detailing().stirrupBar().diameter()
-                        + bar.diameter() / 2;
-                double ld = Development.general(
-                                bar, settings.materials(), settings.code(), false, cb, 0, 0, 0, Trail.off())
-                        .ldEquation();
-                lap = Math.max(
-                        lap,
-                        barfit.section.anchorage.LapSplices.classB(bar, ld, settings.code(), trail)
-                                .length());
+                lap = Math.max(lap, Anchorage.classBLap(bar, false, settings));
             }
             out[j] = lap;
         }
@@ -619,14 +604,8 @@ public final class LineDetailer {
 
     /** ldh of a hooked run's bars against the column it ends in (25.4.3.1, far cover deducted). */
     private CheckResult hookFit(BarRun run, Support s, String where) {
-        double side =
-                settings.detailing().cover() + settings.detailing().stirrupBar().diameter();
-        var ldh = HookDevelopment.ldh(
-                run.bar(),
-                settings.materials(),
-                settings.code(),
-                HookDevelopment.Conditions.uncoated(side, true),
-                trail);
+        double side = Anchorage.hookSideCover(settings);
+        var ldh = Anchorage.ldh(run.bar(), settings, trail);
         var fit = HookDevelopment.fit(ldh.ldh(), s.width(), settings.detailing().cover(), trail);
         String note = run.count() + " " + run.bar().label() + " " + run.what() + " hooked into " + where;
         if (!fit.fits()) {

@@ -2,7 +2,6 @@ package barfit.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 
 /**
  * The SVG the elevation is written with, by hand: coordinates in px with three decimals at most (the same
@@ -23,26 +22,13 @@ final class ElevationPen {
         return this;
     }
 
-    /** A coordinate in px, at most three decimals, trailing zeros dropped. */
+    /** A coordinate in px as the report's other drawings write it. */
     static String px(double v) {
-        String s = String.format(Locale.ROOT, "%.3f", v + 0.0);
-        s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
-        return s.equals("-0") ? "0" : s;
+        return barfit.report.html.Svg.px(v);
     }
 
     static String esc(String s) {
-        StringBuilder sb = new StringBuilder(s.length() + 8);
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            switch (c) {
-                case '&' -> sb.append("&amp;");
-                case '<' -> sb.append("&lt;");
-                case '>' -> sb.append("&gt;");
-                case '"' -> sb.append("&quot;");
-                default -> sb.append(c);
-            }
-        }
-        return sb.toString();
+        return barfit.report.html.Svg.esc(s);
     }
 
     /** The width a text takes at a font size, px (an estimate on the generous side). */

@@ -375,7 +375,7 @@ public final class TorsionChecks {
         double skin = 0;
         int perFace = 0;
         if (s.skin() != null) {
-            perFace = skinBarsPerFace(s.shape().height(), s.skin().spacing());
+            perFace = SkinBars.perFace(s.shape().height(), s.skin().spacing());
             skin = 2 * perFace * s.skin().bar().area();
         }
         LongitudinalSteel ls = new LongitudinalSteel(excess, relied ? 0 : compression, skin, mu != null, relied);
@@ -417,11 +417,6 @@ public final class TorsionChecks {
         return ls;
     }
 
-    /** Skin bars on each side face over h/2 from the tension face at their spacing, as they are placed. */
-    static int skinBarsPerFace(double h, double spacing) {
-        return Math.max(1, (int) Math.ceil(h / 2 / spacing - 1e-9) - 1);
-    }
-
     /**
      * 9.7.5.1: the largest centre-to-centre spacing of the longitudinal bars round the hoop: across the outer
      * layer of each face, and up each side face from the tension corner bar through the skin bars to the
@@ -450,7 +445,7 @@ public final class TorsionChecks {
         double to = compression.isEmpty() ? h : h - compression.get(0).fromFace();
         double y = from;
         if (s.skin() != null) {
-            int n = skinBarsPerFace(h, s.skin().spacing());
+            int n = SkinBars.perFace(h, s.skin().spacing());
             for (int k = 1; k <= n; k++) {
                 double next = from + k * s.skin().spacing();
                 if (next >= to) {

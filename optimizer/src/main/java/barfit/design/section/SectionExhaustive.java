@@ -104,7 +104,7 @@ public final class SectionExhaustive {
                                         Stirrups st = byLegs.computeIfAbsent(
                                                         need + "/" + most + "/" + maxSpacing + "/"
                                                                 + compressionBar.designation() + "/" + sk,
-                                                        k -> java.util.Optional.ofNullable(cheapestUnderTorsion(
+                                                        k -> java.util.Optional.ofNullable(cheapestStirrups(
                                                                 p,
                                                                 b,
                                                                 h,
@@ -141,6 +141,7 @@ public final class SectionExhaustive {
                                                         t,
                                                         counts,
                                                         compressionBar,
+                                                        null,
                                                         need,
                                                         most,
                                                         maxSpacing)))
@@ -177,11 +178,31 @@ public final class SectionExhaustive {
         return units;
     }
 
+    /** All count vectors n1 >= n2 >= ... >= 2 with n1 <= nmax. */
+    public static List<List<Integer>> countVectors(int layers, int nmax) {
+        List<List<Integer>> out = new ArrayList<>();
+        fill(layers, nmax, new ArrayList<>(), out);
+        return out;
+    }
+
+    private static void fill(int layers, int cap, List<Integer> cur, List<List<Integer>> out) {
+        if (cur.size() == layers) {
+            out.add(List.copyOf(cur));
+            return;
+        }
+        for (int v = 2; v <= cap; v++) {
+            cur.add(v);
+            fill(layers, v, cur, out);
+            cur.remove(cur.size() - 1);
+        }
+    }
+
     /**
-     * The cheapest stirrup option passing the shear checks and the torsion checks on stirrups for these
-     * tension bars, a compression layer of {@code c} and the skin bars {@code skin} (every legs and spacing).
+     * The cheapest stirrup option whose shear checks pass for these tension bars (any hangers), with the
+     * compression layer {@code c} and the skin bars {@code skin} (null for none); under torsion, the torsion
+     * checks on stirrups too (every legs and spacing).
      */
-    private Stirrups cheapestUnderTorsion(
+    private Stirrups cheapestStirrups(
             SectionProblem p,
             double b,
             double h,
@@ -210,65 +231,8 @@ public final class SectionExhaustive {
                 boolean ok = (p.vu() == null
                                 ? SectionChecks.minimumStirrupsPass(sec, fr.d(), fr.tensionSteelArea())
                                 : SectionChecks.shearPasses(sec, p.vu(), fr.d(), fr.tensionSteelArea()))
-                        && TorsionChecks.stirrupsPass(sec, p.demand(), fr.d(), fr.tensionSteelArea());
-                double sc = cost.stirrups(b, h, st);
-                if (ok && sc < bestCost - 1e-12) {
-                    bestCost = sc;
-                    best = st;
-                }
-            }
-        }
-        return best;
-    }
-
-    /** All count vectors n1 >= n2 >= ... >= 2 with n1 <= nmax. */
-    public static List<List<Integer>> countVectors(int layers, int nmax) {
-        List<List<Integer>> out = new ArrayList<>();
-        fill(layers, nmax, new ArrayList<>(), out);
-        return out;
-    }
-
-    private static void fill(int layers, int cap, List<Integer> cur, List<List<Integer>> out) {
-        if (cur.size() == layers) {
-            out.add(List.copyOf(cur));
-            return;
-        }
-        for (int v = 2; v <= cap; v++) {
-            cur.add(v);
-            fill(layers, v, cur, out);
-            cur.remove(cur.size() - 1);
-        }
-    }
-
-    /** The cheapest stirrup option whose shear checks pass for these tension bars (any hangers). */
-    private Stirrups cheapestStirrups(
-            SectionProblem p,
-            double b,
-            double h,
-            Detailing det,
-            BarSize t,
-            List<Integer> counts,
-            BarSize c,
-            int minLegs,
-            int maxLegs,
-            double maxSpacing) {
-        Stirrups best = null;
-        double bestCost = Double.POSITIVE_INFINITY;
-        for (int legs : p.space().stirrupLegs()) {
-            if (legs < minLegs || legs > maxLegs) {
-                continue;
-            }
-            for (double s : p.space().stirrupSpacings()) {
-                if (s > maxSpacing * (1 + 1e-9)) {
-                    continue;
-                }
-                Stirrups st = new Stirrups(det.stirrupBar(), legs, s);
-                SectionLayout lay = new SectionLayout(b, h, p.flange(), p.bending(), t, counts, c, 2, st, null);
-                BeamSection sec = lay.section(p.materials(), p.detailing(), p.code());
-                var fr = barfit.section.Flexure.analyse(sec, p.bending());
-                boolean ok = p.vu() == null
-                        ? SectionChecks.minimumStirrupsPass(sec, fr.d(), fr.tensionSteelArea())
-                        : SectionChecks.shearPasses(sec, p.vu(), fr.d(), fr.tensionSteelArea());
+                        && (!p.demand().hasTorsion()
+                                || TorsionChecks.stirrupsPass(sec, p.demand(), fr.d(), fr.tensionSteelArea()));
                 double sc = cost.stirrups(b, h, st);
                 if (ok && sc < bestCost - 1e-12) {
                     bestCost = sc;

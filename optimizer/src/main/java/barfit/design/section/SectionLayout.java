@@ -100,7 +100,7 @@ public record SectionLayout(
 
     /** Skin bars per side face over h/2 from the tension face at spacing s. */
     public static int skinBarsPerFace(double h, double spacing) {
-        return Math.max(1, (int) Math.ceil(h / 2 / spacing - 1e-9) - 1);
+        return SkinBars.perFace(h, spacing);
     }
 
     /** The design rule for skin bars: the smallest bar size at the 24.3.2 spacing, rounded down to 5 mm. */

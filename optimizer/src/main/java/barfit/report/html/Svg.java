@@ -3,13 +3,13 @@ package barfit.report.html;
 import java.util.Locale;
 
 /** Number and text formatting shared by the SVG drawings and the page: fixed decimals, Locale.ROOT. */
-final class Svg {
+public final class Svg {
     static final String NS = "http://www.w3.org/2000/svg";
 
     private Svg() {}
 
     /** A coordinate in px with three decimals, trailing zeros dropped (stable text, fine enough for 0.01 px). */
-    static String px(double v) {
+    public static String px(double v) {
         String s = String.format(Locale.ROOT, "%.3f", v + 0.0);
         if (s.contains(".")) {
             s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
@@ -18,7 +18,7 @@ final class Svg {
     }
 
     /** Escapes text for HTML and SVG content and attribute values. */
-    static String esc(String s) {
+    public static String esc(String s) {
         if (s == null) {
             return "";
         }
