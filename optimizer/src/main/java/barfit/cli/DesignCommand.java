@@ -3,15 +3,10 @@ package barfit.cli;
 import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
-import barfit.design.CostModel;
 import barfit.design.SolverOptions;
 import barfit.design.line.LineCapacity;
-import barfit.design.line.LineSpans;
-import barfit.design.section.SectionDesigner;
 import barfit.design.section.SectionProblem;
-import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanProblem;
-import barfit.detailing.LineDetail;
 import barfit.input.DesignBeam;
 import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
@@ -22,7 +17,6 @@ import barfit.report.DesignJson;
 import barfit.report.DesignText;
 import barfit.report.ElevationSvg;
 import barfit.report.EnvelopePlot;
-import barfit.section.trail.Trail;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -117,78 +111,27 @@ final class DesignCommand implements Callable<Integer> {
         List<String> lineIds = lines.stream().map(LineInput::id).toList();
         List<Path> plots = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-capacity.svg", force);
         List<Path> elevations = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-elevation.svg", force);
-        CostModel cost = new CostModel(
-                input.rates(), settings.detailing().cover(), settings.units().code());
-        SectionDesigner designer = new SectionDesigner(cost, options);
-        SpanDesigner spans = new SpanDesigner(cost, options);
-        List<DesignItem> outcomes = new ArrayList<>();
-        for (DesignBeam b : beams) {
-            outcomes.add(
-                    b.isWhole()
-                            ? DesignItem.of(spans.design(span(input, b), alternatives))
-                            : DesignItem.of(designer.design(problem(input, b), alternatives)));
-        }
-        LineSpans byLine =
-                new LineSpans(settings, input.space(), spans, input.maxBarSizesPerBeam(), input.barsPerTwoLegs());
-        int k = 0;
-        for (LineInput l : lines) {
-            LineSpans.Result r = byLine.design(l, alternatives);
-            if (plot != null) {
-                var capacity = LineCapacity.of(r);
+        DesignRun.Result run = DesignRun.run(input, beams, lines, options, alternatives, trail);
+        List<DesignItem> outcomes = run.items();
+        if (plot != null) {
+            for (int k = 0; k < run.lines().size(); k++) {
+                DesignRun.Line l = run.lines().get(k);
+                var capacity = LineCapacity.of(l.result());
                 if (capacity != null) {
                     Files.createDirectories(plot);
                     Files.writeString(
                             plots.get(k),
-                            EnvelopePlot.capacitySvg(r.analysis(), capacity, l.id(), settings.units()),
+                            EnvelopePlot.capacitySvg(
+                                    l.result().analysis(), capacity, l.input().id(), settings.units()),
                             StandardCharsets.UTF_8);
                 }
-            }
-            List<String> undesigned = r.parts().stream()
-                    .filter(pt -> !pt.outcome().feasible())
-                    .map(LineSpans.Part::name)
-                    .toList();
-            double lineCost = 0;
-            for (LineSpans.Part pt : r.parts()) {
-                lineCost += pt.outcome().feasible() ? pt.outcome().best().cost().total() : Double.NaN;
-            }
-            // detailed bar by bar: runs, laps, hooks, the bending schedule and the checks that place them
-            LineDetail detail = undesigned.isEmpty()
-                    ? LineDetail.of(
-                            r,
-                            settings,
-                            cost,
-                            l.stockLength() != null ? l.stockLength() : LineDetail.defaultStock(settings),
-                            trail ? Trail.recording() : Trail.off())
-                    : null;
-            if (plot != null) {
-                if (detail != null) {
+                if (l.detail() != null) {
                     Files.createDirectories(plot);
                     Files.writeString(
-                            elevations.get(k), ElevationSvg.svg(detail, r, settings.units()), StandardCharsets.UTF_8);
+                            elevations.get(k),
+                            ElevationSvg.svg(l.detail(), l.result(), settings.units()),
+                            StandardCharsets.UTF_8);
                 }
-                k++;
-            }
-            for (int i = 0; i < r.parts().size(); i++) {
-                LineSpans.Part part = r.parts().get(i);
-                outcomes.add(DesignItem.of(
-                        part.outcome(),
-                        new DesignItem.LinePart(
-                                l.id(),
-                                part.name(),
-                                i == 0,
-                                l.spans().size(),
-                                r.rounds(),
-                                r.settled(),
-                                l.redistribution(),
-                                r.redistribution(),
-                                r.epsT(),
-                                undesigned,
-                                !r.held().isEmpty(),
-                                r.oneSection(),
-                                r.supports(),
-                                r.withoutRedistribution(),
-                                lineCost,
-                                i == r.parts().size() - 1 ? detail : null)));
             }
         }
         String text = format == OutputFormat.json
@@ -196,7 +139,7 @@ final class DesignCommand implements Callable<Integer> {
                 : DesignText.render(settings, outcomes, input.currency(), trail);
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();
-        return outcomes.stream().allMatch(DesignItem::feasible) ? Main.OK : Main.FAILED;
+        return run.feasible() ? Main.OK : Main.FAILED;
     }
 
     static SpanProblem span(DesignInput in, DesignBeam b) {

@@ -3,6 +3,7 @@ package barfit.input;
 import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
+import barfit.catalogs.yaml.YNode;
 import barfit.catalogs.yaml.YamlReader;
 import barfit.design.SearchSpace;
 import barfit.section.EndCondition;
@@ -55,7 +56,15 @@ public final class DesignInputReader {
 
     /** Reads a file whose {@code beams:} may be left out when {@code beamsRequired} is false (they come from elsewhere). */
     public static DesignInput read(Path file, boolean beamsRequired) {
-        YFields doc = SettingsReader.root(YamlReader.read(file));
+        return read(YamlReader.read(file), file, beamsRequired);
+    }
+
+    /**
+     * Reads a document already parsed ({@code root}); {@code file} names it in messages and is where a
+     * catalog file named by a relative path is looked for.
+     */
+    public static DesignInput read(YNode root, Path file, boolean beamsRequired) {
+        YFields doc = SettingsReader.root(root);
         Settings settings = SettingsReader.read(doc, file);
         SearchSpace space = SearchReader.read(doc, settings);
         SearchReader.Costs costs = SearchReader.costs(doc, settings);

@@ -306,33 +306,38 @@ public final class SearchReader {
         return out;
     }
 
+    /** The rate keys of {@code costs:} that take one number, in the file's units (concrete first). */
+    public static List<String> rateKeys(UnitSystem u) {
+        return u == UnitSystem.US
+                ? List.of(
+                        "concrete_per_yd3",
+                        "main_bars_per_lb",
+                        "stirrups_per_lb",
+                        "formwork_per_ft2",
+                        "depth_premium_per_ft",
+                        "lap_factor")
+                : List.of(
+                        "concrete_per_m3",
+                        "main_bars_per_kg",
+                        "stirrups_per_kg",
+                        "formwork_per_m2",
+                        "depth_premium_per_m",
+                        "lap_factor");
+    }
+
     public static Costs costs(YFields doc, Settings s) {
         boolean us = s.units() == UnitSystem.US;
         CostRates d = CostRates.DEFAULTS;
         if (!doc.has("costs")) {
             return new Costs(d, "", defaultByFc(s.materials().fc(), d.concretePerM3()), false);
         }
-        String[] keys = us
-                ? new String[] {
-                    "concrete_per_yd3",
-                    "main_bars_per_lb",
-                    "stirrups_per_lb",
-                    "formwork_per_ft2",
-                    "depth_premium_per_ft",
-                    "lap_factor",
-                    "currency",
-                    "concrete_per_yd3_by_fc"
-                }
-                : new String[] {
-                    "concrete_per_m3",
-                    "main_bars_per_kg",
-                    "stirrups_per_kg",
-                    "formwork_per_m2",
-                    "depth_premium_per_m",
-                    "lap_factor",
-                    "currency",
-                    "concrete_per_m3_by_fc"
-                };
+        List<String> rateKeys = rateKeys(s.units());
+        String[] keys = new String[rateKeys.size() + 2];
+        for (int i = 0; i < rateKeys.size(); i++) {
+            keys[i] = rateKeys.get(i);
+        }
+        keys[rateKeys.size()] = "currency";
+        keys[rateKeys.size() + 1] = us ? "concrete_per_yd3_by_fc" : "concrete_per_m3_by_fc";
         YFields f = doc.map("costs", "the cost rates").allowOnly(keys);
         double concrete = rate(f, keys[0], "concrete, per " + (us ? "yd³" : "m³"))
                 .map(v -> v * (us ? YD3_PER_M3 : 1.0))
