@@ -44,6 +44,7 @@ class PackageDirectionTest {
             "barfit.schedule",
             "barfit.study",
             "barfit.bench",
+            "barfit.serve",
             "barfit.units");
 
     private static final String SOLVER = "com.google.ortools";
@@ -91,6 +92,21 @@ class PackageDirectionTest {
                             + "command line and solves nothing",
                     List.of("barfit.detailing"),
                     List.of("barfit.report", "barfit.cli", "barfit.schedule", "barfit.study", SOLVER),
+                    Set.of()),
+            new Rule(
+                    "the page server answers requests through its Explorer: it designs nothing, reads no input "
+                            + "file and knows no command line",
+                    List.of("barfit.serve"),
+                    List.of(
+                            "barfit.design",
+                            "barfit.input",
+                            "barfit.study",
+                            "barfit.schedule",
+                            "barfit.detailing",
+                            "barfit.cli",
+                            "barfit.section",
+                            "barfit.analysis",
+                            SOLVER),
                     Set.of()),
             new Rule("the searches know no detailing", List.of("barfit.design"), List.of("barfit.detailing"), Set.of()),
             new Rule("the reports do not reach into the solver", List.of("barfit.report"), List.of(SOLVER), Set.of()),

@@ -45,13 +45,15 @@ public final class Main implements Runnable {
         c.put("schedule", ScheduleCommand::new);
         c.put("compare", CompareCommand::new);
         c.put("sweep", SweepCommand::new);
+        c.put("serve", ServeCommand::new);
         c.put("bench", BenchCommand::new);
         c.put("help", CommandLine.HelpCommand::new);
         return Collections.unmodifiableMap(c);
     }
 
     /** The commands that run the solver: only these load its native library. */
-    static final java.util.Set<String> SOLVING = java.util.Set.of("design", "schedule", "compare", "sweep", "bench");
+    static final java.util.Set<String> SOLVING =
+            java.util.Set.of("design", "schedule", "compare", "sweep", "serve", "bench");
 
     static final String OUT_OF_MEMORY = "barfit: out of memory; give the JVM more heap through the launcher, e.g. "
             + "BARFIT_JAVA_OPTS=-Xmx4g ./barfit ...";
@@ -62,7 +64,8 @@ public final class Main implements Runnable {
     @Override
     public void run() {
         throw new CommandLine.ParameterException(
-                spec.commandLine(), "a command is needed: check, design, schedule, compare, sweep or bench");
+                spec.commandLine(),
+                "a command is needed: check, analyse, design, schedule, compare, sweep, serve or bench");
     }
 
     public static void main(String[] args) {

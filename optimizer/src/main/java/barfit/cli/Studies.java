@@ -45,6 +45,12 @@ final class Studies {
      * a beam, a line (all its parts) or one part.
      */
     static List<Target> targets(DesignInput in, String beam, Path file, SolverOptions options, Say say) {
+        return targets(in, beam, file, options, say, LinesReader.read(DesignInputReader.document(file), in.settings()));
+    }
+
+    /** As above, with the file's lines already read. */
+    static List<Target> targets(
+            DesignInput in, String beam, Path file, SolverOptions options, Say say, List<LineInput> lines) {
         List<Target> out = new ArrayList<>();
         List<String> ids = new ArrayList<>();
         for (DesignBeam b : in.beams()) {
@@ -57,7 +63,6 @@ final class Studies {
                             ? new SpanTarget(DesignCommand.span(in, b), options, say)
                             : new SectionTarget(DesignCommand.problem(in, b), options, say));
         }
-        List<LineInput> lines = LinesReader.read(DesignInputReader.document(file), in.settings());
         if (!lines.isEmpty()) {
             SpanDesigner spans = new SpanDesigner(cost(in), options);
             LineSpans byLine =

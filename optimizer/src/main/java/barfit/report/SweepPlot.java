@@ -39,6 +39,11 @@ public final class SweepPlot {
     private SweepPlot() {}
 
     public static String svg(Sweep.Result r, UnitSystem u, String currency, boolean perBeam) {
+        return svg(r, u, currency, perBeam, null);
+    }
+
+    /** As above, with the headroom cap in force ({@code cap}, mm; null for none) drawn as a line. */
+    public static String svg(Sweep.Result r, UnitSystem u, String currency, boolean perBeam, Double cap) {
         System.setProperty("java.awt.headless", "true");
         XYSeries frontier = new XYSeries("cheapest design at the cap");
         XYSeries needing = new XYSeries("layout with compression steel beyond the hangers");
@@ -140,6 +145,16 @@ public final class SweepPlot {
             shallow.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
             shallow.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
             plot.addDomainMarker(shallow);
+        }
+        if (cap != null) {
+            ValueMarker capLine = new ValueMarker(u.fromSI(cap, Dim.LENGTH), CHOSEN, new BasicStroke(1.5f));
+            capLine.setLabel("headroom cap " + u.compact(cap, Dim.LENGTH) + " " + len);
+            capLine.setLabelBackgroundColor(CLEAR);
+            capLine.setLabelPaint(CHOSEN);
+            capLine.setLabelAnchor(RectangleAnchor.BOTTOM_LEFT);
+            capLine.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+            capLine.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
+            plot.addDomainMarker(capLine);
         }
         if (r.chosen().feasible()) {
             // keep the label inside the plot: to the right of the point in the left half, to the left in the

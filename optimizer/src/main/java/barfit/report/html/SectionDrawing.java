@@ -1,6 +1,8 @@
 package barfit.report.html;
 
 import barfit.catalogs.BarSize;
+import barfit.design.section.SectionLayout;
+import barfit.design.section.SectionProblem;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
 import barfit.report.html.SectionGeometry.Mm;
@@ -86,6 +88,17 @@ public final class SectionDrawing {
     /** The view of a stirrup zone: the section the zone is designed with, and the zone's own stirrups. */
     public static View ofZone(SpanProblem p, SpanLayout l, int zone, Double d, String title, String subtitle) {
         return of(p, l, p.zones().get(zone).section(), l.zoneStirrups().get(zone), d, title, subtitle);
+    }
+
+    /** The view of a single designed section: every bar it has, counted, and its stirrups and skin bars. */
+    public static View ofSection(SectionProblem p, SectionLayout l, Double d, String title, String subtitle) {
+        BeamSection s = l.section(p.materials(), p.detailing(), p.code());
+        List<DrawnLayer> layers = new ArrayList<>();
+        for (BarLayer bl : s.layers()) {
+            layers.add(new DrawnLayer(bl, true));
+        }
+        return new View(
+                title, subtitle, s.shape(), s.detailing(), l.bending(), layers, l.stirrups(), l.skin(), d, s.code());
     }
 
     private static View of(
