@@ -159,10 +159,13 @@ final class ScheduleCommand implements Callable<Integer> {
      */
     private List<String> write(ScheduleResult r) {
         Map<String, String> files = new LinkedHashMap<>();
+        // the report, the largest, is drawn while the others are written out (it uses every core itself)
+        var report =
+                java.util.concurrent.CompletableFuture.supplyAsync(() -> barfit.report.html.ScheduleHtml.render(r));
         files.put("schedule.csv", ScheduleCsv.render(r));
         files.put("bending-schedule.csv", barfit.report.BendingScheduleCsv.render(r));
         files.put("schedule.json", ScheduleJson.render(r));
-        files.put("report.html", barfit.report.html.ScheduleHtml.render(r));
+        files.put("report.html", report.join());
         if (!r.standardisation().isEmpty()) { // the curve is computed only when the schedule is rationalised
             files.put("standardisation.svg", barfit.report.html.StandardisationPlot.svg(r));
         }

@@ -2,7 +2,6 @@ package barfit.report;
 
 import barfit.design.CostBreakdown;
 import barfit.units.UnitSystem;
-import java.util.Locale;
 
 /** Costs for reports: per metre (SI) or per foot (US) of beam, or per beam when a span is given. */
 public final class Money {
@@ -18,7 +17,7 @@ public final class Money {
     }
 
     public static String amount(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
+        return barfit.units.FixedDecimals.of(v, 2);
     }
 
     /** "concrete 24.75 + main bars 39.10 + ... = 129.65" */

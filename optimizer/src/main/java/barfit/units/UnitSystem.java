@@ -135,11 +135,25 @@ public enum UnitSystem {
         if (d == Dim.INERTIA) {
             return sci(v);
         }
-        return clean(String.format(Locale.ROOT, "%." + decimals(d) + "f", v + 0.0));
+        return clean(FixedDecimals.of(v + 0.0, decimals(d)));
     }
 
     private static String clean(String s) {
-        return s.matches("-0(\\.0*)?") ? s.substring(1) : s;
+        return isNegativeZero(s) ? s.substring(1) : s;
+    }
+
+    /** "-0", "-0.", "-0.000": a negative number rounded to zero. */
+    private static boolean isNegativeZero(String s) {
+        if (!s.startsWith("-0")) {
+            return false;
+        }
+        for (int i = 2; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (c != '0' && !(c == '.' && i == 2)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** As {@link #number}, trailing zeros dropped: for equations written out. */
@@ -152,12 +166,23 @@ public enum UnitSystem {
             // at least four significant digits, so every substituted number can be re-keyed
             int mag = (int) Math.floor(Math.log10(Math.abs(v)));
             int dec = Math.min(7, Math.max(decimals(d), 3 - mag));
-            s = clean(String.format(Locale.ROOT, "%." + dec + "f", v));
+            s = clean(FixedDecimals.of(v, dec));
         }
-        if (s.contains(".") && !s.contains("e") && !s.contains("×")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        if (s.indexOf('.') >= 0 && s.indexOf('e') < 0 && s.indexOf('×') < 0) {
+            s = trimZeros(s);
         }
         return s.equals("-0") ? "0" : s;
+    }
+
+    private static String trimZeros(String s) {
+        int end = s.length();
+        while (end > 0 && s.charAt(end - 1) == '0') {
+            end--;
+        }
+        if (end > 0 && s.charAt(end - 1) == '.') {
+            end--;
+        }
+        return s.substring(0, end);
     }
 
     public String withUnit(double siValue, Dim d) {

@@ -6,10 +6,10 @@ import barfit.report.Money;
 import barfit.report.ScheduleRows;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
+import barfit.units.FixedDecimals;
 import barfit.units.UnitSystem;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 
 /**
  * What the report's sections share: words for lengths, spans, money and bar labels, the key-value rows and
@@ -105,7 +105,7 @@ final class Html {
     }
 
     static String amount(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
+        return FixedDecimals.of(v, 2);
     }
 
     static String money(double v, String currency) {

@@ -59,9 +59,16 @@ public final class ScheduleHtml {
             SummarySections.standardisation(r, out);
         }
         out.append("<section id=\"beams\">\n<h2>Beams</h2>\n");
-        for (int i = 0; i < rows.size(); i++) {
-            BeamSection.render(r, rows.get(i), ids.get(i), out);
-        }
+        // each beam's block is independent of the others: drawn on every core, joined in schedule order
+        List<String> blocks = java.util.stream.IntStream.range(0, rows.size())
+                .parallel()
+                .mapToObj(i -> {
+                    StringBuilder b = new StringBuilder(1 << 12);
+                    BeamSection.render(r, rows.get(i), ids.get(i), b);
+                    return b.toString();
+                })
+                .toList();
+        blocks.forEach(out::append);
         out.append("</section>\n");
         out.append("<footer>\n<p>").append(Svg.esc(Caution.SHORT)).append("</p>\n</footer>\n</body>\n</html>\n");
         return out.toString();

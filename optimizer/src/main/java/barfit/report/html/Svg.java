@@ -1,6 +1,6 @@
 package barfit.report.html;
 
-import java.util.Locale;
+import barfit.units.FixedDecimals;
 
 /** Number and text formatting shared by the SVG drawings and the page: fixed decimals, Locale.ROOT. */
 public final class Svg {
@@ -10,11 +10,23 @@ public final class Svg {
 
     /** A coordinate in px with three decimals, trailing zeros dropped (stable text, fine enough for 0.01 px). */
     public static String px(double v) {
-        String s = String.format(Locale.ROOT, "%.3f", v + 0.0);
-        if (s.contains(".")) {
-            s = s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        String s = FixedDecimals.of(v + 0.0, 3);
+        if (s.indexOf('.') >= 0) {
+            s = trimZeros(s);
         }
         return s.equals("-0") ? "0" : s;
+    }
+
+    /** The decimal without trailing zeros after its point, nor the point when nothing follows it. */
+    static String trimZeros(String s) {
+        int end = s.length();
+        while (end > 0 && s.charAt(end - 1) == '0') {
+            end--;
+        }
+        if (end > 0 && s.charAt(end - 1) == '.') {
+            end--;
+        }
+        return s.substring(0, end);
     }
 
     /** Escapes text for HTML and SVG content and attribute values. */
@@ -83,7 +95,7 @@ public final class Svg {
 
     /** A strain with its sign and five decimals, e.g. "+0.01234" or "−0.00210". */
     static String strain(double e) {
-        String s = String.format(Locale.ROOT, "%.5f", Math.abs(e));
+        String s = FixedDecimals.of(Math.abs(e), 5);
         if (s.equals("0.00000")) {
             return s;
         }
