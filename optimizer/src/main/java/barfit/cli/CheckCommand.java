@@ -1,14 +1,18 @@
 package barfit.cli;
 
 import barfit.catalogs.Echo;
+import barfit.detailing.AsBuilt;
 import barfit.input.CheckBeam;
 import barfit.input.CheckInput;
 import barfit.input.CheckInputReader;
+import barfit.input.CheckLine;
 import barfit.report.CheckJson;
 import barfit.report.CheckText;
 import barfit.section.CheckReport;
 import barfit.section.SectionChecks;
+import barfit.section.trail.Dim;
 import barfit.section.trail.Trail;
+import barfit.units.UnitSystem;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -23,7 +27,9 @@ import picocli.CommandLine.Spec;
         name = "check",
         mixinStandardHelpOptions = true,
         description = "Verify the given sections and bars of every beam in FILE against ACI 318-19: strength, "
-                + "ductility, detailing and shear, each with its clause, and a calculation trail.%n"
+                + "ductility, detailing and shear, each with its clause, and a calculation trail; and every line "
+                + "with its bars as built: analysed, each span's sections, and the bars' cut-offs, hooks, laps and "
+                + "integrity steel.%n"
                 + "Exit code 0 when every beam passes, 1 when a check fails, 2 for bad input.")
 final class CheckCommand implements Callable<Integer> {
     @Spec
@@ -43,24 +49,24 @@ final class CheckCommand implements Callable<Integer> {
             description = "include the calculation trail (default: on; --no-trail to leave it out)")
     boolean trail;
 
-    @Option(names = "--beam", paramLabel = "ID", description = "check only this beam")
+    @Option(names = "--beam", paramLabel = "ID", description = "check only this beam (or line)")
     String beam;
 
     @Override
     public Integer call() {
         CheckInput input = CheckInputReader.read(file);
         List<CheckBeam> beams = input.beams();
+        List<CheckLine> lines = input.lines();
         if (beam != null) {
             beams = beams.stream().filter(b -> b.id().equals(beam)).toList();
-            if (beams.isEmpty()) {
+            lines = lines.stream().filter(l -> l.line().id().equals(beam)).toList();
+            if (beams.isEmpty() && lines.isEmpty()) {
+                List<String> ids = new ArrayList<>();
+                input.beams().forEach(b -> ids.add(b.id()));
+                input.lines().forEach(l -> ids.add(l.line().id()));
                 throw OptionError.of(
                         "--beam",
-                        "no beam " + Echo.cut(beam) + " in " + file + "; expected one of: "
-                                + String.join(
-                                        ", ",
-                                        input.beams().stream()
-                                                .map(CheckBeam::id)
-                                                .toList()));
+                        "no beam " + Echo.cut(beam) + " in " + file + "; expected one of: " + String.join(", ", ids));
             }
         }
         List<CheckReport> reports = new ArrayList<>();
@@ -75,11 +81,24 @@ final class CheckCommand implements Callable<Integer> {
             }
             reports.add(r);
         }
+        // lines with their bars as built: analysed, verified span by span, and their bars through the
+        // detailing checks, each rule from the section model
+        UnitSystem u = input.settings().units();
+        List<AsBuilt.Checked> checkedLines = new ArrayList<>();
+        for (CheckLine l : lines) {
+            checkedLines.add(AsBuilt.check(
+                    l,
+                    input.settings(),
+                    trail ? Trail.recording() : Trail.off(),
+                    x -> u.number(x, Dim.SPAN) + " " + u.unit(Dim.SPAN)));
+        }
         String text = format == OutputFormat.json
-                ? CheckJson.render(input.settings(), beams, reports, trail)
-                : CheckText.render(input.settings(), beams, reports, trail);
+                ? CheckJson.render(input.settings(), beams, reports, checkedLines, trail)
+                : CheckText.render(input.settings(), beams, reports, checkedLines, trail);
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();
-        return reports.stream().allMatch(CheckReport::ok) ? Main.OK : Main.FAILED;
+        boolean ok = reports.stream().allMatch(CheckReport::ok)
+                && checkedLines.stream().allMatch(AsBuilt.Checked::ok);
+        return ok ? Main.OK : Main.FAILED;
     }
 }

@@ -74,9 +74,9 @@ public final class CutLengths {
     }
 
     /** One bar's cut length (mm): the piece's length, each hooked end its developed hook less its reach. */
-    static double cutLength(Piece p, BarSize bar, CodeEquations code) {
+    static double cutLength(Piece p, BarSize bar, StandardHooks.Bend bend, CodeEquations code) {
         double length = p.to() - p.from();
-        StandardHooks.Hook hook = StandardHooks.of(bar, StandardHooks.Bend.DEG_90, code, Trail.off());
+        StandardHooks.Hook hook = StandardHooks.of(bar, bend, code, Trail.off());
         int hooks = (p.hookStart() ? 1 : 0) + (p.hookEnd() ? 1 : 0);
         return roundUp(length + hooks * (hook.developed() - hook.reach()), code);
     }
@@ -93,9 +93,9 @@ public final class CutLengths {
         Map<Character, Integer> next = new LinkedHashMap<>();
         for (BarRun run : runs) {
             char prefix = run.what().startsWith("skin") ? 'K' : run.face() == Face.TOP ? 'T' : 'B';
-            StandardHooks.Hook hook = StandardHooks.of(run.bar(), StandardHooks.Bend.DEG_90, code, Trail.off());
+            StandardHooks.Hook hook = StandardHooks.of(run.bar(), run.bend(), code, Trail.off());
             for (Piece p : pieces(run)) {
-                double cut = cutLength(p, run.bar(), code);
+                double cut = cutLength(p, run.bar(), run.bend(), code);
                 BarShape shape = BarShape.of(p.hookStart(), p.hookEnd());
                 String key = prefix + "|" + run.bar().designation() + "|" + shape + "|"
                         + String.format(Locale.ROOT, "%.0f", cut) + "|" + run.what();

@@ -46,6 +46,26 @@ public record LineDetail(
         return checks.stream().allMatch(CheckResult::pass) && coverage.covered();
     }
 
+    /** The same detail with other checks. */
+    LineDetail withChecks(List<CheckResult> c) {
+        return new LineDetail(
+                id,
+                line,
+                analysis,
+                runs,
+                zones,
+                schedule,
+                c,
+                cutOffs,
+                coverage,
+                massBySize,
+                mainMass,
+                stirrupMass,
+                steelCost,
+                designSteelCost,
+                stockLength);
+    }
+
     public double totalMass() {
         return mainMass + stirrupMass;
     }
@@ -59,7 +79,22 @@ public record LineDetail(
         if (placed == null) {
             return null;
         }
-        Line line = placed.line();
+        return assemble(r, placed.line(), placed.runs(), placed.checks(), placed.cutOffs(), settings, cost, stock);
+    }
+
+    /**
+     * The runs lapped from stock, cut and marked, with the stirrups per zone, the checks given, the
+     * coverage of the envelope and the masses: a line detailed, or its bars as built.
+     */
+    static LineDetail assemble(
+            LineSpans.Result r,
+            Line line,
+            List<BarRun> placedRuns,
+            List<CheckResult> placedChecks,
+            List<LineDetailer.CutOff> cutOffs,
+            Settings settings,
+            CostModel cost,
+            double stock) {
         int n = line.spanCount();
         List<Double> midSpans = new ArrayList<>();
         List<Double> supports = new ArrayList<>();
@@ -71,7 +106,7 @@ public record LineDetail(
         }
         List<BarRun> runs = new ArrayList<>();
         List<CheckResult> stockChecks = new ArrayList<>();
-        for (BarRun run : placed.runs()) {
+        for (BarRun run : placedRuns) {
             double ld = Anchorage.ldBeforeMinimum(run.bar(), run.face() == barfit.section.Face.TOP, settings);
             boolean top = run.face() == barfit.section.Face.TOP;
             try {
@@ -110,7 +145,7 @@ public record LineDetail(
             designSteel += c.mainBars() + c.stirrups();
         }
         var coverage = DetailedCapacity.check(r, runs, settings);
-        List<CheckResult> checks = new ArrayList<>(placed.checks());
+        List<CheckResult> checks = new ArrayList<>(placedChecks);
         checks.addAll(stockChecks);
         return new LineDetail(
                 r.line().id(),
@@ -120,7 +155,7 @@ public record LineDetail(
                 zones,
                 rows,
                 checks,
-                placed.cutOffs(),
+                cutOffs,
                 coverage,
                 new LinkedHashMap<>(bySize),
                 main,

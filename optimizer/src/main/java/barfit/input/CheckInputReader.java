@@ -33,6 +33,18 @@ public final class CheckInputReader {
         Settings settings = SettingsReader.read(doc, file);
         SectionReader common = new SectionReader(settings);
         UnitSystem u = settings.units();
+        List<CheckLine> lines = new ArrayList<>();
+        if (doc.has("lines")) {
+            List<LineInput> given = LinesReader.read(doc, settings, "bars");
+            List<YFields> entries = doc.listOfMaps("lines", "beam lines");
+            LineBarsReader bars = new LineBarsReader(settings);
+            for (int i = 0; i < given.size(); i++) {
+                lines.add(new CheckLine(given.get(i), bars.read(entries.get(i), given.get(i))));
+            }
+        }
+        if (!doc.has("beams") && !lines.isEmpty()) {
+            return new CheckInput(settings, List.of(), lines);
+        }
         List<YFields> beams = doc.listOfMaps("beams", "beams");
         if (beams.isEmpty()) {
             throw doc.error("beams", "expected at least one beam");
@@ -80,7 +92,7 @@ public final class CheckInputReader {
             BeamSection section = sr.section(shape, layers, stirrups, skin);
             out.add(new CheckBeam(id, b.location(), section, new Demand(mu, vu, tu, compatibility), span));
         }
-        return new CheckInput(settings, out);
+        return new CheckInput(settings, out, lines);
     }
 
     /** The factored torsion {@code Tu} (N·mm), or null where none is given. */

@@ -51,6 +51,11 @@ public final class LinesReader {
 
     /** The lines of a file, or an empty list when it has none. */
     public static List<LineInput> read(YFields doc, Settings settings) {
+        return read(doc, settings, new String[0]);
+    }
+
+    /** As above, a line taking {@code extraKeys} besides its own (a checked line's bars), read by the caller. */
+    static List<LineInput> read(YFields doc, Settings settings, String... extraKeys) {
         if (!doc.has("lines")) {
             return List.of();
         }
@@ -63,8 +68,10 @@ public final class LinesReader {
         }
         List<LineInput> out = new ArrayList<>();
         Map<String, Integer> ids = new HashMap<>();
+        String[] allowed = java.util.Arrays.copyOf(LINE_KEYS, LINE_KEYS.length + extraKeys.length);
+        System.arraycopy(extraKeys, 0, allowed, LINE_KEYS.length, extraKeys.length);
         for (YFields f : lines) {
-            f.allowOnly(LINE_KEYS);
+            f.allowOnly(allowed);
             String id = f.text("id", "the line's name, e.g. L2-B");
             if (id.isBlank()) {
                 throw f.error("id", "expected a name for the line, got an empty one");

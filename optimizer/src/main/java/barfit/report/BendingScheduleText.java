@@ -21,43 +21,7 @@ public final class BendingScheduleText {
                 .append(' ')
                 .append(u.unit(Dim.SPAN))
                 .append(" long, lapped where longer; x from the centre line of support 1\n");
-        for (BarRun r : d.runs()) {
-            out.append("  ")
-                    .append(r.count())
-                    .append(' ')
-                    .append(r.bar().label())
-                    .append(' ')
-                    .append(r.what())
-                    .append(": x ")
-                    .append(u.number(r.start(), Dim.SPAN))
-                    .append(" to ")
-                    .append(u.number(r.end(), Dim.SPAN))
-                    .append(' ')
-                    .append(u.unit(Dim.SPAN));
-            if (r.hookStart() || r.hookEnd()) {
-                out.append(
-                        r.hookStart() && r.hookEnd()
-                                ? ", hooked at both ends"
-                                : r.hookStart() ? ", hooked at its start" : ", hooked at its end");
-            }
-            for (BarRun.Lap lap : r.laps()) {
-                out.append(", ")
-                        .append(lap.kind())
-                        .append(" x ")
-                        .append(u.number(lap.from(), Dim.SPAN))
-                        .append("–")
-                        .append(u.number(lap.to(), Dim.SPAN));
-            }
-            if (r.lengthened() > 0) {
-                out.append("; run ")
-                        .append(u.number(r.lengthened(), Dim.SPAN))
-                        .append(' ')
-                        .append(u.unit(Dim.SPAN))
-                        .append(" further than designed: ")
-                        .append(r.why());
-            }
-            out.append('\n');
-        }
+        runs(d, u, out);
         long failing = d.checks().stream().filter(c -> !c.pass()).count();
         out.append("  detailing checks: ")
                 .append(d.checks().size())
@@ -86,6 +50,61 @@ public final class BendingScheduleText {
                                 : String.format(Locale.ROOT, " (largest Mu/φMn %.2f at x = ", cov.worstRatio())
                                         + u.number(cov.worstX(), Dim.SPAN) + " " + u.unit(Dim.SPAN) + ")")
                 .append('\n');
+        schedule(d, u, out);
+        out.append("  steel priced from the cut lengths: ")
+                .append(Money.amount(d.steelCost()))
+                .append(currency == null || currency.isEmpty() ? "" : " " + currency)
+                .append(" (the design priced its steel at ")
+                .append(Money.amount(d.designSteelCost()))
+                .append(" with the lap factor in place of the laps)\n");
+    }
+
+    /** Each run: count, bar, what, from and to, hooks, laps and what the detailing lengthened. */
+    static void runs(LineDetail d, UnitSystem u, StringBuilder out) {
+        for (BarRun r : d.runs()) {
+            out.append("  ")
+                    .append(r.count())
+                    .append(' ')
+                    .append(r.bar().label())
+                    .append(' ')
+                    .append(r.what())
+                    .append(": x ")
+                    .append(u.number(r.start(), Dim.SPAN))
+                    .append(" to ")
+                    .append(u.number(r.end(), Dim.SPAN))
+                    .append(' ')
+                    .append(u.unit(Dim.SPAN));
+            if (r.hookStart() || r.hookEnd()) {
+                out.append(
+                        r.hookStart() && r.hookEnd()
+                                ? ", hooked at both ends"
+                                : r.hookStart() ? ", hooked at its start" : ", hooked at its end");
+                if (r.bend() == barfit.section.anchorage.StandardHooks.Bend.DEG_180) {
+                    out.append(" (180-degree hooks)");
+                }
+            }
+            for (BarRun.Lap lap : r.laps()) {
+                out.append(", ")
+                        .append(lap.kind())
+                        .append(" x ")
+                        .append(u.number(lap.from(), Dim.SPAN))
+                        .append("–")
+                        .append(u.number(lap.to(), Dim.SPAN));
+            }
+            if (r.lengthened() > 0) {
+                out.append("; run ")
+                        .append(u.number(r.lengthened(), Dim.SPAN))
+                        .append(' ')
+                        .append(u.unit(Dim.SPAN))
+                        .append(" further than designed: ")
+                        .append(r.why());
+            }
+            out.append('\n');
+        }
+    }
+
+    /** The bending schedule's table and the masses by bar size. */
+    static void schedule(LineDetail d, UnitSystem u, StringBuilder out) {
         out.append("  bending schedule:\n");
         TextTable t = new TextTable(false, false, false, true, true, true, true, true, false);
         t.row(
@@ -129,11 +148,5 @@ public final class BendingScheduleText {
                 .append(' ')
                 .append(u.unit(Dim.MASS))
                 .append('\n');
-        out.append("  steel priced from the cut lengths: ")
-                .append(Money.amount(d.steelCost()))
-                .append(currency == null || currency.isEmpty() ? "" : " " + currency)
-                .append(" (the design priced its steel at ")
-                .append(Money.amount(d.designSteelCost()))
-                .append(" with the lap factor in place of the laps)\n");
     }
 }

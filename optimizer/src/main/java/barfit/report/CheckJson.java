@@ -18,6 +18,16 @@ public final class CheckJson {
     private CheckJson() {}
 
     public static String render(Settings settings, List<CheckBeam> beams, List<CheckReport> reports, boolean trail) {
+        return render(settings, beams, reports, List.of(), trail);
+    }
+
+    /** As above, with the lines checked with their bars as built ({@code lines}, when there are any). */
+    public static String render(
+            Settings settings,
+            List<CheckBeam> beams,
+            List<CheckReport> reports,
+            List<barfit.detailing.AsBuilt.Checked> lines,
+            boolean trail) {
         UnitSystem u = settings.units();
         ObjectNode root = Json.object();
         root.put("units", u.name());
@@ -27,6 +37,12 @@ public final class CheckJson {
         ArrayNode arr = root.putArray("beams");
         for (int i = 0; i < beams.size(); i++) {
             arr.add(beam(beams.get(i), reports.get(i), u, trail));
+        }
+        if (!lines.isEmpty()) {
+            ArrayNode ls = root.putArray("lines");
+            for (var l : lines) {
+                ls.add(line(l, u, trail));
+            }
         }
         return Json.write(root);
     }
@@ -120,5 +136,47 @@ public final class CheckJson {
 
     static double round(double v) {
         return new java.math.BigDecimal(v).round(new java.math.MathContext(6)).doubleValue();
+    }
+
+    /** A checked line: its spans' section checks and its detailing (runs, checks, schedule). */
+    static ObjectNode line(barfit.detailing.AsBuilt.Checked c, UnitSystem u, boolean trail) {
+        ObjectNode o = Json.object();
+        o.put("id", c.given().line().id());
+        o.put("ok", c.ok());
+        o.put("failing", LineCheckText.failures(c));
+        ArrayNode parts = o.putArray("spans");
+        for (var p : c.result().parts()) {
+            var report = p.outcome().best().report();
+            ObjectNode po = parts.addObject();
+            po.put("name", p.name());
+            po.put("ok", report.ok());
+            ArrayNode checks = po.putArray("checks");
+            for (var e : report.sections().entrySet()) {
+                for (CheckResult x : e.getValue().checks()) {
+                    ObjectNode xo = check(x, u);
+                    xo.put("at", e.getKey().name().toLowerCase(java.util.Locale.ROOT));
+                    checks.add(xo);
+                }
+            }
+            report.zoneChecks().forEach(x -> checks.add(check(x, u)));
+            report.span().checks().forEach(x -> checks.add(check(x, u)));
+            if (trail) {
+                ObjectNode tr = po.putObject("trail");
+                for (var e : report.sections().entrySet()) {
+                    tr.set(
+                            e.getKey().name().toLowerCase(java.util.Locale.ROOT),
+                            Json.trail(e.getValue().trail(), u));
+                }
+            }
+        }
+        ObjectNode det = BendingScheduleJson.detailing(c.detail(), u);
+        det.remove("steel_cost");
+        det.remove("design_steel_cost");
+        det.set("bending_schedule", BendingScheduleJson.rows(c.detail().schedule(), u));
+        if (trail && c.trail().isOn()) {
+            det.set("trail", Json.trail(c.trail(), u));
+        }
+        o.set("detailing", det);
+        return o;
     }
 }

@@ -25,6 +25,16 @@ public final class CheckText {
     private CheckText() {}
 
     public static String render(Settings settings, List<CheckBeam> beams, List<CheckReport> reports, boolean trail) {
+        return render(settings, beams, reports, List.of(), trail);
+    }
+
+    /** As above, with the lines checked with their bars as built. */
+    public static String render(
+            Settings settings,
+            List<CheckBeam> beams,
+            List<CheckReport> reports,
+            List<barfit.detailing.AsBuilt.Checked> lines,
+            boolean trail) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
         out.append("barfit check — ")
@@ -42,13 +52,29 @@ public final class CheckText {
                 failed++;
             }
         }
-        out.append('\n')
-                .append(beams.size())
-                .append(beams.size() == 1 ? " beam checked: " : " beams checked: ")
-                .append(beams.size() - failed)
-                .append(" pass, ")
-                .append(failed)
-                .append(" fail.\n");
+        for (var l : lines) {
+            out.append('\n');
+            LineCheckText.line(l, u, trail, out);
+        }
+        if (!beams.isEmpty()) {
+            out.append('\n')
+                    .append(beams.size())
+                    .append(beams.size() == 1 ? " beam checked: " : " beams checked: ")
+                    .append(beams.size() - failed)
+                    .append(" pass, ")
+                    .append(failed)
+                    .append(" fail.\n");
+        }
+        if (!lines.isEmpty()) {
+            long bad = lines.stream().filter(l -> !l.ok()).count();
+            out.append(beams.isEmpty() ? "\n" : "")
+                    .append(lines.size())
+                    .append(lines.size() == 1 ? " line checked: " : " lines checked: ")
+                    .append(lines.size() - bad)
+                    .append(" pass, ")
+                    .append(bad)
+                    .append(" fail.\n");
+        }
         return out.toString();
     }
 

@@ -204,6 +204,48 @@ public final class LineSpans {
         return spanBySpan.sameWidth(in, alternatives);
     }
 
+    /** A line as given, analysed: its parts' problems, in segment order, and the analysis. */
+    public record Given(List<SpanProblem> problems, List<String> names, LineResult analysis) {}
+
+    /**
+     * A line with its section as given, analysed as design analyses it (by stiffness, its own weight and
+     * stiffness, the redistribution it asks), each part's problem held at that section: what {@code check}
+     * verifies a line's bars against.
+     */
+    public static Given analyseGiven(LineInput in, Settings settings, SearchSpace space) {
+        LineProblems lp = new LineProblems(settings, space, 2, space.barsPerTwoLegs());
+        double ec = barfit.section.Deflection.ec(settings.materials(), settings.code());
+        int n = in.spans().size();
+        var a = lp.analyse(in, LineProblems.throughout(in.section(), n), ec, in.redistribution());
+        List<SpanProblem> problems = new ArrayList<>();
+        List<String> names = new ArrayList<>();
+        for (SpanProblem p : a.problems()) {
+            problems.add(LineProblems.heldAt(p, in.section()));
+            names.add(LineProblems.partName(LineProblems.segmentOf(p, n), n));
+        }
+        return new Given(problems, names, a.analysis());
+    }
+
+    /** A given line's result, its parts verified as given (no search: one round, settled). */
+    public static Result given(LineInput in, Given g, List<Part> parts) {
+        List<Double> none = new ArrayList<>();
+        for (int j = 0; j <= in.spans().size(); j++) {
+            none.add(Double.NaN);
+        }
+        return new Result(
+                in,
+                parts,
+                1,
+                true,
+                g.analysis(),
+                null,
+                in.redistribution(),
+                none,
+                List.of(),
+                new OneSection(1, 1, false, List.of()),
+                Double.NaN);
+    }
+
     /**
      * The parts' problems with the whole line at one section, analysed with that section's own weight and
      * stiffness: with none redistributed where the search chooses the redistribution (the line asks for

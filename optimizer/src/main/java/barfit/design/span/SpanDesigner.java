@@ -291,6 +291,16 @@ public final class SpanDesigner {
         return new Outcome(p, status, d, List.of(), proof, binding(p, d), null);
     }
 
+    /**
+     * A layout given for this span (a line's bars as built, for {@code check}), verified with its trail and
+     * kept whether it passes or not: status "given", no search, no proof.
+     */
+    public static Outcome asGiven(SpanProblem p, SpanLayout layout, CostModel cost) {
+        SpanReport report = SpanVerifier.verify(p, layout, true);
+        Design d = new Design(layout, layout.cost(p, cost), report, layout.bars(p, cost));
+        return new Outcome(p, "given", d, List.of(), null, List.of(), null);
+    }
+
     /** The span generator of a problem, with this designer's cost model. */
     public SpanGenerator generator(SpanProblem p) {
         return new SpanGenerator(p, cost);
