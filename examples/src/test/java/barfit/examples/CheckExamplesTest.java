@@ -15,8 +15,9 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * Every file in examples/check runs through {@code barfit check}; files named "*fails*" must exit 1. The
- * text and JSON reports equal their golden files byte for byte (see {@link Golden}).
+ * Every file in examples/check runs through {@code barfit check} (beams, or lines with their bars as built);
+ * files named "*fails*" must exit 1. The text and JSON reports equal their golden files byte for byte (see
+ * {@link Golden}).
  */
 class CheckExamplesTest {
     static Stream<Path> examples() throws IOException {
@@ -48,7 +49,8 @@ class CheckExamplesTest {
         assertEquals("", json.err());
         Golden.check(golden(file, ".json"), json.out());
         JsonNode root = new ObjectMapper().readTree(json.out());
-        assertTrue(root.get("beams").size() > 0);
+        JsonNode lines = root.path("lines");
+        assertTrue(root.get("beams").size() > 0 || lines.size() > 0);
         for (JsonNode b : root.get("beams")) {
             for (String key :
                     new String[] {"id", "ok", "phi_Mn", "Mn", "phi", "eps_t", "c", "a", "d", "layers", "checks"}) {
@@ -68,6 +70,15 @@ class CheckExamplesTest {
         boolean allOk = true;
         for (JsonNode b : root.get("beams")) {
             allOk &= b.get("ok").asBoolean();
+        }
+        for (JsonNode l : lines) {
+            for (String key : new String[] {"id", "ok", "failing", "spans", "detailing"}) {
+                assertTrue(l.has(key), "line JSON has " + key);
+            }
+            for (String key : new String[] {"runs", "checks", "capacity", "bending_schedule"}) {
+                assertTrue(l.get("detailing").has(key), "line detailing JSON has " + key);
+            }
+            allOk &= l.get("ok").asBoolean();
         }
         assertEquals(expected == 0, allOk);
     }

@@ -63,7 +63,7 @@ final class LineBarsReader {
             throw f.error(
                     "spans",
                     "the line has " + n + " span" + (n == 1 ? "" : "s") + ", got " + spans.size()
-                            + " entries; expected one per span, left to right");
+                            + "; expected one entry per span, left to right");
         }
         List<LineBars.SpanBars> spanBars = new ArrayList<>();
         for (int i = 0; i < n; i++) {
@@ -88,7 +88,7 @@ final class LineBarsReader {
             throw f.error(
                     "supports",
                     "the line has " + (n + 1) + " supports, got " + supports.size()
-                            + " entries; expected one per support, left to right ({} where no extra top bars)");
+                            + "; expected one entry per support, left to right ({} where no extra top bars)");
         }
         List<LineBars.SupportTop> tops = new ArrayList<>();
         for (int j = 0; j <= n; j++) {
