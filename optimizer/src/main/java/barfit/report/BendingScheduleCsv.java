@@ -2,6 +2,7 @@ package barfit.report;
 
 import barfit.detailing.ScheduleRow;
 import barfit.detailing.SpanSchedule;
+import barfit.schedule.LineDetails;
 import barfit.schedule.ScheduleResult;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -10,9 +11,10 @@ import java.util.Map;
 import java.util.TreeMap;
 
 /**
- * {@code bending-schedule.csv}: one row per bar mark of every beam designed (the schedule designs each
- * beam, and each part of a line, as a span: its bars as listed, straight, hoops and crossties as sized),
- * then the total mass per bar size and of the whole schedule. Lengths in m / ft, masses in kg / lb.
+ * {@code bending-schedule.csv}: one row per bar mark of every beam designed (a beam given alone as a span:
+ * its bars as listed, straight, hoops and crossties as sized; the parts of a line detailed together as
+ * {@code design} details a line, under "line ID": cut-off points, hooks, laps, cut lengths), then the total
+ * mass per bar size and of the whole schedule. Lengths in m / ft, masses in kg / lb.
  */
 public final class BendingScheduleCsv {
     private BendingScheduleCsv() {}
@@ -33,15 +35,25 @@ public final class BendingScheduleCsv {
                 .append('\n');
         Map<String, Double> bySize = new TreeMap<>();
         double total = 0;
+        List<LineDetails.Detailed> lines = LineDetails.of(r);
         for (ScheduleRows.Row schedule : ScheduleRows.rows(r)) {
             ScheduleResult.Beam b = schedule.entry();
             if (!b.feasible()) {
                 continue;
             }
-            for (ScheduleRow row : SpanSchedule.of(
-                    schedule.design().bars(), r.input().settings().code())) {
+            // a part of a detailed line: the line's bars once, under the line's name, at its first part
+            LineDetails.Detailed line = LineDetails.lineOf(lines, b.beam().id());
+            if (line != null && !line.beams().get(0).equals(b.beam().id())) {
+                continue;
+            }
+            String beam = line != null ? "line " + line.line() : b.beam().id();
+            List<ScheduleRow> rows = line != null
+                    ? line.detail().schedule()
+                    : SpanSchedule.of(
+                            schedule.design().bars(), r.input().settings().code());
+            for (ScheduleRow row : rows) {
                 out.append(ScheduleCsv.line(List.of(
-                                b.beam().id(),
+                                beam,
                                 row.mark(),
                                 row.shape().words(),
                                 row.bar().designation(),

@@ -37,6 +37,7 @@ public final class ScheduleInputReader {
             out.add(new ScheduleBeam(b.id(), b.group(), b.location(), Spans.problem(design, b), null, b.sameSection()));
         }
         List<LineInput> lines = read.lines();
+        List<barfit.design.line.LineSpans.Result> designed = List.of();
         if (!lines.isEmpty()) {
             var cost = new barfit.design.CostModel(
                     design.rates(),
@@ -54,6 +55,7 @@ public final class ScheduleInputReader {
                             lines.size(),
                             Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
                             i -> byLine.design(lines.get(i), 0));
+            designed = results;
             for (int i = 0; i < lines.size(); i++) {
                 var one = results.get(i).oneSection();
                 boolean standardised = read.rationalise() != null;
@@ -87,6 +89,7 @@ public final class ScheduleInputReader {
                 design.maxBarSizesPerBeam(),
                 design.barsPerTwoLegs(),
                 out,
-                read.rationalise());
+                read.rationalise(),
+                designed);
     }
 }

@@ -33,7 +33,12 @@ import java.util.Set;
 final class BeamSection {
     private BeamSection() {}
 
-    static void render(ScheduleResult r, ScheduleRows.Row row, String id, StringBuilder out) {
+    static void render(
+            ScheduleResult r,
+            ScheduleRows.Row row,
+            String id,
+            List<barfit.schedule.LineDetails.Detailed> lines,
+            StringBuilder out) {
         ScheduleResult.Beam b = row.entry();
         UnitSystem u = r.input().settings().units();
         String cur = r.input().currency();
@@ -187,43 +192,12 @@ final class BeamSection {
             out.append("<p class=\"warn\">Warning: ").append(Svg.esc(w)).append(".</p>\n");
         }
 
-        out.append("<h4>Bar list and bending schedule</h4>\n<table class=\"grid bars\">\n<thead><tr><th>mark</th>"
-                        + "<th>role</th><th>shape</th><th>count</th>")
-                .append("<th>bar</th><th>length (")
-                .append(u.unit(Dim.SPAN))
-                .append(")</th><th>cut length (")
-                .append(u.unit(Dim.SPAN))
-                .append(")</th><th>mass (")
-                .append(u.unit(Dim.MASS))
-                .append(")</th></tr></thead>\n<tbody>\n");
-        var rows = barfit.detailing.SpanSchedule.of(d.bars(), p.code());
-        double mass = 0;
-        for (int i = 0; i < d.bars().size(); i++) {
-            SpanLayout.BarMark m = d.bars().get(i);
-            var cut = rows.get(i);
-            mass += cut.mass();
-            out.append("<tr><td>")
-                    .append(Svg.esc(m.mark()))
-                    .append("</td><td>")
-                    .append(Svg.esc(Words.role(m)))
-                    .append("</td><td>")
-                    .append(Svg.esc(cut.shape().words()))
-                    .append("</td><td class=\"num\">")
-                    .append(m.count())
-                    .append("</td><td>")
-                    .append(Svg.esc(m.bar().label()))
-                    .append("</td><td class=\"num\">")
-                    .append(u.number(m.length(), Dim.SPAN))
-                    .append("</td><td class=\"num\">")
-                    .append(u.number(cut.length(), Dim.SPAN))
-                    .append("</td><td class=\"num\">")
-                    .append(u.number(cut.mass(), Dim.MASS))
-                    .append("</td></tr>\n");
+        var line = barfit.schedule.LineDetails.lineOf(lines, b.beam().id());
+        if (line != null) {
+            BeamBars.line(line, b.beam().id(), u, out);
+        } else {
+            BeamBars.span(d, p, u, out);
         }
-        out.append("<tr><td colspan=\"7\">total</td><td class=\"num\">")
-                .append(u.number(mass, Dim.MASS))
-                .append("</td></tr>\n");
-        out.append("</tbody>\n</table>\n");
 
         out.append("<h4>Sections</h4>\n");
         double scale = SectionDrawing.scaleFor(l.shape());

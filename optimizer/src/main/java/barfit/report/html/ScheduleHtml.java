@@ -59,12 +59,13 @@ public final class ScheduleHtml {
             SummarySections.standardisation(r, out);
         }
         out.append("<section id=\"beams\">\n<h2>Beams</h2>\n");
+        List<barfit.schedule.LineDetails.Detailed> lines = barfit.schedule.LineDetails.of(r);
         // each beam's block is independent of the others: drawn on every core, joined in schedule order
         List<String> blocks = java.util.stream.IntStream.range(0, rows.size())
                 .parallel()
                 .mapToObj(i -> {
                     StringBuilder b = new StringBuilder(1 << 12);
-                    BeamSection.render(r, rows.get(i), ids.get(i), b);
+                    BeamSection.render(r, rows.get(i), ids.get(i), lines, b);
                     return b.toString();
                 })
                 .toList();
