@@ -97,6 +97,15 @@ class LineCheckCommandTest {
     }
 
     @Test
+    void aLineIsPickedByItsId() throws IOException {
+        Path f = write("picked.yaml", 0);
+        assertEquals(0, Cli.run("check", f.toString(), "--beam", "M-2").exit());
+        Cli none = Cli.run("check", f.toString(), "--beam", "M-9");
+        assertEquals(2, none.exit());
+        assertTrue(none.err().contains("expected one of: M-2"), none.err());
+    }
+
+    @Test
     void topBarsCutShortFailTheirReach() throws IOException {
         // support 2's extra top bars into span 1: where 9.7.3 asks them to end, less 300 mm
         LineDetailer.CutOff need = detail.cutOffs().stream()
