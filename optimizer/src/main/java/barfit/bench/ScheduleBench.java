@@ -35,7 +35,14 @@ public final class ScheduleBench {
             double gap,
             double peakHeapMb,
             double peakLiveMb,
-            int threads) {}
+            int threads,
+            double cpuSeconds,
+            double writeSeconds) {
+        /** CPU time over wall time of the schedule, designed and its files rendered: 2 is both cores busy. */
+        public double cpuRatio() {
+            return cpuSeconds / (seconds + writeSeconds);
+        }
+    }
 
     /** The most heap still in use just after any collection: what the run really holds, garbage aside. */
     private static final class LiveHeap implements javax.management.NotificationListener {
@@ -106,9 +113,18 @@ public final class ScheduleBench {
             // warm-up on a small schedule so the figures are of compiled code
             solve(dir.resolve("warm"), 30, seed + 99, null, threads);
             write(dir.resolve("plain"), beams, seed, null);
+            long cpu0 = processCpuNanos();
             long t0 = System.nanoTime();
             ScheduleResult plain = solve(dir.resolve("plain"), beams, seed, null, threads);
             double plainS = (System.nanoTime() - t0) / 1e9;
+            // the files the command writes, rendered as it renders them (not written to disk)
+            long w0 = System.nanoTime();
+            long chars = 0;
+            for (String text : barfit.report.ScheduleFiles.render(plain).values()) {
+                chars += text.length();
+            }
+            double writeS = (System.nanoTime() - w0) / 1e9;
+            double cpuS = (processCpuNanos() - cpu0) / 1e9;
             long feasible =
                     plain.beams().stream().filter(ScheduleResult.Beam::feasible).count();
             out.printf(
@@ -121,6 +137,15 @@ public final class ScheduleBench {
                     1000 * plainS / beams,
                     feasible,
                     plain.totalCost());
+            out.printf(
+                    Locale.ROOT,
+                    "  its files (schedule.csv, bending-schedule.csv, schedule.json, report.html: %.1f MB of text) "
+                            + "rendered in %.2f s; CPU %.2f s over %.2f s wall, %.2f cores busy%n",
+                    chars / 1048576.0,
+                    writeS,
+                    cpuS,
+                    plainS + writeS,
+                    cpuS / (plainS + writeS));
             String rationalise = "rationalise: {max_section_sizes: " + k + ", max_bar_sizes: " + m + "}\n";
             Path rdir = dir.resolve("rationalised");
             write(rdir, ratBeams, seed + 1, rationalise);
@@ -164,7 +189,20 @@ public final class ScheduleBench {
                     peak,
                     Runtime.getRuntime().maxMemory() / 1048576.0);
             return new Figures(
-                    beams, plainS, ratBeams, k, m, mainS, ratS, p.status().name(), p.gap(), peak, liveMb, threads);
+                    beams,
+                    plainS,
+                    ratBeams,
+                    k,
+                    m,
+                    mainS,
+                    ratS,
+                    p.status().name(),
+                    p.gap(),
+                    peak,
+                    liveMb,
+                    threads,
+                    cpuS,
+                    writeS);
         } finally {
             live.unwatch();
             delete(dir);
@@ -203,6 +241,12 @@ public final class ScheduleBench {
                 in.settings().detailing().cover(),
                 in.settings().units().code());
         return new ScheduleSolver(cost, new SolverOptions(60, 1, 1), threads, progress).solve(in);
+    }
+
+    /** CPU time of the whole process (every thread, the collector's too), ns. */
+    private static long processCpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean) ManagementFactory.getOperatingSystemMXBean())
+                .getProcessCpuTime();
     }
 
     private static void resetPeaks() {

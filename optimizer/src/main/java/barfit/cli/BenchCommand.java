@@ -158,7 +158,8 @@ final class BenchCommand implements Callable<Integer> {
                     Locale.ROOT,
                     "{\"schedule_beams\": %d, \"schedule_seconds\": %.3f, \"rationalised_beams\": %d, "
                             + "\"k\": %d, \"m\": %d, \"proven_seconds\": %.3f, \"rationalised_seconds\": %.3f, \"status\": \"%s\", \"gap\": %.6f, "
-                            + "\"peak_heap_mb\": %.0f, \"peak_live_heap_mb\": %.0f, \"threads\": %d}%n",
+                            + "\"peak_heap_mb\": %.0f, \"peak_live_heap_mb\": %.0f, \"threads\": %d, "
+                            + "\"schedule_write_seconds\": %.3f, \"schedule_cpu_ratio\": %.2f}%n",
                     f.beams(),
                     f.seconds(),
                     f.rationalisedBeams(),
@@ -170,7 +171,9 @@ final class BenchCommand implements Callable<Integer> {
                     f.gap(),
                     f.peakHeapMb(),
                     f.peakLiveMb(),
-                    f.threads());
+                    f.threads(),
+                    f.writeSeconds(),
+                    f.cpuRatio());
             out.flush();
             return Main.OK;
         }

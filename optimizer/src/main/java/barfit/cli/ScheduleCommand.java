@@ -4,7 +4,6 @@ import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
 import barfit.design.SolverOptions;
-import barfit.report.ScheduleCsv;
 import barfit.report.ScheduleJson;
 import barfit.report.ScheduleText;
 import barfit.schedule.ScheduleInput;
@@ -18,7 +17,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
@@ -158,17 +156,7 @@ final class ScheduleCommand implements Callable<Integer> {
      * Returns the names of the files written.
      */
     private List<String> write(ScheduleResult r) {
-        Map<String, String> files = new LinkedHashMap<>();
-        // the report, the largest, is drawn while the others are written out (it uses every core itself)
-        var report =
-                java.util.concurrent.CompletableFuture.supplyAsync(() -> barfit.report.html.ScheduleHtml.render(r));
-        files.put("schedule.csv", ScheduleCsv.render(r));
-        files.put("bending-schedule.csv", barfit.report.BendingScheduleCsv.render(r));
-        files.put("schedule.json", ScheduleJson.render(r));
-        files.put("report.html", report.join());
-        if (!r.standardisation().isEmpty()) { // the curve is computed only when the schedule is rationalised
-            files.put("standardisation.svg", barfit.report.html.StandardisationPlot.svg(r));
-        }
+        Map<String, String> files = barfit.report.ScheduleFiles.render(r);
         List<Path> temps = new ArrayList<>();
         try {
             Files.createDirectories(out);
