@@ -58,6 +58,9 @@ public final class Words {
                 "ld of 25.4.2.4 governs, past mid-span: the extra bars of the two supports overlap "
                         + "over the middle";
             case LD -> "ld of 25.4.2.4 governs over 0.3 × span";
+            case TORSION_ZONES ->
+                "under torsion, to the far end of the support's stirrup zones, so that the longitudinal steel "
+                        + "counted there runs over them";
         };
     }
 

@@ -318,7 +318,7 @@ final class SharedSupports {
                             m.top().continuous(),
                             m.legsNeeded(),
                             m.counts().get(0),
-                            p.bottomAnchored() ? m.bottom() : null);
+                            p.bottomCoupled() ? m.bottom() : null);
                     Map<List<Integer>, SupportOption> lefts = p.leftSupport()
                             ? leftMemo.computeIfAbsent(
                                     fit, k -> cheapestByArrangement(g, fs.lefts(), m, SpanProblem.Place.LEFT))

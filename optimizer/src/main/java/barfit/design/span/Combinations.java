@@ -99,7 +99,7 @@ final class Combinations {
 
     /** The bottom bars a support option must have been designed with for this mid-span option (null: none). */
     BottomBars anchored(MidOption m) {
-        return p.bottomAnchored() ? m.bottom() : null;
+        return p.bottomCoupled() ? m.bottom() : null;
     }
 
     /**

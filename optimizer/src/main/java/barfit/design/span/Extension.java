@@ -30,10 +30,34 @@ public record Extension(double length, double ld, Governs governs) {
         /** ld, past mid-span of a span continuous at both ends: the two supports' extras overlap. */
         LD_PAST_MID_SPAN,
         /** ld, longer than the span: the extras run through it and past the far face. */
-        LD_BEYOND_SPAN
+        LD_BEYOND_SPAN,
+        /**
+         * Under torsion, to the far end of the support's stirrup zones, so that the longitudinal steel those
+         * zones count at the support is there over their length.
+         */
+        TORSION_ZONES
     }
 
     public static Extension of(SpanProblem p, double b, double h, Detailing det, BarSize top) {
+        Extension plain = plain(p, b, h, det, top);
+        double reach = p.cantilever() || !p.hasTorsion() ? 0 : torsionReach(p);
+        return reach > plain.length() ? new Extension(reach, plain.ld(), Governs.TORSION_ZONES) : plain;
+    }
+
+    /** How far the stirrup zones designed with a support section reach from its face (the farther side). */
+    private static double torsionReach(SpanProblem p) {
+        double reach = 0;
+        for (SpanProblem.Zone z : p.zones()) {
+            if (z.section() == SpanProblem.Place.LEFT && p.leftSupport()) {
+                reach = Math.max(reach, z.to());
+            } else if (z.section() == SpanProblem.Place.RIGHT && p.rightSupport()) {
+                reach = Math.max(reach, p.span() - z.from());
+            }
+        }
+        return reach;
+    }
+
+    private static Extension plain(SpanProblem p, double b, double h, Detailing det, BarSize top) {
         double ld = developmentLength(p, b, h, det, top);
         if (p.cantilever()) {
             return new Extension(p.span() + ld, ld, Governs.CANTILEVER);

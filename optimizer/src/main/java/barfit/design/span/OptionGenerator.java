@@ -177,19 +177,17 @@ final class OptionGenerator {
                             double as = search.tensionArea();
                             // legs: the office's rule, the ties round top bars relied on (9.7.6.4), and no more
                             // than the outer bottom layer and the continuous top bars hold (25.7.1.2, 25.7.1.3)
+                            BeamSection midSection = ctx.sections().mid(f, shape, top, bottom, split);
                             StirrupRules.TieDemand ties = midZones.isEmpty()
                                     ? StirrupRules.TieDemand.NONE
-                                    : StirrupRules.ties(
-                                            ctx.sections().mid(f, shape, top, bottom, split),
-                                            Bending.SAGGING,
-                                            p.mMid());
+                                    : StirrupRules.ties(midSection, Bending.SAGGING, p.mMid());
                             if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }
                             int legs = Math.max(p.legsFor(Math.max(split[0], top.continuous())), ties.minLegs());
                             int legsHeld = Math.min(split[0], top.continuous());
-                            ZoneStirrups.Choice stirrups =
-                                    zoneStirrups.cheapest(midZones, legs, legsHeld, ties.maxSpacing(), d, as);
+                            ZoneStirrups.Choice stirrups = zoneStirrups.cheapest(
+                                    midZones, legs, legsHeld, ties.maxSpacing(), d, as, midSection);
                             if (stirrups != null) {
                                 double stirrupCost = stirrups.cost();
                                 out.add(new MidOption(
@@ -214,8 +212,10 @@ final class OptionGenerator {
                             }
                         }
                         // more bars only pay through cheaper stirrups (rho_w, fewer legs) or, below Table 9.3.1.1,
-                        // stiffness: stop once one more bar costs more than all the stirrups could
+                        // stiffness, or under torsion as longitudinal steel: stop once one more bar costs more
+                        // than all the stirrups could
                         if (!f.deflection()
+                                && !p.hasTorsion()
                                 && !Double.isNaN(firstStirrups)
                                 && ctx.barCost(bottom, n + 1 - fewest, p.span()) >= bounds.stirrupCeiling()) {
                             break;
@@ -225,7 +225,7 @@ final class OptionGenerator {
                         // at least the legs of its fullest possible first layer; one found already that is
                         // no dearer and asks no more legs of the supports is as good in every combination
                         if (!f.deflection()
-                                && !p.bottomAnchored()
+                                && !p.bottomCoupled()
                                 && dominated(
                                         cheapestByLegs,
                                         p.legsFor((n + layers) / layers),
@@ -304,7 +304,9 @@ final class OptionGenerator {
             double most = limit.applyAsDouble(top);
             for (BottomBars bottom : bottoms) {
                 List<BeamSection.BarGroup> bottomGroups = bottom == null ? List.of() : bottom.groups();
-                search.compression(bottomGroups);
+                // only anchored bottom bars are compression steel; under torsion they are round the hoop too
+                List<BeamSection.BarGroup> compression = p.bottomAnchored() ? bottomGroups : List.of();
+                search.compression(compression);
                 for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
                     if (!framePasses(top, bottom == null ? top : bottom.bar(), layers)) {
                         break;
@@ -336,6 +338,7 @@ final class OptionGenerator {
                                     search.tensionArea(),
                                     ctx.barCost(top, n, ext),
                                     bottom,
+                                    compression,
                                     bottomGroups,
                                     zonesHere));
                         }
@@ -356,6 +359,7 @@ final class OptionGenerator {
             double as,
             double bars,
             BottomBars bottom,
+            List<BeamSection.BarGroup> compression,
             List<BeamSection.BarGroup> bottomGroups,
             List<Integer> zonesHere) {
         if (zonesHere.isEmpty()) {
@@ -364,7 +368,9 @@ final class OptionGenerator {
         }
         // ties round bottom bars relied on here (9.7.6.4); the legs the top bars hold
         StirrupRules.TieDemand ties =
-                StirrupRules.ties(ctx.sections().support(f, shape, top, split, bottomGroups), Bending.HOGGING, mu);
+                StirrupRules.ties(ctx.sections().support(f, shape, top, split, compression), Bending.HOGGING, mu);
+        // every bar at the support, for the torsion checks
+        BeamSection physical = ctx.sections().support(f, shape, top, split, bottomGroups);
         if (!ties.sizeOk(f.stirrupBar().diameter())) {
             return List.of();
         }
@@ -382,7 +388,7 @@ final class OptionGenerator {
                     continue;
                 }
                 ZoneStirrups.Choice stirrups =
-                        zoneStirrups.cheapest(zonesHere, fewestLegs, mostLegs, ties.maxSpacing(), d, as);
+                        zoneStirrups.cheapest(zonesHere, fewestLegs, mostLegs, ties.maxSpacing(), d, as, physical);
                 if (stirrups == null || !seen.add(stirrups.stirrups())) {
                     continue;
                 }

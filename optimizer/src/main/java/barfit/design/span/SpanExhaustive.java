@@ -70,87 +70,94 @@ public final class SpanExhaustive {
             double h = cell.height();
             BarSize stirrupBar = cell.stirrupBar();
             Detailing det = cell.detailing();
-            SkinBars skin = SectionLayout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-            Map<String, Boolean> sectionOk = new HashMap<>();
-            Map<String, Stirrups> zoneMemo = new HashMap<>();
-            for (BarSize topBar : p.space().barSizes()) {
-                int topFit = BarSpacing.maxBars(b, det, topBar, p.materials(), p.code());
-                for (BarSize bottomBar : p.space().barSizes()) {
-                    if (!topBar.equals(bottomBar) && p.maxBarSizes() < 2) {
-                        continue;
-                    }
-                    int bottomFit = BarSpacing.maxBars(b, det, bottomBar, p.materials(), p.code());
-                    for (List<Integer> bottom : vectors(p.space().maxLayers(), bottomFit)) {
-                        int mostContinuous = p.cantilever() ? 2 : topFit;
-                        for (int continuous = 2; continuous <= mostContinuous; continuous++) {
-                            for (List<Integer> left :
-                                    p.leftSupport() ? vectors(p.space().maxLayers(), topFit) : singletonNull()) {
-                                if (left != null && left.get(0) < continuous) {
-                                    continue;
-                                }
-                                for (List<Integer> right :
-                                        p.rightSupport() ? vectors(p.space().maxLayers(), topFit) : singletonNull()) {
-                                    if (right != null && right.get(0) < continuous) {
+            // under torsion every side-bar option of the section search
+            for (SkinBars skin :
+                    SectionLayout.skinOptions(h, p.space().skinBar(), det, p.materials(), p.code(), p.hasTorsion())) {
+                Map<String, Boolean> sectionOk = new HashMap<>();
+                Map<String, Stirrups> zoneMemo = new HashMap<>();
+                for (BarSize topBar : p.space().barSizes()) {
+                    int topFit = BarSpacing.maxBars(b, det, topBar, p.materials(), p.code());
+                    for (BarSize bottomBar : p.space().barSizes()) {
+                        if (!topBar.equals(bottomBar) && p.maxBarSizes() < 2) {
+                            continue;
+                        }
+                        int bottomFit = BarSpacing.maxBars(b, det, bottomBar, p.materials(), p.code());
+                        for (List<Integer> bottom : vectors(p.space().maxLayers(), bottomFit)) {
+                            int mostContinuous = p.cantilever() ? 2 : topFit;
+                            for (int continuous = 2; continuous <= mostContinuous; continuous++) {
+                                for (List<Integer> left :
+                                        p.leftSupport() ? vectors(p.space().maxLayers(), topFit) : singletonNull()) {
+                                    if (left != null && left.get(0) < continuous) {
                                         continue;
                                     }
-                                    double extL = left == null
-                                            ? 0
-                                            : Extension.of(p, b, h, det, topBar).length();
-                                    double extR = right == null
-                                            ? 0
-                                            : Extension.of(p, b, h, det, topBar).length();
-                                    // stirrups: the cheapest passing option per zone for these bars
-                                    SpanLayout trial = new SpanLayout(
-                                            b,
-                                            h,
-                                            p.flange(),
-                                            stirrupBar,
-                                            skin,
-                                            topBar,
-                                            continuous,
-                                            left,
-                                            right,
-                                            bottomBar,
-                                            bottom,
-                                            fill(zones.size(), new Stirrups(stirrupBar, 2, 100)),
-                                            extL,
-                                            extR);
-                                    List<Stirrups> st = new ArrayList<>();
-                                    for (int z = 0; z < zones.size(); z++) {
-                                        Stirrups s = zoneStirrups(p, trial, z, zoneMemo);
-                                        if (s == null) {
-                                            break;
+                                    for (List<Integer> right : p.rightSupport()
+                                            ? vectors(p.space().maxLayers(), topFit)
+                                            : singletonNull()) {
+                                        if (right != null && right.get(0) < continuous) {
+                                            continue;
                                         }
-                                        st.add(s);
+                                        double extL = left == null
+                                                ? 0
+                                                : Extension.of(p, b, h, det, topBar)
+                                                        .length();
+                                        double extR = right == null
+                                                ? 0
+                                                : Extension.of(p, b, h, det, topBar)
+                                                        .length();
+                                        // stirrups: the cheapest passing option per zone for these bars
+                                        SpanLayout trial = new SpanLayout(
+                                                b,
+                                                h,
+                                                p.flange(),
+                                                stirrupBar,
+                                                skin,
+                                                topBar,
+                                                continuous,
+                                                left,
+                                                right,
+                                                bottomBar,
+                                                bottom,
+                                                fill(zones.size(), new Stirrups(stirrupBar, 2, 100)),
+                                                extL,
+                                                extR);
+                                        List<Stirrups> st = new ArrayList<>();
+                                        for (int z = 0; z < zones.size(); z++) {
+                                            Stirrups s = zoneStirrups(p, trial, z, zoneMemo);
+                                            if (s == null) {
+                                                break;
+                                            }
+                                            st.add(s);
+                                        }
+                                        if (st.size() < zones.size()) {
+                                            continue;
+                                        }
+                                        SpanLayout lay = new SpanLayout(
+                                                b,
+                                                h,
+                                                p.flange(),
+                                                stirrupBar,
+                                                skin,
+                                                topBar,
+                                                continuous,
+                                                left,
+                                                right,
+                                                bottomBar,
+                                                bottom,
+                                                st,
+                                                extL,
+                                                extR);
+                                        combos++;
+                                        if (!sectionsOk(p, lay, sectionOk)) {
+                                            continue;
+                                        }
+                                        if (!SpanVerifier.verify(p, lay, false).ok()) {
+                                            continue;
+                                        }
+                                        passing.accept(
+                                                lay,
+                                                CostModel.units(
+                                                        lay.cost(p, cost).total()));
                                     }
-                                    if (st.size() < zones.size()) {
-                                        continue;
-                                    }
-                                    SpanLayout lay = new SpanLayout(
-                                            b,
-                                            h,
-                                            p.flange(),
-                                            stirrupBar,
-                                            skin,
-                                            topBar,
-                                            continuous,
-                                            left,
-                                            right,
-                                            bottomBar,
-                                            bottom,
-                                            st,
-                                            extL,
-                                            extR);
-                                    combos++;
-                                    if (!sectionsOk(p, lay, sectionOk)) {
-                                        continue;
-                                    }
-                                    if (!SpanVerifier.verify(p, lay, false).ok()) {
-                                        continue;
-                                    }
-                                    passing.accept(
-                                            lay,
-                                            CostModel.units(lay.cost(p, cost).total()));
                                 }
                             }
                         }
@@ -233,6 +240,23 @@ public final class SpanExhaustive {
                     var s2 = l.section(p, zone.section(), st);
                     var fr = barfit.section.Flexure.analyse(s2, SpanLayout.bending(p, zone.section()));
                     ok = barfit.section.SectionChecks.minimumStirrupsPass(s2, fr.d(), fr.tensionSteelArea());
+                }
+                // under torsion every torsion check of the zone, on every bar at its section
+                var torsion = SpanVerifier.torsionDemand(
+                        p,
+                        zone,
+                        vu,
+                        l.width(),
+                        barfit.section.SectionChecks.shearDepth(trial, SpanLayout.bending(p, zone.section())));
+                if (ok && torsion != null) {
+                    ok = barfit.section.TorsionZone.checks(
+                                    l.physicalSection(p, zone.section(), st),
+                                    torsion,
+                                    new barfit.section.Span(p.span(), p.ends()),
+                                    zone.name(),
+                                    Trail.off())
+                            .stream()
+                            .allMatch(CheckResult::pass);
                 }
                 double c = SpanLayout.stirrupSets(zone.length(), s)
                         * cost.stirrupSetLength(l.width(), l.height(), st.bar(), legs)

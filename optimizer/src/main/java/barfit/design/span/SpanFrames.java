@@ -42,20 +42,24 @@ final class SpanFrames {
             if (deflection && p.service() == null) {
                 continue; // below Table 9.3.1.1 and nothing to compute deflection from
             }
-            SkinBars skin = SectionLayout.skinFor(h, p.space().skinBar(), det, p.materials(), p.code());
-            double frameCost = cost.frame(b, h, p.flange()).total() * spanMetres
-                    + (skin == null
-                            ? 0
-                            : ctx.barCost(skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()), p.span()));
-            double extLeft =
-                    p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-            double extRight =
-                    p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
-            double lowerBound = frameCost
-                    + steelLowerBound(p, b, h, det, smallest, steelRate)
-                    + stirrupLowerBound(ctx, b, h, cell.stirrupBar());
-            out.add(new SpanFrame(
-                    b, h, cell.stirrupBar(), det, skin, frameCost, lowerBound, deflection, extLeft, extRight));
+            // under torsion side bars may be the cheapest longitudinal steel round the hoop: each option a frame
+            for (SkinBars skin :
+                    SectionLayout.skinOptions(h, p.space().skinBar(), det, p.materials(), p.code(), p.hasTorsion())) {
+                double frameCost = cost.frame(b, h, p.flange()).total() * spanMetres
+                        + (skin == null
+                                ? 0
+                                : ctx.barCost(
+                                        skin.bar(), 2 * SectionLayout.skinBarsPerFace(h, skin.spacing()), p.span()));
+                double extLeft =
+                        p.leftSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
+                double extRight =
+                        p.rightSupport() ? Extension.of(p, b, h, det, smallest).length() : 0;
+                double lowerBound = frameCost
+                        + steelLowerBound(p, b, h, det, smallest, steelRate)
+                        + stirrupLowerBound(ctx, b, h, cell.stirrupBar());
+                out.add(new SpanFrame(
+                        b, h, cell.stirrupBar(), det, skin, frameCost, lowerBound, deflection, extLeft, extRight));
+            }
         }
         out.sort(Comparator.comparingDouble(SpanFrame::lowerBound)
                 .thenComparingDouble(SpanFrame::b)

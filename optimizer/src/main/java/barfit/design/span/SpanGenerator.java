@@ -325,7 +325,7 @@ public final class SpanGenerator {
             return null; // cover, flange width or skin rules fail for this frame whatever the bars
         }
         List<TopOption> tops = options.tops();
-        if (p.bottomAnchored() || f.deflection()) {
+        if (p.bottomCoupled() || f.deflection()) {
             return everything(options, frameBounds, tops, toBeat);
         }
         // supports first (they do not depend on the other options), then the mid-span options for two
@@ -416,7 +416,7 @@ public final class SpanGenerator {
         // so the mid-span search knows the least the supports add
         List<SupportOption> knownLeft = null;
         List<SupportOption> knownRight = null;
-        if (!p.bottomAnchored()) {
+        if (!p.bottomCoupled()) {
             knownLeft = p.leftSupport()
                     ? options.supports(SpanProblem.Place.LEFT, p.mLeft(), limit, NO_BOTTOM_BARS)
                     : List.of();
@@ -424,12 +424,12 @@ public final class SpanGenerator {
                     ? options.supports(SpanProblem.Place.RIGHT, p.mRight(), limit, NO_BOTTOM_BARS)
                     : List.of();
         }
-        if (f.deflection() && !p.bottomAnchored()) {
+        if (f.deflection() && !p.bottomCoupled()) {
             return belowMinimumDepth(options, frameBounds, tops, toBeat, knownLeft, knownRight);
         }
         List<MidOption> mids = options.mids(tops, midLimit(f, toBeat, knownLeft, knownRight));
         List<BottomBars> bottoms;
-        if (p.bottomAnchored()) {
+        if (p.bottomCoupled()) {
             Set<BottomBars> distinct = new LinkedHashSet<>();
             for (MidOption m : mids) {
                 distinct.add(m.bottom());

@@ -38,7 +38,58 @@ public record SpanProblem(
         int maxBarSizes,
         int barsPerTwoLegs,
         SpanChecks.ServiceMoments analysedService,
-        ShearDiagram shearDiagram) {
+        ShearDiagram shearDiagram,
+        SpanTorsion torsion) {
+
+    /** A span of a line, without torsion. */
+    public SpanProblem(
+            String id,
+            Materials materials,
+            Detailing detailing,
+            CodeEquations code,
+            SearchSpace space,
+            double span,
+            EndCondition ends,
+            Double mLeft,
+            Double mMid,
+            Double mRight,
+            Double vLeft,
+            Double vRight,
+            SpanChecks.ServiceLoads service,
+            SpanChecks.Limits limits,
+            Double maxDepth,
+            Double fixedWidth,
+            Flange flange,
+            boolean bottomAnchored,
+            int maxBarSizes,
+            int barsPerTwoLegs,
+            SpanChecks.ServiceMoments analysedService,
+            ShearDiagram shearDiagram) {
+        this(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
+                shearDiagram,
+                null);
+    }
 
     /** A span whose demand is given as moments and shears at its critical sections (no analysis of its own). */
     public SpanProblem(
@@ -84,6 +135,7 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 null,
+                null,
                 null);
     }
 
@@ -111,7 +163,8 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 analysed,
-                diagram);
+                diagram,
+                torsion);
     }
 
     /**
@@ -140,9 +193,40 @@ public record SpanProblem(
      * from the supports ({@code line} set) for the largest shear of the span's shear line over its length,
      * which depends on the d of the section the zone is designed with, and for at least {@code floor}.
      */
-    public record Zone(String name, double from, double to, Double vu, Place section, ShearAlong line, double floor) {
+    public record Zone(
+            String name,
+            double from,
+            double to,
+            Double vu,
+            Place section,
+            ShearAlong line,
+            double floor,
+            SpanTorsion torsion,
+            double span) {
         public Zone(String name, double from, double to, Double vu, Place section) {
             this(name, from, to, vu, section, null, 0);
+        }
+
+        public Zone(String name, double from, double to, Double vu, Place section, ShearAlong line, double floor) {
+            this(name, from, to, vu, section, line, floor, null, 0);
+        }
+
+        /** The same zone under the torsion of a span {@code span} long. */
+        Zone withTorsion(SpanTorsion t, double spanLength) {
+            return new Zone(name, from, to, vu, section, line, floor, t, spanLength);
+        }
+
+        /**
+         * The design torsion of the zone (N·mm) in a web {@code bt} wide at effective depth d: the largest
+         * within bt + d of it ({@link SpanTorsion#overZone}); 0 without torsion.
+         */
+        public double tu(double bt, double d) {
+            return torsion == null ? 0 : torsion.overZone(span, from, to, bt, d);
+        }
+
+        /** Whether the span gives this zone any torsion to check. */
+        public boolean torsionGiven() {
+            return torsion != null && torsion.any();
         }
 
         public double length() {
@@ -227,6 +311,59 @@ public record SpanProblem(
      * stirrup legs of a zone hold the bars of the section it is designed with.
      */
     public List<Zone> zones() {
+        List<Zone> plain = plainZones();
+        if (!hasTorsion()) {
+            return plain;
+        }
+        List<Zone> out = new ArrayList<>();
+        for (Zone z : plain) {
+            out.add(z.withTorsion(torsion, span));
+        }
+        return out;
+    }
+
+    /**
+     * Whether a support option is designed for given bottom bars: where they are anchored (compression
+     * steel there) or under torsion (longitudinal steel round the hoop there, anchored or not).
+     */
+    public boolean bottomCoupled() {
+        return bottomAnchored || hasTorsion();
+    }
+
+    /** Whether the span carries torsion to design for. */
+    public boolean hasTorsion() {
+        return torsion != null && torsion.any();
+    }
+
+    /** The same span under the given torsion (null: none). */
+    public SpanProblem withTorsion(SpanTorsion t) {
+        return new SpanProblem(
+                id,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
+                shearDiagram,
+                t);
+    }
+
+    private List<Zone> plainZones() {
         if (shearDiagram != null) {
             return zonesFrom(shearDiagram);
         }
@@ -332,7 +469,8 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 analysedService,
-                shearDiagram);
+                shearDiagram,
+                torsion);
     }
 
     public SpanProblem withSpace(SearchSpace s) {
@@ -358,7 +496,8 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 analysedService,
-                shearDiagram);
+                shearDiagram,
+                torsion);
     }
 
     /**
@@ -388,7 +527,8 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 analysedService,
-                shearDiagram);
+                shearDiagram,
+                torsion);
     }
 
     public SpanProblem withFixedWidth(Double w) {
@@ -414,7 +554,8 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 analysedService,
-                shearDiagram);
+                shearDiagram,
+                torsion);
     }
 
     public SpanProblem withLimits(SpanChecks.Limits l) {
@@ -440,7 +581,8 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 analysedService,
-                shearDiagram);
+                shearDiagram,
+                torsion);
     }
 
     public SpanProblem scaled(double moments, double shears) {
@@ -466,7 +608,8 @@ public record SpanProblem(
                 maxBarSizes,
                 barsPerTwoLegs,
                 analysedService == null ? null : analysedService.times(moments),
-                shearDiagram == null ? null : shearDiagram.times(shears));
+                shearDiagram == null ? null : shearDiagram.times(shears),
+                torsion);
     }
 
     private static Double mul(Double v, double k) {

@@ -48,7 +48,9 @@ final class SpanSections {
                 shape,
                 s.bar(),
                 s.counts(),
-                s.bottom() == null ? List.of() : s.bottom().groups());
+                s.bottom() == null || !p.bottomAnchored()
+                        ? List.of()
+                        : s.bottom().groups());
     }
 
     /** A support section of top bars split over layers, the bottom bars counted there below (for its ties). */

@@ -169,7 +169,7 @@ public final class SpanSelection {
         }
         model.addLessOrEqual(most, held);
         // bottom bars counted as compression steel: the support option was built for those bottom bars
-        if (p.bottomAnchored()) {
+        if (p.bottomCoupled()) {
             Map<BottomBars, LinearExprBuilder[]> byKey = new LinkedHashMap<>();
             for (int i = 0; i < opts.size(); i++) {
                 byKey

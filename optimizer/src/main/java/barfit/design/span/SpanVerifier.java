@@ -10,6 +10,7 @@ import barfit.section.Span;
 import barfit.section.SpanChecks;
 import barfit.section.StirrupRules;
 import barfit.section.Stirrups;
+import barfit.section.TorsionZone;
 import barfit.section.trail.Q;
 import barfit.section.trail.Trail;
 import java.util.ArrayList;
@@ -46,6 +47,11 @@ public final class SpanVerifier {
             Double vu = z.vu(SectionChecks.shearDepth(s, bending));
             zoneShears.add(vu);
             zoneChecks.addAll(SectionChecks.shearZone(s, bending, vu == null ? 0 : vu, z.name(), zt));
+            Demand torsion = torsionDemand(p, z, vu, l.width(), SectionChecks.shearDepth(s, bending));
+            if (torsion != null) {
+                zoneChecks.addAll(
+                        TorsionZone.checks(l.physicalSection(p, z.section(), st), torsion, span, z.name(), zt));
+            }
             zoneChecks.addAll(StirrupRules.checks(
                     s,
                     l.physicalSection(p, z.section(), st),
@@ -114,6 +120,22 @@ public final class SpanVerifier {
                         p.limits(),
                         Trail.off())
                 .ok();
+    }
+
+    /**
+     * The demand a zone's torsion checks take: the moment of its section, its design shear and its design
+     * torsion in a web {@code bt} wide at effective depth d; null where the zone has no torsion.
+     */
+    public static Demand torsionDemand(SpanProblem p, SpanProblem.Zone z, Double vu, double bt, double d) {
+        if (!z.torsionGiven()) {
+            return null;
+        }
+        double tu = z.tu(bt, d);
+        if (tu <= 0) {
+            return null;
+        }
+        return new Demand(
+                SpanLayout.momentAt(p, z.section()), vu, tu, p.torsion().compatibility());
     }
 
     private static CheckReport check(

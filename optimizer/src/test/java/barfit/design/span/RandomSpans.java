@@ -20,6 +20,21 @@ import java.util.Random;
 public final class RandomSpans {
     private RandomSpans() {}
 
+    /**
+     * A small span (not a cantilever) under a random factored torsion: 3 to 40 kN·m at each critical
+     * section, at mid-span nothing or up to a third of the larger end, a quarter of them compatibility torsion.
+     */
+    public static SpanProblem torsion(Random r) {
+        SpanProblem p = small(r);
+        while (p.cantilever()) {
+            p = small(r);
+        }
+        double left = (3 + 37 * r.nextDouble()) * 1e6;
+        double right = r.nextInt(4) == 0 ? 0 : (3 + 37 * r.nextDouble()) * 1e6;
+        double mid = r.nextBoolean() ? 0 : Math.max(left, right) * r.nextDouble() / 3;
+        return p.withTorsion(new SpanTorsion(left, mid, right, r.nextInt(4) == 0));
+    }
+
     public static SpanProblem small(Random r) {
         double fc = new double[] {25, 28, 35}[r.nextInt(3)];
         Materials m = new Materials(fc, 420, 420, 20, 1.0);
