@@ -3,6 +3,7 @@ package barfit.input;
 import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
+import barfit.catalogs.yaml.YMap;
 import barfit.catalogs.yaml.YamlReader;
 import barfit.section.BarLayer;
 import barfit.section.BeamSection;
@@ -111,6 +112,12 @@ public final class CheckInputReader {
     static boolean compatibilityTorsion(YFields b, boolean hasTu) {
         if (!b.has("torsion")) {
             return false;
+        }
+        if (b.node("torsion") instanceof YMap) {
+            throw b.error(
+                    "torsion",
+                    "torsion: {left, right} belongs to a whole span (with moments:); one section gives Tu and, "
+                            + "beside it, torsion: compatibility | equilibrium");
         }
         String kind = b.text("torsion", "compatibility or equilibrium");
         boolean compatibility = switch (kind) {

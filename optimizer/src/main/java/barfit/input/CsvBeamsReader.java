@@ -5,6 +5,7 @@ import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.InputFiles;
 import barfit.catalogs.yaml.Location;
+import barfit.design.span.SpanTorsion;
 import barfit.section.EndCondition;
 import barfit.section.Flange;
 import barfit.section.Span;
@@ -32,7 +33,9 @@ import java.util.Map;
  * {@code vu} may stand for both end shears. Optional: {@code line} (the row is a span of that line: the
  * line's spans keep one b × h, one set of forms, in place of a {@code group}), {@code width} (fixes b),
  * {@code flange_type} (T or L),
- * {@code flange_clear_to_next_web} (sw of Table 6.3.2.1), {@code sustained_live}.
+ * {@code flange_clear_to_next_web} (sw of Table 6.3.2.1), {@code sustained_live}, the factored torsion at d
+ * from the faces {@code t_left}, {@code t_right} (and at mid-span {@code t_mid}, 0 by default) with
+ * {@code torsion_kind} (compatibility or equilibrium, the default).
  */
 public final class CsvBeamsReader {
     static final List<String> REQUIRED = List.of("id", "span", "ends");
@@ -56,7 +59,11 @@ public final class CsvBeamsReader {
             "dead",
             "live",
             "sustained_live",
-            "width");
+            "width",
+            "t_left",
+            "t_right",
+            "t_mid",
+            "torsion_kind");
 
     private final Path file;
     private final Settings settings;
@@ -495,9 +502,45 @@ public final class CsvBeamsReader {
         } else if (sustained != null) {
             throw error(r.cells().get("sustained_live"), "sustained_live: given without dead and live loads");
         }
-        DesignBeam.WholeSpan whole =
-                new DesignBeam.WholeSpan(ml, mm, mr, vl, vr, service, SpanChecks.Limits.DEFAULT, false);
+        DesignBeam.WholeSpan whole = new DesignBeam.WholeSpan(
+                ml, mm, mr, vl, vr, service, SpanChecks.Limits.DEFAULT, false, torsion(r, ends));
         return new DesignBeam(id, where, 0, null, cap, width, flange, new Span(span, ends), whole, group, ofLine);
+    }
+
+    /** The row's factored torsion (t_left, t_right, t_mid, torsion_kind), or null where it gives none. */
+    private SpanTorsion torsion(Row r, EndCondition ends) {
+        String what = "factored torsion, " + u.unit(Dim.MOMENT);
+        Double left = nonNegative(r, "t_left", what + " at d from the left face", Dim.MOMENT, InputLimits.TORSION);
+        Double right = nonNegative(r, "t_right", what + " at d from the right face", Dim.MOMENT, InputLimits.TORSION);
+        Double mid = nonNegative(r, "t_mid", what + " at mid-span", Dim.MOMENT, InputLimits.TORSION);
+        Cell kind = r.cells().get("torsion_kind");
+        if (left == null && right == null) {
+            for (String c : new String[] {"t_mid", "torsion_kind"}) {
+                if (!empty(r.cells().get(c))) {
+                    throw error(r.cells().get(c), c + ": given without t_left or t_right");
+                }
+            }
+            return null;
+        }
+        String given = left != null ? "t_left" : "t_right";
+        if (ends == EndCondition.CANTILEVER) {
+            throw error(
+                    r.cells().get(given),
+                    given + ": torsion on a cantilever is not designed as a whole span; check its fixed-end "
+                            + "section under Tu with barfit check");
+        }
+        boolean compatibility = false;
+        if (!empty(kind)) {
+            compatibility = switch (kind.text()) {
+                case "compatibility" -> true;
+                case "equilibrium" -> false;
+                default ->
+                    throw error(
+                            kind, "torsion_kind: expected compatibility or equilibrium, got \"" + kind.text() + "\"");
+            };
+        }
+        return new SpanTorsion(
+                left == null ? 0 : left, mid == null ? 0 : mid, right == null ? 0 : right, compatibility);
     }
 
     private Double siOrNull(Double v, Dim dim) {

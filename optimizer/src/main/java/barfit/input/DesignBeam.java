@@ -1,6 +1,7 @@
 package barfit.input;
 
 import barfit.catalogs.yaml.Location;
+import barfit.design.span.SpanTorsion;
 import barfit.section.Flange;
 import barfit.section.Span;
 import barfit.section.SpanChecks;
@@ -64,7 +65,8 @@ public record DesignBeam(
     /**
      * The parts of a whole span: moments at the left support, mid-span and right support (N·mm, null
      * where absent), shears at d from each face (N, null where absent), service loads (or null),
-     * deflection limits, and whether the bottom bars are anchored at the supports.
+     * deflection limits, whether the bottom bars are anchored at the supports, and the factored torsion
+     * (null: none).
      */
     public record WholeSpan(
             Double mLeft,
@@ -74,7 +76,8 @@ public record DesignBeam(
             Double vRight,
             SpanChecks.ServiceLoads service,
             SpanChecks.Limits limits,
-            boolean bottomAnchored) {}
+            boolean bottomAnchored,
+            SpanTorsion torsion) {}
 
     public boolean isWhole() {
         return whole != null;

@@ -3,9 +3,11 @@ package barfit.input;
 import barfit.catalogs.Echo;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
+import barfit.catalogs.yaml.YMap;
 import barfit.catalogs.yaml.YNode;
 import barfit.catalogs.yaml.YamlReader;
 import barfit.design.SearchSpace;
+import barfit.design.span.SpanTorsion;
 import barfit.section.EndCondition;
 import barfit.section.Flange;
 import barfit.section.Span;
@@ -145,12 +147,9 @@ public final class DesignInputReader {
                         id, b.location(), mu, vu, cap, width, flange, span, null, group, false, tu, compatibility));
                 continue;
             }
-            if (b.has("Tu") || b.has("torsion")) {
-                // a whole span's torsion varies along it: its search does not design for it yet
+            if (b.has("Tu")) {
                 throw b.error(
-                        b.has("Tu") ? "Tu" : "torsion",
-                        "torsion is designed for one section (Mu, Vu, Tu), not yet for a whole span; "
-                                + "check the span's sections under Tu with barfit check");
+                        "Tu", "a whole span gives its torsion as torsion: {left, right} (at d from the faces), not Tu");
             }
             if (b.has("Vu")) {
                 throw b.error("Vu", "a whole span gives its shears as shear: {left, right}, not Vu");
@@ -291,7 +290,57 @@ public final class DesignInputReader {
                             .orElse(240.0));
         }
         boolean anchored = b.optBool("bottom_anchored_at_supports").orElse(false);
-        return new DesignBeam.WholeSpan(left, mid, right, vl, vr, service, limits, anchored);
+        SpanTorsion torsion = b.has("torsion") ? torsion(b, ends, u) : null;
+        return new DesignBeam.WholeSpan(left, mid, right, vl, vr, service, limits, anchored, torsion);
+    }
+
+    /**
+     * A whole span's factored torsion: {@code torsion: {left, right, mid, kind}} (at d from the faces and at
+     * mid-span, 0 where not given; {@code kind: compatibility | equilibrium}, equilibrium by default).
+     */
+    private static SpanTorsion torsion(YFields b, EndCondition ends, UnitSystem u) {
+        if (!(b.node("torsion") instanceof YMap)) {
+            throw b.error(
+                    "torsion",
+                    "a whole span gives its torsion as torsion: {left, right, mid, kind} (factored, "
+                            + u.unit(Dim.MOMENT) + "); the form torsion: compatibility goes beside Tu on one section");
+        }
+        YFields t = b.map("torsion", "the factored torsion {left, right, mid, kind}")
+                .allowOnly("left", "right", "mid", "kind");
+        if (ends == EndCondition.CANTILEVER) {
+            throw b.error(
+                    "torsion",
+                    "torsion on a cantilever is not designed as a whole span; check its fixed-end section "
+                            + "under Tu with barfit check");
+        }
+        if (!t.has("left") && !t.has("right")) {
+            throw new InputError(
+                    t.location(),
+                    t.path() + ": expected the factored torsion at the critical sections, left and/or right, "
+                            + u.unit(Dim.MOMENT));
+        }
+        String unit = u.unit(Dim.MOMENT);
+        double left = torsionAt(t, "left", "the factored torsion at d from the left face, " + unit, u);
+        double right = torsionAt(t, "right", "the factored torsion at d from the right face, " + unit, u);
+        double mid = torsionAt(t, "mid", "the factored torsion at mid-span, " + unit + " (0 by default)", u);
+        boolean compatibility = false;
+        if (t.has("kind")) {
+            String kind = t.text("kind", "compatibility or equilibrium");
+            compatibility = switch (kind) {
+                case "compatibility" -> true;
+                case "equilibrium" -> false;
+                default ->
+                    throw t.error("kind", "expected compatibility or equilibrium, got \"" + Echo.cut(kind) + "\"");
+            };
+        }
+        return new SpanTorsion(left, mid, right, compatibility);
+    }
+
+    private static double torsionAt(YFields t, String key, String expected, UnitSystem u) {
+        if (!t.has(key)) {
+            return 0;
+        }
+        return u.toSI(InputLimits.require(t, key, InputLimits.TORSION, u, t.nonNegative(key, expected)), Dim.MOMENT);
     }
 
     private static void need(YFields m, Double v, String key, String message) {

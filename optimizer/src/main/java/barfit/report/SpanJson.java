@@ -40,6 +40,14 @@ public final class SpanJson {
         b.put("status", o.status());
         Json.put(b, "span", p.span(), Dim.SPAN, u);
         b.put("ends", p.ends().key());
+        if (p.hasTorsion()) {
+            ObjectNode t = b.putObject("torsion");
+            Json.put(t, "left", p.torsion().left(), Dim.MOMENT, u);
+            Json.put(t, "mid", p.torsion().mid(), Dim.MOMENT, u);
+            Json.put(t, "right", p.torsion().right(), Dim.MOMENT, u);
+            t.put("kind", p.torsion().compatibility() ? "compatibility" : "equilibrium");
+            t.put("along", SpanText.TORSION_ALONG);
+        }
         if (p.maxDepth() != null) {
             Json.put(b, "max_depth", p.maxDepth(), Dim.LENGTH, u);
         }
@@ -198,6 +206,10 @@ public final class SpanJson {
             Double zoneVu = d.report().zoneShears().get(i);
             if (zoneVu != null) {
                 Json.put(z, "Vu", zoneVu, Dim.FORCE, u);
+            }
+            Double zoneTu = d.report().zoneTorsions().get(i);
+            if (zoneTu != null) {
+                Json.put(z, "Tu", zoneTu, Dim.MOMENT, u);
             }
         }
         ArrayNode zoneChecks = o.putArray("zone_checks");

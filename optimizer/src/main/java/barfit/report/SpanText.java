@@ -22,6 +22,12 @@ public final class SpanText {
             "no shears given: minimum stirrups (Av,min at the widest spacing allowed) in "
                     + "every zone; shear strength not checked (give shear: {left, right})";
 
+    /** How a span's torsion is taken along it (its assumption, said wherever a span carries torsion). */
+    public static final String TORSION_ALONG =
+            "Tu taken as varying linearly from its value at d from each face to its mid-span value (0 unless "
+                    + "given: a distributed torque); each stirrup zone designed for the largest Tu within bt + d "
+                    + "of it (9.7.6.3.2, 9.7.5.3), with the torsion checks of 22.7 on every bar at its section";
+
     private SpanText() {}
 
     /** Warnings about what a designed span leaves unchecked: none, or the missing shears. */
@@ -95,6 +101,9 @@ public final class SpanText {
         }
         TextTable t = new TextTable(false, false);
         t.row("demand", demand(p, u));
+        if (p.hasTorsion()) {
+            t.row("torsion", TORSION_ALONG);
+        }
         t.row(
                 "section",
                 Words.shape(l.shape(), u)
@@ -140,6 +149,11 @@ public final class SpanText {
                                     ? ", minimum"
                                     : ", Vu = "
                                             + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE))
+                            + (d.report().zoneTorsions().get(i) == null
+                                    ? ""
+                                    : ", Tu = "
+                                            + u.withUnit(
+                                                    d.report().zoneTorsions().get(i), Dim.MOMENT))
                             + ")");
         }
         boolean firstSection = true;
@@ -336,6 +350,15 @@ public final class SpanText {
             if (p.vRight() != null) {
                 sb.append(" right ").append(u.withUnit(p.vRight(), Dim.FORCE));
             }
+        }
+        if (p.hasTorsion()) {
+            sb.append(";  Tu left ")
+                    .append(u.withUnit(p.torsion().left(), Dim.MOMENT))
+                    .append(" mid ")
+                    .append(u.withUnit(p.torsion().mid(), Dim.MOMENT))
+                    .append(" right ")
+                    .append(u.withUnit(p.torsion().right(), Dim.MOMENT))
+                    .append(p.torsion().compatibility() ? " (compatibility)" : "");
         }
         if (p.service() != null) {
             sb.append(";  service D ")

@@ -12,25 +12,26 @@ public final class Spans {
         var s = in.settings();
         var w = b.whole();
         return new SpanProblem(
-                b.id(),
-                s.materials(),
-                s.detailing(),
-                s.code(),
-                in.space(),
-                b.span().length(),
-                b.span().ends(),
-                w.mLeft(),
-                w.mMid(),
-                w.mRight(),
-                w.vLeft(),
-                w.vRight(),
-                w.service(),
-                w.limits(),
-                b.maxDepth(),
-                b.width(),
-                b.flange(),
-                w.bottomAnchored(),
-                in.maxBarSizesPerBeam(),
-                in.barsPerTwoLegs());
+                        b.id(),
+                        s.materials(),
+                        s.detailing(),
+                        s.code(),
+                        in.space(),
+                        b.span().length(),
+                        b.span().ends(),
+                        w.mLeft(),
+                        w.mMid(),
+                        w.mRight(),
+                        w.vLeft(),
+                        w.vRight(),
+                        w.service(),
+                        w.limits(),
+                        b.maxDepth(),
+                        b.width(),
+                        b.flange(),
+                        w.bottomAnchored(),
+                        in.maxBarSizesPerBeam(),
+                        in.barsPerTwoLegs())
+                .withTorsion(w.torsion());
     }
 }

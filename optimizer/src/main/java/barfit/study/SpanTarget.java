@@ -79,7 +79,8 @@ public final class SpanTarget implements Target {
                         p.bottomAnchored(),
                         p.maxBarSizes(),
                         p.barsPerTwoLegs())
-                .withAnalysis(p.analysedService(), p.shearDiagram());
+                .withAnalysis(p.analysedService(), p.shearDiagram())
+                .withTorsion(p.torsion());
         SpanDesigner.Outcome o = new SpanDesigner(cost, options).design(q, 0);
         if (!o.feasible()) {
             return Summary.none(say.why(o.diagnosis()), o.diagnosis().limit());

@@ -9,7 +9,8 @@ import java.util.Map;
 
 /**
  * The full verification of a span: each flexural section, each stirrup zone (with the design shear it was
- * checked for, null for minimum stirrups), and the span checks.
+ * checked for, null for minimum stirrups, and the design torsion, null where the span has none), and the
+ * span checks.
  */
 public record SpanReport(
         Map<SpanProblem.Place, CheckReport> sections,
@@ -17,7 +18,8 @@ public record SpanReport(
         List<Double> zoneShears,
         SpanChecks.Result span,
         barfit.section.trail.Trail zoneTrail,
-        barfit.section.trail.Trail spanTrail) {
+        barfit.section.trail.Trail spanTrail,
+        List<Double> zoneTorsions) {
 
     public List<CheckResult> all() {
         List<CheckResult> out = new ArrayList<>();

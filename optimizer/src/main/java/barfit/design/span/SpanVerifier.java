@@ -36,6 +36,7 @@ public final class SpanVerifier {
         }
         List<CheckResult> zoneChecks = new ArrayList<>();
         List<Double> zoneShears = new ArrayList<>();
+        List<Double> zoneTorsions = new ArrayList<>();
         List<SpanProblem.Zone> zones = p.zones();
         Trail zt = withTrail ? Trail.recording() : Trail.off();
         for (int i = 0; i < zones.size(); i++) {
@@ -48,6 +49,7 @@ public final class SpanVerifier {
             zoneShears.add(vu);
             zoneChecks.addAll(SectionChecks.shearZone(s, bending, vu == null ? 0 : vu, z.name(), zt));
             Demand torsion = torsionDemand(p, z, vu, l.width(), SectionChecks.shearDepth(s, bending));
+            zoneTorsions.add(z.torsionGiven() ? z.tu(l.width(), SectionChecks.shearDepth(s, bending)) : null);
             if (torsion != null) {
                 zoneChecks.addAll(
                         TorsionZone.checks(l.physicalSection(p, z.section(), st), torsion, span, z.name(), zt));
@@ -99,7 +101,7 @@ public final class SpanVerifier {
                 p.serviceMoments(),
                 p.limits(),
                 st);
-        return new SpanReport(sections, zoneChecks, zoneShears, spanResult, zt, st);
+        return new SpanReport(sections, zoneChecks, zoneShears, spanResult, zt, st, zoneTorsions);
     }
 
     /** The span's depth and deflection checks alone (what the deflection cuts need). */
