@@ -29,6 +29,7 @@ import java.util.Map;
  *
  * <pre>
  * id,span,ends,m_left,m_mid,m_right,v_left,v_right,max_depth,group,flange_width,flange_thickness,dead,live
+ * (optional, the torsion: t_left,t_right,t_mid,torsion_kind)
  * </pre>
  * {@code vu} may stand for both end shears. Optional: {@code line} (the row is a span of that line: the
  * line's spans keep one b × h, one set of forms, in place of a {@code group}), {@code width} (fixes b),

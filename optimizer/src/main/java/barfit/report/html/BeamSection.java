@@ -83,6 +83,16 @@ final class BeamSection {
         }
         Html.kv(out, "Mu", moments(p, u));
         Html.kv(out, "Vu at d from the faces", shears(p, u));
+        if (p.hasTorsion()) {
+            Html.kv(
+                    out,
+                    "Tu at d from the faces",
+                    "left " + u.withUnit(p.torsion().left(), Dim.MOMENT) + ", mid-span "
+                            + u.withUnit(p.torsion().mid(), Dim.MOMENT) + ", right "
+                            + u.withUnit(p.torsion().right(), Dim.MOMENT)
+                            + (p.torsion().compatibility() ? " (compatibility torsion)" : "") + ": "
+                            + SpanText.TORSION_ALONG);
+        }
         if (p.service() != null) {
             Html.kv(
                     out,
@@ -169,9 +179,15 @@ final class BeamSection {
                             + Words.stirrups(st, u) + ", "
                             + SpanText.sets(SpanLayout.stirrupSets(z.length(), st.spacing()))
                             + (d.report().zoneShears().get(i) == null
-                                    ? " (minimum)"
+                                    ? " (minimum"
                                     : " (Vu = "
-                                            + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE) + ")"));
+                                            + u.withUnit(d.report().zoneShears().get(i), Dim.FORCE))
+                            + (d.report().zoneTorsions().get(i) == null
+                                    ? ""
+                                    : ", Tu = "
+                                            + u.withUnit(
+                                                    d.report().zoneTorsions().get(i), Dim.MOMENT))
+                            + ")");
         }
         for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
             FlexureResult f = e.getValue().flexure();
