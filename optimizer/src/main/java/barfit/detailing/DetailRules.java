@@ -6,6 +6,7 @@ import barfit.analysis.Support;
 import barfit.catalogs.BarSize;
 import barfit.design.line.LineCapacity;
 import barfit.design.line.LineSpans;
+import barfit.design.span.Extension;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
 import barfit.input.Settings;
@@ -220,6 +221,13 @@ final class DetailRules {
                 why = "no cut in the tension zone (9.7.3.5): past the point of inflection by max(d, 12 db)";
                 clause = "9.7.3.5";
             }
+        }
+        // under torsion the support zones count these bars in Al over their length (9.7.5.3)
+        double torsionReach = Extension.torsionReach(p);
+        if (torsionReach > need + 1e-6) {
+            need = torsionReach;
+            why = "under torsion, over the support's stirrup zones, where they are counted in Al (9.7.5.3)";
+            clause = "9.7.5.3";
         }
         return new Reach(
                 need,

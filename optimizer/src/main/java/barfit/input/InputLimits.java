@@ -115,6 +115,9 @@ public final class InputLimits {
     public static final Range SHEAR = new Range("a factored shear", Dim.FORCE, 0, 50_000, 0, 11_000, false);
     public static final Range TORSION = new Range("a factored torsion", Dim.MOMENT, 0, 20_000, 0, 15_000, false);
     public static final Range LINE_LOAD = new Range("a service load", Dim.LINE_LOAD, 0, 2000, 0, 140, false);
+    /** A distributed service torque, kN·m/m (kip·ft/ft): a force in either system's units. */
+    public static final Range TORQUE = new Range("a distributed service torque", Dim.FORCE, 0, 1000, 0, 225, false);
+
     public static final Range SPAN_DIVISOR = new Range("a span divisor", Dim.NUMBER, 100, 2000, 100, 2000, false);
     // ---- costs (any currency; above these a rate is taken for a typing mistake) ----
     public static final Range RATE = new Range("a rate", Dim.NUMBER, 0, 10_000_000, 0, 10_000_000, false);

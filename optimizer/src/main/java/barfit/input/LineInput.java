@@ -4,6 +4,8 @@ import barfit.analysis.Line;
 import barfit.analysis.Load;
 import barfit.analysis.Stiffness;
 import barfit.analysis.Support;
+import barfit.analysis.Torque;
+import barfit.analysis.TorqueEnvelope;
 import barfit.catalogs.yaml.Location;
 import barfit.section.SectionShape;
 import java.util.ArrayList;
@@ -16,7 +18,7 @@ import java.util.List;
  * each support (percent), the concrete's unit weight (N/mm³), the headroom cap, and whether the line is
  * one set of forms ({@code oneSection}: one b x h throughout, the default) or each span its own section;
  * for its detailing, whether it is a perimeter beam (9.7.7.1) and the stock bar length (mm, null for the
- * default of 12 m / 40 ft).
+ * default of 12 m / 40 ft), and the distributed service torques on its spans (N·mm/mm).
  * Segment 0 is the left overhang, 1..n the spans, n + 1 the right overhang.
  */
 public record LineInput(
@@ -35,7 +37,46 @@ public record LineInput(
         Double maxDepth,
         boolean oneSection,
         boolean perimeter,
-        Double stockLength) {
+        Double stockLength,
+        List<Torque> torques) {
+
+    /** A line without torques. */
+    public LineInput(
+            String id,
+            Location location,
+            List<Double> spans,
+            double overhangLeft,
+            double overhangRight,
+            List<Support> supports,
+            List<Load> loads,
+            SectionShape section,
+            double sustainedLive,
+            boolean coefficients,
+            List<Double> redistribution,
+            double unitWeight,
+            Double maxDepth,
+            boolean oneSection,
+            boolean perimeter,
+            Double stockLength) {
+        this(
+                id,
+                location,
+                spans,
+                overhangLeft,
+                overhangRight,
+                supports,
+                loads,
+                section,
+                sustainedLive,
+                coefficients,
+                redistribution,
+                unitWeight,
+                maxDepth,
+                oneSection,
+                perimeter,
+                stockLength,
+                List.of());
+    }
 
     /** As given before the forms were a choice: each span its own section. */
     public LineInput(
@@ -76,6 +117,12 @@ public record LineInput(
         supports = List.copyOf(supports);
         loads = List.copyOf(loads);
         redistribution = List.copyOf(redistribution);
+        torques = List.copyOf(torques);
+    }
+
+    /** The factored torsion of each span given a torque (supports restraining twist, 5.3.1's envelope). */
+    public List<TorqueEnvelope.SpanTorsion> torsion() {
+        return TorqueEnvelope.of(spans, supports, torques);
     }
 
     /** The line under another headroom cap for its whole depth (null for none). */
@@ -96,7 +143,8 @@ public record LineInput(
                 cap,
                 oneSection,
                 perimeter,
-                stockLength);
+                stockLength,
+                torques);
     }
 
     /** The web's own weight per length, N/mm (gross concrete section, flange counted as given in the section). */

@@ -4,6 +4,7 @@ import barfit.analysis.Column;
 import barfit.analysis.Load;
 import barfit.analysis.Support;
 import barfit.analysis.SupportKind;
+import barfit.analysis.Torque;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.YFields;
 import barfit.catalogs.yaml.YList;
@@ -189,6 +190,7 @@ public final class LinesReader {
         }
         SectionShape shape = new SectionShape(b, h, flange);
         List<Load> loads = loads(f, spans, ol, or, u, sr);
+        List<Torque> torques = TorqueReader.torques(f.map("loads", "the service loads"), spans.size(), u);
         double sus = f.optNumber("sustained_live", "the sustained part of the live load, 0 to 1")
                 .orElse(0.0);
         if (sus < 0 || sus > 1) {
@@ -249,7 +251,8 @@ public final class LinesReader {
                 cap,
                 oneSection,
                 perimeter,
-                stock);
+                stock,
+                torques);
     }
 
     private static List<Support> supports(YFields f, int spans, SectionReader sr, UnitSystem u) {
@@ -326,8 +329,8 @@ public final class LinesReader {
                     f.path() + ": missing key 'loads'; expected the service loads {dead, live}" + " in "
                             + u.unit(Dim.LINE_LOAD) + " (the web's own weight is added by barfit)");
         }
-        YFields l = f.map("loads", "the service loads {dead, live, spans, overhangs, points, partial}")
-                .allowOnly("dead", "live", "spans", "overhangs", "points", "partial");
+        YFields l = f.map("loads", "the service loads {dead, live, spans, overhangs, points, partial, torque}")
+                .allowOnly("dead", "live", "spans", "overhangs", "points", "partial", "torque");
         String lineLoad = u.unit(Dim.LINE_LOAD);
         double dead = u.toSI(
                 l.has("dead")
@@ -442,7 +445,7 @@ public final class LinesReader {
         return out;
     }
 
-    private static int spanIndex(YFields s, int n) {
+    static int spanIndex(YFields s, int n) {
         if (!s.has("span")) {
             throw new InputError(
                     s.location(), s.path() + ": missing key 'span'; expected the span it is on, 1 to " + n);

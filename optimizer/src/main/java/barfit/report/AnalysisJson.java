@@ -2,6 +2,7 @@ package barfit.report;
 
 import barfit.analysis.Coefficients;
 import barfit.analysis.LineResult;
+import barfit.analysis.TorqueEnvelope;
 import barfit.input.Settings;
 import barfit.section.trail.Dim;
 import barfit.units.UnitSystem;
@@ -32,6 +33,17 @@ public final class AnalysisJson {
             Json.put(o, "self_weight", a.selfWeight(), Dim.LINE_LOAD, u);
             ArrayNode red = o.putArray("redistribution");
             a.input().redistribution().forEach(red::add);
+            if (!a.input().torsion().isEmpty()) {
+                ArrayNode tor = o.putArray("torsion");
+                for (TorqueEnvelope.SpanTorsion s : a.input().torsion()) {
+                    ObjectNode to = tor.addObject();
+                    to.put("span", s.index());
+                    Json.put(to, "tu", s.factored(), Dim.FORCE, u);
+                    Json.put(to, "T_left_face", s.atLeftFace(), Dim.MOMENT, u);
+                    Json.put(to, "T_mid_span", s.atMidClear(), Dim.MOMENT, u);
+                    Json.put(to, "T_right_face", s.atRightFace(), Dim.MOMENT, u);
+                }
+            }
             if (a.coefficients() != null) {
                 o.putArray("reactions");
                 o.putArray("stations");

@@ -4,6 +4,7 @@ import barfit.analysis.Coefficients;
 import barfit.analysis.LineResult;
 import barfit.analysis.Stiffness;
 import barfit.analysis.Support;
+import barfit.analysis.TorqueEnvelope;
 import barfit.input.LineInput;
 import barfit.input.Settings;
 import barfit.section.trail.Dim;
@@ -52,6 +53,7 @@ public final class AnalysisText {
                 .append(" added to the dead load; sustained live ")
                 .append(u.compact(in.sustainedLive(), Dim.NUMBER))
                 .append(" of L\n");
+        torsion(in, u, out);
         if (a.coefficients() != null) {
             out.append("  method: the approximate moments and shears of ACI 318-19 6.5 (6.5.1's conditions met); "
                     + "moments at the support faces, shears at the faces\n");
@@ -200,6 +202,30 @@ public final class AnalysisText {
     }
 
     /** The stations worth a line of text: span tenths, faces and point loads, overhang ends. */
+    /** The torque envelope of a line given torques: per span tu and |T| at the faces and mid clear span. */
+    private static void torsion(LineInput in, UnitSystem u, StringBuilder out) {
+        List<TorqueEnvelope.SpanTorsion> spans = in.torsion();
+        if (spans.isEmpty()) {
+            return;
+        }
+        String perLength = u.unit(Dim.MOMENT) + "/" + u.unit(Dim.SPAN);
+        out.append("  torsion: each support restrains twist, so T(x) = tu (L/2 − x) from the left support's centre"
+                        + " line, tu = max(1.4 D, 1.2 D + 1.6 L) (5.3.1) of the span's torque; |T| in ")
+                .append(u.unit(Dim.MOMENT))
+                .append(" (design takes it at d from the faces, 9.4.4.2)\n");
+        TextTable t = new TextTable(false, true, true, true, true);
+        t.row("span", "tu " + perLength, "T left face", "T mid-span", "T right face");
+        for (TorqueEnvelope.SpanTorsion s : spans) {
+            t.row(
+                    String.valueOf(s.index()),
+                    u.number(s.factored(), Dim.FORCE),
+                    u.number(s.atLeftFace(), Dim.MOMENT),
+                    u.number(s.atMidClear(), Dim.MOMENT),
+                    u.number(s.atRightFace(), Dim.MOMENT));
+        }
+        t.write("  ", out);
+    }
+
     static List<LineResult.StationValues> shown(LineResult r) {
         List<LineResult.StationValues> out = new ArrayList<>();
         int n = r.line().spanCount();

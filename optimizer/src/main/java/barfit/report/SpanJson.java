@@ -46,7 +46,7 @@ public final class SpanJson {
             Json.put(t, "mid", p.torsion().mid(), Dim.MOMENT, u);
             Json.put(t, "right", p.torsion().right(), Dim.MOMENT, u);
             t.put("kind", p.torsion().compatibility() ? "compatibility" : "equilibrium");
-            t.put("along", SpanText.TORSION_ALONG);
+            t.put("along", SpanText.torsionAlong(p.torsion()));
         }
         if (p.maxDepth() != null) {
             Json.put(b, "max_depth", p.maxDepth(), Dim.LENGTH, u);

@@ -4,6 +4,7 @@ import barfit.design.Proof;
 import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
+import barfit.design.span.SpanTorsion;
 import barfit.section.CheckReport;
 import barfit.section.CheckResult;
 import barfit.section.FlexureResult;
@@ -23,10 +24,15 @@ public final class SpanText {
                     + "every zone; shear strength not checked (give shear: {left, right})";
 
     /** How a span's torsion is taken along it (its assumption, said wherever a span carries torsion). */
-    public static final String TORSION_ALONG =
-            "Tu taken as varying linearly from its value at d from each face to its mid-span value (0 unless "
-                    + "given: a distributed torque); each stirrup zone designed for the largest Tu within bt + d "
-                    + "of it (9.7.6.3.2, 9.7.5.3), with the torsion checks of 22.7 on every bar at its section";
+    public static String torsionAlong(SpanTorsion t) {
+        return (t.atFaces()
+                        ? "Tu from the line's torque envelope (supports restraining twist), given at the faces and "
+                                + "mid-span, straight between them and taken at d nearer a face (9.4.4.2)"
+                        : "Tu taken as varying linearly from its value at d from each face to its mid-span value "
+                                + "(0 unless given: a distributed torque)")
+                + "; each stirrup zone designed for the largest Tu within bt + d of it (9.7.6.3.2, 9.7.5.3), with "
+                + "the torsion checks of 22.7 on every bar at its section";
+    }
 
     private SpanText() {}
 
@@ -102,7 +108,7 @@ public final class SpanText {
         TextTable t = new TextTable(false, false);
         t.row("demand", demand(p, u));
         if (p.hasTorsion()) {
-            t.row("torsion", TORSION_ALONG);
+            t.row("torsion", torsionAlong(p.torsion()));
         }
         t.row(
                 "section",

@@ -5,9 +5,11 @@ import barfit.analysis.Line;
 import barfit.analysis.LineAnalysis;
 import barfit.analysis.LineResult;
 import barfit.analysis.Load;
+import barfit.analysis.TorqueEnvelope;
 import barfit.design.SearchSpace;
 import barfit.design.span.ShearDiagram;
 import barfit.design.span.SpanProblem;
+import barfit.design.span.SpanTorsion;
 import barfit.input.LineInput;
 import barfit.input.Settings;
 import barfit.section.Deflection;
@@ -164,26 +166,40 @@ final class LineProblems {
                 ? EndCondition.SIMPLE
                 : continuous == 1 ? EndCondition.ONE_END_CONTINUOUS : EndCondition.BOTH_ENDS_CONTINUOUS;
         return new SpanProblem(
-                in.id() + "/span " + s,
-                settings.materials(),
-                settings.detailing(),
-                settings.code(),
-                space,
-                clear,
-                ends,
-                ml,
-                mm,
-                mr,
-                vl,
-                vr,
-                service(in, line, s),
-                SpanChecks.Limits.DEFAULT,
-                in.maxDepth(),
-                null,
-                flange(in, clear),
-                false,
-                maxBarSizes,
-                barsPerTwoLegs);
+                        in.id() + "/span " + s,
+                        settings.materials(),
+                        settings.detailing(),
+                        settings.code(),
+                        space,
+                        clear,
+                        ends,
+                        ml,
+                        mm,
+                        mr,
+                        vl,
+                        vr,
+                        service(in, line, s),
+                        SpanChecks.Limits.DEFAULT,
+                        in.maxDepth(),
+                        null,
+                        flange(in, clear),
+                        false,
+                        maxBarSizes,
+                        barsPerTwoLegs)
+                .withTorsion(torsion(in, s));
+    }
+
+    /**
+     * A span's torsion from the line's torque envelope (supports restraining twist): at its faces and mid
+     * clear span, taken at d near the faces by the span search; null where the span carries no torque.
+     */
+    static SpanTorsion torsion(LineInput in, int s) {
+        for (TorqueEnvelope.SpanTorsion t : in.torsion()) {
+            if (t.index() == s) {
+                return new SpanTorsion(t.atLeftFace(), t.atMidClear(), t.atRightFace(), false, true);
+            }
+        }
+        return null;
     }
 
     private SpanProblem cantilever(LineInput in, Line line, int seg, int n, double clear, double m, double v) {

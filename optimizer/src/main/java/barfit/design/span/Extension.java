@@ -44,8 +44,14 @@ public record Extension(double length, double ld, Governs governs) {
         return reach > plain.length() ? new Extension(reach, plain.ld(), Governs.TORSION_ZONES) : plain;
     }
 
-    /** How far the stirrup zones designed with a support section reach from its face (the farther side). */
-    private static double torsionReach(SpanProblem p) {
+    /**
+     * How far the stirrup zones designed with a support section reach from its face (the farther side); 0
+     * without torsion or on a cantilever.
+     */
+    public static double torsionReach(SpanProblem p) {
+        if (p.cantilever() || !p.hasTorsion()) {
+            return 0;
+        }
         double reach = 0;
         for (SpanProblem.Zone z : p.zones()) {
             if (z.section() == SpanProblem.Place.LEFT && p.leftSupport()) {

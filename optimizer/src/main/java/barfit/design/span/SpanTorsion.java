@@ -6,15 +6,22 @@ package barfit.design.span;
  * {@code compatibility} marks it as compatibility torsion, which 22.7.3.2 lets be reduced to φTcr.
  *
  * <p>Between those sections it varies linearly (a distributed torque); nearer a face than d it is taken at d.
+ * From a line's torque envelope ({@code atFaces}) the values are those at the faces and mid clear span,
+ * the line straight between them and taken at d nearer a face than d.
  * A stirrup zone is designed for the largest torsion within bt + d of it (bt the web width), so that its
  * closed stirrups and the longitudinal bars checked with it run bt + d past every point that needs them
  * (9.7.6.3.2, 9.7.5.3).
  */
-public record SpanTorsion(double left, double mid, double right, boolean compatibility) {
+public record SpanTorsion(double left, double mid, double right, boolean compatibility, boolean atFaces) {
     public SpanTorsion {
         if (left < 0 || mid < 0 || right < 0) {
             throw new IllegalArgumentException("torsion is given as magnitudes");
         }
+    }
+
+    /** Torsion given at the critical sections d from the faces. */
+    public SpanTorsion(double left, double mid, double right, boolean compatibility) {
+        this(left, mid, right, compatibility, false);
     }
 
     /** Whether any torsion is given. */
@@ -27,6 +34,10 @@ public record SpanTorsion(double left, double mid, double right, boolean compati
         double half = 0.5 * span;
         double dd = Math.min(d, half - 1e-6);
         double xx = Math.min(Math.max(x, dd), span - dd);
+        if (atFaces) {
+            // a line's envelope: the values at the faces, straight to mid-span and taken at d near a face
+            return xx <= half ? left + (mid - left) * xx / half : mid + (right - mid) * (xx - half) / half;
+        }
         if (xx <= half) {
             return left + (mid - left) * (xx - dd) / (half - dd);
         }

@@ -86,12 +86,12 @@ final class BeamSection {
         if (p.hasTorsion()) {
             Html.kv(
                     out,
-                    "Tu at d from the faces",
+                    p.torsion().atFaces() ? "Tu at the faces" : "Tu at d from the faces",
                     "left " + u.withUnit(p.torsion().left(), Dim.MOMENT) + ", mid-span "
                             + u.withUnit(p.torsion().mid(), Dim.MOMENT) + ", right "
                             + u.withUnit(p.torsion().right(), Dim.MOMENT)
                             + (p.torsion().compatibility() ? " (compatibility torsion)" : "") + ": "
-                            + SpanText.TORSION_ALONG);
+                            + SpanText.torsionAlong(p.torsion()));
         }
         if (p.service() != null) {
             Html.kv(
