@@ -364,6 +364,7 @@ public final class SpanText {
                     .append(u.withUnit(p.torsion().mid(), Dim.MOMENT))
                     .append(" right ")
                     .append(u.withUnit(p.torsion().right(), Dim.MOMENT))
+                    .append(p.torsion().atFaces() ? " at the faces" : "")
                     .append(p.torsion().compatibility() ? " (compatibility)" : "");
         }
         if (p.service() != null) {
