@@ -31,7 +31,8 @@ public final class AnalysisText {
                 .append('\n');
         out.append(Caution.text()).append('\n');
         out.append("The analysis covers gravity loads only (dead and live, ACI 318-19 5.3.1a and b): no lateral loads, "
-                + "no settlement, no torsion; columns are taken fixed at their far ends.\n");
+                + "no settlement; torsion only from the torques given (loads.torque); columns are taken fixed at their far "
+                + "ends.\n");
         for (Analysed a : lines) {
             out.append('\n');
             line(a, u, out);

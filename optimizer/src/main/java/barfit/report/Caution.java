@@ -11,11 +11,13 @@ public final class Caution {
             "CAUTION: " + SHORT,
             "barfit covers only what this report lists: ACI 318-19 flexure, shear and detailing checks of",
             "nonprestressed beam sections under the moments and shears given, or for lines those of its own",
-            "gravity analysis; torsion of solid single sections where a factored torsion is given; and for lines",
-            "analysed by stiffness the development, hooks, laps and cut-off points of their bars. It does not check",
-            "an analysis made elsewhere, lateral loads, torsion of spans and lines, axial load, seismic provisions,",
-            "development and splices of beams given alone, deflection (unless reported), fire resistance,",
-            "durability beyond cover, or constructability beyond bar spacing.");
+            "gravity analysis; torsion of solid sections, whole spans and lines where a factored torsion or a",
+            "torque is given (a line's supports taken as restraining twist); and for lines analysed by stiffness",
+            "the development, hooks, laps and cut-off points of their bars. It does not check an analysis made",
+            "elsewhere, lateral loads, torsion of cantilevers and hollow sections, the anchorage of torsion's",
+            "longitudinal bars at their ends, axial load, seismic provisions, development and splices of beams",
+            "given alone, deflection (unless reported), fire resistance, durability beyond cover, or",
+            "constructability beyond bar spacing.");
 
     private Caution() {}
 
