@@ -44,8 +44,7 @@ final class DesignRun {
             int alternatives,
             boolean trail) {
         var settings = input.settings();
-        CostModel cost = new CostModel(
-                input.rates(), settings.detailing().cover(), settings.units().code());
+        CostModel cost = input.costModel();
         SectionDesigner designer = new SectionDesigner(cost, options);
         SpanDesigner spans = new SpanDesigner(cost, options);
         List<DesignItem> outcomes = new ArrayList<>();

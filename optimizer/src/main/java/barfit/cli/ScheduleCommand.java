@@ -93,10 +93,7 @@ final class ScheduleCommand implements Callable<Integer> {
         }
         ScheduleInput input = ScheduleInputReader.read(file, beams, options, nThreads);
         ProgressBar bar = new ProgressBar(spec.commandLine().getErr(), !quiet && ProgressBar.stderrIsTerminal());
-        CostModel cost = new CostModel(
-                input.rates(),
-                input.settings().detailing().cover(),
-                input.settings().units().code());
+        CostModel cost = input.costModel();
         ScheduleResult result;
         try {
             result = new ScheduleSolver(cost, options, nThreads, bar).solve(input);

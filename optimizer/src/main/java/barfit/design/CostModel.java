@@ -58,12 +58,74 @@ public final class CostModel {
     private final CostRates rates;
     private final double cover;
     private final CodeEquations code;
+    /** What {@link #rates} price: the cost in currency, or the carbon in kg CO2e. */
+    private final Objective objective;
+    /** The same quantities priced in currency: this model unless it prices carbon. */
+    private final CostModel money;
+    /** The same quantities priced in kg CO2e (A1-A3); null where no carbon factors were given. */
+    private final CostModel carbon;
 
     /** @param code the edition the input is in: it sets the least hook extension (75 mm or 3 in) */
     public CostModel(CostRates rates, double cover, CodeEquations code) {
         this.rates = rates;
         this.cover = cover;
         this.code = code;
+        this.objective = Objective.COST;
+        this.money = null;
+        this.carbon = null;
+    }
+
+    private CostModel(CostRates rates, CostModel base, Objective objective, CostModel money, CostModel carbon) {
+        this.rates = rates;
+        this.cover = base.cover;
+        this.code = base.code;
+        this.objective = objective;
+        this.money = money;
+        this.carbon = carbon;
+    }
+
+    /** This model with the carbon factors beside its rates, so that every design also reports its carbon. */
+    public CostModel withCarbon(CarbonFactors factors) {
+        CostModel plain = new CostModel(money().rates, cover, code);
+        return new CostModel(
+                plain.rates,
+                plain,
+                Objective.COST,
+                null,
+                new CostModel(factors.rates(plain.rates.lapFactor()), cover, code));
+    }
+
+    /**
+     * The model a search minimising {@code o} prices with: this one for cost; for carbon, one whose rates are
+     * the carbon factors, with the money beside them ({@link #money}). Needs {@link #withCarbon} first.
+     */
+    public CostModel minimising(Objective o) {
+        if (o == objective) {
+            return this;
+        }
+        if (carbon() == null) {
+            throw new IllegalStateException("no carbon factors to minimise");
+        }
+        CostModel m = money();
+        CostModel c = carbon();
+        return o == Objective.CARBON
+                ? new CostModel(c.rates, this, Objective.CARBON, m, c)
+                : new CostModel(m.rates, this, Objective.COST, null, c);
+    }
+
+    /** What this model's prices are: cost (currency) or carbon (kg CO2e). */
+    public Objective objective() {
+        return objective;
+    }
+
+    /** The model pricing in currency: this one unless it prices carbon. */
+    public CostModel money() {
+        return money == null ? this : money;
+    }
+
+    /** The model pricing in kg CO2e, stages A1-A3; null where no carbon factors were given. */
+    public CostModel carbon() {
+        return objective == Objective.CARBON ? this : carbon;
     }
 
     /** Clear cover to the stirrups, mm (the hoops' size). */

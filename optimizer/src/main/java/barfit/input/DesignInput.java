@@ -1,5 +1,6 @@
 package barfit.input;
 
+import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
 import java.util.List;
@@ -13,8 +14,14 @@ public record DesignInput(
         List<DesignBeam> beams,
         int maxBarSizesPerBeam,
         int barsPerTwoLegs,
-        SearchReader.Costs costs) {
+        SearchReader.Costs costs,
+        CarbonReader.Carbon carbon) {
     public DesignInput {
         beams = List.copyOf(beams);
+    }
+
+    /** The cost model of this file's rates, with its carbon factors beside them. */
+    public CostModel costModel() {
+        return new CostModel(rates, settings.detailing().cover(), settings.code()).withCarbon(carbon.factors());
     }
 }

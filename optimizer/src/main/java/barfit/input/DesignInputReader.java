@@ -163,7 +163,16 @@ public final class DesignInputReader {
             out.add(new DesignBeam(
                     id, b.location(), 0, null, cap, width, flange, span, whole(b, span.ends(), u), group));
         }
-        return new DesignInput(settings, space, costs.rates(), costs.currency(), out, maxSizes, barsPerTwoLegs, costs);
+        return new DesignInput(
+                settings,
+                space,
+                costs.rates(),
+                costs.currency(),
+                out,
+                maxSizes,
+                barsPerTwoLegs,
+                costs,
+                CarbonReader.read(doc, settings));
     }
 
     private static DesignBeam.WholeSpan whole(YFields b, EndCondition ends, UnitSystem u) {

@@ -121,6 +121,9 @@ public final class InputLimits {
     public static final Range SPAN_DIVISOR = new Range("a span divisor", Dim.NUMBER, 100, 2000, 100, 2000, false);
     // ---- costs (any currency; above these a rate is taken for a typing mistake) ----
     public static final Range RATE = new Range("a rate", Dim.NUMBER, 0, 10_000_000, 0, 10_000_000, false);
+    /** A carbon factor: kg CO2e per m³, kg or m² (lb CO2e per yd³, lb or ft² in US files). */
+    public static final Range CARBON_FACTOR = new Range("a carbon factor", Dim.NUMBER, 0, 50_000, 0, 50_000, false);
+
     public static final Range SET_COST =
             new Range("a cost per set of forms", Dim.NUMBER, 0, 1_000_000_000, 0, 1_000_000_000, false);
 

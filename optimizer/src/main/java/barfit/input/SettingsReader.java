@@ -37,6 +37,7 @@ public final class SettingsReader {
         "lines",
         "search",
         "costs",
+        "carbon",
         "rationalise",
         "project"
     };

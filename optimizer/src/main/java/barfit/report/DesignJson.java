@@ -29,6 +29,10 @@ public final class DesignJson {
         root.put("caution", Caution.SHORT);
         root.put("currency", currency);
         root.put("cost_basis", "per beam when a span is given, otherwise " + Money.perLengthLabel(u));
+        root.put(
+                "carbon_basis",
+                Carbon.unit(u) + ", " + Carbon.STAGES + ", per beam when a span is given, otherwise "
+                        + Money.perLengthLabel(u));
         ArrayNode arr = root.putArray("beams");
         for (DesignItem o : outcomes) {
             ObjectNode b = o.section() != null ? beam(o.section(), u, trail) : SpanJson.beam(o.whole(), u, trail);
@@ -162,6 +166,12 @@ public final class DesignJson {
         }
         o.set("cost", cost(perBeam ? d.cost() : Money.scaled(d.costPerMetre(), u)));
         o.set("cost_per_length", cost(Money.scaled(d.costPerMetre(), u)));
+        if (d.carbonPerMetre() != null) {
+            o.set(
+                    "carbon",
+                    Carbon.json(perBeam ? Carbon.mass(d.carbon(), u) : Carbon.perLength(d.carbonPerMetre(), u)));
+            o.set("carbon_per_length", Carbon.json(Carbon.perLength(d.carbonPerMetre(), u)));
+        }
         ArrayNode checks = o.putArray("checks");
         for (CheckResult c : r.checks()) {
             checks.add(CheckJson.check(c, u));

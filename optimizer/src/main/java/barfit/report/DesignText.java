@@ -20,6 +20,11 @@ import java.util.Map;
 public final class DesignText {
     private DesignText() {}
 
+    /** What the carbon figures are, said once under the cost note. */
+    static final String CARBON_NOTE = "Carbon is embodied carbon, " + Carbon.STAGES
+            + ", from the factors in the file or barfit's defaults (published averages, named in the README); "
+            + "use your suppliers' declarations (EPDs) for a figure to report.";
+
     public static String render(Settings settings, List<DesignItem> outcomes, String currency, boolean trail) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
@@ -30,7 +35,9 @@ public final class DesignText {
                 .append('\n');
         out.append(Caution.text()).append('\n');
         out.append("Costs use the rates in the file (or barfit's invented defaults when none are given); ")
-                .append("compare them with your own before relying on a price.\n\n");
+                .append("compare them with your own before relying on a price.\n")
+                .append(CARBON_NOTE)
+                .append("\n\n");
         out.append(CheckText.materials(settings)).append('\n');
         int infeasible = 0;
         for (DesignItem o : outcomes) {
@@ -276,6 +283,16 @@ public final class DesignText {
                     "cost of the beam" + cur,
                     Money.breakdown(d.cost()) + "  over " + u.compact(p.span().length(), Dim.SPAN) + " "
                             + u.unit(Dim.SPAN));
+        }
+        if (d.carbonPerMetre() != null) {
+            // labels no longer than the cost rows' above, so the table keeps its columns
+            t.row("carbon", Carbon.breakdown(Carbon.perLength(d.carbonPerMetre(), u)) + " " + Carbon.perLengthUnit(u));
+            if (p.span() != null) {
+                t.row(
+                        "carbon of beam",
+                        Carbon.breakdown(Carbon.mass(d.carbon(), u)) + " " + Carbon.unit(u) + "  over "
+                                + u.compact(p.span().length(), Dim.SPAN) + " " + u.unit(Dim.SPAN));
+            }
         }
         t.row("proof", proof(o.proof(), u));
         t.write("  ", out);

@@ -62,6 +62,7 @@ final class LineJson {
         ArrayNode stirrups = o.putArray("stirrups");
         ArrayNode deflection = o.putArray("deflection");
         barfit.design.CostBreakdown cost = barfit.design.CostBreakdown.ZERO;
+        barfit.design.CostBreakdown carbon = barfit.design.CostBreakdown.ZERO;
         for (DesignItem it : parts) {
             var d = it.whole().best();
             SpanProblem p = it.whole().problem();
@@ -69,6 +70,7 @@ final class LineJson {
                 continue;
             }
             cost = cost.plus(d.cost());
+            carbon = d.carbon() == null ? null : carbon == null ? null : carbon.plus(d.carbon());
             String part = it.line().part();
             if (part.startsWith("span ")) {
                 ObjectNode s = spans.addObject();
@@ -166,6 +168,9 @@ final class LineJson {
             }
         }
         o.set("cost", DesignJson.cost(cost));
+        if (carbon != null && carbon != barfit.design.CostBreakdown.ZERO) {
+            o.set("carbon", Carbon.json(Carbon.mass(carbon, u)));
+        }
         if (lp.chosen()) {
             // what the search compared the chosen redistribution against
             if (Double.isFinite(lp.withoutRedistribution())) {

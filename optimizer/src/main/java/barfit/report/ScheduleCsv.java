@@ -18,28 +18,28 @@ public final class ScheduleCsv {
         String len = u.unit(Dim.LENGTH);
         String mom = u.unit(Dim.MOMENT);
         StringBuilder out = new StringBuilder();
-        out.append(String.join(
-                        ",",
-                        "id",
-                        "group",
-                        "status",
-                        "width_" + len,
-                        "height_" + len,
-                        "bottom",
-                        "top_continuous",
-                        "top_left",
-                        "top_right",
-                        "stirrups",
-                        "phiMn_left_" + mom,
-                        "Mu_left_" + mom,
-                        "phiMn_mid_" + mom,
-                        "Mu_mid_" + mom,
-                        "phiMn_right_" + mom,
-                        "Mu_right_" + mom,
-                        "cost",
-                        "own_optimum_cost",
-                        "bar_marks"))
-                .append('\n');
+        List<String> header = List.of(
+                "id",
+                "group",
+                "status",
+                "width_" + len,
+                "height_" + len,
+                "bottom",
+                "top_continuous",
+                "top_left",
+                "top_right",
+                "stirrups",
+                "phiMn_left_" + mom,
+                "Mu_left_" + mom,
+                "phiMn_mid_" + mom,
+                "Mu_mid_" + mom,
+                "phiMn_right_" + mom,
+                "Mu_right_" + mom,
+                "cost",
+                "own_optimum_cost",
+                "carbon_" + (u == barfit.units.UnitSystem.US ? "lbCO2e" : "kgCO2e"),
+                "bar_marks");
+        out.append(String.join(",", header)).append('\n');
         for (ScheduleRows.Row schedule : ScheduleRows.rows(r)) {
             ScheduleResult.Beam b = schedule.entry();
             List<String> row = new ArrayList<>();
@@ -48,7 +48,7 @@ public final class ScheduleCsv {
             if (!b.feasible()) {
                 row.add("no design: " + b.outcome().diagnosis().limit() + " - "
                         + DiagnosisWords.summary(b.outcome().diagnosis(), u));
-                for (int i = 0; i < 16; i++) {
+                while (row.size() < header.size() - 1) { // every cell but the bar marks, empty
                     row.add("");
                 }
                 out.append(line(row)).append('\n');
@@ -70,6 +70,10 @@ public final class ScheduleCsv {
             }
             row.add(Money.amount(d.cost().total()));
             row.add(Double.isNaN(b.ownOptimum()) ? "" : Money.amount(b.ownOptimum()));
+            row.add(
+                    d.carbon() == null
+                            ? ""
+                            : Carbon.amount(Carbon.mass(d.carbon().total(), u)));
             row.add(String.join("; ", ScheduleRows.marks(b.beam().id(), d, u)));
             out.append(line(row)).append('\n');
         }

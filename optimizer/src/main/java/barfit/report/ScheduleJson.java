@@ -47,6 +47,10 @@ public final class ScheduleJson {
         sum.put("formwork_sets_cost", round(r.formworkSetsCost()));
         sum.put("total_cost", round(r.totalCost()));
         sum.put("own_optimum_cost", round(r.unconstrainedCost()));
+        if (!Double.isNaN(r.totalCarbon())) {
+            sum.put("total_carbon", round(Carbon.mass(r.totalCarbon(), u)));
+            sum.put("carbon_basis", Carbon.unit(u) + ", " + Carbon.STAGES);
+        }
         ArrayNode sizes = sum.putArray("section_sizes");
         for (ScheduleResult.SectionSize s : r.sizes()) {
             ObjectNode so = sizes.addObject();

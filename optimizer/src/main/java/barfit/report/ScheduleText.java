@@ -124,6 +124,15 @@ public final class ScheduleText {
                             r.unconstrainedCost() > 0 ? 100 * Math.abs(extra) / r.unconstrainedCost() : 0));
         }
         out.append('\n');
+        if (!Double.isNaN(r.totalCarbon())) {
+            out.append("carbon: ")
+                    .append(Carbon.amount(Carbon.mass(r.totalCarbon(), u)))
+                    .append(' ')
+                    .append(Carbon.unit(u))
+                    .append(", ")
+                    .append(Carbon.STAGES)
+                    .append('\n');
+        }
         if (r.proof() != null) {
             out.append("proof: ").append(proof(r)).append('\n');
         }

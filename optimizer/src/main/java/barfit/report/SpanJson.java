@@ -266,5 +266,9 @@ public final class SpanJson {
         }
         o.set("bending_schedule", BendingScheduleJson.rows(barfit.detailing.SpanSchedule.of(d.bars(), p.code()), u));
         o.set("cost", DesignJson.cost(d.cost()));
+        if (d.carbon() != null) {
+            o.set("carbon", Carbon.json(Carbon.mass(d.carbon(), u)));
+            o.set("carbon_per_length", Carbon.json(Carbon.perLength(d.carbon().times(1000.0 / p.span()), u)));
+        }
     }
 }

@@ -178,6 +178,9 @@ public final class SpanText {
         t.row("binding", binding(o.binding(), u));
         String cur = currency.isEmpty() ? "" : " (" + currency + ")";
         t.row("cost" + cur, Money.breakdown(d.cost()) + "  for the span");
+        if (d.carbon() != null) {
+            t.row("carbon", Carbon.breakdown(Carbon.mass(d.carbon(), u)) + " " + Carbon.unit(u) + "  for the span");
+        }
         t.row("proof", proof(o.proof()));
         t.write("  ", out);
         out.append("  bar list:\n");

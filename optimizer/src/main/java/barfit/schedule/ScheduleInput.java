@@ -1,8 +1,11 @@
 package barfit.schedule;
 
+import barfit.design.CarbonFactors;
+import barfit.design.CostModel;
 import barfit.design.CostRates;
 import barfit.design.SearchSpace;
 import barfit.design.line.LineSpans;
+import barfit.input.CarbonReader;
 import barfit.input.Rationalise;
 import barfit.input.SearchReader;
 import barfit.input.Settings;
@@ -26,14 +29,15 @@ public record ScheduleInput(
         int barsPerTwoLegs,
         List<ScheduleBeam> beams,
         Rationalise rationalise,
-        List<LineSpans.Result> lines) {
+        List<LineSpans.Result> lines,
+        CarbonReader.Carbon carbon) {
     public ScheduleInput {
         sources = List.copyOf(sources);
         beams = List.copyOf(beams);
         lines = List.copyOf(lines);
     }
 
-    /** A schedule without lines. */
+    /** A schedule without lines, with the default carbon factors. */
     public ScheduleInput(
             List<String> sources,
             Settings settings,
@@ -56,6 +60,13 @@ public record ScheduleInput(
                 barsPerTwoLegs,
                 beams,
                 rationalise,
-                List.of());
+                List.of(),
+                new CarbonReader.Carbon(
+                        CarbonFactors.defaults(settings.materials().fc()), false, CarbonFactors.defaultConcreteByFc()));
+    }
+
+    /** The cost model of these rates, with the carbon factors beside them. */
+    public CostModel costModel() {
+        return new CostModel(rates, settings.detailing().cover(), settings.code()).withCarbon(carbon.factors());
     }
 }

@@ -39,10 +39,7 @@ public final class ScheduleInputReader {
         List<LineInput> lines = read.lines();
         List<barfit.design.line.LineSpans.Result> designed = List.of();
         if (!lines.isEmpty()) {
-            var cost = new barfit.design.CostModel(
-                    design.rates(),
-                    design.settings().detailing().cover(),
-                    design.settings().code());
+            var cost = design.costModel();
             var byLine = new barfit.design.line.LineSpans(
                     design.settings(),
                     design.space(),
@@ -90,6 +87,7 @@ public final class ScheduleInputReader {
                 design.barsPerTwoLegs(),
                 out,
                 read.rationalise(),
-                designed);
+                designed,
+                design.carbon());
     }
 }

@@ -73,6 +73,18 @@ public record ScheduleResult(
         return beamsCost + formworkSetsCost;
     }
 
+    /** The embodied carbon of the beams with a design, kg CO2e (A1-A3); NaN where a design carries none. */
+    public double totalCarbon() {
+        double kg = 0;
+        for (Beam b : beams) {
+            if (b.feasible()) {
+                var c = b.outcome().best().carbon();
+                kg += c == null ? Double.NaN : c.total();
+            }
+        }
+        return kg;
+    }
+
     /** Every beam has a passing design and, when rationalised, the limits could be met. */
     public boolean allFeasible() {
         return beams.stream().allMatch(Beam::feasible) && (proof == null || proof.status() != Proof.Status.INFEASIBLE);

@@ -2,7 +2,9 @@ package barfit.design.section;
 
 import barfit.catalogs.BarSize;
 import barfit.design.Binding;
+import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
+import barfit.design.Objective;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.design.TensionSearch;
@@ -101,7 +103,19 @@ public final class SectionDesigner {
             throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
                     + " fail on the chosen layout); this is a bug in the search");
         }
-        return new Design(c.layout(), c.cost(), c.cost().times(p.costLength()), report);
+        CostBreakdown perMetre =
+                cost.objective() == Objective.COST ? c.cost() : c.layout().cost(cost.money());
+        CostModel carbon = cost.carbon();
+        CostBreakdown carbonPerMetre = carbon == null
+                ? null
+                : cost.objective() == Objective.CARBON ? c.cost() : c.layout().cost(carbon);
+        return new Design(
+                c.layout(),
+                perMetre,
+                perMetre.times(p.costLength()),
+                report,
+                carbonPerMetre,
+                carbonPerMetre == null ? null : carbonPerMetre.times(p.costLength()));
     }
 
     /** The section model's checks of a layout, with the office's legs rule when the search has one. */

@@ -15,8 +15,20 @@ import java.util.List;
  * {@link SpanVerifier}, what binds, the next distinct alternatives, or a diagnosis.
  */
 public final class SpanDesigner {
-    /** A chosen span with its cost and full verification. */
-    public record Design(SpanLayout layout, CostBreakdown cost, SpanReport report, List<SpanLayout.BarMark> bars) {}
+    /**
+     * A chosen span with its cost and full verification, and its carbon (kg CO2e, A1-A3) priced through the
+     * same model (null where no carbon factors were given).
+     */
+    public record Design(
+            SpanLayout layout,
+            CostBreakdown cost,
+            SpanReport report,
+            List<SpanLayout.BarMark> bars,
+            CostBreakdown carbon) {
+        public Design(SpanLayout layout, CostBreakdown cost, SpanReport report, List<SpanLayout.BarMark> bars) {
+            this(layout, cost, report, bars, null);
+        }
+    }
 
     /**
      * A span's search, for its proof: the generator's counts, the CP-SAT solves and the deflection cuts
@@ -226,7 +238,7 @@ public final class SpanDesigner {
                 throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
                         + " fail on the chosen layout); this is a bug in the search");
             }
-            Design d = new Design(layout, layout.cost(p, cost), report, layout.bars(p, cost));
+            Design d = design(p, layout, report);
             if (best == null) {
                 best = d;
                 first = r;
@@ -251,11 +263,7 @@ public final class SpanDesigner {
                         List.of(),
                         new Diagnosis("time limit", new Diagnosis.TimeLimit(options.timeLimitSeconds())));
             }
-            Design d = new Design(
-                    out.incumbentLayout(),
-                    out.incumbentLayout().cost(p, cost),
-                    report,
-                    out.incumbentLayout().bars(p, cost));
+            Design d = design(p, out.incumbentLayout(), report);
             var proof =
                     Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search, options);
             return new Outcome(p, "feasible", d, List.of(), proof, binding(p, d), null);
@@ -286,7 +294,7 @@ public final class SpanDesigner {
             throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
                     + " fail on the chosen layout); this is a bug in the search");
         }
-        Design d = new Design(layout, layout.cost(p, cost), report, layout.bars(p, cost));
+        Design d = design(p, layout, report);
         String status = proof.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
         return new Outcome(p, status, d, List.of(), proof, binding(p, d), null);
     }
@@ -299,6 +307,17 @@ public final class SpanDesigner {
         SpanReport report = SpanVerifier.verify(p, layout, true);
         Design d = new Design(layout, layout.cost(p, cost), report, layout.bars(p, cost));
         return new Outcome(p, "given", d, List.of(), null, List.of(), null);
+    }
+
+    /** A verified layout with its cost in currency and its carbon, whichever the search minimised. */
+    private Design design(SpanProblem p, SpanLayout layout, SpanReport report) {
+        CostModel carbon = cost.carbon();
+        return new Design(
+                layout,
+                layout.cost(p, cost.money()),
+                report,
+                layout.bars(p, cost),
+                carbon == null ? null : layout.cost(p, carbon));
     }
 
     /** The span generator of a problem, with this designer's cost model. */

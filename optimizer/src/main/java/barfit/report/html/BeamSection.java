@@ -202,6 +202,12 @@ final class BeamSection {
         Html.kv(out, "deflection", deflection(d.report().span(), p, u));
         Html.kv(out, "binding", binding(o.binding(), u));
         Html.kv(out, "cost" + (cur.isEmpty() ? "" : " (" + cur + ")"), Money.breakdown(d.cost()) + " for the span");
+        if (d.carbon() != null) {
+            Html.kv(
+                    out,
+                    "carbon, " + barfit.report.Carbon.unit(u),
+                    barfit.report.Carbon.breakdown(barfit.report.Carbon.mass(d.carbon(), u)) + " for the span");
+        }
         Html.kv(out, "proof", proofWords(o.proof()));
         out.append("</table>\n</div>\n");
         for (String w : SpanText.warnings(p)) {

@@ -7,6 +7,7 @@ import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanLayout;
 import barfit.input.Rationalise;
 import barfit.input.Settings;
+import barfit.report.Carbon;
 import barfit.report.DiagnosisWords;
 import barfit.report.Money;
 import barfit.report.ScheduleRows;
@@ -83,7 +84,9 @@ final class SummarySections {
                 .append(input.currency().isEmpty() ? "" : " (" + Svg.esc(input.currency()) + ")")
                 .append("</caption>\n");
         rates(input.rates(), u, out);
-        out.append("</table>\n</div>\n");
+        out.append("</table>\n");
+        carbonFactors(input.carbon().factors(), u, out);
+        out.append("</div>\n");
 
         out.append("<h3>Rules of thumb the design uses</h3>\n<ul class=\"rules\">\n");
         Html.li(
@@ -362,6 +365,30 @@ final class SummarySections {
                 .append(".</p>\n</section>\n");
     }
 
+    /** The carbon factors the report's carbon figures use, in the file's units. */
+    private static void carbonFactors(barfit.design.CarbonFactors f, barfit.units.UnitSystem u, StringBuilder out) {
+        boolean us = u == barfit.units.UnitSystem.US;
+        out.append("<table class=\"kv\">\n<caption>Carbon factors (")
+                .append(Carbon.unit(u))
+                .append(", ")
+                .append(Carbon.STAGES)
+                .append(")</caption>\n");
+        Html.kv(out, "concrete, per " + (us ? "yd³" : "m³"), Carbon.amount(Carbon.perVolume(f.concretePerM3(), u)));
+        Html.kv(
+                out,
+                "main bars, per " + (us ? "lb" : "kg"),
+                String.format(java.util.Locale.ROOT, "%.3f", f.mainBarsPerKg()));
+        Html.kv(
+                out,
+                "stirrups, per " + (us ? "lb" : "kg"),
+                String.format(java.util.Locale.ROOT, "%.3f", f.stirrupsPerKg()));
+        Html.kv(
+                out,
+                "formwork, per " + (us ? "ft²" : "m²"),
+                String.format(java.util.Locale.ROOT, "%.3f", Carbon.perArea(f.formworkPerM2(), u)));
+        out.append("</table>\n");
+    }
+
     // ---------------------------------------------------------------- costs
 
     static void costs(ScheduleResult r, StringBuilder out) {
@@ -387,6 +414,13 @@ final class SummarySections {
                     ? String.format(Locale.ROOT, " (%+.1f %%)", 100 * difference / r.unconstrainedCost())
                     : "";
             Html.kv(out, "difference", (difference >= 0 ? "+" : "") + Html.money(difference, currency) + percent);
+        }
+        if (!Double.isNaN(r.totalCarbon())) {
+            var u = r.input().settings().units();
+            Html.kv(
+                    out,
+                    "embodied carbon, " + Carbon.STAGES,
+                    Carbon.amount(Carbon.mass(r.totalCarbon(), u)) + " " + Carbon.unit(u));
         }
         out.append("</table>\n");
         long withoutDesign = r.beams().stream().filter(b -> !b.feasible()).count();
