@@ -104,4 +104,17 @@ class DesignExamplesTest {
         }
         assertEquals(anyInfeasible ? 1 : 0, text.exit());
     }
+
+    /** The example with carbon factors, designed for the least carbon: text and JSON against their golden files. */
+    @org.junit.jupiter.api.Test
+    void leastCarbon() {
+        Path file = Path.of("design/hollins-hall-carbon-si.yaml");
+        Cli text = Cli.run("design", file.toString(), "--objective", "carbon", "--alternatives", "1");
+        assertEquals("", text.err());
+        assertEquals(0, text.exit());
+        Golden.check(golden(file, ".least-carbon.txt"), text.out());
+        Cli json = Cli.run("design", file.toString(), "--objective", "carbon", "--format", "json");
+        assertEquals("", json.err());
+        Golden.check(golden(file, ".least-carbon.json"), json.out());
+    }
 }

@@ -46,6 +46,9 @@ final class DesignCommand implements Callable<Integer> {
     @CommandLine.Mixin
     SolverFlags solver;
 
+    @CommandLine.Mixin
+    ObjectiveFlag objective;
+
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     OutputFormat format;
 
@@ -111,7 +114,7 @@ final class DesignCommand implements Callable<Integer> {
         List<String> lineIds = lines.stream().map(LineInput::id).toList();
         List<Path> plots = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-capacity.svg", force);
         List<Path> elevations = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-elevation.svg", force);
-        DesignRun.Result run = DesignRun.run(input, beams, lines, options, alternatives, trail);
+        DesignRun.Result run = DesignRun.run(input, beams, lines, options, alternatives, trail, objective.objective());
         List<DesignItem> outcomes = run.items();
         if (plot != null) {
             for (int k = 0; k < run.lines().size(); k++) {
@@ -135,8 +138,8 @@ final class DesignCommand implements Callable<Integer> {
             }
         }
         String text = format == OutputFormat.json
-                ? DesignJson.render(settings, outcomes, input.currency(), trail)
-                : DesignText.render(settings, outcomes, input.currency(), trail);
+                ? DesignJson.render(settings, outcomes, input.currency(), trail, objective.objective())
+                : DesignText.render(settings, outcomes, input.currency(), trail, objective.objective());
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();
         return run.feasible() ? Main.OK : Main.FAILED;

@@ -1,6 +1,7 @@
 package barfit.cli;
 
 import barfit.design.CostModel;
+import barfit.design.Objective;
 import barfit.design.SolverOptions;
 import barfit.design.line.LineSpans;
 import barfit.design.section.SectionDesigner;
@@ -42,9 +43,10 @@ final class DesignRun {
             List<LineInput> lines,
             SolverOptions options,
             int alternatives,
-            boolean trail) {
+            boolean trail,
+            Objective objective) {
         var settings = input.settings();
-        CostModel cost = input.costModel();
+        CostModel cost = input.costModel().minimising(objective);
         SectionDesigner designer = new SectionDesigner(cost, options);
         SpanDesigner spans = new SpanDesigner(cost, options);
         List<DesignItem> outcomes = new ArrayList<>();

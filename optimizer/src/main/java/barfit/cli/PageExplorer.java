@@ -253,7 +253,8 @@ final class PageExplorer implements Explorer {
     }
 
     private DesignRun.Result run(Edited e, int alternatives) {
-        return DesignRun.run(e.input(), e.input().beams(), e.lines(), options, alternatives, false);
+        return DesignRun.run(
+                e.input(), e.input().beams(), e.lines(), options, alternatives, false, barfit.design.Objective.COST);
     }
 
     @Override

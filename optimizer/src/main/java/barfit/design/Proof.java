@@ -14,7 +14,26 @@ public record Proof<S>(
         SolverStats solver,
         S search,
         int workers,
-        int seed) {
+        int seed,
+        Objective measure) {
+
+    /** As above, proving a cost. */
+    public Proof(
+            Status status,
+            double objective,
+            double bound,
+            double gap,
+            SolverStats solver,
+            S search,
+            int workers,
+            int seed) {
+        this(status, objective, bound, gap, solver, search, workers, seed, Objective.COST);
+    }
+
+    /** The same proof of what {@code m} measures: the objective and bound are carbon (kg CO2e) for carbon. */
+    public Proof<S> measuring(Objective m) {
+        return new Proof<>(status, objective, bound, gap, solver, search, workers, seed, m);
+    }
 
     /** What the searches tell apart. A model CP-SAT finds invalid is a bug, never a status: {@link OrTools#status}. */
     public enum Status {

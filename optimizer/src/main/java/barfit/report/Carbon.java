@@ -1,6 +1,7 @@
 package barfit.report;
 
 import barfit.design.CostBreakdown;
+import barfit.design.Objective;
 import barfit.units.UnitSystem;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.Locale;
@@ -46,6 +47,26 @@ public final class Carbon {
     public static double perArea(double kgPerM2, UnitSystem u) {
         return u == UnitSystem.US ? kgPerM2 * LB_PER_KG * M_PER_FT * M_PER_FT : kgPerM2;
     }
+
+    /** A proof's objective or bound per metre in the user's terms: currency, or carbon per length. */
+    public static double proofPerLength(double perMetre, Objective measure, UnitSystem u) {
+        return measure == Objective.CARBON ? perLength(perMetre, u) : Money.perLength(perMetre, u);
+    }
+
+    /** A proof's objective or bound over a span: currency, or carbon in the user's mass unit. */
+    public static double proofTotal(double v, Objective measure, UnitSystem u) {
+        return measure == Objective.CARBON ? mass(v, u) : v;
+    }
+
+    /** The basis of a per-length proof: "per m", or "kg CO2e per m". */
+    public static String proofBasis(Objective measure, UnitSystem u) {
+        return measure == Objective.CARBON ? perLengthUnit(u) : Money.perLengthLabel(u);
+    }
+
+    /** Said under the notes when the search minimised carbon. */
+    public static final String OBJECTIVE_NOTE = "Objective: the least embodied carbon (--objective carbon): each "
+            + "design is the lowest-carbon passing layout in the search space, proven as cost is; its cost is given "
+            + "beside it.";
 
     /** A per-metre breakdown in the user's unit per length. */
     public static CostBreakdown perLength(CostBreakdown kgPerMetre, UnitSystem u) {

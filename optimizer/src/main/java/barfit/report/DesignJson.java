@@ -3,6 +3,7 @@ package barfit.report;
 import barfit.design.Binding;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
+import barfit.design.Objective;
 import barfit.design.Proof;
 import barfit.design.section.Design;
 import barfit.design.section.DesignOutcome;
@@ -21,6 +22,12 @@ public final class DesignJson {
     private DesignJson() {}
 
     public static String render(Settings settings, List<DesignItem> outcomes, String currency, boolean trail) {
+        return render(settings, outcomes, currency, trail, Objective.COST);
+    }
+
+    /** As above, for designs that minimised {@code objective} (named in the JSON when it is carbon). */
+    public static String render(
+            Settings settings, List<DesignItem> outcomes, String currency, boolean trail, Objective objective) {
         UnitSystem u = settings.units();
         ObjectNode root = Json.object();
         root.put("units", u.name());
@@ -33,6 +40,9 @@ public final class DesignJson {
                 "carbon_basis",
                 Carbon.unit(u) + ", " + Carbon.STAGES + ", per beam when a span is given, otherwise "
                         + Money.perLengthLabel(u));
+        if (objective == Objective.CARBON) {
+            root.put("objective", "carbon");
+        }
         ArrayNode arr = root.putArray("beams");
         for (DesignItem o : outcomes) {
             ObjectNode b = o.section() != null ? beam(o.section(), u, trail) : SpanJson.beam(o.whole(), u, trail);
@@ -201,13 +211,13 @@ public final class DesignJson {
         ObjectNode o = Json.object();
         o.put("solver", "CP-SAT");
         o.put("status", Words.status(p.status()));
-        o.put("basis", Money.perLengthLabel(u));
+        o.put("basis", Carbon.proofBasis(p.measure(), u));
         if (p.bounded()) {
-            o.put("objective", money(Money.perLength(p.objective(), u)));
-            o.put("bound", money(Money.perLength(p.bound(), u)));
+            o.put("objective", money(Carbon.proofPerLength(p.objective(), p.measure(), u)));
+            o.put("bound", money(Carbon.proofPerLength(p.bound(), p.measure(), u)));
             o.put("gap", p.gap());
         } else if (p.status() == Proof.Status.UNPROVEN) { // stopped before a proof
-            o.put("objective", money(Money.perLength(p.objective(), u)));
+            o.put("objective", money(Carbon.proofPerLength(p.objective(), p.measure(), u)));
             o.putNull("bound");
             o.putNull("gap");
         } else { // nothing passes: no objective to bound

@@ -2,6 +2,7 @@ package barfit.report;
 
 import barfit.design.Binding;
 import barfit.design.Diagnosis;
+import barfit.design.Objective;
 import barfit.design.Proof;
 import barfit.design.section.Design;
 import barfit.design.section.DesignOutcome;
@@ -26,6 +27,12 @@ public final class DesignText {
             + "use your suppliers' declarations (EPDs) for a figure to report.";
 
     public static String render(Settings settings, List<DesignItem> outcomes, String currency, boolean trail) {
+        return render(settings, outcomes, currency, trail, Objective.COST);
+    }
+
+    /** As above, for designs that minimised {@code objective}. */
+    public static String render(
+            Settings settings, List<DesignItem> outcomes, String currency, boolean trail, Objective objective) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
         out.append("barfit design — ")
@@ -37,7 +44,11 @@ public final class DesignText {
         out.append("Costs use the rates in the file (or barfit's invented defaults when none are given); ")
                 .append("compare them with your own before relying on a price.\n")
                 .append(CARBON_NOTE)
-                .append("\n\n");
+                .append('\n');
+        if (objective == Objective.CARBON) {
+            out.append(Carbon.OBJECTIVE_NOTE).append('\n');
+        }
+        out.append('\n');
         out.append(CheckText.materials(settings)).append('\n');
         int infeasible = 0;
         for (DesignItem o : outcomes) {
@@ -297,12 +308,17 @@ public final class DesignText {
         t.row("proof", proof(o.proof(), u));
         t.write("  ", out);
         if (!o.alternatives().isEmpty()) {
-            out.append("  alternatives (next cheapest distinct section or bar size):\n");
+            boolean carbon = o.proof().measure() == Objective.CARBON;
+            out.append(
+                    carbon
+                            ? "  alternatives (next lowest-carbon distinct section or bar size; " + Carbon.unit(u)
+                                    + "):\n"
+                            : "  alternatives (next cheapest distinct section or bar size):\n");
             TextTable a = new TextTable(false, false, true, true);
-            double bestCost = d.cost().total();
+            double bestCost = (carbon ? d.carbon() : d.cost()).total();
             int k = 1;
             for (Design alt : o.alternatives()) {
-                double c = alt.cost().total();
+                double c = (carbon ? alt.carbon() : alt.cost()).total();
                 a.row(
                         "#" + k++,
                         describe(alt.layout(), u)
@@ -312,10 +328,17 @@ public final class DesignText {
                                                 + alt.layout().skin().bar().label() + " @ "
                                                 + u.withUnit(alt.layout().skin().spacing(), Dim.LENGTH)
                                         : ""),
-                        Money.amount(
-                                p.span() != null
-                                        ? c
-                                        : Money.perLength(alt.costPerMetre().total(), u)),
+                        carbon
+                                ? Carbon.amount(
+                                        p.span() != null
+                                                ? Carbon.mass(c, u)
+                                                : Carbon.perLength(
+                                                        alt.carbonPerMetre().total(), u))
+                                : Money.amount(
+                                        p.span() != null
+                                                ? c
+                                                : Money.perLength(
+                                                        alt.costPerMetre().total(), u)),
                         String.format(Locale.ROOT, "+%.1f %%", 100 * (c - bestCost) / bestCost));
             }
             a.write("    ", out);
@@ -369,11 +392,11 @@ public final class DesignText {
                     + " candidates the generator found is given, with no bound (raise --time-limit for the proof); "
                     + p.workers() + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
         }
-        String bound = String.format(Locale.ROOT, "%.4f", Money.perLength(p.bound(), u));
-        String obj = String.format(Locale.ROOT, "%.4f", Money.perLength(p.objective(), u));
+        String bound = String.format(Locale.ROOT, "%.4f", Carbon.proofPerLength(p.bound(), p.measure(), u));
+        String obj = String.format(Locale.ROOT, "%.4f", Carbon.proofPerLength(p.objective(), p.measure(), u));
         return "CP-SAT " + Words.status(p.status()) + " over " + s.candidates()
                 + (s.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + ", bound " + bound + " "
-                + Money.perLengthLabel(u) + ", gap "
+                + Carbon.proofBasis(p.measure(), u) + ", gap "
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %); " + s.framesEvaluated() + " of "
                 + s.frames()
                 + " frames evaluated, " + s.framesPrunedByBound() + " skipped by the cost bound; " + p.workers()

@@ -14,6 +14,9 @@ public final class ScheduleJson {
         UnitSystem u = r.input().settings().units();
         ObjectNode root = Json.object();
         root.put("caution", Caution.SHORT);
+        if (r.leastCarbon()) {
+            root.put("objective", "carbon");
+        }
         root.put("code", r.input().settings().code().edition());
         root.put("units", u.name());
         root.set("unit_labels", Json.units(u));

@@ -17,6 +17,9 @@ public final class ScheduleText {
         UnitSystem u = r.input().settings().units();
         StringBuilder out = new StringBuilder();
         out.append(Caution.text()).append("\n\n");
+        if (r.leastCarbon()) {
+            out.append(Carbon.OBJECTIVE_NOTE).append("\n\n");
+        }
         out.append("Beam schedule: ")
                 .append(String.join(" + ", r.input().sources()))
                 .append(", ")

@@ -81,13 +81,16 @@ public final class SpanJson {
         boolean withLine = pr.search().withLine();
         proof.put("solver", withLine ? "dynamic programming along the line" : "CP-SAT");
         proof.put("status", Words.status(pr.status()));
-        proof.put("basis", withLine ? "with its line (shared support bars)" : "per span");
+        proof.put(
+                "basis",
+                (withLine ? "with its line (shared support bars)" : "per span")
+                        + (pr.measure() == barfit.design.Objective.CARBON ? ", " + Carbon.unit(u) : ""));
         if (pr.bounded()) {
-            proof.put("objective", pr.objective());
-            proof.put("bound", pr.bound());
+            proof.put("objective", Carbon.proofTotal(pr.objective(), pr.measure(), u));
+            proof.put("bound", Carbon.proofTotal(pr.bound(), pr.measure(), u));
             proof.put("gap", pr.gap());
         } else if (pr.status() == Proof.Status.UNPROVEN) { // stopped by the time limit before a proof
-            proof.put("objective", pr.objective());
+            proof.put("objective", Carbon.proofTotal(pr.objective(), pr.measure(), u));
             proof.putNull("bound");
             proof.putNull("gap");
         } else { // no design: nothing to bound

@@ -181,7 +181,7 @@ public final class SpanText {
         if (d.carbon() != null) {
             t.row("carbon", Carbon.breakdown(Carbon.mass(d.carbon(), u)) + " " + Carbon.unit(u) + "  for the span");
         }
-        t.row("proof", proof(o.proof()));
+        t.row("proof", proof(o.proof(), u));
         t.write("  ", out);
         out.append("  bar list:\n");
         TextTable bars = new TextTable(false, false, true, false, true);
@@ -411,7 +411,7 @@ public final class SpanText {
         return n + (n == 1 ? " set" : " sets");
     }
 
-    public static String proof(Proof<SpanDesigner.Search> p) {
+    public static String proof(Proof<SpanDesigner.Search> p, UnitSystem u) {
         if (p.status() == Proof.Status.UNPROVEN) {
             return "not proven: the time limit ended CP-SAT before it had a solution; the generator's cheapest design"
                     + " is given, with no bound (raise --time-limit for the proof); " + p.workers()
@@ -426,8 +426,11 @@ public final class SpanText {
                     + " frames of this part searched, " + s.generator().framesSkipped() + " skipped by the cost "
                     + "bound";
         }
-        return "CP-SAT " + Words.status(p.status()) + " (objective " + String.format(Locale.ROOT, "%.4f", p.objective())
-                + ", bound " + String.format(Locale.ROOT, "%.4f", p.bound()) + ", gap "
+        boolean carbon = p.measure() == barfit.design.Objective.CARBON;
+        return "CP-SAT " + Words.status(p.status()) + " (objective "
+                + String.format(Locale.ROOT, "%.4f", Carbon.proofTotal(p.objective(), p.measure(), u))
+                + ", bound " + String.format(Locale.ROOT, "%.4f", Carbon.proofTotal(p.bound(), p.measure(), u))
+                + (carbon ? " " + Carbon.unit(u) : "") + ", gap "
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over "
                 + p.solver().booleans() + " booleans; "
                 + s.generator().framesEvaluated() + " of " + s.generator().frames() + " frames evaluated, "

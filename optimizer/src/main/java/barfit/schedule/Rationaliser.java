@@ -162,10 +162,10 @@ final class Rationaliser {
                     .withSpace(given.space().withDepths(List.of(size.height())).withMainBars(allowed));
             SpanDesigner.Outcome o = designer.design(restricted, 0);
             double price = prices.exactPrice(i, sizeOf[i], best.bars());
-            if (!o.feasible() || Math.abs(o.best().cost().total() - price) > 1e-3) {
+            if (!o.feasible() || Math.abs(o.best().searched(cost).total() - price) > 1e-3) {
                 throw new IllegalStateException("beam " + given.id() + " in " + size.width() + " x " + size.height()
                         + " was priced at " + price + " but designs at "
-                        + (o.feasible() ? o.best().cost().total() : "nothing")
+                        + (o.feasible() ? o.best().searched(cost).total() : "nothing")
                         + "; this is a bug in the schedule search");
             }
             // reported against the beam as given (its own width and depth limits), designed in its size

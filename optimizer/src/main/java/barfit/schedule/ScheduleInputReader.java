@@ -30,6 +30,12 @@ public final class ScheduleInputReader {
 
     /** As above, the lines designed {@code threads} at a time (the answer does not depend on it). */
     public static ScheduleInput read(Path file, Path csv, barfit.design.SolverOptions options, int threads) {
+        return read(file, csv, options, threads, barfit.design.Objective.COST);
+    }
+
+    /** As above, the lines designed for {@code objective}. */
+    public static ScheduleInput read(
+            Path file, Path csv, barfit.design.SolverOptions options, int threads, barfit.design.Objective objective) {
         ScheduleFileReader.ScheduleFile read = ScheduleFileReader.read(file, csv);
         DesignInput design = read.design();
         List<ScheduleBeam> out = new ArrayList<>();
@@ -39,7 +45,7 @@ public final class ScheduleInputReader {
         List<LineInput> lines = read.lines();
         List<barfit.design.line.LineSpans.Result> designed = List.of();
         if (!lines.isEmpty()) {
-            var cost = design.costModel();
+            var cost = design.costModel().minimising(objective);
             var byLine = new barfit.design.line.LineSpans(
                     design.settings(),
                     design.space(),

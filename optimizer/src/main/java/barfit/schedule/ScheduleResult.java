@@ -85,6 +85,11 @@ public record ScheduleResult(
         return kg;
     }
 
+    /** Whether the beams were designed for the least carbon ({@code --objective carbon}). */
+    public boolean leastCarbon() {
+        return beams.stream().anyMatch(b -> b.outcome().proof().measure() == barfit.design.Objective.CARBON);
+    }
+
     /** Every beam has a passing design and, when rationalised, the limits could be met. */
     public boolean allFeasible() {
         return beams.stream().allMatch(Beam::feasible) && (proof == null || proof.status() != Proof.Status.INFEASIBLE);

@@ -23,6 +23,9 @@ final class SizePrices {
     /** A section size b x h (mm). */
     record Size(double width, double height) {}
 
+    /** The model the schedule is priced with (cost, or carbon under that objective). */
+    private final CostModel cost;
+
     private final List<ScheduleBeam> beams;
     private final Parallel pool;
     /** Every section size any beam may take, ordered by width then height. */
@@ -38,6 +41,7 @@ final class SizePrices {
 
     /** Bounds every beam with a design of its own ({@code own}) in every size, beam by beam in parallel. */
     SizePrices(ScheduleInput in, List<SpanDesigner.Outcome> own, CostModel cost, Parallel pool) {
+        this.cost = cost;
         this.beams = in.beams();
         this.pool = pool;
         this.sizes = sizesOf(in);
@@ -81,7 +85,7 @@ final class SizePrices {
         if (generator == null) {
             return out;
         }
-        double floor = own.best().cost().total();
+        double floor = own.best().searched(cost).total();
         for (int s = 0; s < sizes.size(); s++) {
             double[][] bound =
                     generator.lowerBounds(sizes.get(s).width(), sizes.get(s).height());

@@ -247,7 +247,7 @@ final class OneSectionSearch {
                 if (o == null || !o.feasible()) {
                     return null;
                 }
-                total += o.best().cost().total();
+                total += o.best().searched(designer.costModel()).total();
                 if (total + rest >= beat - 1e-9) {
                     return null;
                 }
@@ -262,7 +262,7 @@ final class OneSectionSearch {
                 }
                 total = 0;
                 for (Part pt : parts) {
-                    total += pt.outcome().best().cost().total();
+                    total += pt.outcome().best().searched(designer.costModel()).total();
                 }
             }
             List<Double> epsT = Redistribution.supportStrains(in, parts);
@@ -294,7 +294,12 @@ final class OneSectionSearch {
             List<SpanGenerator.Stats> stats = new ArrayList<>();
             for (Part pt : ordered) {
                 SpanProblem p = pt.problem();
-                double limit = ceiling - (ownTotal - pt.outcome().best().cost().total());
+                double limit = ceiling
+                        - (ownTotal
+                                - pt.outcome()
+                                        .best()
+                                        .searched(designer.costModel())
+                                        .total());
                 SpanGenerator g = designer.generator(p);
                 SpanGenerator.Output out = g.optionsUnder(limit * (1 + 1e-9) + 1e-9);
                 stats.add(out.stats());
@@ -502,10 +507,10 @@ final class OneSectionSearch {
         return out;
     }
 
-    private static double total(List<Part> parts) {
+    private double total(List<Part> parts) {
         double t = 0;
         for (Part pt : parts) {
-            t += pt.outcome().best().cost().total();
+            t += pt.outcome().best().searched(designer.costModel()).total();
         }
         return t;
     }
@@ -519,13 +524,14 @@ final class OneSectionSearch {
         long units =
                 CostModel.SPAN_UNITS.units(layout.cost(p, designer.costModel()).total());
         var proof = Proof.solved(
-                Proof.Status.OPTIMAL,
-                units,
-                units,
-                CostModel.SPAN_UNITS,
-                Proof.SolverStats.NONE,
-                new SpanDesigner.Search(stats, 0, 0, true),
-                designer.options());
+                        Proof.Status.OPTIMAL,
+                        units,
+                        units,
+                        CostModel.SPAN_UNITS,
+                        Proof.SolverStats.NONE,
+                        new SpanDesigner.Search(stats, 0, 0, true),
+                        designer.options())
+                .measuring(designer.costModel().objective());
         return designer.adopt(p, layout, proof);
     }
 

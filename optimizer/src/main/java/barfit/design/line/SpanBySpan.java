@@ -49,7 +49,9 @@ final class SpanBySpan {
             Result r = bySpan(in, alternatives, b);
             double total = 0;
             for (Part pt : r.parts()) {
-                total += pt.outcome().feasible() ? pt.outcome().best().cost().total() : Double.POSITIVE_INFINITY;
+                total += pt.outcome().feasible()
+                        ? pt.outcome().best().searched(designer.costModel()).total()
+                        : Double.POSITIVE_INFINITY;
             }
             if (total < bestTotal - 1e-9) {
                 best = r;

@@ -36,7 +36,8 @@ public final class SectionDesigner {
         SectionGenerator.Output gen = new SectionGenerator(p, cost).generate(1 + alternatives);
         List<Candidate> cands = gen.candidates();
         if (cands.isEmpty()) {
-            var proof = Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options);
+            var proof =
+                    Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options).measuring(cost.objective());
             return new DesignOutcome(
                     p, "infeasible", null, List.of(), proof, List.of(), SectionDiagnoser.diagnose(p, cost));
         }
@@ -57,7 +58,8 @@ public final class SectionDesigner {
                 }
             }
             Design best = verified(p, cands.get(cheapest));
-            var proof = Proof.unproven(cands.get(cheapest).units(), CostModel.UNITS, gen.stats(), options);
+            var proof = Proof.unproven(cands.get(cheapest).units(), CostModel.UNITS, gen.stats(), options)
+                    .measuring(cost.objective());
             return new DesignOutcome(p, "feasible", best, List.of(), proof, binding(p, best.layout()), null);
         }
         int chosen = indexOf(first.chosen());
@@ -75,7 +77,14 @@ public final class SectionDesigner {
         }
         String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
         var proof = Proof.solved(
-                first.status(), first.objective(), first.bound(), CostModel.UNITS, first.stats(), gen.stats(), options);
+                        first.status(),
+                        first.objective(),
+                        first.bound(),
+                        CostModel.UNITS,
+                        first.stats(),
+                        gen.stats(),
+                        options)
+                .measuring(cost.objective());
         return new DesignOutcome(p, status, best, alts, proof, binding(p, best.layout()), null);
     }
 

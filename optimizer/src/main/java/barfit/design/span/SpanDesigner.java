@@ -3,6 +3,7 @@ package barfit.design.span;
 import barfit.design.Binding;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
+import barfit.design.Objective;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.section.CheckResult;
@@ -27,6 +28,11 @@ public final class SpanDesigner {
             CostBreakdown carbon) {
         public Design(SpanLayout layout, CostBreakdown cost, SpanReport report, List<SpanLayout.BarMark> bars) {
             this(layout, cost, report, bars, null);
+        }
+
+        /** What a search pricing with {@code model} minimised: the cost, or the carbon. */
+        public CostBreakdown searched(CostModel model) {
+            return model.objective() == Objective.CARBON ? carbon : cost;
         }
     }
 
@@ -203,7 +209,8 @@ public final class SpanDesigner {
             return null;
         }
         if (out.incumbentLayout() == null) {
-            var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(stats, 0, 0), options);
+            var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(stats, 0, 0), options)
+                    .measuring(cost.objective());
             return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), new SpanDiagnoser(cost).diagnose(p));
         }
         SpanSelection sel = new SpanSelection(p, out.sets());
@@ -253,7 +260,8 @@ public final class SpanDesigner {
             SpanReport report = SpanVerifier.verify(p, out.incumbentLayout(), true);
             Search search = new Search(stats, solves, cuts);
             if (!report.ok()) {
-                var proof = Proof.none(Proof.Status.OUT_OF_TIME, search, options);
+                var proof =
+                        Proof.none(Proof.Status.OUT_OF_TIME, search, options).measuring(cost.objective());
                 return new Outcome(
                         p,
                         "unknown",
@@ -264,18 +272,20 @@ public final class SpanDesigner {
                         new Diagnosis("time limit", new Diagnosis.TimeLimit(options.timeLimitSeconds())));
             }
             Design d = design(p, out.incumbentLayout(), report);
-            var proof =
-                    Proof.unproven(CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search, options);
+            var proof = Proof.unproven(
+                            CostModel.SPAN_UNITS.units(out.incumbent()), CostModel.SPAN_UNITS, search, options)
+                    .measuring(cost.objective());
             return new Outcome(p, "feasible", d, List.of(), proof, binding(p, d), null);
         }
         var proof = Proof.solved(
-                first.status(),
-                first.objective(),
-                first.bound(),
-                CostModel.SPAN_UNITS,
-                first.stats(),
-                new Search(stats, solves, cuts),
-                options);
+                        first.status(),
+                        first.objective(),
+                        first.bound(),
+                        CostModel.SPAN_UNITS,
+                        first.stats(),
+                        new Search(stats, solves, cuts),
+                        options)
+                .measuring(cost.objective());
         String status = first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible";
         return new Outcome(p, status, best, alts, proof, binding(p, best), null);
     }

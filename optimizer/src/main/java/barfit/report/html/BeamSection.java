@@ -441,7 +441,7 @@ final class BeamSection {
 
     private static String proofWords(Proof<SpanDesigner.Search> p) {
         if (p.status() == Proof.Status.UNPROVEN) {
-            return SpanText.proof(p);
+            return SpanText.proof(p, barfit.units.UnitSystem.SI);
         }
         var s = p.search();
         return "CP-SAT " + Words.status(p.status()) + ", objective " + String.format(Locale.ROOT, "%.4f", p.objective())
