@@ -12,6 +12,7 @@ import barfit.input.DesignInput;
 import barfit.input.DesignInputReader;
 import barfit.input.LineInput;
 import barfit.input.LinesReader;
+import barfit.report.Carbon;
 import barfit.report.DesignItem;
 import barfit.report.DesignJson;
 import barfit.report.DesignText;
@@ -77,6 +78,13 @@ final class DesignCommand implements Callable<Integer> {
                     + "(created if missing; existing plots are kept unless --force)")
     Path plot;
 
+    @Option(
+            names = "--carbon-cap",
+            paramLabel = "X",
+            description = "the cheapest design whose embodied carbon is at most X kg CO2e per m of beam (lb CO2e per "
+                    + "ft in inch-pound files), proven; single sections only")
+    Double carbonCap;
+
     @Option(names = "--force", description = "replace plot files that exist")
     boolean force;
 
@@ -111,10 +119,30 @@ final class DesignCommand implements Callable<Integer> {
             }
         }
         var settings = input.settings();
+        Double capPerMetre = null;
+        if (carbonCap != null) {
+            if (!(carbonCap > 0) || Double.isInfinite(carbonCap)) {
+                throw OptionError.of("--carbon-cap", "expected a positive carbon per length, got " + carbonCap);
+            }
+            List<String> whole = new ArrayList<>(beams.stream()
+                    .filter(DesignBeam::isWhole)
+                    .map(DesignBeam::id)
+                    .toList());
+            lines.forEach(l -> whole.add(l.id()));
+            if (!whole.isEmpty()) {
+                throw OptionError.of(
+                        "--carbon-cap",
+                        "applies to single sections so far; " + String.join(", ", whole)
+                                + (whole.size() == 1 ? " is a whole span or line" : " are whole spans or lines")
+                                + ": choose a single section with --beam");
+            }
+            capPerMetre = Carbon.perMetreFromUser(carbonCap, settings.units());
+        }
         List<String> lineIds = lines.stream().map(LineInput::id).toList();
         List<Path> plots = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-capacity.svg", force);
         List<Path> elevations = plot == null ? List.of() : PlotFolder.targets(plot, lineIds, "-elevation.svg", force);
-        DesignRun.Result run = DesignRun.run(input, beams, lines, options, alternatives, trail, objective.objective());
+        DesignRun.Result run =
+                DesignRun.run(input, beams, lines, options, alternatives, trail, objective.objective(), capPerMetre);
         List<DesignItem> outcomes = run.items();
         if (plot != null) {
             for (int k = 0; k < run.lines().size(); k++) {

@@ -45,6 +45,19 @@ final class DesignRun {
             int alternatives,
             boolean trail,
             Objective objective) {
+        return run(input, beams, lines, options, alternatives, trail, objective, null);
+    }
+
+    /** As above, each single section within {@code carbonCap} kg CO2e per m (null: no cap). */
+    static Result run(
+            DesignInput input,
+            List<DesignBeam> beams,
+            List<LineInput> lines,
+            SolverOptions options,
+            int alternatives,
+            boolean trail,
+            Objective objective,
+            Double carbonCap) {
         var settings = input.settings();
         CostModel cost = input.costModel().minimising(objective);
         SectionDesigner designer = new SectionDesigner(cost, options);
@@ -54,7 +67,7 @@ final class DesignRun {
             outcomes.add(
                     b.isWhole()
                             ? DesignItem.of(spans.design(DesignCommand.span(input, b), alternatives))
-                            : DesignItem.of(designer.design(DesignCommand.problem(input, b), alternatives)));
+                            : DesignItem.of(designer.design(DesignCommand.problem(input, b), alternatives, carbonCap)));
         }
         LineSpans byLine =
                 new LineSpans(settings, input.space(), spans, input.maxBarSizesPerBeam(), input.barsPerTwoLegs());

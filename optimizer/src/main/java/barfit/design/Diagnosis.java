@@ -31,7 +31,8 @@ public record Diagnosis(
                     FlexureFails,
                     ShearFails,
                     TorsionFails,
-                    DetailingFails {}
+                    DetailingFails,
+                    CarbonCapFails {}
 
     /** {@code max_depth} is below the shallowest depth searched, {@code shallowest}. */
     public record BelowShallowest(double shallowest) implements Cause {}
@@ -57,6 +58,12 @@ public record Diagnosis(
 
     /** Strength can be met but no layout passes every detailing check. */
     public record DetailingFails() implements Cause {}
+
+    /**
+     * Layouts pass, but none within the carbon cap ({@code cap}, kg CO2e per metre): the least carbon of any
+     * passing layout is {@code least}, that of {@code leastLayout}.
+     */
+    public record CarbonCapFails(double cap, double least, SectionLayout leastLayout) implements Cause {}
 
     /** A size at which the section designs. */
     public record Fix(double width, double height) {}

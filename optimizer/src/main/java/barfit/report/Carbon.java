@@ -33,6 +33,11 @@ public final class Carbon {
         return u == UnitSystem.US ? kgPerMetre * LB_PER_KG * M_PER_FT : kgPerMetre;
     }
 
+    /** A carbon per length in the user's unit (lb CO2e per ft in US input) to kg per metre. */
+    public static double perMetreFromUser(double v, UnitSystem u) {
+        return v / perLength(1.0, u);
+    }
+
     /** kg to the user's mass unit. */
     public static double mass(double kg, UnitSystem u) {
         return u == UnitSystem.US ? kg * LB_PER_KG : kg;

@@ -52,6 +52,14 @@ public final class DiagnosisWords {
         if (cause instanceof Diagnosis.TorsionFails c) {
             return torsion(c, u);
         }
+        if (cause instanceof Diagnosis.CarbonCapFails c) {
+            return "layouts pass, but none within the carbon cap of " + Carbon.amount(Carbon.perLength(c.cap(), u))
+                    + " " + Carbon.perLengthUnit(u) + ": the least carbon of any passing layout is "
+                    + Carbon.amount(Carbon.perLength(c.least(), u)) + " " + Carbon.perLengthUnit(u) + " (at "
+                    + say(u, c.leastLayout().width(), Dim.LENGTH) + " × "
+                    + say(u, c.leastLayout().height(), Dim.LENGTH)
+                    + ")";
+        }
         return "strength can be met but no layout passes every detailing check";
     }
 
@@ -81,6 +89,11 @@ public final class DiagnosisWords {
 
     public static List<String> fixes(Diagnosis d, UnitSystem u) {
         List<String> out = new ArrayList<>();
+        if (d.cause() instanceof Diagnosis.CarbonCapFails c) {
+            // rounded up, so that the cap it names admits the least-carbon layout
+            double least = Math.ceil(Carbon.perLength(c.least(), u) * 10) / 10;
+            out.add("--carbon-cap " + Carbon.amount(least) + " or more (the least carbon any passing layout has)");
+        }
         if (d.deeper() != null) {
             out.add("needs h ≥ " + say(u, d.deeper().height(), Dim.LENGTH) + " at b = "
                     + say(u, d.deeper().width(), Dim.LENGTH)

@@ -78,6 +78,13 @@ class BadInputTest {
                         "expected --plot in an existing directory"),
                 Arguments.of(List.of("sweep", STUDY, "--csv", "--format", "json"), "--csv:", "expected one of them"),
                 Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"),
+                Arguments.of(
+                        List.of("design", "../examples/design/clinic-line-c-spans-si.yaml", "--carbon-cap", "100"),
+                        "--carbon-cap:",
+                        "applies to single sections so far"),
+                Arguments.of(
+                        List.of("design", STUDY, "--carbon-cap", "-5"), "--carbon-cap:", "expected a positive carbon"),
+                Arguments.of(List.of("design", STUDY, "--objective", "money"), "", "--objective"),
                 // a number the parser cannot read, in words (not "'abc' is not a double")
                 Arguments.of(
                         List.of("compare", STUDY, "--fc", "abc"),

@@ -4,6 +4,7 @@ import barfit.catalogs.BarSize;
 import barfit.design.Binding;
 import barfit.design.CostBreakdown;
 import barfit.design.CostModel;
+import barfit.design.Diagnosis;
 import barfit.design.Objective;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
@@ -33,13 +34,36 @@ public final class SectionDesigner {
     }
 
     public DesignOutcome design(SectionProblem p, int alternatives) {
-        SectionGenerator.Output gen = new SectionGenerator(p, cost).generate(1 + alternatives);
+        return design(p, alternatives, null);
+    }
+
+    /**
+     * The cheapest passing layout (least of this model's measure) whose carbon per metre is at most
+     * {@code carbonCap} (kg CO2e per m; null: no cap). The generator keeps only layouts within the cap and the
+     * CP-SAT model holds the cap as a constraint, so the proof covers it; when layouts pass but none is within
+     * the cap, the diagnosis gives the least carbon any passing layout has.
+     */
+    public DesignOutcome design(SectionProblem p, int alternatives, Double carbonCap) {
+        long cap = carbonCap == null ? Long.MAX_VALUE : CostModel.units(carbonCap);
+        return design(p, alternatives, carbonCap == null ? null : cost.carbon(), cap, carbonCap);
+    }
+
+    /**
+     * The least of this model's measure among passing layouts whose price at {@code capMeasure} is at most
+     * {@code cap} units per metre (the money beside a carbon model, for a frontier), with no diagnosis.
+     */
+    public DesignOutcome designCapped(SectionProblem p, CostModel capMeasure, long cap) {
+        return design(p, 0, capMeasure, cap, null);
+    }
+
+    private DesignOutcome design(SectionProblem p, int alternatives, CostModel capMeasure, long cap, Double carbonCap) {
+        SectionGenerator.Output gen =
+                new SectionGenerator(p, cost).cap(capMeasure, cap).generate(1 + alternatives);
         List<Candidate> cands = gen.candidates();
         if (cands.isEmpty()) {
             var proof =
                     Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options).measuring(cost.objective());
-            return new DesignOutcome(
-                    p, "infeasible", null, List.of(), proof, List.of(), SectionDiagnoser.diagnose(p, cost));
+            return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), capDiagnosis(p, carbonCap));
         }
         SectionSelection sel = new SectionSelection();
         List<Integer> all = new ArrayList<>();
@@ -47,6 +71,14 @@ public final class SectionDesigner {
             all.add(sel.add(cands.get(i).units(), "c" + i));
         }
         sel.exactlyOne(all);
+        if (capMeasure != null) {
+            long[] capped = new long[cands.size()];
+            for (int i = 0; i < capped.length; i++) {
+                capped[i] =
+                        CostModel.units(cands.get(i).layout().cost(capMeasure).total());
+            }
+            sel.atMost(capped, cap);
+        }
         SectionSelection.Result first = sel.solve(options);
         if (!solved(first)) {
             // the time limit ended the solve before it had a solution: give the generator's cheapest
@@ -86,6 +118,33 @@ public final class SectionDesigner {
                         options)
                 .measuring(cost.objective());
         return new DesignOutcome(p, status, best, alts, proof, binding(p, best.layout()), null);
+    }
+
+    /**
+     * Why nothing is within the cap: the section's own diagnosis when no layout passes at all, else the least
+     * carbon of any passing layout (designed for it).
+     */
+    private Diagnosis capDiagnosis(SectionProblem p, Double carbonCap) {
+        if (carbonCap == null) {
+            return SectionDiagnoser.diagnose(p, cost);
+        }
+        DesignOutcome least = new SectionDesigner(cost.minimising(Objective.CARBON), options).design(p, 0);
+        if (!least.feasible()) {
+            return least.diagnosis();
+        }
+        return new Diagnosis(
+                "carbon_cap",
+                new Diagnosis.CarbonCapFails(
+                        carbonCap,
+                        least.best().carbonPerMetre().total(),
+                        least.best().layout()),
+                null,
+                0,
+                null,
+                null,
+                null,
+                p.maxDepth(),
+                p.fixedWidth());
     }
 
     private static boolean solved(SectionSelection.Result r) {

@@ -40,9 +40,31 @@ public final class SectionExhaustive {
     }
 
     private final CostModel cost;
+    /** Prices carbon for a cap (null: no cap). */
+    private final CostModel carbon;
+    /** The carbon cap in the searches' units per metre: layouts above it do not count. */
+    private final long cap;
+    /** Every passing layout within the cap, when asked for (null otherwise). */
+    private final List<SectionLayout> passing;
 
     public SectionExhaustive(CostModel cost) {
+        this(cost, null, Long.MAX_VALUE, false);
+    }
+
+    /**
+     * The cheapest at {@code cost} among layouts whose carbon at {@code carbon} is at most {@code cap} units
+     * per metre; {@code keepPassing}: also list every such layout ({@link #passing}).
+     */
+    public SectionExhaustive(CostModel cost, CostModel carbon, long cap, boolean keepPassing) {
         this.cost = cost;
+        this.carbon = carbon;
+        this.cap = cap;
+        this.passing = keepPassing ? new ArrayList<>() : null;
+    }
+
+    /** Every passing layout within the cap that the solves so far met (when asked for). */
+    public List<SectionLayout> passing() {
+        return passing == null ? List.of() : List.copyOf(passing);
     }
 
     public Result solve(SectionProblem p) {
@@ -172,6 +194,12 @@ public final class SectionExhaustive {
         CheckReport r = SectionChecks.run(s, demand, p.span(), Trail.off());
         if (!r.ok()) {
             return -1;
+        }
+        if (carbon != null && CostModel.units(lay.cost(carbon).total()) > cap) {
+            return -1;
+        }
+        if (passing != null) {
+            passing.add(lay);
         }
         long units = CostModel.units(lay.cost(cost).total());
         perKey.merge(lay.distinctKey(), units, Math::min);

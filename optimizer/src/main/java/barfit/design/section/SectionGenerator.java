@@ -77,6 +77,16 @@ public final class SectionGenerator {
     private final Map<String, Candidate> best = new LinkedHashMap<>();
 
     private int keep;
+    /**
+     * The carbon cap in the searches' units per metre ({@link CostModel#units}): a layout whose carbon exceeds
+     * it is never kept, so every bound and cut below is the cost of a layout within the cap. For one key the
+     * cheapest layout within the cap is then found as the cheapest is without one: the scans go on past a
+     * cheaper layout over the cap, and what they skip costs more than a layout within it (Long.MAX_VALUE: none).
+     */
+    private long carbonCap = Long.MAX_VALUE;
+    /** What the cap measures: the carbon beside the cost model, or (for a frontier) the money beside carbon. */
+    private CostModel capMeasure;
+
     private double cachedBound = Double.POSITIVE_INFINITY;
     private boolean boundDirty = true;
     /** Whether an option of the compression layer being tried relied on its bars (so needed ties). */
@@ -133,6 +143,30 @@ public final class SectionGenerator {
         double tightLowerBound(SectionGenerator g) {
             return lowerBound - cheapestStirrups + stirrupLb(g);
         }
+    }
+
+    /** Keeps only layouts whose carbon per metre, in the searches' units, is at most {@code units}. */
+    public SectionGenerator capCarbon(long units) {
+        if (units != Long.MAX_VALUE && cost.carbon() == null) {
+            throw new IllegalStateException("a carbon cap needs the carbon factors beside the cost model");
+        }
+        return cap(cost.carbon(), units);
+    }
+
+    /**
+     * Keeps only layouts whose price at {@code measure} (another model over the same quantities, every rate
+     * at least zero) is at most {@code units} per metre. The argument above holds for any such measure.
+     */
+    public SectionGenerator cap(CostModel measure, long units) {
+        this.capMeasure = measure;
+        this.carbonCap = units;
+        return this;
+    }
+
+    /** Whether a layout is within the cap (always, without one). */
+    private boolean withinCap(SectionLayout lay) {
+        return carbonCap == Long.MAX_VALUE
+                || CostModel.units(lay.cost(capMeasure).total()) <= carbonCap;
     }
 
     public Output generate(int keepDistinct) {
@@ -574,7 +608,7 @@ public final class SectionGenerator {
                 f.b(), f.h(), p.flange(), bending, t, TensionSearch.toList(split), c, m, st, f.skin());
         Candidate cand = new Candidate(lay, lay.cost(cost));
         Candidate kb = best.get(key);
-        if (kb == null || cand.units() < kb.units()) {
+        if ((kb == null || cand.units() < kb.units()) && withinCap(lay)) {
             best.put(key, cand);
             boundDirty = true;
         }
@@ -611,7 +645,7 @@ public final class SectionGenerator {
             SectionLayout lay = bars.withStirrups(st, skin);
             Candidate cand = new Candidate(lay, lay.cost(cost));
             Candidate kb = best.get(key);
-            if (kb != null && cand.units() >= kb.units()) {
+            if (kb != null && cand.units() >= kb.units() || !withinCap(lay)) {
                 continue;
             }
             BeamSection whole = lay.section(p.materials(), p.detailing(), p.code());

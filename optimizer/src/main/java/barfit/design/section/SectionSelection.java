@@ -52,6 +52,11 @@ public final class SectionSelection {
         model.addExactlyOne(group.stream().map(vars::get).toList());
     }
 
+    /** At most {@code limit} of a second measure (a carbon cap): {@code values} per candidate, in index order. */
+    public void atMost(long[] values, long limit) {
+        model.addLessOrEqual(LinearExpr.weightedSum(vars.toArray(new Literal[0]), values), limit);
+    }
+
     /** Forbids candidate i (for the next-best alternatives). */
     public void exclude(int i) {
         model.addEquality(vars.get(i), 0);
