@@ -46,6 +46,12 @@ final class BenchCommand implements Callable<Integer> {
             description = "whole spans also enumerated exhaustively on a reduced space (default: ${DEFAULT-VALUE})")
     int beamsCompared;
 
+    @Option(
+            names = "--frontier",
+            paramLabel = "N",
+            description = "time instead the cost-carbon frontier of N invented beams on the default space")
+    Integer frontier;
+
     @Option(names = "--schedule", description = "time whole schedules instead: designed beam by beam, and rationalised")
     boolean schedule;
 
@@ -147,6 +153,25 @@ final class BenchCommand implements Callable<Integer> {
                     f.csvSeconds(),
                     f.ratio(),
                     f.cpuRatio());
+            return Main.OK;
+        }
+        if (frontier != null) {
+            if (frontier < 1 || frontier > 10_000) {
+                throw OptionError.of("--frontier", "expected 1 to 10000 beams, got " + frontier);
+            }
+            out.println("barfit bench --frontier: invented sections (seed " + seed + "), default space and carbon "
+                    + "factors, 1 CP-SAT worker per solve");
+            var f = barfit.bench.FrontierBench.run(frontier, seed, out);
+            out.printf(
+                    Locale.ROOT,
+                    "{\"frontier_beams\": %d, \"frontier_ms_median\": %.1f, \"frontier_ms_max\": %.1f, "
+                            + "\"points_mean\": %.2f, \"solves_mean\": %.2f}%n",
+                    f.beams(),
+                    f.msMedian(),
+                    f.msMax(),
+                    f.pointsMean(),
+                    f.solvesMean());
+            out.flush();
             return Main.OK;
         }
         if (schedule) {

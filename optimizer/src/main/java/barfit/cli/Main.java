@@ -45,6 +45,7 @@ public final class Main implements Runnable {
         c.put("schedule", ScheduleCommand::new);
         c.put("compare", CompareCommand::new);
         c.put("sweep", SweepCommand::new);
+        c.put("frontier", FrontierCommand::new);
         c.put("serve", ServeCommand::new);
         c.put("bench", BenchCommand::new);
         c.put("help", CommandLine.HelpCommand::new);
@@ -53,7 +54,7 @@ public final class Main implements Runnable {
 
     /** The commands that run the solver: only these load its native library. */
     static final java.util.Set<String> SOLVING =
-            java.util.Set.of("design", "schedule", "compare", "sweep", "serve", "bench");
+            java.util.Set.of("design", "schedule", "compare", "sweep", "frontier", "serve", "bench");
 
     static final String OUT_OF_MEMORY = "barfit: out of memory; give the JVM more heap through the launcher, e.g. "
             + "BARFIT_JAVA_OPTS=-Xmx4g ./barfit ...";

@@ -73,6 +73,11 @@ final class SweepCommand implements Callable<Integer> {
 
     /** The plot must go to a new (or, with --force, an existing) file in an existing, writable directory. */
     private void checkPlotFile() {
+        checkPlotFile(plot, force);
+    }
+
+    /** As above, for any command's {@code --plot FILE.svg}. */
+    static void checkPlotFile(Path plot, boolean force) {
         Location at = Location.ofFile(plot.toString());
         Path name = plot.getFileName();
         // the plot is SVG text: a file named .png (or anything else) would hold what its name does not say

@@ -22,7 +22,17 @@ class CommandsTest {
                     command.getClass().getName());
         });
         assertEquals(
-                List.of("check", "analyse", "design", "schedule", "compare", "sweep", "serve", "bench", "help"),
+                List.of(
+                        "check",
+                        "analyse",
+                        "design",
+                        "schedule",
+                        "compare",
+                        "sweep",
+                        "frontier",
+                        "serve",
+                        "bench",
+                        "help"),
                 List.copyOf(Main.COMMANDS.keySet()));
     }
 
