@@ -22,10 +22,27 @@ import org.junit.jupiter.api.Test;
 class SectionCarbonCapOracleTest {
     @Test
     void cheapestWithinTheCapMatchesExhaustiveEnumeration() {
-        Random rnd = new Random(Long.getLong("oracle.seed", 2_718L));
         // most small spaces have one design cheapest and least in carbon alike: run on until enough caps bind
-        int instances = Integer.getInteger("oracle.instances", 1200);
-        int enough = Integer.getInteger("oracle.binding", 20);
+        check(
+                RandomProblems::small,
+                Long.getLong("oracle.seed", 2_718L),
+                Integer.getInteger("oracle.instances", 1200),
+                Integer.getInteger("oracle.binding", 20));
+    }
+
+    /** Under torsion the generator tries every split, compression layer and skin option: the cap holds there too. */
+    @Test
+    void underTorsionToo() {
+        check(
+                RandomProblems::torsion,
+                Long.getLong("oracle.seed", 577L),
+                Integer.getInteger("oracle.instances", 600),
+                Integer.getInteger("oracle.binding", 8));
+    }
+
+    private static void check(
+            java.util.function.Function<Random, SectionProblem> problems, long seed, int instances, int enough) {
+        Random rnd = new Random(seed);
         CostModel money = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
         int capped = 0;
         int refused = 0;
@@ -38,7 +55,7 @@ class SectionCarbonCapOracleTest {
                     rnd.nextInt(3) == 0 ? 0 : 6 * rnd.nextDouble());
             CostModel model = money.withCarbon(f);
             CostModel carbon = model.carbon();
-            SectionProblem p = RandomProblems.small(rnd);
+            SectionProblem p = problems.apply(rnd);
             SectionExhaustive.Result cheapest = new SectionExhaustive(money).solve(p);
             if (cheapest.best() == null) {
                 continue;
