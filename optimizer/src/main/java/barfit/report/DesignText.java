@@ -399,7 +399,8 @@ public final class DesignText {
                 + Carbon.proofBasis(p.measure(), u) + ", gap "
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %); " + s.framesEvaluated() + " of "
                 + s.frames()
-                + " frames evaluated, " + s.framesPrunedByBound() + " skipped by the cost bound; " + p.workers()
+                + " frames evaluated, " + s.framesPrunedByBound() + " skipped by the "
+                + (p.measure() == Objective.CARBON ? "carbon" : "cost") + " bound; " + p.workers()
                 + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
     }
 

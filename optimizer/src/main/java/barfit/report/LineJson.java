@@ -210,7 +210,13 @@ final class LineJson {
                         ? "dynamic programming along the line over every part's options, the support bars shared"
                         : "each span by CP-SAT, alone");
         proof.put("status", !all ? "infeasible" : optimal ? "optimal" : "feasible");
-        if (all) {
+        boolean leastCarbon = parts.stream()
+                .anyMatch(p ->
+                        p.whole().proof() != null && p.whole().proof().measure() == barfit.design.Objective.CARBON);
+        if (all && leastCarbon && carbon != null) {
+            proof.put("objective", Carbon.mass(carbon.total(), u));
+            proof.put("basis", Carbon.unit(u));
+        } else if (all) {
             proof.put("objective", cost.total());
         } else {
             proof.putNull("objective");

@@ -434,7 +434,8 @@ public final class SpanText {
                 + String.format(Locale.ROOT, "%.2f", 100 * p.gap()) + " %) over "
                 + p.solver().booleans() + " booleans; "
                 + s.generator().framesEvaluated() + " of " + s.generator().frames() + " frames evaluated, "
-                + s.generator().framesSkipped() + " skipped by the cost bound; " + s.solves()
+                + s.generator().framesSkipped() + " skipped by the " + (carbon ? "carbon" : "cost") + " bound; "
+                + s.solves()
                 + (s.solves() == 1 ? " solve" : " solves")
                 + (s.deflectionCuts() > 0 ? ", " + s.deflectionCuts() + " deflection cuts" : "") + "; " + p.workers()
                 + (p.workers() == 1 ? " worker" : " workers") + ", seed " + p.seed();
