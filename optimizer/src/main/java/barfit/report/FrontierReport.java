@@ -37,6 +37,8 @@ public final class FrontierReport {
                     .append(p.id())
                     .append("   Mu = ")
                     .append(u.withUnit(Math.abs(p.mu()), Dim.MOMENT))
+                    .append(' ')
+                    .append(p.bending().word())
                     .append(p.vu() != null ? "   Vu = " + u.withUnit(p.vu(), Dim.FORCE) : "")
                     .append(p.maxDepth() != null ? "   max depth " + u.withUnit(p.maxDepth(), Dim.LENGTH) : "")
                     .append('\n');
