@@ -247,6 +247,11 @@
       row('proof', p.solver + ' ' + p.status + ': cost ' + num(p.objective, 4) + ', bound ' + num(p.bound, 4) +
         ', gap ' + num(p.gap, 6) + ' (' + p.basis + ', ' + p.workers + ' worker, seed ' + p.seed + ')');
     }
+    if (b.carbon) {
+      row('embodied carbon', num(b.carbon.total, 1) + ' ' + (info.units === 'US' ? 'lb' : 'kg') + ' CO2e ' + basis +
+        ' (concrete ' + num(b.carbon.concrete, 1) + ', main bars ' + num(b.carbon.main_bars, 1) + ', stirrups ' +
+        num(b.carbon.stirrups, 1) + '; stages A1-A3)');
+    }
     box.append(t, costTable(b.cost));
     if (b.alternatives && b.alternatives.length) {
       const at = el('table', { class: 'alternatives' });
