@@ -51,6 +51,12 @@ public record CheckResult(
                 id, title, clause, demand, sense, limit, pass ? 0 : Double.POSITIVE_INFINITY, pass, note);
     }
 
+    /** The same check at a stirrup zone of a span: its id and title name the zone ("shear_strength.left"). */
+    public CheckResult inZone(String zone) {
+        return new CheckResult(
+                id + "." + zone, title + " (" + zone + " zone)", clause, demand, sense, limit, ratio, pass, note);
+    }
+
     public CheckResult withNote(String n) {
         return new CheckResult(id, title, clause, demand, sense, limit, ratio, pass, n);
     }

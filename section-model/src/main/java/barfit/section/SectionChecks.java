@@ -602,16 +602,7 @@ public final class SectionChecks {
         shearChecks(s, sh, out);
         List<CheckResult> named = new ArrayList<>();
         for (CheckResult c : out) {
-            named.add(new CheckResult(
-                    c.id() + "." + zone,
-                    c.title() + " (" + zone + " zone)",
-                    c.clause(),
-                    c.demand(),
-                    c.sense(),
-                    c.limit(),
-                    c.ratio(),
-                    c.pass(),
-                    c.note()));
+            named.add(c.inZone(zone));
         }
         return named;
     }

@@ -27,16 +27,7 @@ public final class TorsionZone {
         }
         List<CheckResult> named = new ArrayList<>();
         for (CheckResult c : TorsionChecks.run(physical, demand, span, fr, shear, trail)) {
-            named.add(new CheckResult(
-                    c.id() + "." + zone,
-                    c.title() + " (" + zone + " zone)",
-                    c.clause(),
-                    c.demand(),
-                    c.sense(),
-                    c.limit(),
-                    c.ratio(),
-                    c.pass(),
-                    c.note()));
+            named.add(c.inZone(zone));
         }
         return named;
     }
