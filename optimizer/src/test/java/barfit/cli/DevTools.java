@@ -47,20 +47,9 @@ final class DevTools implements AutoCloseable {
     static DevTools start(Path chromium, Path dir) throws Exception {
         Files.createDirectories(dir);
         Path err = dir.resolve("chromium.log");
-        ProcessBuilder pb = new ProcessBuilder(
-                chromium.toString(),
-                "--headless",
-                "--no-sandbox",
-                "--disable-gpu",
-                "--disable-quic",
-                "--no-first-run",
-                "--disable-background-networking",
-                "--disable-component-update",
-                "--disable-sync",
-                "--hide-scrollbars",
-                "--remote-debugging-port=0",
-                "--user-data-dir=" + dir.resolve("profile"),
-                "about:blank");
+        List<String> cmd = Chromium.command(chromium, dir.resolve("profile"));
+        cmd.addAll(List.of("--hide-scrollbars", "--remote-debugging-port=0", "about:blank"));
+        ProcessBuilder pb = new ProcessBuilder(cmd);
         pb.redirectOutput(dir.resolve("chromium.out").toFile());
         pb.redirectError(err.toFile());
         Process p = pb.start();

@@ -3,14 +3,11 @@ package barfit.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import barfit.design.SolverOptions;
 import barfit.serve.PageServer;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.File;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -43,13 +40,7 @@ class ServeBrowserTest {
 
     @Test
     void typingACapMovesTheDesignOnThePage(@TempDir Path dir) throws Exception {
-        Path chromium = onPath("chromium");
-        if (chromium == null) {
-            if (System.getenv("CI") != null) {
-                fail("chromium is not on the PATH; CI installs it");
-            }
-            assumeTrue(false, "chromium is not on the PATH: the page is not checked in a browser");
-        }
+        Path chromium = Chromium.required("the page");
         try (PageServer server = PageServer.start(
                         new PageExplorer(ServeHttpTest.EXAMPLE, new SolverOptions(60, 1, 1), dir.resolve("kept")),
                         0,
@@ -125,19 +116,5 @@ class ServeBrowserTest {
         Cli r = Cli.run("design", copy.toString(), "--format", "json", "--beam", "F1-02");
         assertEquals(0, r.exit(), r.err());
         return new ObjectMapper().readTree(r.out());
-    }
-
-    static Path onPath(String name) {
-        String path = System.getenv("PATH");
-        if (path == null) {
-            return null;
-        }
-        for (String d : path.split(File.pathSeparator)) {
-            Path p = Path.of(d, name);
-            if (Files.isRegularFile(p) && Files.isExecutable(p)) {
-                return p;
-            }
-        }
-        return null;
     }
 }

@@ -3,14 +3,12 @@ package barfit.report.html;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import barfit.design.span.SpanLayout;
 import barfit.design.span.SpanProblem;
 import barfit.schedule.ScheduleResult;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.File;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -71,13 +69,7 @@ class ScheduleHtmlBrowserTest {
 
     @Test
     void chromiumRendersEveryBeamAndDrawing(@TempDir Path dir) throws Exception {
-        Path chromium = onPath("chromium");
-        if (chromium == null) {
-            if (System.getenv("CI") != null) {
-                fail("chromium is not on the PATH; CI installs it");
-            }
-            assumeTrue(false, "chromium is not on the PATH: browser rendering not checked");
-        }
+        Path chromium = barfit.cli.Chromium.required("the report");
         ScheduleResult r = ScheduleFixtures.withRenderingFixtures(ScheduleFixtures.designed(ScheduleHtmlTest.EXAMPLE));
         String html = ScheduleHtml.render(r);
         int body = html.indexOf("<body>") + "<body>".length();
@@ -121,20 +113,10 @@ class ScheduleHtmlBrowserTest {
     private static String dump(Path chromium, Path dir, Path page) throws Exception {
         Path stdout = dir.resolve("dom.html");
         Path stderr = dir.resolve("chromium.log");
-        ProcessBuilder pb = new ProcessBuilder(
-                chromium.toString(),
-                "--headless",
-                "--no-sandbox",
-                "--disable-gpu",
-                "--disable-quic",
-                "--no-first-run",
-                "--disable-background-networking",
-                "--disable-component-update",
-                "--disable-sync",
-                "--user-data-dir=" + dir.resolve("profile"),
-                "--virtual-time-budget=5000",
-                "--dump-dom",
-                page.toUri().toString());
+        List<String> cmd = barfit.cli.Chromium.command(chromium, dir.resolve("profile"));
+        cmd.addAll(
+                List.of("--virtual-time-budget=5000", "--dump-dom", page.toUri().toString()));
+        ProcessBuilder pb = new ProcessBuilder(cmd);
         pb.redirectOutput(stdout.toFile());
         pb.redirectError(stderr.toFile());
         Process proc = pb.start();
@@ -158,19 +140,5 @@ class ScheduleHtmlBrowserTest {
                 .replace("&gt;", ">")
                 .replace("&quot;", "\"")
                 .replace("&amp;", "&");
-    }
-
-    private static Path onPath(String name) {
-        String path = System.getenv("PATH");
-        if (path == null) {
-            return null;
-        }
-        for (String d : path.split(File.pathSeparator)) {
-            Path p = Path.of(d, name);
-            if (Files.isRegularFile(p) && Files.isExecutable(p)) {
-                return p;
-            }
-        }
-        return null;
     }
 }
