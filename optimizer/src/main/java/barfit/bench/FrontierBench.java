@@ -18,7 +18,15 @@ import java.util.Locale;
  */
 public final class FrontierBench {
     /** The median and largest time of a beam's frontier, and the points and proven designs on average. */
-    public record Figures(int beams, double msMedian, double msMax, double pointsMean, double solvesMean) {}
+    public record Figures(
+            int beams,
+            double msMedian,
+            double msMax,
+            double pointsMean,
+            double solvesMean,
+            double spanMsMedian,
+            double spanMsMax,
+            double spanPointsMean) {}
 
     private FrontierBench() {}
 
@@ -50,6 +58,66 @@ public final class FrontierBench {
         }
         double[] sorted = ms.clone();
         Arrays.sort(sorted);
-        return new Figures(n, sorted[n / 2], sorted[n - 1], points / n, solves / n);
+        // whole spans on the default space: the supported points by weighted sums
+        out.printf(Locale.ROOT, "%-5s %10s %7s %7s%n", "span", "frontier", "points", "solves");
+        double[] spanMs = new double[n];
+        double spanPoints = 0;
+        List<barfit.design.span.SpanProblem> spans = SpanBench.instances(n, seed, SectionBench.defaultSpace());
+        barfit.design.span.SpanFrontier.of(
+                SpanBench.instances(1, seed + 1, SectionBench.defaultSpace()).get(0), model, options);
+        for (int i = 0; i < n; i++) {
+            var r = barfit.design.span.SpanFrontier.of(spans.get(i), model, options);
+            spanMs[i] = r.nanos() / 1e6;
+            spanPoints += r.points().size();
+            out.printf(
+                    Locale.ROOT,
+                    "%-5s %7.0f ms %7d %7d%n",
+                    spans.get(i).id(),
+                    spanMs[i],
+                    r.points().size(),
+                    r.solves());
+        }
+        Arrays.sort(spanMs);
+        return new Figures(
+                n, sorted[n / 2], sorted[n - 1], points / n, solves / n, spanMs[n / 2], spanMs[n - 1], spanPoints / n);
+    }
+
+    /** A schedule's frontier: its size, the seconds for its two ends and the points between, and its points. */
+    public record ScheduleFigures(int beams, int threads, double seconds, int points, int solves) {}
+
+    /**
+     * Times the frontier of an invented schedule of {@code beams} whole spans ({@link ScheduleGenerator}, no
+     * rationalise:), written to files and read back as a user's would be: its two ends and at most five
+     * schedules between them, the beams {@code threads} at a time.
+     */
+    public static ScheduleFigures schedule(int beams, long seed, int threads, PrintWriter out) {
+        java.nio.file.Path dir = null;
+        try {
+            dir = java.nio.file.Files.createTempDirectory("barfit-frontier-bench");
+            ScheduleBench.write(dir, beams, seed, null);
+            java.nio.file.Path settings = dir.resolve("settings.yaml");
+            java.nio.file.Path csv = dir.resolve("beams.csv");
+            SolverOptions options = new SolverOptions(60, 1, 1);
+            long t0 = System.nanoTime();
+            barfit.schedule.ScheduleFrontier.Result r = barfit.schedule.ScheduleFrontier.of(
+                    pricing -> barfit.schedule.ScheduleInputReader.read(settings, csv, options, threads, pricing),
+                    options,
+                    threads,
+                    barfit.schedule.Progress.NONE,
+                    5);
+            double seconds = (System.nanoTime() - t0) / 1e9;
+            for (var pt : r.points()) {
+                out.printf(
+                        Locale.ROOT,
+                        "  cost %12.2f   carbon %12.1f kg%n",
+                        CostModel.currency(pt.cost()),
+                        CostModel.currency(pt.carbon()));
+            }
+            return new ScheduleFigures(beams, threads, seconds, r.points().size(), r.solves());
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        } finally {
+            ScheduleBench.deleteDir(dir);
+        }
     }
 }

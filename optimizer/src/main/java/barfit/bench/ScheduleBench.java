@@ -279,6 +279,13 @@ public final class ScheduleBench {
         return sum / 1048576.0;
     }
 
+    /** Deletes a temporary folder and what it holds, quietly; nothing for null. */
+    static void deleteDir(Path dir) {
+        if (dir != null) {
+            delete(dir);
+        }
+    }
+
     private static void delete(Path dir) {
         try (var s = Files.walk(dir)) {
             s.sorted(Comparator.reverseOrder()).forEach(p -> deleteQuietly(p));

@@ -52,6 +52,13 @@ final class BenchCommand implements Callable<Integer> {
             description = "time instead the cost-carbon frontier of N invented beams on the default space")
     Integer frontier;
 
+    @Option(
+            names = "--schedule-frontier",
+            paramLabel = "N",
+            description = "time instead the cost-carbon frontier of an invented schedule of N whole spans: its two "
+                    + "ends and at most five schedules between them")
+    Integer scheduleFrontier;
+
     @Option(names = "--schedule", description = "time whole schedules instead: designed beam by beam, and rationalised")
     boolean schedule;
 
@@ -155,6 +162,26 @@ final class BenchCommand implements Callable<Integer> {
                     f.cpuRatio());
             return Main.OK;
         }
+        if (scheduleFrontier != null) {
+            if (scheduleFrontier < 1 || scheduleFrontier > 100_000) {
+                throw OptionError.of("--schedule-frontier", "expected 1 to 100000 beams, got " + scheduleFrontier);
+            }
+            int t = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+            out.println("barfit bench --schedule-frontier: an invented schedule (seed " + seed + "), " + t
+                    + " threads, 1 CP-SAT worker per solve");
+            var f = barfit.bench.FrontierBench.schedule(scheduleFrontier, seed, t, out);
+            out.printf(
+                    Locale.ROOT,
+                    "{\"schedule_frontier_beams\": %d, \"threads\": %d, \"schedule_frontier_seconds\": %.3f, "
+                            + "\"schedule_frontier_points\": %d, \"schedule_frontier_solves\": %d}%n",
+                    f.beams(),
+                    f.threads(),
+                    f.seconds(),
+                    f.points(),
+                    f.solves());
+            out.flush();
+            return Main.OK;
+        }
         if (frontier != null) {
             if (frontier < 1 || frontier > 10_000) {
                 throw OptionError.of("--frontier", "expected 1 to 10000 beams, got " + frontier);
@@ -165,12 +192,16 @@ final class BenchCommand implements Callable<Integer> {
             out.printf(
                     Locale.ROOT,
                     "{\"frontier_beams\": %d, \"frontier_ms_median\": %.1f, \"frontier_ms_max\": %.1f, "
-                            + "\"points_mean\": %.2f, \"solves_mean\": %.2f}%n",
+                            + "\"points_mean\": %.2f, \"solves_mean\": %.2f, \"span_frontier_ms_median\": %.1f, "
+                            + "\"span_frontier_ms_max\": %.1f, \"span_points_mean\": %.2f}%n",
                     f.beams(),
                     f.msMedian(),
                     f.msMax(),
                     f.pointsMean(),
-                    f.solvesMean());
+                    f.solvesMean(),
+                    f.spanMsMedian(),
+                    f.spanMsMax(),
+                    f.spanPointsMean());
             out.flush();
             return Main.OK;
         }

@@ -82,7 +82,7 @@ final class DesignCommand implements Callable<Integer> {
             names = "--carbon-cap",
             paramLabel = "X",
             description = "the cheapest design whose embodied carbon is at most X kg CO2e per m of beam (lb CO2e per "
-                    + "ft in inch-pound files), proven; single sections only")
+                    + "ft in inch-pound files), proven; single sections only (barfit frontier for whole spans)")
     Double carbonCap;
 
     @Option(names = "--force", description = "replace plot files that exist")
@@ -132,9 +132,10 @@ final class DesignCommand implements Callable<Integer> {
             if (!whole.isEmpty()) {
                 throw OptionError.of(
                         "--carbon-cap",
-                        "applies to single sections so far; " + String.join(", ", whole)
+                        "applies to single sections; " + String.join(", ", whole)
                                 + (whole.size() == 1 ? " is a whole span or line" : " are whole spans or lines")
-                                + ": choose a single section with --beam");
+                                + ": choose a single section with --beam, or see barfit frontier, whose designs "
+                                + "of a whole span are each the cheapest within their own carbon");
             }
             capPerMetre = Carbon.perMetreFromUser(carbonCap, settings.units());
         }

@@ -64,6 +64,8 @@ public final class CostModel {
     private final CostModel money;
     /** The same quantities priced in kg CO2e (A1-A3); null where no carbon factors were given. */
     private final CostModel carbon;
+    /** Whether {@link #rates} are a weighted sum of the money's and the carbon's ({@link #blend}). */
+    private final boolean blended;
 
     /** @param code the edition the input is in: it sets the least hook extension (75 mm or 3 in) */
     public CostModel(CostRates rates, double cover, CodeEquations code) {
@@ -73,15 +75,22 @@ public final class CostModel {
         this.objective = Objective.COST;
         this.money = null;
         this.carbon = null;
+        this.blended = false;
     }
 
     private CostModel(CostRates rates, CostModel base, Objective objective, CostModel money, CostModel carbon) {
+        this(rates, base, objective, money, carbon, false);
+    }
+
+    private CostModel(
+            CostRates rates, CostModel base, Objective objective, CostModel money, CostModel carbon, boolean blended) {
         this.rates = rates;
         this.cover = base.cover;
         this.code = base.code;
         this.objective = objective;
         this.money = money;
         this.carbon = carbon;
+        this.blended = blended;
     }
 
     /** This model with the carbon factors beside its rates, so that every design also reports its carbon. */
@@ -100,7 +109,7 @@ public final class CostModel {
      * the carbon factors, with the money beside them ({@link #money}). Needs {@link #withCarbon} first.
      */
     public CostModel minimising(Objective o) {
-        if (o == objective) {
+        if (o == objective && !blended) {
             return this;
         }
         if (carbon() == null) {
@@ -111,6 +120,35 @@ public final class CostModel {
         return o == Objective.CARBON
                 ? new CostModel(c.rates, this, Objective.CARBON, m, c)
                 : new CostModel(m.rates, this, Objective.COST, null, c);
+    }
+
+    /**
+     * The model minimising {@code costWeight} × cost + {@code carbonWeight} × carbon (both at least 0, not both
+     * 0; scaled so that they add up to 1), with the money and the carbon beside it so that its designs still
+     * report both. Carbon is linear in the same quantities as cost, so the blend is one more set of rates and
+     * every bound of the searches holds for it as for cost: a design minimising it is on the convex hull of the
+     * cost-carbon frontier (the weighted-sum method). Needs {@link #withCarbon} first.
+     */
+    public CostModel blend(double costWeight, double carbonWeight) {
+        if (!(costWeight >= 0 && carbonWeight >= 0 && costWeight + carbonWeight > 0)) {
+            throw new IllegalArgumentException(
+                    "blend weights must be at least 0 and not both 0: " + costWeight + ", " + carbonWeight);
+        }
+        CostModel m = money();
+        CostModel c = carbon();
+        if (c == null) {
+            throw new IllegalStateException("no carbon factors to blend");
+        }
+        double a = costWeight / (costWeight + carbonWeight);
+        double k = carbonWeight / (costWeight + carbonWeight);
+        CostRates r = new CostRates(
+                a * m.rates.concretePerM3() + k * c.rates.concretePerM3(),
+                a * m.rates.mainBarsPerKg() + k * c.rates.mainBarsPerKg(),
+                a * m.rates.stirrupsPerKg() + k * c.rates.stirrupsPerKg(),
+                a * m.rates.formworkPerM2() + k * c.rates.formworkPerM2(),
+                a * m.rates.depthPremiumPerM() + k * c.rates.depthPremiumPerM(),
+                m.rates.lapFactor());
+        return new CostModel(r, this, Objective.COST, m, c, true);
     }
 
     /** What this model's prices are: cost (currency) or carbon (kg CO2e). */

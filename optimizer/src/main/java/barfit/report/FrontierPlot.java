@@ -1,6 +1,5 @@
 package barfit.report;
 
-import barfit.design.section.SectionFrontier;
 import barfit.units.UnitSystem;
 import java.awt.BasicStroke;
 import java.awt.Color;
@@ -28,24 +27,24 @@ public final class FrontierPlot {
 
     private FrontierPlot() {}
 
-    public static String svg(SectionFrontier.Result r, UnitSystem u, String currency) {
+    public static String svg(FrontierReport.Entry r, UnitSystem u, String currency) {
         XYSeries line = new XYSeries("the frontier: no design is both cheaper and lower in carbon", false, true);
         XYSeries ends = new XYSeries("the cheapest and the lowest-carbon designs", false, true);
-        for (SectionFrontier.Point pt : r.points()) {
-            line.add(carbon(pt, u), cost(pt, u));
+        for (FrontierReport.Row pt : r.rows()) {
+            line.add(round(pt.carbon()), round(pt.cost()));
         }
-        if (!r.points().isEmpty()) {
-            ends.add(carbon(r.points().get(0), u), cost(r.points().get(0), u));
-            var last = r.points().get(r.points().size() - 1);
-            ends.add(carbon(last, u), cost(last, u));
+        if (!r.rows().isEmpty()) {
+            ends.add(round(r.rows().get(0).carbon()), round(r.rows().get(0).cost()));
+            var last = r.rows().get(r.rows().size() - 1);
+            ends.add(round(last.carbon()), round(last.cost()));
         }
         XYSeriesCollection data = new XYSeriesCollection();
         data.addSeries(line);
         data.addSeries(ends);
-        NumberAxis x = new NumberAxis("embodied carbon, " + Carbon.perLengthUnit(u) + " (" + Carbon.STAGES + ")");
+        NumberAxis x = new NumberAxis("embodied carbon, " + r.carbonBasis(u) + " (" + Carbon.STAGES + ")");
         x.setAutoRangeIncludesZero(false);
-        NumberAxis y =
-                new NumberAxis("cost " + Money.perLengthLabel(u) + (currency.isEmpty() ? "" : " (" + currency + ")"));
+        NumberAxis y = new NumberAxis("cost " + (r.overSpan() ? "for the span" : Money.perLengthLabel(u))
+                + (currency.isEmpty() ? "" : " (" + currency + ")"));
         y.setAutoRangeIncludesZero(false);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
         renderer.setSeriesPaint(0, FRONTIER);
@@ -60,21 +59,12 @@ public final class FrontierPlot {
         plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), plot, true);
         chart.setBackgroundPaint(Color.WHITE);
-        chart.setTitle(new TextTitle(
-                "Beam " + r.problem().id() + ": cost against embodied carbon",
-                new Font(Font.SANS_SERIF, Font.BOLD, 14)));
+        chart.setTitle(
+                new TextTitle(r.title() + ": cost against embodied carbon", new Font(Font.SANS_SERIF, Font.BOLD, 14)));
         SVGGraphics2D g = new SVGGraphics2D(800, 480);
         g.setDefsKeyPrefix("frontier-"); // a fixed prefix keeps the file the same from run to run
         chart.draw(g, new Rectangle2D.Double(0, 0, 800, 480));
         return g.getSVGDocument().replace("\r\n", "\n") + "\n";
-    }
-
-    private static double cost(SectionFrontier.Point pt, UnitSystem u) {
-        return round(Money.perLength(pt.design().costPerMetre().total(), u));
-    }
-
-    private static double carbon(SectionFrontier.Point pt, UnitSystem u) {
-        return round(Carbon.perLength(pt.design().carbonPerMetre().total(), u));
     }
 
     private static double round(double v) {

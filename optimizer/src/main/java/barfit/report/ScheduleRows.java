@@ -71,11 +71,19 @@ public final class ScheduleRows {
     }
 
     public static Row row(ScheduleResult.Beam b) {
-        SpanProblem p = b.outcome().problem();
-        if (!b.feasible()) {
+        return row(b, b.outcome(), b.outcome().best());
+    }
+
+    /** The row of a span's design outside a schedule (a frontier's point): {@code entry} is null. */
+    public static Row row(SpanDesigner.Outcome o, SpanDesigner.Design d) {
+        return row(null, o, d);
+    }
+
+    private static Row row(ScheduleResult.Beam b, SpanDesigner.Outcome o, SpanDesigner.Design d) {
+        SpanProblem p = o.problem();
+        if (d == null) {
             return new Row(b, p, null, null, null, null, Double.NaN, null, null, List.of(), List.of());
         }
-        SpanDesigner.Design d = b.outcome().best();
         SpanLayout l = d.layout();
         String top = p.cantilever()
                 ? bars(l.topLeft(), l.top())

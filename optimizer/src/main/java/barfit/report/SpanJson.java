@@ -127,8 +127,8 @@ public final class SpanJson {
         return Math.abs(r.demand().mu()) / r.flexure().phiMn();
     }
 
-    static void design(ObjectNode o, SpanDesigner.Design d, SpanProblem p, UnitSystem u, boolean trail) {
-        SpanLayout l = d.layout();
+    /** A span's size and bars: width, height, bottom and top bars with the extensions past the supports. */
+    static void outline(ObjectNode o, SpanLayout l, SpanProblem p, UnitSystem u) {
         Json.put(o, "width", l.width(), Dim.LENGTH, u);
         Json.put(o, "height", l.height(), Dim.LENGTH, u);
         o.set("bottom", layers("bottom", l.bottom(), l.bottomCounts()));
@@ -147,6 +147,28 @@ public final class SpanJson {
             top.set("right", layers("top", l.top(), l.topRight()).get("layers"));
             Json.put(top, "right_extension", l.extRight(), Dim.SPAN, u);
         }
+    }
+
+    /** A span's stirrups per zone: bar, legs, spacing and the zone's extent from the left face. */
+    static ArrayNode stirrups(SpanLayout l, SpanProblem p, UnitSystem u) {
+        ArrayNode stirrups = Json.array();
+        List<SpanProblem.Zone> zones = p.zones();
+        for (int i = 0; i < zones.size(); i++) {
+            ObjectNode z = stirrups.addObject();
+            var s = l.zoneStirrups().get(i);
+            z.put("zone", zones.get(i).name());
+            z.put("bar", s.bar().designation());
+            z.put("legs", s.legs());
+            Json.put(z, "spacing", s.spacing(), Dim.LENGTH, u);
+            Json.put(z, "from", zones.get(i).from(), Dim.SPAN, u);
+            Json.put(z, "to", zones.get(i).to(), Dim.SPAN, u);
+        }
+        return stirrups;
+    }
+
+    static void design(ObjectNode o, SpanDesigner.Design d, SpanProblem p, UnitSystem u, boolean trail) {
+        SpanLayout l = d.layout();
+        outline(o, l, p, u);
         // the single-section fields at span level: those of the section with the highest Mu / phi Mn
         Map.Entry<SpanProblem.Place, CheckReport> governing = null;
         for (Map.Entry<SpanProblem.Place, CheckReport> e : d.report().sections().entrySet()) {
@@ -195,17 +217,11 @@ public final class SpanJson {
                 }
             }
         }
-        ArrayNode stirrups = o.putArray("stirrups");
+        ArrayNode stirrups = stirrups(l, p, u);
+        o.set("stirrups", stirrups);
         List<SpanProblem.Zone> zones = p.zones();
         for (int i = 0; i < zones.size(); i++) {
-            ObjectNode z = stirrups.addObject();
-            var s = l.zoneStirrups().get(i);
-            z.put("zone", zones.get(i).name());
-            z.put("bar", s.bar().designation());
-            z.put("legs", s.legs());
-            Json.put(z, "spacing", s.spacing(), Dim.LENGTH, u);
-            Json.put(z, "from", zones.get(i).from(), Dim.SPAN, u);
-            Json.put(z, "to", zones.get(i).to(), Dim.SPAN, u);
+            ObjectNode z = (ObjectNode) stirrups.get(i);
             Double zoneVu = d.report().zoneShears().get(i);
             if (zoneVu != null) {
                 Json.put(z, "Vu", zoneVu, Dim.FORCE, u);

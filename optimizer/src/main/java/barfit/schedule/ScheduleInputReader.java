@@ -36,6 +36,16 @@ public final class ScheduleInputReader {
     /** As above, the lines designed for {@code objective}. */
     public static ScheduleInput read(
             Path file, Path csv, barfit.design.SolverOptions options, int threads, barfit.design.Objective objective) {
+        return read(file, csv, options, threads, m -> m.minimising(objective));
+    }
+
+    /** As above, the lines designed with the model {@code pricing} makes of the file's (a frontier's blend). */
+    public static ScheduleInput read(
+            Path file,
+            Path csv,
+            barfit.design.SolverOptions options,
+            int threads,
+            java.util.function.UnaryOperator<barfit.design.CostModel> pricing) {
         ScheduleFileReader.ScheduleFile read = ScheduleFileReader.read(file, csv);
         DesignInput design = read.design();
         List<ScheduleBeam> out = new ArrayList<>();
@@ -45,7 +55,7 @@ public final class ScheduleInputReader {
         List<LineInput> lines = read.lines();
         List<barfit.design.line.LineSpans.Result> designed = List.of();
         if (!lines.isEmpty()) {
-            var cost = design.costModel().minimising(objective);
+            var cost = pricing.apply(design.costModel());
             var byLine = new barfit.design.line.LineSpans(
                     design.settings(),
                     design.space(),

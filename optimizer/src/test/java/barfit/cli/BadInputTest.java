@@ -81,7 +81,14 @@ class BadInputTest {
                 Arguments.of(
                         List.of("design", "../examples/design/clinic-line-c-spans-si.yaml", "--carbon-cap", "100"),
                         "--carbon-cap:",
-                        "applies to single sections so far"),
+                        "applies to single sections; C1-C2"),
+                Arguments.of(
+                        List.of("frontier", "../examples/schedule/office-us.yaml", "--schedule"),
+                        "../examples/schedule/office-us.yaml:",
+                        "has a rationalise: block"),
+                Arguments.of(List.of("frontier", STUDY, "--beams", "x.csv"), "--beams:", "expected --schedule with it"),
+                Arguments.of(
+                        List.of("frontier", STUDY, "--schedule", "--points", "21"), "--points:", "expected 0 to 20"),
                 Arguments.of(
                         List.of("design", STUDY, "--carbon-cap", "-5"), "--carbon-cap:", "expected a positive carbon"),
                 Arguments.of(List.of("design", STUDY, "--objective", "money"), "", "--objective"),

@@ -60,6 +60,19 @@ public final class SpanExhaustive {
         return out;
     }
 
+    /**
+     * Every passing layout's price in units, by this model and by {@code other} (a frontier's oracle: cost and
+     * carbon). Stirrups are the lightest passing per zone, which is the cheapest under any rate per kg.
+     */
+    public List<long[]> priced(SpanProblem p, CostModel other) {
+        List<long[]> out = new ArrayList<>();
+        forEachPassing(
+                p,
+                (lay, units) -> out.add(
+                        new long[] {units, CostModel.units(lay.cost(p, other).total())}));
+        return out;
+    }
+
     /** Every layout of the space that passes every check, with its cost in units; returns the count tried. */
     private long forEachPassing(SpanProblem p, java.util.function.ObjLongConsumer<SpanLayout> passing) {
         long combos = 0;
