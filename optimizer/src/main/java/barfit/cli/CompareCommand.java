@@ -39,6 +39,9 @@ final class CompareCommand implements Callable<Integer> {
     @CommandLine.Mixin
     SolverFlags solver;
 
+    @CommandLine.Mixin
+    ObjectiveFlag objective;
+
     @Option(names = "--beam", paramLabel = "ID", description = "study only this beam")
     String beam;
 
@@ -139,8 +142,15 @@ final class CompareCommand implements Callable<Integer> {
         List<Compare.Result> results = new ArrayList<>();
         List<Boolean> perBeam = new ArrayList<>();
         for (Target t : targets) {
-            results.add(
-                    Compare.run(t, capMm, maxW, step, fcMpa, Studies.cost(in), fc -> Studies.costAtFc(in, fc), say));
+            results.add(Compare.run(
+                    t,
+                    capMm,
+                    maxW,
+                    step,
+                    fcMpa,
+                    Studies.model(in, objective.objective()),
+                    fc -> Studies.modelAtFc(in, fc, objective.objective()),
+                    say));
             perBeam.add(t.costPerBeam());
         }
         String text = format == OutputFormat.json

@@ -104,6 +104,25 @@ final class Studies {
                 in.settings().units().code());
     }
 
+    /**
+     * The model a study minimises with: the file's rates for cost; for carbon its carbon factors (the file's,
+     * or the defaults), its cost beside them.
+     */
+    static CostModel model(DesignInput in, barfit.design.Objective objective) {
+        CostModel cost = cost(in);
+        return objective == barfit.design.Objective.CARBON
+                ? cost.withCarbon(in.carbon().factors()).minimising(objective)
+                : cost;
+    }
+
+    /** As {@link #model}, with the concrete rate and carbon factor of another f'c (MPa). */
+    static CostModel modelAtFc(DesignInput in, double fc, barfit.design.Objective objective) {
+        CostModel cost = costAtFc(in, fc);
+        return objective == barfit.design.Objective.CARBON
+                ? cost.withCarbon(in.carbon().at(fc)).minimising(objective)
+                : cost;
+    }
+
     /** The cost model with the concrete rate for another f'c (MPa). */
     static CostModel costAtFc(DesignInput in, double fc) {
         double rate = in.costs().concreteAt(fc);

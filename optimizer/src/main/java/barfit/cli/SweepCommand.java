@@ -41,6 +41,9 @@ final class SweepCommand implements Callable<Integer> {
     @CommandLine.Mixin
     SolverFlags solver;
 
+    @CommandLine.Mixin
+    ObjectiveFlag objective;
+
     @Option(names = "--beam", paramLabel = "ID", description = "sweep only this beam")
     String beam;
 
@@ -144,7 +147,7 @@ final class SweepCommand implements Callable<Integer> {
         List<Sweep.Result> results = new ArrayList<>();
         List<Boolean> perBeam = new ArrayList<>();
         for (Target t : targets) {
-            results.add(Sweep.run(t, caps, Studies.cost(in)));
+            results.add(Sweep.run(t, caps, Studies.model(in, objective.objective())));
             perBeam.add(t.costPerBeam());
         }
         String text = format == OutputFormat.json

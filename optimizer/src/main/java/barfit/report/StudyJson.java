@@ -46,6 +46,9 @@ public final class StudyJson {
         c.put("stirrups", DesignJson.money(b.stirrups()));
         c.put("formwork", DesignJson.money(b.formwork()));
         c.put("depth_premium", DesignJson.money(b.depthPremium()));
+        if (s.carbon() != null) {
+            o.set("carbon", Carbon.json(perBeam ? Carbon.mass(s.carbon(), u) : Carbon.perLength(s.carbon(), u)));
+        }
         o.put("compression_steel_needed", s.compressionRequired());
         o.put("compression_steel_relied_on", s.compressionNeeded());
         o.put("compression_steel_used", s.compressionUsed());
@@ -130,7 +133,15 @@ public final class StudyJson {
                 Summary s = p.summary();
                 x.put("feasible", s.feasible());
                 if (s.feasible()) {
-                    x.put("cost", cost(s.total(), u, perBeam.get(i)));
+                    x.put("cost", cost(s.cost().total(), u, perBeam.get(i)));
+                    if (s.byCarbon()) {
+                        x.put(
+                                "carbon",
+                                Carbon.round(
+                                        perBeam.get(i)
+                                                ? Carbon.mass(s.carbon().total(), u)
+                                                : Carbon.perLength(s.carbon().total(), u)));
+                    }
                     Json.put(x, "width", s.width(), Dim.LENGTH, u);
                     Json.put(x, "height", s.height(), Dim.LENGTH, u);
                     x.put("compression_steel_needed", s.compressionRequired());

@@ -20,7 +20,25 @@ public final class StudyText {
     }
 
     static String cost(Summary s, UnitSystem u, boolean perBeam) {
-        return Money.amount(perBeam ? s.total() : Money.perLength(s.total(), u));
+        return Money.amount(
+                perBeam ? s.cost().total() : Money.perLength(s.cost().total(), u));
+    }
+
+    /** A design's carbon, over the beam or per length, where the study minimised carbon. */
+    static String carbon(Summary s, UnitSystem u, boolean perBeam) {
+        return Carbon.amount(
+                perBeam
+                        ? Carbon.mass(s.carbon().total(), u)
+                        : Carbon.perLength(s.carbon().total(), u));
+    }
+
+    /** Whether a study minimised carbon: its designs say so. */
+    static boolean byCarbon(List<Summary> designs) {
+        return designs.stream().anyMatch(Summary::byCarbon);
+    }
+
+    static String carbonLabel(UnitSystem u, boolean perBeam) {
+        return "carbon " + (perBeam ? Carbon.unit(u) + " of the beam" : Carbon.perLengthUnit(u));
     }
 
     static String size(Summary s, UnitSystem u) {
@@ -36,7 +54,7 @@ public final class StudyText {
         return s.compressionRequired()
                 ? "more, needed"
                 : s.compressionNeeded()
-                        ? "more, for cost"
+                        ? (s.byCarbon() ? "more, for carbon" : "more, for cost")
                         : s.compressionUsed() ? "more, by choice" : "minimum hangers";
     }
 
@@ -47,8 +65,12 @@ public final class StudyText {
             parts.add("more, needed: relied on, and no layout without it passes within the same limits");
         }
         if (shown.stream().anyMatch(s -> s.compressionNeeded() && !s.compressionRequired())) {
-            parts.add("more, for cost: relied on, but a dearer layout with the hangers alone passes within the same "
-                    + "limits too");
+            parts.add(
+                    byCarbon(shown)
+                            ? "more, for carbon: relied on, but a layout higher in carbon with the hangers alone "
+                                    + "passes within the same limits too"
+                            : "more, for cost: relied on, but a dearer layout with the hangers alone passes within "
+                                    + "the same limits too");
         }
         if (shown.stream().anyMatch(s -> s.compressionUsed() && !s.compressionNeeded())) {
             parts.add("more, by choice: more than the hangers, not relied on");
@@ -66,6 +88,11 @@ public final class StudyText {
             Settings settings, List<Compare.Result> results, List<Boolean> perBeam, String currency) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder(head("compare", settings));
+        if (results.stream()
+                .anyMatch(r -> byCarbon(
+                        r.options().stream().map(Compare.Option::summary).toList()))) {
+            out.append(Carbon.OBJECTIVE_NOTE).append('\n');
+        }
         for (int i = 0; i < results.size(); i++) {
             Compare.Result r = results.get(i);
             boolean pb = perBeam.get(i);
@@ -77,10 +104,14 @@ public final class StudyText {
                     .append(u.unit(Dim.LENGTH))
                     .append(r.capGiven() ? "" : " (no cap given: the deepest searched)")
                     .append('\n');
-            TextTable t = new TextTable(false, false, false, false, true, true, false, false, true, true, true);
+            boolean carbon =
+                    byCarbon(r.options().stream().map(Compare.Option::summary).toList());
+            TextTable t = carbon
+                    ? new TextTable(false, false, false, false, true, true, false, false, true, true, true, true)
+                    : new TextTable(false, false, false, false, true, true, false, false, true, true, true);
             String money = (pb ? "of the beam" : Money.perLengthLabel(u)) + (currency.isEmpty() ? "" : " " + currency);
             // over a whole span the top bars are compression steel at mid-span but tension steel at the supports
-            t.row(
+            List<String> head = new java.util.ArrayList<>(List.of(
                     "option",
                     "b × h",
                     r.wholeSpan() ? "bottom" : "tension",
@@ -90,8 +121,12 @@ public final class StudyText {
                     "φ",
                     "compression layer",
                     "bars/layers",
-                    "cost " + money,
-                    "vs recommended");
+                    "cost " + money));
+            if (carbon) {
+                head.add(carbonLabel(u, pb));
+            }
+            head.add("vs recommended");
+            t.row(head.toArray(new String[0]));
             TextTable terms = new TextTable(false, false, true, true, true, true, true, true);
             terms.row("option", "stirrups", "concrete", "main bars", "stirrups", "formwork", "depth premium", "total");
             // against the recommended option (◀): a cheaper stronger grade not worth its change shows below it
@@ -100,12 +135,16 @@ public final class StudyText {
             for (Compare.Option o : r.options()) {
                 Summary s = o.summary();
                 if (!s.feasible()) {
-                    t.row(o.label(), "none", "", "", "", "", "", "", "", "", "");
+                    String[] blank = new String[carbon ? 12 : 11];
+                    java.util.Arrays.fill(blank, "");
+                    blank[0] = o.label();
+                    blank[1] = "none";
+                    t.row(blank);
                     none.computeIfAbsent(s.proof(), k -> new java.util.ArrayList<>())
                             .add("'" + o.label() + "'");
                     continue;
                 }
-                t.row(
+                List<String> row = new java.util.ArrayList<>(List.of(
                         o.label() + (o == r.best() ? "  ◀" : ""),
                         size(s, u),
                         s.tension(),
@@ -115,8 +154,12 @@ public final class StudyText {
                         Words.phi(s.phi()) + (s.strainClass().equals("transition") ? " transition" : ""),
                         compression(s),
                         s.longitudinalBars() + " / " + s.layers(),
-                        cost(s, u, pb),
-                        String.format(Locale.ROOT, "%+.1f %%", 100 * (s.total() - best) / best));
+                        cost(s, u, pb)));
+                if (carbon) {
+                    row.add(carbon(s, u, pb));
+                }
+                row.add(String.format(Locale.ROOT, "%+.1f %%", 100 * (s.total() - best) / best));
+                t.row(row.toArray(new String[0]));
                 var c = pb ? s.cost() : Money.scaled(s.cost(), u);
                 terms.row(
                         o.label(),
@@ -165,30 +208,45 @@ public final class StudyText {
     public static String sweep(Settings settings, List<Sweep.Result> results, List<Boolean> perBeam, String currency) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder(head("sweep", settings));
+        if (results.stream()
+                .anyMatch(r ->
+                        byCarbon(r.points().stream().map(Sweep.Point::summary).toList()))) {
+            out.append(Carbon.OBJECTIVE_NOTE).append('\n');
+        }
         for (int i = 0; i < results.size(); i++) {
             Sweep.Result r = results.get(i);
             boolean pb = perBeam.get(i);
             out.append("\nBeam ").append(r.id()).append('\n');
-            TextTable t = new TextTable(true, false, true, false, false, false, true);
-            t.row(
+            boolean carbon =
+                    byCarbon(r.points().stream().map(Sweep.Point::summary).toList());
+            TextTable t = carbon
+                    ? new TextTable(true, false, true, true, false, false, false, true)
+                    : new TextTable(true, false, true, false, false, false, true);
+            List<String> head = new java.util.ArrayList<>(List.of(
                     "cap (" + u.unit(Dim.LENGTH) + ")",
                     "feasible",
                     "cost " + (pb ? "of the beam" : Money.perLengthLabel(u))
-                            + (currency.isEmpty() ? "" : " " + currency),
-                    "b × h",
-                    "tension",
-                    "compression layer",
-                    "εt");
+                            + (currency.isEmpty() ? "" : " " + currency)));
+            if (carbon) {
+                head.add(carbonLabel(u, pb));
+            }
+            head.addAll(List.of("b × h", "tension", "compression layer", "εt"));
+            t.row(head.toArray(new String[0]));
             for (Sweep.Point p : r.points()) {
                 Summary s = p.summary();
-                t.row(
+                List<String> row = new java.util.ArrayList<>(List.of(
                         u.compact(p.cap(), Dim.LENGTH),
                         s.feasible() ? "yes" : "no",
-                        s.feasible() ? cost(s, u, pb) : "",
+                        s.feasible() ? cost(s, u, pb) : ""));
+                if (carbon) {
+                    row.add(s.feasible() ? carbon(s, u, pb) : "");
+                }
+                row.addAll(List.of(
                         s.feasible() ? size(s, u) : "",
                         s.feasible() ? s.tension() : "",
                         s.feasible() ? compression(s) : "",
-                        s.feasible() ? Words.fixed(s.epsT(), 5) : "");
+                        s.feasible() ? Words.fixed(s.epsT(), 5) : ""));
+                t.row(row.toArray(new String[0]));
             }
             t.write("  ", out);
             out.append(compressionLegend(r.points().stream()
@@ -230,6 +288,11 @@ public final class StudyText {
                         .append(size(r.chosen(), u))
                         .append(" at ")
                         .append(cost(r.chosen(), u, pb))
+                        .append(
+                                r.chosen().byCarbon()
+                                        ? ", " + carbon(r.chosen(), u, pb) + " "
+                                                + carbonLabel(u, pb).substring(7)
+                                        : "")
                         .append('\n');
             }
         }

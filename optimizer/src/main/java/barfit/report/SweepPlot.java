@@ -49,7 +49,7 @@ public final class SweepPlot {
         XYSeries needing = new XYSeries("layout with compression steel beyond the hangers");
         for (Sweep.Point p : r.points()) {
             if (p.summary().feasible()) {
-                double cost = cost(p.summary().total(), u, perBeam);
+                double cost = cost(p.summary().cost().total(), u, perBeam);
                 frontier.add(u.fromSI(p.cap(), Dim.LENGTH), cost);
                 if (p.summary().compressionUsed()) {
                     needing.add(u.fromSI(p.cap(), Dim.LENGTH), cost);
@@ -61,7 +61,8 @@ public final class SweepPlot {
         data.addSeries(needing);
         XYSeries chosen = new XYSeries("chosen by design");
         if (r.chosen().feasible()) {
-            chosen.add(u.fromSI(r.chosenCap(), Dim.LENGTH), cost(r.chosen().total(), u, perBeam));
+            chosen.add(
+                    u.fromSI(r.chosenCap(), Dim.LENGTH), cost(r.chosen().cost().total(), u, perBeam));
         }
         data.addSeries(chosen);
 
@@ -160,7 +161,7 @@ public final class SweepPlot {
             // keep the label inside the plot: to the right of the point in the left half, to the left in the
             // right half; below it in the upper half of the costs, above it in the lower half
             double cx = u.fromSI(r.chosenCap(), Dim.LENGTH);
-            double cy = cost(r.chosen().total(), u, perBeam);
+            double cy = cost(r.chosen().cost().total(), u, perBeam);
             double lo = frontier.isEmpty() ? cy : Math.min(cy, frontier.getMinY());
             double hi = frontier.isEmpty() ? cy : Math.max(cy, frontier.getMaxY());
             boolean right = cx <= (first + last) / 2;

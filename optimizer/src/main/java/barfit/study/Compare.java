@@ -157,7 +157,15 @@ public final class Compare {
             }
             judged.add(o);
         }
-        return recommend(t.id(), h, capGiven, judged, say, t instanceof SpanTarget, t.fixedWidth() != null);
+        return recommend(
+                t.id(),
+                h,
+                capGiven,
+                judged,
+                say,
+                t instanceof SpanTarget,
+                t.fixedWidth() != null,
+                new Measure(cost.objective() == barfit.design.Objective.CARBON));
     }
 
     /** The smallest step between the search's widths, or {@code fallback} (mm) with a single width. */
@@ -192,9 +200,35 @@ public final class Compare {
      */
     public static final double MARGIN_PERCENT = 2.0;
 
-    /** The cheapest feasible option, with its reasons in plain words. */
+    /** The words for what the study minimises: cost, or embodied carbon ({@code --objective carbon}). */
+    record Measure(boolean carbon) {
+        String least() {
+            return carbon ? "lowest in carbon" : "cheapest";
+        }
+
+        String more(double pct) {
+            return pct(pct) + (carbon ? " more carbon" : " dearer");
+        }
+
+        String less(double pct) {
+            return pct(pct) + (carbon ? " less carbon" : " cheaper");
+        }
+
+        String noun() {
+            return carbon ? "carbon" : "cost";
+        }
+    }
+
+    /** The cheapest feasible option (the lowest in carbon where carbon is minimised), with its reasons in words. */
     static Result recommend(
-            String id, double cap, boolean capGiven, List<Option> options, Say say, boolean span, boolean fixedWidth) {
+            String id,
+            double cap,
+            boolean capGiven,
+            List<Option> options,
+            Say say,
+            boolean span,
+            boolean fixedWidth,
+            Measure by) {
         List<String> reasons = new ArrayList<>();
         Option best = null;
         Option bestSameGrade = null;
@@ -230,7 +264,7 @@ public final class Compare {
             }
         }
         if (atCap.summary().feasible()) {
-            reasons.add(atCapReason(atCap.summary(), options, cap, capGiven, say));
+            reasons.add(atCapReason(atCap.summary(), options, cap, capGiven, say, by));
         } else {
             reasons.add(nothingAtCap(atCap.summary(), cap, say));
         }
@@ -264,27 +298,29 @@ public final class Compare {
             if (sameDesign(o.summary(), best.summary())) {
                 reasons.add(who
                         + (sameCost(o.summary(), best.summary())
-                                ? (one ? " gives" : " give") + " the same design at the same cost."
+                                ? (one ? " gives" : " give") + " the same design at the same " + by.noun() + "."
                                 : (one ? " gives" : " give") + " the same layout, "
-                                        + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
+                                        + (diff > 0 ? by.more(diff) : by.less(-diff))
                                         + (o.kind().equals("fc")
                                                 ? " (the stronger concrete buys nothing here)."
                                                 : ".")));
             } else if (diff <= MARGIN_PERCENT) {
                 reasons.add(who + (one ? " is" : " (the same design) are") + " within " + margin()
-                        + " of the recommended option (" + pct(diff) + " dearer): let constructability decide ("
+                        + " of the recommended option (" + by.more(diff) + "): let constructability decide ("
                         + congestion(o.summary()) + ", against " + congestion(best.summary()) + ").");
             }
         }
         String scope = capGiven ? " within the cap" : "";
+        String least = " is " + by.least();
         String why = switch (best.kind()) {
-            case "at_cap" -> capGiven ? "Keeping the cap is cheapest" : "The design as given is cheapest";
+            case "at_cap" -> (capGiven ? "Keeping the cap" : "The design as given") + least;
             case "deepen" ->
-                "Lifting the cap to h = " + say.length(best.summary().height()) + " is cheapest (any depth premium "
-                        + "of the rates included); it needs the architect to accept the deeper beam";
+                "Lifting the cap to h = " + say.length(best.summary().height()) + least
+                        + (by.carbon() ? "" : " (any depth premium of the rates included)")
+                        + "; it needs the architect to accept the deeper beam";
             case "no_compression_steel" ->
                 "The shallowest depth without compression steel, h = "
-                        + say.length(best.summary().height()) + ", is cheapest"
+                        + say.length(best.summary().height()) + "," + least
                         + (best.summary().height() > cap + 1e-9 ? "; it is deeper than the cap" : "");
             case "widen" ->
                 (atCap.summary().feasible()
@@ -297,14 +333,15 @@ public final class Compare {
                                 ? " from the fixed "
                                         + say.length(atCap.summary().width())
                                 : "")
-                        + scope + " is cheapest";
-            default -> "Stronger concrete, f'c = " + say.stress(best.fc()) + scope + ", is cheapest";
+                        + scope
+                        + least;
+            default -> "Stronger concrete, f'c = " + say.stress(best.fc()) + scope + "," + least;
         };
         if (atCap.summary().feasible() && best != atCap) {
             double saving =
                     100 * (atCap.summary().total() - ref) / atCap.summary().total();
             why += sameCost(atCap.summary(), best.summary())
-                    ? ": the same cost as " + (capGiven ? "keeping the cap" : "the design as given")
+                    ? ": the same " + by.noun() + " as " + (capGiven ? "keeping the cap" : "the design as given")
                     : String.format(
                             Locale.ROOT,
                             ": %.1f %% less than %s",
@@ -335,7 +372,8 @@ public final class Compare {
     }
 
     /** What the design at the cap is, and why its compression steel is there. */
-    private static String atCapReason(Summary s, List<Option> options, double cap, boolean capGiven, Say say) {
+    private static String atCapReason(
+            Summary s, List<Option> options, double cap, boolean capGiven, Say say, Measure by) {
         String what;
         if (s.compressionNeeded()) {
             Summary singly = options.stream()
@@ -349,8 +387,8 @@ public final class Compare {
                 what = "carries compression steel beyond the hangers: with the hangers alone its other bars would fail"
                         + governs + ", but another layout without it passes "
                         + (capGiven ? "within the cap" : "in the search") + " (h = " + say.length(singly.height())
-                        + ", " + (diff > 0 ? pct(diff) + " dearer" : pct(-diff) + " cheaper")
-                        + "), so the compression steel is a matter of cost, not of need";
+                        + ", " + (diff > 0 ? by.more(diff) : by.less(-diff))
+                        + "), so the compression steel is a matter of " + by.noun() + ", not of need";
             } else {
                 what = "needs compression steel beyond the hangers: with the hangers alone it fails" + governs
                         + ", and no layout without it passes " + (capGiven ? "within the cap" : "in the search");

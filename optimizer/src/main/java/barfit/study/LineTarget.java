@@ -82,6 +82,7 @@ public final class LineTarget implements Target {
             return Summary.none("no one section of the search space carries every part of the line", "strength");
         }
         CostBreakdown total = CostBreakdown.ZERO;
+        CostBreakdown carbon = CostBreakdown.ZERO;
         CheckReport governing = null;
         List<String> bottoms = new ArrayList<>();
         List<String> tops = new ArrayList<>();
@@ -92,6 +93,7 @@ public final class LineTarget implements Target {
         for (LineSpans.Part pt : r.parts()) {
             var d = pt.outcome().best();
             total = total.plus(d.cost());
+            carbon = d.carbon() == null ? null : carbon == null ? null : carbon.plus(d.carbon());
             optimal &= pt.outcome().proof().status() == Proof.Status.OPTIMAL;
             var l = d.layout();
             if (!pt.problem().cantilever()) {
@@ -118,33 +120,34 @@ public final class LineTarget implements Target {
         }
         var f = governing.flexure();
         return new Summary(
-                true,
-                first.width(),
-                first.height(),
-                "bottom " + String.join("; ", bottoms),
-                "top " + first.topContinuous() + " " + first.top().label() + " continuous"
-                        + (tops.isEmpty() ? "" : "; " + String.join("; ", tops)),
-                "per part, see design",
-                "bottom",
-                first.bottomCounts(),
-                first.bottom().designation(),
-                "top",
-                first.topContinuous(),
-                first.top().designation(),
-                f.phiMn(),
-                Math.abs(governing.demand().mu()),
-                f.epsT(),
-                f.phi(),
-                f.strainClass(),
-                false,
-                false,
-                bars,
-                layers,
-                total,
-                (optimal ? "optimal" : "feasible") + " for the line ("
-                        + r.parts().size() + " parts, support bars " + "shared)",
-                "",
-                null,
-                false);
+                        true,
+                        first.width(),
+                        first.height(),
+                        "bottom " + String.join("; ", bottoms),
+                        "top " + first.topContinuous() + " " + first.top().label() + " continuous"
+                                + (tops.isEmpty() ? "" : "; " + String.join("; ", tops)),
+                        "per part, see design",
+                        "bottom",
+                        first.bottomCounts(),
+                        first.bottom().designation(),
+                        "top",
+                        first.topContinuous(),
+                        first.top().designation(),
+                        f.phiMn(),
+                        Math.abs(governing.demand().mu()),
+                        f.epsT(),
+                        f.phi(),
+                        f.strainClass(),
+                        false,
+                        false,
+                        bars,
+                        layers,
+                        total,
+                        (optimal ? "optimal" : "feasible") + " for the line ("
+                                + r.parts().size() + " parts, support bars " + "shared)",
+                        "",
+                        null,
+                        false)
+                .measured(carbon, cost.objective() == barfit.design.Objective.CARBON);
     }
 }

@@ -38,7 +38,104 @@ public record Summary(
         String proof,
         String hangersFail,
         String limit,
-        boolean compressionAvoidable) {
+        boolean compressionAvoidable,
+        CostBreakdown carbon,
+        boolean byCarbon) {
+
+    /** As above, measured by cost, its carbon not known. */
+    public Summary(
+            boolean feasible,
+            double width,
+            double height,
+            String tension,
+            String compression,
+            String stirrups,
+            String tensionFace,
+            java.util.List<Integer> tensionCounts,
+            String tensionBar,
+            String compressionFace,
+            int compressionCount,
+            String compressionBar,
+            double phiMn,
+            double mu,
+            double epsT,
+            double phi,
+            String strainClass,
+            boolean compressionUsed,
+            boolean compressionNeeded,
+            int longitudinalBars,
+            int layers,
+            CostBreakdown cost,
+            String proof,
+            String hangersFail,
+            String limit,
+            boolean compressionAvoidable) {
+        this(
+                feasible,
+                width,
+                height,
+                tension,
+                compression,
+                stirrups,
+                tensionFace,
+                tensionCounts,
+                tensionBar,
+                compressionFace,
+                compressionCount,
+                compressionBar,
+                phiMn,
+                mu,
+                epsT,
+                phi,
+                strainClass,
+                compressionUsed,
+                compressionNeeded,
+                longitudinalBars,
+                layers,
+                cost,
+                proof,
+                hangersFail,
+                limit,
+                compressionAvoidable,
+                null,
+                false);
+    }
+
+    /**
+     * The same design with its carbon ({@code carbon}, kg CO2e; null where unknown), compared with the others by
+     * it where {@code byCarbon} (the study minimised carbon, {@code --objective carbon}).
+     */
+    public Summary measured(CostBreakdown carbon, boolean byCarbon) {
+        return new Summary(
+                feasible,
+                width,
+                height,
+                tension,
+                compression,
+                stirrups,
+                tensionFace,
+                tensionCounts,
+                tensionBar,
+                compressionFace,
+                compressionCount,
+                compressionBar,
+                phiMn,
+                mu,
+                epsT,
+                phi,
+                strainClass,
+                compressionUsed,
+                compressionNeeded,
+                longitudinalBars,
+                layers,
+                cost,
+                proof,
+                hangersFail,
+                limit,
+                compressionAvoidable,
+                carbon,
+                byCarbon);
+    }
 
     public static Summary none(String proof) {
         return none(proof, "");
@@ -102,7 +199,9 @@ public record Summary(
                 proof,
                 hangersFail,
                 limit,
-                avoidable);
+                avoidable,
+                carbon,
+                byCarbon);
     }
 
     /** Compression steel beyond the hangers that nothing within the limits can do without. */
@@ -110,8 +209,10 @@ public record Summary(
         return compressionNeeded && !compressionAvoidable;
     }
 
+    /** What the study compares designs by: the cost, or the carbon where it minimised carbon. */
     public double total() {
-        return cost == null ? Double.POSITIVE_INFINITY : cost.total();
+        CostBreakdown by = byCarbon ? carbon : cost;
+        return by == null ? Double.POSITIVE_INFINITY : by.total();
     }
 
     /** Bars by layer from the face: "3 No. 25 + 2 No. 25". */
