@@ -3,7 +3,6 @@ package barfit.cli;
 import barfit.catalogs.InputError;
 import barfit.catalogs.yaml.Location;
 import barfit.design.CostModel;
-import barfit.design.Objective;
 import barfit.design.SolverOptions;
 import barfit.report.ScheduleJson;
 import barfit.report.ScheduleText;
@@ -97,12 +96,6 @@ final class ScheduleCommand implements Callable<Integer> {
         }
         ScheduleInput input = ScheduleInputReader.read(file, beams, options, nThreads, objective.objective());
         ProgressBar bar = new ProgressBar(spec.commandLine().getErr(), !quiet && ProgressBar.stderrIsTerminal());
-        if (objective.objective() == Objective.CARBON && input.rationalise() != null) {
-            throw OptionError.of(
-                    "--objective",
-                    "carbon is not offered with a rationalise: block yet (its limits and price of standardisation "
-                            + "are in cost); expected --objective cost, or the file without rationalise:");
-        }
         CostModel cost = input.costModel().minimising(objective.objective());
         ScheduleResult result;
         try {

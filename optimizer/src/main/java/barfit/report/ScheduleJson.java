@@ -53,6 +53,9 @@ public final class ScheduleJson {
         if (!Double.isNaN(r.totalCarbon())) {
             sum.put("total_carbon", round(Carbon.mass(r.totalCarbon(), u)));
             sum.put("carbon_basis", Carbon.unit(u) + ", " + Carbon.STAGES);
+            if (r.leastCarbon() && !Double.isNaN(r.unconstrainedCarbon())) {
+                sum.put("own_optimum_carbon", round(Carbon.mass(r.unconstrainedCarbon(), u)));
+            }
         }
         ArrayNode sizes = sum.putArray("section_sizes");
         for (ScheduleResult.SectionSize s : r.sizes()) {
@@ -77,8 +80,12 @@ public final class ScheduleJson {
                 po.putNull("bound");
                 po.putNull("gap");
             } else {
-                po.put("objective", round(p.objective()));
-                po.put("bound", round(p.bound()));
+                boolean carbon = p.measure() == barfit.design.Objective.CARBON;
+                if (carbon) {
+                    po.put("measure", "carbon, " + Carbon.unit(u));
+                }
+                po.put("objective", round(carbon ? Carbon.mass(p.objective(), u) : p.objective()));
+                po.put("bound", round(carbon ? Carbon.mass(p.bound(), u) : p.bound()));
                 po.put("gap", p.gap());
             }
             po.put("bar_size_sets", s.barSetsTotal());
@@ -92,10 +99,11 @@ public final class ScheduleJson {
         for (ScheduleResult.StandardisationPoint p : r.standardisation()) {
             ObjectNode c = curve.addObject();
             c.put("max_section_sizes", p.sizes());
+            String key = r.leastCarbon() ? "total_carbon" : "total_cost";
             if (Double.isNaN(p.cost())) {
-                c.putNull("total_cost");
+                c.putNull(key);
             } else {
-                c.put("total_cost", round(p.cost()));
+                c.put(key, round(r.leastCarbon() ? Carbon.mass(p.cost(), u) : p.cost()));
             }
             c.put("status", p.status().name());
             ArrayNode bs = c.putArray("bar_sizes");

@@ -32,7 +32,11 @@ public final class ScheduleText {
         out.append(
                 rationalise == null
                         ? "each beam at its own optimum (no rationalise: block)\n"
-                        : "rationalised: " + limits(rationalise) + "\n");
+                        : "rationalised: " + limits(rationalise)
+                                + (r.leastCarbon() && rationalise.formworkSetCost() > 0
+                                        ? " (paid in money: no carbon is counted for a set of forms)"
+                                        : "")
+                                + "\n");
         // a line of one set of forms is a group that always shares b x h: only the user's groups need the note
         boolean grouped = r.beams().stream()
                 .anyMatch(b -> b.beam().group() != null && !b.beam().sameSection());
@@ -112,7 +116,7 @@ public final class ScheduleText {
         out.append(" = ").append(Money.amount(r.totalCost())).append(currency);
         if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             out.append(";  the limits cannot be met: every beam is shown at its own optimum, nothing is rationalised");
-        } else if (r.proof() != null) {
+        } else if (r.proof() != null && !r.leastCarbon()) {
             double extra = r.totalCost() - r.unconstrainedCost();
             out.append(";  every beam at its own optimum")
                     .append(r.input().rationalise().formworkSetCost() > 0 ? " (with a set of forms per size)" : "")
@@ -133,24 +137,48 @@ public final class ScheduleText {
                     .append(' ')
                     .append(Carbon.unit(u))
                     .append(", ")
-                    .append(Carbon.STAGES)
-                    .append('\n');
+                    .append(Carbon.STAGES);
+            if (r.leastCarbon()
+                    && r.proof() != null
+                    && r.proof().status() != Proof.Status.INFEASIBLE
+                    && !Double.isNaN(r.unconstrainedCarbon())) {
+                double extra = r.totalCarbon() - r.unconstrainedCarbon();
+                out.append(";  every beam at its own lowest-carbon design: ")
+                        .append(Carbon.amount(Carbon.mass(r.unconstrainedCarbon(), u)))
+                        .append(String.format(
+                                Locale.ROOT,
+                                " (rationalising %s %s, %.1f %%)",
+                                extra >= 0 ? "adds" : "saves",
+                                Carbon.amount(Carbon.mass(Math.abs(extra), u)),
+                                r.unconstrainedCarbon() > 0 ? 100 * Math.abs(extra) / r.unconstrainedCarbon() : 0));
+            }
+            out.append('\n');
         }
         if (r.proof() != null) {
             out.append("proof: ").append(proof(r)).append('\n');
         }
         if (!r.standardisation().isEmpty()) {
-            out.append("\nprice of standardisation (least total cost for at most K section sizes):\n");
+            boolean carbon = r.leastCarbon();
+            out.append(
+                    carbon
+                            ? "\nprice of standardisation (least total carbon of the beams, " + Carbon.unit(u)
+                                    + ", for at most K section sizes):\n"
+                            : "\nprice of standardisation (least total cost for at most K section sizes):\n");
             TextTable curve = new TextTable(true, true, true, false, false);
-            curve.row("K", "total" + currency, "saving of the K-th size", "bar sizes allowed", "status");
+            curve.row(
+                    "K",
+                    carbon ? "total " + Carbon.unit(u) : "total" + currency,
+                    "saving of the K-th size",
+                    "bar sizes allowed",
+                    "status");
             double previous = Double.NaN;
             for (ScheduleResult.StandardisationPoint point : r.standardisation()) {
                 curve.row(
                         String.valueOf(point.sizes()),
-                        Double.isNaN(point.cost()) ? "none fits" : Money.amount(point.cost()),
+                        Double.isNaN(point.cost()) ? "none fits" : measure(point.cost(), carbon, u),
                         Double.isNaN(previous) || Double.isNaN(point.cost())
                                 ? ""
-                                : Money.amount(previous - point.cost()),
+                                : measure(previous - point.cost(), carbon, u),
                         String.join(
                                 ", ",
                                 point.barSizes().stream()
@@ -217,13 +245,21 @@ public final class ScheduleText {
         return words.toString();
     }
 
+    /** An amount of what the schedule minimised: currency, or carbon in the user's mass unit. */
+    private static String measure(double v, boolean carbon, UnitSystem u) {
+        return carbon ? Carbon.amount(Carbon.mass(v, u)) : Money.amount(v);
+    }
+
     public static String proof(ScheduleResult r) {
         Proof<ScheduleResult.Search> p = r.proof();
         var s = p.search();
         if (p.status() == Proof.Status.INFEASIBLE) {
             return "INFEASIBLE — " + ScheduleWords.method(r) + "; the beams are shown at their own optima";
         }
-        return p.status().name() + " — objective " + Money.amount(p.objective()) + ", bound " + Money.amount(p.bound())
+        boolean carbon = p.measure() == barfit.design.Objective.CARBON;
+        UnitSystem u = r.input().settings().units();
+        return p.status().name() + " — objective " + measure(p.objective(), carbon, u) + ", bound "
+                + measure(p.bound(), carbon, u) + (carbon ? " " + Carbon.unit(u) : "")
                 + String.format(Locale.ROOT, ", gap %.2f %%", 100 * p.gap()) + "; " + ScheduleWords.method(r)
                 + "; bar-size sets: "
                 + s.barSetsTotal() + " (" + s.barSetsSolved() + " solved to optimality, " + s.barSetsPruned()

@@ -27,7 +27,8 @@ final class Rationaliser {
             double formworkSets,
             double unconstrained,
             Proof<ScheduleResult.Search> proof,
-            List<ScheduleResult.StandardisationPoint> curve) {}
+            List<ScheduleResult.StandardisationPoint> curve,
+            double ownCarbon) {}
 
     private final ScheduleInput in;
     private final Rationalise limits;
@@ -48,7 +49,12 @@ final class Rationaliser {
             Parallel pool,
             Progress progress) {
         this.in = in;
-        this.limits = in.rationalise();
+        // minimising carbon, a set of forms costs money but no carbon the beams do not already count (their
+        // formwork factor per m² of contact): the number of sizes is then held by K alone
+        Rationalise given = in.rationalise();
+        this.limits = cost.objective() == barfit.design.Objective.CARBON
+                ? new Rationalise(given.maxSectionSizes(), given.maxBarSizes(), given.groupsSameSection(), 0)
+                : given;
         this.own = own;
         this.designer = designer;
         this.cost = cost;
@@ -206,39 +212,50 @@ final class Rationaliser {
                     options);
         } else {
             int used = distinct(best.result().assignment());
-            formwork = used * limits.formworkSetCost();
+            formwork = used * in.rationalise().formworkSetCost();
             Proof.Status status =
                     best.bound() >= best.result().objective() ? Proof.Status.OPTIMAL : Proof.Status.FEASIBLE;
             proof = Proof.solved(
-                    status,
-                    best.result().objective(),
-                    best.bound(),
-                    CostModel.UNITS,
-                    Proof.SolverStats.NONE,
-                    new ScheduleResult.Search(
-                            best.result().method(),
-                            best.result().cpSatStatus(),
-                            best.setsTotal(),
-                            best.setsSolved(),
-                            best.setsPruned(),
-                            pricedForProof,
-                            proofMillis),
-                    options);
+                            status,
+                            best.result().objective(),
+                            best.bound(),
+                            CostModel.UNITS,
+                            Proof.SolverStats.NONE,
+                            new ScheduleResult.Search(
+                                    best.result().method(),
+                                    best.result().cpSatStatus(),
+                                    best.setsTotal(),
+                                    best.setsSolved(),
+                                    best.setsPruned(),
+                                    pricedForProof,
+                                    proofMillis),
+                            options)
+                    .measuring(cost.objective());
         }
         // every beam at its own optimum, for comparison: the beams designed here, each in its own best
         // size, with a set of forms for each distinct size
         double ownTotal = 0;
+        double ownCarbon = 0;
         Set<List<Double>> ownSizes = new HashSet<>();
         for (int i = 0; i < beams.size(); i++) {
             if (out.get(i).feasible() && own.get(i).feasible()) {
                 var layout = own.get(i).best().layout();
                 ownTotal += own.get(i).best().cost().total();
+                var c = own.get(i).best().carbon();
+                ownCarbon += c == null ? Double.NaN : c.total();
                 ownSizes.add(List.of(layout.width(), layout.height()));
             }
         }
         if (best.result() == null) {
-            formwork = ownSizes.size() * limits.formworkSetCost(); // the beams stand at their own optima, forms and all
+            // the beams stand at their own optima, forms and all
+            formwork = ownSizes.size() * in.rationalise().formworkSetCost();
         }
-        return new Rationalised(out, formwork, ownTotal + ownSizes.size() * limits.formworkSetCost(), proof, curve);
+        return new Rationalised(
+                out,
+                formwork,
+                ownTotal + ownSizes.size() * in.rationalise().formworkSetCost(),
+                proof,
+                curve,
+                ownCarbon);
     }
 }

@@ -20,13 +20,42 @@ public record ScheduleResult(
         Proof<Search> proof,
         List<StandardisationPoint> standardisation,
         int threads,
-        long millis) {
+        long millis,
+        double unconstrainedCarbon) {
 
     public ScheduleResult {
         beams = List.copyOf(beams);
         sizes = List.copyOf(sizes);
         barSizes = List.copyOf(barSizes);
         standardisation = List.copyOf(standardisation);
+    }
+
+    /** As above, the carbon of every beam at its own optimum not known. */
+    public ScheduleResult(
+            ScheduleInput input,
+            List<Beam> beams,
+            List<SectionSize> sizes,
+            List<String> barSizes,
+            double beamsCost,
+            double formworkSetsCost,
+            double unconstrainedCost,
+            Proof<Search> proof,
+            List<StandardisationPoint> standardisation,
+            int threads,
+            long millis) {
+        this(
+                input,
+                beams,
+                sizes,
+                barSizes,
+                beamsCost,
+                formworkSetsCost,
+                unconstrainedCost,
+                proof,
+                standardisation,
+                threads,
+                millis,
+                Double.NaN);
     }
 
     /**
@@ -62,7 +91,10 @@ public record ScheduleResult(
             int pairsEvaluated,
             long millis) {}
 
-    /** The least total cost with at most {@code sizes} section sizes (NaN when none is feasible). */
+    /**
+     * The least total cost with at most {@code sizes} section sizes (NaN when none is feasible): the total
+     * carbon (kg CO2e) of the beams where the schedule minimised carbon.
+     */
     public record StandardisationPoint(int sizes, double cost, Proof.Status status, List<String> barSizes) {
         public StandardisationPoint {
             barSizes = List.copyOf(barSizes);

@@ -51,10 +51,10 @@ public final class ScheduleSolver {
                 }
                 out.add(new ScheduleResult.Beam(beams.get(i), o, ownCost));
             }
-            return finish(in, out, 0, unconstrained, null, List.of(), started);
+            return finish(in, out, 0, unconstrained, null, List.of(), started, Double.NaN);
         }
         Rationaliser.Rationalised r = new Rationaliser(in, own, designer, cost, options, pool, progress).run(started);
-        return finish(in, r.beams(), r.formworkSets(), r.unconstrained(), r.proof(), r.curve(), started);
+        return finish(in, r.beams(), r.formworkSets(), r.unconstrained(), r.proof(), r.curve(), started, r.ownCarbon());
     }
 
     /** The schedule's section sizes (each with its beams) and bar sizes, in size order, and its total. */
@@ -65,7 +65,8 @@ public final class ScheduleSolver {
             double unconstrained,
             Proof<ScheduleResult.Search> proof,
             List<ScheduleResult.StandardisationPoint> curve,
-            long started) {
+            long started,
+            double ownCarbon) {
         Map<List<Double>, List<String>> beamsBySize = new TreeMap<>(
                 Comparator.<List<Double>>comparingDouble(size -> size.get(0)).thenComparingDouble(size -> size.get(1)));
         Map<String, BarSize> bars = new TreeMap<>();
@@ -96,7 +97,8 @@ public final class ScheduleSolver {
                 proof,
                 curve,
                 pool.threads(),
-                (System.nanoTime() - started) / 1_000_000);
+                (System.nanoTime() - started) / 1_000_000,
+                ownCarbon);
     }
 
     /** A key that sorts bar sizes by diameter. */

@@ -125,6 +125,64 @@ class RationaliseOracleTest {
         assertTrue(proven >= instances / 2, "enough feasible schedules: " + proven);
     }
 
+    /**
+     * A schedule rationalised for the least carbon ({@code schedule --objective carbon} with a rationalise:
+     * block) against the same brute force with every beam priced in carbon (random factors, invented) and no
+     * price for a set of forms: the proven objective and each point of the price of standardisation equal the
+     * enumerated optimum, the limits hold, and the schedule's carbon is its objective.
+     */
+    @Test
+    void rationalisedCarbonEqualsBruteForce() {
+        Random r = new Random(Long.getLong("schedule.seed", 707L));
+        int instances = Integer.getInteger("schedule.instances", 6);
+        int proven = 0;
+        for (int i = 0; i < instances; i++) {
+            ScheduleInput in = schedule(r, i);
+            CostModel carbon = COST.withCarbon(new barfit.design.CarbonFactors(
+                            100 + 300 * r.nextDouble(), 0.8 + 2.2 * r.nextDouble(), 0.8 + 2.2 * r.nextDouble(), 0))
+                    .minimising(barfit.design.Objective.CARBON);
+            ScheduleResult got = new ScheduleSolver(carbon, new SolverOptions(30, 1, 1), 2, Progress.NONE).solve(in);
+            long[][][] prices = prices(in, carbon);
+            int k = in.rationalise().maxSectionSizes() == null
+                    ? Integer.MAX_VALUE
+                    : in.rationalise().maxSectionSizes();
+            Brute ref = bruteForce(in, prices, k, 0);
+            String where = "carbon schedule " + i + " " + in.rationalise() + ", "
+                    + in.beams().size() + " beams";
+            if (ref.total == Long.MAX_VALUE) {
+                assertTrue(!got.allFeasible(), where);
+                continue;
+            }
+            assertTrue(
+                    got.proof() != null && got.proof().status() == Proof.Status.OPTIMAL,
+                    "proof " + got.proof() + " — " + where);
+            assertEquals(barfit.design.Objective.CARBON, got.proof().measure(), where);
+            assertEquals(
+                    ref.total,
+                    CostModel.units(got.proof().objective()),
+                    in.beams().size() + 1.0,
+                    "carbon against brute force " + ref + " — " + where);
+            assertEquals(
+                    ref.total, CostModel.units(got.totalCarbon()), in.beams().size() + 1.0, where);
+            assertTrue(got.leastCarbon(), where);
+            checkLimits(in, got, where);
+            for (ScheduleResult.StandardisationPoint pt : got.standardisation()) {
+                Brute b = bruteForce(in, prices, pt.sizes(), 0);
+                if (b.total() == Long.MAX_VALUE) {
+                    assertTrue(Double.isNaN(pt.cost()), "K = " + pt.sizes() + " — " + where);
+                } else {
+                    assertEquals(
+                            b.total(),
+                            CostModel.units(pt.cost()),
+                            in.beams().size() + 1.0,
+                            "K = " + pt.sizes() + " — " + where);
+                }
+            }
+            proven++;
+        }
+        assertTrue(proven >= instances / 2, "enough feasible schedules: " + proven);
+    }
+
     private static void checkLimits(ScheduleInput in, ScheduleResult got, String where) {
         Set<String> sizes = new HashSet<>();
         Set<String> bars = new HashSet<>();
@@ -161,6 +219,11 @@ class RationaliseOracleTest {
 
     /** Each beam's price by enumeration: [bar-size set as a bit mask][beam][size], MAX where nothing passes. */
     static long[][][] prices(ScheduleInput in) {
+        return prices(in, COST);
+    }
+
+    /** As above, each beam priced by {@code model} (the carbon factors, for a schedule minimising carbon). */
+    static long[][][] prices(ScheduleInput in, CostModel model) {
         SearchSpace space = in.space();
         List<double[]> sizes = new ArrayList<>();
         for (double b : space.widths()) {
@@ -172,7 +235,7 @@ class RationaliseOracleTest {
         int take = in.rationalise().maxBarSizes() == null
                 ? nb
                 : Math.min(in.rationalise().maxBarSizes(), nb);
-        SpanExhaustive oracle = new SpanExhaustive(COST);
+        SpanExhaustive oracle = new SpanExhaustive(model);
         int n = in.beams().size();
         // beams with no design at all, and groups with no common size, are left out as the schedule does
         long[][][] price = new long[1 << nb][n][sizes.size()];
@@ -204,6 +267,11 @@ class RationaliseOracleTest {
 
     /** Every subset of at most k sizes and every bar-size set of min(M, all) sizes, at the enumerated prices. */
     static Brute bruteForce(ScheduleInput in, long[][][] price, int k) {
+        return bruteForce(in, price, k, CostModel.units(in.rationalise().formworkSetCost()));
+    }
+
+    /** As above, with {@code fixed} units for each size used (a set of forms; none when minimising carbon). */
+    static Brute bruteForce(ScheduleInput in, long[][][] price, int k, long fixed) {
         SearchSpace space = in.space();
         int sizeCount = space.widths().size() * space.depths().size();
         List<double[]> sizes = new ArrayList<>();
@@ -216,7 +284,6 @@ class RationaliseOracleTest {
         int take = in.rationalise().maxBarSizes() == null
                 ? nb
                 : Math.min(in.rationalise().maxBarSizes(), nb);
-        long fixed = CostModel.units(in.rationalise().formworkSetCost());
         int n = in.beams().size();
         int all = (1 << nb) - 1;
         if (Boolean.getBoolean("schedule.debug") && sizeCount > 0) {

@@ -46,9 +46,24 @@ public final class StandardisationPlot {
     /** The schedule's plot: its chosen number of sizes marked, and what the curve leaves out said in a subtitle. */
     public static String svg(ScheduleResult r) {
         var rat = r.input().rationalise();
+        UnitSystem u = r.input().settings().units();
+        if (r.leastCarbon()) {
+            // minimised for carbon: the curve is of carbon, in the user's mass unit
+            List<ScheduleResult.StandardisationPoint> carbon = r.standardisation().stream()
+                    .map(p -> new ScheduleResult.StandardisationPoint(
+                            p.sizes(), barfit.report.Carbon.mass(p.cost(), u), p.status(), p.barSizes()))
+                    .toList();
+            return svg(
+                    carbon,
+                    u,
+                    barfit.report.Carbon.unit(u),
+                    r.sizes().size(),
+                    rat == null ? null : rat.maxSectionSizes(),
+                    true);
+        }
         return svg(
                 r.standardisation(),
-                r.input().settings().units(),
+                u,
                 r.input().currency(),
                 r.sizes().size(),
                 rat == null ? null : rat.maxSectionSizes());
@@ -64,8 +79,20 @@ public final class StandardisationPlot {
             String currency,
             int chosen,
             Integer limit) {
+        return svg(points, u, currency, chosen, limit, false);
+    }
+
+    /** As above; {@code carbon}: the points are the least carbon (in {@code unit}), not the least cost. */
+    private static String svg(
+            List<ScheduleResult.StandardisationPoint> points,
+            UnitSystem u,
+            String currency,
+            int chosen,
+            Integer limit,
+            boolean carbon) {
         System.setProperty("java.awt.headless", "true");
-        XYSeries cost = new XYSeries("least total cost");
+        String measure = carbon ? "carbon" : "cost";
+        XYSeries cost = new XYSeries("least total " + measure);
         int kMin = Integer.MAX_VALUE;
         int kMax = Integer.MIN_VALUE;
         for (ScheduleResult.StandardisationPoint p : points) {
@@ -91,7 +118,8 @@ public final class StandardisationPlot {
         NumberAxis x = new NumberAxis("most section sizes allowed (K)");
         x.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
         x.setRange(kMin - 0.5, kMax + 0.5);
-        NumberAxis y = new NumberAxis("total cost of the schedule" + (currency.isEmpty() ? "" : " (" + currency + ")"));
+        NumberAxis y = new NumberAxis((carbon ? "total carbon of the beams" : "total cost of the schedule")
+                + (currency.isEmpty() ? "" : " (" + currency + ")"));
         y.setAutoRangeIncludesZero(false);
         // tick labels in a fixed locale, so the chart is the same on every machine
         y.setNumberFormatOverride(new DecimalFormat("0.##", DecimalFormatSymbols.getInstance(Locale.ROOT)));
@@ -110,7 +138,9 @@ public final class StandardisationPlot {
         plot.setDomainGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
         plot.setRangeGridlinePaint(new Color(0xdd, 0xdd, 0xdd));
         for (ScheduleResult.StandardisationPoint p : points) {
-            String text = Double.isFinite(p.cost()) ? Money.amount(p.cost()) : "none feasible";
+            String text = !Double.isFinite(p.cost())
+                    ? "none feasible"
+                    : carbon ? barfit.report.Carbon.amount(p.cost()) : Money.amount(p.cost());
             double at = Double.isFinite(p.cost()) ? round(p.cost()) : Double.NaN;
             if (!Double.isFinite(at)) {
                 continue;
@@ -123,7 +153,7 @@ public final class StandardisationPlot {
         }
         JFreeChart chart = new JFreeChart(null, new Font(Font.SANS_SERIF, Font.BOLD, 14), plot, false);
         chart.setTitle(new TextTitle(
-                "Price of standardisation: least total cost against the number of section sizes",
+                "Price of standardisation: least total " + measure + " against the number of section sizes",
                 new Font(Font.SANS_SERIF, Font.BOLD, 14)));
         List<String> notes = new java.util.ArrayList<>();
         int lastInfeasible = points.stream()

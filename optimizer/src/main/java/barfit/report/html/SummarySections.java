@@ -404,7 +404,7 @@ final class SummarySections {
                 r.input().rationalise() != null && r.input().rationalise().formworkSetCost() > 0;
         if (r.proof() != null && r.proof().status() == Proof.Status.INFEASIBLE) {
             Html.kv(out, "rationalisation", "the limits cannot be met: every beam is shown at its own optimum");
-        } else {
+        } else if (!r.leastCarbon()) { // minimised for carbon, it is weighed in carbon below
             Html.kv(
                     out,
                     "every beam at its own optimum" + (formsPerSize ? " (a set of forms per size)" : ""),
@@ -421,6 +421,17 @@ final class SummarySections {
                     out,
                     "embodied carbon, " + Carbon.STAGES,
                     Carbon.amount(Carbon.mass(r.totalCarbon(), u)) + " " + Carbon.unit(u));
+            boolean rationalised = r.proof() != null && r.proof().status() != Proof.Status.INFEASIBLE;
+            if (r.leastCarbon() && rationalised && !Double.isNaN(r.unconstrainedCarbon())) {
+                double difference = r.totalCarbon() - r.unconstrainedCarbon();
+                Html.kv(
+                        out,
+                        "every beam at its own lowest-carbon design",
+                        Carbon.amount(Carbon.mass(r.unconstrainedCarbon(), u)) + " " + Carbon.unit(u)
+                                + " (rationalising "
+                                + (difference >= 0 ? "adds " : "saves ")
+                                + Carbon.amount(Carbon.mass(Math.abs(difference), u)) + ")");
+            }
         }
         out.append("</table>\n");
         long withoutDesign = r.beams().stream().filter(b -> !b.feasible()).count();
@@ -437,23 +448,30 @@ final class SummarySections {
 
     static void standardisation(ScheduleResult r, StringBuilder out) {
         String currency = r.input().currency();
+        boolean carbon = r.leastCarbon();
+        var u = r.input().settings().units();
+        java.util.function.DoubleFunction<String> amount =
+                v -> carbon ? Carbon.amount(Carbon.mass(v, u)) : Money.amount(v);
         List<ScheduleResult.StandardisationPoint> points = new ArrayList<>(r.standardisation());
         points.sort(Comparator.comparingInt(ScheduleResult.StandardisationPoint::sizes));
         out.append(
                         "<section id=\"standardisation\">\n<h2>Price of standardisation</h2>\n<table class=\"grid\">\n<thead><tr>")
-                .append("<th>most section sizes K</th><th>total cost")
-                .append(currency.isEmpty() ? "" : " (" + Svg.esc(currency) + ")")
+                .append("<th>most section sizes K</th><th>")
+                .append(
+                        carbon
+                                ? "total carbon of the beams (" + Carbon.unit(u) + ")"
+                                : "total cost" + (currency.isEmpty() ? "" : " (" + Svg.esc(currency) + ")"))
                 .append(
                         "</th><th>saving of one more size</th><th>status</th><th>bar sizes allowed</th></tr></thead>\n<tbody>\n");
         double previous = Double.NaN;
         for (ScheduleResult.StandardisationPoint point : points) {
             String saving = Double.isFinite(previous) && Double.isFinite(point.cost())
-                    ? Money.amount(previous - point.cost())
+                    ? amount.apply(previous - point.cost())
                     : "—";
             out.append("<tr><td class=\"num\">")
                     .append(point.sizes())
                     .append("</td><td class=\"num\">")
-                    .append(Double.isFinite(point.cost()) ? Money.amount(point.cost()) : "none feasible")
+                    .append(Double.isFinite(point.cost()) ? amount.apply(point.cost()) : "none feasible")
                     .append("</td><td class=\"num\">")
                     .append(saving)
                     .append("</td><td>")
