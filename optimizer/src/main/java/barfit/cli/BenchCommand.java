@@ -163,8 +163,8 @@ final class BenchCommand implements Callable<Integer> {
             return Main.OK;
         }
         if (scheduleFrontier != null) {
-            if (scheduleFrontier < 1 || scheduleFrontier > 100_000) {
-                throw OptionError.of("--schedule-frontier", "expected 1 to 100000 beams, got " + scheduleFrontier);
+            if (scheduleFrontier < 1 || scheduleFrontier > 20_000) {
+                throw OptionError.of("--schedule-frontier", "expected 1 to 20000 beams, got " + scheduleFrontier);
             }
             int t = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
             out.println("barfit bench --schedule-frontier: an invented schedule (seed " + seed + "), " + t

@@ -82,7 +82,7 @@ final class DesignCommand implements Callable<Integer> {
             names = "--carbon-cap",
             paramLabel = "X",
             description = "the cheapest design whose embodied carbon is at most X kg CO2e per m of beam (lb CO2e per "
-                    + "ft in inch-pound files), proven; single sections only (barfit frontier for whole spans)")
+                    + "ft in inch-pound files), proven; single sections and whole spans (not lines)")
     Double carbonCap;
 
     @Option(names = "--force", description = "replace plot files that exist")
@@ -124,18 +124,14 @@ final class DesignCommand implements Callable<Integer> {
             if (!(carbonCap > 0) || Double.isInfinite(carbonCap)) {
                 throw OptionError.of("--carbon-cap", "expected a positive carbon per length, got " + carbonCap);
             }
-            List<String> whole = new ArrayList<>(beams.stream()
-                    .filter(DesignBeam::isWhole)
-                    .map(DesignBeam::id)
-                    .toList());
-            lines.forEach(l -> whole.add(l.id()));
-            if (!whole.isEmpty()) {
+            List<String> lineIds = lines.stream().map(LineInput::id).toList();
+            if (!lineIds.isEmpty()) {
                 throw OptionError.of(
                         "--carbon-cap",
-                        "applies to single sections; " + String.join(", ", whole)
-                                + (whole.size() == 1 ? " is a whole span or line" : " are whole spans or lines")
-                                + ": choose a single section with --beam, or see barfit frontier, whose designs "
-                                + "of a whole span are each the cheapest within their own carbon");
+                        "applies to single sections and whole spans; " + String.join(", ", lineIds)
+                                + (lineIds.size() == 1 ? " is a line" : " are lines")
+                                + ": choose a beam with --beam, or see barfit frontier for a line's spans in a "
+                                + "schedule");
             }
             capPerMetre = Carbon.perMetreFromUser(carbonCap, settings.units());
         }
@@ -167,8 +163,8 @@ final class DesignCommand implements Callable<Integer> {
             }
         }
         String text = format == OutputFormat.json
-                ? DesignJson.render(settings, outcomes, input.currency(), trail, objective.objective())
-                : DesignText.render(settings, outcomes, input.currency(), trail, objective.objective());
+                ? DesignJson.render(settings, outcomes, input.currency(), trail, objective.objective(), carbonCap)
+                : DesignText.render(settings, outcomes, input.currency(), trail, objective.objective(), carbonCap);
         spec.commandLine().getOut().print(text);
         spec.commandLine().getOut().flush();
         return run.feasible() ? Main.OK : Main.FAILED;

@@ -48,7 +48,7 @@ final class DesignRun {
         return run(input, beams, lines, options, alternatives, trail, objective, null);
     }
 
-    /** As above, each single section within {@code carbonCap} kg CO2e per m (null: no cap). */
+    /** As above, each single section and whole span within {@code carbonCap} kg CO2e per m (null: no cap). */
     static Result run(
             DesignInput input,
             List<DesignBeam> beams,
@@ -66,7 +66,7 @@ final class DesignRun {
         for (DesignBeam b : beams) {
             outcomes.add(
                     b.isWhole()
-                            ? DesignItem.of(spans.design(DesignCommand.span(input, b), alternatives))
+                            ? DesignItem.of(spans.design(DesignCommand.span(input, b), alternatives, carbonCap))
                             : DesignItem.of(designer.design(DesignCommand.problem(input, b), alternatives, carbonCap)));
         }
         LineSpans byLine =

@@ -28,6 +28,17 @@ public final class DesignJson {
     /** As above, for designs that minimised {@code objective} (named in the JSON when it is carbon). */
     public static String render(
             Settings settings, List<DesignItem> outcomes, String currency, boolean trail, Objective objective) {
+        return render(settings, outcomes, currency, trail, objective, null);
+    }
+
+    /** As above, each design within {@code carbonCap} (the user's carbon per length; named when given). */
+    public static String render(
+            Settings settings,
+            List<DesignItem> outcomes,
+            String currency,
+            boolean trail,
+            Objective objective,
+            Double carbonCap) {
         UnitSystem u = settings.units();
         ObjectNode root = Json.object();
         root.put("units", u.name());
@@ -42,6 +53,9 @@ public final class DesignJson {
                         + Money.perLengthLabel(u));
         if (objective == Objective.CARBON) {
             root.put("objective", "carbon");
+        }
+        if (carbonCap != null) {
+            root.put("carbon_cap", carbonCap);
         }
         ArrayNode arr = root.putArray("beams");
         for (DesignItem o : outcomes) {

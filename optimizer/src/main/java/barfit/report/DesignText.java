@@ -33,6 +33,17 @@ public final class DesignText {
     /** As above, for designs that minimised {@code objective}. */
     public static String render(
             Settings settings, List<DesignItem> outcomes, String currency, boolean trail, Objective objective) {
+        return render(settings, outcomes, currency, trail, objective, null);
+    }
+
+    /** As above, each design within {@code carbonCap} (the user's carbon per length, as --carbon-cap gave it). */
+    public static String render(
+            Settings settings,
+            List<DesignItem> outcomes,
+            String currency,
+            boolean trail,
+            Objective objective,
+            Double carbonCap) {
         UnitSystem u = settings.units();
         StringBuilder out = new StringBuilder();
         out.append("barfit design — ")
@@ -45,6 +56,13 @@ public final class DesignText {
                 .append("compare them with your own before relying on a price.\n")
                 .append(CARBON_NOTE)
                 .append('\n');
+        if (carbonCap != null) {
+            out.append("Carbon cap (--carbon-cap): at most ")
+                    .append(Carbon.amount(carbonCap))
+                    .append(' ')
+                    .append(Carbon.perLengthUnit(u))
+                    .append(" of beam, held in the CP-SAT model: each design is the best within it, proven.\n");
+        }
         if (objective == Objective.CARBON) {
             out.append(Carbon.OBJECTIVE_NOTE).append('\n');
         }

@@ -141,6 +141,12 @@ public final class DiagnosisWords {
                     + "no layout within the limits carries "
                     + "the factored moments with every flexure, ductility, minimum steel, spacing and detailing check met";
         }
+        if (cause instanceof SpanDesigner.Diagnosis.CarbonCapFails c) {
+            return "designs pass, but none within the carbon cap of " + Carbon.amount(Carbon.mass(c.cap(), u)) + " "
+                    + Carbon.unit(u) + " over the span: the least carbon of any passing design is "
+                    + Carbon.amount(Carbon.mass(c.least(), u)) + " " + Carbon.unit(u) + " (at " + say(u, c.width())
+                    + " × " + say(u, c.height()) + ")";
+        }
         if (cause instanceof SpanDesigner.Diagnosis.TimeLimit c) {
             return "the time limit (" + c.seconds()
                     + " s) ended the search before a design passing every check was found";
@@ -184,6 +190,12 @@ public final class DiagnosisWords {
     }
 
     public static List<String> fixes(SpanDesigner.Diagnosis d, UnitSystem u) {
+        if (d.cause() instanceof SpanDesigner.Diagnosis.CarbonCapFails c) {
+            // per length, as the option takes it, rounded up so that the cap it names admits the leanest design
+            double least = Math.ceil(Carbon.perLength(c.least() / (c.span() / 1000.0), u) * 10) / 10;
+            return List.of("--carbon-cap " + Carbon.amount(least) + " or more (the least carbon of any passing "
+                    + "design, per length of span)");
+        }
         if (d.cause() instanceof SpanDesigner.Diagnosis.TimeLimit) {
             return List.of("raise --time-limit");
         }

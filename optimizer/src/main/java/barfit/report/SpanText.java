@@ -87,7 +87,10 @@ public final class SpanText {
                         .append('\n');
                 return;
             }
-            out.append("  no layout in the search space passes.\n");
+            out.append(
+                    d.cause() instanceof SpanDesigner.Diagnosis.CarbonCapFails
+                            ? "  no layout within the carbon cap passes.\n"
+                            : "  no layout in the search space passes.\n");
             out.append("  binding limit: ")
                     .append(d.limit())
                     .append(" — ")

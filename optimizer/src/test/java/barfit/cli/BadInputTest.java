@@ -79,9 +79,9 @@ class BadInputTest {
                 Arguments.of(List.of("sweep", STUDY, "--csv", "--format", "json"), "--csv:", "expected one of them"),
                 Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"),
                 Arguments.of(
-                        List.of("design", "../examples/design/clinic-line-c-spans-si.yaml", "--carbon-cap", "100"),
+                        List.of("design", "../examples/lines/ashgrove-depot-lines-si.yaml", "--carbon-cap", "100"),
                         "--carbon-cap:",
-                        "applies to single sections; C1-C2"),
+                        "applies to single sections and whole spans; L1-B"),
                 Arguments.of(
                         List.of("frontier", "../examples/schedule/office-us.yaml", "--schedule"),
                         "../examples/schedule/office-us.yaml:",

@@ -66,6 +66,37 @@ class CarbonCommandsTest {
     }
 
     /**
+     * A whole span's frontier points are what {@code design --carbon-cap} gives at their carbon (per metre of
+     * span, rounded up by half a printed unit), and a cap below the lowest-carbon end is refused with the cap
+     * that would do.
+     */
+    @Test
+    void aSpansFrontierPointsAreTheCheapestWithinTheirCarbon() throws IOException {
+        String gallery = "../examples/design/hollins-hall-gallery-carbon-si.yaml";
+        Cli frontier = Cli.run("frontier", gallery, "--beam", "G4-B", "--format", "json");
+        assertEquals(0, frontier.exit(), frontier.err());
+        JsonNode points = JSON.readTree(frontier.out()).get("beams").get(0).get("points");
+        assertTrue(points.size() >= 3, "a frontier of several designs");
+        double span = 7.2; // m, G4-B in the file
+        for (int k : new int[] {1, points.size() - 1}) {
+            JsonNode pt = points.get(k);
+            double cap = (pt.get("carbon").asDouble() + 0.05) / span;
+            Cli design = Cli.run(
+                    "design", gallery, "--beam", "G4-B", "--carbon-cap", String.valueOf(cap), "--format", "json");
+            assertEquals(0, design.exit(), design.err());
+            JsonNode b = JSON.readTree(design.out()).get("beams").get(0);
+            assertEquals(pt.get("cost").asDouble(), b.get("cost").get("total").asDouble(), 1e-3, "point " + k);
+            assertEquals(
+                    pt.get("carbon").asDouble(), b.get("carbon").get("total").asDouble(), 0.05, "point " + k);
+        }
+        double least = points.get(points.size() - 1).get("carbon").asDouble() / span;
+        Cli below = Cli.run("design", gallery, "--beam", "G4-B", "--carbon-cap", String.valueOf(least - 1));
+        assertEquals(1, below.exit(), below.err());
+        assertTrue(below.out().contains("carbon_cap"), below.out());
+        assertTrue(below.out().contains("--carbon-cap 93.6 or more"), below.out());
+    }
+
+    /**
      * {@code compare} and {@code sweep} with {@code --objective carbon} design as {@code design --objective
      * carbon} does: the option at the cap and the sweep's design are its design, each sweep point is the least
      * carbon within its cap (so it never rises as the cap is lifted), and the same command for cost is never

@@ -216,6 +216,7 @@ final class OptionGenerator {
                         // than all the stirrups could
                         if (!f.deflection()
                                 && !p.hasTorsion()
+                                && !ctx.keepDominated()
                                 && !Double.isNaN(firstStirrups)
                                 && ctx.barCost(bottom, n + 1 - fewest, p.span()) >= bounds.stirrupCeiling()) {
                             break;
@@ -226,6 +227,7 @@ final class OptionGenerator {
                         // no dearer and asks no more legs of the supports is as good in every combination
                         if (!f.deflection()
                                 && !p.bottomCoupled()
+                                && !ctx.keepDominated()
                                 && dominated(
                                         cheapestByLegs,
                                         p.legsFor((n + layers) / layers),

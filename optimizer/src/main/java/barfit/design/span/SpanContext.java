@@ -33,6 +33,11 @@ final class SpanContext {
     private final Map<SpanProblem.Place, List<Integer>> zonesAt = new EnumMap<>(SpanProblem.Place.class);
     /** Each bar size's place in the space's list, found once per size object. */
     private final Map<BarSize, Integer> barIndex = new IdentityHashMap<>();
+    /**
+     * Whether the mid-span options keep the ones another option beats on this model's price (a search under a
+     * cap in another measure, whose prices weigh bars and stirrups otherwise, may need them).
+     */
+    private boolean keepDominated;
 
     SpanContext(SpanProblem problem, CostModel cost) {
         this.p = problem;
@@ -109,6 +114,15 @@ final class SpanContext {
             barIndex.put(bar, i);
         }
         return i;
+    }
+
+    /** Keep the options another beats on price: see {@link #keepDominated()}. */
+    void keepDominated(boolean keep) {
+        this.keepDominated = keep;
+    }
+
+    boolean keepDominated() {
+        return keepDominated;
     }
 
     /** {@code count} main bars each {@code length} mm long. */

@@ -114,6 +114,13 @@ public final class SpanDesigner {
 
         /** The time limit ({@code seconds} per solve) ended the search before a design passing every check was found. */
         public record TimeLimit(double seconds) implements Cause {}
+
+        /**
+         * Designs pass, but none within the carbon cap ({@code cap}, kg CO2e over the span of {@code span} mm):
+         * {@code least} is the least carbon of any passing design, at {@code width} x {@code height}.
+         */
+        public record CarbonCapFails(double cap, double least, double width, double height, double span)
+                implements Cause {}
     }
 
     /** A size at which the span designs, with the cheapest layout found there (it passes SpanVerifier). */
@@ -162,6 +169,130 @@ public final class SpanDesigner {
             o = design(p, alternatives, margins[i], ceiling);
         }
         return o;
+    }
+
+    /**
+     * The cheapest design (the least of this designer's measure) whose embodied carbon over the span is at most
+     * {@code carbonCap} kg CO2e per metre of span, with up to {@code alternatives} more; without a cap, {@link
+     * #design(SpanProblem, int)}. The generator keeps every passing option (none is left out for another that
+     * is cheaper but may weigh more in carbon), and the CP-SAT model holds the cap as a constraint, its carbon
+     * priced part by part ({@link SpanPrices}): the proof covers the cap. When designs pass but none within the
+     * cap, the diagnosis gives the least carbon of any.
+     */
+    public Outcome design(SpanProblem p, int alternatives, Double carbonCap) {
+        if (carbonCap == null) {
+            return design(p, alternatives);
+        }
+        CostModel carbon = cost.carbon();
+        if (carbon == null) {
+            throw new IllegalStateException("a carbon cap needs the carbon factors beside the cost model");
+        }
+        double capOverSpan = carbonCap * p.span() / 1000.0;
+        SpanGenerator gen = new SpanGenerator(p, cost).keepingDominated();
+        SpanGenerator.Output out = gen.optionsUnder(Double.POSITIVE_INFINITY);
+        if (out.sets().isEmpty()) {
+            var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(out.stats(), 0, 0), options)
+                    .measuring(cost.objective());
+            return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), new SpanDiagnoser(cost).diagnose(p));
+        }
+        SpanSelection sel = new SpanSelection(p, out.sets());
+        long capUnits = CostModel.SPAN_UNITS.units(capOverSpan);
+        sel.atMost(new SpanPrices(p, carbon), capUnits);
+        int solves = 0;
+        int cuts = 0;
+        SpanSelection.Result first = null;
+        Design best = null;
+        List<Design> alts = new ArrayList<>();
+        while (best == null || alts.size() < alternatives) {
+            solves++;
+            SpanSelection.Result r = sel.solve(options);
+            if (r.choice() == null) {
+                if (best == null) {
+                    first = r;
+                }
+                break;
+            }
+            SpanSelection.Choice c = r.choice();
+            SpanLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
+            SpanReport report = SpanVerifier.verify(p, layout, true);
+            if (!report.ok()) {
+                if (report.okApartFromDeflection()) {
+                    sel.cutDeflection(c, gen.sections());
+                    cuts++;
+                    continue;
+                }
+                throw new IllegalStateException("re-verification failed for beam " + p.id()
+                        + " under a carbon cap; this is a bug in the search");
+            }
+            Design d = design(p, layout, report);
+            // the model's carbon, part by part, is the layout's: a cap it holds is a cap the design meets
+            if (CostModel.SPAN_UNITS.units(d.carbon().total()) > capUnits + 10) {
+                throw new IllegalStateException(
+                        "beam " + p.id() + ": the design's carbon " + d.carbon().total() + " exceeds the cap "
+                                + capOverSpan + " the search held; this is a bug in the search");
+            }
+            if (best == null) {
+                best = d;
+                first = r;
+            } else {
+                alts.add(d);
+            }
+            sel.exclude(c);
+        }
+        Search search = new Search(out.stats(), solves, cuts);
+        if (best == null) {
+            Proof.Status status = first != null && first.status() == Proof.Status.INFEASIBLE
+                    ? Proof.Status.INFEASIBLE
+                    : Proof.Status.OUT_OF_TIME;
+            var proof = Proof.none(status, search, options).measuring(cost.objective());
+            Diagnosis why = status == Proof.Status.OUT_OF_TIME
+                    ? new Diagnosis("time limit", new Diagnosis.TimeLimit(options.timeLimitSeconds()))
+                    : capDiagnosis(p, capOverSpan);
+            return new Outcome(
+                    p,
+                    status == Proof.Status.INFEASIBLE ? "infeasible" : "unknown",
+                    null,
+                    List.of(),
+                    proof,
+                    List.of(),
+                    why);
+        }
+        var proof = Proof.solved(
+                        first.status(),
+                        first.objective(),
+                        first.bound(),
+                        CostModel.SPAN_UNITS,
+                        first.stats(),
+                        search,
+                        options)
+                .measuring(cost.objective());
+        return new Outcome(
+                p,
+                first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible",
+                best,
+                alts,
+                proof,
+                binding(p, best),
+                null);
+    }
+
+    /** Why nothing is within the cap: the span's own diagnosis when nothing passes, else the least carbon of any. */
+    private Diagnosis capDiagnosis(SpanProblem p, double capOverSpan) {
+        Outcome leanest = new SpanDesigner(cost.minimising(Objective.CARBON), options).design(p, 0);
+        if (!leanest.feasible()) {
+            return leanest.diagnosis() != null ? leanest.diagnosis() : new SpanDiagnoser(cost).diagnose(p);
+        }
+        SpanLayout l = leanest.best().layout();
+        return new Diagnosis(
+                "carbon_cap",
+                "",
+                new Diagnosis.CarbonCapFails(
+                        capOverSpan, leanest.best().carbon().total(), l.width(), l.height(), p.span()),
+                List.of(),
+                null,
+                null,
+                p.maxDepth(),
+                p.fixedWidth());
     }
 
     /**

@@ -106,6 +106,16 @@ public final class SpanGenerator {
         return ctx;
     }
 
+    /**
+     * Makes this generator keep every passing option, even one another beats on this model's price: for a
+     * search capped in another measure ({@code --carbon-cap}), with {@link #optionsUnder} at no limit. Only
+     * the price comparisons between options are given up; every check and every measure-free rule stays.
+     */
+    public SpanGenerator keepingDominated() {
+        ctx.keepDominated(true);
+        return this;
+    }
+
     Combinations combinations() {
         return combinations;
     }

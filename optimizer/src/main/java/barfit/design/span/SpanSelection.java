@@ -39,6 +39,10 @@ public final class SpanSelection {
     private final List<List<Literal>> rightVars = new ArrayList<>();
     private final List<Literal> all = new ArrayList<>();
     private final List<Long> costs = new ArrayList<>();
+    /** What each boolean of {@link #all} chooses (a frame, top, mid-span or support option) and in which frame. */
+    private final List<Object> chosen = new ArrayList<>();
+
+    private final List<SpanFrame> chosenIn = new ArrayList<>();
     private int booleans;
     /** Each option's stiffness for the deflection cuts, computed once (options are compared by identity). */
     private final Map<Object, double[]> stiffness = new java.util.IdentityHashMap<>();
@@ -52,10 +56,12 @@ public final class SpanSelection {
         build();
     }
 
-    private Literal bool(String name, double cost) {
+    private Literal bool(String name, double cost, Object what, SpanFrame in) {
         Literal v = model.newBoolVar(name);
         all.add(v);
         costs.add(CostModel.SPAN_UNITS.units(cost));
+        chosen.add(what);
+        chosenIn.add(in);
         booleans++;
         return v;
     }
@@ -67,12 +73,12 @@ public final class SpanSelection {
         }
         for (int fi = 0; fi < sets.size(); fi++) {
             FrameOptions fs = sets.get(fi);
-            Literal y = bool("frame" + fi, fs.frame().cost());
+            Literal y = bool("frame" + fi, fs.frame().cost(), fs.frame(), fs.frame());
             frameVars.add(y);
             List<TopOption> tops = fs.tops();
             List<Literal> topVars = new ArrayList<>();
             for (int i = 0; i < tops.size(); i++) {
-                Literal x = bool("f" + fi + "_top" + i, tops.get(i).cost());
+                Literal x = bool("f" + fi + "_top" + i, tops.get(i).cost(), tops.get(i), fs.frame());
                 topVars.add(x);
                 model.addImplication(x, sizeUsed.get(tops.get(i).bar().designation()));
             }
@@ -80,7 +86,7 @@ public final class SpanSelection {
             List<Literal> midLiterals = new ArrayList<>();
             for (int i = 0; i < fs.mids().size(); i++) {
                 MidOption m = fs.mids().get(i);
-                Literal x = bool("f" + fi + "_mid" + i, m.cost());
+                Literal x = bool("f" + fi + "_mid" + i, m.cost(), m, fs.frame());
                 midLiterals.add(x);
                 model.addImplication(x, sizeUsed.get(m.bar().designation()));
             }
@@ -117,7 +123,7 @@ public final class SpanSelection {
             return supportLiterals;
         }
         for (int i = 0; i < opts.size(); i++) {
-            supportLiterals.add(bool("f" + fi + "_" + side + i, opts.get(i).cost()));
+            supportLiterals.add(bool("f" + fi + "_" + side + i, opts.get(i).cost(), opts.get(i), fs.frame()));
         }
         List<TopOption> tops = fs.tops();
         // same top size at the support as over the span
@@ -266,6 +272,43 @@ public final class SpanSelection {
             }
         }
         return true;
+    }
+
+    /**
+     * Holds the span's price in another measure ({@code prices}: carbon, say) to at most {@code cap} in
+     * {@link CostModel#SPAN_UNITS}: every boolean weighted by the price of what it chooses.
+     */
+    void atMost(SpanPrices prices, long cap) {
+        long[] w = new long[all.size()];
+        for (int i = 0; i < w.length; i++) {
+            w[i] = CostModel.SPAN_UNITS.units(price(prices, chosen.get(i), chosenIn.get(i)));
+        }
+        model.addLessOrEqual(LinearExpr.weightedSum(all.toArray(new Literal[0]), w), cap);
+    }
+
+    /** The price in {@code prices} of one of the model's choices. */
+    static double price(SpanPrices prices, Object what, SpanFrame in) {
+        if (what instanceof SpanFrame f) {
+            return prices.frame(f);
+        }
+        if (what instanceof TopOption t) {
+            return prices.top(in, t);
+        }
+        if (what instanceof MidOption m) {
+            return prices.mid(in, m);
+        }
+        return prices.support(in, (SupportOption) what);
+    }
+
+    /** Every choice of the model with its cost as the model holds it, for the cross-check of {@link SpanPrices}. */
+    List<double[]> pricedChoices(SpanPrices prices) {
+        List<double[]> out = new ArrayList<>();
+        for (int i = 0; i < all.size(); i++) {
+            out.add(new double[] {
+                CostModel.SPAN_UNITS.currency(costs.get(i)), price(prices, chosen.get(i), chosenIn.get(i))
+            });
+        }
+        return out;
     }
 
     /** Forbids a frame with given bar sizes (for the next distinct alternatives). */
