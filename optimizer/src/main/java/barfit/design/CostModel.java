@@ -5,6 +5,7 @@ import barfit.section.CodeEquations;
 import barfit.section.Flange;
 import barfit.section.StirrupHooks;
 import barfit.section.Stirrups;
+import java.util.List;
 
 /**
  * The cost of a beam per metre of its length, from the user's rates. Concrete and formwork count the
@@ -235,9 +236,27 @@ public final class CostModel {
 
     /** Stirrups, per metre of beam. */
     public double stirrups(double b, double h, Stirrups s) {
-        double setsPerMetre = 1000.0 / s.spacing();
-        double kgPerSet =
-                stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0 * s.bar().massPerMetre();
+        return stirrupsPerMetre(
+                stirrupSetLength(b, h, s.bar(), s.legs()) / 1000.0 * s.bar().massPerMetre(), s.spacing());
+    }
+
+    /**
+     * The least of {@link #stirrups} over every legs count and spacing given: a search's bound on a frame's
+     * stirrups. Each set's mass is worked out once per legs count; the prices are the same numbers.
+     */
+    public double cheapestStirrups(double b, double h, BarSize bar, List<Integer> legs, List<Double> spacings) {
+        double least = Double.POSITIVE_INFINITY;
+        for (int n : legs) {
+            double kgPerSet = stirrupSetLength(b, h, bar, n) / 1000.0 * bar.massPerMetre();
+            for (double spacing : spacings) {
+                least = Math.min(least, stirrupsPerMetre(kgPerSet, spacing));
+            }
+        }
+        return least;
+    }
+
+    private double stirrupsPerMetre(double kgPerSet, double spacing) {
+        double setsPerMetre = 1000.0 / spacing;
         return rates.stirrupsPerKg() * kgPerSet * setsPerMetre;
     }
 

@@ -73,8 +73,21 @@ public final class SectionGenerator {
     private final List<BarSize> compressionSizes;
     private final BarSize smallestTension;
 
+    /**
+     * What is kept apart: a width, a height and a tension bar size (the stirrup bar that frames the section
+     * is not part of it). A record, not a string, so that a lookup formats no number.
+     */
+    private record Key(double b, double h, String tensionBar) {}
+
+    /** The stirrups cached per frame: asked again for the same bars, legs and spacing limit. */
+    private record StirrupKey(
+            String tensionBar, List<Integer> counts, int minLegs, int maxLegs, double maxSpacing, String torsionBars) {}
+
+    /** The frame checks cached per frame: the stand-in section hangs on these alone. */
+    private record FrameCheckKey(String tensionBar, String compressionBar, int layers) {}
+
     /** Best candidate per distinct key, in discovery order. */
-    private final Map<String, Candidate> best = new LinkedHashMap<>();
+    private final Map<Key, Candidate> best = new LinkedHashMap<>();
 
     private int keep;
     /**
@@ -272,12 +285,8 @@ public final class SectionGenerator {
                                             torsion.alRequired(),
                                             2 * compressionSizes.get(0).area()),
                             minPair);
-            double cheapestStirrups = Double.POSITIVE_INFINITY;
-            for (int legs : p.space().stirrupLegs()) {
-                for (double spacing : p.space().stirrupSpacings()) {
-                    cheapestStirrups = Math.min(cheapestStirrups, cost.stirrups(b, h, new Stirrups(ds, legs, spacing)));
-                }
-            }
+            double cheapestStirrups = cost.cheapestStirrups(
+                    b, h, ds, p.space().stirrupLegs(), p.space().stirrupSpacings());
             // a frame too small for the torsion, or whose bars cannot be spaced round the hoop, has no layout
             double lb = torsion.blocking() != null
                     ? Double.POSITIVE_INFINITY
@@ -357,8 +366,8 @@ public final class SectionGenerator {
         probe.frame(shape, bending, p.span());
         search.frame(f.det());
         boolean anyFramePass = false;
-        Map<String, Stirrups> stirrupCache = new HashMap<>();
-        Map<String, Boolean> frameCheckCache = new HashMap<>();
+        Map<StirrupKey, Stirrups> stirrupCache = new HashMap<>();
+        Map<FrameCheckKey, Boolean> frameCheckCache = new HashMap<>();
         double base = f.frameCost().total() + f.skinCost();
         double stirLb = f.stirrupLb(this);
         // compression options in order of cost: the cheapest (the lightest pair of hangers) first
@@ -394,7 +403,7 @@ public final class SectionGenerator {
             if (nmax < first) {
                 continue;
             }
-            String key = f.b() + "x" + f.h() + "/" + t.designation();
+            Key key = new Key(f.b(), f.h(), t.designation());
             int nArea = (int) Math.ceil(f.tensionAreaLb() / t.area() - 1e-9);
             for (int layers = 1; layers <= p.space().maxLayers(); layers++) {
                 int nLow = first + 2 * (layers - 1);
@@ -415,7 +424,7 @@ public final class SectionGenerator {
                     if (!SectionLayout.fitsHeight(f.h(), f.det(), t, layers, c)) {
                         continue;
                     }
-                    String fcKey = t.designation() + "/" + c.designation() + "/" + layers;
+                    FrameCheckKey fcKey = new FrameCheckKey(t.designation(), c.designation(), layers);
                     Boolean fcPass = frameCheckCache.get(fcKey);
                     if (fcPass == null) {
                         fcPass = framePasses(f, shape, t, layers, c);
@@ -459,7 +468,7 @@ public final class SectionGenerator {
     }
 
     /** Nothing costing this much or more can be among the answers for this key. */
-    private double cut(String key) {
+    private double cut(Key key) {
         Candidate kb = best.get(key);
         return Math.min(
                 bound(), kb == null ? Double.POSITIVE_INFINITY : kb.cost().total());
@@ -474,7 +483,7 @@ public final class SectionGenerator {
     private boolean scanUpward(
             Frame f,
             SectionShape shape,
-            String key,
+            Key key,
             BarSize t,
             int nmax,
             int ncr,
@@ -483,7 +492,7 @@ public final class SectionGenerator {
             int m,
             double fixed,
             double stirLb,
-            Map<String, Stirrups> cache) {
+            Map<StirrupKey, Stirrups> cache) {
         int layers = counts.length;
         int first = Math.max(2, ncr);
         int[] split = counts;
@@ -569,12 +578,12 @@ public final class SectionGenerator {
     private void offer(
             Frame f,
             SectionShape shape,
-            String key,
+            Key key,
             BarSize t,
             int[] split,
             BarSize c,
             int m,
-            Map<String, Stirrups> cache) {
+            Map<StirrupKey, Stirrups> cache) {
         // the ties 9.7.6.4 asks round compression steel relied on, judged on these bars by the section model
         SectionLayout bars = new SectionLayout(
                 f.b(),
@@ -621,12 +630,12 @@ public final class SectionGenerator {
      */
     private void offerUnderTorsion(
             Frame f,
-            String key,
+            Key key,
             SectionLayout bars,
             int minLegs,
             int maxLegs,
             double maxSpacing,
-            Map<String, Stirrups> cache) {
+            Map<StirrupKey, Stirrups> cache) {
         int[] split = bars.tensionCounts().stream().mapToInt(Integer::intValue).toArray();
         double barCost = f.frameCost().total()
                 + cost.bars(bars.tensionBar(), bars.tensionBarCount())
@@ -689,10 +698,15 @@ public final class SectionGenerator {
             int maxLegs,
             double maxSpacing,
             StirrupChooser.Torsion need,
-            Map<String, Stirrups> cache) {
-        String key = t.designation() + Arrays.toString(counts) + "/" + minLegs + "/" + maxLegs + "/" + maxSpacing
+            Map<StirrupKey, Stirrups> cache) {
+        StirrupKey key = new StirrupKey(
+                t.designation(),
+                TensionSearch.toList(counts),
+                minLegs,
+                maxLegs,
+                maxSpacing,
                 // under torsion the bar size of 9.7.5.2 hangs on the smallest corner or skin bar
-                + (need == null ? "" : "/" + smallestBars(need));
+                need == null ? "" : smallestBars(need));
         if (cache.containsKey(key)) {
             return cache.get(key);
         }
