@@ -43,8 +43,7 @@ public final class FrontierPlot {
         data.addSeries(ends);
         NumberAxis x = new NumberAxis("embodied carbon, " + r.carbonBasis(u) + " (" + Carbon.STAGES + ")");
         x.setAutoRangeIncludesZero(false);
-        NumberAxis y = new NumberAxis("cost " + (r.overSpan() ? "for the span" : Money.perLengthLabel(u))
-                + (currency.isEmpty() ? "" : " (" + currency + ")"));
+        NumberAxis y = new NumberAxis("cost " + r.costBasis(u) + (currency.isEmpty() ? "" : " (" + currency + ")"));
         y.setAutoRangeIncludesZero(false);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
         renderer.setSeriesPaint(0, FRONTIER);
