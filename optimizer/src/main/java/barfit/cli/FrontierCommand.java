@@ -62,7 +62,7 @@ final class FrontierCommand implements Callable<Integer> {
 
     @Option(
             names = "--schedule",
-            description = "FILE is a schedule (as barfit schedule reads it, without rationalise:): the total cost "
+            description = "FILE is a schedule (as barfit schedule reads it): the total cost "
                     + "and carbon of its cost-optimal and carbon-optimal schedules and of schedules between them")
     boolean schedule;
 
@@ -164,13 +164,6 @@ final class FrontierCommand implements Callable<Integer> {
         if (plot != null) {
             SweepCommand.checkPlotFile(plot, force);
         }
-        var first = ScheduleInputReader.read(file, beamsCsv, options, nThreads);
-        if (first.rationalise() != null) {
-            throw new InputError(
-                    Location.ofFile(file.toString()),
-                    "has a rationalise: block; a schedule's frontier is of beams each at its own optimum: expected "
-                            + "the file without rationalise:");
-        }
         ScheduleFrontier.Result r = ScheduleFrontier.of(
                 pricing -> ScheduleInputReader.read(file, beamsCsv, options, nThreads, pricing),
                 options,
@@ -181,7 +174,9 @@ final class FrontierCommand implements Callable<Integer> {
             Files.writeString(
                     plot,
                     FrontierPlot.svg(
-                            ScheduleFrontierReport.entry(r), first.settings().units(), first.currency()),
+                            ScheduleFrontierReport.entry(r),
+                            r.first().input().settings().units(),
+                            r.first().input().currency()),
                     StandardCharsets.UTF_8);
         }
         String text =

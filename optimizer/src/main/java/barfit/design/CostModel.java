@@ -67,6 +67,8 @@ public final class CostModel {
     private final CostModel carbon;
     /** Whether {@link #rates} are a weighted sum of the money's and the carbon's ({@link #blend}). */
     private final boolean blended;
+    /** The weight of money in this model's prices: 1 for cost, 0 for carbon, the blend's share in a blend. */
+    private final double moneyShare;
 
     /** @param code the edition the input is in: it sets the least hook extension (75 mm or 3 in) */
     public CostModel(CostRates rates, double cover, CodeEquations code) {
@@ -77,14 +79,21 @@ public final class CostModel {
         this.money = null;
         this.carbon = null;
         this.blended = false;
+        this.moneyShare = 1;
     }
 
     private CostModel(CostRates rates, CostModel base, Objective objective, CostModel money, CostModel carbon) {
-        this(rates, base, objective, money, carbon, false);
+        this(rates, base, objective, money, carbon, false, objective == Objective.CARBON ? 0 : 1);
     }
 
     private CostModel(
-            CostRates rates, CostModel base, Objective objective, CostModel money, CostModel carbon, boolean blended) {
+            CostRates rates,
+            CostModel base,
+            Objective objective,
+            CostModel money,
+            CostModel carbon,
+            boolean blended,
+            double moneyShare) {
         this.rates = rates;
         this.cover = base.cover;
         this.code = base.code;
@@ -92,6 +101,7 @@ public final class CostModel {
         this.money = money;
         this.carbon = carbon;
         this.blended = blended;
+        this.moneyShare = moneyShare;
     }
 
     /** This model with the carbon factors beside its rates, so that every design also reports its carbon. */
@@ -149,7 +159,15 @@ public final class CostModel {
                 a * m.rates.formworkPerM2() + k * c.rates.formworkPerM2(),
                 a * m.rates.depthPremiumPerM() + k * c.rates.depthPremiumPerM(),
                 m.rates.lapFactor());
-        return new CostModel(r, this, Objective.COST, m, c, true);
+        return new CostModel(r, this, Objective.COST, m, c, true, a);
+    }
+
+    /**
+     * The weight of money in this model's prices: 1 pricing cost, 0 pricing carbon, a blend's share of cost.
+     * A price paid in money alone (a set of forms) enters a search with this weight.
+     */
+    public double moneyShare() {
+        return moneyShare;
     }
 
     /** What this model's prices are: cost (currency) or carbon (kg CO2e). */

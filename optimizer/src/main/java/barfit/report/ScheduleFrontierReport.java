@@ -19,7 +19,8 @@ public final class ScheduleFrontierReport {
     static final String METHOD = "the two ends are the schedules of schedule --objective cost and --objective "
             + "carbon; each schedule between them minimises cost + p × carbon for a price of carbon p (the "
             + "weighted-sum method, p from the line through two neighbouring schedules, Aneja and Nair's "
-            + "dichotomic search), every beam at its own proven optimum for that sum, so each is the cheapest "
+            + "dichotomic search), proven for that sum (every beam at its own optimum; with a rationalise: "
+            + "block, the rationalised schedule, a set of forms counted as money), so each is the cheapest "
             + "schedule within its own total carbon; schedules in a concave stretch between two points, optimal "
             + "at no price, are not listed";
 

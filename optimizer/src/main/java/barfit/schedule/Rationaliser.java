@@ -49,12 +49,17 @@ final class Rationaliser {
             Parallel pool,
             Progress progress) {
         this.in = in;
-        // minimising carbon, a set of forms costs money but no carbon the beams do not already count (their
-        // formwork factor per m² of contact): the number of sizes is then held by K alone
+        // a set of forms costs money but no carbon the beams do not already count (their formwork factor per
+        // m² of contact): it enters the search with money's weight in the model (none minimising carbon, when
+        // K alone holds the number of sizes; a blend's share of cost on a cost-carbon frontier)
         Rationalise given = in.rationalise();
-        this.limits = cost.objective() == barfit.design.Objective.CARBON
-                ? new Rationalise(given.maxSectionSizes(), given.maxBarSizes(), given.groupsSameSection(), 0)
-                : given;
+        this.limits = cost.moneyShare() == 1
+                ? given
+                : new Rationalise(
+                        given.maxSectionSizes(),
+                        given.maxBarSizes(),
+                        given.groupsSameSection(),
+                        given.formworkSetCost() * cost.moneyShare());
         this.own = own;
         this.designer = designer;
         this.cost = cost;

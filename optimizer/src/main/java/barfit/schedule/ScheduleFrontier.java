@@ -12,7 +12,9 @@ import java.util.function.UnaryOperator;
  * --objective cost}), of the carbon-optimal one ({@code --objective carbon}) and of a handful of schedules
  * between them, each minimising a weighted sum of cost and carbon ({@link SupportedFrontier}). Without a
  * rationalise: block the beams do not share anything, so a weighted sum of the schedule's totals is least
- * exactly when every beam minimises its own: each point is the cheapest schedule within its own total carbon.
+ * exactly when every beam minimises its own; with one, the rationalisation minimises the weighted sum over
+ * the whole schedule (a set of forms weighted as money) with its proof. Either way each point is the
+ * cheapest schedule within its own total carbon.
  */
 public final class ScheduleFrontier {
     /** Reads the schedule with its lines designed by the model the operator makes of the file's. */
@@ -42,9 +44,6 @@ public final class ScheduleFrontier {
     public static Result of(Inputs inputs, SolverOptions options, int threads, Progress progress, int most) {
         long t0 = System.nanoTime();
         ScheduleInput byCost = inputs.read(m -> m.minimising(Objective.COST));
-        if (byCost.rationalise() != null) {
-            throw new IllegalArgumentException("a schedule's frontier is of schedules without a rationalise: block");
-        }
         ScheduleResult first = solve(byCost, byCost.costModel(), options, threads, progress);
         if (!first.allFeasible()) {
             return new Result(List.of(), first, 1, true, System.nanoTime() - t0);
@@ -72,9 +71,12 @@ public final class ScheduleFrontier {
         return new ScheduleSolver(model, options, threads, progress).solve(in);
     }
 
-    /** A schedule's total cost in {@link CostModel#UNITS}: the sum of its beams' own, each rounded as they are. */
+    /**
+     * A schedule's total cost in {@link CostModel#UNITS}: the sum of its beams' own, each rounded as they are,
+     * and its sets of forms.
+     */
     public static long costUnits(ScheduleResult r) {
-        long sum = 0;
+        long sum = CostModel.units(r.formworkSetsCost());
         for (ScheduleResult.Beam b : r.beams()) {
             sum += CostModel.units(b.outcome().best().cost().total());
         }

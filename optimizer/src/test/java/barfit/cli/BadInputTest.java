@@ -82,10 +82,6 @@ class BadInputTest {
                         List.of("design", "../examples/lines/ashgrove-depot-lines-si.yaml", "--carbon-cap", "100"),
                         "--carbon-cap:",
                         "applies to single sections and whole spans; L1-B"),
-                Arguments.of(
-                        List.of("frontier", "../examples/schedule/office-us.yaml", "--schedule"),
-                        "../examples/schedule/office-us.yaml:",
-                        "has a rationalise: block"),
                 Arguments.of(List.of("frontier", STUDY, "--beams", "x.csv"), "--beams:", "expected --schedule with it"),
                 Arguments.of(
                         List.of("frontier", STUDY, "--schedule", "--points", "21"), "--points:", "expected 0 to 20"),

@@ -180,6 +180,25 @@ class CarbonCommandsTest {
                 ratCarbon.get("proof").get("objective").asDouble(),
                 0.05);
         assertTrue(ratCarbon.get("standardisation").get(0).has("total_carbon"));
+        // the frontier of the rationalised schedule: its ends are those two schedules, sets of forms and all
+        Cli frontier = Cli.run(
+                "frontier", "../examples/schedule/office-us.yaml", "--schedule", "--format", "json", "--points", "2");
+        assertEquals(0, frontier.exit(), frontier.err());
+        JsonNode points = JSON.readTree(frontier.out()).get("points");
+        JsonNode cheapest = points.get(0);
+        JsonNode leanest = points.get(points.size() - 1);
+        assertEquals(
+                ratCost.get("summary").get("total_cost").asDouble(),
+                cheapest.get("cost").asDouble(),
+                0.01);
+        assertEquals(
+                ratCarbon.get("summary").get("total_cost").asDouble(),
+                leanest.get("cost").asDouble(),
+                0.01);
+        assertEquals(
+                ratCarbon.get("summary").get("total_carbon").asDouble(),
+                leanest.get("carbon").asDouble(),
+                0.05);
     }
 
     private static String run(Path file, String objective) {

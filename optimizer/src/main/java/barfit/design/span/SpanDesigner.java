@@ -30,9 +30,14 @@ public final class SpanDesigner {
             this(layout, cost, report, bars, null);
         }
 
-        /** What a search pricing with {@code model} minimised: the cost, or the carbon. */
+        /** What a search pricing with {@code model} minimised: the cost, the carbon, or a blend of the two. */
         public CostBreakdown searched(CostModel model) {
-            return model.objective() == Objective.CARBON ? carbon : cost;
+            if (model.objective() == Objective.CARBON) {
+                return carbon;
+            }
+            // a blend's rates are its shares of the two, so its price is the same shares of the two prices
+            double share = model.moneyShare();
+            return share == 1 ? cost : cost.times(share).plus(carbon.times(1 - share));
         }
     }
 
