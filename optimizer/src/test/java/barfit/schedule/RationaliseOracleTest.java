@@ -105,21 +105,7 @@ class RationaliseOracleTest {
                     .mapToDouble(ScheduleResult.Beam::ownOptimum)
                     .sum();
             assertTrue(got.beamsCost() >= own - 1e-6, "beams priced below their own optima — " + where);
-            // the price of standardisation, point by point
-            for (ScheduleResult.StandardisationPoint pt : got.standardisation()) {
-                Brute b = bruteForce(in, prices, pt.sizes());
-                if (b.total() == Long.MAX_VALUE) {
-                    assertTrue(
-                            Double.isNaN(pt.cost()),
-                            "K = " + pt.sizes() + " has no schedule, got " + pt.cost() + " — " + where);
-                } else {
-                    assertEquals(
-                            b.total(),
-                            CostModel.units(pt.cost()),
-                            in.beams().size() + 1.0,
-                            "K = " + pt.sizes() + " — " + where);
-                }
-            }
+            checkCurve(in, got, prices, CostModel.units(in.rationalise().formworkSetCost()), where);
             proven++;
         }
         assertTrue(proven >= instances / 2, "enough feasible schedules: " + proven);
@@ -178,21 +164,28 @@ class RationaliseOracleTest {
                 assertTrue(got.leastCarbon(), where);
             }
             checkLimits(in, got, where);
-            for (ScheduleResult.StandardisationPoint pt : got.standardisation()) {
-                Brute b = bruteForce(in, prices, pt.sizes(), fixed);
-                if (b.total() == Long.MAX_VALUE) {
-                    assertTrue(Double.isNaN(pt.cost()), "K = " + pt.sizes() + " — " + where);
-                } else {
-                    assertEquals(
-                            b.total(),
-                            CostModel.units(pt.cost()),
-                            in.beams().size() + 1.0,
-                            "K = " + pt.sizes() + " — " + where);
-                }
-            }
+            checkCurve(in, got, prices, fixed, where);
             proven++;
         }
         assertTrue(proven >= instances / 2, "enough feasible schedules: " + proven);
+    }
+
+    /** The price of standardisation, point by point, against brute force with {@code fixed} units per size. */
+    private static void checkCurve(ScheduleInput in, ScheduleResult got, long[][][] prices, long fixed, String where) {
+        for (ScheduleResult.StandardisationPoint pt : got.standardisation()) {
+            Brute b = bruteForce(in, prices, pt.sizes(), fixed);
+            if (b.total() == Long.MAX_VALUE) {
+                assertTrue(
+                        Double.isNaN(pt.cost()),
+                        "K = " + pt.sizes() + " has no schedule, got " + pt.cost() + " — " + where);
+            } else {
+                assertEquals(
+                        b.total(),
+                        CostModel.units(pt.cost()),
+                        in.beams().size() + 1.0,
+                        "K = " + pt.sizes() + " — " + where);
+            }
+        }
     }
 
     private static void checkLimits(ScheduleInput in, ScheduleResult got, String where) {

@@ -12,7 +12,6 @@ import barfit.input.CarbonReader;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
-import java.util.TreeMap;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -53,7 +52,8 @@ class ScheduleFrontierTest {
             List<long[]> exact = List.of(new long[] {0, 0});
             boolean feasible = true;
             for (ScheduleBeam b : in.beams()) {
-                List<long[]> own = nonDominated(new SpanExhaustive(model.money()).priced(b.problem(), model.carbon()));
+                List<long[]> own = barfit.design.NonDominated.of(
+                        new SpanExhaustive(model.money()).priced(b.problem(), model.carbon()));
                 feasible &= !own.isEmpty();
                 List<long[]> sums = new ArrayList<>();
                 for (long[] a : exact) {
@@ -61,7 +61,7 @@ class ScheduleFrontierTest {
                         sums.add(new long[] {a[0] + x[0], a[1] + x[1]});
                     }
                 }
-                exact = nonDominated(sums);
+                exact = barfit.design.NonDominated.of(sums);
             }
             ScheduleFrontier.Result r = ScheduleFrontier.of(pricing -> in, options, 1, Progress.NONE, 20);
             if (!feasible) {
@@ -99,22 +99,5 @@ class ScheduleFrontierTest {
         }
         assertTrue(
                 longer >= 3 && between >= 1, "frontiers of two points or more: " + longer + ", of three: " + between);
-    }
-
-    /** The (cost, carbon) pairs no other is at least as good as in both and better in one, cheapest first. */
-    private static List<long[]> nonDominated(List<long[]> all) {
-        TreeMap<Long, Long> leastCarbonAtCost = new TreeMap<>();
-        for (long[] x : all) {
-            leastCarbonAtCost.merge(x[0], x[1], Math::min);
-        }
-        List<long[]> out = new ArrayList<>();
-        long best = Long.MAX_VALUE;
-        for (var e : leastCarbonAtCost.entrySet()) {
-            if (e.getValue() < best) {
-                out.add(new long[] {e.getKey(), e.getValue()});
-                best = e.getValue();
-            }
-        }
-        return out;
     }
 }

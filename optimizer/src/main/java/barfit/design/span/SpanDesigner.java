@@ -203,46 +203,22 @@ public final class SpanDesigner {
         SpanSelection sel = new SpanSelection(p, out.sets());
         long capUnits = CostModel.SPAN_UNITS.units(capOverSpan);
         sel.atMost(new SpanPrices(p, carbon), capUnits);
-        int solves = 0;
-        int cuts = 0;
-        SpanSelection.Result first = null;
-        Design best = null;
-        List<Design> alts = new ArrayList<>();
-        while (best == null || alts.size() < alternatives) {
-            solves++;
-            SpanSelection.Result r = sel.solve(options);
-            if (r.choice() == null) {
-                if (best == null) {
-                    first = r;
-                }
-                break;
-            }
-            SpanSelection.Choice c = r.choice();
-            SpanLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
-            SpanReport report = SpanVerifier.verify(p, layout, true);
-            if (!report.ok()) {
-                if (report.okApartFromDeflection()) {
-                    sel.cutDeflection(c, gen.sections());
-                    cuts++;
-                    continue;
-                }
-                throw new IllegalStateException("re-verification failed for beam " + p.id()
-                        + " under a carbon cap; this is a bug in the search");
-            }
-            Design d = design(p, layout, report);
-            // the model's carbon, part by part, is the layout's: a cap it holds is a cap the design meets
+        Selected chosen = select(p, gen, sel, alternatives);
+        int solves = chosen.solves();
+        int cuts = chosen.cuts();
+        SpanSelection.Result first = chosen.first();
+        Design best = chosen.best();
+        List<Design> alts = chosen.alternatives();
+        // the model's carbon, part by part, is the layout's: a cap it holds is a cap the design meets
+        for (Design d : best == null
+                ? List.<Design>of()
+                : java.util.stream.Stream.concat(java.util.stream.Stream.of(best), alts.stream())
+                        .toList()) {
             if (CostModel.SPAN_UNITS.units(d.carbon().total()) > capUnits + 10) {
                 throw new IllegalStateException(
                         "beam " + p.id() + ": the design's carbon " + d.carbon().total() + " exceeds the cap "
                                 + capOverSpan + " the search held; this is a bug in the search");
             }
-            if (best == null) {
-                best = d;
-                first = r;
-            } else {
-                alts.add(d);
-            }
-            sel.exclude(c);
         }
         Search search = new Search(out.stats(), solves, cuts);
         if (best == null) {
@@ -279,6 +255,62 @@ public final class SpanDesigner {
                 proof,
                 binding(p, best),
                 null);
+    }
+
+    /** What the model chose: its first result (the proof), the best design, the next ones, solves and cuts. */
+    private record Selected(SpanSelection.Result first, Design best, List<Design> alternatives, int solves, int cuts) {}
+
+    /**
+     * The model's choices in turn, each re-verified with its trail: the best, then up to {@code alternatives}
+     * next distinct ones. A choice too flexible is cut off with every one no stiffer and the model solved again;
+     * one failing any other check is a bug in the search. {@code first} is the result of the solve that gave
+     * the best, or of the last solve where none did.
+     */
+    private Selected select(SpanProblem p, SpanGenerator gen, SpanSelection sel, int alternatives) {
+        int solves = 0;
+        int cuts = 0;
+        SpanSelection.Result first = null;
+        Design best = null;
+        List<Design> alts = new ArrayList<>();
+        while (best == null || alts.size() < alternatives) {
+            solves++;
+            SpanSelection.Result r = sel.solve(options);
+            if (r.choice() == null) {
+                if (best == null) {
+                    first = r;
+                }
+                break;
+            }
+            SpanSelection.Choice c = r.choice();
+            SpanLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
+            if (c.set().frame().deflection() && !SpanVerifier.deflectionOk(p, layout)) {
+                sel.cutDeflection(c, gen.sections());
+                cuts++;
+                continue;
+            }
+            SpanReport report = SpanVerifier.verify(p, layout, true);
+            if (!report.ok()) {
+                if (report.okApartFromDeflection()) {
+                    sel.cutDeflection(c, gen.sections());
+                    cuts++;
+                    continue;
+                }
+                StringBuilder sb = new StringBuilder();
+                report.failures()
+                        .forEach(f -> sb.append(sb.length() == 0 ? "" : ", ").append(f.id()));
+                throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
+                        + " fail on the chosen layout); this is a bug in the search");
+            }
+            Design d = design(p, layout, report);
+            if (best == null) {
+                best = d;
+                first = r;
+            } else {
+                alts.add(d);
+            }
+            sel.exclude(c);
+        }
+        return new Selected(first, best, alts, solves, cuts);
     }
 
     /** Why nothing is within the cap: the span's own diagnosis when nothing passes, else the least carbon of any. */
@@ -350,46 +382,12 @@ public final class SpanDesigner {
             return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), new SpanDiagnoser(cost).diagnose(p));
         }
         SpanSelection sel = new SpanSelection(p, out.sets());
-        int solves = 0;
-        int cuts = 0;
-        SpanSelection.Result first = null;
-        Design best = null;
-        List<Design> alts = new ArrayList<>();
-        while (best == null || alts.size() < alternatives) {
-            solves++;
-            SpanSelection.Result r = sel.solve(options);
-            if (r.choice() == null) {
-                break;
-            }
-            SpanSelection.Choice c = r.choice();
-            SpanLayout layout = gen.layout(c.set().frame(), c.mid(), c.left(), c.right());
-            if (c.set().frame().deflection() && !SpanVerifier.deflectionOk(p, layout)) {
-                sel.cutDeflection(c, gen.sections());
-                cuts++;
-                continue;
-            }
-            SpanReport report = SpanVerifier.verify(p, layout, true);
-            if (!report.ok()) {
-                if (report.okApartFromDeflection()) {
-                    sel.cutDeflection(c, gen.sections());
-                    cuts++;
-                    continue;
-                }
-                StringBuilder sb = new StringBuilder();
-                report.failures()
-                        .forEach(f -> sb.append(sb.length() == 0 ? "" : ", ").append(f.id()));
-                throw new IllegalStateException("re-verification failed for beam " + p.id() + " (" + sb
-                        + " fail on the chosen layout); this is a bug in the search");
-            }
-            Design d = design(p, layout, report);
-            if (best == null) {
-                best = d;
-                first = r;
-            } else {
-                alts.add(d);
-            }
-            sel.exclude(c);
-        }
+        Selected chosen = select(p, gen, sel, alternatives);
+        int solves = chosen.solves();
+        int cuts = chosen.cuts();
+        SpanSelection.Result first = chosen.first();
+        Design best = chosen.best();
+        List<Design> alts = chosen.alternatives();
         if (best == null) {
             // the time limit ended the first solve before it had a solution: give the generator's incumbent
             // when it passes every check, as found but not proven (no bound)

@@ -8,10 +8,8 @@ import barfit.design.CostModel;
 import barfit.design.Objective;
 import barfit.design.SolverOptions;
 import barfit.design.SupportedFrontier;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
-import java.util.TreeMap;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -46,7 +44,7 @@ class SpanFrontierTest {
             }
             feasible++;
             assertTrue(r.complete(), where);
-            List<long[]> exact = nonDominated(all);
+            List<long[]> exact = barfit.design.NonDominated.of(all);
             var pts = r.points();
             SpanDesigner.Outcome cheapest = new SpanDesigner(model, options).design(p, 0);
             SpanDesigner.Outcome lowest = new SpanDesigner(model.minimising(Objective.CARBON), options).design(p, 0);
@@ -89,22 +87,5 @@ class SpanFrontierTest {
         }
         assertTrue(feasible >= instances / 3, "enough spans with designs: " + feasible);
         assertTrue(longer >= 3, "frontiers of more than one point: " + longer);
-    }
-
-    /** The (cost, carbon) pairs no other is at least as good as in both and better in one, cheapest first. */
-    private static List<long[]> nonDominated(List<long[]> all) {
-        TreeMap<Long, Long> leastCarbonAtCost = new TreeMap<>();
-        for (long[] x : all) {
-            leastCarbonAtCost.merge(x[0], x[1], Math::min);
-        }
-        List<long[]> out = new ArrayList<>();
-        long best = Long.MAX_VALUE;
-        for (var e : leastCarbonAtCost.entrySet()) {
-            if (e.getValue() < best) {
-                out.add(new long[] {e.getKey(), e.getValue()});
-                best = e.getValue();
-            }
-        }
-        return out;
     }
 }
