@@ -79,7 +79,11 @@ public final class SpanJson {
         var pr = o.proof();
         ObjectNode proof = b.putObject("proof");
         boolean withLine = pr.search().withLine();
-        proof.put("solver", withLine ? "dynamic programming along the line" : "CP-SAT");
+        proof.put(
+                "solver",
+                withLine
+                        ? "dynamic programming along the line"
+                        : pr.search().enumerated() ? "enumeration (one combination cheapest)" : "CP-SAT");
         proof.put("status", Words.status(pr.status()));
         proof.put(
                 "basis",

@@ -430,6 +430,16 @@ public final class SpanText {
                     + "bound";
         }
         boolean carbon = p.measure() == barfit.design.Objective.CARBON;
+        if (s.enumerated()) {
+            return "optimal by enumeration (objective "
+                    + String.format(Locale.ROOT, "%.4f", Carbon.proofTotal(p.objective(), p.measure(), u))
+                    + (carbon ? " " + Carbon.unit(u) : "")
+                    + "): among every combination of the options the " + (carbon ? "carbon" : "cost")
+                    + " bound left, one is the least, ahead of all others by more than rounding, so no CP-SAT solve "
+                    + "was needed; "
+                    + s.generator().framesEvaluated() + " of " + s.generator().frames() + " frames evaluated, "
+                    + s.generator().framesSkipped() + " skipped by the " + (carbon ? "carbon" : "cost") + " bound";
+        }
         return "CP-SAT " + Words.status(p.status()) + " (objective "
                 + String.format(Locale.ROOT, "%.4f", Carbon.proofTotal(p.objective(), p.measure(), u))
                 + ", bound " + String.format(Locale.ROOT, "%.4f", Carbon.proofTotal(p.bound(), p.measure(), u))

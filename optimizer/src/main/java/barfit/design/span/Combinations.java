@@ -1,6 +1,7 @@
 package barfit.design.span;
 
 import barfit.catalogs.BarSize;
+import barfit.design.CostModel;
 import barfit.section.Stirrups;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -134,6 +135,67 @@ final class Combinations {
             total += right.cost();
         }
         return new Cheapest(m, left, right, total);
+    }
+
+    /** The one combination cheaper than every other by more than the margin, and its price as the model sums it. */
+    record Decided(FrameOptions set, MidOption mid, SupportOption left, SupportOption right, long units) {}
+
+    /**
+     * The cheapest combination of these frames' options when it is cheaper than every other combination of
+     * them by more than {@code margin} (currency): the CP-SAT model over the same options, whose constraints
+     * these are, has then this one optimum and nothing to choose between. Null where a frame computes
+     * deflection (its combinations are cut one by one as they fail) or where another comes within the margin.
+     */
+    Decided decided(List<FrameOptions> sets, double margin) {
+        double best = Double.POSITIVE_INFINITY;
+        double second = Double.POSITIVE_INFINITY;
+        Decided chosen = null;
+        for (FrameOptions fs : sets) {
+            if (fs.frame().deflection()) {
+                return null;
+            }
+            Map<BarSize, List<SupportOption>> lefts = bySize(fs.lefts());
+            Map<BarSize, List<SupportOption>> rights = bySize(fs.rights());
+            for (MidOption m : fs.mids()) {
+                TopOption t = m.top();
+                if (!sizesAllowed(m)) {
+                    continue;
+                }
+                BottomBars bottom = anchored(m);
+                List<SupportOption> ls =
+                        compatible(lefts, t.bar(), p.cantilever() ? 2 : t.continuous(), m, bottom, p.leftSupport());
+                List<SupportOption> rs = compatible(rights, t.bar(), t.continuous(), m, bottom, p.rightSupport());
+                if (ls.isEmpty() || rs.isEmpty()) {
+                    continue;
+                }
+                double base = fs.frame().cost() + t.cost() + m.cost();
+                double total = base + price(ls.get(0)) + price(rs.get(0));
+                double next = Math.min(
+                        ls.size() > 1 ? base + price(ls.get(1)) + price(rs.get(0)) : Double.POSITIVE_INFINITY,
+                        rs.size() > 1 ? base + price(ls.get(0)) + price(rs.get(1)) : Double.POSITIVE_INFINITY);
+                if (total < best) {
+                    second = Math.min(best, next);
+                    best = total;
+                    long units = CostModel.SPAN_UNITS.units(fs.frame().cost())
+                            + CostModel.SPAN_UNITS.units(t.cost())
+                            + CostModel.SPAN_UNITS.units(m.cost())
+                            + (ls.get(0) == null
+                                    ? 0
+                                    : CostModel.SPAN_UNITS.units(ls.get(0).cost()))
+                            + (rs.get(0) == null
+                                    ? 0
+                                    : CostModel.SPAN_UNITS.units(rs.get(0).cost()));
+                    chosen = new Decided(fs, m, ls.get(0), rs.get(0), units);
+                } else {
+                    second = Math.min(second, total);
+                }
+            }
+        }
+        return chosen != null && second - best > margin ? chosen : null;
+    }
+
+    private static double price(SupportOption s) {
+        return s == null ? 0 : s.cost();
     }
 
     /** The frame's cheapest combination that passes, found by plain enumeration of its options. */

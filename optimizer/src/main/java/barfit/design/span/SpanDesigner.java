@@ -44,13 +44,27 @@ public final class SpanDesigner {
     /**
      * A span's search, for its proof: the generator's counts, the CP-SAT solves and the deflection cuts
      * added between them; {@code withLine} where the span was chosen with the other parts of its line (they
-     * share support bars), exactly, by the line's search over every part's options, with no solve of its own.
+     * share support bars), exactly, by the line's search over every part's options, with no solve of its own;
+     * {@code enumerated} where the generator's enumeration of the options left found one combination cheaper
+     * than every other, so no CP-SAT solve was needed ({@link Combinations#decided}).
      */
-    public record Search(SpanGenerator.Stats generator, int solves, int deflectionCuts, boolean withLine) {
+    public record Search(
+            SpanGenerator.Stats generator, int solves, int deflectionCuts, boolean withLine, boolean enumerated) {
         public Search(SpanGenerator.Stats generator, int solves, int deflectionCuts) {
-            this(generator, solves, deflectionCuts, false);
+            this(generator, solves, deflectionCuts, false, false);
+        }
+
+        public Search(SpanGenerator.Stats generator, int solves, int deflectionCuts, boolean withLine) {
+            this(generator, solves, deflectionCuts, withLine, false);
         }
     }
+
+    /**
+     * How much cheaper (currency) the generator's best combination must be than every other for the search to
+     * take it without a CP-SAT solve: far above the model's rounding of each part to a millionth, so that the
+     * model would have this one optimum too.
+     */
+    static final double DECIDED_MARGIN = 1e-5;
 
     /**
      * Why a span has no design, as data the reports put in words: {@code limit} names what fails at the cap
@@ -146,10 +160,22 @@ public final class SpanDesigner {
 
     private final CostModel cost;
     private final SolverOptions options;
+    /** Whether a span the generator's enumeration decides is taken without a CP-SAT solve (see {@link #decided}). */
+    private final boolean byEnumeration;
 
     public SpanDesigner(CostModel cost, SolverOptions options) {
+        this(cost, options, true);
+    }
+
+    private SpanDesigner(CostModel cost, SolverOptions options, boolean byEnumeration) {
         this.cost = cost;
         this.options = options;
+        this.byEnumeration = byEnumeration;
+    }
+
+    /** The same designer with every choice made by the CP-SAT model: the cross-check of {@link #decided}. */
+    SpanDesigner solvingAlways() {
+        return new SpanDesigner(cost, options, false);
     }
 
     /**
@@ -255,6 +281,34 @@ public final class SpanDesigner {
                 proof,
                 binding(p, best),
                 null);
+    }
+
+    /**
+     * The span's optimum without a CP-SAT solve, where the options left hold one combination cheaper than every
+     * other by more than {@link #DECIDED_MARGIN}: the model over them could choose nothing else. Null where
+     * another comes close, a frame computes deflection, or the combination fails a check (the model decides).
+     */
+    private Outcome decided(SpanProblem p, SpanGenerator gen, SpanGenerator.Output out) {
+        Combinations.Decided d = gen.combinations().decided(out.sets(), DECIDED_MARGIN);
+        if (d == null) {
+            return null;
+        }
+        SpanLayout layout = gen.layout(d.set().frame(), d.mid(), d.left(), d.right());
+        SpanReport report = SpanVerifier.verify(p, layout, true);
+        if (!report.ok()) {
+            return null;
+        }
+        Design best = design(p, layout, report);
+        var proof = Proof.solved(
+                        Proof.Status.OPTIMAL,
+                        d.units(),
+                        d.units(),
+                        CostModel.SPAN_UNITS,
+                        Proof.SolverStats.NONE,
+                        new Search(out.stats(), 0, 0, false, true),
+                        options)
+                .measuring(cost.objective());
+        return new Outcome(p, "optimal", best, List.of(), proof, binding(p, best), null);
     }
 
     /** What the model chose: its first result (the proof), the best design, the next ones, solves and cuts. */
@@ -380,6 +434,12 @@ public final class SpanDesigner {
             var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(stats, 0, 0), options)
                     .measuring(cost.objective());
             return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), new SpanDiagnoser(cost).diagnose(p));
+        }
+        if (alternatives == 0 && byEnumeration) {
+            Outcome decided = decided(p, gen, out);
+            if (decided != null) {
+                return decided;
+            }
         }
         SpanSelection sel = new SpanSelection(p, out.sets());
         Selected chosen = select(p, gen, sel, alternatives);
