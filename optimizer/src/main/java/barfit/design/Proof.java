@@ -111,6 +111,14 @@ public record Proof<S>(
         return objective == 0 ? 0 : Math.max(0, (double) (objective - bound) / Math.abs(objective));
     }
 
+    /**
+     * Whether the answer was proven without a CP-SAT solve: optimal with no solver figures, as where the
+     * candidates' prices alone decide a section's choice.
+     */
+    public boolean withoutSolve() {
+        return status == Status.OPTIMAL && solver == SolverStats.NONE;
+    }
+
     /** Whether there is an objective with a bound below it: {@link Status#OPTIMAL} or {@link Status#FEASIBLE}. */
     public boolean bounded() {
         return status == Status.OPTIMAL || status == Status.FEASIBLE;

@@ -223,7 +223,7 @@ public final class DesignJson {
 
     static ObjectNode proof(Proof<SectionGenerator.Stats> p, UnitSystem u) {
         ObjectNode o = Json.object();
-        o.put("solver", "CP-SAT");
+        o.put("solver", p.withoutSolve() ? "comparison (one candidate cheapest)" : "CP-SAT");
         o.put("status", Words.status(p.status()));
         o.put("basis", Carbon.proofBasis(p.measure(), u));
         if (p.bounded()) {

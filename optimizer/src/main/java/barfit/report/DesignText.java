@@ -412,6 +412,14 @@ public final class DesignText {
         }
         String bound = String.format(Locale.ROOT, "%.4f", Carbon.proofPerLength(p.bound(), p.measure(), u));
         String obj = String.format(Locale.ROOT, "%.4f", Carbon.proofPerLength(p.objective(), p.measure(), u));
+        if (p.withoutSolve()) {
+            return "optimal by comparison of " + s.candidates()
+                    + (s.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + " "
+                    + Carbon.proofBasis(p.measure(), u) + "): each is the least of its frame, and one is the least "
+                    + "of all, ahead of the next, so no CP-SAT solve was needed; " + s.framesEvaluated() + " of "
+                    + s.frames() + " frames evaluated, " + s.framesPrunedByBound() + " skipped by the "
+                    + (p.measure() == Objective.CARBON ? "carbon" : "cost") + " bound";
+        }
         return "CP-SAT " + Words.status(p.status()) + " over " + s.candidates()
                 + (s.candidates() == 1 ? " candidate" : " candidates") + " (objective " + obj + ", bound " + bound + " "
                 + Carbon.proofBasis(p.measure(), u) + ", gap "

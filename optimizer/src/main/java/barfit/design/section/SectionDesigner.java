@@ -27,10 +27,22 @@ import java.util.List;
 public final class SectionDesigner {
     private final CostModel cost;
     private final SolverOptions options;
+    /** Whether a choice the candidates' prices decide is taken without a CP-SAT solve (see {@link #decided}). */
+    private final boolean byComparison;
 
     public SectionDesigner(CostModel cost, SolverOptions options) {
+        this(cost, options, true);
+    }
+
+    private SectionDesigner(CostModel cost, SolverOptions options, boolean byComparison) {
         this.cost = cost;
         this.options = options;
+        this.byComparison = byComparison;
+    }
+
+    /** The same designer with every choice made by the CP-SAT model: the cross-check of {@link #decided}. */
+    SectionDesigner solvingAlways() {
+        return new SectionDesigner(cost, options, false);
     }
 
     public DesignOutcome design(SectionProblem p, int alternatives) {
@@ -64,6 +76,12 @@ public final class SectionDesigner {
             var proof =
                     Proof.none(Proof.Status.INFEASIBLE, gen.stats(), options).measuring(cost.objective());
             return new DesignOutcome(p, "infeasible", null, List.of(), proof, List.of(), capDiagnosis(p, carbonCap));
+        }
+        if (byComparison) {
+            DesignOutcome decided = decided(p, gen, alternatives, capMeasure, cap);
+            if (decided != null) {
+                return decided;
+            }
         }
         SectionSelection sel = new SectionSelection();
         List<Integer> all = new ArrayList<>();
@@ -118,6 +136,51 @@ public final class SectionDesigner {
                         options)
                 .measuring(cost.objective());
         return new DesignOutcome(p, status, best, alts, proof, binding(p, best.layout()), null);
+    }
+
+    /**
+     * The design and its alternatives without a CP-SAT solve, where the candidates' prices decide them: the
+     * model is one candidate of least price (within the cap, where there is one), then the next as each is
+     * excluded, so when the 1 + {@code alternatives} cheapest candidates each cost strictly less than the next,
+     * the model could choose nothing else. Null where two tie there or none is within the cap (the model
+     * decides, or finds nothing).
+     */
+    private DesignOutcome decided(
+            SectionProblem p, SectionGenerator.Output gen, int alternatives, CostModel capMeasure, long cap) {
+        List<Candidate> cands = gen.candidates();
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < cands.size(); i++) {
+            if (capMeasure == null
+                    || CostModel.units(cands.get(i).layout().cost(capMeasure).total()) <= cap) {
+                order.add(i);
+            }
+        }
+        if (order.isEmpty()) {
+            return null;
+        }
+        order.sort(java.util.Comparator.comparingLong(i -> cands.get(i).units()));
+        int taken = Math.min(1 + alternatives, order.size());
+        for (int k = 0; k < taken && k + 1 < order.size(); k++) {
+            if (cands.get(order.get(k)).units() == cands.get(order.get(k + 1)).units()) {
+                return null;
+            }
+        }
+        Design best = verified(p, cands.get(order.get(0)));
+        List<Design> alts = new ArrayList<>();
+        for (int k = 1; k < taken; k++) {
+            alts.add(verified(p, cands.get(order.get(k))));
+        }
+        long units = cands.get(order.get(0)).units();
+        var proof = Proof.solved(
+                        Proof.Status.OPTIMAL,
+                        units,
+                        units,
+                        CostModel.UNITS,
+                        Proof.SolverStats.NONE,
+                        gen.stats(),
+                        options)
+                .measuring(cost.objective());
+        return new DesignOutcome(p, "optimal", best, alts, proof, binding(p, best.layout()), null);
     }
 
     /**
