@@ -211,76 +211,9 @@ public final class SpanDesigner {
      * cap, the diagnosis gives the least carbon of any.
      */
     public Outcome design(SpanProblem p, int alternatives, Double carbonCap) {
-        if (carbonCap == null) {
-            return design(p, alternatives);
-        }
-        CostModel carbon = cost.carbon();
-        if (carbon == null) {
-            throw new IllegalStateException("a carbon cap needs the carbon factors beside the cost model");
-        }
-        double capOverSpan = carbonCap * p.span() / 1000.0;
-        SpanGenerator gen = new SpanGenerator(p, cost).keepingDominated();
-        SpanGenerator.Output out = gen.optionsUnder(Double.POSITIVE_INFINITY);
-        if (out.sets().isEmpty()) {
-            var proof = Proof.none(Proof.Status.INFEASIBLE, new Search(out.stats(), 0, 0), options)
-                    .measuring(cost.objective());
-            return new Outcome(p, "infeasible", null, List.of(), proof, List.of(), new SpanDiagnoser(cost).diagnose(p));
-        }
-        SpanSelection sel = new SpanSelection(p, out.sets());
-        long capUnits = CostModel.SPAN_UNITS.units(capOverSpan);
-        sel.atMost(new SpanPrices(p, carbon), capUnits);
-        Selected chosen = select(p, gen, sel, alternatives);
-        int solves = chosen.solves();
-        int cuts = chosen.cuts();
-        SpanSelection.Result first = chosen.first();
-        Design best = chosen.best();
-        List<Design> alts = chosen.alternatives();
-        // the model's carbon, part by part, is the layout's: a cap it holds is a cap the design meets
-        for (Design d : best == null
-                ? List.<Design>of()
-                : java.util.stream.Stream.concat(java.util.stream.Stream.of(best), alts.stream())
-                        .toList()) {
-            if (CostModel.SPAN_UNITS.units(d.carbon().total()) > capUnits + 10) {
-                throw new IllegalStateException(
-                        "beam " + p.id() + ": the design's carbon " + d.carbon().total() + " exceeds the cap "
-                                + capOverSpan + " the search held; this is a bug in the search");
-            }
-        }
-        Search search = new Search(out.stats(), solves, cuts);
-        if (best == null) {
-            Proof.Status status = first != null && first.status() == Proof.Status.INFEASIBLE
-                    ? Proof.Status.INFEASIBLE
-                    : Proof.Status.OUT_OF_TIME;
-            var proof = Proof.none(status, search, options).measuring(cost.objective());
-            Diagnosis why = status == Proof.Status.OUT_OF_TIME
-                    ? new Diagnosis("time limit", new Diagnosis.TimeLimit(options.timeLimitSeconds()))
-                    : capDiagnosis(p, capOverSpan);
-            return new Outcome(
-                    p,
-                    status == Proof.Status.INFEASIBLE ? "infeasible" : "unknown",
-                    null,
-                    List.of(),
-                    proof,
-                    List.of(),
-                    why);
-        }
-        var proof = Proof.solved(
-                        first.status(),
-                        first.objective(),
-                        first.bound(),
-                        CostModel.SPAN_UNITS,
-                        first.stats(),
-                        search,
-                        options)
-                .measuring(cost.objective());
-        return new Outcome(
-                p,
-                first.status() == Proof.Status.OPTIMAL ? "optimal" : "feasible",
-                best,
-                alts,
-                proof,
-                binding(p, best),
-                null);
+        return carbonCap == null
+                ? design(p, alternatives)
+                : new SpanUnderCarbonCap(this).design(p, alternatives, carbonCap);
     }
 
     /**
@@ -312,7 +245,7 @@ public final class SpanDesigner {
     }
 
     /** What the model chose: its first result (the proof), the best design, the next ones, solves and cuts. */
-    private record Selected(SpanSelection.Result first, Design best, List<Design> alternatives, int solves, int cuts) {}
+    record Selected(SpanSelection.Result first, Design best, List<Design> alternatives, int solves, int cuts) {}
 
     /**
      * The model's choices in turn, each re-verified with its trail: the best, then up to {@code alternatives}
@@ -320,7 +253,7 @@ public final class SpanDesigner {
      * one failing any other check is a bug in the search. {@code first} is the result of the solve that gave
      * the best, or of the last solve where none did.
      */
-    private Selected select(SpanProblem p, SpanGenerator gen, SpanSelection sel, int alternatives) {
+    Selected select(SpanProblem p, SpanGenerator gen, SpanSelection sel, int alternatives) {
         int solves = 0;
         int cuts = 0;
         SpanSelection.Result first = null;
@@ -365,25 +298,6 @@ public final class SpanDesigner {
             sel.exclude(c);
         }
         return new Selected(first, best, alts, solves, cuts);
-    }
-
-    /** Why nothing is within the cap: the span's own diagnosis when nothing passes, else the least carbon of any. */
-    private Diagnosis capDiagnosis(SpanProblem p, double capOverSpan) {
-        Outcome leanest = new SpanDesigner(cost.minimising(Objective.CARBON), options).design(p, 0);
-        if (!leanest.feasible()) {
-            return leanest.diagnosis() != null ? leanest.diagnosis() : new SpanDiagnoser(cost).diagnose(p);
-        }
-        SpanLayout l = leanest.best().layout();
-        return new Diagnosis(
-                "carbon_cap",
-                "",
-                new Diagnosis.CarbonCapFails(
-                        capOverSpan, leanest.best().carbon().total(), l.width(), l.height(), p.span()),
-                List.of(),
-                null,
-                null,
-                p.maxDepth(),
-                p.fixedWidth());
     }
 
     /**
@@ -514,7 +428,7 @@ public final class SpanDesigner {
     }
 
     /** A verified layout with its cost in currency and its carbon, whichever the search minimised. */
-    private Design design(SpanProblem p, SpanLayout layout, SpanReport report) {
+    Design design(SpanProblem p, SpanLayout layout, SpanReport report) {
         CostModel carbon = cost.carbon();
         return new Design(
                 layout,
@@ -538,7 +452,7 @@ public final class SpanDesigner {
     }
 
     /** The checks working hardest in the chosen span, and the headroom cap when the height sits at it. */
-    private List<Binding> binding(SpanProblem p, Design d) {
+    List<Binding> binding(SpanProblem p, Design d) {
         List<Binding> out = new ArrayList<>();
         for (var e : d.report().sections().entrySet()) {
             String where = switch (e.getKey()) {
