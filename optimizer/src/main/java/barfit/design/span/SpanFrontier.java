@@ -10,8 +10,9 @@ import java.util.List;
  * A whole span's cost-carbon frontier: the span's cheapest and lowest-carbon designs (as {@code design
  * --objective cost} and {@code --objective carbon} give them) and the extreme supported points between them,
  * each the proven optimum of a weighted sum of cost and carbon ({@link SupportedFrontier}). The span search
- * prunes by one measure at a time (its options, stirrups and bounds), so a carbon cap cannot simply be
- * added to it as it is to a section's model; a weighted sum is one more set of rates, and every bound holds.
+ * prunes by one measure at a time (its options, stirrups and bounds): under a carbon cap it must keep every
+ * option ({@link SpanUnderCarbonCap}) and takes seconds, while a weighted sum is one more set of rates and
+ * every bound of the fast search holds.
  */
 public final class SpanFrontier {
     /** The frontier of one span, cheapest first (empty where nothing passes: {@code first} then says why). */
