@@ -91,11 +91,11 @@ final class FrontierCommand implements Callable<Integer> {
         if (schedule) {
             return schedule(options);
         }
-        for (var unused : new Object[][] {{beamsCsv, "--beams"}, {threads, "--threads"}}) {
-            if (unused[0] != null) {
-                throw OptionError.of(
-                        (String) unused[1], "belongs to a schedule's frontier; expected --schedule with it");
-            }
+        if (beamsCsv != null) {
+            throw OptionError.of("--beams", "belongs to a schedule's frontier; expected --schedule with it");
+        }
+        if (threads != null) {
+            throw OptionError.of("--threads", "belongs to a schedule's frontier; expected --schedule with it");
         }
         DesignInput input = DesignInputReader.read(file, false);
         List<DesignBeam> beams = input.beams();

@@ -50,7 +50,7 @@ public final class FrontierReport {
      * limit left part of it unsearched.
      */
     public record Entry(
-            String id, String heading, String over, List<Row> rows, int solves, boolean complete, String[] noDesign) {
+            String id, String heading, String over, List<Row> rows, int solves, boolean complete, NoDesign noDesign) {
         public Entry {
             rows = List.copyOf(rows);
         }
@@ -76,6 +76,9 @@ public final class FrontierReport {
         }
     }
 
+    /** Why a beam has no frontier: the binding limit and the diagnosis in words. */
+    public record NoDesign(String limit, String summary) {}
+
     /** A section's frontier, per length. */
     public static Entry entry(SectionFrontier.Result r, UnitSystem u) {
         var p = r.problem();
@@ -95,11 +98,10 @@ public final class FrontierReport {
                     Carbon.perLength(d.carbonPerMetre(), u),
                     pt.cheapest().status()));
         }
-        String[] none = r.points().isEmpty()
-                ? new String[] {
-                    r.first().diagnosis().limit(),
-                    DiagnosisWords.summary(r.first().diagnosis(), u)
-                }
+        NoDesign none = r.points().isEmpty()
+                ? new NoDesign(
+                        r.first().diagnosis().limit(),
+                        DiagnosisWords.summary(r.first().diagnosis(), u))
                 : null;
         return new Entry(p.id(), heading, null, rows, r.solves(), true, none);
     }
@@ -124,10 +126,10 @@ public final class FrontierReport {
                     Carbon.mass(d.carbon(), u),
                     pt.answer().status()));
         }
-        String[] none = null;
+        NoDesign none = null;
         if (r.points().isEmpty()) {
             var d = r.first().diagnosis();
-            none = new String[] {d == null ? "none" : d.limit(), d == null ? "" : DiagnosisWords.summary(d, u)};
+            none = new NoDesign(d == null ? "none" : d.limit(), d == null ? "" : DiagnosisWords.summary(d, u));
         }
         return new Entry(p.id(), heading, "the span", rows, r.solves(), r.complete(), none);
     }
@@ -165,9 +167,9 @@ public final class FrontierReport {
             out.append('\n').append(e.heading()).append('\n');
             if (e.rows().isEmpty()) {
                 out.append("  no layout in the search space passes: ")
-                        .append(e.noDesign()[0])
+                        .append(e.noDesign().limit())
                         .append(" — ")
-                        .append(e.noDesign()[1])
+                        .append(e.noDesign().summary())
                         .append('\n');
                 continue;
             }
@@ -263,8 +265,8 @@ public final class FrontierReport {
             }
             if (e.rows().isEmpty()) {
                 ObjectNode dn = b.putObject("diagnosis");
-                dn.put("limit", e.noDesign()[0]);
-                dn.put("summary", e.noDesign()[1]);
+                dn.put("limit", e.noDesign().limit());
+                dn.put("summary", e.noDesign().summary());
             } else {
                 b.putNull("diagnosis");
             }

@@ -7,7 +7,8 @@ import java.util.List;
 /**
  * A designed schedule: every beam's outcome in input order, the section sizes and bar sizes it uses, its
  * total cost, the cost with every beam at its own optimum, the rationalisation's proof (null when not
- * rationalised) and the price of standardisation (empty when not rationalised).
+ * rationalised), the price of standardisation (empty when not rationalised), and the carbon (kg CO2e) with
+ * every beam at its own optimum when rationalised (NaN otherwise).
  */
 public record ScheduleResult(
         ScheduleInput input,
@@ -28,34 +29,6 @@ public record ScheduleResult(
         sizes = List.copyOf(sizes);
         barSizes = List.copyOf(barSizes);
         standardisation = List.copyOf(standardisation);
-    }
-
-    /** As above, the carbon of every beam at its own optimum not known. */
-    public ScheduleResult(
-            ScheduleInput input,
-            List<Beam> beams,
-            List<SectionSize> sizes,
-            List<String> barSizes,
-            double beamsCost,
-            double formworkSetsCost,
-            double unconstrainedCost,
-            Proof<Search> proof,
-            List<StandardisationPoint> standardisation,
-            int threads,
-            long millis) {
-        this(
-                input,
-                beams,
-                sizes,
-                barSizes,
-                beamsCost,
-                formworkSetsCost,
-                unconstrainedCost,
-                proof,
-                standardisation,
-                threads,
-                millis,
-                Double.NaN);
     }
 
     /**

@@ -120,34 +120,35 @@ public final class LineTarget implements Target {
         }
         var f = governing.flexure();
         return new Summary(
-                        true,
-                        first.width(),
-                        first.height(),
-                        "bottom " + String.join("; ", bottoms),
-                        "top " + first.topContinuous() + " " + first.top().label() + " continuous"
-                                + (tops.isEmpty() ? "" : "; " + String.join("; ", tops)),
-                        "per part, see design",
-                        "bottom",
-                        first.bottomCounts(),
-                        first.bottom().designation(),
-                        "top",
-                        first.topContinuous(),
-                        first.top().designation(),
-                        f.phiMn(),
-                        Math.abs(governing.demand().mu()),
-                        f.epsT(),
-                        f.phi(),
-                        f.strainClass(),
-                        false,
-                        false,
-                        bars,
-                        layers,
-                        total,
-                        (optimal ? "optimal" : "feasible") + " for the line ("
-                                + r.parts().size() + " parts, support bars " + "shared)",
-                        "",
-                        null,
-                        false)
-                .measured(carbon, cost.objective() == barfit.design.Objective.CARBON);
+                true,
+                first.width(),
+                first.height(),
+                "bottom " + String.join("; ", bottoms),
+                "top " + first.topContinuous() + " " + first.top().label() + " continuous"
+                        + (tops.isEmpty() ? "" : "; " + String.join("; ", tops)),
+                "per part, see design",
+                "bottom",
+                first.bottomCounts(),
+                first.bottom().designation(),
+                "top",
+                first.topContinuous(),
+                first.top().designation(),
+                f.phiMn(),
+                Math.abs(governing.demand().mu()),
+                f.epsT(),
+                f.phi(),
+                f.strainClass(),
+                false,
+                false,
+                bars,
+                layers,
+                total,
+                (optimal ? "optimal" : "feasible") + " for the line ("
+                        + r.parts().size() + " parts, support bars " + "shared)",
+                "",
+                null,
+                false,
+                carbon,
+                cost.objective() == barfit.design.Objective.CARBON);
     }
 }

@@ -106,34 +106,35 @@ public final class SectionTarget implements Target {
         }
         int bars = l.tensionBarCount() + l.compressionCount();
         return new Summary(
-                        true,
-                        l.width(),
-                        l.height(),
-                        l.bending().tensionFace().word() + " "
-                                + Summary.bars(l.tensionCounts(), l.tensionBar().label()),
-                        l.bending().compressionFace().word() + " " + l.compressionCount() + " "
-                                + l.compressionBar().label(),
-                        say.stirrups(l.stirrups()),
-                        l.bending().tensionFace().word(),
-                        l.tensionCounts(),
-                        l.tensionBar().designation(),
-                        l.bending().compressionFace().word(),
-                        l.compressionCount(),
-                        l.compressionBar().designation(),
-                        f.phiMn(),
-                        Math.abs(q.mu()),
-                        f.epsT(),
-                        f.phi(),
-                        f.strainClass(),
-                        used,
-                        needed,
-                        bars,
-                        l.tensionCounts().size() + 1,
-                        o.best().cost(),
-                        o.status() + " over " + o.proof().search().candidates() + " candidates",
-                        fails,
-                        null,
-                        false)
-                .measured(o.best().carbon(), cost.objective() == barfit.design.Objective.CARBON);
+                true,
+                l.width(),
+                l.height(),
+                l.bending().tensionFace().word() + " "
+                        + Summary.bars(l.tensionCounts(), l.tensionBar().label()),
+                l.bending().compressionFace().word() + " " + l.compressionCount() + " "
+                        + l.compressionBar().label(),
+                say.stirrups(l.stirrups()),
+                l.bending().tensionFace().word(),
+                l.tensionCounts(),
+                l.tensionBar().designation(),
+                l.bending().compressionFace().word(),
+                l.compressionCount(),
+                l.compressionBar().designation(),
+                f.phiMn(),
+                Math.abs(q.mu()),
+                f.epsT(),
+                f.phi(),
+                f.strainClass(),
+                used,
+                needed,
+                bars,
+                l.tensionCounts().size() + 1,
+                o.best().cost(),
+                o.status() + " over " + o.proof().search().candidates() + " candidates",
+                fails,
+                null,
+                false,
+                o.best().carbon(),
+                cost.objective() == barfit.design.Objective.CARBON);
     }
 }

@@ -10,7 +10,8 @@ import barfit.design.CostBreakdown;
  * "min_depth"). {@code hangersFail} names the checks that fail when this layout's compression steel is
  * replaced by the minimum hangers (empty when they do not fail). {@code compressionAvoidable}: another
  * layout with the minimum hangers alone passes within the same limits, so relying on compression steel
- * is a matter of cost, not of need (set by the study that knows it).
+ * is a matter of cost, not of need (set by the study that knows it). {@code carbon} is its embodied carbon
+ * (null where unknown), and {@code byCarbon} says the study minimised carbon, so designs compare by it.
  */
 public record Summary(
         boolean feasible,
@@ -41,101 +42,6 @@ public record Summary(
         boolean compressionAvoidable,
         CostBreakdown carbon,
         boolean byCarbon) {
-
-    /** As above, measured by cost, its carbon not known. */
-    public Summary(
-            boolean feasible,
-            double width,
-            double height,
-            String tension,
-            String compression,
-            String stirrups,
-            String tensionFace,
-            java.util.List<Integer> tensionCounts,
-            String tensionBar,
-            String compressionFace,
-            int compressionCount,
-            String compressionBar,
-            double phiMn,
-            double mu,
-            double epsT,
-            double phi,
-            String strainClass,
-            boolean compressionUsed,
-            boolean compressionNeeded,
-            int longitudinalBars,
-            int layers,
-            CostBreakdown cost,
-            String proof,
-            String hangersFail,
-            String limit,
-            boolean compressionAvoidable) {
-        this(
-                feasible,
-                width,
-                height,
-                tension,
-                compression,
-                stirrups,
-                tensionFace,
-                tensionCounts,
-                tensionBar,
-                compressionFace,
-                compressionCount,
-                compressionBar,
-                phiMn,
-                mu,
-                epsT,
-                phi,
-                strainClass,
-                compressionUsed,
-                compressionNeeded,
-                longitudinalBars,
-                layers,
-                cost,
-                proof,
-                hangersFail,
-                limit,
-                compressionAvoidable,
-                null,
-                false);
-    }
-
-    /**
-     * The same design with its carbon ({@code carbon}, kg CO2e; null where unknown), compared with the others by
-     * it where {@code byCarbon} (the study minimised carbon, {@code --objective carbon}).
-     */
-    public Summary measured(CostBreakdown carbon, boolean byCarbon) {
-        return new Summary(
-                feasible,
-                width,
-                height,
-                tension,
-                compression,
-                stirrups,
-                tensionFace,
-                tensionCounts,
-                tensionBar,
-                compressionFace,
-                compressionCount,
-                compressionBar,
-                phiMn,
-                mu,
-                epsT,
-                phi,
-                strainClass,
-                compressionUsed,
-                compressionNeeded,
-                longitudinalBars,
-                layers,
-                cost,
-                proof,
-                hangersFail,
-                limit,
-                compressionAvoidable,
-                carbon,
-                byCarbon);
-    }
 
     public static Summary none(String proof) {
         return none(proof, "");
@@ -168,6 +74,8 @@ public record Summary(
                 proof,
                 "",
                 limit,
+                false,
+                null,
                 false);
     }
 

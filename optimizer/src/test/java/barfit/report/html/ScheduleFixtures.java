@@ -90,7 +90,8 @@ final class ScheduleFixtures {
             sectionSizes.add(
                     new ScheduleResult.SectionSize(Double.parseDouble(bh[0]), Double.parseDouble(bh[1]), e.getValue()));
         }
-        return new ScheduleResult(input, out, sectionSizes, List.copyOf(bars), total, 0, total, null, List.of(), 1, 0);
+        return new ScheduleResult(
+                input, out, sectionSizes, List.copyOf(bars), total, 0, total, null, List.of(), 1, 0, Double.NaN);
     }
 
     /**
@@ -123,6 +124,7 @@ final class ScheduleFixtures {
                 proof,
                 points,
                 r.threads(),
-                r.millis());
+                r.millis(),
+                r.unconstrainedCarbon());
     }
 }

@@ -293,8 +293,8 @@ class ScheduleHtmlTest {
                         new ScheduleBeam("F-1", null, first.beam().location(), harder), failing, Double.NaN),
                 new ScheduleResult.Beam(
                         new ScheduleBeam("N-1", "line C", second.beam().location(), capped), none, Double.NaN));
-        ScheduleResult r =
-                new ScheduleResult(result.input(), beams, List.of(), List.of(), 0, 0, 0, null, List.of(), 1, 0);
+        ScheduleResult r = new ScheduleResult(
+                result.input(), beams, List.of(), List.of(), 0, 0, 0, null, List.of(), 1, 0, Double.NaN);
         String page = ScheduleHtml.render(r);
 
         String fails = element(page, "<section class=\"beam\" id=\"beam-F-1\">", "</section>");
