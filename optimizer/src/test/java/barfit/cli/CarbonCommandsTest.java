@@ -180,6 +180,24 @@ class CarbonCommandsTest {
                 ratCarbon.get("proof").get("objective").asDouble(),
                 0.05);
         assertTrue(ratCarbon.get("standardisation").get(0).has("total_carbon"));
+        // its HTML report gives the proof in carbon too, not as money
+        Path out = dir.resolve("carbon-report");
+        Cli files = Cli.run(
+                "schedule",
+                "../examples/schedule/office-us.yaml",
+                "--objective",
+                "carbon",
+                "--quiet",
+                "--out",
+                out.toString());
+        assertEquals(0, files.exit(), files.err());
+        String html = Files.readString(out.resolve("report.html"));
+        assertTrue(
+                java.util.regex.Pattern.compile("<tr><th>objective</th><td>[0-9.]+ lb CO2e</td></tr>")
+                        .matcher(html)
+                        .find(),
+                "the proof's objective in carbon");
+        assertTrue(html.contains("pruned by the carbon bound"));
         // the frontier of the rationalised schedule: its ends are those two schedules, sets of forms and all
         Cli frontier = Cli.run(
                 "frontier", "../examples/schedule/office-us.yaml", "--schedule", "--format", "json", "--points", "2");

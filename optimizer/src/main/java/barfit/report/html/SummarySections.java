@@ -330,17 +330,18 @@ final class SummarySections {
         Html.kv(out, "method", ScheduleWords.method(r));
         Html.kv(out, "status", proof.status().name());
         boolean noSchedule = !proof.bounded();
-        Html.kv(
-                out,
-                "objective",
-                noSchedule ? "— (no schedule meets the limits)" : Html.money(proof.objective(), currency));
-        Html.kv(out, "best bound", noSchedule ? "—" : Html.money(proof.bound(), currency));
+        boolean carbon = proof.measure() == barfit.design.Objective.CARBON;
+        // what the proof bounds: the schedule's cost, or its carbon where it minimised carbon
+        java.util.function.DoubleFunction<String> measure =
+                v -> carbon ? Carbon.amount(Carbon.mass(v, u)) + " " + Carbon.unit(u) : Html.money(v, currency);
+        Html.kv(out, "objective", noSchedule ? "— (no schedule meets the limits)" : measure.apply(proof.objective()));
+        Html.kv(out, "best bound", noSchedule ? "—" : measure.apply(proof.bound()));
         Html.kv(out, "gap", noSchedule ? "—" : String.format(Locale.ROOT, "%.2f %%", 100 * proof.gap()));
         Html.kv(
                 out,
                 "bar-size sets",
                 search.barSetsTotal() + " considered, " + search.barSetsSolved() + " solved, " + search.barSetsPruned()
-                        + " pruned by the cost bound");
+                        + " pruned by the " + (carbon ? "carbon" : "cost") + " bound");
         Html.kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly");
         // measured times are left out so that the same result always gives the same page
         Html.kv(
