@@ -57,15 +57,18 @@ public final class StirrupRules {
      * asks that they be enclosed by ties. Returns what they are relied on for, or null.
      */
     public static String compressionReliedOn(BeamSection s, Bending bending, Double mu) {
-        List<BarLayer> without = new ArrayList<>();
-        for (BarLayer l : s.layers()) {
-            if (l.face() == bending.tensionFace()) {
-                without.add(l);
-            }
-        }
-        if (without.size() == s.layers().size() || without.isEmpty()) {
+        BeamSection without = withoutCompressionBars(s, bending);
+        if (without == null) {
             return null; // no compression bars, or no tension bars to judge by
         }
+        // where the section stands without them nothing is relied on, so that analysis comes first (it
+        // settles most sections alone)
+        FlexureResult fr = Flexure.analyse(without, bending);
+        if (standsWithout(fr, mu)) {
+            return null;
+        }
+        boolean strength = mu != null && !CheckResult.within(Math.abs(mu), fr.phiMn());
+        boolean ductile = CheckResult.reaches(fr.epsT(), CodeTables.EPS_T_MIN_BEAM);
         // bars on the compression face that the neutral axis leaves in tension are not compression steel
         // (a shallow block in a flange): 9.7.6.4 has nothing to enclose
         boolean inCompression = false;
@@ -77,16 +80,40 @@ public final class StirrupRules {
         if (!inCompression) {
             return null;
         }
-        FlexureResult fr = Flexure.analyse(s.withLayers(without), bending);
-        boolean strength = mu != null && !CheckResult.within(Math.abs(mu), fr.phiMn());
-        boolean ductile = CheckResult.reaches(fr.epsT(), CodeTables.EPS_T_MIN_BEAM);
         if (strength && !ductile) {
             return "strength and ductility";
         }
         if (strength) {
             return "strength";
         }
-        return ductile ? null : "ductility";
+        return "ductility";
+    }
+
+    /**
+     * The section {@link #compressionReliedOn} judges the compression bars by: {@code s} with its tension-face
+     * bars alone. Null when {@code s} has no compression bars or no tension bars (nothing is relied on).
+     */
+    public static BeamSection withoutCompressionBars(BeamSection s, Bending bending) {
+        List<BarLayer> without = new ArrayList<>();
+        for (BarLayer l : s.layers()) {
+            if (l.face() == bending.tensionFace()) {
+                without.add(l);
+            }
+        }
+        if (without.size() == s.layers().size() || without.isEmpty()) {
+            return null;
+        }
+        return s.withLayers(without);
+    }
+
+    /**
+     * Whether a section analysed without its compression bars ({@code withoutCompression}, the flexure of
+     * {@link #withoutCompressionBars}) still carries Mu (when given) and reaches εt ≥ 0.004: then none of
+     * them is relied on, and 9.7.6.4 asks for no ties.
+     */
+    public static boolean standsWithout(FlexureResult withoutCompression, Double mu) {
+        boolean strength = mu != null && !CheckResult.within(Math.abs(mu), withoutCompression.phiMn());
+        return !strength && CheckResult.reaches(withoutCompression.epsT(), CodeTables.EPS_T_MIN_BEAM);
     }
 
     /**

@@ -10,6 +10,7 @@ import barfit.section.BeamSection;
 import barfit.section.Bending;
 import barfit.section.CheckResult;
 import barfit.section.Face;
+import barfit.section.Flexure;
 import barfit.section.SectionChecks;
 import barfit.section.SectionProbe;
 import barfit.section.SectionShape;
@@ -54,6 +55,17 @@ final class OptionGenerator {
     private final SectionShape shape;
     private final FrameBounds bounds;
     private final ZoneStirrups zoneStirrups;
+    /**
+     * {@link #framePasses} by bar sizes and layers, asked once each: 0 not yet asked, else {@link #PASSES} or
+     * {@link #FAILS}. The mid-span and the supports ask it again for every top option and count.
+     */
+    private final byte[] framePasses;
+
+    /** Whether a set of bottom bars stands without the top bars ({@link #midTies}), by {@link #bottomBarsKey}. */
+    private final Map<Long, Boolean> standsWithoutTop = new HashMap<>();
+
+    private static final byte PASSES = 1;
+    private static final byte FAILS = 2;
 
     OptionGenerator(SpanContext ctx, FrameBounds bounds) {
         this.ctx = ctx;
@@ -62,6 +74,8 @@ final class OptionGenerator {
         this.shape = new SectionShape(f.b(), f.h(), p.flange());
         this.bounds = bounds;
         this.zoneStirrups = new ZoneStirrups(ctx, f, shape);
+        int n = p.space().barSizes().size();
+        this.framePasses = new byte[n * n * Math.max(1, p.space().maxLayers())];
     }
 
     SectionShape shape() {
@@ -74,6 +88,20 @@ final class OptionGenerator {
      * stand-in section holding {@code layers} layers of {@code a} and one layer of {@code c}.
      */
     boolean framePasses(BarSize a, BarSize c, int layers) {
+        int n = p.space().barSizes().size();
+        int ia = ctx.index(a);
+        int ic = ctx.index(c);
+        if (ia < 0 || ic < 0 || layers < 1 || layers > p.space().maxLayers()) {
+            return framePassesNow(a, c, layers);
+        }
+        int key = (ia * n + ic) * p.space().maxLayers() + layers - 1;
+        if (framePasses[key] == 0) {
+            framePasses[key] = framePassesNow(a, c, layers) ? PASSES : FAILS;
+        }
+        return framePasses[key] == PASSES;
+    }
+
+    private boolean framePassesNow(BarSize a, BarSize c, int layers) {
         List<BeamSection.BarGroup> groups = new ArrayList<>();
         for (int i = 0; i < layers; i++) {
             groups.add(new BeamSection.BarGroup(a, 2));
@@ -84,6 +112,44 @@ final class OptionGenerator {
         List<CheckResult> checks = new ArrayList<>(SectionChecks.frameChecks(s, new Span(p.span(), null)));
         checks.addAll(SectionChecks.layerGaps(s));
         return checks.stream().allMatch(CheckResult::pass);
+    }
+
+    /**
+     * The ties 9.7.6.4 asks round a mid-span section's top bars ({@link StirrupRules#ties}). Whether the
+     * bottom bars stand without the top bars hangs on the bottom bars alone, and most do: that is asked of the
+     * section model once per set of bottom bars, not again for every top option.
+     */
+    private StirrupRules.TieDemand midTies(BeamSection mid, BarSize bottom, int[] split) {
+        long key = bottomBarsKey(bottom, split);
+        if (key >= 0) {
+            Boolean stands = standsWithoutTop.get(key);
+            if (stands == null) {
+                BeamSection without = StirrupRules.withoutCompressionBars(mid, Bending.SAGGING);
+                stands = without != null
+                        && StirrupRules.standsWithout(Flexure.analyse(without, Bending.SAGGING), p.mMid());
+                standsWithoutTop.put(key, stands);
+            }
+            if (stands) {
+                return StirrupRules.TieDemand.NONE;
+            }
+        }
+        return StirrupRules.ties(mid, Bending.SAGGING, p.mMid());
+    }
+
+    /** A set of bottom bars (size and count per layer) as one number, or -1 when it will not fit in one. */
+    private long bottomBarsKey(BarSize bottom, int[] split) {
+        int size = ctx.index(bottom);
+        if (size < 0 || split.length > 6) {
+            return -1;
+        }
+        long key = size;
+        for (int count : split) {
+            if (count < 0 || count > 255) {
+                return -1;
+            }
+            key = (key << 8) | count;
+        }
+        return (key << 3) | split.length;
     }
 
     /** The frame's top options (see {@link #tops(SpanContext, SpanFrame)}). */
@@ -180,7 +246,7 @@ final class OptionGenerator {
                             BeamSection midSection = ctx.sections().mid(f, shape, top, bottom, split);
                             StirrupRules.TieDemand ties = midZones.isEmpty()
                                     ? StirrupRules.TieDemand.NONE
-                                    : StirrupRules.ties(midSection, Bending.SAGGING, p.mMid());
+                                    : midTies(midSection, bottom, split);
                             if (!ties.sizeOk(f.stirrupBar().diameter())) {
                                 continue;
                             }

@@ -33,6 +33,8 @@ final class SpanContext {
     private final Map<SpanProblem.Place, List<Integer>> zonesAt = new EnumMap<>(SpanProblem.Place.class);
     /** Each bar size's place in the space's list, found once per size object. */
     private final Map<BarSize, Integer> barIndex = new IdentityHashMap<>();
+    /** The space's bar sizes, for {@link #index}. */
+    private final BarSize[] sizeArray;
     /**
      * Whether the mid-span options keep the ones another option beats on this model's price (a search under a
      * cap in another measure, whose prices weigh bars and stirrups otherwise, may need them).
@@ -51,6 +53,7 @@ final class SpanContext {
                 .min(Comparator.comparingDouble(BarSize::diameter))
                 .orElseThrow();
         this.zones = p.zones();
+        this.sizeArray = p.space().barSizes().toArray(BarSize[]::new);
         for (SpanProblem.Place place : SpanProblem.Place.values()) {
             List<Integer> at = new ArrayList<>();
             for (int i = 0; i < zones.size(); i++) {
@@ -108,6 +111,12 @@ final class SpanContext {
 
     /** A bar size's index in the space's bar sizes. */
     int index(BarSize bar) {
+        BarSize[] sizes = sizeArray;
+        for (int k = 0; k < sizes.length; k++) {
+            if (sizes[k] == bar) {
+                return k; // the space's own objects, as nearly every caller holds: no hashing
+            }
+        }
         Integer i = barIndex.get(bar);
         if (i == null) {
             i = p.space().barSizes().indexOf(bar);
