@@ -80,47 +80,78 @@ public final class SectionBench {
         return out;
     }
 
+    /** The least and the most a warm-up runs (see {@link WarmUp}), in seconds. */
+    static final double WARM_UP_LEAST = 2;
+
+    static final double WARM_UP_MOST = 20;
+
+    /**
+     * The optimizer on {@code n} instances, and the exhaustive enumeration on every {@code exhaustiveEvery}-th.
+     * Both are warmed up until the compiler is quiet, then each is timed in a block of its own over the
+     * instances, as a schedule runs its designs one after another: timed in turn, a design of a millisecond
+     * would start each time with the caches and the heap as the enumeration's hundreds of megabytes left them.
+     */
     public static Figures run(int n, int exhaustiveEvery, long seed, PrintWriter out) {
         CostModel cost = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
         SectionDesigner designer = new SectionDesigner(cost, new SolverOptions(60, 1, 1));
         SectionExhaustive oracle = new SectionExhaustive(cost);
         List<SectionProblem> problems = instances(n, seed);
-        // warm up the JIT and the native library on instances outside the measured set
-        for (SectionProblem p : instances(30, seed + 1)) {
-            designer.design(p, 0);
-        }
+        List<SectionProblem> warm = instances(30, seed + 1);
+        int[] next = {0};
+        WarmUp.Figures w = WarmUp.untilQuiet(
+                () -> {
+                    warm.forEach(p -> designer.design(p, 0));
+                    oracle.solve(warm.get(next[0]++ % warm.size()));
+                },
+                WARM_UP_LEAST,
+                WARM_UP_MOST);
+        out.println(w.describe() + "; then each timed in a block of its own");
         double[] opt = new double[n];
+        DesignOutcome[] outcomes = new DesignOutcome[n];
+        for (int i = 0; i < n; i++) {
+            long t0 = System.nanoTime();
+            outcomes[i] = designer.design(problems.get(i), 0);
+            opt[i] = (System.nanoTime() - t0) / 1e6;
+        }
         List<Double> exh = new ArrayList<>();
+        SectionExhaustive.Result[] refs = new SectionExhaustive.Result[n];
+        double[] exMs = new double[n];
+        for (int i = 0; i < n; i += exhaustiveEvery) {
+            long t1 = System.nanoTime();
+            refs[i] = oracle.solve(problems.get(i));
+            exMs[i] = (System.nanoTime() - t1) / 1e6;
+            exh.add(exMs[i]);
+        }
         boolean equal = true;
         long checked = 0;
         out.printf(
                 Locale.ROOT, "%-5s %10s %12s %12s %14s%n", "beam", "optimizer", "exhaustive", "cost", "equal optimum");
         for (int i = 0; i < n; i++) {
-            SectionProblem p = problems.get(i);
-            long t0 = System.nanoTime();
-            DesignOutcome o = designer.design(p, 0);
-            opt[i] = (System.nanoTime() - t0) / 1e6;
+            DesignOutcome o = outcomes[i];
             String ex = "-";
             String eq = "-";
-            if (i % exhaustiveEvery == 0) {
-                long t1 = System.nanoTime();
-                SectionExhaustive.Result ref = oracle.solve(p);
-                double ms = (System.nanoTime() - t1) / 1e6;
-                exh.add(ms);
-                checked += ref.layoutsChecked();
+            if (refs[i] != null) {
+                checked += refs[i].layoutsChecked();
                 long units =
                         o.feasible() ? CostModel.units(o.best().costPerMetre().total()) : -1;
-                boolean same = units == ref.units();
+                boolean same = units == refs[i].units();
                 equal &= same;
-                ex = String.format(Locale.ROOT, "%.0f ms", ms);
+                ex = String.format(Locale.ROOT, "%.0f ms", exMs[i]);
                 eq = same ? "yes" : "NO";
             }
             String costText = o.feasible()
                     ? String.format(Locale.ROOT, "%.2f", o.best().costPerMetre().total())
                     : "none";
-            out.printf(Locale.ROOT, "%-5s %8.2f ms %12s %12s %14s%n", p.id(), opt[i], ex, costText, eq);
-            out.flush();
+            out.printf(
+                    Locale.ROOT,
+                    "%-5s %8.2f ms %12s %12s %14s%n",
+                    problems.get(i).id(),
+                    opt[i],
+                    ex,
+                    costText,
+                    eq);
         }
+        out.flush();
         double optMedian = median(opt);
         double exMedian = median(exh.stream().mapToDouble(Double::doubleValue).toArray());
         return new Figures(

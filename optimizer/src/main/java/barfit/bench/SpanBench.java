@@ -96,13 +96,22 @@ public final class SpanBench {
         return out;
     }
 
+    /**
+     * The optimizer on {@code n} spans of the default space, then on {@code compare} spans of the reduced space
+     * against the exhaustive enumeration. Each part is warmed up until the compiler is quiet (the reduced
+     * space's with the enumeration too), and each search is timed in a block of its own (see
+     * {@link SectionBench#run}).
+     */
     public static Figures run(int n, int compare, long seed, PrintWriter out) {
         CostModel cost = new CostModel(CostRates.DEFAULTS, 40, CodeEquations.SI);
         SpanDesigner designer = new SpanDesigner(cost, new SolverOptions(60, 1, 1));
         SearchSpace full = SectionBench.defaultSpace();
-        for (SpanProblem p : instances(10, seed + 1, full)) {
-            designer.design(p, 0); // warm up
-        }
+        List<SpanProblem> warmFull = instances(10, seed + 1, full);
+        WarmUp.Figures w = WarmUp.untilQuiet(
+                () -> warmFull.forEach(p -> designer.design(p, 0)),
+                SectionBench.WARM_UP_LEAST,
+                SectionBench.WARM_UP_MOST);
+        out.println(w.describe());
         double[] opt = new double[n];
         out.printf(Locale.ROOT, "%-5s %10s %12s%n", "span", "optimizer", "cost");
         List<SpanProblem> problems = instances(n, seed, full);
@@ -123,33 +132,45 @@ public final class SpanBench {
         out.println("reduced space (2 widths, 3 depths, No. 19/22/25, one layer) against exhaustive enumeration:");
         SpanExhaustive oracle = new SpanExhaustive(cost);
         List<SpanProblem> small = instances(compare, seed + 2, reducedSpace());
-        for (SpanProblem p : small) {
-            designer.design(p, 0);
-        }
+        List<SpanProblem> warm = instances(10, seed + 3, reducedSpace());
+        int[] next = {0};
+        WarmUp.Figures ws = WarmUp.untilQuiet(
+                () -> {
+                    warm.forEach(p -> designer.design(p, 0));
+                    oracle.solve(warm.get(next[0]++ % warm.size()));
+                },
+                SectionBench.WARM_UP_LEAST,
+                SectionBench.WARM_UP_MOST);
+        out.println(ws.describe() + "; then each timed in a block of its own");
         double[] ro = new double[compare];
+        long[] mine = new long[compare];
+        for (int i = 0; i < compare; i++) {
+            long t0 = System.nanoTime();
+            var o = designer.design(small.get(i), 0);
+            ro[i] = (System.nanoTime() - t0) / 1e6;
+            mine[i] = o.feasible() ? CostModel.units(o.best().cost().total()) : -1;
+        }
         double[] ex = new double[compare];
+        SpanExhaustive.Result[] refs = new SpanExhaustive.Result[compare];
+        for (int i = 0; i < compare; i++) {
+            long t1 = System.nanoTime();
+            refs[i] = oracle.solve(small.get(i));
+            ex[i] = (System.nanoTime() - t1) / 1e6;
+        }
         boolean equal = true;
         for (int i = 0; i < compare; i++) {
-            SpanProblem p = small.get(i);
-            long t0 = System.nanoTime();
-            var o = designer.design(p, 0);
-            ro[i] = (System.nanoTime() - t0) / 1e6;
-            long t1 = System.nanoTime();
-            var ref = oracle.solve(p);
-            ex[i] = (System.nanoTime() - t1) / 1e6;
-            long mine = o.feasible() ? CostModel.units(o.best().cost().total()) : -1;
-            boolean same = mine == ref.units();
+            boolean same = mine[i] == refs[i].units();
             equal &= same;
             out.printf(
                     Locale.ROOT,
                     "%-5s optimizer %8.2f ms   exhaustive %9.0f ms over %d combinations   equal: %s%n",
-                    p.id(),
+                    small.get(i).id(),
                     ro[i],
                     ex[i],
-                    ref.combinations(),
+                    refs[i].combinations(),
                     same ? "yes" : "NO");
-            out.flush();
         }
+        out.flush();
         double roMed = SectionBench.median(ro);
         double exMed = SectionBench.median(ex);
         return new Figures(

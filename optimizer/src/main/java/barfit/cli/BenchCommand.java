@@ -42,7 +42,7 @@ final class BenchCommand implements Callable<Integer> {
 
     @Option(
             names = "--beams-compared",
-            defaultValue = "6",
+            defaultValue = "12",
             description = "whole spans also enumerated exhaustively on a reduced space (default: ${DEFAULT-VALUE})")
     int beamsCompared;
 
