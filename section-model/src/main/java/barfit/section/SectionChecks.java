@@ -416,13 +416,19 @@ public final class SectionChecks {
                 "cover", "Specified concrete cover", "Table 20.5.1.3.1", Q.length(provided), Q.length(required), note));
     }
 
+    // the skin check's descriptions, made once: a search asks this check of thousands of frames
+    private static final String SKIN_NOT_REQUIRED_SI = "Skin reinforcement not required (h ≤ 900 mm)";
+    private static final String SKIN_NOT_REQUIRED_IP = "Skin reinforcement not required (h ≤ 36 in)";
+    private static final String SKIN_REQUIRED_SI = "Skin reinforcement required (h > 900 mm)";
+    private static final String SKIN_REQUIRED_IP = "Skin reinforcement required (h > 36 in)";
+
     private static void skin(BeamSection s, List<CheckResult> out, Trail t) {
         CodeEquations code = s.code();
         double h = s.shape().height();
         if (h <= code.skinDepthLimit()) {
             out.add(CheckResult.atMost(
                     "skin",
-                    "Skin reinforcement not required (h ≤ " + (code.inchPound() ? "36 in" : "900 mm") + ")",
+                    code.inchPound() ? SKIN_NOT_REQUIRED_IP : SKIN_NOT_REQUIRED_SI,
                     "9.7.2.3",
                     Q.length(h),
                     Q.length(code.skinDepthLimit()),
@@ -433,7 +439,7 @@ public final class SectionChecks {
         if (skin == null) {
             out.add(CheckResult.rule(
                     "skin",
-                    "Skin reinforcement required (h > " + (code.inchPound() ? "36 in" : "900 mm") + ")",
+                    code.inchPound() ? SKIN_REQUIRED_IP : SKIN_REQUIRED_SI,
                     "9.7.2.3",
                     false,
                     Q.length(h),
@@ -469,24 +475,6 @@ public final class SectionChecks {
         CodeEquations code = s.code();
         double bw = s.shape().width();
         double limit = f.limit(bw);
-        List<String> terms = new ArrayList<>();
-        List<Q> args = new ArrayList<>();
-        args.add(Q.length(bw));
-        terms.add((f.oneSided() ? "6" : "8") + " × {}");
-        args.add(Q.length(f.thickness()));
-        if (f.webGapKnown()) {
-            terms.add("{} / 2");
-            args.add(Q.length(f.clearToNextWeb()));
-        }
-        if (f.spanKnown()) {
-            terms.add("{} / " + (f.oneSided() ? "12" : "8"));
-            args.add(Q.length(f.clearSpan()));
-        }
-        String overhang = (f.oneSided() ? "6 hf" : "8 hf")
-                + (f.webGapKnown() ? ", sw/2" : "")
-                + (f.spanKnown() ? (f.oneSided() ? ", ln/12" : ", ln/8") : "");
-        String formula = "bw + " + (f.oneSided() ? "" : "2 ") + "min(" + overhang + ")";
-        String sub = "{} + " + (f.oneSided() ? "" : "2 × ") + "min(" + String.join(", ", terms) + ")";
         List<String> notes = new ArrayList<>();
         if (f.reduced()) {
             notes.add("flange given " + length(f.given(), code) + ", taken at its effective width "
@@ -503,6 +491,24 @@ public final class SectionChecks {
             notes.add("flange in tension: " + tensionFlangeNote(f, code));
         }
         if (t.isOn()) {
+            List<String> terms = new ArrayList<>();
+            List<Q> args = new ArrayList<>();
+            args.add(Q.length(bw));
+            terms.add((f.oneSided() ? "6" : "8") + " × {}");
+            args.add(Q.length(f.thickness()));
+            if (f.webGapKnown()) {
+                terms.add("{} / 2");
+                args.add(Q.length(f.clearToNextWeb()));
+            }
+            if (f.spanKnown()) {
+                terms.add("{} / " + (f.oneSided() ? "12" : "8"));
+                args.add(Q.length(f.clearSpan()));
+            }
+            String overhang = (f.oneSided() ? "6 hf" : "8 hf")
+                    + (f.webGapKnown() ? ", sw/2" : "")
+                    + (f.spanKnown() ? (f.oneSided() ? ", ln/12" : ", ln/8") : "");
+            String formula = "bw + " + (f.oneSided() ? "" : "2 ") + "min(" + overhang + ")";
+            String sub = "{} + " + (f.oneSided() ? "" : "2 × ") + "min(" + String.join(", ", terms) + ")";
             t.heading("Effective flange width", "6.3.2.1");
             t.step("bf,max", formula, sub, Q.length(limit), args.toArray(new Q[0]));
             if (f.reduced()) {

@@ -61,14 +61,6 @@ public final class StirrupRules {
         if (without == null) {
             return null; // no compression bars, or no tension bars to judge by
         }
-        // where the section stands without them nothing is relied on, so that analysis comes first (it
-        // settles most sections alone)
-        FlexureResult fr = Flexure.analyse(without, bending);
-        if (standsWithout(fr, mu)) {
-            return null;
-        }
-        boolean strength = mu != null && !CheckResult.within(Math.abs(mu), fr.phiMn());
-        boolean ductile = CheckResult.reaches(fr.epsT(), CodeTables.EPS_T_MIN_BEAM);
         // bars on the compression face that the neutral axis leaves in tension are not compression steel
         // (a shallow block in a flange): 9.7.6.4 has nothing to enclose
         boolean inCompression = false;
@@ -80,6 +72,12 @@ public final class StirrupRules {
         if (!inCompression) {
             return null;
         }
+        FlexureResult fr = Flexure.analyse(without, bending);
+        if (standsWithout(fr, mu)) {
+            return null;
+        }
+        boolean strength = mu != null && !CheckResult.within(Math.abs(mu), fr.phiMn());
+        boolean ductile = CheckResult.reaches(fr.epsT(), CodeTables.EPS_T_MIN_BEAM);
         if (strength && !ductile) {
             return "strength and ductility";
         }

@@ -109,9 +109,16 @@ final class OptionGenerator {
         List<BarLayer> standIn = new ArrayList<>(BeamSection.stack(Face.BOTTOM, groups, f.det()));
         standIn.add(new BarLayer(Face.TOP, c, 2, f.det().firstLayerCentroid(c.diameter())));
         BeamSection s = new BeamSection(shape, p.materials(), f.det(), standIn, null, f.skin(), p.code());
-        List<CheckResult> checks = new ArrayList<>(SectionChecks.frameChecks(s, new Span(p.span(), null)));
-        checks.addAll(SectionChecks.layerGaps(s));
-        return checks.stream().allMatch(CheckResult::pass);
+        return allPass(SectionChecks.frameChecks(s, new Span(p.span(), null))) && allPass(SectionChecks.layerGaps(s));
+    }
+
+    private static boolean allPass(List<CheckResult> checks) {
+        for (CheckResult c : checks) {
+            if (!c.pass()) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**
