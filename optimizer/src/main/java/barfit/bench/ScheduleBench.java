@@ -102,7 +102,12 @@ public final class ScheduleBench {
         }
     }
 
-    public static Figures run(int beams, int ratBeams, int k, int m, long seed, int threads, PrintWriter out) {
+    /**
+     * The schedules timed. {@code everyBeam}: design every beam of the schedule without rationalisation anew,
+     * repeats too, as schedules were designed before beams the same but for their marks shared one design.
+     */
+    public static Figures run(
+            int beams, int ratBeams, int k, int m, long seed, int threads, boolean everyBeam, PrintWriter out) {
         Path dir;
         try {
             dir = Files.createTempDirectory("barfit-schedule-bench");
@@ -114,11 +119,12 @@ public final class ScheduleBench {
         try {
             resetPeaks();
             // warm-up on a small schedule so the figures are of compiled code
-            solve(dir.resolve("warm"), 30, seed + 99, null, threads);
+            solve(dir.resolve("warm"), 30, seed + 99, null, threads, everyBeam, barfit.schedule.Progress.NONE);
             write(dir.resolve("plain"), beams, seed, null);
             long cpu0 = processCpuNanos();
             long t0 = System.nanoTime();
-            ScheduleResult plain = solve(dir.resolve("plain"), beams, seed, null, threads);
+            ScheduleResult plain =
+                    solve(dir.resolve("plain"), beams, seed, null, threads, everyBeam, barfit.schedule.Progress.NONE);
             double plainS = (System.nanoTime() - t0) / 1e9;
             // the files the command writes, rendered as it renders them (not written to disk); the report of a
             // very large schedule (about 60 MB of text per 1,000 beams) is left out to keep the heap figures
@@ -136,10 +142,13 @@ public final class ScheduleBench {
                     plain.beams().stream().filter(ScheduleResult.Beam::feasible).count();
             out.printf(
                     Locale.ROOT,
-                    "%d beams, each its own optimum, %d threads: %.2f s wall (%.1f ms a beam); "
+                    "%d beams, each its own optimum, %d threads, %s: %.2f s wall (%.1f ms a beam); "
                             + "%d with a design; total %.0f%n",
                     beams,
                     threads,
+                    everyBeam
+                            ? "every beam designed anew"
+                            : ScheduleSolver.distinctBeams(plain.input()) + " distinct designed, repeats sharing them",
                     plainS,
                     1000 * plainS / beams,
                     feasible,
@@ -163,7 +172,7 @@ public final class ScheduleBench {
             write(rdir, ratBeams, seed + 1, rationalise);
             t0 = System.nanoTime();
             PhaseClock clock = new PhaseClock();
-            ScheduleResult r = solve(rdir, ratBeams, seed + 1, rationalise, threads, clock);
+            ScheduleResult r = solve(rdir, ratBeams, seed + 1, rationalise, threads, false, clock);
             double ratS = (System.nanoTime() - t0) / 1e9;
             double mainS = (clock.curveStart - t0) / 1e9;
             var p = r.proof();
@@ -238,12 +247,14 @@ public final class ScheduleBench {
         }
     }
 
-    private static ScheduleResult solve(Path dir, int beams, long seed, String rationalise, int threads) {
-        return solve(dir, beams, seed, rationalise, threads, barfit.schedule.Progress.NONE);
-    }
-
     private static ScheduleResult solve(
-            Path dir, int beams, long seed, String rationalise, int threads, barfit.schedule.Progress progress) {
+            Path dir,
+            int beams,
+            long seed,
+            String rationalise,
+            int threads,
+            boolean everyBeam,
+            barfit.schedule.Progress progress) {
         if (!Files.exists(dir.resolve("beams.csv"))) {
             write(dir, beams, seed, rationalise);
         }
@@ -252,7 +263,8 @@ public final class ScheduleBench {
                 in.rates(),
                 in.settings().detailing().cover(),
                 in.settings().units().code());
-        return new ScheduleSolver(cost, new SolverOptions(60, 1, 1), threads, progress).solve(in);
+        ScheduleSolver solver = new ScheduleSolver(cost, new SolverOptions(60, 1, 1), threads, progress);
+        return (everyBeam ? solver.designingEveryBeam() : solver).solve(in);
     }
 
     /** CPU time of the whole process (every thread, the collector's too), ns. */

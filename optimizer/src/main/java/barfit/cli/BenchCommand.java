@@ -63,6 +63,12 @@ final class BenchCommand implements Callable<Integer> {
     boolean schedule;
 
     @Option(
+            names = "--every-beam",
+            description = "with --schedule: design every beam anew, repeats too (beams the same but for their marks "
+                    + "otherwise share one design), to time the search over the whole schedule")
+    boolean everyBeam;
+
+    @Option(
             names = "--schedule-beams",
             defaultValue = "1000",
             description = "beams of the schedule designed without rationalisation (default: ${DEFAULT-VALUE})")
@@ -206,10 +212,16 @@ final class BenchCommand implements Callable<Integer> {
             return Main.OK;
         }
         if (schedule) {
+            if (scheduleBeams < 1 || rationalisedBeams < 1) {
+                boolean plain = scheduleBeams < 1;
+                throw OptionError.of(
+                        plain ? "--schedule-beams" : "--rationalised-beams",
+                        "expected at least 1 beam, got " + (plain ? scheduleBeams : rationalisedBeams));
+            }
             int t = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
             out.println("barfit bench --schedule: invented schedules (seed " + seed + "), " + t + " threads, 1 CP-SAT "
                     + "worker per solve");
-            var f = barfit.bench.ScheduleBench.run(scheduleBeams, rationalisedBeams, k, m, seed, t, out);
+            var f = barfit.bench.ScheduleBench.run(scheduleBeams, rationalisedBeams, k, m, seed, t, everyBeam, out);
             out.printf(
                     Locale.ROOT,
                     "{\"schedule_beams\": %d, \"schedule_seconds\": %.3f, \"rationalised_beams\": %d, "

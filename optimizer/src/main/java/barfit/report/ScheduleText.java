@@ -264,7 +264,8 @@ public final class ScheduleText {
                 + "; bar-size sets: "
                 + s.barSetsTotal() + " (" + s.barSetsSolved() + " solved to optimality, " + s.barSetsPruned()
                 + " ruled out by a bound); "
-                + s.pairsEvaluated() + " (beam, size) pairs priced exactly; " + p.workers()
+                + s.pairsEvaluated() + " (beam, size) pairs priced exactly (a beam once for its repeats); "
+                + p.workers()
                 + (p.workers() == 1 ? " CP-SAT worker" : " CP-SAT workers") + ", seed " + p.seed();
     }
 }

@@ -5,11 +5,15 @@ import barfit.design.CostModel;
 import barfit.design.Proof;
 import barfit.design.SolverOptions;
 import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
 
 /**
@@ -22,24 +26,42 @@ public final class ScheduleSolver {
     private final SolverOptions options;
     private final Progress progress;
     private final Parallel pool;
+    /** Whether beams the same but for their marks share one design (see {@link #ownDesigns}). */
+    private final boolean shareRepeats;
 
     public ScheduleSolver(CostModel cost, SolverOptions options, int threads, Progress progress) {
+        this(cost, options, threads, progress, true);
+    }
+
+    private ScheduleSolver(CostModel cost, SolverOptions options, int threads, Progress progress, boolean share) {
         this.cost = cost;
         this.options = options;
         this.progress = progress;
         this.pool = new Parallel(threads, progress);
+        this.shareRepeats = share;
+    }
+
+    /** The same solver designing every beam anew, repeats too: the same answer, for timing the search alone. */
+    public ScheduleSolver designingEveryBeam() {
+        return new ScheduleSolver(cost, options, pool.threads(), progress, false);
+    }
+
+    /** How many designs a schedule's own optima take: one per beam the same but for its mark (lines' spans aside). */
+    public static int distinctBeams(ScheduleInput in) {
+        Set<SpanProblem> seen = new HashSet<>();
+        for (ScheduleBeam b : in.beams()) {
+            if (b.designed() == null) {
+                seen.add(b.problem().withId(""));
+            }
+        }
+        return seen.size();
     }
 
     public ScheduleResult solve(ScheduleInput in) {
         long started = System.nanoTime();
         List<ScheduleBeam> beams = in.beams();
         SpanDesigner designer = new SpanDesigner(cost, options);
-        List<SpanDesigner.Outcome> own = pool.map(
-                beams.size(),
-                Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
-                i -> beams.get(i).designed() != null
-                        ? beams.get(i).designed()
-                        : designer.design(beams.get(i).problem(), 0));
+        List<SpanDesigner.Outcome> own = ownDesigns(beams, designer);
         if (in.rationalise() == null) {
             double unconstrained = 0;
             List<ScheduleResult.Beam> out = new ArrayList<>();
@@ -55,6 +77,38 @@ public final class ScheduleSolver {
         }
         Rationaliser.Rationalised r = new Rationaliser(in, own, designer, cost, options, pool, progress).run(started);
         return finish(in, r.beams(), r.formworkSets(), r.unconstrained(), r.proof(), r.curve(), started, r.ownCarbon());
+    }
+
+    /**
+     * Each beam's own proven optimum (or the one its line gave it). Beams the same but for their marks, as a
+     * typical floor's are, are designed once: the search is deterministic, so each gets the very outcome its
+     * own design would give, under its own mark.
+     */
+    private List<SpanDesigner.Outcome> ownDesigns(List<ScheduleBeam> beams, SpanDesigner designer) {
+        int[] designOf = new int[beams.size()];
+        List<SpanProblem> distinct = new ArrayList<>();
+        Map<SpanProblem, Integer> seen = new HashMap<>();
+        for (int i = 0; i < beams.size(); i++) {
+            if (beams.get(i).designed() != null) {
+                designOf[i] = -1;
+                continue;
+            }
+            SpanProblem p = beams.get(i).problem();
+            designOf[i] = seen.computeIfAbsent(shareRepeats ? p.withId("") : p.withId(Integer.toString(i)), k -> {
+                distinct.add(p);
+                return distinct.size() - 1;
+            });
+        }
+        List<SpanDesigner.Outcome> designed = pool.map(
+                distinct.size(),
+                Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
+                j -> designer.design(distinct.get(j), 0));
+        List<SpanDesigner.Outcome> own = new ArrayList<>();
+        for (int i = 0; i < beams.size(); i++) {
+            ScheduleBeam b = beams.get(i);
+            own.add(designOf[i] < 0 ? b.designed() : designed.get(designOf[i]).forSpan(b.problem()));
+        }
+        return own;
     }
 
     /** The schedule's section sizes (each with its beams) and bar sizes, in size order, and its total. */

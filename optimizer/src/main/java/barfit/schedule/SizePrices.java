@@ -4,8 +4,10 @@ import barfit.design.CostModel;
 import barfit.design.span.PairTable;
 import barfit.design.span.PairTables;
 import barfit.design.span.SpanDesigner;
+import barfit.design.span.SpanProblem;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -30,11 +32,16 @@ final class SizePrices {
     private final Parallel pool;
     /** Every section size any beam may take, ordered by width then height. */
     private final List<Size> sizes;
-    /** Each beam's pricing; null where the beam has no design on its own (it is left out). */
+    /**
+     * {@code twin[i]}: the first beam the same as beam i but for its mark (i itself when none comes before it).
+     * Beams the same price the same in every size, so each is bounded and priced once, for all of its twins.
+     */
+    private final int[] twin;
+    /** Each beam's pricing, kept by the first of its twins; null where the beam has no design on its own. */
     private final List<PairTables> generators = new ArrayList<>();
     /** {@code lower.get(i)[s][top][bottom]}: a lower bound on beam i in size s; {@code [s]} null where it has no frame. */
     private final List<double[][][]> lower;
-    /** {@code exact.get(i)[s]}: beam i priced exactly in size s, once asked for. */
+    /** {@code exact.get(i)[s]}: beam i priced exactly in size s, once asked for (held by the first of its twins). */
     private final List<PairTable[]> exact = new ArrayList<>();
 
     private int pricedPairs;
@@ -45,14 +52,39 @@ final class SizePrices {
         this.beams = in.beams();
         this.pool = pool;
         this.sizes = sizesOf(in);
+        this.twin = new int[beams.size()];
+        Map<SpanProblem, Integer> first = new HashMap<>();
+        List<Integer> firsts = new ArrayList<>();
         for (int i = 0; i < beams.size(); i++) {
-            generators.add(own.get(i).feasible() ? new PairTables(beams.get(i).problem(), cost) : null);
-            exact.add(new PairTable[sizes.size()]);
+            int beam = i;
+            twin[i] = first.computeIfAbsent(beams.get(i).problem().withId(""), k -> {
+                firsts.add(beam);
+                return beam;
+            });
+            generators.add(
+                    twin[i] == i && own.get(i).feasible()
+                            ? new PairTables(beams.get(i).problem(), cost)
+                            : null);
+            exact.add(twin[i] == i ? new PairTable[sizes.size()] : null);
         }
-        this.lower = pool.map(
-                beams.size(),
+        List<double[][][]> bounds = pool.map(
+                firsts.size(),
                 Progress.Phase.of(Progress.Step.BOUNDING_SIZES),
-                beam -> lowerBoundsOf(beam, own.get(beam)));
+                j -> lowerBoundsOf(firsts.get(j), own.get(firsts.get(j))));
+        double[][][][] byBeam = new double[beams.size()][][][];
+        for (int j = 0; j < firsts.size(); j++) {
+            byBeam[firsts.get(j)] = bounds.get(j);
+        }
+        List<double[][][]> all = new ArrayList<>();
+        for (int i = 0; i < beams.size(); i++) {
+            all.add(byBeam[twin[i]]);
+        }
+        this.lower = all;
+    }
+
+    /** The exact prices of a beam, held by the first of its twins. */
+    private PairTable[] exactOf(int beam) {
+        return exact.get(twin[beam]);
     }
 
     /** The search's widths by its depths, and each width a beam fixes outside them by the depths too. */
@@ -109,23 +141,23 @@ final class SizePrices {
         return sizes.size();
     }
 
-    /** The (beam, size) pairs priced exactly so far. */
+    /** The (beam, size) pairs priced exactly so far, a beam with twins once. */
     int pricedPairs() {
         return pricedPairs;
     }
 
     boolean isPriced(int beam, int size) {
-        return exact.get(beam)[size] != null;
+        return exactOf(beam)[size] != null;
     }
 
     /** Beam {@code beam} in size {@code size} with bar sizes {@code bars}, priced exactly (it must be). */
     double exactPrice(int beam, int size, boolean[] bars) {
-        return exact.get(beam)[size].best(bars);
+        return exactOf(beam)[size].best(bars);
     }
 
     /** Beam {@code beam} in size {@code size} with bar sizes {@code bars}: exact where priced, else the lower bound. */
     double price(int beam, int size, boolean[] bars) {
-        PairTable table = exact.get(beam)[size];
+        PairTable table = exactOf(beam)[size];
         if (table != null) {
             return table.best(bars);
         }
@@ -144,12 +176,16 @@ final class SizePrices {
         return best;
     }
 
-    /** Prices exactly the (beam, size) pairs asked for that are not priced yet, beam by beam in parallel. */
+    /**
+     * Prices exactly the (beam, size) pairs asked for that are not priced yet, beam by beam in parallel; a beam
+     * with twins is priced once for them all (and counted once in {@link #pricedPairs}).
+     */
     void priceExactly(List<BeamSize> pairs) {
         Map<Integer, TreeSet<Integer>> sizesByBeam = new TreeMap<>();
         for (BeamSize pair : pairs) {
-            if (exact.get(pair.beam())[pair.size()] == null && lower.get(pair.beam())[pair.size()] != null) {
-                sizesByBeam.computeIfAbsent(pair.beam(), x -> new TreeSet<>()).add(pair.size());
+            int first = twin[pair.beam()];
+            if (exact.get(first)[pair.size()] == null && lower.get(first)[pair.size()] != null) {
+                sizesByBeam.computeIfAbsent(first, x -> new TreeSet<>()).add(pair.size());
             }
         }
         List<Integer> beamsToPrice = new ArrayList<>(sizesByBeam.keySet());

@@ -79,6 +79,10 @@ class BadInputTest {
                 Arguments.of(List.of("sweep", STUDY, "--csv", "--format", "json"), "--csv:", "expected one of them"),
                 Arguments.of(List.of("bench", "--instances", "0"), "--instances:", "expected at least 1"),
                 Arguments.of(
+                        List.of("bench", "--schedule", "--rationalised-beams", "0"),
+                        "--rationalised-beams:",
+                        "expected at least 1 beam"),
+                Arguments.of(
                         List.of("design", "../examples/lines/ashgrove-depot-lines-si.yaml", "--carbon-cap", "100"),
                         "--carbon-cap:",
                         "applies to single sections and whole spans; L1-B"),

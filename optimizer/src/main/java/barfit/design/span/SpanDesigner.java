@@ -156,6 +156,11 @@ public final class SpanDesigner {
         public boolean feasible() {
             return best != null;
         }
+
+        /** This outcome for another span the same but for its mark: the search is deterministic, so it is that span's own. */
+        public Outcome forSpan(SpanProblem same) {
+            return new Outcome(same, status, best, alternatives, proof, binding, diagnosis);
+        }
     }
 
     private final CostModel cost;

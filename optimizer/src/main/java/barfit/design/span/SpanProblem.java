@@ -531,6 +531,34 @@ public record SpanProblem(
                 torsion);
     }
 
+    /** The same span under another mark. */
+    public SpanProblem withId(String mark) {
+        return new SpanProblem(
+                mark,
+                materials,
+                detailing,
+                code,
+                space,
+                span,
+                ends,
+                mLeft,
+                mMid,
+                mRight,
+                vLeft,
+                vRight,
+                service,
+                limits,
+                maxDepth,
+                fixedWidth,
+                flange,
+                bottomAnchored,
+                maxBarSizes,
+                barsPerTwoLegs,
+                analysedService,
+                shearDiagram,
+                torsion);
+    }
+
     public SpanProblem withFixedWidth(Double w) {
         return new SpanProblem(
                 id,

@@ -342,7 +342,7 @@ final class SummarySections {
                 "bar-size sets",
                 search.barSetsTotal() + " considered, " + search.barSetsSolved() + " solved, " + search.barSetsPruned()
                         + " pruned by the " + (carbon ? "carbon" : "cost") + " bound");
-        Html.kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly");
+        Html.kv(out, "(beam, size) pairs", search.pairsEvaluated() + " designed exactly (a beam once for its repeats)");
         // measured times are left out so that the same result always gives the same page
         Html.kv(
                 out,
