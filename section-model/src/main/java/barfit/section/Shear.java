@@ -66,175 +66,42 @@ public final class Shear {
         double sAcross = high ? Math.min(d / 2, code.stirrupSpacingCapHigh()) : Math.min(d, code.stirrupSpacingCap());
 
         if (t.isOn()) {
-            t.heading("Shear", "22.5, 9.6.3, 9.7.6.2.2");
-            t.step(
-                    "ρw",
-                    "As / (bw d)",
-                    "{} / ({} × {})",
-                    Q.number(rhoW),
-                    Q.area(tensionArea),
-                    Q.length(bw),
-                    Q.length(d));
-            if (Math.sqrt(m.fc()) > rootFc) {
-                t.note("√f'c limited to " + (code.inchPound() ? "100 psi" : "8.3 MPa") + " (22.5.3.1).");
-            }
-            if (st != null) {
-                t.step(
-                        "fyt",
-                        "min(fyt, " + (code.inchPound() ? "60000 psi" : "420 MPa") + ")  (20.2.2.4)",
-                        null,
-                        Q.stress(fyt));
-                t.step(
-                        "Av",
-                        "legs × Ab",
-                        "{} × {}",
-                        Q.area(av),
-                        Q.count(st.legs()),
-                        Q.area(st.bar().area()));
-                t.step(
-                        "Av,min",
-                        "max(" + code.avMinRoot().shown() + " √f'c, " + (code.inchPound() ? "50" : "0.35")
-                                + ") bw s / fyt  (Table 9.6.3.4)",
-                        "max(" + code.avMinRoot().shown() + " × √{}, {}) × {} × {} / {}",
-                        Q.area(avMin),
-                        Q.stress(m.fc()),
-                        Q.stress(code.avMinFlat()),
-                        Q.length(bw),
-                        Q.length(st.spacing()),
-                        Q.stress(fyt));
-            }
-            if (withMin) {
-                t.step(
-                        "Vc (a)",
-                        code.vcSimple().shown() + " λ √f'c bw d",
-                        code.vcSimple().shown() + " × {} × √{} × {} × {}",
-                        Q.force(vcA),
-                        Q.number(lambda),
-                        Q.stress(rootFc * rootFc),
-                        Q.length(bw),
-                        Q.length(d));
-                t.step(
-                        "Vc (b)",
-                        code.vcRho().shown() + " λ ρw^(1/3) √f'c bw d",
-                        code.vcRho().shown() + " × {} × {}^(1/3) × √{} × {} × {}",
-                        Q.force(vcB),
-                        Q.number(lambda),
-                        Q.number(rhoW),
-                        Q.stress(rootFc * rootFc),
-                        Q.length(bw),
-                        Q.length(d));
-                t.note("Av ≥ Av,min: Table 22.5.5.1 permits either (a) or (b); the larger is used.");
-            } else {
-                t.step(
-                        "λs",
-                        code.inchPound() ? "√(2 / (1 + d/10)) ≤ 1" : "√(2 / (1 + 0.004 d)) ≤ 1",
-                        code.inchPound() ? "√(2 / (1 + {}/10))" : "√(2 / (1 + 0.004 × {}))",
-                        Q.number(lambdaS),
-                        Q.length(d));
-                t.step(
-                        "Vc (c)",
-                        code.vcRho().shown() + " λs λ ρw^(1/3) √f'c bw d",
-                        code.vcRho().shown() + " × {} × {} × {}^(1/3) × √{} × {} × {}",
-                        Q.force(vcC),
-                        Q.number(lambdaS),
-                        Q.number(lambda),
-                        Q.number(rhoW),
-                        Q.stress(rootFc * rootFc),
-                        Q.length(bw),
-                        Q.length(d));
-                t.note(
-                        st == null
-                                ? "No stirrups: Table 22.5.5.1 row (c) applies."
-                                : "Av < Av,min: Table 22.5.5.1 row (c) applies.");
-            }
-            t.step(
-                    "Vc,max",
-                    code.vcMax().shown() + " λ √f'c bw d  (22.5.5.1.1)",
-                    code.vcMax().shown() + " × {} × √{} × {} × {}",
-                    Q.force(vcMax),
-                    Q.number(lambda),
-                    Q.stress(rootFc * rootFc),
-                    Q.length(bw),
-                    Q.length(d));
-            if (capped) {
-                t.note("Vc limited to Vc,max.");
-            }
-            t.value("Vc", Q.force(vc), "Table 22.5.5.1 row " + row);
-            if (st != null) {
-                t.step(
-                        vsCapped ? "Vs,stirrups" : "Vs",
-                        "Av fyt d / s  (22.5.8.5.3)",
-                        "{} × {} × {} / {}",
-                        Q.force(vsProvided),
-                        Q.area(av),
-                        Q.stress(fyt),
-                        Q.length(d),
-                        Q.length(st.spacing()));
-                if (vsCapped) {
-                    t.step(
-                            "Vs,max",
-                            code.vsMax().shown() + " √f'c bw d  (22.5.1.2)",
-                            code.vsMax().shown() + " × √{} × {} × {}",
-                            Q.force(vsCap),
-                            Q.stress(rootFc * rootFc),
-                            Q.length(bw),
-                            Q.length(d));
-                    t.step(
-                            "Vs",
-                            "min(Vs,stirrups, Vs,max)",
-                            "min({}, {})",
-                            Q.force(vs),
-                            Q.force(vsProvided),
-                            Q.force(vsCap));
-                    t.note("The stirrups give more than Vs,max: the section carries no more than φ(Vc + Vs,max) "
-                            + "whatever the stirrups (22.5.1.2).");
-                }
-            }
-            t.step("φVn", "0.75 (Vc + Vs)", "0.75 × ({} + {})", Q.force(phiVn), Q.force(vc), Q.force(vs));
-            t.step(
-                    "φ(Vc + Vs,max)",
-                    "0.75 (Vc + " + code.vsMax().shown() + " √f'c bw d)  (22.5.1.2)",
-                    "0.75 × ({} + " + code.vsMax().shown() + " × √{} × {} × {})",
-                    Q.force(vnLimit),
-                    Q.force(vc),
-                    Q.stress(rootFc * rootFc),
-                    Q.length(bw),
-                    Q.length(d));
-            t.step(
-                    "φ " + code.shearMinTrigger().shown() + " λ √f'c bw d",
-                    "threshold for Av,min (9.6.3.1)",
-                    "0.75 × " + code.shearMinTrigger().shown() + " × {} × √{} × {} × {}",
-                    Q.force(trigger),
-                    Q.number(lambda),
-                    Q.stress(rootFc * rootFc),
-                    Q.length(bw),
-                    Q.length(d));
-            if (st != null) {
-                t.step(
-                        "Vs,req",
-                        "max(0, Vu / φ − Vc)",
-                        "max(0, {} / 0.75 − {})",
-                        Q.force(vsRequired),
-                        Q.force(vu),
-                        Q.force(vc));
-                t.step(
-                        code.vsSplit().shown() + " √f'c bw d",
-                        "Table 9.7.6.2.2",
-                        code.vsSplit().shown() + " × √{} × {} × {}",
-                        Q.force(vsSplit),
-                        Q.stress(rootFc * rootFc),
-                        Q.length(bw),
-                        Q.length(d));
-                t.step(
-                        "s,max",
-                        high
-                                ? "min(d/4, " + (code.inchPound() ? "12 in" : "300 mm") + "), Vs,req > "
-                                        + code.vsSplit().shown() + " √f'c bw d"
-                                : "min(d/2, " + (code.inchPound() ? "24 in" : "600 mm") + "), Vs,req ≤ "
-                                        + code.vsSplit().shown() + " √f'c bw d",
-                        null,
-                        Q.length(sAlong));
-            }
+            explain(
+                    t,
+                    new Terms(
+                            m,
+                            code,
+                            bw,
+                            lambda,
+                            rootFc,
+                            fyt,
+                            rhoW,
+                            lambdaS,
+                            st,
+                            av,
+                            avMin,
+                            vcA,
+                            vcB,
+                            vcC,
+                            vcMax,
+                            withMin,
+                            vc,
+                            row,
+                            capped,
+                            vsProvided,
+                            vsCap,
+                            vs,
+                            vsCapped,
+                            phiVn,
+                            vnLimit,
+                            trigger,
+                            vsRequired,
+                            vsSplit,
+                            high,
+                            sAlong,
+                            vu,
+                            d,
+                            tensionArea));
         }
         return new ShearResult(
                 vu,
@@ -254,5 +121,214 @@ public final class Shear {
                 sAlong,
                 sAcross,
                 high);
+    }
+
+    /** What {@link #analyse} computed, for its trail: written apart so the search's path stays small. */
+    private record Terms(
+            Materials m,
+            CodeEquations code,
+            double bw,
+            double lambda,
+            double rootFc,
+            double fyt,
+            double rhoW,
+            double lambdaS,
+            Stirrups st,
+            double av,
+            double avMin,
+            double vcA,
+            double vcB,
+            double vcC,
+            double vcMax,
+            boolean withMin,
+            double vc,
+            String row,
+            boolean capped,
+            double vsProvided,
+            double vsCap,
+            double vs,
+            boolean vsCapped,
+            double phiVn,
+            double vnLimit,
+            double trigger,
+            double vsRequired,
+            double vsSplit,
+            boolean high,
+            double sAlong,
+            double vu,
+            double d,
+            double tensionArea) {}
+
+    /** The trail of one shear analysis. */
+    private static void explain(Trail t, Terms k) {
+        t.heading("Shear", "22.5, 9.6.3, 9.7.6.2.2");
+        t.step(
+                "ρw",
+                "As / (bw d)",
+                "{} / ({} × {})",
+                Q.number(k.rhoW()),
+                Q.area(k.tensionArea()),
+                Q.length(k.bw()),
+                Q.length(k.d()));
+        if (Math.sqrt(k.m().fc()) > k.rootFc()) {
+            t.note("√f'c limited to " + (k.code().inchPound() ? "100 psi" : "8.3 MPa") + " (22.5.3.1).");
+        }
+        if (k.st() != null) {
+            t.step(
+                    "fyt",
+                    "min(fyt, " + (k.code().inchPound() ? "60000 psi" : "420 MPa") + ")  (20.2.2.4)",
+                    null,
+                    Q.stress(k.fyt()));
+            t.step(
+                    "Av",
+                    "legs × Ab",
+                    "{} × {}",
+                    Q.area(k.av()),
+                    Q.count(k.st().legs()),
+                    Q.area(k.st().bar().area()));
+            t.step(
+                    "Av,min",
+                    "max(" + k.code().avMinRoot().shown() + " √f'c, "
+                            + (k.code().inchPound() ? "50" : "0.35") + ") bw s / fyt  (Table 9.6.3.4)",
+                    "max(" + k.code().avMinRoot().shown() + " × √{}, {}) × {} × {} / {}",
+                    Q.area(k.avMin()),
+                    Q.stress(k.m().fc()),
+                    Q.stress(k.code().avMinFlat()),
+                    Q.length(k.bw()),
+                    Q.length(k.st().spacing()),
+                    Q.stress(k.fyt()));
+        }
+        if (k.withMin()) {
+            t.step(
+                    "Vc (a)",
+                    k.code().vcSimple().shown() + " λ √f'c bw d",
+                    k.code().vcSimple().shown() + " × {} × √{} × {} × {}",
+                    Q.force(k.vcA()),
+                    Q.number(k.lambda()),
+                    Q.stress(k.rootFc() * k.rootFc()),
+                    Q.length(k.bw()),
+                    Q.length(k.d()));
+            t.step(
+                    "Vc (b)",
+                    k.code().vcRho().shown() + " λ ρw^(1/3) √f'c bw d",
+                    k.code().vcRho().shown() + " × {} × {}^(1/3) × √{} × {} × {}",
+                    Q.force(k.vcB()),
+                    Q.number(k.lambda()),
+                    Q.number(k.rhoW()),
+                    Q.stress(k.rootFc() * k.rootFc()),
+                    Q.length(k.bw()),
+                    Q.length(k.d()));
+            t.note("Av ≥ Av,min: Table 22.5.5.1 permits either (a) or (b); the larger is used.");
+        } else {
+            t.step(
+                    "λs",
+                    k.code().inchPound() ? "√(2 / (1 + d/10)) ≤ 1" : "√(2 / (1 + 0.004 d)) ≤ 1",
+                    k.code().inchPound() ? "√(2 / (1 + {}/10))" : "√(2 / (1 + 0.004 × {}))",
+                    Q.number(k.lambdaS()),
+                    Q.length(k.d()));
+            t.step(
+                    "Vc (c)",
+                    k.code().vcRho().shown() + " λs λ ρw^(1/3) √f'c bw d",
+                    k.code().vcRho().shown() + " × {} × {} × {}^(1/3) × √{} × {} × {}",
+                    Q.force(k.vcC()),
+                    Q.number(k.lambdaS()),
+                    Q.number(k.lambda()),
+                    Q.number(k.rhoW()),
+                    Q.stress(k.rootFc() * k.rootFc()),
+                    Q.length(k.bw()),
+                    Q.length(k.d()));
+            t.note(
+                    k.st() == null
+                            ? "No stirrups: Table 22.5.5.1 row (c) applies."
+                            : "Av < Av,min: Table 22.5.5.1 row (c) applies.");
+        }
+        t.step(
+                "Vc,max",
+                k.code().vcMax().shown() + " λ √f'c bw d  (22.5.5.1.1)",
+                k.code().vcMax().shown() + " × {} × √{} × {} × {}",
+                Q.force(k.vcMax()),
+                Q.number(k.lambda()),
+                Q.stress(k.rootFc() * k.rootFc()),
+                Q.length(k.bw()),
+                Q.length(k.d()));
+        if (k.capped()) {
+            t.note("Vc limited to Vc,max.");
+        }
+        t.value("Vc", Q.force(k.vc()), "Table 22.5.5.1 row " + k.row());
+        if (k.st() != null) {
+            t.step(
+                    k.vsCapped() ? "Vs,stirrups" : "Vs",
+                    "Av fyt d / s  (22.5.8.5.3)",
+                    "{} × {} × {} / {}",
+                    Q.force(k.vsProvided()),
+                    Q.area(k.av()),
+                    Q.stress(k.fyt()),
+                    Q.length(k.d()),
+                    Q.length(k.st().spacing()));
+            if (k.vsCapped()) {
+                t.step(
+                        "Vs,max",
+                        k.code().vsMax().shown() + " √f'c bw d  (22.5.1.2)",
+                        k.code().vsMax().shown() + " × √{} × {} × {}",
+                        Q.force(k.vsCap()),
+                        Q.stress(k.rootFc() * k.rootFc()),
+                        Q.length(k.bw()),
+                        Q.length(k.d()));
+                t.step(
+                        "Vs",
+                        "min(Vs,stirrups, Vs,max)",
+                        "min({}, {})",
+                        Q.force(k.vs()),
+                        Q.force(k.vsProvided()),
+                        Q.force(k.vsCap()));
+                t.note("The stirrups give more than Vs,max: the section carries no more than φ(Vc + Vs,max) "
+                        + "whatever the stirrups (22.5.1.2).");
+            }
+        }
+        t.step("φVn", "0.75 (Vc + Vs)", "0.75 × ({} + {})", Q.force(k.phiVn()), Q.force(k.vc()), Q.force(k.vs()));
+        t.step(
+                "φ(Vc + Vs,max)",
+                "0.75 (Vc + " + k.code().vsMax().shown() + " √f'c bw d)  (22.5.1.2)",
+                "0.75 × ({} + " + k.code().vsMax().shown() + " × √{} × {} × {})",
+                Q.force(k.vnLimit()),
+                Q.force(k.vc()),
+                Q.stress(k.rootFc() * k.rootFc()),
+                Q.length(k.bw()),
+                Q.length(k.d()));
+        t.step(
+                "φ " + k.code().shearMinTrigger().shown() + " λ √f'c bw d",
+                "threshold for Av,min (9.6.3.1)",
+                "0.75 × " + k.code().shearMinTrigger().shown() + " × {} × √{} × {} × {}",
+                Q.force(k.trigger()),
+                Q.number(k.lambda()),
+                Q.stress(k.rootFc() * k.rootFc()),
+                Q.length(k.bw()),
+                Q.length(k.d()));
+        if (k.st() != null) {
+            t.step(
+                    "Vs,req",
+                    "max(0, Vu / φ − Vc)",
+                    "max(0, {} / 0.75 − {})",
+                    Q.force(k.vsRequired()),
+                    Q.force(k.vu()),
+                    Q.force(k.vc()));
+            t.step(
+                    k.code().vsSplit().shown() + " √f'c bw d",
+                    "Table 9.7.6.2.2",
+                    k.code().vsSplit().shown() + " × √{} × {} × {}",
+                    Q.force(k.vsSplit()),
+                    Q.stress(k.rootFc() * k.rootFc()),
+                    Q.length(k.bw()),
+                    Q.length(k.d()));
+            t.step(
+                    "s,max",
+                    k.high()
+                            ? "min(d/4, " + (k.code().inchPound() ? "12 in" : "300 mm") + "), Vs,req > "
+                                    + k.code().vsSplit().shown() + " √f'c bw d"
+                            : "min(d/2, " + (k.code().inchPound() ? "24 in" : "600 mm") + "), Vs,req ≤ "
+                                    + k.code().vsSplit().shown() + " √f'c bw d",
+                    null,
+                    Q.length(k.sAlong()));
+        }
     }
 }
