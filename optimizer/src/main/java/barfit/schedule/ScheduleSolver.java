@@ -8,12 +8,9 @@ import barfit.design.span.SpanDesigner;
 import barfit.design.span.SpanProblem;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.HashMap;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Set;
 import java.util.TreeMap;
 
 /**
@@ -48,13 +45,21 @@ public final class ScheduleSolver {
 
     /** How many designs a schedule's own optima take: one per beam the same but for its mark (lines' spans aside). */
     public static int distinctBeams(ScheduleInput in) {
-        Set<SpanProblem> seen = new HashSet<>();
-        for (ScheduleBeam b : in.beams()) {
-            if (b.designed() == null) {
-                seen.add(b.problem().withId(""));
-            }
+        int[] first = Repeats.firstOf(undesigned(in.beams()));
+        int n = 0;
+        for (int i = 0; i < first.length; i++) {
+            n += first[i] == i ? 1 : 0;
         }
-        return seen.size();
+        return n;
+    }
+
+    /** Each beam's span, null for a line's (designed with its line already). */
+    private static List<SpanProblem> undesigned(List<ScheduleBeam> beams) {
+        List<SpanProblem> out = new ArrayList<>();
+        for (ScheduleBeam b : beams) {
+            out.add(b.designed() == null ? b.problem() : null);
+        }
+        return out;
     }
 
     public ScheduleResult solve(ScheduleInput in) {
@@ -85,28 +90,26 @@ public final class ScheduleSolver {
      * own design would give, under its own mark.
      */
     private List<SpanDesigner.Outcome> ownDesigns(List<ScheduleBeam> beams, SpanDesigner designer) {
-        int[] designOf = new int[beams.size()];
-        List<SpanProblem> distinct = new ArrayList<>();
-        Map<SpanProblem, Integer> seen = new HashMap<>();
-        for (int i = 0; i < beams.size(); i++) {
-            if (beams.get(i).designed() != null) {
-                designOf[i] = -1;
-                continue;
+        List<SpanProblem> spans = undesigned(beams);
+        int[] first = shareRepeats ? Repeats.firstOf(spans) : null;
+        List<Integer> toDesign = new ArrayList<>();
+        for (int i = 0; i < spans.size(); i++) {
+            if (spans.get(i) != null && (first == null || first[i] == i)) {
+                toDesign.add(i);
             }
-            SpanProblem p = beams.get(i).problem();
-            designOf[i] = seen.computeIfAbsent(shareRepeats ? p.withId("") : p.withId(Integer.toString(i)), k -> {
-                distinct.add(p);
-                return distinct.size() - 1;
-            });
         }
         List<SpanDesigner.Outcome> designed = pool.map(
-                distinct.size(),
+                toDesign.size(),
                 Progress.Phase.of(Progress.Step.DESIGNING_BEAMS),
-                j -> designer.design(distinct.get(j), 0));
+                j -> designer.design(spans.get(toDesign.get(j)), 0));
+        SpanDesigner.Outcome[] byBeam = new SpanDesigner.Outcome[beams.size()];
+        for (int j = 0; j < toDesign.size(); j++) {
+            byBeam[toDesign.get(j)] = designed.get(j);
+        }
         List<SpanDesigner.Outcome> own = new ArrayList<>();
         for (int i = 0; i < beams.size(); i++) {
             ScheduleBeam b = beams.get(i);
-            own.add(designOf[i] < 0 ? b.designed() : designed.get(designOf[i]).forSpan(b.problem()));
+            own.add(spans.get(i) == null ? b.designed() : byBeam[first == null ? i : first[i]].forSpan(b.problem()));
         }
         return own;
     }

@@ -4,10 +4,8 @@ import barfit.design.CostModel;
 import barfit.design.span.PairTable;
 import barfit.design.span.PairTables;
 import barfit.design.span.SpanDesigner;
-import barfit.design.span.SpanProblem;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -52,15 +50,12 @@ final class SizePrices {
         this.beams = in.beams();
         this.pool = pool;
         this.sizes = sizesOf(in);
-        this.twin = new int[beams.size()];
-        Map<SpanProblem, Integer> first = new HashMap<>();
+        this.twin = Repeats.firstOf(beams.stream().map(ScheduleBeam::problem).toList());
         List<Integer> firsts = new ArrayList<>();
         for (int i = 0; i < beams.size(); i++) {
-            int beam = i;
-            twin[i] = first.computeIfAbsent(beams.get(i).problem().withId(""), k -> {
-                firsts.add(beam);
-                return beam;
-            });
+            if (twin[i] == i) {
+                firsts.add(i);
+            }
             generators.add(
                     twin[i] == i && own.get(i).feasible()
                             ? new PairTables(beams.get(i).problem(), cost)
